@@ -1,0 +1,49 @@
+package dev.ampsieve.budget;
+
+import dev.ampsieve.catalog.Part;
+import dev.ampsieve.stage.Stage;
+import java.util.List;
+
+/**
+ * The full output error budget of one part in one stage.
+ *
+ * @param terms        every term, sorted largest first
+ * @param worstCaseV   sum of term magnitudes (output volts)
+ * @param rssV         root-sum-square of the same
+ * @param noiseRmsV    integrated output noise, rms volts
+ * @param limitV       the stage limit, output volts
+ * @param trimmed      totals after the stage's trim method (one-point unless the stage says two-point)
+ * @param limitingTerm key of the largest term (for no-fit: the one that most needs to shrink)
+ * @param warnings     estimated or missing catalog values, chopper caveats and similar
+ */
+public record Budget(
+        Part part,
+        Stage stage,
+        double noiseGain,
+        List<TermResult> terms,
+        double worstCaseV,
+        double rssV,
+        double noiseRmsV,
+        double limitV,
+        YieldResult yield,
+        Trimmed trimmed,
+        Verdict verdict,
+        String limitingTerm,
+        List<ConstraintResult> constraints,
+        List<String> warnings) {
+
+    public Budget {
+        terms = List.copyOf(terms);
+        constraints = List.copyOf(constraints);
+        warnings = List.copyOf(warnings);
+    }
+
+    /** All hard constraints met. */
+    public boolean constraintsMet() {
+        return constraints.stream().allMatch(ConstraintResult::ok);
+    }
+
+    public TermResult term(String key) {
+        return terms.stream().filter(t -> t.key().equals(key)).findFirst().orElse(null);
+    }
+}

@@ -1,0 +1,16 @@
+package dev.ampsieve.budget;
+
+/**
+ * One error term evaluated for one part in one stage.
+ *
+ * @param key       stable key used in JSON: offset, drift, bias, cmrr, psrr, open-loop-gain,
+ *                  bandwidth, resistors, aging, noise
+ * @param label     words for tables
+ * @param outputV   worst-case magnitude at the output, volts
+ * @param inputV    the same divided by the noise gain
+ * @param worstAtC  ambient temperature (°C) at which it is largest; NaN when it does not depend on it
+ * @param estimated true when a missing catalog value was replaced by an estimate
+ * @param note      how it was computed, briefly (which catalog values, which rule)
+ */
+public record TermResult(String key, String label, double outputV, double inputV, double worstAtC, boolean estimated, String note) {
+}

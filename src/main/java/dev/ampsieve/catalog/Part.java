@@ -1,0 +1,73 @@
+package dev.ampsieve.catalog;
+
+import dev.ampsieve.yaml.Located;
+import java.util.List;
+
+/**
+ * One amplifier parameter set as the user typed it from a datasheet, in SI units
+ * (V, A, Hz, V/s, V/√Hz, A/√Hz, V/°C; temperatures in °C; decibels as dB).
+ * Optional values are null when the datasheet (or the user) did not give them; the
+ * budget says in its warnings what it assumed instead.
+ *
+ * @param supply      total supply voltage range (V+ minus V-), volts
+ * @param temperature rated ambient range, °C
+ * @param where       file and line the part was read from, for messages and reports
+ */
+public record Part(
+        String id,
+        String title,
+        Architecture architecture,
+        InputType input,
+        FactoryTrim factoryTrim,
+        boolean nullPins,
+        int channels,
+        List<String> packages,
+        List<String> tags,
+        Price price,
+        Range supply,
+        Range temperature,
+        Spread vos,
+        Spread vosDrift,
+        Spread ib,
+        Spread ios,
+        MinTyp cmrr,
+        MinTyp psrr,
+        MinTyp aol,
+        double gbw,
+        Double slew,
+        Noise noise,
+        LongTermDrift longTermDrift,
+        Headroom inputHeadroom,
+        Headroom outputHeadroom,
+        Double choppingFrequency,
+        Double quiescentCurrent,
+        String source,
+        String notes,
+        Located where) {
+
+    public Part {
+        packages = packages == null ? List.of() : List.copyOf(packages);
+        tags = tags == null ? List.of() : List.copyOf(tags);
+        vosDrift = vosDrift == null ? Spread.NONE : vosDrift;
+        ib = ib == null ? Spread.NONE : ib;
+        ios = ios == null ? Spread.NONE : ios;
+        cmrr = cmrr == null ? MinTyp.NONE : cmrr;
+        psrr = psrr == null ? MinTyp.NONE : psrr;
+        aol = aol == null ? MinTyp.NONE : aol;
+        noise = noise == null ? Noise.NONE : noise;
+        factoryTrim = factoryTrim == null ? FactoryTrim.NONE : factoryTrim;
+        title = title == null ? "" : title;
+        source = source == null ? "" : source;
+        notes = notes == null ? "" : notes;
+    }
+
+    /** Chopper and auto-zero parts correct their own offset continuously. */
+    public boolean selfCorrecting() {
+        return architecture != Architecture.STANDARD;
+    }
+
+    /** Price per unit at the quantity the catalog states. */
+    public double unitPrice() {
+        return price.unit();
+    }
+}

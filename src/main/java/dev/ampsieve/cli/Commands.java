@@ -1,0 +1,61 @@
+package dev.ampsieve.cli;
+
+import dev.ampsieve.yaml.InputException;
+import dev.ampsieve.yaml.Problem;
+import java.io.PrintWriter;
+import picocli.CommandLine;
+
+/**
+ * Builds the one command tree both front ends use (the command line and the shell feed it the
+ * same words) and maps failures to one-line messages and named exit codes.
+ */
+public final class Commands {
+    private Commands() {
+    }
+
+    /** A fresh tree whose commands print to {@code out} and {@code err}. */
+    public static CommandLine build(PrintWriter out, PrintWriter err) {
+        return build(new RootCommand(), out, err);
+    }
+
+    public static CommandLine build(RootCommand root, PrintWriter out, PrintWriter err) {
+        CommandLine cl = new CommandLine(root);
+        cl.setOut(out);
+        cl.setErr(err);
+        cl.setCaseInsensitiveEnumValuesAllowed(true);
+        cl.setExecutionExceptionHandler((ex, line, parseResult) -> handle(ex, line, root.verbose()));
+        return cl;
+    }
+
+    public static int run(String[] args, PrintWriter out, PrintWriter err) {
+        int code = build(out, err).execute(args);
+        out.flush();
+        err.flush();
+        return code;
+    }
+
+    /** One line per problem, never a stack trace for something the user typed. */
+    static int handle(Exception ex, CommandLine line, boolean verbose) {
+        PrintWriter err = line.getErr();
+        if (ex instanceof InputException ie) {
+            for (Problem p : ie.problems()) {
+                err.println(p);
+            }
+            err.flush();
+            return ExitCode.FINDINGS;
+        }
+        if (ex instanceof UserException ue) {
+            err.println("ampsieve: " + ue.getMessage());
+            err.flush();
+            return ue.exitCode();
+        }
+        err.println("ampsieve: internal error: " + ex);
+        if (verbose) {
+            ex.printStackTrace(err);
+        } else {
+            err.println("(run again with --verbose for the details)");
+        }
+        err.flush();
+        return ExitCode.INTERNAL;
+    }
+}

@@ -1,0 +1,107 @@
+package dev.ampsieve.cli;
+
+import dev.ampsieve.catalog.Catalog;
+import dev.ampsieve.catalog.CatalogLoader;
+import dev.ampsieve.yaml.InputException;
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Properties;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.IVersionProvider;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ScopeType;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code ampsieve}: the root of the command tree. Holds the options every command shares
+ * (which catalog, strictness, verbosity) and the catalog once loaded.
+ */
+@Command(name = "ampsieve",
+        mixinStandardHelpOptions = true,
+        versionProvider = RootCommand.Version.class,
+        description = {
+            "Picks operational amplifiers for a stage by its full output error budget,",
+            "computed from your own YAML catalog of datasheet values."},
+        subcommands = {CheckCommand.class},
+        footer = {"", "Catalog folder: --catalog DIR, else $AMPSIEVE_CATALOG, else the demo catalog.",
+            "Exit codes: 0 ok, 1 problems in your data or a 'no' answer, 2 usage error, 3 internal error."})
+public final class RootCommand implements Callable<Integer> {
+
+    @Spec
+    CommandSpec spec;
+
+    @Option(names = "--catalog", paramLabel = "DIR", scope = ScopeType.INHERIT,
+            description = "Folder of catalog YAML files (default: $AMPSIEVE_CATALOG, else demo-catalog).")
+    Path catalogDir;
+
+    @Option(names = "--strict", scope = ScopeType.INHERIT,
+            description = "Refuse the whole catalog when any file has an error.")
+    boolean strict;
+
+    @Option(names = "--verbose", scope = ScopeType.INHERIT, description = "Show stack traces of internal errors.")
+    boolean verbose;
+
+    private Catalog catalog;
+
+    public boolean verbose() {
+        return verbose;
+    }
+
+    @Override
+    public Integer call() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+        return ExitCode.OK;
+    }
+
+    /** The catalog folder after applying --catalog, then $AMPSIEVE_CATALOG, then the demo catalog. */
+    public Path catalogDir() {
+        if (catalogDir != null) {
+            return catalogDir;
+        }
+        String env = System.getenv("AMPSIEVE_CATALOG");
+        if (env != null && !env.isBlank()) {
+            return Path.of(env);
+        }
+        String home = System.getProperty("ampsieve.home");
+        if (home != null) {
+            Path demo = Path.of(home, "demo-catalog");
+            if (Files.isDirectory(demo)) {
+                return demo;
+            }
+        }
+        return Path.of("demo-catalog");
+    }
+
+    /** Loads the catalog once per command tree; problems stay on the result for the caller to show. */
+    public Catalog catalog() throws InputException {
+        if (catalog == null) {
+            catalog = CatalogLoader.load(catalogDir(), strict);
+        }
+        return catalog;
+    }
+
+    /** Forgets the loaded catalog (the shell calls this when files changed). */
+    public void forgetCatalog() {
+        catalog = null;
+    }
+
+    /** Reads the version Maven wrote into the jar. */
+    public static final class Version implements IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            Properties p = new Properties();
+            try (InputStream in = RootCommand.class.getResourceAsStream("/dev/ampsieve/version.properties")) {
+                if (in != null) {
+                    p.load(in);
+                }
+            } catch (IOException e) {
+                // no version file: report as unknown rather than fail --version
+            }
+            return new String[] {"ampsieve " + p.getProperty("version", "unknown")};
+        }
+    }
+}

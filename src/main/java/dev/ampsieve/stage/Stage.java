@@ -1,0 +1,106 @@
+package dev.ampsieve.stage;
+
+import dev.ampsieve.catalog.Range;
+import dev.ampsieve.yaml.Located;
+
+/**
+ * One amplifier stage and what it must achieve. SI units; temperatures in °C.
+ * Derived values (noise gain, R+, R-, dT) follow the conventions of Franco,
+ * <i>Design with Operational Amplifiers</i>, 4th ed., ch. 1 and 5 (recalled from memory).
+ *
+ * @param rf                feedback resistor, ohm (follower: 0 allowed)
+ * @param rg                gain resistor, ohm (follower: infinite)
+ * @param sourceResistance  Rs: in series with + input (non-inverting, follower); added to Rg (inverting)
+ * @param balanceResistance Rp: + input to reference; in series with Rs for non-inverting
+ * @param supplyVoltage     total supply (V), null when not stated
+ * @param supplyVariation   peak supply change (V) seen by PSRR
+ * @param commonModeSwing   peak common-mode change (V) seen by CMRR
+ * @param commonModeRange   input common-mode range needed, volts above the negative rail (null: centred default)
+ * @param outputRange       output range needed, volts above the negative rail (null: centred default)
+ * @param fullScaleOutput   largest output magnitude (V), null when not stated
+ * @param serviceLife       seconds of operation for long-term drift
+ * @param quantity          build quantity (for price)
+ * @param maxPrice          price ceiling per unit, null for none
+ * @param acCoupled         DC terms only count toward headroom, not toward the error
+ * @param where             the file the stage came from (null when typed in)
+ */
+public record Stage(
+        Topology topology,
+        double rf,
+        double rg,
+        double sourceResistance,
+        double balanceResistance,
+        double tMin,
+        double tMax,
+        Double supplyVoltage,
+        double supplyVariation,
+        double commonModeSwing,
+        Range commonModeRange,
+        Range outputRange,
+        double bandLow,
+        double bandHigh,
+        Double fullScaleOutput,
+        double ratioTolerance,
+        double ratioTempco,
+        double serviceLife,
+        Limit limit,
+        Criterion criterion,
+        double maxToSigma,
+        int trials,
+        long seed,
+        Trim trim,
+        int quantity,
+        Double maxPrice,
+        boolean acCoupled,
+        Located where) {
+
+    /** Reference temperature of datasheet 25 °C columns and of a one-point trim. */
+    public static final double T_REF = 25.0;
+
+    /** Effective gain resistor: inverting stages see the source in series with Rg. */
+    public double rgEffective() {
+        return topology == Topology.INVERTING ? rg + sourceResistance : rg;
+    }
+
+    /** Noise gain 1 + Rf/Rg (inverting: Rg + Rs); 1 for a follower. */
+    public double noiseGain() {
+        if (topology == Topology.FOLLOWER) {
+            return 1.0;
+        }
+        return 1.0 + rf / rgEffective();
+    }
+
+    /** Signal gain: 1 + Rf/Rg, or -Rf/(Rg + Rs) inverting, 1 follower. */
+    public double signalGain() {
+        return switch (topology) {
+            case FOLLOWER -> 1.0;
+            case NON_INVERTING -> 1.0 + rf / rg;
+            case INVERTING -> -rf / (rg + sourceResistance);
+        };
+    }
+
+    /** Resistance seen from the - input: Rf || Rg (inverting Rf || (Rg + Rs)); follower Rf. */
+    public double rMinus() {
+        if (topology == Topology.FOLLOWER) {
+            return rf;
+        }
+        double a = rf;
+        double b = rgEffective();
+        return a * b / (a + b);
+    }
+
+    /** Resistance seen from the + input: Rs + Rp (inverting: Rp). */
+    public double rPlus() {
+        return topology == Topology.INVERTING ? balanceResistance : sourceResistance + balanceResistance;
+    }
+
+    /** Largest distance of the range from 25 °C. */
+    public double deltaT() {
+        return Math.max(Math.abs(tMin - T_REF), Math.abs(tMax - T_REF));
+    }
+
+    /** The error limit in output volts. */
+    public double limitVolts() {
+        return limit.outputVolts(noiseGain(), fullScaleOutput);
+    }
+}

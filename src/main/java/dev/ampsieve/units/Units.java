@@ -1,0 +1,321 @@
+package dev.ampsieve.units;
+
+import java.util.LinkedHashMap;
+import java.util.Locale;
+import java.util.Map;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+/**
+ * Reads and prints quantities written the way datasheets write them: {@code 2.5 uV},
+ * {@code 0.6 µV/°C}, {@code 12 nV/rtHz}, {@code 0.5 V/us}, {@code 10k}, {@code 110 dB}.
+ *
+ * <p>SI prefixes follow the SI Brochure (BIPM, 9th edition, 2019, table 7): f 1e-15,
+ * p 1e-12, n 1e-9, u/µ 1e-6, m 1e-3, k 1e3, M 1e6, G 1e9, T 1e12. Prefixes are
+ * case-sensitive as in the brochure (m milli, M mega); {@code K} is also read as kilo
+ * before a unit (as in "KHz", a common misspelling), never in a temperature field.
+ *
+ * <p>A unit is read as numerator[/denominator], each with an optional prefix, so
+ * {@code V/us} is volts per microsecond. The dimension expected by the field decides
+ * whether a value is accepted; a mismatch names both dimensions.
+ *
+ * <p>Time: h = 3600 s; y = Julian year of 365.25 days (8766 h); month = y/12 (730.5 h).
+ */
+public final class Units {
+
+    private Units() {
+    }
+
+    private static final Pattern QUANTITY = Pattern.compile(
+            "^\\s*([-+]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][-+]?\\d+)?)\\s*(.*?)\\s*$");
+
+    private static final Map<String, Double> PREFIXES = new LinkedHashMap<>();
+
+    static {
+        PREFIXES.put("f", 1e-15);
+        PREFIXES.put("p", 1e-12);
+        PREFIXES.put("n", 1e-9);
+        PREFIXES.put("u", 1e-6);
+        PREFIXES.put("µ", 1e-6); // U+00B5 MICRO SIGN
+        PREFIXES.put("μ", 1e-6); // U+03BC GREEK SMALL LETTER MU
+        PREFIXES.put("m", 1e-3);
+        PREFIXES.put("k", 1e3);
+        PREFIXES.put("K", 1e3);
+        PREFIXES.put("M", 1e6);
+        PREFIXES.put("G", 1e9);
+        PREFIXES.put("T", 1e12);
+    }
+
+    /** Base unit symbols (numerator side) and what they measure. */
+    private enum Base {
+        VOLT, AMPERE, OHM, HERTZ, DECIBEL, CELSIUS, KELVIN, PERCENT, PPM, SECOND, HOUR, YEAR, MONTH, DAY, NONE, ROOT_HERTZ
+    }
+
+    private record Unit(Base base, double factor) {
+    }
+
+    private static final Map<String, Base> BASES = new LinkedHashMap<>();
+
+    static {
+        BASES.put("V", Base.VOLT);
+        BASES.put("A", Base.AMPERE);
+        for (String s : new String[] {"ohm", "ohms", "Ohm", "Ohms", "Ω", "Ω", "R"}) {
+            BASES.put(s, Base.OHM);
+        }
+        BASES.put("Hz", Base.HERTZ);
+        BASES.put("hz", Base.HERTZ);
+        BASES.put("dB", Base.DECIBEL);
+        for (String s : new String[] {"C", "°C", "degC", "℃"}) {
+            BASES.put(s, Base.CELSIUS);
+        }
+        BASES.put("K", Base.KELVIN);
+        BASES.put("%", Base.PERCENT);
+        BASES.put("ppm", Base.PPM);
+        BASES.put("s", Base.SECOND);
+        BASES.put("h", Base.HOUR);
+        BASES.put("hr", Base.HOUR);
+        BASES.put("hours", Base.HOUR);
+        BASES.put("y", Base.YEAR);
+        BASES.put("yr", Base.YEAR);
+        BASES.put("years", Base.YEAR);
+        BASES.put("month", Base.MONTH);
+        BASES.put("months", Base.MONTH);
+        BASES.put("d", Base.DAY);
+        BASES.put("days", Base.DAY);
+        for (String s : new String[] {"rtHz", "√Hz", "sqrt(Hz)", "sqrtHz", "Hz^0.5", "Hz^(1/2)", "rthz"}) {
+            BASES.put(s, Base.ROOT_HERTZ);
+        }
+    }
+
+    /** Bases that take no SI prefix (a prefix on them would be a typo). */
+    private static boolean prefixable(Base b) {
+        return switch (b) {
+            case VOLT, AMPERE, OHM, HERTZ, SECOND, ROOT_HERTZ -> true;
+            default -> false;
+        };
+    }
+
+    /**
+     * Parses {@code text} as a quantity of dimension {@code expected} and returns it in SI
+     * base units (temperatures in °C).
+     *
+     * @throws UnitException naming what was found and an example of what to write
+     */
+    public static double parse(String text, Dimension expected) throws UnitException {
+        if (text == null || text.isBlank()) {
+            throw new UnitException("empty value", "write " + expected.noun() + " such as '" + expected.example() + "'");
+        }
+        String t = text.strip();
+        String lower = t.toLowerCase(Locale.ROOT);
+        if (lower.contains("nan") || lower.contains("inf")) {
+            throw new UnitException("'" + t + "' is not a finite number",
+                    "write " + expected.noun() + " such as '" + expected.example() + "'");
+        }
+        Matcher m = QUANTITY.matcher(t);
+        if (!m.matches()) {
+            throw new UnitException("'" + t + "' does not start with a number",
+                    "write " + expected.noun() + " such as '" + expected.example() + "'");
+        }
+        double number = Double.parseDouble(m.group(1));
+        String unitText = m.group(2);
+        double value = number * interpret(unitText, expected, t);
+        if (expected == Dimension.TEMPERATURE && isKelvin(unitText)) {
+            value = number - 273.15;
+        }
+        if (!Double.isFinite(value)) {
+            throw new UnitException("'" + t + "' is out of range", "write a finite value such as '" + expected.example() + "'");
+        }
+        return value;
+    }
+
+    private static boolean isKelvin(String unitText) {
+        return unitText.equals("K");
+    }
+
+    /** Returns the factor to SI for {@code unitText} in a field of dimension {@code expected}. */
+    private static double interpret(String unitText, Dimension expected, String whole) throws UnitException {
+        String u = unitText.replace(" ", "");
+        if (u.isEmpty()) {
+            return switch (expected) {
+                case NUMBER, RATIO, DECIBEL, RESISTANCE -> 1.0;
+                default -> throw new UnitException("'" + whole + "' has no unit",
+                        "write " + expected.noun() + " with its unit, such as '" + expected.example() + "'");
+            };
+        }
+        if (expected == Dimension.TEMPERATURE && u.equals("K")) {
+            return 1.0;
+        }
+        // a bare prefix: "10k" for a resistance, "2M" for 2 Mohm
+        if (expected == Dimension.RESISTANCE && PREFIXES.containsKey(u)) {
+            return PREFIXES.get(u);
+        }
+        String num = u;
+        String den = null;
+        int slash = u.indexOf('/');
+        if (slash >= 0) {
+            num = u.substring(0, slash);
+            den = u.substring(slash + 1);
+        }
+        Unit n = num.isEmpty() && den != null ? new Unit(Base.NONE, 1.0) : unit(num, whole, expected);
+        Unit d = den == null ? null : unit(den, whole, expected);
+        Dimension found = dimensionOf(n.base(), d == null ? null : d.base());
+        if (found == null) {
+            throw new UnitException("unit '" + unitText + "' in '" + whole + "' is not one this tool reads",
+                    "write " + expected.noun() + " such as '" + expected.example() + "'");
+        }
+        if (found != expected && !(expected == Dimension.NUMBER && found == Dimension.RATIO)) {
+            throw new UnitException("'" + whole + "' is " + found.noun() + " but " + expected.noun() + " belongs here",
+                    "write " + expected.noun() + " such as '" + expected.example() + "'");
+        }
+        double factor = n.factor() * baseFactor(n.base());
+        if (d != null) {
+            factor /= d.factor() * baseFactor(d.base());
+        }
+        return factor;
+    }
+
+    private static Unit unit(String s, String whole, Dimension expected) throws UnitException {
+        Base exact = BASES.get(s);
+        if (exact != null) {
+            return new Unit(exact, 1.0);
+        }
+        for (Map.Entry<String, Double> p : PREFIXES.entrySet()) {
+            if (s.startsWith(p.getKey()) && s.length() > p.getKey().length()) {
+                Base b = BASES.get(s.substring(p.getKey().length()));
+                if (b != null && prefixable(b)) {
+                    return new Unit(b, p.getValue());
+                }
+            }
+        }
+        throw new UnitException("unit '" + s + "' in '" + whole + "' is not one this tool reads",
+                "write " + expected.noun() + " such as '" + expected.example() + "'");
+    }
+
+    private static double baseFactor(Base b) {
+        return switch (b) {
+            case PERCENT -> 1e-2;
+            case PPM -> 1e-6;
+            case HOUR -> 3600.0;
+            case DAY -> 86400.0;
+            case YEAR -> 365.25 * 86400.0;
+            case MONTH -> 365.25 * 86400.0 / 12.0;
+            default -> 1.0;
+        };
+    }
+
+    private static Dimension dimensionOf(Base num, Base den) {
+        if (den == null) {
+            return switch (num) {
+                case VOLT -> Dimension.VOLTAGE;
+                case AMPERE -> Dimension.CURRENT;
+                case OHM -> Dimension.RESISTANCE;
+                case HERTZ -> Dimension.FREQUENCY;
+                case DECIBEL -> Dimension.DECIBEL;
+                case CELSIUS, KELVIN -> Dimension.TEMPERATURE;
+                case PERCENT, PPM -> Dimension.RATIO;
+                case SECOND, HOUR, YEAR, MONTH, DAY -> Dimension.TIME;
+                default -> null;
+            };
+        }
+        boolean perDegree = den == Base.CELSIUS || den == Base.KELVIN;
+        if (perDegree) {
+            return switch (num) {
+                case VOLT -> Dimension.VOLTAGE_DRIFT;
+                case PERCENT, PPM -> Dimension.RATIO_DRIFT;
+                default -> null;
+            };
+        }
+        if (den == Base.ROOT_HERTZ) {
+            return switch (num) {
+                case VOLT -> Dimension.VOLTAGE_DENSITY;
+                case AMPERE -> Dimension.CURRENT_DENSITY;
+                default -> null;
+            };
+        }
+        if (den == Base.SECOND && num == Base.VOLT) {
+            return Dimension.SLEW_RATE;
+        }
+        return null;
+    }
+
+    // ---------------------------------------------------------------- printing
+
+    private static final String[] ENG_PREFIX = {"f", "p", "n", "µ", "m", "", "k", "M", "G", "T"};
+
+    /** Prints with an engineering prefix and 3 significant digits, e.g. {@code 2.50 µV}. */
+    public static String format(double si, Dimension d) {
+        return format(si, d, 3);
+    }
+
+    /** Prints with an engineering prefix and {@code digits} significant digits. */
+    public static String format(double si, Dimension d, int digits) {
+        if (Double.isNaN(si)) {
+            return "n/a";
+        }
+        return switch (d) {
+            case DECIBEL -> trim(String.format(Locale.ROOT, "%." + Math.max(0, digits - 3) + "f", si)) + " dB";
+            case TEMPERATURE -> trim(String.format(Locale.ROOT, "%.1f", si)) + " °C";
+            case RATIO -> ratio(si, digits);
+            case RATIO_DRIFT -> trim(sig(si * 1e6, digits)) + " ppm/°C";
+            case NUMBER -> trim(sig(si, digits));
+            case TIME -> time(si, digits);
+            case SLEW_RATE -> engineering(si * 1e-6, digits) + "V/µs";
+            case RESISTANCE -> engineering(si, digits) + "Ω";
+            default -> engineering(si, digits) + d.symbol();
+        };
+    }
+
+    /** Number with engineering prefix followed by a space, e.g. {@code "2.50 µ"}. */
+    public static String engineering(double si, int digits) {
+        if (si == 0.0) {
+            return "0 ";
+        }
+        double abs = Math.abs(si);
+        int exp3 = (int) Math.floor(Math.log10(abs) / 3.0);
+        exp3 = Math.max(-5, Math.min(4, exp3));
+        double scaled = si / Math.pow(10, 3 * exp3);
+        // rounding may carry 999.6 up to 1000: move to the next prefix
+        String digitsText = sig(scaled, digits);
+        if (Math.abs(Double.parseDouble(digitsText)) >= 1000 && exp3 < 4) {
+            exp3++;
+            scaled = si / Math.pow(10, 3 * exp3);
+            digitsText = sig(scaled, digits);
+        }
+        return digitsText + " " + ENG_PREFIX[exp3 + 5];
+    }
+
+    private static String sig(double v, int digits) {
+        if (v == 0.0) {
+            return "0";
+        }
+        int mag = (int) Math.floor(Math.log10(Math.abs(v)));
+        int decimals = Math.max(0, digits - 1 - mag);
+        return String.format(Locale.ROOT, "%." + decimals + "f", v);
+    }
+
+    private static String trim(String s) {
+        if (s.contains(".")) {
+            s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
+        }
+        return s;
+    }
+
+    private static String ratio(double si, int digits) {
+        double abs = Math.abs(si);
+        if (abs != 0 && abs < 1e-3) {
+            return trim(sig(si * 1e6, digits)) + " ppm";
+        }
+        return trim(sig(si * 100, digits)) + " %";
+    }
+
+    private static String time(double s, int digits) {
+        double year = 365.25 * 86400.0;
+        if (Math.abs(s) >= year) {
+            return trim(sig(s / year, digits)) + " y";
+        }
+        if (Math.abs(s) >= 3600) {
+            return trim(sig(s / 3600, digits)) + " h";
+        }
+        return engineering(s, digits) + "s";
+    }
+}

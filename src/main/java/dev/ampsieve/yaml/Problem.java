@@ -1,0 +1,58 @@
+package dev.ampsieve.yaml;
+
+import java.nio.file.Path;
+
+/**
+ * One finding in a user's file: where it is, which field, what is wrong and what to do.
+ * Printed as {@code file:line:col: field.path: problem; fix}.
+ *
+ * @param file   the file, as the user named it (may be null for values typed in the shell)
+ * @param line   1-based line, 0 when unknown
+ * @param column 1-based column, 0 when unknown
+ * @param field  dotted field path, e.g. {@code parts[3].vos.max}; empty for the whole file
+ */
+public record Problem(Severity severity, Path file, int line, int column, String field, String message, String fix) {
+
+    public enum Severity { ERROR, WARNING }
+
+    public Problem {
+        field = field == null ? "" : field;
+        fix = fix == null ? "" : fix;
+    }
+
+    public static Problem error(Located at, String field, String message, String fix) {
+        return new Problem(Severity.ERROR, at.file(), at.line(), at.column(), field, message, fix);
+    }
+
+    public static Problem warning(Located at, String field, String message, String fix) {
+        return new Problem(Severity.WARNING, at.file(), at.line(), at.column(), field, message, fix);
+    }
+
+    public boolean isError() {
+        return severity == Severity.ERROR;
+    }
+
+    @Override
+    public String toString() {
+        StringBuilder sb = new StringBuilder();
+        sb.append(file == null ? "<input>" : file.toString());
+        if (line > 0) {
+            sb.append(':').append(line);
+            if (column > 0) {
+                sb.append(':').append(column);
+            }
+        }
+        sb.append(": ");
+        if (severity == Severity.WARNING) {
+            sb.append("warning: ");
+        }
+        if (!field.isEmpty()) {
+            sb.append(field).append(": ");
+        }
+        sb.append(message);
+        if (!fix.isEmpty()) {
+            sb.append("; ").append(fix);
+        }
+        return sb.toString();
+    }
+}
