@@ -1,0 +1,73 @@
+package dev.ampsieve.report;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.ampsieve.report.ScatterChart.Point;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+
+class ScatterChartTest {
+
+    private static final List<Point> THREE = List.of(
+            new Point("P-1", 1e-3, 1.5, "fits"),
+            new Point("P-2", 10e-3, 0.5, "no-fit"),
+            new Point("P-3", 0.1e-3, 4.2, "fits"));
+
+    @Test
+    void lettersOnALogErrorAxisWithTheLimitAcross() {
+        // errors 10 mV .. 100 uV over 7 rows: two decades, a third of a decade per row.
+        // 1 mV lies one decade down: row 3; the 2 mV limit: log10(5)/2*6 = 2.1 -> row 2.
+        // 25 plot columns: cost 0.50 at column 0, 4.20 at 24, 1.50 at round(1/3.7*24) = 6.
+        List<String> lines = ScatterChart.render(THREE, 2e-3, "USD", 7, new OutputStyle(40, true, false));
+        assertEquals(List.of(
+                "10.0 mV ┤b",
+                "        │",
+                "2.00 mV ┼───────────────────────── limit",
+                "        │      a",
+                "        │",
+                "        │",
+                " 100 µV ┤                        c",
+                "        └─────────────────────────",
+                "         0.50                 4.20 USD",
+                "  a  P-1  1.00 mV  1.50 USD  fits",
+                "  b  P-2  10.0 mV  0.50 USD  no-fit",
+                "  c  P-3   100 µV  4.20 USD  fits"), lines);
+    }
+
+    @Test
+    void asciiFallbackAndTwoPartsInOneCell() {
+        List<Point> four = new java.util.ArrayList<>(THREE);
+        four.add(new Point("P-4", 0.1e-3, 4.2, "fits"));
+        List<String> lines = ScatterChart.render(four, 2e-3, "USD", 5, new OutputStyle(40, false, false));
+        assertEquals(List.of(
+                "10.0 mV +b",
+                "2.00 mV +------------------------- limit",
+                "        |      a",
+                "        |",
+                " 100 µV +                        *",
+                "        +-------------------------",
+                "         0.50                 4.20 USD",
+                "  a  P-1  1.00 mV  1.50 USD  fits",
+                "  b  P-2  10.0 mV  0.50 USD  no-fit",
+                "  c  P-3   100 µV  4.20 USD  fits",
+                "  d  P-4   100 µV  4.20 USD  fits"), lines);
+    }
+
+    @Test
+    void fitsAreGreenAndMissesRedWhenColourIsOn() {
+        List<String> lines = ScatterChart.render(THREE, 2e-3, "USD", 7, new OutputStyle(40, true, true));
+        assertTrue(lines.get(0).contains(Ansi.RED + "b" + Ansi.RESET), lines.get(0));
+        assertTrue(lines.get(3).contains(Ansi.GREEN + "a" + Ansi.RESET), lines.get(3));
+    }
+
+    @Test
+    void onePartAtTheLimitStillGetsADecadeOfAxis() {
+        // a single point at the limit: the axis opens half a decade each way, and the point sits on the limit row
+        List<String> lines = ScatterChart.render(List.of(new Point("P-9", 1e-3, 2, "fits")), 1e-3, "EUR", 5,
+                new OutputStyle(40, false, false));
+        assertEquals("3.16 mV +", lines.get(0));
+        assertEquals("1.00 mV +------------a------------ limit", lines.get(2));
+        assertEquals(" 316 µV +", lines.get(4));
+    }
+}
