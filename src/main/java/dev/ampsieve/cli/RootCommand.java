@@ -2,6 +2,8 @@ package dev.ampsieve.cli;
 
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.CatalogLoader;
+import dev.ampsieve.report.OutputStyle;
+import dev.ampsieve.shell.Shell;
 import dev.ampsieve.yaml.InputException;
 import java.io.IOException;
 import java.io.InputStream;
@@ -45,16 +47,36 @@ public final class RootCommand implements Callable<Integer> {
     @Option(names = "--verbose", scope = ScopeType.INHERIT, description = "Show stack traces of internal errors.")
     boolean verbose;
 
+    @Option(names = "--ascii", scope = ScopeType.INHERIT,
+            description = "Draw charts with ASCII characters only (automatic when the terminal is not UTF-8).")
+    boolean ascii;
+
     private Catalog catalog;
+    private OutputStyle style;
 
     public boolean verbose() {
         return verbose;
     }
 
+    /** With a terminal and no command: the interactive shell. Without a terminal: the usage. */
     @Override
     public Integer call() {
+        if (System.console() != null) {
+            return Shell.start(this, spec.commandLine().getParseResult().originalArgs());
+        }
         spec.commandLine().usage(spec.commandLine().getOut());
         return ExitCode.OK;
+    }
+
+    /** Width, charset and colours for text output: the shell's terminal, else what stdout looks like. */
+    public OutputStyle outputStyle() {
+        OutputStyle s = style != null ? style : OutputStyles.detect(System.getenv());
+        return ascii ? s.withUnicode(false) : s;
+    }
+
+    /** The shell sets this before each line (the terminal may have been resized). */
+    public void setOutputStyle(OutputStyle s) {
+        this.style = s;
     }
 
     /** The catalog folder after applying --catalog, then $AMPSIEVE_CATALOG, then the demo catalog. */

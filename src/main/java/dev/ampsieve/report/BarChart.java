@@ -82,7 +82,7 @@ public final class BarChart {
             start = Math.max(0, start - text.length() + 1);
         }
         lines.add(" ".repeat(start) + text);
-        return lines;
+        return lines.stream().map(g::text).toList();
     }
 
     private static String row(Bar b, int labelW, int valueW, int shareW, int barW, int limitCol, double max,

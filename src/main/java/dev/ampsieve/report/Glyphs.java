@@ -31,4 +31,40 @@ public record Glyphs(String partials, char full, char vertical, char rule, char 
     public int steps() {
         return partials.isEmpty() ? 1 : 8;
     }
+
+    /** {@code s} as this charset can show it: unchanged in Unicode, else {@link #ascii(String)}. */
+    public String text(String s) {
+        return partials.isEmpty() ? ascii(s) : s;
+    }
+
+    /**
+     * Plain-ASCII spellings of the non-ASCII characters our output uses (unit symbols, box
+     * drawing, blocks); anything else outside ASCII becomes '?', as a non-UTF-8 terminal would.
+     */
+    public static String ascii(String s) {
+        if (s.chars().allMatch(c -> c < 128)) {
+            return s;
+        }
+        StringBuilder b = new StringBuilder(s.length());
+        for (int i = 0; i < s.length(); i++) {
+            char c = s.charAt(i);
+            switch (c) {
+                case '\u00b5', '\u03bc' -> b.append('u'); // micro sign, Greek mu
+                case '\u00b0' -> { } // degree sign: "°C" reads as "C"
+                case '\u03a9', '\u2126' -> b.append("ohm");
+                case '\u221a' -> b.append("rt");
+                case '\u00b1' -> b.append("+/-");
+                case '\u00d7' -> b.append('x');
+                case '\u2026' -> b.append("...");
+                case '\u2013', '\u2014', '\u2500', '\u2501' -> b.append('-');
+                case '\u2502', '\u2503' -> b.append('|');
+                case '\u253c', '\u2524', '\u251c', '\u2514', '\u2518', '\u250c', '\u2510' -> b.append('+');
+                case '\u2588', '\u2589', '\u258a', '\u258b', '\u258c', '\u258d', '\u258e', '\u258f' -> b.append('#');
+                case '\u25b2' -> b.append('^');
+                case '\u25c6' -> b.append('*');
+                default -> b.append(c < 128 ? c : '?');
+            }
+        }
+        return b.toString();
+    }
 }

@@ -131,7 +131,7 @@ public final class ScatterChart {
         int gap = Math.max(1, plotW - lo.length() - hi.length());
         lines.add(" ".repeat(labelW + 2) + lo + " ".repeat(gap) + hi + " " + currency);
         lines.addAll(legend(points, currency, style));
-        return lines;
+        return lines.stream().map(g::text).toList();
     }
 
     /** Row 0 at the top; log scale between yHi and yLo. */

@@ -45,13 +45,13 @@ class ScatterChartTest {
                 "2.00 mV +------------------------- limit",
                 "        |      a",
                 "        |",
-                " 100 µV +                        *",
+                " 100 uV +                        *",
                 "        +-------------------------",
                 "         0.50                 4.20 USD",
                 "  a  P-1  1.00 mV  1.50 USD  fits",
                 "  b  P-2  10.0 mV  0.50 USD  no-fit",
-                "  c  P-3   100 µV  4.20 USD  fits",
-                "  d  P-4   100 µV  4.20 USD  fits"), lines);
+                "  c  P-3   100 uV  4.20 USD  fits",
+                "  d  P-4   100 uV  4.20 USD  fits"), lines);
     }
 
     @Test
@@ -68,6 +68,6 @@ class ScatterChartTest {
                 new OutputStyle(40, false, false));
         assertEquals("3.16 mV +", lines.get(0));
         assertEquals("1.00 mV +------------a------------ limit", lines.get(2));
-        assertEquals(" 316 µV +", lines.get(4));
+        assertEquals(" 316 uV +", lines.get(4));
     }
 }

@@ -1,0 +1,333 @@
+package dev.ampsieve.shell;
+
+import dev.ampsieve.catalog.Catalog;
+import dev.ampsieve.cli.Commands;
+import dev.ampsieve.cli.ExitCode;
+import dev.ampsieve.cli.RootCommand;
+import dev.ampsieve.cli.UserException;
+import dev.ampsieve.report.Caution;
+import dev.ampsieve.report.Glyphs;
+import dev.ampsieve.report.OutputStyle;
+import dev.ampsieve.yaml.Fields;
+import dev.ampsieve.yaml.InputException;
+import dev.ampsieve.yaml.Problem;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.jline.reader.EndOfFileException;
+import org.jline.reader.LineReader;
+import org.jline.reader.LineReaderBuilder;
+import org.jline.reader.ParsedLine;
+import org.jline.reader.UserInterruptException;
+import org.jline.reader.impl.DefaultParser;
+import org.jline.terminal.Terminal;
+import org.jline.terminal.TerminalBuilder;
+import picocli.CommandLine;
+import picocli.CommandLine.Model.OptionSpec;
+
+/**
+ * The interactive shell: a JLine line editor in front of the same picocli command tree the
+ * command line uses, plus the shell's own verbs for the current stage. Each line is split
+ * into words (quotes group words) and executed by the tree; a command that takes
+ * {@code --stage FILE} gets the current stage when the line gives none.
+ *
+ * <p>Ctrl-C drops the line being typed, and while a command runs it interrupts the command's
+ * thread (a command that checks stops early); it never ends the shell. Ctrl-D leaves. Any failure prints one line and the loop goes on;
+ * a stack trace only with {@code --verbose}.
+ */
+public final class Shell {
+    private final RootCommand root;
+    private final List<String> rootArgs;
+    private final Terminal terminal;
+    private final Path historyFile;
+    private final Map<String, String> env;
+
+    /**
+     * @param rootArgs    the options the shell was started with ({@code --catalog DIR} ...), given
+     *                    again before every line because picocli resets options on each parse
+     * @param historyFile where to keep the history; null for none
+     * @param env         the environment (NO_COLOR)
+     */
+    public Shell(RootCommand root, List<String> rootArgs, Terminal terminal, Path historyFile, Map<String, String> env) {
+        this.root = root;
+        this.rootArgs = List.copyOf(rootArgs);
+        this.terminal = terminal;
+        this.historyFile = historyFile;
+        this.env = Map.copyOf(env);
+    }
+
+    /** Opens the shell on the process's terminal; returns the exit code. */
+    public static int start(RootCommand root, List<String> rootArgs) {
+        try (Terminal t = TerminalBuilder.builder().system(true).name("ampsieve").build()) {
+            Map<String, String> env = System.getenv();
+            return new Shell(root, rootArgs, t, XdgPaths.history(env, System.getProperty("user.home")), env).run();
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot open the terminal", e);
+        }
+    }
+
+    /** Colours off for NO_COLOR (any non-empty value, no-color.org) and dumb terminals; ASCII when not UTF-8. */
+    static OutputStyle look(Terminal t, Map<String, String> env, boolean asciiAsked) {
+        String type = t.getType() == null ? "dumb" : t.getType();
+        boolean dumb = type.startsWith("dumb");
+        String noColor = env.get("NO_COLOR");
+        boolean color = !dumb && (noColor == null || noColor.isEmpty());
+        boolean unicode = !asciiAsked && t.encoding() != null
+                && t.encoding().name().toUpperCase(Locale.ROOT).startsWith("UTF");
+        return new OutputStyle(t.getWidth(), unicode, color);
+    }
+
+    public int run() {
+        OutputStyle style = look(terminal, env, rootArgs.contains("--ascii"));
+        PrintWriter raw = terminal.writer();
+        ShellState[] stateRef = new ShellState[1];
+        PrintWriter out = new PrintWriter(new LineFilterWriter(raw, s -> shown(s, stateRef[0], false)), true);
+        PrintWriter err = new PrintWriter(new LineFilterWriter(raw, s -> shown(s, stateRef[0], true)), true);
+
+        // the completer needs the tree and the context, which need the reader: wire it in after building
+        org.jline.reader.Completer[] completer = new org.jline.reader.Completer[1];
+        DefaultParser parser = new DefaultParser();
+        parser.setEofOnUnclosedQuote(false); // an unclosed quote ends at the end of the line
+        LineReaderBuilder builder = LineReaderBuilder.builder().terminal(terminal).appName("ampsieve").parser(parser)
+                .completer((r, l, c) -> {
+                    if (completer[0] != null) {
+                        completer[0].complete(r, l, c);
+                    }
+                })
+                .variable(LineReader.HISTORY_SIZE, 1000).variable(LineReader.HISTORY_FILE_SIZE, 5000)
+                .option(LineReader.Option.DISABLE_EVENT_EXPANSION, true) // '!' is text, not a history reference
+                .option(LineReader.Option.HISTORY_IGNORE_SPACE, true);
+        String historyNote = null;
+        if (historyFile != null) {
+            historyNote = prepareHistory(historyFile);
+            if (historyNote == null) {
+                builder.variable(LineReader.HISTORY_FILE, historyFile);
+            }
+        }
+        LineReader reader = builder.build();
+        ShellContext ctx = new ShellContext(root, reader, out, style);
+        stateRef[0] = ctx.state;
+
+        CommandLine tree = Commands.build(root, out, err);
+        ShellCommands.all(ctx).forEach(tree::addSubcommand);
+        // picocli hands these settings to the subcommands present when they are set: set them again
+        tree.setOut(out);
+        tree.setErr(err);
+        tree.setCaseInsensitiveEnumValuesAllowed(true);
+        tree.setParameterExceptionHandler((ex, args) -> {
+            String cmd = ex.getCommandLine() == tree ? "" : ex.getCommandLine().getCommandName();
+            StringBuilder sb = new StringBuilder(cmd.isEmpty() ? "" : cmd + ": ").append(ex.getMessage());
+            if (ex instanceof CommandLine.UnmatchedArgumentException u && !u.getSuggestions().isEmpty()) {
+                sb.append("; did you mean ").append(String.join(" or ", u.getSuggestions())).append('?');
+            }
+            sb.append(cmd.isEmpty() ? " ('help' lists the commands)" : " ('help " + cmd + "' shows its options)");
+            err.println(sb);
+            return ExitCode.USAGE;
+        });
+        tree.setExecutionExceptionHandler((ex, line, parsed) -> failure(ex, err));
+        completer[0] = new ShellCompleter(ctx, tree);
+
+        banner(ctx, historyNote);
+        try {
+            loop(ctx, reader, tree, err);
+        } finally {
+            ctx.state.close();
+            out.flush();
+            err.flush();
+        }
+        return ExitCode.OK;
+    }
+
+    private void loop(ShellContext ctx, LineReader reader, CommandLine tree, PrintWriter err) {
+        while (!ctx.quit) {
+            ctx.style = look(terminal, env, rootArgs.contains("--ascii"));
+            ctx.paint = new Paint(ctx.style.color());
+            root.setOutputStyle(ctx.style);
+            tree.setUsageHelpWidth(Math.max(55, Math.min(ctx.style.width(), 120)));
+            String line;
+            try {
+                line = reader.readLine(prompt(ctx));
+            } catch (UserInterruptException e) {
+                continue; // Ctrl-C: the line is dropped, the shell stays
+            } catch (EndOfFileException e) {
+                if (ctx.state.unsaved() && !ctx.warnedUnsaved) {
+                    ctx.warnedUnsaved = true;
+                    ctx.out.println();
+                    ctx.out.println("The current stage is not saved: 'save FILE' keeps it; Ctrl-D again leaves without saving.");
+                    continue;
+                }
+                ctx.out.println();
+                break;
+            }
+            List<String> words = words(reader.getParsedLine(), line);
+            if (words.isEmpty()) {
+                continue;
+            }
+            if (!words.get(0).equals("quit") && !words.get(0).equals("exit")) {
+                ctx.warnedUnsaved = false;
+            }
+            execute(ctx, tree, words, err);
+        }
+    }
+
+    private static List<String> words(ParsedLine parsed, String line) {
+        List<String> words = new ArrayList<>();
+        if (parsed == null) {
+            for (String w : line.strip().split("\\s+")) {
+                if (!w.isEmpty()) {
+                    words.add(w);
+                }
+            }
+            return words;
+        }
+        for (String w : parsed.words()) {
+            if (!w.isEmpty()) {
+                words.add(w);
+            }
+        }
+        return words;
+    }
+
+    /** Runs one line through the tree; never throws. */
+    void execute(ShellContext ctx, CommandLine tree, List<String> words, PrintWriter err) {
+        String name = words.get(0);
+        CommandLine sub = tree.getSubcommands().get(name);
+        if (sub == null && !name.startsWith("-")) {
+            String near = Fields.closest(name, tree.getSubcommands().keySet());
+            err.println("unknown command '" + name + "'" + (near != null ? "; did you mean '" + near + "'?" : "")
+                    + " ('help' lists the commands)");
+            return;
+        }
+        Thread me = Thread.currentThread();
+        Terminal.SignalHandler previous = terminal.handle(Terminal.Signal.INT, s -> me.interrupt());
+        try {
+            List<String> line = new ArrayList<>(words);
+            if (sub != null && !withStage(ctx, sub, line, err)) {
+                return;
+            }
+            List<String> args = new ArrayList<>(rootArgs);
+            args.addAll(line);
+            tree.execute(args.toArray(String[]::new));
+        } catch (RuntimeException | StackOverflowError e) {
+            failure(e, err);
+        } finally {
+            terminal.handle(Terminal.Signal.INT, previous != null ? previous : Terminal.SignalHandler.SIG_DFL);
+            Thread.interrupted(); // a Ctrl-C during the command must not cancel the next prompt
+            ctx.out.flush();
+            err.flush();
+        }
+    }
+
+    /** Adds {@code --stage CURRENT} when the command takes a stage and the line gives none; false to skip the line. */
+    private static boolean withStage(ShellContext ctx, CommandLine sub, List<String> line, PrintWriter err) {
+        OptionSpec stage = sub.getCommandSpec().findOption("--stage");
+        if (stage == null) {
+            return true;
+        }
+        for (String w : line) {
+            for (String n : stage.names()) {
+                if (w.equals(n) || w.startsWith(n + "=")) {
+                    return true;
+                }
+            }
+        }
+        if (line.contains("--help") || line.contains("-h")) {
+            return true;
+        }
+        if (ctx.state.hasStage()) {
+            line.addAll(1, List.of("--stage", ctx.state.stageFile().toString()));
+            return true;
+        }
+        if (stage.required()) {
+            err.println("'" + line.get(0) + "' needs a stage: type 'ask' to describe one, 'load FILE', or add --stage FILE");
+            return false;
+        }
+        return true;
+    }
+
+    /** One line per failure; the stack trace only when --verbose was given. */
+    private int failure(Throwable ex, PrintWriter err) {
+        if (ex instanceof InputException ie) {
+            for (Problem p : ie.problems()) {
+                err.println(p);
+            }
+            return ExitCode.FINDINGS;
+        }
+        if (ex instanceof UserException ue) {
+            err.println(ue.getMessage());
+            return ue.exitCode();
+        }
+        if (root.verbose()) {
+            ex.printStackTrace(err);
+        } else {
+            err.println("internal error: " + ex + " (add --verbose to the command for the details)");
+        }
+        return ExitCode.INTERNAL;
+    }
+
+    /** What a printed line looks like on this terminal. */
+    private String shown(String s, ShellState state, boolean error) {
+        Path tmp = state == null ? null : state.stageFileIfWritten();
+        if (tmp != null) {
+            s = s.replace(tmp.toString(), StageCheck.NAME.toString());
+        }
+        OutputStyle st = look(terminal, env, rootArgs.contains("--ascii"));
+        if (!st.unicode()) {
+            s = Glyphs.ascii(s);
+        }
+        return error ? new Paint(st.color()).red(s) : s;
+    }
+
+    private String prompt(ShellContext ctx) {
+        String label = ctx.state.label();
+        String p = label.isEmpty() ? "ampsieve> " : "ampsieve [" + label + "]> ";
+        return ctx.paint.cyan(p);
+    }
+
+    private void banner(ShellContext ctx, String historyNote) {
+        PrintWriter out = ctx.out;
+        Paint paint = ctx.paint;
+        out.println(paint.bold(new RootCommand.Version().getVersion()[0])
+                + ": op-amp choice by the full output error budget of your stage.");
+        out.println(catalogLine());
+        out.println(paint.dim(Caution.TEXT));
+        if (historyNote != null) {
+            out.println(paint.dim(historyNote));
+        }
+        out.println("Type " + paint.bold("ask") + " to describe your stage, " + paint.bold("help") + " for the commands, "
+                + "Tab to complete, Ctrl-D to leave.");
+    }
+
+    private String catalogLine() {
+        try {
+            Catalog c = root.catalog();
+            long errors = c.problems().stream().filter(Problem::isError).count();
+            return "Catalog " + c.root() + ": " + c.parts().size() + " part(s)"
+                    + (c.problems().isEmpty() ? "." : "; " + c.problems().size() + " problem(s), " + errors
+                    + " error(s): 'check' lists them.");
+        } catch (InputException e) {
+            return "Catalog " + root.catalogDir() + ": " + e.problems().size() + " problem(s); 'check' lists them.";
+        } catch (RuntimeException e) {
+            return "Catalog " + root.catalogDir() + ": not loaded (" + e.getMessage() + ").";
+        }
+    }
+
+    /** Makes the history folder; returns a note when history cannot be kept, else null. */
+    private static String prepareHistory(Path file) {
+        try {
+            Files.createDirectories(file.getParent());
+            if (Files.exists(file) ? !Files.isWritable(file) : !Files.isWritable(file.getParent())) {
+                return "History is not kept: " + file + " is not writable.";
+            }
+            return null;
+        } catch (IOException | SecurityException e) {
+            return "History is not kept: cannot make " + file.getParent() + " (" + e.getMessage() + ").";
+        }
+    }
+}

@@ -1,0 +1,432 @@
+package dev.ampsieve.shell;
+
+import dev.ampsieve.cli.ExitCode;
+import dev.ampsieve.cli.UserException;
+import dev.ampsieve.stage.Stage;
+import dev.ampsieve.stage.StageKeys;
+import dev.ampsieve.stage.StageLoader;
+import dev.ampsieve.stage.StageWriter;
+import dev.ampsieve.units.Dimension;
+import dev.ampsieve.units.Units;
+import dev.ampsieve.yaml.InputException;
+import dev.ampsieve.yaml.Node;
+import dev.ampsieve.yaml.Problem;
+import dev.ampsieve.yaml.YamlFiles;
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.jline.reader.EndOfFileException;
+import org.jline.reader.UserInterruptException;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/**
+ * The shell's own verbs: describing, changing, showing, saving and loading the current stage,
+ * help and quit. They join the command tree only inside the shell (on the command line a stage
+ * is a file), so {@code help} lists them beside the shared commands and completion knows them.
+ */
+final class ShellCommands {
+    private ShellCommands() {
+    }
+
+    /** Names of the shell's own verbs, for grouping in help. */
+    static final List<String> NAMES = List.of("ask", "set", "unset", "show", "save", "load", "help", "quit");
+
+    static List<Object> all(ShellContext ctx) {
+        return List.of(new Ask(ctx), new SetKey(ctx), new UnsetKey(ctx), new Show(ctx), new Save(ctx), new Load(ctx),
+                new Help(ctx), new Quit(ctx));
+    }
+
+    /** The base: the context and where to print. */
+    abstract static class Base implements Callable<Integer> {
+        final ShellContext ctx;
+
+        @Spec
+        CommandSpec spec;
+
+        Base(ShellContext ctx) {
+            this.ctx = ctx;
+        }
+
+        PrintWriter out() {
+            return spec.commandLine().getOut();
+        }
+
+        Paint paint() {
+            return ctx.paint;
+        }
+    }
+
+    @Command(name = "ask", description = "Describe the stage by answering questions, one value at a time.")
+    static final class Ask extends Base {
+        @Option(names = "--fresh", description = "Start from the defaults instead of the current stage.")
+        boolean fresh;
+
+        Ask(ShellContext ctx) {
+            super(ctx);
+        }
+
+        @Override
+        public Integer call() {
+            if (ctx.reader == null) {
+                throw new UserException("questions need a terminal; use 'set KEY VALUE' or a stage file", ExitCode.USAGE);
+            }
+            Map<String, String> start = fresh ? Map.of() : ctx.state.answers();
+            Map<String, String> answers;
+            try {
+                answers = new GuidedEntry(ctx).run(start);
+            } catch (GuidedEntry.Cancelled e) {
+                out().println();
+                out().println(ctx.state.hasStage() ? "Cancelled; the current stage is as it was." : "Cancelled; no stage yet.");
+                return ExitCode.OK;
+            }
+            if (ctx.state.hasStage() && !fresh) {
+                ctx.state.update(answers);
+            } else {
+                ctx.state.replace(answers, null, false);
+            }
+            out().println();
+            int code = Show.print(ctx, out(), false);
+            out().println();
+            out().println("Next: " + paint().bold("rank") + " lists the parts that fit, " + paint().bold("save FILE")
+                    + " keeps this stage, " + paint().bold("set KEY VALUE") + " changes one value.");
+            List<String> more = Questions.setOnly();
+            out().println(paint().dim("Not asked (set them if needed): " + String.join(", ", more) + "."));
+            return code;
+        }
+    }
+
+    @Command(name = "set", description = {"Change one stage value, checked with its unit.", "Examples: set limit 10 uV input; set temperature -40..85 C; set rf 100k."})
+    static final class SetKey extends Base {
+        @Parameters(index = "0", paramLabel = "KEY", description = "A stage key (Tab lists them), or 'temperature' for both ends.")
+        String key;
+
+        @Parameters(index = "1..*", arity = "1..*", paramLabel = "VALUE", description = "The value with its unit.")
+        List<String> value;
+
+        SetKey(ShellContext ctx) {
+            super(ctx);
+        }
+
+        @Override
+        public Integer call() {
+            String id;
+            Answers.Change change;
+            try {
+                id = Answers.id(key);
+                change = Answers.interpret(id, String.join(" ", value), ctx.state.answers());
+            } catch (AnswerException e) {
+                throw new UserException(key + ": " + e.line(), ExitCode.USAGE);
+            }
+            Map<String, String> next = change.applyTo(ctx.state.answers());
+            List<Problem> problems = StageCheck.problemsFor(next, change.paths());
+            if (!problems.isEmpty()) {
+                throw new UserException(id + ": " + StageCheck.brief(problems.get(0)) + " (" + Questions.why(id) + ")",
+                        ExitCode.FINDINGS);
+            }
+            boolean had = ctx.state.hasStage();
+            if (had) {
+                ctx.state.update(next);
+            } else {
+                ctx.state.replace(next, null, false);
+            }
+            out().println(id + " = " + Questions.current(id, next) + (change.note() != null ? "  (" + change.note() + ")" : ""));
+            List<Problem> rest = StageCheck.problems(next).stream().filter(Problem::isError).toList();
+            if (!rest.isEmpty()) {
+                out().println(paint().dim("The stage is not complete yet: " + StageCheck.brief(rest.get(0))));
+            }
+            return ExitCode.OK;
+        }
+    }
+
+    @Command(name = "unset", description = "Return stage values to their defaults.")
+    static final class UnsetKey extends Base {
+        @Parameters(arity = "1..*", paramLabel = "KEY", description = "Stage keys.")
+        List<String> keys;
+
+        UnsetKey(ShellContext ctx) {
+            super(ctx);
+        }
+
+        @Override
+        public Integer call() {
+            Map<String, String> next = new LinkedHashMap<>(ctx.state.answers());
+            for (String k : keys) {
+                String id;
+                try {
+                    id = Answers.id(k);
+                } catch (AnswerException e) {
+                    throw new UserException(k + ": " + e.line(), ExitCode.USAGE);
+                }
+                if (id.equals(Answers.TEMPERATURE)) {
+                    next.keySet().removeIf(p -> p.startsWith("temperature."));
+                } else if (id.equals(Answers.LIMIT)) {
+                    next.keySet().removeIf(p -> p.equals("limit") || p.startsWith("limit."));
+                } else {
+                    next.remove(id);
+                }
+            }
+            ctx.state.update(next);
+            out().println("Back to the default: " + String.join(", ", keys));
+            return ExitCode.OK;
+        }
+    }
+
+    @Command(name = "show", description = "Show the current stage, its noise gain and its limit at the output.")
+    static final class Show extends Base {
+        @Option(names = "--all", description = "Also list every key left at its default.")
+        boolean all;
+
+        Show(ShellContext ctx) {
+            super(ctx);
+        }
+
+        @Override
+        public Integer call() {
+            if (!ctx.state.hasStage() && !all) {
+                out().println("No current stage yet: type 'ask' to describe one, or 'load FILE'.");
+                return ExitCode.OK;
+            }
+            return print(ctx, out(), all);
+        }
+
+        /** The answers, then the derived values (or the problems that prevent them). */
+        static int print(ShellContext ctx, PrintWriter out, boolean all) {
+            Paint paint = ctx.paint;
+            Map<String, String> a = ctx.state.answers();
+            Path file = ctx.state.file();
+            out.println(paint.bold("Stage") + " " + (file == null ? "(typed in" : "(" + file)
+                    + (ctx.state.unsaved() ? ", not saved)" : ")"));
+            int w = 26;
+            for (String id : displayIds()) {
+                String v = Questions.current(id, a);
+                if (v != null) {
+                    out.println("  " + pad(id, w) + v);
+                } else if (all) {
+                    out.println(paint.dim("  " + pad(id, w) + "default: " + Questions.defaultText(id)));
+                }
+            }
+            Stage s;
+            try {
+                s = StageCheck.stage(a);
+            } catch (InputException e) {
+                out.println(paint.red("Not a complete stage yet:"));
+                for (Problem p : e.problems()) {
+                    out.println("  " + (p.field().isEmpty() ? "" : p.field() + ": ") + StageCheck.brief(p));
+                }
+                return ExitCode.FINDINGS;
+            }
+            out.println(paint.bold("Derived"));
+            out.println("  " + pad("noise gain", w) + Units.format(s.noiseGain(), Dimension.NUMBER, 4)
+                    + "   (input errors reach the output multiplied by this)");
+            out.println("  " + pad("signal gain", w) + Units.format(s.signalGain(), Dimension.NUMBER, 4));
+            if (Double.isFinite(s.rg())) {
+                out.println("  " + pad("rf, rg", w) + Units.format(s.rf(), Dimension.RESISTANCE) + ", "
+                        + Units.format(s.rg(), Dimension.RESISTANCE));
+            }
+            double limit = s.limitVolts();
+            out.println("  " + pad("limit at the output", w) + Units.format(limit, Dimension.VOLTAGE)
+                    + "   (" + s.criterion() + ")");
+            out.println("  " + pad("limit at the input", w) + Units.format(limit / s.noiseGain(), Dimension.VOLTAGE));
+            out.println("  " + pad("farthest from 25 °C", w) + Units.format(s.deltaT(), Dimension.NUMBER) + " °C");
+            if (!all) {
+                out.println(paint.dim("Other keys keep their defaults: 'show --all' lists them, 'set KEY VALUE' changes one."));
+            }
+            return ExitCode.OK;
+        }
+
+        /** Every key once, the temperature range and the limit as one each. */
+        static List<String> displayIds() {
+            List<String> out = new ArrayList<>();
+            for (String id : Answers.ids()) {
+                if (id.startsWith("temperature.") || id.startsWith("limit.")) {
+                    continue;
+                }
+                out.add(id);
+            }
+            return out;
+        }
+
+        private static String pad(String s, int w) {
+            return s.length() >= w ? s + " " : s + " ".repeat(w - s.length());
+        }
+    }
+
+    @Command(name = "save", description = "Save the current stage as a commented stage file.")
+    static final class Save extends Base {
+        @Parameters(paramLabel = "FILE", description = "Where to write, e.g. bridge.yaml.")
+        Path file;
+
+        @Option(names = "--force", description = "Replace the file if it exists, without asking.")
+        boolean force;
+
+        Save(ShellContext ctx) {
+            super(ctx);
+        }
+
+        @Override
+        public Integer call() throws InputException {
+            if (!ctx.state.hasStage()) {
+                throw new UserException("no current stage to save; type 'ask' to describe one");
+            }
+            boolean overwrite = force;
+            if (Files.exists(file) && !force) {
+                if (!confirm(file + " exists. Replace it? [y/N] ")) {
+                    out().println("Left " + file + " as it was.");
+                    return ExitCode.OK;
+                }
+                overwrite = true;
+            }
+            StageWriter.save(StageWriter.toYaml(ctx.state.answers()), file, overwrite);
+            ctx.state.savedAs(file);
+            out().println("Saved " + file + ".");
+            return ExitCode.OK;
+        }
+
+        private boolean confirm(String question) {
+            if (ctx.reader == null) {
+                throw new UserException(file + " exists; add --force to replace it", ExitCode.USAGE);
+            }
+            try {
+                String a = ctx.reader.readLine(question).strip().toLowerCase(Locale.ROOT);
+                return a.equals("y") || a.equals("yes");
+            } catch (UserInterruptException | EndOfFileException e) {
+                return false;
+            }
+        }
+    }
+
+    @Command(name = "load", description = "Make a stage file the current stage.")
+    static final class Load extends Base {
+        @Parameters(paramLabel = "FILE", description = "A stage file.")
+        Path file;
+
+        Load(ShellContext ctx) {
+            super(ctx);
+        }
+
+        @Override
+        public Integer call() throws InputException {
+            StageLoader.load(file); // all checks, with file:line:col
+            ctx.state.replace(answers(YamlFiles.read(file)), file, true);
+            Map<String, String> a = ctx.state.answers();
+            out().println("Loaded " + file + ": gain " + Questions.current("gain", a) + ", "
+                    + Questions.current(Answers.LIMIT, a) + " limit. 'show' lists it.");
+            return ExitCode.OK;
+        }
+
+        /** The file's values as typed, by key path (the loader has already checked them). */
+        static Map<String, String> answers(Node root) {
+            Map<String, String> found = new LinkedHashMap<>();
+            if (root instanceof Node.Mapping m) {
+                m.entries().forEach((k, v) -> {
+                    if (v instanceof Node.Scalar s && s.text() != null) {
+                        found.put(k, s.text());
+                    } else if (v instanceof Node.Mapping inner) {
+                        inner.entries().forEach((k2, v2) -> {
+                            if (v2 instanceof Node.Scalar s2 && s2.text() != null) {
+                                found.put(k + "." + k2, s2.text());
+                            }
+                        });
+                    }
+                });
+            }
+            Map<String, String> ordered = new LinkedHashMap<>();
+            for (String p : StageKeys.paths()) {
+                if (found.containsKey(p)) {
+                    ordered.put(p, found.get(p));
+                }
+            }
+            return ordered;
+        }
+    }
+
+    @Command(name = "help", description = "List the commands, or show one command's options (help COMMAND).")
+    static final class Help extends Base {
+        @Parameters(arity = "0..1", paramLabel = "COMMAND", description = "A command name.")
+        String command;
+
+        Help(ShellContext ctx) {
+            super(ctx);
+        }
+
+        @Override
+        public Integer call() {
+            CommandLine tree = spec.commandLine().getParent();
+            PrintWriter out = out();
+            if (command != null) {
+                CommandLine sub = tree.getSubcommands().get(command);
+                if (sub == null) {
+                    throw new UserException("no command '" + command + "'; 'help' lists them", ExitCode.USAGE);
+                }
+                sub.usage(out);
+                return ExitCode.OK;
+            }
+            List<String> shared = new ArrayList<>();
+            for (Map.Entry<String, CommandLine> e : tree.getSubcommands().entrySet()) {
+                String name = e.getKey();
+                if (!NAMES.contains(name) && e.getValue().getCommandName().equals(name)) {
+                    shared.add(name);
+                }
+            }
+            out.println(paint().bold("The stage"));
+            for (String n : List.of("ask", "set", "unset", "show", "save", "load")) {
+                line(out, tree, n);
+            }
+            out.println(paint().bold("Parts"));
+            for (String n : shared) {
+                line(out, tree, n);
+            }
+            out.println(paint().bold("The shell"));
+            for (String n : List.of("help", "quit")) {
+                line(out, tree, n);
+            }
+            out.println();
+            out.println("Commands that take --stage FILE use the current stage when it is left out.");
+            out.println("Tab completes commands, options, part ids, stage keys and units. Ctrl-C drops the line, Ctrl-D leaves.");
+            return ExitCode.OK;
+        }
+
+        private void line(PrintWriter out, CommandLine tree, String name) {
+            CommandLine c = tree.getSubcommands().get(name);
+            if (c == null) {
+                return;
+            }
+            String[] d = c.getCommandSpec().usageMessage().description();
+            String text = d.length == 0 ? "" : d[0];
+            int room = Math.max(20, ctx.style.width() - 12);
+            if (text.length() > room) {
+                text = text.substring(0, room - 3) + "...";
+            }
+            out.println("  " + String.format(Locale.ROOT, "%-10s", name) + text);
+        }
+    }
+
+    @Command(name = "quit", aliases = "exit", description = "Leave the shell (Ctrl-D does the same).")
+    static final class Quit extends Base {
+        Quit(ShellContext ctx) {
+            super(ctx);
+        }
+
+        @Override
+        public Integer call() {
+            if (ctx.state.unsaved() && !ctx.warnedUnsaved) {
+                ctx.warnedUnsaved = true;
+                out().println("The current stage is not saved: 'save FILE' keeps it; 'quit' again leaves without saving.");
+                return ExitCode.OK;
+            }
+            ctx.quit = true;
+            return ExitCode.OK;
+        }
+    }
+}

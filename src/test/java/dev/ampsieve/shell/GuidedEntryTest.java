@@ -1,0 +1,120 @@
+package dev.ampsieve.shell;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.ampsieve.stage.Limit;
+import dev.ampsieve.stage.Stage;
+import dev.ampsieve.stage.StageLoader;
+import dev.ampsieve.stage.Topology;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** Scripted sessions through JLine's dumb terminal: answers in, printed text and the resulting stage out. */
+class GuidedEntryTest {
+
+    @TempDir
+    Path dir;
+
+    @Test
+    void threeAnswersThenDoneMakeTheCurrentStage() throws Exception {
+        Path file = dir.resolve("bridge.yaml");
+        String printed = Sessions.run("ask", "100", "-40..85 C", "1 mV", "done", "save " + file);
+
+        assertTrue(printed.contains("[1/21] gain"), printed);
+        assertTrue(printed.contains("gain [required] >"), printed);
+        assertTrue(printed.contains("temperature [0 C..70 C] >"), printed);
+        // the derived values: non-inverting gain 100 is noise gain 1 + rf/rg = 100 (Stage.noiseGain)
+        assertTrue(printed.matches("(?s).*noise gain\\s+100\\s.*"), printed);
+        assertTrue(printed.matches("(?s).*limit at the output\\s+1\\.00 mV.*"), printed);
+        assertTrue(printed.matches("(?s).*limit at the input\\s+10\\.0 µV.*"), printed);
+        assertTrue(printed.contains("Saved " + file), printed);
+
+        Stage s = StageLoader.load(file);
+        assertEquals(Topology.NON_INVERTING, s.topology());
+        assertEquals(100.0, s.noiseGain(), 1e-12);
+        assertEquals(-40.0, s.tMin());
+        assertEquals(85.0, s.tMax());
+        assertEquals(Limit.Kind.OUTPUT, s.limit().kind());
+        assertEquals(1e-3, s.limitVolts(), 1e-15);
+    }
+
+    @Test
+    void aBadAnswerIsAskedAgainWithTheReason() throws Exception {
+        Path file = dir.resolve("s.yaml");
+        String printed = Sessions.run("ask", "abc", "40 dB", "85..-40", "-40 to 125", "2 V/us", "10 uV input", "done",
+                "save " + file);
+
+        assertTrue(printed.contains("not usable: 'abc' is not a gain; write a plain number such as '100', or decibels"), printed);
+        assertTrue(printed.contains("(gain: every input error reaches the output multiplied by the noise gain"), printed);
+        assertTrue(printed.contains("not usable: min 85 °C is above max -40 °C; swap the two values"), printed);
+        assertTrue(printed.contains("not usable: '2 V/us' is a slew rate but a voltage belongs here"), printed);
+
+        Stage s = StageLoader.load(file);
+        assertEquals(100.0, s.noiseGain(), 1e-9); // 40 dB = 100 in voltage
+        assertEquals(125.0, s.tMax());
+        assertEquals(Limit.Kind.INPUT, s.limit().kind());
+        assertEquals(10e-6 * 100, s.limitVolts(), 1e-15); // an input-referred limit times the noise gain
+    }
+
+    @Test
+    void questionMarkExplainsAndEnterKeepsTheDefault() throws Exception {
+        Path file = dir.resolve("s.yaml");
+        String printed = Sessions.run("ask", "10", "?", "", "0.1 %", "2.5 V", "", "1 kohm", "done", "save " + file);
+
+        assertTrue(printed.contains("for example: -40..85 C"), printed);
+        assertTrue(printed.contains("default: 0 C..70 C"), printed);
+        // a share of full scale needs the full-scale output: asked right away
+        assertTrue(printed.contains("full-scale-output [none] >"), printed);
+
+        Stage s = StageLoader.load(file);
+        assertEquals(0.0, s.tMin());
+        assertEquals(70.0, s.tMax());
+        assertEquals(2.5e-3, s.limitVolts(), 1e-15); // 0.1 % of 2.5 V
+        assertEquals(Topology.NON_INVERTING, s.topology()); // Enter kept it
+        assertEquals(1e3, s.rf()); // the answer after topology
+        assertEquals(1e3 / 9, s.rg(), 1e-9);
+    }
+
+    @Test
+    void ctrlCCancelsTheQuestionsNotTheShell() {
+        String printed = Sessions.run("ask", "100", "-40..85 C\u0003", "show", "help");
+        assertTrue(printed.contains("Cancelled; no stage yet."), printed);
+        assertTrue(printed.contains("No current stage yet"), printed);
+        assertTrue(printed.contains("The shell"), printed); // help still ran afterwards
+    }
+
+    @Test
+    void askingAgainStartsFromTheCurrentAnswersAndCancelKeepsThem() throws Exception {
+        Path file = dir.resolve("s.yaml");
+        String printed = Sessions.run("set gain 20", "set limit 5 mV", "ask", "", "", "\u0003", "ask", "", "", "", "inv",
+                "done", "save " + file);
+        assertTrue(printed.contains("gain [20] >"), printed);
+        assertTrue(printed.contains("limit [5 mV] >"), printed);
+        assertTrue(printed.contains("Cancelled; the current stage is as it was."), printed);
+
+        Stage s = StageLoader.load(file);
+        assertEquals(Topology.INVERTING, s.topology()); // "inv" is the one choice it starts
+        assertEquals(-20.0, s.signalGain(), 1e-12);
+        assertEquals(5e-3, s.limitVolts(), 1e-15);
+    }
+
+    @Test
+    void gainOneBecomesAFollower() throws Exception {
+        Path file = dir.resolve("s.yaml");
+        String printed = Sessions.run("ask", "1", "", "1 mV", "done", "save " + file);
+        assertTrue(printed.contains("gain 1: taken as a follower"), printed);
+        assertEquals(Topology.FOLLOWER, StageLoader.load(file).topology());
+    }
+
+    @Test
+    void doneBeforeTheLimitIsRefused() {
+        String printed = Sessions.run("ask", "100", "done", "", "1 mV", "done", "show");
+        assertTrue(printed.contains("limit is needed before the rest can take defaults"), printed);
+        assertTrue(printed.matches("(?s).*limit at the output\\s+1\\.00 mV.*"), printed);
+        assertFalse(printed.contains("Cancelled"), printed);
+    }
+}

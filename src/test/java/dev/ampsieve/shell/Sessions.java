@@ -1,0 +1,88 @@
+package dev.ampsieve.shell;
+
+import static java.nio.charset.StandardCharsets.UTF_8;
+
+import dev.ampsieve.cli.RootCommand;
+import java.io.ByteArrayInputStream;
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.InterruptedIOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import org.jline.terminal.Attributes;
+import org.jline.terminal.Terminal;
+import org.jline.terminal.impl.DumbTerminal;
+
+/** Runs a scripted shell session on JLine's dumb terminal, in-process, and returns what it printed. */
+final class Sessions {
+    private Sessions() {
+    }
+
+    /** Lines typed, each ended by Enter; the session ends at the end of the input (as Ctrl-D). */
+    static String run(List<String> rootArgs, Path history, Map<String, String> env, String... lines) {
+        StringBuilder typed = new StringBuilder();
+        for (String l : lines) {
+            typed.append(l);
+            if (!l.endsWith("\u0003")) {
+                typed.append('\n'); // Ctrl-C needs no Enter
+            }
+        }
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        try (Terminal t = new DumbTerminal("test", "dumb", new Typed(typed.toString().getBytes(UTF_8)), out, UTF_8)) {
+            // as a tty's line discipline does: Ctrl-C raises SIGINT (the dumb terminal has this off by default).
+            // The other signal characters get their usual keys too: left unset (-1) they would match end of input.
+            Attributes tty = t.getAttributes();
+            tty.setLocalFlag(Attributes.LocalFlag.ISIG, true);
+            tty.setControlChar(Attributes.ControlChar.VINTR, 3);
+            tty.setControlChar(Attributes.ControlChar.VQUIT, 28);
+            tty.setControlChar(Attributes.ControlChar.VSUSP, 26);
+            tty.setControlChar(Attributes.ControlChar.VSTATUS, 20);
+            t.setAttributes(tty);
+            new Shell(new RootCommand(), rootArgs, t, history, env).run();
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return out.toString(UTF_8);
+    }
+
+    /**
+     * Keys as a terminal delivers them. Like a read from a tty that a signal interrupts, a read
+     * on an interrupted thread fails with InterruptedIOException: the dumb terminal turns Ctrl-C
+     * into SIGINT, the line reader's handler interrupts its thread, and the next read reports it.
+     */
+    static final class Typed extends InputStream {
+        private final ByteArrayInputStream keys;
+
+        Typed(byte[] bytes) {
+            keys = new ByteArrayInputStream(bytes);
+        }
+
+        @Override
+        public int read() throws IOException {
+            if (Thread.interrupted()) {
+                throw new InterruptedIOException("Ctrl-C");
+            }
+            return keys.read();
+        }
+
+        @Override
+        public int read(byte[] b, int off, int len) throws IOException {
+            if (len == 0) {
+                return 0;
+            }
+            int c = read();
+            if (c < 0) {
+                return -1;
+            }
+            b[off] = (byte) c;
+            return 1;
+        }
+    }
+
+    static String run(String... lines) {
+        return run(List.of(), null, Map.of(), lines);
+    }
+}
