@@ -1,0 +1,27 @@
+package dev.ampsieve.advice;
+
+import dev.ampsieve.budget.Budget;
+import dev.ampsieve.budget.ConstraintResult;
+import dev.ampsieve.catalog.Part;
+import java.util.stream.Collectors;
+
+/** A part that fails a hard constraint (supply, temperature grade, swing, slew, price ceiling). */
+public record Rejected(Part part, Budget budget, String reason) {
+
+    public String id() {
+        return part.id();
+    }
+
+    static Rejected of(Budget b) {
+        String reason = b.constraints().stream()
+                .filter(c -> !c.ok())
+                .map(c -> c.name() + ": " + c.detail())
+                .collect(Collectors.joining("; "));
+        return new Rejected(b.part(), b, reason);
+    }
+
+    /** Names of the failed constraints. */
+    public java.util.List<String> failed() {
+        return budget.constraints().stream().filter(c -> !c.ok()).map(ConstraintResult::name).toList();
+    }
+}
