@@ -215,7 +215,7 @@ public final class Advisor {
                     + band + " band edge and with any ADC sample rate.");
         } else {
             double ratio = fchop / stage.bandHigh();
-            String times = String.format(Locale.ROOT, "%.3g", ratio) + " times";
+            String times = Phrases.number(ratio) + " times";
             if (ratio < CHOP_CLEARANCE) {
                 out.add("chopping at " + Units.format(fchop, Dimension.FREQUENCY) + " is only " + times + " the "
                         + band + " band edge: ripple and intermodulation land near the band; check the datasheet's"

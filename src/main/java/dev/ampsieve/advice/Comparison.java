@@ -122,7 +122,7 @@ public record Comparison(Candidate a, Candidate b, List<TermDelta> terms, String
             return Rejected.of(c.budget()).reason();
         }
         TermResult t = c.budget().limitingTerm() == null ? null : c.budget().term(c.budget().limitingTerm());
-        return Phrases.totalName(c.budget().stage().criterion()) + " " + volts(c.errorV()) + " against "
-                + volts(c.limitV()) + (t == null ? "" : ", limited by " + t.label());
+        return Phrases.totalName(c.budget().stage().criterion()) + (c.trimmed() ? " after the trim " : " ")
+                + volts(c.errorV()) + " against " + volts(c.limitV()) + (t == null ? "" : ", limited by " + t.label());
     }
 }
