@@ -57,9 +57,11 @@ import dev.ampsieve.yaml.Problem;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import java.util.regex.Pattern;
 
 /**
@@ -129,6 +131,8 @@ final class PartReader {
     /** Quantities read so far, by key path (vos.max), and where each was written. */
     private final Map<String, Double> values = new HashMap<>();
     private final Map<String, Located> at = new HashMap<>();
+    /** Key paths written in the file, valid or not: an absence warning is only for keys really absent. */
+    private final Set<String> written = new HashSet<>();
 
     private PartReader(String prefix, Node.Mapping part) {
         this.prefix = prefix;
@@ -262,6 +266,9 @@ final class PartReader {
     private Double quantity(Node.Mapping m, String section, String key) {
         String keyPath = section == null ? key : path(section, key);
         Dimension d = CatalogKeys.dimension(keyPath);
+        if (m.entries().containsKey(key)) {
+            written.add(keyPath);
+        }
         Double v = f.quantity(m, section == null ? prefix : join(prefix, section), key, d);
         if (v != null) {
             values.put(keyPath, v);
@@ -432,7 +439,7 @@ final class PartReader {
 
     /** Absences the user should hear about now, because the budget will assume something. */
     private void warnAbsences(String arch, String input) {
-        if (values.get(path(NOISE, EN)) == null) {
+        if (!written.contains(path(NOISE, EN))) {
             problems.add(Problem.warning(part.at(), join(prefix, path(NOISE, EN)),
                     "not given: the voltage-noise term will be zero",
                     "add 'noise: {en: 12 nV/rtHz}' with the datasheet's white-noise density"));
@@ -440,13 +447,13 @@ final class PartReader {
         if (arch == null || input == null) {
             return;
         }
-        boolean noDrift = values.get(path(VOS_DRIFT, TYP)) == null && values.get(path(VOS_DRIFT, MAX)) == null;
+        boolean noDrift = !written.contains(path(VOS_DRIFT, TYP)) && !written.contains(path(VOS_DRIFT, MAX));
         boolean standardBipolar = arch.equals(Architecture.STANDARD.key()) && input.equals(InputType.BIPOLAR.key());
         if (noDrift && standardBipolar) {
             problems.add(Problem.warning(part.at(), join(prefix, VOS_DRIFT),
                     "not given: drift will be estimated from vos (VOS/T rule, about 3.3 µV/°C per mV) and marked as estimated",
                     "add 'vos-drift: {typ: ..., max: ...}' when the datasheet gives it"));
-        } else if (noDrift && values.get(path(VOS, MAX_OVER_TEMP)) == null) {
+        } else if (noDrift && !written.contains(path(VOS, MAX_OVER_TEMP))) {
             problems.add(Problem.warning(part.at(), join(prefix, VOS_DRIFT),
                     "not given, nor vos.max-over-temp: nothing bounds the offset change over temperature"
                             + " (the VOS/T estimate holds for standard bipolar inputs only)",
