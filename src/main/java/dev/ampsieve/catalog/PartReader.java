@@ -200,7 +200,9 @@ final class PartReader {
         checkSigns();
         checkOrder();
         checkPlausible();
-        warnAbsences(arch, input);
+        if (!f.hasErrors()) {
+            warnAbsences(arch, input); // secondary: not worth a line while the part cannot load anyway
+        }
 
         if (f.hasErrors()) {
             return new Result(prefix, id, idAt, null, problems);
@@ -256,7 +258,8 @@ final class PartReader {
         }
         String first = sub.contains(MAX) ? MAX : sub.get(0);
         Dimension d = CatalogKeys.dimension(path(key, first));
-        String example = d == null ? "..." : d.example();
+        // "vos: 2 mV" most likely meant the maximum: show the user's own value in place
+        String example = v instanceof Node.Scalar s ? s.text() : d == null ? "..." : d.example();
         f.error(v.at(), join(prefix, key), "expected its keys (" + String.join(", ", sub) + ") below it, found " + v.kind(),
                 "write '" + key + ": {" + first + ": " + example + "}'");
         return null;

@@ -414,6 +414,12 @@ class CatalogLoaderTest {
     }
 
     @Test
+    void absenceWarningsWaitUntilThePartHasNoErrors() throws Exception {
+        Catalog c = loadPart(with(without(without(BASE, "noise"), "vos-drift"), "gbw: 1 MHz", "gbw: 1 mV"));
+        assertEquals(List.of("gbw"), c.problems().stream().map(Problem::field).toList());
+    }
+
+    @Test
     void aPartWithoutNoiseDataIsWarnedThatTheNoiseTermWillBeZero() throws Exception {
         Catalog c = loadPart(without(BASE, "noise"));
         Problem p = about(c.problems(), "noise.en");
@@ -430,7 +436,7 @@ class CatalogLoaderTest {
         Problem p = about(loadPart(text).problems(), "vos");
         assertAt(p, part(), lineOf(text, "vos: 2 mV"), 6);
         assertEquals("expected its keys (typ, max, max-over-temp) below it, found a single value", p.message());
-        assertEquals("write 'vos: {max: 2.5 uV}'", p.fix());
+        assertEquals("write 'vos: {max: 2 mV}'", p.fix());
     }
 
     @ParameterizedTest
@@ -505,11 +511,13 @@ class CatalogLoaderTest {
 
     @Test
     void problemsInAFileComeTopToBottom() throws Exception {
-        String text = with(with(BASE, "gbw: 1 MHz", "gbw: 1 mV"), "typ: 0.5 mV", "typ: 5 mV");
-        Catalog c = loadPart(without(text, "noise"));
+        // found in the order: while reading (gbw), order checks (vos.typ), magnitude checks (cmrr.typ)
+        String text = with(with(with(BASE, "gbw: 1 MHz", "gbw: 1 mV"), "typ: 0.5 mV", "typ: 5 mV"),
+                "typ: 110 dB", "typ: 250 dB");
+        Catalog c = loadPart(text);
+        assertEquals(List.of("vos.typ", "cmrr.typ", "gbw"), c.problems().stream().map(Problem::field).toList());
         List<Integer> lines = c.problems().stream().map(Problem::line).toList();
-        assertEquals(lines.stream().sorted().toList(), lines);
-        assertEquals(3, lines.size());
+        assertEquals(List.of(lineOf(text, "typ: 5 mV"), lineOf(text, "typ: 250 dB"), lineOf(text, "gbw: 1 mV")), lines);
     }
 
     // ------------------------------------------------------------------ bad files, strictness, the folder
