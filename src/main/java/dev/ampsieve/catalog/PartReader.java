@@ -458,8 +458,8 @@ final class PartReader {
                     "add 'vos-drift: {typ: ..., max: ...}' when the datasheet gives it"));
         } else if (noDrift && !written.contains(path(VOS, MAX_OVER_TEMP))) {
             problems.add(Problem.warning(part.at(), join(prefix, VOS_DRIFT),
-                    "not given, nor vos.max-over-temp: nothing bounds the offset change over temperature"
-                            + " (the VOS/T estimate holds for standard bipolar inputs only)",
+                    "not given, nor vos.max-over-temp: drift over temperature will be an assumed default,"
+                            + " not a datasheet figure (the VOS/T estimate holds for standard bipolar inputs only)",
                     "add vos-drift or vos.max-over-temp from the datasheet"));
         }
     }

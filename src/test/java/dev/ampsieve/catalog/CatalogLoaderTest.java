@@ -410,7 +410,7 @@ class CatalogLoaderTest {
         assertEquals(List.of(), loadPart(cmos).problems()); // vos.max-over-temp bounds it
         Problem p = about(loadPart(with(cmos, "  max-over-temp: 3 mV\n", "")).problems(), "vos-drift");
         assertEquals(Problem.Severity.WARNING, p.severity());
-        assertTrue(p.message().startsWith("not given, nor vos.max-over-temp: nothing bounds"), p.message());
+        assertTrue(p.message().startsWith("not given, nor vos.max-over-temp: drift over temperature will be an assumed default"), p.message());
     }
 
     @Test
