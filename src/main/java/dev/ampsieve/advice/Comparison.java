@@ -58,7 +58,8 @@ public record Comparison(Candidate a, Candidate b, List<TermDelta> terms, String
         return new Comparison(a, b, deltas, preferred, conclusion(a, b, preferred));
     }
 
-    static TermDelta delta(String key, String label, double x, double y) {
+    /** One pair of output errors compared (the smaller magnitude is better). */
+    public static TermDelta delta(String key, String label, double x, double y) {
         double hi = Math.max(Math.abs(x), Math.abs(y));
         double lo = Math.min(Math.abs(x), Math.abs(y));
         // equal within one part in 10^6 of the larger: finer than any printed digit

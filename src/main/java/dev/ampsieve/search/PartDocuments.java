@@ -73,6 +73,11 @@ public final class PartDocuments {
         return d;
     }
 
+    /** The value the index holds for {@code field} (a name from {@link Schema}), or null when the catalog lacks it. */
+    public static Double valueOf(String field, Part p) {
+        return value(field, p);
+    }
+
     /**
      * The value indexed under numeric field {@code name}, or null when the catalog lacks it.
      * Offsets, drifts and currents are magnitudes (datasheets give them as ± limits).

@@ -52,19 +52,31 @@ public final class QueryLanguage {
     private QueryLanguage() {
     }
 
-    /** The grammar for --help, in 100 columns. */
-    public static final List<String> HELP = List.of(
-            "Query: words and constraints separated by spaces; every term must hold.",
-            "  word            in id, title, tags, notes, packages, architecture, input; -word excludes",
-            "  field<value     also <=, >, >=, = ; values with units as in the catalog (10uV, 1.5MHz, 110dB)",
-            "  field=lo..hi    both ends included; field=lo.. (at least), field=..hi (at most) need no quotes",
-            "  field:word      input:cmos architecture:zero-drift package:sot-23 tag:x rail:output trim:laser",
-            "vos, drift, ib, ios: the guaranteed maximum when given, else typical (vos.typ, vos.max: one column).",
-            "cmrr, psrr, aol: the guaranteed minimum, else typical. A part lacking a value never matches.",
-            "supply>=5V, supply=5V: rated to run on 5 V; temperature>=125C: rated up to 125 °C or beyond;",
-            "  supply=4.5V..5.5V: rated over the whole interval.",
-            "Numbers: " + String.join(", ", Schema.NUMERIC.stream().map(Schema.Numeric::name).toList()) + ".",
-            "Example: ampsieve find zero-drift 'vos<10uV' 'supply>=5V' sot-23   (quote < and > in a shell)");
+    /**
+     * The grammar for --help, lines of at most 100 columns separated by {@code %n} (a
+     * compile-time constant, so commands can use it in their help footer).
+     */
+    public static final String HELP =
+            "Query: words and constraints separated by spaces; every term must hold.%n"
+            + "  word            in id, title, tags, notes, packages, architecture, input; -word excludes%n"
+            + "  field<value     also <=, >, >=, = ; values with units as in the catalog (10uV, 1.5MHz, 110dB)%n"
+            + "  field=lo..hi    both ends included; field=lo.. (at least), field=..hi (at most) need no quotes%n"
+            + "  field:word      input:cmos architecture:zero-drift package:sot-23 tag:x rail:output trim:laser%n"
+            + "vos, drift, ib, ios: the guaranteed maximum when given, else typical (vos.max, vos.typ: one column).%n"
+            + "cmrr, psrr, aol: the guaranteed minimum, else typical. A part lacking a value never matches.%n"
+            + "supply>=5V or supply=5V: rated to run on 5 V; temperature>=125C: rated up to 125 C or beyond;%n"
+            + "  supply=4.5V..5.5V: rated over the whole interval. Comparisons allow 1 part in 1e9.%n"
+            + "Numbers: vos vos.typ vos.max vos.maxtemp drift drift.typ drift.max ib ib.typ ib.max ib.maxtemp%n"
+            + "  ios ios.typ ios.max cmrr cmrr.min cmrr.typ psrr psrr.min psrr.typ aol aol.min aol.typ gbw slew%n"
+            + "  en en.corner in in.corner supply.min supply.max temperature.min temperature.max price iq%n"
+            + "  channels fchop aging.  Aliases: temp, offset (vos), tc (drift), quiescent (iq), pkg, arch.%n"
+            + "Relevance: a word in the title counts 2, elsewhere 1; equal relevance lists the cheaper part first.%n"
+            + "Example: ampsieve find zero-drift 'vos<10uV' 'supply>=5V' sot-23   (quote < and > in a shell)";
+
+    /** {@link #HELP} as lines. */
+    public static List<String> helpLines() {
+        return List.of(HELP.split("%n"));
+    }
 
     private static final Pattern CONSTRAINT = Pattern.compile("^([A-Za-z][A-Za-z0-9.]*)(<=|>=|<|>|=|:)(.*)$");
 
