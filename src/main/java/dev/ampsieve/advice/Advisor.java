@@ -86,7 +86,7 @@ public final class Advisor {
 
     static TrimAdvice trim(Stage stage, List<Candidate> ranked, List<Candidate> fitting, Candidate asIs) {
         int q = stage.quantity();
-        if (!stage.trim().allowed()) {
+        if (!StageEdit.trim(stage).allowed()) {
             // judged on the after-trim totals the engine computed for every part
             Candidate would = ranked.stream()
                     .filter(c -> c.verdict() == Verdict.NO_FIT && fitsAfterTrim(c.budget()))
@@ -127,9 +127,10 @@ public final class Advisor {
 
     private static java.util.Optional<String> trimLine(Stage stage, TrimAdvice t) {
         int q = stage.quantity();
-        String trimName = stage.trim().method() == Trim.Method.TWO_POINT ? "two-point calibration" : "one-point trim";
-        String cost = stage.trim().cost() > 0 ? money(stage.trim().cost(), t.withTrim() == null ? "" : t.withTrim().currency())
-                : "0 (no trim cost given)";
+        String trimName = StageEdit.trim(stage).method() == Trim.Method.TWO_POINT ? "two-point calibration" : "one-point trim";
+        String cost = StageEdit.trim(stage).cost() > 0
+                ? money(StageEdit.trim(stage).cost(), t.withTrim() == null ? "" : t.withTrim().currency())
+                : "no stated cost (counted as 0)";
         Candidate w = t.withTrim();
         Candidate a = t.asIs();
         return java.util.Optional.ofNullable(switch (t.status()) {
@@ -143,7 +144,7 @@ public final class Advisor {
             case NOT_WARRANTED -> "A " + trimName + " does not pay: " + w.id() + " fits after it at "
                     + money(w.effectiveCost(), w.currency()) + " per unit including the trim, "
                     + money(-t.savingPerUnit(), w.currency()) + " more than " + a.id() + " as it is.";
-            case NOT_NEEDED -> stage.trim().allowed() ? "No part needs the " + trimName + " to fit; leave it out." : null;
+            case NOT_NEEDED -> StageEdit.trim(stage).allowed() ? "No part needs the " + trimName + " to fit; leave it out." : null;
             case WOULD_PAY_IF_ALLOWED -> "The stage allows no trim; a " + trimName + " would let " + w.id() + " fit at "
                     + money(w.effectiveCost(), w.currency()) + " per unit (price "
                     + money(Candidate.price(w.part()), w.currency()) + " plus trim " + cost + ")"
@@ -151,7 +152,7 @@ public final class Advisor {
                     : ", " + money(t.savingPerUnit(), w.currency()) + " less than " + a.id() + " as it is ("
                     + money(t.savingTotal(), w.currency()) + " over " + q + " units)")
                     + "; " + standing(w) + ".";
-            case NO_HELP -> stage.trim().allowed() ? "Not even a trimmed part fits." : null;
+            case NO_HELP -> StageEdit.trim(stage).allowed() ? "Not even a trimmed part fits." : null;
         });
     }
 
@@ -228,6 +229,10 @@ public final class Advisor {
         return out;
     }
 
+    private static String withTrim(Candidate c) {
+        return c.trimmed() ? " with the trim" : "";
+    }
+
     private static void zeroDriftLines(Stage stage, ZeroDriftAdvice z, List<String> lines) {
         int q = stage.quantity();
         Candidate s = z.selfCorrecting();
@@ -235,14 +240,14 @@ public final class Advisor {
         switch (z.status()) {
             case ONLY_OPTION -> lines.add("A zero-drift part is warranted: only " + s.id() + " ("
                     + s.part().architecture().key() + ") fits, at " + money(s.effectiveCost(), s.currency())
-                    + " per unit; " + standing(s) + ".");
+                    + " per unit" + withTrim(s) + "; " + standing(s) + ".");
             case CHEAPER -> lines.add("A zero-drift part is warranted: " + s.id() + " (" + s.part().architecture().key()
-                    + ") fits at " + money(s.effectiveCost(), s.currency()) + ", " + money(z.savingPerUnit(), s.currency())
+                    + ") fits at " + money(s.effectiveCost(), s.currency()) + withTrim(s) + ", " + money(z.savingPerUnit(), s.currency())
                     + " less per unit than the cheapest standard part " + std.id() + " at "
-                    + money(std.effectiveCost(), std.currency()) + " (" + money(z.savingTotal(), s.currency())
+                    + money(std.effectiveCost(), std.currency()) + withTrim(std) + " (" + money(z.savingTotal(), s.currency())
                     + " over " + q + " units).");
             case NOT_WARRANTED -> lines.add("A zero-drift part is not needed: " + std.id() + " (standard) fits at "
-                    + money(std.effectiveCost(), std.currency()) + ", " + money(-z.savingPerUnit(), std.currency())
+                    + money(std.effectiveCost(), std.currency()) + withTrim(std) + ", " + money(-z.savingPerUnit(), std.currency())
                     + " less than the cheapest zero-drift part that fits, " + s.id() + ".");
             case NONE_FITS -> {
             }
@@ -278,6 +283,7 @@ public final class Advisor {
         lowerGain(stage, fits).ifPresent(out::add);
         lowerSource(stage, fits).ifPresent(out::add);
         narrowerTemperature(stage, fits).ifPresent(out::add);
+        betterResistors(stage, fits).ifPresent(out::add);
         trimChange(stage, p, budgets).ifPresent(out::add);
         looserLimit(stage, closest, fits).ifPresent(out::add);
         lowerYieldTarget(stage, closest).ifPresent(out::add);
@@ -363,8 +369,35 @@ public final class Advisor {
         return java.util.Optional.of(new Change(Change.Kind.NARROWER_TEMPERATURE, text, v));
     }
 
+    private static java.util.Optional<Change> betterResistors(Stage stage, Predicate<Stage> fits) {
+        if (stage.ratioTolerance() <= 0 && stage.ratioTempco() <= 0) {
+            return java.util.Optional.empty();
+        }
+        java.util.function.DoublePredicate ok = k -> fits.test(StageEdit.withResistors(stage, k));
+        if (!ok.test(0)) {
+            return java.util.Optional.empty();
+        }
+        // tolerance and tempco scaled together: better resistors improve both
+        double k = Bisection.largest(ok, 0, 1);
+        double tol = Phrases.round3(stage.ratioTolerance() * k);
+        double tc = Phrases.round3(stage.ratioTempco() * k);
+        if (tol > stage.ratioTolerance() * k || tc > stage.ratioTempco() * k) {
+            // rounded up past the boundary: one step better on both
+            tol = tol > 0 ? tol - Phrases.unit3(tol) : 0;
+            tc = tc > 0 ? tc - Phrases.unit3(tc) : 0;
+        }
+        Map<String, Double> v = new LinkedHashMap<>();
+        v.put("ratioTolerance", tol);
+        v.put("ratioTempco", tc);
+        String text = "resistors matched to " + Units.format(tol, Dimension.RATIO) + " with "
+                + Units.format(tc, Dimension.RATIO_DRIFT) + " tracking or better (now "
+                + Units.format(stage.ratioTolerance(), Dimension.RATIO) + ", "
+                + Units.format(stage.ratioTempco(), Dimension.RATIO_DRIFT) + ")";
+        return java.util.Optional.of(new Change(Change.Kind.BETTER_RESISTORS, text, v));
+    }
+
     private static java.util.Optional<Change> trimChange(Stage stage, Part p, BudgetFunction budgets) {
-        Trim t = stage.trim();
+        Trim t = StageEdit.trim(stage);
         Trim tried;
         Change.Kind kind;
         if (!t.allowed()) {
@@ -411,18 +444,27 @@ public final class Advisor {
         Map<String, Double> v = new LinkedHashMap<>();
         v.put("limitV", needed);
         v.put("limitInputV", needed / ng);
-        StringBuilder text = new StringBuilder("a limit of " + volts(needed) + " at the output ("
-                + volts(needed / ng) + " at the input)");
         Limit l = stage.limit();
-        if (l.kind() == Limit.Kind.LSB && l.reference() > 0) {
-            double lsb = l.reference() / Math.pow(2, l.bits());
-            v.put("limitLsb", needed / lsb);
-            text.append(", ").append(String.format(Locale.ROOT, "%.2f", needed / lsb)).append(" LSB");
-        } else if (l.kind() == Limit.Kind.PERCENT_OF_FULL_SCALE && stage.fullScaleOutput() != null) {
-            v.put("limitFraction", needed / stage.fullScaleOutput());
-            text.append(", ").append(Units.format(needed / stage.fullScaleOutput(), Dimension.RATIO)).append(" of full scale");
+        StringBuilder text = new StringBuilder("a limit of ");
+        // said the way the user wrote the limit, with the output figure beside it
+        switch (l.kind()) {
+            case INPUT -> text.append(volts(needed / ng)).append(" at the input (").append(volts(needed))
+                    .append(" at the output) or looser (now ").append(volts(l.value())).append(" at the input)");
+            case LSB -> {
+                double lsb = l.reference() / Math.pow(2, l.bits());
+                v.put("limitLsb", needed / lsb);
+                text.append(String.format(Locale.ROOT, "%.2f", needed / lsb)).append(" LSB (").append(volts(needed))
+                        .append(" at the output) or looser (now ").append(Phrases.number(l.value())).append(" LSB)");
+            }
+            case PERCENT_OF_FULL_SCALE -> {
+                double fs = stage.fullScaleOutput() == null ? Double.NaN : stage.fullScaleOutput();
+                v.put("limitFraction", needed / fs);
+                text.append(Units.format(needed / fs, Dimension.RATIO)).append(" of full scale (").append(volts(needed))
+                        .append(" at the output) or looser (now ").append(Units.format(l.value(), Dimension.RATIO)).append(")");
+            }
+            case OUTPUT -> text.append(volts(needed)).append(" at the output (").append(volts(needed / ng))
+                    .append(" at the input) or looser (now ").append(volts(e)).append(")");
         }
-        text.append(" or looser (now ").append(volts(e)).append(")");
         return java.util.Optional.of(new Change(Change.Kind.LOOSER_LIMIT, text.toString(), v));
     }
 
@@ -449,8 +491,7 @@ public final class Advisor {
             }
             return;
         }
-        TermResult t = n.limitingTerm() == null ? null : c.budget().term(n.limitingTerm());
-        String limit = t == null ? "" : ", limited by " + t.label() + " (" + volts(t.outputV()) + ")";
+        String limit = Phrases.limitedBy(c);
         lines.add("Nothing fits. Closest: " + c.id() + ", " + standing(c) + limit + ".");
         if (n.changes().isEmpty()) {
             lines.add("No single change of gain, source resistance, temperature range, trim or limit makes it fit.");

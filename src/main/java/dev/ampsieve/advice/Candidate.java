@@ -53,7 +53,7 @@ public record Candidate(Part part, Budget budget, boolean trimmed, double effect
             case FITS -> untrimmed(b, untrimmed);
             case FITS_AFTER_TRIM -> trimmed(b, after);
             // a part that fits neither way is shown as it comes closest, trim included when allowed
-            case NO_FIT -> s.trim().allowed() && after < untrimmed ? trimmed(b, after) : untrimmed(b, untrimmed);
+            case NO_FIT -> StageEdit.trim(s).allowed() && after < untrimmed ? trimmed(b, after) : untrimmed(b, untrimmed);
         };
     }
 
@@ -67,7 +67,7 @@ public record Candidate(Part part, Budget budget, boolean trimmed, double effect
     }
 
     private static Candidate trimmed(Budget b, double error) {
-        double cost = price(b.part()) + b.stage().trim().cost();
+        double cost = price(b.part()) + StageEdit.trim(b.stage()).cost();
         return new Candidate(b.part(), b, true, cost, error, margin(b.limitV(), error));
     }
 

@@ -20,6 +20,7 @@ public record Change(Kind kind, String text, Map<String, Double> values) {
         LOWER_GAIN("lower-gain"),
         LOWER_SOURCE_RESISTANCE("lower-source-resistance"),
         NARROWER_TEMPERATURE("narrower-temperature"),
+        BETTER_RESISTORS("better-resistors"),
         ALLOW_TRIM("allow-trim"),
         TWO_POINT_TRIM("two-point-trim"),
         LOOSER_LIMIT("looser-limit"),

@@ -122,8 +122,7 @@ public record Comparison(Candidate a, Candidate b, List<TermDelta> terms, String
         if (!c.constraintsMet()) {
             return Rejected.of(c.budget()).reason();
         }
-        TermResult t = c.budget().limitingTerm() == null ? null : c.budget().term(c.budget().limitingTerm());
         return Phrases.totalName(c.budget().stage().criterion()) + (c.trimmed() ? " after the trim " : " ")
-                + volts(c.errorV()) + " against " + volts(c.limitV()) + (t == null ? "" : ", limited by " + t.label());
+                + volts(c.errorV()) + " against " + volts(c.limitV()) + Phrases.limitedBy(c);
     }
 }

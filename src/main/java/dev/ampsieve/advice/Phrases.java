@@ -40,10 +40,24 @@ final class Phrases {
         String s = totalName(crit) + (c.trimmed() ? " after the trim " : " ") + volts(c.errorV()) + " of "
                 + volts(c.limitV()) + (c.margin() >= 0 ? " (margin " + percent(c.margin()) + ")"
                 : " (" + percent(-c.margin()) + " over)");
-        if (crit.kind() == Criterion.Kind.YIELD && c.budget().yield() != null) {
+        // the budget's yield is for the part as it is; after a trim it does not apply
+        if (crit.kind() == Criterion.Kind.YIELD && c.budget().yield() != null && !c.trimmed()) {
             s = yieldText(c) + ", " + s;
         }
         return s;
+    }
+
+    /**
+     * ", limited by offset drift (1.20 mV)". The limiting term is the untrimmed budget's: for
+     * figures after a trim it is named as the largest term before the trim.
+     */
+    static String limitedBy(Candidate c) {
+        String key = c.budget().limitingTerm();
+        var t = key == null ? null : c.budget().term(key);
+        if (t == null) {
+            return "";
+        }
+        return (c.trimmed() ? ", largest term before the trim " : ", limited by ") + t.label() + " (" + volts(t.outputV()) + ")";
     }
 
     /** "yield 99.7 % (95 % interval from 99.6 %; target 99.0 %)". */

@@ -41,6 +41,20 @@ final class StageEdit {
                 s.acCoupled(), s.where());
     }
 
+    /** The stage's trim, {@link Trim#NONE} when the stage has none. */
+    static Trim trim(Stage s) {
+        return s.trim() == null ? Trim.NONE : s.trim();
+    }
+
+    /** Resistor ratio tolerance and tempco both scaled by {@code k}. */
+    static Stage withResistors(Stage s, double k) {
+        return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
+                s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
+                s.bandLow(), s.bandHigh(), s.fullScaleOutput(), s.ratioTolerance() * k, s.ratioTempco() * k,
+                s.serviceLife(), s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(),
+                s.maxPrice(), s.acCoupled(), s.where());
+    }
+
     static Stage withTrim(Stage s, Trim trim) {
         return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),

@@ -11,6 +11,7 @@ import dev.ampsieve.advice.Rejected;
 import dev.ampsieve.advice.TrimAdvice;
 import dev.ampsieve.advice.ZeroDriftAdvice;
 import dev.ampsieve.budget.TermResult;
+import dev.ampsieve.budget.Verdict;
 import dev.ampsieve.budget.YieldResult;
 import dev.ampsieve.stage.Criterion;
 import java.util.List;
@@ -28,6 +29,10 @@ public final class RankReport {
             case FITS_AFTER_TRIM -> "+trim";
             case NO_FIT -> "no";
         };
+    }
+
+    private static String verdictWord(Candidate c) {
+        return c.verdict() == Verdict.NO_FIT ? "no fit" : verdict(c);
     }
 
     private static String limiting(Candidate c) {
@@ -51,6 +56,10 @@ public final class RankReport {
 
     private static double rss(Candidate c) {
         return c.trimmed() ? c.budget().trimmed().rssV() : c.budget().rssV();
+    }
+
+    private static String errorName(Ranking r) {
+        return r.stage().criterion().kind() == Criterion.Kind.WORST_CASE ? "worst-case" : "RSS";
     }
 
     public static String text(Ranking r, String stageLabel, String query, int top) {
@@ -84,11 +93,18 @@ public final class RankReport {
                     ? "worst-case" : "RSS").append(") / limit.  P: on the Pareto front of error against cost.\n");
         }
         if (!r.pareto().isEmpty()) {
-            o.append('\n').append("Pareto front, cheapest first: ").append(String.join(", ", r.paretoIds())).append('\n');
+            // error against cost: each step up in cost buys a smaller error
+            o.append('\n').append("Pareto front of error against cost (no other part is cheaper and better)\n");
+            TextTable p = new TextTable().left("part").right("cost").right(errorName(r)).left("verdict");
+            for (Candidate c : r.pareto()) {
+                p.row(c.id(), Figures.money(c.effectiveCost()) + (c.currency().isEmpty() ? "" : " " + c.currency()),
+                        Figures.volts(c.errorV()), verdictWord(c) + (c.trimmed() ? " (trim included)" : ""));
+            }
+            p.lines(TextTable.WIDTH).forEach(l -> o.append(l).append('\n'));
         }
         if (!r.rejected().isEmpty()) {
             o.append('\n').append("Rejected (a hard constraint fails)\n");
-            TextTable t = new TextTable().left("part").flex("reason");
+            TextTable t = new TextTable().left("part").flex("reason").wrapFlex();
             for (Rejected x : r.rejected()) {
                 t.row(x.id(), x.reason());
             }

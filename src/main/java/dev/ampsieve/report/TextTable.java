@@ -16,6 +16,15 @@ final class TextTable {
     private record Column(String header, boolean right, boolean flex) {
     }
 
+    /** Long flexible cells continue on further lines (true) or are cut with an ellipsis (false). */
+    private boolean wrap;
+
+    /** Let long cells of the flexible column continue on further lines instead of being cut. */
+    TextTable wrapFlex() {
+        wrap = true;
+        return this;
+    }
+
     private final List<Column> columns = new ArrayList<>();
     private final List<String[]> rows = new ArrayList<>();
 
@@ -70,8 +79,47 @@ final class TextTable {
         List<String> out = new ArrayList<>();
         String[] head = columns.stream().map(Column::header).toArray(String[]::new);
         out.add(format(head, w));
+        int flex = -1;
+        for (int i = 0; i < n; i++) {
+            if (columns.get(i).flex()) {
+                flex = i;
+            }
+        }
         for (String[] r : rows) {
-            out.add(format(r, w));
+            if (!wrap || flex < 0 || len(r[flex]) <= w[flex]) {
+                out.add(format(r, w));
+                continue;
+            }
+            List<String> pieces = wrapText(r[flex], w[flex]);
+            String[] first = r.clone();
+            first[flex] = pieces.get(0);
+            out.add(format(first, w));
+            for (String piece : pieces.subList(1, pieces.size())) {
+                String[] more = new String[n];
+                java.util.Arrays.fill(more, "");
+                more[flex] = piece;
+                out.add(format(more, w));
+            }
+        }
+        return out;
+    }
+
+    /** Splits at spaces into lines of at most {@code width} (a longer word is cut). */
+    static List<String> wrapText(String s, int width) {
+        List<String> out = new ArrayList<>();
+        StringBuilder line = new StringBuilder();
+        for (String word : s.split(" ")) {
+            if (line.length() > 0 && len(line + " " + word) > width) {
+                out.add(line.toString());
+                line.setLength(0);
+            }
+            if (line.length() > 0) {
+                line.append(' ');
+            }
+            line.append(word);
+        }
+        if (line.length() > 0 || out.isEmpty()) {
+            out.add(cut(line.toString(), width));
         }
         return out;
     }
