@@ -103,10 +103,10 @@ public final class RankReport {
             p.lines(TextTable.WIDTH).forEach(l -> o.append(l).append('\n'));
         }
         if (!r.rejected().isEmpty()) {
-            o.append('\n').append("Rejected (a hard constraint fails)\n");
+            o.append('\n').append("Rejected (a hard constraint fails; --json or --csv lists every failure)\n");
             TextTable t = new TextTable().left("part").flex("reason").wrapFlex();
             for (Rejected x : r.rejected()) {
-                t.row(x.id(), x.reason());
+                t.row(x.id(), x.shortReason());
             }
             t.lines(TextTable.WIDTH).forEach(l -> o.append(l).append('\n'));
         }

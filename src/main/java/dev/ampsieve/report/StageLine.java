@@ -4,7 +4,7 @@ import dev.ampsieve.stage.Stage;
 import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.Units;
 
-/** One line naming the stage a result is for: topology, gain, limit, criterion, quantity. */
+/** Two lines naming the stage a result is for: topology, gain, temperatures; limit, criterion, quantity. */
 final class StageLine {
     private StageLine() {
     }
@@ -13,8 +13,8 @@ final class StageLine {
         double e = s.limitVolts();
         return "Stage " + (label == null ? "" : label + ": ") + s.topology().key() + ", noise gain "
                 + Units.format(s.noiseGain(), Dimension.NUMBER, 4) + ", " + Units.format(s.tMin(), Dimension.TEMPERATURE)
-                + " to " + Units.format(s.tMax(), Dimension.TEMPERATURE) + ", limit " + Figures.volts(e)
-                + " at the output (" + Figures.volts(e / s.noiseGain()) + " at the input), " + s.criterion()
-                + ", quantity " + s.quantity();
+                + " to " + Units.format(s.tMax(), Dimension.TEMPERATURE) + "\n"
+                + "Limit " + Figures.volts(e) + " at the output (" + Figures.volts(e / s.noiseGain()) + " at the input), "
+                + s.criterion() + ", quantity " + s.quantity();
     }
 }

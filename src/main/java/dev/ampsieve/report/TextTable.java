@@ -104,11 +104,25 @@ final class TextTable {
         return out;
     }
 
+    /** Words, with a unit kept on the number it follows ("150 mV" never breaks). */
+    private static List<String> glued(String s) {
+        List<String> words = new ArrayList<>();
+        for (String w : s.split(" ")) {
+            int last = words.size() - 1;
+            if (last >= 0 && words.get(last).matches(".*\\d") && w.matches("[\\p{L}°µΩ%/√]{1,7}[;,.)]?")) {
+                words.set(last, words.get(last) + " " + w);
+            } else {
+                words.add(w);
+            }
+        }
+        return words;
+    }
+
     /** Splits at spaces into lines of at most {@code width} (a longer word is cut). */
     static List<String> wrapText(String s, int width) {
         List<String> out = new ArrayList<>();
         StringBuilder line = new StringBuilder();
-        for (String word : s.split(" ")) {
+        for (String word : glued(s)) {
             if (line.length() > 0 && len(line + " " + word) > width) {
                 out.add(line.toString());
                 line.setLength(0);

@@ -30,7 +30,7 @@ class ComparisonTest {
         Comparison c = Comparison.of(ba, bb);
         assertEquals("A", c.preferred());
         assertEquals("A fits (margin 50 %) and B does not (worst-case 1.90 mV against 1.00 mV, limited by initial"
-                + " offset): A.", c.conclusion());
+                + " offset (1.50 mV)): A.", c.conclusion());
         Comparison.TermDelta offset = c.terms().stream().filter(t -> t.key().equals("offset")).findFirst().orElseThrow();
         // 0.2 mV against 1.5 mV: A better by 1.3 mV, 7.5 times
         assertEquals("a", offset.better());
@@ -42,9 +42,9 @@ class ComparisonTest {
     void aPartThatMissesEvenAfterTheTrimIsJudgedAfterIt() {
         Comparison c = Comparison.of(budget(s, a, 0.2e-3, 0.3e-3, 0.31e-3, Verdict.FITS),
                 budget(s, b, 1.5e-3, 0.4e-3, 1.2e-3, Verdict.NO_FIT));
-        assertEquals("A fits (margin 50 %) and B does not (worst-case after the trim 1.20 mV against 1.00 mV, limited by"
-                + " initial offset): A.",
-                c.conclusion());
+        // the limiting term belongs to the untrimmed budget, so it is named as such
+        assertEquals("A fits (margin 50 %) and B does not (worst-case after the trim 1.20 mV against 1.00 mV, largest"
+                + " term before the trim initial offset (1.50 mV)): A.", c.conclusion());
     }
 
     @Test
