@@ -68,6 +68,9 @@ public final class StageWriter {
             String group = g.getKey();
             if (group.equals("limit")) {
                 writeLimit(out, g.getValue(), answers, limitBlock);
+            } else if (group.equals("gain") && !answers.containsKey("gain") && answers.containsKey("rf") && answers.containsKey("rg")) {
+                comment(out, "", g.getValue().get(0).why());
+                out.append("# gain: set by rf and rg below\n");
             } else if (!StageKeys.SECTIONS.contains(group)) {
                 StageKeys.Key key = g.getValue().get(0);
                 line(out, "", key.path(), key, answers.get(key.path()));
@@ -163,8 +166,13 @@ public final class StageWriter {
                 a.put("rf", exact(s.rf(), Dimension.RESISTANCE));
             }
         } else {
+            String gain = gainText(s);
+            if (gain != null) {
+                a.put("gain", gain);
+            } else {
+                a.put("rg", exact(s.rg(), Dimension.RESISTANCE));
+            }
             a.put("rf", exact(s.rf(), Dimension.RESISTANCE));
-            a.put("rg", exact(s.rg(), Dimension.RESISTANCE));
         }
         a.put("source-resistance", exact(s.sourceResistance(), Dimension.RESISTANCE));
         a.put("balance-resistance", exact(s.balanceResistance(), Dimension.RESISTANCE));
@@ -226,6 +234,25 @@ public final class StageWriter {
         return a;
     }
 
+    /**
+     * The gain as the shortest number from which the loader derives exactly the stage's rg
+     * (rg = rf/(gain - 1), inverting rf/gain), or null when none does; then rf and rg are written.
+     */
+    private static String gainText(Stage s) {
+        double ratio = s.rf() / s.rg();
+        double gain = s.topology() == Topology.NON_INVERTING ? 1.0 + ratio : ratio;
+        BigDecimal exactGain = new BigDecimal(gain);
+        for (int digits = 1; digits <= 17; digits++) {
+            BigDecimal g = exactGain.round(new MathContext(digits));
+            double back = g.doubleValue();
+            double rg = s.topology() == Topology.NON_INVERTING ? s.rf() / (back - 1.0) : s.rf() / back;
+            if (Double.compare(rg, s.rg()) == 0) {
+                return digits <= 6 ? g.stripTrailingZeros().toPlainString() : null; // a long gain reads worse than rf and rg
+            }
+        }
+        return null;
+    }
+
     private static final String[] PREFIX = {"f", "p", "n", "u", "m", "", "k", "M", "G", "T"};
 
     /** The shortest text with a unit that {@link Units#parse} reads back to exactly {@code v}. */
@@ -252,7 +279,8 @@ public final class StageWriter {
         if (v != 0) {
             int exp3 = (int) Math.floor(Math.log10(Math.abs(v)) / 3.0);
             exp3 = Math.max(-5, Math.min(4, exp3));
-            String found = firstExact(v, d, List.of(PREFIX[exp3 + 5] + symbol), null);
+            // the prefixed form or the bare unit, whichever is shorter: "250 mV", but "0.1 Hz" rather than "100 mHz"
+            String found = firstExact(v, d, List.of(PREFIX[exp3 + 5] + symbol, symbol), null);
             if (found != null) {
                 return found;
             }
