@@ -230,6 +230,44 @@ class StageLoaderTest {
     }
 
     @Nested
+    class DemoStages {
+
+        private static final Path DIR = Path.of("demo-catalog/stages");
+
+        @Test
+        void everyDemoStageLoadsAndReadsBackFromItsWrittenForm() throws Exception {
+            List<Path> files;
+            try (var list = java.nio.file.Files.list(DIR)) {
+                files = list.filter(p -> p.toString().endsWith(".yaml")).sorted().toList();
+            }
+            assertEquals(List.of(DIR.resolve("adc-driver.yaml"), DIR.resolve("bridge-amp.yaml"), DIR.resolve("thermocouple.yaml")), files);
+            for (Path f : files) {
+                Stage s = StageLoader.load(f); // throws with every problem listed if one is wrong
+                assertEquals(f, s.where().file());
+                Stage back = StageLoader.parse(StageWriter.toYaml(s), NAME);
+                assertEquals(s.withWhere(null), back.withWhere(null), f.toString());
+            }
+        }
+
+        @Test
+        void demoLimitsConvertToOutputVolts() throws InputException {
+            // ADC driver: 2 LSB of 16 bits at 4.096 V = 2 x 62.5 uV (reference-checks.md §9 convention LSB = V/2^N)
+            Stage adc = StageLoader.load(DIR.resolve("adc-driver.yaml"));
+            assertEquals(Topology.FOLLOWER, adc.topology());
+            assertEquals(125e-6, adc.limitVolts(), 1e-18);
+            // thermocouple: 40 uV at the input x noise gain 200 = 8 mV at the output
+            Stage tc = StageLoader.load(DIR.resolve("thermocouple.yaml"));
+            assertEquals(Limit.Kind.INPUT, tc.limit().kind());
+            assertEquals(200.0, tc.noiseGain(), 1e-12);
+            assertEquals(8e-3, tc.limitVolts(), 1e-15);
+            // bridge: gain 100 with rf 100 kohm gives rg = rf/99
+            Stage bridge = StageLoader.load(DIR.resolve("bridge-amp.yaml"));
+            assertEquals(100e3 / 99, bridge.rg(), 1e-12);
+            assertEquals(Criterion.Kind.YIELD, bridge.criterion().kind());
+        }
+    }
+
+    @Nested
     class Validation {
 
         @Test
