@@ -60,11 +60,11 @@ final class Ngspice {
     static Path requireExecutable() {
         Path exe = executable();
         if (exe == null) {
-            String msg = "ngspice is not installed (Debian package 'ngspice'); the outside check against it was skipped";
+            String msg = "ngspice is not on PATH (Debian package 'ngspice'), so the outside check against it cannot run";
             if ("true".equalsIgnoreCase(System.getenv("CI"))) {
-                fail(msg + " but CI=true requires it");
+                fail(msg + "; CI=true requires it");
             }
-            Assumptions.abort(msg);
+            Assumptions.abort(msg + "; skipped (install it, or set CI=true to make this a failure)");
         }
         return exe;
     }
