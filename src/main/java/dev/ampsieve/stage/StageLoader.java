@@ -42,6 +42,43 @@ public final class StageLoader {
         return read(YamlFiles.parse(yaml, nameForMessages));
     }
 
+    /**
+     * Checks one answer as the interactive shell collects it ({@code "temperature.min"},
+     * {@code "-40 C"}): the problems with that key alone, without location. Checks between
+     * keys (min above max, gain with rf and rg) happen when the whole stage is read.
+     *
+     * @throws IllegalArgumentException when {@code path} is not a stage key
+     */
+    public static List<Problem> checkAnswer(String path, String text) {
+        if (StageKeys.get(path) == null) {
+            throw new IllegalArgumentException("not a stage key: " + path);
+        }
+        // a neutral context in which the other required keys are present and valid
+        java.util.Map<String, String> answers = new java.util.LinkedHashMap<>();
+        answers.put(path, text);
+        if (!List.of("gain", "rf", "rg", "topology").contains(path)) {
+            answers.put("gain", "10");
+        }
+        if (!path.startsWith("limit")) {
+            answers.put("limit", "1 V");
+        }
+        if (!path.equals("full-scale-output")) {
+            answers.put("full-scale-output", "1 V");
+        }
+        try {
+            parse(StageWriter.toYaml(answers), null);
+            return List.of();
+        } catch (InputException e) {
+            List<Problem> mine = new ArrayList<>();
+            for (Problem p : e.problems()) {
+                if (p.field().equals(path) || p.field().startsWith(path + ".") || path.startsWith(p.field() + ".")) {
+                    mine.add(new Problem(p.severity(), null, 0, 0, path, p.message(), p.fix()));
+                }
+            }
+            return mine;
+        }
+    }
+
     private static Stage read(Node root) throws InputException {
         if (root instanceof Node.Scalar s && s.text() == null) {
             throw new InputException(Problem.error(root.at(), "", "the stage file is empty",

@@ -230,6 +230,36 @@ class StageLoaderTest {
     }
 
     @Nested
+    class SingleAnswers {
+
+        @Test
+        void aGoodAnswerHasNoProblem() {
+            assertEquals(List.of(), StageLoader.checkAnswer("temperature.min", "-40 C"));
+            assertEquals(List.of(), StageLoader.checkAnswer("topology", "follower"));
+            assertEquals(List.of(), StageLoader.checkAnswer("limit.bits", "16"));
+            assertEquals(List.of(), StageLoader.checkAnswer("limit.percent-of-full-scale", "0.1"));
+        }
+
+        @Test
+        void aBadAnswerGetsItsProblemWithoutLocation() {
+            assertEquals(List.of("<input>: rf: '10 mV' is a voltage but a resistance belongs here; write a resistance such as '10 kohm'"),
+                    StageLoader.checkAnswer("rf", "10 mV").stream().map(Problem::toString).toList());
+            assertEquals(List.of("<input>: trials: 50 is outside 100..10000000; write a whole number from 100 to 10000000"),
+                    StageLoader.checkAnswer("trials", "50").stream().map(Problem::toString).toList());
+            assertEquals(List.of("<input>: gain: a non-inverting stage cannot have gain 0.5 (below 1); "
+                            + "write a gain of 1 or more, or use 'topology: inverting'"),
+                    StageLoader.checkAnswer("gain", "0.5").stream().map(Problem::toString).toList());
+            assertEquals(1, StageLoader.checkAnswer("criterion", "yield 100 %").size());
+            assertEquals(1, StageLoader.checkAnswer("limit", "5 mV\nrf: 1 V").size()); // one value, never two keys
+        }
+
+        @Test
+        void unknownKeyIsAProgrammingError() {
+            assertThrows(IllegalArgumentException.class, () -> StageLoader.checkAnswer("gian", "100"));
+        }
+    }
+
+    @Nested
     class DemoStages {
 
         private static final Path DIR = Path.of("demo-catalog/stages");
