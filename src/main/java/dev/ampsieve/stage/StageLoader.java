@@ -514,15 +514,8 @@ public final class StageLoader {
         }
 
         private double temperature(Node.Mapping t, String key, double fallback) {
-            Double v = f.quantity(t, "temperature", key, Dimension.TEMPERATURE);
-            if (v == null) {
-                return fallback;
-            }
-            if (v < -273.15) {
-                f.error(Fields.where(t, key), "temperature." + key, "below absolute zero", "write degrees Celsius, such as '-40 C'");
-                return fallback;
-            }
-            return v;
+            Double v = f.quantity(t, "temperature", key, Dimension.TEMPERATURE); // Units refuses below absolute zero
+            return v == null ? fallback : v;
         }
 
         /** min and max both required in the block; min <= max; within 0..supply when {@code rail} is known. */

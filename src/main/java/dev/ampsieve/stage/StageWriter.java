@@ -264,7 +264,7 @@ public final class StageWriter {
             case FREQUENCY -> engineering(v, d, "Hz");
             case TEMPERATURE -> plain(v) + " C";
             case RATIO -> exact(v, d, "%");
-            case RATIO_DRIFT -> firstExact(v, d, List.of("ppm/C", "%/C"), plain(v * 1e6) + " ppm/C");
+            case RATIO_DRIFT -> firstExact(v, d, List.of("ppm/C", "%/C"), plain(v) + " /C"); // a bare ratio per degree is exact
             case TIME -> firstExact(v, d, List.of("y", "h"), plain(v) + " s");
             default -> plain(v);
         };

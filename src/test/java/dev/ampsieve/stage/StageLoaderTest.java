@@ -366,7 +366,7 @@ class StageLoaderTest {
         void temperatureMinAboveMax() {
             assertEquals("s.yaml:4:8: temperature: min 85 °C is above max -40 °C; swap the two values",
                     problem("gain: 10\nlimit: 1 mV\ntemperature:\n  min: 85 C\n  max: -40 C\n"));
-            assertEquals("s.yaml:3:20: temperature.min: below absolute zero; write degrees Celsius, such as '-40 C'",
+            assertEquals("s.yaml:3:20: temperature.min: '-300 C' is below absolute zero (-273.15 °C); write the temperature in °C, such as '-40 C'",
                     problem("gain: 10\nlimit: 1 mV\ntemperature: {min: -300 C}\n"));
         }
 
