@@ -157,6 +157,9 @@ public record PartValues(
             w.add("noise.in: not given; current noise through the stage resistors is not counted");
         }
         double inC = n.inCorner() == null ? 0.0 : n.inCorner();
+        if (part.longTermDrift() == null && stage.serviceLife() > 0) {
+            w.add("long-term-drift: not given; offset aging over the service life is not counted");
+        }
         return new PartValues(part, vos, vosOt, drift, ib, ios, ibOt, iosOt, cmrr, psrr, aol, gbw,
                 en, enC, in, inC, w);
     }
