@@ -103,7 +103,7 @@ public final class BudgetCalculator {
     }
 
     private static YieldResult trimmedYield(Stage stage, PartValues v, List<TermResult> terms) {
-        boolean two = stage.trim().method() == Trim.Method.TWO_POINT;
+        boolean two = trimOf(stage).method() == Trim.Method.TWO_POINT;
         double fixed = fixedInYield(stage, terms, true, two);
         return new YieldModel(stage, v, fixed, true, two).run(yieldTarget(stage));
     }
@@ -126,13 +126,29 @@ public final class BudgetCalculator {
         return f + ResistorTerm.tempcoPart(stage);
     }
 
-    /**
-     * Totals after the stage's trim method at 25 °C. One-point: removes term 1 and the 25 °C
-     * part of term 3, adds the trim resolution. Two-point: also removes the static gain errors
-     * (term 6 and the tolerance part of term 8).
-     */
+    /** The stage's trim, {@link Trim#NONE} when it has none. */
+    public static Trim trimOf(Stage stage) {
+        return stage.trim() == null ? Trim.NONE : stage.trim();
+    }
+
     static Trimmed trimmed(Stage stage, PartValues v, List<TermResult> terms) {
-        boolean two = stage.trim().method() == Trim.Method.TWO_POINT;
+        return trimmed(stage, v, terms, trimOf(stage).method());
+    }
+
+    /** Totals after a calibration by {@code method} at 25 °C, whatever the stage says (for comparison tables). */
+    public static Trimmed trimmed(Stage stage, Part part, Trim.Method method) {
+        PartValues v = PartValues.of(part, stage);
+        List<TermResult> terms = TERMS.stream().map(t -> t.evaluate(stage, v)).toList();
+        return trimmed(stage, v, terms, method);
+    }
+
+    /**
+     * Totals after a calibration at 25 °C. One-point: removes term 1 and the 25 °C part of
+     * term 3, adds the trim resolution. Two-point: also removes the static gain errors (term 6
+     * and the tolerance part of term 8).
+     */
+    private static Trimmed trimmed(Stage stage, PartValues v, List<TermResult> terms, Trim.Method method) {
+        boolean two = method == Trim.Method.TWO_POINT;
         double wc = 0;
         double sq = 0;
         for (ErrorTerm t : TERMS) {
@@ -150,7 +166,7 @@ public final class BudgetCalculator {
             wc += o;
             sq += o * o;
         }
-        double res = stage.trim().resolution();
+        double res = trimOf(stage).resolution();
         wc += res;
         sq += res * res;
         return new Trimmed(wc, Math.sqrt(sq));
@@ -167,7 +183,7 @@ public final class BudgetCalculator {
             return Verdict.NO_FIT;
         }
         Criterion c = stage.criterion();
-        boolean trimAllowed = stage.trim() != null && stage.trim().allowed();
+        boolean trimAllowed = trimOf(stage).allowed();
         switch (c.kind()) {
             case WORST_CASE -> {
                 if (wc <= limit) {

@@ -65,7 +65,7 @@ final class YieldModel {
         double vfs = s.fullScaleOutput() == null ? 0.0 : s.fullScaleOutput();
         this.gainCoef = vfs * ResistorTerm.sensitivity(s);
         this.tol = trimmed && twoPoint ? 0.0 : s.ratioTolerance();
-        this.resolution = trimmed ? s.trim().resolution() : 0.0;
+        this.resolution = trimmed ? BudgetCalculator.trimOf(s).resolution() : 0.0;
         double k = s.maxToSigma();
         double[] temps = {s.tMin(), s.tMax()};
         for (int j = 0; j < 2; j++) {

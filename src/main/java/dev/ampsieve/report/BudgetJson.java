@@ -58,8 +58,9 @@ public final class BudgetJson {
         y.put("decided", b.yield().decided());
         y.put("seed", b.stage().seed());
         ObjectNode tr = o.putObject("trimmed");
-        tr.put("method", b.stage().trim().method() == Trim.Method.TWO_POINT ? "two-point" : "one-point");
-        tr.put("allowed", b.stage().trim().allowed());
+        Trim trim = BudgetCalculator.trimOf(b.stage());
+        tr.put("method", BudgetText.methodName(trim.method()));
+        tr.put("allowed", trim.allowed());
         put(tr, "worstCaseV", b.trimmed().worstCaseV());
         put(tr, "rssV", b.trimmed().rssV());
         o.put("verdict", b.verdict().key());

@@ -5,6 +5,7 @@ import dev.ampsieve.budget.BudgetCalculator;
 import dev.ampsieve.budget.ConstraintResult;
 import dev.ampsieve.budget.NoiseModel;
 import dev.ampsieve.budget.TermResult;
+import dev.ampsieve.budget.Trimmed;
 import dev.ampsieve.budget.YieldResult;
 import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.stage.Stage;
@@ -59,14 +60,13 @@ public final class BudgetText {
                 v(NoiseModel.PEAK_TO_PEAK * b.noiseRmsV() / b.noiseGain()));
         o.append('\n');
         line(o, "Yield      %s", yieldLine(b.yield(), s));
-        Trim trim = s.trim();
-        String method = trim.method() == Trim.Method.TWO_POINT ? "two-point" : "one-point";
-        line(o, "Trimmed    %s at 25 °C%s: worst-case %s (%s), RSS %s (%s)", method,
-                trim.resolution() > 0 ? ", resolution " + v(trim.resolution()) : "",
-                v(b.trimmed().worstCaseV()), share(b.trimmed().worstCaseV(), limit).strip(),
-                v(b.trimmed().rssV()), share(b.trimmed().rssV(), limit).strip());
-        if (!trim.allowed()) {
-            line(o, "           (the stage does not allow a trim; shown for comparison)");
+        Trim trim = BudgetCalculator.trimOf(s);
+        for (Trim.Method m : Trim.Method.values()) {
+            Trimmed t = m == trim.method() ? b.trimmed() : BudgetCalculator.trimmed(s, b.part(), m);
+            line(o, "%-10s %s at 25 °C%s: worst-case %s (%s), RSS %s (%s)%s", m == Trim.Method.ONE_POINT ? "Trimmed" : "",
+                    methodName(m), trim.resolution() > 0 ? ", resolution " + v(trim.resolution()) : "",
+                    v(t.worstCaseV()), share(t.worstCaseV(), limit).strip(), v(t.rssV()), share(t.rssV(), limit).strip(),
+                    m == trim.method() ? (trim.allowed() ? "  (the stage's trim)" : "  (the stage's method; trim not allowed)") : "");
         }
         o.append('\n');
         line(o, "Constraints");
@@ -97,6 +97,10 @@ public final class BudgetText {
             default -> pct(y.value()) + " (95 % interval " + pct(y.low()) + " to " + pct(y.high()) + ", "
                     + y.trials() + " units, seed " + s.seed() + target + ")";
         };
+    }
+
+    static String methodName(Trim.Method m) {
+        return m == Trim.Method.TWO_POINT ? "two-point" : "one-point";
     }
 
     static String pct(double ratio) {

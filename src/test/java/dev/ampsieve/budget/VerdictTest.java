@@ -104,6 +104,10 @@ class VerdictTest {
         Budget two = BudgetCalculator.compute(s.build(), p.build());
         assertEquals(drift + tcPart + 10e-6 + noise, two.trimmed().worstCaseV(), 1e-15);
         assertEquals(Math.sqrt(drift * drift + tcPart * tcPart + 1e-10 + noise * noise), two.trimmed().rssV(), 1e-15);
+        // the comparison function gives the same totals for either method
+        assertEquals(two.trimmed(), BudgetCalculator.trimmed(s.build(), p.build(), Trim.Method.TWO_POINT));
+        assertEquals(drift + aolErr + tolPart + tcPart + noise + 10e-6,
+                BudgetCalculator.trimmed(s.build(), p.build(), Trim.Method.ONE_POINT).worstCaseV(), 1e-15);
     }
 
     @Test
