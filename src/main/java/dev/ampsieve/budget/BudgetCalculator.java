@@ -67,8 +67,8 @@ public final class BudgetCalculator {
         Verdict verdict = verdict(stage, wc, rss, yield, trimmed, constraintsOk, limit,
                 () -> trimmedYield(stage, v, terms));
 
-        String limiting = null;
-        double largest = -1;
+        String limiting = null; // stays null when nothing contributes
+        double largest = 0;
         for (ErrorTerm t : TERMS) {
             if (!counts(stage, t)) {
                 continue;
