@@ -10,6 +10,8 @@ import dev.ampsieve.budget.BudgetCalculator;
 import dev.ampsieve.budget.ConstraintResult;
 import dev.ampsieve.budget.NoiseModel;
 import dev.ampsieve.budget.TermResult;
+import dev.ampsieve.budget.YieldResult;
+import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.stage.Trim;
 
 /**
@@ -63,6 +65,15 @@ public final class BudgetJson {
         tr.put("allowed", trim.allowed());
         put(tr, "worstCaseV", b.trimmed().worstCaseV());
         put(tr, "rssV", b.trimmed().rssV());
+        if (b.stage().criterion().kind() == Criterion.Kind.YIELD && trim.allowed()) {
+            YieldResult ty = BudgetCalculator.trimmedYield(b.stage(), b.part());
+            ObjectNode tyn = tr.putObject("yield");
+            put(tyn, "value", ty.value());
+            put(tyn, "low", ty.low());
+            put(tyn, "high", ty.high());
+            tyn.put("trials", ty.trials());
+            tyn.put("decided", ty.decided());
+        }
         o.put("verdict", b.verdict().key());
         if (b.limitingTerm() == null) {
             o.putNull("limitingTerm");

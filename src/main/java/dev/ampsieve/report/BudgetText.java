@@ -68,6 +68,10 @@ public final class BudgetText {
                     v(t.worstCaseV()), share(t.worstCaseV(), limit).strip(), v(t.rssV()), share(t.rssV(), limit).strip(),
                     m == trim.method() ? (trim.allowed() ? "  (the stage's trim)" : "  (the stage's method; trim not allowed)") : "");
         }
+        if (s.criterion().kind() == Criterion.Kind.YIELD && trim.allowed()) {
+            line(o, "%-10s %s", "", "yield after the " + methodName(trim.method()) + " trim: "
+                    + yieldLine(BudgetCalculator.trimmedYield(s, b.part()), s));
+        }
         o.append('\n');
         line(o, "Constraints");
         for (ConstraintResult c : b.constraints()) {
@@ -95,7 +99,9 @@ public final class BudgetText {
             case "none-pass" -> "0 % (decided without sampling: even the smallest possible error exceeds the limit"
                     + target + ")";
             default -> pct(y.value()) + " (95 % interval " + pct(y.low()) + " to " + pct(y.high()) + ", "
-                    + y.trials() + " units, seed " + s.seed() + target + ")";
+                    + (y.trials() < s.trials() ? y.trials() + " of " + s.trials() + " units, stopped once the interval cleared the target"
+                            : y.trials() + " units")
+                    + ", seed " + s.seed() + target + ")";
         };
     }
 

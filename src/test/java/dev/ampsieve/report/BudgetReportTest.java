@@ -74,4 +74,17 @@ class BudgetReportTest {
         assertTrue(t.strip().endsWith(Caution.TEXT));
         assertFalse(t.contains("NaN"));
     }
+
+    @Test
+    void yieldCriterionWithTrimShowsTheTrimmedYield() throws Exception {
+        StageFixture s = StageFixture.follower().limitV(3e-3);
+        s.criterion = dev.ampsieve.stage.Criterion.yield(0.999);
+        s.trim = new dev.ampsieve.stage.Trim(true, dev.ampsieve.stage.Trim.Method.ONE_POINT, 0, 1);
+        Budget b = BudgetCalculator.compute(s.build(), PartFixture.ideal().vos(1e-3, null, null).build());
+        assertEquals("fits-after-trim", b.verdict().key());
+        assertTrue(BudgetText.render(b, null).contains("yield after the one-point trim: 100 % (decided without sampling"));
+        JsonNode ty = new ObjectMapper().readTree(BudgetJson.render(b, null)).get("trimmed").get("yield");
+        assertEquals("all-pass", ty.get("decided").asText());
+        assertEquals(1.0, ty.get("low").asDouble(), 0.0);
+    }
 }
