@@ -23,6 +23,8 @@ import java.util.List;
  * @param drift          offset drift, V/°C; bound infinite when only vos over temperature bounds it
  * @param ib             input bias current at 25 °C, A
  * @param ios            input offset current at 25 °C, A
+ * @param ibOverTemp     catalog maximum of IB over the rated range, A; NaN when not given
+ * @param iosOverTemp    the same for IOS (IB's when IOS is assumed equal to IB)
  * @param cmrrDb         common-mode rejection, dB (bound = minimum)
  * @param psrrDb         supply rejection, dB (bound = minimum)
  * @param aolDb          open-loop gain, dB (bound = minimum)
