@@ -235,6 +235,19 @@ class NgspiceCrossCheckTest {
         assertRelative(rms / finiteGain, r.noiseRms(), 1e-9, "output noise, " + c);
     }
 
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("combos")
+    void engineAgreesWithNgspice(Combo c) throws Exception {
+        Result r = simulate(c);
+        Stage s = c.stage();
+        double finiteGain = 1 + s.noiseGain() / A;
+        // DcModel: ideal amplifier, currents into the pins; ngspice's A = 1e6 corrected exactly
+        assertRelative(DcModel.outputError(s, c.vos(), c.ibPlus(), c.ibMinus()) / finiteGain, r.dcOut(), 1e-9, "DC, " + c);
+        // NoiseModel with white noise only (corners 0) over [f1, f2] at 25 °C; it uses the exact SI k, ngspice CODATA 2014
+        double engine = NoiseModel.outputRms(s, c.en(), 0, c.in(), 0, c.f1(), c.f2(), T);
+        assertRelative(engine / finiteGain, r.noiseRms(), 1e-5, "noise, " + c);
+    }
+
     @Test
     void compensatedBiasLeavesMinusIosTimesRf() throws Exception {
         // reference-checks.md §2 (Eggleston §6.4): -1.000 mV = -IOS·Rf, 1e-9 relative
