@@ -17,4 +17,11 @@ final class Assumed {
 
     /** Open-loop gain when none is given: 80 dB (10^4), low for a precision DC amplifier [from memory]. */
     static final double AOL_DB = 80.0;
+
+    /**
+     * Headroom to each rail when the catalog gives none: 1.5 V, what a classic non-rail-to-rail
+     * bipolar input or output stage needs (two junction drops plus a saturating transistor)
+     * [from memory]. Pessimistic for modern parts, so a missing value can only reject a part.
+     */
+    static final double HEADROOM_V = 1.5;
 }

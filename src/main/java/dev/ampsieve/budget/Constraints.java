@@ -104,15 +104,20 @@ public final class Constraints {
         if (s.supplyVoltage() == null) {
             return new ConstraintResult(name, true, "not checked: the stage gives no supply voltage");
         }
-        if (h == null) {
-            w.add(name + ": the part gives no " + what + " headroom; not checked");
-            return new ConstraintResult(name, true, "not checked: no headroom in the catalog");
+        boolean assumed = h == null;
+        if (assumed) {
+            h = new Headroom(Assumed.HEADROOM_V, Assumed.HEADROOM_V);
+            w.add(name + ": the part gives no " + what + " headroom; "
+                    + Units.format(Assumed.HEADROOM_V, Dimension.VOLTAGE) + " from each rail is assumed");
         }
         // the lowest supply of the stage leaves the least room at the top
         double vLow = s.supplyVoltage() - s.supplyVariation();
         Range offer = new Range(h.low(), vLow - h.high());
         Range needed = new Range(need.min() - widen, need.max() + widen);
         ConstraintResult r = range(name, needed.min(), needed.max(), offer, Dimension.VOLTAGE, what, "reachable");
+        if (assumed) {
+            r = new ConstraintResult(r.name(), r.ok(), r.detail() + " (headroom assumed, not in the catalog)");
+        }
         if (widen > 0) {
             return new ConstraintResult(r.name(), r.ok(), r.detail() + " (includes " + Units.format(widen, Dimension.VOLTAGE)
                     + " of DC error an AC-coupled stage still carries)");

@@ -63,6 +63,23 @@ class ConstraintsTest {
     }
 
     @Test
+    void missingHeadroomIsAssumedPessimisticNotSkipped() {
+        // Vs 5 V, swing 1 V: needs 2.0 .. 3.0 V; an assumed 1.5 V from each rail reaches 1.5 .. 3.5 V (fits);
+        // a 3 V swing needs 1.0 .. 4.0 V, which the assumed headroom cannot reach
+        StageFixture s = StageFixture.follower().limitV(1);
+        s.supply = 5.0;
+        s.cmSwing = 1;
+        PartFixture p = PartFixture.ideal();
+        p.inHead = null;
+        Budget b = budget(s, p);
+        assertTrue(get(b, "common-mode").ok(), get(b, "common-mode").detail());
+        assertTrue(get(b, "common-mode").detail().contains("assumed"));
+        assertTrue(b.warnings().stream().anyMatch(w -> w.startsWith("common-mode") && w.contains("1.50 V")), b.warnings().toString());
+        s.cmSwing = 3;
+        assertFalse(get(budget(s, p), "common-mode").ok());
+    }
+
+    @Test
     void outputSwingAndSlew() {
         StageFixture s = StageFixture.nonInverting(9e3, 1e3).limitV(1);
         s.supply = 5.0;
