@@ -271,7 +271,8 @@ public final class Units {
             case NUMBER -> trim(sig(si, digits));
             case TIME -> time(si, digits);
             // slew reads in V/µs at every speed (0.5 V/µs ... 2000 V/µs); a prefix there confuses
-            case SLEW_RATE -> sig(si * 1e-6, digits) + " V/µs";
+            // datasheets quote V/µs; a tiny requirement (a slow stage) reads better in V/s or mV/µs
+            case SLEW_RATE -> Math.abs(si) >= 1e4 || si == 0 ? sig(si * 1e-6, digits) + " V/µs" : engineering(si, digits) + "V/s";
             case RESISTANCE -> engineering(si, digits) + "Ω";
             default -> engineering(si, digits) + d.symbol();
         };

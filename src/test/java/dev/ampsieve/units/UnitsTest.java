@@ -168,6 +168,7 @@ class UnitsTest {
         "0.6e-6   | VOLTAGE_DRIFT   | 600 nV/°C",
         "5e5      | SLEW_RATE       | 0.500 V/µs",
         "1.2e9    | SLEW_RATE       | 1200 V/µs",
+        "62.83    | SLEW_RATE       | 62.8 V/s",
         "110      | DECIBEL         | 110 dB",
         "-40      | TEMPERATURE     | -40 °C",
         "0.001    | RATIO           | 0.1 %",
