@@ -6,15 +6,13 @@ import dev.ampsieve.search.Hit;
 import dev.ampsieve.search.PartIndex;
 import dev.ampsieve.search.PartQuery;
 import dev.ampsieve.search.QueryLanguage;
-import dev.ampsieve.yaml.Fields;
 import dev.ampsieve.yaml.InputException;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Optional;
 
-/** Shared steps of the commands that pick parts: query the index, look parts up by id. */
+/** Shared steps of the commands that pick parts from the catalog through the index. */
 final class Candidates {
     private Candidates() {
     }
@@ -29,21 +27,6 @@ final class Candidates {
             }
         }
         return out;
-    }
-
-    /** The part, or a one-line error naming the closest id. */
-    static Part byId(Catalog catalog, String id) {
-        Optional<Part> p = catalog.find(id);
-        if (p.isPresent()) {
-            return p.get();
-        }
-        String near = Fields.closest(id, catalog.parts().stream().map(Part::id).toList());
-        String msg = "no part '" + id + "' in the catalog " + catalog.root()
-                + (near != null ? "; did you mean '" + near + "'?" : "; 'ampsieve find' lists the parts");
-        if (catalog.hasErrors()) {
-            msg += " (some catalog files have errors and were left out: run 'ampsieve check')";
-        }
-        throw new UserException(msg, ExitCode.FINDINGS);
     }
 
     /** A one-line note on stderr when catalog files with errors were left out. */

@@ -43,12 +43,13 @@ public final class CompareCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         Catalog catalog = root.catalog();
-        Part pa = Candidates.byId(catalog, a);
-        Part pb = Candidates.byId(catalog, b);
+        Part pa = BudgetCommand.find(catalog, a);
+        Part pb = BudgetCommand.find(catalog, b);
         Stage stage = StageLoader.load(stageFile);
         Comparison c = Comparison.of(BudgetCalculator.compute(stage, pa), BudgetCalculator.compute(stage, pb));
         String label = stageFile.toString();
-        spec.commandLine().getOut().print(json ? CompareReport.json(c, label) : CompareReport.text(c, label));
+        String name = String.valueOf(stageFile.getFileName()); // text headers stay within 100 columns
+        spec.commandLine().getOut().print(json ? CompareReport.json(c, label) : CompareReport.text(c, name));
         return ExitCode.OK;
     }
 }

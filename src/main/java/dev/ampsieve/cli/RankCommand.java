@@ -65,8 +65,9 @@ public final class RankCommand implements Callable<Integer> {
         List<Part> parts = query == null ? catalog.parts() : Candidates.matching(catalog, query);
         Ranking r = Ranker.rank(stage, parts, BudgetCalculator::compute);
         String label = stageFile.toString();
+        String name = String.valueOf(stageFile.getFileName()); // text headers stay within 100 columns
         String out = format.json ? RankReport.json(r, label, query, top)
-                : format.csv ? RankReport.csv(r, top) : RankReport.text(r, label, query, top);
+                : format.csv ? RankReport.csv(r, top) : RankReport.text(r, name, query, top);
         spec.commandLine().getOut().print(out);
         return ExitCode.OK;
     }

@@ -39,11 +39,12 @@ public final class SufficesCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        Part part = Candidates.byId(root.catalog(), partId);
+        Part part = BudgetCommand.find(root.catalog(), partId);
         Stage stage = StageLoader.load(stageFile);
         Sufficiency s = Sufficiency.of(BudgetCalculator.compute(stage, part));
         String label = stageFile.toString();
-        spec.commandLine().getOut().print(json ? SufficesReport.json(s, label) : SufficesReport.text(s, label));
+        String name = String.valueOf(stageFile.getFileName()); // text headers stay within 100 columns
+        spec.commandLine().getOut().print(json ? SufficesReport.json(s, label) : SufficesReport.text(s, name));
         return s.yes() ? ExitCode.OK : ExitCode.FINDINGS;
     }
 }
