@@ -41,7 +41,8 @@ public final class RankReport {
             return Figures.NONE;
         }
         TermResult t = c.budget().term(key);
-        return t == null ? key : t.label();
+        // the engine names the largest term of the untrimmed budget
+        return (t == null ? key : t.label()) + (c.trimmed() ? " †" : "");
     }
 
     /** Yield of the part as it is; after a trim the untrimmed yield does not apply. */
@@ -90,7 +91,7 @@ public final class RankReport {
             t.lines(TextTable.WIDTH).forEach(l -> o.append(l).append('\n'));
             o.append("verdict: fits as it is, +trim after the stage's trim (its cost and figures include it), no.\n");
             o.append("margin: (limit - ").append(r.stage().criterion().kind() == Criterion.Kind.WORST_CASE
-                    ? "worst-case" : "RSS").append(") / limit.  P: on the Pareto front of error against cost.\n");
+                    ? "worst-case" : "RSS").append(") / limit.  †: largest before the trim.  P: on the Pareto front.\n");
         }
         if (!r.pareto().isEmpty()) {
             // error against cost: each step up in cost buys a smaller error
@@ -113,6 +114,12 @@ public final class RankReport {
         o.append('\n').append("Advice\n");
         for (String l : r.advice().lines()) {
             o.append("  ").append(l).append('\n');
+        }
+        Candidate pick = r.advice().pick();
+        if (pick != null && !pick.budget().warnings().isEmpty()) {
+            o.append('\n').append("Notes from the budget of ").append(pick.id())
+                    .append(" (ampsieve budget ").append(pick.id()).append(" shows it in full)\n");
+            pick.budget().warnings().forEach(w -> o.append("  - ").append(w).append('\n'));
         }
         o.append('\n').append(Caution.TEXT).append('\n');
         return o.toString();
@@ -213,6 +220,8 @@ public final class RankReport {
         JsonSupport.put(n, "errorV", c.errorV());
         JsonSupport.put(n, "margin", c.margin());
         n.put("selfCorrecting", c.part().selfCorrecting());
+        ArrayNode warnings = n.putArray("warnings");
+        c.budget().warnings().forEach(warnings::add);
         return n;
     }
 
