@@ -242,11 +242,11 @@ class StageLoaderTest {
 
         @Test
         void aBadAnswerGetsItsProblemWithoutLocation() {
-            assertEquals(List.of("<input>: rf: '10 mV' is a voltage but a resistance belongs here; write a resistance such as '10 kohm'"),
+            assertEquals(List.of("rf: '10 mV' is a voltage but a resistance belongs here; write a resistance such as '10 kohm'"),
                     StageLoader.checkAnswer("rf", "10 mV").stream().map(Problem::toString).toList());
-            assertEquals(List.of("<input>: trials: 50 is outside 100..10000000; write a whole number from 100 to 10000000"),
+            assertEquals(List.of("trials: 50 is outside 100..10000000; write a whole number from 100 to 10000000"),
                     StageLoader.checkAnswer("trials", "50").stream().map(Problem::toString).toList());
-            assertEquals(List.of("<input>: gain: a non-inverting stage cannot have gain 0.5 (below 1); "
+            assertEquals(List.of("gain: a non-inverting stage cannot have gain 0.5 (below 1); "
                             + "write a gain of 1 or more, or use 'topology: inverting'"),
                     StageLoader.checkAnswer("gain", "0.5").stream().map(Problem::toString).toList());
             assertEquals(1, StageLoader.checkAnswer("criterion", "yield 100 %").size());
