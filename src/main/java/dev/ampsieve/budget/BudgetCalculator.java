@@ -64,8 +64,13 @@ public final class BudgetCalculator {
         Trimmed trimmed = trimmed(stage, v, terms);
 
         boolean constraintsOk = constraints.stream().allMatch(ConstraintResult::ok);
+        if (stage.criterion().kind() == Criterion.Kind.YIELD && trimOf(stage).allowed()) {
+            // simulated once here so reports and ranking read it instead of recomputing
+            trimmed = trimmed.withYield(trimmedYield(stage, v, terms));
+        }
+        Trimmed afterTrim = trimmed;
         Verdict verdict = verdict(stage, wc, rss, yield, trimmed, constraintsOk, limit,
-                () -> trimmedYield(stage, v, terms));
+                () -> afterTrim.yield() != null ? afterTrim.yield() : trimmedYield(stage, v, terms));
 
         String limiting = null; // stays null when nothing contributes
         double largest = 0;

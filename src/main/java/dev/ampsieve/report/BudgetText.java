@@ -68,9 +68,9 @@ public final class BudgetText {
                     v(t.worstCaseV()), share(t.worstCaseV(), limit).strip(), v(t.rssV()), share(t.rssV(), limit).strip(),
                     m == trim.method() ? (trim.allowed() ? "  (the stage's trim)" : "  (the stage's method; trim not allowed)") : "");
         }
-        if (s.criterion().kind() == Criterion.Kind.YIELD && trim.allowed()) {
+        if (b.trimmed().yield() != null) {
             line(o, "%-10s %s", "", "yield after the " + methodName(trim.method()) + " trim: "
-                    + yieldLine(BudgetCalculator.trimmedYield(s, b.part()), s));
+                    + yieldLine(b.trimmed().yield(), s));
         }
         o.append('\n');
         line(o, "Constraints");
