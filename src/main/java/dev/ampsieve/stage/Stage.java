@@ -99,6 +99,13 @@ public record Stage(
         return Math.max(Math.abs(tMin - T_REF), Math.abs(tMax - T_REF));
     }
 
+    /** The same stage said to come from {@code place} (null: typed in); for comparing stages read from different files. */
+    public Stage withWhere(Located place) {
+        return new Stage(topology, rf, rg, sourceResistance, balanceResistance, tMin, tMax, supplyVoltage, supplyVariation,
+                commonModeSwing, commonModeRange, outputRange, bandLow, bandHigh, fullScaleOutput, ratioTolerance, ratioTempco,
+                serviceLife, limit, criterion, maxToSigma, trials, seed, trim, quantity, maxPrice, acCoupled, place);
+    }
+
     /** The error limit in output volts. */
     public double limitVolts() {
         return limit.outputVolts(noiseGain(), fullScaleOutput);

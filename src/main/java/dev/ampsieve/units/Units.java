@@ -1,5 +1,8 @@
 package dev.ampsieve.units;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
 import java.util.LinkedHashMap;
 import java.util.Locale;
 import java.util.Map;
@@ -25,6 +28,9 @@ public final class Units {
 
     private Units() {
     }
+
+    /** 0 K in degrees Celsius (SI Brochure, 9th ed., 2.3.1: t/°C = T/K - 273.15). */
+    private static final double ABSOLUTE_ZERO_C = -273.15;
 
     private static final Pattern QUANTITY = Pattern.compile(
             "^\\s*([-+]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][-+]?\\d+)?)\\s*(.*?)\\s*$");
@@ -59,7 +65,8 @@ public final class Units {
     static {
         BASES.put("V", Base.VOLT);
         BASES.put("A", Base.AMPERE);
-        for (String s : new String[] {"ohm", "ohms", "Ohm", "Ohms", "Ω", "Ω", "R"}) {
+        // U+03A9 GREEK CAPITAL LETTER OMEGA and U+2126 OHM SIGN: keyboards and fonts produce either
+        for (String s : new String[] {"ohm", "ohms", "Ohm", "Ohms", "\u03a9", "\u2126", "R"}) {
             BASES.put(s, Base.OHM);
         }
         BASES.put("Hz", Base.HERTZ);
@@ -124,6 +131,10 @@ public final class Units {
         }
         if (!Double.isFinite(value)) {
             throw new UnitException("'" + t + "' is out of range", "write a finite value such as '" + expected.example() + "'");
+        }
+        if (expected == Dimension.TEMPERATURE && value < ABSOLUTE_ZERO_C) {
+            throw new UnitException("'" + t + "' is below absolute zero (-273.15 °C)",
+                    "write the temperature in °C, such as '" + expected.example() + "'");
         }
         return value;
     }
@@ -221,7 +232,7 @@ public final class Units {
         if (perDegree) {
             return switch (num) {
                 case VOLT -> Dimension.VOLTAGE_DRIFT;
-                case PERCENT, PPM -> Dimension.RATIO_DRIFT;
+                case PERCENT, PPM, NONE -> Dimension.RATIO_DRIFT;
                 default -> null;
             };
         }
@@ -259,7 +270,9 @@ public final class Units {
             case RATIO_DRIFT -> trim(sig(si * 1e6, digits)) + " ppm/°C";
             case NUMBER -> trim(sig(si, digits));
             case TIME -> time(si, digits);
-            case SLEW_RATE -> engineering(si * 1e-6, digits) + "V/µs";
+            // slew reads in V/µs at every speed (0.5 V/µs ... 2000 V/µs); a prefix there confuses
+            // datasheets quote V/µs; a tiny requirement (a slow stage) reads better in V/s or mV/µs
+            case SLEW_RATE -> Math.abs(si) >= 1e4 || si == 0 ? sig(si * 1e-6, digits) + " V/µs" : engineering(si, digits) + "V/s";
             case RESISTANCE -> engineering(si, digits) + "Ω";
             default -> engineering(si, digits) + d.symbol();
         };
@@ -284,13 +297,18 @@ public final class Units {
         return digitsText + " " + ENG_PREFIX[exp3 + 5];
     }
 
+    /**
+     * {@code v} rounded to {@code digits} significant digits, printed without exponent. The
+     * number of decimals follows the rounded value, so 0.99996 prints "1.00", not "1.000".
+     */
     private static String sig(double v, int digits) {
         if (v == 0.0) {
             return "0";
         }
-        int mag = (int) Math.floor(Math.log10(Math.abs(v)));
+        BigDecimal r = new BigDecimal(v).round(new MathContext(digits, RoundingMode.HALF_UP));
+        int mag = r.precision() - r.scale() - 1; // exponent of the leading digit
         int decimals = Math.max(0, digits - 1 - mag);
-        return String.format(Locale.ROOT, "%." + decimals + "f", v);
+        return r.setScale(decimals, RoundingMode.HALF_UP).toPlainString();
     }
 
     private static String trim(String s) {

@@ -54,9 +54,17 @@ public final class Fields {
 
     /** Reports each key not in {@code known}, with the closest known key as a suggestion. */
     public void onlyKeys(Node.Mapping m, String path, Collection<String> known) {
+        onlyKeys(m, path, known, known);
+    }
+
+    /**
+     * Reports each key not in {@code known}; suggestions come from {@code suggest}, which may
+     * hold words valid one level up (a misspelt {@code parts:} at the top of a file).
+     */
+    public void onlyKeys(Node.Mapping m, String path, Collection<String> known, Collection<String> suggest) {
         for (var e : m.keyAt().entrySet()) {
             if (!known.contains(e.getKey())) {
-                String near = closest(e.getKey(), known);
+                String near = closest(e.getKey(), suggest);
                 error(e.getValue(), join(path, e.getKey()), "unknown key",
                         near != null ? "did you mean '" + near + "'?" : "known keys here: " + String.join(", ", known));
             }
@@ -142,7 +150,7 @@ public final class Fields {
             return null;
         }
         try {
-            return Long.parseLong(s.text().strip());
+            return Long.parseLong(s.text().replace("_", "").strip());
         } catch (NumberFormatException e) {
             error(s.at(), join(path, key), "'" + s.text() + "' is not a whole number", "write a whole number such as 42");
             return null;

@@ -35,14 +35,17 @@ public record Problem(Severity severity, Path file, int line, int column, String
     @Override
     public String toString() {
         StringBuilder sb = new StringBuilder();
-        sb.append(file == null ? "<input>" : file.toString());
-        if (line > 0) {
-            sb.append(':').append(line);
-            if (column > 0) {
-                sb.append(':').append(column);
+        // a value typed on the command line or in the shell has no file: the field names it
+        if (file != null) {
+            sb.append(file);
+            if (line > 0) {
+                sb.append(':').append(line);
+                if (column > 0) {
+                    sb.append(':').append(column);
+                }
             }
+            sb.append(": ");
         }
-        sb.append(": ");
         if (severity == Severity.WARNING) {
             sb.append("warning: ");
         }

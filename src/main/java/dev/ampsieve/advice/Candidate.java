@@ -1,0 +1,90 @@
+package dev.ampsieve.advice;
+
+import dev.ampsieve.budget.Budget;
+import dev.ampsieve.budget.Verdict;
+import dev.ampsieve.catalog.Part;
+import dev.ampsieve.stage.Criterion;
+import dev.ampsieve.stage.Stage;
+
+/**
+ * One part as it would be built in the stage.
+ *
+ * @param trimmed       the figures include the stage's trim: its cost is in {@code effectiveCost}
+ *                      and {@code errorV} is the total left after it
+ * @param effectiveCost unit price plus the trim cost when trimmed; NaN when the catalog has no price
+ * @param errorV        the total the criterion judges (worst-case sum; RSS for the RSS and
+ *                      yield criteria), output volts
+ * @param margin        (E - errorV) / E with E the stage limit; negative when over the limit
+ */
+public record Candidate(Part part, Budget budget, boolean trimmed, double effectiveCost, double errorV, double margin) {
+
+    public String id() {
+        return part.id();
+    }
+
+    public Verdict verdict() {
+        return budget.verdict();
+    }
+
+    public boolean constraintsMet() {
+        return budget.constraintsMet();
+    }
+
+    /** Meets every hard constraint and the limit, as it is or after the stage's trim. */
+    public boolean fits() {
+        return constraintsMet() && verdict() != Verdict.NO_FIT;
+    }
+
+    public double limitV() {
+        return budget.limitV();
+    }
+
+    /** Catalog currency of the price ("USD" when the catalog does not say). */
+    public String currency() {
+        return part.price() == null ? "" : part.price().currency();
+    }
+
+    /** The candidate as the verdict has it: trimmed exactly when the part needs the trim to fit. */
+    public static Candidate of(Budget b) {
+        Stage s = b.stage();
+        double untrimmed = total(s.criterion(), b.worstCaseV(), b.rssV());
+        double after = b.trimmed() == null ? Double.NaN : total(s.criterion(), b.trimmed().worstCaseV(), b.trimmed().rssV());
+        return switch (b.verdict()) {
+            case FITS -> untrimmed(b, untrimmed);
+            case FITS_AFTER_TRIM -> trimmed(b, after);
+            // a part that fits neither way is shown as it comes closest, trim included when allowed
+            case NO_FIT -> StageEdit.trim(s).allowed() && after < untrimmed ? trimmed(b, after) : untrimmed(b, untrimmed);
+        };
+    }
+
+    /** The part with the stage's trim applied, whatever its verdict (used to weigh a trim not yet allowed). */
+    public static Candidate withTrim(Budget b) {
+        return trimmed(b, total(b.stage().criterion(), b.trimmed().worstCaseV(), b.trimmed().rssV()));
+    }
+
+    private static Candidate untrimmed(Budget b, double error) {
+        return new Candidate(b.part(), b, false, price(b.part()), error, margin(b.limitV(), error));
+    }
+
+    private static Candidate trimmed(Budget b, double error) {
+        double cost = price(b.part()) + StageEdit.trim(b.stage()).cost();
+        return new Candidate(b.part(), b, true, cost, error, margin(b.limitV(), error));
+    }
+
+    static double price(Part p) {
+        return p.price() == null ? Double.NaN : p.price().unit();
+    }
+
+    private static double margin(double limit, double error) {
+        return (limit - error) / limit;
+    }
+
+    /**
+     * The total a criterion compares with the limit. The yield criterion is decided by the
+     * Monte Carlo yield; its error figure for margins and the Pareto front is the RSS total,
+     * the statistical sum the yield spreads around.
+     */
+    public static double total(Criterion c, double worstCaseV, double rssV) {
+        return c.kind() == Criterion.Kind.WORST_CASE ? worstCaseV : rssV;
+    }
+}

@@ -1,0 +1,39 @@
+package dev.ampsieve.advice;
+
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.Map;
+
+/**
+ * One change to the stage that makes a part fit, found by re-running the budget.
+ *
+ * @param values the numbers needed, SI units, e.g. {@code noiseGain}, {@code rf},
+ *               {@code sourceResistance}, {@code tMin}/{@code tMax}, {@code limitV}
+ */
+public record Change(Kind kind, String text, Map<String, Double> values) {
+
+    public Change {
+        values = Collections.unmodifiableMap(new LinkedHashMap<>(values));
+    }
+
+    public enum Kind {
+        LOWER_GAIN("lower-gain"),
+        LOWER_SOURCE_RESISTANCE("lower-source-resistance"),
+        NARROWER_TEMPERATURE("narrower-temperature"),
+        BETTER_RESISTORS("better-resistors"),
+        ALLOW_TRIM("allow-trim"),
+        TWO_POINT_TRIM("two-point-trim"),
+        LOOSER_LIMIT("looser-limit"),
+        LOWER_YIELD_TARGET("lower-yield-target");
+
+        private final String key;
+
+        Kind(String key) {
+            this.key = key;
+        }
+
+        public String key() {
+            return key;
+        }
+    }
+}

@@ -1,0 +1,42 @@
+package dev.ampsieve.advice;
+
+import dev.ampsieve.budget.Budget;
+import dev.ampsieve.catalog.Part;
+import dev.ampsieve.stage.Stage;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+
+/** Budgets every part for a stage and ranks the result. Pure: no printing, no files. */
+public final class Ranker {
+    private Ranker() {
+    }
+
+    /**
+     * Fitting candidates first, by effective unit cost (no price last), then by margin, then
+     * by id; then the parts that do not fit, closest (largest margin) first.
+     */
+    public static final Comparator<Candidate> ORDER = Comparator
+            .comparing((Candidate c) -> !c.fits())
+            .thenComparing((a, b) -> a.fits() ? Double.compare(a.effectiveCost(), b.effectiveCost()) : 0)
+            .thenComparing(Comparator.comparingDouble(Candidate::margin).reversed())
+            .thenComparing((a, b) -> Double.compare(a.effectiveCost(), b.effectiveCost()))
+            .thenComparing(Candidate::id);
+
+    public static Ranking rank(Stage stage, List<Part> parts, BudgetFunction budgets) {
+        List<Candidate> candidates = new ArrayList<>();
+        List<Rejected> rejected = new ArrayList<>();
+        for (Part p : parts) {
+            Budget b = budgets.compute(stage, p);
+            if (b.constraintsMet()) {
+                candidates.add(Candidate.of(b));
+            } else {
+                rejected.add(Rejected.of(b));
+            }
+        }
+        candidates.sort(ORDER);
+        rejected.sort(Comparator.comparing(Rejected::id));
+        Advice advice = Advisor.advise(stage, candidates, rejected, budgets);
+        return new Ranking(stage, candidates, rejected, Pareto.front(candidates), advice);
+    }
+}

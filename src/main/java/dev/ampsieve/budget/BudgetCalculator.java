@@ -1,0 +1,247 @@
+package dev.ampsieve.budget;
+
+import dev.ampsieve.catalog.Part;
+import dev.ampsieve.stage.Criterion;
+import dev.ampsieve.stage.Stage;
+import dev.ampsieve.stage.Trim;
+import dev.ampsieve.units.Dimension;
+import dev.ampsieve.units.Units;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Set;
+
+/**
+ * The full output error budget of one part in one stage (error-model.md): the ten terms,
+ * worst-case and RSS totals, Monte Carlo yield, trimmed totals, hard constraints, verdict.
+ * Pure and deterministic: the same stage (with its seed) and part give the same budget.
+ */
+public final class BudgetCalculator {
+    private BudgetCalculator() {
+    }
+
+    /** Every error term, in the order of error-model.md. Add a new term here. */
+    public static final List<ErrorTerm> TERMS = List.of(
+            new OffsetTerm(), new DriftTerm(), new BiasTerm(), new CmrrTerm(), new PsrrTerm(),
+            new OpenLoopGainTerm(), new BandwidthTerm(), new ResistorTerm(), new AgingTerm(), new NoiseTerm());
+
+    /** Keys of the terms that stay at their limits in the Monte Carlo (not drawn per unit). */
+    private static final Set<String> FIXED_IN_YIELD = Set.of(
+            CmrrTerm.KEY, PsrrTerm.KEY, OpenLoopGainTerm.KEY, BandwidthTerm.KEY, NoiseTerm.KEY);
+
+    /** Chopping frequency should be at least this many times the band edge (common practice). */
+    static final double CHOP_MARGIN = 10.0;
+
+    public static Budget compute(Stage stage, Part part) {
+        PartValues v = PartValues.of(part, stage);
+        Set<String> warnings = new LinkedHashSet<>(v.warnings());
+        List<TermResult> terms = new ArrayList<>();
+        double wc = 0;
+        double sumSq = 0;
+        double dcOnly = 0;
+        for (ErrorTerm t : TERMS) {
+            TermResult r = t.evaluate(stage, v);
+            terms.add(r);
+            if (counts(stage, t)) {
+                wc += r.outputV();
+                sumSq += r.outputV() * r.outputV();
+            } else {
+                dcOnly += r.outputV();
+            }
+        }
+        double rss = Math.sqrt(sumSq);
+        double noiseRms = NoiseTerm.rms(stage, v);
+        double limit = stage.limitVolts();
+        stageWarnings(stage, part, warnings, limit);
+
+        List<String> cw = new ArrayList<>();
+        List<ConstraintResult> constraints = Constraints.check(stage, part, dcOnly, cw);
+        warnings.addAll(cw);
+
+        double fixed = fixedInYield(stage, terms, false, false);
+        YieldResult yield = new YieldModel(stage, v, fixed, false, false).run(yieldTarget(stage));
+        Trimmed trimmed = trimmed(stage, v, terms);
+
+        boolean constraintsOk = constraints.stream().allMatch(ConstraintResult::ok);
+        if (stage.criterion().kind() == Criterion.Kind.YIELD && trimOf(stage).allowed()) {
+            // simulated once here so reports and ranking read it instead of recomputing
+            trimmed = trimmed.withYield(trimmedYield(stage, v, terms));
+        }
+        Trimmed afterTrim = trimmed;
+        Verdict verdict = verdict(stage, wc, rss, yield, trimmed, constraintsOk, limit,
+                () -> afterTrim.yield() != null ? afterTrim.yield() : trimmedYield(stage, v, terms));
+
+        String limiting = null; // stays null when nothing contributes
+        double largest = 0;
+        for (ErrorTerm t : TERMS) {
+            if (!counts(stage, t)) {
+                continue;
+            }
+            double o = find(terms, t.key()).outputV();
+            if (o > largest) {
+                largest = o;
+                limiting = t.key();
+            }
+        }
+        List<TermResult> sorted = new ArrayList<>(terms);
+        sorted.sort(Comparator.comparingDouble(TermResult::outputV).reversed());
+        return new Budget(part, stage, stage.noiseGain(), sorted, wc, rss, noiseRms, limit, yield, trimmed,
+                verdict, limiting, constraints, List.copyOf(warnings));
+    }
+
+    /** Whether {@code t} counts toward the error: DC terms of an AC-coupled stage count only toward headroom. */
+    public static boolean counts(Stage stage, ErrorTerm t) {
+        return !(stage.acCoupled() && t.dc());
+    }
+
+    /** Same, by key. */
+    public static boolean counts(Stage stage, String key) {
+        return TERMS.stream().filter(t -> t.key().equals(key)).findFirst().map(t -> counts(stage, t)).orElse(true);
+    }
+
+    /** Yield after the stage's trim (for the yield criterion), simulated with the same seed. */
+    public static YieldResult trimmedYield(Stage stage, Part part) {
+        PartValues v = PartValues.of(part, stage);
+        List<TermResult> terms = TERMS.stream().map(t -> t.evaluate(stage, v)).toList();
+        return trimmedYield(stage, v, terms);
+    }
+
+    private static YieldResult trimmedYield(Stage stage, PartValues v, List<TermResult> terms) {
+        boolean two = trimOf(stage).method() == Trim.Method.TWO_POINT;
+        double fixed = fixedInYield(stage, terms, true, two);
+        return new YieldModel(stage, v, fixed, true, two).run(yieldTarget(stage));
+    }
+
+    private static double yieldTarget(Stage stage) {
+        return stage.criterion().kind() == Criterion.Kind.YIELD ? stage.criterion().yieldTarget() : Double.NaN;
+    }
+
+    /** Terms 4, 5, 6, 7, the tempco part of 8 and the noise allowance (a two-point trim drops 6). */
+    private static double fixedInYield(Stage stage, List<TermResult> terms, boolean trimmed, boolean twoPoint) {
+        double f = 0;
+        for (TermResult r : terms) {
+            if (FIXED_IN_YIELD.contains(r.key())) {
+                if (trimmed && twoPoint && r.key().equals(OpenLoopGainTerm.KEY)) {
+                    continue;
+                }
+                f += r.outputV();
+            }
+        }
+        return f + ResistorTerm.tempcoPart(stage);
+    }
+
+    /** The stage's trim, {@link Trim#NONE} when it has none. */
+    public static Trim trimOf(Stage stage) {
+        return stage.trim() == null ? Trim.NONE : stage.trim();
+    }
+
+    static Trimmed trimmed(Stage stage, PartValues v, List<TermResult> terms) {
+        return trimmed(stage, v, terms, trimOf(stage).method());
+    }
+
+    /** Totals after a calibration by {@code method} at 25 °C, whatever the stage says (for comparison tables). */
+    public static Trimmed trimmed(Stage stage, Part part, Trim.Method method) {
+        PartValues v = PartValues.of(part, stage);
+        List<TermResult> terms = TERMS.stream().map(t -> t.evaluate(stage, v)).toList();
+        return trimmed(stage, v, terms, method);
+    }
+
+    /**
+     * Totals after a calibration at 25 °C. One-point: removes term 1 and the 25 °C part of
+     * term 3, adds the trim resolution. Two-point: also removes the static gain errors (term 6
+     * and the tolerance part of term 8).
+     */
+    private static Trimmed trimmed(Stage stage, PartValues v, List<TermResult> terms, Trim.Method method) {
+        boolean two = method == Trim.Method.TWO_POINT;
+        double wc = 0;
+        double sq = 0;
+        for (ErrorTerm t : TERMS) {
+            if (!counts(stage, t)) {
+                continue;
+            }
+            double o = find(terms, t.key()).outputV();
+            switch (t.key()) {
+                case OffsetTerm.KEY -> o = 0;
+                case BiasTerm.KEY -> o = Math.max(0.0, o - BiasTerm.at25(stage, v));
+                case OpenLoopGainTerm.KEY -> o = two ? 0 : o;
+                case ResistorTerm.KEY -> o = two ? ResistorTerm.tempcoPart(stage) : o;
+                default -> { }
+            }
+            wc += o;
+            sq += o * o;
+        }
+        double res = trimOf(stage).resolution();
+        wc += res;
+        sq += res * res;
+        return new Trimmed(wc, Math.sqrt(sq));
+    }
+
+    /**
+     * The verdict: a failed constraint is no-fit; otherwise the criterion decides, first as
+     * the part is, then (when the stage allows a trim) after it. A yield criterion is met
+     * when the lower end of the 95 % interval reaches the target.
+     */
+    static Verdict verdict(Stage stage, double wc, double rss, YieldResult yield, Trimmed trimmed,
+            boolean constraintsOk, double limit, java.util.function.Supplier<YieldResult> trimmedYield) {
+        if (!constraintsOk || Double.isNaN(limit)) {
+            return Verdict.NO_FIT;
+        }
+        Criterion c = stage.criterion();
+        boolean trimAllowed = trimOf(stage).allowed();
+        switch (c.kind()) {
+            case WORST_CASE -> {
+                if (wc <= limit) {
+                    return Verdict.FITS;
+                }
+                return trimAllowed && trimmed.worstCaseV() <= limit ? Verdict.FITS_AFTER_TRIM : Verdict.NO_FIT;
+            }
+            case RSS -> {
+                if (rss <= limit) {
+                    return Verdict.FITS;
+                }
+                return trimAllowed && trimmed.rssV() <= limit ? Verdict.FITS_AFTER_TRIM : Verdict.NO_FIT;
+            }
+            default -> {
+                if (yield.low() >= c.yieldTarget()) {
+                    return Verdict.FITS;
+                }
+                return trimAllowed && trimmedYield.get().low() >= c.yieldTarget() ? Verdict.FITS_AFTER_TRIM : Verdict.NO_FIT;
+            }
+        }
+    }
+
+    private static void stageWarnings(Stage stage, Part part, Set<String> w, double limit) {
+        if (Double.isNaN(limit)) {
+            w.add("limit: a percentage of full scale needs full-scale-output; nothing can fit without a limit");
+        }
+        if (stage.fullScaleOutput() == null) {
+            w.add("full-scale-output: not given; gain errors (open-loop gain, bandwidth, resistors) are not counted");
+        }
+        if (stage.acCoupled()) {
+            w.add("ac-coupled: offset, drift, bias and aging count only toward output headroom, not the error");
+        }
+        if (part.selfCorrecting()) {
+            w.add(part.architecture().key() + ": expect bias-current spikes from the switches (times the source "
+                    + "resistance they become offset), higher current noise than plain CMOS, and ripple near the "
+                    + "chopping frequency");
+            Double fc = part.choppingFrequency();
+            if (fc == null) {
+                w.add(part.architecture().key() + ": chopping frequency not given; ripple cannot be checked against the band");
+            } else if (stage.bandHigh() > fc / CHOP_MARGIN) {
+                w.add(part.architecture().key() + ": band edge " + Units.format(stage.bandHigh(), Dimension.FREQUENCY)
+                        + " is not far below the chopping frequency " + Units.format(fc, Dimension.FREQUENCY)
+                        + " (keep fH under a tenth of it): expect ripple and intermodulation in band");
+            }
+        }
+    }
+
+    private static TermResult find(List<TermResult> terms, String key) {
+        for (TermResult t : terms) {
+            if (t.key().equals(key)) {
+                return t;
+            }
+        }
+        throw new IllegalStateException("no term " + key);
+    }
+}

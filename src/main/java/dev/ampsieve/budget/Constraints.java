@@ -1,0 +1,182 @@
+package dev.ampsieve.budget;
+
+import dev.ampsieve.catalog.Headroom;
+import dev.ampsieve.catalog.Part;
+import dev.ampsieve.catalog.Range;
+import dev.ampsieve.stage.Stage;
+import dev.ampsieve.units.Dimension;
+import dev.ampsieve.units.Units;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The hard constraints of error-model.md: a part that fails one is not a candidate, whatever
+ * its error. Each result says what the stage needs, what the part offers, and by how much it
+ * misses. A constraint that cannot be checked (a value missing on either side) passes with
+ * "not checked" in its detail and a warning, so the user sees what was not verified.
+ */
+public final class Constraints {
+    private Constraints() {
+    }
+
+    public static final String SUPPLY = "supply";
+    public static final String TEMPERATURE = "temperature";
+    public static final String COMMON_MODE = "common-mode";
+    public static final String OUTPUT_SWING = "output-swing";
+    public static final String SLEW = "slew";
+    public static final String PRICE = "price";
+
+    /**
+     * @param dcHeadroomV output-referred DC error an AC-coupled stage must still swing around
+     *                    (0 for DC-coupled stages, whose error is inside the limit)
+     * @param warnings    receives a line for each constraint that could not be checked
+     */
+    public static List<ConstraintResult> check(Stage s, Part p, double dcHeadroomV, List<String> warnings) {
+        List<ConstraintResult> out = new ArrayList<>();
+        out.add(supply(s, p, warnings));
+        out.add(temperature(s, p, warnings));
+        out.add(commonMode(s, p, warnings));
+        out.add(outputSwing(s, p, dcHeadroomV, warnings));
+        out.add(slew(s, p, warnings));
+        out.add(price(s, p, warnings));
+        return out;
+    }
+
+    static ConstraintResult supply(Stage s, Part p, List<String> w) {
+        if (s.supplyVoltage() == null) {
+            return new ConstraintResult(SUPPLY, true, "not checked: the stage gives no supply voltage");
+        }
+        if (p.supply() == null) {
+            w.add("supply: the part has no supply range; not checked");
+            return new ConstraintResult(SUPPLY, true, "not checked: no supply range in the catalog");
+        }
+        double lo = s.supplyVoltage() - s.supplyVariation();
+        double hi = s.supplyVoltage() + s.supplyVariation();
+        return range(SUPPLY, lo, hi, p.supply(), Dimension.VOLTAGE, "supply", "rated");
+    }
+
+    static ConstraintResult temperature(Stage s, Part p, List<String> w) {
+        if (p.temperature() == null) {
+            w.add("temperature: the part has no rated range; not checked");
+            return new ConstraintResult(TEMPERATURE, true, "not checked: no rated range in the catalog");
+        }
+        return range(TEMPERATURE, s.tMin(), s.tMax(), p.temperature(), Dimension.TEMPERATURE, "ambient", "rated");
+    }
+
+    /** Needed common-mode range: the stage's, else mid-supply +/- half the common-mode swing. */
+    public static Range neededCommonMode(Stage s) {
+        if (s.commonModeRange() != null) {
+            return s.commonModeRange();
+        }
+        if (s.supplyVoltage() == null) {
+            return null;
+        }
+        double mid = s.supplyVoltage() / 2;
+        return new Range(mid - s.commonModeSwing() / 2, mid + s.commonModeSwing() / 2);
+    }
+
+    /** Needed output range: the stage's, else mid-supply +/- half the full-scale output. */
+    public static Range neededOutput(Stage s) {
+        if (s.outputRange() != null) {
+            return s.outputRange();
+        }
+        if (s.supplyVoltage() == null || s.fullScaleOutput() == null) {
+            return null;
+        }
+        double mid = s.supplyVoltage() / 2;
+        return new Range(mid - s.fullScaleOutput() / 2, mid + s.fullScaleOutput() / 2);
+    }
+
+    static ConstraintResult commonMode(Stage s, Part p, List<String> w) {
+        return headroom(COMMON_MODE, "input common mode", neededCommonMode(s), 0.0, s, p.inputHeadroom(), w);
+    }
+
+    static ConstraintResult outputSwing(Stage s, Part p, double dc, List<String> w) {
+        return headroom(OUTPUT_SWING, "output", neededOutput(s), dc, s, p.outputHeadroom(), w);
+    }
+
+    private static ConstraintResult headroom(String name, String what, Range need, double widen, Stage s,
+            Headroom h, List<String> w) {
+        if (need == null) {
+            return new ConstraintResult(name, true, "not checked: the stage gives no supply voltage"
+                    + (name.equals(OUTPUT_SWING) ? " or full-scale output" : ""));
+        }
+        if (s.supplyVoltage() == null) {
+            return new ConstraintResult(name, true, "not checked: the stage gives no supply voltage");
+        }
+        boolean assumed = h == null;
+        if (assumed) {
+            h = new Headroom(Assumed.HEADROOM_V, Assumed.HEADROOM_V);
+            w.add(name + ": the part gives no " + what + " headroom; "
+                    + Units.format(Assumed.HEADROOM_V, Dimension.VOLTAGE) + " from each rail is assumed");
+        }
+        // the lowest supply of the stage leaves the least room at the top
+        double vLow = s.supplyVoltage() - s.supplyVariation();
+        Range offer = new Range(h.low(), vLow - h.high());
+        Range needed = new Range(need.min() - widen, need.max() + widen);
+        ConstraintResult r = range(name, needed.min(), needed.max(), offer, Dimension.VOLTAGE, what, "reachable");
+        if (assumed) {
+            r = new ConstraintResult(r.name(), r.ok(), r.detail() + " (headroom assumed, not in the catalog)");
+        }
+        if (widen > 0) {
+            return new ConstraintResult(r.name(), r.ok(), r.detail() + " (includes " + Units.format(widen, Dimension.VOLTAGE)
+                    + " of DC error an AC-coupled stage still carries)");
+        }
+        return r;
+    }
+
+    /** Slew rate needed for a full-scale sine at fH: 2 pi fH VFS (Franco, 4th ed., ch. 6 [from memory]). */
+    public static double neededSlew(Stage s) {
+        return s.fullScaleOutput() == null ? Double.NaN : 2 * Math.PI * s.bandHigh() * s.fullScaleOutput();
+    }
+
+    static ConstraintResult slew(Stage s, Part p, List<String> w) {
+        double need = neededSlew(s);
+        if (Double.isNaN(need)) {
+            return new ConstraintResult(SLEW, true, "not checked: the stage gives no full-scale output");
+        }
+        if (p.slew() == null) {
+            w.add("slew: not given; slew rate not checked (needs " + Units.format(need, Dimension.SLEW_RATE) + ")");
+            return new ConstraintResult(SLEW, true, "not checked: no slew rate in the catalog");
+        }
+        boolean ok = p.slew() >= need;
+        String d = "needs " + Units.format(need, Dimension.SLEW_RATE) + " (2π fH VFS); part "
+                + Units.format(p.slew(), Dimension.SLEW_RATE)
+                + (ok ? "" : "; short by " + Units.format(need - p.slew(), Dimension.SLEW_RATE));
+        return new ConstraintResult(SLEW, ok, d);
+    }
+
+    static ConstraintResult price(Stage s, Part p, List<String> w) {
+        if (s.maxPrice() == null) {
+            return new ConstraintResult(PRICE, true, "no price ceiling");
+        }
+        if (p.price() == null) {
+            w.add("price: not given; the price ceiling is not checked");
+            return new ConstraintResult(PRICE, true, "not checked: no price in the catalog");
+        }
+        double unit = p.unitPrice();
+        boolean ok = unit <= s.maxPrice();
+        String cur = p.price().currency();
+        String d = String.format(java.util.Locale.ROOT, "ceiling %.2f %s; part %.2f %s", s.maxPrice(), cur, unit, cur)
+                + (ok ? "" : String.format(java.util.Locale.ROOT, "; over by %.2f %s", unit - s.maxPrice(), cur));
+        return new ConstraintResult(PRICE, ok, d);
+    }
+
+    private static ConstraintResult range(String name, double lo, double hi, Range offer, Dimension d,
+            String needWhat, String offerWhat) {
+        boolean ok = lo >= offer.min() && hi <= offer.max();
+        StringBuilder sb = new StringBuilder();
+        sb.append("needs ").append(needWhat).append(' ').append(Units.format(lo, d)).append(" to ")
+                .append(Units.format(hi, d)).append("; part ").append(offerWhat).append(' ')
+                .append(Units.format(offer.min(), d)).append(" to ").append(Units.format(offer.max(), d));
+        if (!ok) {
+            if (lo < offer.min()) {
+                sb.append("; short by ").append(Units.format(offer.min() - lo, d)).append(" at the low end");
+            }
+            if (hi > offer.max()) {
+                sb.append("; short by ").append(Units.format(hi - offer.max(), d)).append(" at the high end");
+            }
+        }
+        return new ConstraintResult(name, ok, sb.toString());
+    }
+}

@@ -1,0 +1,65 @@
+package dev.ampsieve.budget;
+
+import dev.ampsieve.stage.Stage;
+import dev.ampsieve.units.Dimension;
+import dev.ampsieve.units.Units;
+
+/**
+ * Term 2, offset drift: {@code NG * drift.max * dT}, volts at the output, with
+ * dT = max(|Tmin - 25|, |Tmax - 25|) in °C. Worst at the end of the range farthest from 25 °C.
+ * Where the catalog gives the maximum offset over the rated range, terms 1 and 2 together
+ * never exceed {@code NG * vos.maxOverTemp}: the datasheet drift figure is an average
+ * "box" slope, the over-temperature maximum the guarantee (Franco, 4th ed., ch. 5
+ * [from memory]). A missing drift figure is estimated as vos / T (bipolar pair:
+ * Gray, Hurst, Lewis, Meyer, 5th ed., ch. 3 [from memory]), see {@link PartValues#estimatedDrift}.
+ */
+public final class DriftTerm implements ErrorTerm {
+    public static final String KEY = "drift";
+
+    @Override
+    public String key() {
+        return KEY;
+    }
+
+    @Override
+    public String label() {
+        return "offset drift";
+    }
+
+    @Override
+    public boolean dc() {
+        return true;
+    }
+
+    /** Temperature of the range end farthest from 25 °C (ties: the hot end). */
+    static double farEnd(Stage s) {
+        return Math.abs(s.tMax() - Stage.T_REF) >= Math.abs(s.tMin() - Stage.T_REF) ? s.tMax() : s.tMin();
+    }
+
+    @Override
+    public TermResult evaluate(Stage s, PartValues v) {
+        double ng = s.noiseGain();
+        double dT = s.deltaT();
+        double drift = v.driftBound(dT);
+        double raw = ng * drift * dT;
+        double out = raw;
+        String note = "NG x drift " + Units.format(drift, Dimension.VOLTAGE_DRIFT) + " x "
+                + Units.format(dT, Dimension.NUMBER) + " °C";
+        double cap = v.vosMaxOverTemp();
+        if (!Double.isNaN(cap)) {
+            double left = Math.max(0.0, ng * cap - OffsetTerm.magnitude(s, v));
+            if (out > left) {
+                out = left;
+                note += "; capped: offset + drift <= NG x vos over temperature "
+                        + Units.format(cap, Dimension.VOLTAGE);
+            }
+        }
+        if (v.drift().basis() == Basis.ESTIMATED) {
+            note += " (estimated as vos / T)";
+        } else if (v.drift().basis() == Basis.TYPICAL_ONLY) {
+            note += " (typical, no guaranteed maximum)";
+        }
+        double at = dT == 0 ? Double.NaN : farEnd(s);
+        return ErrorTerm.result(this, s, out, at, v.drift().basis().uncertain(), note);
+    }
+}

@@ -1,0 +1,30 @@
+package dev.ampsieve.budget;
+
+import dev.ampsieve.stage.Stage;
+
+/**
+ * One contribution to the output error of a stage (error-model.md, terms 1 to 10).
+ * Implementations are small, final, stateless, and hold their formula with its published
+ * source in Javadoc; the value returned is the worst-case magnitude at the worst
+ * temperature of the stage's range, output-referred, with the input-referred value
+ * (divided by the noise gain) beside it.
+ */
+public interface ErrorTerm {
+
+    /** Stable key used in JSON and tables: offset, drift, bias, ... */
+    String key();
+
+    /** Words for tables. */
+    String label();
+
+    /** True for static (DC) terms, which an AC-coupled stage counts only toward headroom. */
+    boolean dc();
+
+    /** Evaluates the term for one part (its values already resolved) in one stage. */
+    TermResult evaluate(Stage stage, PartValues values);
+
+    /** Builds a result with the input-referred value derived from the output value. */
+    static TermResult result(ErrorTerm t, Stage s, double outputV, double worstAtC, boolean estimated, String note) {
+        return new TermResult(t.key(), t.label(), outputV, outputV / s.noiseGain(), worstAtC, estimated, note);
+    }
+}

@@ -1,0 +1,39 @@
+package dev.ampsieve.budget;
+
+import dev.ampsieve.stage.Stage;
+import dev.ampsieve.units.Dimension;
+import dev.ampsieve.units.Units;
+
+/**
+ * Term 5, supply rejection: {@code NG * dVs * 10^(-PSRR/20)}, volts at the output, dVs the
+ * peak change of the total supply (V), PSRR the guaranteed minimum in dB; an input-referred
+ * offset of dVs/PSRR, sign unknown (Franco, 4th ed., ch. 5 [from memory]). DC PSRR: switching
+ * ripple needs the PSRR at its frequency, which is lower.
+ */
+public final class PsrrTerm implements ErrorTerm {
+    public static final String KEY = "psrr";
+
+    @Override
+    public String key() {
+        return KEY;
+    }
+
+    @Override
+    public String label() {
+        return "supply rejection";
+    }
+
+    @Override
+    public boolean dc() {
+        return false; // supply variation may be ripple inside the band: kept in the error
+    }
+
+    @Override
+    public TermResult evaluate(Stage s, PartValues v) {
+        Figure db = v.psrrDb();
+        double out = s.noiseGain() * s.supplyVariation() * Decibels.rejected(db.bound());
+        String note = "dVs " + Units.format(s.supplyVariation(), Dimension.VOLTAGE) + ", PSRR "
+                + Units.format(db.bound(), Dimension.DECIBEL, 4) + CmrrTerm.basisNote(db.basis());
+        return ErrorTerm.result(this, s, out, Double.NaN, db.basis().uncertain(), note);
+    }
+}

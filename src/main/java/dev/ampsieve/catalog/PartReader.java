@@ -1,0 +1,503 @@
+package dev.ampsieve.catalog;
+
+import static dev.ampsieve.catalog.CatalogKeys.AOL;
+import static dev.ampsieve.catalog.CatalogKeys.ARCHITECTURE;
+import static dev.ampsieve.catalog.CatalogKeys.CHANNELS;
+import static dev.ampsieve.catalog.CatalogKeys.CHOPPING_FREQUENCY;
+import static dev.ampsieve.catalog.CatalogKeys.CMRR;
+import static dev.ampsieve.catalog.CatalogKeys.CURRENCY;
+import static dev.ampsieve.catalog.CatalogKeys.EN;
+import static dev.ampsieve.catalog.CatalogKeys.EN_CORNER;
+import static dev.ampsieve.catalog.CatalogKeys.FACTORY_TRIM;
+import static dev.ampsieve.catalog.CatalogKeys.GBW;
+import static dev.ampsieve.catalog.CatalogKeys.HIGH;
+import static dev.ampsieve.catalog.CatalogKeys.IB;
+import static dev.ampsieve.catalog.CatalogKeys.ID;
+import static dev.ampsieve.catalog.CatalogKeys.IN;
+import static dev.ampsieve.catalog.CatalogKeys.INPUT;
+import static dev.ampsieve.catalog.CatalogKeys.INPUT_HEADROOM;
+import static dev.ampsieve.catalog.CatalogKeys.IN_CORNER;
+import static dev.ampsieve.catalog.CatalogKeys.IOS;
+import static dev.ampsieve.catalog.CatalogKeys.LONG_TERM_DRIFT;
+import static dev.ampsieve.catalog.CatalogKeys.LOW;
+import static dev.ampsieve.catalog.CatalogKeys.MAX;
+import static dev.ampsieve.catalog.CatalogKeys.MAX_OVER_TEMP;
+import static dev.ampsieve.catalog.CatalogKeys.MIN;
+import static dev.ampsieve.catalog.CatalogKeys.NOISE;
+import static dev.ampsieve.catalog.CatalogKeys.NOTES;
+import static dev.ampsieve.catalog.CatalogKeys.NULL_PINS;
+import static dev.ampsieve.catalog.CatalogKeys.OUTPUT_HEADROOM;
+import static dev.ampsieve.catalog.CatalogKeys.PACKAGES;
+import static dev.ampsieve.catalog.CatalogKeys.PARTS;
+import static dev.ampsieve.catalog.CatalogKeys.PER;
+import static dev.ampsieve.catalog.CatalogKeys.PRICE;
+import static dev.ampsieve.catalog.CatalogKeys.PSRR;
+import static dev.ampsieve.catalog.CatalogKeys.QUANTITY;
+import static dev.ampsieve.catalog.CatalogKeys.QUIESCENT_CURRENT;
+import static dev.ampsieve.catalog.CatalogKeys.SLEW;
+import static dev.ampsieve.catalog.CatalogKeys.SOURCE;
+import static dev.ampsieve.catalog.CatalogKeys.SUPPLY;
+import static dev.ampsieve.catalog.CatalogKeys.TAGS;
+import static dev.ampsieve.catalog.CatalogKeys.TEMPERATURE;
+import static dev.ampsieve.catalog.CatalogKeys.TITLE;
+import static dev.ampsieve.catalog.CatalogKeys.TYP;
+import static dev.ampsieve.catalog.CatalogKeys.UNIT;
+import static dev.ampsieve.catalog.CatalogKeys.VALUE;
+import static dev.ampsieve.catalog.CatalogKeys.VOS;
+import static dev.ampsieve.catalog.CatalogKeys.VOS_DRIFT;
+import static dev.ampsieve.catalog.CatalogKeys.path;
+import static dev.ampsieve.yaml.Fields.join;
+
+import dev.ampsieve.units.Dimension;
+import dev.ampsieve.units.Units;
+import dev.ampsieve.yaml.Fields;
+import dev.ampsieve.yaml.Located;
+import dev.ampsieve.yaml.Node;
+import dev.ampsieve.yaml.Problem;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+import java.util.regex.Pattern;
+
+/**
+ * Reads one part (a YAML mapping) into a {@link Part}, collecting every problem: unknown
+ * keys, missing required fields, wrong units, impossible signs and orderings, implausible
+ * magnitudes (warnings), and the few absences worth a warning. Absent optional values stay
+ * null; the budget decides what to assume and says so.
+ */
+final class PartReader {
+
+    /** What reading one part gave: its id and where it was written (for duplicate checks), the part or null. */
+    record Result(String prefix, String id, Located idAt, Part part, List<Problem> problems) {
+    }
+
+    /** Lowercase words of letters and digits joined by single dashes; no leading dash (it would read as an option). */
+    static final Pattern ID_FORMAT = Pattern.compile("[a-z0-9]+(?:-[a-z0-9]+)*");
+    static final int MAX_ID_LENGTH = 64;
+    static final int MAX_CHANNELS = 64;
+
+    /** An example value for each required key, for the "add ..." half of a message. */
+    private static final Map<String, String> REQUIRED_EXAMPLE = Map.of(
+            ID, "my-part-01",
+            ARCHITECTURE, "standard",
+            INPUT, "bipolar",
+            VOS, "{typ: 0.5 mV, max: 2 mV}",
+            GBW, "1 MHz",
+            SUPPLY, "{min: 4.5 V, max: 36 V}",
+            TEMPERATURE, "{min: -40 C, max: 85 C}",
+            PRICE, "{unit: 1.20, quantity: 1000}");
+
+    /**
+     * Magnitudes beyond which a value is almost surely a slip of unit prefix (mV for uV) or a
+     * misread column; warnings, since unusual parts exist. Limits are common practice, chosen
+     * an order of magnitude or more beyond the parts a precision designer meets.
+     */
+    private record Bound(String path, double above, double below) {
+    }
+
+    private static final List<Bound> PLAUSIBLE = List.of(
+            new Bound(path(VOS, TYP), 100e-3, 0), new Bound(path(VOS, MAX), 100e-3, 0),
+            new Bound(path(VOS, MAX_OVER_TEMP), 100e-3, 0),
+            new Bound(path(VOS_DRIFT, TYP), 100e-6, 0), new Bound(path(VOS_DRIFT, MAX), 100e-6, 0),
+            // fast bipolar inputs reach tens of µA of bias current; 100 µA is beyond that
+            new Bound(path(IB, TYP), 100e-6, 0), new Bound(path(IB, MAX), 100e-6, 0),
+            new Bound(path(IB, MAX_OVER_TEMP), 100e-6, 0),
+            new Bound(path(IOS, TYP), 100e-6, 0), new Bound(path(IOS, MAX), 100e-6, 0),
+            new Bound(path(IOS, MAX_OVER_TEMP), 100e-6, 0),
+            new Bound(path(CMRR, MIN), 200, 0), new Bound(path(CMRR, TYP), 200, 0),
+            new Bound(path(PSRR, MIN), 200, 0), new Bound(path(PSRR, TYP), 200, 0),
+            new Bound(path(AOL, MIN), 200, 0), new Bound(path(AOL, TYP), 200, 0),
+            new Bound(GBW, 10e9, 100),
+            new Bound(SLEW, 1e11, 0),
+            new Bound(path(NOISE, EN), 1e-6, 0.1e-9),
+            new Bound(path(NOISE, IN), 1e-9, 0),
+            new Bound(path(NOISE, EN_CORNER), 1e6, 0), new Bound(path(NOISE, IN_CORNER), 1e6, 0),
+            new Bound(path(PRICE, UNIT), 10_000, 0),
+            new Bound(path(SUPPLY, MAX), 1000, 0),
+            new Bound(path(TEMPERATURE, MAX), 300, 0),
+            new Bound(path(LONG_TERM_DRIFT, VALUE), 10e-3, 0),
+            new Bound(CHOPPING_FREQUENCY, 100e6, 0),
+            new Bound(QUIESCENT_CURRENT, 1, 0));
+
+    private final String prefix;
+    private final Node.Mapping part;
+    private final List<Problem> problems = new ArrayList<>();
+    private final Fields f = new Fields(problems);
+    /** Quantities read so far, by key path (vos.max), and where each was written. */
+    private final Map<String, Double> values = new HashMap<>();
+    private final Map<String, Located> at = new HashMap<>();
+    /** Key paths written in the file, valid or not: an absence warning is only for keys really absent. */
+    private final Set<String> written = new HashSet<>();
+
+    private PartReader(String prefix, Node.Mapping part) {
+        this.prefix = prefix;
+        this.part = part;
+    }
+
+    /**
+     * @param prefix field-path prefix for messages: "" in a single-part file, {@code parts[3]} in a list
+     * @param topLevel true when the part is the whole file (a misspelt {@code parts:} then gets suggested)
+     */
+    static Result read(Node node, String prefix, boolean topLevel) {
+        if (!(node instanceof Node.Mapping m)) {
+            List<Problem> p = List.of(Problem.error(node.at(), prefix,
+                    "expected a part (id: ..., architecture: ..., ...), found " + node.kind(),
+                    "write each part as 'key: value' lines; see catalog-template/part.yaml"));
+            return new Result(prefix, null, node.at(), null, p);
+        }
+        return new PartReader(prefix, m).read(topLevel);
+    }
+
+    private Result read(boolean topLevel) {
+        List<String> suggest = new ArrayList<>(CatalogKeys.PART_KEYS);
+        if (topLevel) {
+            suggest.add(PARTS);
+        }
+        f.onlyKeys(part, prefix, CatalogKeys.PART_KEYS, suggest);
+        for (String key : CatalogKeys.REQUIRED) {
+            f.require(part, prefix, key, REQUIRED_EXAMPLE.get(key));
+        }
+
+        String id = readId();
+        Located idAt = Fields.where(part, ID);
+        String title = f.text(part, prefix, TITLE);
+        String arch = f.choice(part, prefix, ARCHITECTURE, ARCHITECTURES);
+        String input = f.choice(part, prefix, INPUT, INPUTS);
+        String trim = f.choice(part, prefix, FACTORY_TRIM, TRIMS);
+        Boolean nullPins = f.bool(part, prefix, NULL_PINS);
+        Integer channels = f.integer(part, prefix, CHANNELS, 1, MAX_CHANNELS);
+        List<String> packages = f.strings(part, prefix, PACKAGES);
+        List<String> tags = f.strings(part, prefix, TAGS);
+
+        Price price = readPrice();
+        Range supply = readRange(SUPPLY);
+        Range temperature = readRange(TEMPERATURE);
+        Spread vos = readSpread(VOS, true);
+        Node.Mapping drift = section(VOS_DRIFT);
+        Spread vosDrift = drift == null ? null
+                : new Spread(quantity(drift, VOS_DRIFT, TYP), quantity(drift, VOS_DRIFT, MAX), null);
+        Spread ib = readSpread(IB, false);
+        Spread ios = readSpread(IOS, false);
+        MinTyp cmrr = readMinTyp(CMRR);
+        MinTyp psrr = readMinTyp(PSRR);
+        MinTyp aol = readMinTyp(AOL);
+        Double gbw = quantity(part, null, GBW);
+        Double slew = quantity(part, null, SLEW);
+        Noise noise = readNoise();
+        LongTermDrift ltd = readLongTermDrift();
+        Headroom inHead = readHeadroom(INPUT_HEADROOM);
+        Headroom outHead = readHeadroom(OUTPUT_HEADROOM);
+        Double chop = quantity(part, null, CHOPPING_FREQUENCY);
+        Double iq = quantity(part, null, QUIESCENT_CURRENT);
+        String source = f.text(part, prefix, SOURCE);
+        String notes = f.text(part, prefix, NOTES);
+
+        checkSigns();
+        checkOrder();
+        checkPlausible();
+        if (!f.hasErrors()) {
+            warnAbsences(arch, input); // secondary: not worth a line while the part cannot load anyway
+        }
+
+        if (f.hasErrors()) {
+            return new Result(prefix, id, idAt, null, problems);
+        }
+        Part p = new Part(id, title, Architecture.of(arch), InputType.of(input),
+                trim == null ? FactoryTrim.NONE : FactoryTrim.of(trim),
+                nullPins != null && nullPins, channels == null ? 1 : channels, packages, tags, price, supply,
+                temperature, vos, vosDrift, ib, ios, cmrr, psrr, aol, gbw, slew, noise, ltd, inHead, outHead, chop, iq,
+                source, notes, part.at());
+        return new Result(prefix, id, idAt, p, problems);
+    }
+
+    // ------------------------------------------------------------------ reading
+
+    private String readId() {
+        String id = f.text(part, prefix, ID);
+        if (id == null) {
+            return null;
+        }
+        if (id.length() > MAX_ID_LENGTH || !ID_FORMAT.matcher(id).matches()) {
+            f.error(Fields.where(part, ID), join(prefix, ID),
+                    "'" + id + "' is not a valid id (lowercase letters, digits and single dashes, at most "
+                            + MAX_ID_LENGTH + " characters)",
+                    "write for example '" + suggestId(id) + "'");
+            return null;
+        }
+        return id;
+    }
+
+    /** The nearest valid id: lowercase, runs of other characters turned into one dash. */
+    static String suggestId(String id) {
+        String s = id.toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("^-+|-+$", "");
+        if (s.length() > MAX_ID_LENGTH) {
+            s = s.substring(0, MAX_ID_LENGTH).replaceAll("-+$", "");
+        }
+        return s.isEmpty() ? "my-part-01" : s;
+    }
+
+    private static final List<String> ARCHITECTURES = Arrays.stream(Architecture.values()).map(Architecture::key).toList();
+    private static final List<String> INPUTS = Arrays.stream(InputType.values()).map(InputType::key).toList();
+    private static final List<String> TRIMS = Arrays.stream(FactoryTrim.values()).map(FactoryTrim::key).toList();
+
+    /** The mapping at {@code key}, its keys checked; null when absent or not a mapping (with a problem). */
+    private Node.Mapping section(String key) {
+        Node v = part.entries().get(key);
+        if (v == null || v instanceof Node.Scalar s && s.text() == null) {
+            return null;
+        }
+        List<String> sub = CatalogKeys.subKeys(key);
+        if (v instanceof Node.Mapping m) {
+            f.onlyKeys(m, join(prefix, key), sub);
+            return m;
+        }
+        String first = sub.contains(MAX) ? MAX : sub.get(0);
+        Dimension d = CatalogKeys.dimension(path(key, first));
+        // "vos: 2 mV" most likely meant the maximum: show the user's own value in place
+        String example = v instanceof Node.Scalar s ? s.text() : d == null ? "..." : d.example();
+        f.error(v.at(), join(prefix, key), "expected its keys (" + String.join(", ", sub) + ") below it, found " + v.kind(),
+                "write '" + key + ": {" + first + ": " + example + "}'");
+        return null;
+    }
+
+    /** A quantity of the dimension {@link CatalogKeys} gives its path; remembered for the checks. */
+    private Double quantity(Node.Mapping m, String section, String key) {
+        String keyPath = section == null ? key : path(section, key);
+        Dimension d = CatalogKeys.dimension(keyPath);
+        if (m.entries().containsKey(key)) {
+            written.add(keyPath);
+        }
+        Double v = f.quantity(m, section == null ? prefix : join(prefix, section), key, d);
+        if (v != null) {
+            values.put(keyPath, v);
+            at.put(keyPath, Fields.where(m, key));
+        }
+        return v;
+    }
+
+    /** Errors when {@code key} is missing inside a present section. */
+    private void requireIn(Node.Mapping m, String section, String key) {
+        Dimension d = CatalogKeys.dimension(path(section, key));
+        f.require(m, join(prefix, section), key, d == null ? "..." : d.example());
+    }
+
+    private Price readPrice() {
+        Node.Mapping m = section(PRICE);
+        if (m == null) {
+            return null;
+        }
+        requireIn(m, PRICE, UNIT);
+        Double unit = quantity(m, PRICE, UNIT);
+        Integer qty = f.integer(m, join(prefix, PRICE), QUANTITY, 1, 1_000_000_000);
+        String currency = f.text(m, join(prefix, PRICE), CURRENCY);
+        return unit == null ? null : new Price(unit, qty == null ? 1 : qty, currency);
+    }
+
+    private Range readRange(String key) {
+        Node.Mapping m = section(key);
+        if (m == null) {
+            return null;
+        }
+        requireIn(m, key, MIN);
+        requireIn(m, key, MAX);
+        Double min = quantity(m, key, MIN);
+        Double max = quantity(m, key, MAX);
+        return min == null || max == null ? null : new Range(min, max);
+    }
+
+    private Spread readSpread(String key, boolean typOrMaxRequired) {
+        Node.Mapping m = section(key);
+        if (m == null) {
+            return null;
+        }
+        Spread s = new Spread(quantity(m, key, TYP), quantity(m, key, MAX), quantity(m, key, MAX_OVER_TEMP));
+        if (typOrMaxRequired && !m.entries().containsKey(TYP) && !m.entries().containsKey(MAX)) {
+            f.error(m.at(), join(prefix, key), "neither typ nor max is given",
+                    "add 'max: " + CatalogKeys.dimension(path(key, MAX)).example()
+                            + "' from the datasheet's 25 °C column (typ when it gives no max)");
+        }
+        return s.isEmpty() ? null : s;
+    }
+
+    private MinTyp readMinTyp(String key) {
+        Node.Mapping m = section(key);
+        return m == null ? null : new MinTyp(quantity(m, key, MIN), quantity(m, key, TYP));
+    }
+
+    private Noise readNoise() {
+        Node.Mapping m = section(NOISE);
+        if (m == null) {
+            return null;
+        }
+        return new Noise(quantity(m, NOISE, EN), quantity(m, NOISE, EN_CORNER), quantity(m, NOISE, IN),
+                quantity(m, NOISE, IN_CORNER));
+    }
+
+    private LongTermDrift readLongTermDrift() {
+        Node.Mapping m = section(LONG_TERM_DRIFT);
+        if (m == null) {
+            return null;
+        }
+        requireIn(m, LONG_TERM_DRIFT, VALUE);
+        requireIn(m, LONG_TERM_DRIFT, PER);
+        Double value = quantity(m, LONG_TERM_DRIFT, VALUE);
+        Double per = quantity(m, LONG_TERM_DRIFT, PER);
+        return value == null || per == null ? null : new LongTermDrift(value, per);
+    }
+
+    private Headroom readHeadroom(String key) {
+        Node.Mapping m = section(key);
+        if (m == null) {
+            return null;
+        }
+        requireIn(m, key, LOW);
+        requireIn(m, key, HIGH);
+        Double low = quantity(m, key, LOW);
+        Double high = quantity(m, key, HIGH);
+        return low == null || high == null ? null : new Headroom(low, high);
+    }
+
+    // ------------------------------------------------------------------ checks
+
+    private static final String MAGNITUDE_FIX = "write the magnitude without a sign: the value is read as a ± limit";
+
+    private void checkSigns() {
+        for (String s : List.of(VOS, IOS)) {
+            for (String k : List.of(TYP, MAX, MAX_OVER_TEMP)) {
+                nonNegative(path(s, k), MAGNITUDE_FIX);
+            }
+        }
+        nonNegative(path(VOS_DRIFT, TYP), MAGNITUDE_FIX);
+        nonNegative(path(VOS_DRIFT, MAX), MAGNITUDE_FIX);
+        // bias-cancelled and PNP-input parts have a negative typical bias current; the limits are magnitudes
+        String ibFix = "write the limit as a magnitude; only ib.typ may carry a sign (current out of the pin)";
+        nonNegative(path(IB, MAX), ibFix);
+        nonNegative(path(IB, MAX_OVER_TEMP), ibFix);
+        for (String s : List.of(CMRR, PSRR, AOL)) {
+            for (String k : List.of(MIN, TYP)) {
+                nonNegative(path(s, k), "write the level as a positive number of dB (some datasheets print -100 dB for 100 dB)");
+            }
+        }
+        positive(path(SUPPLY, MIN), "write the total supply (V+ minus V-), for example '2.7 V'");
+        positive(path(SUPPLY, MAX), "write the total supply (V+ minus V-), for example '36 V'");
+        positive(GBW, "write the gain-bandwidth product from the datasheet, for example '1.5 MHz'");
+        positive(SLEW, "write the slew rate as a positive value, for example '0.5 V/us'; leave the key out when unknown");
+        positive(path(NOISE, EN), "write the white-noise density, for example '12 nV/rtHz'; leave it out when unknown");
+        positive(path(NOISE, IN), "write the white-noise density, for example '3 fA/rtHz'; leave it out when unknown");
+        nonNegative(path(NOISE, EN_CORNER), "write 0 Hz when there is no 1/f region, else the corner frequency");
+        nonNegative(path(NOISE, IN_CORNER), "write 0 Hz when there is no 1/f region, else the corner frequency");
+        nonNegative(path(PRICE, UNIT), "write the unit price as a positive number");
+        nonNegative(path(LONG_TERM_DRIFT, VALUE), MAGNITUDE_FIX);
+        positive(path(LONG_TERM_DRIFT, PER), "write the time the drift figure is given for, for example '1000 h'");
+        positive(CHOPPING_FREQUENCY, "write the chopping or auto-zero clock, for example '100 kHz'");
+        positive(QUIESCENT_CURRENT, "write the supply current, for example '1.5 mA'");
+    }
+
+    private void checkOrder() {
+        String spreadFix = "typ is the usual value and max the guaranteed limit; check which datasheet column each came from";
+        String tempFix = "max-over-temp covers the whole rated range, which includes 25 °C, so it is at least max;"
+                + " check the columns";
+        for (String s : List.of(VOS, IB, IOS)) {
+            notAbove(path(s, TYP), path(s, MAX), s.equals(IB), spreadFix);
+            if (values.get(path(s, MAX)) == null) {
+                notAbove(path(s, TYP), path(s, MAX_OVER_TEMP), s.equals(IB), spreadFix);
+            }
+            notAbove(path(s, MAX), path(s, MAX_OVER_TEMP), false, tempFix);
+        }
+        notAbove(path(VOS_DRIFT, TYP), path(VOS_DRIFT, MAX), false, spreadFix);
+        for (String s : List.of(CMRR, PSRR, AOL)) {
+            notAbove(path(s, MIN), path(s, TYP), false,
+                    "min is the guaranteed floor and typ the usual value; check which datasheet column each came from");
+        }
+        notAbove(path(SUPPLY, MIN), path(SUPPLY, MAX), false, "swap them: min is the lowest total supply");
+        notAbove(path(TEMPERATURE, MIN), path(TEMPERATURE, MAX), false, "swap them: min is the coldest rated ambient");
+    }
+
+    private void checkPlausible() {
+        for (Bound b : PLAUSIBLE) {
+            Double v = values.get(b.path());
+            if (v == null) {
+                continue;
+            }
+            Dimension d = CatalogKeys.dimension(b.path());
+            if (Math.abs(v) > b.above()) {
+                warn(b.path(), Units.format(v, d) + " is above " + Units.format(b.above(), d)
+                        + ", implausible for an op amp", "check the unit prefix (u, m, k, M) and the column");
+            } else if (v > 0 && v < b.below()) {
+                warn(b.path(), Units.format(v, d) + " is below " + Units.format(b.below(), d)
+                        + ", implausible for an op amp", "check the unit prefix (p, n, u, k, M) and the column");
+            }
+        }
+        Double tmin = values.get(path(TEMPERATURE, MIN));
+        if (tmin != null && tmin < -100) {
+            warn(path(TEMPERATURE, MIN), Units.format(tmin, Dimension.TEMPERATURE)
+                    + " is below -100 °C, implausible for a rated range", "check the sign and the unit");
+        }
+    }
+
+    /** Absences the user should hear about now, because the budget will assume something. */
+    private void warnAbsences(String arch, String input) {
+        if (!written.contains(path(NOISE, EN))) {
+            problems.add(Problem.warning(part.at(), join(prefix, path(NOISE, EN)),
+                    "not given: the voltage-noise term will be zero",
+                    "add 'noise: {en: 12 nV/rtHz}' with the datasheet's white-noise density"));
+        }
+        if (arch == null || input == null) {
+            return;
+        }
+        boolean noDrift = !written.contains(path(VOS_DRIFT, TYP)) && !written.contains(path(VOS_DRIFT, MAX));
+        boolean standardBipolar = arch.equals(Architecture.STANDARD.key()) && input.equals(InputType.BIPOLAR.key());
+        if (noDrift && standardBipolar) {
+            problems.add(Problem.warning(part.at(), join(prefix, VOS_DRIFT),
+                    "not given: drift will be estimated from vos (VOS/T rule, about 3.3 µV/°C per mV) and marked as estimated",
+                    "add 'vos-drift: {typ: ..., max: ...}' when the datasheet gives it"));
+        } else if (noDrift && !written.contains(path(VOS, MAX_OVER_TEMP))) {
+            problems.add(Problem.warning(part.at(), join(prefix, VOS_DRIFT),
+                    "not given, nor vos.max-over-temp: drift over temperature will be an assumed default,"
+                            + " not a datasheet figure (the VOS/T estimate holds for standard bipolar inputs only)",
+                    "add vos-drift or vos.max-over-temp from the datasheet"));
+        }
+    }
+
+    private void nonNegative(String keyPath, String fix) {
+        Double v = values.get(keyPath);
+        if (v != null && v < 0) {
+            err(keyPath, Units.format(v, CatalogKeys.dimension(keyPath)) + " is negative, which is impossible here", fix);
+        }
+    }
+
+    private void positive(String keyPath, String fix) {
+        Double v = values.get(keyPath);
+        if (v != null && v <= 0) {
+            err(keyPath, Units.format(v, CatalogKeys.dimension(keyPath)) + " must be above zero", fix);
+        }
+    }
+
+    /** Error at {@code low} when it exceeds {@code high}; {@code magnitude} compares |low| (signed ib.typ). */
+    private void notAbove(String low, String high, boolean magnitude, String fix) {
+        Double a = values.get(low);
+        Double b = values.get(high);
+        if (a == null || b == null || (magnitude ? Math.abs(a) : a) <= b) {
+            return;
+        }
+        Dimension d = CatalogKeys.dimension(low);
+        err(low, last(low) + " (" + Units.format(a, d) + ") is above " + last(high) + " (" + Units.format(b, d) + ")", fix);
+    }
+
+    private static String last(String keyPath) {
+        return keyPath.substring(keyPath.lastIndexOf('.') + 1);
+    }
+
+    private void err(String keyPath, String message, String fix) {
+        problems.add(Problem.error(at.get(keyPath), join(prefix, keyPath), message, fix));
+    }
+
+    private void warn(String keyPath, String message, String fix) {
+        problems.add(Problem.warning(at.get(keyPath), join(prefix, keyPath), message, fix));
+    }
+}

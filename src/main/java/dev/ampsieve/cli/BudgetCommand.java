@@ -1,0 +1,68 @@
+package dev.ampsieve.cli;
+
+import dev.ampsieve.budget.Budget;
+import dev.ampsieve.budget.BudgetCalculator;
+import dev.ampsieve.catalog.Catalog;
+import dev.ampsieve.catalog.Part;
+import dev.ampsieve.report.BudgetJson;
+import dev.ampsieve.report.BudgetText;
+import dev.ampsieve.stage.Stage;
+import dev.ampsieve.stage.StageLoader;
+import dev.ampsieve.yaml.Fields;
+import java.nio.file.Path;
+import java.util.Optional;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Spec;
+
+/** {@code ampsieve budget PART --stage FILE [--json]}: the full error budget of one part in one stage. */
+@Command(name = "budget", header = "Full error budget of one part in one stage.", mixinStandardHelpOptions = true,
+        description = {"Full output error budget of one catalog part in one stage: every term output- and",
+            "input-referred, worst-case and RSS totals, Monte Carlo yield, trimmed totals, constraints, verdict."})
+public final class BudgetCommand implements Callable<Integer> {
+
+    @ParentCommand
+    RootCommand root;
+
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "PART", description = "Part id from the catalog.")
+    String partId;
+
+    @Option(names = "--stage", required = true, paramLabel = "FILE", description = "Stage file (YAML).")
+    Path stageFile;
+
+    @Option(names = "--json", description = "Print JSON (keys described in README) instead of the table.")
+    boolean json;
+
+    @Override
+    public Integer call() throws Exception {
+        Catalog catalog = root.catalog();
+        Part part = find(catalog, partId);
+        Stage stage = StageLoader.load(stageFile);
+        Budget b = BudgetCalculator.compute(stage, part);
+        String label = stageFile.toString();
+        spec.commandLine().getOut().print(json ? BudgetJson.render(b, label) : BudgetText.render(b, label));
+        return ExitCode.OK;
+    }
+
+    /** The part, or a one-line error naming the closest id. */
+    static Part find(Catalog catalog, String id) {
+        Optional<Part> p = catalog.find(id);
+        if (p.isPresent()) {
+            return p.get();
+        }
+        String near = Fields.closest(id, catalog.parts().stream().map(Part::id).toList());
+        String msg = "no part '" + id + "' in the catalog " + catalog.root()
+                + (near != null ? "; did you mean '" + near + "'?" : "; 'ampsieve check' lists what was read");
+        if (catalog.hasErrors()) {
+            msg += " (some catalog files have errors and were left out: run 'ampsieve check')";
+        }
+        throw new UserException(msg, ExitCode.FINDINGS);
+    }
+}

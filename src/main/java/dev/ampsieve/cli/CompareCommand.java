@@ -1,0 +1,55 @@
+package dev.ampsieve.cli;
+
+import dev.ampsieve.advice.Comparison;
+import dev.ampsieve.budget.BudgetCalculator;
+import dev.ampsieve.catalog.Catalog;
+import dev.ampsieve.catalog.Part;
+import dev.ampsieve.report.CompareReport;
+import dev.ampsieve.stage.Stage;
+import dev.ampsieve.stage.StageLoader;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Spec;
+
+/** {@code ampsieve compare A B --stage FILE}: two budgets side by side, term by term, and which to use. */
+@Command(name = "compare", header = "Two parts in one stage, term by term.", mixinStandardHelpOptions = true,
+        description = {"Two parts in one stage, term by term: which is better and by how much, the totals,",
+            "the cost, and a one-line conclusion."})
+public final class CompareCommand implements Callable<Integer> {
+
+    @ParentCommand
+    RootCommand root;
+
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "A", description = "First part id.")
+    String a;
+
+    @Parameters(index = "1", paramLabel = "B", description = "Second part id.")
+    String b;
+
+    @Option(names = "--stage", required = true, paramLabel = "FILE", description = "Stage file (YAML).")
+    Path stageFile;
+
+    @Option(names = "--json", description = "Print JSON instead of the table.")
+    boolean json;
+
+    @Override
+    public Integer call() throws Exception {
+        Catalog catalog = root.catalog();
+        Part pa = BudgetCommand.find(catalog, a);
+        Part pb = BudgetCommand.find(catalog, b);
+        Stage stage = StageLoader.load(stageFile);
+        Comparison c = Comparison.of(BudgetCalculator.compute(stage, pa), BudgetCalculator.compute(stage, pb));
+        String label = stageFile.toString();
+        String name = String.valueOf(stageFile.getFileName()); // text headers stay within 100 columns
+        spec.commandLine().getOut().print(json ? CompareReport.json(c, label) : CompareReport.text(c, name));
+        return ExitCode.OK;
+    }
+}

@@ -1,0 +1,111 @@
+package dev.ampsieve.report;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import dev.ampsieve.budget.Budget;
+import dev.ampsieve.budget.BudgetCalculator;
+import dev.ampsieve.budget.ConstraintResult;
+import dev.ampsieve.budget.NoiseModel;
+import dev.ampsieve.budget.TermResult;
+import dev.ampsieve.budget.YieldResult;
+import dev.ampsieve.stage.Criterion;
+import dev.ampsieve.stage.Trim;
+
+/**
+ * The budget as JSON, the keys documented in README: volts in SI (suffix V), ratios as
+ * fractions, temperatures in °C; NaN (not applicable) is written as null.
+ */
+public final class BudgetJson {
+    private BudgetJson() {
+    }
+
+    private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+
+    public static ObjectNode tree(Budget b, String stageLabel) {
+        ObjectNode o = MAPPER.createObjectNode();
+        o.put("part", b.part().id());
+        if (stageLabel != null) {
+            o.put("stage", stageLabel);
+        }
+        o.put("topology", b.stage().topology().key());
+        put(o, "noiseGain", b.noiseGain());
+        put(o, "signalGain", b.stage().signalGain());
+        o.put("criterion", b.stage().criterion().toString());
+        ArrayNode terms = o.putArray("terms");
+        for (TermResult t : b.terms()) {
+            ObjectNode n = terms.addObject();
+            n.put("key", t.key());
+            n.put("label", t.label());
+            put(n, "outputV", t.outputV());
+            put(n, "inputV", t.inputV());
+            put(n, "shareOfLimit", b.limitV() > 0 ? t.outputV() / b.limitV() : Double.NaN);
+            put(n, "worstAtC", t.worstAtC());
+            n.put("estimated", t.estimated());
+            n.put("counted", BudgetCalculator.counts(b.stage(), t.key()));
+            n.put("note", t.note());
+        }
+        put(o, "worstCaseV", b.worstCaseV());
+        put(o, "rssV", b.rssV());
+        put(o, "noiseRmsV", b.noiseRmsV());
+        put(o, "noisePeakToPeakV", NoiseModel.PEAK_TO_PEAK * b.noiseRmsV());
+        put(o, "limitV", b.limitV());
+        ObjectNode y = o.putObject("yield");
+        put(y, "value", b.yield().value());
+        put(y, "low", b.yield().low());
+        put(y, "high", b.yield().high());
+        y.put("trials", b.yield().trials());
+        y.put("decided", b.yield().decided());
+        y.put("seed", b.stage().seed());
+        ObjectNode tr = o.putObject("trimmed");
+        Trim trim = BudgetCalculator.trimOf(b.stage());
+        tr.put("method", BudgetText.methodName(trim.method()));
+        tr.put("allowed", trim.allowed());
+        put(tr, "worstCaseV", b.trimmed().worstCaseV());
+        put(tr, "rssV", b.trimmed().rssV());
+        if (b.trimmed().yield() != null) {
+            YieldResult ty = b.trimmed().yield();
+            ObjectNode tyn = tr.putObject("yield");
+            put(tyn, "value", ty.value());
+            put(tyn, "low", ty.low());
+            put(tyn, "high", ty.high());
+            tyn.put("trials", ty.trials());
+            tyn.put("decided", ty.decided());
+        }
+        o.put("verdict", b.verdict().key());
+        if (b.limitingTerm() == null) {
+            o.putNull("limitingTerm");
+        } else {
+            o.put("limitingTerm", b.limitingTerm());
+        }
+        ArrayNode cs = o.putArray("constraints");
+        for (ConstraintResult c : b.constraints()) {
+            ObjectNode n = cs.addObject();
+            n.put("name", c.name());
+            n.put("ok", c.ok());
+            n.put("detail", c.detail());
+        }
+        ArrayNode ws = o.putArray("warnings");
+        b.warnings().forEach(ws::add);
+        o.put("caution", Caution.TEXT);
+        return o;
+    }
+
+    public static String render(Budget b, String stageLabel) {
+        try {
+            return MAPPER.writeValueAsString(tree(b, stageLabel)) + "\n";
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("a JSON tree failed to print", e);
+        }
+    }
+
+    private static void put(ObjectNode n, String key, double v) {
+        if (Double.isFinite(v)) {
+            n.put(key, v);
+        } else {
+            n.putNull(key);
+        }
+    }
+}

@@ -1,0 +1,134 @@
+package dev.ampsieve.report;
+
+import dev.ampsieve.budget.Budget;
+import dev.ampsieve.budget.BudgetCalculator;
+import dev.ampsieve.budget.ConstraintResult;
+import dev.ampsieve.budget.NoiseModel;
+import dev.ampsieve.budget.TermResult;
+import dev.ampsieve.budget.Trimmed;
+import dev.ampsieve.budget.YieldResult;
+import dev.ampsieve.stage.Criterion;
+import dev.ampsieve.stage.Stage;
+import dev.ampsieve.stage.Trim;
+import dev.ampsieve.units.Dimension;
+import dev.ampsieve.units.Units;
+import java.util.Locale;
+
+/** The budget of one part in one stage as a plain-text table for a terminal. */
+public final class BudgetText {
+    private BudgetText() {
+    }
+
+    /**
+     * @param stageLabel how to name the stage in the header (its file), or null
+     */
+    public static String render(Budget b, String stageLabel) {
+        Stage s = b.stage();
+        StringBuilder o = new StringBuilder();
+        double limit = b.limitV();
+        line(o, "Part       %s%s", b.part().id(), b.part().title().isBlank() ? "" : "  (" + b.part().title() + ")");
+        line(o, "Stage      %s%s, noise gain %s, signal gain %s", stageLabel == null ? "" : stageLabel + ": ",
+                s.topology().key(), num(b.noiseGain()), num(s.signalGain()));
+        line(o, "Limit      %s at the output (%s at the input), criterion %s", v(limit), v(limit / b.noiseGain()),
+                s.criterion());
+        o.append('\n');
+        line(o, "%-24s %11s %11s %9s %10s", "term", "output", "input", "of limit", "worst at");
+        boolean anyEstimated = false;
+        boolean anyUncounted = false;
+        for (TermResult t : b.terms()) {
+            boolean counted = BudgetCalculator.counts(s, t.key());
+            String mark = t.estimated() ? "*" : "";
+            anyEstimated |= t.estimated();
+            anyUncounted |= !counted;
+            line(o, "%-24s %11s %11s %9s %10s%s", t.label() + mark, v(t.outputV()), v(t.inputV()),
+                    share(t.outputV(), limit), Double.isNaN(t.worstAtC()) ? "-" : Units.format(t.worstAtC(), Dimension.TEMPERATURE),
+                    counted ? "" : "  headroom only");
+        }
+        if (anyEstimated) {
+            line(o, "* estimated, typical-only or assumed value: see the warnings");
+        }
+        if (anyUncounted) {
+            line(o, "headroom only: AC-coupled stage, the DC term does not count toward the error");
+        }
+        o.append('\n');
+        line(o, "%-24s %11s %11s %9s", "total", "output", "input", "of limit");
+        line(o, "%-24s %11s %11s %9s", "worst-case sum", v(b.worstCaseV()), v(b.worstCaseV() / b.noiseGain()),
+                share(b.worstCaseV(), limit));
+        line(o, "%-24s %11s %11s %9s", "root-sum-square", v(b.rssV()), v(b.rssV() / b.noiseGain()), share(b.rssV(), limit));
+        line(o, "%-24s %11s %11s", "noise rms", v(b.noiseRmsV()), v(b.noiseRmsV() / b.noiseGain()));
+        line(o, "%-24s %11s %11s", "noise peak-to-peak", v(NoiseModel.PEAK_TO_PEAK * b.noiseRmsV()),
+                v(NoiseModel.PEAK_TO_PEAK * b.noiseRmsV() / b.noiseGain()));
+        o.append('\n');
+        line(o, "Yield      %s", yieldLine(b.yield(), s));
+        Trim trim = BudgetCalculator.trimOf(s);
+        for (Trim.Method m : Trim.Method.values()) {
+            Trimmed t = m == trim.method() ? b.trimmed() : BudgetCalculator.trimmed(s, b.part(), m);
+            line(o, "%-10s %s at 25 °C%s: worst-case %s (%s), RSS %s (%s)%s", m == Trim.Method.ONE_POINT ? "Trimmed" : "",
+                    methodName(m), trim.resolution() > 0 ? ", resolution " + v(trim.resolution()) : "",
+                    v(t.worstCaseV()), share(t.worstCaseV(), limit).strip(), v(t.rssV()), share(t.rssV(), limit).strip(),
+                    m == trim.method() ? (trim.allowed() ? "  (the stage's trim)" : "  (the stage's method; trim not allowed)") : "");
+        }
+        if (b.trimmed().yield() != null) {
+            line(o, "%-10s %s", "", "yield after the " + methodName(trim.method()) + " trim: "
+                    + yieldLine(b.trimmed().yield(), s));
+        }
+        o.append('\n');
+        line(o, "Constraints");
+        for (ConstraintResult c : b.constraints()) {
+            line(o, "  %-4s %-13s %s", c.ok() ? "ok" : "FAIL", c.name(), c.detail());
+        }
+        o.append('\n');
+        line(o, "Verdict    %s%s", b.verdict().key(),
+                b.limitingTerm() == null ? "" : "   (largest term: " + b.limitingTerm() + ")");
+        if (!b.warnings().isEmpty()) {
+            o.append('\n');
+            line(o, "Warnings");
+            for (String w : b.warnings()) {
+                line(o, "  - %s", w);
+            }
+        }
+        o.append('\n').append(Caution.TEXT).append('\n');
+        return o.toString();
+    }
+
+    static String yieldLine(YieldResult y, Stage s) {
+        String target = s.criterion().kind() == Criterion.Kind.YIELD ? ", target " + pct(s.criterion().yieldTarget()) : "";
+        return switch (y.decided()) {
+            case "all-pass" -> "100 % (decided without sampling: even the largest possible error is within the limit"
+                    + target + ")";
+            case "none-pass" -> "0 % (decided without sampling: even the smallest possible error exceeds the limit"
+                    + target + ")";
+            default -> pct(y.value()) + " (95 % interval " + pct(y.low()) + " to " + pct(y.high()) + ", "
+                    + (y.trials() < s.trials() ? y.trials() + " of " + s.trials() + " units, stopped once the interval cleared the target"
+                            : y.trials() + " units")
+                    + ", seed " + s.seed() + target + ")";
+        };
+    }
+
+    static String methodName(Trim.Method m) {
+        return m == Trim.Method.TWO_POINT ? "two-point" : "one-point";
+    }
+
+    static String pct(double ratio) {
+        return String.format(Locale.ROOT, "%.3f %%", 100 * ratio);
+    }
+
+    private static String share(double v, double limit) {
+        if (!(limit > 0)) {
+            return "-";
+        }
+        return String.format(Locale.ROOT, "%.1f %%", 100 * v / limit);
+    }
+
+    private static String v(double volts) {
+        return Units.format(volts, Dimension.VOLTAGE);
+    }
+
+    private static String num(double x) {
+        return Units.format(x, Dimension.NUMBER, 6);
+    }
+
+    private static void line(StringBuilder o, String fmt, Object... args) {
+        o.append(String.format(Locale.ROOT, fmt, args)).append('\n');
+    }
+}

@@ -1,0 +1,110 @@
+package dev.ampsieve.report;
+
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import dev.ampsieve.advice.Candidate;
+import dev.ampsieve.advice.Comparison;
+import dev.ampsieve.budget.Budget;
+import dev.ampsieve.budget.TermResult;
+import dev.ampsieve.units.Dimension;
+import dev.ampsieve.units.Units;
+
+/** What {@code ampsieve compare} prints: two budgets side by side and the conclusion. */
+public final class CompareReport {
+    private CompareReport() {
+    }
+
+    private static String better(Comparison c, String side) {
+        return switch (side) {
+            case "a" -> c.a().id();
+            case "b" -> c.b().id();
+            default -> "=";
+        };
+    }
+
+    private static String by(double diff, double ratio) {
+        if (diff == 0) {
+            return "";
+        }
+        String r = Double.isInfinite(ratio) ? "" : " (" + Units.format(ratio, Dimension.NUMBER) + " times)";
+        return Figures.volts(diff) + r;
+    }
+
+    public static String text(Comparison c, String stageLabel) {
+        StringBuilder o = new StringBuilder();
+        o.append(StageLine.of(c.a().budget().stage(), stageLabel)).append('\n').append('\n');
+        String a = c.a().id();
+        String b = c.b().id();
+        TextTable t = new TextTable().left("output error").right(a).right(b).left("better").flex("by");
+        for (Comparison.TermDelta d : c.terms()) {
+            t.row(d.label(), Figures.volts(d.aV()), Figures.volts(d.bV()), better(c, d.better()), by(d.differenceV(), d.ratio()));
+        }
+        Budget ba = c.a().budget();
+        Budget bb = c.b().budget();
+        total(t, c, "worst-case sum", ba.worstCaseV(), bb.worstCaseV());
+        total(t, c, "root-sum-square", ba.rssV(), bb.rssV());
+        if (ba.trimmed() != null && bb.trimmed() != null) {
+            total(t, c, "worst-case after trim", ba.trimmed().worstCaseV(), bb.trimmed().worstCaseV());
+        }
+        t.lines(TextTable.WIDTH).forEach(l -> o.append(l).append('\n'));
+        o.append('\n');
+        TextTable s = new TextTable().left("").right(a).right(b);
+        s.row("limit", Figures.volts(ba.limitV()), Figures.volts(bb.limitV()));
+        s.row("yield as it is", ba.yield() == null ? Figures.NONE : Figures.yield(ba.yield().value()),
+                bb.yield() == null ? Figures.NONE : Figures.yield(bb.yield().value()));
+        s.row("verdict", verdict(c.a()), verdict(c.b()));
+        s.row("unit cost", cost(c.a()), cost(c.b()));
+        s.row("margin", Figures.percent(c.a().margin()), Figures.percent(c.b().margin()));
+        s.row("largest term", largest(ba), largest(bb));
+        s.lines(TextTable.WIDTH).forEach(l -> o.append(l).append('\n'));
+        o.append('\n').append(c.conclusion()).append('\n');
+        o.append('\n').append(Caution.TEXT).append('\n');
+        return o.toString();
+    }
+
+    private static void total(TextTable t, Comparison c, String label, double x, double y) {
+        Comparison.TermDelta d = Comparison.delta(label, label, x, y);
+        t.row(label, Figures.volts(x), Figures.volts(y), better(c, d.better()), by(d.differenceV(), d.ratio()));
+    }
+
+    private static String verdict(Candidate c) {
+        if (!c.constraintsMet()) {
+            return "rejected";
+        }
+        return c.verdict().key();
+    }
+
+    private static String cost(Candidate c) {
+        return Figures.money(c.effectiveCost()) + (c.currency().isEmpty() ? "" : " " + c.currency())
+                + (c.trimmed() ? " incl. trim" : "");
+    }
+
+    private static String largest(Budget b) {
+        if (b.limitingTerm() == null) {
+            return Figures.NONE;
+        }
+        TermResult t = b.term(b.limitingTerm());
+        return t == null ? b.limitingTerm() : t.label();
+    }
+
+    public static String json(Comparison c, String stageLabel) {
+        ObjectNode o = JsonSupport.object();
+        JsonSupport.put(o, "stage", stageLabel);
+        o.set("a", RankReport.candidate(c.a()));
+        o.set("b", RankReport.candidate(c.b()));
+        ArrayNode terms = o.putArray("terms");
+        for (Comparison.TermDelta d : c.terms()) {
+            ObjectNode n = terms.addObject();
+            n.put("key", d.key());
+            n.put("label", d.label());
+            JsonSupport.put(n, "aV", d.aV());
+            JsonSupport.put(n, "bV", d.bV());
+            n.put("better", d.better().equals("=") ? "=" : better(c, d.better()));
+            JsonSupport.put(n, "differenceV", d.differenceV());
+            JsonSupport.put(n, "ratio", d.ratio());
+        }
+        JsonSupport.put(o, "preferred", c.preferred());
+        o.put("conclusion", c.conclusion());
+        return JsonSupport.render(o);
+    }
+}

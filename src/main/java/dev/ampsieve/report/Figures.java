@@ -1,0 +1,98 @@
+package dev.ampsieve.report;
+
+import dev.ampsieve.catalog.Part;
+import dev.ampsieve.units.Dimension;
+import dev.ampsieve.units.Units;
+import java.util.Locale;
+
+/** Short catalog figures for tables: "n/a"-free, a dash when the catalog has no value. */
+final class Figures {
+    private Figures() {
+    }
+
+    static final String NONE = "-";
+
+    static String q(Double v, Dimension d) {
+        return v == null || !Double.isFinite(v) ? NONE : Units.format(v, d);
+    }
+
+    /** Guaranteed maximum, else typical (as the query language compares them). */
+    static Double guaranteed(dev.ampsieve.catalog.Spread s) {
+        if (s == null) {
+            return null;
+        }
+        Double v = s.max() != null ? s.max() : s.typ();
+        return v == null ? null : Math.abs(v);
+    }
+
+    static String vos(Part p) {
+        return q(guaranteed(p.vos()), Dimension.VOLTAGE);
+    }
+
+    static String drift(Part p) {
+        return q(guaranteed(p.vosDrift()), Dimension.VOLTAGE_DRIFT);
+    }
+
+    static String ib(Part p) {
+        return q(guaranteed(p.ib()), Dimension.CURRENT);
+    }
+
+    static String gbw(Part p) {
+        return p.gbw() > 0 ? Units.format(p.gbw(), Dimension.FREQUENCY) : NONE;
+    }
+
+    static String en(Part p) {
+        return q(p.noise().en(), Dimension.VOLTAGE_DENSITY);
+    }
+
+    /** "2.7-5.5 V": the rated total supply. */
+    static String supply(Part p) {
+        if (p.supply() == null) {
+            return NONE;
+        }
+        return plain(p.supply().min()) + "-" + plain(p.supply().max()) + " V";
+    }
+
+    static String price(Part p) {
+        return p.price() == null ? NONE : money(p.price().unit());
+    }
+
+    static String money(double x) {
+        return Double.isFinite(x) ? String.format(Locale.ROOT, "%.2f", x) : NONE;
+    }
+
+    static String volts(double v) {
+        return Double.isFinite(v) ? Units.format(v, Dimension.VOLTAGE) : NONE;
+    }
+
+    static String percent(double ratio) {
+        return Double.isFinite(ratio) ? String.format(Locale.ROOT, "%.0f %%", 100 * ratio) : NONE;
+    }
+
+    /** Yield with the precision a high yield needs: 99.97 %. */
+    static String yield(double ratio) {
+        if (!Double.isFinite(ratio)) {
+            return NONE;
+        }
+        return ratio >= 0.99 && ratio < 1 ? String.format(Locale.ROOT, "%.2f %%", 100 * ratio)
+                : String.format(Locale.ROOT, "%.1f %%", 100 * ratio);
+    }
+
+    /** A voltage number without trailing zeros: 2.7, 36, 1.8. */
+    private static String plain(double v) {
+        String s = String.format(Locale.ROOT, "%.2f", v);
+        s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
+        return s;
+    }
+
+    /** One currency for a column header when all parts share it, else empty. */
+    static String currency(java.util.Collection<Part> parts) {
+        java.util.Set<String> c = new java.util.TreeSet<>();
+        for (Part p : parts) {
+            if (p.price() != null) {
+                c.add(p.price().currency());
+            }
+        }
+        return c.size() == 1 ? c.iterator().next() : "";
+    }
+}

@@ -1,0 +1,289 @@
+package dev.ampsieve.report;
+
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import dev.ampsieve.advice.Advice;
+import dev.ampsieve.advice.Candidate;
+import dev.ampsieve.advice.Change;
+import dev.ampsieve.advice.NoFitAdvice;
+import dev.ampsieve.advice.Ranking;
+import dev.ampsieve.advice.Rejected;
+import dev.ampsieve.advice.TrimAdvice;
+import dev.ampsieve.advice.ZeroDriftAdvice;
+import dev.ampsieve.budget.TermResult;
+import dev.ampsieve.budget.Verdict;
+import dev.ampsieve.budget.YieldResult;
+import dev.ampsieve.stage.Criterion;
+import java.util.List;
+import java.util.Locale;
+import java.util.Set;
+
+/** What {@code ampsieve rank} prints: candidates, Pareto front, rejected parts, advice; text, CSV or JSON. */
+public final class RankReport {
+    private RankReport() {
+    }
+
+    private static String verdict(Candidate c) {
+        return switch (c.verdict()) {
+            case FITS -> "fits";
+            case FITS_AFTER_TRIM -> "+trim";
+            case NO_FIT -> "no";
+        };
+    }
+
+    private static String verdictWord(Candidate c) {
+        return c.verdict() == Verdict.NO_FIT ? "no fit" : verdict(c);
+    }
+
+    private static String limiting(Candidate c) {
+        String key = c.budget().limitingTerm();
+        if (key == null) {
+            return Figures.NONE;
+        }
+        TermResult t = c.budget().term(key);
+        // the engine names the largest term of the untrimmed budget
+        return (t == null ? key : t.label()) + (c.trimmed() ? " †" : "");
+    }
+
+    /** Yield of the part as ranked: after the stage's trim when it needs one. */
+    private static String yieldCell(Candidate c) {
+        YieldResult y = c.trimmed() ? c.budget().trimmed().yield() : c.budget().yield();
+        return y == null ? Figures.NONE : Figures.yield(y.value());
+    }
+
+    private static double worstCase(Candidate c) {
+        return c.trimmed() ? c.budget().trimmed().worstCaseV() : c.budget().worstCaseV();
+    }
+
+    private static double rss(Candidate c) {
+        return c.trimmed() ? c.budget().trimmed().rssV() : c.budget().rssV();
+    }
+
+    private static String errorName(Ranking r) {
+        return r.stage().criterion().kind() == Criterion.Kind.WORST_CASE ? "worst-case" : "RSS";
+    }
+
+    public static String text(Ranking r, String stageLabel, String query, int top) {
+        StringBuilder o = new StringBuilder();
+        o.append(StageLine.of(r.stage(), stageLabel)).append('\n');
+        if (query != null && !query.isBlank()) {
+            o.append("Parts matching '").append(query).append("'\n");
+        }
+        List<Candidate> shown = r.candidates().stream().limit(Math.max(0, top)).toList();
+        Set<String> front = Set.copyOf(r.paretoIds());
+        o.append('\n').append("Candidates (").append(r.candidates().size()).append(" budgeted");
+        if (shown.size() < r.candidates().size()) {
+            o.append(", first ").append(shown.size()).append(" shown; --top N for more");
+        }
+        o.append("; ").append(r.rejected().size()).append(" rejected)\n");
+        if (!shown.isEmpty()) {
+            String cur = Figures.currency(r.candidates().stream().map(Candidate::part).toList());
+            TextTable t = new TextTable().right("#").left("part").left("verdict")
+                    .right(cur.isEmpty() ? "cost" : "cost " + cur).right("worst-case").right("RSS").right("yield")
+                    .right("margin").flex("largest term").left("P");
+            int i = 0;
+            for (Candidate c : shown) {
+                t.row(Integer.toString(++i), c.id(), verdict(c),
+                        Figures.money(c.effectiveCost()) + (cur.isEmpty() && c.part().price() != null ? " " + c.currency() : ""),
+                        Figures.volts(worstCase(c)), Figures.volts(rss(c)), yieldCell(c), Figures.percent(c.margin()),
+                        limiting(c), front.contains(c.id()) ? "*" : "");
+            }
+            t.lines(TextTable.WIDTH).forEach(l -> o.append(l).append('\n'));
+            o.append("verdict: fits as it is, +trim after the stage's trim (its cost and figures include it), no.\n");
+            o.append("margin: (limit - ").append(r.stage().criterion().kind() == Criterion.Kind.WORST_CASE
+                    ? "worst-case" : "RSS").append(") / limit.  †: largest before the trim.  P: on the Pareto front.\n");
+        }
+        if (!r.pareto().isEmpty()) {
+            // error against cost: each step up in cost buys a smaller error
+            o.append('\n').append("Pareto front of error against cost (no other part is cheaper and better)\n");
+            TextTable p = new TextTable().left("part").right("cost").right(errorName(r)).left("verdict");
+            for (Candidate c : r.pareto()) {
+                p.row(c.id(), Figures.money(c.effectiveCost()) + (c.currency().isEmpty() ? "" : " " + c.currency()),
+                        Figures.volts(c.errorV()), verdictWord(c) + (c.trimmed() ? " (trim included)" : ""));
+            }
+            p.lines(TextTable.WIDTH).forEach(l -> o.append(l).append('\n'));
+        }
+        if (!r.rejected().isEmpty()) {
+            o.append('\n').append("Rejected (a hard constraint fails; --json or --csv lists every failure)\n");
+            TextTable t = new TextTable().left("part").flex("reason").wrapFlex();
+            for (Rejected x : r.rejected()) {
+                t.row(x.id(), x.shortReason());
+            }
+            t.lines(TextTable.WIDTH).forEach(l -> o.append(l).append('\n'));
+        }
+        o.append('\n').append("Advice\n");
+        for (String l : r.advice().lines()) {
+            o.append("  ").append(l).append('\n');
+        }
+        Candidate pick = r.advice().pick();
+        if (pick != null && !pick.budget().warnings().isEmpty()) {
+            o.append('\n').append("Notes from the budget of ").append(pick.id())
+                    .append(" (ampsieve budget ").append(pick.id()).append(" shows it in full)\n");
+            pick.budget().warnings().forEach(w -> o.append("  - ").append(w).append('\n'));
+        }
+        o.append('\n').append(Caution.TEXT).append('\n');
+        return o.toString();
+    }
+
+    /** CSV: one row per candidate in ranking order, then one per rejected part; the caution as a last '#' line. */
+    public static String csv(Ranking r, int top) {
+        StringBuilder o = new StringBuilder();
+        o.append("rank,part,verdict,effective_cost,currency,error_v,margin,worst_case_v,rss_v,trimmed,"
+                + "trimmed_worst_case_v,trimmed_rss_v,yield,yield_low,yield_high,limiting_term,pareto,reason\n");
+        Set<String> front = Set.copyOf(r.paretoIds());
+        int i = 0;
+        for (Candidate c : r.candidates().stream().limit(Math.max(0, top)).toList()) {
+            YieldResult y = c.budget().yield();
+            o.append(String.join(",", List.of(Integer.toString(++i), csv(c.id()), c.verdict().key(), num(c.effectiveCost()),
+                    csv(c.currency()), num(c.errorV()), num(c.margin()), num(c.budget().worstCaseV()), num(c.budget().rssV()),
+                    Boolean.toString(c.trimmed()), num(c.budget().trimmed().worstCaseV()), num(c.budget().trimmed().rssV()),
+                    y == null ? "" : num(y.value()), y == null ? "" : num(y.low()), y == null ? "" : num(y.high()),
+                    csv(c.budget().limitingTerm()), Boolean.toString(front.contains(c.id())), ""))).append('\n');
+        }
+        for (Rejected x : r.rejected()) {
+            o.append(String.join(",", List.of("", csv(x.id()), "rejected", num(x.part().price() == null ? Double.NaN
+                    : x.part().price().unit()), csv(x.part().price() == null ? "" : x.part().price().currency()),
+                    "", "", "", "", "", "", "", "", "", "", "", "false", csv(x.reason())))).append('\n');
+        }
+        o.append("# ").append(Caution.TEXT).append('\n');
+        return o.toString();
+    }
+
+    private static String num(double v) {
+        return Double.isFinite(v) ? String.format(Locale.ROOT, "%.6g", v) : "";
+    }
+
+    /** RFC 4180 quoting when needed. */
+    private static String csv(String s) {
+        if (s == null) {
+            return "";
+        }
+        if (s.contains(",") || s.contains("\"") || s.contains("\n")) {
+            return "\"" + s.replace("\"", "\"\"") + "\"";
+        }
+        return s;
+    }
+
+    /**
+     * JSON: {stage, query, candidates[{part, verdict, effectiveCost, worstCaseV, rssV, yield,
+     * limitingTerm, ...}], rejected[{part, reason}], pareto[ids], advice{...}, caution}.
+     */
+    public static String json(Ranking r, String stageLabel, String query, int top) {
+        ObjectNode o = JsonSupport.object();
+        JsonSupport.put(o, "stage", stageLabel);
+        JsonSupport.put(o, "query", query);
+        o.put("criterion", r.stage().criterion().toString());
+        JsonSupport.put(o, "limitV", r.stage().limitVolts());
+        o.put("quantity", r.stage().quantity());
+        o.put("budgeted", r.candidates().size());
+        ArrayNode cands = o.putArray("candidates");
+        for (Candidate c : r.candidates().stream().limit(Math.max(0, top)).toList()) {
+            cands.add(candidate(c));
+        }
+        ArrayNode rej = o.putArray("rejected");
+        for (Rejected x : r.rejected()) {
+            ObjectNode n = rej.addObject();
+            n.put("part", x.id());
+            n.put("reason", x.reason());
+        }
+        ArrayNode pareto = o.putArray("pareto");
+        r.paretoIds().forEach(pareto::add);
+        o.set("advice", advice(r.advice()));
+        return JsonSupport.render(o);
+    }
+
+    static ObjectNode candidate(Candidate c) {
+        ObjectNode n = JsonSupport.object();
+        n.put("part", c.id());
+        n.put("verdict", c.verdict().key());
+        JsonSupport.put(n, "effectiveCost", c.effectiveCost());
+        JsonSupport.put(n, "currency", c.currency().isEmpty() ? null : c.currency());
+        JsonSupport.put(n, "worstCaseV", c.budget().worstCaseV());
+        JsonSupport.put(n, "rssV", c.budget().rssV());
+        putYield(n, "yield", c.budget().yield());
+        if (c.budget().trimmed() != null && c.budget().trimmed().yield() != null) {
+            putYield(n, "trimmedYield", c.budget().trimmed().yield());
+        }
+        JsonSupport.put(n, "limitingTerm", c.budget().limitingTerm());
+        n.put("trimmed", c.trimmed());
+        if (c.budget().trimmed() != null) {
+            JsonSupport.put(n, "trimmedWorstCaseV", c.budget().trimmed().worstCaseV());
+            JsonSupport.put(n, "trimmedRssV", c.budget().trimmed().rssV());
+        }
+        JsonSupport.put(n, "errorV", c.errorV());
+        JsonSupport.put(n, "margin", c.margin());
+        n.put("selfCorrecting", c.part().selfCorrecting());
+        ArrayNode warnings = n.putArray("warnings");
+        c.budget().warnings().forEach(warnings::add);
+        return n;
+    }
+
+    private static ObjectNode ref(Candidate c) {
+        if (c == null) {
+            return null;
+        }
+        ObjectNode n = JsonSupport.object();
+        n.put("part", c.id());
+        JsonSupport.put(n, "effectiveCost", c.effectiveCost());
+        JsonSupport.put(n, "errorV", c.errorV());
+        JsonSupport.put(n, "margin", c.margin());
+        n.put("trimmed", c.trimmed());
+        return n;
+    }
+
+    static ObjectNode advice(Advice a) {
+        ObjectNode n = JsonSupport.object();
+        n.set("pick", ref(a.pick()));
+        n.set("cheapestAsIs", ref(a.cheapestAsIs()));
+        TrimAdvice t = a.trim();
+        ObjectNode tn = n.putObject("trim");
+        tn.put("status", t.status().key());
+        tn.set("withTrim", ref(t.withTrim()));
+        tn.set("asIs", ref(t.asIs()));
+        JsonSupport.put(tn, "savingPerUnit", t.savingPerUnit());
+        JsonSupport.put(tn, "savingTotal", t.savingTotal());
+        ZeroDriftAdvice z = a.zeroDrift();
+        ObjectNode zn = n.putObject("zeroDrift");
+        zn.put("status", z.status().key());
+        zn.put("warranted", z.warranted());
+        zn.set("selfCorrecting", ref(z.selfCorrecting()));
+        zn.set("standard", ref(z.standard()));
+        JsonSupport.put(zn, "savingPerUnit", z.savingPerUnit());
+        JsonSupport.put(zn, "savingTotal", z.savingTotal());
+        ArrayNode cav = zn.putArray("caveats");
+        z.caveats().forEach(cav::add);
+        NoFitAdvice nf = a.noFit();
+        if (nf == null) {
+            n.putNull("noFit");
+        } else {
+            ObjectNode f = n.putObject("noFit");
+            f.set("closest", ref(nf.closest()));
+            JsonSupport.put(f, "limitingTerm", nf.limitingTerm());
+            JsonSupport.put(f, "limitingV", nf.limitingV());
+            ArrayNode ch = f.putArray("changes");
+            for (Change c : nf.changes()) {
+                ObjectNode cn = ch.addObject();
+                cn.put("kind", c.kind().key());
+                cn.put("text", c.text());
+                ObjectNode vals = cn.putObject("values");
+                c.values().forEach((k, v) -> JsonSupport.put(vals, k, v));
+            }
+        }
+        ArrayNode lines = n.putArray("lines");
+        a.lines().forEach(lines::add);
+        return n;
+    }
+
+    private static void putYield(ObjectNode n, String key, YieldResult y) {
+        if (y == null) {
+            n.putNull(key);
+            return;
+        }
+        ObjectNode yn = n.putObject(key);
+        JsonSupport.put(yn, "value", y.value());
+        JsonSupport.put(yn, "low", y.low());
+        JsonSupport.put(yn, "high", y.high());
+        yn.put("trials", y.trials());
+        JsonSupport.put(yn, "decided", y.decided());
+    }
+}

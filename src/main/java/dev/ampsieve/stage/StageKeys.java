@@ -1,0 +1,213 @@
+package dev.ampsieve.stage;
+
+import dev.ampsieve.units.Dimension;
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.function.Function;
+import java.util.stream.Collectors;
+
+/**
+ * Every key a stage file may hold, in one place: what it measures, its default, an example
+ * and why the tool asks for it. The loader takes its key lists from here, the writer its
+ * comments, and the interactive shell its questions and completions.
+ *
+ * <p>Paths are dotted: {@code temperature.min} is {@code min} inside the {@code temperature}
+ * block. {@link #ORDERED} starts with what matters most (gain, temperature range, limit).
+ */
+public final class StageKeys {
+
+    private StageKeys() {
+    }
+
+    /** What kind of value a key takes. */
+    public enum Kind {
+        /** a value with a unit; {@link Key#dimension()} says which */
+        QUANTITY,
+        /** a plain number (no unit) */
+        NUMBER,
+        /** a whole number */
+        INTEGER,
+        /** true or false */
+        BOOLEAN,
+        /** one word of {@link Key#choices()} */
+        CHOICE,
+        /** worst-case | rss | yield P % */
+        CRITERION,
+        /** a gain: a plain number, or decibels */
+        GAIN
+    }
+
+    /**
+     * One stage key.
+     *
+     * @param path        dotted path, e.g. {@code temperature.min}
+     * @param kind        what kind of value it takes
+     * @param dimension   for {@link Kind#QUANTITY}: what it measures; otherwise null
+     * @param choices     for {@link Kind#CHOICE} and {@link Kind#CRITERION}: the allowed words
+     * @param defaultText the default in words ("required" when there is none)
+     * @param example     a well-formed value
+     * @param why         one line: why the tool asks
+     */
+    public record Key(String path, Kind kind, Dimension dimension, List<String> choices, String defaultText,
+                      String example, String why) {
+        public Key {
+            choices = List.copyOf(choices);
+        }
+
+        /** The block this key sits in ({@code temperature}), or "" at the top level. */
+        public String section() {
+            int dot = path.indexOf('.');
+            return dot < 0 ? "" : path.substring(0, dot);
+        }
+
+        /** The key's own name inside its block ({@code min}). */
+        public String name() {
+            int dot = path.indexOf('.');
+            return dot < 0 ? path : path.substring(dot + 1);
+        }
+    }
+
+    /** Seed used when the stage gives none, so two runs of the same files agree. */
+    public static final long DEFAULT_SEED = 20_261_201L;
+    public static final double DEFAULT_RF = 10e3;
+    public static final double DEFAULT_T_MIN = 0.0;
+    public static final double DEFAULT_T_MAX = 70.0;
+    public static final double DEFAULT_BAND_LOW = 0.1;
+    public static final double DEFAULT_BAND_HIGH = 10.0;
+    /** Datasheet maximum read as 3 sigma: common practice (reference-checks.md §7). */
+    public static final double DEFAULT_MAX_TO_SIGMA = 3.0;
+    public static final int DEFAULT_TRIALS = 20_000;
+    public static final int MIN_TRIALS = 100;
+    public static final int MAX_TRIALS = 10_000_000;
+    public static final int DEFAULT_QUANTITY = 1000;
+    public static final int MAX_QUANTITY = 1_000_000_000;
+
+    public static final List<String> TOPOLOGIES = List.of("non-inverting", "inverting", "follower");
+    public static final List<String> CRITERIA = List.of("worst-case", "rss", "yield 99.9 %");
+    public static final List<String> TRIM_METHODS = List.of("one-point", "two-point");
+
+    private static Key q(String path, Dimension d, String def, String example, String why) {
+        return new Key(path, Kind.QUANTITY, d, List.of(), def, example, why);
+    }
+
+    private static Key k(String path, Kind kind, List<String> choices, String def, String example, String why) {
+        return new Key(path, kind, null, choices, def, example, why);
+    }
+
+    /** All keys, most important first. */
+    public static final List<Key> ORDERED = List.of(
+            k("gain", Kind.GAIN, List.of(), "required unless rf and rg are given", "100",
+                    "every input error reaches the output multiplied by the noise gain; non-inverting: 1 + rf/rg, "
+                            + "inverting: the ratio rf/rg (a sign is ignored), also as '40 dB'"),
+            q("temperature.min", Dimension.TEMPERATURE, "0 C", "-40 C",
+                    "drift terms grow with the distance from 25 C; the part must be rated down to here"),
+            q("temperature.max", Dimension.TEMPERATURE, "70 C", "85 C",
+                    "drift and FET bias currents grow with heat; the part must be rated up to here"),
+            q("limit", Dimension.VOLTAGE, "required", "1 mV",
+                    "the largest error allowed at the output; every part is judged against it "
+                            + "(or give one of limit.input, limit.percent-of-full-scale, limit.lsb)"),
+            q("limit.input", Dimension.VOLTAGE, "none", "10 uV",
+                    "the limit referred to the input instead; multiplied by the noise gain"),
+            q("limit.percent-of-full-scale", Dimension.RATIO, "none", "0.1 %",
+                    "the limit as a share of full-scale-output (a bare number is read as percent)"),
+            k("limit.lsb", Kind.NUMBER, List.of(), "none", "0.5",
+                    "the limit in converter codes: lsb x reference / 2^bits"),
+            k("limit.bits", Kind.INTEGER, List.of(), "none", "16", "converter resolution for limit.lsb"),
+            q("limit.reference", Dimension.VOLTAGE, "none", "2.5 V", "converter reference (full span) for limit.lsb"),
+            k("topology", Kind.CHOICE, TOPOLOGIES, "non-inverting", "non-inverting",
+                    "sets the noise gain, how the source resistance enters and the common-mode swing"),
+            q("rf", Dimension.RESISTANCE, "10 kohm (follower: 0)", "100 kohm",
+                    "bias current times rf appears at the output, and rf adds thermal noise"),
+            q("rg", Dimension.RESISTANCE, "derived from gain and rf", "1 kohm",
+                    "with rf sets the gain; give it with rf instead of 'gain'"),
+            q("source-resistance", Dimension.RESISTANCE, "0 ohm", "350 ohm",
+                    "bias current and current noise flow through it; its thermal noise adds"),
+            q("balance-resistance", Dimension.RESISTANCE, "0 ohm", "1 kohm",
+                    "a resistor from the + input to the reference; equal to rf||rg it cancels matched bias currents"),
+            q("full-scale-output", Dimension.VOLTAGE, "none", "2.5 V",
+                    "gain errors (open-loop gain, bandwidth, resistors) scale with it; slew rate needs it"),
+            q("band.low", Dimension.FREQUENCY, "0.1 Hz", "0.1 Hz",
+                    "lower edge for integrating 1/f noise (must be above 0 Hz)"),
+            q("band.high", Dimension.FREQUENCY, "10 Hz", "1 kHz",
+                    "upper signal frequency: noise bandwidth, closed-loop gain error, slew rate"),
+            q("supply.voltage", Dimension.VOLTAGE, "none", "5 V", "the part must run from this total supply"),
+            q("supply.variation", Dimension.VOLTAGE, "0 V", "0.25 V",
+                    "peak supply change; multiplied by the part's supply rejection"),
+            q("common-mode-swing", Dimension.VOLTAGE,
+                    "non-inverting: full-scale-output/gain; follower: full-scale-output; inverting: 0", "1 V",
+                    "peak common-mode change at the inputs; multiplied by the part's common-mode rejection"),
+            q("common-mode-range.min", Dimension.VOLTAGE, "centred at mid-supply", "0.5 V",
+                    "lowest input voltage needed, volts above the negative rail"),
+            q("common-mode-range.max", Dimension.VOLTAGE, "centred at mid-supply", "4 V",
+                    "highest input voltage needed, volts above the negative rail"),
+            q("output-range.min", Dimension.VOLTAGE, "centred at mid-supply", "0.1 V",
+                    "lowest output voltage needed, volts above the negative rail"),
+            q("output-range.max", Dimension.VOLTAGE, "centred at mid-supply", "4.9 V",
+                    "highest output voltage needed, volts above the negative rail"),
+            q("resistor-ratio.tolerance", Dimension.RATIO, "0", "0.1 %",
+                    "the rf/rg ratio error becomes a gain error at full scale"),
+            q("resistor-ratio.tempco", Dimension.RATIO_DRIFT, "0", "10 ppm/C",
+                    "ratio change with temperature; a trim at 25 C cannot remove it"),
+            q("service-life", Dimension.TIME, "0 h", "10 y",
+                    "long-term offset drift grows with the square root of operating time"),
+            k("criterion", Kind.CRITERION, CRITERIA, "worst-case", "yield 99.9 %",
+                    "worst-case sum, root-sum-square, or the share of built units that must pass"),
+            k("max-to-sigma", Kind.NUMBER, List.of(), "3", "3",
+                    "how many standard deviations a datasheet maximum stands for (for the yield)"),
+            k("trials", Kind.INTEGER, List.of(), String.valueOf(DEFAULT_TRIALS), "20000",
+                    "simulated units for the yield; more gives a narrower interval"),
+            k("seed", Kind.INTEGER, List.of(), String.valueOf(DEFAULT_SEED), "42",
+                    "random seed, so a yield can be reproduced"),
+            k("trim.allowed", Kind.BOOLEAN, List.of(), "false (true once a trim block is written)", "true",
+                    "whether each unit may be calibrated; a trim can make a cheaper part fit"),
+            k("trim.method", Kind.CHOICE, TRIM_METHODS, "one-point", "one-point",
+                    "one-point removes offset at 25 C; two-point also removes the static gain error"),
+            q("trim.resolution", Dimension.VOLTAGE, "0 V", "0.5 mV", "the step of the correction, at the output; it stays"),
+            k("trim.cost", Kind.NUMBER, List.of(), "0", "0.60",
+                    "cost of trimming one unit (labour, trimmer or DAC, test time), to compare with a better part"),
+            k("quantity", Kind.INTEGER, List.of(), String.valueOf(DEFAULT_QUANTITY), "1000",
+                    "build quantity, to pick the catalog price break"),
+            k("max-price", Kind.NUMBER, List.of(), "none", "5.00", "price ceiling per unit; dearer parts are excluded"),
+            k("ac-coupled", Kind.BOOLEAN, List.of(), "false", "false",
+                    "when true, DC errors count only toward output headroom, not toward the error"));
+
+    private static final Map<String, Key> BY_PATH = ORDERED.stream()
+            .collect(Collectors.toUnmodifiableMap(Key::path, Function.identity()));
+
+    /** Blocks: top-level keys whose value is a mapping of their own. */
+    public static final Set<String> SECTIONS = Set.of("temperature", "supply", "common-mode-range", "output-range",
+            "band", "resistor-ratio", "trim");
+
+    /** The key at {@code path}, or null. */
+    public static Key get(String path) {
+        return BY_PATH.get(path);
+    }
+
+    /** Every dotted path, in {@link #ORDERED} order (for completion). */
+    public static List<String> paths() {
+        return ORDERED.stream().map(Key::path).toList();
+    }
+
+    /** Names allowed at the top of a stage file. */
+    public static List<String> topLevel() {
+        Set<String> out = new LinkedHashSet<>();
+        for (Key key : ORDERED) {
+            out.add(key.section().isEmpty() ? key.path() : key.section());
+        }
+        return List.copyOf(out);
+    }
+
+    /** Names allowed inside the block {@code section}. */
+    public static List<String> inside(String section) {
+        List<String> out = new ArrayList<>();
+        for (Key key : ORDERED) {
+            if (key.section().equals(section)) {
+                out.add(key.name());
+            }
+        }
+        return out;
+    }
+}

@@ -1,0 +1,585 @@
+package dev.ampsieve.stage;
+
+import dev.ampsieve.catalog.Range;
+import dev.ampsieve.units.Dimension;
+import dev.ampsieve.units.UnitException;
+import dev.ampsieve.units.Units;
+import dev.ampsieve.yaml.Fields;
+import dev.ampsieve.yaml.InputException;
+import dev.ampsieve.yaml.Located;
+import dev.ampsieve.yaml.Node;
+import dev.ampsieve.yaml.Problem;
+import dev.ampsieve.yaml.YamlFiles;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import java.util.regex.Pattern;
+
+/**
+ * Reads a stage file (keys in {@link StageKeys}) into a validated {@link Stage}. Every problem
+ * in the file is collected and reported together as {@code file:line:col: field: problem; fix}.
+ *
+ * <p>Resistors: give {@code gain} (with {@code rf}, default 10 kohm, or with {@code rg}) or give
+ * {@code rf} and {@code rg}. For a non-inverting stage {@code rg = rf/(gain - 1)}. For an
+ * inverting stage {@code gain} is the resistor ratio {@code rf/rg} (a minus sign may be written
+ * and is ignored); the signal gain is then {@code -rf/(rg + Rs)}, so a source resistance lowers it.
+ * A follower has no {@code rg}; its {@code rf} (default 0) is an optional feedback resistor.
+ */
+public final class StageLoader {
+
+    private StageLoader() {
+    }
+
+    /** Reads and validates one stage file. */
+    public static Stage load(Path file) throws InputException {
+        return read(YamlFiles.read(file));
+    }
+
+    /** Validates stage text; {@code nameForMessages} only names it in messages (may be null). */
+    public static Stage parse(String yaml, Path nameForMessages) throws InputException {
+        return read(YamlFiles.parse(yaml, nameForMessages));
+    }
+
+    /**
+     * Checks one answer as the interactive shell collects it ({@code "temperature.min"},
+     * {@code "-40 C"}): the problems with that key alone, without location. Checks between
+     * keys (min above max, gain with rf and rg) happen when the whole stage is read.
+     *
+     * @throws IllegalArgumentException when {@code path} is not a stage key
+     */
+    public static List<Problem> checkAnswer(String path, String text) {
+        if (StageKeys.get(path) == null) {
+            throw new IllegalArgumentException("not a stage key: " + path);
+        }
+        // a neutral context in which the other required keys are present and valid
+        java.util.Map<String, String> answers = new java.util.LinkedHashMap<>();
+        answers.put(path, text);
+        if (!List.of("gain", "rf", "rg", "topology").contains(path)) {
+            answers.put("gain", "10");
+        }
+        if (!path.startsWith("limit")) {
+            answers.put("limit", "1 V");
+        }
+        if (!path.equals("full-scale-output")) {
+            answers.put("full-scale-output", "1 V");
+        }
+        try {
+            parse(StageWriter.toYaml(answers), null);
+            return List.of();
+        } catch (InputException e) {
+            List<Problem> mine = new ArrayList<>();
+            for (Problem p : e.problems()) {
+                if (p.field().equals(path) || p.field().startsWith(path + ".") || path.startsWith(p.field() + ".")) {
+                    mine.add(new Problem(p.severity(), null, 0, 0, path, p.message(), p.fix()));
+                }
+            }
+            return mine;
+        }
+    }
+
+    private static Stage read(Node root) throws InputException {
+        if (root instanceof Node.Scalar s && s.text() == null) {
+            throw new InputException(Problem.error(root.at(), "", "the stage file is empty",
+                    "write at least 'gain: 100' and 'limit: 1 mV'"));
+        }
+        if (!(root instanceof Node.Mapping m)) {
+            throw new InputException(Problem.error(root.at(), "", "a stage file must be 'key: value' lines, found " + root.kind(),
+                    "write at least 'gain: 100' and 'limit: 1 mV', one per line"));
+        }
+        Reader r = new Reader(new Fields(new ArrayList<>()));
+        Stage stage = r.stage(m);
+        List<Problem> problems = new ArrayList<>(r.f.problems());
+        if (problems.stream().anyMatch(Problem::isError)) {
+            problems.sort(Comparator.comparingInt(Problem::line).thenComparingInt(Problem::column));
+            throw new InputException(problems);
+        }
+        return stage;
+    }
+
+    /** One pass over one file; holds the problem list. */
+    private static final class Reader {
+        private final Fields f;
+
+        Reader(Fields f) {
+            this.f = f;
+        }
+
+        Stage stage(Node.Mapping m) {
+            f.onlyKeys(m, "", StageKeys.topLevel());
+
+            String topologyText = f.choice(m, "", "topology", StageKeys.TOPOLOGIES);
+            boolean topologyKnown = topologyText != null || !m.entries().containsKey("topology");
+            Topology topology = topologyText == null ? Topology.NON_INVERTING : Topology.of(topologyText);
+
+            double rs = nonNegative(m, "", "source-resistance", Dimension.RESISTANCE, 0.0);
+            double rp = nonNegative(m, "", "balance-resistance", Dimension.RESISTANCE, 0.0);
+            double[] rfRg = topologyKnown ? resistors(m, topology) : new double[] {StageKeys.DEFAULT_RF, Double.POSITIVE_INFINITY};
+            if (!topologyKnown) {
+                topology = Topology.FOLLOWER; // keeps the derived values finite; the file is rejected anyway
+            }
+            double rf = rfRg[0];
+            double rg = rfRg[1];
+
+            Node.Mapping temp = section(m, "temperature");
+            double tMin = StageKeys.DEFAULT_T_MIN;
+            double tMax = StageKeys.DEFAULT_T_MAX;
+            if (temp != null) {
+                tMin = temperature(temp, "min", tMin);
+                tMax = temperature(temp, "max", tMax);
+                if (tMin > tMax) {
+                    f.error(Fields.where(temp, "min"), "temperature", "min " + Units.format(tMin, Dimension.TEMPERATURE)
+                            + " is above max " + Units.format(tMax, Dimension.TEMPERATURE), "swap the two values");
+                }
+            }
+
+            Double supplyVoltage = null;
+            double supplyVariation = 0.0;
+            Node.Mapping supply = section(m, "supply");
+            if (supply != null) {
+                supplyVoltage = positive(supply, "supply", "voltage", Dimension.VOLTAGE);
+                supplyVariation = nonNegative(supply, "supply", "variation", Dimension.VOLTAGE, 0.0);
+            }
+
+            Double fullScale = positive(m, "", "full-scale-output", Dimension.VOLTAGE);
+
+            Double swing = nonNegativeOrNull(m, "", "common-mode-swing", Dimension.VOLTAGE);
+            double commonModeSwing = swing != null ? swing : defaultSwing(topology, rf, rg, fullScale);
+
+            Range cmRange = range(m, "common-mode-range", null);
+            Range outRange = range(m, "output-range", supplyVoltage);
+
+            double bandLow = StageKeys.DEFAULT_BAND_LOW;
+            double bandHigh = StageKeys.DEFAULT_BAND_HIGH;
+            Node.Mapping band = section(m, "band");
+            if (band != null) {
+                Double lo = f.quantity(band, "band", "low", Dimension.FREQUENCY);
+                Double hi = f.quantity(band, "band", "high", Dimension.FREQUENCY);
+                if (lo != null && lo <= 0) {
+                    f.error(Fields.where(band, "low"), "band.low", "the band must start above 0 Hz: 1/f noise grows without bound toward DC",
+                            "write 'low: 0.1 Hz' (a common choice for DC stages: about a 10 s observation)");
+                } else if (lo != null) {
+                    bandLow = lo;
+                }
+                if (hi != null && hi <= 0) {
+                    f.error(Fields.where(band, "high"), "band.high", "must be more than 0 Hz", "write 'high: 10 Hz' or the top signal frequency");
+                } else if (hi != null) {
+                    bandHigh = hi;
+                }
+                if (lo != null && hi != null && lo > 0 && hi > 0 && lo >= hi) {
+                    f.error(Fields.where(band, "low"), "band", "low " + Units.format(lo, Dimension.FREQUENCY)
+                            + " is not below high " + Units.format(hi, Dimension.FREQUENCY), "make 'low' smaller than 'high'");
+                }
+            }
+
+            double tolerance = 0.0;
+            double tempco = 0.0;
+            Node.Mapping ratio = section(m, "resistor-ratio");
+            if (ratio != null) {
+                tolerance = nonNegative(ratio, "resistor-ratio", "tolerance", Dimension.RATIO, 0.0);
+                if (tolerance >= 1.0) {
+                    f.error(Fields.where(ratio, "tolerance"), "resistor-ratio.tolerance", "a ratio tolerance of "
+                            + Units.format(tolerance, Dimension.RATIO) + " is not a resistor tolerance", "write it with its unit, such as '0.1 %'");
+                }
+                tempco = nonNegative(ratio, "resistor-ratio", "tempco", Dimension.RATIO_DRIFT, 0.0);
+            }
+
+            double life = nonNegative(m, "", "service-life", Dimension.TIME, 0.0);
+            Limit limit = limit(m, fullScale);
+            Criterion criterion = criterion(m);
+
+            double maxToSigma = StageKeys.DEFAULT_MAX_TO_SIGMA;
+            Double k = f.number(m, "", "max-to-sigma");
+            if (k != null && (k < 1 || k > 10)) {
+                f.error(Fields.where(m, "max-to-sigma"), "max-to-sigma", k + " is outside 1..10",
+                        "write how many standard deviations a datasheet maximum stands for; 3 is common practice");
+            } else if (k != null) {
+                maxToSigma = k;
+            }
+            Integer trials = f.integer(m, "", "trials", StageKeys.MIN_TRIALS, StageKeys.MAX_TRIALS);
+            Long seed = f.longValue(m, "", "seed");
+            Trim trim = trim(m);
+            Integer quantity = f.integer(m, "", "quantity", 1, StageKeys.MAX_QUANTITY);
+            Double maxPrice = positive(m, "", "max-price", Dimension.NUMBER);
+            Boolean ac = f.bool(m, "", "ac-coupled");
+
+            return new Stage(topology, rf, rg, rs, rp, tMin, tMax, supplyVoltage, supplyVariation, commonModeSwing,
+                    cmRange, outRange, bandLow, bandHigh, fullScale, tolerance, tempco, life, limit, criterion, maxToSigma,
+                    trials != null ? trials : StageKeys.DEFAULT_TRIALS, seed != null ? seed : StageKeys.DEFAULT_SEED, trim,
+                    quantity != null ? quantity : StageKeys.DEFAULT_QUANTITY, maxPrice, ac != null && ac,
+                    m.at());
+        }
+
+        // ------------------------------------------------------------ resistors and gain
+
+        /** {rf, rg} from gain / rf / rg, by topology; follower rg is infinite. */
+        private double[] resistors(Node.Mapping m, Topology topology) {
+            boolean hasGain = present(m, "gain");
+            boolean hasRf = present(m, "rf");
+            boolean hasRg = present(m, "rg");
+            Double gain = hasGain ? gain(m) : null;
+            Double rf = hasRf ? nonNegativeOrNull(m, "", "rf", Dimension.RESISTANCE) : null;
+            Double rg = hasRg ? nonNegativeOrNull(m, "", "rg", Dimension.RESISTANCE) : null;
+            double bad = StageKeys.DEFAULT_RF; // placeholder for values the file gets wrong; never returned on success
+
+            if (topology == Topology.FOLLOWER) {
+                if (hasRg) {
+                    f.error(Fields.where(m, "rg"), "rg", "a follower has no gain resistor",
+                            "remove 'rg', or write 'topology: non-inverting'");
+                }
+                if (gain != null && gain != 1.0) {
+                    f.error(Fields.where(m, "gain"), "gain", "a follower has gain 1, not " + plain(gain),
+                            "remove 'gain', or write 'topology: non-inverting'");
+                }
+                return new double[] {rf != null ? rf : 0.0, Double.POSITIVE_INFINITY};
+            }
+
+            if (hasGain && hasRf && hasRg) {
+                f.error(Fields.where(m, "gain"), "gain", "'gain', 'rf' and 'rg' are all given and may disagree",
+                        "give 'gain' with 'rf' (or with 'rg'), or give 'rf' and 'rg' without 'gain'");
+                return new double[] {bad, bad};
+            }
+            if (rf != null && rf == 0) {
+                f.error(Fields.where(m, "rf"), "rf", "0 ohm feedback leaves no gain", topology == Topology.NON_INVERTING
+                        ? "write the feedback resistor, or 'topology: follower' for unity gain" : "write the feedback resistor, such as '10 kohm'");
+            }
+            if (rg != null && rg == 0) {
+                f.error(Fields.where(m, "rg"), "rg", "0 ohm gives an infinite gain", "write the gain resistor, such as '1 kohm'");
+            }
+            if (!hasGain) {
+                if (hasRf && hasRg) {
+                    return rf == null || rg == null || rf == 0 || rg == 0 ? new double[] {bad, bad} : new double[] {rf, rg};
+                }
+                Located at = hasRf ? Fields.where(m, "rf") : hasRg ? Fields.where(m, "rg") : m.at();
+                f.error(at, "gain", "the gain is not given", hasRf || hasRg
+                        ? "add 'gain: 100', or give both 'rf' and 'rg'"
+                        : "add 'gain: 100' (with 'rf', default 10 kohm), or 'rf' and 'rg'");
+                return new double[] {bad, bad};
+            }
+            if (gain == null) {
+                return new double[] {bad, bad};
+            }
+            // ratio = rf/rg that gives the asked gain
+            double ratio;
+            if (topology == Topology.NON_INVERTING) {
+                if (gain < 1.0) {
+                    f.error(Fields.where(m, "gain"), "gain", "a non-inverting stage cannot have gain " + plain(gain) + " (below 1)",
+                            gain < 0 ? "write the magnitude with 'topology: inverting'" : "write a gain of 1 or more, or use 'topology: inverting'");
+                    return new double[] {bad, bad};
+                }
+                if (gain == 1.0) {
+                    f.error(Fields.where(m, "gain"), "gain", "gain 1 needs no gain resistor (rg would be infinite)",
+                            "write 'topology: follower'");
+                    return new double[] {bad, bad};
+                }
+                ratio = gain - 1.0;
+            } else {
+                ratio = Math.abs(gain);
+                if (ratio == 0.0) {
+                    f.error(Fields.where(m, "gain"), "gain", "gain 0 is no amplifier", "write the resistor ratio rf/rg, such as 10");
+                    return new double[] {bad, bad};
+                }
+            }
+            if (hasRg) {
+                return rg == null || rg == 0 ? new double[] {bad, bad} : new double[] {rg * ratio, rg};
+            }
+            double rfValue = hasRf ? (rf == null || rf == 0 ? bad : rf) : StageKeys.DEFAULT_RF;
+            return new double[] {rfValue, rfValue / ratio};
+        }
+
+        private static final Pattern DECIBELS = Pattern.compile("(?i).*\\d\\s*db$");
+
+        /** A plain number, "100 V/V", or decibels ("40 dB" = 100). */
+        private Double gain(Node.Mapping m) {
+            String text = f.text(m, "", "gain");
+            if (text == null) {
+                return null;
+            }
+            String t = text.strip();
+            try {
+                if (DECIBELS.matcher(t).matches()) {
+                    double db = Units.parse(t.substring(0, t.length() - 2) + "dB", Dimension.DECIBEL);
+                    return Math.pow(10.0, db / 20.0); // voltage gain from decibels: 20 log10
+                }
+                if (t.endsWith("V/V")) {
+                    t = t.substring(0, t.length() - 3);
+                }
+                return Units.parse(t, Dimension.NUMBER);
+            } catch (UnitException e) {
+                f.error(Fields.where(m, "gain"), "gain", "'" + text + "' is not a gain", "write a plain number such as '100', or decibels such as '40 dB'");
+                return null;
+            }
+        }
+
+        /** non-inverting: the full-scale input; follower: the full-scale output; inverting: 0 (virtual ground). */
+        private static double defaultSwing(Topology topology, double rf, double rg, Double fullScale) {
+            if (fullScale == null) {
+                return 0.0;
+            }
+            return switch (topology) {
+                case FOLLOWER -> fullScale;
+                case NON_INVERTING -> fullScale / (1.0 + rf / rg);
+                case INVERTING -> 0.0;
+            };
+        }
+
+        // ------------------------------------------------------------ limit and criterion
+
+        private Limit limit(Node.Mapping m, Double fullScale) {
+            Node v = m.entries().get("limit");
+            if (v == null || v instanceof Node.Scalar s && s.text() == null) {
+                f.error(v != null ? v.at() : m.at(), "limit", "required field is missing: the error limit decides which parts fit",
+                        "add 'limit: 1 mV' (at the output), or 'limit: {input: 10 uV}', '{percent-of-full-scale: 0.1 %}', "
+                                + "'{lsb: 0.5, bits: 16, reference: 2.5 V}'");
+                return null;
+            }
+            if (v instanceof Node.Scalar) {
+                Double volts = positive(m, "", "limit", Dimension.VOLTAGE);
+                return volts == null ? null : Limit.output(volts);
+            }
+            Node.Mapping lm = f.mapping(v, "limit");
+            if (lm == null) {
+                return null;
+            }
+            f.onlyKeys(lm, "limit", StageKeys.inside("limit"));
+            List<String> forms = new ArrayList<>();
+            if (present(lm, "input")) {
+                forms.add("input");
+            }
+            if (present(lm, "percent-of-full-scale")) {
+                forms.add("percent-of-full-scale");
+            }
+            if (present(lm, "lsb") || present(lm, "bits") || present(lm, "reference")) {
+                forms.add("lsb");
+            }
+            if (forms.isEmpty()) {
+                f.error(lm.at(), "limit", "no limit given in this block",
+                        "write 'input: 10 uV', 'percent-of-full-scale: 0.1 %', or 'lsb: 0.5', 'bits: 16', 'reference: 2.5 V'");
+                return null;
+            }
+            if (forms.size() > 1) {
+                f.error(lm.at(), "limit", "more than one form of limit given (" + String.join(", ", forms) + ")", "keep one of them");
+                return null;
+            }
+            switch (forms.get(0)) {
+                case "input": {
+                    Double volts = positive(lm, "limit", "input", Dimension.VOLTAGE);
+                    return volts == null ? null : new Limit(Limit.Kind.INPUT, volts, 0, 0);
+                }
+                case "percent-of-full-scale": {
+                    Double share = percent(lm);
+                    if (share != null && fullScale == null) {
+                        f.error(Fields.where(lm, "percent-of-full-scale"), "limit.percent-of-full-scale",
+                                "a share of full scale needs the full-scale output", "add 'full-scale-output: 2.5 V', or give the limit in volts");
+                        return null;
+                    }
+                    return share == null ? null : new Limit(Limit.Kind.PERCENT_OF_FULL_SCALE, share, 0, 0);
+                }
+                default: {
+                    boolean ok = true;
+                    for (String key : List.of("lsb", "bits", "reference")) {
+                        if (!present(lm, key)) {
+                            f.error(lm.at(), "limit." + key, "missing: an LSB limit needs lsb, bits and reference",
+                                    "add '" + key + ": " + StageKeys.get("limit." + key).example() + "'");
+                            ok = false;
+                        }
+                    }
+                    Double lsb = positive(lm, "limit", "lsb", Dimension.NUMBER);
+                    Integer bits = f.integer(lm, "limit", "bits", 1, 32);
+                    Double ref = positive(lm, "limit", "reference", Dimension.VOLTAGE);
+                    if (!ok || lsb == null || bits == null || ref == null) {
+                        return null;
+                    }
+                    return new Limit(Limit.Kind.LSB, lsb, bits, ref);
+                }
+            }
+        }
+
+        private static final Pattern BARE_NUMBER = Pattern.compile("\\s*[-+]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][-+]?\\d+)?\\s*");
+
+        /** The key says percent, so a bare number is read as percent ("0.1" = 0.1 %). */
+        private Double percent(Node.Mapping lm) {
+            String text = f.text(lm, "limit", "percent-of-full-scale");
+            if (text == null) {
+                return null;
+            }
+            String t = BARE_NUMBER.matcher(text).matches() ? text.strip() + " %" : text;
+            double share;
+            try {
+                share = Units.parse(t, Dimension.RATIO);
+            } catch (UnitException e) {
+                f.error(Fields.where(lm, "percent-of-full-scale"), "limit.percent-of-full-scale", e.problem(), "write a percentage such as '0.1 %'");
+                return null;
+            }
+            if (share <= 0 || share > 1) {
+                f.error(Fields.where(lm, "percent-of-full-scale"), "limit.percent-of-full-scale",
+                        Units.format(share, Dimension.RATIO) + " is outside (0, 100] %", "write a percentage such as '0.1 %'");
+                return null;
+            }
+            return share;
+        }
+
+        private Criterion criterion(Node.Mapping m) {
+            String text = f.text(m, "", "criterion");
+            if (text == null) {
+                return Criterion.WORST_CASE;
+            }
+            Located at = Fields.where(m, "criterion");
+            String t = text.strip().toLowerCase(Locale.ROOT);
+            if (t.equals("worst-case")) {
+                return Criterion.WORST_CASE;
+            }
+            if (t.equals("rss")) {
+                return Criterion.RSS;
+            }
+            if (t.startsWith("yield")) {
+                String rest = t.substring("yield".length()).strip();
+                if (rest.startsWith(":")) {
+                    rest = rest.substring(1).strip();
+                }
+                if (rest.isEmpty()) {
+                    f.error(at, "criterion", "a yield criterion needs a target", "write 'yield 99.9 %'");
+                    return Criterion.WORST_CASE;
+                }
+                double target;
+                try {
+                    target = Units.parse(rest, Dimension.RATIO);
+                } catch (UnitException e) {
+                    f.error(at, "criterion", "yield target: " + e.problem(), "write 'yield 99.9 %'");
+                    return Criterion.WORST_CASE;
+                }
+                if (!(target > 0 && target < 1)) {
+                    // 100 % cannot be shown by sampling; 0 % asks nothing
+                    f.error(at, "criterion", "yield target " + rest + " is outside (0, 100) %",
+                            "write a target above 0 % and below 100 %, such as 'yield 99.9 %'");
+                    return Criterion.WORST_CASE;
+                }
+                return Criterion.yield(target);
+            }
+            String near = Fields.closest(t, List.of("worst-case", "rss", "yield"));
+            f.error(at, "criterion", "'" + text + "' is not one of worst-case | rss | yield P %",
+                    near != null ? "did you mean '" + (near.equals("yield") ? "yield 99.9 %" : near) + "'?"
+                            : "write 'worst-case', 'rss' or 'yield 99.9 %'");
+            return Criterion.WORST_CASE;
+        }
+
+        private Trim trim(Node.Mapping m) {
+            Node v = m.entries().get("trim");
+            if (v == null || v instanceof Node.Scalar s && s.text() == null) {
+                return Trim.NONE;
+            }
+            if (v instanceof Node.Scalar) {
+                // shorthand 'trim: true' / 'trim: false'
+                Boolean allowed = f.bool(m, "", "trim");
+                return allowed == null ? Trim.NONE : new Trim(allowed, Trim.Method.ONE_POINT, 0, 0);
+            }
+            Node.Mapping t = section(m, "trim");
+            if (t == null) {
+                return Trim.NONE;
+            }
+            Boolean allowed = f.bool(t, "trim", "allowed");
+            String method = f.choice(t, "trim", "method", StageKeys.TRIM_METHODS);
+            double resolution = nonNegative(t, "trim", "resolution", Dimension.VOLTAGE, 0.0);
+            double cost = nonNegative(t, "trim", "cost", Dimension.NUMBER, 0.0);
+            return new Trim(allowed == null || allowed,
+                    "two-point".equals(method) ? Trim.Method.TWO_POINT : Trim.Method.ONE_POINT, resolution, cost);
+        }
+
+        // ------------------------------------------------------------ helpers
+
+        private static boolean present(Node.Mapping m, String key) {
+            Node v = m.entries().get(key);
+            return v != null && !(v instanceof Node.Scalar s && s.text() == null);
+        }
+
+        /** A block such as 'temperature:', checked for unknown keys; null when absent or not a block. */
+        private Node.Mapping section(Node.Mapping m, String key) {
+            Node v = m.entries().get(key);
+            if (v == null || v instanceof Node.Scalar s && s.text() == null) {
+                return null;
+            }
+            if (!(v instanceof Node.Mapping block)) {
+                List<String> inside = StageKeys.inside(key);
+                StringBuilder example = new StringBuilder("write '" + key + ":' with ");
+                for (int i = 0; i < inside.size(); i++) {
+                    example.append(i == 0 ? "" : ", ").append('\'').append(inside.get(i)).append(": ")
+                            .append(StageKeys.get(key + "." + inside.get(i)).example()).append('\'');
+                }
+                f.error(v.at(), key, "expected a block of 'key: value' lines, found " + v.kind(), example + " indented below it");
+                return null;
+            }
+            f.onlyKeys(block, key, StageKeys.inside(key));
+            return block;
+        }
+
+        private double temperature(Node.Mapping t, String key, double fallback) {
+            Double v = f.quantity(t, "temperature", key, Dimension.TEMPERATURE); // Units refuses below absolute zero
+            return v == null ? fallback : v;
+        }
+
+        /** min and max both required in the block; min <= max; within 0..supply when {@code rail} is known. */
+        private Range range(Node.Mapping m, String key, Double rail) {
+            Node.Mapping r = section(m, key);
+            if (r == null) {
+                return null;
+            }
+            Double lo = f.quantity(r, key, "min", Dimension.VOLTAGE);
+            Double hi = f.quantity(r, key, "max", Dimension.VOLTAGE);
+            for (String side : List.of("min", "max")) {
+                if (!present(r, side)) {
+                    f.error(r.at(), key + "." + side, "required in this block (both ends of the range)",
+                            "add '" + side + ": " + StageKeys.get(key + "." + side).example() + "' (volts above the negative rail)");
+                }
+            }
+            if (lo == null || hi == null) {
+                return null;
+            }
+            if (lo > hi) {
+                f.error(Fields.where(r, "min"), key, "min " + Units.format(lo, Dimension.VOLTAGE) + " is above max "
+                        + Units.format(hi, Dimension.VOLTAGE), "swap the two values");
+                return null;
+            }
+            if (rail != null && (lo < 0 || hi > rail)) {
+                f.error(Fields.where(r, lo < 0 ? "min" : "max"), key, "an output cannot go beyond the supply rails (0 to "
+                        + Units.format(rail, Dimension.VOLTAGE) + ")", "write volts above the negative rail, within the supply");
+                return null;
+            }
+            return new Range(lo, hi);
+        }
+
+        private Double nonNegativeOrNull(Node.Mapping m, String path, String key, Dimension d) {
+            Double v = f.quantity(m, path, key, d);
+            if (v != null && v < 0) {
+                f.error(Fields.where(m, key), Fields.join(path, key), "must not be negative",
+                        "write " + d.noun() + " of 0 or more, such as '" + exampleFor(path, key, d) + "'");
+                return null;
+            }
+            return v;
+        }
+
+        private double nonNegative(Node.Mapping m, String path, String key, Dimension d, double fallback) {
+            Double v = nonNegativeOrNull(m, path, key, d);
+            return v == null ? fallback : v;
+        }
+
+        private Double positive(Node.Mapping m, String path, String key, Dimension d) {
+            Double v = f.quantity(m, path, key, d);
+            if (v != null && v <= 0) {
+                f.error(Fields.where(m, key), Fields.join(path, key), "must be more than 0",
+                        "write " + d.noun() + " such as '" + exampleFor(path, key, d) + "'");
+                return null;
+            }
+            return v;
+        }
+
+        private static String exampleFor(String path, String key, Dimension d) {
+            StageKeys.Key k = StageKeys.get(Fields.join(path, key));
+            return k != null ? k.example() : d.example();
+        }
+
+        private static String plain(double v) {
+            return v == Math.rint(v) && Math.abs(v) < 1e15 ? String.valueOf((long) v) : String.valueOf(v);
+        }
+    }
+}

@@ -1,0 +1,405 @@
+package dev.ampsieve.stage;
+
+import dev.ampsieve.units.Dimension;
+import dev.ampsieve.units.UnitException;
+import dev.ampsieve.units.Units;
+import dev.ampsieve.yaml.InputException;
+import dev.ampsieve.yaml.Located;
+import dev.ampsieve.yaml.Problem;
+import java.io.IOException;
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.FileAlreadyExistsException;
+import java.nio.file.Files;
+import java.nio.file.LinkOption;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.nio.file.attribute.PosixFileAttributeView;
+import java.nio.file.attribute.PosixFilePermissions;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.regex.Pattern;
+
+/**
+ * Writes stage files: a commented YAML text from a {@link Stage} or from answers keyed by
+ * {@link StageKeys} paths, and saves it without ever destroying a user's file (written to a
+ * temporary file in the same folder, then moved into place in one step; an existing file is
+ * only replaced when the caller says so).
+ */
+public final class StageWriter {
+
+    private StageWriter() {
+    }
+
+    /**
+     * A commented stage file holding {@code answers} (key path to the text the user typed,
+     * such as {@code "temperature.min" -> "-40 C"}). Keys without an answer appear as comments
+     * with their example and default, ready to be uncommented.
+     *
+     * @throws IllegalArgumentException for a path that is not a stage key, or a limit given in two forms
+     */
+    public static String toYaml(Map<String, String> answers) {
+        for (String path : answers.keySet()) {
+            if (StageKeys.get(path) == null) {
+                throw new IllegalArgumentException("not a stage key: " + path);
+            }
+        }
+        boolean limitBlock = answers.keySet().stream().anyMatch(p -> p.startsWith("limit."));
+        if (limitBlock && answers.containsKey("limit")) {
+            throw new IllegalArgumentException("the limit is given both as 'limit' and as a 'limit.' block");
+        }
+        StringBuilder out = new StringBuilder();
+        out.append("# ampsieve stage file: one amplifier stage and the error it may have.\n");
+        out.append("# Every value carries its unit (10 kohm, 1 mV, 25 ppm/C, 10 y); '#' starts a comment.\n");
+        out.append("# Keys left as comments take the default shown.\n");
+
+        Map<String, List<StageKeys.Key>> groups = new LinkedHashMap<>();
+        for (StageKeys.Key key : StageKeys.ORDERED) {
+            String group = key.section().isEmpty() ? key.path() : key.section();
+            groups.computeIfAbsent(group, g -> new ArrayList<>()).add(key);
+        }
+        for (Map.Entry<String, List<StageKeys.Key>> g : groups.entrySet()) {
+            out.append('\n');
+            String group = g.getKey();
+            if (group.equals("limit")) {
+                writeLimit(out, g.getValue(), answers, limitBlock);
+            } else if (group.equals("gain") && !answers.containsKey("gain") && answers.containsKey("rf") && answers.containsKey("rg")) {
+                comment(out, "", g.getValue().get(0).why());
+                out.append("# gain: set by rf and rg below\n");
+            } else if (!StageKeys.SECTIONS.contains(group)) {
+                StageKeys.Key key = g.getValue().get(0);
+                line(out, "", key.path(), key, answers.get(key.path()));
+            } else {
+                block(out, group, g.getValue(), answers);
+            }
+        }
+        return out.toString();
+    }
+
+    private static void block(StringBuilder out, String section, List<StageKeys.Key> keys, Map<String, String> answers) {
+        boolean any = keys.stream().anyMatch(k -> answers.containsKey(k.path()));
+        out.append(any ? "" : "# ").append(section).append(":\n");
+        for (StageKeys.Key key : keys) {
+            String answer = answers.get(key.path());
+            line(out, any ? "  " : "#   ", key.name(), key, answer);
+        }
+    }
+
+    private static void writeLimit(StringBuilder out, List<StageKeys.Key> keys, Map<String, String> answers, boolean asBlock) {
+        StageKeys.Key scalar = keys.get(0);
+        if (!asBlock) {
+            line(out, "", "limit", scalar, answers.get("limit"));
+            return;
+        }
+        comment(out, "", scalar.why());
+        out.append("limit:\n");
+        for (StageKeys.Key key : keys.subList(1, keys.size())) {
+            String answer = answers.get(key.path());
+            if (answer != null) {
+                line(out, "  ", key.name(), key, answer);
+            }
+        }
+    }
+
+    /** "# why" then "name: value", or the key commented out with its example and default. */
+    private static void line(StringBuilder out, String indent, String name, StageKeys.Key key, String answer) {
+        comment(out, indent, key.why());
+        if (answer != null) {
+            out.append(indent).append(name).append(": ").append(scalar(answer)).append('\n');
+        } else {
+            String lead = indent.startsWith("#") ? indent : indent + "# ";
+            out.append(lead).append(name).append(": ").append(scalar(key.example()))
+                    .append("    # default: ").append(key.defaultText()).append('\n');
+        }
+    }
+
+    private static void comment(StringBuilder out, String indent, String text) {
+        String lead = indent.startsWith("#") ? indent : indent + "# ";
+        out.append(lead).append(text).append('\n');
+    }
+
+    private static final Pattern PLAIN = Pattern.compile("[A-Za-z0-9+\\-.][A-Za-z0-9 +\\-._/%()°µΩ]*");
+
+    /** The answer as a YAML scalar: plain when that reads back as the same text, else double-quoted. */
+    static String scalar(String text) {
+        String t = text.strip();
+        if (!t.isEmpty() && PLAIN.matcher(t).matches() && !t.startsWith("- ") && !t.endsWith(" ")) {
+            return t;
+        }
+        StringBuilder q = new StringBuilder("\"");
+        for (char c : t.toCharArray()) {
+            switch (c) {
+                case '"' -> q.append("\\\"");
+                case '\\' -> q.append("\\\\");
+                case '\n' -> q.append("\\n");
+                case '\t' -> q.append("\\t");
+                default -> {
+                    if (c < 0x20) {
+                        q.append(String.format(Locale.ROOT, "\\x%02x", (int) c));
+                    } else {
+                        q.append(c);
+                    }
+                }
+            }
+        }
+        return q.append('"').toString();
+    }
+
+    // ------------------------------------------------------------------ from a Stage
+
+    /** A commented stage file that {@link StageLoader} reads back to a stage equal to {@code s} (apart from {@code where}). */
+    public static String toYaml(Stage s) {
+        return toYaml(answers(s));
+    }
+
+    /** The stage as answers: every value written out exactly, so reading it back gives the same doubles. */
+    public static Map<String, String> answers(Stage s) {
+        Map<String, String> a = new LinkedHashMap<>();
+        a.put("topology", s.topology().key());
+        if (s.topology() == Topology.FOLLOWER) {
+            if (s.rf() != 0) {
+                a.put("rf", exact(s.rf(), Dimension.RESISTANCE));
+            }
+        } else {
+            String gain = gainText(s);
+            if (gain != null) {
+                a.put("gain", gain);
+            } else {
+                a.put("rg", exact(s.rg(), Dimension.RESISTANCE));
+            }
+            a.put("rf", exact(s.rf(), Dimension.RESISTANCE));
+        }
+        a.put("source-resistance", exact(s.sourceResistance(), Dimension.RESISTANCE));
+        a.put("balance-resistance", exact(s.balanceResistance(), Dimension.RESISTANCE));
+        a.put("temperature.min", exact(s.tMin(), Dimension.TEMPERATURE));
+        a.put("temperature.max", exact(s.tMax(), Dimension.TEMPERATURE));
+        if (s.supplyVoltage() != null) {
+            a.put("supply.voltage", exact(s.supplyVoltage(), Dimension.VOLTAGE));
+        }
+        a.put("supply.variation", exact(s.supplyVariation(), Dimension.VOLTAGE));
+        a.put("common-mode-swing", exact(s.commonModeSwing(), Dimension.VOLTAGE));
+        if (s.commonModeRange() != null) {
+            a.put("common-mode-range.min", exact(s.commonModeRange().min(), Dimension.VOLTAGE));
+            a.put("common-mode-range.max", exact(s.commonModeRange().max(), Dimension.VOLTAGE));
+        }
+        if (s.outputRange() != null) {
+            a.put("output-range.min", exact(s.outputRange().min(), Dimension.VOLTAGE));
+            a.put("output-range.max", exact(s.outputRange().max(), Dimension.VOLTAGE));
+        }
+        a.put("band.low", exact(s.bandLow(), Dimension.FREQUENCY));
+        a.put("band.high", exact(s.bandHigh(), Dimension.FREQUENCY));
+        if (s.fullScaleOutput() != null) {
+            a.put("full-scale-output", exact(s.fullScaleOutput(), Dimension.VOLTAGE));
+        }
+        a.put("resistor-ratio.tolerance", exact(s.ratioTolerance(), Dimension.RATIO));
+        a.put("resistor-ratio.tempco", exact(s.ratioTempco(), Dimension.RATIO_DRIFT));
+        a.put("service-life", exact(s.serviceLife(), Dimension.TIME));
+        Limit l = s.limit();
+        if (l != null) {
+            switch (l.kind()) {
+                case OUTPUT -> a.put("limit", exact(l.value(), Dimension.VOLTAGE));
+                case INPUT -> a.put("limit.input", exact(l.value(), Dimension.VOLTAGE));
+                case PERCENT_OF_FULL_SCALE -> a.put("limit.percent-of-full-scale", exact(l.value(), Dimension.RATIO, "%"));
+                case LSB -> {
+                    a.put("limit.lsb", exact(l.value(), Dimension.NUMBER));
+                    a.put("limit.bits", String.valueOf(l.bits()));
+                    a.put("limit.reference", exact(l.reference(), Dimension.VOLTAGE));
+                }
+            }
+        }
+        Criterion c = s.criterion();
+        a.put("criterion", switch (c.kind()) {
+            case WORST_CASE -> "worst-case";
+            case RSS -> "rss";
+            case YIELD -> "yield " + exact(c.yieldTarget(), Dimension.RATIO, "%");
+        });
+        a.put("max-to-sigma", exact(s.maxToSigma(), Dimension.NUMBER));
+        a.put("trials", String.valueOf(s.trials()));
+        a.put("seed", String.valueOf(s.seed()));
+        Trim t = s.trim();
+        a.put("trim.allowed", String.valueOf(t.allowed()));
+        a.put("trim.method", t.method() == Trim.Method.TWO_POINT ? "two-point" : "one-point");
+        a.put("trim.resolution", exact(t.resolution(), Dimension.VOLTAGE));
+        a.put("trim.cost", exact(t.cost(), Dimension.NUMBER));
+        a.put("quantity", String.valueOf(s.quantity()));
+        if (s.maxPrice() != null) {
+            a.put("max-price", exact(s.maxPrice(), Dimension.NUMBER));
+        }
+        a.put("ac-coupled", String.valueOf(s.acCoupled()));
+        return a;
+    }
+
+    /**
+     * The gain as the shortest number from which the loader derives exactly the stage's rg
+     * (rg = rf/(gain - 1), inverting rf/gain), or null when none does; then rf and rg are written.
+     */
+    private static String gainText(Stage s) {
+        double ratio = s.rf() / s.rg();
+        double gain = s.topology() == Topology.NON_INVERTING ? 1.0 + ratio : ratio;
+        BigDecimal exactGain = new BigDecimal(gain);
+        for (int digits = 1; digits <= 17; digits++) {
+            BigDecimal g = exactGain.round(new MathContext(digits));
+            double back = g.doubleValue();
+            double rg = s.topology() == Topology.NON_INVERTING ? s.rf() / (back - 1.0) : s.rf() / back;
+            if (Double.compare(rg, s.rg()) == 0) {
+                return digits <= 6 ? g.stripTrailingZeros().toPlainString() : null; // a long gain reads worse than rf and rg
+            }
+        }
+        return null;
+    }
+
+    private static final String[] PREFIX = {"f", "p", "n", "u", "m", "", "k", "M", "G", "T"};
+
+    /** The shortest text with a unit that {@link Units#parse} reads back to exactly {@code v}. */
+    static String exact(double v, Dimension d) {
+        return switch (d) {
+            case VOLTAGE -> engineering(v, d, "V");
+            case CURRENT -> engineering(v, d, "A");
+            case RESISTANCE -> engineering(v, d, "ohm");
+            case FREQUENCY -> engineering(v, d, "Hz");
+            case TEMPERATURE -> plain(v) + " C";
+            case RATIO -> exact(v, d, "%");
+            case RATIO_DRIFT -> firstExact(v, d, List.of("ppm/C", "%/C"), plain(v) + " /C"); // a bare ratio per degree is exact
+            case TIME -> firstExact(v, d, List.of("y", "h"), plain(v) + " s");
+            default -> plain(v);
+        };
+    }
+
+    /** A ratio in {@code unit} when that reads back exactly, else a bare ratio (always exact). */
+    private static String exact(double v, Dimension d, String unit) {
+        return firstExact(v, d, List.of(unit), plain(v));
+    }
+
+    private static String engineering(double v, Dimension d, String symbol) {
+        if (v != 0) {
+            int exp3 = (int) Math.floor(Math.log10(Math.abs(v)) / 3.0);
+            exp3 = Math.max(-5, Math.min(4, exp3));
+            // the prefixed form or the bare unit, whichever is shorter: "250 mV", but "0.1 Hz" rather than "100 mHz"
+            String found = firstExact(v, d, List.of(PREFIX[exp3 + 5] + symbol, symbol), null);
+            if (found != null) {
+                return found;
+            }
+        }
+        return plain(v) + " " + symbol; // factor 1: the shortest decimal of v reads back as v
+    }
+
+    /** Of the texts in {@code units} that read back exactly, the shortest; else {@code fallback}. */
+    private static String firstExact(double v, Dimension d, List<String> units, String fallback) {
+        String best = null;
+        for (String unit : units) {
+            double factor;
+            try {
+                factor = Units.parse("1 " + unit, d);
+            } catch (UnitException e) {
+                throw new IllegalStateException(unit, e);
+            }
+            BigDecimal scaled = new BigDecimal(v / factor);
+            for (int digits = 1; digits <= 17; digits++) {
+                String text = scaled.round(new MathContext(digits)).stripTrailingZeros().toPlainString() + " " + unit;
+                try {
+                    if (Double.compare(Units.parse(text, d), v) == 0) {
+                        if (best == null || text.length() < best.length()) {
+                            best = text;
+                        }
+                        break;
+                    }
+                } catch (UnitException e) {
+                    throw new IllegalStateException(text, e);
+                }
+            }
+        }
+        return best != null ? best : fallback;
+    }
+
+    private static String plain(double v) {
+        return BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
+    }
+
+    // ------------------------------------------------------------------ saving
+
+    /** Saves {@code s} as a commented stage file; see {@link #save(String, Path, boolean)}. */
+    public static void save(Stage s, Path file, boolean overwrite) throws InputException {
+        save(toYaml(s), file, overwrite);
+    }
+
+    /**
+     * Saves stage text after checking that it loads. The text goes to a temporary file in the
+     * same folder, which then takes the file's name in one step, so a crash never leaves half a
+     * file. Without {@code overwrite} an existing file is left untouched and the call fails.
+     *
+     * @throws InputException when the text is not a valid stage, the file exists (and
+     *                        {@code overwrite} is false), or it cannot be written
+     */
+    public static void save(String yaml, Path file, boolean overwrite) throws InputException {
+        StageLoader.parse(yaml, file);
+        Path target = file.toAbsolutePath();
+        Path dir = target.getParent();
+        if (Files.isDirectory(target)) {
+            throw new InputException(Problem.error(Located.nowhere(file), "", "is a folder", "give a file name such as 'stage.yaml'"));
+        }
+        boolean exists = Files.exists(target, LinkOption.NOFOLLOW_LINKS);
+        if (exists && !overwrite) {
+            throw refused(file);
+        }
+        Path tmp = null;
+        try {
+            tmp = Files.createTempFile(dir, "." + target.getFileName() + ".", ".tmp");
+            Files.writeString(tmp, yaml, StandardCharsets.UTF_8);
+            permissions(tmp, exists ? target : null);
+            if (overwrite) {
+                try {
+                    Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+                } catch (AtomicMoveNotSupportedException e) {
+                    Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
+                }
+            } else {
+                // a hard link fails when the name is taken, even if it appeared a moment ago
+                try {
+                    Files.createLink(target, tmp);
+                } catch (UnsupportedOperationException | IOException e) {
+                    if (e instanceof FileAlreadyExistsException) {
+                        throw e;
+                    }
+                    Files.move(tmp, target);
+                }
+            }
+        } catch (FileAlreadyExistsException e) {
+            throw refused(file);
+        } catch (IOException e) {
+            throw new InputException(Problem.error(Located.nowhere(file), "", "cannot write the file (" + e.getMessage() + ")",
+                    "check that the folder exists and is writable"));
+        } finally {
+            if (tmp != null) {
+                try {
+                    Files.deleteIfExists(tmp);
+                } catch (IOException e) {
+                    // a stray temporary file is harmless; the save itself succeeded or already failed
+                }
+            }
+        }
+    }
+
+    private static InputException refused(Path file) {
+        return new InputException(Problem.error(Located.nowhere(file), "", "the file already exists and was left as it was",
+                "choose another file name, or ask explicitly to overwrite it"));
+    }
+
+    /** A new file gets rw-r--r--; a replaced file keeps its permissions. Temporary files start private. */
+    private static void permissions(Path tmp, Path existing) throws IOException {
+        PosixFileAttributeView view = Files.getFileAttributeView(tmp, PosixFileAttributeView.class);
+        if (view == null) {
+            return;
+        }
+        if (existing != null) {
+            PosixFileAttributeView old = Files.getFileAttributeView(existing, PosixFileAttributeView.class);
+            view.setPermissions(old.readAttributes().permissions());
+        } else {
+            view.setPermissions(PosixFilePermissions.fromString("rw-r--r--"));
+        }
+    }
+}

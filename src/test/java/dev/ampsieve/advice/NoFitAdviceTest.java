@@ -1,0 +1,124 @@
+package dev.ampsieve.advice;
+
+import static dev.ampsieve.testing.PartBuilder.part;
+import static dev.ampsieve.testing.StageBuilder.stage;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.ampsieve.catalog.Part;
+import dev.ampsieve.stage.Stage;
+import dev.ampsieve.stage.Topology;
+import dev.ampsieve.stage.Trim;
+import dev.ampsieve.testing.LinearEngine;
+import java.util.List;
+import java.util.Map;
+import java.util.stream.Collectors;
+import org.junit.jupiter.api.Test;
+
+/**
+ * "What would make it fit", found by bisection over re-runs of the budget. The small linear
+ * model of {@link LinearEngine} lets each boundary be solved by hand (noise gain NG, dT the
+ * largest distance from 25 °C, output volts); the answers are reported to 3 digits on the
+ * fitting side, so each is checked to one unit of its last digit.
+ */
+class NoFitAdviceTest {
+
+    private static Map<Change.Kind, Change> changes(Ranking r) {
+        return r.advice().noFit().changes().stream().collect(Collectors.toMap(Change::kind, c -> c));
+    }
+
+    @Test
+    void gainSourceAndLimitNeededAreSolved() {
+        // NG 100, Rs 10 k, 0..70 °C (dT 45), limit 1 mV; no trim allowed
+        Stage s = stage().source(10e3).trim(false, 10e-6, 0.40).build();
+        // offset 100*4 uV = 0.40 mV; drift 100*0.12 uV/°C*45 = 0.54 mV; bias 100*0.7 nA*10 k = 0.70 mV
+        // worst-case 1.64 mV
+        Part p = part("P").vos(null, 4e-6).drift(null, 0.12e-6).ib(null, 0.7e-9).build();
+        Ranking r = Ranker.rank(s, List.of(p), new LinearEngine());
+        NoFitAdvice n = r.advice().noFit();
+        assertEquals("P", n.closest().id());
+        assertEquals("bias", n.limitingTerm());
+        assertEquals(0.70e-3, n.limitingV(), 1e-12);
+        Map<Change.Kind, Change> c = changes(r);
+        // gain: NG * (4 + 5.4 + 7) uV <= 1 mV  ->  NG <= 60.98; 61.0 no longer fits: 60.9
+        assertEquals(60.9, c.get(Change.Kind.LOWER_GAIN).values().get("noiseGain"), 1e-9);
+        assertEquals(59.9e3, c.get(Change.Kind.LOWER_GAIN).values().get("rf"), 1e-6);
+        // source: 100 * (9.4 uV + 0.7 nA * Rs) <= 1 mV  ->  Rs <= 857.1 ohm
+        assertEquals(857.0, c.get(Change.Kind.LOWER_SOURCE_RESISTANCE).values().get("sourceResistance"), 1.0);
+        // limit: the worst case itself, 1.64 mV (1.65 if the rounded 1.64 misses by a rounding error)
+        double limit = c.get(Change.Kind.LOOSER_LIMIT).values().get("limitV");
+        assertTrue(limit >= 1.64e-3 - 1e-12 && limit <= 1.65e-3 + 1e-12, "limit " + limit);
+        // 25 °C alone still gives 100 * (4 + 7) uV = 1.1 mV: no temperature range helps;
+        // a trim leaves 1.64 - 0.40 + 0.01 = 1.25 mV: no trim helps
+        assertTrue(!c.containsKey(Change.Kind.NARROWER_TEMPERATURE));
+        assertTrue(!c.containsKey(Change.Kind.ALLOW_TRIM));
+        assertTrue(r.advice().lines().stream().anyMatch(l -> l.startsWith("Nothing fits. Closest: P, worst-case 1.64 mV of"
+                + " 1.00 mV (64 % over), limited by bias current (700 µV).")), r.advice().lines().toString());
+        assertTrue(r.advice().lines().contains("  - a gain of 60.9 or lower (now 100): Rf 59.9 kΩ with Rg 1.00 kΩ"),
+                r.advice().lines().toString());
+    }
+
+    @Test
+    void narrowerTemperatureAndAllowingATrimAreSolved() {
+        // NG 100, no source resistance, 0..70 °C, limit 2.2 mV; trims not allowed (10 uV resolution, 0.40 each)
+        Stage s = stage().limitV(2.2e-3).trim(false, 10e-6, 0.40).build();
+        // offset 100*20 uV = 2.0 mV; drift 100*0.11 uV/°C*45 = 0.495 mV; worst-case 2.495 mV
+        Part p = part("P").vos(null, 20e-6).drift(null, 0.11e-6).build();
+        Ranking r = Ranker.rank(s, List.of(p), new LinearEngine());
+        Map<Change.Kind, Change> c = changes(r);
+        // temperature: 100 * (20 uV + 0.11 uV/°C * d) <= 2.2 mV  ->  d <= 18.18 °C; 18.2 misses: 18.1
+        assertEquals(25 - 18.1, c.get(Change.Kind.NARROWER_TEMPERATURE).values().get("tMin"), 1e-9);
+        assertEquals(25 + 18.1, c.get(Change.Kind.NARROWER_TEMPERATURE).values().get("tMax"), 1e-9);
+        // a one-point trim removes the 2.0 mV offset: 0.495 + 0.010 = 0.505 mV
+        assertEquals(0.505e-3, c.get(Change.Kind.ALLOW_TRIM).values().get("errorAfterTrimV"), 1e-12);
+        assertEquals(0.40, c.get(Change.Kind.ALLOW_TRIM).values().get("trimCost"), 1e-12);
+        // gain: NG * 24.95 uV <= 2.2 mV  ->  NG <= 88.18; 88.2 misses: 88.1
+        assertEquals(88.1, c.get(Change.Kind.LOWER_GAIN).values().get("noiseGain"), 1e-9);
+        // no source resistance to lower
+        assertTrue(!c.containsKey(Change.Kind.LOWER_SOURCE_RESISTANCE));
+        // and the trim advice says a trim would pay (nothing fits without one)
+        assertEquals(TrimAdvice.Status.WOULD_PAY_IF_ALLOWED, r.advice().trim().status());
+    }
+
+    @Test
+    void twoPointCalibrationIsOfferedWhenOnePointIsNotEnough() {
+        // resistor ratio 0.1 %: 2.5 V * (99/100) * 0.001 = 2.475 mV, which a one-point trim keeps
+        Stage s = stage().fullScale(2.5).ratioTolerance(0.001).trim(new Trim(true, Trim.Method.ONE_POINT, 0, 0.3)).build();
+        Part p = part("P").vos(null, 1e-6).build();
+        Ranking r = Ranker.rank(s, List.of(p), new LinearEngine());
+        Change c = changes(r).get(Change.Kind.TWO_POINT_TRIM);
+        assertEquals(0.0, c.values().get("errorAfterTrimV"), 1e-15);
+    }
+
+    @Test
+    void invertingGainIsReportedAsSignalGain() {
+        // inverting, Rf 99 k, Rg 1 k: signal gain -99, noise gain 100; offset 100 * 12 uV = 1.2 mV
+        Stage s = stage().topology(Topology.INVERTING).build();
+        Part p = part("P").vos(null, 12e-6).build();
+        Change c = changes(Ranker.rank(s, List.of(p), new LinearEngine())).get(Change.Kind.LOWER_GAIN);
+        // NG * 12 uV <= 1 mV  ->  NG <= 83.33 -> 83.3, signal gain -(83.3 - 1) = -82.3
+        assertEquals(83.3, c.values().get("noiseGain"), 1e-9);
+        assertEquals(-82.3, c.values().get("signalGain"), 1e-9);
+        assertTrue(c.text().startsWith("a gain of -82.3 or less in magnitude (now -99; noise gain 83.3)"), c.text());
+    }
+
+    @Test
+    void budgetReRunsStayBounded() {
+        LinearEngine engine = new LinearEngine();
+        Stage s = stage().source(10e3).trim(false, 10e-6, 0.40).build();
+        Part p = part("P").vos(null, 4e-6).drift(null, 0.12e-6).ib(null, 0.7e-9).build();
+        Ranker.rank(s, List.of(p), engine);
+        // bisection stops at 1e-4 relative width: about 14-20 steps per change
+        assertTrue(engine.calls < 120, "calls " + engine.calls);
+    }
+
+    @Test
+    void whenEveryPartFailsAConstraintTheReasonsAreCounted() {
+        Stage s = stage().supply(48.0).build();
+        Ranking r = Ranker.rank(s, List.of(part("A").build(), part("B").build()), new LinearEngine());
+        assertNull(r.advice().noFit().closest());
+        assertTrue(r.advice().lines().contains("Nothing fits: every part fails a hard constraint: supply (2)."),
+                r.advice().lines().toString());
+    }
+}

@@ -1,0 +1,228 @@
+package dev.ampsieve.advice;
+
+import static dev.ampsieve.testing.Budgets.budget;
+import static dev.ampsieve.testing.PartBuilder.part;
+import static dev.ampsieve.testing.StageBuilder.stage;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.ampsieve.budget.Budget;
+import dev.ampsieve.budget.Verdict;
+import dev.ampsieve.catalog.Architecture;
+import dev.ampsieve.catalog.InputType;
+import dev.ampsieve.catalog.Part;
+import dev.ampsieve.stage.Stage;
+import dev.ampsieve.testing.Budgets;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Ranking and stage advice on budgets built by hand. The stage limit is 1 mV at the output
+ * (worst-case criterion) unless a test says otherwise; costs are worked in the comments.
+ */
+class RankerTest {
+
+    private static final Part PREC = part("PREC").price(3.00).build();
+    private static final Part CHEAP = part("CHEAP").price(1.00).build();
+
+    /** Ranks parts whose budgets the test fixed in advance. */
+    private static Ranking rank(Stage s, Map<Part, Budget> budgets) {
+        Map<String, Budget> byId = new LinkedHashMap<>();
+        budgets.forEach((p, b) -> byId.put(p.id(), b));
+        return Ranker.rank(s, new ArrayList<>(budgets.keySet()), (st, p) -> byId.get(p.id()));
+    }
+
+    private static Map<Part, Budget> precAndCheap(Stage s, Verdict cheapVerdict) {
+        Map<Part, Budget> m = new LinkedHashMap<>();
+        // PREC: 0.2 mV + 0.3 mV = 0.5 mV worst-case, within 1 mV as it is
+        m.put(PREC, budget(s, PREC, 0.2e-3, 0.3e-3, 0.31e-3, Verdict.FITS));
+        // CHEAP: 1.5 mV + 0.4 mV = 1.9 mV as it is; 0.41 mV after the trim
+        m.put(CHEAP, budget(s, CHEAP, 1.5e-3, 0.4e-3, 0.41e-3, cheapVerdict));
+        return m;
+    }
+
+    @Test
+    void trimIsWarrantedWhenCheaperPartPlusTrimCostsLess() {
+        Stage s = stage().trim(true, 10e-6, 0.50).quantity(1000).build();
+        Ranking r = rank(s, precAndCheap(s, Verdict.FITS_AFTER_TRIM));
+        // CHEAP 1.00 + trim 0.50 = 1.50 per unit against PREC 3.00: saves 1.50 per unit, 1500.00 over 1000
+        TrimAdvice t = r.advice().trim();
+        assertEquals(TrimAdvice.Status.WARRANTED, t.status());
+        assertEquals("CHEAP", t.withTrim().id());
+        assertEquals("PREC", t.asIs().id());
+        assertEquals(1.50, t.withTrim().effectiveCost(), 1e-12);
+        assertEquals(1.50, t.savingPerUnit(), 1e-12);
+        assertEquals(1500.0, t.savingTotal(), 1e-9);
+        assertEquals("CHEAP", r.advice().pick().id());
+        assertEquals("PREC", r.advice().cheapestAsIs().id());
+        assertEquals(List.of("CHEAP", "PREC"), r.candidates().stream().map(Candidate::id).toList());
+        // margins: CHEAP after the trim (1 - 0.41) = 59 %, PREC (1 - 0.5) = 50 %
+        assertEquals(0.59, r.candidates().get(0).margin(), 1e-12);
+        assertTrue(r.advice().lines().stream().anyMatch(l -> l.startsWith("A one-point trim is warranted: CHEAP at 1.00 USD"
+                + " plus the trim at 0.50 USD costs 1.50 USD per unit, 1.50 USD less than PREC as it is (1500.00 USD over"
+                + " 1000 units)")), r.advice().lines().toString());
+    }
+
+    @Test
+    void trimDoesNotPayWhenItCostsMoreThanThePriceGap() {
+        Stage s = stage().trim(true, 10e-6, 2.50).build();
+        Ranking r = rank(s, precAndCheap(s, Verdict.FITS_AFTER_TRIM));
+        // CHEAP 1.00 + 2.50 = 3.50 against PREC 3.00: the trim costs 0.50 more per unit
+        TrimAdvice t = r.advice().trim();
+        assertEquals(TrimAdvice.Status.NOT_WARRANTED, t.status());
+        assertEquals(-0.50, t.savingPerUnit(), 1e-12);
+        assertEquals("PREC", r.advice().pick().id());
+    }
+
+    @Test
+    void trimIsRequiredWhenOnlyATrimmedPartFits() {
+        Stage s = stage().trim(true, 10e-6, 0.50).build();
+        Map<Part, Budget> m = new LinkedHashMap<>();
+        m.put(CHEAP, budget(s, CHEAP, 1.5e-3, 0.4e-3, 0.41e-3, Verdict.FITS_AFTER_TRIM));
+        Ranking r = rank(s, m);
+        assertEquals(TrimAdvice.Status.REQUIRED, r.advice().trim().status());
+        assertNull(r.advice().cheapestAsIs());
+        assertTrue(r.advice().lines().contains("No part fits as it is."));
+    }
+
+    @Test
+    void trimNotAllowedButWouldPayIsSaid() {
+        Stage s = stage().trim(false, 10e-6, 0.50).build();
+        Ranking r = rank(s, precAndCheap(s, Verdict.NO_FIT));
+        // CHEAP's after-trim total 0.41 mV is within 1 mV: 1.00 + 0.50 = 1.50 against PREC 3.00
+        TrimAdvice t = r.advice().trim();
+        assertEquals(TrimAdvice.Status.WOULD_PAY_IF_ALLOWED, t.status());
+        assertEquals("CHEAP", t.withTrim().id());
+        assertEquals(1.50, t.savingPerUnit(), 1e-12);
+        assertEquals("PREC", r.advice().pick().id());
+    }
+
+    private static Part chopper(double price) {
+        return part("CHOP").architecture(Architecture.CHOPPER).input(InputType.CMOS).price(price)
+                .ib(null, 300e-12).noise(20e-9, null, 150e-15, null).fchop(20e3).build();
+    }
+
+    @Test
+    void zeroDriftWarrantedWhenOnlyAChopperFits() {
+        Stage s = stage().bandHigh(10).build();
+        Part chop = chopper(2.20);
+        Part std = part("STD").price(1.00).build();
+        Map<Part, Budget> m = new LinkedHashMap<>();
+        m.put(chop, budget(s, chop, 0.5e-3, 0.2e-3, 0.2e-3, Verdict.FITS));
+        m.put(std, budget(s, std, 1.0e-3, 0.9e-3, 0.9e-3, Verdict.NO_FIT));
+        ZeroDriftAdvice z = rank(s, m).advice().zeroDrift();
+        assertEquals(ZeroDriftAdvice.Status.ONLY_OPTION, z.status());
+        assertTrue(z.warranted());
+        assertEquals("CHOP", z.selfCorrecting().id());
+        // 20 kHz against a 10 Hz band edge: 2000 times, well clear
+        assertTrue(z.caveats().stream().anyMatch(c -> c.startsWith("chopping at 20.0 kHz is 2000 times the 10.0 Hz band edge")),
+                z.caveats().toString());
+        assertTrue(z.caveats().stream().anyMatch(c -> c.startsWith("bias current up to 300 pA")), z.caveats().toString());
+        assertTrue(z.caveats().stream().anyMatch(c -> c.startsWith("current noise 150 fA/√Hz")), z.caveats().toString());
+    }
+
+    @Test
+    void zeroDriftWarrantedWhenItFitsCheaper() {
+        Stage s = stage().quantity(500).build();
+        Part chop = chopper(1.20);
+        Part std = part("STD").price(2.00).build();
+        Map<Part, Budget> m = new LinkedHashMap<>();
+        m.put(chop, budget(s, chop, 0.05e-3, 0.01e-3, 0.01e-3, Verdict.FITS));
+        m.put(std, budget(s, std, 0.4e-3, 0.4e-3, 0.4e-3, Verdict.FITS));
+        ZeroDriftAdvice z = rank(s, m).advice().zeroDrift();
+        // 2.00 - 1.20 = 0.80 per unit; 400.00 over 500 units
+        assertEquals(ZeroDriftAdvice.Status.CHEAPER, z.status());
+        assertEquals(0.80, z.savingPerUnit(), 1e-12);
+        assertEquals(400.0, z.savingTotal(), 1e-9);
+        assertEquals("STD", z.standard().id());
+    }
+
+    @Test
+    void zeroDriftNotWarrantedWhenAStandardPartFitsForLess() {
+        Stage s = stage().build();
+        Part chop = chopper(2.20);
+        Part std = part("STD").price(1.00).build();
+        Map<Part, Budget> m = new LinkedHashMap<>();
+        m.put(chop, budget(s, chop, 0.05e-3, 0.01e-3, 0.01e-3, Verdict.FITS));
+        m.put(std, budget(s, std, 0.4e-3, 0.4e-3, 0.4e-3, Verdict.FITS));
+        Ranking r = rank(s, m);
+        ZeroDriftAdvice z = r.advice().zeroDrift();
+        assertEquals(ZeroDriftAdvice.Status.NOT_WARRANTED, z.status());
+        assertEquals(-1.20, z.savingPerUnit(), 1e-12);
+        assertTrue(r.advice().lines().contains("A zero-drift part is not needed: STD (standard) fits at 1.00 USD,"
+                + " 1.20 USD less than the cheapest zero-drift part that fits, CHOP."), r.advice().lines().toString());
+    }
+
+    @Test
+    void chopperCloseToTheBandIsFlagged() {
+        Stage s = stage().bandHigh(500).build();
+        Part chop = part("CHOP").architecture(Architecture.AUTO_ZERO).fchop(2e3).build();
+        Candidate c = Candidate.of(budget(s, chop, 0.1e-3, 0.1e-3, 0.1e-3, Verdict.FITS));
+        List<String> caveats = Advisor.caveats(s, c);
+        // 2 kHz / 500 Hz = 4, under the common-practice clearance of 10
+        assertTrue(caveats.stream().anyMatch(l -> l.startsWith("chopping at 2.00 kHz is only 4 times the 500 Hz band edge")),
+                caveats.toString());
+        assertTrue(caveats.stream().anyMatch(l -> l.startsWith("bias current is not in the catalog")), caveats.toString());
+    }
+
+    @Test
+    void aCheaperFittingPartAddedChangesThePick() {
+        Stage s = stage().build();
+        Part a = part("A").price(2.00).build();
+        Part b = part("B").price(3.00).build();
+        Map<Part, Budget> m = new LinkedHashMap<>();
+        m.put(a, budget(s, a, 0.3e-3, 0.3e-3, 0.3e-3, Verdict.FITS));
+        m.put(b, budget(s, b, 0.1e-3, 0.1e-3, 0.1e-3, Verdict.FITS));
+        assertEquals("A", rank(s, m).advice().pick().id());
+        // a cheaper part that does not fit leaves the pick alone
+        Part nofit = part("NOFIT").price(0.50).build();
+        m.put(nofit, budget(s, nofit, 0.9e-3, 0.9e-3, 0.9e-3, Verdict.NO_FIT));
+        assertEquals("A", rank(s, m).advice().pick().id());
+        // a cheaper part that fits takes it
+        Part c = part("C").price(1.50).build();
+        m.put(c, budget(s, c, 0.4e-3, 0.4e-3, 0.4e-3, Verdict.FITS));
+        Ranking r = rank(s, m);
+        assertEquals("C", r.advice().pick().id());
+        assertEquals(List.of("C", "A", "B", "NOFIT"), r.candidates().stream().map(Candidate::id).toList());
+    }
+
+    @Test
+    void equalCostsSortByMarginAndNoFitsByCloseness() {
+        Stage s = stage().build();
+        Part a = part("A").price(1.00).build();
+        Part b = part("B").price(1.00).build();
+        Part far = part("FAR").price(0.10).build();
+        Part near = part("NEAR").price(5.00).build();
+        Map<Part, Budget> m = new LinkedHashMap<>();
+        m.put(a, budget(s, a, 0.4e-3, 0.4e-3, 0.4e-3, Verdict.FITS)); // margin 20 %
+        m.put(b, budget(s, b, 0.2e-3, 0.2e-3, 0.2e-3, Verdict.FITS)); // margin 60 %
+        m.put(far, budget(s, far, 2e-3, 1e-3, 1e-3, Verdict.NO_FIT)); // 200 % over
+        m.put(near, budget(s, near, 0.6e-3, 0.5e-3, 0.5e-3, Verdict.NO_FIT)); // 10 % over
+        assertEquals(List.of("B", "A", "NEAR", "FAR"), rank(s, m).candidates().stream().map(Candidate::id).toList());
+    }
+
+    @Test
+    void hardConstraintFailuresAreRejectedWithTheReason() {
+        Stage s = stage().build();
+        Part hot = part("HOT").price(0.10).build();
+        Map<Part, Budget> m = precAndCheap(s, Verdict.NO_FIT);
+        m.put(hot, Budgets.rejected(s, hot, "temperature", "needs 0..70 °C, rated 0..50 °C (20 °C short)"));
+        Ranking r = rank(s, m);
+        assertEquals(1, r.rejected().size());
+        assertEquals("temperature: needs 0..70 °C, rated 0..50 °C (20 °C short)", r.rejected().get(0).reason());
+        assertTrue(r.candidates().stream().noneMatch(c -> c.id().equals("HOT")));
+        assertTrue(!r.paretoIds().contains("HOT"));
+    }
+
+    @Test
+    void paretoFrontOfThisRanking() {
+        Stage s = stage().build();
+        Ranking r = rank(s, precAndCheap(s, Verdict.NO_FIT));
+        // PREC: 3.00, 0.5 mV; CHEAP: 1.00, 1.9 mV: neither dominates the other
+        assertEquals(List.of("CHEAP", "PREC"), r.paretoIds());
+    }
+}

@@ -1,0 +1,140 @@
+package dev.ampsieve.budget;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.ampsieve.catalog.Architecture;
+import dev.ampsieve.catalog.Headroom;
+import dev.ampsieve.catalog.Price;
+import dev.ampsieve.catalog.Range;
+import dev.ampsieve.fixtures.PartFixture;
+import dev.ampsieve.fixtures.StageFixture;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+
+class ConstraintsTest {
+
+    private static ConstraintResult get(Budget b, String name) {
+        return b.constraints().stream().filter(c -> c.name().equals(name)).findFirst().orElseThrow();
+    }
+
+    private static Budget budget(StageFixture s, PartFixture p) {
+        return BudgetCalculator.compute(s.build(), p.build());
+    }
+
+    @Test
+    void supplyRangeMustHoldTheSupplyAndItsVariation() {
+        StageFixture s = StageFixture.follower().limitV(1);
+        s.supply = 12.0;
+        s.supplyVariation = 0.5;
+        PartFixture p = PartFixture.ideal();
+        p.supply = new Range(2.7, 5.5);
+        ConstraintResult c = get(budget(s, p), "supply");
+        assertFalse(c.ok());
+        assertTrue(c.detail().contains("short by 7.00 V at the high end"), c.detail());
+        p.supply = new Range(4.5, 36);
+        assertTrue(get(budget(s, p), "supply").ok());
+    }
+
+    @Test
+    void temperatureGrade() {
+        StageFixture s = StageFixture.follower().limitV(1).temps(-40, 125);
+        PartFixture p = PartFixture.ideal();
+        p.temperature = new Range(-40, 85);
+        ConstraintResult c = get(budget(s, p), "temperature");
+        assertFalse(c.ok());
+        assertTrue(c.detail().contains("short by 40 °C at the high end"), c.detail());
+    }
+
+    @Test
+    void commonModeDefaultsToMidSupply() {
+        // Vs 5 V, swing 4 V: needs 0.5 .. 4.5 V; input headroom 1.5 V below the top rail reaches 3.5 V
+        StageFixture s = StageFixture.follower().limitV(1);
+        s.supply = 5.0;
+        s.cmSwing = 4;
+        PartFixture p = PartFixture.ideal();
+        p.inHead = new Headroom(0, 1.5);
+        ConstraintResult c = get(budget(s, p), "common-mode");
+        assertFalse(c.ok());
+        assertTrue(c.detail().contains("short by 1.00 V at the high end"), c.detail());
+        s.cmRange = new Range(1, 3);
+        assertTrue(get(budget(s, p), "common-mode").ok());
+    }
+
+    @Test
+    void missingHeadroomIsAssumedPessimisticNotSkipped() {
+        // Vs 5 V, swing 1 V: needs 2.0 .. 3.0 V; an assumed 1.5 V from each rail reaches 1.5 .. 3.5 V (fits);
+        // a 3 V swing needs 1.0 .. 4.0 V, which the assumed headroom cannot reach
+        StageFixture s = StageFixture.follower().limitV(1);
+        s.supply = 5.0;
+        s.cmSwing = 1;
+        PartFixture p = PartFixture.ideal();
+        p.inHead = null;
+        Budget b = budget(s, p);
+        assertTrue(get(b, "common-mode").ok(), get(b, "common-mode").detail());
+        assertTrue(get(b, "common-mode").detail().contains("assumed"));
+        assertTrue(b.warnings().stream().anyMatch(w -> w.startsWith("common-mode") && w.contains("1.50 V")), b.warnings().toString());
+        s.cmSwing = 3;
+        assertFalse(get(budget(s, p), "common-mode").ok());
+    }
+
+    @Test
+    void outputSwingAndSlew() {
+        StageFixture s = StageFixture.nonInverting(9e3, 1e3).limitV(1);
+        s.supply = 5.0;
+        s.fullScale = 4.0;
+        s.fH = 100e3;
+        PartFixture p = PartFixture.ideal();
+        p.outHead = new Headroom(0.6, 0.1);
+        p.slew = 2e6;
+        Budget b = budget(s, p);
+        ConstraintResult out = get(b, "output-swing");
+        assertFalse(out.ok());
+        assertTrue(out.detail().contains("at the low end"), out.detail());
+        // 2π x 100 kHz x 4 V = 2.51 V/µs (Franco4 ch. 6 [from memory], full-power bandwidth)
+        assertEquals(2 * Math.PI * 100e3 * 4, Constraints.neededSlew(s.build()), 1e-6);
+        ConstraintResult slew = get(b, "slew");
+        assertFalse(slew.ok());
+        assertTrue(slew.detail().contains("2.51 V/µs"), slew.detail());
+    }
+
+    @Test
+    void priceCeiling() {
+        StageFixture s = StageFixture.follower().limitV(1);
+        s.maxPrice = 2.0;
+        PartFixture p = PartFixture.ideal();
+        p.price = new Price(3.1, 100, "EUR");
+        ConstraintResult c = get(budget(s, p), "price");
+        assertFalse(c.ok());
+        assertEquals("ceiling 2.00 EUR; part 3.10 EUR; over by 1.10 EUR", c.detail());
+    }
+
+    @Test
+    void uncheckableConstraintsPassWithAWarning() {
+        StageFixture s = StageFixture.follower().limitV(1);
+        s.fullScale = 1.0;
+        PartFixture p = PartFixture.ideal();
+        p.slew = null;
+        Budget b = budget(s, p);
+        assertTrue(get(b, "slew").ok());
+        assertTrue(get(b, "slew").detail().startsWith("not checked"));
+        assertTrue(b.warnings().stream().anyMatch(w -> w.startsWith("slew: not given")));
+        assertEquals(List.of("supply", "temperature", "common-mode", "output-swing", "slew", "price"),
+                b.constraints().stream().map(ConstraintResult::name).toList());
+    }
+
+    @Test
+    void chopperCaveats() {
+        StageFixture s = StageFixture.follower().limitV(1);
+        s.fH = 2e3;
+        PartFixture p = PartFixture.ideal();
+        p.architecture = Architecture.CHOPPER;
+        p.chop = 10e3;
+        Budget b = budget(s, p);
+        assertTrue(b.warnings().stream().anyMatch(w -> w.contains("bias-current spikes")));
+        assertTrue(b.warnings().stream().anyMatch(w -> w.contains("not far below the chopping frequency")));
+        s.fH = 500;
+        assertFalse(budget(s, p).warnings().stream().anyMatch(w -> w.contains("not far below")));
+    }
+}

@@ -1,0 +1,191 @@
+package dev.ampsieve.budget;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.ampsieve.catalog.InputType;
+import dev.ampsieve.catalog.LongTermDrift;
+import dev.ampsieve.catalog.MinTyp;
+import dev.ampsieve.catalog.Spread;
+import dev.ampsieve.fixtures.PartFixture;
+import dev.ampsieve.fixtures.StageFixture;
+import dev.ampsieve.stage.Stage;
+import org.junit.jupiter.api.Test;
+
+/** The missing-value and temperature rules of error-model.md, term by term. */
+class TermRulesTest {
+
+    private static Budget budget(StageFixture s, PartFixture p) {
+        return BudgetCalculator.compute(s.build(), p.build());
+    }
+
+    private static boolean warns(Budget b, String fragment) {
+        return b.warnings().stream().anyMatch(w -> w.contains(fragment));
+    }
+
+    @Test
+    void fetBiasCurrentDoublesEvery10C() {
+        // common practice (junction leakage): IB(T) = IB(25) x 2^((T-25)/10); reference-checks §5: 85 °C x64, 125 °C x1024
+        assertEquals(64.0, PartValues.biasFactor(InputType.JFET, 1e-12, Double.NaN, 85), 1e-12);
+        assertEquals(1024.0, PartValues.biasFactor(InputType.CMOS, 1e-12, Double.NaN, 125), 1e-9);
+        // +7.18 %/°C (reference-checks §5 [Calc])
+        assertEquals(1.0718, PartValues.biasFactor(InputType.CMOS, 1e-12, Double.NaN, 26), 0.00005);
+        // below 25 °C the 25 °C maximum is kept (the rule's x0.0625 at -15 °C would flatter the part)
+        assertEquals(1.0, PartValues.biasFactor(InputType.CMOS, 1e-12, Double.NaN, -15), 0.0);
+        // bipolar inputs stay at the 25 °C maximum
+        assertEquals(1.0, PartValues.biasFactor(InputType.BIPOLAR, 1e-9, Double.NaN, 125), 0.0);
+        // the catalog's over-temperature maximum wins where given
+        assertEquals(20.0, PartValues.biasFactor(InputType.CMOS, 1e-12, 20e-12, 125), 1e-12);
+    }
+
+    @Test
+    void fetBiasTermIsWorstAtTheHotEnd() {
+        StageFixture s = StageFixture.nonInverting(1e6, 1e6).limitV(1).temps(-40, 85);
+        s.rs = 1e6;
+        PartFixture p = PartFixture.ideal();
+        p.input = InputType.CMOS;
+        p.ib = new Spread(null, 1e-12, null);
+        p.ios = new Spread(null, 0.5e-12, null);
+        TermResult t = budget(s, p).term("bias");
+        double ng = 2;
+        double ib = 64e-12;
+        double ios = 32e-12;
+        // |NG R+ - Rf| IB + (NG R+ + Rf) IOS/2 at 85 °C
+        assertEquals(Math.abs(ng * 1e6 - 1e6) * ib + (ng * 1e6 + 1e6) * ios / 2, t.outputV(), 1e-18);
+        assertEquals(85.0, t.worstAtC(), 0.0);
+        assertFalse(t.estimated());
+    }
+
+    @Test
+    void bipolarBiasDoesNotDependOnTemperature() {
+        StageFixture s = StageFixture.nonInverting(100e3, 1e3).limitV(1);
+        PartFixture p = PartFixture.ideal();
+        p.ib = new Spread(null, 10e-9, null);
+        p.ios = new Spread(null, 1e-9, null);
+        TermResult t = budget(s, p).term("bias");
+        assertEquals(100e3 * 10e-9 + 100e3 * 1e-9 / 2, t.outputV(), 1e-15);
+        assertTrue(Double.isNaN(t.worstAtC()));
+    }
+
+    @Test
+    void maxOverTemperatureCapsOffsetPlusDrift() {
+        // error-model.md term 2: terms 1 + 2 never exceed NG x vos.maxOverTemp
+        StageFixture s = StageFixture.nonInverting(9e3, 1e3).limitV(1).temps(-20, 70); // dT 45 °C, NG 10
+        PartFixture p = PartFixture.ideal().vos(null, 100e-6, 150e-6).drift(null, 2e-6); // raw drift 90 µV
+        Budget b = budget(s, p);
+        assertEquals(1e-3, b.term("offset").outputV(), 1e-15);
+        assertEquals(0.5e-3, b.term("drift").outputV(), 1e-15);
+        assertTrue(b.term("drift").note().contains("capped"));
+        // under the cap nothing changes
+        p.drift(null, 0.5e-6);
+        assertEquals(10 * 0.5e-6 * 45, budget(s, p).term("drift").outputV(), 1e-15);
+    }
+
+    @Test
+    void maxOverTemperatureStandsInForAMissingDrift() {
+        StageFixture s = StageFixture.nonInverting(9e3, 1e3).limitV(1);
+        PartFixture p = PartFixture.ideal().vos(null, 100e-6, 180e-6);
+        p.drift = Spread.NONE;
+        Budget b = budget(s, p);
+        assertEquals(10 * 80e-6, b.term("drift").outputV(), 1e-15);
+        assertFalse(b.term("drift").estimated());
+    }
+
+    @Test
+    void missingBipolarDriftIsEstimatedAsVosOverT() {
+        // GHLM5 ch. 3, AoE3 ch. 5 [from memory]; reference-checks §5: 1 mV at 25 °C -> 3.354 µV/°C
+        assertEquals(3.354e-6, PartValues.estimatedDrift(1e-3), 0.0005e-6);
+        StageFixture s = StageFixture.nonInverting(9e3, 1e3).limitV(1).temps(25, 85);
+        PartFixture p = PartFixture.ideal().vos(null, 1e-3, null);
+        p.drift = Spread.NONE;
+        Budget b = budget(s, p);
+        TermResult d = b.term("drift");
+        assertEquals(10 * 1e-3 / 298.15 * 60, d.outputV(), 1e-15);
+        assertTrue(d.estimated());
+        assertEquals(85.0, d.worstAtC(), 0.0);
+        assertTrue(warns(b, "estimated as vos / T"));
+        assertFalse(warns(b, "may understate"));
+        p.input = InputType.JFET;
+        assertTrue(warns(budget(s, p), "may understate"));
+    }
+
+    @Test
+    void typicalOnlyIsUsedAndFlagged() {
+        StageFixture s = StageFixture.follower().limitV(1);
+        Budget b = budget(s, PartFixture.ideal().vos(50e-6, null, null));
+        assertEquals(50e-6, b.term("offset").outputV(), 0.0);
+        assertTrue(b.term("offset").estimated());
+        assertTrue(warns(b, "vos: no guaranteed maximum"));
+    }
+
+    @Test
+    void missingRejectionAndGainAreAssumedPessimistically() {
+        StageFixture s = StageFixture.follower().limitV(1);
+        s.cmSwing = 1;
+        s.supplyVariation = 1;
+        s.fullScale = 1.0;
+        PartFixture p = PartFixture.ideal();
+        p.cmrr = MinTyp.NONE;
+        p.psrr = MinTyp.NONE;
+        p.aol = MinTyp.NONE;
+        Budget b = budget(s, p);
+        assertEquals(1e-3, b.term("cmrr").outputV(), 1e-15); // 60 dB
+        assertEquals(1e-3, b.term("psrr").outputV(), 1e-15);
+        assertEquals(1.0 / (1e4 + 1), b.term("open-loop-gain").outputV(), 1e-15); // 80 dB
+        assertTrue(b.term("cmrr").estimated());
+        assertTrue(warns(b, "cmrr: not given; a pessimistic 60 dB is assumed"));
+        assertTrue(warns(b, "aol: not given"));
+        // a guaranteed value, even a poor one, is not flagged
+        p.cmrr = new MinTyp(50.0, null);
+        assertFalse(budget(s, p).term("cmrr").estimated());
+    }
+
+    @Test
+    void agingGrowsWithTheSquareRootOfTime() {
+        // reference-checks §6 [Calc, √t model]: 1 µV per 1000 h -> 2000 h 1.4142 µV, 1 year (8760 h) 2.9597 µV, 10 y 9.3595 µV
+        LongTermDrift d = new LongTermDrift(1e-6, 1000 * 3600.0);
+        assertEquals(1.4142e-6, AgingTerm.inputAging(d, 2000 * 3600.0), 0.00005e-6);
+        assertEquals(2.9597e-6, AgingTerm.inputAging(d, 8760 * 3600.0), 0.00005e-6);
+        assertEquals(9.3595e-6, AgingTerm.inputAging(d, 87600 * 3600.0), 0.00005e-6);
+        StageFixture s = StageFixture.nonInverting(9e3, 1e3).limitV(1);
+        s.life = 8760 * 3600.0;
+        PartFixture p = PartFixture.ideal();
+        p.aging = d;
+        assertEquals(10 * 2.9597e-6, budget(s, p).term("aging").outputV(), 0.0005e-6);
+    }
+
+    @Test
+    void noiseTermUsesTheNoiseBandwidthAndAllowance() {
+        // fN = π/2 x min(fH, GBW/NG); counted as 3.3 x rms (error-model.md term 10)
+        StageFixture sf = StageFixture.nonInverting(99e3, 1e3).limitV(1);
+        sf.fH = 1e3;
+        sf.rs = 1e3;
+        PartFixture p = PartFixture.ideal();
+        p.gbw = 10e6; // closed-loop pole 100 kHz: fH limits
+        p.noise = new dev.ampsieve.catalog.Noise(10e-9, 5.0, 1e-12, 50.0);
+        Stage s = sf.build();
+        Budget b = BudgetCalculator.compute(s, p.build());
+        double rms = NoiseModel.outputRms(s, 10e-9, 5, 1e-12, 50, 0.1, Math.PI / 2 * 1e3, 298.15);
+        assertEquals(rms, b.noiseRmsV(), rms * 1e-12);
+        assertEquals(3.3 * rms, b.term("noise").outputV(), rms * 1e-12);
+        p.gbw = 50e3; // closed-loop pole 500 Hz: the amplifier limits
+        double rms2 = NoiseModel.outputRms(s, 10e-9, 5, 1e-12, 50, 0.1, Math.PI / 2 * 500, 298.15);
+        assertEquals(rms2, BudgetCalculator.compute(s, p.build()).noiseRmsV(), rms2 * 1e-12);
+    }
+
+    @Test
+    void worstCaseAndRssOfThreeTerms() {
+        // GUM (JCGM 100:2008) eq. 10; reference-checks §7: 3, 4, 12 µV -> WC 19 µV, RSS 13 µV
+        StageFixture s = StageFixture.follower().limitV(1).temps(25, 65); // dT 40 °C
+        s.cmSwing = 1;
+        PartFixture p = PartFixture.ideal().vos(null, 3e-6, null).drift(null, 0.1e-6);
+        p.cmrr = new MinTyp(-20 * Math.log10(12e-6), null);
+        Budget b = budget(s, p);
+        assertEquals(19e-6, b.worstCaseV(), 1e-15);
+        assertEquals(13e-6, b.rssV(), 1e-15);
+        assertEquals("cmrr", b.limitingTerm());
+        assertEquals("cmrr", b.terms().get(0).key()); // sorted largest first
+        assertEquals("drift", b.terms().get(1).key());
+    }
+}

@@ -1,0 +1,129 @@
+package dev.ampsieve.budget;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.ampsieve.catalog.MinTyp;
+import dev.ampsieve.catalog.Spread;
+import dev.ampsieve.fixtures.PartFixture;
+import dev.ampsieve.fixtures.StageFixture;
+import dev.ampsieve.stage.Criterion;
+import dev.ampsieve.stats.SequentialYield;
+import org.apache.commons.math3.distribution.NormalDistribution;
+import org.junit.jupiter.api.Test;
+
+class YieldTest {
+
+    /** A follower whose only varying quantity is the offset. */
+    private static PartFixture offsetOnly(Double typ, Double max) {
+        return PartFixture.ideal().vos(typ, max, null);
+    }
+
+    @Test
+    void oneNormalTermWithTheLimitAtThreeSigma() {
+        // commons-math3 NormalDistribution: P(|Z| <= 3) = 0.9973002 (reference-checks §7, Abramowitz & Stegun ch. 26);
+        // a typical-only offset is one sigma, untruncated (error-model.md "Yield")
+        double expected = new NormalDistribution().probability(-3, 3);
+        assertEquals(0.997300204, expected, 1e-9);
+        StageFixture s = StageFixture.follower().limitV(3e-3);
+        Budget b = BudgetCalculator.compute(s.build(), offsetOnly(1e-3, null).build());
+        YieldResult y = b.yield();
+        assertEquals("sampled", y.decided());
+        assertEquals(20000, y.trials());
+        assertTrue(y.low() <= expected && expected <= y.high(),
+                "P(|Z|<=3) = " + expected + " outside the Wilson interval [" + y.low() + ", " + y.high() + "]");
+    }
+
+    @Test
+    void truncatedOffsetFollowsTheTruncatedLaw() {
+        // max 4 mV read at k = 4 sigma (sigma 1 mV), truncated there; limit at 2 sigma:
+        // P(|Z| <= 2) / P(|Z| <= 4) from commons-math3
+        NormalDistribution nd = new NormalDistribution();
+        double expected = nd.probability(-2, 2) / nd.probability(-4, 4);
+        StageFixture s = StageFixture.follower().limitV(2e-3);
+        s.k = 4;
+        YieldResult y = BudgetCalculator.compute(s.build(), offsetOnly(null, 4e-3).build()).yield();
+        assertTrue(y.low() <= expected && expected <= y.high(), expected + " not in [" + y.low() + ", " + y.high() + "]");
+    }
+
+    @Test
+    void allPassWithoutSamplingWhenTheLargestErrorFits() {
+        StageFixture s = StageFixture.follower().limitV(2e-3);
+        YieldResult y = BudgetCalculator.compute(s.build(), offsetOnly(null, 1e-3).build()).yield();
+        assertEquals("all-pass", y.decided());
+        assertEquals(0, y.trials());
+        assertEquals(1.0, y.value(), 0.0);
+        assertEquals(1.0, y.low(), 0.0);
+    }
+
+    @Test
+    void untruncatedValuesAreSampledEvenWhenTheWorstCaseFits() {
+        // a typical-only offset has no bound, so the worst-case sum does not bound every unit
+        StageFixture s = StageFixture.follower().limitV(2e-3);
+        Budget b = BudgetCalculator.compute(s.build(), offsetOnly(1e-3, null).build());
+        assertTrue(b.worstCaseV() <= b.limitV());
+        assertEquals("sampled", b.yield().decided());
+        assertTrue(b.yield().value() < 1.0);
+    }
+
+    @Test
+    void nonePassWithoutSamplingWhenTheSmallestErrorExceeds() {
+        // follower with Rf 100k: E = vos + IB x Rf (IB fixed at its maximum without a typical) = 1 mV +/- 0.1 mV
+        StageFixture s = StageFixture.follower().limitV(0.8e-3);
+        s.rf = 100e3;
+        PartFixture p = offsetOnly(null, 0.1e-3);
+        p.ib = new Spread(null, 10e-9, null);
+        YieldResult y = BudgetCalculator.compute(s.build(), p.build()).yield();
+        assertEquals("none-pass", y.decided());
+        assertEquals(0, y.trials());
+        assertEquals(0.0, y.high(), 0.0);
+        // a fixed term alone above the limit decides it too
+        StageFixture s2 = StageFixture.follower().limitV(0.5e-3);
+        s2.cmSwing = 1;
+        PartFixture p2 = offsetOnly(null, 1e-3);
+        p2.cmrr = new MinTyp(60.0, null);
+        assertEquals("none-pass", BudgetCalculator.compute(s2.build(), p2.build()).yield().decided());
+        // near the edge it samples
+        s.limitV(1.05e-3);
+        YieldResult near = BudgetCalculator.compute(s.build(), p.build()).yield();
+        assertEquals("sampled", near.decided());
+    }
+
+    @Test
+    void stopsEarlyAndReproducibly() {
+        // true yield about 68 % against a 99 % target: decided after the first block of 1000
+        StageFixture s = StageFixture.follower().limitV(1e-3);
+        s.criterion = Criterion.yield(0.99);
+        s.seed = 1234;
+        PartFixture p = offsetOnly(1e-3, null);
+        YieldResult a = BudgetCalculator.compute(s.build(), p.build()).yield();
+        YieldResult b = BudgetCalculator.compute(s.build(), p.build()).yield();
+        assertEquals(SequentialYield.BLOCK, a.trials());
+        assertEquals(a, b);
+        // P(|Z| <= 1) = 0.6827 (reference-checks §7) inside its interval
+        double expected = new NormalDistribution().probability(-1, 1);
+        assertTrue(a.low() <= expected && expected <= a.high());
+        // another seed gives another sample
+        s.seed = 99;
+        YieldResult c = BudgetCalculator.compute(s.build(), p.build()).yield();
+        assertTrue(c.value() != a.value());
+    }
+
+    @Test
+    void withoutATargetAllTrialsRun() {
+        StageFixture s = StageFixture.follower().limitV(1e-3);
+        s.trials = 5000;
+        YieldResult y = BudgetCalculator.compute(s.build(), offsetOnly(1e-3, null).build()).yield();
+        assertEquals(5000, y.trials());
+    }
+
+    @Test
+    void maxOverTemperatureHoldsEveryUnitInside() {
+        // vos max 1 mV (k = 3), drift 20 µV/°C over 45 °C would reach 1.9 mV; the catalog guarantees 1.2 mV over
+        // temperature, so no unit exceeds it: the bounds decide all-pass at a 1.2 mV limit
+        StageFixture s = StageFixture.follower().limitV(1.2e-3).temps(-20, 70);
+        PartFixture p = PartFixture.ideal().vos(null, 1e-3, 1.2e-3).drift(null, 20e-6);
+        YieldResult y = BudgetCalculator.compute(s.build(), p.build()).yield();
+        assertEquals("all-pass", y.decided());
+    }
+}

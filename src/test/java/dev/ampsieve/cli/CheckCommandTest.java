@@ -1,0 +1,98 @@
+package dev.ampsieve.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class CheckCommandTest {
+
+    @TempDir
+    Path dir;
+
+    /** An invented part; no noise data, so it loads with exactly one warning. */
+    private static final String PART = """
+            id: check-amp
+            architecture: standard
+            input: cmos
+            vos: {typ: 0.2 mV, max: 1 mV, max-over-temp: 1.5 mV}
+            gbw: 2 MHz
+            supply: {min: 2.7 V, max: 5.5 V}
+            temperature: {min: -40 C, max: 125 C}
+            price: {unit: 0.60, quantity: 1000}
+            """;
+
+    private record Run(int code, String out, String err) {
+        List<String> outLines() {
+            return out.lines().toList();
+        }
+    }
+
+    private static Run run(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int code = Commands.run(args, new PrintWriter(out), new PrintWriter(err));
+        return new Run(code, out.toString(), err.toString());
+    }
+
+    @Test
+    void aCatalogWithOnlyWarningsChecksClean() throws IOException {
+        Path f = Files.writeString(dir.resolve("amp.yaml"), PART);
+        Run r = run("--catalog", dir.toString(), "check");
+        assertEquals(ExitCode.OK, r.code(), r.out() + r.err());
+        assertEquals(List.of(
+                f + ":1:1: warning: noise.en: not given: the voltage-noise term will be zero;"
+                        + " add 'noise: {en: 12 nV/rtHz}' with the datasheet's white-noise density",
+                dir + ": 1 file(s), 1 part(s), 0 error(s), 1 warning(s)"), r.outLines());
+        assertEquals("", r.err());
+    }
+
+    @Test
+    void anErrorListsTheProblemAndExitsWithFindings() throws IOException {
+        Files.writeString(dir.resolve("good.yaml"), PART);
+        Path bad = Files.writeString(dir.resolve("sub-bad.yaml"), PART.replace("check-amp", "other-amp")
+                .replace("gbw: 2 MHz", "gbw: 2 mA"));
+        Run r = run("--catalog", dir.toString(), "check");
+        assertEquals(ExitCode.FINDINGS, r.code());
+        assertTrue(r.outLines().contains(bad + ":5:6: gbw: '2 mA' is a current but a frequency belongs here;"
+                + " write a frequency such as '1.5 MHz'"), r.out());
+        assertEquals(dir + ": 2 file(s), 1 part(s), 1 error(s), 1 warning(s)", r.outLines().get(r.outLines().size() - 1));
+    }
+
+    @Test
+    void strictRefusesTheCatalogAndListsEveryProblemOnStderr() throws IOException {
+        Files.writeString(dir.resolve("amp.yaml"), PART.replace("gbw: 2 MHz", "gbw: 2 mA"));
+        Run r = run("--catalog", dir.toString(), "--strict", "check");
+        assertEquals(ExitCode.FINDINGS, r.code());
+        assertEquals("", r.out());
+        assertEquals(1, r.err().lines().count(), r.err());
+        assertTrue(r.err().contains("amp.yaml:5:6: gbw: '2 mA' is a current"), r.err());
+    }
+
+    @Test
+    void aMissingCatalogFolderIsOneLineWithTheFixNotAStackTrace() {
+        Path missing = dir.resolve("nope");
+        Run r = run("check", "--catalog", missing.toString());
+        assertEquals(ExitCode.FINDINGS, r.code());
+        assertEquals(missing + ": catalog folder not found; give the catalog folder with --catalog DIR"
+                + " or the environment variable AMPSIEVE_CATALOG", r.err().strip());
+        assertFalse(r.err().contains("Exception"), r.err());
+    }
+
+    @Test
+    void malformedYamlIsReportedWithoutAStackTrace() throws IOException {
+        Path f = Files.writeString(dir.resolve("broken.yaml"), "id: x\nvos: {max: 1 mV\n");
+        Run r = run("--catalog", dir.toString(), "check");
+        assertEquals(ExitCode.FINDINGS, r.code());
+        assertTrue(r.outLines().get(0).startsWith(f + ":3:1: YAML syntax: "), r.out());
+        assertFalse((r.out() + r.err()).contains("Exception"));
+    }
+}

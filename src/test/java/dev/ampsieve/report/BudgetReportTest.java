@@ -1,0 +1,90 @@
+package dev.ampsieve.report;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.ampsieve.budget.Budget;
+import dev.ampsieve.budget.BudgetCalculator;
+import dev.ampsieve.catalog.Spread;
+import dev.ampsieve.fixtures.PartFixture;
+import dev.ampsieve.fixtures.StageFixture;
+import java.util.ArrayList;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+
+class BudgetReportTest {
+
+    private static Budget sample() {
+        StageFixture s = StageFixture.nonInverting(99e3, 1e3).limitV(20e-3);
+        s.supply = 10.0;
+        s.fullScale = 5.0;
+        PartFixture p = PartFixture.ideal().vos(null, 100e-6, null);
+        p.drift = Spread.NONE; // estimated, so a warning and a mark appear
+        p.ib = new Spread(null, 5e-9, null);
+        p.ios = new Spread(null, 1e-9, null);
+        return BudgetCalculator.compute(s.build(), p.build());
+    }
+
+    @Test
+    void jsonHasTheDocumentedKeys() throws Exception {
+        Budget b = sample();
+        JsonNode j = new ObjectMapper().readTree(BudgetJson.render(b, "stage.yaml"));
+        for (String k : List.of("part", "noiseGain", "terms", "worstCaseV", "rssV", "noiseRmsV", "limitV", "yield",
+                "trimmed", "verdict", "limitingTerm", "constraints", "warnings", "caution")) {
+            assertTrue(j.has(k), "missing key " + k);
+        }
+        assertEquals("test-amp", j.get("part").asText());
+        assertEquals(100.0, j.get("noiseGain").asDouble(), 0.0);
+        List<String> keys = new ArrayList<>();
+        j.get("terms").forEach(t -> keys.add(t.get("key").asText()));
+        assertEquals(List.of("offset", "drift", "bias", "cmrr", "psrr", "open-loop-gain", "bandwidth", "resistors",
+                "aging", "noise").stream().sorted().toList(), keys.stream().sorted().toList());
+        JsonNode offset = j.get("terms").get(0);
+        assertEquals("offset", offset.get("key").asText()); // largest first
+        assertEquals(10e-3, offset.get("outputV").asDouble(), 1e-15);
+        assertEquals(100e-6, offset.get("inputV").asDouble(), 1e-15);
+        for (String k : List.of("value", "low", "high", "trials")) {
+            assertTrue(j.get("yield").has(k), "yield." + k);
+        }
+        assertTrue(j.get("trimmed").has("worstCaseV") && j.get("trimmed").has("rssV"));
+        assertEquals(b.worstCaseV(), j.get("worstCaseV").asDouble(), 0.0);
+        assertEquals(b.verdict().key(), j.get("verdict").asText());
+        JsonNode c = j.get("constraints").get(0);
+        assertTrue(c.has("name") && c.has("ok") && c.has("detail"));
+        assertEquals(Caution.TEXT, j.get("caution").asText());
+        assertTrue(j.get("warnings").get(0).asText().contains("vos-drift"));
+        // no NaN in JSON: temperature-independent terms write null
+        assertTrue(j.get("terms").get(3).get("worstAtC").isNull() || j.get("terms").get(3).get("worstAtC").isNumber());
+    }
+
+    @Test
+    void textListsTermsByShareAndEndsWithTheCaution() {
+        Budget b = sample();
+        String t = BudgetText.render(b, "stage.yaml");
+        assertTrue(t.startsWith("Part       test-amp"));
+        assertTrue(t.contains("noise gain 100"));
+        assertTrue(t.contains("initial offset"));
+        assertTrue(t.contains("50.0 %"), "10 mV of a 20 mV limit");
+        assertTrue(t.contains("offset drift*"), "estimated mark");
+        assertTrue(t.indexOf("initial offset") < t.indexOf("offset drift"));
+        assertTrue(t.contains("Verdict    " + b.verdict().key()));
+        assertTrue(t.strip().endsWith(Caution.TEXT));
+        assertFalse(t.contains("NaN"));
+    }
+
+    @Test
+    void yieldCriterionWithTrimShowsTheTrimmedYield() throws Exception {
+        StageFixture s = StageFixture.follower().limitV(3e-3);
+        s.criterion = dev.ampsieve.stage.Criterion.yield(0.999);
+        s.trim = new dev.ampsieve.stage.Trim(true, dev.ampsieve.stage.Trim.Method.ONE_POINT, 0, 1);
+        Budget b = BudgetCalculator.compute(s.build(), PartFixture.ideal().vos(1e-3, null, null).build());
+        assertEquals("fits-after-trim", b.verdict().key());
+        assertTrue(BudgetText.render(b, null).contains("yield after the one-point trim: 100 % (decided without sampling"));
+        JsonNode ty = new ObjectMapper().readTree(BudgetJson.render(b, null)).get("trimmed").get("yield");
+        assertEquals("all-pass", ty.get("decided").asText());
+        assertEquals(1.0, ty.get("low").asDouble(), 0.0);
+    }
+}

@@ -1,0 +1,121 @@
+package dev.ampsieve.report;
+
+import static dev.ampsieve.testing.PartBuilder.part;
+import static dev.ampsieve.testing.StageBuilder.stage;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.ampsieve.advice.Comparison;
+import dev.ampsieve.advice.Ranker;
+import dev.ampsieve.advice.Ranking;
+import dev.ampsieve.advice.Sufficiency;
+import dev.ampsieve.catalog.Architecture;
+import dev.ampsieve.catalog.Part;
+import dev.ampsieve.stage.Stage;
+import dev.ampsieve.testing.LinearEngine;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Renderings of a ranking made with the small linear model of {@link LinearEngine}:
+ * NG 100, 0..70 °C (dT 45), limit 1 mV at the output, one-point trim allowed at 0.40.
+ */
+class RankReportTest {
+
+    private final Stage stage = stage().trim(true, 10e-6, 0.40).supply(5.0).build();
+    // GOOD: 100*2 uV + 100*0.1 uV/°C*45 = 0.2 + 0.45 = 0.65 mV: fits, 2.00
+    private final Part good = part("GOOD").price(2.00).vos(null, 2e-6).drift(null, 0.1e-6).build();
+    // TRIMMED: 100*20 uV + 0.45 mV = 2.45 mV; after the trim 0.45 + 0.01 = 0.46 mV: fits after trim, 0.50 + 0.40
+    private final Part trimmed = part("TRIMMED").price(0.50).vos(null, 20e-6).drift(null, 0.1e-6).build();
+    // CHOP: 100*5 uV + 100*0.02 uV/°C*45 = 0.5 + 0.09 = 0.59 mV: fits, 3.00
+    private final Part chop = part("CHOP").price(3.00).architecture(Architecture.CHOPPER).vos(null, 5e-6)
+            .drift(null, 0.02e-6).fchop(10e3).build();
+    // HIGHV: rated 10..36 V, fails the 5 V supply
+    private final Part highv = part("HIGHV").price(0.20).supply(10, 36).build();
+
+    private Ranking ranking() {
+        return Ranker.rank(stage, List.of(good, trimmed, chop, highv), new LinearEngine());
+    }
+
+    @Test
+    void textListsCandidatesFrontRejectedAdviceAndEndsWithTheCaution() {
+        String text = RankReport.text(ranking(), "s.yaml", null, 15);
+        List<String> lines = text.lines().toList();
+        assertEquals("Stage s.yaml: non-inverting, noise gain 100, 0 °C to 70 °C", lines.get(0));
+        assertEquals("Limit 1.00 mV at the output (10.0 µV at the input), worst-case, quantity 1000", lines.get(1));
+        int header = lines.indexOf(lines.stream().filter(l -> l.startsWith("#  part")).findFirst().orElseThrow());
+        // TRIMMED 0.50 + 0.40 = 0.90 first, then GOOD 2.00, then CHOP 3.00
+        assertTrue(lines.get(header + 1).matches("1  TRIMMED\\s+\\+trim\\s+0\\.90\\s+460 µV.*"), lines.get(header + 1));
+        assertTrue(lines.get(header + 2).matches("2  GOOD\\s+fits\\s+2\\.00\\s+650 µV.*"), lines.get(header + 2));
+        assertTrue(lines.get(header + 3).matches("3  CHOP\\s+fits\\s+3\\.00\\s+590 µV.*"), lines.get(header + 3));
+        assertTrue(text.lines().anyMatch(l -> l.startsWith("HIGHV  supply: needs 5.0 V")), text);
+        assertTrue(text.contains("A one-point trim is warranted: TRIMMED"), text);
+        assertTrue(text.strip().endsWith(Caution.TEXT));
+        for (String l : lines) {
+            if (!l.equals(Caution.TEXT) && !l.startsWith("  ")) {
+                assertTrue(l.length() <= 100, l);
+            }
+        }
+    }
+
+    @Test
+    void jsonHasTheDocumentedKeys() throws Exception {
+        JsonNode j = new ObjectMapper().readTree(RankReport.json(ranking(), "s.yaml", "q", 2));
+        assertEquals(2, j.get("candidates").size()); // --top 2
+        JsonNode first = j.get("candidates").get(0);
+        for (String key : List.of("part", "verdict", "effectiveCost", "worstCaseV", "rssV", "yield", "limitingTerm")) {
+            assertTrue(first.has(key), key);
+        }
+        assertEquals("TRIMMED", first.get("part").asText());
+        assertEquals("fits-after-trim", first.get("verdict").asText());
+        assertEquals(0.90, first.get("effectiveCost").asDouble(), 1e-12);
+        assertEquals(2.45e-3, first.get("worstCaseV").asDouble(), 1e-12);
+        assertEquals("offset", first.get("limitingTerm").asText());
+        assertEquals("HIGHV", j.get("rejected").get(0).get("part").asText());
+        assertTrue(j.get("rejected").get(0).get("reason").asText().startsWith("supply: "));
+        // TRIMMED (0.90, 0.46 mV) is cheaper and better than both GOOD and CHOP: alone on the front
+        assertEquals(1, j.get("pareto").size());
+        assertEquals("TRIMMED", j.get("pareto").get(0).asText());
+        assertEquals("warranted", j.get("advice").get("trim").get("status").asText());
+        // GOOD 2.00 - (0.50 + 0.40) = 1.10 per unit
+        assertEquals(1.10, j.get("advice").get("trim").get("savingPerUnit").asDouble(), 1e-12);
+        assertEquals("not-warranted", j.get("advice").get("zeroDrift").get("status").asText());
+        assertTrue(j.get("advice").get("noFit").isNull());
+        assertEquals(Caution.TEXT, j.get("caution").asText());
+    }
+
+    @Test
+    void csvHasOneRowPerPartAndTheCautionLast() {
+        List<String> lines = RankReport.csv(ranking(), 15).lines().toList();
+        assertTrue(lines.get(0).startsWith("rank,part,verdict,effective_cost,currency,error_v,margin,"));
+        assertEquals(1 + 3 + 1 + 1, lines.size());
+        assertTrue(lines.get(1).startsWith("1,TRIMMED,fits-after-trim,0.900000,USD,0.000460000,"), lines.get(1));
+        assertTrue(lines.get(4).startsWith(",HIGHV,rejected,0.200000,USD,"), lines.get(4));
+        assertEquals("# " + Caution.TEXT, lines.get(5));
+    }
+
+    @Test
+    void compareAndSufficesRenderings() throws Exception {
+        LinearEngine e = new LinearEngine();
+        Comparison c = Comparison.of(e.compute(stage, good), e.compute(stage, chop));
+        String text = CompareReport.text(c, "s.yaml");
+        // initial offset: GOOD 200 µV against CHOP 500 µV, 2.5 times
+        assertTrue(text.lines().anyMatch(l -> l.matches("initial offset\\s+200 µV\\s+500 µV\\s+GOOD\\s+300 µV \\(2\\.5 times\\)")),
+                text);
+        assertTrue(text.contains("Both fit; GOOD costs 1.00 USD less per unit (1000.00 USD over 1000 units)"), text);
+        assertTrue(text.strip().endsWith(Caution.TEXT));
+        JsonNode j = new ObjectMapper().readTree(CompareReport.json(c, "s.yaml"));
+        assertEquals("GOOD", j.get("preferred").asText());
+        assertEquals(Caution.TEXT, j.get("caution").asText());
+
+        Sufficiency s = Sufficiency.of(e.compute(stage, trimmed));
+        String st = SufficesReport.text(s, "s.yaml");
+        assertTrue(st.startsWith("no: TRIMMED needs the trim; untrimmed worst-case 2.45 mV against 1.00 mV"), st);
+        assertTrue(st.strip().endsWith(Caution.TEXT));
+        JsonNode sj = new ObjectMapper().readTree(SufficesReport.json(s, "s.yaml"));
+        assertEquals("no", sj.get("answer").asText());
+        assertEquals(Caution.TEXT, sj.get("caution").asText());
+    }
+}

@@ -1,0 +1,136 @@
+package dev.ampsieve.search;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertInstanceOf;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.ampsieve.yaml.InputException;
+import dev.ampsieve.yaml.Problem;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+
+class QueryLanguageTest {
+
+    private static Problem onlyProblem(String query) {
+        InputException e = assertThrows(InputException.class, () -> QueryLanguage.parse(query));
+        assertEquals(1, e.problems().size(), e.getMessage());
+        Problem p = e.problems().get(0);
+        assertTrue(p.isError());
+        assertTrue(!p.toString().contains("\n"), "one line: " + p);
+        return p;
+    }
+
+    @Test
+    void unknownFieldSuggestsTheNearestName() {
+        Problem p = onlyProblem("vso<10uV");
+        assertEquals("unknown field 'vso'", p.message());
+        assertEquals("did you mean 'vos'?", p.fix());
+        assertEquals("query term 'vso<10uV'", p.field());
+    }
+
+    @Test
+    void unknownFieldFarFromAnyNameListsTheFields() {
+        Problem p = onlyProblem("wobble>3");
+        assertTrue(p.fix().startsWith("fields: id, input, architecture"), p.fix());
+        assertTrue(p.fix().contains("gbw"), p.fix());
+    }
+
+    @Test
+    void aliasIsAccepted() throws InputException {
+        PartQuery q = QueryLanguage.parse("temp>=125C offset<1mV");
+        assertEquals(Schema.TEMPERATURE, ((PartQuery.RatedAt) q.clauses().get(0)).field().name());
+        assertEquals(Schema.VOS, ((PartQuery.NumberIs) q.clauses().get(1)).field().name());
+    }
+
+    @Test
+    void wrongDimensionIsNamed() {
+        Problem p = onlyProblem("vos<5nA");
+        assertEquals("'5nA' is a current but a voltage belongs here", p.message());
+        assertTrue(p.fix().contains("2.5 uV"), p.fix());
+    }
+
+    @Test
+    void missingUnitIsAnError() {
+        Problem p = onlyProblem("gbw>10");
+        assertTrue(p.message().contains("has no unit"), p.message());
+    }
+
+    @Test
+    void unitWrittenApartFromItsNumberIsJoined() throws InputException {
+        PartQuery q = QueryLanguage.parse("gbw > 10 MHz chopper");
+        assertEquals(2, q.clauses().size());
+        PartQuery.NumberIs n = (PartQuery.NumberIs) q.clauses().get(0);
+        assertEquals(PartQuery.Op.GT, n.op());
+        assertEquals(10e6, n.lo(), 10e6 * 2e-9);
+        assertEquals(Double.POSITIVE_INFINITY, n.hi());
+        assertInstanceOf(PartQuery.Word.class, q.clauses().get(1));
+    }
+
+    @Test
+    void keywordValueIsCheckedWithSuggestion() {
+        Problem p = onlyProblem("input:cmso");
+        assertEquals("'cmso' is not a value of 'input'", p.message());
+        assertEquals("did you mean 'input:cmos'?", p.fix());
+    }
+
+    @Test
+    void comparisonOnAWordFieldAndWordOnANumberAreRefused() {
+        assertEquals("'input' is a word field, not a number", onlyProblem("input<3").message());
+        assertEquals("'vos' is a voltage, not a word", onlyProblem("vos:low").message());
+    }
+
+    @Test
+    void reversedRangeEmptyValueAndNegatedComparison() {
+        assertEquals("the lower end is above the upper end", onlyProblem("gbw=10MHz..1MHz").message());
+        assertEquals("no value after '<'", onlyProblem("vos<").message());
+        assertEquals("a range takes '=', not '<'", onlyProblem("gbw<1MHz..2MHz").message());
+        assertEquals("a comparison cannot be excluded with '-'", onlyProblem("-vos<1uV").message());
+    }
+
+    @Test
+    void everyBadTermIsReportedOnItsOwnLine() {
+        InputException e = assertThrows(InputException.class, () -> QueryLanguage.parse("vso<1uV chopper ib<2V"));
+        assertEquals(List.of("query term 'vso<1uV'", "query term 'ib<2V'"),
+                e.problems().stream().map(Problem::field).toList());
+    }
+
+    @Test
+    void strictAndInclusiveBoundsDifferOnlyAtTheValue() throws InputException {
+        PartQuery.NumberIs lt = (PartQuery.NumberIs) QueryLanguage.parse("vos<10uV").clauses().get(0);
+        PartQuery.NumberIs le = (PartQuery.NumberIs) QueryLanguage.parse("vos<=10uV").clauses().get(0);
+        double ten = 10e-6;
+        assertTrue(lt.hi() < ten && le.hi() >= ten);
+        assertEquals(ten, lt.hi(), ten * 2e-9);
+        assertEquals(ten, le.hi(), ten * 2e-9);
+    }
+
+    @Test
+    void sameValueSpeltTwoWaysComparesEqual() throws InputException {
+        // 10 * 1e-6 and 0.01 * 1e-3 differ in the last binary digit
+        PartQuery.NumberIs q = (PartQuery.NumberIs) QueryLanguage.parse("vos=0.01mV").clauses().get(0);
+        double catalogValue = 10 * 1e-6;
+        assertTrue(q.lo() <= catalogValue && catalogValue <= q.hi());
+    }
+
+    @Test
+    void emptyAndPunctuationOnlyQueriesMatchEverything() throws InputException {
+        assertTrue(QueryLanguage.parse("").isEmpty());
+        assertTrue(QueryLanguage.parse("  , ").isEmpty());
+    }
+
+    @Test
+    void helpNamesEveryNumericFieldAndFitsIn100Columns() {
+        String all = String.join(" ", QueryLanguage.helpLines());
+        String numbers = all.substring(all.indexOf("Numbers:") + 8, all.indexOf("Aliases:"));
+        List<String> listed = List.of(numbers.strip().replaceAll("\\.$", "").split("\\s+"));
+        assertEquals(Schema.NUMERIC.stream().map(Schema.Numeric::name).toList(), listed);
+        for (String alias : Schema.ALIASES.keySet()) {
+            assertTrue(all.substring(all.indexOf("Aliases:")).contains(alias), alias);
+        }
+        for (String line : QueryLanguage.helpLines()) {
+            assertTrue(line.length() <= 100, line);
+            assertTrue(!line.contains("%"), "picocli formats the footer: " + line);
+        }
+    }
+}
