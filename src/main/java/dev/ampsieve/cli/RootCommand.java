@@ -29,7 +29,7 @@ import picocli.CommandLine.Spec;
             "Picks operational amplifiers for a stage by its full output error budget,",
             "computed from your own YAML catalog of datasheet values."},
         subcommands = {CheckCommand.class, BudgetCommand.class, FindCommand.class, RankCommand.class,
-            CompareCommand.class, SufficesCommand.class},
+            CompareCommand.class, SufficesCommand.class, BarsCommand.class, ScatterCommand.class},
         footer = {"", "Catalog folder: --catalog DIR, else $AMPSIEVE_CATALOG, else the demo catalog.",
             "Exit codes: 0 ok, 1 problems in your data or a 'no' answer, 2 usage error, 3 internal error."})
 public final class RootCommand implements Callable<Integer> {

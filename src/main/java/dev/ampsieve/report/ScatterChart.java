@@ -72,11 +72,10 @@ public final class ScatterChart {
                 xHi = Math.max(xHi, p.cost());
             }
         }
-        if (yHi / yLo < 1.01) {
-            // everything at one error: open a decade around it so the rows mean something
-            yHi *= Math.sqrt(10);
-            yLo /= Math.sqrt(10);
-        }
+        // at least a factor of 2 each side of the limit, so the line is never an edge and a part
+        // near it is seen to be above or below
+        yHi = Math.max(yHi, 2 * limit);
+        yLo = Math.min(yLo, limit / 2);
         if (xLo > xHi) {
             xLo = 0;
             xHi = 1;

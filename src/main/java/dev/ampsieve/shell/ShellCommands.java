@@ -42,6 +42,16 @@ final class ShellCommands {
     /** Names of the shell's own verbs, for grouping in help. */
     static final List<String> NAMES = List.of("ask", "set", "unset", "show", "save", "load", "help", "quit");
 
+    /** A command's one-line summary: its header, else the first line of its description. */
+    static String summary(CommandLine c) {
+        String[] h = c.getCommandSpec().usageMessage().header();
+        if (h.length > 0 && !h[0].isBlank()) {
+            return h[0];
+        }
+        String[] d = c.getCommandSpec().usageMessage().description();
+        return d.length == 0 ? "" : d[0];
+    }
+
     static List<Object> all(ShellContext ctx) {
         return List.of(new Ask(ctx), new SetKey(ctx), new UnsetKey(ctx), new Show(ctx), new Save(ctx), new Load(ctx),
                 new Help(ctx), new Quit(ctx));
@@ -402,8 +412,7 @@ final class ShellCommands {
             if (c == null) {
                 return;
             }
-            String[] d = c.getCommandSpec().usageMessage().description();
-            String text = d.length == 0 ? "" : d[0];
+            String text = ShellCommands.summary(c);
             int room = Math.max(20, ctx.style.width() - 12);
             if (text.length() > room) {
                 text = text.substring(0, room - 3) + "...";

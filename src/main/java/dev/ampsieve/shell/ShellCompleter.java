@@ -109,8 +109,8 @@ final class ShellCompleter implements Completer {
 
     private void commands(List<Candidate> out) {
         for (Map.Entry<String, CommandLine> e : tree.getSubcommands().entrySet()) {
-            String[] d = e.getValue().getCommandSpec().usageMessage().description();
-            out.add(new Candidate(e.getKey(), e.getKey(), null, d.length > 0 ? d[0] : null, null, null, true));
+            String d = ShellCommands.summary(e.getValue());
+            out.add(new Candidate(e.getKey(), e.getKey(), null, d.isEmpty() ? null : d, null, null, true));
         }
     }
 

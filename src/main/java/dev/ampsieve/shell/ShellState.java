@@ -16,6 +16,9 @@ import java.util.Map;
  * take {@code --stage FILE} get it as a file written here.
  */
 final class ShellState {
+    /** Name of the file commands get; unusual enough to be replaced in their messages by "(current stage)". */
+    static final String STAGE_FILE_NAME = "shell-current-stage.yaml";
+
     private Map<String, String> answers = new LinkedHashMap<>();
     private Path file;
     private boolean unsaved;
@@ -73,7 +76,7 @@ final class ShellState {
             if (workDir == null) {
                 workDir = Files.createTempDirectory("ampsieve-shell-");
             }
-            Path f = workDir.resolve("current-stage.yaml");
+            Path f = workDir.resolve(STAGE_FILE_NAME);
             Files.writeString(f, StageWriter.toYaml(answers), StandardCharsets.UTF_8);
             return f;
         } catch (IOException e) {
@@ -83,7 +86,7 @@ final class ShellState {
 
     /** The path commands would see, for hiding it in their messages; null before first use. */
     Path stageFileIfWritten() {
-        return workDir == null ? null : workDir.resolve("current-stage.yaml");
+        return workDir == null ? null : workDir.resolve(STAGE_FILE_NAME);
     }
 
     void close() {
@@ -91,7 +94,7 @@ final class ShellState {
             return;
         }
         try {
-            Files.deleteIfExists(workDir.resolve("current-stage.yaml"));
+            Files.deleteIfExists(workDir.resolve(STAGE_FILE_NAME));
             Files.deleteIfExists(workDir);
         } catch (IOException e) {
             // a leftover file in the temp folder is harmless; the shell is closing anyway

@@ -62,12 +62,13 @@ class ScatterChartTest {
     }
 
     @Test
-    void onePartAtTheLimitStillGetsADecadeOfAxis() {
-        // a single point at the limit: the axis opens half a decade each way, and the point sits on the limit row
+    void theLimitIsNeverAnEdge() {
+        // a single point at the limit: the axis opens a factor of 2 each way (2 mV .. 500 uV over 5 rows),
+        // the limit lands on the middle row, and so does the point
         List<String> lines = ScatterChart.render(List.of(new Point("P-9", 1e-3, 2, "fits")), 1e-3, "EUR", 5,
                 new OutputStyle(40, false, false));
-        assertEquals("3.16 mV +", lines.get(0));
+        assertEquals("2.00 mV +", lines.get(0));
         assertEquals("1.00 mV +------------a------------ limit", lines.get(2));
-        assertEquals(" 316 uV +", lines.get(4));
+        assertEquals(" 500 uV +", lines.get(4));
     }
 }

@@ -1,0 +1,44 @@
+package dev.ampsieve.cli;
+
+import dev.ampsieve.budget.BudgetCalculator;
+import dev.ampsieve.catalog.Part;
+import dev.ampsieve.report.BudgetBars;
+import dev.ampsieve.stage.Stage;
+import dev.ampsieve.stage.StageLoader;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Spec;
+
+/** {@code ampsieve bars PART --stage FILE}: one part's error terms as bars against the limit. */
+@Command(name = "bars", header = "One part's error terms as bars against the limit.", mixinStandardHelpOptions = true,
+        description = "Each error term of one part in a stage as a bar at the output, the totals below, and the "
+            + "limit marked across: which term to attack first, at a glance. Sized to the terminal; --ascii "
+            + "draws with plain characters.")
+public final class BarsCommand implements Callable<Integer> {
+
+    @ParentCommand
+    RootCommand root;
+
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "PART", description = "Part id from the catalog.")
+    String partId;
+
+    @Option(names = "--stage", required = true, paramLabel = "FILE", description = "Stage file (YAML).")
+    Path stageFile;
+
+    @Override
+    public Integer call() throws Exception {
+        Part part = BudgetCommand.find(root.catalog(), partId);
+        Stage stage = StageLoader.load(stageFile);
+        String name = String.valueOf(stageFile.getFileName());
+        spec.commandLine().getOut().print(BudgetBars.render(BudgetCalculator.compute(stage, part), name, root.outputStyle()));
+        return ExitCode.OK;
+    }
+}
