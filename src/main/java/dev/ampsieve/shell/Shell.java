@@ -120,6 +120,8 @@ public final class Shell {
         tree.setOut(out);
         tree.setErr(err);
         tree.setCaseInsensitiveEnumValuesAllowed(true);
+        // "set temperature -40..85 C": a negative value is a value, not an unknown option
+        tree.getSubcommands().get("set").setUnmatchedOptionsArePositionalParams(true);
         tree.setParameterExceptionHandler((ex, args) -> {
             String cmd = ex.getCommandLine() == tree ? "" : ex.getCommandLine().getCommandName();
             StringBuilder sb = new StringBuilder(cmd.isEmpty() ? "" : cmd + ": ").append(ex.getMessage());
@@ -133,6 +135,11 @@ public final class Shell {
         tree.setExecutionExceptionHandler((ex, line, parsed) -> failure(ex, err));
         completer[0] = new ShellCompleter(ctx, tree);
 
+        try {
+            tree.parseArgs(rootArgs.toArray(String[]::new)); // --catalog and friends before the banner reads the catalog
+        } catch (CommandLine.ParameterException e) {
+            err.println(e.getMessage());
+        }
         banner(ctx, historyNote);
         try {
             loop(ctx, reader, tree, err);

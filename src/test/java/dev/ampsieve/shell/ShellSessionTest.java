@@ -1,0 +1,165 @@
+package dev.ampsieve.shell;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.ampsieve.stage.Stage;
+import dev.ampsieve.stage.StageLoader;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The shell as a whole on the demo catalog: the current stage reaching commands, files, errors, keys. */
+class ShellSessionTest {
+
+    @TempDir
+    static Path shared;
+
+    static Path catalog;
+
+    @TempDir
+    Path dir;
+
+    @BeforeAll
+    static void copyDemo() throws IOException {
+        catalog = DemoCatalog.copyTo(shared);
+    }
+
+    static String session(String... lines) {
+        return Sessions.run(List.of("--catalog", catalog.toString()), null, Map.of(), lines);
+    }
+
+    @Test
+    void commandsThatTakeAStageGetTheCurrentOne() {
+        String printed = session("set gain 100", "set temperature -40..85 C", "set limit 1 mV", "rank --top 3",
+                "bars zd-chop-01", "scatter --top 4");
+        // rank's header names the stage it was given: the shell's own, not a file of the user's
+        assertTrue(printed.contains("Stage (current stage): non-inverting, noise gain 100, -40 °C to 85 °C"), printed);
+        assertTrue(printed.contains("Candidates ("), printed);
+        assertTrue(printed.contains("zd-chop-01 in (current stage): error at the output, term by term"), printed);
+        assertTrue(printed.contains("limit 1.00 mV ▲") || printed.contains("▲ limit 1.00 mV"), printed);
+        assertTrue(printed.contains("Error against cost in (current stage)"), printed);
+        assertFalse(printed.contains(ShellState.STAGE_FILE_NAME), printed); // the temporary file stays out of sight
+        assertFalse(printed.contains("ampsieve-shell-"), printed);
+    }
+
+    @Test
+    void aStageGivenOnTheLineWins() {
+        String stage = catalog.resolve("stages/bridge-amp.yaml").toString();
+        String printed = session("set gain 10", "set limit 1 V", "rank --top 1 --stage " + stage);
+        assertTrue(printed.contains("Stage bridge-amp.yaml: non-inverting, noise gain 100"), printed);
+    }
+
+    @Test
+    void withoutAStageTheShellSaysHowToGetOne() {
+        String printed = session("rank", "help");
+        assertTrue(printed.contains("'rank' needs a stage: type 'ask' to describe one, 'load FILE', or add --stage FILE"),
+                printed);
+        assertTrue(printed.contains("The shell"), printed);
+    }
+
+    @Test
+    void anIncompleteStageIsReportedAsTheCurrentStage() {
+        String printed = session("set gain 100", "rank");
+        assertTrue(printed.contains("The stage is not complete yet: required field is missing"), printed);
+        assertTrue(printed.matches("(?s).*\\(current stage\\):\\d+:\\d+: limit: required field is missing.*"), printed);
+    }
+
+    @Test
+    void saveAsksBeforeReplacingAFile() throws Exception {
+        Path file = dir.resolve("stage.yaml");
+        Files.writeString(file, "# mine\n");
+        String printed = session("set gain 100", "set limit 1 mV", "save " + file, "n");
+        assertTrue(printed.contains(file + " exists. Replace it? [y/N]"), printed);
+        assertTrue(printed.contains("Left " + file + " as it was."), printed);
+        assertEquals("# mine\n", Files.readString(file));
+
+        printed = session("set gain 100", "set limit 1 mV", "save " + file, "y");
+        assertTrue(printed.contains("Saved " + file), printed);
+        assertEquals(1e-3, StageLoader.load(file).limitVolts(), 1e-15);
+
+        printed = session("set gain 20", "set limit 2 mV", "save --force " + file);
+        assertFalse(printed.contains("Replace it?"), printed);
+        assertEquals(20.0, StageLoader.load(file).noiseGain(), 1e-12);
+    }
+
+    @Test
+    void loadTakesTheValuesAsWrittenAndRefusesABadFileWithItsPlace() throws Exception {
+        Path good = dir.resolve("good.yaml");
+        Files.writeString(good, "# a stage of ours\ngain: 40 dB\ntemperature:\n  min: -20 C\n  max: 60 C\nlimit:\n  input: 50 uV\n");
+        Path bad = dir.resolve("bad.yaml");
+        Files.writeString(bad, "gain: 100\nlimit: 2 parsecs\n");
+        Path copy = dir.resolve("copy.yaml");
+        String printed = session("load " + good, "show", "load " + bad, "show", "save " + copy);
+
+        assertTrue(printed.contains("Loaded " + good + ": gain 40 dB, 50 uV input limit."), printed);
+        assertTrue(printed.matches("(?s).*temperature\\s+-20 C\\.\\.60 C.*"), printed);
+        assertTrue(printed.matches("(?s).*limit at the output\\s+5\\.00 mV.*"), printed); // 50 uV x noise gain 100
+        assertTrue(printed.contains(bad + ":2:8: limit:"), printed); // file:line:col of the bad value
+        Stage s = StageLoader.load(copy); // the good stage stayed current
+        assertEquals(-20.0, s.tMin());
+        assertEquals(5e-3, s.limitVolts(), 1e-12);
+    }
+
+    @Test
+    void setChecksTheValueAndNamesTheKey() {
+        String printed = session("set gain 100", "set limit 2 V/us", "set limt 1 mV", "set temperature 85..-40", "show");
+        assertTrue(printed.contains("limit: '2 V/us' is a slew rate but a voltage belongs here"), printed);
+        assertTrue(printed.contains("limt: 'limt' is not a stage key; did you mean 'limit'?"), printed);
+        assertTrue(printed.contains("temperature: min 85 °C is above max -40 °C; swap the two values"), printed);
+        assertTrue(printed.contains("limit: required field is missing"), printed); // nothing bad was taken
+    }
+
+    @Test
+    void aFailurePrintsOneLineAndTheShellGoesOn() {
+        String printed = session("rnak", "budget", "budget nope --stage nowhere.yaml", "show --bogus", "help");
+        assertTrue(printed.contains("unknown command 'rnak'; did you mean 'rank'? ('help' lists the commands)"), printed);
+        assertTrue(printed.contains("'budget' needs a stage"), printed);
+        assertTrue(printed.contains("show: Unknown option: '--bogus' ('help show' shows its options)"), printed);
+        assertFalse(printed.contains("Exception"), printed);
+        assertFalse(printed.contains("\tat "), printed);
+        assertTrue(printed.contains("The shell"), printed); // help still ran at the end
+    }
+
+    @Test
+    void ctrlCDropsTheLineBeingTyped() {
+        String printed = session("show --al\u0003", "quit");
+        assertFalse(printed.contains("default: non-inverting"), printed);
+        assertFalse(printed.contains("Unknown option"), printed);
+    }
+
+    @Test
+    void quitWithAnUnsavedStageWarnsOnce() {
+        String printed = session("set gain 100", "quit", "quit", "show");
+        assertTrue(printed.contains("The current stage is not saved: 'save FILE' keeps it; 'quit' again leaves"), printed);
+        assertFalse(printed.contains("Stage (typed in"), printed); // the second quit left before 'show'
+    }
+
+    @Test
+    void historyIsKeptInTheGivenFile() throws IOException {
+        Path history = dir.resolve("data/ampsieve/history");
+        Sessions.run(List.of("--catalog", catalog.toString()), history, Map.of(), "help", "show", "ask", "100", "\u0003");
+        List<String> lines = Files.readAllLines(history);
+        assertTrue(lines.stream().anyMatch(l -> l.endsWith("help")), lines.toString());
+        assertTrue(lines.stream().anyMatch(l -> l.endsWith("ask")), lines.toString());
+        assertFalse(lines.stream().anyMatch(l -> l.endsWith("100")), lines.toString()); // answers are not history
+    }
+
+    @Test
+    void theBannerSaysHowToBegin() {
+        String printed = session();
+        assertTrue(printed.contains("Type ask to describe your stage, help for the commands"), printed);
+        Matcher m = Pattern.compile("Catalog \\S+: (\\d+) part\\(s\\)").matcher(printed);
+        assertTrue(m.find(), printed);
+        assertTrue(Integer.parseInt(m.group(1)) > 0, printed);
+        assertTrue(printed.contains(dev.ampsieve.report.Caution.TEXT), printed);
+    }
+}
