@@ -1,0 +1,61 @@
+package dev.ampsieve.shell;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.Map;
+import java.util.Set;
+import org.junit.jupiter.api.Test;
+
+/** The shorthands a person types at a prompt, turned into stage-file answers. */
+class AnswersTest {
+
+    @Test
+    void temperatureRangesInTheUsualSpellings() throws AnswerException {
+        assertEquals(Map.of("temperature.min", "-40 C", "temperature.max", "85 C"),
+                Answers.interpret("temperature", "-40..85 C", Map.of()).put());
+        assertEquals(Map.of("temperature.min", "-40 C", "temperature.max", "125 C"),
+                Answers.interpret("temperature", "-40 C to 125 C", Map.of()).put());
+        assertEquals(Map.of("temperature.min", "0 C", "temperature.max", "70 C"),
+                Answers.interpret("temperature", "0..70", Map.of()).put());
+        assertEquals(Map.of("temperature.min", "233.15 K", "temperature.max", "358.15 K"),
+                Answers.interpret("temperature", "233.15..358.15 K", Map.of()).put());
+        AnswerException e = assertThrows(AnswerException.class, () -> Answers.interpret("temperature", "85", Map.of()));
+        assertTrue(e.line().contains("not a range"), e.line());
+    }
+
+    @Test
+    void theLimitInEachForm() throws AnswerException {
+        Answers.Change c = Answers.interpret("limit", "1 mV", Map.of("limit.input", "5 uV"));
+        assertEquals(Map.of("limit", "1 mV"), c.put());
+        assertTrue(c.remove().contains("limit.input"));
+        assertEquals(Map.of("limit.input", "10 uV"), Answers.interpret("limit", "10 uV input", Map.of()).put());
+        assertEquals(Map.of("limit.input", "10 uV"), Answers.interpret("limit", "input 10 uV", Map.of()).put());
+        assertEquals(Map.of("limit.percent-of-full-scale", "0.1 %"),
+                Answers.interpret("limit", "0.1 % of full scale", Map.of()).put());
+        assertEquals(Map.of("limit.lsb", "0.5", "limit.bits", "16", "limit.reference", "2.5 V"),
+                Answers.interpret("limit", "0.5 lsb 16 bits 2.5 V", Map.of()).put());
+        assertThrows(AnswerException.class, () -> Answers.interpret("limit", "0.5 lsb", Map.of()));
+        // one block form replaces the scalar, and the three LSB keys stay together
+        Answers.Change bits = Answers.interpret("limit.bits", "12", Map.of("limit", "1 mV", "limit.lsb", "1"));
+        assertEquals(Set.of("limit", "limit.input", "limit.percent-of-full-scale"), bits.remove());
+    }
+
+    @Test
+    void wordsYesNoAndPrefixes() throws AnswerException {
+        assertEquals("true", Answers.interpret("trim.allowed", "yes", Map.of()).put().get("trim.allowed"));
+        assertEquals("false", Answers.interpret("ac-coupled", "N", Map.of()).put().get("ac-coupled"));
+        assertEquals("inverting", Answers.interpret("topology", "inv", Map.of()).put().get("topology"));
+        assertEquals("two-point", Answers.interpret("trim.method", "two", Map.of()).put().get("trim.method"));
+        AnswerException e = assertThrows(AnswerException.class, () -> Answers.interpret("topology", "bridge", Map.of()));
+        assertTrue(e.line().contains("non-inverting, inverting, follower"), e.line());
+    }
+
+    @Test
+    void keysAreCheckedWithASuggestion() throws AnswerException {
+        assertEquals("temperature", Answers.id("Temperature"));
+        AnswerException e = assertThrows(AnswerException.class, () -> Answers.id("sorce-resistance"));
+        assertTrue(e.line().contains("did you mean 'source-resistance'"), e.line());
+    }
+}
