@@ -140,10 +140,17 @@ final class GuidedEntry {
     }
 
     private void explain(String id, String shown) {
+        boolean needed = Questions.required(id) && shown.equals("required");
         out.println("  " + id + ": " + Questions.why(id) + ".");
         out.println("  for example: " + Questions.example(id));
-        out.println("  default: " + Questions.defaultText(id) + (shown.equals(Questions.defaultText(id)) ? "" : "; now: " + shown));
-        out.println(paint.dim("  Enter keeps [" + shown + "]; 'done' keeps all remaining values; Ctrl-C cancels the questions."));
+        java.util.List<String> units = UnitHints.of(Answers.dimension(id));
+        if (!units.isEmpty()) {
+            out.println("  units: " + String.join(", ", units) + " (Tab after a number offers them)");
+        }
+        out.println(needed ? "  no default: an answer is needed" : "  default: " + Questions.defaultText(id)
+                + (shown.equals(Questions.defaultText(id)) ? "" : "; now: " + shown));
+        out.println(paint.dim("  " + (needed ? "" : "Enter keeps [" + shown + "]; ")
+                + "'done' keeps all remaining values; Ctrl-C cancels the questions."));
     }
 
     /** The first required question still unanswered, or null. */

@@ -1,0 +1,87 @@
+#!/usr/bin/env bash
+# End-to-end check of the shell as a new user meets it: start the launcher ./ampsieve in a
+# detached tmux session 120 columns wide, answer the guided questions with send-keys, run the
+# ranking, and read the screen back with capture-pane.
+#
+# Exit 0: passed. Exit 77: tmux is not installed (the JUnit wrapper decides whether that fails).
+# Anything else: failed; the last screen is printed.
+#
+# The launcher builds target/ampsieve.jar when it is missing or older than the sources; run under
+# Maven's integration-test phase the shaded jar already exists, so no build happens here.
+set -euo pipefail
+
+command -v tmux >/dev/null || { echo "e2e: tmux is not installed"; exit 77; }
+ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/../../.." && pwd)"
+
+WORK="$(mktemp -d)"
+SOCKET="ampsieve-e2e-$$"       # a private tmux server: never touches the user's sessions
+SESSION="e2e"
+cleanup() {
+  tmux -L "$SOCKET" kill-server 2>/dev/null || true
+  rm -rf "$WORK"
+}
+trap cleanup EXIT
+
+# a copy of the demo catalog (its search index is written next to it) and a private data folder (history)
+cp -R "$ROOT/demo-catalog" "$WORK/catalog"
+rm -rf "$WORK/catalog/.ampsieve-index"
+mkdir -p "$WORK/data"
+
+screen() { tmux -L "$SOCKET" capture-pane -p -J -t "$SESSION" -S -400; }
+
+# wait_for REGEX SECONDS: until the screen (with scroll-back) matches, else fail showing it
+wait_for() {
+  local pattern="$1" limit="${2:-60}" waited=0
+  until screen | grep -Eq -- "$pattern"; do
+    if ! tmux -L "$SOCKET" has-session -t "$SESSION" 2>/dev/null; then
+      echo "e2e: the shell ended while waiting for /$pattern/"; exit 1
+    fi
+    if [ "$waited" -ge $((limit * 5)) ]; then
+      echo "e2e: no /$pattern/ after ${limit}s; the screen:"; screen; exit 1
+    fi
+    sleep 0.2; waited=$((waited + 1))
+  done
+}
+
+# type TEXT then Enter; -l sends it literally (a leading '-' is not a tmux option)
+type_line() {
+  tmux -L "$SOCKET" send-keys -t "$SESSION" -l -- "$1"
+  tmux -L "$SOCKET" send-keys -t "$SESSION" Enter
+}
+
+tmux -L "$SOCKET" new-session -d -s "$SESSION" -x 120 -y 50 \
+  "cd '$WORK' && env XDG_DATA_HOME='$WORK/data' NO_COLOR=1 LANG=C.UTF-8 LC_ALL=C.UTF-8 '$ROOT/ampsieve' --catalog '$WORK/catalog'; echo 'e2e: shell exited'; sleep 30"
+tmux -L "$SOCKET" set-option -t "$SESSION" history-limit 5000 >/dev/null
+
+# first start: the hint says how to begin (allow time for a first build of the jar)
+wait_for "Type ask to describe your stage" 300
+wait_for "ampsieve> $" 60
+
+type_line "ask"
+wait_for "gain \[required\] > $"
+type_line "100"
+wait_for "temperature \[0 C\.\.70 C\] > $"
+type_line "-40..85 C"
+wait_for "limit \[required\] > $"
+type_line "1 mV"
+wait_for "topology \[non-inverting\] > $"
+type_line "done"
+wait_for "limit at the output +1\.00 mV"
+wait_for "ampsieve \[new stage\*\]> $"
+
+type_line "rank --top 5"
+wait_for "^Advice" 120
+# a ranking: the header for the shell's stage, the table header, a first row that fits, a pick
+screen | grep -Eq "^Stage \(current stage\): non-inverting, noise gain 100, -40 °C to 85 °C" \
+  || { echo "e2e: no stage header in the ranking"; screen; exit 1; }
+screen | grep -Eq "^#  part +verdict +cost" || { echo "e2e: no ranking table"; screen; exit 1; }
+screen | grep -Eq "^1  [a-z0-9-]+ +fits" || { echo "e2e: no fitting part ranked first"; screen; exit 1; }
+screen | grep -Eq "^  Pick [a-z0-9-]+: " || { echo "e2e: no advice naming the pick"; screen; exit 1; }
+
+type_line "quit"
+wait_for "not saved"
+type_line "quit"
+wait_for "e2e: shell exited" 30
+[ -s "$WORK/data/ampsieve/history" ] || { echo "e2e: no history written under XDG_DATA_HOME"; exit 1; }
+grep -q "^.*rank --top 5$" "$WORK/data/ampsieve/history" || { echo "e2e: history lacks the rank line"; exit 1; }
+echo "e2e: passed"
