@@ -49,7 +49,7 @@ public final class CompareCommand implements Callable<Integer> {
         Comparison c = Comparison.of(BudgetCalculator.compute(stage, pa), BudgetCalculator.compute(stage, pb));
         String label = stageFile.toString();
         String name = String.valueOf(stageFile.getFileName()); // text headers stay within 100 columns
-        spec.commandLine().getOut().print(json ? CompareReport.json(c, label) : CompareReport.text(c, name));
+        spec.commandLine().getOut().print(json ? CompareReport.json(c, label) : CompareReport.text(c, name, root.textWidth()));
         return ExitCode.OK;
     }
 }

@@ -38,7 +38,7 @@ public final class FindCommand implements Callable<Integer> {
         Candidates.noteProblems(catalog, spec.commandLine().getErr());
         String text = String.join(" ", query).strip();
         List<Part> parts = Candidates.matching(catalog, text);
-        spec.commandLine().getOut().print(json ? FindReport.json(text, parts) : FindReport.text(text, parts));
+        spec.commandLine().getOut().print(json ? FindReport.json(text, parts) : FindReport.text(text, parts, root.textWidth()));
         return parts.isEmpty() ? ExitCode.FINDINGS : ExitCode.OK;
     }
 }

@@ -67,7 +67,7 @@ public final class RankCommand implements Callable<Integer> {
         String label = stageFile.toString();
         String name = String.valueOf(stageFile.getFileName()); // text headers stay within 100 columns
         String out = format.json ? RankReport.json(r, label, query, top)
-                : format.csv ? RankReport.csv(r, top) : RankReport.text(r, name, query, top);
+                : format.csv ? RankReport.csv(r, top) : RankReport.text(r, name, query, top, root.textWidth());
         spec.commandLine().getOut().print(out);
         return ExitCode.OK;
     }

@@ -75,6 +75,11 @@ public final class RootCommand implements Callable<Integer> {
         return ascii ? s.withUnicode(false) : s;
     }
 
+    /** Columns for text tables: the shell's terminal width; on the command line a fixed width that reads well in files. */
+    public int textWidth() {
+        return style != null ? style.width() : OutputStyle.TEXT_WIDTH;
+    }
+
     /** The shell sets this before each line (the terminal may have been resized). */
     public void setOutputStyle(OutputStyle s) {
         this.style = s;

@@ -44,7 +44,7 @@ public final class SufficesCommand implements Callable<Integer> {
         Sufficiency s = Sufficiency.of(BudgetCalculator.compute(stage, part));
         String label = stageFile.toString();
         String name = String.valueOf(stageFile.getFileName()); // text headers stay within 100 columns
-        spec.commandLine().getOut().print(json ? SufficesReport.json(s, label) : SufficesReport.text(s, name));
+        spec.commandLine().getOut().print(json ? SufficesReport.json(s, label) : SufficesReport.text(s, name, root.textWidth()));
         return s.yes() ? ExitCode.OK : ExitCode.FINDINGS;
     }
 }

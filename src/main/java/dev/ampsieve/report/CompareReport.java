@@ -31,6 +31,11 @@ public final class CompareReport {
     }
 
     public static String text(Comparison c, String stageLabel) {
+        return text(c, stageLabel, TextTable.WIDTH);
+    }
+
+    /** @param width columns the tables fit in (the terminal's, in the shell) */
+    public static String text(Comparison c, String stageLabel, int width) {
         StringBuilder o = new StringBuilder();
         o.append(StageLine.of(c.a().budget().stage(), stageLabel)).append('\n').append('\n');
         String a = c.a().id();
@@ -46,7 +51,7 @@ public final class CompareReport {
         if (ba.trimmed() != null && bb.trimmed() != null) {
             total(t, c, "worst-case after trim", ba.trimmed().worstCaseV(), bb.trimmed().worstCaseV());
         }
-        t.lines(TextTable.WIDTH).forEach(l -> o.append(l).append('\n'));
+        t.lines(width).forEach(l -> o.append(l).append('\n'));
         o.append('\n');
         TextTable s = new TextTable().left("").right(a).right(b);
         s.row("limit", Figures.volts(ba.limitV()), Figures.volts(bb.limitV()));
@@ -56,7 +61,7 @@ public final class CompareReport {
         s.row("unit cost", cost(c.a()), cost(c.b()));
         s.row("margin", Figures.percent(c.a().margin()), Figures.percent(c.b().margin()));
         s.row("largest term", largest(ba), largest(bb));
-        s.lines(TextTable.WIDTH).forEach(l -> o.append(l).append('\n'));
+        s.lines(width).forEach(l -> o.append(l).append('\n'));
         o.append('\n').append(c.conclusion()).append('\n');
         o.append('\n').append(Caution.TEXT).append('\n');
         return o.toString();

@@ -13,6 +13,11 @@ public final class FindReport {
 
     /** @param parts the matches, most relevant first */
     public static String text(String query, List<Part> parts) {
+        return text(query, parts, TextTable.WIDTH);
+    }
+
+    /** @param width columns the table fits in (the terminal's, in the shell) */
+    public static String text(String query, List<Part> parts, int width) {
         StringBuilder o = new StringBuilder();
         String what = query.isBlank() ? "in the catalog" : "match '" + query + "'";
         o.append(parts.size()).append(parts.size() == 1 ? " part " : " parts ").append(what)
@@ -28,14 +33,14 @@ public final class FindReport {
                 idWidth = Math.max(idWidth, p.id().length());
             }
             // the title goes on its own line under the figures, so neither has to be cut short
-            List<String> lines = t.lines(TextTable.WIDTH);
+            List<String> lines = t.lines(width);
             o.append(lines.get(0)).append('\n');
             String indent = " ".repeat(idWidth + 2);
             for (int i = 0; i < parts.size(); i++) {
                 o.append(lines.get(i + 1)).append('\n');
                 String title = parts.get(i).title();
                 if (!title.isBlank()) {
-                    o.append(TextTable.cut(indent + title, TextTable.WIDTH)).append('\n');
+                    o.append(TextTable.cut(indent + title, width)).append('\n');
                 }
             }
             o.append("vos, drift, ib: guaranteed maximum, else typical; en: white noise density; supply: total, V+ to V-.\n");

@@ -13,6 +13,9 @@ public record OutputStyle(int width, boolean unicode, boolean color) {
     public static final int MIN_WIDTH = 40;
     public static final int MAX_WIDTH = 160;
 
+    /** Columns of text tables on the command line (files, pipes, logs); the shell uses its terminal's width. */
+    public static final int TEXT_WIDTH = 100;
+
     /** Plain output for files, pipes and tests: 80 columns, Unicode, no colour. */
     public static final OutputStyle PLAIN = new OutputStyle(80, true, false);
 

@@ -64,6 +64,11 @@ public final class RankReport {
     }
 
     public static String text(Ranking r, String stageLabel, String query, int top) {
+        return text(r, stageLabel, query, top, TextTable.WIDTH);
+    }
+
+    /** @param width columns the tables fit in (the terminal's, in the shell) */
+    public static String text(Ranking r, String stageLabel, String query, int top, int width) {
         StringBuilder o = new StringBuilder();
         o.append(StageLine.of(r.stage(), stageLabel)).append('\n');
         if (query != null && !query.isBlank()) {
@@ -88,7 +93,7 @@ public final class RankReport {
                         Figures.volts(worstCase(c)), Figures.volts(rss(c)), yieldCell(c), Figures.percent(c.margin()),
                         limiting(c), front.contains(c.id()) ? "*" : "");
             }
-            t.lines(TextTable.WIDTH).forEach(l -> o.append(l).append('\n'));
+            t.lines(width).forEach(l -> o.append(l).append('\n'));
             o.append("verdict: fits as it is, +trim after the stage's trim (its cost and figures include it), no.\n");
             o.append("margin: (limit - ").append(r.stage().criterion().kind() == Criterion.Kind.WORST_CASE
                     ? "worst-case" : "RSS").append(") / limit.  †: largest before the trim.  P: on the Pareto front.\n");
@@ -101,7 +106,7 @@ public final class RankReport {
                 p.row(c.id(), Figures.money(c.effectiveCost()) + (c.currency().isEmpty() ? "" : " " + c.currency()),
                         Figures.volts(c.errorV()), verdictWord(c) + (c.trimmed() ? " (trim included)" : ""));
             }
-            p.lines(TextTable.WIDTH).forEach(l -> o.append(l).append('\n'));
+            p.lines(width).forEach(l -> o.append(l).append('\n'));
         }
         if (!r.rejected().isEmpty()) {
             o.append('\n').append("Rejected (a hard constraint fails; --json or --csv lists every failure)\n");
@@ -109,7 +114,7 @@ public final class RankReport {
             for (Rejected x : r.rejected()) {
                 t.row(x.id(), x.shortReason());
             }
-            t.lines(TextTable.WIDTH).forEach(l -> o.append(l).append('\n'));
+            t.lines(width).forEach(l -> o.append(l).append('\n'));
         }
         o.append('\n').append("Advice\n");
         for (String l : r.advice().lines()) {

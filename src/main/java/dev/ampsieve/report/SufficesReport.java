@@ -13,6 +13,11 @@ public final class SufficesReport {
     }
 
     public static String text(Sufficiency s, String stageLabel) {
+        return text(s, stageLabel, TextTable.WIDTH);
+    }
+
+    /** @param width columns the table fits in (the terminal's, in the shell) */
+    public static String text(Sufficiency s, String stageLabel, int width) {
         Budget b = s.budget();
         StringBuilder o = new StringBuilder();
         o.append(s.answer()).append('\n').append('\n');
@@ -28,7 +33,7 @@ public final class SufficesReport {
         TermResult lim = b.limitingTerm() == null ? null : b.term(b.limitingTerm());
         t.row("largest term", lim == null ? Figures.NONE : lim.label() + ", " + Figures.volts(lim.outputV()) + share(lim.outputV(), b.limitV()));
         t.row("verdict", b.constraintsMet() ? b.verdict().key() : "rejected (hard constraint)");
-        t.lines(TextTable.WIDTH).stream().skip(1).forEach(l -> o.append(l).append('\n'));
+        t.lines(width).stream().skip(1).forEach(l -> o.append(l).append('\n'));
         o.append('\n').append(Caution.TEXT).append('\n');
         return o.toString();
     }

@@ -11,7 +11,7 @@ import java.util.List;
 final class TextTable {
 
     /** Width all our tables are sized to. */
-    static final int WIDTH = 100;
+    static final int WIDTH = OutputStyle.TEXT_WIDTH;
 
     private record Column(String header, boolean right, boolean flex) {
     }

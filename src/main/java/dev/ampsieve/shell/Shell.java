@@ -282,7 +282,8 @@ public final class Shell {
     private String shown(String s, ShellState state, boolean error) {
         Path tmp = state == null ? null : state.stageFileIfWritten();
         if (tmp != null) {
-            s = s.replace(tmp.toString(), StageCheck.NAME.toString()).replace(ShellState.STAGE_FILE_NAME, StageCheck.NAME.toString());
+            String name = state.nameInMessages();
+            s = s.replace(tmp.toString(), name).replace(ShellState.STAGE_FILE_NAME, name);
         }
         OutputStyle st = look(terminal, env, rootArgs.contains("--ascii"));
         if (!st.unicode()) {

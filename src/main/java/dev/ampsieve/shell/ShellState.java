@@ -70,6 +70,11 @@ final class ShellState {
         return unsaved ? name + "*" : name;
     }
 
+    /** How commands' output names the stage: its file while the stage is as saved there, else "(current stage)". */
+    String nameInMessages() {
+        return file != null && !unsaved ? file.getFileName().toString() : StageCheck.NAME.toString();
+    }
+
     /** The folder for the stage file handed to commands; made on first use, removed by {@link #close}. */
     Path stageFile() {
         try {
