@@ -40,6 +40,7 @@ final class Sessions {
             tty.setControlChar(Attributes.ControlChar.VQUIT, 28);
             tty.setControlChar(Attributes.ControlChar.VSUSP, 26);
             tty.setControlChar(Attributes.ControlChar.VSTATUS, 20);
+            tty.setControlChar(Attributes.ControlChar.VEOF, 4); // Ctrl-D: the line reader binds it to end of input
             t.setAttributes(tty);
             new Shell(new RootCommand(), rootArgs, t, history, env).run();
         } catch (IOException e) {

@@ -149,6 +149,12 @@ class ShellSessionTest {
     }
 
     @Test
+    void ctrlDLeaves() {
+        String printed = session("\u0004", "help");
+        assertFalse(printed.contains("The shell"), printed); // help after Ctrl-D never ran
+    }
+
+    @Test
     void quitWithAnUnsavedStageWarnsOnce() {
         String printed = session("set gain 100", "quit", "quit", "show");
         assertTrue(printed.contains("The current stage is not saved: 'save FILE' keeps it; 'quit' again leaves"), printed);
