@@ -99,7 +99,8 @@ public final class BudgetText {
             case "none-pass" -> "0 % (decided without sampling: even the smallest possible error exceeds the limit"
                     + target + ")";
             default -> pct(y.value()) + " (95 % interval " + pct(y.low()) + " to " + pct(y.high()) + ", "
-                    + (y.trials() < s.trials() ? y.trials() + " of " + s.trials() + " units, stopped once the interval cleared the target"
+                    + (y.trials() < s.trials() ? y.trials() + " of " + s.trials() + " units, stopped once the interval lay wholly "
+                            + (y.low() >= s.criterion().yieldTarget() ? "above" : "below") + " the target"
                             : y.trials() + " units")
                     + ", seed " + s.seed() + target + ")";
         };
