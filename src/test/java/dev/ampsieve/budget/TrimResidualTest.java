@@ -1,0 +1,53 @@
+package dev.ampsieve.budget;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import dev.ampsieve.fixtures.PartFixture;
+import dev.ampsieve.fixtures.StageFixture;
+import dev.ampsieve.stage.Trim;
+import org.junit.jupiter.api.Test;
+
+/** What a calibration at 25 °C leaves of the offset terms. */
+class TrimResidualTest {
+
+    /** Follower (noise gain 1, no resistors, no noise), 25 to 70 °C: dT 45 °C. */
+    private static StageFixture stage() {
+        StageFixture s = StageFixture.follower().temps(25, 70).limitV(1e-3);
+        s.trim = new Trim(true, Trim.Method.ONE_POINT, 0, 0);
+        return s;
+    }
+
+    @Test
+    void theOverTemperatureCapDoesNotShrinkTheDriftLeftAfterATrim() {
+        // vos max 10 µV, max over temperature 15 µV, drift max 0.5 µV/°C
+        Budget b = BudgetCalculator.compute(stage().build(),
+                PartFixture.ideal().vos(null, 10e-6, 15e-6).drift(null, 0.5e-6).build());
+        // untrimmed: offset + drift never exceed the over-temperature maximum (error-model.md term 2)
+        assertEquals(10e-6, b.term("offset").outputV(), 1e-18);
+        assertEquals(5e-6, b.term("drift").outputV(), 1e-18);
+        assertEquals(15e-6, b.worstCaseV(), 1e-18);
+        // after a trim at 25 °C the residual is the drift from 25 °C, TCVOS x |T - 25|
+        // (reference-checks.md §5, one-point trim residual [Calc]): 0.5 µV/°C x 45 °C = 22.5 µV.
+        // The cap cannot bound it: a unit at 0 µV at 25 °C and 15 µV at 70 °C meets the offset,
+        // the over-temperature and the drift (0.33 µV/°C) guarantees, and keeps 15 µV after the trim.
+        assertEquals(22.5e-6, b.trimmed().worstCaseV(), 1e-15);
+    }
+
+    @Test
+    void theResidualNeverExceedsWhatTheTwoOffsetGuaranteesAllow() {
+        // drift max 1 µV/°C x 45 °C = 45 µV, but |vos(T) - vos(25)| <= vos over temperature + vos at 25 °C
+        // = 15 + 10 = 25 µV whatever the drift [Calc, triangle inequality]
+        Budget b = BudgetCalculator.compute(stage().build(),
+                PartFixture.ideal().vos(null, 10e-6, 15e-6).drift(null, 1e-6).build());
+        assertEquals(25e-6, b.trimmed().worstCaseV(), 1e-15);
+    }
+
+    @Test
+    void withoutAnOverTemperatureFigureTheResidualIsTheDrift() {
+        // no cap at all: drift 0.5 µV/°C x 45 °C, before and after the trim
+        Budget b = BudgetCalculator.compute(stage().build(),
+                PartFixture.ideal().vos(null, 10e-6, null).drift(null, 0.5e-6).build());
+        assertEquals(22.5e-6, b.term("drift").outputV(), 1e-15);
+        assertEquals(22.5e-6, b.trimmed().worstCaseV(), 1e-15);
+    }
+}
