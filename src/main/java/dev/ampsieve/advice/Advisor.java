@@ -286,7 +286,7 @@ public final class Advisor {
         betterResistors(stage, fits).ifPresent(out::add);
         trimChange(stage, p, budgets).ifPresent(out::add);
         looserLimit(stage, closest, fits).ifPresent(out::add);
-        lowerYieldTarget(stage, closest).ifPresent(out::add);
+        lowerYieldTarget(stage, closest, fits).ifPresent(out::add);
         return out;
     }
 
@@ -468,12 +468,27 @@ public final class Advisor {
         return java.util.Optional.of(new Change(Change.Kind.LOOSER_LIMIT, text.toString(), v));
     }
 
-    private static java.util.Optional<Change> lowerYieldTarget(Stage stage, Candidate closest) {
+    /** Steps of 0.1 % tried below the first guess before giving up (the re-runs are Monte Carlo runs). */
+    static final int YIELD_STEPS = 10;
+
+    private static java.util.Optional<Change> lowerYieldTarget(Stage stage, Candidate closest, Predicate<Stage> fits) {
         var y = closest.budget().yield();
         if (stage.criterion().kind() != Criterion.Kind.YIELD || y == null || !(y.low() > 0)) {
             return java.util.Optional.empty();
         }
-        double target = Math.floor(y.low() * 1000) / 1000; // 0.1 % steps, toward the side that passes
+        // first guess: the lower end reached at the present target, in 0.1 % steps toward the side that
+        // passes; then re-run, since a run stopped early against another target can end lower
+        double target = Math.floor(y.low() * 1000) / 1000;
+        int step = 0;
+        while (target > 0 && !fits.test(StageEdit.withCriterion(stage, Criterion.yield(target)))) {
+            if (++step > YIELD_STEPS) {
+                return java.util.Optional.empty();
+            }
+            target = Math.round(target * 1000 - 1) / 1000.0;
+        }
+        if (!(target > 0)) {
+            return java.util.Optional.empty();
+        }
         String text = "a yield target of " + Phrases.percentFine(target) + " or lower (now "
                 + Phrases.percentFine(stage.criterion().yieldTarget()) + ")";
         return java.util.Optional.of(new Change(Change.Kind.LOWER_YIELD_TARGET, text, Map.of("yieldTarget", target)));

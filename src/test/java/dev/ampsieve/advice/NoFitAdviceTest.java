@@ -121,4 +121,27 @@ class NoFitAdviceTest {
         assertTrue(r.advice().lines().contains("Nothing fits: every part fails a hard constraint: supply (2)."),
                 r.advice().lines().toString());
     }
+
+    @Test
+    void aLowerYieldTargetIsCheckedByReRunningTheBudget() {
+        // A Monte Carlo stopped early reports the lower end of its interval at the point it stopped;
+        // re-run against a lower target it may run on and end with a lower bound. Here the yield's
+        // lower end is 95.04 % at the 99.9 % target but 94.93 % at targets below 99 %: offering
+        // "95.0 % or lower" would not make the part fit; 94.9 % does.
+        Stage s = stage().criterion(dev.ampsieve.stage.Criterion.yield(0.999)).build();
+        Part p = part("P").vos(null, 20e-6).build();
+        BudgetFunction engine = (st, pt) -> {
+            double target = st.criterion().yieldTarget();
+            double low = target >= 0.99 ? 0.9504 : 0.9493;
+            dev.ampsieve.budget.Budget b = new LinearEngine().compute(st, pt);
+            return new dev.ampsieve.budget.Budget(pt, st, b.noiseGain(), b.terms(), b.worstCaseV(), b.rssV(), 0,
+                    b.limitV(), new dev.ampsieve.budget.YieldResult(0.96, low, 0.97, 20000, "sampled"), b.trimmed(),
+                    low >= target ? dev.ampsieve.budget.Verdict.FITS : dev.ampsieve.budget.Verdict.NO_FIT,
+                    b.limitingTerm(), b.constraints(), List.of());
+        };
+        Ranking r = Ranker.rank(s, List.of(p), engine);
+        Change c = changes(r).get(Change.Kind.LOWER_YIELD_TARGET);
+        assertEquals(0.949, c.values().get("yieldTarget"), 1e-12);
+        assertTrue(c.text().startsWith("a yield target of 94.9 % or lower"), c.text());
+    }
 }
