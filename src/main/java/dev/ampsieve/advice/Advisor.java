@@ -79,6 +79,15 @@ public final class Advisor {
             lines.add("Prices are in different currencies (" + String.join(", ", currencies)
                     + ") and are compared as plain numbers.");
         }
+        // one price per part, at the quantity it was quoted for: nothing to pick a price break from
+        TreeSet<Integer> larger = new TreeSet<>();
+        ranked.stream().map(c -> c.part().price()).filter(p -> p != null && p.quantity() > stage.quantity())
+                .forEach(p -> larger.add(p.quantity()));
+        if (!larger.isEmpty()) {
+            lines.add("Prices are the catalog's, each for its stated order quantity ("
+                    + String.join(", ", larger.stream().map(String::valueOf).toList()) + " units), not for this build of "
+                    + stage.quantity() + ": smaller orders usually cost more per unit.");
+        }
         return new Advice(pick, asIs, trim, zeroDrift, noFit, lines);
     }
 

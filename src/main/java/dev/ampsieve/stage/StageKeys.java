@@ -169,7 +169,7 @@ public final class StageKeys {
             k("trim.cost", Kind.NUMBER, List.of(), "0", "0.60",
                     "cost of trimming one unit (labour, trimmer or DAC, test time), to compare with a better part"),
             k("quantity", Kind.INTEGER, List.of(), String.valueOf(DEFAULT_QUANTITY), "1000",
-                    "build quantity, to pick the catalog price break"),
+                    "build quantity, for totals over the build (prices stay the catalog's, at their stated quantity)"),
             k("max-price", Kind.NUMBER, List.of(), "none", "5.00", "price ceiling per unit; dearer parts are excluded"),
             k("ac-coupled", Kind.BOOLEAN, List.of(), "false", "false",
                     "when true, DC errors count only toward output headroom, not toward the error"));

@@ -225,4 +225,18 @@ class RankerTest {
         // PREC: 3.00, 0.5 mV; CHEAP: 1.00, 1.9 mV: neither dominates the other
         assertEquals(List.of("CHEAP", "PREC"), r.paretoIds());
     }
+
+    @Test
+    void pricesQuotedForALargerOrderThanTheBuildAreSaidToBeSo() {
+        // the catalog holds one price per part, at its own order quantity (1000 here); a build of 400
+        // cannot be priced from it, and smaller orders usually cost more per unit (common practice)
+        Stage s = stage().trim(true, 10e-6, 0.50).quantity(400).build();
+        Ranking r = rank(s, precAndCheap(s, Verdict.FITS_AFTER_TRIM));
+        assertTrue(r.advice().lines().contains("Prices are the catalog's, each for its stated order quantity (1000 units),"
+                + " not for this build of 400: smaller orders usually cost more per unit."), r.advice().lines().toString());
+        // a build at or above the quoted quantity needs no such remark
+        Stage big = stage().trim(true, 10e-6, 0.50).quantity(1000).build();
+        assertTrue(rank(big, precAndCheap(big, Verdict.FITS_AFTER_TRIM)).advice().lines().stream()
+                .noneMatch(l -> l.startsWith("Prices are the catalog's")));
+    }
 }
