@@ -226,7 +226,11 @@ public final class Advisor {
         } else {
             double ratio = fchop / stage.bandHigh();
             String times = Phrases.number(ratio) + " times";
-            if (ratio < CHOP_CLEARANCE) {
+            if (ratio <= 1.0) {
+                out.add("chopping at " + Units.format(fchop, Dimension.FREQUENCY) + " is inside the " + band
+                        + " band: its ripple and intermodulation land in the signal; a part clocked well above the band"
+                        + " is needed (common practice: 10 times above it).");
+            } else if (ratio < CHOP_CLEARANCE) {
                 out.add("chopping at " + Units.format(fchop, Dimension.FREQUENCY) + " is only " + times + " the "
                         + band + " band edge: ripple and intermodulation land near the band; check the datasheet's"
                         + " ripple and filter (common practice: keep it 10 times above the band).");

@@ -232,7 +232,8 @@ public final class BudgetCalculator {
                 w.add(part.architecture().key() + ": chopping frequency not given; ripple cannot be checked against the band");
             } else if (stage.bandHigh() > fc / CHOP_MARGIN) {
                 w.add(part.architecture().key() + ": band edge " + Units.format(stage.bandHigh(), Dimension.FREQUENCY)
-                        + " is not far below the chopping frequency " + Units.format(fc, Dimension.FREQUENCY)
+                        + (stage.bandHigh() >= fc ? " is above the chopping frequency " : " is not far below the chopping frequency ")
+                        + Units.format(fc, Dimension.FREQUENCY)
                         + " (keep fH under a tenth of it): expect ripple and intermodulation in band");
             }
         }

@@ -239,4 +239,16 @@ class RankerTest {
         assertTrue(rank(big, precAndCheap(big, Verdict.FITS_AFTER_TRIM)).advice().lines().stream()
                 .noneMatch(l -> l.startsWith("Prices are the catalog's")));
     }
+
+    @Test
+    void aChoppingFrequencyInsideTheBandIsSaidToBeInside() {
+        // chopping at 20 kHz with the band reaching 50 kHz: the ripple is in the band, not "near" it
+        Stage s = stage().bandHigh(50e3).build();
+        Part chop = chopper(2.20);
+        Map<Part, Budget> m = new LinkedHashMap<>();
+        m.put(chop, budget(s, chop, 0.5e-3, 0.2e-3, 0.2e-3, Verdict.FITS));
+        ZeroDriftAdvice z = rank(s, m).advice().zeroDrift();
+        assertTrue(z.caveats().stream().anyMatch(c -> c.startsWith("chopping at 20.0 kHz is inside the 50.0 kHz band:")),
+                z.caveats().toString());
+    }
 }
