@@ -334,11 +334,16 @@ public final class Advisor {
                 g -> fits.test(StageEdit.withRf(stage, (g - 1.0) * rgEff))));
         double rfNeeded = (ng - 1.0) * rgEff;
         Stage at = StageEdit.withRf(stage, rfNeeded);
+        // the resistor as printed (3 digits), rounded toward the lower gain so that building it fits
+        double rfShown = Phrases.round3Down(rfNeeded);
+        if (!fits.test(StageEdit.withRf(stage, rfShown))) {
+            rfShown -= Phrases.unit3(rfShown);
+        }
         Map<String, Double> v = new LinkedHashMap<>();
         v.put("noiseGain", at.noiseGain());
         v.put("signalGain", at.signalGain());
-        v.put("rf", rfNeeded);
-        String resistors = "Rf " + Phrases.ohms(rfNeeded) + " with Rg " + Phrases.ohms(stage.rg());
+        v.put("rf", rfShown);
+        String resistors = "Rf " + Phrases.ohms(rfShown) + " with Rg " + Phrases.ohms(stage.rg());
         String text = stage.topology() == Topology.INVERTING
                 ? "a gain of " + Phrases.number(at.signalGain()) + " or less in magnitude (now "
                 + Phrases.number(stage.signalGain()) + "; noise gain " + Phrases.number(at.noiseGain()) + "): " + resistors
@@ -461,18 +466,19 @@ public final class Advisor {
         StringBuilder text = new StringBuilder("a limit of ");
         // said the way the user wrote the limit, with the output figure beside it
         switch (l.kind()) {
-            case INPUT -> text.append(volts(needed / ng)).append(" at the input (").append(volts(needed))
+            // each figure in the user's form rounded toward the looser side, so that the limit as printed fits
+            case INPUT -> text.append(volts(Phrases.round3Up(needed / ng))).append(" at the input (").append(volts(needed))
                     .append(" at the output) or looser (now ").append(volts(l.value())).append(" at the input)");
             case LSB -> {
                 double lsb = l.reference() / Math.pow(2, l.bits());
                 v.put("limitLsb", needed / lsb);
-                text.append(String.format(Locale.ROOT, "%.2f", needed / lsb)).append(" LSB (").append(volts(needed))
+                text.append(String.format(Locale.ROOT, "%.2f", Math.ceil(needed / lsb * 100 - 1e-9) / 100)).append(" LSB (").append(volts(needed))
                         .append(" at the output) or looser (now ").append(Phrases.number(l.value())).append(" LSB)");
             }
             case PERCENT_OF_FULL_SCALE -> {
                 double fs = stage.fullScaleOutput() == null ? Double.NaN : stage.fullScaleOutput();
                 v.put("limitFraction", needed / fs);
-                text.append(Units.format(needed / fs, Dimension.RATIO)).append(" of full scale (").append(volts(needed))
+                text.append(Units.format(Phrases.round3Up(needed / fs), Dimension.RATIO)).append(" of full scale (").append(volts(needed))
                         .append(" at the output) or looser (now ").append(Units.format(l.value(), Dimension.RATIO)).append(")");
             }
             case OUTPUT -> text.append(volts(needed)).append(" at the output (").append(volts(needed / ng))

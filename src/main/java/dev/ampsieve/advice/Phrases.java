@@ -103,6 +103,18 @@ final class Phrases {
         return Double.parseDouble(String.format(Locale.ROOT, "%.2e", x));
     }
 
+    /** Rounds a positive x to 3 significant digits, never up (beyond round-off of x itself). */
+    static double round3Down(double x) {
+        double r = round3(x);
+        return r > x * (1 + 1e-12) ? r - unit3(x) : r;
+    }
+
+    /** Rounds a positive x to 3 significant digits, never down (beyond round-off of x itself). */
+    static double round3Up(double x) {
+        double r = round3(x);
+        return r < x * (1 - 1e-12) ? r + unit3(x) : r;
+    }
+
     /** One unit in the third significant digit of x. */
     static double unit3(double x) {
         return Math.pow(10, Math.floor(Math.log10(Math.abs(x))) - 2);
