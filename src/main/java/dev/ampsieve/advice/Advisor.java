@@ -194,7 +194,14 @@ public final class Advisor {
         Double ib = p.ib().max() != null ? p.ib().max() : p.ib().typ();
         TermResult bias = c.budget().term("bias");
         if (ib != null) {
-            out.add("bias current up to " + Units.format(Math.abs(ib), Dimension.CURRENT)
+            String hot = "";
+            if (bias != null && Double.isFinite(bias.worstAtC()) && bias.worstAtC() != Stage.T_REF) {
+                // the budget scales it with temperature: quote the current that gives the output error below
+                double ibT = dev.ampsieve.budget.PartValues.of(p, stage).ibAt(bias.worstAtC());
+                hot = " at 25 °C, " + Units.format(ibT, Dimension.CURRENT) + " at " + Phrases.celsius(bias.worstAtC())
+                        + " in this budget";
+            }
+            out.add("bias current up to " + Units.format(Math.abs(ib), Dimension.CURRENT) + hot
                     + " (charge injection at the input switches, more than a plain CMOS input draws)"
                     + (bias != null ? ": " + volts(bias.outputV()) + " at the output here, "
                     + Phrases.percent(bias.outputV() / c.limitV()) + " of the limit" : "") + ".");

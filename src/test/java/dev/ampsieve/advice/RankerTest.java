@@ -251,4 +251,17 @@ class RankerTest {
         assertTrue(z.caveats().stream().anyMatch(c -> c.startsWith("chopping at 20.0 kHz is inside the 50.0 kHz band:")),
                 z.caveats().toString());
     }
+
+    @Test
+    void theChopperBiasCaveatGivesTheCurrentTheBudgetUsesAtTemperature() {
+        // CMOS input, 300 pA at 25 °C and no over-temperature figure: the budget doubles it every 10 °C
+        // (common practice) to 300 pA x 2^4.5 = 6.79 nA at 70 °C; a caveat quoting only 300 pA beside
+        // the output error that 6.79 nA causes would not add up
+        Stage s = stage().limitV(1.0).build();
+        Part chop = chopper(2.20);
+        Ranking r = Ranker.rank(s, List.of(chop), dev.ampsieve.budget.BudgetCalculator::compute);
+        List<String> caveats = r.advice().zeroDrift().caveats();
+        assertTrue(caveats.stream().anyMatch(c -> c.startsWith("bias current up to 300 pA at 25 °C, 6.79 nA at 70 °C in this"
+                + " budget")), caveats.toString());
+    }
 }
