@@ -86,8 +86,10 @@ public record PartValues(
         } else if (drS.typ() != null) {
             drift = Figure.of(drS.typ(), Basis.TYPICAL_ONLY);
             w.add("vos-drift: no guaranteed maximum; the typical value is used as the limit and as one sigma");
-        } else if (!Double.isNaN(vosOt) && vos.basis() == Basis.GUARANTEED) {
+        } else if (!Double.isNaN(vosOt) && vos.basis() == Basis.GUARANTEED && vosS.max() != null) {
             // the offset over temperature bounds offset plus drift: the drift term takes what is left
+            // (not when it is the only offset figure: nothing is left, and a trim would then seem to
+            // leave no drift at all, so the estimate below stands in)
             drift = Figure.of(Double.POSITIVE_INFINITY, Basis.GUARANTEED);
         } else {
             drift = Figure.of(estimatedDrift(vos.bound()), Basis.ESTIMATED);

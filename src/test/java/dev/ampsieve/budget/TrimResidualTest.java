@@ -50,4 +50,16 @@ class TrimResidualTest {
         assertEquals(22.5e-6, b.term("drift").outputV(), 1e-15);
         assertEquals(22.5e-6, b.trimmed().worstCaseV(), 1e-15);
     }
+
+    @Test
+    void anOffsetGivenOnlyOverTemperatureDoesNotMakeATrimLeaveNothing() {
+        // only "vos max over temperature 100 µV" and no drift figure: untrimmed, the over-temperature
+        // maximum bounds offset plus drift (100 µV); after a trim at 25 °C nothing bounds the change, so
+        // the missing drift is estimated as vos / T (bipolar pair: GHLM5 ch. 3 [from memory];
+        // reference-checks §5, 3.354 µV/°C per mV): 100 µV / 298.15 K x 45 °C = 15.093 µV, flagged
+        Budget b = BudgetCalculator.compute(stage().build(), PartFixture.ideal().vos(null, null, 100e-6).drift(null, null).build());
+        assertEquals(100e-6, b.worstCaseV(), 1e-15);
+        assertEquals(100e-6 / 298.15 * 45, b.trimmed().worstCaseV(), 1e-15);
+        org.junit.jupiter.api.Assertions.assertTrue(b.term("drift").estimated());
+    }
 }
