@@ -11,7 +11,7 @@ import picocli.CommandLine.ParentCommand;
 import picocli.CommandLine.Spec;
 
 /** {@code ampsieve check}: reads every catalog file and lists every problem, one line each. */
-@Command(name = "check", mixinStandardHelpOptions = true,
+@Command(name = "check", header = "Check every catalog file; list each problem with its place and fix.", mixinStandardHelpOptions = true,
         description = "Read the whole catalog and list every problem as file:line:col: field: problem; fix.")
 public final class CheckCommand implements Callable<Integer> {
 
