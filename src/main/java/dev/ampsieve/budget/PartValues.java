@@ -211,6 +211,24 @@ public record PartValues(
         return ios.bound() * biasFactor(part.input(), ios.bound(), iosOverTemp, tC);
     }
 
+    /**
+     * False when the catalog gives IB only as a maximum over temperature: its 25 °C value is then
+     * unknown and a 25 °C trim cannot be credited with removing any of it.
+     */
+    public boolean ibKnownAt25() {
+        Spread s = orNone(part.ib());
+        return s.max() != null || s.typ() != null || s.maxOverTemp() == null;
+    }
+
+    /** The same for IOS (an IOS assumed equal to IB follows IB). */
+    public boolean iosKnownAt25() {
+        if (ios.basis() == Basis.ASSUMED) {
+            return ibKnownAt25();
+        }
+        Spread s = orNone(part.ios());
+        return s.max() != null || s.typ() != null || s.maxOverTemp() == null;
+    }
+
     /** Ratio of the bias current limit at {@code tC} to that at 25 °C. */
     public double ibFactor(double tC) {
         return biasFactor(part.input(), ib.bound(), ibOverTemp, tC);

@@ -50,6 +50,9 @@ final class YieldModel {
     private final TruncatedNormal agingD;
     private final double tol;
     private final double resolution;
+    /** What a trim at 25 °C removes of each unit's IB and IOS: 1, or 0 when only an over-temperature maximum is known. */
+    private final double ibTrimmed;
+    private final double iosTrimmed;
 
     /**
      * @param fixed     output volts of the terms held at their limits
@@ -68,6 +71,8 @@ final class YieldModel {
         this.gainCoef = vfs * ResistorTerm.sensitivity(s);
         this.tol = trimmed && twoPoint ? 0.0 : s.ratioTolerance();
         this.resolution = trimmed ? BudgetCalculator.trimOf(s).resolution() : 0.0;
+        this.ibTrimmed = trimmed && v.ibKnownAt25() ? 1.0 : 0.0;
+        this.iosTrimmed = trimmed && v.iosKnownAt25() ? 1.0 : 0.0;
         double k = s.maxToSigma();
         double[] temps = {s.tMin(), s.tMax()};
         for (int j = 0; j < 2; j++) {
@@ -156,8 +161,8 @@ final class YieldModel {
                     off = -clamp;
                 }
                 // after a trim at 25 °C only the change of the bias currents from 25 °C remains
-                double gi = trimmed ? fib[j] - 1.0 : fib[j];
-                double go = trimmed ? fios[j] - 1.0 : fios[j];
+                double gi = fib[j] - ibTrimmed;
+                double go = fios[j] - iosTrimmed;
                 double e = ng * (off + aging[i]) - a * ib[i] * gi - b * ios[i] * go / 2.0 + res[i];
                 worst = Math.max(worst, Math.abs(e));
             }
@@ -214,8 +219,8 @@ final class YieldModel {
         double offHi = Math.max(-clamp, Math.min(clamp, v[1] + d[1]));
         double[] off = scaled(new double[] {offLo, offHi}, ng);
         double[] g = scaled(span(agingD), ng);
-        double gi = trimmed ? fib[j] - 1.0 : fib[j];
-        double go = trimmed ? fios[j] - 1.0 : fios[j];
+        double gi = fib[j] - ibTrimmed;
+        double go = fios[j] - iosTrimmed;
         double[] ib = scaled(span(ibD), -a * gi);
         double[] io = scaled(span(iosD), -b * go / 2.0);
         return new double[] {off[0] + g[0] + ib[0] + io[0] - resolution, off[1] + g[1] + ib[1] + io[1] + resolution};

@@ -62,4 +62,26 @@ class TrimResidualTest {
         assertEquals(100e-6 / 298.15 * 45, b.trimmed().worstCaseV(), 1e-15);
         org.junit.jupiter.api.Assertions.assertTrue(b.term("drift").estimated());
     }
+
+    @Test
+    void biasCurrentsGivenOnlyOverTemperatureAreNotTrimmedAway() {
+        // follower with Rf 100 k: |R+ - Rf| IB + (R+ + Rf) IOS/2 = 100 k x 10 nA + 100 k x 2 nA / 2 = 1.1 mV
+        // (Eggleston §6.4), from over-temperature maxima only. The 25 °C currents are unknown, so a trim at
+        // 25 °C cannot be credited with removing any of it (taking the same figure at 25 °C would make the
+        // trim remove it all)
+        StageFixture s = stage();
+        s.rf = 100e3;
+        PartFixture p = PartFixture.ideal();
+        p.ib = new dev.ampsieve.catalog.Spread(null, null, 10e-9);
+        p.ios = new dev.ampsieve.catalog.Spread(null, null, 2e-9);
+        Budget b = BudgetCalculator.compute(s.build(), p.build());
+        assertEquals(1.1e-3, b.term("bias").outputV(), 1e-15);
+        double noise = b.term("noise").outputV(); // Rf's thermal noise, untouched by any trim
+        assertEquals(1.1e-3 + noise, b.trimmed().worstCaseV(), 1e-15);
+        // with a 25 °C maximum the model scales each unit's current: 10/5 = x 2 at temperature, so a
+        // trim removes the 25 °C half of it (error-model.md: "the change of 3 with temperature" remains)
+        p.ib = new dev.ampsieve.catalog.Spread(null, 5e-9, 10e-9);
+        p.ios = new dev.ampsieve.catalog.Spread(null, 1e-9, 2e-9);
+        assertEquals(0.55e-3 + noise, BudgetCalculator.compute(s.build(), p.build()).trimmed().worstCaseV(), 1e-15);
+    }
 }
