@@ -149,7 +149,8 @@ public final class BudgetCalculator {
 
     /**
      * Totals after a calibration at 25 °C. One-point: removes term 1 and the 25 °C part of
-     * term 3, adds the trim resolution. Two-point: also removes the static gain errors (term 6
+     * term 3, keeps term 2 without its over-temperature cap ({@link DriftTerm#afterTrim}), adds
+     * the trim resolution. Two-point: also removes the static gain errors (term 6
      * and the tolerance part of term 8).
      */
     private static Trimmed trimmed(Stage stage, PartValues v, List<TermResult> terms, Trim.Method method) {
@@ -163,6 +164,7 @@ public final class BudgetCalculator {
             double o = find(terms, t.key()).outputV();
             switch (t.key()) {
                 case OffsetTerm.KEY -> o = 0;
+                case DriftTerm.KEY -> o = DriftTerm.afterTrim(stage, v);
                 case BiasTerm.KEY -> o = Math.max(0.0, o - BiasTerm.at25(stage, v));
                 case OpenLoopGainTerm.KEY -> o = two ? 0 : o;
                 case ResistorTerm.KEY -> o = two ? ResistorTerm.tempcoPart(stage) : o;
@@ -230,7 +232,8 @@ public final class BudgetCalculator {
                 w.add(part.architecture().key() + ": chopping frequency not given; ripple cannot be checked against the band");
             } else if (stage.bandHigh() > fc / CHOP_MARGIN) {
                 w.add(part.architecture().key() + ": band edge " + Units.format(stage.bandHigh(), Dimension.FREQUENCY)
-                        + " is not far below the chopping frequency " + Units.format(fc, Dimension.FREQUENCY)
+                        + (stage.bandHigh() >= fc ? " is above the chopping frequency " : " is not far below the chopping frequency ")
+                        + Units.format(fc, Dimension.FREQUENCY)
                         + " (keep fH under a tenth of it): expect ripple and intermodulation in band");
             }
         }

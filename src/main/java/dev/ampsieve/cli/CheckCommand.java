@@ -1,6 +1,7 @@
 package dev.ampsieve.cli;
 
 import dev.ampsieve.catalog.Catalog;
+import dev.ampsieve.report.Caution;
 import dev.ampsieve.yaml.Problem;
 import java.io.PrintWriter;
 import java.util.concurrent.Callable;
@@ -31,6 +32,8 @@ public final class CheckCommand implements Callable<Integer> {
         }
         out.printf("%s: %d file(s), %d part(s), %d error(s), %d warning(s)%n",
                 c.root(), c.files(), c.parts().size(), errors, warnings);
+        out.println();
+        out.println(Caution.TEXT);
         return errors > 0 ? ExitCode.FINDINGS : ExitCode.OK;
     }
 }
