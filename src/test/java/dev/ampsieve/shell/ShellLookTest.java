@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.ampsieve.cli.RootCommand;
 import dev.ampsieve.report.OutputStyle;
 import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.Units;
@@ -47,6 +48,19 @@ class ShellLookTest {
             assertFalse(s.color());
             assertEquals(80, s.width()); // a dumb terminal reports no width
         }
+    }
+
+    @Test
+    void commandsGetTheTerminalsWidthForTheirTables() throws IOException {
+        RootCommand root = new RootCommand();
+        assertEquals(OutputStyle.TEXT_WIDTH, root.textWidth()); // the command line: a fixed width for files and pipes
+        try (Terminal t = new ExternalTerminal("test", "xterm-256color", new ByteArrayInputStream("help\n".getBytes(UTF_8)),
+                new ByteArrayOutputStream(), UTF_8)) {
+            t.setSize(new Size(132, 40));
+            new Shell(root, List.of(), t, null, Map.of()).run();
+        }
+        assertEquals(132, root.textWidth());
+        assertEquals(132, root.outputStyle().width());
     }
 
     @Test
