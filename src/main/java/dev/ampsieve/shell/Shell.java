@@ -37,8 +37,8 @@ import picocli.CommandLine.Model.OptionSpec;
  * into words (quotes group words) and executed by the tree; a command that takes
  * {@code --stage FILE} gets the current stage when the line gives none.
  *
- * <p>Ctrl-C drops the line being typed, and while a command runs it interrupts the command's
- * thread (a command that checks stops early); it never ends the shell. Ctrl-D leaves. Any failure prints one line and the loop goes on;
+ * <p>Ctrl-C drops the line being typed (or the question sequence of {@code ask}) and is ignored
+ * while a command runs; it never ends the shell. Ctrl-D leaves. Any failure prints one line and the loop goes on;
  * a stack trace only with {@code --verbose}.
  */
 public final class Shell {
@@ -211,8 +211,10 @@ public final class Shell {
                     + " ('help' lists the commands)");
             return;
         }
-        Thread me = Thread.currentThread();
-        Terminal.SignalHandler previous = terminal.handle(Terminal.Signal.INT, s -> me.interrupt());
+        // Ctrl-C while a command runs is swallowed, never fatal. It does not interrupt the thread on
+        // purpose: an interrupt during a read closes Lucene's FileChannel (ClosedByInterruptException)
+        // and would spoil the index for the rest of the session; commands finish in seconds.
+        Terminal.SignalHandler previous = terminal.handle(Terminal.Signal.INT, s -> { });
         try {
             List<String> line = new ArrayList<>(words);
             if (sub != null && !withStage(ctx, sub, line, err)) {
@@ -225,7 +227,6 @@ public final class Shell {
             failure(e, err);
         } finally {
             terminal.handle(Terminal.Signal.INT, previous != null ? previous : Terminal.SignalHandler.SIG_DFL);
-            Thread.interrupted(); // a Ctrl-C during the command must not cancel the next prompt
             ctx.out.flush();
             err.flush();
         }
