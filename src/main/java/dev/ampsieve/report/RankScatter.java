@@ -2,6 +2,7 @@ package dev.ampsieve.report;
 
 import dev.ampsieve.advice.Candidate;
 import dev.ampsieve.advice.Ranking;
+import dev.ampsieve.stage.Criterion;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -26,9 +27,9 @@ public final class RankScatter {
             }
         }
         StringBuilder o = new StringBuilder();
-        o.append("Error against cost").append(stageLabel == null ? "" : " in " + stageLabel).append(": ")
-                .append(r.stage().criterion().kind() == dev.ampsieve.stage.Criterion.Kind.WORST_CASE ? "worst-case sum" : "root-sum-square")
-                .append(" at the output (log scale) against effective unit cost\n");
+        o.append(stageLabel == null ? "" : stageLabel + ": ")
+                .append(r.stage().criterion().kind() == Criterion.Kind.WORST_CASE ? "worst-case" : "RSS")
+                .append(" error at the output (log scale) against effective unit cost\n");
         if (points.isEmpty()) {
             o.append("No candidate meets the hard constraints (").append(r.rejected().size())
                     .append(" rejected; 'rank' gives the reasons).\n");

@@ -72,10 +72,9 @@ public final class ScatterChart {
                 xHi = Math.max(xHi, p.cost());
             }
         }
-        // at least a factor of 2 each side of the limit, so the line is never an edge and a part
-        // near it is seen to be above or below
-        yHi = Math.max(yHi, 2 * limit);
-        yLo = Math.min(yLo, limit / 2);
+        // at least a factor of 1.5 each side of the limit, so the line is never an edge
+        yHi = Math.max(yHi, 1.5 * limit);
+        yLo = Math.min(yLo, limit / 1.5);
         if (xLo > xHi) {
             xLo = 0;
             xHi = 1;
@@ -102,6 +101,13 @@ public final class ScatterChart {
                 continue;
             }
             int r = p.error() > 0 && Double.isFinite(p.error()) ? row(p.error(), yHi, yLo, rows) : rows - 1;
+            // the one thing the chart must not get wrong: under the line means under the limit.
+            // A row spans a range of errors, so a part near the limit moves off the line to its side.
+            if (p.error() < limit && r <= limitRow) {
+                r = Math.min(rows - 1, limitRow + 1);
+            } else if (p.error() > limit && r >= limitRow) {
+                r = Math.max(0, limitRow - 1);
+            }
             int c = xHi == xLo ? plotW / 2 : (int) Math.round((p.cost() - xLo) / (xHi - xLo) * (plotW - 1));
             boolean taken = owner[r][c] >= 0 || owner[r][c] == -2;
             grid[r][c] = taken ? g.collide() : mark(i);

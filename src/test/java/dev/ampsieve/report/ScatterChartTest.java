@@ -63,12 +63,22 @@ class ScatterChartTest {
 
     @Test
     void theLimitIsNeverAnEdge() {
-        // a single point at the limit: the axis opens a factor of 2 each way (2 mV .. 500 uV over 5 rows),
-        // the limit lands on the middle row, and so does the point
+        // a single point at the limit: the axis opens a factor of 1.5 each way (1.5 mV .. 667 uV over 5 rows),
+        // the limit lands on the middle row, and so does the point, which is exactly at it
         List<String> lines = ScatterChart.render(List.of(new Point("P-9", 1e-3, 2, "fits")), 1e-3, "EUR", 5,
                 new OutputStyle(40, false, false));
-        assertEquals("2.00 mV +", lines.get(0));
+        assertEquals("1.50 mV +", lines.get(0));
         assertEquals("1.00 mV +------------a------------ limit", lines.get(2));
-        assertEquals(" 500 uV +", lines.get(4));
+        assertEquals(" 667 uV +", lines.get(4));
+    }
+
+    @Test
+    void aPartJustUnderTheLimitIsDrawnUnderTheLine() {
+        // 0.98 mV and 1.02 mV both round to the 1 mV limit row; each is moved to its own side of it
+        List<String> lines = ScatterChart.render(List.of(new Point("P-1", 0.98e-3, 1, "fits"),
+                new Point("P-2", 1.02e-3, 3, "no-fit")), 1e-3, "EUR", 5, new OutputStyle(40, false, false));
+        assertEquals("1.00 mV +------------------------- limit", lines.get(2));
+        assertEquals("        |                        b", lines.get(1));
+        assertEquals("        |a", lines.get(3));
     }
 }

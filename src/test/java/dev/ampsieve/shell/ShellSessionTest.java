@@ -46,7 +46,7 @@ class ShellSessionTest {
         assertTrue(printed.contains("Candidates ("), printed);
         assertTrue(printed.contains("zd-chop-01 in (current stage): error at the output, term by term"), printed);
         assertTrue(printed.contains("limit 1.00 mV ▲") || printed.contains("▲ limit 1.00 mV"), printed);
-        assertTrue(printed.contains("Error against cost in (current stage)"), printed);
+        assertTrue(printed.contains("(current stage): worst-case error at the output (log scale) against effective unit cost"), printed);
         assertFalse(printed.contains(ShellState.STAGE_FILE_NAME), printed); // the temporary file stays out of sight
         assertFalse(printed.contains("ampsieve-shell-"), printed);
     }
