@@ -7,7 +7,7 @@ import java.util.function.UnaryOperator;
 /**
  * Passes text on line by line through a function: hides the shell's temporary stage file
  * behind "(current stage)", spells µ and ° in ASCII on terminals that cannot show them,
- * colours error lines. A partial line goes out unchanged-in-order on flush.
+ * colours error lines. A partial line (no newline yet) goes out, filtered, on flush.
  */
 final class LineFilterWriter extends Writer {
     private final Writer target;
