@@ -139,7 +139,7 @@ public final class Advisor {
         String trimName = StageEdit.trim(stage).method() == Trim.Method.TWO_POINT ? "two-point calibration" : "one-point trim";
         String cost = StageEdit.trim(stage).cost() > 0
                 ? money(StageEdit.trim(stage).cost(), t.withTrim() == null ? "" : t.withTrim().currency())
-                : "no stated cost (counted as 0)";
+                : "no stated cost (stage trim.cost; counted as 0)";
         Candidate w = t.withTrim();
         Candidate a = t.asIs();
         return java.util.Optional.ofNullable(switch (t.status()) {
@@ -156,7 +156,7 @@ public final class Advisor {
             case NOT_NEEDED -> StageEdit.trim(stage).allowed() ? "No part needs the " + trimName + " to fit; leave it out." : null;
             case WOULD_PAY_IF_ALLOWED -> "The stage allows no trim; a " + trimName + " would let " + w.id() + " fit at "
                     + money(w.effectiveCost(), w.currency()) + " per unit (price "
-                    + money(Candidate.price(w.part()), w.currency()) + " plus trim " + cost + ")"
+                    + money(Candidate.price(w.part()), w.currency()) + " plus the trim: " + cost + ")"
                     + (a == null ? ", and nothing fits without one"
                     : ", " + money(t.savingPerUnit(), w.currency()) + " less than " + a.id() + " as it is ("
                     + money(t.savingTotal(), w.currency()) + " over " + q + " units)")

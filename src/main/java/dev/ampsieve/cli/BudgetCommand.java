@@ -47,7 +47,7 @@ public final class BudgetCommand implements Callable<Integer> {
         Stage stage = StageLoader.load(stageFile);
         Budget b = BudgetCalculator.compute(stage, part);
         String label = stageFile.toString();
-        spec.commandLine().getOut().print(json ? BudgetJson.render(b, label) : BudgetText.render(b, label));
+        spec.commandLine().getOut().print(json ? BudgetJson.render(b, label) : BudgetText.render(b, label, root.textWidth()));
         return ExitCode.OK;
     }
 

@@ -23,6 +23,15 @@ public final class BudgetText {
      * @param stageLabel how to name the stage in the header (its file), or null
      */
     public static String render(Budget b, String stageLabel) {
+        return render(b, stageLabel, TextTable.WIDTH);
+    }
+
+    /** @param width columns prose lines are folded at (the terminal's, in the shell) */
+    public static String render(Budget b, String stageLabel, int width) {
+        return Wrap.prose(table(b, stageLabel), width);
+    }
+
+    private static String table(Budget b, String stageLabel) {
         Stage s = b.stage();
         StringBuilder o = new StringBuilder();
         double limit = b.limitV();

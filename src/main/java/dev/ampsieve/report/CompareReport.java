@@ -64,7 +64,7 @@ public final class CompareReport {
         s.lines(width).forEach(l -> o.append(l).append('\n'));
         o.append('\n').append(c.conclusion()).append('\n');
         o.append('\n').append(Caution.TEXT).append('\n');
-        return o.toString();
+        return Wrap.prose(o.toString(), width);
     }
 
     private static void total(TextTable t, Comparison c, String label, double x, double y) {

@@ -46,7 +46,7 @@ public final class FindReport {
             o.append("vos, drift, ib: guaranteed maximum, else typical; en: white noise density; supply: total, V+ to V-.\n");
         }
         o.append('\n').append(Caution.TEXT).append('\n');
-        return o.toString();
+        return Wrap.prose(o.toString(), width);
     }
 
     /** JSON: {query, count, parts[{id, title, architecture, input, price, currency, figures in SI...}], caution}. */

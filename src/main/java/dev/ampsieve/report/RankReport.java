@@ -127,7 +127,7 @@ public final class RankReport {
             pick.budget().warnings().forEach(w -> o.append("  - ").append(w).append('\n'));
         }
         o.append('\n').append(Caution.TEXT).append('\n');
-        return o.toString();
+        return Wrap.prose(o.toString(), width);
     }
 
     /** CSV: one row per candidate in ranking order, then one per rejected part; the caution as a last '#' line. */

@@ -35,7 +35,7 @@ public final class SufficesReport {
         t.row("verdict", b.constraintsMet() ? b.verdict().key() : "rejected (hard constraint)");
         t.lines(width).stream().skip(1).forEach(l -> o.append(l).append('\n'));
         o.append('\n').append(Caution.TEXT).append('\n');
-        return o.toString();
+        return Wrap.prose(o.toString(), width);
     }
 
     private static String share(double v, double limit) {

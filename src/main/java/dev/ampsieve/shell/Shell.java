@@ -305,7 +305,7 @@ public final class Shell {
         out.println(paint.bold(new RootCommand.Version().getVersion()[0])
                 + ": op-amp choice by the full output error budget of your stage.");
         out.println(catalogLine());
-        out.println(paint.dim(Caution.TEXT));
+        out.println(paint.dim(dev.ampsieve.report.Wrap.prose(Caution.TEXT, ctx.style.width())));
         if (historyNote != null) {
             out.println(paint.dim(historyNote));
         }
@@ -318,8 +318,8 @@ public final class Shell {
             Catalog c = root.catalog();
             long errors = c.problems().stream().filter(Problem::isError).count();
             return "Catalog " + c.root() + ": " + c.parts().size() + " part(s)"
-                    + (c.problems().isEmpty() ? "." : "; " + c.problems().size() + " problem(s), " + errors
-                    + " error(s): 'check' lists them.");
+                    + (c.problems().isEmpty() ? "." : "; " + errors + " error(s), " + (c.problems().size() - errors)
+                    + " warning(s): 'check' lists them.");
         } catch (InputException e) {
             return "Catalog " + root.catalogDir() + ": " + e.problems().size() + " problem(s); 'check' lists them.";
         } catch (RuntimeException e) {

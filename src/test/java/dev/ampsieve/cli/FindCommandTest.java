@@ -99,7 +99,7 @@ class FindCommandTest {
                 && chop.contains("300 pA") && chop.contains("2.00 MHz") && chop.contains("2.7-5.5 V"), chop);
         // the title on its own line, under the figures, indented past the id column ("fx-chop-1" + 2)
         assertTrue(r.outLines().contains(" ".repeat(11) + "Invented chopper amplifier"), r.out());
-        assertTrue(r.out().strip().endsWith(Caution.TEXT), r.out());
+        assertTrue(dev.ampsieve.testing.Flat.of(r.out()).endsWith(Caution.TEXT), r.out());
         assertEquals("", r.err());
         for (String line : r.outLines()) {
             if (!line.equals(Caution.TEXT)) {

@@ -71,7 +71,7 @@ class BudgetReportTest {
         assertTrue(t.contains("offset drift*"), "estimated mark");
         assertTrue(t.indexOf("initial offset") < t.indexOf("offset drift"));
         assertTrue(t.contains("Verdict    " + b.verdict().key()));
-        assertTrue(t.strip().endsWith(Caution.TEXT));
+        assertTrue(dev.ampsieve.testing.Flat.of(t).endsWith(Caution.TEXT));
         assertFalse(t.contains("NaN"));
     }
 
@@ -83,7 +83,7 @@ class BudgetReportTest {
         Budget b = BudgetCalculator.compute(s.build(), PartFixture.ideal().vos(1e-3, null, null).build());
         assertEquals("fits-after-trim", b.verdict().key());
         // decided from the catalog's limits, not from every unit there could be: said so
-        assertTrue(BudgetText.render(b, null).contains("yield after the one-point trim: 100 % (decided without sampling:"
+        assertTrue(dev.ampsieve.testing.Flat.of(BudgetText.render(b, null)).contains("yield after the one-point trim: 100 % (decided without sampling:"
                 + " even the largest error the catalog's limits allow is within the limit"), BudgetText.render(b, null));
         JsonNode ty = new ObjectMapper().readTree(BudgetJson.render(b, null)).get("trimmed").get("yield");
         assertEquals("all-pass", ty.get("decided").asText());
@@ -100,7 +100,7 @@ class BudgetReportTest {
         Budget b = BudgetCalculator.compute(s.build(), PartFixture.ideal().vos(1e-3, null, null).build());
         assertTrue(b.yield().high() < 0.999);
         String t = BudgetText.render(b, null);
-        assertTrue(t.contains("stopped once the interval lay wholly below the target"), t);
+        assertTrue(dev.ampsieve.testing.Flat.of(t).contains("stopped once the interval lay wholly below the target"), t);
         assertFalse(t.contains("cleared the target"));
     }
 }

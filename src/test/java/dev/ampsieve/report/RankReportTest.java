@@ -52,7 +52,7 @@ class RankReportTest {
         assertTrue(lines.get(header + 3).matches("3  CHOP\\s+fits\\s+3\\.00\\s+590 µV.*"), lines.get(header + 3));
         assertTrue(text.lines().anyMatch(l -> l.startsWith("HIGHV  supply: needs 5.0 V")), text);
         assertTrue(text.contains("A one-point trim is warranted: TRIMMED"), text);
-        assertTrue(text.strip().endsWith(Caution.TEXT));
+        assertTrue(dev.ampsieve.testing.Flat.of(text).endsWith(Caution.TEXT));
         for (String l : lines) {
             if (!l.equals(Caution.TEXT) && !l.startsWith("  ")) {
                 assertTrue(l.length() <= 100, l);
@@ -105,7 +105,7 @@ class RankReportTest {
         assertTrue(text.lines().anyMatch(l -> l.matches("initial offset\\s+200 µV\\s+500 µV\\s+GOOD\\s+300 µV \\(2\\.5 times\\)")),
                 text);
         assertTrue(text.contains("Both fit; GOOD costs 1.00 USD less per unit (1000.00 USD over 1000 units)"), text);
-        assertTrue(text.strip().endsWith(Caution.TEXT));
+        assertTrue(dev.ampsieve.testing.Flat.of(text).endsWith(Caution.TEXT));
         JsonNode j = new ObjectMapper().readTree(CompareReport.json(c, "s.yaml"));
         assertEquals("GOOD", j.get("preferred").asText());
         assertEquals(Caution.TEXT, j.get("caution").asText());
@@ -113,7 +113,7 @@ class RankReportTest {
         Sufficiency s = Sufficiency.of(e.compute(stage, trimmed));
         String st = SufficesReport.text(s, "s.yaml");
         assertTrue(st.startsWith("no: TRIMMED needs the trim; untrimmed worst-case 2.45 mV against 1.00 mV"), st);
-        assertTrue(st.strip().endsWith(Caution.TEXT));
+        assertTrue(dev.ampsieve.testing.Flat.of(st).endsWith(Caution.TEXT));
         JsonNode sj = new ObjectMapper().readTree(SufficesReport.json(s, "s.yaml"));
         assertEquals("no", sj.get("answer").asText());
         assertEquals(Caution.TEXT, sj.get("caution").asText());
