@@ -174,6 +174,7 @@ class ShellSessionTest {
         Matcher m = Pattern.compile("Catalog \\S+: (\\d+) part\\(s\\)").matcher(printed);
         assertTrue(m.find(), printed);
         assertTrue(Integer.parseInt(m.group(1)) > 0, printed);
-        assertTrue(printed.contains(dev.ampsieve.report.Caution.TEXT), printed);
+        assertTrue(dev.ampsieve.testing.Flat.of(printed).contains(dev.ampsieve.report.Caution.TEXT), printed);
+        assertTrue(printed.contains("0 error(s), 5 warning(s)"), printed);
     }
 }
