@@ -79,6 +79,15 @@ public final class Advisor {
             lines.add("Prices are in different currencies (" + String.join(", ", currencies)
                     + ") and are compared as plain numbers.");
         }
+        // one price per part, at the quantity it was quoted for: nothing to pick a price break from
+        TreeSet<Integer> larger = new TreeSet<>();
+        ranked.stream().map(c -> c.part().price()).filter(p -> p != null && p.quantity() > stage.quantity())
+                .forEach(p -> larger.add(p.quantity()));
+        if (!larger.isEmpty()) {
+            lines.add("Prices are the catalog's, each for its stated order quantity ("
+                    + String.join(", ", larger.stream().map(String::valueOf).toList()) + " units), not for this build of "
+                    + stage.quantity() + ": smaller orders usually cost more per unit.");
+        }
         return new Advice(pick, asIs, trim, zeroDrift, noFit, lines);
     }
 
@@ -185,7 +194,14 @@ public final class Advisor {
         Double ib = p.ib().max() != null ? p.ib().max() : p.ib().typ();
         TermResult bias = c.budget().term("bias");
         if (ib != null) {
-            out.add("bias current up to " + Units.format(Math.abs(ib), Dimension.CURRENT)
+            String hot = "";
+            if (bias != null && Double.isFinite(bias.worstAtC()) && bias.worstAtC() != Stage.T_REF) {
+                // the budget scales it with temperature: quote the current that gives the output error below
+                double ibT = dev.ampsieve.budget.PartValues.of(p, stage).ibAt(bias.worstAtC());
+                hot = " at 25 °C, " + Units.format(ibT, Dimension.CURRENT) + " at " + Phrases.celsius(bias.worstAtC())
+                        + " in this budget";
+            }
+            out.add("bias current up to " + Units.format(Math.abs(ib), Dimension.CURRENT) + hot
                     + " (charge injection at the input switches, more than a plain CMOS input draws)"
                     + (bias != null ? ": " + volts(bias.outputV()) + " at the output here, "
                     + Phrases.percent(bias.outputV() / c.limitV()) + " of the limit" : "") + ".");
@@ -217,7 +233,11 @@ public final class Advisor {
         } else {
             double ratio = fchop / stage.bandHigh();
             String times = Phrases.number(ratio) + " times";
-            if (ratio < CHOP_CLEARANCE) {
+            if (ratio <= 1.0) {
+                out.add("chopping at " + Units.format(fchop, Dimension.FREQUENCY) + " is inside the " + band
+                        + " band: its ripple and intermodulation land in the signal; a part clocked well above the band"
+                        + " is needed (common practice: 10 times above it).");
+            } else if (ratio < CHOP_CLEARANCE) {
                 out.add("chopping at " + Units.format(fchop, Dimension.FREQUENCY) + " is only " + times + " the "
                         + band + " band edge: ripple and intermodulation land near the band; check the datasheet's"
                         + " ripple and filter (common practice: keep it 10 times above the band).");
@@ -286,7 +306,7 @@ public final class Advisor {
         betterResistors(stage, fits).ifPresent(out::add);
         trimChange(stage, p, budgets).ifPresent(out::add);
         looserLimit(stage, closest, fits).ifPresent(out::add);
-        lowerYieldTarget(stage, closest).ifPresent(out::add);
+        lowerYieldTarget(stage, closest, fits).ifPresent(out::add);
         return out;
     }
 
@@ -321,11 +341,16 @@ public final class Advisor {
                 g -> fits.test(StageEdit.withRf(stage, (g - 1.0) * rgEff))));
         double rfNeeded = (ng - 1.0) * rgEff;
         Stage at = StageEdit.withRf(stage, rfNeeded);
+        // the resistor as printed (3 digits), rounded toward the lower gain so that building it fits
+        double rfShown = Phrases.round3Down(rfNeeded);
+        if (!fits.test(StageEdit.withRf(stage, rfShown))) {
+            rfShown -= Phrases.unit3(rfShown);
+        }
         Map<String, Double> v = new LinkedHashMap<>();
         v.put("noiseGain", at.noiseGain());
         v.put("signalGain", at.signalGain());
-        v.put("rf", rfNeeded);
-        String resistors = "Rf " + Phrases.ohms(rfNeeded) + " with Rg " + Phrases.ohms(stage.rg());
+        v.put("rf", rfShown);
+        String resistors = "Rf " + Phrases.ohms(rfShown) + " with Rg " + Phrases.ohms(stage.rg());
         String text = stage.topology() == Topology.INVERTING
                 ? "a gain of " + Phrases.number(at.signalGain()) + " or less in magnitude (now "
                 + Phrases.number(stage.signalGain()) + "; noise gain " + Phrases.number(at.noiseGain()) + "): " + resistors
@@ -448,18 +473,19 @@ public final class Advisor {
         StringBuilder text = new StringBuilder("a limit of ");
         // said the way the user wrote the limit, with the output figure beside it
         switch (l.kind()) {
-            case INPUT -> text.append(volts(needed / ng)).append(" at the input (").append(volts(needed))
+            // each figure in the user's form rounded toward the looser side, so that the limit as printed fits
+            case INPUT -> text.append(volts(Phrases.round3Up(needed / ng))).append(" at the input (").append(volts(needed))
                     .append(" at the output) or looser (now ").append(volts(l.value())).append(" at the input)");
             case LSB -> {
                 double lsb = l.reference() / Math.pow(2, l.bits());
                 v.put("limitLsb", needed / lsb);
-                text.append(String.format(Locale.ROOT, "%.2f", needed / lsb)).append(" LSB (").append(volts(needed))
+                text.append(String.format(Locale.ROOT, "%.2f", Math.ceil(needed / lsb * 100 - 1e-9) / 100)).append(" LSB (").append(volts(needed))
                         .append(" at the output) or looser (now ").append(Phrases.number(l.value())).append(" LSB)");
             }
             case PERCENT_OF_FULL_SCALE -> {
                 double fs = stage.fullScaleOutput() == null ? Double.NaN : stage.fullScaleOutput();
                 v.put("limitFraction", needed / fs);
-                text.append(Units.format(needed / fs, Dimension.RATIO)).append(" of full scale (").append(volts(needed))
+                text.append(Units.format(Phrases.round3Up(needed / fs), Dimension.RATIO)).append(" of full scale (").append(volts(needed))
                         .append(" at the output) or looser (now ").append(Units.format(l.value(), Dimension.RATIO)).append(")");
             }
             case OUTPUT -> text.append(volts(needed)).append(" at the output (").append(volts(needed / ng))
@@ -468,12 +494,27 @@ public final class Advisor {
         return java.util.Optional.of(new Change(Change.Kind.LOOSER_LIMIT, text.toString(), v));
     }
 
-    private static java.util.Optional<Change> lowerYieldTarget(Stage stage, Candidate closest) {
+    /** Steps of 0.1 % tried below the first guess before giving up (the re-runs are Monte Carlo runs). */
+    static final int YIELD_STEPS = 10;
+
+    private static java.util.Optional<Change> lowerYieldTarget(Stage stage, Candidate closest, Predicate<Stage> fits) {
         var y = closest.budget().yield();
         if (stage.criterion().kind() != Criterion.Kind.YIELD || y == null || !(y.low() > 0)) {
             return java.util.Optional.empty();
         }
-        double target = Math.floor(y.low() * 1000) / 1000; // 0.1 % steps, toward the side that passes
+        // first guess: the lower end reached at the present target, in 0.1 % steps toward the side that
+        // passes; then re-run, since a run stopped early against another target can end lower
+        double target = Math.floor(y.low() * 1000) / 1000;
+        int step = 0;
+        while (target > 0 && !fits.test(StageEdit.withCriterion(stage, Criterion.yield(target)))) {
+            if (++step > YIELD_STEPS) {
+                return java.util.Optional.empty();
+            }
+            target = Math.round(target * 1000 - 1) / 1000.0;
+        }
+        if (!(target > 0)) {
+            return java.util.Optional.empty();
+        }
         String text = "a yield target of " + Phrases.percentFine(target) + " or lower (now "
                 + Phrases.percentFine(stage.criterion().yieldTarget()) + ")";
         return java.util.Optional.of(new Change(Change.Kind.LOWER_YIELD_TARGET, text, Map.of("yieldTarget", target)));

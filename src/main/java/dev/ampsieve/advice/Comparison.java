@@ -122,6 +122,10 @@ public record Comparison(Candidate a, Candidate b, List<TermDelta> terms, String
         if (!c.constraintsMet()) {
             return Rejected.of(c.budget()).reason();
         }
+        if (c.budget().stage().criterion().kind() == dev.ampsieve.stage.Criterion.Kind.YIELD && Phrases.yieldOf(c) != null) {
+            // judged by the yield: an error total inside the limit would not say why it misses
+            return Phrases.yieldText(c) + Phrases.limitedBy(c);
+        }
         return Phrases.totalName(c.budget().stage().criterion()) + (c.trimmed() ? " after the trim " : " ")
                 + volts(c.errorV()) + " against " + volts(c.limitV()) + Phrases.limitedBy(c);
     }

@@ -29,6 +29,17 @@ final class Phrases {
         return String.format(Locale.ROOT, "%.1f %%", ratio * 100);
     }
 
+    /**
+     * A simulated yield or the lower end of its interval, rounded DOWN to 0.01 %: "99.99 %", never
+     * "100 %" unless every unit passed (a rounded-up yield would claim more than was found).
+     */
+    static String yieldPercent(double ratio) {
+        if (ratio >= 1.0) {
+            return "100 %";
+        }
+        return String.format(Locale.ROOT, "%.2f %%", Math.floor(ratio * 10000 + 1e-9) / 100);
+    }
+
     /** "worst-case", "RSS" (the yield criterion's error figure is RSS). */
     static String totalName(Criterion c) {
         return c.kind() == Criterion.Kind.WORST_CASE ? "worst-case" : "RSS";
@@ -40,8 +51,8 @@ final class Phrases {
         String s = totalName(crit) + (c.trimmed() ? " after the trim " : " ") + volts(c.errorV()) + " of "
                 + volts(c.limitV()) + (c.margin() >= 0 ? " (margin " + percent(c.margin()) + ")"
                 : " (" + percent(-c.margin()) + " over)");
-        // the budget's yield is for the part as it is; after a trim it does not apply
-        if (crit.kind() == Criterion.Kind.YIELD && c.budget().yield() != null && !c.trimmed()) {
+        // after a trim only the yield after it applies
+        if (crit.kind() == Criterion.Kind.YIELD && yieldOf(c) != null) {
             s = yieldText(c) + ", " + s;
         }
         return s;
@@ -60,11 +71,16 @@ final class Phrases {
         return (c.trimmed() ? ", largest term before the trim " : ", limited by ") + t.label() + " (" + volts(t.outputV()) + ")";
     }
 
-    /** "yield 99.7 % (95 % interval from 99.6 %; target 99.0 %)". */
+    /** The yield the candidate is judged by: after the trim when its figures include one; null when not simulated. */
+    static dev.ampsieve.budget.YieldResult yieldOf(Candidate c) {
+        return c.trimmed() ? (c.budget().trimmed() == null ? null : c.budget().trimmed().yield()) : c.budget().yield();
+    }
+
+    /** "yield 99.71 % (95 % interval from 99.62 %; target 99.0 %)"; "yield after the trim ..." for trimmed figures. */
     static String yieldText(Candidate c) {
-        var y = c.budget().yield();
-        return "yield " + percentFine(y.value()) + " (95 % interval from " + percentFine(y.low()) + "; target "
-                + percentFine(c.budget().stage().criterion().yieldTarget()) + ")";
+        var y = yieldOf(c);
+        return "yield " + (c.trimmed() ? "after the trim " : "") + yieldPercent(y.value()) + " (95 % interval from "
+                + yieldPercent(y.low()) + "; target " + percentFine(c.budget().stage().criterion().yieldTarget()) + ")";
     }
 
     static String number(double x) {
@@ -85,6 +101,18 @@ final class Phrases {
             return x;
         }
         return Double.parseDouble(String.format(Locale.ROOT, "%.2e", x));
+    }
+
+    /** Rounds a positive x to 3 significant digits, never up (beyond round-off of x itself). */
+    static double round3Down(double x) {
+        double r = round3(x);
+        return r > x * (1 + 1e-12) ? r - unit3(x) : r;
+    }
+
+    /** Rounds a positive x to 3 significant digits, never down (beyond round-off of x itself). */
+    static double round3Up(double x) {
+        double r = round3(x);
+        return r < x * (1 - 1e-12) ? r + unit3(x) : r;
     }
 
     /** One unit in the third significant digit of x. */

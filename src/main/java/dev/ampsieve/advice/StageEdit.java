@@ -1,5 +1,6 @@
 package dev.ampsieve.advice;
 
+import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.stage.Limit;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.Trim;
@@ -53,6 +54,14 @@ final class StageEdit {
                 s.bandLow(), s.bandHigh(), s.fullScaleOutput(), s.ratioTolerance() * k, s.ratioTempco() * k,
                 s.serviceLife(), s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(),
                 s.maxPrice(), s.acCoupled(), s.where());
+    }
+
+    static Stage withCriterion(Stage s, Criterion criterion) {
+        return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
+                s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
+                s.bandLow(), s.bandHigh(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
+                s.limit(), criterion, s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
+                s.acCoupled(), s.where());
     }
 
     static Stage withTrim(Stage s, Trim trim) {

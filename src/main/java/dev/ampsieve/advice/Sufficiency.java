@@ -25,8 +25,8 @@ public record Sufficiency(boolean yes, Budget budget, double untrimmedErrorV, do
         String name = Phrases.totalName(crit);
         String figure = name + " " + volts(err) + " against " + volts(b.limitV());
         if (crit.kind() == Criterion.Kind.YIELD && b.yield() != null) {
-            figure = "yield " + Phrases.percentFine(b.yield().value()) + " (95 % interval from "
-                    + Phrases.percentFine(b.yield().low()) + ", target " + Phrases.percentFine(crit.yieldTarget())
+            figure = "yield " + Phrases.yieldPercent(b.yield().value()) + " (95 % interval from "
+                    + Phrases.yieldPercent(b.yield().low()) + ", target " + Phrases.percentFine(crit.yieldTarget())
                     + "), " + figure;
         }
         if (!b.constraintsMet()) {

@@ -40,9 +40,12 @@ public final class BiasTerm implements ErrorTerm {
         return Math.abs(ngRp - s.rf()) * ib + (ngRp + s.rf()) * ios / 2.0;
     }
 
-    /** The term with the 25 °C limits (what a one-point trim at 25 °C removes). */
+    /**
+     * The term with the 25 °C limits (what a one-point trim at 25 °C removes); a current known only
+     * as an over-temperature maximum contributes nothing here, since its 25 °C value is unknown.
+     */
     static double at25(Stage s, PartValues v) {
-        return magnitude(s, v.ib().bound(), v.ios().bound());
+        return magnitude(s, v.ibKnownAt25() ? v.ib().bound() : 0.0, v.iosKnownAt25() ? v.ios().bound() : 0.0);
     }
 
     @Override

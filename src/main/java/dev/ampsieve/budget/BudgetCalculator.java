@@ -64,8 +64,13 @@ public final class BudgetCalculator {
         Trimmed trimmed = trimmed(stage, v, terms);
 
         boolean constraintsOk = constraints.stream().allMatch(ConstraintResult::ok);
+        if (stage.criterion().kind() == Criterion.Kind.YIELD && trimOf(stage).allowed()) {
+            // simulated once here so reports and ranking read it instead of recomputing
+            trimmed = trimmed.withYield(trimmedYield(stage, v, terms));
+        }
+        Trimmed afterTrim = trimmed;
         Verdict verdict = verdict(stage, wc, rss, yield, trimmed, constraintsOk, limit,
-                () -> trimmedYield(stage, v, terms));
+                () -> afterTrim.yield() != null ? afterTrim.yield() : trimmedYield(stage, v, terms));
 
         String limiting = null; // stays null when nothing contributes
         double largest = 0;
@@ -147,7 +152,8 @@ public final class BudgetCalculator {
 
     /**
      * Totals after a calibration at 25 °C. One-point: removes term 1 and the 25 °C part of
-     * term 3, adds the trim resolution. Two-point: also removes the static gain errors (term 6
+     * term 3, keeps term 2 without its over-temperature cap ({@link DriftTerm#afterTrim}), adds
+     * the trim resolution. Two-point: also removes the static gain errors (term 6
      * and the tolerance part of term 8).
      */
     private static Trimmed trimmed(Stage stage, PartValues v, List<TermResult> terms, Trim.Method method) {
@@ -161,6 +167,7 @@ public final class BudgetCalculator {
             double o = find(terms, t.key()).outputV();
             switch (t.key()) {
                 case OffsetTerm.KEY -> o = 0;
+                case DriftTerm.KEY -> o = DriftTerm.afterTrim(stage, v);
                 case BiasTerm.KEY -> o = Math.max(0.0, o - BiasTerm.at25(stage, v));
                 case OpenLoopGainTerm.KEY -> o = two ? 0 : o;
                 case ResistorTerm.KEY -> o = two ? ResistorTerm.tempcoPart(stage) : o;
@@ -228,7 +235,8 @@ public final class BudgetCalculator {
                 w.add(part.architecture().key() + ": chopping frequency not given; ripple cannot be checked against the band");
             } else if (stage.bandHigh() > fc / CHOP_MARGIN) {
                 w.add(part.architecture().key() + ": band edge " + Units.format(stage.bandHigh(), Dimension.FREQUENCY)
-                        + " is not far below the chopping frequency " + Units.format(fc, Dimension.FREQUENCY)
+                        + (stage.bandHigh() >= fc ? " is above the chopping frequency " : " is not far below the chopping frequency ")
+                        + Units.format(fc, Dimension.FREQUENCY)
                         + " (keep fH under a tenth of it): expect ripple and intermodulation in band");
             }
         }

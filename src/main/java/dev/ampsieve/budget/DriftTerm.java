@@ -36,6 +36,25 @@ public final class DriftTerm implements ErrorTerm {
         return Math.abs(s.tMax() - Stage.T_REF) >= Math.abs(s.tMin() - Stage.T_REF) ? s.tMax() : s.tMin();
     }
 
+    /**
+     * The drift left after a calibration at 25 °C, V at the output: the drift from 25 °C,
+     * {@code NG * drift.max * dT} (the one-point trim residual TCVOS x |T - 25|). The cap of
+     * {@link #evaluate} does not bound it (a unit trimmed at 25 °C keeps all of its change, not
+     * what the over-temperature maximum leaves beside the largest offset); what does is
+     * |vos(T) - vos(25)| &lt;= vos.maxOverTemp + vos.max. Where only the over-temperature
+     * maximum gives the drift, the drift it implies is kept.
+     */
+    static double afterTrim(Stage s, PartValues v) {
+        double ng = s.noiseGain();
+        double dT = s.deltaT();
+        double raw = ng * v.driftBound(dT) * dT;
+        double cap = v.vosMaxOverTemp();
+        if (Double.isNaN(cap) || Double.isInfinite(v.drift().bound())) {
+            return raw;
+        }
+        return Math.min(raw, ng * (cap + v.vos().bound()));
+    }
+
     @Override
     public TermResult evaluate(Stage s, PartValues v) {
         double ng = s.noiseGain();

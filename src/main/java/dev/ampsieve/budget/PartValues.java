@@ -86,8 +86,10 @@ public record PartValues(
         } else if (drS.typ() != null) {
             drift = Figure.of(drS.typ(), Basis.TYPICAL_ONLY);
             w.add("vos-drift: no guaranteed maximum; the typical value is used as the limit and as one sigma");
-        } else if (!Double.isNaN(vosOt) && vos.basis() == Basis.GUARANTEED) {
+        } else if (!Double.isNaN(vosOt) && vos.basis() == Basis.GUARANTEED && vosS.max() != null) {
             // the offset over temperature bounds offset plus drift: the drift term takes what is left
+            // (not when it is the only offset figure: nothing is left, and a trim would then seem to
+            // leave no drift at all, so the estimate below stands in)
             drift = Figure.of(Double.POSITIVE_INFINITY, Basis.GUARANTEED);
         } else {
             drift = Figure.of(estimatedDrift(vos.bound()), Basis.ESTIMATED);
@@ -207,6 +209,24 @@ public record PartValues(
     /** Offset current limit at {@code tC}, A. */
     public double iosAt(double tC) {
         return ios.bound() * biasFactor(part.input(), ios.bound(), iosOverTemp, tC);
+    }
+
+    /**
+     * False when the catalog gives IB only as a maximum over temperature: its 25 °C value is then
+     * unknown and a 25 °C trim cannot be credited with removing any of it.
+     */
+    public boolean ibKnownAt25() {
+        Spread s = orNone(part.ib());
+        return s.max() != null || s.typ() != null || s.maxOverTemp() == null;
+    }
+
+    /** The same for IOS (an IOS assumed equal to IB follows IB). */
+    public boolean iosKnownAt25() {
+        if (ios.basis() == Basis.ASSUMED) {
+            return ibKnownAt25();
+        }
+        Spread s = orNone(part.ios());
+        return s.max() != null || s.typ() != null || s.maxOverTemp() == null;
     }
 
     /** Ratio of the bias current limit at {@code tC} to that at 25 °C. */

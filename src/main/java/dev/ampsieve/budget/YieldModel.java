@@ -10,11 +10,13 @@ import org.apache.commons.math3.random.Well19937c;
  * Monte Carlo yield of error-model.md "Yield": per simulated unit, draw the offset, drift,
  * bias and offset current, resistor ratio and aging; evaluate the signed DC output error
  * <pre>
- *   E(T) = NG*(vos + drift*(T-25) + aging) - (NG*R+ - Rf)*IB(T) - (NG*R+ + Rf)*IOS(T)/2 + VFS*S*ratio
+ *   E(T) = NG*(vos + drift*(T-25) + aging) - (NG*R+ - Rf)*IB(T) - (NG*R+ + Rf)*IOS(T)/2 +/- VFS*S*ratio
  * </pre>
  * at Tmin and Tmax, keep the larger magnitude, and add the terms that stay at their limits
  * (4, 5, 6, 7, the tempco part of 8, the 3.3 x rms noise allowance). A unit passes when that
- * sum is at or under the limit.
+ * sum is at or under the limit. The gain error VFS*S*ratio takes the sign of the signal while
+ * the offset keeps its own, so over a +/-VFS swing one end sees |offset| + |gain error|: a
+ * unit's offset never cancels its gain error.
  *
  * <p>Distributions (k = the stage's max-to-sigma ratio): offset and drift N(0, s) truncated
  * at their maxima, s = max(typ, max/k) (max/k without a typical); typical-only values as one
@@ -48,6 +50,9 @@ final class YieldModel {
     private final TruncatedNormal agingD;
     private final double tol;
     private final double resolution;
+    /** What a trim at 25 °C removes of each unit's IB and IOS: 1, or 0 when only an over-temperature maximum is known. */
+    private final double ibTrimmed;
+    private final double iosTrimmed;
 
     /**
      * @param fixed     output volts of the terms held at their limits
@@ -66,6 +71,8 @@ final class YieldModel {
         this.gainCoef = vfs * ResistorTerm.sensitivity(s);
         this.tol = trimmed && twoPoint ? 0.0 : s.ratioTolerance();
         this.resolution = trimmed ? BudgetCalculator.trimOf(s).resolution() : 0.0;
+        this.ibTrimmed = trimmed && v.ibKnownAt25() ? 1.0 : 0.0;
+        this.iosTrimmed = trimmed && v.iosKnownAt25() ? 1.0 : 0.0;
         double k = s.maxToSigma();
         double[] temps = {s.tMin(), s.tMax()};
         for (int j = 0; j < 2; j++) {
@@ -154,12 +161,12 @@ final class YieldModel {
                     off = -clamp;
                 }
                 // after a trim at 25 °C only the change of the bias currents from 25 °C remains
-                double gi = trimmed ? fib[j] - 1.0 : fib[j];
-                double go = trimmed ? fios[j] - 1.0 : fios[j];
-                double e = ng * (off + aging[i]) - a * ib[i] * gi - b * ios[i] * go / 2.0
-                        + gainCoef * ratio[i] + res[i];
+                double gi = fib[j] - ibTrimmed;
+                double go = fios[j] - iosTrimmed;
+                double e = ng * (off + aging[i]) - a * ib[i] * gi - b * ios[i] * go / 2.0 + res[i];
                 worst = Math.max(worst, Math.abs(e));
             }
+            worst += Math.abs(gainCoef * ratio[i]); // at the end of the swing where it adds to the offset
             if (worst <= room) {
                 passes++;
             }
@@ -201,8 +208,9 @@ final class YieldModel {
     }
 
     /**
-     * Range [lo, hi] of E(T) at temperature index j over every value the variables can take
-     * (interval arithmetic on a sum of independent terms: exact for the range of the sum).
+     * Range [lo, hi] of the offset part of E(T) (without the gain error) at temperature index j
+     * over every value the variables can take (interval arithmetic on a sum of independent
+     * terms: exact for the range of the sum).
      */
     private double[] range(int j) {
         double[] d = scaled(span(driftD), dt[j]);
@@ -211,12 +219,11 @@ final class YieldModel {
         double offHi = Math.max(-clamp, Math.min(clamp, v[1] + d[1]));
         double[] off = scaled(new double[] {offLo, offHi}, ng);
         double[] g = scaled(span(agingD), ng);
-        double gi = trimmed ? fib[j] - 1.0 : fib[j];
-        double go = trimmed ? fios[j] - 1.0 : fios[j];
+        double gi = fib[j] - ibTrimmed;
+        double go = fios[j] - iosTrimmed;
         double[] ib = scaled(span(ibD), -a * gi);
         double[] io = scaled(span(iosD), -b * go / 2.0);
-        double gr = Math.abs(gainCoef * tol) + resolution;
-        return new double[] {off[0] + g[0] + ib[0] + io[0] - gr, off[1] + g[1] + ib[1] + io[1] + gr};
+        return new double[] {off[0] + g[0] + ib[0] + io[0] - resolution, off[1] + g[1] + ib[1] + io[1] + resolution};
     }
 
     /** Largest error any unit can have: every unit passes when it is within the limit. */
@@ -226,10 +233,13 @@ final class YieldModel {
             double[] r = range(j);
             m = Math.max(m, Math.max(Math.abs(r[0]), Math.abs(r[1])));
         }
-        return fixed + m;
+        return fixed + m + Math.abs(gainCoef * tol);
     }
 
-    /** Smallest error any unit can have: no unit passes when it exceeds the limit. */
+    /**
+     * Smallest error any unit can have (a lower bound: the largest over both temperatures of the
+     * smallest offset part, the gain error taken as 0): no unit passes when it exceeds the limit.
+     */
     double minError() {
         double m = 0;
         for (int j = 0; j < 2; j++) {

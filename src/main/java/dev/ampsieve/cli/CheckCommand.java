@@ -1,6 +1,7 @@
 package dev.ampsieve.cli;
 
 import dev.ampsieve.catalog.Catalog;
+import dev.ampsieve.report.Caution;
 import dev.ampsieve.yaml.Problem;
 import java.io.PrintWriter;
 import java.util.concurrent.Callable;
@@ -10,7 +11,7 @@ import picocli.CommandLine.ParentCommand;
 import picocli.CommandLine.Spec;
 
 /** {@code ampsieve check}: reads every catalog file and lists every problem, one line each. */
-@Command(name = "check", mixinStandardHelpOptions = true,
+@Command(name = "check", header = "Check every catalog file; list each problem with its place and fix.", mixinStandardHelpOptions = true,
         description = "Read the whole catalog and list every problem as file:line:col: field: problem; fix.")
 public final class CheckCommand implements Callable<Integer> {
 
@@ -31,6 +32,8 @@ public final class CheckCommand implements Callable<Integer> {
         }
         out.printf("%s: %d file(s), %d part(s), %d error(s), %d warning(s)%n",
                 c.root(), c.files(), c.parts().size(), errors, warnings);
+        out.println();
+        out.println(Caution.TEXT);
         return errors > 0 ? ExitCode.FINDINGS : ExitCode.OK;
     }
 }

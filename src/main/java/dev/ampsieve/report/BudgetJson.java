@@ -65,8 +65,8 @@ public final class BudgetJson {
         tr.put("allowed", trim.allowed());
         put(tr, "worstCaseV", b.trimmed().worstCaseV());
         put(tr, "rssV", b.trimmed().rssV());
-        if (b.stage().criterion().kind() == Criterion.Kind.YIELD && trim.allowed()) {
-            YieldResult ty = BudgetCalculator.trimmedYield(b.stage(), b.part());
+        if (b.trimmed().yield() != null) {
+            YieldResult ty = b.trimmed().yield();
             ObjectNode tyn = tr.putObject("yield");
             put(tyn, "value", ty.value());
             put(tyn, "low", ty.low());

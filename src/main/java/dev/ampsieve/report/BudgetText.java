@@ -68,9 +68,9 @@ public final class BudgetText {
                     v(t.worstCaseV()), share(t.worstCaseV(), limit).strip(), v(t.rssV()), share(t.rssV(), limit).strip(),
                     m == trim.method() ? (trim.allowed() ? "  (the stage's trim)" : "  (the stage's method; trim not allowed)") : "");
         }
-        if (s.criterion().kind() == Criterion.Kind.YIELD && trim.allowed()) {
+        if (b.trimmed().yield() != null) {
             line(o, "%-10s %s", "", "yield after the " + methodName(trim.method()) + " trim: "
-                    + yieldLine(BudgetCalculator.trimmedYield(s, b.part()), s));
+                    + yieldLine(b.trimmed().yield(), s));
         }
         o.append('\n');
         line(o, "Constraints");
@@ -94,12 +94,13 @@ public final class BudgetText {
     static String yieldLine(YieldResult y, Stage s) {
         String target = s.criterion().kind() == Criterion.Kind.YIELD ? ", target " + pct(s.criterion().yieldTarget()) : "";
         return switch (y.decided()) {
-            case "all-pass" -> "100 % (decided without sampling: even the largest possible error is within the limit"
-                    + target + ")";
-            case "none-pass" -> "0 % (decided without sampling: even the smallest possible error exceeds the limit"
-                    + target + ")";
+            case "all-pass" -> "100 % (decided without sampling: even the largest error the catalog's limits allow is"
+                    + " within the limit" + target + ")";
+            case "none-pass" -> "0 % (decided without sampling: even the smallest error the catalog's limits allow"
+                    + " exceeds the limit" + target + ")";
             default -> pct(y.value()) + " (95 % interval " + pct(y.low()) + " to " + pct(y.high()) + ", "
-                    + (y.trials() < s.trials() ? y.trials() + " of " + s.trials() + " units, stopped once the interval cleared the target"
+                    + (y.trials() < s.trials() ? y.trials() + " of " + s.trials() + " units, stopped once the interval lay wholly "
+                            + (y.low() >= s.criterion().yieldTarget() ? "above" : "below") + " the target"
                             : y.trials() + " units")
                     + ", seed " + s.seed() + target + ")";
         };

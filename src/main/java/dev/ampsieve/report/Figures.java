@@ -69,13 +69,28 @@ final class Figures {
         return Double.isFinite(ratio) ? String.format(Locale.ROOT, "%.0f %%", 100 * ratio) : NONE;
     }
 
-    /** Yield with the precision a high yield needs: 99.97 %. */
+    /**
+     * Yield with the precision a high yield needs (99.97 %), rounded down: a simulated yield or the
+     * lower end of its interval never reads higher than found ("100 %" only when every unit passed).
+     */
     static String yield(double ratio) {
         if (!Double.isFinite(ratio)) {
             return NONE;
         }
-        return ratio >= 0.99 && ratio < 1 ? String.format(Locale.ROOT, "%.2f %%", 100 * ratio)
-                : String.format(Locale.ROOT, "%.1f %%", 100 * ratio);
+        if (ratio >= 1.0) {
+            return "100 %";
+        }
+        return ratio >= 0.99 ? String.format(Locale.ROOT, "%.2f %%", Math.floor(ratio * 10000 + 1e-9) / 100)
+                : String.format(Locale.ROOT, "%.1f %%", Math.floor(ratio * 1000 + 1e-9) / 10);
+    }
+
+    /** The upper end of a yield interval, rounded up (the printed interval never narrower than found). */
+    static String yieldHigh(double ratio) {
+        if (!Double.isFinite(ratio)) {
+            return NONE;
+        }
+        return ratio >= 0.99 ? String.format(Locale.ROOT, "%.2f %%", Math.ceil(ratio * 10000 - 1e-9) / 100)
+                : String.format(Locale.ROOT, "%.1f %%", Math.ceil(ratio * 1000 - 1e-9) / 10);
     }
 
     /** A voltage number without trailing zeros: 2.7, 36, 1.8. */

@@ -45,10 +45,10 @@ public final class RankReport {
         return (t == null ? key : t.label()) + (c.trimmed() ? " †" : "");
     }
 
-    /** Yield of the part as it is; after a trim the untrimmed yield does not apply. */
+    /** Yield of the part as ranked: after the stage's trim when it needs one. */
     private static String yieldCell(Candidate c) {
-        YieldResult y = c.budget().yield();
-        return c.trimmed() || y == null ? Figures.NONE : Figures.yield(y.value());
+        YieldResult y = c.trimmed() ? c.budget().trimmed().yield() : c.budget().yield();
+        return y == null ? Figures.NONE : Figures.yield(y.value());
     }
 
     private static double worstCase(Candidate c) {
@@ -200,16 +200,9 @@ public final class RankReport {
         JsonSupport.put(n, "currency", c.currency().isEmpty() ? null : c.currency());
         JsonSupport.put(n, "worstCaseV", c.budget().worstCaseV());
         JsonSupport.put(n, "rssV", c.budget().rssV());
-        YieldResult y = c.budget().yield();
-        if (y == null) {
-            n.putNull("yield");
-        } else {
-            ObjectNode yn = n.putObject("yield");
-            JsonSupport.put(yn, "value", y.value());
-            JsonSupport.put(yn, "low", y.low());
-            JsonSupport.put(yn, "high", y.high());
-            yn.put("trials", y.trials());
-            JsonSupport.put(yn, "decided", y.decided());
+        putYield(n, "yield", c.budget().yield());
+        if (c.budget().trimmed() != null && c.budget().trimmed().yield() != null) {
+            putYield(n, "trimmedYield", c.budget().trimmed().yield());
         }
         JsonSupport.put(n, "limitingTerm", c.budget().limitingTerm());
         n.put("trimmed", c.trimmed());
@@ -279,5 +272,18 @@ public final class RankReport {
         ArrayNode lines = n.putArray("lines");
         a.lines().forEach(lines::add);
         return n;
+    }
+
+    private static void putYield(ObjectNode n, String key, YieldResult y) {
+        if (y == null) {
+            n.putNull(key);
+            return;
+        }
+        ObjectNode yn = n.putObject(key);
+        JsonSupport.put(yn, "value", y.value());
+        JsonSupport.put(yn, "low", y.low());
+        JsonSupport.put(yn, "high", y.high());
+        yn.put("trials", y.trials());
+        JsonSupport.put(yn, "decided", y.decided());
     }
 }

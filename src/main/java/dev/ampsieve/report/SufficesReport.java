@@ -23,7 +23,7 @@ public final class SufficesReport {
         YieldResult y = b.yield();
         if (y != null) {
             t.row("yield", Figures.yield(y.value()) + " (95 % interval " + Figures.yield(y.low()) + " to "
-                    + Figures.yield(y.high()) + (y.trials() > 0 ? ", " + y.trials() + " units" : ", " + y.decided()) + ")");
+                    + Figures.yieldHigh(y.high()) + (y.trials() > 0 ? ", " + y.trials() + " units" : ", " + y.decided()) + ")");
         }
         TermResult lim = b.limitingTerm() == null ? null : b.term(b.limitingTerm());
         t.row("largest term", lim == null ? Figures.NONE : lim.label() + ", " + Figures.volts(lim.outputV()) + share(lim.outputV(), b.limitV()));

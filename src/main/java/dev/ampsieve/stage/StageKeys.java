@@ -169,8 +169,8 @@ public final class StageKeys {
             k("trim.cost", Kind.NUMBER, List.of(), "0", "0.60",
                     "cost of trimming one unit (labour, trimmer or DAC, test time), to compare with a better part"),
             k("quantity", Kind.INTEGER, List.of(), String.valueOf(DEFAULT_QUANTITY), "1000",
-                    "build quantity, to pick the catalog price break"),
-            k("max-price", Kind.NUMBER, List.of(), "none", "5.00", "price ceiling per unit; dearer parts are excluded"),
+                    "build quantity, for totals over the build (prices stay the catalog's, at their stated quantity)"),
+            k("max-price", Kind.NUMBER, List.of(), "none", "5.00", "ceiling on the part's catalog price per unit (trim cost not included); dearer parts are excluded"),
             k("ac-coupled", Kind.BOOLEAN, List.of(), "false", "false",
                     "when true, DC errors count only toward output headroom, not toward the error"));
 

@@ -121,4 +121,62 @@ class NoFitAdviceTest {
         assertTrue(r.advice().lines().contains("Nothing fits: every part fails a hard constraint: supply (2)."),
                 r.advice().lines().toString());
     }
+
+    @Test
+    void aLowerYieldTargetIsCheckedByReRunningTheBudget() {
+        // A Monte Carlo stopped early reports the lower end of its interval at the point it stopped;
+        // re-run against a lower target it may run on and end with a lower bound. Here the yield's
+        // lower end is 95.04 % at the 99.9 % target but 94.93 % at targets below 99 %: offering
+        // "95.0 % or lower" would not make the part fit; 94.9 % does.
+        Stage s = stage().criterion(dev.ampsieve.stage.Criterion.yield(0.999)).build();
+        Part p = part("P").vos(null, 20e-6).build();
+        BudgetFunction engine = (st, pt) -> {
+            double target = st.criterion().yieldTarget();
+            double low = target >= 0.99 ? 0.9504 : 0.9493;
+            dev.ampsieve.budget.Budget b = new LinearEngine().compute(st, pt);
+            return new dev.ampsieve.budget.Budget(pt, st, b.noiseGain(), b.terms(), b.worstCaseV(), b.rssV(), 0,
+                    b.limitV(), new dev.ampsieve.budget.YieldResult(0.96, low, 0.97, 20000, "sampled"), b.trimmed(),
+                    low >= target ? dev.ampsieve.budget.Verdict.FITS : dev.ampsieve.budget.Verdict.NO_FIT,
+                    b.limitingTerm(), b.constraints(), List.of());
+        };
+        Ranking r = Ranker.rank(s, List.of(p), engine);
+        Change c = changes(r).get(Change.Kind.LOWER_YIELD_TARGET);
+        assertEquals(0.949, c.values().get("yieldTarget"), 1e-12);
+        assertTrue(c.text().startsWith("a yield target of 94.9 % or lower"), c.text());
+    }
+
+    @Test
+    void theFeedbackResistorOfferedForALowerGainFitsAsPrinted() {
+        // Rg = 200 k / 199 = 1005.025 Ω (a gain-200 stage), limit 1 mV, offset only: NG x 471.587 µV <= 1 mV
+        // -> NG <= 2.1205, reported as 2.12. Rf = 1.12 x 1005.025 = 1125.6 Ω; printed to 3 digits as
+        // 1.13 kΩ it would give NG 1 + 1130/1005.025 = 2.1244, which does not fit. Rounded down, 1.12 kΩ
+        // gives 2.1144 and does.
+        Stage s = stage().rf(200e3).rg(200e3 / 199).build();
+        Part p = part("P").vos(null, 1e-3 / 2.1205).build();
+        LinearEngine engine = new LinearEngine();
+        Change c = changes(Ranker.rank(s, List.of(p), engine)).get(Change.Kind.LOWER_GAIN);
+        assertEquals(2.12, c.values().get("noiseGain"), 1e-9);
+        assertEquals(1120.0, c.values().get("rf"), 1e-9);
+        assertTrue(c.text().endsWith("Rf 1.12 kΩ with Rg 1.01 kΩ"), c.text());
+        Stage built = StageEdit.withRf(s, c.values().get("rf"));
+        assertTrue(engine.compute(built, p).verdict() != dev.ampsieve.budget.Verdict.NO_FIT);
+    }
+
+    @Test
+    void aLooserLimitInTheUsersFormIsPrintedOnTheFittingSide() {
+        // LSB form: 16 bits of 4.096 V, LSB 62.5 µV (reference-checks §9). Offset only, NG 100 x 1.419 µV
+        // = 141.9 µV: the limit needed is 142 µV = 2.272 LSB. Printed as "2.27 LSB" (141.875 µV) it would
+        // not fit; 2.28 LSB does.
+        Stage lsb = stage().limit(new dev.ampsieve.stage.Limit(dev.ampsieve.stage.Limit.Kind.LSB, 1, 16, 4.096)).build();
+        Part p = part("P").vos(null, 1.419e-6).build();
+        Change c = changes(Ranker.rank(lsb, List.of(p), new LinearEngine())).get(Change.Kind.LOOSER_LIMIT);
+        assertEquals(142e-6, c.values().get("limitV"), 1e-12);
+        assertTrue(c.text().startsWith("a limit of 2.28 LSB (142 µV at the output) or looser (now 1 LSB)"), c.text());
+        // input form, NG 3 (Rf 2 k, Rg 1 k): 3 x 473.2 µV = 1.4196 mV needs 1.42 mV = 473.33 µV at the input;
+        // "473 µV" (1.419 mV at the output) would not fit, 474 µV does
+        Stage in = stage().rf(2e3).rg(1e3).limit(new dev.ampsieve.stage.Limit(dev.ampsieve.stage.Limit.Kind.INPUT, 100e-6, 0, 0)).build();
+        Part q = part("Q").vos(null, 473.2e-6).build();
+        Change d = changes(Ranker.rank(in, List.of(q), new LinearEngine())).get(Change.Kind.LOOSER_LIMIT);
+        assertTrue(d.text().startsWith("a limit of 474 µV at the input (1.42 mV at the output)"), d.text());
+    }
 }

@@ -225,4 +225,43 @@ class RankerTest {
         // PREC: 3.00, 0.5 mV; CHEAP: 1.00, 1.9 mV: neither dominates the other
         assertEquals(List.of("CHEAP", "PREC"), r.paretoIds());
     }
+
+    @Test
+    void pricesQuotedForALargerOrderThanTheBuildAreSaidToBeSo() {
+        // the catalog holds one price per part, at its own order quantity (1000 here); a build of 400
+        // cannot be priced from it, and smaller orders usually cost more per unit (common practice)
+        Stage s = stage().trim(true, 10e-6, 0.50).quantity(400).build();
+        Ranking r = rank(s, precAndCheap(s, Verdict.FITS_AFTER_TRIM));
+        assertTrue(r.advice().lines().contains("Prices are the catalog's, each for its stated order quantity (1000 units),"
+                + " not for this build of 400: smaller orders usually cost more per unit."), r.advice().lines().toString());
+        // a build at or above the quoted quantity needs no such remark
+        Stage big = stage().trim(true, 10e-6, 0.50).quantity(1000).build();
+        assertTrue(rank(big, precAndCheap(big, Verdict.FITS_AFTER_TRIM)).advice().lines().stream()
+                .noneMatch(l -> l.startsWith("Prices are the catalog's")));
+    }
+
+    @Test
+    void aChoppingFrequencyInsideTheBandIsSaidToBeInside() {
+        // chopping at 20 kHz with the band reaching 50 kHz: the ripple is in the band, not "near" it
+        Stage s = stage().bandHigh(50e3).build();
+        Part chop = chopper(2.20);
+        Map<Part, Budget> m = new LinkedHashMap<>();
+        m.put(chop, budget(s, chop, 0.5e-3, 0.2e-3, 0.2e-3, Verdict.FITS));
+        ZeroDriftAdvice z = rank(s, m).advice().zeroDrift();
+        assertTrue(z.caveats().stream().anyMatch(c -> c.startsWith("chopping at 20.0 kHz is inside the 50.0 kHz band:")),
+                z.caveats().toString());
+    }
+
+    @Test
+    void theChopperBiasCaveatGivesTheCurrentTheBudgetUsesAtTemperature() {
+        // CMOS input, 300 pA at 25 °C and no over-temperature figure: the budget doubles it every 10 °C
+        // (common practice) to 300 pA x 2^4.5 = 6.79 nA at 70 °C; a caveat quoting only 300 pA beside
+        // the output error that 6.79 nA causes would not add up
+        Stage s = stage().limitV(1.0).build();
+        Part chop = chopper(2.20);
+        Ranking r = Ranker.rank(s, List.of(chop), dev.ampsieve.budget.BudgetCalculator::compute);
+        List<String> caveats = r.advice().zeroDrift().caveats();
+        assertTrue(caveats.stream().anyMatch(c -> c.startsWith("bias current up to 300 pA at 25 °C, 6.79 nA at 70 °C in this"
+                + " budget")), caveats.toString());
+    }
 }

@@ -136,5 +136,10 @@ class ConstraintsTest {
         assertTrue(b.warnings().stream().anyMatch(w -> w.contains("not far below the chopping frequency")));
         s.fH = 500;
         assertFalse(budget(s, p).warnings().stream().anyMatch(w -> w.contains("not far below")));
+        // a band reaching past the clock is not "below" it at all: the ripple lies inside the band
+        s.fH = 20e3;
+        List<String> w = budget(s, p).warnings();
+        assertTrue(w.stream().anyMatch(x -> x.contains("band edge 20.0 kHz is above the chopping frequency 10.0 kHz")), w.toString());
+        assertFalse(w.stream().anyMatch(x -> x.contains("not far below")), w.toString());
     }
 }

@@ -2,6 +2,7 @@ package dev.ampsieve.budget;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.ampsieve.catalog.MinTyp;
@@ -68,6 +69,10 @@ class VerdictTest {
         assertEquals(Verdict.FITS_AFTER_TRIM, verdict(s, p));
         YieldResult t = BudgetCalculator.trimmedYield(s.build(), p.build());
         assertEquals("all-pass", t.decided());
+        // the budget carries the same trimmed yield, so reports need not simulate again
+        Budget b = BudgetCalculator.compute(s.build(), p.build());
+        assertEquals(t, b.trimmed().yield());
+        assertNull(BudgetCalculator.compute(stage(1.0e-3).build(), part().build()).trimmed().yield());
     }
 
     @Test

@@ -126,4 +126,46 @@ class YieldTest {
         YieldResult y = BudgetCalculator.compute(s.build(), p.build()).yield();
         assertEquals("all-pass", y.decided());
     }
+
+    @Test
+    void aGainErrorAndAnOffsetDoNotCancel() {
+        // Non-inverting NG 2 (sensitivity S = (NG-1)/NG = 0.5, reference-checks §8), full scale 1 V,
+        // ratio tolerance 1 %: gain error G ~ U(-5, 5) mV at full scale. Offset max 2.5 mV read as
+        // 3 sigma: X = NG x vos ~ N(0, 1.667 mV) truncated at +/-5 mV. The gain error changes sign
+        // with the signal and the offset does not, so over a +/-1 V output one end sees |X| + |G|.
+        // P(|X| + |G| <= 5 mV) = E[(5 mV - |X|) / 5 mV] = 1 - E|X| / 5 mV, with
+        // E|X| = sigma x 2 (phi(0) - phi(3)) / (Phi(3) - Phi(-3)) for the truncated normal
+        // (commons-math3 NormalDistribution; Johnson, Kotz, Balakrishnan, Continuous Univariate
+        // Distributions vol. 1, ch. 13 [from memory]).
+        StageFixture s = StageFixture.nonInverting(10e3, 10e3).limitV(5e-3);
+        s.fullScale = 1.0;
+        s.tol = 0.01;
+        s.temps(25, 25);
+        PartFixture p = PartFixture.ideal().vos(null, 2.5e-3, null);
+        NormalDistribution z = new NormalDistribution();
+        double sigma = 2 * 2.5e-3 / 3;
+        double meanAbs = sigma * 2 * (z.density(0) - z.density(3)) / z.probability(-3, 3);
+        double expected = 1 - meanAbs / 5e-3;
+        assertEquals(0.73628, expected, 1e-5); // [Calc]
+        YieldResult y = BudgetCalculator.compute(s.build(), p.build()).yield();
+        assertEquals("sampled", y.decided());
+        assertTrue(y.low() <= expected && expected <= y.high(),
+                expected + " not in [" + y.low() + ", " + y.high() + "] (signed sum would give about 0.868)");
+    }
+
+    @Test
+    void theNonePassShortcutCountsTheGainErrorOnlyAsWidening() {
+        // NG 2 (Rf = Rg = 100 k), IB 60 nA held at its maximum (no typical): 60 nA x Rf = 6 mV of
+        // fixed offset (reference-checks §2, "no compensation") against a 5 mV limit. The gain error
+        // (S 0.5 x 1 V x +/-0.4 % = +/-2 mV) adds to the offset at one end of the swing, so no
+        // unit can pass whatever its resistors: decided without sampling
+        StageFixture s = StageFixture.nonInverting(100e3, 100e3).limitV(5e-3);
+        s.fullScale = 1.0;
+        s.tol = 0.004;
+        PartFixture p = PartFixture.ideal();
+        p.ib = new Spread(null, 60e-9, null);
+        YieldResult y = BudgetCalculator.compute(s.build(), p.build()).yield();
+        assertEquals("none-pass", y.decided());
+        assertEquals(0.0, y.value(), 0.0);
+    }
 }

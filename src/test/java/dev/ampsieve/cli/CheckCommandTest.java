@@ -51,7 +51,9 @@ class CheckCommandTest {
         assertEquals(List.of(
                 f + ":1:1: warning: noise.en: not given: the voltage-noise term will be zero;"
                         + " add 'noise: {en: 12 nV/rtHz}' with the datasheet's white-noise density",
-                dir + ": 1 file(s), 1 part(s), 0 error(s), 1 warning(s)"), r.outLines());
+                dir + ": 1 file(s), 1 part(s), 0 error(s), 1 warning(s)",
+                "",
+                dev.ampsieve.report.Caution.TEXT), r.outLines()); // every text output ends with the caution (RULES.md)
         assertEquals("", r.err());
     }
 
@@ -64,7 +66,8 @@ class CheckCommandTest {
         assertEquals(ExitCode.FINDINGS, r.code());
         assertTrue(r.outLines().contains(bad + ":5:6: gbw: '2 mA' is a current but a frequency belongs here;"
                 + " write a frequency such as '1.5 MHz'"), r.out());
-        assertEquals(dir + ": 2 file(s), 1 part(s), 1 error(s), 1 warning(s)", r.outLines().get(r.outLines().size() - 1));
+        assertEquals(dir + ": 2 file(s), 1 part(s), 1 error(s), 1 warning(s)", r.outLines().get(r.outLines().size() - 3));
+        assertEquals(dev.ampsieve.report.Caution.TEXT, r.outLines().get(r.outLines().size() - 1));
     }
 
     @Test

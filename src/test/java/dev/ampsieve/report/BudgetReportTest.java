@@ -82,9 +82,25 @@ class BudgetReportTest {
         s.trim = new dev.ampsieve.stage.Trim(true, dev.ampsieve.stage.Trim.Method.ONE_POINT, 0, 1);
         Budget b = BudgetCalculator.compute(s.build(), PartFixture.ideal().vos(1e-3, null, null).build());
         assertEquals("fits-after-trim", b.verdict().key());
-        assertTrue(BudgetText.render(b, null).contains("yield after the one-point trim: 100 % (decided without sampling"));
+        // decided from the catalog's limits, not from every unit there could be: said so
+        assertTrue(BudgetText.render(b, null).contains("yield after the one-point trim: 100 % (decided without sampling:"
+                + " even the largest error the catalog's limits allow is within the limit"), BudgetText.render(b, null));
         JsonNode ty = new ObjectMapper().readTree(BudgetJson.render(b, null)).get("trimmed").get("yield");
         assertEquals("all-pass", ty.get("decided").asText());
         assertEquals(1.0, ty.get("low").asDouble(), 0.0);
+    }
+
+    @Test
+    void anEarlyStopBelowTheTargetIsSaidAsSuch() {
+        // a typical-only offset of 1 mV (one sigma, untruncated) against a 1 mV limit passes about
+        // 68 % of units (P(|Z| <= 1) = 0.6827, reference-checks §7): far below a 99.9 % target, so the
+        // run stops after the first block with the interval wholly under the target
+        StageFixture s = StageFixture.follower().limitV(1e-3);
+        s.criterion = dev.ampsieve.stage.Criterion.yield(0.999);
+        Budget b = BudgetCalculator.compute(s.build(), PartFixture.ideal().vos(1e-3, null, null).build());
+        assertTrue(b.yield().high() < 0.999);
+        String t = BudgetText.render(b, null);
+        assertTrue(t.contains("stopped once the interval lay wholly below the target"), t);
+        assertFalse(t.contains("cleared the target"));
     }
 }

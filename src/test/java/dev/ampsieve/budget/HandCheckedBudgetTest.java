@@ -1,0 +1,144 @@
+package dev.ampsieve.budget;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import dev.ampsieve.catalog.Catalog;
+import dev.ampsieve.catalog.CatalogLoader;
+import dev.ampsieve.catalog.Part;
+import dev.ampsieve.stage.Stage;
+import dev.ampsieve.stage.StageLoader;
+import java.nio.file.Path;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Three demo budgets worked line by line by hand (a calculator and the textbook formulas, not
+ * the engine's code), one per demo stage and topology. Values are the demo catalog's invented
+ * figures and the demo stage files; each expected number is written out with the formula and
+ * source it comes from. Relative tolerance 1e-6 unless a line says otherwise.
+ */
+class HandCheckedBudgetTest {
+
+    private static Catalog catalog;
+
+    @BeforeAll
+    static void load() throws Exception {
+        catalog = CatalogLoader.load(Path.of("demo-catalog"), false);
+    }
+
+    private static Budget budget(String stage, String part) throws Exception {
+        Stage s = StageLoader.load(Path.of("demo-catalog/stages/" + stage + ".yaml"));
+        Part p = catalog.parts().stream().filter(x -> x.id().equals(part)).findFirst().orElseThrow();
+        return BudgetCalculator.compute(s, p);
+    }
+
+    private static void near(double expected, double actual, String what) {
+        assertEquals(expected, actual, Math.abs(expected) * 1e-6 + 1e-15, what);
+    }
+
+    @Test
+    void thermocoupleFrontEndWithTheAutoZeroPart() throws Exception {
+        // non-inverting, gain 200 with Rf 200 k (Rg = 200 k / 199); Rs 100 Ω, Rp 0; 0..70 °C; limit 40 µV input
+        Budget b = budget("thermocouple", "zd-az-05");
+        near(200, b.noiseGain(), "NG = 1 + Rf/Rg (reference-checks §2)");
+        // limit: input-referred x NG = 40 µV x 200 (error-model.md: input-referred = divided by NG)
+        near(8.0e-3, b.limitV(), "limit");
+        // 1. NG x vos.max = 200 x 10 µV (Franco ch. 5 [from memory]; reference-checks §2 "VOS to output")
+        near(2.0e-3, b.term("offset").outputV(), "offset");
+        // 2. NG x drift.max x dT, dT = max(|0-25|, |70-25|) = 45 °C: 200 x 0.05 µV/°C x 45
+        near(450e-6, b.term("drift").outputV(), "drift");
+        // 3. CMOS input, no over-temperature figure: IB and IOS double every 10 °C above 25 °C
+        //    (common practice): x 2^4.5 = 22.6274 at 70 °C -> IB 5.656854 nA, IOS 11.313708 nA.
+        //    |NG R+ - Rf| IB + (NG R+ + Rf) IOS/2 = |20 k - 200 k| x 5.656854 nA + 220 k x 5.656854 nA
+        //    = 1.018234 mV + 1.244508 mV (Eggleston §6.4 eqs. 6.16-6.18)
+        near(2.2627417e-3, b.term("bias").outputV(), "bias");
+        near(70.0, b.term("bias").worstAtC(), "bias worst at the hot end");
+        // 4. NG x dVcm x 10^(-CMRR/20) = 200 x 50 mV x 3.162278 µV/V (110 dB: reference-checks §4)
+        near(31.62278e-6, b.term("cmrr").outputV(), "cmrr");
+        // 5. NG x dVs x 10^(-PSRR/20) = 200 x 0.25 V x 3.162278 µV/V
+        near(158.1139e-6, b.term("psrr").outputV(), "psrr");
+        // 6. VFS x NG/(AOL + NG) = 2.5 V x 200 / (10^(115/20) + 200) = 2.5 x 200 / 562541.3 (Sedra & Smith ch. 2 [from memory])
+        near(888.8236e-6, b.term("open-loop-gain").outputV(), "aol");
+        // 7. VFS (1 - 1/sqrt(1 + (fH NG/GBW)^2)), x = 5 x 200 / 1.5 MHz = 6.6667e-4: 2.5 x 2.22222e-7
+        assertEquals(5.555554e-7, b.term("bandwidth").outputV(), 1e-12, "bandwidth");
+        // 8. VFS x (NG-1)/NG x (tol + tc x dT) = 2.5 x 0.995 x (0.001 + 10 ppm/°C x 45) (reference-checks §8 sensitivity)
+        near(3.606875e-3, b.term("resistors").outputV(), "resistors");
+        // 9. no long-term drift in the catalog: not counted
+        assertEquals(0.0, b.term("aging").outputV(), 0.0);
+        // 10. fN = (π/2) min(5 Hz, 1.5 MHz/200) = 7.853982 Hz; band 0.05 Hz..fN = 7.803982 Hz.
+        //     input density^2 = en^2 + 4kT (R+ + R-) + in^2 (R+^2 + R-^2), R+ 100 Ω, R- = Rf/NG = 1 kΩ:
+        //     2.025e-15 + 1.646561e-20 x 1100 + 1e-26 x 1.01e6 = 2.043122e-15 V^2/Hz (4kT at 25 °C: reference-checks §1)
+        //     rms = 200 x sqrt(2.043122e-15 x 7.803982) = 25.25430 µV; allowance 3.3 x rms (Franco ch. 7 [from memory])
+        near(25.25430e-6, b.noiseRmsV(), "noise rms");
+        near(83.33918e-6, b.term("noise").outputV(), "noise allowance");
+        // totals: worst-case sum; RSS (GUM eq. 10 for the root-sum-square)
+        near(9.482072e-3, b.worstCaseV(), "worst-case");
+        near(4.811964e-3, b.rssV(), "rss");
+        // two-point calibration at 25 °C (the stage's): removes offset, the 25 °C bias
+        // (180 k x 250 pA + 220 k x 250 pA = 100 µV), the open-loop gain and the resistor tolerance;
+        // keeps the rest and adds the 1 mV resolution:
+        // 0.45 + 2.162742 + 0.031623 + 0.158114 + 0.000001 + 1.119375 + 0.083339 + 1.0 mV
+        near(5.005748e-3, b.trimmed().worstCaseV(), "after the two-point trim");
+        assertEquals(Verdict.FITS_AFTER_TRIM, b.verdict());
+    }
+
+    @Test
+    void bridgeAmplifierWithTheTopGradeBipolarPart() throws Exception {
+        // non-inverting, gain 100 with Rf 100 k; Rs 350 Ω + Rp 649 Ω = R+ 999 Ω; -40..85 °C (dT 65 °C)
+        Budget b = budget("bridge-amp", "prec-bip-01");
+        near(100, b.noiseGain(), "NG");
+        near(2.5e-3, b.term("offset").outputV(), "offset: 100 x 25 µV");
+        // 100 x 0.3 µV/°C x 65 °C = 1.95 mV, under the cap 100 x (45 - 25) µV = 2.0 mV (error-model.md term 2)
+        near(1.95e-3, b.term("drift").outputV(), "drift");
+        // over-temperature maxima given: IB 4 nA, IOS 3 nA at the worst temperature.
+        // |NG R+ - Rf| = |99 900 - 100 000| = 100 Ω; NG R+ + Rf = 199 900 Ω:
+        // 100 x 4 nA + 199 900 x 1.5 nA = 0.4 µV + 299.85 µV (nearly the IOS x Rf of a balanced input: Eggleston §6.4)
+        near(300.25e-6, b.term("bias").outputV(), "bias");
+        // 100 x 0.15 V x 10^(-126/20) = 15 x 0.5011872 µV/V
+        near(7.517809e-6, b.term("cmrr").outputV(), "cmrr");
+        // 100 x 0.25 V x 10^(-120/20) = 25 x 1 µV/V (reference-checks §4: 120 dB = 1 µV/V)
+        near(25.0e-6, b.term("psrr").outputV(), "psrr");
+        // 1 V x 100 / (10^(126/20) + 100) = 100 / 1 995 362.3
+        near(50.11621e-6, b.term("open-loop-gain").outputV(), "aol");
+        // 1 V x (1 - 1/sqrt(1 + (10 x 100 / 1 MHz)^2)) = 1 - 1/sqrt(1 + 1e-6)
+        assertEquals(4.999996e-7, b.term("bandwidth").outputV(), 1e-12, "bandwidth");
+        // 1 V x 0.99 x (0.1 % + 10 ppm/°C x 65 °C) = 0.99 x 0.00165
+        near(1.6335e-3, b.term("resistors").outputV(), "resistors");
+        // 100 x 0.3 µV x sqrt(87 660 h / 1000 h) (10 Julian years; √t model: reference-checks §6) = 30 µV x 9.362692
+        near(280.8808e-6, b.term("aging").outputV(), "aging");
+        // fN = (π/2) x 10 Hz = 15.70796 Hz; from 0.1 Hz: white 15.60796 Hz, ln(157.0796) = 5.056753.
+        // en^2 (15.60796 + 3 x 5.056753) + in^2 (999^2 + 1000^2)(15.60796 + 100 x 5.056753) + 4kT x 1999 x 15.60796
+        // = 64e-18 x 30.77822 + 2.25e-26 x 1.998001e6 x 521.2833 + 1.646561e-20 x 1999 x 15.60796
+        // = 1.969806e-15 + 2.343430e-17 + 5.137326e-16 = 2.506973e-15 -> x 100 -> 5.006968 µV rms (Franco ch. 7 [from memory])
+        near(5.006968e-6, b.noiseRmsV(), "noise rms");
+        near(6.764288e-3, b.worstCaseV(), "worst-case");
+        near(3.590729e-3, b.rssV(), "rss");
+    }
+
+    @Test
+    void adcDriverFollowerWithTheLowNoiseChopper() throws Exception {
+        // follower (NG 1, Rf 0), Rs 100 Ω; 0..50 °C (dT 25 °C); limit 2 LSB of 4.096 V / 2^16 (reference-checks §9)
+        Budget b = budget("adc-driver", "zd-chop-03");
+        near(1, b.noiseGain(), "NG");
+        near(125e-6, b.limitV(), "2 x 62.5 µV");
+        near(10e-6, b.term("offset").outputV(), "offset");
+        // 0.05 µV/°C x 25 °C = 1.25 µV, under the cap 12 - 10 µV
+        near(1.25e-6, b.term("drift").outputV(), "drift");
+        // over temperature IB 2.5 nA, IOS 4 nA: |R+ - Rf| IB + (R+ + Rf) IOS/2 = 100 x 2.5 nA + 100 x 2 nA
+        near(450e-9, b.term("bias").outputV(), "bias");
+        // 4 V x 10^(-115/20) = 4 x 1.778279 µV/V; supply 0.25 V x 1.778279 µV/V
+        near(7.113118e-6, b.term("cmrr").outputV(), "cmrr");
+        near(444.5699e-9, b.term("psrr").outputV(), "psrr");
+        // 4 V x 1/(10^6 + 1)
+        near(3.999996e-6, b.term("open-loop-gain").outputV(), "aol");
+        // 4 V x (1 - 1/sqrt(1 + (20 kHz / 5 MHz)^2)) = 4 x 7.999904e-6
+        near(31.99962e-6, b.term("bandwidth").outputV(), "bandwidth");
+        assertEquals(0.0, b.term("resistors").outputV(), 0.0, "a follower has no gain resistors");
+        // fN = (π/2) x 20 kHz = 31 415.93 Hz: (25e-18 + 1.646561e-20 x 100 + 0.16e-24 x 1e4) x 31 415.83
+        // = 2.664816e-17 x 31 415.83 -> 914.9721 nV rms
+        near(914.9721e-9, b.noiseRmsV(), "noise rms");
+        near(58.27671e-6, b.worstCaseV(), "worst-case");
+        near(34.66484e-6, b.rssV(), "rss");
+        assertEquals(Verdict.FITS, b.verdict(), "RSS criterion: 34.7 µV of 125 µV");
+    }
+}
