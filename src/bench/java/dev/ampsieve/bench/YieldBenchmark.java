@@ -31,7 +31,7 @@ public class YieldBenchmark {
     @Param("prec-bip-03")
     public String fullPart;
 
-    /** A part that clearly meets 99.9 %: the interval clears the target after a few thousand trials. */
+    /** A part that clearly meets 99.9 %: the interim interval clears the target before the last trial. */
     @Param("prec-bip-01")
     public String earlyPart;
 
