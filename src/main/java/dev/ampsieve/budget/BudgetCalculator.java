@@ -117,8 +117,11 @@ public final class BudgetCalculator {
         return stage.criterion().kind() == Criterion.Kind.YIELD ? stage.criterion().yieldTarget() : Double.NaN;
     }
 
-    /** Terms 4, 5, 6, 7, the tempco part of 8 and the noise allowance (a two-point trim drops 6). */
-    private static double fixedInYield(Stage stage, List<TermResult> terms, boolean trimmed, boolean twoPoint) {
+    /**
+     * Terms 4, 5, 6, 7, the tempco part of 8 and the noise allowance (a two-point trim drops 6).
+     * Package-private so the benchmark harness can run the Monte Carlo on its own.
+     */
+    static double fixedInYield(Stage stage, List<TermResult> terms, boolean trimmed, boolean twoPoint) {
         double f = 0;
         for (TermResult r : terms) {
             if (FIXED_IN_YIELD.contains(r.key())) {
