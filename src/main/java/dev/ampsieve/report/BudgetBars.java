@@ -51,6 +51,6 @@ public final class BudgetBars {
                 .append("; input-referred limit ").append(Units.format(b.limitV() / b.noiseGain(), Dimension.VOLTAGE))
                 .append('\n');
         o.append('\n').append(Caution.TEXT).append('\n');
-        return style.glyphs().text(o.toString());
+        return style.glyphs().text(Wrap.prose(o.toString(), style.width()));
     }
 }

@@ -49,6 +49,6 @@ public final class RankScatter {
             o.append('\n');
         }
         o.append('\n').append(Caution.TEXT).append('\n');
-        return style.glyphs().text(o.toString());
+        return style.glyphs().text(Wrap.prose(o.toString(), style.width()));
     }
 }

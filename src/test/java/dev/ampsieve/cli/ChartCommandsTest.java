@@ -76,7 +76,7 @@ class ChartCommandsTest {
         assertTrue(r.outLines().stream().anyMatch(l -> l.startsWith("root-sum-square") && l.contains(volts(b.get("rssV")))), r.out());
         assertTrue(r.out().contains("limit " + volts(b.get("limitV"))), r.out());
         assertTrue(r.out().contains("Verdict " + b.get("verdict").asText()), r.out());
-        assertTrue(r.out().contains(Caution.TEXT), r.out());
+        assertTrue(dev.ampsieve.testing.Flat.of(r.out()).contains(Caution.TEXT), r.out());
         r.outLines().stream().filter(l -> l.contains("|")).forEach(l -> assertTrue(l.length() <= 80, l));
     }
 
@@ -100,7 +100,7 @@ class ChartCommandsTest {
         assertTrue(r.outLines().stream().anyMatch(l -> l.endsWith(" limit") && l.startsWith(volts(rank.get("limitV")).strip())
 ), r.out());
         assertEquals(5, r.outLines().stream().filter(l -> l.matches("  [a-e]  .*")).count(), r.out());
-        assertTrue(r.out().contains(Caution.TEXT), r.out());
+        assertTrue(dev.ampsieve.testing.Flat.of(r.out()).contains(Caution.TEXT), r.out());
     }
 
     @Test

@@ -44,9 +44,9 @@ class ShellSessionTest {
         // rank's header names the stage it was given: the shell's own, not a file of the user's
         assertTrue(printed.contains("Stage (current stage): non-inverting, noise gain 100, -40 °C to 85 °C"), printed);
         assertTrue(printed.contains("Candidates ("), printed);
-        assertTrue(printed.contains("zd-chop-01 in (current stage): error at the output, term by term"), printed);
+        assertTrue(dev.ampsieve.testing.Flat.of(printed).contains("zd-chop-01 in (current stage): error at the output, term by term"), printed);
         assertTrue(printed.contains("limit 1.00 mV ▲") || printed.contains("▲ limit 1.00 mV"), printed);
-        assertTrue(printed.contains("(current stage): worst-case error at the output (log scale) against effective unit cost"), printed);
+        assertTrue(dev.ampsieve.testing.Flat.of(printed).contains("(current stage): worst-case error at the output (log scale) against effective unit cost"), printed);
         assertFalse(printed.contains(ShellState.STAGE_FILE_NAME), printed); // the temporary file stays out of sight
         assertFalse(printed.contains("ampsieve-shell-"), printed);
     }
