@@ -38,7 +38,9 @@ public final class RankScatter {
             for (String line : ScatterChart.render(points, r.stage().limitVolts(), currency, height, style)) {
                 o.append(line).append('\n');
             }
-            o.append('\n').append("Under the limit line the parts fit; the leftmost of them is the cheapest.");
+            o.append('\n').append(r.stage().criterion().kind() == Criterion.Kind.YIELD
+                    ? "The verdict column decides: judged by yield, a part under the RSS line can still miss its target."
+                    : "Under the limit line the parts fit; the leftmost of them is the cheapest.");
             int more = r.candidates().size() - points.size();
             if (more > 0) {
                 o.append(" ").append(more).append(" more candidate(s) not shown (--top).");
