@@ -4,10 +4,9 @@ import dev.ampsieve.budget.BudgetCalculator;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.report.BudgetBars;
 import dev.ampsieve.stage.Stage;
-import dev.ampsieve.stage.StageLoader;
-import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Option;
@@ -30,14 +29,14 @@ public final class BarsCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "PART", description = "Part id from the catalog.")
     String partId;
 
-    @Option(names = "--stage", required = true, paramLabel = "FILE", description = "Stage file (YAML).")
-    Path stageFile;
+    @Mixin
+    StageOption stageOption;
 
     @Override
     public Integer call() throws Exception {
         Part part = BudgetCommand.find(root.catalog(), partId);
-        Stage stage = StageLoader.load(stageFile);
-        String name = String.valueOf(stageFile.getFileName());
+        Stage stage = stageOption.load();
+        String name = stageOption.name();
         spec.commandLine().getOut().print(BudgetBars.render(BudgetCalculator.compute(stage, part), name, root.outputStyle()));
         return ExitCode.OK;
     }

@@ -7,12 +7,11 @@ import dev.ampsieve.catalog.Part;
 import dev.ampsieve.report.BudgetJson;
 import dev.ampsieve.report.BudgetText;
 import dev.ampsieve.stage.Stage;
-import dev.ampsieve.stage.StageLoader;
 import dev.ampsieve.yaml.Fields;
-import java.nio.file.Path;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -34,8 +33,8 @@ public final class BudgetCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "PART", description = "Part id from the catalog.")
     String partId;
 
-    @Option(names = "--stage", required = true, paramLabel = "FILE", description = "Stage file (YAML).")
-    Path stageFile;
+    @Mixin
+    StageOption stageOption;
 
     @Option(names = "--json", description = "Print JSON (keys described in README) instead of the table.")
     boolean json;
@@ -44,9 +43,9 @@ public final class BudgetCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         Catalog catalog = root.catalog();
         Part part = find(catalog, partId);
-        Stage stage = StageLoader.load(stageFile);
+        Stage stage = stageOption.load();
         Budget b = BudgetCalculator.compute(stage, part);
-        String label = stageFile.toString();
+        String label = stageOption.label();
         spec.commandLine().getOut().print(json ? BudgetJson.render(b, label) : BudgetText.render(b, label, root.textWidth()));
         return ExitCode.OK;
     }

@@ -6,10 +6,9 @@ import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.report.CompareReport;
 import dev.ampsieve.stage.Stage;
-import dev.ampsieve.stage.StageLoader;
-import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -34,8 +33,8 @@ public final class CompareCommand implements Callable<Integer> {
     @Parameters(index = "1", paramLabel = "B", description = "Second part id.")
     String b;
 
-    @Option(names = "--stage", required = true, paramLabel = "FILE", description = "Stage file (YAML).")
-    Path stageFile;
+    @Mixin
+    StageOption stageOption;
 
     @Option(names = "--json", description = "Print JSON instead of the table.")
     boolean json;
@@ -45,10 +44,10 @@ public final class CompareCommand implements Callable<Integer> {
         Catalog catalog = root.catalog();
         Part pa = BudgetCommand.find(catalog, a);
         Part pb = BudgetCommand.find(catalog, b);
-        Stage stage = StageLoader.load(stageFile);
+        Stage stage = stageOption.load();
         Comparison c = Comparison.of(BudgetCalculator.compute(stage, pa), BudgetCalculator.compute(stage, pb));
-        String label = stageFile.toString();
-        String name = String.valueOf(stageFile.getFileName()); // text headers stay within 100 columns
+        String label = stageOption.label();
+        String name = stageOption.name(); // text headers stay within 100 columns
         spec.commandLine().getOut().print(json ? CompareReport.json(c, label) : CompareReport.text(c, name, root.textWidth()));
         return ExitCode.OK;
     }

@@ -7,12 +7,11 @@ import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.report.RankReport;
 import dev.ampsieve.stage.Stage;
-import dev.ampsieve.stage.StageLoader;
-import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ParentCommand;
@@ -33,8 +32,8 @@ public final class RankCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Option(names = "--stage", required = true, paramLabel = "FILE", description = "Stage file (YAML).")
-    Path stageFile;
+    @Mixin
+    StageOption stageOption;
 
     @Option(names = "--query", paramLabel = "Q", description = "Only parts matching this query.")
     String query;
@@ -61,11 +60,11 @@ public final class RankCommand implements Callable<Integer> {
         }
         Catalog catalog = root.catalog();
         Candidates.noteProblems(catalog, spec.commandLine().getErr());
-        Stage stage = StageLoader.load(stageFile);
+        Stage stage = stageOption.load();
         List<Part> parts = query == null ? catalog.parts() : Candidates.matching(catalog, query);
         Ranking r = Ranker.rank(stage, parts, BudgetCalculator::compute);
-        String label = stageFile.toString();
-        String name = String.valueOf(stageFile.getFileName()); // text headers stay within 100 columns
+        String label = stageOption.label();
+        String name = stageOption.name(); // text headers stay within 100 columns
         String out = format.json ? RankReport.json(r, label, query, top)
                 : format.csv ? RankReport.csv(r, top) : RankReport.text(r, name, query, top, root.textWidth());
         spec.commandLine().getOut().print(out);

@@ -7,11 +7,10 @@ import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.report.RankScatter;
 import dev.ampsieve.stage.Stage;
-import dev.ampsieve.stage.StageLoader;
-import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ParentCommand;
@@ -31,8 +30,8 @@ public final class ScatterCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Option(names = "--stage", required = true, paramLabel = "FILE", description = "Stage file (YAML).")
-    Path stageFile;
+    @Mixin
+    StageOption stageOption;
 
     @Option(names = "--query", paramLabel = "Q", description = "Only parts matching this query (as for 'find').")
     String query;
@@ -51,10 +50,10 @@ public final class ScatterCommand implements Callable<Integer> {
         }
         Catalog catalog = root.catalog();
         Candidates.noteProblems(catalog, spec.commandLine().getErr());
-        Stage stage = StageLoader.load(stageFile);
+        Stage stage = stageOption.load();
         List<Part> parts = query == null ? catalog.parts() : Candidates.matching(catalog, query);
         Ranking r = Ranker.rank(stage, parts, BudgetCalculator::compute);
-        String name = String.valueOf(stageFile.getFileName());
+        String name = stageOption.name();
         spec.commandLine().getOut().print(RankScatter.render(r, name, top, height, root.outputStyle()));
         return ExitCode.OK;
     }

@@ -5,10 +5,9 @@ import dev.ampsieve.budget.BudgetCalculator;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.report.SufficesReport;
 import dev.ampsieve.stage.Stage;
-import dev.ampsieve.stage.StageLoader;
-import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -31,8 +30,8 @@ public final class SufficesCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "PART", description = "Part id from the catalog.")
     String partId;
 
-    @Option(names = "--stage", required = true, paramLabel = "FILE", description = "Stage file (YAML).")
-    Path stageFile;
+    @Mixin
+    StageOption stageOption;
 
     @Option(names = "--json", description = "Print JSON instead of text.")
     boolean json;
@@ -40,10 +39,10 @@ public final class SufficesCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         Part part = BudgetCommand.find(root.catalog(), partId);
-        Stage stage = StageLoader.load(stageFile);
+        Stage stage = stageOption.load();
         Sufficiency s = Sufficiency.of(BudgetCalculator.compute(stage, part));
-        String label = stageFile.toString();
-        String name = String.valueOf(stageFile.getFileName()); // text headers stay within 100 columns
+        String label = stageOption.label();
+        String name = stageOption.name(); // text headers stay within 100 columns
         spec.commandLine().getOut().print(json ? SufficesReport.json(s, label) : SufficesReport.text(s, name, root.textWidth()));
         return s.yes() ? ExitCode.OK : ExitCode.FINDINGS;
     }
