@@ -20,8 +20,7 @@ import picocli.CommandLine.Spec;
 
 /** {@code ampsieve budget PART --stage FILE [--json]}: the full error budget of one part in one stage. */
 @Command(name = "budget", header = "Full error budget of one part in one stage.", mixinStandardHelpOptions = true,
-        description = {"Full output error budget of one catalog part in one stage: every term output- and",
-            "input-referred, worst-case and RSS totals, Monte Carlo yield, trimmed totals, constraints, verdict."})
+        description = "Full output error budget of one catalog part in one stage: every term output- and input-referred, worst-case and RSS totals, Monte Carlo yield, trimmed totals, constraints, verdict.")
 public final class BudgetCommand implements Callable<Integer> {
 
     @ParentCommand

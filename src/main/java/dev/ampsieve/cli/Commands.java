@@ -23,6 +23,9 @@ public final class Commands {
         cl.setOut(out);
         cl.setErr(err);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
+        // the query grammar in find's help is laid out for about 110 columns; a narrower terminal wins
+        cl.setUsageHelpWidth(110);
+        cl.setUsageHelpAutoWidth(true);
         cl.setExecutionExceptionHandler((ex, line, parseResult) -> handle(ex, line, root.verbose()));
         return cl;
     }

@@ -15,8 +15,7 @@ import picocli.CommandLine.Spec;
 
 /** {@code ampsieve find QUERY...}: catalog parts matching words and constraints. */
 @Command(name = "find", header = "List catalog parts matching words and constraints.", mixinStandardHelpOptions = true,
-        description = {"List the catalog parts that match a query of words and constraints, most relevant",
-            "first, then cheapest, with their key figures. Exit 0 when something matches, 1 when nothing does."},
+        description = "List the catalog parts that match a query of words and constraints, most relevant first, then cheapest, with their key figures. Exit 0 when something matches, 1 when nothing does.",
         footer = {"", QueryLanguage.HELP})
 public final class FindCommand implements Callable<Integer> {
 

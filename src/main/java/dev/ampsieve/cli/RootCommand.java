@@ -25,9 +25,7 @@ import picocli.CommandLine.Spec;
 @Command(name = "ampsieve",
         mixinStandardHelpOptions = true,
         versionProvider = RootCommand.Version.class,
-        description = {
-            "Picks operational amplifiers for a stage by its full output error budget,",
-            "computed from your own YAML catalog of datasheet values."},
+        description = "Picks operational amplifiers for a stage by its full output error budget, computed from your own YAML catalog of datasheet values.",
         subcommands = {CheckCommand.class, BudgetCommand.class, FindCommand.class, RankCommand.class,
             CompareCommand.class, SufficesCommand.class, BarsCommand.class, ScatterCommand.class},
         footer = {"", "Catalog folder: --catalog DIR, else $AMPSIEVE_CATALOG, else the demo catalog.",

@@ -116,7 +116,7 @@ final class ShellCommands {
         }
     }
 
-    @Command(name = "set", description = {"Change one stage value, checked with its unit.", "Examples: set limit 10 uV input; set temperature -40..85 C; set rf 100k."})
+    @Command(name = "set", description = "Change one stage value, checked with its unit. Examples: set limit 10 uV input; set temperature -40..85 C; set rf 100k.")
     static final class SetKey extends Base {
         @Parameters(index = "0", paramLabel = "KEY", description = "A stage key (Tab lists them), or 'temperature' for both ends.")
         String key;
