@@ -58,7 +58,7 @@ public final class Wrap {
         StringBuilder out = new StringBuilder();
         StringBuilder cur = new StringBuilder(head);
         boolean first = true;
-        for (String word : body.split(" ")) {
+        for (String word : words(body)) {
             int curLen = cur.codePointCount(0, cur.length());
             boolean empty = first ? curLen == lead : curLen == hang;
             if (!empty && curLen + 1 + word.codePointCount(0, word.length()) > width) {
@@ -74,6 +74,24 @@ public final class Wrap {
         }
         out.append(stripEnd(cur));
         return out.toString();
+    }
+
+    /** A unit symbol after a number, with any closing punctuation: "%)", "mV;", "µV/°C". */
+    private static final java.util.regex.Pattern UNIT =
+            java.util.regex.Pattern.compile("(%|°C|dB|ppm\\S*|[pnuµmkMG]?(V|A|Hz|Ω|ohm|s)(/\\S*)?)[;,.)]*");
+
+    /** Words at spaces, a unit kept on the number before it so "(71.5 %)" never breaks. */
+    private static java.util.List<String> words(String body) {
+        java.util.List<String> out = new java.util.ArrayList<>();
+        for (String w : body.split(" ")) {
+            int last = out.size() - 1;
+            if (last >= 0 && out.get(last).matches(".*\\d") && UNIT.matcher(w).matches()) {
+                out.set(last, out.get(last) + " " + w);
+            } else {
+                out.add(w);
+            }
+        }
+        return out;
     }
 
     private static String stripEnd(StringBuilder sb) {

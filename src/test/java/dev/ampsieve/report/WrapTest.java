@@ -34,4 +34,15 @@ class WrapTest {
         assertEquals("see\n/a/very/long/path/to/a/stage.yaml\nnow",
                 Wrap.prose("see /a/very/long/path/to/a/stage.yaml now", 20));
     }
+
+    @Test
+    void a_unit_stays_on_its_number() {
+        // cut at 46 columns the line would end in "(2182.4" with "%)" alone on the next
+        String in = "           two-point: worst-case 140 mV, RSS 131 mV (2182.4 %)";
+        assertEquals("           two-point: worst-case 140 mV, RSS\n"
+                + "           131 mV (2182.4 %)", Wrap.prose(in, 46));
+        assertEquals("drift up to\n3.84 µV/°C here", Wrap.prose("drift up to 3.84 µV/°C here", 20));
+        // words after a number that are not units still fold as before
+        assertEquals("spread over 1000000\nunits here", Wrap.prose("spread over 1000000 units here", 20));
+    }
 }
