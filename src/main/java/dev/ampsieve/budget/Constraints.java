@@ -115,6 +115,15 @@ public final class Constraints {
         Range offer = new Range(h.low(), vLow - h.high());
         Range needed = new Range(need.min() - widen, need.max() + widen);
         ConstraintResult r = range(name, needed.min(), needed.max(), offer, Dimension.VOLTAGE, what, "reachable");
+        if (offer.min() > offer.max()) {
+            // "reachable 3.00 V to 1.75 V" reads as a typo: say why there is no range at all
+            String v = Units.format(vLow, Dimension.VOLTAGE);
+            r = new ConstraintResult(r.name(), false, r.detail().replace(
+                    "part reachable " + Units.format(offer.min(), Dimension.VOLTAGE) + " to "
+                            + Units.format(offer.max(), Dimension.VOLTAGE),
+                    "part reachable nowhere on a " + v + " supply (headroom " + Units.format(h.low(), Dimension.VOLTAGE)
+                            + " from the low rail plus " + Units.format(h.high(), Dimension.VOLTAGE) + " from the high rail)"));
+        }
         if (assumed) {
             r = new ConstraintResult(r.name(), r.ok(), r.detail() + " (headroom assumed, not in the catalog)");
         }

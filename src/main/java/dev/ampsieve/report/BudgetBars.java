@@ -47,7 +47,7 @@ public final class BudgetBars {
             o.append("Not counted (AC-coupled, headroom only): ").append(String.join(", ", skipped)).append('\n');
         }
         o.append("Verdict ").append(b.verdict().key())
-                .append(b.limitingTerm() == null ? "" : "; largest term: " + b.limitingTerm())
+                .append(b.limitingTerm() == null ? "" : "; largest term: " + BudgetText.termLabel(b, b.limitingTerm()))
                 .append("; input-referred limit ").append(Units.format(b.limitV() / b.noiseGain(), Dimension.VOLTAGE))
                 .append('\n');
         o.append('\n').append(Caution.TEXT).append('\n');

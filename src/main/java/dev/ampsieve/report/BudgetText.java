@@ -12,6 +12,7 @@ import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.Trim;
 import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.Units;
+import java.util.List;
 import java.util.Locale;
 
 /** The budget of one part in one stage as a plain-text table for a terminal. */
@@ -28,10 +29,10 @@ public final class BudgetText {
 
     /** @param width columns prose lines are folded at (the terminal's, in the shell) */
     public static String render(Budget b, String stageLabel, int width) {
-        return Wrap.prose(table(b, stageLabel), width);
+        return Wrap.prose(table(b, stageLabel, width), width);
     }
 
-    private static String table(Budget b, String stageLabel) {
+    private static String table(Budget b, String stageLabel, int width) {
         Stage s = b.stage();
         StringBuilder o = new StringBuilder();
         double limit = b.limitV();
@@ -75,7 +76,8 @@ public final class BudgetText {
             line(o, "%-10s %s at 25 °C%s: worst-case %s (%s), RSS %s (%s)%s", m == Trim.Method.ONE_POINT ? "Trimmed" : "",
                     methodName(m), trim.resolution() > 0 ? ", resolution " + v(trim.resolution()) : "",
                     v(t.worstCaseV()), share(t.worstCaseV(), limit).strip(), v(t.rssV()), share(t.rssV(), limit).strip(),
-                    m == trim.method() ? (trim.allowed() ? "  (the stage's trim)" : "  (the stage's method; trim not allowed)") : "");
+                    // one space before the note: two would mark a table row, which Wrap never folds
+                    m == trim.method() ? (trim.allowed() ? "; the stage's trim" : "; the stage's method, trim not allowed") : "");
         }
         if (b.trimmed().yield() != null) {
             line(o, "%-10s %s", "", "yield after the " + methodName(trim.method()) + " trim: "
@@ -83,12 +85,18 @@ public final class BudgetText {
         }
         o.append('\n');
         line(o, "Constraints");
+        // the detail column continues under itself rather than running past the width
+        TextTable ct = new TextTable().left("").left("").flex("").wrapFlex();
         for (ConstraintResult c : b.constraints()) {
-            line(o, "  %-4s %-13s %s", c.ok() ? "ok" : "FAIL", c.name(), c.detail());
+            ct.row(c.ok() ? "ok" : "FAIL", c.name(), c.detail());
+        }
+        List<String> rows = ct.lines(width - 2);
+        for (String row : rows.subList(1, rows.size())) { // the first line is the (empty) heading
+            o.append("  ").append(row).append('\n');
         }
         o.append('\n');
         line(o, "Verdict    %s%s", b.verdict().key(),
-                b.limitingTerm() == null ? "" : "   (largest term: " + b.limitingTerm() + ")");
+                b.limitingTerm() == null ? "" : "   (largest term: " + termLabel(b, b.limitingTerm()) + ")");
         if (!b.warnings().isEmpty()) {
             o.append('\n');
             line(o, "Warnings");
@@ -113,6 +121,12 @@ public final class BudgetText {
                             : y.trials() + " units")
                     + ", seed " + s.seed() + target + ")";
         };
+    }
+
+    /** A term's name as the table shows it ("initial offset"), not its JSON key ("offset"). */
+    static String termLabel(Budget b, String key) {
+        TermResult t = b.term(key);
+        return t == null ? key : t.label();
     }
 
     static String methodName(Trim.Method m) {

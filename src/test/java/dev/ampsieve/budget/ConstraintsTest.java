@@ -63,6 +63,23 @@ class ConstraintsTest {
     }
 
     @Test
+    void headroomWiderThanTheSupplyIsSaidSoNotPrintedAsAnUpsideDownRange() {
+        // Vs 5 V: 3 V from the low rail and 2.5 V from the high rail leave no input range at all
+        // (3 V above the low rail lies over 5 - 2.5 = 2.5 V); a follower without swing needs 2.5 V,
+        // which is 0.5 V under the low edge and not above the high one
+        StageFixture s = StageFixture.follower().limitV(1);
+        s.supply = 5.0;
+        PartFixture p = PartFixture.ideal();
+        p.inHead = new Headroom(3, 2.5);
+        ConstraintResult c = get(budget(s, p), "common-mode");
+        assertFalse(c.ok());
+        assertTrue(c.detail().contains("part reachable nowhere on a 5.00 V supply (headroom 3.00 V from the low rail"
+                + " plus 2.50 V from the high rail)"), c.detail());
+        assertTrue(c.detail().contains("short by 500 mV at the low end"), c.detail());
+        assertFalse(c.detail().contains("3.00 V to 2.50 V"), c.detail());
+    }
+
+    @Test
     void missingHeadroomIsAssumedPessimisticNotSkipped() {
         // Vs 5 V, swing 1 V: needs 2.0 .. 3.0 V; an assumed 1.5 V from each rail reaches 1.5 .. 3.5 V (fits);
         // a 3 V swing needs 1.0 .. 4.0 V, which the assumed headroom cannot reach

@@ -103,4 +103,29 @@ class BudgetReportTest {
         assertTrue(dev.ampsieve.testing.Flat.of(t).contains("stopped once the interval lay wholly below the target"), t);
         assertFalse(t.contains("cleared the target"));
     }
+
+    @Test
+    void everyLineFitsTheWidthAndTheVerdictNamesTheTermAsTheTableDoes() {
+        // a long stage path, a trim with its resolution and a failing constraint: the lines that ran
+        // past 100 columns (trim notes, constraint details) before
+        StageFixture s = StageFixture.nonInverting(99e3, 1e3).limitV(6e-3);
+        s.supply = 5.0;
+        s.fullScale = 2.0;
+        s.tMin = -40;
+        s.tMax = 85;
+        s.trim = new dev.ampsieve.stage.Trim(true, dev.ampsieve.stage.Trim.Method.ONE_POINT, 500e-6, 0.5);
+        PartFixture p = PartFixture.ideal().vos(null, 150e-6, null);
+        p.temperature = new dev.ampsieve.catalog.Range(0, 70);
+        Budget b = BudgetCalculator.compute(s.build(), p.build());
+        for (int width : new int[] {100, 80}) {
+            String t = BudgetText.render(b, "/some/rather/long/folder/of/stage/files/bridge-amp.yaml", width);
+            for (String line : t.split("\n")) {
+                assertTrue(line.codePointCount(0, line.length()) <= width, width + " columns: " + line);
+            }
+            assertTrue(dev.ampsieve.testing.Flat.of(t).contains("FAIL temperature"), t);
+            assertTrue(dev.ampsieve.testing.Flat.of(t).contains("; the stage's trim"), t);
+        }
+        assertEquals("offset", b.limitingTerm());
+        assertTrue(BudgetText.render(b, null).contains("(largest term: initial offset)"));
+    }
 }
