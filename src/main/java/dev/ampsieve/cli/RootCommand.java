@@ -83,6 +83,23 @@ public final class RootCommand implements Callable<Integer> {
         this.style = s;
     }
 
+    /**
+     * How output names a stage file: the shell hands commands its current stage as a temporary
+     * file and names it by what the user knows ("bridge-amp.yaml", "(current stage)"). Naming it
+     * before the text is laid out keeps folded lines folded at the right place.
+     */
+    private java.util.function.Function<Path, String> stageNames = p -> null;
+
+    /** @param names the name to show for a stage file, or null to show the path as given */
+    public void setStageNames(java.util.function.Function<Path, String> names) {
+        this.stageNames = names;
+    }
+
+    /** The name the shell gives this stage file, or null (the command line keeps the path). */
+    public String stageName(Path file) {
+        return stageNames.apply(file);
+    }
+
     /** The catalog folder after applying --catalog, then $AMPSIEVE_CATALOG, then the demo catalog. */
     public Path catalogDir() {
         if (catalogDir != null) {

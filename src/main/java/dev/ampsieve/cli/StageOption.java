@@ -4,7 +4,9 @@ import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.StageLoader;
 import dev.ampsieve.yaml.InputException;
 import java.nio.file.Path;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
 
 /**
  * The {@code --stage FILE} option every stage command shares (a picocli mixin), so its name,
@@ -21,13 +23,24 @@ public final class StageOption {
         return StageLoader.load(file);
     }
 
-    /** The path as given, for JSON. */
+    /** The command this option belongs to, for the root's naming of stage files. */
+    @Spec(Spec.Target.MIXEE)
+    CommandSpec mixee;
+
+    /** The path as given, for JSON (or the shell's name for its current stage). */
     public String label() {
-        return file.toString();
+        String shown = shellName();
+        return shown != null ? shown : file.toString();
     }
 
     /** The file name alone, so text headers stay within the table width. */
     public String name() {
-        return String.valueOf(file.getFileName());
+        String shown = shellName();
+        return shown != null ? shown : String.valueOf(file.getFileName());
+    }
+
+    private String shellName() {
+        Object root = mixee == null ? null : mixee.root().userObject();
+        return root instanceof RootCommand r ? r.stageName(file) : null;
     }
 }

@@ -113,6 +113,7 @@ public final class Shell {
         LineReader reader = builder.build();
         ShellContext ctx = new ShellContext(root, reader, out, style);
         stateRef[0] = ctx.state;
+        root.setStageNames(f -> f.equals(ctx.state.stageFileIfWritten()) ? ctx.state.nameInMessages() : null);
 
         CommandLine tree = Commands.build(root, out, err);
         ShellCommands.all(ctx).forEach(tree::addSubcommand);

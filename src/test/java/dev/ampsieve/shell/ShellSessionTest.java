@@ -52,6 +52,16 @@ class ShellSessionTest {
     }
 
     @Test
+    void theStageIsNamedBeforeTheBudgetIsFoldedSoItsHeaderStaysOneLine() {
+        // the temporary file's long path used to be folded first and swapped for the short name
+        // after, leaving "Stage      (current stage): inverting, noise gain" broken after "gain"
+        String printed = session("set gain 100", "set topology inverting", "set source-resistance 1 kohm",
+                "set limit 1 mV input", "budget zd-az-06");
+        assertTrue(printed.contains("Stage      (current stage): inverting, noise gain 10.0909, signal gain -9.09091\n"),
+                printed);
+    }
+
+    @Test
     void aLoadedStageIsNamedByItsFileUntilItChanges() {
         String stage = catalog.resolve("stages/bridge-amp.yaml").toString();
         String printed = session("load " + stage, "rank --top 2", "set quantity 10", "rank --top 2");
