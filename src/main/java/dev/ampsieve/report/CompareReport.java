@@ -41,17 +41,31 @@ public final class CompareReport {
         String a = c.a().id();
         String b = c.b().id();
         TextTable t = new TextTable().left("output error").right(a).right(b).left("better").flex("by");
-        for (Comparison.TermDelta d : c.terms()) {
-            t.row(d.label(), Figures.volts(d.aV()), Figures.volts(d.bV()), better(c, d.better()), by(d.differenceV(), d.ratio()));
-        }
         Budget ba = c.a().budget();
         Budget bb = c.b().budget();
+        boolean anyMarked = false;
+        boolean anyUnknown = false;
+        for (Comparison.TermDelta d : c.terms()) {
+            boolean ea = estimated(ba, d.key());
+            boolean eb = estimated(bb, d.key());
+            anyMarked |= ea || eb;
+            // a figure the catalog lacks counts as 0 V: it must not win the row on that alone
+            boolean winnerUnknown = d.better().equals("a") ? ea && d.aV() == 0 : d.better().equals("b") && eb && d.bV() == 0;
+            anyUnknown |= winnerUnknown;
+            t.row(d.label(), Figures.volts(d.aV()) + (ea ? "*" : ""), Figures.volts(d.bV()) + (eb ? "*" : ""),
+                    winnerUnknown ? "unknown" : better(c, d.better()), winnerUnknown ? "" : by(d.differenceV(), d.ratio()));
+        }
         total(t, c, "worst-case sum", ba.worstCaseV(), bb.worstCaseV());
         total(t, c, "root-sum-square", ba.rssV(), bb.rssV());
         if (ba.trimmed() != null && bb.trimmed() != null) {
             total(t, c, "worst-case after trim", ba.trimmed().worstCaseV(), bb.trimmed().worstCaseV());
         }
         t.lines(width).forEach(l -> o.append(l).append('\n'));
+        if (anyMarked) {
+            o.append("* estimated, typical-only or missing in the catalog ('budget PART' lists the warnings)")
+                    .append(anyUnknown ? "; unknown: the smaller figure is 0 V only because the catalog lacks the value" : "")
+                    .append('\n');
+        }
         o.append('\n');
         TextTable s = new TextTable().left("").right(a).right(b);
         s.row("limit", Figures.volts(ba.limitV()), Figures.volts(bb.limitV()));
@@ -65,6 +79,11 @@ public final class CompareReport {
         o.append('\n').append(c.conclusion()).append('\n');
         o.append('\n').append(Caution.TEXT).append('\n');
         return Wrap.prose(o.toString(), width);
+    }
+
+    private static boolean estimated(Budget b, String key) {
+        TermResult t = b.term(key);
+        return t != null && t.estimated();
     }
 
     private static void total(TextTable t, Comparison c, String label, double x, double y) {

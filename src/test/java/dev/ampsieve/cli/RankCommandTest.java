@@ -225,6 +225,17 @@ class RankCommandTest {
     }
 
     @Test
+    void aTermTheCatalogLacksDoesNotWinTheComparison() {
+        // demo prec-bip-02 gives a long-term drift, zd-chop-04 gives none (its aging term is 0 V, not counted):
+        // the row must not call zd-chop-04 better on the strength of a missing figure
+        CliRun r = run("compare", "prec-bip-02", "zd-chop-04", "--stage", stage("bridge-amp"));
+        String aging = r.outLines().stream().filter(l -> l.startsWith("long-term drift")).findFirst().orElseThrow();
+        assertTrue(aging.matches("long-term drift\\s+\\S+ µV\\s+0 V\\*\\s+unknown"), aging);
+        assertTrue(dev.ampsieve.testing.Flat.of(r.out()).contains(
+                "unknown: the smaller figure is 0 V only because the catalog lacks the value"), r.out());
+    }
+
+    @Test
     void compareWithAnUnknownPartSuggestsTheNearestId() {
         CliRun r = run("compare", "prec-bip-2", "zd-chop-01", "--stage", stage("thermocouple"));
         assertEquals(ExitCode.FINDINGS, r.code());
