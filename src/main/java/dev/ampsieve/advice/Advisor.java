@@ -64,8 +64,10 @@ public final class Advisor {
                         + "; " + standing(asIs) + ".");
             }
         }
-        trimLine(stage, trim).ifPresent(lines::add);
-        zeroDriftLines(stage, zeroDrift, lines);
+        if (!ranked.isEmpty()) { // with no part at all, no trim can help or fail to
+            trimLine(stage, trim).ifPresent(lines::add);
+        }
+        zeroDriftLines(stage, zeroDrift, fitting, lines);
         if (noFit != null) {
             noFitLines(noFit, rejected, lines);
         }
@@ -253,14 +255,20 @@ public final class Advisor {
         return c.trimmed() ? " with the trim" : "";
     }
 
-    private static void zeroDriftLines(Stage stage, ZeroDriftAdvice z, List<String> lines) {
+    private static void zeroDriftLines(Stage stage, ZeroDriftAdvice z, List<Candidate> fitting, List<String> lines) {
         int q = stage.quantity();
         Candidate s = z.selfCorrecting();
         Candidate std = z.standard();
         switch (z.status()) {
-            case ONLY_OPTION -> lines.add("A zero-drift part is warranted: only " + s.id() + " ("
-                    + s.part().architecture().key() + ") fits, at " + money(s.effectiveCost(), s.currency())
-                    + " per unit" + withTrim(s) + "; " + standing(s) + ".");
+            case ONLY_OPTION -> {
+                // "only X fits" would be false when several zero-drift parts fit: name the cheapest then
+                long n = fitting.stream().filter(c -> c.part().selfCorrecting()).count();
+                lines.add("A zero-drift part is warranted: "
+                        + (n > 1 ? "only zero-drift parts fit (" + n + "); the cheapest, " + s.id() + " ("
+                                + s.part().architecture().key() + "), costs "
+                                : "only " + s.id() + " (" + s.part().architecture().key() + ") fits, at ")
+                        + money(s.effectiveCost(), s.currency()) + " per unit" + withTrim(s) + "; " + standing(s) + ".");
+            }
             case CHEAPER -> lines.add("A zero-drift part is warranted: " + s.id() + " (" + s.part().architecture().key()
                     + ") fits at " + money(s.effectiveCost(), s.currency()) + withTrim(s) + ", " + money(z.savingPerUnit(), s.currency())
                     + " less per unit than the cheapest standard part " + std.id() + " at "

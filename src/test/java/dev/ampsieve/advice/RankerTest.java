@@ -126,6 +126,35 @@ class RankerTest {
     }
 
     @Test
+    void whenSeveralZeroDriftPartsFitTheAdviceDoesNotSayOnlyOneDoes() {
+        Stage s = stage().bandHigh(10).build();
+        Part chop = chopper(2.20);
+        Part az = part("AZ").architecture(Architecture.AUTO_ZERO).input(InputType.CMOS).price(3.10).fchop(20e3).build();
+        Part std = part("STD").price(1.00).build();
+        Map<Part, Budget> m = new LinkedHashMap<>();
+        m.put(chop, budget(s, chop, 0.5e-3, 0.2e-3, 0.2e-3, Verdict.FITS));
+        m.put(az, budget(s, az, 0.4e-3, 0.2e-3, 0.2e-3, Verdict.FITS));
+        m.put(std, budget(s, std, 1.0e-3, 0.9e-3, 0.9e-3, Verdict.NO_FIT));
+        Advice a = rank(s, m).advice();
+        assertEquals(ZeroDriftAdvice.Status.ONLY_OPTION, a.zeroDrift().status());
+        String line = a.lines().stream().filter(l -> l.startsWith("A zero-drift part is warranted")).findFirst().orElseThrow();
+        assertTrue(line.startsWith("A zero-drift part is warranted: only zero-drift parts fit (2); the cheapest, CHOP"
+                + " (chopper), costs 2.20"), line);
+        // a single one is still named as the only one
+        m.remove(az);
+        String one = rank(s, m).advice().lines().stream().filter(l -> l.startsWith("A zero-drift")).findFirst().orElseThrow();
+        assertTrue(one.startsWith("A zero-drift part is warranted: only CHOP (chopper) fits, at 2.20"), one);
+    }
+
+    @Test
+    void anEmptyCatalogGetsNoTrimVerdict() {
+        Stage s = stage().trim(true, 10e-6, 0.50).build();
+        List<String> lines = rank(s, new LinkedHashMap<>()).advice().lines();
+        assertTrue(lines.contains("No part to rank: the catalog (or the query) gave none."), lines.toString());
+        assertTrue(lines.stream().noneMatch(l -> l.contains("trimmed part")), lines.toString());
+    }
+
+    @Test
     void zeroDriftWarrantedWhenItFitsCheaper() {
         Stage s = stage().quantity(500).build();
         Part chop = chopper(1.20);
