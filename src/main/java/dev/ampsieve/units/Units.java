@@ -125,6 +125,9 @@ public final class Units {
         }
         double number = Double.parseDouble(m.group(1));
         String unitText = m.group(2);
+        if (expected == Dimension.DECIBEL && unitText.replace(" ", "").matches("V/[mµu]?V")) {
+            throw gainAsRatio(t, number, unitText.replace(" ", ""));
+        }
         double value = number * interpret(unitText, expected, t);
         if (expected == Dimension.TEMPERATURE && isKelvin(unitText)) {
             value = number - 273.15;
@@ -137,6 +140,25 @@ public final class Units {
                     "write the temperature in °C, such as '" + expected.example() + "'");
         }
         return value;
+    }
+
+    /**
+     * Datasheets often state open-loop gain as V/mV or V/µV; the catalog keeps decibels, so the
+     * fix gives the converted figure (20 log10 of the ratio) rather than only the rule.
+     */
+    private static UnitException gainAsRatio(String whole, double number, String unit) {
+        double perVolt = unit.endsWith("/mV") ? 1e3 : unit.endsWith("/V") && unit.length() == 3 ? 1 : 1e6;
+        double ratio = number * perVolt;
+        if (!(ratio > 0) || !Double.isFinite(ratio)) {
+            return new UnitException("'" + whole + "' is a gain ratio; this field takes decibels",
+                    "write the gain in dB: 20 log10 of the ratio in V/V");
+        }
+        // rounded down to 0.1 dB: a guaranteed minimum must not grow in the conversion
+        double db = Math.floor(200 * Math.log10(ratio) + 1e-9) / 10;
+        return new UnitException("'" + whole + "' is a gain ratio; this field takes decibels",
+                "write '" + trim(String.format(Locale.ROOT, "%.1f", db)) + " dB' (20 log10 of "
+                        + new java.math.BigDecimal(ratio).round(new java.math.MathContext(6)).stripTrailingZeros().toPlainString()
+                        + " V/V)");
     }
 
     private static boolean isKelvin(String unitText) {

@@ -105,7 +105,8 @@ public final class YamlFiles {
         } catch (MarkedYAMLException e) {
             Mark m = e.getProblemMark() != null ? e.getProblemMark() : e.getContextMark();
             String what = e.getProblem() != null ? e.getProblem() : e.getMessage();
-            throw new InputException(Problem.error(at(file, m), "", "YAML syntax: " + firstLine(what), syntaxFix(what)));
+            throw new InputException(Problem.error(at(file, m), "", "YAML syntax: " + firstLine(what),
+                    unclosed(e).orElse(syntaxFix(what))));
         } catch (YAMLException e) {
             throw new InputException(refusal(file, firstLine(e.getMessage())));
         } catch (IOException e) {
@@ -118,6 +119,22 @@ public final class YamlFiles {
             return new Node.Scalar(new Located(file, 1, 1), null, false);
         }
         return new Converter(file).convert(root, "", 0);
+    }
+
+    /**
+     * A '{' or '[' left open is reported where the parser gave up, often the next line: point at
+     * the bracket itself, which is where the fix goes.
+     */
+    private static java.util.Optional<String> unclosed(MarkedYAMLException e) {
+        String ctx = e.getContext() == null ? "" : e.getContext();
+        Mark open = e.getContextMark();
+        if (open == null || !(ctx.contains("flow mapping") || ctx.contains("flow sequence"))) {
+            return java.util.Optional.empty();
+        }
+        String bracket = ctx.contains("flow mapping") ? "{" : "[";
+        String close = bracket.equals("{") ? "}" : "]";
+        return java.util.Optional.of("the '" + bracket + "' opened at line " + (open.getLine() + 1) + ", column "
+                + (open.getColumn() + 1) + " is not closed; end it with '" + close + "' on that line");
     }
 
     /** The fix for the syntax errors people actually make in hand-typed YAML. */

@@ -189,4 +189,14 @@ class UnitsTest {
             assertEquals(v, back, Math.abs(v) * 0.005, text);
         }
     }
+
+    @Test
+    void openLoopGainAsARatioGetsItsDecibelFigureInTheFix() {
+        // 20 log10(1000 V/mV = 1e6 V/V) = 120 dB; 20 log10(1.5e6) = 123.52 dB, rounded down to 123.5
+        UnitException e = assertThrows(UnitException.class, () -> Units.parse("1000 V/mV", Dimension.DECIBEL));
+        assertEquals("'1000 V/mV' is a gain ratio; this field takes decibels", e.problem());
+        assertEquals("write '120 dB' (20 log10 of 1000000 V/V)", e.fix());
+        UnitException u = assertThrows(UnitException.class, () -> Units.parse("1.5 V/uV", Dimension.DECIBEL));
+        assertEquals("write '123.5 dB' (20 log10 of 1500000 V/V)", u.fix());
+    }
 }

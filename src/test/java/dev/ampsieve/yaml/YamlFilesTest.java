@@ -56,6 +56,18 @@ class YamlFilesTest {
     }
 
     @Test
+    void anUnclosedBraceIsPointedAtWhereItOpened() {
+        // the parser gives up on line 3 ("gbw:"), but the missing '}' belongs to line 2's '{' at column 6
+        Problem p = only(assertThrows(InputException.class,
+                () -> YamlFiles.parse("id: a\nvos: {max: 5 uV\ngbw: 2 MHz\n", null)));
+        assertEquals(3, p.line());
+        assertEquals("the '{' opened at line 2, column 6 is not closed; end it with '}' on that line", p.fix());
+        Problem q = only(assertThrows(InputException.class,
+                () -> YamlFiles.parse("id: a\ntags: [x, y\ngbw: 2 MHz\n", null)));
+        assertEquals("the '[' opened at line 2, column 7 is not closed; end it with ']' on that line", q.fix());
+    }
+
+    @Test
     void aKeyWrittenTwiceNamesBothLinesAndThePath() {
         Problem p = only(assertThrows(InputException.class,
                 () -> YamlFiles.parse("id: a\nvos:\n  max: 1 mV\n  typ: 1 mV\n  max: 2 mV\n", null)));
