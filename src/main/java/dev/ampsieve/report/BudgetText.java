@@ -88,7 +88,8 @@ public final class BudgetText {
         // the detail column continues under itself rather than running past the width
         TextTable ct = new TextTable().left("").left("").flex("").wrapFlex();
         for (ConstraintResult c : b.constraints()) {
-            ct.row(c.ok() ? "ok" : "FAIL", c.name(), c.detail());
+            // a constraint that could not be checked is not reported as met
+            ct.row(!c.ok() ? "FAIL" : c.detail().startsWith("not checked") ? "--" : "ok", c.name(), c.detail());
         }
         List<String> rows = ct.lines(width - 2);
         for (String row : rows.subList(1, rows.size())) { // the first line is the (empty) heading
@@ -149,7 +150,7 @@ public final class BudgetText {
     }
 
     private static String num(double x) {
-        return Units.format(x, Dimension.NUMBER, 6);
+        return Units.format(x, Dimension.NUMBER, 4);
     }
 
     private static void line(StringBuilder o, String fmt, Object... args) {
