@@ -410,6 +410,9 @@ final class PartReader {
             notAbove(path(s, MAX), path(s, MAX_OVER_TEMP), false, tempFix);
         }
         notAbove(path(VOS_DRIFT, TYP), path(VOS_DRIFT, MAX), false, spreadFix);
+        for (String s : List.of(VOS, VOS_DRIFT, IB, IOS)) {
+            farAbove(path(s, TYP), path(s, MAX));
+        }
         for (String s : List.of(CMRR, PSRR, AOL)) {
             notAbove(path(s, MIN), path(s, TYP), false,
                     "min is the guaranteed floor and typ the usual value; check which datasheet column each came from");
@@ -488,6 +491,25 @@ final class PartReader {
         Dimension d = CatalogKeys.dimension(low);
         err(low, last(low) + " (" + Units.format(a, d) + ") is above " + last(high) + " (" + Units.format(b, d) + ")", fix);
     }
+
+    /**
+     * A maximum hundreds of times the typical value is almost always a prefix slip (uV typed as
+     * mV); datasheets rarely put max more than 5 to 20 times typ (common practice). A warning,
+     * since some specifications do spread that far.
+     */
+    private void farAbove(String typ, String max) {
+        Double a = values.get(typ);
+        Double b = values.get(max);
+        if (a == null || b == null || a == 0 || Math.abs(b) < FAR_ABOVE * Math.abs(a)) {
+            return;
+        }
+        Dimension d = CatalogKeys.dimension(typ);
+        warn(max, last(max) + " (" + Units.format(b, d) + ") is " + Math.round(Math.abs(b / a)) + " times "
+                + last(typ) + " (" + Units.format(a, d) + ")", "check the prefixes (u, n, m, p) of both against the datasheet");
+    }
+
+    /** Ratio of max to typ beyond which a prefix slip is suspected. */
+    static final double FAR_ABOVE = 100.0;
 
     private static String last(String keyPath) {
         return keyPath.substring(keyPath.lastIndexOf('.') + 1);

@@ -300,6 +300,19 @@ class CatalogLoaderTest {
         assertEquals("typ (4.00 mV) is above max-over-temp (3.00 mV)", p.message());
     }
 
+    @Test
+    void aMaxHundredsOfTimesTypIsAWarnedPrefixSlip() throws Exception {
+        // typ 25 uV with max 75 mV: max typed in mV where the datasheet says uV (3000 x typ)
+        String text = with(with(BASE, "typ: 0.5 mV", "typ: 25 uV"), "  max: 2 mV\n", "  max: 75 mV\n");
+        text = with(text, "max-over-temp: 3 mV", "max-over-temp: 90 mV");
+        Problem p = about(loadPart(text).problems(), "vos.max");
+        assertEquals(Problem.Severity.WARNING, p.severity());
+        assertEquals("max (75.0 mV) is 3000 times typ (25.0 µV)", p.message());
+        // 20 x typ is an ordinary spread: no warning
+        String ordinary = with(BASE, "typ: 0.5 mV", "typ: 0.1 mV");
+        assertEquals(List.of(), loadPart(ordinary).problems().stream().filter(q -> q.field().endsWith("vos.max")).toList());
+    }
+
     @ParameterizedTest
     @CsvSource(delimiter = '|', value = {
         "max: 2 mV      | max: -2 mV      | vos.max       | -2.00 mV is negative, which is impossible here",
