@@ -60,7 +60,7 @@ public final class BiasTerm implements ErrorTerm {
                 + Units.format(v.iosAt(at), Dimension.CURRENT)
                 + (dependsOnT ? " at " + Units.format(at, Dimension.TEMPERATURE) : " (25 °C limits hold over the range)")
                 + "; R+ " + Units.format(s.rPlus(), Dimension.RESISTANCE) + ", Rf " + Units.format(s.rf(), Dimension.RESISTANCE);
-        boolean est = v.ib().basis().uncertain() || v.ios().basis().uncertain();
+        boolean est = v.ib().basis().uncertain() || v.ios().basis().uncertain() || dependsOnT && v.ibExtrapolated(at);
         return ErrorTerm.result(this, s, out, dependsOnT ? at : Double.NaN, est, note);
     }
 }

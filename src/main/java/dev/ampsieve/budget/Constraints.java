@@ -175,8 +175,11 @@ public final class Constraints {
             String needWhat, String offerWhat) {
         boolean ok = lo >= offer.min() && hi <= offer.max();
         StringBuilder sb = new StringBuilder();
-        sb.append("needs ").append(needWhat).append(' ').append(Units.format(lo, d)).append(" to ")
-                .append(Units.format(hi, d)).append("; part ").append(offerWhat).append(' ')
+        sb.append("needs ").append(needWhat).append(' ').append(Units.format(lo, d));
+        if (hi != lo) {
+            sb.append(" to ").append(Units.format(hi, d));
+        }
+        sb.append("; part ").append(offerWhat).append(' ')
                 .append(Units.format(offer.min(), d)).append(" to ").append(Units.format(offer.max(), d));
         if (!ok) {
             if (lo < offer.min()) {

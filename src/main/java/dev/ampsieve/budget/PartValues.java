@@ -164,8 +164,25 @@ public record PartValues(
         if (part.longTermDrift() == null && stage.serviceLife() > 0) {
             w.add("long-term-drift: not given; offset aging over the service life is not counted");
         }
+        if (ib.basis() != Basis.MISSING && Double.isNaN(ibOt) && part.input() != null && part.input().fetLike()
+                && stage.tMax() > Stage.T_REF) {
+            double f = biasFactor(part.input(), ib.bound(), Double.NaN, stage.tMax());
+            w.add("ib: no maximum over temperature; the 25 °C maximum is doubled every 10 °C above 25 °C "
+                    + "(junction-leakage rule, common practice), " + Units.format(ib.bound() * f, Dimension.CURRENT)
+                    + " at " + Units.format(stage.tMax(), Dimension.TEMPERATURE)
+                    + (part.selfCorrecting()
+                            ? "; pessimistic for a chopper or auto-zero part, whose bias current is mostly charge"
+                                    + " injection: enter the datasheet's over-temperature maximum"
+                            : "; enter the datasheet's over-temperature maximum"));
+        }
         return new PartValues(part, vos, vosOt, drift, ib, ios, ibOt, iosOt, cmrr, psrr, aol, gbw,
                 en, enC, in, inC, w);
+    }
+
+    /** True when IB at {@code tC} comes from the doubling rule rather than a catalog figure. */
+    public boolean ibExtrapolated(double tC) {
+        return ib.basis() != Basis.MISSING && Double.isNaN(ibOverTemp) && part.input() != null
+                && part.input().fetLike() && tC > Stage.T_REF;
     }
 
     /**

@@ -88,7 +88,8 @@ public final class BudgetText {
         // the detail column continues under itself rather than running past the width
         TextTable ct = new TextTable().left("").left("").flex("").wrapFlex();
         for (ConstraintResult c : b.constraints()) {
-            ct.row(c.ok() ? "ok" : "FAIL", c.name(), c.detail());
+            // a constraint that could not be checked is not reported as met
+            ct.row(!c.ok() ? "FAIL" : c.detail().startsWith("not checked") ? "--" : "ok", c.name(), c.detail());
         }
         List<String> rows = ct.lines(width - 2);
         for (String row : rows.subList(1, rows.size())) { // the first line is the (empty) heading
@@ -97,6 +98,10 @@ public final class BudgetText {
         o.append('\n');
         line(o, "Verdict    %s%s", b.verdict().key(),
                 b.limitingTerm() == null ? "" : "   (largest term: " + termLabel(b, b.limitingTerm()) + ")");
+        String why = yieldMiss(b);
+        if (why != null) {
+            line(o, "%-10s %s", "", why);
+        }
         if (!b.warnings().isEmpty()) {
             o.append('\n');
             line(o, "Warnings");
@@ -121,6 +126,27 @@ public final class BudgetText {
                             : y.trials() + " units")
                     + ", seed " + s.seed() + target + ")";
         };
+    }
+
+    /**
+     * Why a part judged by yield misses when its seen yield reaches the target: the verdict rests
+     * on the lower end of the 95 % interval, which a reader of "99.93 %" would not guess.
+     */
+    static String yieldMiss(Budget b) {
+        Stage s = b.stage();
+        if (s.criterion().kind() != Criterion.Kind.YIELD || b.verdict() != dev.ampsieve.budget.Verdict.NO_FIT
+                || !b.constraintsMet()) {
+            return null;
+        }
+        boolean trimmed = b.trimmed() != null && b.trimmed().yield() != null;
+        YieldResult y = trimmed ? b.trimmed().yield() : b.yield();
+        double target = s.criterion().yieldTarget();
+        if (y == null || y.value() < target) {
+            return null;
+        }
+        return "the yield " + (trimmed ? "after the trim" : "as it is") + " is " + pct(y.value())
+                + ", but the lower end of its 95 % interval, " + pct(y.low()) + ", is below the " + pct(target)
+                + " target: the sample cannot show the target is met (more trials may settle it)";
     }
 
     /** A term's name as the table shows it ("initial offset"), not its JSON key ("offset"). */
@@ -149,7 +175,7 @@ public final class BudgetText {
     }
 
     private static String num(double x) {
-        return Units.format(x, Dimension.NUMBER, 6);
+        return Units.format(x, Dimension.NUMBER, 4);
     }
 
     private static void line(StringBuilder o, String fmt, Object... args) {

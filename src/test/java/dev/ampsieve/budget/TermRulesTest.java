@@ -54,7 +54,16 @@ class TermRulesTest {
         // |NG R+ - Rf| IB + (NG R+ + Rf) IOS/2 at 85 °C
         assertEquals(Math.abs(ng * 1e6 - 1e6) * ib + (ng * 1e6 + 1e6) * ios / 2, t.outputV(), 1e-18);
         assertEquals(85.0, t.worstAtC(), 0.0);
-        assertFalse(t.estimated());
+        // the hot-end currents come from the doubling rule, not the catalog: marked and explained
+        assertTrue(t.estimated());
+        assertTrue(budget(s, p).warnings().stream().anyMatch(w -> w.startsWith("ib: no maximum over temperature")
+                && w.contains("64.0 pA at 85")), budget(s, p).warnings().toString());
+        // with the datasheet's over-temperature maxima the figure is the catalog's own
+        p.ib = new Spread(null, 1e-12, 64e-12);
+        p.ios = new Spread(null, 0.5e-12, 32e-12);
+        TermResult given = budget(s, p).term("bias");
+        assertEquals(t.outputV(), given.outputV(), 1e-18);
+        assertFalse(given.estimated());
     }
 
     @Test

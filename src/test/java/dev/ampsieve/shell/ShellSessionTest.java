@@ -57,7 +57,7 @@ class ShellSessionTest {
         // after, leaving "Stage      (current stage): inverting, noise gain" broken after "gain"
         String printed = session("set gain 100", "set topology inverting", "set source-resistance 1 kohm",
                 "set limit 1 mV input", "budget zd-az-06");
-        assertTrue(printed.contains("Stage      (current stage): inverting, noise gain 10.0909, signal gain -9.09091\n"),
+        assertTrue(printed.contains("Stage      (current stage): inverting, noise gain 10.09, signal gain -9.091\n"),
                 printed);
     }
 
