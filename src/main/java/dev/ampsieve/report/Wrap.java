@@ -78,7 +78,7 @@ public final class Wrap {
 
     /** A unit symbol after a number, with any closing punctuation: "%)", "mV;", "µV/°C". */
     private static final java.util.regex.Pattern UNIT =
-            java.util.regex.Pattern.compile("(%|°C|dB|ppm\\S*|[pnuµmkMG]?(V|A|Hz|Ω|ohm|s)(/\\S*)?)[;,.)]*");
+            java.util.regex.Pattern.compile("(%|°?C|dB|ppm\\S*|[pnuµmkMG]?(V|A|Hz|Ω|ohm|s)(/\\S*)?)[;,.)]*");
 
     /** Words at spaces, a unit kept on the number before it so "(71.5 %)" never breaks. */
     private static java.util.List<String> words(String body) {

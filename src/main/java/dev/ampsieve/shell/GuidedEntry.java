@@ -3,8 +3,10 @@ package dev.ampsieve.shell;
 import dev.ampsieve.yaml.Problem;
 import java.io.PrintWriter;
 import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import org.jline.reader.EndOfFileException;
 import org.jline.reader.LineReader;
 import org.jline.reader.UserInterruptException;
@@ -14,13 +16,29 @@ import org.jline.reader.UserInterruptException;
  * the rest with the default (or the current answer) in brackets and one line on why it is
  * asked. Each answer is checked at once and asked again, with the reason, until it is usable.
  * {@code ?} explains a question, Enter keeps the value shown, {@code done} keeps every
- * remaining value, Ctrl-C (or Ctrl-D) abandons the sequence and leaves the stage as it was.
+ * remaining value, Ctrl-C (or Ctrl-D) stops the sequence and hands back the answers given so
+ * far, each already checked, for the caller to keep when they make a stage.
  */
 final class GuidedEntry {
 
-    /** The user abandoned the sequence. */
+    /** The user stopped the sequence: the answers as they stood, and how many questions got a new value. */
     static final class Cancelled extends Exception {
         private static final long serialVersionUID = 1L;
+        private final transient Map<String, String> answers;
+        private final int given;
+
+        Cancelled(Map<String, String> answers, int given) {
+            this.answers = Map.copyOf(answers);
+            this.given = given;
+        }
+
+        Map<String, String> answers() {
+            return answers;
+        }
+
+        int given() {
+            return given;
+        }
     }
 
     static final String DONE = "done";
@@ -31,6 +49,8 @@ final class GuidedEntry {
     private final PrintWriter out;
     private final Paint paint;
     private boolean finishing;
+    /** Questions that got a new, usable value in this sequence. */
+    private final Set<String> answered = new LinkedHashSet<>();
 
     GuidedEntry(ShellContext ctx) {
         this.ctx = ctx;
@@ -41,9 +61,9 @@ final class GuidedEntry {
 
     /** Runs the questions starting from {@code start}; returns the new answers. */
     Map<String, String> run(Map<String, String> start) throws Cancelled {
-        out.println("Describe the stage: gain, temperature range and error limit first, then the rest.");
-        out.println(paint.dim("Enter keeps the value in [ ], ? explains a question, 'done' keeps all remaining values, "
-                + "Ctrl-C cancels."));
+        out.println(ctx.fold("Describe the stage: gain, temperature range and error limit first, then the rest."));
+        out.println(ctx.fold("Enter keeps the value in [ ], ? explains a question, 'done' keeps all remaining values, "
+                + "Ctrl-C stops and keeps the answers given.", paint::dim));
         Map<String, String> a = new LinkedHashMap<>(start);
         Object historyWas = reader.getVariable(LineReader.DISABLE_HISTORY);
         reader.setVariable(LineReader.DISABLE_HISTORY, true); // answers are not commands to recall
@@ -57,7 +77,11 @@ final class GuidedEntry {
                 if (i == Questions.FIRST.size()) {
                     out.println(paint.dim("The rest have defaults; Enter keeps them, 'done' keeps them all."));
                 }
-                a = ask(id, a, position(order, i, a));
+                try {
+                    a = ask(id, a, position(order, i, a));
+                } catch (Cancelled c) {
+                    throw new Cancelled(a, answered.size());
+                }
             }
         } finally {
             ctx.question = null;
@@ -84,7 +108,7 @@ final class GuidedEntry {
     /** Asks one question until it has a usable answer; returns the answers with it applied. */
     Map<String, String> ask(String id, Map<String, String> a, String position) throws Cancelled {
         out.println();
-        out.println(paint.bold(position + " " + id) + "  " + paint.dim(Questions.why(id)));
+        header(position + " " + id, Questions.why(id));
         while (true) {
             String current = Questions.current(id, a);
             String shown = current != null ? current : Questions.required(id) ? "required" : Questions.defaultText(id);
@@ -96,8 +120,7 @@ final class GuidedEntry {
             if (line.equalsIgnoreCase(DONE)) {
                 String missing = missingRequired(a);
                 if (missing != null) {
-                    out.println(paint.red("  " + missing + " is needed before the rest can take defaults") + "; "
-                            + Questions.why(missing));
+                    say("  " + missing + " is needed before the rest can take defaults", "; " + Questions.why(missing));
                     continue;
                 }
                 finishing = true;
@@ -105,7 +128,7 @@ final class GuidedEntry {
             }
             if (line.isEmpty()) {
                 if (current == null && Questions.required(id)) {
-                    out.println(paint.red("  " + id + " has no default") + "; " + Questions.why(id));
+                    say("  " + id + " has no default", "; " + Questions.why(id));
                     continue;
                 }
                 return a;
@@ -118,39 +141,71 @@ final class GuidedEntry {
                 continue;
             }
             Map<String, String> next = change.applyTo(a);
-            if (next.containsKey("limit.percent-of-full-scale") && !next.containsKey("full-scale-output")) {
+            boolean hadFullScale = answered.contains(FULL_SCALE);
+            if (next.containsKey("limit.percent-of-full-scale") && !next.containsKey(FULL_SCALE)) {
                 out.println(paint.dim("  a share of full scale needs the full-scale output:"));
-                next = ask("full-scale-output", next, "[+]");
+                next = ask(FULL_SCALE, next, "[+]");
             }
             List<Problem> problems = StageCheck.problemsFor(next, change.paths());
             if (!problems.isEmpty()) {
+                if (!hadFullScale) {
+                    answered.remove(FULL_SCALE); // given for this answer, which is refused with it
+                }
                 reject(StageCheck.brief(problems.get(0)), id);
                 continue;
             }
             if (change.note() != null) {
-                out.println(paint.dim("  " + change.note()));
+                out.println(ctx.fold("  " + change.note(), paint::dim));
+            }
+            if (!next.equals(a)) {
+                answered.add(id);
             }
             return next;
         }
     }
 
+    private static final String FULL_SCALE = "full-scale-output";
+
+    /** "[4/21] gain  why it is asked", folded so the reason hangs under itself; a long key gets a line of its own. */
+    private void header(String head, String why) {
+        String folded = ctx.fold(head + "  " + why);
+        int first = folded.indexOf('\n');
+        if (first < 0 && folded.codePointCount(0, folded.length()) > ctx.style.width()) {
+            out.println(paint.bold(head)); // the reason would start too far right to fold under itself
+            out.println(ctx.fold("  " + why, paint::dim));
+            return;
+        }
+        String[] lines = folded.split("\n", -1);
+        StringBuilder sb = new StringBuilder(paint.bold(head)).append(paint.dim(lines[0].substring(head.length())));
+        for (int i = 1; i < lines.length; i++) {
+            sb.append('\n').append(paint.dim(lines[i]));
+        }
+        out.println(sb);
+    }
+
+    /** A refusal in red and its reason after it, folded to the width; the red part stays red where it is whole. */
+    private void say(String refusal, String reason) {
+        String folded = ctx.fold(refusal + reason);
+        out.println(folded.startsWith(refusal) ? paint.red(refusal) + folded.substring(refusal.length()) : folded);
+    }
+
     private void reject(String why, String id) {
-        out.println(paint.red("  not usable: " + why));
-        out.println(paint.dim("  (" + id + ": " + Questions.why(id) + ")"));
+        out.println(ctx.fold("  not usable: " + why, paint::red));
+        out.println(ctx.fold("  (" + id + ": " + Questions.why(id) + ")", paint::dim));
     }
 
     private void explain(String id, String shown) {
         boolean needed = Questions.required(id) && shown.equals("required");
-        out.println("  " + id + ": " + Questions.why(id) + ".");
-        out.println("  for example: " + Questions.example(id));
+        out.println(ctx.fold("  " + id + ": " + Questions.why(id) + "."));
+        out.println(ctx.fold("  for example: " + Questions.example(id)));
         java.util.List<String> units = UnitHints.of(Answers.dimension(id));
         if (!units.isEmpty()) {
-            out.println("  units: " + String.join(", ", units) + " (Tab after a number offers them)");
+            out.println(ctx.fold("  units: " + String.join(", ", units) + " (Tab after a number offers them)"));
         }
-        out.println(needed ? "  no default: an answer is needed" : "  default: " + Questions.defaultText(id)
-                + (shown.equals(Questions.defaultText(id)) ? "" : "; now: " + shown));
-        out.println(paint.dim("  " + (needed ? "" : "Enter keeps [" + shown + "]; ")
-                + "'done' keeps all remaining values; Ctrl-C cancels the questions."));
+        out.println(ctx.fold(needed ? "  no default: an answer is needed" : "  default: " + Questions.defaultText(id)
+                + (shown.equals(Questions.defaultText(id)) ? "" : "; now: " + shown)));
+        out.println(ctx.fold("  " + (needed ? "" : "Enter keeps [" + shown + "]; ")
+                + "'done' keeps all remaining values; Ctrl-C stops and keeps the answers given.", paint::dim));
     }
 
     /** The first required question still unanswered, or null. */
@@ -168,7 +223,7 @@ final class GuidedEntry {
         try {
             return reader.readLine(prompt);
         } catch (UserInterruptException | EndOfFileException e) {
-            throw new Cancelled();
+            throw new Cancelled(Map.of(), 0); // run() fills in the answers as they stand
         }
     }
 }

@@ -37,7 +37,7 @@ import picocli.CommandLine.Model.OptionSpec;
  * into words (quotes group words) and executed by the tree; a command that takes
  * {@code --stage FILE} gets the current stage when the line gives none.
  *
- * <p>Ctrl-C drops the line being typed (or the question sequence of {@code ask}) and is ignored
+ * <p>Ctrl-C drops the line being typed (or stops the questions of {@code ask}) and is ignored
  * while a command runs; it never ends the shell. Ctrl-D leaves. Any failure prints one line and the loop goes on;
  * a stack trace only with {@code --verbose}.
  */
@@ -47,6 +47,8 @@ public final class Shell {
     private final Terminal terminal;
     private final Path historyFile;
     private final Map<String, String> env;
+    /** The command names, for taking the program name off "'ampsieve check'" in messages; set once the tree is built. */
+    private volatile java.util.Set<String> commands = java.util.Set.of();
 
     /**
      * @param rootArgs    the options the shell was started with ({@code --catalog DIR} ...), given
@@ -135,6 +137,7 @@ public final class Shell {
         });
         tree.setExecutionExceptionHandler((ex, line, parsed) -> failure(ex, err));
         completer[0] = new ShellCompleter(ctx, tree);
+        commands = java.util.Set.copyOf(tree.getSubcommands().keySet());
 
         try {
             tree.parseArgs(rootArgs.toArray(String[]::new)); // --catalog and friends before the banner reads the catalog
@@ -167,7 +170,7 @@ public final class Shell {
                 if (ctx.state.unsaved() && !ctx.warnedUnsaved) {
                     ctx.warnedUnsaved = true;
                     ctx.out.println();
-                    ctx.out.println("The current stage is not saved: 'save FILE' keeps it; Ctrl-D again leaves without saving.");
+                    ctx.out.println(ctx.fold("The current stage is not saved: 'save FILE' keeps it; Ctrl-D again leaves without saving."));
                     continue;
                 }
                 ctx.out.println();
@@ -280,18 +283,47 @@ public final class Shell {
         return ExitCode.INTERNAL;
     }
 
-    /** What a printed line looks like on this terminal. */
+    /**
+     * What a printed line looks like on this terminal. Error lines are folded to its width here,
+     * after the stage is named and before they are painted, so the terminal never breaks a word.
+     */
     private String shown(String s, ShellState state, boolean error) {
         Path tmp = state == null ? null : state.stageFileIfWritten();
         if (tmp != null) {
             String name = state.nameInMessages();
             s = s.replace(tmp.toString(), name).replace(ShellState.STAGE_FILE_NAME, name);
         }
+        s = withoutProgramName(s, commands);
         OutputStyle st = look(terminal, env, rootArgs.contains("--ascii"));
         if (!st.unicode()) {
             s = Glyphs.ascii(s);
         }
-        return error ? new Paint(st.color()).red(s) : s;
+        if (!error) {
+            return s;
+        }
+        Paint paint = new Paint(st.color());
+        return java.util.Arrays.stream(dev.ampsieve.report.Wrap.prose(s, st.width()).split("\n", -1)).map(paint::red)
+                .collect(java.util.stream.Collectors.joining("\n"));
+    }
+
+    /** "ampsieve " where it starts a command: the program name, which the shell's own lines go without. */
+    private static final java.util.regex.Pattern PROGRAM = java.util.regex.Pattern.compile("(?<![\\w/.\\\\-])ampsieve ([a-z][a-z-]*)\\b");
+
+    /**
+     * Messages shared with the command line say "run 'ampsieve check'"; in the shell the same
+     * command is typed without the program name, so it is taken off where a command name follows.
+     */
+    static String withoutProgramName(String s, java.util.Set<String> commands) {
+        if (!s.contains("ampsieve ")) {
+            return s;
+        }
+        java.util.regex.Matcher m = PROGRAM.matcher(s);
+        StringBuilder sb = new StringBuilder();
+        while (m.find()) {
+            m.appendReplacement(sb, java.util.regex.Matcher.quoteReplacement(commands.contains(m.group(1)) ? m.group(1) : m.group()));
+        }
+        m.appendTail(sb);
+        return sb.toString();
     }
 
     private String prompt(ShellContext ctx) {
@@ -305,13 +337,13 @@ public final class Shell {
         Paint paint = ctx.paint;
         out.println(paint.bold(new RootCommand.Version().getVersion()[0])
                 + ": op-amp choice by the full output error budget of your stage.");
-        out.println(catalogLine());
+        out.println(ctx.fold(catalogLine()));
         out.println(paint.dim(dev.ampsieve.report.Wrap.prose(Caution.TEXT, ctx.style.width())));
         if (historyNote != null) {
-            out.println(paint.dim(historyNote));
+            out.println(ctx.fold(historyNote, paint::dim));
         }
-        out.println("Type " + paint.bold("ask") + " to describe your stage, " + paint.bold("help") + " for the commands, "
-                + "Tab to complete, Ctrl-D to leave.");
+        out.println(ctx.foldBold("Type ask to describe your stage, help for the commands, Tab to complete, Ctrl-D to leave.",
+                "ask", "help"));
     }
 
     private String catalogLine() {

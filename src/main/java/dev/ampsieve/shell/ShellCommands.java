@@ -97,7 +97,7 @@ final class ShellCommands {
                 answers = new GuidedEntry(ctx).run(start);
             } catch (GuidedEntry.Cancelled e) {
                 out().println();
-                out().println(ctx.state.hasStage() ? "Cancelled; the current stage is as it was." : "Cancelled; no stage yet.");
+                out().println(ctx.fold(stopped(e)));
                 return ExitCode.OK;
             }
             if (ctx.state.hasStage() && !fresh) {
@@ -108,11 +108,35 @@ final class ShellCommands {
             out().println();
             int code = Show.print(ctx, out(), false);
             out().println();
-            out().println("Next: " + paint().bold("rank") + " lists the parts that fit, " + paint().bold("save FILE")
-                    + " keeps this stage, " + paint().bold("set KEY VALUE") + " changes one value.");
+            out().println(ctx.foldBold("Next: rank lists the parts that fit, save FILE keeps this stage, "
+                    + "set KEY VALUE changes one value.", "rank", "save FILE", "set KEY VALUE"));
             List<String> more = Questions.setOnly();
-            out().println(paint().dim("Not asked (set them if needed): " + String.join(", ", more) + "."));
+            out().println(ctx.fold("Not asked (set them if needed): " + String.join(", ", more) + ".", paint()::dim));
             return code;
+        }
+
+        /**
+         * After Ctrl-C: the answers given were each checked as they came, so they are kept when
+         * they make a whole stage (gain and limit at least); a stage that was there stays otherwise.
+         */
+        private String stopped(GuidedEntry.Cancelled e) {
+            boolean had = ctx.state.hasStage();
+            String before = had ? "the current stage is as it was." : "no stage yet.";
+            if (e.given() == 0) {
+                return "Stopped; " + before;
+            }
+            try {
+                StageCheck.stage(e.answers());
+            } catch (InputException notYet) {
+                return "Stopped; nothing kept (a stage needs the gain and the limit); " + before;
+            }
+            if (had && !fresh) {
+                ctx.state.update(e.answers());
+            } else {
+                ctx.state.replace(e.answers(), null, false);
+            }
+            return "Stopped; kept the " + (e.given() == 1 ? "one answer" : e.given() + " answers")
+                    + " given: 'show' lists them, 'ask' starts again.";
         }
     }
 
@@ -153,7 +177,7 @@ final class ShellCommands {
             out().println(id + " = " + Questions.current(id, next) + (change.note() != null ? "  (" + change.note() + ")" : ""));
             List<Problem> rest = StageCheck.problems(next).stream().filter(Problem::isError).toList();
             if (!rest.isEmpty()) {
-                out().println(paint().dim("The stage is not complete yet: " + StageCheck.brief(rest.get(0))));
+                out().println(ctx.fold("The stage is not complete yet: " + StageCheck.brief(rest.get(0)), paint()::dim));
             }
             return ExitCode.OK;
         }
@@ -330,8 +354,8 @@ final class ShellCommands {
             StageLoader.load(file); // all checks, with file:line:col
             ctx.state.replace(answers(YamlFiles.read(file)), file, true);
             Map<String, String> a = ctx.state.answers();
-            out().println("Loaded " + file + ": gain " + Questions.current("gain", a) + ", "
-                    + Questions.current(Answers.LIMIT, a) + " limit. 'show' lists it.");
+            out().println(ctx.fold("Loaded " + file + ": gain " + Questions.current("gain", a) + ", "
+                    + Questions.current(Answers.LIMIT, a) + " limit. 'show' lists it."));
             return ExitCode.OK;
         }
 
@@ -431,7 +455,7 @@ final class ShellCommands {
         public Integer call() {
             if (ctx.state.unsaved() && !ctx.warnedUnsaved) {
                 ctx.warnedUnsaved = true;
-                out().println("The current stage is not saved: 'save FILE' keeps it; 'quit' again leaves without saving.");
+                out().println(ctx.fold("The current stage is not saved: 'save FILE' keeps it; 'quit' again leaves without saving."));
                 return ExitCode.OK;
             }
             ctx.quit = true;

@@ -42,6 +42,8 @@ class WrapTest {
         assertEquals("           two-point: worst-case 140 mV, RSS\n"
                 + "           131 mV (2182.4 %)", Wrap.prose(in, 46));
         assertEquals("drift up to\n3.84 µV/°C here", Wrap.prose("drift up to 3.84 µV/°C here", 20));
+        // temperatures typed in ASCII, as the shell's questions write them
+        assertEquals("the distance from\n25 C; the part", Wrap.prose("the distance from 25 C; the part", 20));
         // words after a number that are not units still fold as before
         assertEquals("spread over 1000000\nunits here", Wrap.prose("spread over 1000000 units here", 20));
     }

@@ -8,6 +8,7 @@ import dev.ampsieve.stage.Limit;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.StageLoader;
 import dev.ampsieve.stage.Topology;
+import dev.ampsieve.testing.Flat;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
@@ -48,8 +49,9 @@ class GuidedEntryTest {
         String printed = Sessions.run("ask", "abc", "40 dB", "85..-40", "-40 to 125", "2 V/us", "10 uV input", "done",
                 "save " + file);
 
-        assertTrue(printed.contains("not usable: 'abc' is not a gain; write a plain number such as '100', or decibels"), printed);
-        assertTrue(printed.contains("(gain: every input error reaches the output multiplied by the noise gain"), printed);
+        String flat = Flat.of(printed);
+        assertTrue(flat.contains("not usable: 'abc' is not a gain; write a plain number such as '100', or decibels"), printed);
+        assertTrue(flat.contains("(gain: every input error reaches the output multiplied by the noise gain"), printed);
         assertTrue(printed.contains("not usable: min 85 °C is above max -40 °C; swap the two values"), printed);
         assertTrue(printed.contains("not usable: '2 V/us' is a slew rate but a voltage belongs here"), printed);
 
@@ -80,11 +82,59 @@ class GuidedEntryTest {
     }
 
     @Test
-    void ctrlCCancelsTheQuestionsNotTheShell() {
+    void ctrlCBeforeTheLimitKeepsNothingAndNotTheShellEither() {
         String printed = Sessions.run("ask", "100", "-40..85 C\u0003", "show", "help");
-        assertTrue(printed.contains("Cancelled; no stage yet."), printed);
+        assertTrue(printed.contains("Stopped; nothing kept (a stage needs the gain and the limit); no stage yet."),
+                printed);
         assertTrue(printed.contains("No current stage yet"), printed);
         assertTrue(printed.contains("The shell"), printed); // help still ran afterwards
+    }
+
+    @Test
+    void ctrlCAfterTheLimitKeepsTheAnswersGiven() throws Exception {
+        Path file = dir.resolve("s.yaml");
+        String printed = Sessions.run("ask", "100", "-40..85 C", "10 uV input", "inv\u0003", "show", "save " + file);
+        assertTrue(printed.contains("Stopped; kept the 3 answers given: 'show' lists them, 'ask' starts again."), printed);
+        assertTrue(printed.contains("Stage (typed in, not saved)"), printed);
+
+        Stage s = StageLoader.load(file);
+        assertEquals(-40.0, s.tMin());
+        assertEquals(85.0, s.tMax());
+        assertEquals(Topology.NON_INVERTING, s.topology()); // "inv" was being typed, never entered
+        assertEquals(10e-6 * 100, s.limitVolts(), 1e-15); // input-referred limit times noise gain 100
+    }
+
+    @Test
+    void ctrlCOnAStageKeepsItsNewAnswersAndOnlyThem() throws Exception {
+        Path file = dir.resolve("s.yaml");
+        String printed = Sessions.run("set gain 20", "set limit 5 mV", "ask", "50", "\u0003", "save " + file);
+        assertTrue(printed.contains("Stopped; kept the one answer given: 'show' lists them, 'ask' starts again."), printed);
+        Stage s = StageLoader.load(file);
+        assertEquals(50.0, s.noiseGain(), 1e-12);
+        assertEquals(5e-3, s.limitVolts(), 1e-15);
+
+        // a fresh start that never reaches the limit leaves the stage there was
+        printed = Sessions.run("set gain 20", "set limit 5 mV", "ask --fresh", "7", "\u0003", "show");
+        assertTrue(Flat.of(printed).contains("Stopped; nothing kept (a stage needs the gain and the limit); "
+                + "the current stage is as it was."), printed);
+        assertTrue(printed.matches("(?s).*Stopped.*gain\\s+20\\s.*"), printed);
+    }
+
+    @Test
+    void questionsReasonsAndExplanationsAreFoldedToTheWidth() {
+        // the dumb terminal reports no width: 80 columns (OutputStyle)
+        String printed = Sessions.run("ask", "100", "?", "2 parsecs", "-40..85 C", "?", "\u0003");
+        String flat = printed.replace("\r", "");
+        for (String line : flat.split("\n")) {
+            line = Sessions.withoutPrompts(line); // the dumb terminal leaves output on the prompt's line
+            assertTrue(line.length() <= 80, "longer than 80 columns: " + line + "\n" + printed);
+        }
+        // the temperature reason is longer than a line: it hangs under itself after the key
+        String why = Questions.why(Answers.TEMPERATURE);
+        assertTrue(why.length() > 80 - "[2/21] temperature  ".length(), why); // the check below means something
+        assertTrue(flat.contains("[2/21] temperature  drift and FET bias currents"), printed);
+        assertTrue(flat.matches("(?s).*\\n {20}\\S.*"), printed); // a continuation under the reason's first word
+        assertTrue(Flat.of(flat).contains("temperature: " + why + "."), printed);
     }
 
     @Test
@@ -94,7 +144,7 @@ class GuidedEntryTest {
                 "done", "save " + file);
         assertTrue(printed.contains("gain [20] >"), printed);
         assertTrue(printed.contains("limit [5 mV] >"), printed);
-        assertTrue(printed.contains("Cancelled; the current stage is as it was."), printed);
+        assertTrue(printed.contains("Stopped; the current stage is as it was."), printed);
 
         Stage s = StageLoader.load(file);
         assertEquals(Topology.INVERTING, s.topology()); // "inv" is the one choice it starts

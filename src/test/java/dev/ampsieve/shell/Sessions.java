@@ -86,4 +86,9 @@ final class Sessions {
     static String run(String... lines) {
         return run(List.of(), null, Map.of(), lines);
     }
+
+    /** A printed line without the prompts in front of it (the shell's, then any question's). */
+    static String withoutPrompts(String line) {
+        return line.replaceFirst("^(ampsieve( \\[[^\\]]*\\])?> |\\s+[\\w.-]+ \\[[^\\]]*\\] > )+", "");
+    }
 }

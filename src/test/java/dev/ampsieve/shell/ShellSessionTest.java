@@ -79,8 +79,8 @@ class ShellSessionTest {
     @Test
     void withoutAStageTheShellSaysHowToGetOne() {
         String printed = session("rank", "help");
-        assertTrue(printed.contains("'rank' needs a stage: type 'ask' to describe one, 'load FILE', or add --stage FILE"),
-                printed);
+        assertTrue(dev.ampsieve.testing.Flat.of(printed)
+                .contains("'rank' needs a stage: type 'ask' to describe one, 'load FILE', or add --stage FILE"), printed);
         assertTrue(printed.contains("The shell"), printed);
     }
 
@@ -180,11 +180,41 @@ class ShellSessionTest {
     @Test
     void theBannerSaysHowToBegin() {
         String printed = session();
-        assertTrue(printed.contains("Type ask to describe your stage, help for the commands"), printed);
+        assertTrue(dev.ampsieve.testing.Flat.of(printed).contains("Type ask to describe your stage, help for the commands"),
+                printed);
         Matcher m = Pattern.compile("Catalog \\S+: (\\d+) part\\(s\\)").matcher(printed);
         assertTrue(m.find(), printed);
         assertTrue(Integer.parseInt(m.group(1)) > 0, printed);
         assertTrue(dev.ampsieve.testing.Flat.of(printed).contains(dev.ampsieve.report.Caution.TEXT), printed);
-        assertTrue(printed.contains("0 error(s), 5 warning(s)"), printed);
+        assertTrue(dev.ampsieve.testing.Flat.of(printed).contains("0 error(s), 5 warning(s)"), printed);
+    }
+
+    @Test
+    void errorsAreFoldedToTheWidthAtWordBoundaries() throws Exception {
+        Path bad = dir.resolve("bad.yaml");
+        Files.writeString(bad, "gain: 100\nlimit: 2 parsecs\n");
+        String printed = session("set gain 100", "set limit 2 V/us", "load " + bad, "budget zz-nothing").replace("\r", "");
+        for (String line : printed.split("\n")) {
+            line = Sessions.withoutPrompts(line); // the dumb terminal leaves output on the prompt's line
+            assertTrue(line.length() <= 80, "longer than the dumb terminal's 80 columns: " + line + "\n" + printed);
+        }
+        String flat = dev.ampsieve.testing.Flat.of(printed);
+        // whole words on both sides of every fold: the flattened text reads as the message
+        assertTrue(flat.contains("limit: '2 V/us' is a slew rate but a voltage belongs here"), printed);
+        assertTrue(flat.contains("(" + Questions.why(Answers.LIMIT) + ")"), printed);
+        assertTrue(flat.contains(bad + ":2:8: limit:"), printed);
+    }
+
+    @Test
+    void messagesNameCommandsAsTheShellTakesThem() {
+        String printed = session("set gain 100", "set limit 1 mV", "budget zz-nothing-like-it", "help rank");
+        String flat = dev.ampsieve.testing.Flat.of(printed);
+        assertTrue(flat.contains("; 'check' lists what was read"), printed);
+        assertTrue(flat.contains("--query takes the language of 'find' (see 'find --help')"), printed);
+        assertFalse(printed.contains("'ampsieve "), printed);
+        // only where a command follows: the version in the banner keeps the program's name
+        assertTrue(printed.contains(new dev.ampsieve.cli.RootCommand.Version().getVersion()[0]), printed);
+        assertEquals("run 'check' or 'ampsieve-x check'; ampsieve 1.0",
+                Shell.withoutProgramName("run 'ampsieve check' or 'ampsieve-x check'; ampsieve 1.0", java.util.Set.of("check")));
     }
 }
