@@ -41,7 +41,18 @@ public final class CompareCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         Catalog catalog = root.catalog();
-        Part pa = BudgetCommand.find(catalog, a);
+        Part pa;
+        try {
+            pa = BudgetCommand.find(catalog, a);
+        } catch (UserException missingA) {
+            // name both unknown ids at once, so the user fixes the line in one go
+            try {
+                BudgetCommand.find(catalog, b);
+            } catch (UserException missingB) {
+                throw new UserException(missingA.getMessage() + "\nampsieve: " + missingB.getMessage(), ExitCode.FINDINGS);
+            }
+            throw missingA;
+        }
         Part pb = BudgetCommand.find(catalog, b);
         Stage stage = stageOption.load();
         Comparison c = Comparison.of(BudgetCalculator.compute(stage, pa), BudgetCalculator.compute(stage, pb));

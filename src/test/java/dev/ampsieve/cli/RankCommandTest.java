@@ -241,5 +241,10 @@ class RankCommandTest {
         assertEquals(ExitCode.FINDINGS, r.code());
         assertTrue(r.err().contains("no part 'prec-bip-2' in the catalog") && r.err().contains("did you mean 'prec-bip-02'?"),
                 r.err());
+        CliRun both = run("compare", "prec-bip-2", "zd-chop-1", "--stage", stage("thermocouple"));
+        assertEquals(ExitCode.FINDINGS, both.code());
+        assertTrue(both.err().contains("did you mean 'prec-bip-02'?") && both.err().contains("did you mean 'zd-chop-01'?"),
+                both.err());
+        assertEquals(2, both.err().lines().filter(l -> l.startsWith("ampsieve: no part")).count(), both.err());
     }
 }
