@@ -10,13 +10,12 @@ import dev.ampsieve.report.Glyphs;
 import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.Units;
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.stream.Stream;
 import org.junit.jupiter.api.BeforeAll;
+import dev.ampsieve.testing.DemoCatalog;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -30,18 +29,7 @@ class ChartCommandsTest {
 
     @BeforeAll
     static void copyDemo() throws IOException {
-        catalog = tmp.resolve("demo");
-        Path from = Path.of("demo-catalog");
-        try (Stream<Path> s = Files.walk(from)) {
-            for (Path p : s.filter(p -> !p.toString().contains(".ampsieve-index")).toList()) {
-                Path to = catalog.resolve(from.relativize(p).toString());
-                if (Files.isDirectory(p)) {
-                    Files.createDirectories(to);
-                } else {
-                    Files.copy(p, to);
-                }
-            }
-        }
+        catalog = DemoCatalog.copyTo(tmp);
     }
 
     static CliRun run(String... args) {

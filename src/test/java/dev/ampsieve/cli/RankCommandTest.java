@@ -8,12 +8,11 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import dev.ampsieve.report.Caution;
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.stream.Stream;
 import org.junit.jupiter.api.BeforeAll;
+import dev.ampsieve.testing.DemoCatalog;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -33,18 +32,7 @@ class RankCommandTest {
 
     @BeforeAll
     static void copyDemo() throws IOException {
-        catalog = tmp.resolve("demo");
-        Path from = Path.of("demo-catalog");
-        try (Stream<Path> s = Files.walk(from)) {
-            for (Path p : s.filter(p -> !p.toString().contains(".ampsieve-index")).toList()) {
-                Path to = catalog.resolve(from.relativize(p).toString());
-                if (Files.isDirectory(p)) {
-                    Files.createDirectories(to);
-                } else {
-                    Files.copy(p, to);
-                }
-            }
-        }
+        catalog = DemoCatalog.copyTo(tmp);
     }
 
     static String stage(String name) {

@@ -1,5 +1,6 @@
 package dev.ampsieve.shell;
 
+import dev.ampsieve.testing.DemoCatalog;
 import static java.nio.charset.StandardCharsets.UTF_8;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;

@@ -1,5 +1,6 @@
 package dev.ampsieve.shell;
 
+import dev.ampsieve.testing.DemoCatalog;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;

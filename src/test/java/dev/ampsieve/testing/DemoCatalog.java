@@ -1,4 +1,4 @@
-package dev.ampsieve.shell;
+package dev.ampsieve.testing;
 
 import java.io.IOException;
 import java.nio.file.Files;
@@ -6,11 +6,11 @@ import java.nio.file.Path;
 import java.util.stream.Stream;
 
 /** A copy of the shipped demo catalog, so its search index lands in a temporary folder. */
-final class DemoCatalog {
+public final class DemoCatalog {
     private DemoCatalog() {
     }
 
-    static Path copyTo(Path dir) throws IOException {
+    public static Path copyTo(Path dir) throws IOException {
         Path to = dir.resolve("demo");
         Path from = Path.of("demo-catalog");
         try (Stream<Path> s = Files.walk(from)) {
