@@ -11,8 +11,4 @@ public record Spread(Double typ, Double max, Double maxOverTemp) {
     public boolean isEmpty() {
         return typ == null && max == null && maxOverTemp == null;
     }
-
-    public boolean hasMax() {
-        return max != null;
-    }
 }

@@ -203,15 +203,6 @@ public final class Fields {
         return List.of();
     }
 
-    /** The nested mapping at {@code key}, or null (absent, or wrong kind with a problem). */
-    public Node.Mapping child(Node.Mapping m, String path, String key) {
-        Node v = m.entries().get(key);
-        if (v == null || v instanceof Node.Scalar s && s.text() == null) {
-            return null;
-        }
-        return mapping(v, join(path, key));
-    }
-
     /** Where the value of {@code key} was written (or the mapping itself when absent). */
     public static Located where(Node.Mapping m, String key) {
         Node v = m.entries().get(key);
