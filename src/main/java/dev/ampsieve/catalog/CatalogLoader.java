@@ -105,7 +105,9 @@ public final class CatalogLoader {
 
                         @Override
                         public FileVisitResult visitFileFailed(Path file, IOException e) {
-                            if (isCatalogFile(file) || Files.isDirectory(file)) {
+                            // a hidden folder is skipped even when it cannot be opened (a loop such as
+                            // '.ampsieve-index -> .' is caught here, before preVisitDirectory)
+                            if (isCatalogFile(file) || Files.isDirectory(file) && !file.getFileName().toString().startsWith(".")) {
                                 problems.add(Problem.error(Located.nowhere(file), "",
                                         "cannot read (" + YamlFiles.describe(e) + ")", "check its permissions"));
                             }

@@ -1,6 +1,7 @@
 package dev.ampsieve.cli;
 
 import dev.ampsieve.budget.BudgetCalculator;
+import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.report.BudgetBars;
 import dev.ampsieve.stage.Stage;
@@ -34,7 +35,9 @@ public final class BarsCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        Part part = BudgetCommand.find(root.catalog(), partId);
+        Catalog catalog = root.catalog();
+        Candidates.noteUnusedFiles(catalog, spec.commandLine().getErr());
+        Part part = BudgetCommand.find(catalog, partId);
         Stage stage = stageOption.load();
         String name = stageOption.name();
         spec.commandLine().getOut().print(BudgetBars.render(BudgetCalculator.compute(stage, part), name, root.outputStyle()));

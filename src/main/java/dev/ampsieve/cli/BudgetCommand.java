@@ -41,6 +41,7 @@ public final class BudgetCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         Catalog catalog = root.catalog();
+        Candidates.noteUnusedFiles(catalog, spec.commandLine().getErr());
         Part part = find(catalog, partId);
         Stage stage = stageOption.load();
         Budget b = BudgetCalculator.compute(stage, part);

@@ -2,26 +2,37 @@ package dev.ampsieve.cli;
 
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.search.FolderRefusal;
 import dev.ampsieve.search.Hit;
 import dev.ampsieve.search.PartIndex;
 import dev.ampsieve.search.PartQuery;
 import dev.ampsieve.search.QueryLanguage;
 import dev.ampsieve.yaml.InputException;
+import dev.ampsieve.yaml.Problem;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
 
 /** Shared steps of the commands that pick parts from the catalog through the index. */
 final class Candidates {
     private Candidates() {
     }
 
-    /** The catalog parts matching {@code queryText}, most relevant first, then cheapest. */
-    static List<Part> matching(Catalog catalog, String queryText) throws InputException, IOException {
+    /** Index notes already shown by this process: the shell runs many commands, each note is shown once. */
+    private static final Set<String> SHOWN = ConcurrentHashMap.newKeySet();
+
+    /**
+     * The catalog parts matching {@code queryText}, most relevant first, then cheapest. Folders the
+     * index left alone are noted on {@code err}.
+     */
+    static List<Part> matching(Catalog catalog, String queryText, PrintWriter err) throws InputException, IOException {
         PartQuery q = QueryLanguage.parse(queryText);
         List<Part> out = new ArrayList<>();
         try (PartIndex index = PartIndex.open(catalog)) {
+            noteRefusals(index, err);
             for (Hit h : index.search(q)) {
                 catalog.find(h.id()).ifPresent(out::add);
             }
@@ -29,13 +40,60 @@ final class Candidates {
         return out;
     }
 
-    /** A one-line note on stderr when catalog files with errors were left out. */
+    /**
+     * Each whole-file error on stderr as {@code check} prints it, then a one-line note when other
+     * catalog files with errors were left out.
+     */
     static void noteProblems(Catalog catalog, PrintWriter err) {
-        if (catalog.hasErrors()) {
-            long n = catalog.problems().stream().filter(dev.ampsieve.yaml.Problem::isError).count();
-            err.println("ampsieve: note: " + n + " catalog error(s); parts of files with errors are left out"
-                    + " ('ampsieve check' lists them)");
-            err.flush();
+        long shown = noteUnusedFiles(catalog, err);
+        long n = catalog.problems().stream().filter(Problem::isError).count() - shown;
+        if (n > 0) {
+            err.println("ampsieve: note: " + (shown > 0 ? n + " more" : n) + " catalog error(s); parts of files with errors"
+                    + " are left out ('ampsieve check' lists them)");
         }
+        err.flush();
+    }
+
+    /**
+     * The errors about a file or folder as a whole (line 0: it cannot be read, its link is dangling,
+     * it is too large ...), one line each as {@code check} prints them: every part in it is missing.
+     *
+     * @return how many lines were printed
+     */
+    static long noteUnusedFiles(Catalog catalog, PrintWriter err) {
+        long n = 0;
+        for (Problem p : catalog.problems()) {
+            if (p.isError() && p.line() == 0) {
+                err.println(p);
+                n++;
+            }
+        }
+        err.flush();
+        return n;
+    }
+
+    /** One line per folder the index would have used but left untouched, once per process. */
+    private static void noteRefusals(PartIndex index, PrintWriter err) {
+        String where = index.location() != null ? "in " + index.location() : "in memory for this run";
+        for (FolderRefusal r : index.refusals()) {
+            String what = switch (r.reason()) {
+                case SYMBOLIC_LINK -> "is a symbolic link, which the index never follows";
+                case NOT_A_FOLDER -> "is not a folder";
+                case FOREIGN_ENTRY -> "holds '" + r.entry().getFileName() + "', which is not part of an ampsieve index";
+                case UNREADABLE -> "cannot be listed";
+            };
+            String fix = switch (r.reason()) {
+                case SYMBOLIC_LINK -> "remove the link to let ampsieve make its own folder there";
+                case NOT_A_FOLDER -> "rename or remove it to let ampsieve make its own folder there";
+                case FOREIGN_ENTRY -> "move that out, or delete the folder, to let ampsieve use it";
+                case UNREADABLE -> "check its permissions";
+            };
+            String line = "ampsieve: note: " + r.folder() + " " + what + "; it was left untouched and the search index is kept "
+                    + where + " instead; " + fix;
+            if (SHOWN.add(line)) {
+                err.println(line);
+            }
+        }
+        err.flush();
     }
 }

@@ -41,6 +41,7 @@ public final class CompareCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         Catalog catalog = root.catalog();
+        Candidates.noteUnusedFiles(catalog, spec.commandLine().getErr());
         Part pa;
         try {
             pa = BudgetCommand.find(catalog, a);

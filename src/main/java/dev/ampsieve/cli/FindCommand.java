@@ -36,7 +36,7 @@ public final class FindCommand implements Callable<Integer> {
         Catalog catalog = root.catalog();
         Candidates.noteProblems(catalog, spec.commandLine().getErr());
         String text = String.join(" ", query).strip();
-        List<Part> parts = Candidates.matching(catalog, text);
+        List<Part> parts = Candidates.matching(catalog, text, spec.commandLine().getErr());
         spec.commandLine().getOut().print(json ? FindReport.json(text, parts) : FindReport.text(text, parts, root.textWidth()));
         return parts.isEmpty() ? ExitCode.FINDINGS : ExitCode.OK;
     }

@@ -59,7 +59,7 @@ public final class RankCommand implements Callable<Integer> {
         Catalog catalog = root.catalog();
         Candidates.noteProblems(catalog, spec.commandLine().getErr());
         Stage stage = stageOption.load();
-        List<Part> parts = query == null ? catalog.parts() : Candidates.matching(catalog, query);
+        List<Part> parts = query == null ? catalog.parts() : Candidates.matching(catalog, query, spec.commandLine().getErr());
         Ranking r = Ranker.rank(stage, parts, BudgetCalculator::compute);
         String label = stageOption.label();
         String name = stageOption.name(); // text headers stay within 100 columns

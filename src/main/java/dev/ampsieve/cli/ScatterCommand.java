@@ -51,7 +51,7 @@ public final class ScatterCommand implements Callable<Integer> {
         Catalog catalog = root.catalog();
         Candidates.noteProblems(catalog, spec.commandLine().getErr());
         Stage stage = stageOption.load();
-        List<Part> parts = query == null ? catalog.parts() : Candidates.matching(catalog, query);
+        List<Part> parts = query == null ? catalog.parts() : Candidates.matching(catalog, query, spec.commandLine().getErr());
         Ranking r = Ranker.rank(stage, parts, BudgetCalculator::compute);
         String name = stageOption.name();
         spec.commandLine().getOut().print(RankScatter.render(r, name, top, height, root.outputStyle()));

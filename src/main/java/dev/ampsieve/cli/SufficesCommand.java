@@ -2,6 +2,7 @@ package dev.ampsieve.cli;
 
 import dev.ampsieve.advice.Sufficiency;
 import dev.ampsieve.budget.BudgetCalculator;
+import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.report.SufficesReport;
 import dev.ampsieve.stage.Stage;
@@ -36,7 +37,9 @@ public final class SufficesCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        Part part = BudgetCommand.find(root.catalog(), partId);
+        Catalog catalog = root.catalog();
+        Candidates.noteUnusedFiles(catalog, spec.commandLine().getErr());
+        Part part = BudgetCommand.find(catalog, partId);
         Stage stage = stageOption.load();
         Sufficiency s = Sufficiency.of(BudgetCalculator.compute(stage, part));
         String label = stageOption.label();

@@ -1,44 +1,77 @@
 package dev.ampsieve.search;
 
 import dev.ampsieve.catalog.Catalog;
+import dev.ampsieve.catalog.CatalogLoader;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.yaml.Problem;
 import java.io.ByteArrayOutputStream;
 import java.io.DataOutputStream;
 import java.io.IOException;
+import java.io.InputStream;
 import java.io.UncheckedIOException;
 import java.lang.reflect.Method;
 import java.lang.reflect.RecordComponent;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.FileVisitOption;
+import java.nio.file.FileVisitResult;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.SimpleFileVisitor;
+import java.nio.file.attribute.BasicFileAttributes;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.EnumSet;
+import java.util.HashSet;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.Locale;
-import java.util.stream.Stream;
+import java.util.Set;
 
 /**
  * A SHA-256 over everything the index is built from: the schema version, every catalog file
- * (relative path and bytes; hidden folders such as the index itself are skipped) and the
- * parts as loaded. Stored in the index commit; any difference means the index is stale.
+ * (relative path and the SHA-256 of its bytes, listed as {@code CatalogLoader} lists them:
+ * links followed, hidden and {@code stages} folders skipped) and the parts as loaded. Stored in
+ * the index commit; any difference means the index is stale.
+ *
+ * <p>Never fails for what is on disk: a file the loader could not use as a whole (unreadable,
+ * too large, ...) is not read again, and a file that cannot be read now (gone, or changed since
+ * the load) counts by its name and a mark. The index itself is built from the parts alone, which
+ * are always hashed, so such a mark can cause an extra rebuild but never a stale index.
  */
 public final class CatalogFingerprint {
     private CatalogFingerprint() {
     }
 
     public static String of(Catalog catalog) {
+        return of(catalog, Files::newInputStream);
+    }
+
+    /** How a catalog file is opened; tests replace it to make a file vanish at the worst moment. */
+    interface Opener {
+        InputStream open(Path file) throws IOException;
+    }
+
+    static String of(Catalog catalog, Opener opener) {
         MessageDigest md = sha256();
         update(md, "schema " + Schema.VERSION);
         Path root = catalog.root();
-        for (Path f : catalogFiles(root)) {
-            update(md, root.relativize(f).toString().replace('\\', '/'));
-            try {
-                byte[] bytes = Files.readAllBytes(f);
-                update(md, Integer.toString(bytes.length));
-                md.update(bytes);
-            } catch (IOException e) {
-                throw new UncheckedIOException(e);
+        Set<Path> unused = new HashSet<>();
+        for (Problem p : catalog.problems()) {
+            // line 0: a problem with the file as a whole, whose parts were all left out
+            if (p.isError() && p.line() == 0 && p.file() != null) {
+                unused.add(p.file());
+            }
+        }
+        for (Listed f : catalogFiles(root)) {
+            update(md, f.relative());
+            if (!f.listed()) {
+                update(md, "cannot list");
+            } else if (unused.contains(f.path())) {
+                update(md, "not used");
+            } else {
+                update(md, contentHash(opener, f.path()));
             }
         }
         // the parts too: a loader change that reads the same files differently must also rebuild
@@ -120,32 +153,83 @@ public final class CatalogFingerprint {
         }
     };
 
-    /** Every *.yaml / *.yml file below {@code root}, outside hidden folders, sorted. */
-    static List<Path> catalogFiles(Path root) {
+    /** The hex SHA-256 of a file's bytes, or a mark saying why it could not be read. */
+    private static String contentHash(Opener opener, Path file) {
+        MessageDigest content = sha256();
+        byte[] buffer = new byte[64 * 1024];
+        try (InputStream in = opener.open(file)) {
+            for (int n; (n = in.read(buffer)) > 0; ) {
+                content.update(buffer, 0, n);
+            }
+        } catch (IOException e) {
+            return "cannot read " + e.getClass().getSimpleName();
+        }
+        return HexFormat.of().formatHex(content.digest());
+    }
+
+    /**
+     * A catalog file or a folder that could not be listed.
+     *
+     * @param relative the path below the root with '/' separators
+     * @param listed   false for an entry the walk could not open
+     */
+    record Listed(Path path, String relative, boolean listed) {
+    }
+
+    /**
+     * Every *.yaml / *.yml file below {@code root} the way {@code CatalogLoader} finds them (links
+     * followed; hidden files and folders and {@value CatalogLoader#STAGES_FOLDER} folders skipped),
+     * sorted by relative path; entries that cannot be opened are kept with {@code listed} false.
+     */
+    static List<Listed> catalogFiles(Path root) {
         if (root == null || !Files.isDirectory(root)) {
             return List.of();
         }
-        try (Stream<Path> s = Files.walk(root)) {
-            return s.filter(Files::isRegularFile)
-                    .filter(f -> {
-                        String n = f.getFileName().toString().toLowerCase(Locale.ROOT);
-                        return n.endsWith(".yaml") || n.endsWith(".yml");
-                    })
-                    .filter(f -> !hidden(root.relativize(f)))
-                    .sorted()
-                    .toList();
+        List<Listed> out = new ArrayList<>();
+        try {
+            Files.walkFileTree(root, EnumSet.of(FileVisitOption.FOLLOW_LINKS), Integer.MAX_VALUE,
+                    new SimpleFileVisitor<>() {
+                        @Override
+                        public FileVisitResult preVisitDirectory(Path dir, BasicFileAttributes attrs) {
+                            if (dir.equals(root)) {
+                                return FileVisitResult.CONTINUE;
+                            }
+                            String name = dir.getFileName().toString();
+                            return name.startsWith(".") || name.equals(CatalogLoader.STAGES_FOLDER)
+                                    ? FileVisitResult.SKIP_SUBTREE : FileVisitResult.CONTINUE;
+                        }
+
+                        @Override
+                        public FileVisitResult visitFile(Path file, BasicFileAttributes attrs) {
+                            if (attrs.isRegularFile() && isCatalogName(file)) {
+                                out.add(listed(root, file, true));
+                            }
+                            return FileVisitResult.CONTINUE;
+                        }
+
+                        @Override
+                        public FileVisitResult visitFileFailed(Path file, IOException e) {
+                            if (!file.getFileName().toString().startsWith(".")) {
+                                out.add(listed(root, file, false));
+                            }
+                            return FileVisitResult.CONTINUE;
+                        }
+                    });
         } catch (IOException e) {
-            throw new UncheckedIOException(e);
+            out.add(listed(root, root, false));
         }
+        out.sort(Comparator.comparing(Listed::relative));
+        return out;
     }
 
-    private static boolean hidden(Path relative) {
-        for (Path part : relative) {
-            if (part.toString().startsWith(".")) {
-                return true;
-            }
-        }
-        return false;
+    private static Listed listed(Path root, Path file, boolean ok) {
+        return new Listed(file, root.relativize(file).toString().replace('\\', '/'), ok);
+    }
+
+    private static boolean isCatalogName(Path file) {
+        String name = file.getFileName().toString();
+        String lower = name.toLowerCase(Locale.ROOT);
+        return !name.startsWith(".") && (lower.endsWith(".yaml") || lower.endsWith(".yml"));
     }
 
     private static void update(MessageDigest md, String s) {

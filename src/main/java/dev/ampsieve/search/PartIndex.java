@@ -39,9 +39,11 @@ import org.apache.lucene.util.BytesRef;
 /**
  * The searchable index of a catalog. It is a cache: {@link #open} reuses the one on disk
  * when its stored fingerprint ({@link CatalogFingerprint}) matches the catalog, and otherwise
- * brings it up to date. A missing, truncated or corrupt index is deleted and rebuilt; when
- * another process holds the write lock, a current index is opened read-only and a stale one
- * is replaced by a private in-memory index for this run. Deleting the folder is always safe.
+ * brings it up to date. A missing, truncated or corrupt index is rebuilt, deleting only files
+ * Lucene's index file names match; when another process holds the write lock, a current index
+ * is opened read-only and a stale one is replaced by a private in-memory index for this run.
+ * Only a folder ampsieve made is used ({@link IndexFolder}); any other is left untouched, named
+ * in {@link #refusals()}, and the next place is tried. Deleting the folder is always safe.
  */
 public final class PartIndex implements Closeable {
 
@@ -67,13 +69,16 @@ public final class PartIndex implements Closeable {
     private final IndexSearcher searcher;
     private final Source source;
     private final Path location;
+    private final List<FolderRefusal> refusals;
 
-    private PartIndex(Directory directory, DirectoryReader reader, Source source, Path location) {
+    private PartIndex(Directory directory, DirectoryReader reader, Source source, Path location,
+            List<FolderRefusal> refusals) {
         this.directory = directory;
         this.reader = reader;
         this.searcher = new IndexSearcher(reader);
         this.source = source;
         this.location = location;
+        this.refusals = List.copyOf(refusals);
     }
 
     public Source source() {
@@ -85,20 +90,59 @@ public final class PartIndex implements Closeable {
         return location;
     }
 
-    /** Opens the index of {@code catalog} at its usual place ({@link IndexLocation#choose}). */
-    public static PartIndex open(Catalog catalog) {
-        return open(catalog, IndexLocation.choose(catalog.root()));
+    /** Folders this open left untouched because ampsieve did not make them, in the order tried. */
+    public List<FolderRefusal> refusals() {
+        return refusals;
     }
 
-    /** Opens (building or repairing as needed) the index of {@code catalog} in {@code folder}. */
+    /** Opens the index of {@code catalog} at its usual place ({@link IndexLocation#candidates}). */
+    public static PartIndex open(Catalog catalog) {
+        return open(catalog, System.getenv(), Path.of(System.getProperty("user.home", ".")));
+    }
+
+    /** As {@link #open(Catalog)} with the environment and home folder given (tests). */
+    static PartIndex open(Catalog catalog, Map<String, String> env, Path home) {
+        String fingerprint = CatalogFingerprint.of(catalog);
+        List<FolderRefusal> refusals = new ArrayList<>();
+        for (Path folder : IndexLocation.candidates(catalog.root(), env, home, Files::isWritable)) {
+            PartIndex index = openIn(catalog, folder, fingerprint, refusals);
+            if (index != null) {
+                return index;
+            }
+        }
+        return inMemory(catalog, fingerprint, refusals);
+    }
+
+    /** Opens (building or repairing as needed) the index of {@code catalog} in {@code folder}, else in memory. */
     public static PartIndex open(Catalog catalog, Path folder) {
         String fingerprint = CatalogFingerprint.of(catalog);
+        List<FolderRefusal> refusals = new ArrayList<>();
+        PartIndex index = openIn(catalog, folder.toAbsolutePath().normalize(), fingerprint, refusals);
+        return index != null ? index : inMemory(catalog, fingerprint, refusals);
+    }
+
+    /**
+     * The index in {@code folder}, or in memory when the folder is ours but no index can be had
+     * there; null when the folder is not ours ({@code refusals} then names it) or cannot be made,
+     * so the caller may try another place.
+     */
+    private static PartIndex openIn(Catalog catalog, Path folder, String fingerprint, List<FolderRefusal> refusals) {
         FSDirectory fs;
         try {
-            Files.createDirectories(folder);
+            FolderRefusal refused = IndexFolder.claim(folder);
+            if (refused != null) {
+                refusals.add(refused);
+                return null;
+            }
             fs = FSDirectory.open(folder);
+            // FSDirectory works on the folder's real path: were the folder swapped for a link since
+            // the check, that path would lie elsewhere
+            if (!fs.getDirectory().equals(folder.getParent().toRealPath().resolve(folder.getFileName()))) {
+                closeQuietly(fs);
+                return null;
+            }
         } catch (IOException e) {
-            return inMemory(catalog, fingerprint);
+            return null;
         }
         boolean damaged = false;
         for (int attempt = 0; attempt < 2; attempt++) {
@@ -107,14 +151,14 @@ public final class PartIndex implements Closeable {
                 DirectoryReader r = openVerified(fs, fingerprint);
                 if (r != null) {
                     Source s = damaged ? Source.REBUILT : built ? Source.BUILT : Source.REUSED;
-                    return new PartIndex(fs, r, s, folder);
+                    return new PartIndex(fs, r, s, folder, refusals);
                 }
                 damaged = true; // a commit we just made does not read back: treat as damage
             } catch (LockObtainFailedException e) {
                 // another process is writing: read its index if it is current, else keep to memory
                 DirectoryReader r = readOnly(fs, fingerprint);
                 if (r != null) {
-                    return new PartIndex(fs, r, Source.READ_ONLY, folder);
+                    return new PartIndex(fs, r, Source.READ_ONLY, folder, refusals);
                 }
                 break;
             } catch (IOException | RuntimeException e) {
@@ -127,21 +171,21 @@ public final class PartIndex implements Closeable {
             }
         }
         closeQuietly(fs);
-        return inMemory(catalog, fingerprint);
+        return inMemory(catalog, fingerprint, refusals);
     }
 
     /** A private index in memory (when no folder can be used). */
     public static PartIndex inMemory(Catalog catalog) {
-        return inMemory(catalog, CatalogFingerprint.of(catalog));
+        return inMemory(catalog, CatalogFingerprint.of(catalog), List.of());
     }
 
-    private static PartIndex inMemory(Catalog catalog, String fingerprint) {
+    private static PartIndex inMemory(Catalog catalog, String fingerprint, List<FolderRefusal> refusals) {
         Directory mem = new ByteBuffersDirectory();
         try {
             try (IndexWriter w = new IndexWriter(mem, config())) {
                 reindex(w, catalog.parts(), fingerprint);
             }
-            return new PartIndex(mem, DirectoryReader.open(mem), Source.MEMORY, null);
+            return new PartIndex(mem, DirectoryReader.open(mem), Source.MEMORY, null, refusals);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot build the index in memory", e);
         }
@@ -214,13 +258,17 @@ public final class PartIndex implements Closeable {
         }
     }
 
-    /** Deletes every index file under the write lock; false when another process holds it. */
+    /**
+     * Deletes the index files under the write lock: only regular files whose names Lucene's
+     * index file names match ({@link IndexFolder#deletable}); the marker, the lock and anything
+     * else stay. False when another process holds the lock.
+     */
     private static boolean wipe(FSDirectory fs) {
         try (Lock lock = fs.obtainLock(IndexWriter.WRITE_LOCK_NAME)) {
             lock.ensureValid();
             try (Stream<Path> files = Files.list(fs.getDirectory())) {
                 for (Path f : files.toList()) {
-                    if (!f.getFileName().toString().equals(IndexWriter.WRITE_LOCK_NAME)) {
+                    if (IndexFolder.deletable(f)) {
                         Files.deleteIfExists(f);
                     }
                 }
