@@ -1,6 +1,7 @@
 package dev.ampsieve.search;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 
 import dev.ampsieve.catalog.Architecture;
@@ -8,14 +9,20 @@ import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.CatalogLoader;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.catalog.Spread;
+import java.io.IOException;
 import java.lang.reflect.RecordComponent;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.nio.file.attribute.PosixFilePermissions;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.function.UnaryOperator;
+import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 /**
  * The fingerprint decides whether the index on disk is stale (issue 4, point 1: rebuilt when
@@ -83,6 +90,131 @@ class CatalogFingerprintTest {
             }
         }
         assertEquals(base, fingerprintWithFirstPart(c, with(p, Map.of())), "an unchanged copy");
+    }
+
+    @TempDir
+    Path dir;
+
+    /** Two demo catalog files in a temporary catalog folder. */
+    private Path twoFiles() throws IOException {
+        Files.copy(Path.of("demo-catalog/zero-drift/zd-az-07.yaml"), dir.resolve("one.yaml"));
+        Files.copy(Path.of("demo-catalog/zero-drift/chopper.yaml"), dir.resolve("two.yaml"));
+        return dir;
+    }
+
+    /**
+     * A catalog file that fails to read as any user: a link to /proc/self/mem stats as a regular
+     * file and every read at offset 0 fails with EIO (Linux procfs; address 0 is never mapped).
+     */
+    private Path unreadableForAnyone(String name) throws IOException {
+        Path mem = Path.of("/proc/self/mem");
+        Assumptions.assumeTrue(Files.isRegularFile(mem), "no /proc/self/mem (not Linux): skipped");
+        return Files.createSymbolicLink(dir.resolve(name), mem);
+    }
+
+    @Test
+    void aFileTheLoaderCouldNotReadIsNotOpenedAgain() throws Exception {
+        twoFiles();
+        Path broken = unreadableForAnyone("broken.yaml");
+        Catalog c = CatalogLoader.load(dir, false);
+        assertEquals(broken, c.problems().get(0).file(), "the loader reports it: " + c.problems());
+        List<Path> opened = new ArrayList<>();
+        CatalogFingerprint.of(c, f -> {
+            opened.add(f);
+            return Files.newInputStream(f);
+        });
+        assertEquals(List.of(dir.resolve("one.yaml"), dir.resolve("two.yaml")), opened);
+    }
+
+    @Test
+    void aFileThatFailsToReadNowCountsByAMarkInsteadOfFailing() throws Exception {
+        twoFiles();
+        Catalog c = CatalogLoader.load(dir, true);
+        Path broken = unreadableForAnyone("broken.yaml"); // appears after the load, so nothing says it is unreadable
+        String viaTheDisk = CatalogFingerprint.of(c);
+        // the same mark as any other plain I/O failure on that file, whatever its content
+        String viaAFailure = CatalogFingerprint.of(c, f -> {
+            if (f.equals(broken)) {
+                throw new IOException("Input/output error");
+            }
+            return Files.newInputStream(f);
+        });
+        assertEquals(viaAFailure, viaTheDisk);
+        Files.delete(broken);
+        assertNotEquals(CatalogFingerprint.of(c), viaTheDisk, "a failed file still counts by its name");
+    }
+
+    @Test
+    void aFileThatVanishesBetweenListingAndReadingCountsByAMark() throws Exception {
+        twoFiles();
+        Catalog c = CatalogLoader.load(dir, true);
+        String intact = CatalogFingerprint.of(c);
+        Path two = dir.resolve("two.yaml");
+        String vanished = CatalogFingerprint.of(c, f -> {
+            if (f.equals(two)) {
+                Files.delete(f); // another program removes it at the worst moment
+            }
+            return Files.newInputStream(f);
+        });
+        assertNotEquals(intact, vanished);
+        // the mark names the failure, not the content: the same for a file that is back with other bytes
+        Files.writeString(two, "# rewritten\n");
+        String missingAgain = CatalogFingerprint.of(c, f -> {
+            if (f.equals(two)) {
+                throw new NoSuchFileException(f.toString());
+            }
+            return Files.newInputStream(f);
+        });
+        assertEquals(vanished, missingAgain);
+    }
+
+    @Test
+    void anUnreadableFolderCountsByAMarkInsteadOfFailing() throws Exception {
+        twoFiles();
+        Path locked = Files.createDirectory(dir.resolve("locked"));
+        Files.copy(Path.of("demo-catalog/zero-drift/auto-zero.yaml"), locked.resolve("three.yaml"));
+        Catalog c = CatalogLoader.load(dir, false);
+        String readable = CatalogFingerprint.of(c);
+        Files.setPosixFilePermissions(locked, PosixFilePermissions.fromString("---------"));
+        try {
+            Assumptions.assumeFalse(Files.isReadable(locked), "running as root, who reads any folder: skipped");
+            String unreadable = CatalogFingerprint.of(c);
+            assertNotEquals(readable, unreadable);
+            assertEquals(unreadable, CatalogFingerprint.of(c));
+        } finally {
+            Files.setPosixFilePermissions(locked, PosixFilePermissions.fromString("rwx------"));
+        }
+    }
+
+    @Test
+    void filesCountAsTheLoaderFindsThem() throws Exception {
+        twoFiles();
+        Catalog c = CatalogLoader.load(dir, true);
+        String base = CatalogFingerprint.of(c);
+        // the loader reads neither stage files nor hidden folders (the index lives in one)
+        Files.createDirectories(dir.resolve("stages"));
+        Files.writeString(dir.resolve("stages/stage.yaml"), "# a stage\n");
+        Files.createDirectories(dir.resolve(".hidden"));
+        Files.writeString(dir.resolve(".hidden/x.yaml"), "# hidden\n");
+        Files.writeString(dir.resolve(".dot.yaml"), "# hidden\n");
+        assertEquals(base, CatalogFingerprint.of(c));
+        // but it follows a linked folder
+        Path elsewhere = Files.createDirectories(dir.resolveSibling(dir.getFileName() + "-more"));
+        try {
+            Files.writeString(elsewhere.resolve("more.yaml"), "# more parts\n");
+            Files.createSymbolicLink(dir.resolve("linked"), elsewhere);
+            assertEquals(dir.resolve("linked/more.yaml"), CatalogFingerprint.catalogFiles(dir).get(0).path());
+            assertNotEquals(base, CatalogFingerprint.of(c));
+        } finally {
+            Files.delete(elsewhere.resolve("more.yaml"));
+            Files.delete(elsewhere);
+        }
+        // a link to a folder above is a loop the walk reports: one entry that cannot be listed, not a failure
+        Files.delete(dir.resolve("linked"));
+        Files.createSymbolicLink(dir.resolve("loop"), Path.of("."));
+        List<CatalogFingerprint.Listed> listed = CatalogFingerprint.catalogFiles(dir);
+        assertEquals(List.of("loop", "one.yaml", "two.yaml"), listed.stream().map(CatalogFingerprint.Listed::relative).toList());
+        assertFalse(listed.get(0).listed());
     }
 
     private static Map<String, Object> put(Map<String, Object> m, String k, Object v) {
