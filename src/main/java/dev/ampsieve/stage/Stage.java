@@ -15,9 +15,10 @@ import dev.ampsieve.yaml.Located;
  * @param supplyVoltage     total supply (V), null when not stated
  * @param supplyVariation   peak supply change (V) seen by PSRR
  * @param commonModeSwing   peak common-mode change (V) seen by CMRR
- * @param commonModeRange   input common-mode range needed, volts above the negative rail (null: centred default)
- * @param outputRange       output range needed, volts above the negative rail (null: centred default)
- * @param fullScaleOutput   largest output magnitude (V), null when not stated
+ * @param commonModeRange   input common-mode range needed, volts above the negative rail (null: mid-supply +/- commonModeSwing)
+ * @param outputRange       output range needed, volts above the negative rail (null: mid-supply +/- fullScaleOutput)
+ * @param fullScaleOutput   full-scale output: the peak output excursion from the output's zero (V), the
+ *                          amplitude of a full-scale sine; null when not stated
  * @param serviceLife       seconds of operation for long-term drift
  * @param quantity          build quantity (for price)
  * @param maxPrice          price ceiling per unit, null for none

@@ -126,19 +126,22 @@ class HandCheckedBudgetTest {
         near(1.25e-6, b.term("drift").outputV(), "drift");
         // over temperature IB 2.5 nA, IOS 4 nA: |R+ - Rf| IB + (R+ + Rf) IOS/2 = 100 x 2.5 nA + 100 x 2 nA
         near(450e-9, b.term("bias").outputV(), "bias");
-        // 4 V x 10^(-115/20) = 4 x 1.778279 µV/V; supply 0.25 V x 1.778279 µV/V
-        near(7.113118e-6, b.term("cmrr").outputV(), "cmrr");
+        // common-mode swing 2 V peak (the stage file's re-stated value) x 10^(-115/20) = 2 x 1.778279 µV/V;
+        // supply 0.25 V x 1.778279 µV/V
+        near(3.556559e-6, b.term("cmrr").outputV(), "cmrr");
         near(444.5699e-9, b.term("psrr").outputV(), "psrr");
-        // 4 V x 1/(10^6 + 1)
-        near(3.999996e-6, b.term("open-loop-gain").outputV(), "aol");
-        // 4 V x (1 - 1/sqrt(1 + (20 kHz / 5 MHz)^2)) = 4 x 7.999904e-6
-        near(31.99962e-6, b.term("bandwidth").outputV(), "bandwidth");
+        // full-scale output 2 V peak (0.05..4.05 V span = 2.05 V +/- 2 V): 2 V x 1/(10^6 + 1)
+        near(1.999998e-6, b.term("open-loop-gain").outputV(), "aol");
+        // 2 V x (1 - 1/sqrt(1 + (20 kHz / 5 MHz)^2)) = 2 x 7.999904e-6
+        near(15.99981e-6, b.term("bandwidth").outputV(), "bandwidth");
         assertEquals(0.0, b.term("resistors").outputV(), 0.0, "a follower has no gain resistors");
         // fN = (π/2) x 20 kHz = 31 415.93 Hz: (25e-18 + 1.646561e-20 x 100 + 0.16e-24 x 1e4) x 31 415.83
         // = 2.664816e-17 x 31 415.83 -> 914.9721 nV rms
         near(914.9721e-9, b.noiseRmsV(), "noise rms");
-        near(58.27671e-6, b.worstCaseV(), "worst-case");
-        near(34.66484e-6, b.rssV(), "rss");
-        assertEquals(Verdict.FITS, b.verdict(), "RSS criterion: 34.7 µV of 125 µV");
+        // 10 + 1.25 + 0.45 + 3.556559 + 0.4445699 + 1.999998 + 15.99981 + 3.3 x 0.9149721 µV
+        near(36.72034e-6, b.worstCaseV(), "worst-case");
+        // root of the sum of the squares of the same eight terms
+        near(19.58883e-6, b.rssV(), "rss");
+        assertEquals(Verdict.FITS, b.verdict(), "RSS criterion: 19.6 µV of 125 µV");
     }
 }
