@@ -80,6 +80,16 @@ public record Stage(
         };
     }
 
+    /**
+     * |signal gain|: the factor from the signal source to the output. Input-referred figures
+     * (the input form of the limit, the budget's input column) are referred to the signal source
+     * by it, not by the noise gain: for an inverting stage that is Rf/(Rg + Rs), while the noise
+     * gain 1 + Rf/(Rg + Rs) is the factor for the amplifier's own input errors.
+     */
+    public double sourceGain() {
+        return Math.abs(signalGain());
+    }
+
     /** Resistance seen from the - input: Rf || Rg (inverting Rf || (Rg + Rs)); follower Rf. */
     public double rMinus() {
         if (topology == Topology.FOLLOWER) {
@@ -109,6 +119,6 @@ public record Stage(
 
     /** The error limit in output volts. */
     public double limitVolts() {
-        return limit.outputVolts(noiseGain(), fullScaleOutput);
+        return limit.outputVolts(sourceGain(), fullScaleOutput);
     }
 }

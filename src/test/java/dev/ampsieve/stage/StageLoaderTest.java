@@ -202,13 +202,15 @@ class StageLoaderTest {
         }
 
         @Test
-        void inputReferredLimitIsMultipliedByTheNoiseGain() throws InputException {
-            // input-referred errors reach the output times NG (reference-checks.md §2): 10 uV x 100 = 1 mV
+        void inputReferredLimitIsMultipliedByTheSignalGain() throws InputException {
+            // an input-referred limit is at the signal source (error-model.md): times |signal gain|.
+            // non-inverting 1 + 99k/1k = 100: 10 uV x 100 = 1 mV
             Stage s = stage("rf: 99 kohm\nrg: 1 kohm\nlimit:\n  input: 10 uV\n");
             assertEquals(Limit.Kind.INPUT, s.limit().kind());
             assertEquals(1e-3, s.limitVolts(), 1e-15);
+            // re-derived: inverting 99k/1k has signal gain -99 (noise gain 100): 10 uV x 99 = 0.99 mV
             Stage inv = stage("topology: inverting\nrf: 99 kohm\nrg: 1 kohm\nlimit:\n  input: 10 uV\n");
-            assertEquals(1e-3, inv.limitVolts(), 1e-15); // noise gain 100, not the signal gain 99
+            assertEquals(0.99e-3, inv.limitVolts(), 1e-15);
         }
 
         @Test
