@@ -17,6 +17,8 @@ import dev.ampsieve.yaml.Located;
  * @param commonModeSwing   peak common-mode change (V) seen by CMRR
  * @param commonModeRange   input common-mode range needed, volts above the negative rail (null: mid-supply +/- commonModeSwing)
  * @param outputRange       output range needed, volts above the negative rail (null: mid-supply +/- fullScaleOutput)
+ * @param filterOrder       order of the Butterworth low-pass at bandHigh that limits the noise band; 0: no
+ *                          filter (only the closed-loop bandwidth GBW/NG does); null: not stated, counted as 0
  * @param fullScaleOutput   full-scale output: the peak output excursion from the output's zero (V), the
  *                          amplitude of a full-scale sine; null when not stated
  * @param serviceLife       seconds of operation for long-term drift
@@ -40,6 +42,7 @@ public record Stage(
         Range outputRange,
         double bandLow,
         double bandHigh,
+        Integer filterOrder,
         Double fullScaleOutput,
         double ratioTolerance,
         double ratioTempco,
@@ -57,6 +60,23 @@ public record Stage(
 
     /** Reference temperature of datasheet 25 °C columns and of a one-point trim. */
     public static final double T_REF = 25.0;
+
+    /** {@link #filterOrder()} of a stage whose noise only the amplifier's closed-loop bandwidth limits. */
+    public static final int NO_FILTER = 0;
+
+    /** Highest filter order a stage may name; beyond it the noise bandwidth is within 0.7 % of band.high. */
+    public static final int MAX_FILTER_ORDER = 8;
+
+    public Stage {
+        if (filterOrder != null && (filterOrder < NO_FILTER || filterOrder > MAX_FILTER_ORDER)) {
+            throw new IllegalArgumentException("filter order " + filterOrder + " outside 0.." + MAX_FILTER_ORDER);
+        }
+    }
+
+    /** The filter order the noise band is computed with: {@link #NO_FILTER} when the stage names none. */
+    public int noiseFilterOrder() {
+        return filterOrder == null ? NO_FILTER : filterOrder;
+    }
 
     /** Effective gain resistor: inverting stages see the source in series with Rg. */
     public double rgEffective() {
@@ -113,7 +133,7 @@ public record Stage(
     /** The same stage said to come from {@code place} (null: typed in); for comparing stages read from different files. */
     public Stage withWhere(Located place) {
         return new Stage(topology, rf, rg, sourceResistance, balanceResistance, tMin, tMax, supplyVoltage, supplyVariation,
-                commonModeSwing, commonModeRange, outputRange, bandLow, bandHigh, fullScaleOutput, ratioTolerance, ratioTempco,
+                commonModeSwing, commonModeRange, outputRange, bandLow, bandHigh, filterOrder, fullScaleOutput, ratioTolerance, ratioTempco,
                 serviceLife, limit, criterion, maxToSigma, trials, seed, trim, quantity, maxPrice, acCoupled, place);
     }
 

@@ -88,6 +88,9 @@ public final class StageKeys {
     public static final List<String> TOPOLOGIES = List.of("non-inverting", "inverting", "follower");
     public static final List<String> CRITERIA = List.of("worst-case", "rss", "yield 99.9 %");
     public static final List<String> TRIM_METHODS = List.of("one-point", "two-point");
+    /** band.filter-order: "none", or the order of the Butterworth low-pass at band.high, 1..{@link Stage#MAX_FILTER_ORDER}. */
+    public static final List<String> FILTER_ORDERS = java.util.stream.Stream.concat(java.util.stream.Stream.of("none"),
+            java.util.stream.IntStream.rangeClosed(1, Stage.MAX_FILTER_ORDER).mapToObj(String::valueOf)).toList();
 
     private static Key q(String path, Dimension d, String def, String example, String why) {
         return new Key(path, Kind.QUANTITY, d, List.of(), def, example, why);
@@ -135,7 +138,13 @@ public final class StageKeys {
             q("band.low", Dimension.FREQUENCY, "0.1 Hz", "0.1 Hz",
                     "lower edge for integrating 1/f noise (must be above 0 Hz)"),
             q("band.high", Dimension.FREQUENCY, "10 Hz", "1 kHz",
-                    "upper signal frequency: noise bandwidth, closed-loop gain error, slew rate"),
+                    "upper signal frequency: closed-loop gain error, slew rate, and the corner of the filter "
+                            + "named by band.filter-order"),
+            k("band.filter-order", Kind.CHOICE, FILTER_ORDERS,
+                    "none", "2",
+                    "sets the noise bandwidth: the order of a Butterworth low-pass at band.high after the amplifier "
+                            + "(1, an RC: pi/2 x band.high; 2: 1.11 x; 3: 1.05 x), never beyond pi/2 x GBW/NG; 'none' (the "
+                            + "default, which never understates the noise): only the closed-loop bandwidth GBW/NG limits it"),
             q("supply.voltage", Dimension.VOLTAGE, "none", "5 V", "the part must run from this total supply"),
             q("supply.variation", Dimension.VOLTAGE, "0 V", "0.25 V",
                     "peak supply change; multiplied by the part's supply rejection"),

@@ -384,6 +384,19 @@ class StageLoaderTest {
         }
 
         @Test
+        void filterOrderIsNoneOrOneToEight() throws InputException {
+            assertEquals(null, stage("gain: 10\nlimit: 1 mV\n").filterOrder()); // not stated: counted as no filter
+            assertEquals(Stage.NO_FILTER, stage("gain: 10\nlimit: 1 mV\n").noiseFilterOrder());
+            assertEquals(Stage.NO_FILTER, stage("gain: 10\nlimit: 1 mV\nband: {filter-order: none}\n").filterOrder());
+            assertEquals(4, stage("gain: 10\nlimit: 1 mV\nband: {high: 1 kHz, filter-order: 4}\n").filterOrder());
+            String nine = problem("gain: 10\nlimit: 1 mV\nband: {filter-order: 9}\n");
+            assertEquals("s.yaml:3:22: band.filter-order: '9' is not a filter order; write 'none' when no filter after the "
+                    + "amplifier limits the band, or the filter's order, 1 to 8 (an RC is 1)", nine);
+            String word = problem("gain: 10\nlimit: 1 mV\nband:\n  filter-order: rc\n");
+            assertTrue(word.startsWith("s.yaml:4:17: band.filter-order: 'rc' is not a filter order;"), word);
+        }
+
+        @Test
         void percentLimitNeedsFullScale() {
             assertEquals("s.yaml:2:32: limit.percent-of-full-scale: a share of full scale needs the full-scale output; "
                             + "add 'full-scale-output: 2.5 V', or give the limit in volts",
