@@ -473,16 +473,16 @@ public final class Advisor {
         final double upper = hi;
         java.util.function.DoublePredicate ok = x -> fits.test(StageEdit.withLimit(stage, Limit.output(x)));
         double needed = reportSmallest(Bisection.smallest(ok, e, upper), ok);
-        double ng = stage.noiseGain();
+        double g = stage.sourceGain(); // input-referred means at the signal source
         Map<String, Double> v = new LinkedHashMap<>();
         v.put("limitV", needed);
-        v.put("limitInputV", needed / ng);
+        v.put("limitInputV", needed / g);
         Limit l = stage.limit();
         StringBuilder text = new StringBuilder("a limit of ");
         // said the way the user wrote the limit, with the output figure beside it
         switch (l.kind()) {
             // each figure in the user's form rounded toward the looser side, so that the limit as printed fits
-            case INPUT -> text.append(volts(Phrases.round3Up(needed / ng))).append(" at the input (").append(volts(needed))
+            case INPUT -> text.append(volts(Phrases.round3Up(needed / g))).append(" at the input (").append(volts(needed))
                     .append(" at the output) or looser (now ").append(volts(l.value())).append(" at the input)");
             case LSB -> {
                 double lsb = l.reference() / Math.pow(2, l.bits());
@@ -496,7 +496,7 @@ public final class Advisor {
                 text.append(Units.format(Phrases.round3Up(needed / fs), Dimension.RATIO)).append(" of full scale (").append(volts(needed))
                         .append(" at the output) or looser (now ").append(Units.format(l.value(), Dimension.RATIO)).append(")");
             }
-            case OUTPUT -> text.append(volts(needed)).append(" at the output (").append(volts(needed / ng))
+            case OUTPUT -> text.append(volts(needed)).append(" at the output (").append(volts(needed / g))
                     .append(" at the input) or looser (now ").append(volts(e)).append(")");
         }
         return java.util.Optional.of(new Change(Change.Kind.LOOSER_LIMIT, text.toString(), v));

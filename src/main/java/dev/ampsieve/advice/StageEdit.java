@@ -13,7 +13,7 @@ final class StageEdit {
     static Stage withRf(Stage s, double rf) {
         return new Stage(s.topology(), rf, s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
-                s.bandLow(), s.bandHigh(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
+                s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
                 s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
                 s.acCoupled(), s.where());
     }
@@ -21,7 +21,7 @@ final class StageEdit {
     static Stage withSourceResistance(Stage s, double rs) {
         return new Stage(s.topology(), s.rf(), s.rg(), rs, s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
-                s.bandLow(), s.bandHigh(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
+                s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
                 s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
                 s.acCoupled(), s.where());
     }
@@ -29,7 +29,7 @@ final class StageEdit {
     static Stage withTemperature(Stage s, double tMin, double tMax) {
         return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), tMin, tMax,
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
-                s.bandLow(), s.bandHigh(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
+                s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
                 s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
                 s.acCoupled(), s.where());
     }
@@ -37,7 +37,7 @@ final class StageEdit {
     static Stage withLimit(Stage s, Limit limit) {
         return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
-                s.bandLow(), s.bandHigh(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
+                s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
                 limit, s.criterion(), s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
                 s.acCoupled(), s.where());
     }
@@ -51,7 +51,7 @@ final class StageEdit {
     static Stage withResistors(Stage s, double k) {
         return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
-                s.bandLow(), s.bandHigh(), s.fullScaleOutput(), s.ratioTolerance() * k, s.ratioTempco() * k,
+                s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance() * k, s.ratioTempco() * k,
                 s.serviceLife(), s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(),
                 s.maxPrice(), s.acCoupled(), s.where());
     }
@@ -59,7 +59,7 @@ final class StageEdit {
     static Stage withCriterion(Stage s, Criterion criterion) {
         return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
-                s.bandLow(), s.bandHigh(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
+                s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
                 s.limit(), criterion, s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
                 s.acCoupled(), s.where());
     }
@@ -67,7 +67,7 @@ final class StageEdit {
     static Stage withTrim(Stage s, Trim trim) {
         return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
-                s.bandLow(), s.bandHigh(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
+                s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
                 s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.seed(), trim, s.quantity(), s.maxPrice(),
                 s.acCoupled(), s.where());
     }

@@ -6,7 +6,8 @@ import dev.ampsieve.units.Units;
 
 /**
  * Term 7, closed-loop bandwidth: amplitude error at the band edge
- * {@code VFS * (1 - 1/sqrt(1 + (fH*NG/GBW)²))}, volts at the output. The closed loop is a
+ * {@code VFS * (1 - 1/sqrt(1 + (fH*NG/GBW)²))}, volts at the output, VFS the peak amplitude
+ * of a full-scale sine at fH. The closed loop is a
  * single pole at GBW/NG (Franco, 4th ed., ch. 6; Sedra &amp; Smith, 7th ed., ch. 2
  * [from memory]); valid for a dominant-pole amplifier well below its second pole.
  */

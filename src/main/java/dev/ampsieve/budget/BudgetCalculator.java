@@ -223,6 +223,15 @@ public final class BudgetCalculator {
         if (stage.fullScaleOutput() == null) {
             w.add("full-scale-output: not given; gain errors (open-loop gain, bandwidth, resistors) are not counted");
         }
+        double loop = part.gbw() / stage.noiseGain();
+        if (stage.filterOrder() == null && loop > stage.bandHigh()) {
+            // the conservative default (NoiseModel.noiseBandEdge): say so, since a filter the user forgot to name costs noise
+            w.add("band.filter-order: not given; noise is integrated to pi/2 x the closed-loop bandwidth "
+                    + Units.format(loop, Dimension.FREQUENCY) + " = " + Units.format(NoiseModel.SINGLE_POLE_ENBW * loop, Dimension.FREQUENCY)
+                    + ", as if nothing after the amplifier limited it (a first-order filter at band.high would end it at "
+                    + Units.format(NoiseModel.SINGLE_POLE_ENBW * stage.bandHigh(), Dimension.FREQUENCY)
+                    + "); give the filter's order if one follows");
+        }
         if (stage.acCoupled()) {
             w.add("ac-coupled: offset, drift, bias and aging count only toward output headroom, not the error");
         }

@@ -63,7 +63,7 @@ public final class Constraints {
         return range(TEMPERATURE, s.tMin(), s.tMax(), p.temperature(), Dimension.TEMPERATURE, "ambient", "rated");
     }
 
-    /** Needed common-mode range: the stage's, else mid-supply +/- half the common-mode swing. */
+    /** Needed common-mode range: the stage's, else mid-supply +/- the common-mode swing (a peak change). */
     public static Range neededCommonMode(Stage s) {
         if (s.commonModeRange() != null) {
             return s.commonModeRange();
@@ -72,10 +72,13 @@ public final class Constraints {
             return null;
         }
         double mid = s.supplyVoltage() / 2;
-        return new Range(mid - s.commonModeSwing() / 2, mid + s.commonModeSwing() / 2);
+        return new Range(mid - s.commonModeSwing(), mid + s.commonModeSwing());
     }
 
-    /** Needed output range: the stage's, else mid-supply +/- half the full-scale output. */
+    /**
+     * Needed output range: the stage's, else mid-supply +/- the full-scale output, which is the peak
+     * excursion from the output's zero (error-model.md, VFS).
+     */
     public static Range neededOutput(Stage s) {
         if (s.outputRange() != null) {
             return s.outputRange();
@@ -84,7 +87,7 @@ public final class Constraints {
             return null;
         }
         double mid = s.supplyVoltage() / 2;
-        return new Range(mid - s.fullScaleOutput() / 2, mid + s.fullScaleOutput() / 2);
+        return new Range(mid - s.fullScaleOutput(), mid + s.fullScaleOutput());
     }
 
     static ConstraintResult commonMode(Stage s, Part p, List<String> w) {
@@ -134,7 +137,10 @@ public final class Constraints {
         return r;
     }
 
-    /** Slew rate needed for a full-scale sine at fH: 2 pi fH VFS (Franco, 4th ed., ch. 6 [from memory]). */
+    /**
+     * Slew rate needed for a full-scale sine at fH: 2 pi fH VFS, VFS the sine's peak amplitude
+     * (the largest slope of VFS sin(2 pi fH t); Franco, 4th ed., ch. 6 [from memory]).
+     */
     public static double neededSlew(Stage s) {
         return s.fullScaleOutput() == null ? Double.NaN : 2 * Math.PI * s.bandHigh() * s.fullScaleOutput();
     }

@@ -7,7 +7,7 @@ import dev.ampsieve.stage.Stage;
  * Implementations are small, final, stateless, and hold their formula with its published
  * source in Javadoc; the value returned is the worst-case magnitude at the worst
  * temperature of the stage's range, output-referred, with the input-referred value
- * (divided by the noise gain) beside it.
+ * (divided by the magnitude of the signal gain, so referred to the signal source) beside it.
  */
 public interface ErrorTerm {
 
@@ -25,6 +25,6 @@ public interface ErrorTerm {
 
     /** Builds a result with the input-referred value derived from the output value. */
     static TermResult result(ErrorTerm t, Stage s, double outputV, double worstAtC, boolean estimated, String note) {
-        return new TermResult(t.key(), t.label(), outputV, outputV / s.noiseGain(), worstAtC, estimated, note);
+        return new TermResult(t.key(), t.label(), outputV, outputV / s.sourceGain(), worstAtC, estimated, note);
     }
 }

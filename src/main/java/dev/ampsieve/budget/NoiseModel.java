@@ -20,8 +20,8 @@ import dev.ampsieve.units.PhysicalConstants;
  *   ∫ from f1 to f2 of (1 + fc/f) df = (f2 - f1) + fc ln(f2/f1)
  * </pre>
  * Units: V/√Hz, A/√Hz, Hz, ohm, kelvin in; volts rms out. Valid for a flat (ideal) gain
- * across [f1, f2]; a single-pole roll-off is represented by ending the band at its noise
- * bandwidth (π/2 times the -3 dB frequency), see {@link #SINGLE_POLE_ENBW}.
+ * across [f1, f2]; a roll-off is represented by ending the band at its equivalent noise
+ * bandwidth (π/2 times the -3 dB frequency for a single pole), see {@link #noiseBandEdge}.
  */
 public final class NoiseModel {
     private NoiseModel() {
@@ -83,9 +83,41 @@ public final class NoiseModel {
         return Math.sqrt(4.0 * PhysicalConstants.BOLTZMANN * tempKelvin * ohms);
     }
 
-    /** Noise integration upper limit fN = (π/2) min(fH, GBW/NG) (single-pole closed loop). */
+    /**
+     * Equivalent noise bandwidth of an n-th order Butterworth low-pass as a multiple of its
+     * -3 dB frequency: ∫0^∞ dx / (1 + x^(2n)) = (π/(2n)) / sin(π/(2n)) (the standard integral
+     * ∫0^∞ x^(μ-1)/(1 + x^ν) dx = (π/ν)/sin(μπ/ν), Gradshteyn &amp; Ryzhik 3.241.2 [from memory], with
+     * μ = 1, ν = 2n). n = 1 gives π/2, n = 2 π/(2√2) = 1.1107, n = 3 1.0472, n = 4 1.0262.
+     *
+     * @param order filter order, 1 or more
+     */
+    public static double butterworthEnbw(int order) {
+        if (order < 1) {
+            throw new IllegalArgumentException("a filter order is 1 or more, got " + order);
+        }
+        double a = Math.PI / (2.0 * order);
+        return a / Math.sin(a);
+    }
+
+    /**
+     * Noise integration upper limit fN, Hz: the noise bandwidth the stage really has.
+     * <ul>
+     *   <li>no filter ({@link Stage#NO_FILTER}, also when the stage names none): the closed loop
+     *       alone, a single pole at GBW/NG, so fN = (π/2) GBW/NG;</li>
+     *   <li>an n-th order Butterworth low-pass at fH: fN = min({@link #butterworthEnbw}(n) fH,
+     *       (π/2) GBW/NG). In cascade |H_filter H_loop|² is at most either factor (both are at
+     *       most 1), so the cascade's noise bandwidth is at most the smaller of the two: the
+     *       minimum never understates it. For n = 1 this is (π/2) min(fH, GBW/NG).</li>
+     * </ul>
+     * With GBW unknown (NaN) only the filter bounds the band; without a filter either, fN falls
+     * back to (π/2) fH and the noise term is marked estimated.
+     */
     public static double noiseBandEdge(Stage s, double gbw) {
-        double closedLoop = Double.isNaN(gbw) ? Double.POSITIVE_INFINITY : gbw / s.noiseGain();
-        return SINGLE_POLE_ENBW * Math.min(s.bandHigh(), closedLoop);
+        double loop = Double.isNaN(gbw) ? Double.POSITIVE_INFINITY : SINGLE_POLE_ENBW * gbw / s.noiseGain();
+        int order = s.noiseFilterOrder();
+        if (order == Stage.NO_FILTER) {
+            return Double.isInfinite(loop) ? SINGLE_POLE_ENBW * s.bandHigh() : loop;
+        }
+        return Math.min(butterworthEnbw(order) * s.bandHigh(), loop);
     }
 }

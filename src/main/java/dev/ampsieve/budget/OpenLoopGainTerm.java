@@ -6,7 +6,8 @@ import dev.ampsieve.units.Units;
 
 /**
  * Term 6, finite open-loop gain: gain error at full scale {@code VFS * NG / (AOL + NG)},
- * volts at the output, AOL as a ratio. From G = G_ideal / (1 + 1/(AOL β)) with β = 1/NG:
+ * volts at the output, AOL as a ratio, VFS the full-scale output as a peak excursion (the gain
+ * error is largest where the output is farthest from its zero). From G = G_ideal / (1 + 1/(AOL β)) with β = 1/NG:
  * the relative error is 1 - G/G_ideal = NG/(AOL + NG) (Sedra &amp; Smith, <i>Microelectronic
  * Circuits</i>, 7th ed., ch. 2; Franco, 4th ed., ch. 1 [from memory]). DC open-loop gain,
  * unloaded; a heavy load lowers it.

@@ -7,7 +7,7 @@ import dev.ampsieve.units.Units;
 
 /**
  * Term 8, resistor ratio: {@code VFS * S * (tolR + tcR * dT)}, volts at the output, with
- * tolR the ratio tolerance, tcR the ratio temperature coefficient (1/°C), dT in °C, and the
+ * VFS the full-scale output as a peak excursion, tolR the ratio tolerance, tcR the ratio temperature coefficient (1/°C), dT in °C, and the
  * gain sensitivity S = (NG-1)/NG non-inverting, 1 inverting, 0 follower: from
  * dG/G = (1 - 1/G)(δRf - δRg) non-inverting and δRf - δRg inverting (Sedra &amp; Smith, 7th
  * ed., ch. 2; Franco, 4th ed., ch. 1 [from memory]). First order in the tolerances.

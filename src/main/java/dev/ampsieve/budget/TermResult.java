@@ -7,7 +7,7 @@ package dev.ampsieve.budget;
  *                  bandwidth, resistors, aging, noise
  * @param label     words for tables
  * @param outputV   worst-case magnitude at the output, volts
- * @param inputV    the same divided by the noise gain
+ * @param inputV    the same referred to the signal source: divided by |signal gain| (inverting: Rf/(Rg + Rs))
  * @param worstAtC  ambient temperature (°C) at which it is largest; NaN when it does not depend on it
  * @param estimated true when a missing catalog value was replaced by an estimate
  * @param note      how it was computed, briefly (which catalog values, which rule)

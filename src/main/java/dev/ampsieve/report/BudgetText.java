@@ -36,12 +36,15 @@ public final class BudgetText {
         Stage s = b.stage();
         StringBuilder o = new StringBuilder();
         double limit = b.limitV();
+        double g = s.sourceGain(); // input-referred = at the signal source
         line(o, "Part       %s%s", b.part().id(), b.part().title().isBlank() ? "" : "  (" + b.part().title() + ")");
         line(o, "Stage      %s%s, noise gain %s, signal gain %s", stageLabel == null ? "" : stageLabel + ": ",
                 s.topology().key(), num(b.noiseGain()), num(s.signalGain()));
-        line(o, "Limit      %s at the output (%s at the input), criterion %s", v(limit), v(limit / b.noiseGain()),
+        line(o, "Limit      %s at the output (%s at the input), criterion %s", v(limit), v(limit / g),
                 s.criterion());
         o.append('\n');
+        // the input column's convention, stated where it is read
+        line(o, "input = output / |signal gain| %s: referred to the signal source", num(g));
         line(o, "%-24s %11s %11s %9s %10s", "term", "output", "input", "of limit", "worst at");
         boolean anyEstimated = false;
         boolean anyUncounted = false;
@@ -62,12 +65,12 @@ public final class BudgetText {
         }
         o.append('\n');
         line(o, "%-24s %11s %11s %9s", "total", "output", "input", "of limit");
-        line(o, "%-24s %11s %11s %9s", "worst-case sum", v(b.worstCaseV()), v(b.worstCaseV() / b.noiseGain()),
+        line(o, "%-24s %11s %11s %9s", "worst-case sum", v(b.worstCaseV()), v(b.worstCaseV() / g),
                 share(b.worstCaseV(), limit));
-        line(o, "%-24s %11s %11s %9s", "root-sum-square", v(b.rssV()), v(b.rssV() / b.noiseGain()), share(b.rssV(), limit));
-        line(o, "%-24s %11s %11s", "noise rms", v(b.noiseRmsV()), v(b.noiseRmsV() / b.noiseGain()));
+        line(o, "%-24s %11s %11s %9s", "root-sum-square", v(b.rssV()), v(b.rssV() / g), share(b.rssV(), limit));
+        line(o, "%-24s %11s %11s", "noise rms", v(b.noiseRmsV()), v(b.noiseRmsV() / g));
         line(o, "%-24s %11s %11s", "noise peak-to-peak", v(NoiseModel.PEAK_TO_PEAK * b.noiseRmsV()),
-                v(NoiseModel.PEAK_TO_PEAK * b.noiseRmsV() / b.noiseGain()));
+                v(NoiseModel.PEAK_TO_PEAK * b.noiseRmsV() / g));
         o.append('\n');
         line(o, "Yield      %s", yieldLine(b.yield(), s));
         Trim trim = BudgetCalculator.trimOf(s);

@@ -271,7 +271,7 @@ final class ShellCommands {
             double limit = s.limitVolts();
             out.println("  " + pad("limit at the output", w) + Units.format(limit, Dimension.VOLTAGE)
                     + "   (" + s.criterion() + ")");
-            out.println("  " + pad("limit at the input", w) + Units.format(limit / s.noiseGain(), Dimension.VOLTAGE));
+            out.println("  " + pad("limit at the input", w) + Units.format(limit / s.sourceGain(), Dimension.VOLTAGE));
             out.println("  " + pad("farthest from 25 °C", w) + Units.format(s.deltaT(), Dimension.NUMBER) + " °C");
             if (!all) {
                 out.println(paint.dim("Other keys keep their defaults: 'show --all' lists them, 'set KEY VALUE' changes one."));

@@ -18,14 +18,17 @@ public record Limit(Kind kind, double value, int bits, double reference) {
     }
 
     /**
-     * Output-referred volts. Input-referred limits scale by the noise gain (the same factor
-     * every error term is referred by); a percentage is of {@code fullScaleOutput}; one LSB is
+     * Output-referred volts. An input-referred limit is at the signal source, so it scales by
+     * the magnitude of the signal gain ({@link Stage#sourceGain()}; inverting: Rf/(Rg + Rs), not
+     * the noise gain); a percentage is of {@code fullScaleOutput} (the peak excursion); one LSB is
      * reference / 2^bits (the convention stated in IEEE Std 1241; some use 2^bits - 1).
+     *
+     * @param sourceGain |signal gain| of the stage
      */
-    public double outputVolts(double noiseGain, Double fullScaleOutput) {
+    public double outputVolts(double sourceGain, Double fullScaleOutput) {
         return switch (kind) {
             case OUTPUT -> value;
-            case INPUT -> value * noiseGain;
+            case INPUT -> value * sourceGain;
             case PERCENT_OF_FULL_SCALE -> value * (fullScaleOutput == null ? Double.NaN : fullScaleOutput);
             case LSB -> value * reference / Math.pow(2, bits);
         };

@@ -15,9 +15,12 @@ import dev.ampsieve.yaml.Located;
  * @param supplyVoltage     total supply (V), null when not stated
  * @param supplyVariation   peak supply change (V) seen by PSRR
  * @param commonModeSwing   peak common-mode change (V) seen by CMRR
- * @param commonModeRange   input common-mode range needed, volts above the negative rail (null: centred default)
- * @param outputRange       output range needed, volts above the negative rail (null: centred default)
- * @param fullScaleOutput   largest output magnitude (V), null when not stated
+ * @param commonModeRange   input common-mode range needed, volts above the negative rail (null: mid-supply +/- commonModeSwing)
+ * @param outputRange       output range needed, volts above the negative rail (null: mid-supply +/- fullScaleOutput)
+ * @param filterOrder       order of the Butterworth low-pass at bandHigh that limits the noise band; 0: no
+ *                          filter (only the closed-loop bandwidth GBW/NG does); null: not stated, counted as 0
+ * @param fullScaleOutput   full-scale output: the peak output excursion from the output's zero (V), the
+ *                          amplitude of a full-scale sine; null when not stated
  * @param serviceLife       seconds of operation for long-term drift
  * @param quantity          build quantity (for price)
  * @param maxPrice          price ceiling per unit, null for none
@@ -39,6 +42,7 @@ public record Stage(
         Range outputRange,
         double bandLow,
         double bandHigh,
+        Integer filterOrder,
         Double fullScaleOutput,
         double ratioTolerance,
         double ratioTempco,
@@ -56,6 +60,23 @@ public record Stage(
 
     /** Reference temperature of datasheet 25 °C columns and of a one-point trim. */
     public static final double T_REF = 25.0;
+
+    /** {@link #filterOrder()} of a stage whose noise only the amplifier's closed-loop bandwidth limits. */
+    public static final int NO_FILTER = 0;
+
+    /** Highest filter order a stage may name; beyond it the noise bandwidth is within 0.7 % of band.high. */
+    public static final int MAX_FILTER_ORDER = 8;
+
+    public Stage {
+        if (filterOrder != null && (filterOrder < NO_FILTER || filterOrder > MAX_FILTER_ORDER)) {
+            throw new IllegalArgumentException("filter order " + filterOrder + " outside 0.." + MAX_FILTER_ORDER);
+        }
+    }
+
+    /** The filter order the noise band is computed with: {@link #NO_FILTER} when the stage names none. */
+    public int noiseFilterOrder() {
+        return filterOrder == null ? NO_FILTER : filterOrder;
+    }
 
     /** Effective gain resistor: inverting stages see the source in series with Rg. */
     public double rgEffective() {
@@ -77,6 +98,16 @@ public record Stage(
             case NON_INVERTING -> 1.0 + rf / rg;
             case INVERTING -> -rf / (rg + sourceResistance);
         };
+    }
+
+    /**
+     * |signal gain|: the factor from the signal source to the output. Input-referred figures
+     * (the input form of the limit, the budget's input column) are referred to the signal source
+     * by it, not by the noise gain: for an inverting stage that is Rf/(Rg + Rs), while the noise
+     * gain 1 + Rf/(Rg + Rs) is the factor for the amplifier's own input errors.
+     */
+    public double sourceGain() {
+        return Math.abs(signalGain());
     }
 
     /** Resistance seen from the - input: Rf || Rg (inverting Rf || (Rg + Rs)); follower Rf. */
@@ -102,12 +133,12 @@ public record Stage(
     /** The same stage said to come from {@code place} (null: typed in); for comparing stages read from different files. */
     public Stage withWhere(Located place) {
         return new Stage(topology, rf, rg, sourceResistance, balanceResistance, tMin, tMax, supplyVoltage, supplyVariation,
-                commonModeSwing, commonModeRange, outputRange, bandLow, bandHigh, fullScaleOutput, ratioTolerance, ratioTempco,
+                commonModeSwing, commonModeRange, outputRange, bandLow, bandHigh, filterOrder, fullScaleOutput, ratioTolerance, ratioTempco,
                 serviceLife, limit, criterion, maxToSigma, trials, seed, trim, quantity, maxPrice, acCoupled, place);
     }
 
     /** The error limit in output volts. */
     public double limitVolts() {
-        return limit.outputVolts(noiseGain(), fullScaleOutput);
+        return limit.outputVolts(sourceGain(), fullScaleOutput);
     }
 }

@@ -88,6 +88,9 @@ public final class StageKeys {
     public static final List<String> TOPOLOGIES = List.of("non-inverting", "inverting", "follower");
     public static final List<String> CRITERIA = List.of("worst-case", "rss", "yield 99.9 %");
     public static final List<String> TRIM_METHODS = List.of("one-point", "two-point");
+    /** band.filter-order: "none", or the order of the Butterworth low-pass at band.high, 1..{@link Stage#MAX_FILTER_ORDER}. */
+    public static final List<String> FILTER_ORDERS = java.util.stream.Stream.concat(java.util.stream.Stream.of("none"),
+            java.util.stream.IntStream.rangeClosed(1, Stage.MAX_FILTER_ORDER).mapToObj(String::valueOf)).toList();
 
     private static Key q(String path, Dimension d, String def, String example, String why) {
         return new Key(path, Kind.QUANTITY, d, List.of(), def, example, why);
@@ -110,9 +113,10 @@ public final class StageKeys {
                     "the largest error allowed at the output; every part is judged against it "
                             + "(or give one of limit.input, limit.percent-of-full-scale, limit.lsb)"),
             q("limit.input", Dimension.VOLTAGE, "none", "10 uV",
-                    "the limit referred to the input instead; multiplied by the noise gain"),
+                    "the limit referred to the signal source instead; multiplied by the signal gain's magnitude "
+                            + "(inverting: rf/(rg + source-resistance))"),
             q("limit.percent-of-full-scale", Dimension.RATIO, "none", "0.1 %",
-                    "the limit as a share of full-scale-output (a bare number is read as percent)"),
+                    "the limit as a share of full-scale-output, the peak excursion (a bare number is read as percent)"),
             k("limit.lsb", Kind.NUMBER, List.of(), "none", "0.5",
                     "the limit in converter codes: lsb x reference / 2^bits"),
             k("limit.bits", Kind.INTEGER, List.of(), "none", "16", "converter resolution for limit.lsb"),
@@ -128,24 +132,33 @@ public final class StageKeys {
             q("balance-resistance", Dimension.RESISTANCE, "0 ohm", "1 kohm",
                     "a resistor from the + input to the reference; equal to rf||rg it cancels matched bias currents"),
             q("full-scale-output", Dimension.VOLTAGE, "none", "2.5 V",
-                    "gain errors (open-loop gain, bandwidth, resistors) scale with it; slew rate needs it"),
+                    "the peak output excursion from the output's zero (a sine's amplitude, not its span): gain errors "
+                            + "(open-loop gain, bandwidth, resistors) scale with it, the slew rate needed is 2 pi x band.high x it, "
+                            + "and without output-range the output must reach mid-supply +/- it"),
             q("band.low", Dimension.FREQUENCY, "0.1 Hz", "0.1 Hz",
                     "lower edge for integrating 1/f noise (must be above 0 Hz)"),
             q("band.high", Dimension.FREQUENCY, "10 Hz", "1 kHz",
-                    "upper signal frequency: noise bandwidth, closed-loop gain error, slew rate"),
+                    "upper signal frequency: closed-loop gain error, slew rate, and the corner of the filter "
+                            + "named by band.filter-order"),
+            k("band.filter-order", Kind.CHOICE, FILTER_ORDERS,
+                    "none", "2",
+                    "sets the noise bandwidth: the order of a Butterworth low-pass at band.high after the amplifier "
+                            + "(1, an RC: pi/2 x band.high; 2: 1.11 x; 3: 1.05 x), never beyond pi/2 x GBW/NG; 'none' (the "
+                            + "default, which never understates the noise): only the closed-loop bandwidth GBW/NG limits it"),
             q("supply.voltage", Dimension.VOLTAGE, "none", "5 V", "the part must run from this total supply"),
             q("supply.variation", Dimension.VOLTAGE, "0 V", "0.25 V",
                     "peak supply change; multiplied by the part's supply rejection"),
             q("common-mode-swing", Dimension.VOLTAGE,
                     "non-inverting: full-scale-output/gain; follower: full-scale-output; inverting: 0", "1 V",
-                    "peak common-mode change at the inputs; multiplied by the part's common-mode rejection"),
-            q("common-mode-range.min", Dimension.VOLTAGE, "centred at mid-supply", "0.5 V",
+                    "peak common-mode change at the inputs (not peak-to-peak); multiplied by the part's common-mode "
+                            + "rejection, and without common-mode-range the inputs must reach mid-supply +/- it"),
+            q("common-mode-range.min", Dimension.VOLTAGE, "mid-supply - common-mode-swing", "0.5 V",
                     "lowest input voltage needed, volts above the negative rail"),
-            q("common-mode-range.max", Dimension.VOLTAGE, "centred at mid-supply", "4 V",
+            q("common-mode-range.max", Dimension.VOLTAGE, "mid-supply + common-mode-swing", "4 V",
                     "highest input voltage needed, volts above the negative rail"),
-            q("output-range.min", Dimension.VOLTAGE, "centred at mid-supply", "0.1 V",
+            q("output-range.min", Dimension.VOLTAGE, "mid-supply - full-scale-output", "0.1 V",
                     "lowest output voltage needed, volts above the negative rail"),
-            q("output-range.max", Dimension.VOLTAGE, "centred at mid-supply", "4.9 V",
+            q("output-range.max", Dimension.VOLTAGE, "mid-supply + full-scale-output", "4.9 V",
                     "highest output voltage needed, volts above the negative rail"),
             q("resistor-ratio.tolerance", Dimension.RATIO, "0", "0.1 %",
                     "the rf/rg ratio error becomes a gain error at full scale"),

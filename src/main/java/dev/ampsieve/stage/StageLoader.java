@@ -152,8 +152,10 @@ public final class StageLoader {
 
             double bandLow = StageKeys.DEFAULT_BAND_LOW;
             double bandHigh = StageKeys.DEFAULT_BAND_HIGH;
+            Integer filterOrder = null;
             Node.Mapping band = section(m, "band");
             if (band != null) {
+                filterOrder = filterOrder(band);
                 Double lo = f.quantity(band, "band", "low", Dimension.FREQUENCY);
                 Double hi = f.quantity(band, "band", "high", Dimension.FREQUENCY);
                 if (lo != null && lo <= 0) {
@@ -205,7 +207,7 @@ public final class StageLoader {
             Boolean ac = f.bool(m, "", "ac-coupled");
 
             return new Stage(topology, rf, rg, rs, rp, tMin, tMax, supplyVoltage, supplyVariation, commonModeSwing,
-                    cmRange, outRange, bandLow, bandHigh, fullScale, tolerance, tempco, life, limit, criterion, maxToSigma,
+                    cmRange, outRange, bandLow, bandHigh, filterOrder, fullScale, tolerance, tempco, life, limit, criterion, maxToSigma,
                     trials != null ? trials : StageKeys.DEFAULT_TRIALS, seed != null ? seed : StageKeys.DEFAULT_SEED, trim,
                     quantity != null ? quantity : StageKeys.DEFAULT_QUANTITY, maxPrice, ac != null && ac,
                     m.at());
@@ -310,6 +312,30 @@ public final class StageLoader {
                 f.error(Fields.where(m, "gain"), "gain", "'" + text + "' is not a gain", "write a plain number such as '100', or decibels such as '40 dB'");
                 return null;
             }
+        }
+
+        /** band.filter-order: "none" is {@link Stage#NO_FILTER}, else a whole number 1..{@link Stage#MAX_FILTER_ORDER}; null when absent. */
+        private Integer filterOrder(Node.Mapping band) {
+            String text = f.text(band, "band", "filter-order");
+            if (text == null) {
+                return null;
+            }
+            String t = text.strip().toLowerCase(Locale.ROOT);
+            if (t.equals("none")) {
+                return Stage.NO_FILTER;
+            }
+            try {
+                int n = Integer.parseInt(t);
+                if (n >= 1 && n <= Stage.MAX_FILTER_ORDER) {
+                    return n;
+                }
+            } catch (NumberFormatException e) {
+                // reported below
+            }
+            f.error(Fields.where(band, "filter-order"), "band.filter-order", "'" + text + "' is not a filter order",
+                    "write 'none' when no filter after the amplifier limits the band, or the filter's order, 1 to "
+                            + Stage.MAX_FILTER_ORDER + " (an RC is 1)");
+            return null;
         }
 
         /** non-inverting: the full-scale input; follower: the full-scale output; inverting: 0 (virtual ground). */

@@ -193,6 +193,9 @@ public final class StageWriter {
         }
         a.put("band.low", exact(s.bandLow(), Dimension.FREQUENCY));
         a.put("band.high", exact(s.bandHigh(), Dimension.FREQUENCY));
+        if (s.filterOrder() != null) {
+            a.put("band.filter-order", s.filterOrder() == Stage.NO_FILTER ? "none" : String.valueOf(s.filterOrder()));
+        }
         if (s.fullScaleOutput() != null) {
             a.put("full-scale-output", exact(s.fullScaleOutput(), Dimension.VOLTAGE));
         }

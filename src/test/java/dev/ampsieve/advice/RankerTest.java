@@ -285,8 +285,9 @@ class RankerTest {
     void theChopperBiasCaveatGivesTheCurrentTheBudgetUsesAtTemperature() {
         // CMOS input, 300 pA at 25 °C and no over-temperature figure: the budget doubles it every 10 °C
         // (common practice) to 300 pA x 2^4.5 = 6.79 nA at 70 °C; a caveat quoting only 300 pA beside
-        // the output error that 6.79 nA causes would not add up
-        Stage s = stage().limitV(1.0).build();
+        // the output error that 6.79 nA causes would not add up. Full scale 1.25 V peak: the output needs
+        // 2.5 V +/- 1.25 V, inside the part's 1 V headroom on 5 V (the builder's 2.5 V peak would need 0..5 V)
+        Stage s = stage().limitV(1.0).fullScale(1.25).build();
         Part chop = chopper(2.20);
         Ranking r = Ranker.rank(s, List.of(chop), dev.ampsieve.budget.BudgetCalculator::compute);
         List<String> caveats = r.advice().zeroDrift().caveats();

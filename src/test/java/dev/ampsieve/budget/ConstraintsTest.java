@@ -49,10 +49,11 @@ class ConstraintsTest {
 
     @Test
     void commonModeDefaultsToMidSupply() {
-        // Vs 5 V, swing 4 V: needs 0.5 .. 4.5 V; input headroom 1.5 V below the top rail reaches 3.5 V
+        // Vs 5 V, swing 2 V peak: needs mid 2.5 V +/- 2 V = 0.5 .. 4.5 V (error-model.md: dVcm is a peak change);
+        // input headroom 1.5 V below the top rail reaches 3.5 V
         StageFixture s = StageFixture.follower().limitV(1);
         s.supply = 5.0;
-        s.cmSwing = 4;
+        s.cmSwing = 2;
         PartFixture p = PartFixture.ideal();
         p.inHead = new Headroom(0, 1.5);
         ConstraintResult c = get(budget(s, p), "common-mode");
@@ -81,18 +82,18 @@ class ConstraintsTest {
 
     @Test
     void missingHeadroomIsAssumedPessimisticNotSkipped() {
-        // Vs 5 V, swing 1 V: needs 2.0 .. 3.0 V; an assumed 1.5 V from each rail reaches 1.5 .. 3.5 V (fits);
-        // a 3 V swing needs 1.0 .. 4.0 V, which the assumed headroom cannot reach
+        // Vs 5 V, swing 0.5 V peak: needs 2.5 +/- 0.5 = 2.0 .. 3.0 V; an assumed 1.5 V from each rail reaches
+        // 1.5 .. 3.5 V (fits); a 1.5 V peak swing needs 1.0 .. 4.0 V, which the assumed headroom cannot reach
         StageFixture s = StageFixture.follower().limitV(1);
         s.supply = 5.0;
-        s.cmSwing = 1;
+        s.cmSwing = 0.5;
         PartFixture p = PartFixture.ideal();
         p.inHead = null;
         Budget b = budget(s, p);
         assertTrue(get(b, "common-mode").ok(), get(b, "common-mode").detail());
         assertTrue(get(b, "common-mode").detail().contains("assumed"));
         assertTrue(b.warnings().stream().anyMatch(w -> w.startsWith("common-mode") && w.contains("1.50 V")), b.warnings().toString());
-        s.cmSwing = 3;
+        s.cmSwing = 1.5;
         assertFalse(get(budget(s, p), "common-mode").ok());
     }
 

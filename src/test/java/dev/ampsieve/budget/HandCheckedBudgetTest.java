@@ -65,20 +65,24 @@ class HandCheckedBudgetTest {
         near(3.606875e-3, b.term("resistors").outputV(), "resistors");
         // 9. no long-term drift in the catalog: not counted
         assertEquals(0.0, b.term("aging").outputV(), 0.0);
-        // 10. fN = (π/2) min(5 Hz, 1.5 MHz/200) = 7.853982 Hz; band 0.05 Hz..fN = 7.803982 Hz.
-        //     input density^2 = en^2 + 4kT (R+ + R-) + in^2 (R+^2 + R-^2), R+ 100 Ω, R- = Rf/NG = 1 kΩ:
-        //     2.025e-15 + 1.646561e-20 x 1100 + 1e-26 x 1.01e6 = 2.043122e-15 V^2/Hz (4kT at 25 °C: reference-checks §1)
-        //     rms = 200 x sqrt(2.043122e-15 x 7.803982) = 25.25430 µV; allowance 3.3 x rms (Franco ch. 7 [from memory])
-        near(25.25430e-6, b.noiseRmsV(), "noise rms");
-        near(83.33918e-6, b.term("noise").outputV(), "noise allowance");
-        // totals: worst-case sum; RSS (GUM eq. 10 for the root-sum-square)
-        near(9.482072e-3, b.worstCaseV(), "worst-case");
-        near(4.811964e-3, b.rssV(), "rss");
+        // 10. first-order filter at fH (the stage file): fN = (π/2) min(5 Hz, 1.5 MHz/200) = 7.853982 Hz;
+        //     band 0.05 Hz..fN = 7.803982 Hz.
+        //     input density^2 = en^2 + 4kT (R+ + R-) + in^2 (R+^2 + R-^2), R+ 100 Ω, R- = Rf/NG = 1 kΩ, resistors at
+        //     the hottest 70 °C: 4kT = 4 x 1.380649e-23 x 343.15 K = 1.895079e-20 (Johnson-Nyquist; k from SI9):
+        //     2.025e-15 + 1.895079e-20 x 1100 + 1e-26 x 1.01e6 = 2.045856e-15 V^2/Hz
+        //     rms = 200 x sqrt(2.045856e-15 x 7.803982) = 25.27119 µV; allowance 3.3 x rms (Franco ch. 7 [from memory])
+        //     (re-derived: at 25 °C this was 25.25430 µV)
+        near(25.27119e-6, b.noiseRmsV(), "noise rms");
+        near(83.39492e-6, b.term("noise").outputV(), "noise allowance");
+        // totals: worst-case sum; RSS (GUM eq. 10 for the root-sum-square); the noise allowance is 5.574e-8 V
+        // above its 25 °C value: 9.482072 mV -> 9.482128 mV; the RSS moves by under 1e-9 V
+        near(9.482128e-3, b.worstCaseV(), "worst-case");
+        near(4.811965e-3, b.rssV(), "rss");
         // two-point calibration at 25 °C (the stage's): removes offset, the 25 °C bias
         // (180 k x 250 pA + 220 k x 250 pA = 100 µV), the open-loop gain and the resistor tolerance;
         // keeps the rest and adds the 1 mV resolution:
-        // 0.45 + 2.162742 + 0.031623 + 0.158114 + 0.000001 + 1.119375 + 0.083339 + 1.0 mV
-        near(5.005748e-3, b.trimmed().worstCaseV(), "after the two-point trim");
+        // 0.45 + 2.162742 + 0.031623 + 0.158114 + 0.000001 + 1.119375 + 0.083395 + 1.0 mV
+        near(5.005804e-3, b.trimmed().worstCaseV(), "after the two-point trim");
         assertEquals(Verdict.FITS_AFTER_TRIM, b.verdict());
     }
 
@@ -106,13 +110,17 @@ class HandCheckedBudgetTest {
         near(1.6335e-3, b.term("resistors").outputV(), "resistors");
         // 100 x 0.3 µV x sqrt(87 660 h / 1000 h) (10 Julian years; √t model: reference-checks §6) = 30 µV x 9.362692
         near(280.8808e-6, b.term("aging").outputV(), "aging");
-        // fN = (π/2) x 10 Hz = 15.70796 Hz; from 0.1 Hz: white 15.60796 Hz, ln(157.0796) = 5.056753.
+        // first-order filter at 10 Hz (the stage file): fN = (π/2) x 10 Hz = 15.70796 Hz; from 0.1 Hz: white
+        // 15.60796 Hz, ln(157.0796) = 5.056753. Resistors at the hottest 85 °C: 4kT = 4 x 1.380649e-23 x 358.15 K
+        // = 1.977918e-20 (Johnson-Nyquist; k from SI9).
         // en^2 (15.60796 + 3 x 5.056753) + in^2 (999^2 + 1000^2)(15.60796 + 100 x 5.056753) + 4kT x 1999 x 15.60796
-        // = 64e-18 x 30.77822 + 2.25e-26 x 1.998001e6 x 521.2833 + 1.646561e-20 x 1999 x 15.60796
-        // = 1.969806e-15 + 2.343430e-17 + 5.137326e-16 = 2.506973e-15 -> x 100 -> 5.006968 µV rms (Franco ch. 7 [from memory])
-        near(5.006968e-6, b.noiseRmsV(), "noise rms");
-        near(6.764288e-3, b.worstCaseV(), "worst-case");
-        near(3.590729e-3, b.rssV(), "rss");
+        // = 64e-18 x 30.77822 + 2.25e-26 x 1.998001e6 x 521.2833 + 1.977918e-20 x 1999 x 15.60796
+        // = 1.969806e-15 + 2.343430e-17 + 6.171165e-16 = 2.610357e-15 -> x 100 -> 5.109165 µV rms (Franco ch. 7
+        // [from memory]; re-derived: at 25 °C this was 5.006968 µV)
+        near(5.109165e-6, b.noiseRmsV(), "noise rms");
+        // the noise allowance 3.3 x rms rises by 3.3 x 0.102197 µV = 0.337250 µV: 6.764288 mV -> 6.764625 mV
+        near(6.764625e-3, b.worstCaseV(), "worst-case");
+        near(3.590731e-3, b.rssV(), "rss");
     }
 
     @Test
@@ -126,19 +134,25 @@ class HandCheckedBudgetTest {
         near(1.25e-6, b.term("drift").outputV(), "drift");
         // over temperature IB 2.5 nA, IOS 4 nA: |R+ - Rf| IB + (R+ + Rf) IOS/2 = 100 x 2.5 nA + 100 x 2 nA
         near(450e-9, b.term("bias").outputV(), "bias");
-        // 4 V x 10^(-115/20) = 4 x 1.778279 µV/V; supply 0.25 V x 1.778279 µV/V
-        near(7.113118e-6, b.term("cmrr").outputV(), "cmrr");
+        // common-mode swing 2 V peak (the stage file's re-stated value) x 10^(-115/20) = 2 x 1.778279 µV/V;
+        // supply 0.25 V x 1.778279 µV/V
+        near(3.556559e-6, b.term("cmrr").outputV(), "cmrr");
         near(444.5699e-9, b.term("psrr").outputV(), "psrr");
-        // 4 V x 1/(10^6 + 1)
-        near(3.999996e-6, b.term("open-loop-gain").outputV(), "aol");
-        // 4 V x (1 - 1/sqrt(1 + (20 kHz / 5 MHz)^2)) = 4 x 7.999904e-6
-        near(31.99962e-6, b.term("bandwidth").outputV(), "bandwidth");
+        // full-scale output 2 V peak (0.05..4.05 V span = 2.05 V +/- 2 V): 2 V x 1/(10^6 + 1)
+        near(1.999998e-6, b.term("open-loop-gain").outputV(), "aol");
+        // 2 V x (1 - 1/sqrt(1 + (20 kHz / 5 MHz)^2)) = 2 x 7.999904e-6
+        near(15.99981e-6, b.term("bandwidth").outputV(), "bandwidth");
         assertEquals(0.0, b.term("resistors").outputV(), 0.0, "a follower has no gain resistors");
-        // fN = (π/2) x 20 kHz = 31 415.93 Hz: (25e-18 + 1.646561e-20 x 100 + 0.16e-24 x 1e4) x 31 415.83
-        // = 2.664816e-17 x 31 415.83 -> 914.9721 nV rms
-        near(914.9721e-9, b.noiseRmsV(), "noise rms");
-        near(58.27671e-6, b.worstCaseV(), "worst-case");
-        near(34.66484e-6, b.rssV(), "rss");
-        assertEquals(Verdict.FITS, b.verdict(), "RSS criterion: 34.7 µV of 125 µV");
+        // no filter after the buffer (filter-order: none): fN = (π/2) x GBW/NG = (π/2) x 5 MHz = 7 853 981.6 Hz,
+        // band from 0.1 Hz 7 853 981.5 Hz; resistors at the hottest 50 °C: 4kT = 4 x 1.380649e-23 x 323.15 K
+        // = 1.784627e-20 (Johnson-Nyquist; k from SI9);
+        // (25e-18 + 1.784627e-20 x 100 + 0.16e-24 x 1e4) x 7 853 981.5 = 2.678623e-17 x 7 853 981.5 -> 14.50443 µV rms
+        // (re-derived: with the old first-order band at 20 kHz and 25 °C this was 914.9721 nV)
+        near(14.50443e-6, b.noiseRmsV(), "noise rms");
+        // 10 + 1.25 + 0.45 + 3.556559 + 0.4445699 + 1.999998 + 15.99981 + 3.3 x 14.50443 µV
+        near(81.56556e-6, b.worstCaseV(), "worst-case");
+        // root of the sum of the squares of the same eight terms
+        near(51.62972e-6, b.rssV(), "rss");
+        assertEquals(Verdict.FITS, b.verdict(), "RSS criterion: 51.6 µV of 125 µV");
     }
 }

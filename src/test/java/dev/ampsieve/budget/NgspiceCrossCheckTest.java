@@ -60,7 +60,7 @@ class NgspiceCrossCheckTest {
         }
 
         Stage stage() {
-            return new Stage(topology, rf, rg, rs, rp, 0, 70, null, 0, 0, null, null, f1, f2, null, 0, 0, 0,
+            return new Stage(topology, rf, rg, rs, rp, 0, 70, null, 0, 0, null, null, f1, f2, 1, null, 0, 0, 0,
                     Limit.output(1e-3), Criterion.WORST_CASE, 3, 20_000, 1, Trim.NONE, 1000, null, false, null);
         }
 

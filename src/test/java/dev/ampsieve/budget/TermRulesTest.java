@@ -166,7 +166,8 @@ class TermRulesTest {
 
     @Test
     void noiseTermUsesTheNoiseBandwidthAndAllowance() {
-        // fN = π/2 x min(fH, GBW/NG); counted as 3.3 x rms (error-model.md term 10)
+        // first-order filter at fH (the fixture's): fN = π/2 x min(fH, GBW/NG); resistors at the hottest
+        // temperature, 70 °C = 343.15 K (re-derived: was 298.15 K); counted as 3.3 x rms (error-model.md term 10)
         StageFixture sf = StageFixture.nonInverting(99e3, 1e3).limitV(1);
         sf.fH = 1e3;
         sf.rs = 1e3;
@@ -175,11 +176,11 @@ class TermRulesTest {
         p.noise = new dev.ampsieve.catalog.Noise(10e-9, 5.0, 1e-12, 50.0);
         Stage s = sf.build();
         Budget b = BudgetCalculator.compute(s, p.build());
-        double rms = NoiseModel.outputRms(s, 10e-9, 5, 1e-12, 50, 0.1, Math.PI / 2 * 1e3, 298.15);
+        double rms = NoiseModel.outputRms(s, 10e-9, 5, 1e-12, 50, 0.1, Math.PI / 2 * 1e3, 343.15);
         assertEquals(rms, b.noiseRmsV(), rms * 1e-12);
         assertEquals(3.3 * rms, b.term("noise").outputV(), rms * 1e-12);
         p.gbw = 50e3; // closed-loop pole 500 Hz: the amplifier limits
-        double rms2 = NoiseModel.outputRms(s, 10e-9, 5, 1e-12, 50, 0.1, Math.PI / 2 * 500, 298.15);
+        double rms2 = NoiseModel.outputRms(s, 10e-9, 5, 1e-12, 50, 0.1, Math.PI / 2 * 500, 343.15);
         assertEquals(rms2, BudgetCalculator.compute(s, p.build()).noiseRmsV(), rms2 * 1e-12);
     }
 

@@ -24,7 +24,7 @@ class GuidedEntryTest {
         Path file = dir.resolve("bridge.yaml");
         String printed = Sessions.run("ask", "100", "-40..85 C", "1 mV", "done", "save " + file);
 
-        assertTrue(printed.contains("[1/21] gain"), printed);
+        assertTrue(printed.contains("[1/22] gain"), printed);
         assertTrue(printed.contains("gain [required] >"), printed);
         assertTrue(printed.contains("temperature [0 C..70 C] >"), printed);
         // the derived values: non-inverting gain 100 is noise gain 1 + rf/rg = 100 (Stage.noiseGain)
@@ -130,8 +130,8 @@ class GuidedEntryTest {
         }
         // the temperature reason is longer than a line: it hangs under itself after the key
         String why = Questions.why(Answers.TEMPERATURE);
-        assertTrue(why.length() > 80 - "[2/21] temperature  ".length(), why); // the check below means something
-        assertTrue(flat.contains("[2/21] temperature  drift and FET bias currents"), printed);
+        assertTrue(why.length() > 80 - "[2/22] temperature  ".length(), why); // the check below means something
+        assertTrue(flat.contains("[2/22] temperature  drift and FET bias currents"), printed);
         assertTrue(flat.matches("(?s).*\\n {20}\\S.*"), printed); // a continuation under the reason's first word
         assertTrue(Flat.of(flat).contains("temperature: " + why + "."), printed);
     }

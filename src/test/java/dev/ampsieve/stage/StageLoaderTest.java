@@ -202,13 +202,15 @@ class StageLoaderTest {
         }
 
         @Test
-        void inputReferredLimitIsMultipliedByTheNoiseGain() throws InputException {
-            // input-referred errors reach the output times NG (reference-checks.md §2): 10 uV x 100 = 1 mV
+        void inputReferredLimitIsMultipliedByTheSignalGain() throws InputException {
+            // an input-referred limit is at the signal source (error-model.md): times |signal gain|.
+            // non-inverting 1 + 99k/1k = 100: 10 uV x 100 = 1 mV
             Stage s = stage("rf: 99 kohm\nrg: 1 kohm\nlimit:\n  input: 10 uV\n");
             assertEquals(Limit.Kind.INPUT, s.limit().kind());
             assertEquals(1e-3, s.limitVolts(), 1e-15);
+            // re-derived: inverting 99k/1k has signal gain -99 (noise gain 100): 10 uV x 99 = 0.99 mV
             Stage inv = stage("topology: inverting\nrf: 99 kohm\nrg: 1 kohm\nlimit:\n  input: 10 uV\n");
-            assertEquals(1e-3, inv.limitVolts(), 1e-15); // noise gain 100, not the signal gain 99
+            assertEquals(0.99e-3, inv.limitVolts(), 1e-15);
         }
 
         @Test
@@ -379,6 +381,19 @@ class StageLoaderTest {
             String zero = problem("gain: 10\nlimit: 1 mV\nband: {low: 0 Hz}\n");
             assertTrue(zero.startsWith("s.yaml:3:13: band.low: the band must start above 0 Hz"), zero);
             assertTrue(zero.contains("; write 'low: 0.1 Hz'"), zero);
+        }
+
+        @Test
+        void filterOrderIsNoneOrOneToEight() throws InputException {
+            assertEquals(null, stage("gain: 10\nlimit: 1 mV\n").filterOrder()); // not stated: counted as no filter
+            assertEquals(Stage.NO_FILTER, stage("gain: 10\nlimit: 1 mV\n").noiseFilterOrder());
+            assertEquals(Stage.NO_FILTER, stage("gain: 10\nlimit: 1 mV\nband: {filter-order: none}\n").filterOrder());
+            assertEquals(4, stage("gain: 10\nlimit: 1 mV\nband: {high: 1 kHz, filter-order: 4}\n").filterOrder());
+            String nine = problem("gain: 10\nlimit: 1 mV\nband: {filter-order: 9}\n");
+            assertEquals("s.yaml:3:22: band.filter-order: '9' is not a filter order; write 'none' when no filter after the "
+                    + "amplifier limits the band, or the filter's order, 1 to 8 (an RC is 1)", nine);
+            String word = problem("gain: 10\nlimit: 1 mV\nband:\n  filter-order: rc\n");
+            assertTrue(word.startsWith("s.yaml:4:17: band.filter-order: 'rc' is not a filter order;"), word);
         }
 
         @Test

@@ -27,6 +27,20 @@ class StageWriterTest {
     }
 
     @Test
+    void filterOrderRoundTrips() throws InputException {
+        for (String order : List.of("none", "1", "2", "8")) {
+            Stage s = StageLoader.parse("gain: 10\nlimit: 1 mV\nband: {high: 1 kHz, filter-order: " + order + "}\n", NAME);
+            assertEquals(order.equals("none") ? Stage.NO_FILTER : Integer.parseInt(order), s.filterOrder());
+            assertRoundTrip(s);
+            assertTrue(StageWriter.toYaml(s).contains("  filter-order: " + order + "\n"), StageWriter.toYaml(s));
+        }
+        // not stated stays not stated (the budget then warns), rather than being written as 'none'
+        Stage unstated = StageLoader.parse("gain: 10\nlimit: 1 mV\n", NAME);
+        assertRoundTrip(unstated);
+        assertEquals(null, StageLoader.parse(StageWriter.toYaml(unstated), NAME).filterOrder());
+    }
+
+    @Test
     void writtenStagesReadBackEqual() throws InputException {
         assertRoundTrip(StageLoader.parse("gain: 100\nlimit: 1 mV\n", NAME));
         assertRoundTrip(StageLoader.parse("""
@@ -62,7 +76,7 @@ class StageWriterTest {
         // values no short decimal with a prefix reproduces: the writer falls back to plain digits
         Stage base = StageLoader.parse("gain: 10\nlimit: 1 mV\n", NAME);
         Stage odd = new Stage(Topology.NON_INVERTING, Math.PI * 1e4, Math.E * 1e2, 1.0 / 3, 2.0 / 7, -40.0 / 3, 85.1, Math.sqrt(2) * 5,
-                0.1 + 0.2, 1.0 / 30, new Range(0.3, 0.7), null, 1.0 / 7, 1e5 / 3, 2.0 / 3, 1e-3 / 3, 1e-6 / 7, 1e6 / 7,
+                0.1 + 0.2, 1.0 / 30, new Range(0.3, 0.7), null, 1.0 / 7, 1e5 / 3, 3, 2.0 / 3, 1e-3 / 3, 1e-6 / 7, 1e6 / 7,
                 new Limit(Limit.Kind.INPUT, 1e-6 / 3, 0, 0), Criterion.yield(0.999 + 1e-12), 3.0, 20000, 1, base.trim(), 1000,
                 null, false, null);
         assertRoundTrip(odd);

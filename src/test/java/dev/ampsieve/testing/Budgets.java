@@ -23,8 +23,8 @@ public final class Budgets {
      */
     public static Budget budget(Stage s, Part p, double offsetV, double driftV, double trimmedWorstV, Verdict v) {
         List<TermResult> terms = new ArrayList<>(List.of(
-                new TermResult("offset", "initial offset", offsetV, offsetV / s.noiseGain(), Double.NaN, false, "test"),
-                new TermResult("drift", "offset drift", driftV, driftV / s.noiseGain(), s.tMax(), false, "test")));
+                new TermResult("offset", "initial offset", offsetV, offsetV / s.sourceGain(), Double.NaN, false, "test"),
+                new TermResult("drift", "offset drift", driftV, driftV / s.sourceGain(), s.tMax(), false, "test")));
         terms.sort(Comparator.comparingDouble(TermResult::outputV).reversed());
         double wc = offsetV + driftV;
         return new Budget(p, s, s.noiseGain(), terms, wc, 0.8 * wc, 0, s.limitVolts(),

@@ -17,6 +17,8 @@ public final class StageBuilder {
     private double tMax = 70;
     private Double supply = 5.0;
     private double bandHigh = 10;
+    /** First-order band limit at bandHigh, as the advice tests' expected values assume. */
+    private Integer filterOrder = 1;
     private Double fullScale = 2.5;
     private double ratioTolerance;
     private Limit limit = Limit.output(1e-3);
@@ -36,6 +38,7 @@ public final class StageBuilder {
     public StageBuilder temperature(double lo, double hi) { tMin = lo; tMax = hi; return this; }
     public StageBuilder supply(Double v) { supply = v; return this; }
     public StageBuilder bandHigh(double v) { bandHigh = v; return this; }
+    public StageBuilder filterOrder(Integer v) { filterOrder = v; return this; }
     public StageBuilder fullScale(Double v) { fullScale = v; return this; }
     public StageBuilder ratioTolerance(double v) { ratioTolerance = v; return this; }
     public StageBuilder limit(Limit v) { limit = v; return this; }
@@ -51,6 +54,6 @@ public final class StageBuilder {
 
     public Stage build() {
         return new Stage(topology, rf, rg, rs, 0, tMin, tMax, supply, 0, 0, (Range) null, (Range) null, 0.1, bandHigh,
-                fullScale, ratioTolerance, 0, 0, limit, criterion, 3, 2000, 1L, trim, quantity, maxPrice, false, null);
+                filterOrder, fullScale, ratioTolerance, 0, 0, limit, criterion, 3, 2000, 1L, trim, quantity, maxPrice, false, null);
     }
 }
