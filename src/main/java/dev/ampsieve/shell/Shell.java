@@ -272,7 +272,7 @@ public final class Shell {
             return ExitCode.FINDINGS;
         }
         if (ex instanceof UserException ue) {
-            err.println(ue.getMessage());
+            err.println(dev.ampsieve.text.Visible.lines(ue.getMessage()));
             return ue.exitCode();
         }
         if (root.verbose()) {
