@@ -56,16 +56,6 @@ public final class Visible {
                 || c == 0x200e || c == 0x200f || c == 0x061c || c == 0x2028 || c == 0x2029;
     }
 
-    /** Index of the first character {@link #of} would rewrite, or -1. */
-    public static int firstControl(String s) {
-        for (int i = 0; i < s.length(); i = s.offsetByCodePoints(i, 1)) {
-            if (isControl(s.codePointAt(i))) {
-                return i;
-            }
-        }
-        return -1;
-    }
-
     /** Each line of {@code text} made visible; the line feeds between them are kept. */
     public static String lines(String text) {
         if (text == null) {

@@ -118,17 +118,16 @@ public final class Fields {
 
     /**
      * A warning when {@code s} holds a character a terminal would obey rather than show (ESC,
-     * BEL, a C1 control, a bidi override, a line break): it is printed escaped, but it is almost
-     * always a copy-and-paste accident, or a catalog trying to drive the reader's terminal.
+     * BEL, a C1 control, a bidi override): it is printed escaped, but it is almost always a
+     * copy-and-paste accident, or a catalog trying to drive the reader's terminal. Line feeds and
+     * tabs are left alone: YAML block scalars ({@code notes: |}) hold them legitimately.
      */
     private void warnControls(Node.Scalar s, String field) {
-        int i = Visible.firstControl(s.text());
-        if (i >= 0) {
-            int c = s.text().codePointAt(i);
+        s.text().codePoints().filter(c -> c != '\n' && c != '\t' && Visible.isControl(c)).findFirst().ifPresent(c -> {
             String name = Character.getName(c);
             warning(s.at(), field, String.format(Locale.ROOT, "contains control character U+%04X", c)
                     + (name == null ? "" : " (" + name + ")"), "remove it");
-        }
+        });
     }
 
     public Boolean bool(Node.Mapping m, String path, String key) {

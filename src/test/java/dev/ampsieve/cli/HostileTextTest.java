@@ -208,6 +208,16 @@ class HostileTextTest {
     }
 
     @Test
+    void lineFeedsAndTabsOfABlockScalarAreNoWarning(@TempDir Path dir) throws IOException {
+        String plain = HOSTILE.replaceAll("(?m)^(title|packages|tags|source|notes):.*\n", "")
+                + "notes: |\n  first line\n  second\tline\n";
+        Files.writeString(dir.resolve("amp.yaml"), plain);
+        CliRun r = CliRun.of("--catalog", dir.toString(), "check");
+        assertEquals(ExitCode.OK, r.code(), r.toString());
+        assertFalse(r.out().contains("control character"), r.out());
+    }
+
+    @Test
     void anIdWithAControlCharacterIsAnErrorEchoedEscaped(@TempDir Path dir) throws IOException {
         Path f = Files.writeString(dir.resolve("bad.yaml"), HOSTILE.replace("id: hostile-01", "id: \"bad\\e[2Jid\""));
         CliRun r = CliRun.of("--catalog", dir.toString(), "check");

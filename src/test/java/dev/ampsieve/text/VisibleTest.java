@@ -86,9 +86,10 @@ class VisibleTest {
     }
 
     @Test
-    void firstControlFindsTheIndex() {
-        assertEquals(-1, Visible.firstControl("10 µV/°C"));
-        assertEquals(3, Visible.firstControl("µV " + ESC + "x"));
-        assertEquals(2, Visible.firstControl(new String(Character.toChars(0x1d11e)) + (char) 0x202e));
+    void isControlMatchesWhatOfRewrites() {
+        assertEquals(true, Visible.isControl(0x1b));
+        assertEquals(true, Visible.isControl('\n'));
+        assertEquals(false, Visible.isControl('µ'));
+        assertEquals(false, Visible.isControl(' '));
     }
 }
