@@ -10,10 +10,11 @@ import java.util.regex.Pattern;
  * The last guard before stdout and stderr: every control character is made {@link Visible}
  * except the line feed and the few SGR colour sequences the program writes itself
  * ({@code report.Ansi}, {@code shell.Paint}). Each string from data is already made visible
- * where it is printed; this catches one that a future change forgets. Works a line at a time,
+ * where it is printed; this catches one that a future change forgets (the shell applies
+ * {@link #guard} to each line it prints). Works a line at a time,
  * so a colour sequence is never split; a partial line goes out on flush.
  */
-final class VisibleWriter extends Writer {
+public final class VisibleWriter extends Writer {
 
     /** Our own colours: reset, bold, dim, red, green, yellow, cyan (ECMA-48 SGR 0, 1, 2, 31, 32, 33, 36). */
     static final Pattern OUR_SGR = Pattern.compile("\u001b\\[(?:0|1|2|31|32|33|36)m");
@@ -25,8 +26,8 @@ final class VisibleWriter extends Writer {
         this.target = target;
     }
 
-    /** One line (without its line feed) as it may reach a terminal. */
-    static String guard(String s) {
+    /** One line (without its line feed) as it may reach a terminal; the shell passes its lines through it too. */
+    public static String guard(String s) {
         Matcher m = OUR_SGR.matcher(s);
         StringBuilder out = new StringBuilder(s.length());
         int at = 0;
