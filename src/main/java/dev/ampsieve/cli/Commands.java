@@ -55,8 +55,7 @@ public final class Commands {
             copy.initCause(ex);
             return copy;
         }
-        ParameterException copy = new ParameterException(ex.getCommandLine(), Visible.lines(ex.getMessage()), ex);
-        return copy;
+        return new ParameterException(ex.getCommandLine(), Visible.lines(ex.getMessage()), ex);
     }
 
     /** One line per problem, never a stack trace for something the user typed. */
