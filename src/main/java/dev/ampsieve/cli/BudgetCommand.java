@@ -7,6 +7,7 @@ import dev.ampsieve.catalog.Part;
 import dev.ampsieve.report.BudgetJson;
 import dev.ampsieve.report.BudgetText;
 import dev.ampsieve.stage.Stage;
+import dev.ampsieve.text.Visible;
 import dev.ampsieve.yaml.Fields;
 import java.util.Optional;
 import java.util.concurrent.Callable;
@@ -57,7 +58,7 @@ public final class BudgetCommand implements Callable<Integer> {
             return p.get();
         }
         String near = Fields.closest(id, catalog.parts().stream().map(Part::id).toList());
-        String msg = "no part '" + id + "' in the catalog " + catalog.root()
+        String msg = "no part '" + Visible.of(id) + "' in the catalog " + Visible.of(catalog.root().toString())
                 + (near != null ? "; did you mean '" + near + "'?" : "; 'ampsieve check' lists what was read");
         if (catalog.hasErrors()) {
             msg += " (some catalog files have errors and were left out: run 'ampsieve check')";

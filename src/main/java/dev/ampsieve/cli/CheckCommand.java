@@ -2,6 +2,7 @@ package dev.ampsieve.cli;
 
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.report.Caution;
+import dev.ampsieve.text.Visible;
 import dev.ampsieve.yaml.Problem;
 import java.io.PrintWriter;
 import java.util.concurrent.Callable;
@@ -31,7 +32,7 @@ public final class CheckCommand implements Callable<Integer> {
             out.println(p);
         }
         out.printf("%s: %d file(s), %d part(s), %d error(s), %d warning(s)%n",
-                c.root(), c.files(), c.parts().size(), errors, warnings);
+                Visible.of(c.root().toString()), c.files(), c.parts().size(), errors, warnings);
         out.println();
         out.println(Caution.TEXT);
         return errors > 0 ? ExitCode.FINDINGS : ExitCode.OK;

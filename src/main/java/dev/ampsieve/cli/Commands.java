@@ -1,9 +1,14 @@
 package dev.ampsieve.cli;
 
+import dev.ampsieve.text.Visible;
 import dev.ampsieve.yaml.InputException;
 import dev.ampsieve.yaml.Problem;
 import java.io.PrintWriter;
+import java.util.List;
 import picocli.CommandLine;
+import picocli.CommandLine.IParameterExceptionHandler;
+import picocli.CommandLine.ParameterException;
+import picocli.CommandLine.UnmatchedArgumentException;
 
 /**
  * Builds the one command tree both front ends use (the command line and the shell feed it the
@@ -27,6 +32,8 @@ public final class Commands {
         cl.setUsageHelpWidth(110);
         cl.setUsageHelpAutoWidth(true);
         cl.setExecutionExceptionHandler((ex, line, parseResult) -> handle(ex, line, root.verbose()));
+        IParameterExceptionHandler picocliDefault = cl.getParameterExceptionHandler();
+        cl.setParameterExceptionHandler((ex, args) -> picocliDefault.handleParseException(visible(ex), args));
         return cl;
     }
 
@@ -35,6 +42,20 @@ public final class Commands {
         out.flush();
         err.flush();
         return code;
+    }
+
+    /**
+     * The usage error with what the user typed made {@link Visible}; an unknown word stays an
+     * {@link UnmatchedArgumentException} so picocli still suggests the nearest option.
+     */
+    static ParameterException visible(ParameterException ex) {
+        if (ex instanceof UnmatchedArgumentException u) {
+            List<String> shown = u.getUnmatched().stream().map(Visible::of).toList();
+            UnmatchedArgumentException copy = new UnmatchedArgumentException(u.getCommandLine(), shown);
+            copy.initCause(ex);
+            return copy;
+        }
+        return new ParameterException(ex.getCommandLine(), Visible.lines(ex.getMessage()), ex);
     }
 
     /** One line per problem, never a stack trace for something the user typed. */
@@ -48,11 +69,12 @@ public final class Commands {
             return ExitCode.FINDINGS;
         }
         if (ex instanceof UserException ue) {
-            err.println("ampsieve: " + ue.getMessage());
+            // messages quote ids, queries and paths the user typed
+            err.println("ampsieve: " + Visible.lines(ue.getMessage()));
             err.flush();
             return ue.exitCode();
         }
-        err.println("ampsieve: internal error: " + ex);
+        err.println("ampsieve: internal error: " + Visible.lines(String.valueOf(ex)));
         if (verbose) {
             ex.printStackTrace(err);
         } else {

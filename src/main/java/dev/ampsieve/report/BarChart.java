@@ -1,5 +1,6 @@
 package dev.ampsieve.report;
 
+import dev.ampsieve.text.Visible;
 import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.Units;
 import java.util.ArrayList;
@@ -25,6 +26,9 @@ public final class BarChart {
 
     /** One bar: a label and a magnitude in volts (NaN when unknown: drawn empty, printed n/a). */
     public record Bar(String label, double value) {
+        public Bar {
+            label = Visible.of(label);
+        }
     }
 
     /** Columns between the chart's parts. */

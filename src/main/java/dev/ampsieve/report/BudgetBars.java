@@ -4,6 +4,7 @@ import dev.ampsieve.budget.Budget;
 import dev.ampsieve.budget.BudgetCalculator;
 import dev.ampsieve.budget.TermResult;
 import dev.ampsieve.stage.Trim;
+import dev.ampsieve.text.Visible;
 import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.Units;
 import java.util.ArrayList;
@@ -33,7 +34,7 @@ public final class BudgetBars {
             totals.add(new BarChart.Bar("after the trim", b.trimmed().worstCaseV()));
         }
         StringBuilder o = new StringBuilder();
-        o.append(b.part().id()).append(stageLabel == null ? "" : " in " + stageLabel)
+        o.append(Visible.of(b.part().id())).append(stageLabel == null ? "" : " in " + Visible.of(stageLabel))
                 .append(": error at the output, term by term, against the limit (")
                 .append(b.stage().criterion()).append(")\n\n");
         for (String line : BarChart.render(terms, totals, b.limitV(), style)) {

@@ -2,7 +2,6 @@ package dev.ampsieve.report;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.ampsieve.budget.Budget;
@@ -22,7 +21,7 @@ public final class BudgetJson {
     private BudgetJson() {
     }
 
-    private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+    private static final ObjectMapper MAPPER = JsonSupport.MAPPER;
 
     public static ObjectNode tree(Budget b, String stageLabel) {
         ObjectNode o = MAPPER.createObjectNode();

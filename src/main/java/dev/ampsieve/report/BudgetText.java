@@ -10,6 +10,7 @@ import dev.ampsieve.budget.YieldResult;
 import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.Trim;
+import dev.ampsieve.text.Visible;
 import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.Units;
 import java.util.List;
@@ -29,7 +30,8 @@ public final class BudgetText {
 
     /** @param width columns prose lines are folded at (the terminal's, in the shell) */
     public static String render(Budget b, String stageLabel, int width) {
-        return Wrap.prose(table(b, stageLabel, width), width);
+        // warnings and constraint details quote catalog text: no control character gets through
+        return Wrap.prose(Visible.lines(table(b, stageLabel, width)), width);
     }
 
     private static String table(Budget b, String stageLabel, int width) {
@@ -37,8 +39,9 @@ public final class BudgetText {
         StringBuilder o = new StringBuilder();
         double limit = b.limitV();
         double g = s.sourceGain(); // input-referred = at the signal source
-        line(o, "Part       %s%s", b.part().id(), b.part().title().isBlank() ? "" : "  (" + b.part().title() + ")");
-        line(o, "Stage      %s%s, noise gain %s, signal gain %s", stageLabel == null ? "" : stageLabel + ": ",
+        line(o, "Part       %s%s", Visible.of(b.part().id()),
+                b.part().title().isBlank() ? "" : "  (" + Visible.of(b.part().title()) + ")");
+        line(o, "Stage      %s%s, noise gain %s, signal gain %s", stageLabel == null ? "" : Visible.of(stageLabel) + ": ",
                 s.topology().key(), num(b.noiseGain()), num(s.signalGain()));
         line(o, "Limit      %s at the output (%s at the input), criterion %s", v(limit), v(limit / g),
                 s.criterion());

@@ -6,6 +6,7 @@ import dev.ampsieve.advice.Candidate;
 import dev.ampsieve.advice.Comparison;
 import dev.ampsieve.budget.Budget;
 import dev.ampsieve.budget.TermResult;
+import dev.ampsieve.text.Visible;
 import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.Units;
 
@@ -78,7 +79,8 @@ public final class CompareReport {
         s.lines(width).forEach(l -> o.append(l).append('\n'));
         o.append('\n').append(c.conclusion()).append('\n');
         o.append('\n').append(Caution.TEXT).append('\n');
-        return Wrap.prose(o.toString(), width);
+        // the conclusion quotes part ids and currencies: no control character gets through
+        return Wrap.prose(Visible.lines(o.toString()), width);
     }
 
     private static boolean estimated(Budget b, String key) {

@@ -4,6 +4,7 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.search.PartDocuments;
+import dev.ampsieve.text.Visible;
 import java.util.List;
 
 /** What {@code ampsieve find} prints: the matching parts with their key figures. */
@@ -19,7 +20,7 @@ public final class FindReport {
     /** @param width columns the table fits in (the terminal's, in the shell) */
     public static String text(String query, List<Part> parts, int width) {
         StringBuilder o = new StringBuilder();
-        String what = query.isBlank() ? "in the catalog" : "match '" + query + "'";
+        String what = query.isBlank() ? "in the catalog" : "match '" + Visible.of(query) + "'";
         o.append(parts.size()).append(parts.size() == 1 ? " part " : " parts ").append(what)
                 .append(parts.isEmpty() ? "." : ", most relevant first, then cheapest:").append('\n');
         if (!parts.isEmpty()) {
@@ -38,7 +39,7 @@ public final class FindReport {
             String indent = " ".repeat(idWidth + 2);
             for (int i = 0; i < parts.size(); i++) {
                 o.append(lines.get(i + 1)).append('\n');
-                String title = parts.get(i).title();
+                String title = Visible.of(parts.get(i).title());
                 if (!title.isBlank()) {
                     o.append(TextTable.cut(indent + title, width)).append('\n');
                 }
@@ -46,7 +47,7 @@ public final class FindReport {
             o.append("vos, drift, ib: guaranteed maximum, else typical; en: white noise density; supply: total, V+ to V-.\n");
         }
         o.append('\n').append(Caution.TEXT).append('\n');
-        return Wrap.prose(o.toString(), width);
+        return Wrap.prose(Visible.lines(o.toString()), width);
     }
 
     /** JSON: {query, count, parts[{id, title, architecture, input, price, currency, figures in SI...}], caution}. */

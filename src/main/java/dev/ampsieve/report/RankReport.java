@@ -14,6 +14,7 @@ import dev.ampsieve.budget.TermResult;
 import dev.ampsieve.budget.Verdict;
 import dev.ampsieve.budget.YieldResult;
 import dev.ampsieve.stage.Criterion;
+import dev.ampsieve.text.Visible;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
@@ -72,7 +73,7 @@ public final class RankReport {
         StringBuilder o = new StringBuilder();
         o.append(StageLine.of(r.stage(), stageLabel)).append('\n');
         if (query != null && !query.isBlank()) {
-            o.append("Parts matching '").append(query).append("'\n");
+            o.append("Parts matching '").append(Visible.of(query)).append("'\n");
         }
         List<Candidate> shown = r.candidates().stream().limit(Math.max(0, top)).toList();
         Set<String> front = Set.copyOf(r.paretoIds());
@@ -127,7 +128,8 @@ public final class RankReport {
             pick.budget().warnings().forEach(w -> o.append("  - ").append(w).append('\n'));
         }
         o.append('\n').append(Caution.TEXT).append('\n');
-        return Wrap.prose(o.toString(), width);
+        // advice, notes and reasons quote part ids and catalog text: no control character gets through
+        return Wrap.prose(Visible.lines(o.toString()), width);
     }
 
     /** CSV: one row per candidate in ranking order, then one per rejected part; the caution as a last '#' line. */
@@ -158,15 +160,26 @@ public final class RankReport {
         return Double.isFinite(v) ? String.format(Locale.ROOT, "%.6g", v) : "";
     }
 
-    /** RFC 4180 quoting when needed. */
-    private static String csv(String s) {
+    /** A plain decimal or scientific number, which a spreadsheet reads as a number and never as a formula. */
+    private static final java.util.regex.Pattern CSV_NUMBER =
+            java.util.regex.Pattern.compile("[-+]?(\\d+\\.?\\d*|\\.\\d+)([eE][-+]?\\d+)?");
+
+    /**
+     * One text field: control characters made {@link Visible}; a field a spreadsheet would run as a
+     * formula (starting with =, +, -, @, tab or carriage return, and not a number) defused with a
+     * leading ' and quoted, as the OWASP "CSV Injection" page advises [from memory]; RFC 4180
+     * quoting for commas, quotes and line breaks.
+     */
+    static String csv(String s) {
         if (s == null) {
             return "";
         }
-        if (s.contains(",") || s.contains("\"") || s.contains("\n")) {
-            return "\"" + s.replace("\"", "\"\"") + "\"";
+        boolean formula = !s.isEmpty() && "=+-@\t\r".indexOf(s.charAt(0)) >= 0 && !CSV_NUMBER.matcher(s).matches();
+        String v = (formula ? "'" : "") + Visible.of(s);
+        if (formula || v.contains(",") || v.contains("\"") || v.contains("\n") || v.contains("\r")) {
+            return "\"" + v.replace("\"", "\"\"") + "\"";
         }
-        return s;
+        return v;
     }
 
     /**

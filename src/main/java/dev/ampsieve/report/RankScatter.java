@@ -3,6 +3,7 @@ package dev.ampsieve.report;
 import dev.ampsieve.advice.Candidate;
 import dev.ampsieve.advice.Ranking;
 import dev.ampsieve.stage.Criterion;
+import dev.ampsieve.text.Visible;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -27,7 +28,7 @@ public final class RankScatter {
             }
         }
         StringBuilder o = new StringBuilder();
-        o.append(stageLabel == null ? "" : stageLabel + ": ")
+        o.append(stageLabel == null ? "" : Visible.of(stageLabel) + ": ")
                 .append(r.stage().criterion().kind() == Criterion.Kind.WORST_CASE ? "worst-case" : "RSS")
                 .append(" error at the output (log scale) against effective unit cost\n");
         if (points.isEmpty()) {

@@ -1,5 +1,6 @@
 package dev.ampsieve.report;
 
+import dev.ampsieve.text.Visible;
 import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.Units;
 import java.util.ArrayList;
@@ -32,6 +33,9 @@ public final class ScatterChart {
      * @param verdict fits, fits-after-trim or no-fit (colours the letter)
      */
     public record Point(String id, double error, double cost, String verdict) {
+        public Point {
+            id = Visible.of(id);
+        }
     }
 
     private static final String MARKS = "abcdefghijklmnopqrstuvwxyzABCDEFGHIJKLMNOPQRSTUVWXYZ";
@@ -57,6 +61,7 @@ public final class ScatterChart {
         }
         Glyphs g = style.glyphs();
         int rows = Math.max(MIN_HEIGHT, height);
+        currency = Visible.of(currency);
 
         double yHi = limit;
         double yLo = limit;

@@ -1,6 +1,7 @@
 package dev.ampsieve.report;
 
 import dev.ampsieve.stage.Stage;
+import dev.ampsieve.text.Visible;
 import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.Units;
 
@@ -11,7 +12,7 @@ final class StageLine {
 
     static String of(Stage s, String label) {
         double e = s.limitVolts();
-        return "Stage " + (label == null ? "" : label + ": ") + s.topology().key() + ", noise gain "
+        return "Stage " + (label == null ? "" : Visible.of(label) + ": ") + s.topology().key() + ", noise gain "
                 + Units.format(s.noiseGain(), Dimension.NUMBER, 4) + ", " + Units.format(s.tMin(), Dimension.TEMPERATURE)
                 + " to " + Units.format(s.tMax(), Dimension.TEMPERATURE) + "\n"
                 + "Limit " + Figures.volts(e) + " at the output (" + Figures.volts(e / s.sourceGain()) + " at the input), "

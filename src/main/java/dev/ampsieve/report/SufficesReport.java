@@ -5,6 +5,7 @@ import dev.ampsieve.advice.Sufficiency;
 import dev.ampsieve.budget.Budget;
 import dev.ampsieve.budget.TermResult;
 import dev.ampsieve.budget.YieldResult;
+import dev.ampsieve.text.Visible;
 import java.util.Locale;
 
 /** What {@code ampsieve suffices} prints: the yes/no answer first, then the figures behind it. */
@@ -35,7 +36,8 @@ public final class SufficesReport {
         t.row("verdict", b.constraintsMet() ? b.verdict().key() : "rejected (hard constraint)");
         t.lines(width).stream().skip(1).forEach(l -> o.append(l).append('\n'));
         o.append('\n').append(Caution.TEXT).append('\n');
-        return Wrap.prose(o.toString(), width);
+        // the answer quotes the part id: no control character gets through
+        return Wrap.prose(Visible.lines(o.toString()), width);
     }
 
     private static String share(double v, double limit) {

@@ -1,12 +1,14 @@
 package dev.ampsieve.report;
 
+import dev.ampsieve.text.Visible;
 import java.util.ArrayList;
 import java.util.List;
 
 /**
  * A plain-text table that fits a terminal width: every column as wide as its widest cell,
  * except one flexible column (a title or a reason) which takes what is left and is cut with
- * an ellipsis.
+ * an ellipsis. Cells and headers are made {@link Visible}: a control character or line feed
+ * from the catalog shows as an escape and never breaks the layout or drives the terminal.
  */
 final class TextTable {
 
@@ -29,18 +31,18 @@ final class TextTable {
     private final List<String[]> rows = new ArrayList<>();
 
     TextTable left(String header) {
-        columns.add(new Column(header, false, false));
+        columns.add(new Column(Visible.of(header), false, false));
         return this;
     }
 
     TextTable right(String header) {
-        columns.add(new Column(header, true, false));
+        columns.add(new Column(Visible.of(header), true, false));
         return this;
     }
 
     /** The column that shrinks to fit (at most one). */
     TextTable flex(String header) {
-        columns.add(new Column(header, false, true));
+        columns.add(new Column(Visible.of(header), false, true));
         return this;
     }
 
@@ -48,7 +50,11 @@ final class TextTable {
         if (cells.length != columns.size()) {
             throw new IllegalArgumentException(cells.length + " cells for " + columns.size() + " columns");
         }
-        rows.add(cells.clone());
+        String[] shown = new String[cells.length];
+        for (int i = 0; i < cells.length; i++) {
+            shown[i] = Visible.of(cells[i]);
+        }
+        rows.add(shown);
         return this;
     }
 

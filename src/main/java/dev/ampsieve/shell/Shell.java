@@ -272,7 +272,7 @@ public final class Shell {
             return ExitCode.FINDINGS;
         }
         if (ex instanceof UserException ue) {
-            err.println(ue.getMessage());
+            err.println(dev.ampsieve.text.Visible.lines(ue.getMessage()));
             return ue.exitCode();
         }
         if (root.verbose()) {
@@ -288,6 +288,7 @@ public final class Shell {
      * after the stage is named and before they are painted, so the terminal never breaks a word.
      */
     private String shown(String s, ShellState state, boolean error) {
+        s = dev.ampsieve.cli.VisibleWriter.guard(s); // before our own colours: only they may reach the terminal
         Path tmp = state == null ? null : state.stageFileIfWritten();
         if (tmp != null) {
             String name = state.nameInMessages();

@@ -3,6 +3,7 @@ package dev.ampsieve.shell;
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.stage.StageKeys;
+import dev.ampsieve.text.Visible;
 import dev.ampsieve.units.Dimension;
 import java.io.File;
 import java.nio.file.Path;
@@ -43,8 +44,27 @@ final class ShellCompleter implements Completer {
         this.tree = tree;
     }
 
+    /** Every candidate {@link Visible}: a part title or a file name must not drive the terminal from the menu. */
     @Override
     public void complete(LineReader reader, ParsedLine line, List<Candidate> out) {
+        int from = out.size();
+        offer(reader, line, out);
+        for (int i = from; i < out.size(); i++) {
+            out.set(i, visible(out.get(i)));
+        }
+    }
+
+    /**
+     * The candidate with its value, display and description made visible. The value too: a file
+     * name holding ESC completes to its escaped spelling, which then names no file, rather than
+     * putting a raw ESC on the command line.
+     */
+    static Candidate visible(Candidate c) {
+        return new Candidate(Visible.of(c.value()), Visible.of(c.displ()), Visible.of(c.group()), Visible.of(c.descr()),
+                c.suffix(), c.key(), c.complete(), c.sort());
+    }
+
+    private void offer(LineReader reader, ParsedLine line, List<Candidate> out) {
         List<String> words = line.words();
         int idx = line.wordIndex();
         String word = line.word().substring(0, Math.min(line.wordCursor(), line.word().length()));

@@ -67,6 +67,6 @@ final class StageCheck {
 
     /** "problem; fix" without the file and field, for an answer just typed. */
     static String brief(Problem p) {
-        return p.fix().isEmpty() ? p.message() : p.message() + "; " + p.fix();
+        return dev.ampsieve.text.Visible.of(p.fix().isEmpty() ? p.message() : p.message() + "; " + p.fix());
     }
 }

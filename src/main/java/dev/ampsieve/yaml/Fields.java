@@ -1,5 +1,6 @@
 package dev.ampsieve.yaml;
 
+import dev.ampsieve.text.Visible;
 import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.UnitException;
 import dev.ampsieve.units.Units;
@@ -105,9 +106,28 @@ public final class Fields {
         }
     }
 
+    /** Free text; a control character in it is a warning (the text is kept, and shown escaped). */
     public String text(Node.Mapping m, String path, String key) {
         Node.Scalar s = scalar(m, path, key);
-        return s == null ? null : s.text();
+        if (s == null) {
+            return null;
+        }
+        warnControls(s, join(path, key));
+        return s.text();
+    }
+
+    /**
+     * A warning when {@code s} holds a character a terminal would obey rather than show (ESC,
+     * BEL, a C1 control, a bidi override): it is printed escaped, but it is almost always a
+     * copy-and-paste accident, or a catalog trying to drive the reader's terminal. Line feeds and
+     * tabs are left alone: YAML block scalars ({@code notes: |}) hold them legitimately.
+     */
+    private void warnControls(Node.Scalar s, String field) {
+        s.text().codePoints().filter(c -> c != '\n' && c != '\t' && Visible.isControl(c)).findFirst().ifPresent(c -> {
+            String name = Character.getName(c);
+            warning(s.at(), field, String.format(Locale.ROOT, "contains control character U+%04X", c)
+                    + (name == null ? "" : " (" + name + ")"), "remove it");
+        });
     }
 
     public Boolean bool(Node.Mapping m, String path, String key) {
@@ -185,13 +205,18 @@ public final class Fields {
             return List.of();
         }
         if (v instanceof Node.Scalar s) {
-            return s.text() == null ? List.of() : List.of(s.text());
+            if (s.text() == null) {
+                return List.of();
+            }
+            warnControls(s, join(path, key));
+            return List.of(s.text());
         }
         if (v instanceof Node.Seq seq) {
             List<String> out = new ArrayList<>();
             for (int i = 0; i < seq.items().size(); i++) {
                 Node item = seq.items().get(i);
                 if (item instanceof Node.Scalar s && s.text() != null) {
+                    warnControls(s, join(path, key) + "[" + i + "]");
                     out.add(s.text());
                 } else {
                     error(item.at(), join(path, key) + "[" + i + "]", "expected a word, found " + item.kind(), "write '- word'");

@@ -1,10 +1,12 @@
 package dev.ampsieve.yaml;
 
+import dev.ampsieve.text.Visible;
 import java.nio.file.Path;
 
 /**
  * One finding in a user's file: where it is, which field, what is wrong and what to do.
- * Printed as {@code file:line:col: field.path: problem; fix}.
+ * Printed as {@code file:line:col: field.path: problem; fix}, with any control character of
+ * a file name or an echoed value made visible ({@link Visible}).
  *
  * @param file   the file, as the user named it (may be null for values typed in the shell)
  * @param line   1-based line, 0 when unknown
@@ -37,7 +39,7 @@ public record Problem(Severity severity, Path file, int line, int column, String
         StringBuilder sb = new StringBuilder();
         // a value typed on the command line or in the shell has no file: the field names it
         if (file != null) {
-            sb.append(file);
+            sb.append(Visible.of(file.toString()));
             if (line > 0) {
                 sb.append(':').append(line);
                 if (column > 0) {
@@ -50,11 +52,12 @@ public record Problem(Severity severity, Path file, int line, int column, String
             sb.append("warning: ");
         }
         if (!field.isEmpty()) {
-            sb.append(field).append(": ");
+            sb.append(Visible.of(field)).append(": ");
         }
-        sb.append(message);
+        // messages and fixes quote what the user wrote
+        sb.append(Visible.of(message));
         if (!fix.isEmpty()) {
-            sb.append("; ").append(fix);
+            sb.append("; ").append(Visible.of(fix));
         }
         return sb.toString();
     }
