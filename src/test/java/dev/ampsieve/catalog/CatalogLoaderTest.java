@@ -387,10 +387,10 @@ class CatalogLoaderTest {
         "gbw: 1 MHz          | gbw: 20 GHz           | gbw               | 20.0 GHz is above 10.0 GHz, implausible for an op amp",
         "gbw: 1 MHz          | gbw: 50 Hz            | gbw               | 50.0 Hz is below 100 Hz, implausible for an op amp",
         "max-over-temp: 200 nA | max-over-temp: 1 mA | ib.max-over-temp  | 1.00 mA is above 100 µA, implausible for an op amp",
-        "typ: 110 dB         | typ: 250 dB           | cmrr.typ          | 250 dB is above 200 dB, implausible for an op amp",
+        "typ: 110 dB         | typ: 190 dB           | cmrr.typ          | 190 dB is above 180 dB, implausible for an op amp",
         "en: 12 nV/rtHz      | en: 2 uV/rtHz         | noise.en          | 2.00 µV/√Hz is above 1.00 µV/√Hz, implausible for an op amp",
         "unit: 1.20          | unit: 20000           | price.unit        | 20000 is above 10000, implausible for an op amp",
-        "max: 36 V           | max: 3600 V           | supply.max        | 3.60 kV is above 1.00 kV, implausible for an op amp",
+        "max: 36 V           | max: 1500 V           | supply.max        | 1.50 kV is above 1.00 kV, implausible for an op amp",
         "min: -40 C          | min: -150 C           | temperature.min   | -150 °C is below -100 °C, implausible for a rated range"})
     void implausibleMagnitudesAreWarningsAndThePartStillLoads(String from, String to, String field, String message)
             throws Exception {
