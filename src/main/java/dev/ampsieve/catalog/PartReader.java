@@ -407,22 +407,29 @@ final class PartReader {
             boolean sized = b.signed() || x > 0; // zero is for the sign checks
             String what = d == Dimension.TEMPERATURE ? "a rated range" : "an op amp";
             if (x > b.errorAbove()) {
-                err(keyPath, Units.format(v, d) + " is above " + Units.format(b.errorAbove(), d) + ", impossible for "
-                        + what + " (" + b.why() + ")", "check the unit prefix (p, n, u, m, k, M) and the datasheet column;"
-                        + " the largest value accepted here is " + Units.format(b.errorAbove(), d));
+                err(keyPath, beyond(v, b.errorAbove(), d) + ", impossible for " + what + " (" + b.why() + ")",
+                        "check the unit prefix (p, n, u, m, k, M) and the datasheet column; the largest "
+                                + (b.signed() ? "value" : "size") + " accepted here is " + Units.format(b.errorAbove(), d));
             } else if (sized && x < b.errorBelow()) {
                 err(keyPath, Units.format(v, d) + " is below " + Units.format(b.errorBelow(), d) + ", impossible for "
-                        + what + " (" + b.why() + ")", "check the sign, the unit prefix (p, n, u, m, k, M) and the datasheet"
-                        + " column; the smallest value accepted here is " + Units.format(b.errorBelow(), d));
+                        + what + " (" + b.why() + ")", "check the unit prefix (p, n, u, m, k, M) and the datasheet"
+                        + " column; the smallest " + (b.signed() ? "value" : "size") + " accepted here is "
+                        + Units.format(b.errorBelow(), d));
             } else if (x > b.warnAbove()) {
-                warn(keyPath, Units.format(v, d) + " is above " + Units.format(b.warnAbove(), d)
-                        + ", implausible for " + what, "check the unit prefix (u, m, k, M) and the column");
+                warn(keyPath, beyond(v, b.warnAbove(), d) + ", implausible for " + what,
+                        "check the unit prefix (u, m, k, M) and the column");
             } else if (sized && x < b.warnBelow()) {
                 warn(keyPath, Units.format(v, d) + " is below " + Units.format(b.warnBelow(), d)
                         + ", implausible for " + what, b.signed() ? "check the sign and the unit"
                         : "check the unit prefix (p, n, u, k, M) and the column");
             }
         }
+    }
+
+    /** "2.00 V is above 1.00 V", or for a negative value compared by size "-2.00 V is below -1.00 V". */
+    private static String beyond(double v, double limit, Dimension d) {
+        return v < 0 && limit > 0 ? Units.format(v, d) + " is below " + Units.format(-limit, d)
+                : Units.format(v, d) + " is above " + Units.format(limit, d);
     }
 
     /** Absences the user should hear about now, because the budget will assume something. */

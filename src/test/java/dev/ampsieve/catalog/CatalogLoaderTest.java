@@ -344,17 +344,21 @@ class CatalogLoaderTest {
 
     @ParameterizedTest
     @CsvSource(delimiter = '|', value = {
-        "gbw: 1 MHz | gbw: .inf  | gbw        | .inf",
-        "max: 2 mV  | max: .nan  | vos.max    | .nan",
-        "unit: 1.20 | unit: .NaN | price.unit | .NaN",
-        "max: 36 V  | max: 1e999 V | supply.max | 1e999 V"})
-    void nanAndInfinityAreRefused(String from, String to, String field, String value) throws Exception {
+        "gbw: 1 MHz | gbw: .inf  | gbw        | .inf    | is not a finite number",
+        "max: 2 mV  | max: .nan  | vos.max    | .nan    | is not a finite number",
+        "unit: 1.20 | unit: .NaN | price.unit | .NaN    | is not a finite number",
+        "max: 36 V  | max: 1e999 V | supply.max | 1e999 V | is out of range: beyond the largest number (about 1.8e308 in SI units)",
+        "max: 36 V  | max: 1e400 V | supply.max | 1e400 V | is out of range: beyond the largest number (about 1.8e308 in SI units)",
+        "max: 36 V  | max: 1e308 kV | supply.max | 1e308 kV | is out of range: beyond the largest number (about 1.8e308 in SI units)",
+        "max: 2 mV  | max: 1e-400 V | vos.max  | 1e-400 V | is out of range: below the smallest number (about 1e-308 in SI units)"})
+    void nanAndInfinityAreRefused(String from, String to, String field, String value, String message) throws Exception {
         String text = with(BASE, from, to);
         Problem p = about(loadPart(text).problems(), field);
         assertTrue(p.isError());
         assertAt(p, part(), lineOf(text, to), columnOf(text, to) + to.indexOf(value));
-        assertTrue(p.message().equals("'" + value + "' is not a finite number")
-                || p.message().equals("'" + value + "' is out of range"), p.message());
+        assertEquals("'" + value + "' " + message, p.message());
+        assertTrue(p.fix().startsWith(value.equals("1e-400 V") ? "check the exponent and the prefix; write 0 if you mean zero"
+                : value.startsWith("1e") ? "check the exponent and the prefix; write a voltage such as" : "write "), p.fix());
     }
 
     @ParameterizedTest
