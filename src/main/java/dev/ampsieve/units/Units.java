@@ -411,7 +411,12 @@ public final class Units {
         if (abs != 0 && abs < 1e-3) {
             return trim(sig(si * 1e6, digits)) + " ppm";
         }
-        return trim(sig(si * 100, digits)) + " %";
+        String pct = trim(sig(si * 100, digits));
+        // a share below 100 % never reads as 100 % (a yield target of 99.9999 % is not 100 %)
+        for (int more = digits + 1; si > 0 && si < 1 && pct.equals("100") && more <= 15; more++) {
+            pct = trim(sig(si * 100, more));
+        }
+        return pct + " %";
     }
 
     private static String time(double s, int digits) {

@@ -37,4 +37,12 @@ class FiguresTest {
         assertEquals("-∞ %", Figures.percent(Double.NEGATIVE_INFINITY));
         assertEquals("40 %", Figures.percent(0.4));
     }
+
+    @Test
+    void aYieldTargetJustBelowHundredPercentDoesNotReadAsHundred() {
+        // 99.9999 % printed with three decimals would be "100.000 %"
+        assertEquals("99.9999 %", BudgetText.pct(0.999999));
+        assertEquals("99.900 %", BudgetText.pct(0.999));
+        assertEquals("100.000 %", BudgetText.pct(1.0));
+    }
 }

@@ -103,6 +103,14 @@ class StageLimitsTest {
     }
 
     @Test
+    void theHighestYieldTargetPrintsAsItself() throws InputException {
+        // 99.9999 % with four significant digits would round to "100 %"
+        Stage s = StageLoader.parse("gain: 10\nlimit: 1 mV\ncriterion: yield 99.9999 %\n", NAME);
+        assertEquals("yield 99.9999 %", s.criterion().toString());
+        assertEquals("yield 99.9 %", Criterion.yield(0.999).toString());
+    }
+
+    @Test
     void theHighestYieldTargetCanBeShownWithinTheTrialCap() {
         // Wilson 95 % lower bound with every unit passing is n / (n + z^2) (Wilson 1927):
         // 1e7 / (1e7 + 1.96^2) = 0.99999962, above 0.999999; the default 20000 units reach only 0.99981
