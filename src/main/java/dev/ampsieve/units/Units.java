@@ -365,7 +365,8 @@ public final class Units {
     }
 
     /**
-     * {@code v} rounded to {@code digits} significant digits, printed without exponent. The
+     * {@code v} rounded to {@code digits} significant digits, printed without exponent inside
+     * 1e-6..1e12 (scientific notation outside it; ∞ and n/a for the non-finite). The
      * number of decimals follows the rounded value, so 0.99996 prints "1.00", not "1.000".
      */
     private static String sig(double v, int digits) {
