@@ -26,7 +26,9 @@ final class Phrases {
     }
 
     static String percentFine(double ratio) {
-        return String.format(Locale.ROOT, "%.1f %%", ratio * 100);
+        String s = String.format(Locale.ROOT, "%.1f %%", ratio * 100);
+        // a target of 99.99 % must not read as 100.0 %
+        return ratio < 1 && s.equals("100.0 %") ? Units.format(ratio, Dimension.RATIO, 7) : s;
     }
 
     /**

@@ -56,12 +56,21 @@ public final class BudgetCalculator {
         stageWarnings(stage, part, warnings, limit);
 
         List<String> cw = new ArrayList<>();
-        List<ConstraintResult> constraints = Constraints.check(stage, part, dcOnly, cw);
+        List<ConstraintResult> constraints = new ArrayList<>(Constraints.check(stage, part, dcOnly, cw));
         warnings.addAll(cw);
+
+        Trimmed trimmed = trimmed(stage, v, terms);
+        ConstraintResult finite = Constraints.finite(terms, wc, rss, noiseRms, trimmed);
+        if (!finite.ok()) {
+            // no Monte Carlo on numbers past the largest double: the part is refused with the terms that overflowed
+            constraints.add(finite);
+            YieldResult none = new YieldResult(0, 0, 0, 0, "none-pass");
+            return new Budget(part, stage, stage.noiseGain(), terms, wc, rss, noiseRms, limit, none, trimmed.withYield(none),
+                    Verdict.NO_FIT, null, constraints, List.copyOf(warnings));
+        }
 
         double fixed = fixedInYield(stage, terms, false, false);
         YieldResult yield = new YieldModel(stage, v, fixed, false, false).run(yieldTarget(stage));
-        Trimmed trimmed = trimmed(stage, v, terms);
 
         boolean constraintsOk = constraints.stream().allMatch(ConstraintResult::ok);
         if (stage.criterion().kind() == Criterion.Kind.YIELD && trimOf(stage).allowed()) {
@@ -104,6 +113,9 @@ public final class BudgetCalculator {
     public static YieldResult trimmedYield(Stage stage, Part part) {
         PartValues v = PartValues.of(part, stage);
         List<TermResult> terms = TERMS.stream().map(t -> t.evaluate(stage, v)).toList();
+        if (terms.stream().anyMatch(t -> !Double.isFinite(t.outputV()))) {
+            return new YieldResult(0, 0, 0, 0, "none-pass"); // as compute() decides for such a part
+        }
         return trimmedYield(stage, v, terms);
     }
 

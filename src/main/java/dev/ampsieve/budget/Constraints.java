@@ -25,6 +25,8 @@ public final class Constraints {
     public static final String OUTPUT_SWING = "output-swing";
     public static final String SLEW = "slew";
     public static final String PRICE = "price";
+    /** Every figure of the budget is a finite number (a product of extreme catalog and stage values may overflow). */
+    public static final String FINITE = "finite";
 
     /**
      * @param dcHeadroomV output-referred DC error an AC-coupled stage must still swing around
@@ -40,6 +42,30 @@ public final class Constraints {
         out.add(slew(s, p, warnings));
         out.add(price(s, p, warnings));
         return out;
+    }
+
+    /**
+     * Fails when a term or total is past the largest double (or not a number): names each such
+     * term with the catalog and stage values it was computed from (its note). Load-time limits
+     * keep every product of accepted values finite; this stands behind them, so a part that
+     * overflows is refused with its reason instead of stopping a whole ranking.
+     */
+    static ConstraintResult finite(List<TermResult> terms, double wc, double rss, double noiseRms, Trimmed trimmed) {
+        List<String> bad = new ArrayList<>();
+        for (TermResult t : terms) {
+            if (!Double.isFinite(t.outputV())) {
+                bad.add(t.label() + " (" + t.note() + ")");
+            }
+        }
+        if (bad.isEmpty() && !(Double.isFinite(wc) && Double.isFinite(rss) && Double.isFinite(noiseRms)
+                && Double.isFinite(trimmed.worstCaseV()) && Double.isFinite(trimmed.rssV()))) {
+            bad.add("the totals of " + terms.stream().map(TermResult::label).toList());
+        }
+        if (bad.isEmpty()) {
+            return new ConstraintResult(FINITE, true, "every figure is a finite number");
+        }
+        return new ConstraintResult(FINITE, false, "too large to compute: " + String.join("; ", bad)
+                + "; check these catalog and stage values for a wrong prefix or exponent");
     }
 
     static ConstraintResult supply(Stage s, Part p, List<String> w) {

@@ -66,7 +66,8 @@ public final class NoiseTerm implements ErrorTerm {
     public TermResult evaluate(Stage s, PartValues v) {
         double rms = rms(s, v);
         double fN = NoiseModel.noiseBandEdge(s, v.gbw());
-        String note = "rms " + Units.format(rms, Dimension.VOLTAGE) + ", pp (6.6 x rms) "
+        String note = "en " + Units.format(v.en(), Dimension.VOLTAGE_DENSITY) + ", in "
+                + Units.format(v.in(), Dimension.CURRENT_DENSITY) + "; rms " + Units.format(rms, Dimension.VOLTAGE) + ", pp (6.6 x rms) "
                 + Units.format(NoiseModel.PEAK_TO_PEAK * rms, Dimension.VOLTAGE) + ", "
                 + Units.format(s.bandLow(), Dimension.FREQUENCY) + " to fN "
                 + Units.format(fN, Dimension.FREQUENCY) + " (" + bandNote(s, v.gbw(), fN) + "), resistors at "

@@ -90,6 +90,9 @@ public final class CatalogKeys {
 
     private static final Map<String, Function<Part, Double>> GETTERS;
 
+    /** No bound on this side. */
+    private static final double NONE = Double.NaN;
+
     static {
         Map<String, List<String>> s = new LinkedHashMap<>();
         s.put(PRICE, List.of(UNIT, QUANTITY, CURRENCY));
@@ -136,7 +139,89 @@ public final class CatalogKeys {
         r.put(QUIESCENT_CURRENT, Dimension.CURRENT, Part::quiescentCurrent);
         QUANTITIES = Collections.unmodifiableMap(r.dimensions);
         GETTERS = Collections.unmodifiableMap(r.getters);
+
+        Map<String, Bounds> b = new LinkedHashMap<>();
+        b.put(path(PRICE, UNIT), new Bounds(NONE, 10_000, NONE, 1e7, false,
+                "no single amplifier is sold for more than ten million"));
+        Bounds supply = new Bounds(0.5, 1000, 0.1, 2000, false,
+                "transistors need a few kT/q (about 0.1 V) to amplify, and no op amp is built for more than about 1.2 kV");
+        b.put(path(SUPPLY, MIN), supply);
+        b.put(path(SUPPLY, MAX), supply);
+        Bounds temp = new Bounds(-100, 300, -273.15, 1000, true,
+                "nothing is colder than absolute zero, and no amplifier works near 1000 °C (silicon melts at 1414 °C)");
+        b.put(path(TEMPERATURE, MIN), temp);
+        b.put(path(TEMPERATURE, MAX), temp);
+        Bounds vos = new Bounds(NONE, 100e-3, NONE, 1, false, "an offset of volts leaves no room for a signal");
+        for (String k : SPREAD) {
+            b.put(path(VOS, k), vos);
+        }
+        Bounds drift = new Bounds(NONE, 100e-6, NONE, 1e-3, false,
+                "1 mV/°C is what a 1 V offset would drift (vos / T), and no amplifier has that offset");
+        b.put(path(VOS_DRIFT, TYP), drift);
+        b.put(path(VOS_DRIFT, MAX), drift);
+        Bounds current = new Bounds(NONE, 100e-6, NONE, 100e-3, false,
+                "input pins are commonly rated for at most 10 mA (absolute maximum), ten times less");
+        for (String k : SPREAD) {
+            b.put(path(IB, k), current);
+            b.put(path(IOS, k), current);
+        }
+        Bounds rejection = new Bounds(NONE, 180, NONE, 200, false,
+                "200 dB is a ratio of ten billion; the best amplifiers reach about 160 dB");
+        for (String sec : List.of(CMRR, PSRR, AOL)) {
+            b.put(path(sec, MIN), rejection);
+            b.put(path(sec, TYP), rejection);
+        }
+        b.put(GBW, new Bounds(100, 10e9, 1, 100e9, false,
+                "the fastest amplifiers reach a few GHz, and none is slower than 1 Hz"));
+        b.put(SLEW, new Bounds(NONE, 1e11, NONE, 1e12, false,
+                "the fastest amplifiers slew a few thousand V/µs, far below 1 MV/µs"));
+        b.put(path(NOISE, EN), new Bounds(0.1e-9, 1e-6, 10e-12, 1e-3, false,
+                "the quietest inputs reach a few tenths of a nV/√Hz; a mV/√Hz is no amplifier's noise"));
+        Bounds corner = new Bounds(NONE, 1e6, NONE, 1e9, false, "a 1/f corner above 1 GHz is no amplifier's");
+        b.put(path(NOISE, EN_CORNER), corner);
+        b.put(path(NOISE, IN), new Bounds(NONE, 1e-9, NONE, 1e-6, false,
+                "even 100 mA of bias current has only about 0.2 nA/√Hz of shot noise"));
+        b.put(path(NOISE, IN_CORNER), corner);
+        b.put(path(LONG_TERM_DRIFT, VALUE), new Bounds(NONE, 10e-3, NONE, 1, false,
+                "an offset change of volts leaves no room for a signal"));
+        double hour = 3600;
+        double year = 365.25 * 86400;
+        b.put(path(LONG_TERM_DRIFT, PER), new Bounds(24 * hour, 10 * year, hour, 100 * year, false,
+                "aging is measured over hundreds of hours to years, never less than an hour nor over a century"));
+        Bounds headroom = new Bounds(NONE, 10, NONE, 2000, false,
+                "headroom is part of the supply, which is at most 2 kV");
+        for (String sec : List.of(INPUT_HEADROOM, OUTPUT_HEADROOM)) {
+            b.put(path(sec, LOW), headroom);
+            b.put(path(sec, HIGH), headroom);
+        }
+        b.put(CHOPPING_FREQUENCY, new Bounds(NONE, 100e6, NONE, 100e9, false,
+                "a chopping clock cannot be faster than the fastest amplifier's gain-bandwidth"));
+        b.put(QUIESCENT_CURRENT, new Bounds(NONE, 1, NONE, 100, false,
+                "even power amplifiers draw well under an ampere at rest"));
+        BOUNDS = Collections.unmodifiableMap(b);
     }
+
+    /**
+     * How large (or small) a quantity may be. Beyond a warning bound a value is unusual but
+     * possible, so the part still loads; beyond an error bound no op amp has it, the value is
+     * certainly a slip (a wrong prefix, a misread column), and the part is refused. Errors also
+     * keep the budget's arithmetic finite: no product of allowed values overflows.
+     * Magnitudes are compared (a signed ib.typ or headroom by its size), except where
+     * {@code signed} (temperatures). Bounds below apply to non-zero values only (zero has
+     * its own sign checks). NaN: no bound on that side. SI units, °C, dB.
+     *
+     * @param why for the error: the physical reason no op amp goes beyond {@code errorAbove}
+     */
+    public record Bounds(double warnBelow, double warnAbove, double errorBelow, double errorAbove, boolean signed,
+            String why) {
+    }
+
+    /**
+     * The bounds of every quantity in {@link #QUANTITIES}. Warning bounds are common practice,
+     * an order of magnitude or more beyond the parts a precision designer meets; error bounds
+     * are generous physical limits, each with its reason (documented in catalog-template/GUIDE.md).
+     */
+    public static final Map<String, Bounds> BOUNDS;
 
     /** {@code section.key}. */
     public static String path(String section, String key) {

@@ -67,8 +67,8 @@ import java.util.regex.Pattern;
 /**
  * Reads one part (a YAML mapping) into a {@link Part}, collecting every problem: unknown
  * keys, missing required fields, wrong units, impossible signs and orderings, implausible
- * magnitudes (warnings), and the few absences worth a warning. Absent optional values stay
- * null; the budget decides what to assume and says so.
+ * magnitudes (warnings) and impossible ones (errors), and the few absences worth a warning.
+ * Absent optional values stay null; the budget decides what to assume and says so.
  */
 final class PartReader {
 
@@ -91,38 +91,6 @@ final class PartReader {
             SUPPLY, "{min: 4.5 V, max: 36 V}",
             TEMPERATURE, "{min: -40 C, max: 85 C}",
             PRICE, "{unit: 1.20, quantity: 1000}");
-
-    /**
-     * Magnitudes beyond which a value is almost surely a slip of unit prefix (mV for uV) or a
-     * misread column; warnings, since unusual parts exist. Limits are common practice, chosen
-     * an order of magnitude or more beyond the parts a precision designer meets.
-     */
-    private record Bound(String path, double above, double below) {
-    }
-
-    private static final List<Bound> PLAUSIBLE = List.of(
-            new Bound(path(VOS, TYP), 100e-3, 0), new Bound(path(VOS, MAX), 100e-3, 0),
-            new Bound(path(VOS, MAX_OVER_TEMP), 100e-3, 0),
-            new Bound(path(VOS_DRIFT, TYP), 100e-6, 0), new Bound(path(VOS_DRIFT, MAX), 100e-6, 0),
-            // fast bipolar inputs reach tens of µA of bias current; 100 µA is beyond that
-            new Bound(path(IB, TYP), 100e-6, 0), new Bound(path(IB, MAX), 100e-6, 0),
-            new Bound(path(IB, MAX_OVER_TEMP), 100e-6, 0),
-            new Bound(path(IOS, TYP), 100e-6, 0), new Bound(path(IOS, MAX), 100e-6, 0),
-            new Bound(path(IOS, MAX_OVER_TEMP), 100e-6, 0),
-            new Bound(path(CMRR, MIN), 200, 0), new Bound(path(CMRR, TYP), 200, 0),
-            new Bound(path(PSRR, MIN), 200, 0), new Bound(path(PSRR, TYP), 200, 0),
-            new Bound(path(AOL, MIN), 200, 0), new Bound(path(AOL, TYP), 200, 0),
-            new Bound(GBW, 10e9, 100),
-            new Bound(SLEW, 1e11, 0),
-            new Bound(path(NOISE, EN), 1e-6, 0.1e-9),
-            new Bound(path(NOISE, IN), 1e-9, 0),
-            new Bound(path(NOISE, EN_CORNER), 1e6, 0), new Bound(path(NOISE, IN_CORNER), 1e6, 0),
-            new Bound(path(PRICE, UNIT), 10_000, 0),
-            new Bound(path(SUPPLY, MAX), 1000, 0),
-            new Bound(path(TEMPERATURE, MAX), 300, 0),
-            new Bound(path(LONG_TERM_DRIFT, VALUE), 10e-3, 0),
-            new Bound(CHOPPING_FREQUENCY, 100e6, 0),
-            new Bound(QUIESCENT_CURRENT, 1, 0));
 
     private final String prefix;
     private final Node.Mapping part;
@@ -199,7 +167,7 @@ final class PartReader {
 
         checkSigns();
         checkOrder();
-        checkPlausible();
+        checkBounds();
         if (!f.hasErrors()) {
             warnAbsences(arch, input); // secondary: not worth a line while the part cannot load anyway
         }
@@ -421,26 +389,47 @@ final class PartReader {
         notAbove(path(TEMPERATURE, MIN), path(TEMPERATURE, MAX), false, "swap them: min is the coldest rated ambient");
     }
 
-    private void checkPlausible() {
-        for (Bound b : PLAUSIBLE) {
-            Double v = values.get(b.path());
+    /**
+     * Sizes against {@link CatalogKeys#BOUNDS}: beyond an error bound the part is refused (no op
+     * amp has such a value, and the budget's arithmetic must stay finite); beyond a warning
+     * bound it loads with a warning.
+     */
+    private void checkBounds() {
+        for (Map.Entry<String, CatalogKeys.Bounds> e : CatalogKeys.BOUNDS.entrySet()) {
+            String keyPath = e.getKey();
+            Double v = values.get(keyPath);
             if (v == null) {
                 continue;
             }
-            Dimension d = CatalogKeys.dimension(b.path());
-            if (Math.abs(v) > b.above()) {
-                warn(b.path(), Units.format(v, d) + " is above " + Units.format(b.above(), d)
-                        + ", implausible for an op amp", "check the unit prefix (u, m, k, M) and the column");
-            } else if (v > 0 && v < b.below()) {
-                warn(b.path(), Units.format(v, d) + " is below " + Units.format(b.below(), d)
-                        + ", implausible for an op amp", "check the unit prefix (p, n, u, k, M) and the column");
+            CatalogKeys.Bounds b = e.getValue();
+            Dimension d = CatalogKeys.dimension(keyPath);
+            double x = b.signed() ? v : Math.abs(v);
+            boolean sized = b.signed() || x > 0; // zero is for the sign checks
+            String what = d == Dimension.TEMPERATURE ? "a rated range" : "an op amp";
+            if (x > b.errorAbove()) {
+                err(keyPath, beyond(v, b.errorAbove(), d) + ", impossible for " + what + " (" + b.why() + ")",
+                        "check the unit prefix (p, n, u, m, k, M) and the datasheet column; the largest "
+                                + (b.signed() ? "value" : "size") + " accepted here is " + Units.format(b.errorAbove(), d));
+            } else if (sized && x < b.errorBelow()) {
+                err(keyPath, Units.format(v, d) + " is below " + Units.format(b.errorBelow(), d) + ", impossible for "
+                        + what + " (" + b.why() + ")", "check the unit prefix (p, n, u, m, k, M) and the datasheet"
+                        + " column; the smallest " + (b.signed() ? "value" : "size") + " accepted here is "
+                        + Units.format(b.errorBelow(), d));
+            } else if (x > b.warnAbove()) {
+                warn(keyPath, beyond(v, b.warnAbove(), d) + ", implausible for " + what,
+                        "check the unit prefix (u, m, k, M) and the column");
+            } else if (sized && x < b.warnBelow()) {
+                warn(keyPath, Units.format(v, d) + " is below " + Units.format(b.warnBelow(), d)
+                        + ", implausible for " + what, b.signed() ? "check the sign and the unit"
+                        : "check the unit prefix (p, n, u, k, M) and the column");
             }
         }
-        Double tmin = values.get(path(TEMPERATURE, MIN));
-        if (tmin != null && tmin < -100) {
-            warn(path(TEMPERATURE, MIN), Units.format(tmin, Dimension.TEMPERATURE)
-                    + " is below -100 °C, implausible for a rated range", "check the sign and the unit");
-        }
+    }
+
+    /** "2.00 V is above 1.00 V", or for a negative value compared by size "-2.00 V is below -1.00 V". */
+    private static String beyond(double v, double limit, Dimension d) {
+        return v < 0 && limit > 0 ? Units.format(v, d) + " is below " + Units.format(-limit, d)
+                : Units.format(v, d) + " is above " + Units.format(limit, d);
     }
 
     /** Absences the user should hear about now, because the budget will assume something. */

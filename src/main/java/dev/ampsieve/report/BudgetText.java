@@ -166,7 +166,9 @@ public final class BudgetText {
     }
 
     static String pct(double ratio) {
-        return String.format(Locale.ROOT, "%.3f %%", 100 * ratio);
+        String s = String.format(Locale.ROOT, "%.3f %%", 100 * ratio);
+        // a target (or yield) of 99.9999 % must not read as 100.000 %
+        return ratio < 1 && s.equals("100.000 %") ? Units.format(ratio, Dimension.RATIO, 7) : s;
     }
 
     private static String share(double v, double limit) {

@@ -5,7 +5,10 @@ import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.Units;
 import java.util.Locale;
 
-/** Short catalog figures for tables: "n/a"-free, a dash when the catalog has no value. */
+/**
+ * Short catalog figures for tables: "n/a"-free, a dash when the catalog has no value (or a
+ * figure is not a number), {@code ∞} for an infinite one, scientific notation past the SI prefixes.
+ */
 final class Figures {
     private Figures() {
     }
@@ -13,7 +16,7 @@ final class Figures {
     static final String NONE = "-";
 
     static String q(Double v, Dimension d) {
-        return v == null || !Double.isFinite(v) ? NONE : Units.format(v, d);
+        return v == null || Double.isNaN(v) ? NONE : Units.format(v, d);
     }
 
     /** Guaranteed maximum, else typical (as the query language compares them). */
@@ -58,16 +61,26 @@ final class Figures {
     }
 
     static String money(double x) {
-        return Double.isFinite(x) ? String.format(Locale.ROOT, "%.2f", x) : NONE;
+        if (Double.isNaN(x)) {
+            return NONE;
+        }
+        return Math.abs(x) < BIG ? String.format(Locale.ROOT, "%.2f", x) : Units.format(x, Dimension.NUMBER);
     }
 
     static String volts(double v) {
-        return Double.isFinite(v) ? Units.format(v, Dimension.VOLTAGE) : NONE;
+        return Double.isNaN(v) ? NONE : Units.format(v, Dimension.VOLTAGE);
     }
 
     static String percent(double ratio) {
-        return Double.isFinite(ratio) ? String.format(Locale.ROOT, "%.0f %%", 100 * ratio) : NONE;
+        if (Double.isNaN(ratio)) {
+            return NONE;
+        }
+        double pct = 100 * ratio;
+        return Math.abs(pct) < BIG ? String.format(Locale.ROOT, "%.0f %%", pct) : Units.format(pct, Dimension.NUMBER) + " %";
     }
+
+    /** From here on a fixed-point number is a long row of digits: printed as 1e+12 (or ∞) instead. */
+    private static final double BIG = 1e12;
 
     /**
      * Yield with the precision a high yield needs (99.97 %), rounded down: a simulated yield or the
@@ -95,6 +108,9 @@ final class Figures {
 
     /** A voltage number without trailing zeros: 2.7, 36, 1.8. */
     private static String plain(double v) {
+        if (!(Math.abs(v) < BIG)) {
+            return Units.format(v, Dimension.NUMBER);
+        }
         String s = String.format(Locale.ROOT, "%.2f", v);
         s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
         return s;

@@ -32,6 +32,35 @@ public final class StageLoader {
     private StageLoader() {
     }
 
+    // Values no circuit has. Each is refused with its reason (README, "The stage file"); they
+    // also keep the budget's arithmetic finite.
+    /** Largest gain (noise gain): the best op amps have about 1e8 open-loop gain, leaving under 40 dB of loop gain. */
+    static final double MAX_GAIN = 1e6;
+    /** Largest resistor: 1 Tohm, where board leakage decides the value. */
+    static final double MAX_RESISTANCE = 1e12;
+    /** Largest supply, and largest level measured against it: no op amp is built for more than about 1.2 kV. */
+    static final double MAX_VOLTAGE = 2000;
+    /** Largest error limit at the output. */
+    static final double MAX_LIMIT = 1000;
+    /** Smallest error limit at the output: 1 pV is far below a 1 ohm resistor's noise in 1 Hz (0.13 nV). */
+    static final double MIN_LIMIT = 1e-12;
+    /** Coldest and hottest ambient any circuit sees (liquid nitrogen is -196 °C; solder melts near 200 to 300 °C). */
+    static final double MIN_AMBIENT = -200;
+    static final double MAX_AMBIENT = 500;
+    /** Longest service life: a century. */
+    static final double MAX_LIFE = 100 * 365.25 * 86400;
+    /** Highest band edge: 10 GHz, beyond the fastest op amp's gain-bandwidth. */
+    static final double MAX_FREQUENCY = 10e9;
+    /** Largest resistor-ratio tempco: 1 %/°C (10000 ppm/°C), ten times a carbon-composition resistor's. */
+    static final double MAX_TEMPCO = 0.01;
+    /** Largest price ceiling or trim cost: as the catalog's price limit. */
+    static final double MAX_MONEY = 1e7;
+    /**
+     * Highest yield target, 99.9999 %: it prints as itself rather than as 100 %, and the largest
+     * sample ({@link StageKeys#MAX_TRIALS}) can still show it when every unit passes.
+     */
+    static final double MAX_YIELD_TARGET = 0.999999;
+
     /** Reads and validates one stage file. */
     public static Stage load(Path file) throws InputException {
         return read(YamlFiles.read(file));
@@ -113,8 +142,8 @@ public final class StageLoader {
             boolean topologyKnown = topologyText != null || !m.entries().containsKey("topology");
             Topology topology = topologyText == null ? Topology.NON_INVERTING : Topology.of(topologyText);
 
-            double rs = nonNegative(m, "", "source-resistance", Dimension.RESISTANCE, 0.0);
-            double rp = nonNegative(m, "", "balance-resistance", Dimension.RESISTANCE, 0.0);
+            double rs = resistance(m, "source-resistance", nonNegative(m, "", "source-resistance", Dimension.RESISTANCE, 0.0));
+            double rp = resistance(m, "balance-resistance", nonNegative(m, "", "balance-resistance", Dimension.RESISTANCE, 0.0));
             double[] rfRg = topologyKnown ? resistors(m, topology) : new double[] {StageKeys.DEFAULT_RF, Double.POSITIVE_INFINITY};
             if (!topologyKnown) {
                 topology = Topology.FOLLOWER; // keeps the derived values finite; the file is rejected anyway
@@ -126,8 +155,8 @@ public final class StageLoader {
             double tMin = StageKeys.DEFAULT_T_MIN;
             double tMax = StageKeys.DEFAULT_T_MAX;
             if (temp != null) {
-                tMin = temperature(temp, "min", tMin);
-                tMax = temperature(temp, "max", tMax);
+                tMin = ambient(temp, "min", temperature(temp, "min", tMin));
+                tMax = ambient(temp, "max", temperature(temp, "max", tMax));
                 if (tMin > tMax) {
                     f.error(Fields.where(temp, "min"), "temperature", "min " + Units.format(tMin, Dimension.TEMPERATURE)
                             + " is above max " + Units.format(tMax, Dimension.TEMPERATURE), "swap the two values");
@@ -140,11 +169,20 @@ public final class StageLoader {
             if (supply != null) {
                 supplyVoltage = positive(supply, "supply", "voltage", Dimension.VOLTAGE);
                 supplyVariation = nonNegative(supply, "supply", "variation", Dimension.VOLTAGE, 0.0);
+                volts(supply, "supply", "voltage", supplyVoltage);
+                if (supplyVoltage != null && supplyVariation >= supplyVoltage) {
+                    f.error(Fields.where(supply, "variation"), "supply.variation", "a variation of "
+                            + Units.format(supplyVariation, Dimension.VOLTAGE) + " on a " + Units.format(supplyVoltage, Dimension.VOLTAGE)
+                            + " supply would take it to 0 V or below", "write the peak change, well below the supply, such as '"
+                            + Units.format(supplyVoltage * 0.05, Dimension.VOLTAGE).replace("µ", "u") + "' (5 %)");
+                }
             }
 
             Double fullScale = positive(m, "", "full-scale-output", Dimension.VOLTAGE);
+            volts(m, "", "full-scale-output", fullScale);
 
             Double swing = nonNegativeOrNull(m, "", "common-mode-swing", Dimension.VOLTAGE);
+            volts(m, "", "common-mode-swing", swing);
             double commonModeSwing = swing != null ? swing : defaultSwing(topology, rf, rg, fullScale);
 
             Range cmRange = range(m, "common-mode-range", null);
@@ -158,6 +196,14 @@ public final class StageLoader {
                 filterOrder = filterOrder(band);
                 Double lo = f.quantity(band, "band", "low", Dimension.FREQUENCY);
                 Double hi = f.quantity(band, "band", "high", Dimension.FREQUENCY);
+                for (String side : List.of("low", "high")) {
+                    Double v = side.equals("low") ? lo : hi;
+                    if (v != null && v > MAX_FREQUENCY) {
+                        f.error(Fields.where(band, side), "band." + side, Units.format(v, Dimension.FREQUENCY) + " is above "
+                                + Units.format(MAX_FREQUENCY, Dimension.FREQUENCY) + ", beyond the fastest op amp's gain-bandwidth",
+                                "check the prefix (Hz, kHz, MHz); write the top signal frequency, such as '1 kHz'");
+                    }
+                }
                 if (lo != null && lo <= 0) {
                     f.error(Fields.where(band, "low"), "band.low", "the band must start above 0 Hz: 1/f noise grows without bound toward DC",
                             "write 'low: 0.1 Hz' (a common choice for DC stages: about a 10 s observation)");
@@ -185,9 +231,19 @@ public final class StageLoader {
                             + Units.format(tolerance, Dimension.RATIO) + " is not a resistor tolerance", "write it with its unit, such as '0.1 %'");
                 }
                 tempco = nonNegative(ratio, "resistor-ratio", "tempco", Dimension.RATIO_DRIFT, 0.0);
+                if (tempco > MAX_TEMPCO) {
+                    f.error(Fields.where(ratio, "tempco"), "resistor-ratio.tempco", Units.format(tempco, Dimension.RATIO_DRIFT)
+                            + " is above " + Units.format(MAX_TEMPCO, Dimension.RATIO_DRIFT) + ", more than any resistor pair drifts",
+                            "write the ratio tracking in ppm/C, such as '10 ppm/C'");
+                }
             }
 
             double life = nonNegative(m, "", "service-life", Dimension.TIME, 0.0);
+            if (life > MAX_LIFE) {
+                f.error(Fields.where(m, "service-life"), "service-life", Units.format(life, Dimension.TIME) + " is above "
+                        + Units.format(MAX_LIFE, Dimension.TIME) + ", longer than any circuit is kept in service",
+                        "write the operating time in hours or years, such as '10 y'");
+            }
             Limit limit = limit(m, fullScale);
             Criterion criterion = criterion(m);
 
@@ -204,13 +260,78 @@ public final class StageLoader {
             Trim trim = trim(m);
             Integer quantity = f.integer(m, "", "quantity", 1, StageKeys.MAX_QUANTITY);
             Double maxPrice = positive(m, "", "max-price", Dimension.NUMBER);
+            money(m, "", "max-price", maxPrice);
             Boolean ac = f.bool(m, "", "ac-coupled");
 
-            return new Stage(topology, rf, rg, rs, rp, tMin, tMax, supplyVoltage, supplyVariation, commonModeSwing,
+            Stage stage = new Stage(topology, rf, rg, rs, rp, tMin, tMax, supplyVoltage, supplyVariation, commonModeSwing,
                     cmRange, outRange, bandLow, bandHigh, filterOrder, fullScale, tolerance, tempco, life, limit, criterion, maxToSigma,
                     trials != null ? trials : StageKeys.DEFAULT_TRIALS, seed != null ? seed : StageKeys.DEFAULT_SEED, trim,
                     quantity != null ? quantity : StageKeys.DEFAULT_QUANTITY, maxPrice, ac != null && ac,
                     m.at());
+            if (limit != null && !f.hasErrors()) {
+                limitSize(m, stage);
+            }
+            return stage;
+        }
+
+        /**
+         * The limit at the output, whatever its form, between {@link #MIN_LIMIT} and {@link #MAX_LIMIT}
+         * (checked once the gain and full scale it depends on are known to be valid).
+         */
+        private void limitSize(Node.Mapping m, Stage stage) {
+            double out = stage.limitVolts();
+            Node v = m.entries().get("limit");
+            Located at = v == null ? m.at() : v.at();
+            String form = stage.limit().kind() == Limit.Kind.OUTPUT ? "" : " (" + Units.format(out, Dimension.VOLTAGE) + " at the output)";
+            if (out > MAX_LIMIT) {
+                f.error(at, "limit", "a limit of " + Units.format(stage.limit().value(), stage.limit().kind() == Limit.Kind.LSB
+                        || stage.limit().kind() == Limit.Kind.PERCENT_OF_FULL_SCALE ? Dimension.NUMBER : Dimension.VOLTAGE) + form
+                        + " is above " + Units.format(MAX_LIMIT, Dimension.VOLTAGE) + " at the output, no error limit at all",
+                        "check the prefix: write the largest error allowed, such as '1 mV'");
+            } else if (out < MIN_LIMIT) {
+                f.error(at, "limit", "a limit of " + Units.format(out, Dimension.VOLTAGE) + " at the output is below "
+                        + Units.format(MIN_LIMIT, Dimension.VOLTAGE) + ", far below the noise of any resistor",
+                        "check the prefix: write the largest error allowed, such as '1 uV'");
+            }
+        }
+
+        /** Error when {@code ohms} is above {@link #MAX_RESISTANCE}; returns it. */
+        private double resistance(Node.Mapping m, String key, double ohms) {
+            if (ohms > MAX_RESISTANCE) {
+                f.error(Fields.where(m, key), key, Units.format(ohms, Dimension.RESISTANCE) + " is above "
+                        + Units.format(MAX_RESISTANCE, Dimension.RESISTANCE) + ", where board leakage decides the value",
+                        "check the prefix (kohm, Mohm); write the resistor, such as '" + exampleFor("", key, Dimension.RESISTANCE) + "'");
+            }
+            return ohms;
+        }
+
+        /** Error when {@code v} is above {@link #MAX_VOLTAGE}. */
+        private void volts(Node.Mapping m, String path, String key, Double v) {
+            if (v != null && v > MAX_VOLTAGE) {
+                f.error(Fields.where(m, key), Fields.join(path, key), Units.format(v, Dimension.VOLTAGE) + " is above "
+                        + Units.format(MAX_VOLTAGE, Dimension.VOLTAGE) + ", more than any op amp's supply",
+                        "check the prefix (mV, V, kV); write for example '" + exampleFor(path, key, Dimension.VOLTAGE) + "'");
+            }
+        }
+
+        /** Error when {@code v} is above {@link #MAX_MONEY}. */
+        private void money(Node.Mapping m, String path, String key, Double v) {
+            if (v != null && v > MAX_MONEY) {
+                f.error(Fields.where(m, key), Fields.join(path, key), Units.format(v, Dimension.NUMBER) + " is above "
+                        + Units.format(MAX_MONEY, Dimension.NUMBER) + ", more than any amplifier costs",
+                        "write the amount per unit, for example '" + exampleFor(path, key, Dimension.NUMBER) + "'");
+            }
+        }
+
+        /** {@code t}, with an error when it is outside {@link #MIN_AMBIENT}..{@link #MAX_AMBIENT}. */
+        private double ambient(Node.Mapping temp, String key, double t) {
+            if (t < MIN_AMBIENT || t > MAX_AMBIENT) {
+                f.error(Fields.where(temp, key), "temperature." + key, Units.format(t, Dimension.TEMPERATURE) + " is outside "
+                        + Units.format(MIN_AMBIENT, Dimension.TEMPERATURE) + " to " + Units.format(MAX_AMBIENT, Dimension.TEMPERATURE)
+                        + ", an ambient no circuit sees", "write the ambient range in °C, such as '" + exampleFor("temperature", key,
+                        Dimension.TEMPERATURE) + "'");
+            }
+            return t;
         }
 
         // ------------------------------------------------------------ resistors and gain
@@ -224,6 +345,19 @@ public final class StageLoader {
             Double rf = hasRf ? nonNegativeOrNull(m, "", "rf", Dimension.RESISTANCE) : null;
             Double rg = hasRg ? nonNegativeOrNull(m, "", "rg", Dimension.RESISTANCE) : null;
             double bad = StageKeys.DEFAULT_RF; // placeholder for values the file gets wrong; never returned on success
+            if (rf != null) {
+                resistance(m, "rf", rf);
+            }
+            if (rg != null) {
+                resistance(m, "rg", rg);
+            }
+            if (gain != null && !(Math.abs(gain) <= MAX_GAIN)) {
+                f.error(Fields.where(m, "gain"), "gain", "gain " + Units.format(Math.abs(gain), Dimension.NUMBER) + " is above "
+                        + Units.format(MAX_GAIN, Dimension.NUMBER) + ", more than any op amp can hold (the best have about"
+                        + " 1e8 of open-loop gain, which would leave under 40 dB of loop gain)",
+                        "split the gain over two stages, or check the value (40 dB is a gain of 100)");
+                return new double[] {bad, bad};
+            }
 
             if (topology == Topology.FOLLOWER) {
                 if (hasRg) {
@@ -251,7 +385,16 @@ public final class StageLoader {
             }
             if (!hasGain) {
                 if (hasRf && hasRg) {
-                    return rf == null || rg == null || rf == 0 || rg == 0 ? new double[] {bad, bad} : new double[] {rf, rg};
+                    if (rf == null || rg == null || rf == 0 || rg == 0) {
+                        return new double[] {bad, bad};
+                    }
+                    if (!(rf / rg <= MAX_GAIN)) {
+                        f.error(Fields.where(m, "rg"), "rg", "rf/rg = " + Units.format(rf / rg, Dimension.NUMBER)
+                                + " is a gain above " + Units.format(MAX_GAIN, Dimension.NUMBER)
+                                + ", more than any op amp can hold", "check the prefixes of rf and rg (kohm, Mohm)");
+                        return new double[] {bad, bad};
+                    }
+                    return new double[] {rf, rg};
                 }
                 Located at = hasRf ? Fields.where(m, "rf") : hasRg ? Fields.where(m, "rg") : m.at();
                 f.error(at, "gain", "the gain is not given", hasRf || hasRg
@@ -481,6 +624,13 @@ public final class StageLoader {
                             "write a target above 0 % and below 100 %, such as 'yield 99.9 %'");
                     return Criterion.WORST_CASE;
                 }
+                if (target > MAX_YIELD_TARGET) {
+                    // 99.99999999 % would print as 100 % and no sample within the trial cap could show it
+                    f.error(at, "criterion", "yield target " + rest + " is above 99.9999 %, closer to 100 % than "
+                            + StageKeys.MAX_TRIALS + " simulated units (the most allowed) can show",
+                            "write at most 'yield 99.9999 %'; for an error no unit may exceed, write 'worst-case'");
+                    return Criterion.WORST_CASE;
+                }
                 return Criterion.yield(target);
             }
             String near = Fields.closest(t, List.of("worst-case", "rss", "yield"));
@@ -507,7 +657,9 @@ public final class StageLoader {
             Boolean allowed = f.bool(t, "trim", "allowed");
             String method = f.choice(t, "trim", "method", StageKeys.TRIM_METHODS);
             double resolution = nonNegative(t, "trim", "resolution", Dimension.VOLTAGE, 0.0);
+            volts(t, "trim", "resolution", resolution);
             double cost = nonNegative(t, "trim", "cost", Dimension.NUMBER, 0.0);
+            money(t, "trim", "cost", cost);
             return new Trim(allowed == null || allowed,
                     "two-point".equals(method) ? Trim.Method.TWO_POINT : Trim.Method.ONE_POINT, resolution, cost);
         }
@@ -552,6 +704,8 @@ public final class StageLoader {
             }
             Double lo = f.quantity(r, key, "min", Dimension.VOLTAGE);
             Double hi = f.quantity(r, key, "max", Dimension.VOLTAGE);
+            volts(r, key, "min", lo == null ? null : Math.abs(lo));
+            volts(r, key, "max", hi == null ? null : Math.abs(hi));
             for (String side : List.of("min", "max")) {
                 if (!present(r, side)) {
                     f.error(r.at(), key + "." + side, "required in this block (both ends of the range)",

@@ -37,6 +37,9 @@ public final class Units {
 
     private static final Map<String, Double> PREFIXES = new LinkedHashMap<>();
 
+    /** A digit 1-9 in the mantissa (before any exponent): the number is not zero. */
+    private static final Pattern NONZERO_DIGIT = Pattern.compile("^[-+]?[0-9.]*[1-9]");
+
     static {
         PREFIXES.put("f", 1e-15);
         PREFIXES.put("p", 1e-12);
@@ -133,7 +136,14 @@ public final class Units {
             value = number - 273.15;
         }
         if (!Double.isFinite(value)) {
-            throw new UnitException("'" + t + "' is out of range", "write a finite value such as '" + expected.example() + "'");
+            // 1e400 V, or 1e308 kV: past the largest double (about 1.8e308) the value would be infinite
+            throw new UnitException("'" + t + "' is out of range: beyond the largest number (about 1.8e308 in SI units)",
+                    "check the exponent and the prefix; write " + expected.noun() + " such as '" + expected.example() + "'");
+        }
+        if (value == 0 && number != 0 || number == 0 && NONZERO_DIGIT.matcher(m.group(1)).find()) {
+            // 1e-400 V would silently read as 0 V
+            throw new UnitException("'" + t + "' is out of range: below the smallest number (about 1e-308 in SI units)",
+                    "check the exponent and the prefix; write 0 if you mean zero");
         }
         if (expected == Dimension.TEMPERATURE && value < ABSOLUTE_ZERO_C) {
             throw new UnitException("'" + t + "' is below absolute zero (-273.15 °C)",
@@ -157,7 +167,8 @@ public final class Units {
         double db = Math.floor(200 * Math.log10(ratio) + 1e-9) / 10;
         return new UnitException("'" + whole + "' is a gain ratio; this field takes decibels",
                 "write '" + trim(String.format(Locale.ROOT, "%.1f", db)) + " dB' (20 log10 of "
-                        + new java.math.BigDecimal(ratio).round(new java.math.MathContext(6)).stripTrailingZeros().toPlainString()
+                        + (ratio >= PLAIN_MAX ? scientific(ratio, 6)
+                                : new BigDecimal(ratio).round(new MathContext(6)).stripTrailingZeros().toPlainString())
                         + " V/V)");
     }
 
@@ -285,9 +296,19 @@ public final class Units {
         if (Double.isNaN(si)) {
             return "n/a";
         }
+        if (Double.isInfinite(si)) {
+            return (si < 0 ? "-" : "") + INFINITY + switch (d) {
+                case NUMBER -> "";
+                case RATIO -> " %";
+                case RATIO_DRIFT -> " ppm/°C";
+                case RESISTANCE -> " Ω";
+                case SLEW_RATE -> " V/µs";
+                default -> " " + d.symbol();
+            };
+        }
         return switch (d) {
-            case DECIBEL -> trim(String.format(Locale.ROOT, "%." + Math.max(0, digits - 3) + "f", si)) + " dB";
-            case TEMPERATURE -> trim(String.format(Locale.ROOT, "%.1f", si)) + " °C";
+            case DECIBEL -> trim(fixed(si, Math.max(0, digits - 3))) + " dB";
+            case TEMPERATURE -> trim(fixed(si, 1)) + " °C";
             case RATIO -> ratio(si, digits);
             case RATIO_DRIFT -> trim(sig(si * 1e6, digits)) + " ppm/°C";
             case NUMBER -> trim(sig(si, digits));
@@ -305,13 +326,21 @@ public final class Units {
         if (si == 0.0) {
             return "0 ";
         }
+        if (!Double.isFinite(si)) {
+            return Double.isNaN(si) ? "n/a " : (si < 0 ? "-" : "") + INFINITY + " ";
+        }
         double abs = Math.abs(si);
         int exp3 = (int) Math.floor(Math.log10(abs) / 3.0);
-        exp3 = Math.max(-5, Math.min(4, exp3));
+        if (exp3 < -5 || exp3 > 4) {
+            return scientific(si, digits) + " "; // beyond f and T a prefix would need a long row of digits
+        }
         double scaled = si / Math.pow(10, 3 * exp3);
         // rounding may carry 999.6 up to 1000: move to the next prefix
         String digitsText = sig(scaled, digits);
-        if (Math.abs(Double.parseDouble(digitsText)) >= 1000 && exp3 < 4) {
+        if (Math.abs(Double.parseDouble(digitsText)) >= 1000) {
+            if (exp3 == 4) {
+                return scientific(si, digits) + " ";
+            }
             exp3++;
             scaled = si / Math.pow(10, 3 * exp3);
             digitsText = sig(scaled, digits);
@@ -319,25 +348,63 @@ public final class Units {
         return digitsText + " " + ENG_PREFIX[exp3 + 5];
     }
 
+    /** The sign printed for an infinite value: U+221E INFINITY. */
+    public static final String INFINITY = "\u221e";
+
     /**
-     * {@code v} rounded to {@code digits} significant digits, printed without exponent. The
+     * Magnitudes printed without an exponent where no prefix applies (plain numbers, ratios,
+     * years, dB, °C): from 1e-6 to below 1e12; beyond, a row of zeros is harder to read than
+     * {@code 1.00e+15}. Prefixed values go to scientific notation beyond f and T.
+     */
+    private static final double PLAIN_MIN = 1e-6;
+    private static final double PLAIN_MAX = 1e12;
+
+    /** {@code 1.00e+30}: {@code digits} significant digits in scientific notation (reads back through parse). */
+    private static String scientific(double v, int digits) {
+        return String.format(Locale.ROOT, "%." + Math.max(0, digits - 1) + "e", v);
+    }
+
+    /**
+     * {@code v} rounded to {@code digits} significant digits, printed without exponent inside
+     * 1e-6..1e12 (scientific notation outside it; ∞ and n/a for the non-finite). The
      * number of decimals follows the rounded value, so 0.99996 prints "1.00", not "1.000".
      */
     private static String sig(double v, int digits) {
         if (v == 0.0) {
             return "0";
         }
+        if (!Double.isFinite(v)) {
+            return Double.isNaN(v) ? "n/a" : (v < 0 ? "-" : "") + INFINITY;
+        }
+        if (Math.abs(v) < PLAIN_MIN || Math.abs(v) >= PLAIN_MAX) {
+            return scientific(v, digits);
+        }
         BigDecimal r = new BigDecimal(v).round(new MathContext(digits, RoundingMode.HALF_UP));
         int mag = r.precision() - r.scale() - 1; // exponent of the leading digit
+        if (mag >= 12) {
+            return scientific(v, digits); // 999.96e9 rounded up to 1.00e12
+        }
         int decimals = Math.max(0, digits - 1 - mag);
         return r.setScale(decimals, RoundingMode.HALF_UP).toPlainString();
     }
 
     private static String trim(String s) {
+        int e = s.indexOf('e');
+        if (e >= 0) {
+            return trim(s.substring(0, e)) + s.substring(e); // the mantissa only: 1.50e+30 -> 1.5e+30
+        }
         if (s.contains(".")) {
             s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
         }
         return s;
+    }
+
+    /** {@code v} with {@code decimals} decimals, or in scientific notation beyond the plain range. */
+    private static String fixed(double v, int decimals) {
+        if (Math.abs(v) >= PLAIN_MAX) {
+            return scientific(v, 3);
+        }
+        return String.format(Locale.ROOT, "%." + decimals + "f", v);
     }
 
     private static String ratio(double si, int digits) {
@@ -345,7 +412,12 @@ public final class Units {
         if (abs != 0 && abs < 1e-3) {
             return trim(sig(si * 1e6, digits)) + " ppm";
         }
-        return trim(sig(si * 100, digits)) + " %";
+        String pct = trim(sig(si * 100, digits));
+        // a share below 100 % never reads as 100 % (a yield target of 99.9999 % is not 100 %)
+        for (int more = digits + 1; si > 0 && si < 1 && pct.equals("100") && more <= 15; more++) {
+            pct = trim(sig(si * 100, more));
+        }
+        return pct + " %";
     }
 
     private static String time(double s, int digits) {

@@ -344,17 +344,21 @@ class CatalogLoaderTest {
 
     @ParameterizedTest
     @CsvSource(delimiter = '|', value = {
-        "gbw: 1 MHz | gbw: .inf  | gbw        | .inf",
-        "max: 2 mV  | max: .nan  | vos.max    | .nan",
-        "unit: 1.20 | unit: .NaN | price.unit | .NaN",
-        "max: 36 V  | max: 1e999 V | supply.max | 1e999 V"})
-    void nanAndInfinityAreRefused(String from, String to, String field, String value) throws Exception {
+        "gbw: 1 MHz | gbw: .inf  | gbw        | .inf    | is not a finite number",
+        "max: 2 mV  | max: .nan  | vos.max    | .nan    | is not a finite number",
+        "unit: 1.20 | unit: .NaN | price.unit | .NaN    | is not a finite number",
+        "max: 36 V  | max: 1e999 V | supply.max | 1e999 V | is out of range: beyond the largest number (about 1.8e308 in SI units)",
+        "max: 36 V  | max: 1e400 V | supply.max | 1e400 V | is out of range: beyond the largest number (about 1.8e308 in SI units)",
+        "max: 36 V  | max: 1e308 kV | supply.max | 1e308 kV | is out of range: beyond the largest number (about 1.8e308 in SI units)",
+        "max: 2 mV  | max: 1e-400 V | vos.max  | 1e-400 V | is out of range: below the smallest number (about 1e-308 in SI units)"})
+    void nanAndInfinityAreRefused(String from, String to, String field, String value, String message) throws Exception {
         String text = with(BASE, from, to);
         Problem p = about(loadPart(text).problems(), field);
         assertTrue(p.isError());
         assertAt(p, part(), lineOf(text, to), columnOf(text, to) + to.indexOf(value));
-        assertTrue(p.message().equals("'" + value + "' is not a finite number")
-                || p.message().equals("'" + value + "' is out of range"), p.message());
+        assertEquals("'" + value + "' " + message, p.message());
+        assertTrue(p.fix().startsWith(value.equals("1e-400 V") ? "check the exponent and the prefix; write 0 if you mean zero"
+                : value.startsWith("1e") ? "check the exponent and the prefix; write a voltage such as" : "write "), p.fix());
     }
 
     @ParameterizedTest
@@ -387,10 +391,10 @@ class CatalogLoaderTest {
         "gbw: 1 MHz          | gbw: 20 GHz           | gbw               | 20.0 GHz is above 10.0 GHz, implausible for an op amp",
         "gbw: 1 MHz          | gbw: 50 Hz            | gbw               | 50.0 Hz is below 100 Hz, implausible for an op amp",
         "max-over-temp: 200 nA | max-over-temp: 1 mA | ib.max-over-temp  | 1.00 mA is above 100 µA, implausible for an op amp",
-        "typ: 110 dB         | typ: 250 dB           | cmrr.typ          | 250 dB is above 200 dB, implausible for an op amp",
+        "typ: 110 dB         | typ: 190 dB           | cmrr.typ          | 190 dB is above 180 dB, implausible for an op amp",
         "en: 12 nV/rtHz      | en: 2 uV/rtHz         | noise.en          | 2.00 µV/√Hz is above 1.00 µV/√Hz, implausible for an op amp",
         "unit: 1.20          | unit: 20000           | price.unit        | 20000 is above 10000, implausible for an op amp",
-        "max: 36 V           | max: 3600 V           | supply.max        | 3.60 kV is above 1.00 kV, implausible for an op amp",
+        "max: 36 V           | max: 1500 V           | supply.max        | 1.50 kV is above 1.00 kV, implausible for an op amp",
         "min: -40 C          | min: -150 C           | temperature.min   | -150 °C is below -100 °C, implausible for a rated range"})
     void implausibleMagnitudesAreWarningsAndThePartStillLoads(String from, String to, String field, String message)
             throws Exception {
