@@ -2,6 +2,9 @@ package dev.ampsieve.search;
 
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.yaml.BoundedFiles;
+import dev.ampsieve.yaml.InputException;
+import dev.ampsieve.yaml.YamlFiles;
 import java.io.ByteArrayOutputStream;
 import java.io.DataOutputStream;
 import java.io.IOException;
@@ -34,11 +37,12 @@ public final class CatalogFingerprint {
         for (Path f : catalogFiles(root)) {
             update(md, root.relativize(f).toString().replace('\\', '/'));
             try {
-                byte[] bytes = Files.readAllBytes(f);
+                byte[] bytes = BoundedFiles.read(f, YamlFiles.MAX_BYTES);
                 update(md, Integer.toString(bytes.length));
                 md.update(bytes);
-            } catch (IOException e) {
-                throw new UncheckedIOException(e);
+            } catch (InputException e) {
+                // refused by the catalog too (too large, not a regular file, gone): its reason stands in
+                update(md, e.getMessage());
             }
         }
         // the parts too: a loader change that reads the same files differently must also rebuild
