@@ -103,15 +103,19 @@ public final class CatalogLoader {
 
     /** The catalog files below {@code root}, sorted by relative path; what cannot be read becomes problems. */
     static List<Path> list(Path root, List<Problem> problems, Limits limits) throws InputException {
-        Walk walk = new Walk(root, problems, limits);
+        List<Problem> found = new ArrayList<>();
+        Walk walk = new Walk(root, found, limits);
         try {
             walk.run();
         } catch (IOException e) {
-            problems.add(Problem.error(Located.nowhere(root), "", "cannot list the folder (" + YamlFiles.describe(e) + ")",
+            found.add(Problem.error(Located.nowhere(root), "", "cannot list the folder (" + YamlFiles.describe(e) + ")",
                     "check its permissions"));
         }
+        Comparator<Path> byPath = Comparator.comparing(p -> root.relativize(p).toString().replace('\\', '/'));
+        found.sort(Comparator.comparing(Problem::file, byPath)); // stable: one file's problems keep their order
+        problems.addAll(found);
         List<Path> files = walk.files;
-        files.sort(Comparator.comparing(p -> root.relativize(p).toString().replace('\\', '/')));
+        files.sort(byPath);
         return files;
     }
 
