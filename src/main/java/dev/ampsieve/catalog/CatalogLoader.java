@@ -7,6 +7,7 @@ import dev.ampsieve.yaml.Node;
 import dev.ampsieve.yaml.Problem;
 import dev.ampsieve.yaml.YamlFiles;
 import java.io.IOException;
+import java.nio.file.DirectoryIteratorException;
 import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
 import java.nio.file.LinkOption;
@@ -185,6 +186,10 @@ public final class CatalogLoader {
                 }
             } catch (IOException e) {
                 problems.add(Problem.error(Located.nowhere(dir), "", "cannot read (" + YamlFiles.describe(e) + ")",
+                        "check its permissions"));
+                return;
+            } catch (DirectoryIteratorException e) { // an entry that fails while listing (e.g. in /proc)
+                problems.add(Problem.error(Located.nowhere(dir), "", "cannot read (" + YamlFiles.describe(e.getCause()) + ")",
                         "check its permissions"));
                 return;
             }
