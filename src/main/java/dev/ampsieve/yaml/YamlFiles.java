@@ -49,6 +49,7 @@ public final class YamlFiles {
     /** Aliases are legitimate for sharing a block of values; thousands are an attack. */
     public static final int MAX_ALIASES = 50;
     public static final int MAX_DEPTH = 30;
+    private static final String TOO_DEEP = "refused: YAML nested more than " + MAX_DEPTH + " levels deep";
 
     private YamlFiles() {
     }
@@ -145,8 +146,7 @@ public final class YamlFiles {
         } catch (IOException e) {
             throw new InputException(Problem.error(Located.nowhere(file), "", "cannot read (" + describe(e) + ")", ""));
         } catch (StackOverflowError e) {
-            throw new InputException(Problem.error(limitAt(file, text, false), "", "YAML nested too deeply",
-                    "use at most " + MAX_DEPTH + " levels"));
+            throw new InputException(Problem.error(limitAt(file, text, false), "", TOO_DEEP, "use fewer levels"));
         }
         if (root == null) {
             return new Node.Scalar(new Located(file, 1, 1), null, false);
@@ -245,8 +245,7 @@ public final class YamlFiles {
                     "split it into several files");
         }
         if (w.contains("nesting depth")) {
-            return Problem.error(limitAt(file, text, false), "", "refused: YAML nested more than " + MAX_DEPTH + " levels deep",
-                    "use fewer levels");
+            return Problem.error(limitAt(file, text, false), "", TOO_DEEP, "use fewer levels");
         }
         return Problem.error(Located.nowhere(file), "", "YAML: " + what, "fix the YAML syntax");
     }
@@ -324,7 +323,7 @@ public final class YamlFiles {
                         "write the values out instead of the self-referring *alias"));
             }
             if (depth > MAX_DEPTH) {
-                throw new InputException(Problem.error(loc, path, "YAML nested too deeply", "use at most " + MAX_DEPTH + " levels"));
+                throw new InputException(Problem.error(loc, path, TOO_DEEP, "use fewer levels"));
             }
             open.add(n);
             Node result = build(n, path, depth, loc);
