@@ -1,20 +1,21 @@
 package dev.ampsieve.catalog;
 
+import dev.ampsieve.yaml.BoundedFiles;
 import dev.ampsieve.yaml.InputException;
 import dev.ampsieve.yaml.Located;
 import dev.ampsieve.yaml.Node;
 import dev.ampsieve.yaml.Problem;
 import dev.ampsieve.yaml.YamlFiles;
 import java.io.IOException;
-import java.nio.file.FileVisitOption;
-import java.nio.file.FileVisitResult;
+import java.nio.file.DirectoryIteratorException;
+import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
+import java.nio.file.LinkOption;
+import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
-import java.nio.file.SimpleFileVisitor;
 import java.nio.file.attribute.BasicFileAttributes;
 import java.util.ArrayList;
 import java.util.Comparator;
-import java.util.EnumSet;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -26,7 +27,8 @@ import java.util.Map;
  *
  * <p>Files are read in sorted order of their path below the root, so problems and parts come
  * out the same on every machine. Hidden folders (the search index lives in one) and folders
- * named {@value #STAGES_FOLDER} (stage files, not parts) are skipped. A file holds one part
+ * named {@value #STAGES_FOLDER} (stage files, not parts) are skipped; links are followed only
+ * to places inside the folder, and only regular files are read (see {@link Walk}). A file holds one part
  * (a mapping with {@code id}) or several (a {@code parts:} list). A part with an error is
  * left out and the rest load, unless {@code strict}.
  */
@@ -40,12 +42,36 @@ public final class CatalogLoader {
     /** The fix for a catalog folder that cannot be used. */
     static final String ROOT_FIX = "give the catalog folder with --catalog DIR or the environment variable AMPSIEVE_CATALOG";
 
+    /** At most this many catalog files (*.yaml, *.yml); a hand-typed catalog has tens to hundreds. */
+    public static final int MAX_FILES = 20_000;
+    /** At most this many bytes in all catalog files together (512 MiB). */
+    public static final long MAX_TOTAL_BYTES = 512L * 1024 * 1024;
+    /** At most this many folder entries of any kind are looked at: a guard against {@code --catalog /}. */
+    public static final int MAX_ENTRIES = 200_000;
+
+    /**
+     * Bounds on one catalog; past any of them loading stops with an error, strict or not.
+     *
+     * @param files   catalog files found
+     * @param bytes   bytes of catalog files, as reported while listing and as read
+     * @param entries folder entries of any kind looked at
+     */
+    record Limits(int files, long bytes, int entries) {
+        static final Limits DEFAULT = new Limits(MAX_FILES, MAX_TOTAL_BYTES, MAX_ENTRIES);
+    }
+
     /**
      * @param strict when true, any error fails the whole load with an {@link InputException}
      *               carrying every problem found
-     * @throws InputException when {@code root} is not a readable folder, or {@code strict} and any error
+     * @throws InputException when {@code root} is not a readable folder, when the catalog is past
+     *                        one of its limits ({@link #MAX_FILES}, {@link #MAX_TOTAL_BYTES},
+     *                        {@link #MAX_ENTRIES}), or {@code strict} and any error
      */
     public static Catalog load(Path root, boolean strict) throws InputException {
+        return load(root, strict, Limits.DEFAULT);
+    }
+
+    static Catalog load(Path root, boolean strict, Limits limits) throws InputException {
         if (!Files.exists(root)) {
             throw new InputException(Problem.error(Located.nowhere(root), "", "catalog folder not found", ROOT_FIX));
         }
@@ -54,12 +80,13 @@ public final class CatalogLoader {
                     ROOT_FIX + " (the folder holding the *.yaml files)"));
         }
         List<Problem> problems = new ArrayList<>();
-        List<Path> files = list(root, problems);
+        List<Path> files = list(root, problems, limits);
         List<Part> parts = new ArrayList<>();
         Map<String, Located> ids = new HashMap<>();
+        long[] bytesRead = {0};
         for (Path file : files) {
             List<Problem> fileProblems = new ArrayList<>();
-            readFile(file, parts, ids, fileProblems);
+            readFile(root, file, limits, bytesRead, parts, ids, fileProblems);
             // top to bottom within a file, whatever order the checks ran in
             fileProblems.sort(Comparator.comparingInt(Problem::line).thenComparingInt(Problem::column));
             problems.addAll(fileProblems);
@@ -75,51 +102,235 @@ public final class CatalogLoader {
         return new Catalog(root, parts, problems, files.size());
     }
 
-    /** The catalog files below {@code root}, sorted by relative path; unreadable folders become problems. */
-    static List<Path> list(Path root, List<Problem> problems) {
-        List<Path> files = new ArrayList<>();
+    /**
+     * The catalog files below {@code root} exactly as {@link #load} finds them (same walk, same
+     * limits), for the search index's fingerprint; empty when the folder cannot be walked, in
+     * which case {@link #load} has already failed.
+     */
+    public static List<Path> files(Path root) {
         try {
-            Files.walkFileTree(root, EnumSet.of(FileVisitOption.FOLLOW_LINKS), Integer.MAX_VALUE,
-                    new SimpleFileVisitor<>() {
-                        @Override
-                        public FileVisitResult preVisitDirectory(Path dir, BasicFileAttributes attrs) {
-                            if (dir.equals(root)) {
-                                return FileVisitResult.CONTINUE;
-                            }
-                            String name = dir.getFileName().toString();
-                            return name.startsWith(".") || name.equals(STAGES_FOLDER)
-                                    ? FileVisitResult.SKIP_SUBTREE : FileVisitResult.CONTINUE;
-                        }
+            return list(root, new ArrayList<>(), Limits.DEFAULT);
+        } catch (InputException e) {
+            return List.of();
+        }
+    }
 
-                        @Override
-                        public FileVisitResult visitFile(Path file, BasicFileAttributes attrs) {
-                            if (attrs.isRegularFile() && isCatalogFile(file)) {
-                                files.add(file);
-                            } else if (attrs.isSymbolicLink() && isCatalogFile(file)) {
-                                // FOLLOW_LINKS hands over the link itself only when its target is gone
-                                problems.add(Problem.error(Located.nowhere(file), "", "the link's target does not exist",
-                                        "fix or remove the link"));
-                            }
-                            return FileVisitResult.CONTINUE;
-                        }
-
-                        @Override
-                        public FileVisitResult visitFileFailed(Path file, IOException e) {
-                            // a hidden folder is skipped even when it cannot be opened (a loop such as
-                            // '.ampsieve-index -> .' is caught here, before preVisitDirectory)
-                            if (isCatalogFile(file) || Files.isDirectory(file) && !file.getFileName().toString().startsWith(".")) {
-                                problems.add(Problem.error(Located.nowhere(file), "",
-                                        "cannot read (" + YamlFiles.describe(e) + ")", "check its permissions"));
-                            }
-                            return FileVisitResult.CONTINUE;
-                        }
-                    });
+    /** The catalog files below {@code root}, sorted by relative path; what cannot be read becomes problems. */
+    static List<Path> list(Path root, List<Problem> problems, Limits limits) throws InputException {
+        List<Problem> found = new ArrayList<>();
+        Walk walk = new Walk(root, found, limits);
+        try {
+            walk.run();
         } catch (IOException e) {
-            problems.add(Problem.error(Located.nowhere(root), "", "cannot list the folder (" + YamlFiles.describe(e) + ")",
+            found.add(Problem.error(Located.nowhere(root), "", "cannot list the folder (" + YamlFiles.describe(e) + ")",
                     "check its permissions"));
         }
-        files.sort(Comparator.comparing(p -> root.relativize(p).toString().replace('\\', '/')));
+        Comparator<Path> byPath = Comparator.comparing(p -> root.relativize(p).toString().replace('\\', '/'));
+        found.sort(Comparator.comparing(Problem::file, byPath)); // stable: one file's problems keep their order
+        problems.addAll(found);
+        List<Path> files = walk.files;
+        files.sort(byPath);
         return files;
+    }
+
+    /**
+     * The walk below a catalog folder: its real folders, and links to files inside it. Links to
+     * folders are never followed, so no link can make the walk loop or leave the catalog: a link
+     * to a folder outside ({@code /}, a home folder) is skipped with a warning, as is a link
+     * back to a folder that holds it ({@code sub/loop -> ..}) and one to a folder inside the
+     * catalog (read in its own place). A link to a file is read if the file is inside the
+     * catalog folder (compared by real path) and not read already under its own name. Pipes,
+     * devices and sockets are never opened. Counts and sizes are bounded by {@link Limits}.
+     *
+     * <p>Each entry's type is read before it is used; something swapped between that look and
+     * the read (a race only someone with write access to the folder could run) still meets the
+     * limits, and {@link BoundedFiles}, which checks the type again before opening.
+     */
+    private static final class Walk {
+        /** A link to a regular file inside the catalog: where it is, its target, the target's size. */
+        private record FileLink(Path link, Path real, long size) {
+        }
+
+        final Path root;
+        final List<Problem> problems;
+        final Limits limits;
+        final List<Path> files = new ArrayList<>();
+        /** Real path of each catalog file taken, to the path it was taken by. */
+        final Map<Path, Path> taken = new HashMap<>();
+        /** Links to files inside the catalog, taken after the walk so a file's own name wins. */
+        final List<FileLink> fileLinks = new ArrayList<>();
+        Path rootReal;
+        int entries;
+        long bytes;
+
+        Walk(Path root, List<Problem> problems, Limits limits) {
+            this.root = root;
+            this.problems = problems;
+            this.limits = limits;
+        }
+
+        void run() throws IOException, InputException {
+            rootReal = root.toRealPath();
+            folder(root, rootReal);
+            for (FileLink link : fileLinks) {
+                Path first = taken.get(link.real());
+                if (first != null) {
+                    problems.add(Problem.warning(Located.nowhere(link.link()), "",
+                            "the link leads to " + first + ", which is read under its own name; skipped",
+                            "remove the link (each file is read once)"));
+                } else {
+                    take(link.link(), link.real(), link.size());
+                }
+            }
+        }
+
+        /** Reads one folder, entries sorted by name so problems come out in the same order everywhere. */
+        private void folder(Path dir, Path dirReal) throws InputException {
+            List<Path> children = new ArrayList<>();
+            try (DirectoryStream<Path> stream = Files.newDirectoryStream(dir)) {
+                for (Path child : stream) {
+                    if (++entries > limits.entries()) {
+                        throw new InputException(Problem.error(Located.nowhere(root), "",
+                                "more than " + limits.entries() + " files and folders below the catalog folder; stopped",
+                                "give the folder that holds the catalog files with --catalog DIR (the limit keeps a"
+                                        + " mistyped folder such as / from being searched)"));
+                    }
+                    children.add(child);
+                }
+            } catch (IOException e) {
+                problems.add(Problem.error(Located.nowhere(dir), "", "cannot read (" + YamlFiles.describe(e) + ")",
+                        "check its permissions"));
+                return;
+            } catch (DirectoryIteratorException e) { // an entry that fails while listing (e.g. in /proc)
+                problems.add(Problem.error(Located.nowhere(dir), "", "cannot read (" + YamlFiles.describe(e.getCause()) + ")",
+                        "check its permissions"));
+                return;
+            }
+            children.sort(Comparator.comparing(p -> p.getFileName().toString()));
+            for (Path child : children) {
+                entry(child, dirReal);
+            }
+        }
+
+        private void entry(Path child, Path dirReal) throws InputException {
+            String name = child.getFileName().toString();
+            if (name.startsWith(".")) {
+                return; // hidden files and folders; the search index (.ampsieve-index) is one
+            }
+            boolean catalogName = isCatalogFile(child);
+            BasicFileAttributes own;
+            try {
+                own = Files.readAttributes(child, BasicFileAttributes.class, LinkOption.NOFOLLOW_LINKS);
+            } catch (IOException e) {
+                if (catalogName) {
+                    problems.add(Problem.error(Located.nowhere(child), "", "cannot read (" + YamlFiles.describe(e) + ")",
+                            "check its permissions"));
+                }
+                return;
+            }
+            if (own.isDirectory()) {
+                if (!name.equals(STAGES_FOLDER)) {
+                    folder(child, dirReal.resolve(name));
+                }
+                return;
+            }
+            if (!own.isSymbolicLink()) {
+                if (catalogName) {
+                    if (own.isRegularFile()) {
+                        take(child, dirReal.resolve(name), own.size());
+                    } else {
+                        special(child, own);
+                    }
+                }
+                return;
+            }
+            Path real;
+            BasicFileAttributes target;
+            try {
+                real = child.toRealPath();
+                target = Files.readAttributes(real, BasicFileAttributes.class, LinkOption.NOFOLLOW_LINKS);
+            } catch (NoSuchFileException e) {
+                if (catalogName) {
+                    problems.add(Problem.error(Located.nowhere(child), "", "the link's target does not exist",
+                            "fix or remove the link"));
+                }
+                return;
+            } catch (IOException e) {
+                if (catalogName) {
+                    problems.add(Problem.error(Located.nowhere(child), "", "cannot follow the link (" + YamlFiles.describe(e) + ")",
+                            "fix or remove the link"));
+                }
+                return;
+            }
+            if (target.isDirectory()) {
+                if (!name.equals(STAGES_FOLDER)) {
+                    folderLink(child, real, dirReal);
+                }
+            } else if (!catalogName) {
+                return;
+            } else if (!target.isRegularFile()) {
+                special(child, target);
+            } else if (!real.startsWith(rootReal)) {
+                outside(child, real);
+            } else {
+                fileLinks.add(new FileLink(child, real, target.size()));
+            }
+        }
+
+        private void folderLink(Path link, Path real, Path holderReal) {
+            if (!real.startsWith(rootReal)) {
+                outside(link, real);
+            } else if (holderReal.startsWith(real)) {
+                problems.add(Problem.warning(Located.nowhere(link), "",
+                        "the link leads back to " + shown(real) + ", which holds it (a loop); skipped", "remove the link"));
+            } else {
+                problems.add(Problem.warning(Located.nowhere(link), "",
+                        "the link leads to " + shown(real) + ", a folder inside the catalog; links to folders are not"
+                                + " followed (the folder is read, or skipped, in its own place)",
+                        "remove the link"));
+            }
+        }
+
+        private void outside(Path link, Path real) {
+            problems.add(Problem.warning(Located.nowhere(link), "",
+                    "the link leads outside the catalog folder (to " + real + "); skipped",
+                    "copy what it points to into the catalog folder, or give that folder with --catalog DIR"));
+        }
+
+        private void special(Path file, BasicFileAttributes attrs) {
+            problems.add(Problem.error(Located.nowhere(file), "", "not a regular file (" + BoundedFiles.kind(file, attrs) + "); skipped",
+                    "remove it or rename it: the catalog reads only regular *.yaml and *.yml files"));
+        }
+
+        /** A folder inside the catalog, named from the catalog folder as the user gave it. */
+        private Path shown(Path real) {
+            return root.resolve(rootReal.relativize(real));
+        }
+
+        /** @param size as the file reports it; the bytes read are counted again in {@link #readFile} */
+        private void take(Path file, Path real, long size) throws InputException {
+            if (files.size() >= limits.files()) {
+                throw tooManyFiles(root, limits);
+            }
+            bytes += size;
+            if (bytes > limits.bytes()) {
+                throw tooManyBytes(root, limits);
+            }
+            taken.put(real, file);
+            files.add(file);
+        }
+    }
+
+    private static InputException tooManyFiles(Path root, Limits limits) {
+        return new InputException(Problem.error(Located.nowhere(root), "",
+                "more than " + limits.files() + " catalog files (*.yaml, *.yml) below this folder; stopped",
+                "split the catalog into folders of fewer files and give one with --catalog DIR"));
+    }
+
+    private static InputException tooManyBytes(Path root, Limits limits) {
+        return new InputException(Problem.error(Located.nowhere(root), "",
+                "the catalog files add up to more than " + limits.bytes() + " bytes" + BoundedFiles.mebibytes(limits.bytes()) + "; stopped",
+                "split the catalog into smaller folders and give one with --catalog DIR"));
     }
 
     private static boolean isCatalogFile(Path file) {
@@ -128,10 +339,23 @@ public final class CatalogLoader {
         return !name.startsWith(".") && (lower.endsWith(".yaml") || lower.endsWith(".yml"));
     }
 
-    private static void readFile(Path file, List<Part> parts, Map<String, Located> ids, List<Problem> problems) {
+    private static void readFile(Path catalogRoot, Path file, Limits limits, long[] bytesRead, List<Part> parts,
+            Map<String, Located> ids, List<Problem> problems) throws InputException {
+        byte[] bytes;
         Node root;
         try {
-            root = YamlFiles.read(file);
+            bytes = BoundedFiles.read(file, YamlFiles.MAX_BYTES);
+        } catch (InputException e) {
+            problems.addAll(e.problems());
+            return;
+        }
+        // counted again as read: a file may have grown since it was listed
+        bytesRead[0] += bytes.length;
+        if (bytesRead[0] > limits.bytes()) {
+            throw tooManyBytes(catalogRoot, limits);
+        }
+        try {
+            root = YamlFiles.parse(YamlFiles.decode(bytes, file), file);
         } catch (InputException e) {
             problems.addAll(e.problems());
             return;

@@ -100,16 +100,23 @@ public final class RootCommand implements Callable<Integer> {
         return stageNames.apply(file);
     }
 
-    /** The catalog folder after applying --catalog, then $AMPSIEVE_CATALOG, then the demo catalog. */
+    /**
+     * The catalog folder after applying --catalog, then $AMPSIEVE_CATALOG, then the demo catalog.
+     * An empty --catalog or AMPSIEVE_CATALOG gives the empty path here; {@link #catalog()} refuses it.
+     */
     public Path catalogDir() {
-        if (catalogDir != null) {
-            return catalogDir;
+        return chooseCatalog(catalogDir, System.getenv(CATALOG_VARIABLE), System.getProperty("ampsieve.home"));
+    }
+
+    static final String CATALOG_VARIABLE = "AMPSIEVE_CATALOG";
+
+    static Path chooseCatalog(Path option, String env, String home) {
+        if (option != null) {
+            return option;
         }
-        String env = System.getenv("AMPSIEVE_CATALOG");
-        if (env != null && !env.isBlank()) {
-            return Path.of(env);
+        if (env != null) {
+            return Path.of(env.isBlank() ? "" : env);
         }
-        String home = System.getProperty("ampsieve.home");
         if (home != null) {
             Path demo = Path.of(home, "demo-catalog");
             if (Files.isDirectory(demo)) {
@@ -119,9 +126,36 @@ public final class RootCommand implements Callable<Integer> {
         return Path.of("demo-catalog");
     }
 
-    /** Loads the catalog once per command tree; problems stay on the result for the caller to show. */
+    /**
+     * Why the catalog choice is unusable, or null. An empty name is refused rather than read as
+     * the current folder (which is what Path.of("") means) or, for the variable, quietly replaced
+     * by the demo catalog: an empty AMPSIEVE_CATALOG usually comes from a script whose own
+     * variable was unset, and ranking invented parts as if they were the user's would be worse
+     * than stopping.
+     */
+    static String emptyCatalogChoice(Path option, String env) {
+        if (option != null) {
+            return option.toString().isBlank()
+                    ? "--catalog was given an empty folder name; give the catalog folder (--catalog DIR), or leave the"
+                            + " option out to use $" + CATALOG_VARIABLE + " or the demo catalog"
+                    : null;
+        }
+        return env != null && env.isBlank()
+                ? CATALOG_VARIABLE + " is set but empty; set it to the catalog folder, or unset it to use the demo catalog"
+                : null;
+    }
+
+    /**
+     * Loads the catalog once per command tree; problems stay on the result for the caller to show.
+     *
+     * @throws UserException (exit code 2) when --catalog or AMPSIEVE_CATALOG is empty
+     */
     public Catalog catalog() throws InputException {
         if (catalog == null) {
+            String empty = emptyCatalogChoice(catalogDir, System.getenv(CATALOG_VARIABLE));
+            if (empty != null) {
+                throw new UserException(empty, ExitCode.USAGE);
+            }
             catalog = CatalogLoader.load(catalogDir(), strict);
         }
         return catalog;

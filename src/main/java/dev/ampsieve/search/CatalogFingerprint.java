@@ -64,14 +64,15 @@ public final class CatalogFingerprint {
                 unused.add(p.file());
             }
         }
-        for (Listed f : catalogFiles(root)) {
-            update(md, f.relative());
-            if (!f.listed()) {
-                update(md, "cannot list");
-            } else if (unused.contains(f.path())) {
-                update(md, "not used");
-            } else {
-                update(md, contentHash(opener, f.path()));
+        for (Path f : CatalogLoader.files(root)) {
+            update(md, root.relativize(f).toString().replace('\\', '/'));
+            // a file the loader refused as a whole (too large, not a regular file, unreadable)
+            // is never opened again: its reason stands in for its bytes
+            update(md, unused.contains(f) ? "not used" : contentHash(opener, f));
+        }
+        for (Problem p : catalog.problems()) {
+            if (p.line() == 0) {
+                update(md, p.toString()); // folders that could not be listed, links skipped, limits
             }
         }
         // the parts too: a loader change that reads the same files differently must also rebuild
@@ -165,71 +166,6 @@ public final class CatalogFingerprint {
             return "cannot read " + e.getClass().getSimpleName();
         }
         return HexFormat.of().formatHex(content.digest());
-    }
-
-    /**
-     * A catalog file or a folder that could not be listed.
-     *
-     * @param relative the path below the root with '/' separators
-     * @param listed   false for an entry the walk could not open
-     */
-    record Listed(Path path, String relative, boolean listed) {
-    }
-
-    /**
-     * Every *.yaml / *.yml file below {@code root} the way {@code CatalogLoader} finds them (links
-     * followed; hidden files and folders and {@value CatalogLoader#STAGES_FOLDER} folders skipped),
-     * sorted by relative path; entries that cannot be opened are kept with {@code listed} false.
-     */
-    static List<Listed> catalogFiles(Path root) {
-        if (root == null || !Files.isDirectory(root)) {
-            return List.of();
-        }
-        List<Listed> out = new ArrayList<>();
-        try {
-            Files.walkFileTree(root, EnumSet.of(FileVisitOption.FOLLOW_LINKS), Integer.MAX_VALUE,
-                    new SimpleFileVisitor<>() {
-                        @Override
-                        public FileVisitResult preVisitDirectory(Path dir, BasicFileAttributes attrs) {
-                            if (dir.equals(root)) {
-                                return FileVisitResult.CONTINUE;
-                            }
-                            String name = dir.getFileName().toString();
-                            return name.startsWith(".") || name.equals(CatalogLoader.STAGES_FOLDER)
-                                    ? FileVisitResult.SKIP_SUBTREE : FileVisitResult.CONTINUE;
-                        }
-
-                        @Override
-                        public FileVisitResult visitFile(Path file, BasicFileAttributes attrs) {
-                            if (attrs.isRegularFile() && isCatalogName(file)) {
-                                out.add(listed(root, file, true));
-                            }
-                            return FileVisitResult.CONTINUE;
-                        }
-
-                        @Override
-                        public FileVisitResult visitFileFailed(Path file, IOException e) {
-                            if (!file.getFileName().toString().startsWith(".")) {
-                                out.add(listed(root, file, false));
-                            }
-                            return FileVisitResult.CONTINUE;
-                        }
-                    });
-        } catch (IOException e) {
-            out.add(listed(root, root, false));
-        }
-        out.sort(Comparator.comparing(Listed::relative));
-        return out;
-    }
-
-    private static Listed listed(Path root, Path file, boolean ok) {
-        return new Listed(file, root.relativize(file).toString().replace('\\', '/'), ok);
-    }
-
-    private static boolean isCatalogName(Path file) {
-        String name = file.getFileName().toString();
-        String lower = name.toLowerCase(Locale.ROOT);
-        return !name.startsWith(".") && (lower.endsWith(".yaml") || lower.endsWith(".yml"));
     }
 
     private static void update(MessageDigest md, String s) {

@@ -3,12 +3,16 @@ package dev.ampsieve.yaml;
 import java.io.IOException;
 import java.io.Reader;
 import java.io.StringReader;
-import java.nio.charset.CharacterCodingException;
+import java.nio.ByteBuffer;
+import java.nio.CharBuffer;
+import java.nio.charset.CharsetDecoder;
+import java.nio.charset.CoderResult;
+import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Collections;
+import java.util.HashMap;
 import java.util.IdentityHashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -19,16 +23,24 @@ import org.yaml.snakeyaml.Yaml;
 import org.yaml.snakeyaml.error.Mark;
 import org.yaml.snakeyaml.error.MarkedYAMLException;
 import org.yaml.snakeyaml.error.YAMLException;
+import org.yaml.snakeyaml.events.AliasEvent;
+import org.yaml.snakeyaml.events.CollectionEndEvent;
+import org.yaml.snakeyaml.events.CollectionStartEvent;
+import org.yaml.snakeyaml.events.Event;
+import org.yaml.snakeyaml.events.ScalarEvent;
 import org.yaml.snakeyaml.nodes.MappingNode;
 import org.yaml.snakeyaml.nodes.NodeTuple;
 import org.yaml.snakeyaml.nodes.ScalarNode;
 import org.yaml.snakeyaml.nodes.SequenceNode;
+import org.yaml.snakeyaml.reader.ReaderException;
 import org.yaml.snakeyaml.DumperOptions;
 
 /**
  * Reads a YAML file into {@link Node}s that remember their line and column. Bounded on
- * purpose: files over {@link #MAX_BYTES} and documents with more than {@link #MAX_ALIASES}
- * aliases (the "billion laughs" expansion) are refused with a message, never parsed.
+ * purpose: only regular files are read, through {@link BoundedFiles} (never more than
+ * {@link #MAX_BYTES} bytes, whatever size the file reports); documents with more than
+ * {@link #MAX_ALIASES} aliases (the "billion laughs" expansion) or nested deeper than
+ * {@link #MAX_DEPTH} are refused with a message naming the place, never expanded.
  */
 public final class YamlFiles {
 
@@ -37,36 +49,62 @@ public final class YamlFiles {
     /** Aliases are legitimate for sharing a block of values; thousands are an attack. */
     public static final int MAX_ALIASES = 50;
     public static final int MAX_DEPTH = 30;
+    private static final String TOO_DEEP = "refused: YAML nested more than " + MAX_DEPTH + " levels deep";
 
     private YamlFiles() {
     }
 
-    /** Reads one file; every failure becomes an {@link InputException} naming the file. */
+    /** Reads one file; every failure becomes an {@link InputException} naming the file (and the place, where there is one). */
     public static Node read(Path file) throws InputException {
-        long size;
-        try {
-            size = Files.size(file);
-        } catch (IOException e) {
-            throw new InputException(Problem.error(Located.nowhere(file), "", "cannot read the file (" + describe(e) + ")",
-                    "check that it exists and is readable"));
+        return parse(decode(BoundedFiles.read(file, MAX_BYTES), file), file);
+    }
+
+    /**
+     * UTF-8 bytes to text. A byte that is not UTF-8 is reported at its line and column (counted
+     * as {@link #placeOf} counts them), with the byte's value: a Latin-1 degree sign or a UTF-16
+     * file shows up at once.
+     */
+    public static String decode(byte[] bytes, Path file) throws InputException {
+        CharsetDecoder decoder = StandardCharsets.UTF_8.newDecoder()
+                .onMalformedInput(CodingErrorAction.REPORT).onUnmappableCharacter(CodingErrorAction.REPORT);
+        ByteBuffer in = ByteBuffer.wrap(bytes);
+        CharBuffer out = CharBuffer.allocate(bytes.length); // UTF-8 never gives more chars than bytes
+        CoderResult r = decoder.decode(in, out, true);
+        if (!r.isError()) {
+            r = decoder.flush(out);
         }
-        if (size > MAX_BYTES) {
-            throw new InputException(Problem.error(Located.nowhere(file), "",
-                    "file is " + size + " bytes, over the limit of " + MAX_BYTES + " bytes (4 MiB) for one YAML file",
-                    "split it into several files (sub-folders are fine)"));
+        if (r.isError()) {
+            int bad = in.position();
+            String before = new String(bytes, 0, bad, StandardCharsets.UTF_8); // valid up to here
+            String shown = before.startsWith("\uFEFF") ? before.substring(1) : before; // as parse() sees it
+            throw new InputException(Problem.error(placeOf(file, shown, shown.length()), "",
+                    String.format(java.util.Locale.ROOT, "not valid UTF-8 text (byte 0x%02X)", bytes[bad] & 0xff),
+                    "save the file as UTF-8 (Latin-1, Windows-1252 and UTF-16 files are refused)"));
         }
-        String text;
-        try {
-            byte[] bytes = Files.readAllBytes(file);
-            text = StandardCharsets.UTF_8.newDecoder().decode(java.nio.ByteBuffer.wrap(bytes)).toString();
-        } catch (CharacterCodingException e) {
-            throw new InputException(Problem.error(Located.nowhere(file), "", "file is not valid UTF-8 text",
-                    "save it as UTF-8"));
-        } catch (IOException e) {
-            throw new InputException(Problem.error(Located.nowhere(file), "", "cannot read the file (" + describe(e) + ")",
-                    "check that it exists and is readable"));
+        out.flip();
+        return out.toString();
+    }
+
+    /**
+     * The line and column of {@code text[end]}, counted the way SnakeYAML counts for its own
+     * messages (1-based, columns in code points, a line ends at LF, CR, CR LF, NEL, LS or PS),
+     * so every location in one file agrees.
+     */
+    static Located placeOf(Path file, CharSequence text, int end) {
+        int line = 1;
+        int column = 1;
+        for (int i = 0; i < end; ) {
+            int c = Character.codePointAt(text, i);
+            i += Character.charCount(c);
+            boolean lone = c == '\r' && (i >= text.length() || text.charAt(i) != '\n');
+            if (c == '\n' || c == 0x85 || c == 0x2028 || c == 0x2029 || lone) {
+                line++;
+                column = 1;
+            } else {
+                column++;
+            }
         }
-        return parse(text, file);
+        return new Located(file, line, column);
     }
 
     /** An I/O failure in words: the exception's kind and the path or reason it gives. */
@@ -92,28 +130,23 @@ public final class YamlFiles {
         if (text.startsWith("\uFEFF")) {
             text = text.substring(1); // a byte-order mark some editors write; not content
         }
-        LoaderOptions options = new LoaderOptions();
-        options.setMaxAliasesForCollections(MAX_ALIASES);
-        options.setAllowDuplicateKeys(true); // we report duplicates ourselves, with both lines
-        options.setNestingDepthLimit(MAX_DEPTH);
-        options.setCodePointLimit((int) MAX_BYTES);
-        options.setAllowRecursiveKeys(false);
-        Yaml yaml = new Yaml(options);
+        Yaml yaml = new Yaml(options());
         org.yaml.snakeyaml.nodes.Node root;
         try (Reader r = new StringReader(text)) {
             root = yaml.compose(r);
+        } catch (ReaderException e) {
+            throw new InputException(badCharacter(file, text, e));
         } catch (MarkedYAMLException e) {
             Mark m = e.getProblemMark() != null ? e.getProblemMark() : e.getContextMark();
             String what = e.getProblem() != null ? e.getProblem() : e.getMessage();
             throw new InputException(Problem.error(at(file, m), "", "YAML syntax: " + firstLine(what),
                     unclosed(e).orElse(syntaxFix(what))));
         } catch (YAMLException e) {
-            throw new InputException(refusal(file, firstLine(e.getMessage())));
+            throw new InputException(refusal(file, text, firstLine(e.getMessage())));
         } catch (IOException e) {
             throw new InputException(Problem.error(Located.nowhere(file), "", "cannot read (" + describe(e) + ")", ""));
         } catch (StackOverflowError e) {
-            throw new InputException(Problem.error(Located.nowhere(file), "", "YAML nested too deeply",
-                    "use at most " + MAX_DEPTH + " levels"));
+            throw new InputException(Problem.error(limitAt(file, text, false), "", TOO_DEEP, "use fewer levels"));
         }
         if (root == null) {
             return new Node.Scalar(new Located(file, 1, 1), null, false);
@@ -158,11 +191,52 @@ public final class YamlFiles {
         return "fix the YAML syntax here (indent with spaces, 'key: value', quote text containing ': ' or ' #')";
     }
 
-    /** Limits enforced by SnakeYAML itself arrive without a position; say which limit it was. */
-    private static Problem refusal(Path file, String what) {
+    private static LoaderOptions options() {
+        LoaderOptions options = new LoaderOptions();
+        options.setMaxAliasesForCollections(MAX_ALIASES);
+        options.setAllowDuplicateKeys(true); // we report duplicates ourselves, with both lines
+        options.setNestingDepthLimit(MAX_DEPTH);
+        options.setCodePointLimit((int) MAX_BYTES);
+        options.setAllowRecursiveKeys(false);
+        return options;
+    }
+
+    /**
+     * SnakeYAML refuses control characters (YAML allows only its "printable" set) with
+     * a position in its own buffer; the place is found again here by the same rule, so the user
+     * sees the line and column. A NUL most often means the file is not text or is UTF-16.
+     */
+    private static Problem badCharacter(Path file, String text, ReaderException e) {
+        int i = 0;
+        while (i < text.length()) {
+            int c = text.codePointAt(i);
+            if (!printable(c)) {
+                break;
+            }
+            i += Character.charCount(c);
+        }
+        int c = i < text.length() ? text.codePointAt(i) : e.getCodePoint();
+        Located at = i < text.length() ? placeOf(file, text, i) : Located.nowhere(file);
+        String name = String.format(java.util.Locale.ROOT, "U+%04X", c) + (c == 0 ? " (NUL)" : "");
+        return Problem.error(at, "", "control character " + name + " is not allowed in YAML",
+                c == 0 ? "remove it; a file with NULs is not text, or was saved as UTF-16 (save it as UTF-8)"
+                        : "remove it (write it as an escape such as \"\\t\" inside double quotes if it belongs there)");
+    }
+
+    /** SnakeYAML's printable set (StreamReader.isPrintable): tab, LF, CR, NEL and non-control characters. */
+    private static boolean printable(int c) {
+        return c == 0x9 || c == 0xA || c == 0xD || c == 0x85 || (c >= 0x20 && c <= 0x7E) || (c >= 0xA0 && c <= 0xD7FF)
+                || (c >= 0xE000 && c <= 0xFFFD) || (c >= 0x10000 && c <= 0x10FFFF);
+    }
+
+    /**
+     * Limits enforced by SnakeYAML's composer arrive without a position; say which limit it was,
+     * and where, found by reading the parser's events again (cheap: events are never expanded).
+     */
+    private static Problem refusal(Path file, String text, String what) {
         String w = what == null ? "" : what.toLowerCase(java.util.Locale.ROOT);
         if (w.contains("alias")) {
-            return Problem.error(Located.nowhere(file), "",
+            return Problem.error(limitAt(file, text, true), "",
                     "refused: more than " + MAX_ALIASES + " aliases to lists or mappings (an alias-expansion bomb looks like this)",
                     "write the values out instead of using *aliases");
         }
@@ -171,10 +245,45 @@ public final class YamlFiles {
                     "split it into several files");
         }
         if (w.contains("nesting depth")) {
-            return Problem.error(Located.nowhere(file), "", "refused: YAML nested more than " + MAX_DEPTH + " levels deep",
-                    "use fewer levels");
+            return Problem.error(limitAt(file, text, false), "", TOO_DEEP, "use fewer levels");
         }
         return Problem.error(Located.nowhere(file), "", "YAML: " + what, "fix the YAML syntax");
+    }
+
+    /**
+     * Where a composer limit is first passed: the alias beyond {@link #MAX_ALIASES} aliases to
+     * lists or mappings (scalar aliases are not counted, as in SnakeYAML's Composer), or the
+     * list or mapping that opens level {@link #MAX_DEPTH} + 1. Nowhere if not found.
+     */
+    private static Located limitAt(Path file, String text, boolean aliases) {
+        Map<String, Boolean> anchorIsCollection = new HashMap<>();
+        int count = 0;
+        int depth = 0;
+        try {
+            for (Event e : new Yaml(options()).parse(new StringReader(text))) {
+                if (e instanceof CollectionStartEvent start) {
+                    depth++;
+                    if (!aliases && depth > MAX_DEPTH) {
+                        return at(file, start.getStartMark());
+                    }
+                    if (start.getAnchor() != null) {
+                        anchorIsCollection.put(start.getAnchor(), true);
+                    }
+                } else if (e instanceof CollectionEndEvent) {
+                    depth--;
+                } else if (e instanceof ScalarEvent s && s.getAnchor() != null) {
+                    anchorIsCollection.put(s.getAnchor(), false);
+                } else if (e instanceof AliasEvent a && Boolean.TRUE.equals(anchorIsCollection.get(a.getAnchor()))) {
+                    count++;
+                    if (aliases && count > MAX_ALIASES) {
+                        return at(file, a.getStartMark());
+                    }
+                }
+            }
+        } catch (YAMLException | StackOverflowError e) {
+            // the place is a courtesy; the refusal stands without it
+        }
+        return Located.nowhere(file);
     }
 
     private static String firstLine(String s) {
@@ -214,7 +323,7 @@ public final class YamlFiles {
                         "write the values out instead of the self-referring *alias"));
             }
             if (depth > MAX_DEPTH) {
-                throw new InputException(Problem.error(loc, path, "YAML nested too deeply", "use at most " + MAX_DEPTH + " levels"));
+                throw new InputException(Problem.error(loc, path, TOO_DEEP, "use fewer levels"));
             }
             open.add(n);
             Node result = build(n, path, depth, loc);

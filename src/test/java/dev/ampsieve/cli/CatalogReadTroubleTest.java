@@ -58,39 +58,32 @@ class CatalogReadTroubleTest {
         return file + ": cannot read the file (";
     }
 
+    /*
+     * A link to a file outside the catalog (here one that fails every read) is not read at all
+     * (CatalogLoader.Walk: a shared catalog must not make the tool read private files): check
+     * names it in one warning line, and the other commands search the rest without a word.
+     */
     @Test
-    void findReportsAFileThatFailsToReadInOneLineAndSearchesTheRest() throws Exception {
+    void aLinkToAFileOutsideIsSkippedByFindAndNamedByCheck() throws Exception {
         Path broken = unreadableForAnyone();
         CliRun r = run("find", "zero-drift", "vos<=10uV");
         assertEquals(ExitCode.OK, r.code(), r.toString());
         assertEquals(List.of("fx-az-1", "fx-chop-1"), ids(r)); // as FindCommandTest finds them without the broken file
-        List<String> err = r.err().lines().toList();
-        assertEquals(1, err.size(), r.err());
-        assertTrue(err.get(0).startsWith(cannotRead(broken)), err.get(0));
-        assertTrue(err.get(0).endsWith("; check that it exists and is readable"), err.get(0));
+        assertEquals("", r.err(), r.toString());
         CliRun check = run("check");
-        assertTrue(check.outLines().contains(err.get(0)), "the same line as check: " + check.out());
+        assertEquals(1, check.outLines().stream().filter(l -> l.startsWith(broken + ": ")
+                && l.contains("the link leads outside the catalog folder")).count(), check.out());
     }
 
     @Test
-    void rankWithAQueryReportsItTheSameWay() throws Exception {
-        Path broken = unreadableForAnyone();
-        CliRun r = run("rank", "--stage", STAGE, "--query", "zero-drift");
-        assertEquals(ExitCode.OK, r.code(), r.toString());
-        assertTrue(r.out().contains("fx-az-1") && r.out().contains("fx-chop-1") && !r.out().contains("fx-bip-1"), r.out());
-        List<String> err = r.err().lines().toList();
-        assertEquals(1, err.size(), r.err());
-        assertTrue(err.get(0).startsWith(cannotRead(broken)), err.get(0));
-    }
-
-    @Test
-    void budgetAndCompareNameTheFileToo() throws Exception {
-        Path broken = unreadableForAnyone();
-        for (CliRun r : List.of(run("budget", "fx-az-1", "--stage", STAGE), run("compare", "fx-az-1", "fx-chop-1", "--stage", STAGE))) {
+    void rankAndBudgetSkipItTheSameWay() throws Exception {
+        unreadableForAnyone();
+        CliRun rank = run("rank", "--stage", STAGE, "--query", "zero-drift");
+        assertEquals(ExitCode.OK, rank.code(), rank.toString());
+        assertTrue(rank.out().contains("fx-az-1") && rank.out().contains("fx-chop-1") && !rank.out().contains("fx-bip-1"), rank.out());
+        for (CliRun r : List.of(rank, run("budget", "fx-az-1", "--stage", STAGE), run("compare", "fx-az-1", "fx-chop-1", "--stage", STAGE))) {
             assertEquals(ExitCode.OK, r.code(), r.toString());
-            List<String> err = r.err().lines().toList();
-            assertEquals(1, err.size(), r.err());
-            assertTrue(err.get(0).startsWith(cannotRead(broken)), err.get(0));
+            assertEquals("", r.err(), r.toString());
         }
     }
 

@@ -130,18 +130,20 @@ class CatalogFingerprintTest {
     void aFileThatFailsToReadNowCountsByAMarkInsteadOfFailing() throws Exception {
         twoFiles();
         Catalog c = CatalogLoader.load(dir, true);
-        Path broken = unreadableForAnyone("broken.yaml"); // appears after the load, so nothing says it is unreadable
-        String viaTheDisk = CatalogFingerprint.of(c);
-        // the same mark as any other plain I/O failure on that file, whatever its content
-        String viaAFailure = CatalogFingerprint.of(c, f -> {
+        Path broken = dir.resolve("broken.yaml"); // appears after the load, so nothing says it is unreadable
+        Files.writeString(broken, "# first content\n");
+        CatalogFingerprint.Opener failing = f -> {
             if (f.equals(broken)) {
                 throw new IOException("Input/output error");
             }
             return Files.newInputStream(f);
-        });
-        assertEquals(viaAFailure, viaTheDisk);
+        };
+        String first = CatalogFingerprint.of(c, failing);
+        // the mark names the failure, not the content
+        Files.writeString(broken, "# other content\n");
+        assertEquals(first, CatalogFingerprint.of(c, failing));
         Files.delete(broken);
-        assertNotEquals(CatalogFingerprint.of(c), viaTheDisk, "a failed file still counts by its name");
+        assertNotEquals(CatalogFingerprint.of(c), first, "a failed file still counts by its name");
     }
 
     @Test
@@ -198,23 +200,25 @@ class CatalogFingerprintTest {
         Files.writeString(dir.resolve(".hidden/x.yaml"), "# hidden\n");
         Files.writeString(dir.resolve(".dot.yaml"), "# hidden\n");
         assertEquals(base, CatalogFingerprint.of(c));
-        // but it follows a linked folder
+        // nor a linked folder (the loader follows no link to a folder: CatalogLoader.Walk)
         Path elsewhere = Files.createDirectories(dir.resolveSibling(dir.getFileName() + "-more"));
         try {
             Files.writeString(elsewhere.resolve("more.yaml"), "# more parts\n");
             Files.createSymbolicLink(dir.resolve("linked"), elsewhere);
-            assertEquals(dir.resolve("linked/more.yaml"), CatalogFingerprint.catalogFiles(dir).get(0).path());
-            assertNotEquals(base, CatalogFingerprint.of(c));
+            assertEquals(List.of(dir.resolve("one.yaml"), dir.resolve("two.yaml")), CatalogLoader.files(dir));
+            assertEquals(base, CatalogFingerprint.of(c));
         } finally {
+            Files.delete(dir.resolve("linked"));
             Files.delete(elsewhere.resolve("more.yaml"));
             Files.delete(elsewhere);
         }
-        // a link to a folder above is a loop the walk reports: one entry that cannot be listed, not a failure
-        Files.delete(dir.resolve("linked"));
+        // a link to a folder above is neither followed nor a failure
         Files.createSymbolicLink(dir.resolve("loop"), Path.of("."));
-        List<CatalogFingerprint.Listed> listed = CatalogFingerprint.catalogFiles(dir);
-        assertEquals(List.of("loop", "one.yaml", "two.yaml"), listed.stream().map(CatalogFingerprint.Listed::relative).toList());
-        assertFalse(listed.get(0).listed());
+        assertEquals(List.of(dir.resolve("one.yaml"), dir.resolve("two.yaml")), CatalogLoader.files(dir));
+        assertEquals(base, CatalogFingerprint.of(c));
+        // while a new part file is counted
+        Files.copy(Path.of("demo-catalog/zero-drift/auto-zero.yaml"), dir.resolve("three.yaml"));
+        assertNotEquals(base, CatalogFingerprint.of(c));
     }
 
     private static Map<String, Object> put(Map<String, Object> m, String k, Object v) {

@@ -5,8 +5,10 @@ import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTimeoutPreemptively;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.ampsieve.testing.SpecialFiles;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -93,12 +95,16 @@ class YamlFilesTest {
     }
 
     @Test
-    void anAliasBombIsRefusedWithAClearMessage() throws IOException {
+    void anAliasBombIsRefusedAtTheAliasPastTheLimit() throws IOException {
         Path f = Files.writeString(dir.resolve("bomb.yaml"), billionLaughs());
         Problem p = only(assertThrows(InputException.class, () -> YamlFiles.read(f)));
         assertTrue(p.message().startsWith("refused: more than " + YamlFiles.MAX_ALIASES + " aliases"), p.message());
         assertEquals("write the values out instead of using *aliases", p.fix());
         assertEquals(f, p.file());
+        // lines 2-6 hold 9 aliases each (45); the 51st is the 6th on line 7, "g: &g [*f,*f,*f,*f,*f,*f":
+        // '[' is column 7, each "*f," takes 3 columns, so the 6th '*' is at 8 + 5 * 3 = 23 (counted by hand)
+        assertEquals(7, p.line());
+        assertEquals(23, p.column());
     }
 
     @Test
@@ -129,23 +135,84 @@ class YamlFilesTest {
         java.util.Arrays.fill(big, (byte) '#'); // one endless comment: valid YAML, just too large
         Files.write(f, big);
         Problem p = only(assertThrows(InputException.class, () -> YamlFiles.read(f)));
-        assertEquals("file is " + (YamlFiles.MAX_BYTES + 1) + " bytes, over the limit of " + YamlFiles.MAX_BYTES
-                + " bytes (4 MiB) for one YAML file", p.message());
+        // 4 MiB = 4 * 1024 * 1024 = 4194304 bytes
+        assertEquals("file is over the limit of 4194304 bytes (4 MiB) for one YAML file", p.message());
         assertTrue(p.fix().startsWith("split it"), p.fix());
     }
 
     @Test
-    void deepNestingIsRefused() {
-        String deep = "a: " + "[".repeat(YamlFiles.MAX_DEPTH + 5) + "]".repeat(YamlFiles.MAX_DEPTH + 5) + "\n";
-        Problem p = only(assertThrows(InputException.class, () -> YamlFiles.parse(deep, null)));
-        assertTrue(p.message().contains("nested"), p.message());
+    void devZeroAndANamedPipeAreRefusedInOneLine() throws Exception {
+        // the old reader asked for the size (0) and then read /dev/zero until the heap ran out,
+        // and opened the pipe, which waits for a writer for ever
+        Path zero = SpecialFiles.devZero();
+        Problem z = only(assertTimeoutPreemptively(SpecialFiles.HANG_GUARD,
+                () -> assertThrows(InputException.class, () -> YamlFiles.read(zero))));
+        assertEquals("/dev/zero: not a regular file (a character device); give a YAML file", z.toString());
+        Path fifo = SpecialFiles.fifo(dir.resolve("pipe.yaml"));
+        Problem f = only(assertTimeoutPreemptively(SpecialFiles.HANG_GUARD,
+                () -> assertThrows(InputException.class, () -> YamlFiles.read(fifo))));
+        assertEquals(fifo + ": not a regular file (a named pipe); give a YAML file", f.toString());
     }
 
     @Test
-    void textThatIsNotUtf8IsRefused() throws IOException {
-        Path f = Files.write(dir.resolve("latin1.yaml"), "title: 25 \u00b0C part\n".getBytes(StandardCharsets.ISO_8859_1));
+    void deepNestingIsRefusedWhereItPassesTheLimit() {
+        // the mapping is level 1 and the k-th '[' level k + 1, at column 3 + k: level 31 is the 30th '[', column 33
+        String deep = "a: " + "[".repeat(YamlFiles.MAX_DEPTH + 5) + "]".repeat(YamlFiles.MAX_DEPTH + 5) + "\n";
+        Problem p = only(assertThrows(InputException.class, () -> YamlFiles.parse(deep, null)));
+        assertEquals("refused: YAML nested more than 30 levels deep", p.message());
+        assertEquals(1, p.line());
+        assertEquals(33, p.column());
+        // block style, one more space per level: the mapping of level d starts on line d, column d
+        StringBuilder block = new StringBuilder();
+        for (int d = 1; d <= 40; d++) {
+            block.append(" ".repeat(d - 1)).append("k").append(d).append(":\n");
+        }
+        block.append(" ".repeat(40)).append("end\n");
+        Problem q = only(assertThrows(InputException.class, () -> YamlFiles.parse(block.toString(), null)));
+        assertEquals("refused: YAML nested more than 30 levels deep", q.message());
+        assertEquals(31, q.line());
+        assertEquals(31, q.column());
+    }
+
+    @Test
+    void textThatIsNotUtf8IsRefusedAtTheFirstBadByte() throws IOException {
+        // Latin-1 writes the degree sign as the single byte 0xB0, never valid alone in UTF-8;
+        // "title: 25 " is 10 characters, so the byte is in column 11 of line 2
+        Path f = Files.write(dir.resolve("latin1.yaml"), "id: a\ntitle: 25 \u00b0C part\n".getBytes(StandardCharsets.ISO_8859_1));
         Problem p = only(assertThrows(InputException.class, () -> YamlFiles.read(f)));
-        assertEquals("file is not valid UTF-8 text", p.message());
+        assertEquals("not valid UTF-8 text (byte 0xB0)", p.message());
+        assertEquals(2, p.line());
+        assertEquals(11, p.column());
+        assertTrue(p.fix().startsWith("save the file as UTF-8"), p.fix());
+    }
+
+    @Test
+    void columnsCountCharactersNotBytes() throws IOException {
+        // valid UTF-8 "note: ±5 µV " (12 characters, 14 bytes) on line 3 after CR LF line ends, then a lone 0xB0
+        byte[] head = "id: a\r\nx: 1\r\nnote: \u00b15 \u00b5V ".getBytes(StandardCharsets.UTF_8);
+        byte[] bytes = java.util.Arrays.copyOf(head, head.length + 2);
+        bytes[head.length] = (byte) 0xB0;
+        bytes[head.length + 1] = '\n';
+        Path f = Files.write(dir.resolve("mixed.yaml"), bytes);
+        Problem p = only(assertThrows(InputException.class, () -> YamlFiles.read(f)));
+        assertEquals(3, p.line());
+        assertEquals(13, p.column());
+    }
+
+    @Test
+    void aNulByteIsRefusedAtItsPlace() throws IOException {
+        // "title: x" is 8 characters: the NUL is column 9 of line 2
+        Path f = Files.write(dir.resolve("nul.yaml"), "id: a\ntitle: x\u0000y\n".getBytes(StandardCharsets.UTF_8));
+        Problem p = only(assertThrows(InputException.class, () -> YamlFiles.read(f)));
+        assertEquals("control character U+0000 (NUL) is not allowed in YAML", p.message());
+        assertEquals(2, p.line());
+        assertEquals(9, p.column());
+        assertTrue(p.fix().contains("UTF-16"), p.fix());
+        // an escape character (0x1B) after a CR LF line end and a BOM (not counted as a column)
+        Problem q = only(assertThrows(InputException.class, () -> YamlFiles.parse("\uFEFFid: a\r\nb: \u001b[1m\n", null)));
+        assertEquals("control character U+001B is not allowed in YAML", q.message());
+        assertEquals(2, q.line());
+        assertEquals(4, q.column());
     }
 
     @Test
