@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # End-to-end check of the shell as a new user meets it: start the launcher ./ampsieve in a
 # detached tmux session 120 columns wide, answer the guided questions with send-keys, run the
-# ranking, and read the screen back with capture-pane.
+# ranking, and read the screen back with capture-pane; then Ctrl-C during a long ranking and a
+# pasted line of a megabyte.
 #
 # Exit 0: passed. Exit 77: tmux is not installed (the JUnit wrapper decides whether that fails).
 # Anything else: failed; the last screen is printed.

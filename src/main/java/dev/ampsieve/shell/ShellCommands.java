@@ -494,7 +494,8 @@ final class ShellCommands {
             }
             out.println();
             out.println("Commands that take --stage FILE use the current stage when it is left out.");
-            out.println("Tab completes commands, options, part ids, stage keys and units. Ctrl-C drops the line, Ctrl-D leaves.");
+            out.println("Tab completes commands, options, part ids, stage keys and units.");
+            out.println("Ctrl-C drops the line or stops a running command; Ctrl-D leaves.");
             return ExitCode.OK;
         }
 
