@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # End-to-end check of the shell as a new user meets it: start the launcher ./ampsieve in a
 # detached tmux session 120 columns wide, answer the guided questions with send-keys, run the
-# ranking, and read the screen back with capture-pane.
+# ranking, and read the screen back with capture-pane; then Ctrl-C during a long ranking and a
+# pasted line of a megabyte.
 #
 # Exit 0: passed. Exit 77: tmux is not installed (the JUnit wrapper decides whether that fails).
 # Anything else: failed; the last screen is printed.
@@ -81,10 +82,42 @@ screen | grep -Eq "^#  part +verdict +cost" || { echo "e2e: no ranking table"; s
 screen | grep -Eq "^1  [a-z0-9-]+ +fits" || { echo "e2e: no fitting part ranked first"; screen; exit 1; }
 screen | grep -Eq "^  Pick [a-z0-9-]+: " || { echo "e2e: no advice naming the pick"; screen; exit 1; }
 
+# Ctrl-C during a long ranking (the most units a stage may ask for, each simulated: minutes when
+# nothing stops it), and 'show' typed at once, before the shell is back: the keys are kept, the
+# ranking stops, and the stage is as it was
+type_line "set trials 10000000"
+wait_for "^trials = 10000000"
+type_line "rank"
+sleep 2
+tmux -L "$SOCKET" send-keys -t "$SESSION" C-c
+type_line "show"
+wait_for "^Interrupted; the current stage is as it was\.$" 60
+# what follows the last "rank" line: the interrupt, then show's stage, and no ranking
+after_rank() { screen | awk '/^ampsieve \[new stage\*\]> rank$/ { text = "" } { text = text $0 "\n" } END { printf "%s", text }'; }
+wait_for "^Other keys keep their defaults" 30
+after_rank | grep -Eq "^  trials +10000000$" || { echo "e2e: no stage shown after Ctrl-C"; screen; exit 1; }
+after_rank | grep -Eq "^  limit at the output +1\.00 mV" || { echo "e2e: the stage changed after Ctrl-C"; screen; exit 1; }
+if after_rank | grep -Eq "^Advice|^#  part"; then echo "e2e: the ranking finished despite Ctrl-C"; screen; exit 1; fi
+
+# a pasted line of a megabyte: refused with one line, quickly (unguarded, redrawing it after each
+# key would take hours), and the shell goes on
+head -c 999991 /dev/zero | tr '\0' '9' | { printf 'set gain '; cat; } > "$WORK/long-line"
+tmux -L "$SOCKET" load-buffer "$WORK/long-line"
+tmux -L "$SOCKET" paste-buffer -t "$SESSION"
+tmux -L "$SOCKET" send-keys -t "$SESSION" Enter
+wait_for "^Refused a line of 1000000 characters: the shell takes lines of at most 4096 characters" 300
+type_line "show"
+waited=0
+until screen | awk '/^Refused a line/ { seen = 1 } seen' | grep -Eq "^  gain +100$"; do
+  [ "$waited" -ge 150 ] && { echo "e2e: the shell did not go on after the long line"; screen; exit 1; }
+  sleep 0.2; waited=$((waited + 1))
+done
+
 type_line "quit"
 wait_for "not saved"
 type_line "quit"
 wait_for "e2e: shell exited" 30
 [ -s "$WORK/data/ampsieve/history" ] || { echo "e2e: no history written under XDG_DATA_HOME"; exit 1; }
 grep -q "^.*rank --top 5$" "$WORK/data/ampsieve/history" || { echo "e2e: history lacks the rank line"; exit 1; }
+if grep -q "99999999" "$WORK/data/ampsieve/history"; then echo "e2e: the refused long line reached the history"; exit 1; fi
 echo "e2e: passed"

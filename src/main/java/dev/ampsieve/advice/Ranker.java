@@ -3,6 +3,7 @@ package dev.ampsieve.advice;
 import dev.ampsieve.budget.Budget;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.stage.Stage;
+import dev.ampsieve.stats.Cancelled;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
@@ -23,10 +24,12 @@ public final class Ranker {
             .thenComparing((a, b) -> Double.compare(a.effectiveCost(), b.effectiveCost()))
             .thenComparing(Candidate::id);
 
+    /** @throws Cancelled when the thread is interrupted (checked before each part) */
     public static Ranking rank(Stage stage, List<Part> parts, BudgetFunction budgets) {
         List<Candidate> candidates = new ArrayList<>();
         List<Rejected> rejected = new ArrayList<>();
         for (Part p : parts) {
+            Cancelled.check();
             Budget b = budgets.compute(stage, p);
             if (b.constraintsMet()) {
                 candidates.add(Candidate.of(b));

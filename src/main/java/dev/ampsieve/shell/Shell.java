@@ -8,6 +8,7 @@ import dev.ampsieve.cli.UserException;
 import dev.ampsieve.report.Caution;
 import dev.ampsieve.report.Glyphs;
 import dev.ampsieve.report.OutputStyle;
+import dev.ampsieve.stats.Cancelled;
 import dev.ampsieve.yaml.Fields;
 import dev.ampsieve.yaml.InputException;
 import dev.ampsieve.yaml.Problem;
@@ -37,9 +38,12 @@ import picocli.CommandLine.Model.OptionSpec;
  * into words (quotes group words) and executed by the tree; a command that takes
  * {@code --stage FILE} gets the current stage when the line gives none.
  *
- * <p>Ctrl-C drops the line being typed (or stops the questions of {@code ask}) and is ignored
- * while a command runs; it never ends the shell. Ctrl-D leaves. Any failure prints one line and the loop goes on;
- * a stack trace only with {@code --verbose}.
+ * <p>Ctrl-C drops the line being typed (or stops the questions of {@code ask}); while a command
+ * runs it interrupts the thread running it, which stops at its next checkpoint with
+ * {@link Cancelled} (see DEVELOPERS.md "Stopping a command"), and the shell says so and goes
+ * back to the prompt with the stage as it was; it never ends the shell. Keys typed after it
+ * are kept for the next line. Ctrl-D leaves. Lines over {@link LineLimit#MAX} characters are
+ * refused. Any failure prints one line and the loop goes on; a stack trace only with {@code --verbose}.
  */
 public final class Shell {
     private final RootCommand root;
@@ -49,6 +53,14 @@ public final class Shell {
     private final Map<String, String> env;
     /** The command names, for taking the program name off "'ampsieve check'" in messages; set once the tree is built. */
     private volatile java.util.Set<String> commands = java.util.Set.of();
+    /** Guards {@link #running} and {@link #cancelRequested} between the reader and Ctrl-C's handler. */
+    private final Object commandLock = new Object();
+    /** The thread running a command; null at the prompt. */
+    private Thread running;
+    /** Ctrl-C was pressed while the current command ran. */
+    private boolean cancelRequested;
+    private LineLimit lineLimit;
+    private ShellState state;
 
     /**
      * @param rootArgs    the options the shell was started with ({@code --catalog DIR} ...), given
@@ -104,7 +116,8 @@ public final class Shell {
                 })
                 .variable(LineReader.HISTORY_SIZE, 1000).variable(LineReader.HISTORY_FILE_SIZE, 5000)
                 .option(LineReader.Option.DISABLE_EVENT_EXPANSION, true) // '!' is text, not a history reference
-                .option(LineReader.Option.HISTORY_IGNORE_SPACE, true);
+                .option(LineReader.Option.HISTORY_IGNORE_SPACE, true)
+                .history(new LineLimit.History());
         String historyNote = null;
         if (historyFile != null) {
             historyNote = prepareHistory(historyFile);
@@ -113,8 +126,11 @@ public final class Shell {
             }
         }
         LineReader reader = builder.build();
+        lineLimit = LineLimit.install(reader);
         ShellContext ctx = new ShellContext(root, reader, out, style);
         stateRef[0] = ctx.state;
+        state = ctx.state;
+        ctx.lineLimit = lineLimit;
         root.setStageNames(f -> f.equals(ctx.state.stageFileIfWritten()) ? ctx.state.nameInMessages() : null);
 
         CommandLine tree = Commands.build(root, out, err);
@@ -145,9 +161,13 @@ public final class Shell {
             err.println(e.getMessage());
         }
         banner(ctx, historyNote);
+        // for the whole session, so a Ctrl-C between two reads never meets the default (ending the
+        // program); the line reader puts its own in place while it reads and restores this one
+        Terminal.SignalHandler previous = terminal.handle(Terminal.Signal.INT, s -> interruptCommand());
         try {
             loop(ctx, reader, tree, err);
         } finally {
+            terminal.handle(Terminal.Signal.INT, previous != null ? previous : Terminal.SignalHandler.SIG_DFL);
             ctx.state.close();
             out.flush();
             err.flush();
@@ -165,7 +185,8 @@ public final class Shell {
             try {
                 line = reader.readLine(prompt(ctx));
             } catch (UserInterruptException e) {
-                continue; // Ctrl-C: the line is dropped, the shell stays
+                refused(err); // Ctrl-C: the line is dropped, the shell stays; or a line over the limit
+                continue;
             } catch (EndOfFileException e) {
                 if (ctx.state.unsaved() && !ctx.warnedUnsaved) {
                     ctx.warnedUnsaved = true;
@@ -175,6 +196,10 @@ public final class Shell {
                 }
                 ctx.out.println();
                 break;
+            }
+            if (line.length() > LineLimit.MAX) { // recalled from an old history file, for instance
+                err.println(LineLimit.refusal(line.length()));
+                continue;
             }
             List<String> words = words(reader.getParsedLine(), line);
             if (words.isEmpty()) {
@@ -215,10 +240,14 @@ public final class Shell {
                     + " ('help' lists the commands)");
             return;
         }
-        // Ctrl-C while a command runs is swallowed, never fatal. It does not interrupt the thread on
-        // purpose: an interrupt during a read closes Lucene's FileChannel (ClosedByInterruptException)
-        // and would spoil the index for the rest of the session; commands finish in seconds.
-        Terminal.SignalHandler previous = terminal.handle(Terminal.Signal.INT, s -> { });
+        // a Ctrl-C at the prompt can leave this thread interrupted (the line reader restores the
+        // status it found); it belongs to no command
+        Thread.interrupted();
+        synchronized (commandLock) {
+            running = Thread.currentThread();
+            cancelRequested = false;
+        }
+        boolean cancelled;
         try {
             List<String> line = new ArrayList<>(words);
             if (sub != null && !withStage(ctx, sub, line, err)) {
@@ -230,9 +259,42 @@ public final class Shell {
         } catch (RuntimeException | StackOverflowError e) {
             failure(e, err);
         } finally {
-            terminal.handle(Terminal.Signal.INT, previous != null ? previous : Terminal.SignalHandler.SIG_DFL);
+            synchronized (commandLock) {
+                running = null; // from here on Ctrl-C's handler leaves this thread alone
+                cancelled = cancelRequested;
+            }
+            // no interrupt may reach the next read: the line reader would drop the keys typed after Ctrl-C
+            Thread.interrupted();
             ctx.out.flush();
             err.flush();
+        }
+        if (cancelled) {
+            // a read cut short by the interrupt may have left the catalog incomplete: read it afresh
+            root.forgetCatalog();
+        }
+    }
+
+    /** Ctrl-C's handler (on a signal thread): interrupts the command running, if any; else nothing. */
+    private void interruptCommand() {
+        synchronized (commandLock) {
+            if (running != null) {
+                cancelRequested = true;
+                running.interrupt();
+            }
+        }
+    }
+
+    private boolean cancelRequested() {
+        synchronized (commandLock) {
+            return cancelRequested;
+        }
+    }
+
+    /** Prints the line about a refused over-long line, if the last read ended with one. */
+    private void refused(PrintWriter err) {
+        String r = lineLimit.takeRefusal();
+        if (r != null) {
+            err.println(r);
         }
     }
 
@@ -263,8 +325,18 @@ public final class Shell {
         return true;
     }
 
+    /** Exit status of a command stopped by Ctrl-C: 128 + SIGINT, as shells report it. */
+    private static final int INTERRUPTED = 130;
+
     /** One line per failure; the stack trace only when --verbose was given. */
     private int failure(Throwable ex, PrintWriter err) {
+        if (ex instanceof Cancelled || cancelRequested()) {
+            // whatever a command throws after Ctrl-C (Cancelled, or a read cut short) is the interrupt
+            Thread.interrupted(); // printing must not meet it
+            err.println();
+            err.println(state != null && state.hasStage() ? "Interrupted; the current stage is as it was." : "Interrupted.");
+            return INTERRUPTED;
+        }
         if (ex instanceof InputException ie) {
             for (Problem p : ie.problems()) {
                 err.println(p);

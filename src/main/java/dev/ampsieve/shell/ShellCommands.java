@@ -12,9 +12,13 @@ import dev.ampsieve.yaml.InputException;
 import dev.ampsieve.yaml.Node;
 import dev.ampsieve.yaml.Problem;
 import dev.ampsieve.yaml.YamlFiles;
+import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
+import java.nio.file.LinkOption;
+import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.nio.file.attribute.BasicFileAttributes;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -72,6 +76,14 @@ final class ShellCommands {
             return spec.commandLine().getOut();
         }
 
+        /** After a question ended like Ctrl-C: the line saying an over-long answer was refused, if that was why. */
+        void noteRefusal() {
+            String r = ctx.lineLimit == null ? null : ctx.lineLimit.takeRefusal();
+            if (r != null) {
+                spec.commandLine().getErr().println(r);
+            }
+        }
+
         Paint paint() {
             return ctx.paint;
         }
@@ -97,6 +109,7 @@ final class ShellCommands {
                 answers = new GuidedEntry(ctx).run(start);
             } catch (GuidedEntry.Cancelled e) {
                 out().println();
+                noteRefusal();
                 out().println(ctx.fold(stopped(e)));
                 return ExitCode.OK;
             }
@@ -313,8 +326,13 @@ final class ShellCommands {
             if (!ctx.state.hasStage()) {
                 throw new UserException("no current stage to save; type 'ask' to describe one");
             }
+            String notAFile = notARegularFile(file);
+            if (notAFile != null) {
+                throw new UserException(file + " is " + notAFile + "; save replaces only regular files, so it was left as it is: "
+                        + "give a new file name", ExitCode.USAGE);
+            }
             boolean overwrite = force;
-            if (Files.exists(file) && !force) {
+            if (Files.exists(file, LinkOption.NOFOLLOW_LINKS) && !force) {
                 if (!confirm(file + " exists. Replace it? [y/N] ")) {
                     out().println("Left " + file + " as it was.");
                     return ExitCode.OK;
@@ -335,8 +353,57 @@ final class ShellCommands {
                 String a = ctx.reader.readLine(question).strip().toLowerCase(Locale.ROOT);
                 return a.equals("y") || a.equals("yes");
             } catch (UserInterruptException | EndOfFileException e) {
+                noteRefusal();
                 return false;
             }
+        }
+
+        /**
+         * What the path is when it exists but is not a regular file ("a symbolic link to X", "a
+         * folder", "a named pipe (FIFO)", ...); null for a regular file or nothing. Links are not
+         * followed: replacing a link's target through it, or opening a FIFO (which blocks until
+         * someone reads) or a device, is never what saving a stage means.
+         */
+        static String notARegularFile(Path file) {
+            BasicFileAttributes a;
+            try {
+                a = Files.readAttributes(file, BasicFileAttributes.class, LinkOption.NOFOLLOW_LINKS);
+            } catch (NoSuchFileException e) {
+                return null;
+            } catch (IOException e) {
+                return null; // unreadable attributes: the write itself reports what is wrong
+            }
+            if (a.isRegularFile()) {
+                return null;
+            }
+            if (a.isSymbolicLink()) {
+                try {
+                    return "a symbolic link to " + Files.readSymbolicLink(file);
+                } catch (IOException e) {
+                    return "a symbolic link";
+                }
+            }
+            if (a.isDirectory()) {
+                return "a folder";
+            }
+            return special(file);
+        }
+
+        /** Names a special file by the type bits of its mode (POSIX stat(2) S_IFMT). */
+        private static String special(Path file) {
+            int mode;
+            try {
+                mode = (Integer) Files.getAttribute(file, "unix:mode", LinkOption.NOFOLLOW_LINKS);
+            } catch (IOException | UnsupportedOperationException | IllegalArgumentException | ClassCastException e) {
+                return "not a regular file";
+            }
+            return switch (mode & 0170000) {
+                case 0010000 -> "a named pipe (FIFO)";
+                case 0020000 -> "a character device";
+                case 0060000 -> "a block device";
+                case 0140000 -> "a socket";
+                default -> "not a regular file";
+            };
         }
     }
 
@@ -427,7 +494,8 @@ final class ShellCommands {
             }
             out.println();
             out.println("Commands that take --stage FILE use the current stage when it is left out.");
-            out.println("Tab completes commands, options, part ids, stage keys and units. Ctrl-C drops the line, Ctrl-D leaves.");
+            out.println("Tab completes commands, options, part ids, stage keys and units.");
+            out.println("Ctrl-C drops the line or stops a running command; Ctrl-D leaves.");
             return ExitCode.OK;
         }
 

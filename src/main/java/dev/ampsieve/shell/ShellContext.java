@@ -20,6 +20,8 @@ final class ShellContext {
     boolean quit;
     /** Set after one warning about an unsaved stage, so a second quit leaves. */
     boolean warnedUnsaved;
+    /** The guard against over-long lines on {@link #reader}; null without a reader. */
+    LineLimit lineLimit;
 
     ShellContext(RootCommand root, LineReader reader, PrintWriter out, OutputStyle style) {
         this.root = root;

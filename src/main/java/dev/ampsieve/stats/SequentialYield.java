@@ -9,6 +9,9 @@ package dev.ampsieve.stats;
  * Haybittle-Peto bound {@link #INTERIM_Z} (two-sided p &lt; 0.001), and the result is always
  * reported with the 95 % Wilson interval. Blocks are fixed in size, so for a given seed the
  * stopping point, and thus the result, is reproducible.
+ *
+ * <p>Before each block the run checks whether its thread was interrupted (Ctrl-C in the shell)
+ * and then stops with {@link Cancelled}: one block takes well under a millisecond.
  */
 public final class SequentialYield {
     private SequentialYield() {
@@ -41,11 +44,13 @@ public final class SequentialYield {
      * @param maxTrials units to simulate at most
      * @param target    yield target in (0, 1); NaN to always run all units
      * @param block     the simulation, called with sizes of at most {@link #BLOCK}
+     * @throws Cancelled when the thread is interrupted before a block
      */
     public static Estimate run(int maxTrials, double target, Block block) {
         long passes = 0;
         long trials = 0;
         while (trials < maxTrials) {
+            Cancelled.check();
             int size = (int) Math.min(BLOCK, maxTrials - trials);
             int p = block.passes(size);
             if (p < 0 || p > size) {

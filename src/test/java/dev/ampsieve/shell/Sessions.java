@@ -31,22 +31,28 @@ final class Sessions {
             }
         }
         ByteArrayOutputStream out = new ByteArrayOutputStream();
-        try (Terminal t = new DumbTerminal("test", "dumb", new Typed(typed.toString().getBytes(UTF_8)), out, UTF_8)) {
-            // as a tty's line discipline does: Ctrl-C raises SIGINT (the dumb terminal has this off by default).
-            // The other signal characters get their usual keys too: left unset (-1) they would match end of input.
-            Attributes tty = t.getAttributes();
-            tty.setLocalFlag(Attributes.LocalFlag.ISIG, true);
-            tty.setControlChar(Attributes.ControlChar.VINTR, 3);
-            tty.setControlChar(Attributes.ControlChar.VQUIT, 28);
-            tty.setControlChar(Attributes.ControlChar.VSUSP, 26);
-            tty.setControlChar(Attributes.ControlChar.VSTATUS, 20);
-            tty.setControlChar(Attributes.ControlChar.VEOF, 4); // Ctrl-D: the line reader binds it to end of input
-            t.setAttributes(tty);
+        try (Terminal t = terminal(new Typed(typed.toString().getBytes(UTF_8)), out)) {
             new Shell(new RootCommand(), rootArgs, t, history, env).run();
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
         return out.toString(UTF_8);
+    }
+
+    /** JLine's dumb terminal on the given keys, set up as a tty is. */
+    static Terminal terminal(InputStream keys, java.io.OutputStream out) throws IOException {
+        Terminal t = new DumbTerminal("test", "dumb", keys, out, UTF_8);
+        // as a tty's line discipline does: Ctrl-C raises SIGINT (the dumb terminal has this off by default).
+        // The other signal characters get their usual keys too: left unset (-1) they would match end of input.
+        Attributes tty = t.getAttributes();
+        tty.setLocalFlag(Attributes.LocalFlag.ISIG, true);
+        tty.setControlChar(Attributes.ControlChar.VINTR, 3);
+        tty.setControlChar(Attributes.ControlChar.VQUIT, 28);
+        tty.setControlChar(Attributes.ControlChar.VSUSP, 26);
+        tty.setControlChar(Attributes.ControlChar.VSTATUS, 20);
+        tty.setControlChar(Attributes.ControlChar.VEOF, 4); // Ctrl-D: the line reader binds it to end of input
+        t.setAttributes(tty);
+        return t;
     }
 
     /**

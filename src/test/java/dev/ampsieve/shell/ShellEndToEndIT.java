@@ -14,7 +14,8 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Runs {@code src/test/shell/e2e-tmux.sh}: the launcher in a real terminal (tmux), the guided
- * questions answered by keystrokes, a ranking read back from the screen. Runs in Maven's
+ * questions answered by keystrokes, a ranking read back from the screen, Ctrl-C during a long
+ * ranking with 'show' typed at once, a pasted megabyte line refused. Runs in Maven's
  * integration-test phase (failsafe), after the jar is built. Without tmux it is skipped with a
  * message, except under CI=true, where a missing tmux is a failure (.ci/run installs it).
  */
