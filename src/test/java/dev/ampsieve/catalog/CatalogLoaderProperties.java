@@ -41,7 +41,7 @@ class CatalogLoaderProperties {
     void anyPartFileLoadsOrGivesProblemsAndIsLeftAlone() {
         Path file = dir.resolve("parts.yaml");
         boolean[] strict = {false};
-        Props.theory(600).forAll(FILE).checkAssert(bytes -> {
+        Props.theory(300).forAll(FILE).checkAssert(bytes -> {
             String shown = new String(bytes, StandardCharsets.UTF_8);
             strict[0] = !strict[0];
             write(file, bytes);

@@ -43,14 +43,14 @@ class StageLoaderProperties {
     @Test
     void anyStageTextGivesAStageOrTypedProblems() {
         Path name = Path.of("stage.yaml");
-        Props.theory(1500).forAll(TEXT).checkAssert(text -> Props.onlyTyped(text, InputException.class,
+        Props.theory(1000).forAll(TEXT).checkAssert(text -> Props.onlyTyped(text, InputException.class,
                 e -> sound(e.problems(), name), () -> StageLoader.parse(text, name)));
     }
 
     @Test
     void anyStageFileGivesAStageOrTypedProblemsAndIsLeftAlone() {
         Path file = dir.resolve("stage.yaml");
-        Props.theory(400).forAll(Mutations.bytes(TEXT)).checkAssert(bytes -> {
+        Props.theory(300).forAll(Mutations.bytes(TEXT)).checkAssert(bytes -> {
             String shown = new String(bytes, StandardCharsets.UTF_8);
             write(file, bytes);
             byte[] before = sha256(bytes);
@@ -69,7 +69,7 @@ class StageLoaderProperties {
                         "0.1 Hz", "10 kHz", "0.1 %", "25 ppm/C", "10 y", "1 mV", "yield 99.9 %", "rss", "worst-case",
                         "inverting", "follower", "one-point", "true", "20000", "42", "0.5", "16", "2.5 V"), 3)),
                 Pair.of(1, Mutations.noise(20))));
-        Props.theory(1500).forAll(Generate.pick(keys), answer).checkAssert((key, text) -> {
+        Props.theory(800).forAll(Generate.pick(keys), answer).checkAssert((key, text) -> {
             try {
                 List<Problem> problems = StageLoader.checkAnswer(key, text);
                 assertTrue(problems.stream().allMatch(p -> !p.message().isBlank()),

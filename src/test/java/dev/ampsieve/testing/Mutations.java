@@ -109,11 +109,13 @@ public final class Mutations {
     }
 
     private static final Pattern NUMBER = Pattern.compile("[-+]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][-+]?\\d+)?");
+    /** The value after "key: " up to a comma, brace or comment: where a typed number goes. */
+    private static final Pattern VALUE = Pattern.compile(":[ \\t]+(\"[^\"\\n]*\"|[^,{}\\[\\]#\\n]+)");
     private static final Pattern UNIT = Pattern.compile("(?<=\\d ?)[A-Za-z%°µΩ/√()^]+");
 
     /** One edit of a kind people and tools make: a stray, lost or swapped character, a line doubled or shifted, a bad number. */
     static String mutate(RandomnessSource in, String s) {
-        int kind = pick(in, 11);
+        int kind = pick(in, 12);
         int len = s.length();
         switch (kind) {
             case 0: { // insert a character
@@ -163,6 +165,20 @@ public final class Mutations {
                 String indent = pick(in, 2) == 0 ? "" : "    ";
                 lines.add(at, indent + LINES.get(pick(in, LINES.size())));
                 return String.join("\n", lines);
+            }
+            case 10: { // a whole value replaced by an extreme or odd number, with or without a unit
+                Matcher m = VALUE.matcher(s);
+                List<int[]> spans = new ArrayList<>();
+                while (m.find()) {
+                    spans.add(new int[] {m.start(1), m.end(1)});
+                }
+                if (spans.isEmpty()) {
+                    return s;
+                }
+                int[] span = spans.get(pick(in, spans.size()));
+                String unit = pick(in, 2) == 0 ? "" : " " + UNITS.get(pick(in, UNITS.size()));
+                String quote = pick(in, 2) == 0 ? "" : "\"";
+                return s.substring(0, span[0]) + quote + NUMBERS.get(pick(in, NUMBERS.size())) + unit + quote + s.substring(span[1]);
             }
             case 9: { // cut the text short
                 return s.substring(0, (int) in.next(Constraint.between(0, len)));
