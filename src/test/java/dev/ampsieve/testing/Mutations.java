@@ -45,7 +45,12 @@ public final class Mutations {
     static final List<String> LINES = List.of("&a [*a, *a]", "x: *undefined", "x: !!binary AAAA", "x: !!python/object:os.system",
             "? [a]: b", "<<: *x", "---", "...", "%YAML 1.1", "%TAG ! tag:x:", "key: |", "a: {b: [c", "- - -", "\t- x",
             "x: &b {y: *b}", "'unclosed: x", "\"\\x\": y", "x: !!int 1e400", "x: !!float NaN", ": no key", "[1, 2]: x",
-            "{a: 1}: b", "x: >-", "x:\u0000y", "x: 2001-12-14t21:59:43.10-05:00", "x: 0o17", "x: ~", "x: null", "x: []", "x: {}");
+            "{a: 1}: b", "x: >-", "x:\u0000y", "x: 2001-12-14t21:59:43.10-05:00", "x: 0o17", "x: ~", "x: null", "x: []", "x: {}",
+            // deep nesting, and an alias chain that doubles at each step (the "billion laughs")
+            "x: " + "[".repeat(200) + "]".repeat(200), "x: " + "{a: ".repeat(100) + "1" + "}".repeat(100),
+            "a0: &a0 [x, x]\n" + java.util.stream.IntStream.range(1, 40)
+                    .mapToObj(i -> "a" + i + ": &a" + i + " [*a" + (i - 1) + ", *a" + (i - 1) + "]")
+                    .collect(java.util.stream.Collectors.joining("\n")));
 
     /** The text of every {@code *.yaml} file below {@code dir} (the demo catalog, its stages). */
     public static List<String> yamlTexts(Path dir, boolean stages) {
