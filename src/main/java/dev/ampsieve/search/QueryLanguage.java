@@ -46,7 +46,9 @@ import java.util.regex.Pattern;
  * <li>A part that lacks a value never matches a constraint on it.</li>
  * </ul>
  * Errors name the term, say what is wrong (an unknown field with the nearest name; a value of
- * the wrong kind, such as {@code vos<5nA}) and how to write it, one line each.
+ * the wrong kind, such as {@code vos<5nA}) and how to write it, one line each. A query of more
+ * than {@value #MAX_TERMS} terms, or whose words make more than {@value #MAX_WORD_SEARCHES} word
+ * searches, is refused as a whole (Lucene would refuse it with an internal error).
  */
 public final class QueryLanguage {
     private QueryLanguage() {
@@ -80,11 +82,30 @@ public final class QueryLanguage {
 
     private static final Pattern CONSTRAINT = Pattern.compile("^([A-Za-z][A-Za-z0-9.]*)(<=|>=|<|>|=|:)(.*)$");
 
+    /**
+     * Most terms a query may hold: far beyond a typed query, and with {@link #MAX_WORD_SEARCHES}
+     * it keeps the Lucene query well inside Lucene's limit of 1024 clauses, past which the search
+     * would fail with an internal error.
+     */
+    static final int MAX_TERMS = 64;
+
+    /**
+     * Most word searches the free words of a query may make: one per plain word, and for a
+     * hyphenated word its pieces plus three (the whole, joined and pieced forms). Each is made
+     * in two fields, so 200 stay under 512 Lucene clauses, leaving room for the constraints.
+     */
+    static final int MAX_WORD_SEARCHES = 200;
+
     /** Parses {@code text}; an empty text is a query for every part. */
     public static PartQuery parse(String text) throws InputException {
         List<Problem> problems = new ArrayList<>();
         List<PartQuery.Clause> clauses = new ArrayList<>();
         List<String> tokens = tokens(text == null ? "" : text);
+        if (tokens.size() > MAX_TERMS) {
+            throw new InputException(new Problem(Problem.Severity.ERROR, null, 0, 0, "query",
+                    "too many terms (" + tokens.size() + "; at most " + MAX_TERMS + ")",
+                    "use fewer terms: a few distinctive words and constraints find the same parts"));
+        }
         for (int i = 0; i < tokens.size(); i++) {
             String t = tokens.get(i);
             String next = i + 1 < tokens.size() ? tokens.get(i + 1) : null;
@@ -104,10 +125,29 @@ public final class QueryLanguage {
                 problems.add(e.problem);
             }
         }
+        int searches = wordSearches(clauses);
+        if (searches > MAX_WORD_SEARCHES) {
+            problems.add(new Problem(Problem.Severity.ERROR, null, 0, 0, "query",
+                    "the words are too many or too long (" + searches + " word searches; at most " + MAX_WORD_SEARCHES + ")",
+                    "use fewer words, and fewer hyphenated pieces in each"));
+        }
         if (!problems.isEmpty()) {
             throw new InputException(problems);
         }
         return new PartQuery(String.join(" ", tokens), clauses);
+    }
+
+    /** The word searches {@link PartQuery#toLucene} makes for the free words (see {@link #MAX_WORD_SEARCHES}). */
+    private static int wordSearches(List<PartQuery.Clause> clauses) {
+        int n = 0;
+        for (PartQuery.Clause c : clauses) {
+            if (c instanceof PartQuery.Word w) {
+                for (String word : Words.split(w.word())) {
+                    n += word.contains("-") ? 3 + Words.split(word.replace('-', ' ')).size() : 1;
+                }
+            }
+        }
+        return n;
     }
 
     /** Words of the query with spaces around operators removed ("vos < 10uV" reads as one term). */

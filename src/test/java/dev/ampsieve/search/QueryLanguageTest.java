@@ -6,7 +6,9 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.ampsieve.yaml.InputException;
+import dev.ampsieve.testing.FixtureCatalog;
 import dev.ampsieve.yaml.Problem;
+import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 
@@ -131,6 +133,42 @@ class QueryLanguageTest {
         for (String line : QueryLanguage.helpLines()) {
             assertTrue(line.length() <= 100, line);
             assertTrue(!line.contains("%"), "picocli formats the footer: " + line);
+        }
+    }
+
+    // Regression cases found by QueryLanguageProperties: Lucene refuses a query of more than 1024
+    // clauses with IndexSearcher.TooManyClauses, which reached the user as an internal error.
+
+    @Test
+    void aQueryOfMoreThan64TermsIsRefusedAsAWhole() {
+        Problem p = onlyProblem("vos<1V ".repeat(1100));
+        assertEquals("query", p.field());
+        assertEquals("too many terms (1100; at most 64)", p.message());
+    }
+
+    @Test
+    void sixtyFourTermsStillRun() throws Exception {
+        try (PartIndex index = PartIndex.inMemory(FixtureCatalog.catalog(Path.of("no-such-folder")))) {
+            // every fixture part lacks a vos of 2 V or more, so none matches; the point is that the search runs
+            assertEquals(List.of(), index.search(QueryLanguage.parse("vos>=2V ".repeat(64))));
+            // 64 exclusions of a word no part has: every one of the eight fixture parts remains
+            assertEquals(8, index.search(QueryLanguage.parse("-nosuchword ".repeat(64))).size());
+        }
+    }
+
+    @Test
+    void aWordOfMoreThan197HyphenatedPiecesIsRefused() {
+        // "a-a-...-a" with 1101 pieces: 1101 piece searches plus the whole, joined and pieced forms
+        Problem p = onlyProblem("a-".repeat(1100) + "a");
+        assertEquals("query", p.field());
+        assertEquals("the words are too many or too long (1104 word searches; at most 200)", p.message());
+    }
+
+    @Test
+    void aWordOf197PiecesStillRuns() throws Exception {
+        try (PartIndex index = PartIndex.inMemory(FixtureCatalog.catalog(Path.of("no-such-folder")))) {
+            // 197 pieces + 3 = 200 word searches, the most allowed; no fixture part has the piece "zq"
+            assertEquals(List.of(), index.search(QueryLanguage.parse("zq-".repeat(196) + "zq")));
         }
     }
 }
