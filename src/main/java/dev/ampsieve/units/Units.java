@@ -29,15 +29,6 @@ public final class Units {
     private Units() {
     }
 
-    /**
-     * Largest and smallest non-zero magnitudes read, in SI units. No quantity here comes within
-     * 80 orders of magnitude of them (fA/√Hz is 1e-15, a century is 3e9 s), while values near the
-     * ends of a double (1e308, 5e-324) overflow to infinity when merely printed in percent or
-     * divided by another value.
-     */
-    static final double MAX_MAGNITUDE = 1e100;
-    static final double MIN_MAGNITUDE = 1e-100;
-
     /** 0 K in degrees Celsius (SI Brochure, 9th ed., 2.3.1: t/°C = T/K - 273.15). */
     private static final double ABSOLUTE_ZERO_C = -273.15;
 
@@ -153,11 +144,6 @@ public final class Units {
             // 1e-400 V would silently read as 0 V
             throw new UnitException("'" + t + "' is out of range: below the smallest number (about 1e-308 in SI units)",
                     "check the exponent and the prefix; write 0 if you mean zero");
-        }
-        double magnitude = Math.abs(value);
-        if (magnitude > MAX_MAGNITUDE || magnitude != 0 && magnitude < MIN_MAGNITUDE) {
-            throw new UnitException("'" + t + "' is out of range (" + (magnitude > 1 ? "above 1e100" : "below 1e-100") + " in SI units)",
-                    "write " + expected.noun() + " such as '" + expected.example() + "'");
         }
         if (expected == Dimension.TEMPERATURE && value < ABSOLUTE_ZERO_C) {
             throw new UnitException("'" + t + "' is below absolute zero (-273.15 °C)",

@@ -13,13 +13,14 @@ class StageLoaderExtremesTest {
     /**
      * Shrunk from a mutated demo stage: a bare 1e308 as the ratio tolerance made the loader's own
      * "not a resistor tolerance" message print 1e310 %, and formatting that infinity threw
-     * NumberFormatException. Units now refuses the value itself, at its place in the file.
+     * NumberFormatException. Units.format now prints the overflowed percentage as ∞, and the
+     * problem keeps its place in the file.
      */
     @Test
     void aToleranceOf1e308IsAProblemInTheFile() {
         String yaml = "gain: 10\nlimit: 1 mV\nresistor-ratio: {tolerance: 1e308}\n";
         InputException e = assertThrows(InputException.class, () -> StageLoader.parse(yaml, Path.of("s.yaml")));
-        assertEquals("s.yaml:3:29: resistor-ratio.tolerance: '1e308' is out of range (above 1e100 in SI units);"
-                + " write a ratio such as '0.1 %'", e.getMessage());
+        assertEquals("s.yaml:3:29: resistor-ratio.tolerance: a ratio tolerance of ∞ % is not a resistor tolerance;"
+                + " write it with its unit, such as '0.1 %'", e.getMessage());
     }
 }

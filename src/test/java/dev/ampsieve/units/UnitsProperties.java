@@ -17,9 +17,10 @@ import org.quicktheories.generators.Generate;
 import org.quicktheories.generators.SourceDSL;
 
 /**
- * Whatever text a user types as a quantity, {@link Units#parse} gives a finite value within
- * 1e-100..1e100 in magnitude (never below absolute zero for a temperature) or a {@link UnitException} with a problem and a fix;
- * never another exception.
+ * Whatever text a user types as a quantity, {@link Units#parse} gives a finite value (never
+ * below absolute zero for a temperature) that {@link Units#format} prints without failing, or a
+ * {@link UnitException} with a problem and a fix; never another exception. (Field-specific
+ * bounds, such as "vos above 1 V", are the catalog's and the stage's, tested there.)
  */
 class UnitsProperties {
 
@@ -55,9 +56,8 @@ class UnitsProperties {
                 UnitException.class, e -> !e.problem().isBlank() && !e.fix().isBlank(), () -> {
                     double v = Units.parse(text, d);
                     assertTrue(Double.isFinite(v), () -> Props.escape(text) + " as " + d + " gave " + v);
-                    // within the range Units reads, so a value printed in percent or divided stays finite
-                    assertTrue(Math.abs(v) <= 1e100 && (v == 0 || Math.abs(v) >= 1e-100),
-                            () -> Props.escape(text) + " as " + d + " gave " + v);
+                    // printing it back never fails, even where percent or ppm overflow a double
+                    assertTrue(!Units.format(v, d).isBlank(), () -> Props.escape(text) + " as " + d + " printed blank");
                     if (d == Dimension.TEMPERATURE) {
                         assertTrue(v >= -273.15, () -> Props.escape(text) + " gave " + v + " °C");
                     }
