@@ -151,8 +151,9 @@ public final class BudgetCalculator {
     }
 
     /**
-     * Totals after a calibration at 25 °C. One-point: removes term 1 and the 25 °C part of
-     * term 3, keeps term 2 without its over-temperature cap ({@link DriftTerm#afterTrim}), adds
+     * Totals after a calibration at 25 °C. One-point: removes term 1, leaves the change of
+     * term 3 from 25 °C ({@link BiasTerm#afterTrim}), keeps term 2 without its over-temperature
+     * cap ({@link DriftTerm#afterTrim}), adds
      * the trim resolution. Two-point: also removes the static gain errors (term 6
      * and the tolerance part of term 8).
      */
@@ -168,7 +169,7 @@ public final class BudgetCalculator {
             switch (t.key()) {
                 case OffsetTerm.KEY -> o = 0;
                 case DriftTerm.KEY -> o = DriftTerm.afterTrim(stage, v);
-                case BiasTerm.KEY -> o = Math.max(0.0, o - BiasTerm.at25(stage, v));
+                case BiasTerm.KEY -> o = BiasTerm.afterTrim(stage, v);
                 case OpenLoopGainTerm.KEY -> o = two ? 0 : o;
                 case ResistorTerm.KEY -> o = two ? ResistorTerm.tempcoPart(stage) : o;
                 default -> { }

@@ -47,7 +47,7 @@ public final class NoiseTerm implements ErrorTerm {
                 + Units.format(NoiseModel.PEAK_TO_PEAK * rms, Dimension.VOLTAGE) + ", "
                 + Units.format(s.bandLow(), Dimension.FREQUENCY) + " to fN "
                 + Units.format(fN, Dimension.FREQUENCY) + "; counted as 3.3 x rms";
-        boolean est = v.part().noise() == null || v.part().noise().en() == null || Double.isNaN(v.gbw());
+        boolean est = v.noiseEstimated() || Double.isNaN(v.gbw());
         return ErrorTerm.result(this, s, ALLOWANCE * rms, Double.NaN, est, note);
     }
 }
