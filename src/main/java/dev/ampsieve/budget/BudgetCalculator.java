@@ -60,7 +60,7 @@ public final class BudgetCalculator {
         warnings.addAll(cw);
 
         double fixed = fixedInYield(stage, terms, false, false);
-        YieldResult yield = new YieldModel(stage, v, fixed, false, false).run(yieldTarget(stage));
+        YieldResult yield = new YieldModel(stage, v, fixed, false, false).run(yieldTarget(stage), wcCounted(stage, terms));
         Trimmed trimmed = trimmed(stage, v, terms);
 
         boolean constraintsOk = constraints.stream().allMatch(ConstraintResult::ok);
@@ -110,7 +110,19 @@ public final class BudgetCalculator {
     private static YieldResult trimmedYield(Stage stage, PartValues v, List<TermResult> terms) {
         boolean two = trimOf(stage).method() == Trim.Method.TWO_POINT;
         double fixed = fixedInYield(stage, terms, true, two);
-        return new YieldModel(stage, v, fixed, true, two).run(yieldTarget(stage));
+        double bound = trimmed(stage, v, terms, trimOf(stage).method()).worstCaseV();
+        return new YieldModel(stage, v, fixed, true, two).run(yieldTarget(stage), bound);
+    }
+
+    /** The worst-case total of the terms that count. */
+    private static double wcCounted(Stage stage, List<TermResult> terms) {
+        double wc = 0;
+        for (ErrorTerm t : TERMS) {
+            if (counts(stage, t)) {
+                wc += find(terms, t.key()).outputV();
+            }
+        }
+        return wc;
     }
 
     private static double yieldTarget(Stage stage) {
