@@ -238,4 +238,49 @@ class TermRulesTest {
         assertEquals("cmrr", b.terms().get(0).key()); // sorted largest first
         assertEquals("drift", b.terms().get(1).key());
     }
+
+    @Test
+    void aMissingBiasCurrentIsEstimatedByInputTypeNeverZero() {
+        // follower fed through 10 k, 25 °C only: |R+ - Rf| IB + (R+ + Rf) IOS/2 with IOS = IB assumed (Eggleston §6.4).
+        // Bipolar, no ib: 500 nA (budget/Assumed, common practice): 10 k x 500 nA x 1.5 = 7.5 mV, flagged
+        StageFixture s = StageFixture.follower().limitV(1).temps(25, 25);
+        s.rs = 10e3;
+        PartFixture p = PartFixture.ideal();
+        p.ib = Spread.NONE;
+        p.ios = Spread.NONE;
+        Budget b = budget(s, p);
+        assertEquals(7.5e-3, b.term("bias").outputV(), 1e-15);
+        assertTrue(b.term("bias").estimated());
+        assertTrue(warns(b, "ib: not given; estimated as 500 nA"), b.warnings().toString());
+        // CMOS: 200 pA: 10 k x 200 pA x 1.5 = 3 µV
+        p.input = InputType.CMOS;
+        assertEquals(3e-6, budget(s, p).term("bias").outputV(), 1e-18);
+    }
+
+    @Test
+    void missingNoiseFiguresAreEstimatedByInputType() {
+        // bipolar follower without resistors, no noise figures: en 30 nV/√Hz with a 100 Hz corner (budget/Assumed,
+        // common practice). fN = π/2 x 10 Hz = 15.70796 Hz; from 0.1 Hz: (15.60796 + 100 ln 157.0796) Hz = 521.2833 Hz;
+        // rms 30 nV x sqrt(521.2833) = 684.9489 nV; allowance 3.3 x rms = 2.260331 µV (Franco ch. 7 [from memory])
+        StageFixture s = StageFixture.follower().limitV(1);
+        PartFixture p = PartFixture.ideal();
+        p.noise = dev.ampsieve.catalog.Noise.NONE;
+        Budget b = budget(s, p);
+        assertEquals(2.260331e-6, b.term("noise").outputV(), 0.000001e-6);
+        assertTrue(b.term("noise").estimated());
+        assertTrue(warns(b, "noise.en: not given; estimated as 30.0 nV/√Hz"), b.warnings().toString());
+    }
+
+    @Test
+    void aTypicalOnlyRejectionIsTakenMaxToSigmaTimesWorse() {
+        // CMRR typical 100 dB only, k = 3: 100 - 20 log10 3 = 90.45757 dB, so the error is 3 x 10 µV/V:
+        // dVcm 1 V x 30 µV/V = 30 µV (error-model.md "Missing and typical-only figures")
+        StageFixture s = StageFixture.follower().limitV(1);
+        s.cmSwing = 1;
+        PartFixture p = PartFixture.ideal();
+        p.cmrr = new MinTyp(null, 100.0);
+        TermResult t = budget(s, p).term("cmrr");
+        assertEquals(30e-6, t.outputV(), 1e-15);
+        assertTrue(t.estimated());
+    }
 }
