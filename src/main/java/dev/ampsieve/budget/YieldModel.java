@@ -175,15 +175,17 @@ final class YieldModel {
         double[] ratio = new double[n];
         double[] aging = new double[n];
         double[] res = new double[n];
+        boolean need25 = trimmed || atRef[0] || atRef[1];
         SequentialYield.Estimate e = SequentialYield.run(Math.max(1, s.trials()), target, size -> {
             fill(vosD, rng, vos, size);
             fill(driftD, rng, drift, size);
-            fill(ibD, rng, ib25, size);
-            fill(ibD, rng, ib0, size);
-            fill(ibD, rng, ib1, size);
-            fill(iosD, rng, ios25, size);
-            fill(iosD, rng, ios0, size);
-            fill(iosD, rng, ios1, size);
+            // a unit's 25 °C currents matter only after a trim or at a range end at 25 °C; an end at 25 °C uses them
+            fill(need25 ? ibD : null, rng, ib25, size);
+            fill(atRef[0] ? null : ibD, rng, ib0, size);
+            fill(atRef[1] ? null : ibD, rng, ib1, size);
+            fill(need25 ? iosD : null, rng, ios25, size);
+            fill(atRef[0] ? null : iosD, rng, ios0, size);
+            fill(atRef[1] ? null : iosD, rng, ios1, size);
             fill(agingD, rng, aging, size);
             uniform(tol, rng, ratio, size);
             uniform(resolution, rng, res, size);

@@ -494,6 +494,13 @@ final class PartReader {
                     "not given: offset current will be taken equal to ib (conservative) and marked estimated",
                     "add 'ios: {typ: ..., max: ..., max-over-temp: ...}' from the datasheet"));
         }
+        for (String[] r : new String[][] {{CMRR, "60 dB"}, {PSRR, "60 dB"}, {AOL, "80 dB"}}) {
+            if (!written.contains(path(r[0], MIN)) && !written.contains(path(r[0], TYP))) {
+                problems.add(Problem.warning(part.at(), join(prefix, r[0]),
+                        "not given: a pessimistic " + r[1] + " will be assumed and marked estimated",
+                        "add '" + r[0] + ": {min: ..., typ: ...}' from the datasheet"));
+            }
+        }
         if (!written.contains(path(LONG_TERM_DRIFT, VALUE))) {
             problems.add(Problem.warning(part.at(), join(prefix, LONG_TERM_DRIFT),
                     "not given: aging over a stage's service life" + estimated,

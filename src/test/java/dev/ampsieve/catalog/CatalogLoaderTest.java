@@ -450,6 +450,12 @@ class CatalogLoaderTest {
         assertTrue(about(c.problems(), "long-term-drift").message().startsWith("not given: aging over a stage's service life"));
     }
 
+    @Test
+    void anAbsentRejectionIsWarnedAsAssumed() throws Exception {
+        Catalog c = loadPart(without(BASE, "cmrr"));
+        assertEquals("not given: a pessimistic 60 dB will be assumed and marked estimated", about(c.problems(), "cmrr").message());
+    }
+
     // ------------------------------------------------------------------ other shapes a user may write
 
     @Test

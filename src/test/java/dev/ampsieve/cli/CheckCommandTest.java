@@ -31,6 +31,9 @@ class CheckCommandTest {
             ib: {max: 10 pA, max-over-temp: 1 nA}
             ios: {max: 5 pA}
             long-term-drift: {value: 2 uV, per: 1000 h}
+            cmrr: {min: 80 dB}
+            psrr: {min: 85 dB}
+            aol: {min: 100 dB}
             """;
 
     private record Run(int code, String out, String err) {
