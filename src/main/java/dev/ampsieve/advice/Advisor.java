@@ -145,18 +145,18 @@ public final class Advisor {
         Candidate w = t.withTrim();
         Candidate a = t.asIs();
         return java.util.Optional.ofNullable(switch (t.status()) {
-            case WARRANTED -> "A " + trimName + " is warranted: " + w.id() + flagged(w) + " at " + money(Candidate.price(w.part()), w.currency())
+            case WARRANTED -> "A " + trimName + " is warranted: " + w.id() + " at " + money(Candidate.price(w.part()), w.currency())
                     + " plus the trim at " + cost + " costs " + money(w.effectiveCost(), w.currency()) + " per unit, "
                     + money(t.savingPerUnit(), w.currency()) + " less than " + a.id() + " as it is ("
                     + money(t.savingTotal(), w.currency()) + " over " + q + " units); " + standing(w) + ".";
-            case REQUIRED -> "A " + trimName + " is required: no part fits as it is; " + w.id() + flagged(w) + " fits after it at "
+            case REQUIRED -> "A " + trimName + " is required: no part fits as it is; " + w.id() + " fits after it at "
                     + money(w.effectiveCost(), w.currency()) + " per unit including " + cost + " for the trim; "
                     + standing(w) + ".";
             case NOT_WARRANTED -> "A " + trimName + " does not pay: " + w.id() + " fits after it at "
                     + money(w.effectiveCost(), w.currency()) + " per unit including the trim, "
                     + money(-t.savingPerUnit(), w.currency()) + " more than " + a.id() + " as it is.";
             case NOT_NEEDED -> StageEdit.trim(stage).allowed() ? "No part needs the " + trimName + " to fit; leave it out." : null;
-            case WOULD_PAY_IF_ALLOWED -> "The stage allows no trim; a " + trimName + " would let " + w.id() + flagged(w) + " fit at "
+            case WOULD_PAY_IF_ALLOWED -> "The stage allows no trim; a " + trimName + " would let " + w.id() + " fit at "
                     + money(w.effectiveCost(), w.currency()) + " per unit (price "
                     + money(Candidate.price(w.part()), w.currency()) + " plus the trim: " + cost + ")"
                     + (a == null ? ", and nothing fits without one"
@@ -251,10 +251,9 @@ public final class Advisor {
         return out;
     }
 
-    /** " (resting on estimated or typical-only figures for ...)" after a part named as a recommendation; empty otherwise. */
+    /** "; resting on estimated or typical-only figures for ..." inside the parenthesis after a recommended part; empty otherwise. */
     private static String flagged(Candidate c) {
-        String n = Phrases.estimateNote(c);
-        return n.isEmpty() ? "" : " (" + n.substring(2) + ")";
+        return Phrases.estimateNote(c);
     }
 
     private static String withTrim(Candidate c) {
@@ -275,12 +274,12 @@ public final class Advisor {
                                 : "only " + s.id() + " (" + s.part().architecture().key() + ") fits, at ")
                         + money(s.effectiveCost(), s.currency()) + " per unit" + withTrim(s) + "; " + standing(s) + ".");
             }
-            case CHEAPER -> lines.add("A zero-drift part is warranted: " + s.id() + flagged(s) + " (" + s.part().architecture().key()
-                    + ") fits at " + money(s.effectiveCost(), s.currency()) + withTrim(s) + ", " + money(z.savingPerUnit(), s.currency())
+            case CHEAPER -> lines.add("A zero-drift part is warranted: " + s.id() + " (" + s.part().architecture().key()
+                    + flagged(s) + ") fits at " + money(s.effectiveCost(), s.currency()) + withTrim(s) + ", " + money(z.savingPerUnit(), s.currency())
                     + " less per unit than the cheapest standard part " + std.id() + " at "
                     + money(std.effectiveCost(), std.currency()) + withTrim(std) + " (" + money(z.savingTotal(), s.currency())
                     + " over " + q + " units).");
-            case NOT_WARRANTED -> lines.add("A zero-drift part is not needed: " + std.id() + flagged(std) + " (standard) fits at "
+            case NOT_WARRANTED -> lines.add("A zero-drift part is not needed: " + std.id() + " (standard" + flagged(std) + ") fits at "
                     + money(std.effectiveCost(), std.currency()) + withTrim(std) + ", " + money(-z.savingPerUnit(), std.currency())
                     + " less than the cheapest zero-drift part that fits, " + s.id() + ".");
             case NONE_FITS -> {
