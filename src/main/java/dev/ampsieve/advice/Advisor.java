@@ -251,6 +251,11 @@ public final class Advisor {
         return out;
     }
 
+    /** "; resting on estimated or typical-only figures for ..." inside the parenthesis after a recommended part; empty otherwise. */
+    private static String flagged(Candidate c) {
+        return Phrases.estimateNote(c);
+    }
+
     private static String withTrim(Candidate c) {
         return c.trimmed() ? " with the trim" : "";
     }
@@ -270,11 +275,11 @@ public final class Advisor {
                         + money(s.effectiveCost(), s.currency()) + " per unit" + withTrim(s) + "; " + standing(s) + ".");
             }
             case CHEAPER -> lines.add("A zero-drift part is warranted: " + s.id() + " (" + s.part().architecture().key()
-                    + ") fits at " + money(s.effectiveCost(), s.currency()) + withTrim(s) + ", " + money(z.savingPerUnit(), s.currency())
+                    + flagged(s) + ") fits at " + money(s.effectiveCost(), s.currency()) + withTrim(s) + ", " + money(z.savingPerUnit(), s.currency())
                     + " less per unit than the cheapest standard part " + std.id() + " at "
                     + money(std.effectiveCost(), std.currency()) + withTrim(std) + " (" + money(z.savingTotal(), s.currency())
                     + " over " + q + " units).");
-            case NOT_WARRANTED -> lines.add("A zero-drift part is not needed: " + std.id() + " (standard) fits at "
+            case NOT_WARRANTED -> lines.add("A zero-drift part is not needed: " + std.id() + " (standard" + flagged(std) + ") fits at "
                     + money(std.effectiveCost(), std.currency()) + withTrim(std) + ", " + money(-z.savingPerUnit(), std.currency())
                     + " less than the cheapest zero-drift part that fits, " + s.id() + ".");
             case NONE_FITS -> {

@@ -35,6 +35,16 @@ public record Candidate(Part part, Budget budget, boolean trimmed, double effect
         return constraintsMet() && verdict() != Verdict.NO_FIT;
     }
 
+    /** The counted terms of the figures the verdict judges (after the trim when trimmed) that rest on an estimate. */
+    public java.util.List<dev.ampsieve.budget.TermResult> estimatedTerms() {
+        return budget.estimatedTerms(trimmed);
+    }
+
+    /** True when some counted term of the judged figures rests on an estimated, assumed or typical-only figure. */
+    public boolean restsOnEstimate() {
+        return !estimatedTerms().isEmpty();
+    }
+
     public double limitV() {
         return budget.limitV();
     }

@@ -57,7 +57,19 @@ final class Phrases {
         if (crit.kind() == Criterion.Kind.YIELD && yieldOf(c) != null) {
             s = yieldText(c) + ", " + s;
         }
-        return s;
+        return s + estimateNote(c);
+    }
+
+    /**
+     * "; resting on estimated or typical-only figures for bias current, noise" when the candidate's
+     * verdict rests on them, so a sentence that names the part says so; empty otherwise.
+     */
+    static String estimateNote(Candidate c) {
+        if (!c.restsOnEstimate()) {
+            return "";
+        }
+        return "; resting on estimated or typical-only figures for "
+                + String.join(", ", c.estimatedTerms().stream().map(dev.ampsieve.budget.TermResult::label).toList());
     }
 
     /**

@@ -6,11 +6,13 @@ import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.Units;
 
 /**
- * Term 9, long-term drift: {@code NG * D * sqrt(L / t0)}, volts at the output, with D the
- * offset change the catalog gives per time t0 (commonly per 1000 h) and L the service life
- * (same unit). Offset aging behaves like a random walk, so it grows with the square root of
- * time (common practice; linear scaling would be the pessimistic alternative). Catalog
- * figures are usually typical only.
+ * Term 9, long-term drift: {@code NG * k * D * sqrt(L / t0)}, volts at the output, with D the
+ * offset change the catalog gives per time t0 (commonly per 1000 h), L the service life (same
+ * unit) and k the stage's max-to-sigma ratio. Offset aging behaves like a random walk, so it
+ * grows with the square root of time (common practice; linear scaling would be the pessimistic
+ * alternative). Datasheets publish the figure as typical, so the worst case takes k times it
+ * (error-model.md "Missing and typical-only figures") and the term is flagged; a missing
+ * figure takes the estimate of {@link Assumed#agingPer1000h} (see {@link PartValues#aging()}).
  */
 public final class AgingTerm implements ErrorTerm {
     public static final String KEY = "aging";
@@ -30,7 +32,7 @@ public final class AgingTerm implements ErrorTerm {
         return true;
     }
 
-    /** Input-referred offset change after {@code life} seconds, V (√t model). */
+    /** Input-referred offset change after {@code life} seconds at the catalog's (typical) figure, V (√t model). */
     public static double inputAging(LongTermDrift d, double life) {
         if (d == null || life <= 0 || d.per() <= 0) {
             return 0.0;
@@ -40,18 +42,23 @@ public final class AgingTerm implements ErrorTerm {
 
     @Override
     public TermResult evaluate(Stage s, PartValues v) {
-        LongTermDrift d = v.part().longTermDrift();
         double life = s.serviceLife();
         if (life <= 0) {
             return ErrorTerm.result(this, s, 0.0, Double.NaN, false, "no service life given");
         }
-        if (d == null) {
-            return ErrorTerm.result(this, s, 0.0, Double.NaN, true, "no long-term drift figure in the catalog: not counted");
+        Figure a = v.aging();
+        double out = DcModel.of(s).perVos() * a.bound();
+        LongTermDrift d = v.part().longTermDrift();
+        String note;
+        if (a.basis() == Basis.ESTIMATED) {
+            note = "NG x " + Units.format(a.bound(), Dimension.VOLTAGE) + " over "
+                    + Units.format(life, Dimension.TIME) + " (estimated: no long-term drift figure in the catalog)";
+        } else {
+            note = "NG x " + Units.format(s.maxToSigma(), Dimension.NUMBER) + " x "
+                    + Units.format(d.value(), Dimension.VOLTAGE) + " per "
+                    + Units.format(d.per(), Dimension.TIME) + " x sqrt(" + Units.format(life, Dimension.TIME)
+                    + " / " + Units.format(d.per(), Dimension.TIME) + ") (random walk; max-to-sigma x the typical figure)";
         }
-        double out = s.noiseGain() * inputAging(d, life);
-        String note = "NG x " + Units.format(d.value(), Dimension.VOLTAGE) + " per "
-                + Units.format(d.per(), Dimension.TIME) + " x sqrt(" + Units.format(life, Dimension.TIME)
-                + " / " + Units.format(d.per(), Dimension.TIME) + ") (random walk, typical figure)";
-        return ErrorTerm.result(this, s, out, Double.NaN, false, note);
+        return ErrorTerm.result(this, s, out, Double.NaN, a.basis().uncertain() && out > 0, note);
     }
 }

@@ -1,9 +1,25 @@
 package dev.ampsieve.budget;
 
+import dev.ampsieve.catalog.InputType;
+import dev.ampsieve.units.PhysicalConstants;
+
 /**
- * The defaults that stand in for catalog values the user did not give. All are chosen
- * pessimistic, so that a missing value never makes a part look better than a typed-in one
- * would, and every use is reported as a warning.
+ * The defaults that stand in for catalog values the user did not give: the one table of
+ * conservative estimates by input type and architecture. Each value is a rule of common
+ * practice (stated beside it), chosen at the unfavourable end of what parts of that kind
+ * publish, so that a missing value never makes a part look better than a typed-in one
+ * would. Every use is flagged estimated and reported as a warning.
+ *
+ * <pre>
+ *   figure (missing)              bipolar        jfet           cmos           chopper / auto-zero
+ *   ib at 25 °C                   500 nA         200 pA         200 pA         2 nA
+ *   ios                           = ib (the pessimistic reading for bias-cancelled and FET inputs)
+ *   en (white)                    30 nV/√Hz      40 nV/√Hz      60 nV/√Hz      60 nV/√Hz
+ *   en 1/f corner                 100 Hz         1 kHz          5 kHz          0 (chopping removes 1/f)
+ *   in (white)                    1 pA/√Hz       shot noise of ib, √(2 q ib)   1 pA/√Hz
+ *   in 1/f corner                 1 kHz          0 (shot noise) 0              0
+ *   long-term drift per √1000 h   5 µV           10 µV          10 µV          1 µV
+ * </pre>
  */
 final class Assumed {
     private Assumed() {
@@ -24,4 +40,91 @@ final class Assumed {
      * [from memory]. Pessimistic for modern parts, so a missing value can only reject a part.
      */
     static final double HEADROOM_V = 1.5;
+
+    /** One thousand hours, s: the time base of long-term drift figures. */
+    static final double THOUSAND_HOURS = 1000 * 3600.0;
+
+    /**
+     * Bias current at 25 °C when none is given, A (common practice): a general-purpose bipolar
+     * input without bias cancellation reaches several hundred nA at its maximum; FET and CMOS
+     * input leakage at 25 °C is specified in the tens to a few hundred pA; the charge injection of
+     * chopper and auto-zero inputs reaches the nA range.
+     */
+    static double ib(InputType input, boolean selfCorrecting) {
+        if (selfCorrecting) {
+            return 2e-9;
+        }
+        return input == InputType.BIPOLAR ? 500e-9 : 200e-12;
+    }
+
+    /**
+     * White voltage noise density when none is given, V/√Hz (common practice): general-purpose
+     * bipolar inputs publish 10 to 30, JFET 15 to 40, CMOS and zero-drift 20 to 60 nV/√Hz or more
+     * for micropower parts; the upper ends are taken.
+     */
+    static double en(InputType input, boolean selfCorrecting) {
+        if (selfCorrecting) {
+            return 60e-9;
+        }
+        return switch (input) {
+            case BIPOLAR -> 30e-9;
+            case JFET -> 40e-9;
+            case CMOS -> 60e-9;
+        };
+    }
+
+    /**
+     * 1/f corner of the voltage noise when none is given, Hz (common practice): bipolar inputs
+     * bend at 2 to 100 Hz, JFET inputs at 100 Hz to 1 kHz, CMOS inputs at 1 to 10 kHz; chopper
+     * and auto-zero parts have no 1/f region, which is what they are for.
+     */
+    static double enCorner(InputType input, boolean selfCorrecting) {
+        if (selfCorrecting) {
+            return 0.0;
+        }
+        return switch (input) {
+            case BIPOLAR -> 100.0;
+            case JFET -> 1e3;
+            case CMOS -> 5e3;
+        };
+    }
+
+    /**
+     * White current noise density when none is given, A/√Hz: the shot noise of the bias current,
+     * √(2 q IB) (Schottky 1918; Motchenbacher &amp; Connelly, <i>Low-Noise Electronic System
+     * Design</i>, ch. 2 [from memory]), never below 1 pA/√Hz for bipolar inputs (whose bias
+     * cancellation hides the base currents' noise: common practice) and chopper or auto-zero parts
+     * (switch charge injection: common practice).
+     *
+     * @param ib the bias current the budget uses at 25 °C, A
+     */
+    static double in(InputType input, boolean selfCorrecting, double ib) {
+        double shot = Math.sqrt(2.0 * PhysicalConstants.ELEMENTARY_CHARGE * Math.max(0.0, ib));
+        if (selfCorrecting || input == InputType.BIPOLAR) {
+            return Math.max(shot, 1e-12);
+        }
+        return shot;
+    }
+
+    /**
+     * 1/f corner of the current noise when none is given, Hz (common practice): bipolar inputs bend
+     * near 100 Hz to 1 kHz; the shot noise of FET leakage and the switched inputs of zero-drift
+     * parts are flat at low frequency.
+     */
+    static double inCorner(InputType input, boolean selfCorrecting) {
+        return !selfCorrecting && input == InputType.BIPOLAR ? 1e3 : 0.0;
+    }
+
+    /**
+     * Long-term offset drift per √(1000 h) when none is given, V, used as a bound (common practice:
+     * precision bipolar parts publish about 0.2 to 1 µV, FET and CMOS parts several µV, typical;
+     * the estimate is several times those; the correcting loop of a zero-drift part removes most
+     * aging).
+     */
+    static double agingPer1000h(InputType input, boolean selfCorrecting) {
+        if (selfCorrecting) {
+            return 1e-6;
+        }
+        return input == InputType.BIPOLAR ? 5e-6 : 10e-6;
+    }
 }

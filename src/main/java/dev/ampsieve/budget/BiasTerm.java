@@ -10,11 +10,11 @@ import dev.ampsieve.units.Units;
  *   |NG*R+ - Rf| * IB + (NG*R+ + Rf) * IOS/2
  * </pre>
  * volts at the output, with IB and IOS (A) at the worst temperature of the range, R+ and
- * Rf in ohms. The worst-case magnitude of {@link DcModel}'s current terms with
- * IB± = IB ± IOS/2; when NG*R+ = Rf (R+ = Rf || Rg) it reduces to Rf * IOS
+ * Rf in ohms: {@link DcModel#currentBound}, the worst-case magnitude of the DC model's current
+ * terms with IB± = IB ± IOS/2; when NG*R+ = Rf (R+ = Rf || Rg) it reduces to Rf * IOS
  * (Eggleston, <i>Basic Electronics for Scientists and Engineers</i>, CUP 2011, §6.4, eqs.
  * 6.16-6.18; Franco, 4th ed., ch. 5 [from memory]). Temperature rule: see
- * {@link PartValues#biasFactor}.
+ * {@link PartValues#biasAt}.
  */
 public final class BiasTerm implements ErrorTerm {
     public static final String KEY = "bias";
@@ -36,16 +36,41 @@ public final class BiasTerm implements ErrorTerm {
 
     /** The formula above for given IB and IOS limits, V. */
     public static double magnitude(Stage s, double ib, double ios) {
-        double ngRp = s.noiseGain() * s.rPlus();
-        return Math.abs(ngRp - s.rf()) * ib + (ngRp + s.rf()) * ios / 2.0;
+        return DcModel.of(s).currentBound(ib, ios);
     }
 
     /**
-     * The term with the 25 °C limits (what a one-point trim at 25 °C removes); a current known only
-     * as an over-temperature maximum contributes nothing here, since its 25 °C value is unknown.
+     * What a one-point trim at 25 °C leaves of the term, V: the largest over both ends of the
+     * range of the change of the current error from 25 °C, bounded by the datasheet alone (not by
+     * an assumption that a unit's currents scale with their limits):
+     * <ul>
+     * <li>IOS can change sign between 25 °C and the range end, so its change is bounded by
+     * IOS(T) + IOS(25 °C) (triangle inequality on |IOS(T) - IOS(25)|);</li>
+     * <li>IB of a plain bipolar input keeps its sign, so its change is at most the larger of
+     * IB(T) and IB(25 °C); any other input's IB may cross zero: IB(T) + IB(25 °C);</li>
+     * <li>a current known only as an over-temperature maximum is not trimmed at all (its 25 °C
+     * value is unknown): IB(T), IOS(T).</li>
+     * </ul>
+     * Without an over-temperature figure IB(T) is the 25 °C maximum (bipolar) or the doubling
+     * rule (FET, CMOS, zero-drift), so the residual is an estimate, never zero over a range that
+     * leaves 25 °C.
      */
-    static double at25(Stage s, PartValues v) {
-        return magnitude(s, v.ibKnownAt25() ? v.ib().bound() : 0.0, v.iosKnownAt25() ? v.ios().bound() : 0.0);
+    static double afterTrim(Stage s, PartValues v) {
+        DcModel m = DcModel.of(s);
+        double ib25 = v.ib().bound();
+        double ios25 = v.ios().bound();
+        double worst = 0;
+        for (double t : new double[] {s.tMin(), s.tMax()}) {
+            if (t == Stage.T_REF) {
+                continue;
+            }
+            double ibT = v.ibAt(t);
+            double iosT = v.iosAt(t);
+            double dIb = !v.ibKnownAt25() ? ibT : v.biasSignKnown() ? Math.max(ibT, ib25) : ibT + ib25;
+            double dIos = !v.iosKnownAt25() ? iosT : iosT + ios25;
+            worst = Math.max(worst, m.currentBound(dIb, dIos));
+        }
+        return worst;
     }
 
     @Override
@@ -60,6 +85,9 @@ public final class BiasTerm implements ErrorTerm {
                 + Units.format(v.iosAt(at), Dimension.CURRENT)
                 + (dependsOnT ? " at " + Units.format(at, Dimension.TEMPERATURE) : " (25 °C limits hold over the range)")
                 + "; R+ " + Units.format(s.rPlus(), Dimension.RESISTANCE) + ", Rf " + Units.format(s.rf(), Dimension.RESISTANCE);
+        if (v.ib().basis() == Basis.ESTIMATED) {
+            note += " (ib estimated: not in the catalog)";
+        }
         boolean est = v.ib().basis().uncertain() || v.ios().basis().uncertain() || dependsOnT && v.ibExtrapolated(at);
         return ErrorTerm.result(this, s, out, dependsOnT ? at : Double.NaN, est, note);
     }

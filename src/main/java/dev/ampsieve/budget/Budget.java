@@ -46,4 +46,18 @@ public record Budget(
     public TermResult term(String key) {
         return terms.stream().filter(t -> t.key().equals(key)).findFirst().orElse(null);
     }
+
+    /**
+     * The counted terms, largest first, whose value rests on a figure that is not a guaranteed
+     * catalog value (estimated, assumed or typical-only): where the verdict rests on them, the
+     * ranking marks the row and the advice says so.
+     *
+     * @param afterTrim leave out the initial offset, which a trim removes
+     */
+    public List<TermResult> estimatedTerms(boolean afterTrim) {
+        return terms.stream()
+                .filter(t -> t.estimated() && t.outputV() > 0 && BudgetCalculator.counts(stage, t.key()))
+                .filter(t -> !(afterTrim && t.key().equals(OffsetTerm.KEY)))
+                .toList();
+    }
 }

@@ -70,7 +70,7 @@ public final class BudgetCalculator {
         }
 
         double fixed = fixedInYield(stage, terms, false, false);
-        YieldResult yield = new YieldModel(stage, v, fixed, false, false).run(yieldTarget(stage));
+        YieldResult yield = new YieldModel(stage, v, fixed, false, false).run(yieldTarget(stage), wcCounted(stage, terms));
 
         boolean constraintsOk = constraints.stream().allMatch(ConstraintResult::ok);
         if (stage.criterion().kind() == Criterion.Kind.YIELD && trimOf(stage).allowed()) {
@@ -122,7 +122,19 @@ public final class BudgetCalculator {
     private static YieldResult trimmedYield(Stage stage, PartValues v, List<TermResult> terms) {
         boolean two = trimOf(stage).method() == Trim.Method.TWO_POINT;
         double fixed = fixedInYield(stage, terms, true, two);
-        return new YieldModel(stage, v, fixed, true, two).run(yieldTarget(stage));
+        double bound = trimmed(stage, v, terms, trimOf(stage).method()).worstCaseV();
+        return new YieldModel(stage, v, fixed, true, two).run(yieldTarget(stage), bound);
+    }
+
+    /** The worst-case total of the terms that count. */
+    private static double wcCounted(Stage stage, List<TermResult> terms) {
+        double wc = 0;
+        for (ErrorTerm t : TERMS) {
+            if (counts(stage, t)) {
+                wc += find(terms, t.key()).outputV();
+            }
+        }
+        return wc;
     }
 
     private static double yieldTarget(Stage stage) {
@@ -163,8 +175,9 @@ public final class BudgetCalculator {
     }
 
     /**
-     * Totals after a calibration at 25 °C. One-point: removes term 1 and the 25 °C part of
-     * term 3, keeps term 2 without its over-temperature cap ({@link DriftTerm#afterTrim}), adds
+     * Totals after a calibration at 25 °C. One-point: removes term 1, leaves the change of
+     * term 3 from 25 °C ({@link BiasTerm#afterTrim}), keeps term 2 without its over-temperature
+     * cap ({@link DriftTerm#afterTrim}), adds
      * the trim resolution. Two-point: also removes the static gain errors (term 6
      * and the tolerance part of term 8).
      */
@@ -180,7 +193,7 @@ public final class BudgetCalculator {
             switch (t.key()) {
                 case OffsetTerm.KEY -> o = 0;
                 case DriftTerm.KEY -> o = DriftTerm.afterTrim(stage, v);
-                case BiasTerm.KEY -> o = Math.max(0.0, o - BiasTerm.at25(stage, v));
+                case BiasTerm.KEY -> o = BiasTerm.afterTrim(stage, v);
                 case OpenLoopGainTerm.KEY -> o = two ? 0 : o;
                 case ResistorTerm.KEY -> o = two ? ResistorTerm.tempcoPart(stage) : o;
                 default -> { }

@@ -39,7 +39,7 @@ public final class CmrrTerm implements ErrorTerm {
 
     static String basisNote(Basis b) {
         return switch (b) {
-            case TYPICAL_ONLY -> " (typical, no guaranteed minimum)";
+            case TYPICAL_ONLY -> " (typical less 20 log10(max-to-sigma): no guaranteed minimum)";
             case ASSUMED -> " (assumed: not in the catalog)";
             default -> "";
         };

@@ -41,15 +41,15 @@ public final class DriftTerm implements ErrorTerm {
      * {@code NG * drift.max * dT} (the one-point trim residual TCVOS x |T - 25|). The cap of
      * {@link #evaluate} does not bound it (a unit trimmed at 25 °C keeps all of its change, not
      * what the over-temperature maximum leaves beside the largest offset); what does is
-     * |vos(T) - vos(25)| &lt;= vos.maxOverTemp + vos.max. Where only the over-temperature
-     * maximum gives the drift, the drift it implies is kept.
+     * |vos(T) - vos(25)| &lt;= vos.maxOverTemp + vos.max, which is also the whole residual where
+     * only the over-temperature maximum gives the drift ({@link PartValues#driftBound}).
      */
     static double afterTrim(Stage s, PartValues v) {
-        double ng = s.noiseGain();
+        double ng = DcModel.of(s).perVos();
         double dT = s.deltaT();
         double raw = ng * v.driftBound(dT) * dT;
         double cap = v.vosMaxOverTemp();
-        if (Double.isNaN(cap) || Double.isInfinite(v.drift().bound())) {
+        if (Double.isNaN(cap)) {
             return raw;
         }
         return Math.min(raw, ng * (cap + v.vos().bound()));
@@ -57,7 +57,7 @@ public final class DriftTerm implements ErrorTerm {
 
     @Override
     public TermResult evaluate(Stage s, PartValues v) {
-        double ng = s.noiseGain();
+        double ng = DcModel.of(s).perVos();
         double dT = s.deltaT();
         double drift = v.driftBound(dT);
         double raw = ng * drift * dT;
@@ -76,7 +76,7 @@ public final class DriftTerm implements ErrorTerm {
         if (v.drift().basis() == Basis.ESTIMATED) {
             note += " (estimated as vos / T)";
         } else if (v.drift().basis() == Basis.TYPICAL_ONLY) {
-            note += " (typical, no guaranteed maximum)";
+            note += " (max-to-sigma x typical: no guaranteed maximum)";
         }
         double at = dT == 0 ? Double.NaN : farEnd(s);
         return ErrorTerm.result(this, s, out, at, v.drift().basis().uncertain(), note);

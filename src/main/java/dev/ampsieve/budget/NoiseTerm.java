@@ -72,7 +72,7 @@ public final class NoiseTerm implements ErrorTerm {
                 + Units.format(s.bandLow(), Dimension.FREQUENCY) + " to fN "
                 + Units.format(fN, Dimension.FREQUENCY) + " (" + bandNote(s, v.gbw(), fN) + "), resistors at "
                 + Units.format(s.tMax(), Dimension.TEMPERATURE) + "; counted as 3.3 x rms";
-        boolean est = v.part().noise() == null || v.part().noise().en() == null || Double.isNaN(v.gbw());
+        boolean est = v.noiseEstimated() || Double.isNaN(v.gbw());
         return ErrorTerm.result(this, s, ALLOWANCE * rms, Double.NaN, est, note);
     }
 }

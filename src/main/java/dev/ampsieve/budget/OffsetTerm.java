@@ -31,14 +31,14 @@ public final class OffsetTerm implements ErrorTerm {
 
     /** NG * vos bound, V. */
     static double magnitude(Stage s, PartValues v) {
-        return s.noiseGain() * v.vos().bound();
+        return DcModel.of(s).perVos() * v.vos().bound();
     }
 
     @Override
     public TermResult evaluate(Stage s, PartValues v) {
         Figure vos = v.vos();
         String note = "NG x vos " + Units.format(vos.bound(), Dimension.VOLTAGE)
-                + (vos.basis() == Basis.TYPICAL_ONLY ? " (typical, no guaranteed maximum)" : "");
+                + (vos.basis() == Basis.TYPICAL_ONLY ? " (max-to-sigma x typical: no guaranteed maximum)" : "");
         return ErrorTerm.result(this, s, magnitude(s, v), Stage.T_REF, vos.basis().uncertain(), note);
     }
 }

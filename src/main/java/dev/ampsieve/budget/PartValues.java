@@ -1,6 +1,7 @@
 package dev.ampsieve.budget;
 
 import dev.ampsieve.catalog.InputType;
+import dev.ampsieve.catalog.LongTermDrift;
 import dev.ampsieve.catalog.MinTyp;
 import dev.ampsieve.catalog.Noise;
 import dev.ampsieve.catalog.Part;
@@ -15,8 +16,10 @@ import java.util.List;
 /**
  * One part's catalog values after the missing-value rules of error-model.md, resolved once
  * so the error terms and the Monte Carlo use the same numbers. Every substitution is
- * listed in {@link #warnings()}; none of them makes a part look better than a guaranteed
- * catalog value would, except where a value is plainly missing, which is then said.
+ * listed in {@link #warnings()}. None makes a part look better than its datasheet allows:
+ * a missing figure takes the conservative estimate of {@link Assumed} (flagged estimated), a
+ * figure given only as typical enters as k x typical (k = the stage's max-to-sigma ratio;
+ * flagged typical-only) with the typical value as one sigma.
  *
  * @param vos            input offset at 25 °C, V (bound = max)
  * @param vosMaxOverTemp guaranteed maximum offset over the rated range, V; NaN when not given
@@ -25,14 +28,19 @@ import java.util.List;
  * @param ios            input offset current at 25 °C, A
  * @param ibOverTemp     catalog maximum of IB over the rated range, A; NaN when not given
  * @param iosOverTemp    the same for IOS (IB's when IOS is assumed equal to IB)
+ * @param ratedHigh      upper end of the part's rated range, °C: where a FET input's
+ *                       over-temperature maximum applies
  * @param cmrrDb         common-mode rejection, dB (bound = minimum)
  * @param psrrDb         supply rejection, dB (bound = minimum)
  * @param aolDb          open-loop gain, dB (bound = minimum)
  * @param gbw            gain-bandwidth product, Hz; NaN when not given
- * @param en             white voltage noise density, V/√Hz (0 when missing)
+ * @param en             white voltage noise density, V/√Hz
  * @param enCorner       its 1/f corner, Hz
- * @param in             white current noise density, A/√Hz (0 when missing)
+ * @param in             white current noise density, A/√Hz
  * @param inCorner       its 1/f corner, Hz
+ * @param noiseEstimated a noise figure came from {@link Assumed}
+ * @param aging          input-referred long-term drift over the stage's service life, V (bound
+ *                       = the worst case, typ = one sigma where the catalog's typical figure is used)
  */
 public record PartValues(
         Part part,
@@ -43,6 +51,7 @@ public record PartValues(
         Figure ios,
         double ibOverTemp,
         double iosOverTemp,
+        double ratedHigh,
         Figure cmrrDb,
         Figure psrrDb,
         Figure aolDb,
@@ -51,6 +60,8 @@ public record PartValues(
         double enCorner,
         double in,
         double inCorner,
+        boolean noiseEstimated,
+        Figure aging,
         List<String> warnings) {
 
     public PartValues {
@@ -58,19 +69,25 @@ public record PartValues(
     }
 
     /**
-     * Resolves {@code part}'s values for use in {@code stage} (the stage only decides which
-     * missing values matter enough to warn about).
+     * Resolves {@code part}'s values for use in {@code stage} (the stage gives the max-to-sigma
+     * ratio, the service life, and decides which missing values matter enough to warn about).
      */
     public static PartValues of(Part part, Stage stage) {
         List<String> w = new ArrayList<>();
+        double k = stage.maxToSigma();
+        InputType input = inputOf(part);
+        boolean sc = part.selfCorrecting();
+        String kx = Units.format(k, Dimension.NUMBER) + " x ";
+
         Spread vosS = orNone(part.vos());
         double vosOt = vosS.maxOverTemp() == null ? Double.NaN : vosS.maxOverTemp();
         Figure vos;
         if (vosS.max() != null) {
             vos = Figure.guaranteed(vosS.max(), vosS.typ());
         } else if (vosS.typ() != null) {
-            vos = Figure.of(vosS.typ(), Basis.TYPICAL_ONLY);
-            w.add("vos: no guaranteed maximum; the typical value is used as the limit and as one sigma");
+            vos = typicalOnly(vosS.typ(), k);
+            w.add("vos: no guaranteed maximum; " + kx + "typical = " + Units.format(vos.bound(), Dimension.VOLTAGE)
+                    + " is used as the limit (max-to-sigma), the typical value as one sigma");
         } else if (!Double.isNaN(vosOt)) {
             vos = Figure.of(vosOt, Basis.GUARANTEED);
             w.add("vos: only the maximum over temperature is given; it is used at 25 °C too");
@@ -84,8 +101,10 @@ public record PartValues(
         if (drS.max() != null) {
             drift = Figure.guaranteed(drS.max(), drS.typ());
         } else if (drS.typ() != null) {
-            drift = Figure.of(drS.typ(), Basis.TYPICAL_ONLY);
-            w.add("vos-drift: no guaranteed maximum; the typical value is used as the limit and as one sigma");
+            drift = typicalOnly(drS.typ(), k);
+            w.add("vos-drift: no guaranteed maximum; " + kx + "typical = "
+                    + Units.format(drift.bound(), Dimension.VOLTAGE_DRIFT)
+                    + " is used as the limit (max-to-sigma), the typical value as one sigma");
         } else if (!Double.isNaN(vosOt) && vos.basis() == Basis.GUARANTEED && vosS.max() != null) {
             // the offset over temperature bounds offset plus drift: the drift term takes what is left
             // (not when it is the only offset figure: nothing is left, and a trim would then seem to
@@ -95,9 +114,9 @@ public record PartValues(
             drift = Figure.of(estimatedDrift(vos.bound()), Basis.ESTIMATED);
             String rule = "vos-drift: not given; estimated as vos / T = "
                     + Units.format(drift.bound(), Dimension.VOLTAGE_DRIFT) + " (bipolar pair rule, T = 298.15 K)";
-            if (part.input() != InputType.BIPOLAR) {
+            if (input != InputType.BIPOLAR) {
                 rule += "; this rule holds for bipolar pairs and may understate a "
-                        + part.input().key() + " input's drift: enter the datasheet figure";
+                        + input.key() + " input's drift: enter the datasheet figure";
             }
             w.add(rule);
         }
@@ -107,39 +126,41 @@ public record PartValues(
         if (ibS.max() != null) {
             ib = Figure.guaranteed(ibS.max(), ibS.typ());
         } else if (ibS.typ() != null) {
-            ib = Figure.of(ibS.typ(), Basis.TYPICAL_ONLY);
-            w.add("ib: no guaranteed maximum; the typical value is used as the limit");
+            ib = typicalOnly(ibS.typ(), k);
+            w.add("ib: no guaranteed maximum; " + kx + "typical = " + Units.format(ib.bound(), Dimension.CURRENT)
+                    + " is used as the limit (max-to-sigma)");
         } else if (ibS.maxOverTemp() != null) {
             ib = Figure.of(ibS.maxOverTemp(), Basis.GUARANTEED);
             w.add("ib: only the maximum over temperature is given; it is used at 25 °C too");
         } else {
-            ib = Figure.of(0.0, Basis.MISSING);
-            w.add("ib: not given; bias current x resistance is not counted (enter the datasheet maximum)");
+            ib = Figure.of(Assumed.ib(input, sc), Basis.ESTIMATED);
+            w.add("ib: not given; estimated as " + Units.format(ib.bound(), Dimension.CURRENT) + " at 25 °C for a "
+                    + kind(input, sc) + " input (common practice, conservative): enter the datasheet maximum");
         }
         Spread iosS = orNone(part.ios());
         Figure ios;
         if (iosS.max() != null) {
             ios = Figure.guaranteed(iosS.max(), iosS.typ());
         } else if (iosS.typ() != null) {
-            ios = Figure.of(iosS.typ(), Basis.TYPICAL_ONLY);
-            w.add("ios: no guaranteed maximum; the typical value is used as the limit");
+            ios = typicalOnly(iosS.typ(), k);
+            w.add("ios: no guaranteed maximum; " + kx + "typical = " + Units.format(ios.bound(), Dimension.CURRENT)
+                    + " is used as the limit (max-to-sigma), the typical value as one sigma");
         } else if (iosS.maxOverTemp() != null) {
             ios = Figure.of(iosS.maxOverTemp(), Basis.GUARANTEED);
             w.add("ios: only the maximum over temperature is given; it is used at 25 °C too");
         } else {
             // bias-cancelled and FET inputs have IOS about equal to IB: the pessimistic reading
             ios = Figure.of(ib.bound(), Basis.ASSUMED);
-            if (ib.basis() != Basis.MISSING) {
-                w.add("ios: not given; assumed equal to ib (" + Units.format(ib.bound(), Dimension.CURRENT) + ")");
-            }
+            w.add("ios: not given; assumed equal to ib (" + Units.format(ib.bound(), Dimension.CURRENT) + ")");
         }
-        double ibOt = overTemp(ibS, ib);
+        double ibOt = ibS.maxOverTemp() != null ? ibS.maxOverTemp() : Double.NaN;
         // an assumed IOS = IB follows IB with temperature
-        double iosOt = ios.basis() == Basis.ASSUMED ? ibOt : overTemp(iosS, ios);
+        double iosOt = ios.basis() == Basis.ASSUMED ? ibOt : iosS.maxOverTemp() != null ? iosS.maxOverTemp() : Double.NaN;
+        double ratedHigh = part.temperature() == null ? Double.NaN : part.temperature().max();
 
-        Figure cmrr = rejection("cmrr", part.cmrr(), Assumed.CMRR_DB, w);
-        Figure psrr = rejection("psrr", part.psrr(), Assumed.PSRR_DB, w);
-        Figure aol = rejection("aol", part.aol(), Assumed.AOL_DB, w);
+        Figure cmrr = rejection("cmrr", part.cmrr(), Assumed.CMRR_DB, k, w);
+        Figure psrr = rejection("psrr", part.psrr(), Assumed.PSRR_DB, k, w);
+        Figure aol = rejection("aol", part.aol(), Assumed.AOL_DB, k, w);
 
         double gbw = part.gbw() > 0 && Double.isFinite(part.gbw()) ? part.gbw() : Double.NaN;
         if (Double.isNaN(gbw)) {
@@ -147,42 +168,102 @@ public record PartValues(
         }
 
         Noise n = part.noise() == null ? Noise.NONE : part.noise();
-        double en = n.en() == null ? 0.0 : n.en();
-        if (n.en() == null) {
-            w.add("noise.en: not given; the amplifier's voltage noise is not counted (resistor noise is)");
+        boolean noiseEst = false;
+        double en;
+        if (n.en() != null) {
+            en = n.en();
+        } else {
+            en = Assumed.en(input, sc);
+            noiseEst = true;
+            w.add("noise.en: not given; estimated as " + Units.format(en, Dimension.VOLTAGE_DENSITY) + " for a "
+                    + kind(input, sc) + " input (common practice, conservative): enter the datasheet figure");
         }
-        double enC = n.enCorner() == null ? 0.0 : n.enCorner();
-        if (n.en() != null && n.enCorner() == null && !part.selfCorrecting()) {
-            w.add("noise.en-corner: not given; white noise only, so low-frequency noise may be understated");
+        double enC;
+        if (n.enCorner() != null) {
+            enC = n.enCorner();
+        } else {
+            enC = Assumed.enCorner(input, sc);
+            if (enC > 0) {
+                noiseEst = true;
+                w.add("noise.en-corner: not given; a 1/f corner of " + Units.format(enC, Dimension.FREQUENCY)
+                        + " is assumed for a " + kind(input, sc) + " input (common practice, conservative)");
+            }
         }
-        double in = n.in() == null ? 0.0 : n.in();
-        boolean resistors = stage.rPlus() > 0 || stage.rMinus() > 0;
-        if (n.in() == null && resistors) {
-            w.add("noise.in: not given; current noise through the stage resistors is not counted");
+        double in;
+        if (n.in() != null) {
+            in = n.in();
+        } else {
+            in = Assumed.in(input, sc, ib.bound());
+            noiseEst = true;
+            w.add("noise.in: not given; estimated as " + Units.format(in, Dimension.CURRENT_DENSITY)
+                    + (input == InputType.BIPOLAR || sc ? " (at least 1 pA/√Hz, common practice)"
+                            : " (shot noise of ib, √(2 q ib))"));
         }
-        double inC = n.inCorner() == null ? 0.0 : n.inCorner();
-        if (part.longTermDrift() == null && stage.serviceLife() > 0) {
-            w.add("long-term-drift: not given; offset aging over the service life is not counted");
+        double inC;
+        if (n.inCorner() != null) {
+            inC = n.inCorner();
+        } else {
+            inC = Assumed.inCorner(input, sc);
+            if (inC > 0) {
+                noiseEst = true;
+                w.add("noise.in-corner: not given; a 1/f corner of " + Units.format(inC, Dimension.FREQUENCY)
+                        + " is assumed for a bipolar input (common practice, conservative)");
+            }
         }
-        if (ib.basis() != Basis.MISSING && Double.isNaN(ibOt) && part.input() != null && part.input().fetLike()
-                && stage.tMax() > Stage.T_REF) {
-            double f = biasFactor(part.input(), ib.bound(), Double.NaN, stage.tMax());
+
+        Figure aging = aging(part.longTermDrift(), stage.serviceLife(), input, sc, k, w);
+
+        if (Double.isNaN(ibOt) && exponential(part) && stage.tMax() > Stage.T_REF) {
+            double f = Math.pow(2.0, (stage.tMax() - Stage.T_REF) / 10.0);
             w.add("ib: no maximum over temperature; the 25 °C maximum is doubled every 10 °C above 25 °C "
                     + "(junction-leakage rule, common practice), " + Units.format(ib.bound() * f, Dimension.CURRENT)
                     + " at " + Units.format(stage.tMax(), Dimension.TEMPERATURE)
-                    + (part.selfCorrecting()
-                            ? "; pessimistic for a chopper or auto-zero part, whose bias current is mostly charge"
+                    + (sc ? "; pessimistic for a chopper or auto-zero part, whose bias current is mostly charge"
                                     + " injection: enter the datasheet's over-temperature maximum"
                             : "; enter the datasheet's over-temperature maximum"));
         }
-        return new PartValues(part, vos, vosOt, drift, ib, ios, ibOt, iosOt, cmrr, psrr, aol, gbw,
-                en, enC, in, inC, w);
+        if (stage.trim() != null && stage.trim().allowed() && stage.deltaT() > 0 && Double.isNaN(ibOt)) {
+            w.add("ib: no maximum over temperature; what a trim at 25 °C leaves of the bias currents is estimated"
+                    + " from the 25 °C maxima" + (exponential(part) ? " and the doubling rule" : "")
+                    + " (ib may change by " + (inputOf(part) == InputType.BIPOLAR && !sc ? "up to its larger end" : "the sum of both ends")
+                    + ", ios by the sum of both ends as it can change sign):"
+                    + " enter the datasheet's over-temperature maxima");
+        }
+        return new PartValues(part, vos, vosOt, drift, ib, ios, ibOt, iosOt, ratedHigh, cmrr, psrr, aol, gbw,
+                en, enC, in, inC, noiseEst, aging, w);
     }
 
-    /** True when IB at {@code tC} comes from the doubling rule rather than a catalog figure. */
-    public boolean ibExtrapolated(double tC) {
-        return ib.basis() != Basis.MISSING && Double.isNaN(ibOverTemp) && part.input() != null
-                && part.input().fetLike() && tC > Stage.T_REF;
+    private static InputType inputOf(Part part) {
+        return part.input() == null ? InputType.BIPOLAR : part.input();
+    }
+
+    private static String kind(InputType input, boolean selfCorrecting) {
+        return selfCorrecting ? "zero-drift (" + input.key() + ")" : input.key();
+    }
+
+    /** A typical-only figure: k x typ as the bound, typ as one sigma (error-model.md "Missing and typical-only figures"). */
+    static Figure typicalOnly(double typ, double k) {
+        return new Figure(k * typ, typ, Basis.TYPICAL_ONLY);
+    }
+
+    /**
+     * Long-term drift over {@code life} seconds, input-referred V: the catalog figure (published as
+     * typical) scaled by √(life / per) as one sigma, k times it as the bound; without a figure the
+     * {@link Assumed} estimate, scaled the same way, as the bound.
+     */
+    private static Figure aging(LongTermDrift d, double life, InputType input, boolean sc, double k, List<String> w) {
+        if (life <= 0) {
+            return Figure.of(0.0, Basis.GUARANTEED);
+        }
+        if (d == null || d.per() <= 0) {
+            double est = Assumed.agingPer1000h(input, sc) * Math.sqrt(life / Assumed.THOUSAND_HOURS);
+            w.add("long-term-drift: not given; estimated as " + Units.format(Assumed.agingPer1000h(input, sc), Dimension.VOLTAGE)
+                    + " per √(1000 h) for a " + kind(input, sc) + " part (common practice, conservative), "
+                    + Units.format(est, Dimension.VOLTAGE) + " over the service life");
+            return Figure.of(est, Basis.ESTIMATED);
+        }
+        double typ = d.value() * Math.sqrt(life / d.per());
+        return typicalOnly(typ, k);
     }
 
     /**
@@ -190,6 +271,7 @@ public record PartValues(
      * is proportional to absolute temperature, so dVOS/dT = VOS / T, about 3.35 µV/°C per mV
      * at 25 °C. Gray, Hurst, Lewis, Meyer, <i>Analysis and Design of Analog ICs</i>, 5th ed.,
      * ch. 3; Horowitz &amp; Hill, <i>The Art of Electronics</i>, 3rd ed., ch. 5 [from memory].
+     * Each unit's drift is its own offset over T (same sign), not an independent draw.
      *
      * @param vos offset at 25 °C, V
      * @return drift, V/°C, evaluated at T = 298.15 K
@@ -198,34 +280,74 @@ public record PartValues(
         return vos / PhysicalConstants.ROOM_KELVIN;
     }
 
+    /** True when the drift is the offset's own vos / T (each unit's drift follows its offset). */
+    public boolean driftFromOffset() {
+        return drift.basis() == Basis.ESTIMATED;
+    }
+
+    /** FET, CMOS and chopper / auto-zero inputs: bias current is leakage or charge injection, growing with temperature. */
+    static boolean exponential(Part p) {
+        return inputOf(p).fetLike() || p.selfCorrecting();
+    }
+
     /**
-     * Bias or offset current limit at {@code tC} as a multiple of the 25 °C limit. The
-     * catalog's over-temperature maximum wins where given (the ratio to the 25 °C maximum,
-     * never below 1). Otherwise FET and CMOS inputs, whose bias current is junction leakage,
-     * double every 10 °C above 25 °C (common practice; the real interval is about 8 to 11 °C)
-     * and keep the 25 °C value below it; bipolar inputs keep the 25 °C maximum.
+     * Plain bipolar inputs: the bias current is base current and flows with a known sign (a
+     * bound on its change is its larger end, not the sum of both ends, and it is never sampled
+     * below zero).
      */
-    public static double biasFactor(InputType input, double maxAt25, double maxOverTemp, double tC) {
+    public boolean biasSignKnown() {
+        return inputOf(part) == InputType.BIPOLAR && !part.selfCorrecting();
+    }
+
+    /**
+     * Bias or offset current limit at {@code tC}, A (error-model.md term 3, temperature).
+     * <ul>
+     * <li>FET, CMOS and zero-drift inputs (junction leakage, charge injection): at or below 25 °C
+     * the 25 °C maximum; above it the exponential through the 25 °C maximum and the
+     * over-temperature maximum, which the datasheet specifies at the upper end {@code tHigh} of
+     * the rated range, {@code I25 * (Iot/I25)^((T - 25)/(tHigh - 25))}, never above the
+     * over-temperature maximum. The doubling-per-10 °C law of junction leakage (common practice;
+     * Sze, <i>Physics of Semiconductor Devices</i>, ch. 2 [from memory]) is the shape; the two
+     * datasheet points set it. Without an over-temperature figure: doubling every 10 °C
+     * (estimated).</li>
+     * <li>Bipolar inputs (base current rises when cold): the over-temperature maximum at any
+     * temperature other than 25 °C where given, else the 25 °C maximum.</li>
+     * </ul>
+     * An over-temperature figure below the 25 °C one is read as the 25 °C one.
+     */
+    public static double biasAt(boolean exponential, double at25, double overTemp, double tHigh, double tC) {
         if (tC == Stage.T_REF) {
-            return 1.0;
+            return at25;
         }
-        if (!Double.isNaN(maxOverTemp)) {
-            return maxAt25 > 0 ? Math.max(1.0, maxOverTemp / maxAt25) : 1.0;
+        if (!exponential) {
+            return Double.isNaN(overTemp) ? at25 : Math.max(at25, overTemp);
         }
-        if (input != null && input.fetLike() && tC > Stage.T_REF) {
-            return Math.pow(2.0, (tC - Stage.T_REF) / 10.0);
+        if (tC < Stage.T_REF) {
+            return at25;
         }
-        return 1.0;
+        if (Double.isNaN(overTemp)) {
+            return at25 * Math.pow(2.0, (tC - Stage.T_REF) / 10.0);
+        }
+        double hi = Math.max(at25, overTemp);
+        if (at25 <= 0 || !(tHigh > Stage.T_REF) || tC >= tHigh) {
+            return hi;
+        }
+        return Math.min(hi, at25 * Math.pow(hi / at25, (tC - Stage.T_REF) / (tHigh - Stage.T_REF)));
     }
 
     /** Bias current limit at {@code tC}, A. */
     public double ibAt(double tC) {
-        return ib.bound() * biasFactor(part.input(), ib.bound(), ibOverTemp, tC);
+        return biasAt(exponential(part), ib.bound(), ibOverTemp, ratedHigh, tC);
     }
 
     /** Offset current limit at {@code tC}, A. */
     public double iosAt(double tC) {
-        return ios.bound() * biasFactor(part.input(), ios.bound(), iosOverTemp, tC);
+        return biasAt(exponential(part), ios.bound(), iosOverTemp, ratedHigh, tC);
+    }
+
+    /** True when IB at {@code tC} comes from the doubling rule rather than a catalog figure. */
+    public boolean ibExtrapolated(double tC) {
+        return Double.isNaN(ibOverTemp) && exponential(part) && tC > Stage.T_REF;
     }
 
     /**
@@ -246,39 +368,45 @@ public record PartValues(
         return s.max() != null || s.typ() != null || s.maxOverTemp() == null;
     }
 
-    /** Ratio of the bias current limit at {@code tC} to that at 25 °C. */
+    /** Ratio of the bias current limit at {@code tC} to that at 25 °C (1 when that is 0). */
     public double ibFactor(double tC) {
-        return biasFactor(part.input(), ib.bound(), ibOverTemp, tC);
+        return ib.bound() > 0 ? ibAt(tC) / ib.bound() : 1.0;
     }
 
-    /** Ratio of the offset current limit at {@code tC} to that at 25 °C. */
+    /** Ratio of the offset current limit at {@code tC} to that at 25 °C (1 when that is 0). */
     public double iosFactor(double tC) {
-        return biasFactor(part.input(), ios.bound(), iosOverTemp, tC);
+        return ios.bound() > 0 ? iosAt(tC) / ios.bound() : 1.0;
     }
 
     /**
      * Drift bound over a range reaching {@code dT} from 25 °C: the catalog's (or estimated)
-     * figure, or, when only the offset over temperature bounds it, what that leaves.
+     * figure, or, when only the offset over temperature bounds it, the largest change that
+     * bound allows a unit, (vos.maxOverTemp + vos.max) / dT (a unit may sit at -vos.max at
+     * 25 °C and +vos.maxOverTemp at the range end; untrimmed, the over-temperature cap of
+     * {@link DriftTerm} then leaves vos.maxOverTemp - vos.max).
      */
     public double driftBound(double dT) {
         if (Double.isInfinite(drift.bound())) {
-            return dT > 0 ? Math.max(0.0, vosMaxOverTemp - vos.bound()) / dT : 0.0;
+            return dT > 0 ? (vosMaxOverTemp + vos.bound()) / dT : 0.0;
         }
         return drift.bound();
     }
 
-    private static double overTemp(Spread s, Figure f) {
-        return s.maxOverTemp() != null && f.basis() != Basis.MISSING ? s.maxOverTemp() : Double.NaN;
-    }
-
-    private static Figure rejection(String name, MinTyp m, double assumed, List<String> w) {
+    /**
+     * A dB minimum: given, typical only (then 20 log10(k) dB below the typical, so the error it
+     * causes is k times the typical error), or the assumed default.
+     */
+    private static Figure rejection(String name, MinTyp m, double assumed, double k, List<String> w) {
         MinTyp v = m == null ? MinTyp.NONE : m;
         if (v.min() != null) {
             return Figure.guaranteed(v.min(), v.typ());
         }
         if (v.typ() != null) {
-            w.add(name + ": no guaranteed minimum; the typical value is used");
-            return Figure.of(v.typ(), Basis.TYPICAL_ONLY);
+            Figure f = new Figure(v.typ() - Decibels.of(k), v.typ(), Basis.TYPICAL_ONLY);
+            w.add(name + ": no guaranteed minimum; the typical " + Units.format(v.typ(), Dimension.DECIBEL)
+                    + " less 20 log10(" + Units.format(k, Dimension.NUMBER) + ") = "
+                    + Units.format(f.bound(), Dimension.DECIBEL, 4) + " is used (k x the typical error)");
+            return f;
         }
         w.add(name + ": not given; a pessimistic " + Units.format(assumed, Dimension.DECIBEL) + " is assumed");
         return Figure.of(assumed, Basis.ASSUMED);

@@ -434,13 +434,66 @@ final class PartReader {
 
     /** Absences the user should hear about now, because the budget will assume something. */
     private void warnAbsences(String arch, String input) {
-        if (!written.contains(path(NOISE, EN))) {
-            problems.add(Problem.warning(part.at(), join(prefix, path(NOISE, EN)),
-                    "not given: the voltage-noise term will be zero",
-                    "add 'noise: {en: 12 nV/rtHz}' with the datasheet's white-noise density"));
-        }
         if (arch == null || input == null) {
+            if (!written.contains(path(NOISE, EN))) {
+                problems.add(Problem.warning(part.at(), join(prefix, path(NOISE, EN)),
+                        "not given: it will be estimated (common practice, conservative) and marked estimated",
+                        "add 'noise: {en: 12 nV/rtHz}' with the datasheet's white-noise density"));
+            }
             return;
+        }
+        // every figure the budget estimates when absent (budget.Assumed): said here, at check time
+        boolean selfCorrecting = !arch.equals(Architecture.STANDARD.key());
+        boolean plainBipolar = !selfCorrecting && input.equals(InputType.BIPOLAR.key());
+        String kind = selfCorrecting ? arch + " (" + input + ")" : input;
+        String estimated = " will be estimated for a " + kind + " input (common practice, conservative) and marked estimated";
+        List<String> noise = new ArrayList<>();
+        noise.add(EN);
+        if (!selfCorrecting) {
+            noise.add(EN_CORNER);
+        }
+        noise.add(IN);
+        if (plainBipolar) {
+            noise.add(IN_CORNER);
+        }
+        List<String> absent = noise.stream().filter(k -> !written.contains(path(NOISE, k))).toList();
+        boolean noNoise = noise.stream().noneMatch(k -> written.contains(path(NOISE, k)))
+                && !written.contains(path(NOISE, EN_CORNER)) && !written.contains(path(NOISE, IN_CORNER));
+        if (noNoise) {
+            problems.add(Problem.warning(part.at(), join(prefix, NOISE),
+                    "not given: " + String.join(", ", absent) + estimated,
+                    "add 'noise: {en: 12 nV/rtHz, in: 0.1 pA/rtHz}' with the datasheet's white-noise densities"
+                            + (selfCorrecting ? "" : " and their 1/f corners")));
+        } else {
+            for (String k : absent) {
+                problems.add(Problem.warning(part.at(), join(prefix, path(NOISE, k)), "not given: it" + estimated,
+                        "add noise." + k + " from the datasheet"));
+            }
+        }
+        boolean noIb = !written.contains(path(IB, TYP)) && !written.contains(path(IB, MAX))
+                && !written.contains(path(IB, MAX_OVER_TEMP));
+        if (noIb) {
+            problems.add(Problem.warning(part.at(), join(prefix, IB), "not given: bias current" + estimated,
+                    "add 'ib: {typ: ..., max: ..., max-over-temp: ...}' from the datasheet"));
+        }
+        boolean noIos = !written.contains(path(IOS, TYP)) && !written.contains(path(IOS, MAX))
+                && !written.contains(path(IOS, MAX_OVER_TEMP));
+        if (noIos) {
+            problems.add(Problem.warning(part.at(), join(prefix, IOS),
+                    "not given: offset current will be taken equal to ib (conservative) and marked estimated",
+                    "add 'ios: {typ: ..., max: ..., max-over-temp: ...}' from the datasheet"));
+        }
+        for (String[] r : new String[][] {{CMRR, "60 dB"}, {PSRR, "60 dB"}, {AOL, "80 dB"}}) {
+            if (!written.contains(path(r[0], MIN)) && !written.contains(path(r[0], TYP))) {
+                problems.add(Problem.warning(part.at(), join(prefix, r[0]),
+                        "not given: a pessimistic " + r[1] + " will be assumed and marked estimated",
+                        "add '" + r[0] + ": {min: ..., typ: ...}' from the datasheet"));
+            }
+        }
+        if (!written.contains(path(LONG_TERM_DRIFT, VALUE))) {
+            problems.add(Problem.warning(part.at(), join(prefix, LONG_TERM_DRIFT),
+                    "not given: aging over a stage's service life" + estimated,
+                    "add 'long-term-drift: {value: ..., per: 1000 h}' from the datasheet"));
         }
         boolean noDrift = !written.contains(path(VOS_DRIFT, TYP)) && !written.contains(path(VOS_DRIFT, MAX));
         boolean standardBipolar = arch.equals(Architecture.STANDARD.key()) && input.equals(InputType.BIPOLAR.key());

@@ -24,6 +24,9 @@ public final class RankReport {
     private RankReport() {
     }
 
+    /** Marks a row whose verdict rests on an estimated, assumed or typical-only figure (as '*' marks such a term in a budget). */
+    static final String ESTIMATE_MARK = "*";
+
     private static String verdict(Candidate c) {
         return switch (c.verdict()) {
             case FITS -> "fits";
@@ -89,13 +92,17 @@ public final class RankReport {
                     .right("margin").flex("largest term").left("P");
             int i = 0;
             for (Candidate c : shown) {
-                t.row(Integer.toString(++i), c.id(), verdict(c),
+                t.row(Integer.toString(++i), c.id(), verdict(c) + (c.restsOnEstimate() ? ESTIMATE_MARK : ""),
                         Figures.money(c.effectiveCost()) + (cur.isEmpty() && c.part().price() != null ? " " + c.currency() : ""),
                         Figures.volts(worstCase(c)), Figures.volts(rss(c)), yieldCell(c), Figures.percent(c.margin()),
                         limiting(c), front.contains(c.id()) ? "*" : "");
             }
             t.lines(width).forEach(l -> o.append(l).append('\n'));
             o.append("verdict: fits as it is, +trim after the stage's trim (its cost and figures include it), no.\n");
+            if (shown.stream().anyMatch(Candidate::restsOnEstimate)) {
+                o.append(ESTIMATE_MARK).append(" after the verdict: it rests on an estimated or typical-only figure"
+                        + " (ampsieve budget PART names it; enter the datasheet value to firm it up).\n");
+            }
             o.append("margin: (limit - ").append(r.stage().criterion().kind() == Criterion.Kind.WORST_CASE
                     ? "worst-case" : "RSS").append(") / limit.  †: largest before the trim.  P: on the Pareto front.\n");
         }
@@ -230,6 +237,9 @@ public final class RankReport {
         }
         JsonSupport.put(n, "errorV", c.errorV());
         JsonSupport.put(n, "margin", c.margin());
+        n.put("restsOnEstimate", c.restsOnEstimate());
+        ArrayNode est = n.putArray("estimatedTerms");
+        c.estimatedTerms().forEach(t -> est.add(t.key()));
         n.put("selfCorrecting", c.part().selfCorrecting());
         ArrayNode warnings = n.putArray("warnings");
         c.budget().warnings().forEach(warnings::add);
@@ -245,6 +255,9 @@ public final class RankReport {
         JsonSupport.put(n, "effectiveCost", c.effectiveCost());
         JsonSupport.put(n, "errorV", c.errorV());
         JsonSupport.put(n, "margin", c.margin());
+        n.put("restsOnEstimate", c.restsOnEstimate());
+        ArrayNode est = n.putArray("estimatedTerms");
+        c.estimatedTerms().forEach(t -> est.add(t.key()));
         n.put("trimmed", c.trimmed());
         return n;
     }

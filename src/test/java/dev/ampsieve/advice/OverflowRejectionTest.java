@@ -48,7 +48,7 @@ class OverflowRejectionTest {
 
         Rejected r = with.rejected().stream().filter(x -> x.id().equals("loud-amp")).findFirst().orElseThrow();
         assertEquals(List.of(Constraints.FINITE), r.failed());
-        assertTrue(r.reason().startsWith("finite: too large to compute: noise (en 1.00e+191 V/√Hz, in 0 A/√Hz; rms ∞ V"),
+        assertTrue(r.reason().startsWith("finite: too large to compute: noise (en 1.00e+191 V/√Hz, in 1.00 pA/√Hz; rms ∞ V"),
                 r.reason());
         assertTrue(r.reason().endsWith("; check these catalog and stage values for a wrong prefix or exponent"), r.reason());
         // the other 48 parts rank exactly as before

@@ -1,6 +1,7 @@
 package dev.ampsieve.budget;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.stage.Limit;
@@ -243,6 +244,10 @@ class NgspiceCrossCheckTest {
         double finiteGain = 1 + s.noiseGain() / A;
         // DcModel: ideal amplifier, currents into the pins; ngspice's A = 1e6 corrected exactly
         assertRelative(DcModel.outputError(s, c.vos(), c.ibPlus(), c.ibMinus()) / finiteGain, r.dcOut(), 1e-9, "DC, " + c);
+        // the coefficients the terms and the Monte Carlo evaluate (IB the mean of the two pin currents, IOS their difference)
+        double ib = (c.ibPlus() + c.ibMinus()) / 2;
+        double ios = c.ibPlus() - c.ibMinus();
+        assertRelative(DcModel.of(s).error(c.vos(), ib, ios) / finiteGain, r.dcOut(), 1e-9, "DcModel.of, " + c);
         // NoiseModel with white noise only (corners 0) over [f1, f2] at 25 °C; it uses the exact SI k, ngspice CODATA 2014
         double engine = NoiseModel.outputRms(s, c.en(), 0, c.in(), 0, c.f1(), c.f2(), T);
         assertRelative(engine / finiteGain, r.noiseRms(), 1e-5, "noise, " + c);
@@ -273,5 +278,79 @@ class NgspiceCrossCheckTest {
         double bw3 = Math.sqrt(REF_N3.f2() - REF_N3.f1());
         assertRelative(115.367e-9, n2.noiseRms() * (1 + REF_N2.ng() / A) / bw2, 1e-4, "N2 ngspice");
         assertRelative(153.744e-9, n3.noiseRms() * (1 + REF_N3.ng() / A) / bw3, 1e-4, "N3 ngspice");
+    }
+
+    // ------------------------------------------------------------------ the bias term over temperature
+
+    /** The three topologies with resistors large enough that pA to nA currents give a clear output. */
+    static Stream<Combo> biasTopologies() {
+        return Stream.of(
+                new Combo("non-inverting NG 11, R+ 50 k", Topology.NON_INVERTING, 1e6, 100e3, 20e3, 30e3, 0, 0, 0, 0, 0, 1, 10),
+                new Combo("inverting NG 11, Rs in series with Rg", Topology.INVERTING, 1e6, 90e3, 10e3, 47e3, 0, 0, 0, 0, 0, 1, 10),
+                new Combo("follower fed through 10 M, Rf 1 M", Topology.FOLLOWER, 1e6, INF, 10e6, 0, 0, 0, 0, 0, 0, 1, 10));
+    }
+
+    /** A CMOS part: IB 20 pA at 25 °C and 2 nA at its rating's upper end 125 °C, IOS 10 pA and 1 nA. */
+    private static dev.ampsieve.catalog.Part cmosPart() {
+        dev.ampsieve.fixtures.PartFixture p = dev.ampsieve.fixtures.PartFixture.ideal();
+        p.input = dev.ampsieve.catalog.InputType.CMOS;
+        p.temperature = new dev.ampsieve.catalog.Range(-40, 125);
+        p.ib = new dev.ampsieve.catalog.Spread(null, 20e-12, 2e-9);
+        p.ios = new dev.ampsieve.catalog.Spread(null, 10e-12, 1e-9);
+        return p.build();
+    }
+
+    private static Stage stageAt(Combo c, double t1, double t2, Trim trim) {
+        return new Stage(c.topology(), c.rf(), c.rg(), c.rs(), c.rp(), t1, t2, null, 0, 0, null, null, c.f1(), c.f2(), 1, null,
+                0, 0, 0, Limit.output(1), Criterion.WORST_CASE, 3, 20_000, 1, trim, 1000, null, false, null);
+    }
+
+    /** Largest |v(out)| ngspice gives with IB and IOS of either sign (vos 0), corrected for the finite gain. */
+    private static double worstOfSigns(Combo c, double ib, double ios) throws Exception {
+        double worst = 0;
+        for (int sIb : new int[] {1, -1}) {
+            for (int sIos : new int[] {1, -1}) {
+                double i = sIb * ib;
+                double o = sIos * ios;
+                Combo run = new Combo(c.name(), c.topology(), c.rf(), c.rg(), c.rs(), c.rp(), 0, i + o / 2, i - o / 2, 0, 0,
+                        c.f1(), c.f2());
+                worst = Math.max(worst, Math.abs(simulate(run).dcOut() * (1 + c.ng() / A)));
+            }
+        }
+        return worst;
+    }
+
+    /**
+     * ngspice's {@code .options temp=} does not change a DC current source, so the engine's currents
+     * at each end of the range (PartValues.ibAt, iosAt: the exponential through the two datasheet
+     * points) are fed to ngspice, and the production bias term (BiasTerm.evaluate, through DcModel)
+     * must equal the largest output ngspice finds at either end with either sign of each current.
+     */
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("biasTopologies")
+    void theBiasTermAtTwoTemperaturesAgreesWithNgspice(Combo c) throws Exception {
+        Stage s = stageAt(c, 40, 85, Trim.NONE);
+        PartValues v = PartValues.of(cmosPart(), s);
+        double atT1 = worstOfSigns(c, v.ibAt(40), v.iosAt(40));
+        double atT2 = worstOfSigns(c, v.ibAt(85), v.iosAt(85));
+        assertTrue(atT2 > atT1, "leakage grows with temperature: " + atT1 + " " + atT2);
+        TermResult t = new BiasTerm().evaluate(s, v);
+        assertRelative(Math.max(atT1, atT2), t.outputV(), 1e-9, "bias term, " + c);
+        assertEquals(85.0, t.worstAtC(), 0.0);
+    }
+
+    /**
+     * What a one-point trim at 25 °C leaves (BiasTerm.afterTrim): a CMOS input's currents may change sign,
+     * so a unit can go from -IB(25) to +IB(T) and likewise for IOS. ngspice, fed the change of each current
+     * (IB(T) + IB(25), IOS(T) + IOS(25)) with either sign, must reach exactly the residual.
+     */
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("biasTopologies")
+    void theBiasLeftAfterATrimAgreesWithNgspice(Combo c) throws Exception {
+        Stage s = stageAt(c, 40, 85, new Trim(true, Trim.Method.ONE_POINT, 0, 0));
+        PartValues v = PartValues.of(cmosPart(), s);
+        double hot = worstOfSigns(c, v.ibAt(85) + v.ibAt(25), v.iosAt(85) + v.iosAt(25));
+        double warm = worstOfSigns(c, v.ibAt(40) + v.ibAt(25), v.iosAt(40) + v.iosAt(25));
+        assertRelative(Math.max(hot, warm), BiasTerm.afterTrim(s, v), 1e-9, "bias after a trim, " + c);
     }
 }

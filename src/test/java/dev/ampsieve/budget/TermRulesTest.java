@@ -26,17 +26,53 @@ class TermRulesTest {
 
     @Test
     void fetBiasCurrentDoublesEvery10C() {
-        // common practice (junction leakage): IB(T) = IB(25) x 2^((T-25)/10); reference-checks §5: 85 °C x64, 125 °C x1024
-        assertEquals(64.0, PartValues.biasFactor(InputType.JFET, 1e-12, Double.NaN, 85), 1e-12);
-        assertEquals(1024.0, PartValues.biasFactor(InputType.CMOS, 1e-12, Double.NaN, 125), 1e-9);
+        // without an over-temperature figure (common practice, junction leakage): IB(T) = IB(25) x 2^((T-25)/10);
+        // reference-checks §5: 85 °C x64, 125 °C x1024
+        assertEquals(64e-12, PartValues.biasAt(true, 1e-12, Double.NaN, 125, 85), 1e-24);
+        assertEquals(1024e-12, PartValues.biasAt(true, 1e-12, Double.NaN, 125, 125), 1e-21);
         // +7.18 %/°C (reference-checks §5 [Calc])
-        assertEquals(1.0718, PartValues.biasFactor(InputType.CMOS, 1e-12, Double.NaN, 26), 0.00005);
+        assertEquals(1.0718e-12, PartValues.biasAt(true, 1e-12, Double.NaN, 125, 26), 0.00005e-12);
         // below 25 °C the 25 °C maximum is kept (the rule's x0.0625 at -15 °C would flatter the part)
-        assertEquals(1.0, PartValues.biasFactor(InputType.CMOS, 1e-12, Double.NaN, -15), 0.0);
+        assertEquals(1e-12, PartValues.biasAt(true, 1e-12, Double.NaN, 125, -15), 0.0);
         // bipolar inputs stay at the 25 °C maximum
-        assertEquals(1.0, PartValues.biasFactor(InputType.BIPOLAR, 1e-9, Double.NaN, 125), 0.0);
-        // the catalog's over-temperature maximum wins where given
-        assertEquals(20.0, PartValues.biasFactor(InputType.CMOS, 1e-12, 20e-12, 125), 1e-12);
+        assertEquals(1e-9, PartValues.biasAt(false, 1e-9, Double.NaN, 125, 125), 0.0);
+    }
+
+    @Test
+    void fetBiasCurrentFollowsTheExponentialThroughBothDatasheetPoints() {
+        // 1 pA at 25 °C, 1 nA at the rating's upper end 125 °C: IB(T) = 1 pA x 1000^((T-25)/100) [Calc]
+        // 30 °C: 1000^0.05 = e^(0.05 x 6.907755) = e^0.345388 = 1.412538
+        assertEquals(1.412538e-12, PartValues.biasAt(true, 1e-12, 1e-9, 125, 30), 0.000001e-12);
+        // 85 °C: 1000^0.6 = 10^1.8 = 63.0957
+        assertEquals(63.0957e-12, PartValues.biasAt(true, 1e-12, 1e-9, 125, 85), 0.0001e-12);
+        // at the upper end: the over-temperature maximum itself, and never above it
+        assertEquals(1e-9, PartValues.biasAt(true, 1e-12, 1e-9, 125, 125), 1e-21);
+        assertEquals(1e-9, PartValues.biasAt(true, 1e-12, 1e-9, 125, 140), 0.0);
+        // at or below 25 °C: the 25 °C maximum (leakage falls when cold)
+        assertEquals(1e-12, PartValues.biasAt(true, 1e-12, 1e-9, 125, 20), 0.0);
+        // rated to 85 °C instead: 1000^((30-25)/60) = 10^0.25 = 1.778279
+        assertEquals(1.778279e-12, PartValues.biasAt(true, 1e-12, 1e-9, 85, 30), 0.000001e-12);
+        // bipolar: base current rises when cold; the over-temperature maximum at both ends, 25 °C value at 25 °C
+        assertEquals(8e-9, PartValues.biasAt(false, 4e-9, 8e-9, 125, 20), 0.0);
+        assertEquals(8e-9, PartValues.biasAt(false, 4e-9, 8e-9, 125, 30), 0.0);
+        assertEquals(4e-9, PartValues.biasAt(false, 4e-9, 8e-9, 125, 25), 0.0);
+    }
+
+    @Test
+    void aFetPartInARoomTemperatureStageIsNotChargedItsHotLeakage() {
+        // CMOS, IB 1 pA at 25 °C and 1 nA over -40..125 °C; stage 20..30 °C, follower with Rf = 0 and R+ = 1 GΩ:
+        // |NG R+ - Rf| IB + (NG R+ + Rf) IOS/2 with IOS = IB assumed: 1e9 x 1.412538 pA x 1.5 = 2.118807 mV
+        // (Eggleston §6.4; IB at 30 °C from the exponential above). The old rule charged 1 nA: 1.5 V.
+        StageFixture s = StageFixture.follower().limitV(1).temps(20, 30);
+        s.rs = 1e9;
+        PartFixture p = PartFixture.ideal();
+        p.input = InputType.CMOS;
+        p.temperature = new dev.ampsieve.catalog.Range(-40, 125);
+        p.ib = new Spread(null, 1e-12, 1e-9);
+        p.ios = Spread.NONE;
+        TermResult t = budget(s, p).term("bias");
+        assertEquals(2.118807e-3, t.outputV(), 0.000002e-3);
+        assertEquals(30.0, t.worstAtC(), 0.0);
     }
 
     @Test
@@ -58,7 +94,8 @@ class TermRulesTest {
         assertTrue(t.estimated());
         assertTrue(budget(s, p).warnings().stream().anyMatch(w -> w.startsWith("ib: no maximum over temperature")
                 && w.contains("64.0 pA at 85")), budget(s, p).warnings().toString());
-        // with the datasheet's over-temperature maxima the figure is the catalog's own
+        // with the datasheet's over-temperature maxima at the rating's upper end 85 °C the figure is the catalog's own
+        p.temperature = new dev.ampsieve.catalog.Range(-40, 85);
         p.ib = new Spread(null, 1e-12, 64e-12);
         p.ios = new Spread(null, 0.5e-12, 32e-12);
         TermResult given = budget(s, p).term("bias");
@@ -123,7 +160,8 @@ class TermRulesTest {
     void typicalOnlyIsUsedAndFlagged() {
         StageFixture s = StageFixture.follower().limitV(1);
         Budget b = budget(s, PartFixture.ideal().vos(50e-6, null, null));
-        assertEquals(50e-6, b.term("offset").outputV(), 0.0);
+        // a typical-only figure enters the worst case as max-to-sigma x typ (error-model.md), k = 3: 150 µV
+        assertEquals(150e-6, b.term("offset").outputV(), 1e-18);
         assertTrue(b.term("offset").estimated());
         assertTrue(warns(b, "vos: no guaranteed maximum"));
     }
@@ -161,7 +199,10 @@ class TermRulesTest {
         s.life = 8760 * 3600.0;
         PartFixture p = PartFixture.ideal();
         p.aging = d;
-        assertEquals(10 * 2.9597e-6, budget(s, p).term("aging").outputV(), 0.0005e-6);
+        // the figure is typical (datasheets publish aging as typical): the worst case takes k = 3 times it,
+        // NG 10 x 3 x 2.9597 µV = 88.791 µV, flagged
+        assertEquals(10 * 3 * 2.9597e-6, budget(s, p).term("aging").outputV(), 0.0015e-6);
+        assertTrue(budget(s, p).term("aging").estimated());
     }
 
     @Test
@@ -197,5 +238,50 @@ class TermRulesTest {
         assertEquals("cmrr", b.limitingTerm());
         assertEquals("cmrr", b.terms().get(0).key()); // sorted largest first
         assertEquals("drift", b.terms().get(1).key());
+    }
+
+    @Test
+    void aMissingBiasCurrentIsEstimatedByInputTypeNeverZero() {
+        // follower fed through 10 k, 25 °C only: |R+ - Rf| IB + (R+ + Rf) IOS/2 with IOS = IB assumed (Eggleston §6.4).
+        // Bipolar, no ib: 500 nA (budget/Assumed, common practice): 10 k x 500 nA x 1.5 = 7.5 mV, flagged
+        StageFixture s = StageFixture.follower().limitV(1).temps(25, 25);
+        s.rs = 10e3;
+        PartFixture p = PartFixture.ideal();
+        p.ib = Spread.NONE;
+        p.ios = Spread.NONE;
+        Budget b = budget(s, p);
+        assertEquals(7.5e-3, b.term("bias").outputV(), 1e-15);
+        assertTrue(b.term("bias").estimated());
+        assertTrue(warns(b, "ib: not given; estimated as 500 nA"), b.warnings().toString());
+        // CMOS: 200 pA: 10 k x 200 pA x 1.5 = 3 µV
+        p.input = InputType.CMOS;
+        assertEquals(3e-6, budget(s, p).term("bias").outputV(), 1e-18);
+    }
+
+    @Test
+    void missingNoiseFiguresAreEstimatedByInputType() {
+        // bipolar follower without resistors, no noise figures: en 30 nV/√Hz with a 100 Hz corner (budget/Assumed,
+        // common practice). fN = π/2 x 10 Hz = 15.70796 Hz; from 0.1 Hz: (15.60796 + 100 ln 157.0796) Hz = 521.2833 Hz;
+        // rms 30 nV x sqrt(521.2833) = 684.9489 nV; allowance 3.3 x rms = 2.260331 µV (Franco ch. 7 [from memory])
+        StageFixture s = StageFixture.follower().limitV(1);
+        PartFixture p = PartFixture.ideal();
+        p.noise = dev.ampsieve.catalog.Noise.NONE;
+        Budget b = budget(s, p);
+        assertEquals(2.260331e-6, b.term("noise").outputV(), 0.000001e-6);
+        assertTrue(b.term("noise").estimated());
+        assertTrue(warns(b, "noise.en: not given; estimated as 30.0 nV/√Hz"), b.warnings().toString());
+    }
+
+    @Test
+    void aTypicalOnlyRejectionIsTakenMaxToSigmaTimesWorse() {
+        // CMRR typical 100 dB only, k = 3: 100 - 20 log10 3 = 90.45757 dB, so the error is 3 x 10 µV/V:
+        // dVcm 1 V x 30 µV/V = 30 µV (error-model.md "Missing and typical-only figures")
+        StageFixture s = StageFixture.follower().limitV(1);
+        s.cmSwing = 1;
+        PartFixture p = PartFixture.ideal();
+        p.cmrr = new MinTyp(null, 100.0);
+        TermResult t = budget(s, p).term("cmrr");
+        assertEquals(30e-6, t.outputV(), 1e-15);
+        assertTrue(t.estimated());
     }
 }

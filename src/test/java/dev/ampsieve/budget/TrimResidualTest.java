@@ -78,10 +78,55 @@ class TrimResidualTest {
         assertEquals(1.1e-3, b.term("bias").outputV(), 1e-15);
         double noise = b.term("noise").outputV(); // Rf's thermal noise, untouched by any trim
         assertEquals(1.1e-3 + noise, b.trimmed().worstCaseV(), 1e-15);
-        // with a 25 °C maximum the model scales each unit's current: 10/5 = x 2 at temperature, so a
-        // trim removes the 25 °C half of it (error-model.md: "the change of 3 with temperature" remains)
+        // with 25 °C maxima too, what the trim leaves is bounded by the datasheet, not by units scaling with
+        // their limits (error-model.md term 3): a plain bipolar IB keeps its sign, so it changes by at most
+        // max(10, 5) = 10 nA; IOS may change sign, so by up to 2 + 1 = 3 nA. 100 k x 10 nA + 100 k x 3 nA / 2
+        // = 1.15 mV (the old proportional reading gave 0.55 mV)
         p.ib = new dev.ampsieve.catalog.Spread(null, 5e-9, 10e-9);
         p.ios = new dev.ampsieve.catalog.Spread(null, 1e-9, 2e-9);
-        assertEquals(0.55e-3 + noise, BudgetCalculator.compute(s.build(), p.build()).trimmed().worstCaseV(), 1e-15);
+        assertEquals(1.15e-3 + noise, BudgetCalculator.compute(s.build(), p.build()).trimmed().worstCaseV(), 1e-15);
+    }
+
+    @Test
+    void withoutAnOverTemperatureFigureTheBiasResidualIsEstimatedNeverZero() {
+        // bipolar IB 5 nA, IOS 1 nA at 25 °C, nothing over temperature; follower with Rf 100 k, 25..70 °C.
+        // IB may change by up to 5 nA (known sign), IOS by up to 2 x 1 nA: 100 k x 5 nA + 100 k x 2 nA / 2 = 0.6 mV
+        StageFixture s = stage();
+        s.rf = 100e3;
+        PartFixture p = PartFixture.ideal();
+        p.ib = new dev.ampsieve.catalog.Spread(null, 5e-9, null);
+        p.ios = new dev.ampsieve.catalog.Spread(null, 1e-9, null);
+        Budget b = BudgetCalculator.compute(s.build(), p.build());
+        assertEquals(0.6e-3 + b.term("noise").outputV(), b.trimmed().worstCaseV(), 1e-15);
+        org.junit.jupiter.api.Assertions.assertTrue(b.warnings().stream().anyMatch(
+                w -> w.startsWith("ib: no maximum over temperature; what a trim at 25 °C leaves")), b.warnings().toString());
+    }
+
+    @Test
+    void aFetBiasCurrentMayCrossZeroSoBothEndsAdd() {
+        // CMOS, IB 1 pA at 25 °C, 1 nA at the rating's upper end 125 °C, IOS not given (= IB); stage 25..85 °C,
+        // follower fed through 1 GΩ. IB(85) = 1 pA x 1000^(60/100) = 63.0957 pA [Calc]. A CMOS input's bias
+        // current is a difference of leakages and may change sign: |dIB| <= 63.0957 + 1 pA, and the same for
+        // IOS. Residual = 1 GΩ x 64.0957 pA + 1 GΩ x 64.0957 pA / 2 = 96.1436 mV
+        StageFixture s = StageFixture.follower().limitV(1).temps(25, 85);
+        s.rs = 1e9;
+        s.trim = new Trim(true, Trim.Method.ONE_POINT, 0, 0);
+        PartFixture p = PartFixture.ideal();
+        p.input = dev.ampsieve.catalog.InputType.CMOS;
+        p.temperature = new dev.ampsieve.catalog.Range(-40, 125);
+        p.ib = new dev.ampsieve.catalog.Spread(null, 1e-12, 1e-9);
+        p.ios = dev.ampsieve.catalog.Spread.NONE;
+        Budget b = BudgetCalculator.compute(s.build(), p.build());
+        double noise = b.term("noise").outputV();
+        assertEquals(96.1436e-3 + noise, b.trimmed().worstCaseV(), 0.0001e-3);
+    }
+
+    @Test
+    void driftInferredFromTheOverTemperatureOffsetLeavesTheSumAfterATrim() {
+        // vos max 10 µV, over temperature 15 µV, no drift figure: untrimmed, offset + drift <= 15 µV; after a trim
+        // a unit may go from -10 µV at 25 °C to +15 µV at 70 °C: NG x (15 + 10) = 25 µV [Calc, triangle inequality]
+        Budget b = BudgetCalculator.compute(stage().build(), PartFixture.ideal().vos(null, 10e-6, 15e-6).drift(null, null).build());
+        assertEquals(15e-6, b.worstCaseV(), 1e-18);
+        assertEquals(25e-6, b.trimmed().worstCaseV(), 1e-15);
     }
 }

@@ -20,18 +20,20 @@ class YieldTest {
     }
 
     @Test
-    void oneNormalTermWithTheLimitAtThreeSigma() {
-        // commons-math3 NormalDistribution: P(|Z| <= 3) = 0.9973002 (reference-checks §7, Abramowitz & Stegun ch. 26);
-        // a typical-only offset is one sigma, untruncated (error-model.md "Yield")
-        double expected = new NormalDistribution().probability(-3, 3);
-        assertEquals(0.997300204, expected, 1e-9);
-        StageFixture s = StageFixture.follower().limitV(3e-3);
+    void oneNormalTermWithTheLimitAtTwoSigma() {
+        // a typical-only offset is one sigma, truncated at k = 3 sigma as the worst case assumes (error-model.md
+        // "Missing and typical-only figures"); limit at 2 sigma: P(|Z| <= 2) / P(|Z| <= 3)
+        // = 0.9544997 / 0.9973002 = 0.9570838 (Abramowitz & Stegun table 26.1 [from memory]; commons-math3 agrees)
+        double expected = 0.9544997 / 0.9973002;
+        NormalDistribution nd = new NormalDistribution();
+        assertEquals(expected, nd.probability(-2, 2) / nd.probability(-3, 3), 1e-6);
+        StageFixture s = StageFixture.follower().limitV(2e-3);
         Budget b = BudgetCalculator.compute(s.build(), offsetOnly(1e-3, null).build());
         YieldResult y = b.yield();
         assertEquals("sampled", y.decided());
         assertEquals(20000, y.trials());
         assertTrue(y.low() <= expected && expected <= y.high(),
-                "P(|Z|<=3) = " + expected + " outside the Wilson interval [" + y.low() + ", " + y.high() + "]");
+                expected + " outside the Wilson interval [" + y.low() + ", " + y.high() + "]");
     }
 
     @Test
@@ -57,13 +59,14 @@ class YieldTest {
     }
 
     @Test
-    void untruncatedValuesAreSampledEvenWhenTheWorstCaseFits() {
-        // a typical-only offset has no bound, so the worst-case sum does not bound every unit
-        StageFixture s = StageFixture.follower().limitV(2e-3);
+    void aTypicalOnlyFigureIsBoundedWhereTheWorstCaseBoundsIt() {
+        // typical-only 1 mV: worst case k x typ = 3 mV (k = 3), and no sampled unit exceeds it, so a limit of
+        // 3 mV passes every unit (a part that fits by the worst case has a yield of 100 %)
+        StageFixture s = StageFixture.follower().limitV(3e-3);
         Budget b = BudgetCalculator.compute(s.build(), offsetOnly(1e-3, null).build());
-        assertTrue(b.worstCaseV() <= b.limitV());
-        assertEquals("sampled", b.yield().decided());
-        assertTrue(b.yield().value() < 1.0);
+        assertEquals(3e-3, b.worstCaseV(), 1e-15);
+        assertEquals("all-pass", b.yield().decided());
+        assertEquals(1.0, b.yield().value(), 0.0);
     }
 
     @Test
@@ -100,8 +103,9 @@ class YieldTest {
         YieldResult b = BudgetCalculator.compute(s.build(), p.build()).yield();
         assertEquals(SequentialYield.BLOCK, a.trials());
         assertEquals(a, b);
-        // P(|Z| <= 1) = 0.6827 (reference-checks §7) inside its interval
-        double expected = new NormalDistribution().probability(-1, 1);
+        // P(|Z| <= 1) / P(|Z| <= 3) = 0.6826895 / 0.9973002 = 0.684537 (reference-checks §7; the typical-only
+        // offset is truncated at 3 sigma) inside its interval
+        double expected = 0.6826895 / 0.9973002;
         assertTrue(a.low() <= expected && expected <= a.high());
         // another seed gives another sample
         s.seed = 99;
@@ -167,5 +171,55 @@ class YieldTest {
         YieldResult y = BudgetCalculator.compute(s.build(), p.build()).yield();
         assertEquals("none-pass", y.decided());
         assertEquals(0.0, y.value(), 0.0);
+    }
+
+    @Test
+    void aDriftEstimatedFromTheOffsetIsTheSameUnitsOffsetOverT() {
+        // vos max 3 mV (k = 3: sigma 1 mV), no drift figure: each unit's drift is its own vos / T (bipolar pair,
+        // GHLM5 ch. 3 [from memory]), so at 125 °C its offset is vos x (1 + 100 / 298.15) = 1.335402 x vos and at
+        // 25 °C vos. Limit 1.335402 x 2 mV: a unit passes when |vos| <= 2 mV, P = P(|Z|<=2) / P(|Z|<=3)
+        // = 0.9544997 / 0.9973002 = 0.957084 (A&S table 26.1 [from memory]). Independent drift draws would
+        // let some units with |vos| > 2 mV pass and some below fail.
+        StageFixture s = StageFixture.follower().limitV(1.335402 * 2e-3).temps(25, 125);
+        PartFixture p = PartFixture.ideal().vos(null, 3e-3, null).drift(null, null);
+        YieldResult y = BudgetCalculator.compute(s.build(), p.build()).yield();
+        double expected = 0.9544997 / 0.9973002;
+        assertTrue(y.low() <= expected && expected <= y.high(), expected + " not in [" + y.low() + ", " + y.high() + "]");
+        assertTrue(Math.abs(y.value() - expected) < 0.004, "a correlated drift gives " + expected + ", not " + y.value());
+    }
+
+    @Test
+    void plainBipolarBiasCurrentIsNeverSampledBelowZero() {
+        // follower with Rf 100 k at 25 °C only: E = Rf x IB (R+ = 0; Eggleston §6.4). IB typ 10 nA, max 40 nA, k 3:
+        // N(10 nA, 10 nA) truncated at [0, 40 nA] (a bipolar input's base current has one sign). Limit 1 mV passes
+        // IB <= 10 nA: P = (Phi(0) - Phi(-1)) / (Phi(3) - Phi(-1)) = (0.5 - 0.1586553) / (0.9986501 - 0.1586553)
+        // = 0.406365 (A&S table 26.1 [from memory]). Sampling down to -20 nA would give 0.4785.
+        StageFixture s = StageFixture.follower().limitV(1e-3).temps(25, 25);
+        s.rf = 100e3;
+        PartFixture p = PartFixture.ideal();
+        p.ib = new Spread(10e-9, 40e-9, null);
+        YieldResult y = BudgetCalculator.compute(s.build(), p.build()).yield();
+        double expected = (0.5 - 0.1586553) / (0.9986501 - 0.1586553);
+        assertTrue(y.low() <= expected && expected <= y.high(), expected + " not in [" + y.low() + ", " + y.high() + "]");
+    }
+
+    @Test
+    void anOffsetCurrentMayChangeSignBetween25CAndTheRangeEnd() {
+        // follower, Rf 100 k, R+ 0, 25..70 °C, one-point trim; IOS max 1 nA at 25 °C and 2 nA over temperature
+        // (bipolar: at the range end), no IB. Each unit's IOS at 25 °C and at 70 °C are its own draws,
+        // N(0, 1/3 nA) and N(0, 2/3 nA) truncated at their maxima; E = -(Rf/2) (IOS(70) - IOS(25)) (DcModel).
+        // Limit 50 µV passes |IOS(70) - IOS(25)| <= 1 nA. The difference of the two (untruncated) normals has
+        // sigma sqrt(1/9 + 4/9) = 0.745356 nA: P(|D| <= 1 nA) = P(|Z| <= 1.341641) = 0.820287 (A&S 26.1 [from
+        // memory]); truncation at 3 sigma changes it by under 0.003. A unit scaled with its limit (the old
+        // model, IOS(70) = 2 IOS(25)) would give P(|IOS(25)| <= 1 nA) = 1.
+        StageFixture s = StageFixture.follower().limitV(50e-6).temps(25, 70);
+        s.rf = 100e3;
+        s.trim = new dev.ampsieve.stage.Trim(true, dev.ampsieve.stage.Trim.Method.ONE_POINT, 0, 0);
+        PartFixture p = PartFixture.ideal();
+        p.ios = new Spread(null, 1e-9, 2e-9);
+        YieldResult y = BudgetCalculator.trimmedYield(s.build(), p.build());
+        assertEquals("sampled", y.decided());
+        assertEquals(20000, y.trials());
+        assertTrue(Math.abs(y.value() - 0.820287) < 0.012, "0.820 expected, got " + y.value());
     }
 }

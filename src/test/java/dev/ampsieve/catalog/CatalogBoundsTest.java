@@ -165,10 +165,10 @@ class CatalogBoundsTest {
 
     @Test
     void theDemoCatalogStillLoadsWithoutErrors() throws Exception {
-        // README: "On the demo catalog `check` reports 0 errors and 5 warnings"
+        // README: "On the demo catalog `check` reports 0 errors and 53 warnings" (4 about values, 49 absent figures the budget estimates)
         Catalog c = CatalogLoader.load(DemoCatalog.copyTo(dir), false);
         assertEquals(0, c.problems().stream().filter(Problem::isError).count());
-        assertEquals(5, c.problems().size());
+        assertEquals(53, c.problems().size());
         assertEquals(48, c.parts().size());
     }
 }

@@ -59,6 +59,12 @@ final class CatalogFixtures {
               currency: USD
             noise:
               en: 12 nV/rtHz
+              en-corner: 7 Hz
+              in: 0.3 pA/rtHz
+              in-corner: 150 Hz
+            long-term-drift:
+              value: 1.5 uV
+              per: 1000 h
             """;
 
     /** Only what a part must have. */
@@ -80,7 +86,7 @@ final class CatalogFixtures {
             """;
 
     /** BASE plus every optional key, so each quantity path has a value. */
-    static final String FULL = BASE.replace("noise:\n  en: 12 nV/rtHz\n", "")
+    static final String FULL = BASE.substring(0, BASE.indexOf("noise:\n"))
             + """
             factory-trim: laser
             null-pins: true

@@ -437,12 +437,27 @@ class CatalogLoaderTest {
     }
 
     @Test
-    void aPartWithoutNoiseDataIsWarnedThatTheNoiseTermWillBeZero() throws Exception {
+    void aPartWithoutNoiseDataIsWarnedThatTheNoiseWillBeEstimated() throws Exception {
         Catalog c = loadPart(without(BASE, "noise"));
-        Problem p = about(c.problems(), "noise.en");
+        Problem p = about(c.problems(), "noise");
         assertEquals(Problem.Severity.WARNING, p.severity());
-        assertEquals("not given: the voltage-noise term will be zero", p.message());
+        assertTrue(p.message().startsWith("not given: en, en-corner, in"), p.message());
+        assertTrue(p.message().endsWith("(common practice, conservative) and marked estimated"), p.message());
         assertEquals(1, c.parts().size());
+    }
+
+    @Test
+    void everyAbsentFigureTheBudgetEstimatesIsWarnedAtCheckTime() throws Exception {
+        Catalog c = loadPart(without(without(without(BASE, "ib"), "ios"), "long-term-drift"));
+        assertTrue(about(c.problems(), "ib").message().startsWith("not given: bias current will be estimated"));
+        assertTrue(about(c.problems(), "ios").message().startsWith("not given: offset current will be taken equal to ib"));
+        assertTrue(about(c.problems(), "long-term-drift").message().startsWith("not given: aging over a stage's service life"));
+    }
+
+    @Test
+    void anAbsentRejectionIsWarnedAsAssumed() throws Exception {
+        Catalog c = loadPart(without(BASE, "cmrr"));
+        assertEquals("not given: a pessimistic 60 dB will be assumed and marked estimated", about(c.problems(), "cmrr").message());
     }
 
     // ------------------------------------------------------------------ other shapes a user may write

@@ -28,6 +28,12 @@ class CheckCommandTest {
             supply: {min: 2.7 V, max: 5.5 V}
             temperature: {min: -40 C, max: 125 C}
             price: {unit: 0.60, quantity: 1000}
+            ib: {max: 10 pA, max-over-temp: 1 nA}
+            ios: {max: 5 pA}
+            long-term-drift: {value: 2 uV, per: 1000 h}
+            cmrr: {min: 80 dB}
+            psrr: {min: 85 dB}
+            aol: {min: 100 dB}
             """;
 
     private record Run(int code, String out, String err) {
@@ -49,8 +55,9 @@ class CheckCommandTest {
         Run r = run("--catalog", dir.toString(), "check");
         assertEquals(ExitCode.OK, r.code(), r.out() + r.err());
         assertEquals(List.of(
-                f + ":1:1: warning: noise.en: not given: the voltage-noise term will be zero;"
-                        + " add 'noise: {en: 12 nV/rtHz}' with the datasheet's white-noise density",
+                f + ":1:1: warning: noise: not given: en, en-corner, in will be estimated for a cmos input (common practice,"
+                        + " conservative) and marked estimated; add 'noise: {en: 12 nV/rtHz, in: 0.1 pA/rtHz}' with the"
+                        + " datasheet's white-noise densities and their 1/f corners",
                 dir + ": 1 file(s), 1 part(s), 0 error(s), 1 warning(s)",
                 "",
                 dev.ampsieve.report.Caution.TEXT), r.outLines()); // every text output ends with the caution (RULES.md)

@@ -118,4 +118,35 @@ class RankReportTest {
         assertEquals("no", sj.get("answer").asText());
         assertEquals(Caution.TEXT, sj.get("caution").asText());
     }
+
+    @Test
+    void aRowWhoseVerdictRestsOnAnEstimateIsMarkedAndTheAdviceSaysSo() throws Exception {
+        // real engine; follower fed through 10 k at 25 °C, limit 10 mV. FULL has every figure; NOIB lacks ib and
+        // ios, so its bias term is the bipolar estimate 10 k x 500 nA x 1.5 = 7.5 mV (budget/Assumed): it fits,
+        // but on an estimate, and being cheaper it is the pick
+        dev.ampsieve.fixtures.StageFixture sf = dev.ampsieve.fixtures.StageFixture.follower().limitV(10e-3).temps(25, 25);
+        sf.rs = 10e3;
+        Stage s = sf.build();
+        dev.ampsieve.fixtures.PartFixture full = dev.ampsieve.fixtures.PartFixture.ideal();
+        full.id = "full";
+        full.price = new dev.ampsieve.catalog.Price(2.0, 1, "USD");
+        dev.ampsieve.fixtures.PartFixture noib = dev.ampsieve.fixtures.PartFixture.ideal();
+        noib.id = "noib";
+        noib.ib = dev.ampsieve.catalog.Spread.NONE;
+        noib.ios = dev.ampsieve.catalog.Spread.NONE;
+        Ranking r = Ranker.rank(s, List.of(full.build(), noib.build()), dev.ampsieve.budget.BudgetCalculator::compute);
+        String text = RankReport.text(r, "s.yaml", null, 15);
+        assertTrue(text.lines().anyMatch(l -> l.matches("1  noib\\s+fits\\*\\s+.*")), text);
+        assertTrue(text.lines().anyMatch(l -> l.matches("2  full\\s+fits\\s+.*")), text);
+        assertTrue(text.contains("* after the verdict: it rests on an estimated or typical-only figure"), text);
+        assertTrue(dev.ampsieve.testing.Flat.of(text).contains(
+                "Pick noib: 1.00 USD per unit, fits as it is; worst-case 7.50 mV of 10.0 mV (margin 25 %); resting on"
+                        + " estimated or typical-only figures for bias current."), text);
+        JsonNode j = new ObjectMapper().readTree(RankReport.json(r, "s.yaml", null, 15));
+        JsonNode first = j.get("candidates").get(0);
+        assertEquals("noib", first.get("part").asText());
+        assertTrue(first.get("restsOnEstimate").asBoolean());
+        assertEquals("bias", first.get("estimatedTerms").get(0).asText());
+        assertTrue(!j.get("candidates").get(1).get("restsOnEstimate").asBoolean());
+    }
 }

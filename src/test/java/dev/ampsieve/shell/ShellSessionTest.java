@@ -187,7 +187,9 @@ class ShellSessionTest {
         assertTrue(m.find(), printed);
         assertTrue(Integer.parseInt(m.group(1)) > 0, printed);
         assertTrue(dev.ampsieve.testing.Flat.of(printed).contains(dev.ampsieve.report.Caution.TEXT), printed);
-        assertTrue(dev.ampsieve.testing.Flat.of(printed).contains("0 error(s), 5 warning(s)"), printed);
+        // 4 warnings about values, plus 49 absences the budget will estimate (noise figures, ib, ios, long-term
+        // drift: counted over the demo YAML by a separate script, one per missing key, one per missing noise section)
+        assertTrue(dev.ampsieve.testing.Flat.of(printed).contains("0 error(s), 53 warning(s)"), printed);
     }
 
     @Test
