@@ -104,6 +104,10 @@ public final class BudgetText {
         o.append('\n');
         line(o, "Verdict    %s%s", b.verdict().key(),
                 b.limitingTerm() == null ? "" : "   (largest term: " + termLabel(b, b.limitingTerm()) + ")");
+        String left = Uncounted.words(b.notCounted());
+        if (!left.isEmpty()) {
+            line(o, "%-10s %s", "", "but " + left);
+        }
         String why = yieldMiss(b);
         if (why != null) {
             line(o, "%-10s %s", "", why);
