@@ -79,10 +79,10 @@ public final class Commands {
             return null;
         }
         CommandLine at = u.getCommandLine();
-        String shown = Visible.of(word);
+        String shown = "'" + Visible.of(word) + "'";
         if (at.getParent() == null) {
             String near = dev.ampsieve.yaml.Fields.closest(word, at.getSubcommands().keySet());
-            return "ampsieve: unknown command " + shown + (near != null ? "; did you mean " + near + "?" : "")
+            return "ampsieve: unknown command " + shown + (near != null ? "; did you mean '" + near + "'?" : "")
                     + " ('ampsieve --help' lists the commands)";
         }
         String name = at.getCommandName();
