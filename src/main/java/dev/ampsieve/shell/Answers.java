@@ -178,9 +178,9 @@ final class Answers {
         }
         String lo = m.group(1).strip();
         String hi = m.group(2).strip();
-        String unit = unitOf(hi) != null ? unitOf(hi) : unitOf(lo) != null ? unitOf(lo) : r.unit();
-        lo = BARE.matcher(lo).matches() ? lo + " " + unit : lo;
-        hi = BARE.matcher(hi).matches() ? hi + " " + unit : hi;
+        hi = withUnit(hi, r);
+        String unit = unitOf(hi) != null && parses("1 " + unitOf(hi), r.dimension()) ? unitOf(hi) : r.unit();
+        lo = BARE.matcher(lo).matches() ? lo + " " + unit : withUnit(lo, r);
         for (String side : List.of(lo, hi)) {
             try {
                 Units.parse(side, r.dimension());
@@ -192,6 +192,26 @@ final class Answers {
         put.put(r.low(), lo);
         put.put(r.high(), hi);
         return new Change(put, Set.of(), null);
+    }
+
+    /** One end as typed, or with the range's unit after it: "10" and "1k" are read as "10 Hz" and "1kHz" for a band. */
+    private static String withUnit(String side, RangeId r) {
+        if (BARE.matcher(side).matches()) {
+            return side + " " + r.unit();
+        }
+        if (!parses(side, r.dimension()) && parses(side + r.unit(), r.dimension())) {
+            return side + r.unit(); // a prefix alone: "1k"
+        }
+        return side;
+    }
+
+    private static boolean parses(String text, Dimension d) {
+        try {
+            Units.parse(text, d);
+            return true;
+        } catch (UnitException e) {
+            return false;
+        }
     }
 
     private static final Pattern PLUS_MINUS = Pattern.compile("±|\\+-|\\+/-");

@@ -50,6 +50,24 @@ class GuidedEntryTest {
     }
 
     @Test
+    void aSupplyBringsTheRangeQuestionsAndEachTakesARangeInOneAnswer() throws Exception {
+        Path file = dir.resolve("single.yaml");
+        String printed = Sessions.run("ask", "100", "", "1 mV", "2 V", "5 V ± 0.25 V", "", "0.1..4.9 V", "0.5..2.5",
+                "", "", "", "", "0.1 Hz..1k", "done", "save " + file);
+        assertTrue(printed.contains("supply.variation [0.25 V] >"), printed); // the ± answer gave it
+        assertTrue(Flat.of(printed).contains("On a single supply the signal rarely sits at mid-supply"), printed);
+        Stage s = StageLoader.load(file);
+        assertEquals(5.0, s.supplyVoltage());
+        assertEquals(0.25, s.supplyVariation(), 1e-15);
+        assertEquals(0.1, s.outputRange().min(), 1e-15);
+        assertEquals(4.9, s.outputRange().max(), 1e-15);
+        assertEquals(0.5, s.commonModeRange().min(), 1e-15); // bare numbers read in volts
+        assertEquals(2.5, s.commonModeRange().max(), 1e-15);
+        assertEquals(0.1, s.bandLow(), 1e-15); // band: one range, after topology, rf, source and balance resistance
+        assertEquals(1e3, s.bandHigh(), 1e-12);
+    }
+
+    @Test
     void aBadAnswerIsAskedAgainWithTheReason() throws Exception {
         Path file = dir.resolve("s.yaml");
         String printed = Sessions.run("ask", "abc", "40 dB", "85..-40", "-40 to 125", "2 V/us", "10 uV input", "", "", "",
