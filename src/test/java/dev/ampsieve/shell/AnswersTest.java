@@ -27,7 +27,7 @@ class AnswersTest {
     }
 
     @Test
-    void rangesAndTheSupplyInOneAnswer() throws AnswerException {
+    void rangesAndTheSupplyInOneAnswer() throws Exception {
         assertEquals(Map.of("output-range.min", "0.1 V", "output-range.max", "2.4 V"),
                 Answers.interpret("output-range", "0.1..2.4 V", Map.of()).put());
         assertEquals(Map.of("common-mode-range.min", "1 V", "common-mode-range.max", "2 V"),
