@@ -106,7 +106,8 @@ public final class BudgetText {
                 b.limitingTerm() == null ? "" : "   (largest term: " + termLabel(b, b.limitingTerm()) + ")");
         String left = Uncounted.words(b.notCounted());
         if (!left.isEmpty()) {
-            line(o, "%-10s %s", "", "but " + left);
+            // "but" where a fit may rest on it; a miss would only grow
+            line(o, "%-10s %s", "", (b.verdict() == dev.ampsieve.budget.Verdict.NO_FIT ? "and " : "but ") + left);
         }
         String why = yieldMiss(b);
         if (why != null) {

@@ -24,7 +24,7 @@ public final class SufficesReport {
         o.append(s.answer()).append('\n');
         String left = Uncounted.words(b.notCounted());
         if (!left.isEmpty()) {
-            o.append("But ").append(left).append('\n');
+            o.append(s.yes() ? "But " : "And ").append(left).append('\n');
         }
         o.append('\n');
         o.append(StageLine.of(b.stage(), stageLabel)).append('\n');
@@ -39,7 +39,8 @@ public final class SufficesReport {
         TermResult lim = b.limitingTerm() == null ? null : b.term(b.limitingTerm());
         t.row("largest term", lim == null ? Figures.NONE : lim.label() + ", " + Figures.volts(lim.outputV()) + share(lim.outputV(), b.limitV()));
         t.row("verdict", (b.constraintsMet() ? b.verdict().key() : "rejected (hard constraint)")
-                + (left.isEmpty() ? "" : "; " + left));
+                + (left.isEmpty() ? "" : "; " + b.notCounted().size() + " term" + (b.notCounted().size() == 1 ? "" : "s")
+                        + " not counted (named above)"));
         t.lines(width).stream().skip(1).forEach(l -> o.append(l).append('\n'));
         o.append('\n').append(Caution.TEXT).append('\n');
         // the answer quotes the part id: no control character gets through

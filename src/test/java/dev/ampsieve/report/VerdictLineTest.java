@@ -81,7 +81,7 @@ class VerdictLineTest {
         Sufficiency s = Sufficiency.of(BudgetCalculator.compute(stage(BARE), FIT));
         String text = SufficesReport.text(s, "s.yaml");
         assertTrue(Flat.of(text).contains("But " + LEFT_OUT), text);
-        assertTrue(Flat.of(text).contains("verdict fits; open-loop gain,"), text);
+        assertTrue(Flat.of(text).contains("verdict fits; 6 terms not counted (named above)"), text);
         JsonNode j = new ObjectMapper().readTree(SufficesReport.json(s, "s.yaml"));
         assertEquals(6, j.get("notCounted").size());
     }
