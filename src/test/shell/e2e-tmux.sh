@@ -77,7 +77,7 @@ type_line ""
 wait_for "topology \[non-inverting\] > $"
 type_line "done"
 wait_for "limit at the output +1\.00 mV"
-wait_for "^Not counted in any verdict: open-loop gain, closed-loop bandwidth and resistor ratio not counted: no"
+wait_for "^Every verdict: open-loop gain, closed-loop bandwidth and resistor ratio not counted: no"
 wait_for "ampsieve \[new stage\*\]> $"
 # a first-order filter at band.high; without it the noise would run to the closed-loop bandwidth
 type_line "set band.filter-order 1"

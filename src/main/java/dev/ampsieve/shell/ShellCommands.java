@@ -296,7 +296,7 @@ final class ShellCommands {
             String left = dev.ampsieve.report.Uncounted.ofStage(s);
             if (!left.isEmpty()) {
                 // accepting a default must not hide a term: the verdicts will say the same
-                out.println(ctx.foldBold("Not counted in any verdict: " + left + ".", "Not counted"));
+                out.println(ctx.foldBold("Every verdict: " + left + ".", "Every verdict"));
             }
             if (!all) {
                 out.println(paint.dim("Other keys keep their defaults: 'show --all' lists them, 'set KEY VALUE' changes one."));

@@ -151,11 +151,19 @@ final class ShellCompleter implements Completer {
             return why;
         }
         int clause = why.indexOf(';');
-        if (clause > 0 && clause <= max) {
+        if (clause > 0 && clause <= max && balanced(why.substring(0, clause))) {
             return why.substring(0, clause);
         }
         int cut = why.lastIndexOf(' ', max - 1);
-        return why.substring(0, cut > 0 ? cut : max - 1).replaceAll("[,:;(]+$", "") + "…";
+        String head = why.substring(0, cut > 0 ? cut : max - 1);
+        if (!balanced(head)) {
+            head = head.substring(0, head.lastIndexOf('(')).strip(); // no bracket left open
+        }
+        return head.replaceAll("[,:;(]+$", "") + "…";
+    }
+
+    private static boolean balanced(String s) {
+        return s.chars().filter(c -> c == '(').count() == s.chars().filter(c -> c == ')').count();
     }
 
     /** Index among the positional words before {@code idx}, skipping options and their values. */

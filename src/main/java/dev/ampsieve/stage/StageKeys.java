@@ -149,8 +149,8 @@ public final class StageKeys {
                             + "default, which never understates the noise): only the closed-loop bandwidth GBW/NG limits it"),
             q("supply.voltage", Dimension.VOLTAGE, "none", "5 V", "the part must run from this total supply"),
             q("supply.variation", Dimension.VOLTAGE, "0 V (supply rejection not counted)", "0.25 V",
-                    "peak supply change (a regulator's tolerance plus ripple; 5 % of the supply is common practice "
-                            + "for a plain linear regulator); multiplied by the part's supply rejection"),
+                    "peak supply change, times the part's supply rejection; a regulator's tolerance plus "
+                            + "ripple (5 % of the supply is common practice for a plain linear regulator)"),
             q("common-mode-swing", Dimension.VOLTAGE,
                     "non-inverting: full-scale-output/gain; follower: full-scale-output; inverting: 0; "
                             + "without full-scale-output 0 (common-mode rejection not counted)", "1 V",

@@ -148,7 +148,7 @@ class ShellSessionTest {
         assertTrue(flat.contains("without it the open-loop gain, bandwidth and resistor terms are not counted; "
                 + "the verdict will say so."), printed);
         assertTrue(flat.contains("without it supply rejection is not counted"), printed);
-        assertTrue(flat.contains("Not counted in any verdict: " + left + "."), printed);
+        assertTrue(flat.contains("Every verdict: " + left + "."), printed);
         assertTrue(flat.contains("Every verdict: " + left), printed); // rank, under its table
     }
 
