@@ -61,13 +61,23 @@ wait_for "ampsieve> $" 60
 type_line "ask"
 wait_for "gain \[required\] > $"
 type_line "100"
-wait_for "temperature \[0 C\.\.70 C\] > $"
+wait_for "temperature \[0\.\.70 C\] > $"
 type_line "-40..85 C"
 wait_for "limit \[required\] > $"
 type_line "1 mV"
+# 'done' waits until full scale and supply are asked: a new user who keeps every default is told what is not counted
+wait_for "full-scale-output \[none \(open-loop gain, bandwidth and resistor terms not counted\)\] > $"
+type_line "done"
+wait_for "'done' comes after the supply questions"
+type_line ""
+wait_for "supply\.voltage \[none\] > $"
+type_line ""
+wait_for "supply\.variation \[0 V \(supply rejection not counted\)\] > $"
+type_line ""
 wait_for "topology \[non-inverting\] > $"
 type_line "done"
 wait_for "limit at the output +1\.00 mV"
+wait_for "^Every verdict: open-loop gain, closed-loop bandwidth and resistor ratio not counted: no"
 wait_for "ampsieve \[new stage\*\]> $"
 # a first-order filter at band.high; without it the noise would run to the closed-loop bandwidth
 type_line "set band.filter-order 1"
@@ -81,6 +91,8 @@ screen | grep -Eq "^Stage \(current stage\): non-inverting, noise gain 100, -40 
 screen | grep -Eq "^#  part +verdict +cost" || { echo "e2e: no ranking table"; screen; exit 1; }
 screen | grep -Eq "^1  [a-z0-9-]+ +fits" || { echo "e2e: no fitting part ranked first"; screen; exit 1; }
 screen | grep -Eq "^  Pick [a-z0-9-]+: " || { echo "e2e: no advice naming the pick"; screen; exit 1; }
+screen | grep -Eq "^Every verdict: open-loop gain, closed-loop bandwidth and resistor ratio not counted" \
+  || { echo "e2e: the ranking does not say which terms no verdict counts"; screen; exit 1; }
 
 # Ctrl-C during a long ranking (the most units a stage may ask for, each simulated: minutes when
 # nothing stops it), and 'show' typed at once, before the shell is back: the keys are kept, the

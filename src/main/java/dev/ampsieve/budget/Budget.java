@@ -43,6 +43,11 @@ public record Budget(
         return constraints.stream().allMatch(ConstraintResult::ok);
     }
 
+    /** Terms left out (or counted as 0 V) for want of a stage or catalog value, and why ({@link NotCounted#of}). */
+    public List<NotCounted> notCounted() {
+        return NotCounted.of(stage, part);
+    }
+
     public TermResult term(String key) {
         return terms.stream().filter(t -> t.key().equals(key)).findFirst().orElse(null);
     }

@@ -33,7 +33,15 @@ public final class Commands {
         cl.setUsageHelpAutoWidth(true);
         cl.setExecutionExceptionHandler((ex, line, parseResult) -> handle(ex, line, root.verbose()));
         IParameterExceptionHandler picocliDefault = cl.getParameterExceptionHandler();
-        cl.setParameterExceptionHandler((ex, args) -> picocliDefault.handleParseException(visible(ex), args));
+        cl.setParameterExceptionHandler((ex, args) -> {
+            String unknown = unknownWord(ex);
+            if (unknown != null) {
+                ex.getCommandLine().getErr().println(unknown);
+                ex.getCommandLine().getErr().flush();
+                return ExitCode.USAGE;
+            }
+            return picocliDefault.handleParseException(visible(ex), args);
+        });
         return cl;
     }
 
@@ -56,6 +64,29 @@ public final class Commands {
             return copy;
         }
         return new ParameterException(ex.getCommandLine(), Visible.lines(ex.getMessage()), ex);
+    }
+
+    /**
+     * "unknown command X; did you mean Y" for a word no command takes, in place of picocli's
+     * "Unmatched argument at index"; null for other usage errors (options keep picocli's suggestions).
+     */
+    static String unknownWord(ParameterException ex) {
+        if (!(ex instanceof UnmatchedArgumentException u) || u.getUnmatched().isEmpty()) {
+            return null;
+        }
+        String word = u.getUnmatched().get(0);
+        if (word.startsWith("-")) {
+            return null;
+        }
+        CommandLine at = u.getCommandLine();
+        String shown = "'" + Visible.of(word) + "'";
+        if (at.getParent() == null) {
+            String near = dev.ampsieve.yaml.Fields.closest(word, at.getSubcommands().keySet());
+            return "ampsieve: unknown command " + shown + (near != null ? "; did you mean '" + near + "'?" : "")
+                    + " ('ampsieve --help' lists the commands)";
+        }
+        String name = at.getCommandName();
+        return "ampsieve " + name + ": unexpected word " + shown + " ('ampsieve " + name + " --help' shows what it takes)";
     }
 
     /** One line per problem, never a stack trace for something the user typed. */

@@ -40,6 +40,9 @@ public final class RankCommand implements Callable<Integer> {
             description = "Candidates to list (default ${DEFAULT-VALUE}); advice and Pareto front use all.")
     int top;
 
+    @Option(names = "--all", description = "Pareto front of every candidate, not only of the parts that fit.")
+    boolean all;
+
     @ArgGroup(exclusive = true)
     Format format = new Format();
 
@@ -63,8 +66,8 @@ public final class RankCommand implements Callable<Integer> {
         Ranking r = Ranker.rank(stage, parts, BudgetCalculator::compute);
         String label = stageOption.label();
         String name = stageOption.name(); // text headers stay within 100 columns
-        String out = format.json ? RankReport.json(r, label, query, top)
-                : format.csv ? RankReport.csv(r, top) : RankReport.text(r, name, query, top, root.textWidth());
+        String out = format.json ? RankReport.json(r, label, query, top, all)
+                : format.csv ? RankReport.csv(r, top) : RankReport.text(r, name, query, top, root.textWidth(), all);
         spec.commandLine().getOut().print(out);
         return ExitCode.OK;
     }

@@ -79,6 +79,7 @@ public final class BudgetJson {
         } else {
             o.put("limitingTerm", b.limitingTerm());
         }
+        Uncounted.put(o, b.notCounted());
         ArrayNode cs = o.putArray("constraints");
         for (ConstraintResult c : b.constraints()) {
             ObjectNode n = cs.addObject();

@@ -104,6 +104,11 @@ public final class BudgetText {
         o.append('\n');
         line(o, "Verdict    %s%s", b.verdict().key(),
                 b.limitingTerm() == null ? "" : "   (largest term: " + termLabel(b, b.limitingTerm()) + ")");
+        String left = Uncounted.words(b.notCounted());
+        if (!left.isEmpty()) {
+            // "but" where a fit may rest on it; a miss would only grow
+            line(o, "%-10s %s", "", (b.verdict() == dev.ampsieve.budget.Verdict.NO_FIT ? "and " : "but ") + left);
+        }
         String why = yieldMiss(b);
         if (why != null) {
             line(o, "%-10s %s", "", why);

@@ -77,6 +77,16 @@ public final class CompareReport {
         s.row("margin", Figures.percent(c.a().margin()), Figures.percent(c.b().margin()));
         s.row("largest term", largest(ba), largest(bb));
         s.lines(width).forEach(l -> o.append(l).append('\n'));
+        String both = Uncounted.words(Uncounted.ofStage(ba.notCounted()));
+        if (!both.isEmpty()) {
+            o.append("Both verdicts: ").append(both).append('\n');
+        }
+        for (Candidate x : java.util.List.of(c.a(), c.b())) {
+            String own = Uncounted.words(Uncounted.ofPart(x.budget().notCounted()));
+            if (!own.isEmpty()) {
+                o.append("Verdict of ").append(x.id()).append(": ").append(own).append('\n');
+            }
+        }
         o.append('\n').append(c.conclusion()).append('\n');
         o.append('\n').append(Caution.TEXT).append('\n');
         // the conclusion quotes part ids and currencies: no control character gets through

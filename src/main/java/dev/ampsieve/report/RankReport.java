@@ -73,13 +73,22 @@ public final class RankReport {
 
     /** @param width columns the tables fit in (the terminal's, in the shell) */
     public static String text(Ranking r, String stageLabel, String query, int top, int width) {
+        return text(r, stageLabel, query, top, width, false);
+    }
+
+    /**
+     * @param allOnFront true: the Pareto front of every candidate; false: of the parts that fit (as they are or
+     *                   after the stage's trim), since a front led by parts far over the limit answers nothing
+     */
+    public static String text(Ranking r, String stageLabel, String query, int top, int width, boolean allOnFront) {
         StringBuilder o = new StringBuilder();
         o.append(StageLine.of(r.stage(), stageLabel)).append('\n');
         if (query != null && !query.isBlank()) {
             o.append("Parts matching '").append(Visible.of(query)).append("'\n");
         }
         List<Candidate> shown = r.candidates().stream().limit(Math.max(0, top)).toList();
-        Set<String> front = Set.copyOf(r.paretoIds());
+        List<Candidate> frontList = front(r, allOnFront);
+        Set<String> front = frontList.stream().map(Candidate::id).collect(java.util.stream.Collectors.toSet());
         o.append('\n').append("Candidates (").append(r.candidates().size()).append(" budgeted");
         if (shown.size() < r.candidates().size()) {
             o.append(", first ").append(shown.size()).append(" shown; --top N for more");
@@ -106,15 +115,20 @@ public final class RankReport {
             o.append("margin: (limit - ").append(r.stage().criterion().kind() == Criterion.Kind.WORST_CASE
                     ? "worst-case" : "RSS").append(") / limit.  †: largest before the trim.  P: on the Pareto front.\n");
         }
-        if (!r.pareto().isEmpty()) {
+        notCounted(o, r, shown);
+        if (!frontList.isEmpty()) {
             // error against cost: each step up in cost buys a smaller error
-            o.append('\n').append("Pareto front of error against cost (no other part is cheaper and better)\n");
+            o.append('\n').append("Pareto front of error against cost (no other part is cheaper and better; ")
+                    .append(allOnFront ? "every candidate" : "parts that fit; --all for every candidate").append(")\n");
             TextTable p = new TextTable().left("part").right("cost").right(errorName(r)).left("verdict");
-            for (Candidate c : r.pareto()) {
+            for (Candidate c : frontList) {
                 p.row(c.id(), Figures.money(c.effectiveCost()) + (c.currency().isEmpty() ? "" : " " + c.currency()),
                         Figures.volts(c.errorV()), verdictWord(c) + (c.trimmed() ? " (trim included)" : ""));
             }
             p.lines(width).forEach(l -> o.append(l).append('\n'));
+        }
+        if (frontList.isEmpty() && !allOnFront && !r.candidates().isEmpty()) {
+            o.append('\n').append("Pareto front: no part fits (--all shows the front of every candidate)\n");
         }
         if (!r.rejected().isEmpty()) {
             o.append('\n').append("Rejected (a hard constraint fails; --json or --csv lists every failure)\n");
@@ -139,12 +153,36 @@ public final class RankReport {
         return Wrap.prose(Visible.lines(o.toString()), width);
     }
 
+    /** The front shown: of every candidate, or of those that fit (as they are or after the trim). */
+    static List<Candidate> front(Ranking r, boolean all) {
+        return all ? r.pareto() : dev.ampsieve.advice.Pareto.front(
+                r.candidates().stream().filter(c -> c.verdict() != Verdict.NO_FIT).toList());
+    }
+
+    /** Under the candidates: what no verdict counts (the stage's doing), then what a listed part's catalog lacks. */
+    private static void notCounted(StringBuilder o, Ranking r, List<Candidate> shown) {
+        if (r.candidates().isEmpty()) {
+            return;
+        }
+        String every = Uncounted.words(Uncounted.ofStage(r.candidates().get(0).budget().notCounted()));
+        if (!every.isEmpty()) {
+            o.append("Every verdict: ").append(every).append('\n');
+        }
+        for (Candidate c : shown) {
+            String own = Uncounted.words(Uncounted.ofPart(c.budget().notCounted()));
+            if (!own.isEmpty()) {
+                o.append("Verdict of ").append(c.id()).append(": ").append(own).append('\n');
+            }
+        }
+    }
+
     /** CSV: one row per candidate in ranking order, then one per rejected part; the caution as a last '#' line. */
     public static String csv(Ranking r, int top) {
         StringBuilder o = new StringBuilder();
         o.append("rank,part,verdict,effective_cost,currency,error_v,margin,worst_case_v,rss_v,trimmed,"
                 + "trimmed_worst_case_v,trimmed_rss_v,yield,yield_low,yield_high,limiting_term,pareto,reason\n");
-        Set<String> front = Set.copyOf(r.paretoIds());
+        List<Candidate> frontList = front(r, false);
+        Set<String> front = frontList.stream().map(Candidate::id).collect(java.util.stream.Collectors.toSet());
         int i = 0;
         for (Candidate c : r.candidates().stream().limit(Math.max(0, top)).toList()) {
             YieldResult y = c.budget().yield();
@@ -194,6 +232,11 @@ public final class RankReport {
      * limitingTerm, ...}], rejected[{part, reason}], pareto[ids], advice{...}, caution}.
      */
     public static String json(Ranking r, String stageLabel, String query, int top) {
+        return json(r, stageLabel, query, top, false);
+    }
+
+    /** @param allOnFront as for {@link #text(Ranking, String, String, int, int, boolean)} */
+    public static String json(Ranking r, String stageLabel, String query, int top, boolean allOnFront) {
         ObjectNode o = JsonSupport.object();
         JsonSupport.put(o, "stage", stageLabel);
         JsonSupport.put(o, "query", query);
@@ -212,7 +255,7 @@ public final class RankReport {
             n.put("reason", x.reason());
         }
         ArrayNode pareto = o.putArray("pareto");
-        r.paretoIds().forEach(pareto::add);
+        front(r, allOnFront).forEach(c -> pareto.add(c.id()));
         o.set("advice", advice(r.advice()));
         return JsonSupport.render(o);
     }
@@ -241,6 +284,7 @@ public final class RankReport {
         ArrayNode est = n.putArray("estimatedTerms");
         c.estimatedTerms().forEach(t -> est.add(t.key()));
         n.put("selfCorrecting", c.part().selfCorrecting());
+        Uncounted.put(n, c.budget().notCounted());
         ArrayNode warnings = n.putArray("warnings");
         c.budget().warnings().forEach(warnings::add);
         return n;

@@ -21,7 +21,12 @@ public final class SufficesReport {
     public static String text(Sufficiency s, String stageLabel, int width) {
         Budget b = s.budget();
         StringBuilder o = new StringBuilder();
-        o.append(s.answer()).append('\n').append('\n');
+        o.append(s.answer()).append('\n');
+        String left = Uncounted.words(b.notCounted());
+        if (!left.isEmpty()) {
+            o.append(s.yes() ? "But " : "And ").append(left).append('\n');
+        }
+        o.append('\n');
         o.append(StageLine.of(b.stage(), stageLabel)).append('\n');
         TextTable t = new TextTable().left("").flex("");
         t.row("worst-case", Figures.volts(b.worstCaseV()) + " of " + Figures.volts(b.limitV()) + share(b.worstCaseV(), b.limitV()));
@@ -33,7 +38,9 @@ public final class SufficesReport {
         }
         TermResult lim = b.limitingTerm() == null ? null : b.term(b.limitingTerm());
         t.row("largest term", lim == null ? Figures.NONE : lim.label() + ", " + Figures.volts(lim.outputV()) + share(lim.outputV(), b.limitV()));
-        t.row("verdict", b.constraintsMet() ? b.verdict().key() : "rejected (hard constraint)");
+        t.row("verdict", (b.constraintsMet() ? b.verdict().key() : "rejected (hard constraint)")
+                + (left.isEmpty() ? "" : "; " + b.notCounted().size() + " term" + (b.notCounted().size() == 1 ? "" : "s")
+                        + " not counted (named above)"));
         t.lines(width).stream().skip(1).forEach(l -> o.append(l).append('\n'));
         o.append('\n').append(Caution.TEXT).append('\n');
         // the answer quotes the part id: no control character gets through
@@ -67,6 +74,7 @@ public final class SufficesReport {
             JsonSupport.put(yn, "high", y.high());
         }
         JsonSupport.put(o, "limitingTerm", b.limitingTerm());
+        Uncounted.put(o, b.notCounted());
         return JsonSupport.render(o);
     }
 }

@@ -30,6 +30,31 @@ final class Answers {
     static final String TEMPERATURE = "temperature";
     /** The limit in any of its forms. */
     static final String LIMIT = "limit";
+    /** The supply in one line: "5 V", "5 V ± 0.25 V" (also "+-"). */
+    static final String SUPPLY = "supply";
+
+    /**
+     * A question or {@code set} id that stands for two keys given as one range, "low..high unit".
+     *
+     * @param id   the combined id
+     * @param low  the key of the lower end
+     * @param high the key of the upper end
+     * @param unit the unit a bare number is read in
+     */
+    record RangeId(String id, String low, String high, Dimension dimension, String unit) {
+    }
+
+    /** Every combined range: one answer sets both ends. */
+    static final List<RangeId> RANGES = List.of(
+            new RangeId(TEMPERATURE, "temperature.min", "temperature.max", Dimension.TEMPERATURE, "C"),
+            new RangeId("band", "band.low", "band.high", Dimension.FREQUENCY, "Hz"),
+            new RangeId("common-mode-range", "common-mode-range.min", "common-mode-range.max", Dimension.VOLTAGE, "V"),
+            new RangeId("output-range", "output-range.min", "output-range.max", Dimension.VOLTAGE, "V"));
+
+    /** The combined range {@code id}, or null. */
+    static RangeId range(String id) {
+        return RANGES.stream().filter(r -> r.id().equals(id)).findFirst().orElse(null);
+    }
 
     /**
      * What an answer changes.
@@ -59,12 +84,17 @@ final class Answers {
         }
     }
 
-    /** Ids a user may answer or set: every stage key plus the combined temperature range. */
+    /** Ids a user may answer or set: every stage key, the combined ranges and the supply in one line. */
     static List<String> ids() {
         List<String> ids = new ArrayList<>();
         for (String p : StageKeys.paths()) {
-            if (p.equals("temperature.min")) {
-                ids.add(TEMPERATURE);
+            for (RangeId r : RANGES) {
+                if (p.equals(r.low())) {
+                    ids.add(r.id());
+                }
+            }
+            if (p.equals("supply.voltage")) {
+                ids.add(SUPPLY);
             }
             ids.add(p);
         }
@@ -84,8 +114,11 @@ final class Answers {
 
     /** The dimension of the value under {@code id}, or null when it is not a quantity. */
     static Dimension dimension(String id) {
-        if (id.equals(TEMPERATURE)) {
-            return Dimension.TEMPERATURE;
+        if (range(id) != null) {
+            return range(id).dimension();
+        }
+        if (id.equals(SUPPLY)) {
+            return Dimension.VOLTAGE;
         }
         StageKeys.Key k = StageKeys.get(id);
         return k == null ? null : k.dimension();
@@ -98,8 +131,11 @@ final class Answers {
      */
     static Change interpret(String id, String text, Map<String, String> current) throws AnswerException {
         String t = text.strip();
-        if (id.equals(TEMPERATURE)) {
-            return temperatureRange(t);
+        if (range(id) != null) {
+            return range(range(id), t);
+        }
+        if (id.equals(SUPPLY) || id.equals("supply.voltage") && PLUS_MINUS.matcher(t).find()) {
+            return supply(t);
         }
         if (id.equals(LIMIT)) {
             return limit(t);
@@ -133,26 +169,75 @@ final class Answers {
     private static final Pattern RANGE = Pattern.compile("^(.+?)\\s*(?:\\.\\.|…|\\bto\\b)\\s*(.+)$");
     private static final Pattern BARE = Pattern.compile("^[-+]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][-+]?\\d+)?$");
 
-    private static Change temperatureRange(String t) throws AnswerException {
+    /** "low..high unit": a bare end takes the other end's unit, or the range's own. */
+    private static Change range(RangeId r, String t) throws AnswerException {
+        String example = Questions.example(r.id());
         Matcher m = RANGE.matcher(t);
         if (!m.matches()) {
-            throw new AnswerException("'" + t + "' is not a range", "write the lowest and highest ambient, such as '-40..85 C'");
+            throw new AnswerException("'" + t + "' is not a range", "write the lower and upper end, such as '" + example + "'");
         }
         String lo = m.group(1).strip();
         String hi = m.group(2).strip();
-        String unit = unitOf(hi) != null ? unitOf(hi) : unitOf(lo) != null ? unitOf(lo) : "C";
-        lo = BARE.matcher(lo).matches() ? lo + " " + unit : lo;
-        hi = BARE.matcher(hi).matches() ? hi + " " + unit : hi;
+        hi = withUnit(hi, r);
+        String unit = unitOf(hi) != null && parses("1 " + unitOf(hi), r.dimension()) ? unitOf(hi) : r.unit();
+        lo = BARE.matcher(lo).matches() ? lo + " " + unit : withUnit(lo, r);
         for (String side : List.of(lo, hi)) {
             try {
-                Units.parse(side, Dimension.TEMPERATURE);
+                Units.parse(side, r.dimension());
             } catch (UnitException e) {
-                throw new AnswerException(e.problem(), "write the range such as '-40..85 C'");
+                throw new AnswerException(e.problem(), "write the range such as '" + example + "'");
             }
         }
         Map<String, String> put = new LinkedHashMap<>();
-        put.put("temperature.min", lo);
-        put.put("temperature.max", hi);
+        put.put(r.low(), lo);
+        put.put(r.high(), hi);
+        return new Change(put, Set.of(), null);
+    }
+
+    /** One end as typed, or with the range's unit after it: "10" and "1k" are read as "10 Hz" and "1kHz" for a band. */
+    private static String withUnit(String side, RangeId r) {
+        if (BARE.matcher(side).matches()) {
+            return side + " " + r.unit();
+        }
+        if (!parses(side, r.dimension()) && parses(side + r.unit(), r.dimension())) {
+            return side + r.unit(); // a prefix alone: "1k"
+        }
+        return side;
+    }
+
+    private static boolean parses(String text, Dimension d) {
+        try {
+            Units.parse(text, d);
+            return true;
+        } catch (UnitException e) {
+            return false;
+        }
+    }
+
+    private static final Pattern PLUS_MINUS = Pattern.compile("±|\\+-|\\+/-");
+
+    /** "5 V", "5 V ± 0.25 V", "5 V +- 0.25 V", "5 ± 0.25 V": the total supply and its peak change. */
+    private static Change supply(String t) throws AnswerException {
+        String[] sides = PLUS_MINUS.split(t, -1);
+        if (sides.length > 2 || sides[0].isBlank() || sides.length == 2 && sides[1].isBlank()) {
+            throw new AnswerException("'" + t + "' is not a supply", "write the total supply and its peak change, such as '5 V ± 0.25 V'");
+        }
+        String v = sides[0].strip();
+        String dv = sides.length == 2 ? sides[1].strip() : null;
+        String unit = dv != null && unitOf(dv) != null ? unitOf(dv) : unitOf(v) != null ? unitOf(v) : "V";
+        v = BARE.matcher(v).matches() ? v + " " + unit : v;
+        Map<String, String> put = new LinkedHashMap<>();
+        put.put("supply.voltage", v);
+        if (dv != null) {
+            put.put("supply.variation", BARE.matcher(dv).matches() ? dv + " " + unit : dv);
+        }
+        for (String side : put.values()) {
+            try {
+                Units.parse(side, Dimension.VOLTAGE);
+            } catch (UnitException e) {
+                throw new AnswerException(e.problem(), "write the supply such as '5 V ± 0.25 V'");
+            }
+        }
         return new Change(put, Set.of(), null);
     }
 

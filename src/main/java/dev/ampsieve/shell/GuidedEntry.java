@@ -61,7 +61,8 @@ final class GuidedEntry {
 
     /** Runs the questions starting from {@code start}; returns the new answers. */
     Map<String, String> run(Map<String, String> start) throws Cancelled {
-        out.println(ctx.fold("Describe the stage: gain, temperature range and error limit first, then the rest."));
+        out.println(ctx.fold("Describe the stage: gain, temperature range, error limit, full-scale output and supply first "
+                + "(they decide the verdict), then the rest."));
         out.println(ctx.fold("Enter keeps the value in [ ], ? explains a question, 'done' keeps all remaining values, "
                 + "Ctrl-C stops and keeps the answers given.", paint::dim));
         Map<String, String> a = new LinkedHashMap<>(start);
@@ -69,13 +70,15 @@ final class GuidedEntry {
         reader.setVariable(LineReader.DISABLE_HISTORY, true); // answers are not commands to recall
         try {
             List<String> order = Questions.order();
+            boolean restSaid = false;
             for (int i = 0; i < order.size() && !finishing; i++) {
                 String id = order.get(i);
                 if (!Questions.applies(id, a)) {
                     continue;
                 }
-                if (i == Questions.FIRST.size()) {
-                    out.println(paint.dim("The rest have defaults; Enter keeps them, 'done' keeps them all."));
+                if (i >= Questions.FIRST.size() && !restSaid) {
+                    restSaid = true;
+                    out.println(ctx.fold("The rest have defaults; Enter keeps them, 'done' keeps them all.", paint::dim));
                 }
                 try {
                     a = ask(id, a, position(order, i, a));
@@ -118,6 +121,11 @@ final class GuidedEntry {
                 continue;
             }
             if (line.equalsIgnoreCase(DONE)) {
+                if (Questions.FIRST.contains(id)) {
+                    say("  'done' comes after the supply questions", ": they decide which error terms count. "
+                            + (Questions.required(id) && current == null ? "" : "Enter keeps [" + shown + "]."));
+                    continue;
+                }
                 String missing = missingRequired(a);
                 if (missing != null) {
                     say("  " + missing + " is needed before the rest can take defaults", "; " + Questions.why(missing));
@@ -131,6 +139,7 @@ final class GuidedEntry {
                     say("  " + id + " has no default", "; " + Questions.why(id));
                     continue;
                 }
+                leftOut(id, a);
                 return a;
             }
             Answers.Change change;
@@ -157,6 +166,7 @@ final class GuidedEntry {
             if (change.note() != null) {
                 out.println(ctx.fold("  " + change.note(), paint::dim));
             }
+            leftOut(id, next);
             if (!next.equals(a)) {
                 answered.add(id);
             }
@@ -165,6 +175,31 @@ final class GuidedEntry {
     }
 
     private static final String FULL_SCALE = "full-scale-output";
+
+    /** Says at once which terms an absent value leaves out, so accepting a default never hides it. */
+    private void leftOut(String id, Map<String, String> a) {
+        String terms = null;
+        if (id.equals(FULL_SCALE) && a.get(FULL_SCALE) == null) {
+            terms = "without it the open-loop gain, bandwidth and resistor terms are not counted";
+        } else if (id.equals("supply.variation") && zero(a.get("supply.variation"))) {
+            terms = "without it supply rejection is not counted";
+        }
+        if (terms != null) {
+            out.println(ctx.fold("  " + terms + "; the verdict will say so.", paint::dim));
+        }
+    }
+
+    /** Absent, or a zero of any unit. */
+    private static boolean zero(String value) {
+        if (value == null) {
+            return true;
+        }
+        try {
+            return dev.ampsieve.units.Units.parse(value, dev.ampsieve.units.Dimension.VOLTAGE) == 0;
+        } catch (dev.ampsieve.units.UnitException e) {
+            return false;
+        }
+    }
 
     /** "[4/21] gain  why it is asked", folded so the reason hangs under itself; a long key gets a line of its own. */
     private void header(String head, String why) {
@@ -205,7 +240,8 @@ final class GuidedEntry {
         out.println(ctx.fold(needed ? "  no default: an answer is needed" : "  default: " + Questions.defaultText(id)
                 + (shown.equals(Questions.defaultText(id)) ? "" : "; now: " + shown)));
         out.println(ctx.fold("  " + (needed ? "" : "Enter keeps [" + shown + "]; ")
-                + "'done' keeps all remaining values; Ctrl-C stops and keeps the answers given.", paint::dim));
+                + (Questions.FIRST.contains(id) ? "'done' comes after the supply questions" : "'done' keeps all remaining values")
+                + "; Ctrl-C stops and keeps the answers given.", paint::dim));
     }
 
     /** The first required question still unanswered, or null. */

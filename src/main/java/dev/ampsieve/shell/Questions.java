@@ -15,30 +15,48 @@ final class Questions {
     private Questions() {
     }
 
-    /** Asked first: without them no part can be judged. */
-    static final List<String> FIRST = List.of("gain", Answers.TEMPERATURE, Answers.LIMIT);
+    /**
+     * Asked first, and 'done' is offered only after them: each decides the verdict, and an
+     * absent full-scale output or supply variation leaves error terms out (the verdict line
+     * then says which).
+     */
+    static final List<String> FIRST = List.of("gain", Answers.TEMPERATURE, Answers.LIMIT, "full-scale-output",
+            "supply.voltage", "supply.variation");
 
-    /** Left to {@code set}: derived (rg), detailed headroom, and statistics settings with sound defaults. */
-    static final Set<String> NOT_ASKED = Set.of("rg", "common-mode-range.min", "common-mode-range.max",
-            "output-range.min", "output-range.max", "max-to-sigma", "trials", "seed");
+    /** Asked after the supply when it is given: on a single supply the mid-supply default is rarely right. */
+    static final List<String> HEADROOM = List.of("output-range", "common-mode-range");
+
+    /** Left to {@code set}: derived (rg) and statistics settings with sound defaults. */
+    static final Set<String> NOT_ASKED = Set.of("rg", "max-to-sigma", "trials", "seed");
 
     /** Only asked when a trim is allowed. */
     static final Set<String> TRIM_DETAILS = Set.of("trim.method", "trim.resolution", "trim.cost");
 
-    /** Every question, in order. */
+    /** Every question, in order; the combined ranges stand for their two keys. */
     static List<String> order() {
         List<String> out = new ArrayList<>(FIRST);
+        out.addAll(HEADROOM);
         for (String p : StageKeys.paths()) {
-            boolean coveredByFirst = p.equals("gain") || p.startsWith("temperature.") || p.equals("limit") || p.startsWith("limit.");
-            if (!coveredByFirst && !NOT_ASKED.contains(p)) {
-                out.add(p);
+            if (covered(p) || NOT_ASKED.contains(p)) {
+                continue;
             }
+            out.add(p.equals("band.low") ? "band" : p);
         }
         return out;
     }
 
+    /** Whether a key is asked as part of an earlier question (or, band.high, by the band question). */
+    private static boolean covered(String p) {
+        return p.equals("gain") || p.startsWith("temperature.") || p.equals("limit") || p.startsWith("limit.")
+                || FIRST.contains(p) || p.startsWith("output-range.") || p.startsWith("common-mode-range.")
+                || p.equals("band.high");
+    }
+
     /** Whether {@code id} is asked given the answers so far. */
     static boolean applies(String id, Map<String, String> answers) {
+        if (HEADROOM.contains(id)) {
+            return answers.containsKey("supply.voltage");
+        }
         return !TRIM_DETAILS.contains(id) || "true".equals(answers.get("trim.allowed"));
     }
 
@@ -51,6 +69,21 @@ final class Questions {
         if (id.equals(Answers.TEMPERATURE)) {
             return "drift and FET bias currents grow with the distance from 25 C; the part must be rated over the whole ambient range";
         }
+        if (id.equals("band")) {
+            return "the signal band: 1/f noise is integrated from its low end; at its high end the closed-loop gain falls "
+                    + "and the slew rate is set";
+        }
+        if (id.equals("output-range")) {
+            return "the output voltages needed, volts above the negative rail; the part's output must reach them. "
+                    + "On a single supply the signal rarely sits at mid-supply, the default";
+        }
+        if (id.equals("common-mode-range")) {
+            return "the input voltages needed, volts above the negative rail; the part's inputs must work there. "
+                    + "On a single supply the inputs rarely sit at mid-supply, the default";
+        }
+        if (id.equals(Answers.SUPPLY)) {
+            return "the total supply the part must run from, and its peak change (multiplied by the supply rejection)";
+        }
         if (id.equals(Answers.LIMIT)) {
             return "the largest error allowed; every part is judged against it";
         }
@@ -61,6 +94,21 @@ final class Questions {
         if (id.equals(Answers.TEMPERATURE)) {
             return "-40..85 C";
         }
+        if (id.equals("band")) {
+            return "0.1..10 Hz";
+        }
+        if (id.equals("output-range")) {
+            return "0.1..4.9 V";
+        }
+        if (id.equals("common-mode-range")) {
+            return "0.5..2.5 V";
+        }
+        if (id.equals(Answers.SUPPLY)) {
+            return "5 V ± 0.25 V (or 5 V +- 0.25 V)";
+        }
+        if (id.equals("supply.voltage")) {
+            return "5 V, or with its change: 5 V ± 0.25 V";
+        }
         if (id.equals(Answers.LIMIT)) {
             return "1 mV (at the output), 10 uV input, 0.1 % (of full-scale-output), 0.5 lsb 16 bits 2.5 V";
         }
@@ -69,8 +117,15 @@ final class Questions {
 
     /** The default in words, as the key table states it. */
     static String defaultText(String id) {
-        if (id.equals(Answers.TEMPERATURE)) {
-            return StageKeys.get("temperature.min").defaultText() + ".." + StageKeys.get("temperature.max").defaultText();
+        Answers.RangeId r = Answers.range(id);
+        if (r != null) {
+            String lo = StageKeys.get(r.low()).defaultText();
+            String hi = StageKeys.get(r.high()).defaultText();
+            return lo.startsWith("mid-supply") ? "mid-supply +/- " + (id.equals("output-range") ? "full-scale-output" : "common-mode-swing")
+                    : lo.replace(" " + r.unit(), "") + ".." + hi;
+        }
+        if (id.equals(Answers.SUPPLY)) {
+            return StageKeys.get("supply.voltage").defaultText();
         }
         return StageKeys.get(id).defaultText();
     }
@@ -81,14 +136,20 @@ final class Questions {
 
     /** The value the answers hold for {@code id}, in the shorthand a user would type; null when unanswered. */
     static String current(String id, Map<String, String> a) {
-        if (id.equals(Answers.TEMPERATURE)) {
-            String lo = a.get("temperature.min");
-            String hi = a.get("temperature.max");
+        Answers.RangeId r = Answers.range(id);
+        if (r != null) {
+            String lo = a.get(r.low());
+            String hi = a.get(r.high());
             if (lo == null && hi == null) {
                 return null;
             }
-            return (lo != null ? lo : StageKeys.get("temperature.min").defaultText()) + ".."
-                    + (hi != null ? hi : StageKeys.get("temperature.max").defaultText());
+            return (lo != null ? lo : StageKeys.get(r.low()).defaultText()) + ".."
+                    + (hi != null ? hi : StageKeys.get(r.high()).defaultText());
+        }
+        if (id.equals(Answers.SUPPLY)) {
+            String v = a.get("supply.voltage");
+            String dv = a.get("supply.variation");
+            return v == null ? null : dv == null ? v : v + " ± " + dv;
         }
         if (id.equals(Answers.LIMIT)) {
             if (a.containsKey("limit")) {

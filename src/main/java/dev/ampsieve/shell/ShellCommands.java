@@ -153,9 +153,12 @@ final class ShellCommands {
         }
     }
 
-    @Command(name = "set", description = "Change one stage value, checked with its unit. Examples: set limit 10 uV input; set temperature -40..85 C; set rf 100k.")
+    @Command(name = "set", description = "Change one stage value, checked with its unit. Examples: set limit 10 uV input; "
+            + "set temperature -40..85 C; set output-range 0.1..2.4 V; set band 0.1..10 Hz; set supply 5 V ± 0.25 V; "
+            + "set supply.variation 0.25 V; set rf 100k.")
     static final class SetKey extends Base {
-        @Parameters(index = "0", paramLabel = "KEY", description = "A stage key (Tab lists them), or 'temperature' for both ends.")
+        @Parameters(index = "0", paramLabel = "KEY", description = "A stage key (Tab lists them; a block's key as block.key), or a range for both ends: "
+                + "temperature, band, output-range, common-mode-range; or supply (voltage ± variation).")
         String key;
 
         @Parameters(index = "1..*", arity = "1..*", paramLabel = "VALUE", description = "The value with its unit.")
@@ -215,8 +218,12 @@ final class ShellCommands {
                 } catch (AnswerException e) {
                     throw new UserException(k + ": " + e.line(), ExitCode.USAGE);
                 }
-                if (id.equals(Answers.TEMPERATURE)) {
-                    next.keySet().removeIf(p -> p.startsWith("temperature."));
+                Answers.RangeId r = Answers.range(id);
+                if (r != null) {
+                    next.remove(r.low());
+                    next.remove(r.high());
+                } else if (id.equals(Answers.SUPPLY)) {
+                    next.keySet().removeIf(p -> p.startsWith("supply."));
                 } else if (id.equals(Answers.LIMIT)) {
                     next.keySet().removeIf(p -> p.equals("limit") || p.startsWith("limit."));
                 } else {
@@ -286,6 +293,11 @@ final class ShellCommands {
                     + "   (" + s.criterion() + ")");
             out.println("  " + pad("limit at the input", w) + Units.format(limit / s.sourceGain(), Dimension.VOLTAGE));
             out.println("  " + pad("farthest from 25 °C", w) + Units.format(s.deltaT(), Dimension.NUMBER) + " °C");
+            String left = dev.ampsieve.report.Uncounted.ofStage(s);
+            if (!left.isEmpty()) {
+                // accepting a default must not hide a term: the verdicts will say the same
+                out.println(ctx.foldBold("Every verdict: " + left + ".", "Every verdict"));
+            }
             if (!all) {
                 out.println(paint.dim("Other keys keep their defaults: 'show --all' lists them, 'set KEY VALUE' changes one."));
             }
@@ -296,7 +308,8 @@ final class ShellCommands {
         static List<String> displayIds() {
             List<String> out = new ArrayList<>();
             for (String id : Answers.ids()) {
-                if (id.startsWith("temperature.") || id.startsWith("limit.")) {
+                boolean combined = id.equals(Answers.SUPPLY) || Answers.range(id) != null && !id.equals(Answers.TEMPERATURE);
+                if (id.startsWith("temperature.") || id.startsWith("limit.") || combined) {
                     continue;
                 }
                 out.add(id);

@@ -137,8 +137,33 @@ final class ShellCompleter implements Completer {
     private void keys(List<Candidate> out) {
         for (String id : Answers.ids()) {
             String d = Questions.why(id);
-            out.add(new Candidate(id, id, null, d.length() > 60 ? d.substring(0, 57) + "..." : d, null, null, true));
+            out.add(new Candidate(id, id, null, brief(d), null, null, true));
         }
+    }
+
+    /**
+     * A key's reason short enough for the completion menu: its first clause when that fits, else
+     * whole words and an ellipsis, never a word cut in two ('?' at the question gives it in full).
+     */
+    static String brief(String why) {
+        int max = 60;
+        if (why.length() <= max) {
+            return why;
+        }
+        int clause = why.indexOf(';');
+        if (clause > 0 && clause <= max && balanced(why.substring(0, clause))) {
+            return why.substring(0, clause);
+        }
+        int cut = why.lastIndexOf(' ', max - 1);
+        String head = why.substring(0, cut > 0 ? cut : max - 1);
+        if (!balanced(head)) {
+            head = head.substring(0, head.lastIndexOf('(')).strip(); // no bracket left open
+        }
+        return head.replaceAll("[,:;(]+$", "") + "…";
+    }
+
+    private static boolean balanced(String s) {
+        return s.chars().filter(c -> c == '(').count() == s.chars().filter(c -> c == ')').count();
     }
 
     /** Index among the positional words before {@code idx}, skipping options and their values. */

@@ -130,8 +130,10 @@ public final class StageKeys {
             q("source-resistance", Dimension.RESISTANCE, "0 ohm", "350 ohm",
                     "bias current and current noise flow through it; its thermal noise adds"),
             q("balance-resistance", Dimension.RESISTANCE, "0 ohm", "1 kohm",
-                    "a resistor from the + input to the reference; equal to rf||rg it cancels matched bias currents"),
-            q("full-scale-output", Dimension.VOLTAGE, "none", "2.5 V",
+                    "a resistor from the + input to the reference, in series with source-resistance (non-inverting, "
+                            + "follower): matched bias currents cancel when source-resistance + balance-resistance equals "
+                            + "rf||rg (inverting: when balance-resistance equals rf||(rg + source-resistance))"),
+            q("full-scale-output", Dimension.VOLTAGE, "none (open-loop gain, bandwidth and resistor terms not counted)", "2.5 V",
                     "the peak output excursion from the output's zero (a sine's amplitude, not its span): gain errors "
                             + "(open-loop gain, bandwidth, resistors) scale with it, the slew rate needed is 2 pi x band.high x it, "
                             + "and without output-range the output must reach mid-supply +/- it"),
@@ -146,10 +148,12 @@ public final class StageKeys {
                             + "(1, an RC: pi/2 x band.high; 2: 1.11 x; 3: 1.05 x), never beyond pi/2 x GBW/NG; 'none' (the "
                             + "default, which never understates the noise): only the closed-loop bandwidth GBW/NG limits it"),
             q("supply.voltage", Dimension.VOLTAGE, "none", "5 V", "the part must run from this total supply"),
-            q("supply.variation", Dimension.VOLTAGE, "0 V", "0.25 V",
-                    "peak supply change; multiplied by the part's supply rejection"),
+            q("supply.variation", Dimension.VOLTAGE, "0 V (supply rejection not counted)", "0.25 V",
+                    "peak supply change, times the part's supply rejection; a regulator's tolerance plus "
+                            + "ripple (5 % of the supply is common practice for a plain linear regulator)"),
             q("common-mode-swing", Dimension.VOLTAGE,
-                    "non-inverting: full-scale-output/gain; follower: full-scale-output; inverting: 0", "1 V",
+                    "non-inverting: full-scale-output/gain; follower: full-scale-output; inverting: 0; "
+                            + "without full-scale-output 0 (common-mode rejection not counted)", "1 V",
                     "peak common-mode change at the inputs (not peak-to-peak); multiplied by the part's common-mode "
                             + "rejection, and without common-mode-range the inputs must reach mid-supply +/- it"),
             q("common-mode-range.min", Dimension.VOLTAGE, "mid-supply - common-mode-swing", "0.5 V",
@@ -160,11 +164,11 @@ public final class StageKeys {
                     "lowest output voltage needed, volts above the negative rail"),
             q("output-range.max", Dimension.VOLTAGE, "mid-supply + full-scale-output", "4.9 V",
                     "highest output voltage needed, volts above the negative rail"),
-            q("resistor-ratio.tolerance", Dimension.RATIO, "0", "0.1 %",
+            q("resistor-ratio.tolerance", Dimension.RATIO, "0 (with tempco 0: resistor ratio not counted)", "0.1 %",
                     "the rf/rg ratio error becomes a gain error at full scale"),
             q("resistor-ratio.tempco", Dimension.RATIO_DRIFT, "0", "10 ppm/C",
                     "ratio change with temperature; a trim at 25 C cannot remove it"),
-            q("service-life", Dimension.TIME, "0 h", "10 y",
+            q("service-life", Dimension.TIME, "0 h (long-term drift not counted)", "10 y",
                     "long-term offset drift grows with the square root of operating time"),
             k("criterion", Kind.CRITERION, CRITERIA, "worst-case", "yield 99.9 %",
                     "worst-case sum, root-sum-square, or the share of built units that must pass"),

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import org.junit.jupiter.api.Test;
@@ -23,6 +24,29 @@ class AnswersTest {
                 Answers.interpret("temperature", "233.15..358.15 K", Map.of()).put());
         AnswerException e = assertThrows(AnswerException.class, () -> Answers.interpret("temperature", "85", Map.of()));
         assertTrue(e.line().contains("not a range"), e.line());
+    }
+
+    @Test
+    void rangesAndTheSupplyInOneAnswer() throws Exception {
+        assertEquals(Map.of("output-range.min", "0.1 V", "output-range.max", "2.4 V"),
+                Answers.interpret("output-range", "0.1..2.4 V", Map.of()).put());
+        assertEquals(Map.of("common-mode-range.min", "1 V", "common-mode-range.max", "2 V"),
+                Answers.interpret("common-mode-range", "1..2", Map.of()).put());
+        assertEquals(Map.of("band.low", "0.1 Hz", "band.high", "10 Hz"), Answers.interpret("band", "0.1..10 Hz", Map.of()).put());
+        // "1..10 kHz": a bare end takes the other end's unit, prefix and all
+        assertEquals(Map.of("band.low", "1 kHz", "band.high", "10 kHz"), Answers.interpret("band", "1..10 kHz", Map.of()).put());
+        assertEquals(Map.of("band.low", "0.1 Hz", "band.high", "1kHz"), Answers.interpret("band", "0.1 Hz..1k", Map.of()).put());
+        for (String typed : List.of("5 V ± 0.25 V", "5 V +- 0.25 V", "5 +/- 0.25 V", "5V±0.25V")) {
+            Map<String, String> put = Answers.interpret("supply", typed, Map.of()).put();
+            assertEquals(5.0, dev.ampsieve.units.Units.parse(put.get("supply.voltage"), dev.ampsieve.units.Dimension.VOLTAGE), typed);
+            assertEquals(0.25, dev.ampsieve.units.Units.parse(put.get("supply.variation"), dev.ampsieve.units.Dimension.VOLTAGE),
+                    1e-15, typed);
+        }
+        assertEquals(Map.of("supply.voltage", "12 V"), Answers.interpret("supply", "12", Map.of()).put());
+        assertEquals(Map.of("supply.voltage", "5 V", "supply.variation", "0.25 V"),
+                Answers.interpret("supply.voltage", "5 V ± 0.25 V", Map.of()).put());
+        assertThrows(AnswerException.class, () -> Answers.interpret("supply", "5 V ±", Map.of()));
+        assertThrows(AnswerException.class, () -> Answers.interpret("output-range", "2.4 V", Map.of()));
     }
 
     @Test

@@ -22,11 +22,15 @@ class GuidedEntryTest {
     @Test
     void threeAnswersThenDoneMakeTheCurrentStage() throws Exception {
         Path file = dir.resolve("bridge.yaml");
-        String printed = Sessions.run("ask", "100", "-40..85 C", "1 mV", "done", "save " + file);
+        String printed = Sessions.run("ask", "100", "-40..85 C", "1 mV", "5 V", "12 V", "0.6 V", "done",
+                "save " + file);
 
-        assertTrue(printed.contains("[1/22] gain"), printed);
+        // 6 first questions and 15 more (Questions.order); the 2 ranges join once a supply is given
+        assertTrue(printed.contains("[1/21] gain"), printed);
+        assertTrue(printed.contains("[7/23] output-range"), printed);
         assertTrue(printed.contains("gain [required] >"), printed);
-        assertTrue(printed.contains("temperature [0 C..70 C] >"), printed);
+        assertTrue(printed.contains("temperature [0..70 C] >"), printed);
+        assertTrue(printed.contains("output-range [mid-supply +/- full-scale-output] >"), printed);
         // the derived values: non-inverting gain 100 is noise gain 1 + rf/rg = 100 (Stage.noiseGain)
         assertTrue(printed.matches("(?s).*noise gain\\s+100\\s.*"), printed);
         assertTrue(printed.matches("(?s).*limit at the output\\s+1\\.00 mV.*"), printed);
@@ -40,13 +44,34 @@ class GuidedEntryTest {
         assertEquals(85.0, s.tMax());
         assertEquals(Limit.Kind.OUTPUT, s.limit().kind());
         assertEquals(1e-3, s.limitVolts(), 1e-15);
+        assertEquals(5.0, s.fullScaleOutput());
+        assertEquals(12.0, s.supplyVoltage());
+        assertEquals(0.6, s.supplyVariation(), 1e-15);
+    }
+
+    @Test
+    void aSupplyBringsTheRangeQuestionsAndEachTakesARangeInOneAnswer() throws Exception {
+        Path file = dir.resolve("single.yaml");
+        String printed = Sessions.run("ask", "100", "", "1 mV", "2 V", "5 V ± 0.25 V", "", "0.1..4.9 V", "0.5..2.5",
+                "", "", "", "", "0.1 Hz..1k", "done", "save " + file);
+        assertTrue(printed.contains("supply.variation [0.25 V] >"), printed); // the ± answer gave it
+        assertTrue(Flat.of(printed).contains("On a single supply the signal rarely sits at mid-supply"), printed);
+        Stage s = StageLoader.load(file);
+        assertEquals(5.0, s.supplyVoltage());
+        assertEquals(0.25, s.supplyVariation(), 1e-15);
+        assertEquals(0.1, s.outputRange().min(), 1e-15);
+        assertEquals(4.9, s.outputRange().max(), 1e-15);
+        assertEquals(0.5, s.commonModeRange().min(), 1e-15); // bare numbers read in volts
+        assertEquals(2.5, s.commonModeRange().max(), 1e-15);
+        assertEquals(0.1, s.bandLow(), 1e-15); // band: one range, after topology, rf, source and balance resistance
+        assertEquals(1e3, s.bandHigh(), 1e-12);
     }
 
     @Test
     void aBadAnswerIsAskedAgainWithTheReason() throws Exception {
         Path file = dir.resolve("s.yaml");
-        String printed = Sessions.run("ask", "abc", "40 dB", "85..-40", "-40 to 125", "2 V/us", "10 uV input", "done",
-                "save " + file);
+        String printed = Sessions.run("ask", "abc", "40 dB", "85..-40", "-40 to 125", "2 V/us", "10 uV input", "", "", "",
+                "done", "save " + file);
 
         String flat = Flat.of(printed);
         assertTrue(flat.contains("not usable: 'abc' is not a gain; write a plain number such as '100', or decibels"), printed);
@@ -64,12 +89,14 @@ class GuidedEntryTest {
     @Test
     void questionMarkExplainsAndEnterKeepsTheDefault() throws Exception {
         Path file = dir.resolve("s.yaml");
-        String printed = Sessions.run("ask", "10", "?", "", "0.1 %", "2.5 V", "", "1 kohm", "done", "save " + file);
+        String printed = Sessions.run("ask", "10", "?", "", "0.1 %", "2.5 V", "", "", "", "", "1 kohm", "done",
+                "save " + file);
 
         assertTrue(printed.contains("for example: -40..85 C"), printed);
-        assertTrue(printed.contains("default: 0 C..70 C"), printed);
+        assertTrue(printed.contains("default: 0..70 C"), printed);
         // a share of full scale needs the full-scale output: asked right away
-        assertTrue(printed.contains("full-scale-output [none] >"), printed);
+        assertTrue(printed.contains("full-scale-output [none (open-loop gain, bandwidth and resistor terms not counted)] >"),
+                printed);
 
         Stage s = StageLoader.load(file);
         assertEquals(0.0, s.tMin());
@@ -130,8 +157,8 @@ class GuidedEntryTest {
         }
         // the temperature reason is longer than a line: it hangs under itself after the key
         String why = Questions.why(Answers.TEMPERATURE);
-        assertTrue(why.length() > 80 - "[2/22] temperature  ".length(), why); // the check below means something
-        assertTrue(flat.contains("[2/22] temperature  drift and FET bias currents"), printed);
+        assertTrue(why.length() > 80 - "[2/21] temperature  ".length(), why); // the check below means something
+        assertTrue(flat.contains("[2/21] temperature  drift and FET bias currents"), printed);
         assertTrue(flat.matches("(?s).*\\n {20}\\S.*"), printed); // a continuation under the reason's first word
         assertTrue(Flat.of(flat).contains("temperature: " + why + "."), printed);
     }
@@ -139,8 +166,8 @@ class GuidedEntryTest {
     @Test
     void askingAgainStartsFromTheCurrentAnswersAndCancelKeepsThem() throws Exception {
         Path file = dir.resolve("s.yaml");
-        String printed = Sessions.run("set gain 20", "set limit 5 mV", "ask", "", "", "\u0003", "ask", "", "", "", "inv",
-                "done", "save " + file);
+        String printed = Sessions.run("set gain 20", "set limit 5 mV", "ask", "", "", "\u0003", "ask", "", "", "", "", "", "",
+                "inv", "done", "save " + file);
         assertTrue(printed.contains("gain [20] >"), printed);
         assertTrue(printed.contains("limit [5 mV] >"), printed);
         assertTrue(printed.contains("Stopped; the current stage is as it was."), printed);
@@ -154,15 +181,16 @@ class GuidedEntryTest {
     @Test
     void gainOneBecomesAFollower() throws Exception {
         Path file = dir.resolve("s.yaml");
-        String printed = Sessions.run("ask", "1", "", "1 mV", "done", "save " + file);
+        String printed = Sessions.run("ask", "1", "", "1 mV", "", "", "", "done", "save " + file);
         assertTrue(printed.contains("gain 1: taken as a follower"), printed);
         assertEquals(Topology.FOLLOWER, StageLoader.load(file).topology());
     }
 
     @Test
-    void doneBeforeTheLimitIsRefused() {
-        String printed = Sessions.run("ask", "100", "done", "", "1 mV", "done", "show");
-        assertTrue(printed.contains("limit is needed before the rest can take defaults"), printed);
+    void doneIsRefusedUntilTheFullScaleAndSupplyQuestions() {
+        String printed = Sessions.run("ask", "100", "done", "", "1 mV", "done", "", "", "", "done", "show");
+        // refused at the temperature and at the full-scale output question
+        assertEquals(2, printed.split("'done' comes after the supply questions", -1).length - 1, printed);
         assertTrue(printed.matches("(?s).*limit at the output\\s+1\\.00 mV.*"), printed);
         assertFalse(printed.contains("Cancelled"), printed);
     }

@@ -129,4 +129,24 @@ class ShellCompleterTest {
         assertEquals(List.of("true", "false"), complete(""));
         assertFalse(complete("").contains("rank"));
     }
+
+    @Test
+    void keyReasonsInTheMenuAreWholeWordsWithNoBracketLeftOpen() {
+        for (String id : Answers.ids()) {
+            String why = Questions.why(id);
+            String b = ShellCompleter.brief(why);
+            org.junit.jupiter.api.Assertions.assertTrue(b.length() <= 60, id + ": " + b);
+            long open = b.chars().filter(c -> c == '(').count();
+            long close = b.chars().filter(c -> c == ')').count();
+            org.junit.jupiter.api.Assertions.assertEquals(open, close, id + ": " + b);
+            String body = b.endsWith("…") ? b.substring(0, b.length() - 1) : b;
+            // the menu text is the reason's start, cut only where a word ends
+            org.junit.jupiter.api.Assertions.assertTrue(why.startsWith(body), id + ": " + b);
+            org.junit.jupiter.api.Assertions.assertTrue(body.length() == why.length()
+                    || !Character.isLetterOrDigit(why.charAt(body.length())), id + ": " + b);
+        }
+        // by hand: the supply variation's first clause is 53 characters, under the menu's 60
+        org.junit.jupiter.api.Assertions.assertEquals("peak supply change, times the part's supply rejection",
+                ShellCompleter.brief(Questions.why("supply.variation")));
+    }
 }

@@ -138,6 +138,47 @@ class ShellSessionTest {
     }
 
     @Test
+    void aNewUserAcceptingEveryDefaultIsToldWhatNoVerdictCounts() {
+        // the session: gain 200, 0..70 °C, 2 mV, Enter at full scale and supply, 'done' at the first chance
+        String printed = session("ask", "200", "0..70", "2 mV", "", "", "", "done", "rank --top 3");
+        String flat = dev.ampsieve.testing.Flat.of(printed);
+        String left = "open-loop gain, closed-loop bandwidth and resistor ratio not counted: no full-scale-output; "
+                + "supply rejection not counted: no supply.variation; common-mode rejection not counted: "
+                + "no common-mode-swing; long-term drift not counted: no service-life";
+        assertTrue(flat.contains("without it the open-loop gain, bandwidth and resistor terms are not counted; "
+                + "the verdict will say so."), printed);
+        assertTrue(flat.contains("without it supply rejection is not counted"), printed);
+        assertTrue(flat.contains("Every verdict: " + left + "."), printed);
+        assertTrue(flat.contains("Every verdict: " + left), printed); // rank, under its table
+    }
+
+    @Test
+    void setTakesRangesAndTheSupplyInOneLine() throws Exception {
+        Path file = shared.resolve("ranges.yaml");
+        Files.deleteIfExists(file);
+        String printed = session("set gain 10", "set limit 1 mV", "set output-range 0.1..2.4 V", "set band 0.1..10 Hz",
+                "set supply 5 V ± 0.25 V", "set common-mode-range 1..2", "save " + file);
+        assertTrue(printed.contains("output-range = 0.1 V..2.4 V"), printed);
+        assertTrue(printed.contains("supply = 5 V ± 0.25 V"), printed);
+        dev.ampsieve.stage.Stage s = dev.ampsieve.stage.StageLoader.load(file);
+        assertEquals(0.1, s.outputRange().min(), 1e-12);
+        assertEquals(2.4, s.outputRange().max(), 1e-12);
+        assertEquals(1.0, s.commonModeRange().min(), 1e-12); // a bare range is read in volts
+        assertEquals(2.0, s.commonModeRange().max(), 1e-12);
+        assertEquals(0.1, s.bandLow(), 1e-12);
+        assertEquals(10.0, s.bandHigh(), 1e-12);
+        assertEquals(5.0, s.supplyVoltage());
+        assertEquals(0.25, s.supplyVariation(), 1e-12);
+
+        Files.delete(file);
+        session("set gain 10", "set limit 1 mV", "set supply 12 V +- 0.6 V",
+                "set supply.variation 0.3 V", "save " + file);
+        s = dev.ampsieve.stage.StageLoader.load(file);
+        assertEquals(12.0, s.supplyVoltage());
+        assertEquals(0.3, s.supplyVariation(), 1e-12); // the nested key form replaces the variation alone
+    }
+
+    @Test
     void aFailurePrintsOneLineAndTheShellGoesOn() {
         String printed = session("rnak", "budget", "budget nope --stage nowhere.yaml", "show --bogus", "help");
         assertTrue(printed.contains("unknown command 'rnak'; did you mean 'rank'? ('help' lists the commands)"), printed);
