@@ -74,10 +74,8 @@ public record NotCounted(String term, Reason reason) {
                 case ResistorTerm.KEY -> s.topology() == Topology.FOLLOWER ? null
                         : noFullScale ? Reason.NO_FULL_SCALE_OUTPUT
                         : s.ratioTolerance() == 0 && s.ratioTempco() == 0 ? Reason.NO_RESISTOR_TOLERANCE : null;
-                case AgingTerm.KEY -> s.serviceLife() <= 0 ? Reason.NO_SERVICE_LIFE
-                        : p != null && p.longTermDrift() == null ? Reason.NOT_IN_CATALOG : null;
-                case BiasTerm.KEY -> p != null && !given(p.ib()) ? Reason.NOT_IN_CATALOG : null;
-                case NoiseTerm.KEY -> p != null && noiseMissing(s, p) ? Reason.NOT_IN_CATALOG : null;
+                // a missing long-term drift, bias current or noise figure is estimated (Assumed, flagged), not left out
+                case AgingTerm.KEY -> s.serviceLife() <= 0 ? Reason.NO_SERVICE_LIFE : null;
                 default -> null;
             };
             if (r != null) {
@@ -85,17 +83,5 @@ public record NotCounted(String term, Reason reason) {
             }
         }
         return List.copyOf(out);
-    }
-
-    /** A bias current with no figure at all counts as 0 A (PartValues): the term is then left out. */
-    private static boolean given(dev.ampsieve.catalog.Spread ib) {
-        return ib != null && (ib.max() != null || ib.typ() != null || ib.maxOverTemp() != null);
-    }
-
-    /** The amplifier's voltage noise, or its current noise where the stage has resistors, counts as 0 (PartValues). */
-    private static boolean noiseMissing(Stage s, Part p) {
-        dev.ampsieve.catalog.Noise n = p.noise();
-        boolean resistors = s.rPlus() > 0 || s.rMinus() > 0;
-        return n == null || n.en() == null || n.in() == null && resistors;
     }
 }

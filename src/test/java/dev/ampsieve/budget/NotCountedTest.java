@@ -110,10 +110,15 @@ class NotCountedTest {
         Part bare = part("NC-2").gbw(0).build();
         Map<String, Reason> left = of(s, bare);
         assertEquals(Reason.NOT_IN_CATALOG, left.get(BandwidthTerm.KEY));
-        assertEquals(Reason.NOT_IN_CATALOG, left.get(AgingTerm.KEY));
-        assertEquals(Reason.NOT_IN_CATALOG, left.get(BiasTerm.KEY)); // no ib at all: 0 A in the budget
-        assertEquals(Reason.NOT_IN_CATALOG, left.get(NoiseTerm.KEY)); // no en: only resistor noise counted
-        assertEquals(0.0, BudgetCalculator.compute(s, bare).term(BiasTerm.KEY).outputV());
+        // absent long-term drift, bias current and noise are estimated (budget/Assumed), so counted, not left out
+        assertEquals(null, left.get(AgingTerm.KEY));
+        assertEquals(null, left.get(BiasTerm.KEY));
+        assertEquals(null, left.get(NoiseTerm.KEY));
+        // the bipolar estimate IB = IOS = 500 nA (common practice, Assumed): R+ = 0, R- = Rf || Rg = 1 kΩ,
+        // NG 10: 10 x (|0 - 1 kΩ| x 500 nA + (0 + 1 kΩ) x 250 nA) = 10 x 750 µV = 7.5 mV, flagged estimated
+        TermResult bias = BudgetCalculator.compute(s, bare).term(BiasTerm.KEY);
+        assertEquals(7.5e-3, bias.outputV(), 1e-12);
+        assertTrue(bias.estimated());
         assertTrue(!Reason.NOT_IN_CATALOG.ofStage());
 
         Stage ac = stage("gain: 10\nlimit: 1 mV\nfull-scale-output: 1 V\nac-coupled: true\n");
