@@ -255,10 +255,24 @@ final class PartReader {
         return v;
     }
 
+    /** Examples for the fix when a key inside a section is missing, where the dimension's own would mislead. */
+    private static final Map<String, String> SECTION_EXAMPLE = Map.of(
+            path(PRICE, UNIT), "1.20",
+            path(SUPPLY, MIN), "4.5 V",
+            path(SUPPLY, MAX), "36 V",
+            path(TEMPERATURE, MIN), "-40 C",
+            path(TEMPERATURE, MAX), "85 C",
+            path(LONG_TERM_DRIFT, VALUE), "0.5 uV",
+            path(INPUT_HEADROOM, LOW), "1 V",
+            path(INPUT_HEADROOM, HIGH), "1 V",
+            path(OUTPUT_HEADROOM, LOW), "0.2 V",
+            path(OUTPUT_HEADROOM, HIGH), "0.2 V");
+
     /** Errors when {@code key} is missing inside a present section. */
     private void requireIn(Node.Mapping m, String section, String key) {
         Dimension d = CatalogKeys.dimension(path(section, key));
-        f.require(m, join(prefix, section), key, d == null ? "..." : d.example());
+        String example = SECTION_EXAMPLE.get(path(section, key));
+        f.require(m, join(prefix, section), key, example != null ? example : d == null ? "..." : d.example());
     }
 
     /** At most this many price breaks; distributors list a handful. */
