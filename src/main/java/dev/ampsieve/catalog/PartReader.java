@@ -371,9 +371,8 @@ final class PartReader {
             Price.Break lower = price.breaks().get(i - 1);
             Price.Break higher = price.breaks().get(i);
             if (higher.unit() > lower.unit()) {
-                f.warning(seq.at(), field, "the unit price at " + higher.quantity() + " (" + Units.format(higher.unit(),
-                        Dimension.NUMBER) + ") is above the price at " + lower.quantity() + " ("
-                        + Units.format(lower.unit(), Dimension.NUMBER) + ")",
+                f.warning(seq.at(), field, String.format(Locale.ROOT, "the unit price at %d (%.2f) is above the price at"
+                        + " %d (%.2f)", higher.quantity(), higher.unit(), lower.quantity(), lower.unit()),
                         "check the columns: larger orders usually cost less per unit");
             }
         }
