@@ -110,7 +110,14 @@ public final class SheetImport {
                     "export the sheet with a header row naming catalog keys (vos.max [uV], gbw [MHz], ...)"));
             return new Result(List.of(), problems, -1);
         }
-        List<Heading> headings = headings(records.get(0), records, csv, problems);
+        String[] header = records.get(0);
+        if (header.length == 1 && header[0] != null && (header[0].contains(";") || header[0].contains("\t"))) {
+            problems.add(Problem.error(new Located(csv, 1, 1), "", "the header is one cell holding "
+                    + (header[0].contains(";") ? "semicolons" : "tabs") + ": the sheet was saved with another separator",
+                    "save it as CSV with commas as separators and a decimal point"));
+            return new Result(List.of(), problems, -1);
+        }
+        List<Heading> headings = headings(header, records, csv, problems);
         if (problems.stream().anyMatch(Problem::isError)) {
             return new Result(List.of(), problems, -1);
         }
@@ -239,7 +246,7 @@ public final class SheetImport {
         Cell idCell = byPath.get(CatalogKeys.ID);
         int idCol = idCell == null ? 0 : idCell.col();
         String id = idCell == null ? null : idCell.text().strip();
-        Path target = Path.of((id == null ? "part" : id) + ".yaml");
+        Path target = Path.of("row.yaml"); // only for the reader's messages, which are placed in the CSV instead
         StringBuilder y = new StringBuilder();
         y.append("# Imported from ").append(oneLine(csv.getFileName() == null ? csv.toString() : csv.getFileName().toString()))
                 .append(", row ").append(rowNo).append(", by 'ampsieve import'. Every value carries its unit;\n")

@@ -140,6 +140,21 @@ class SheetImportTest {
     }
 
     @Test
+    void semicolonSeparatedSheetIsNamed() {
+        SheetImport.Result r = convert("id;architecture;vos.max [uV]\r\nx-01;standard;2,5\r\n");
+        assertEquals(List.of("parts.csv:1:1: the header is one cell holding semicolons: the sheet was saved with another"
+                + " separator; save it as CSV with commas as separators and a decimal point"),
+                r.problems().stream().map(Problem::toString).toList());
+    }
+
+    @Test
+    void malformedQuotingIsPlaced() {
+        SheetImport.Result r = convert("id,title\nx-01,\"never closed\n");
+        assertTrue(r.headerFailed());
+        assertTrue(r.problems().get(0).toString().startsWith("parts.csv:3:"), r.problems().toString());
+    }
+
+    @Test
     void commonSpellingsAndPriceBreaks() {
         String csv = "Part,Architecture,Input,VOS_MAX [uV],GBW [MHz],Vs min [V],Vs max [V],Tmin [C],Tmax [C],"
                 + "Currency,Breaks\n"
