@@ -234,4 +234,33 @@ class SheetCommandsTest {
                 + " there\n", again.err());
         assertEquals("mine\n", Files.readString(f));
     }
+
+    @Test
+    void exportWritesNoWhereALinkPoints(@TempDir Path dir) throws Exception {
+        Path victim = write(dir, "victim.txt", "precious\n");
+        Path link = Files.createSymbolicLink(dir.resolve("out.csv"), victim);
+        CliRun r = CliRun.of("export", "--csv", "--out", link.toString(), "--force");
+        assertEquals(ExitCode.FINDINGS, r.code());
+        assertEquals(link + ": is a link; left as it was; give the name of a regular file\n", r.err());
+        assertEquals("precious\n", Files.readString(victim));
+        assertTrue(Files.isSymbolicLink(link));
+    }
+
+    @Test
+    void importReadsOnlyARegularFile() {
+        CliRun r = CliRun.of("import", "/dev/zero", "--into", "/nonexistent-never-made");
+        assertEquals(ExitCode.FINDINGS, r.code());
+        assertEquals("/dev/zero: not a regular file (a character device); give a CSV file\n", r.err());
+        assertTrue(!Files.exists(Path.of("/nonexistent-never-made")));
+    }
+
+    @Test
+    void exportToTheTerminalEndsLinesWithLineFeedsOnly() {
+        CliRun r = CliRun.of("export", "--csv");
+        assertEquals(ExitCode.OK, r.code(), r.err());
+        assertTrue(r.out().startsWith("id,title,architecture,input,factory-trim,null-pins,channels,packages,tags,price.unit,"
+                + "price.quantity,price.currency,price.breaks,\"supply.min [V]\",\"supply.max [V]\","), r.out());
+        assertEquals(49, r.outLines().size()); // the header and the demo catalog's 48 parts
+        assertTrue(!r.out().contains("\r"));
+    }
 }
