@@ -145,7 +145,7 @@ public final class Advisor {
         Candidate w = t.withTrim();
         Candidate a = t.asIs();
         return java.util.Optional.ofNullable(switch (t.status()) {
-            case WARRANTED -> "A " + trimName + " is warranted: " + w.id() + " at " + money(Candidate.price(w.part()), w.currency())
+            case WARRANTED -> "A " + trimName + " is warranted: " + w.id() + " at " + money(Candidate.price(w.part(), q), w.currency())
                     + " plus the trim at " + cost + " costs " + money(w.effectiveCost(), w.currency()) + " per unit, "
                     + money(t.savingPerUnit(), w.currency()) + " less than " + a.id() + " as it is ("
                     + money(t.savingTotal(), w.currency()) + " over " + q + " units); " + standing(w) + ".";
@@ -158,7 +158,7 @@ public final class Advisor {
             case NOT_NEEDED -> StageEdit.trim(stage).allowed() ? "No part needs the " + trimName + " to fit; leave it out." : null;
             case WOULD_PAY_IF_ALLOWED -> "The stage allows no trim; a " + trimName + " would let " + w.id() + " fit at "
                     + money(w.effectiveCost(), w.currency()) + " per unit (price "
-                    + money(Candidate.price(w.part()), w.currency()) + " plus the trim: " + cost + ")"
+                    + money(Candidate.price(w.part(), q), w.currency()) + " plus the trim: " + cost + ")"
                     + (a == null ? ", and nothing fits without one"
                     : ", " + money(t.savingPerUnit(), w.currency()) + " less than " + a.id() + " as it is ("
                     + money(t.savingTotal(), w.currency()) + " over " + q + " units)")

@@ -11,7 +11,7 @@ import dev.ampsieve.stage.Stage;
  *
  * @param trimmed       the figures include the stage's trim: its cost is in {@code effectiveCost}
  *                      and {@code errorV} is the total left after it
- * @param effectiveCost unit price plus the trim cost when trimmed; NaN when the catalog has no price
+ * @param effectiveCost unit price at the stage quantity (its price break) plus the trim cost when trimmed; NaN when the catalog has no price
  * @param errorV        the total the criterion judges (worst-case sum; RSS for the RSS and
  *                      yield criteria), output volts
  * @param margin        (E - errorV) / E with E the stage limit; negative when over the limit
@@ -73,16 +73,17 @@ public record Candidate(Part part, Budget budget, boolean trimmed, double effect
     }
 
     private static Candidate untrimmed(Budget b, double error) {
-        return new Candidate(b.part(), b, false, price(b.part()), error, margin(b.limitV(), error));
+        return new Candidate(b.part(), b, false, price(b.part(), b.stage().quantity()), error, margin(b.limitV(), error));
     }
 
     private static Candidate trimmed(Budget b, double error) {
-        double cost = price(b.part()) + StageEdit.trim(b.stage()).cost();
+        double cost = price(b.part(), b.stage().quantity()) + StageEdit.trim(b.stage()).cost();
         return new Candidate(b.part(), b, true, cost, error, margin(b.limitV(), error));
     }
 
-    static double price(Part p) {
-        return p.price() == null ? Double.NaN : p.price().unit();
+    /** Unit price for a build of {@code quantity}: the catalog's price break for it ({@code Price.at}). */
+    static double price(Part p, int quantity) {
+        return p.price() == null ? Double.NaN : p.price().at(quantity);
     }
 
     private static double margin(double limit, double error) {

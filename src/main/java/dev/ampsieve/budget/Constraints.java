@@ -195,7 +195,7 @@ public final class Constraints {
             w.add("price: not given; the price ceiling is not checked");
             return new ConstraintResult(PRICE, true, "not checked: no price in the catalog");
         }
-        double unit = p.unitPrice();
+        double unit = p.unitPrice(s.quantity());
         boolean ok = unit <= s.maxPrice();
         String cur = p.price().currency();
         String d = String.format(java.util.Locale.ROOT, "ceiling %.2f %s; part %.2f %s", s.maxPrice(), cur, unit, cur)

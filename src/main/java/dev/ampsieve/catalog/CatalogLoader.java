@@ -395,6 +395,33 @@ public final class CatalogLoader {
         accept(PartReader.read(root, "", true), parts, ids, problems);
     }
 
+    /** What {@link #readPart} found: the part (null when it has an error) and every problem. */
+    public record PartText(Part part, List<Problem> problems) {
+    }
+
+    /**
+     * Reads YAML text holding one part with exactly the rules a catalog file gets (for tools that
+     * write catalog files and must not write one the catalog would refuse). Problems name
+     * {@code file} and places in {@code text}.
+     */
+    public static PartText readPart(String text, Path file) {
+        Node root;
+        try {
+            root = YamlFiles.parse(text, file);
+        } catch (InputException e) {
+            return new PartText(null, e.problems());
+        }
+        PartReader.Result r = PartReader.read(root, "", true);
+        List<Problem> sorted = new ArrayList<>(r.problems());
+        sorted.sort(Comparator.comparingInt(Problem::line).thenComparingInt(Problem::column));
+        return new PartText(r.part(), sorted);
+    }
+
+    /** The catalog's rule for an id: null when {@code id} is valid, else the error naming {@code at}. */
+    public static Problem idProblem(String id, Located at) {
+        return PartReader.idProblem(id, at, CatalogKeys.ID);
+    }
+
     /** Keeps the part unless it has errors or its id was taken by an earlier part. */
     private static void accept(PartReader.Result r, List<Part> parts, Map<String, Located> ids, List<Problem> problems) {
         problems.addAll(r.problems());

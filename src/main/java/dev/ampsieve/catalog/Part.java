@@ -66,8 +66,8 @@ public record Part(
         return architecture != Architecture.STANDARD;
     }
 
-    /** Price per unit at the quantity the catalog states. */
-    public double unitPrice() {
-        return price.unit();
+    /** Price per unit for a build of {@code quantity}, from the catalog's price breaks ({@link Price#at}). */
+    public double unitPrice(int quantity) {
+        return price.at(quantity);
     }
 }

@@ -190,14 +190,21 @@ final class PartReader {
         if (id == null) {
             return null;
         }
-        if (id.length() > MAX_ID_LENGTH || !ID_FORMAT.matcher(id).matches()) {
-            f.error(Fields.where(part, ID), join(prefix, ID),
-                    "'" + id + "' is not a valid id (lowercase letters, digits and single dashes, at most "
-                            + MAX_ID_LENGTH + " characters)",
-                    "write for example '" + suggestId(id) + "'");
+        Problem bad = idProblem(id, Fields.where(part, ID), join(prefix, ID));
+        if (bad != null) {
+            problems.add(bad);
             return null;
         }
         return id;
+    }
+
+    /** The catalog's id rule: null when {@code id} is valid, else the error, at {@code at}. */
+    static Problem idProblem(String id, Located at, String field) {
+        if (id.length() > MAX_ID_LENGTH || !ID_FORMAT.matcher(id).matches()) {
+            return Problem.error(at, field, "'" + id + "' is not a valid id (lowercase letters, digits and single dashes,"
+                    + " at most " + MAX_ID_LENGTH + " characters)", "write for example '" + suggestId(id) + "'");
+        }
+        return null;
     }
 
     /** The nearest valid id: lowercase, runs of other characters turned into one dash. */
@@ -248,13 +255,33 @@ final class PartReader {
         return v;
     }
 
+    /** Examples for the fix when a key inside a section is missing, where the dimension's own would mislead. */
+    private static final Map<String, String> SECTION_EXAMPLE = Map.of(
+            path(PRICE, UNIT), "1.20",
+            path(SUPPLY, MIN), "4.5 V",
+            path(SUPPLY, MAX), "36 V",
+            path(TEMPERATURE, MIN), "-40 C",
+            path(TEMPERATURE, MAX), "85 C",
+            path(LONG_TERM_DRIFT, VALUE), "0.5 uV",
+            path(INPUT_HEADROOM, LOW), "1 V",
+            path(INPUT_HEADROOM, HIGH), "1 V",
+            path(OUTPUT_HEADROOM, LOW), "0.2 V",
+            path(OUTPUT_HEADROOM, HIGH), "0.2 V");
+
     /** Errors when {@code key} is missing inside a present section. */
     private void requireIn(Node.Mapping m, String section, String key) {
         Dimension d = CatalogKeys.dimension(path(section, key));
-        f.require(m, join(prefix, section), key, d == null ? "..." : d.example());
+        String example = SECTION_EXAMPLE.get(path(section, key));
+        f.require(m, join(prefix, section), key, example != null ? example : d == null ? "..." : d.example());
     }
 
+    /** At most this many price breaks; distributors list a handful. */
+    static final int MAX_PRICE_BREAKS = 100;
+
     private Price readPrice() {
+        if (part.entries().get(PRICE) instanceof Node.Seq seq) {
+            return readPriceBreaks(seq);
+        }
         Node.Mapping m = section(PRICE);
         if (m == null) {
             return null;
@@ -264,6 +291,92 @@ final class PartReader {
         Integer qty = f.integer(m, join(prefix, PRICE), QUANTITY, 1, 1_000_000_000);
         String currency = f.text(m, join(prefix, PRICE), CURRENCY);
         return unit == null ? null : new Price(unit, qty == null ? 1 : qty, currency);
+    }
+
+    /**
+     * The list form: {@code price: [{quantity: 1, unit: 2.10, currency: USD}, {quantity: 1000, unit: 1.25}]}.
+     * Each break needs both keys; quantities are distinct; a currency may be written on any break
+     * and all that are written must agree. A larger order priced higher than a smaller one is
+     * warned about (usually swapped columns).
+     */
+    private Price readPriceBreaks(Node.Seq seq) {
+        String field = join(prefix, PRICE);
+        if (seq.items().isEmpty()) {
+            f.error(seq.at(), field, "the list of price breaks is empty",
+                    "write '- {quantity: 1, unit: 2.10}' items, or 'price: {unit: 1.20, quantity: 1000}'");
+            return null;
+        }
+        if (seq.items().size() > MAX_PRICE_BREAKS) {
+            f.error(seq.at(), field, seq.items().size() + " price breaks, more than " + MAX_PRICE_BREAKS,
+                    "keep the breaks your orders can reach");
+            return null;
+        }
+        List<Price.Break> breaks = new ArrayList<>();
+        Map<Integer, String> seen = new HashMap<>();
+        String currency = null;
+        String currencyField = null;
+        boolean ok = true;
+        for (int i = 0; i < seq.items().size(); i++) {
+            String itemField = field + "[" + i + "]";
+            Node item = seq.items().get(i);
+            if (!(item instanceof Node.Mapping m)) {
+                f.error(item.at(), itemField, "expected a price break {quantity, unit}, found " + item.kind(),
+                        "write '- {quantity: 1000, unit: 1.25}'");
+                ok = false;
+                continue;
+            }
+            f.onlyKeys(m, itemField, CatalogKeys.subKeys(PRICE));
+            f.require(m, itemField, QUANTITY, "1000");
+            f.require(m, itemField, UNIT, "1.25");
+            Integer qty = f.integer(m, itemField, QUANTITY, 1, 1_000_000_000);
+            Double unit = f.quantity(m, itemField, UNIT, CatalogKeys.dimension(path(PRICE, UNIT)));
+            String cur = f.text(m, itemField, CURRENCY);
+            if (cur != null) {
+                if (currency != null && !currency.equals(cur)) {
+                    f.error(Fields.where(m, CURRENCY), join(itemField, CURRENCY), "'" + cur + "' differs from '" + currency
+                            + "' at " + currencyField, "give every break in one currency");
+                    ok = false;
+                } else if (currency == null) {
+                    currency = cur;
+                    currencyField = join(itemField, CURRENCY);
+                }
+            }
+            if (unit != null) {
+                Located unitAt = Fields.where(m, UNIT);
+                if (unit < 0) {
+                    f.error(unitAt, join(itemField, UNIT), Units.format(unit, Dimension.NUMBER)
+                            + " is negative, which is impossible here", "write the unit price as a positive number");
+                } else {
+                    checkBound(path(PRICE, UNIT), join(itemField, UNIT), unit, unitAt);
+                }
+            }
+            if (qty != null && seen.containsKey(qty)) {
+                f.error(Fields.where(m, QUANTITY), join(itemField, QUANTITY), "quantity " + qty + " is already a break at "
+                        + seen.get(qty), "give each break its own quantity");
+                ok = false;
+            } else if (qty != null) {
+                seen.put(qty, itemField);
+            }
+            if (qty == null || unit == null) {
+                ok = false;
+            } else {
+                breaks.add(new Price.Break(qty, unit));
+            }
+        }
+        if (!ok || f.hasErrors()) {
+            return null;
+        }
+        Price price = new Price(breaks, currency);
+        for (int i = 1; i < price.breaks().size(); i++) {
+            Price.Break lower = price.breaks().get(i - 1);
+            Price.Break higher = price.breaks().get(i);
+            if (higher.unit() > lower.unit()) {
+                f.warning(seq.at(), field, String.format(Locale.ROOT, "the unit price at %d (%.2f) is above the price at"
+                        + " %d (%.2f)", higher.quantity(), higher.unit(), lower.quantity(), lower.unit()),
+                        "check the columns: larger orders usually cost less per unit");
+            }
+        }
+        return price;
     }
 
     private Range readRange(String key) {
@@ -284,12 +397,19 @@ final class PartReader {
             return null;
         }
         Spread s = new Spread(quantity(m, key, TYP), quantity(m, key, MAX), quantity(m, key, MAX_OVER_TEMP));
-        if (typOrMaxRequired && !m.entries().containsKey(TYP) && !m.entries().containsKey(MAX)) {
+        // a value, not only a key: 'max:' left empty gives no figure either
+        if (typOrMaxRequired && !written(m, TYP) && !written(m, MAX)) {
             f.error(m.at(), join(prefix, key), "neither typ nor max is given",
                     "add 'max: " + CatalogKeys.dimension(path(key, MAX)).example()
                             + "' from the datasheet's 25 °C column (typ when it gives no max)");
         }
         return s.isEmpty() ? null : s;
+    }
+
+    /** The key holds something (possibly wrong) rather than nothing. */
+    private static boolean written(Node.Mapping m, String key) {
+        Node v = m.entries().get(key);
+        return v != null && !(v instanceof Node.Scalar s && s.text() == null);
     }
 
     private MinTyp readMinTyp(String key) {
@@ -401,28 +521,33 @@ final class PartReader {
             if (v == null) {
                 continue;
             }
-            CatalogKeys.Bounds b = e.getValue();
-            Dimension d = CatalogKeys.dimension(keyPath);
-            double x = b.signed() ? v : Math.abs(v);
-            boolean sized = b.signed() || x > 0; // zero is for the sign checks
-            String what = d == Dimension.TEMPERATURE ? "a rated range" : "an op amp";
-            if (x > b.errorAbove()) {
-                err(keyPath, beyond(v, b.errorAbove(), d) + ", impossible for " + what + " (" + b.why() + ")",
-                        "check the unit prefix (p, n, u, m, k, M) and the datasheet column; the largest "
-                                + (b.signed() ? "value" : "size") + " accepted here is " + Units.format(b.errorAbove(), d));
-            } else if (sized && x < b.errorBelow()) {
-                err(keyPath, Units.format(v, d) + " is below " + Units.format(b.errorBelow(), d) + ", impossible for "
-                        + what + " (" + b.why() + ")", "check the unit prefix (p, n, u, m, k, M) and the datasheet"
-                        + " column; the smallest " + (b.signed() ? "value" : "size") + " accepted here is "
-                        + Units.format(b.errorBelow(), d));
-            } else if (x > b.warnAbove()) {
-                warn(keyPath, beyond(v, b.warnAbove(), d) + ", implausible for " + what,
-                        "check the unit prefix (u, m, k, M) and the column");
-            } else if (sized && x < b.warnBelow()) {
-                warn(keyPath, Units.format(v, d) + " is below " + Units.format(b.warnBelow(), d)
-                        + ", implausible for " + what, b.signed() ? "check the sign and the unit"
-                        : "check the unit prefix (p, n, u, k, M) and the column");
-            }
+            checkBound(keyPath, join(prefix, keyPath), v, at.get(keyPath));
+        }
+    }
+
+    /** One value against the bounds of {@code keyPath}; problems go to {@code field} at {@code where}. */
+    private void checkBound(String keyPath, String field, double v, Located where) {
+        CatalogKeys.Bounds b = CatalogKeys.BOUNDS.get(keyPath);
+        Dimension d = CatalogKeys.dimension(keyPath);
+        double x = b.signed() ? v : Math.abs(v);
+        boolean sized = b.signed() || x > 0; // zero is for the sign checks
+        String what = d == Dimension.TEMPERATURE ? "a rated range" : "an op amp";
+        if (x > b.errorAbove()) {
+            f.error(where, field, beyond(v, b.errorAbove(), d) + ", impossible for " + what + " (" + b.why() + ")",
+                    "check the unit prefix (p, n, u, m, k, M) and the datasheet column; the largest "
+                            + (b.signed() ? "value" : "size") + " accepted here is " + Units.format(b.errorAbove(), d));
+        } else if (sized && x < b.errorBelow()) {
+            f.error(where, field, Units.format(v, d) + " is below " + Units.format(b.errorBelow(), d) + ", impossible for "
+                    + what + " (" + b.why() + ")", "check the unit prefix (p, n, u, m, k, M) and the datasheet"
+                    + " column; the smallest " + (b.signed() ? "value" : "size") + " accepted here is "
+                    + Units.format(b.errorBelow(), d));
+        } else if (x > b.warnAbove()) {
+            f.warning(where, field, beyond(v, b.warnAbove(), d) + ", implausible for " + what,
+                    "check the unit prefix (u, m, k, M) and the column");
+        } else if (sized && x < b.warnBelow()) {
+            f.warning(where, field, Units.format(v, d) + " is below " + Units.format(b.warnBelow(), d)
+                    + ", implausible for " + what, b.signed() ? "check the sign and the unit"
+                    : "check the unit prefix (p, n, u, k, M) and the column");
         }
     }
 

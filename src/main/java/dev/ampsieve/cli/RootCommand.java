@@ -27,7 +27,8 @@ import picocli.CommandLine.Spec;
         versionProvider = RootCommand.Version.class,
         description = "Picks operational amplifiers for a stage by its full output error budget, computed from your own YAML catalog of datasheet values.",
         subcommands = {CheckCommand.class, BudgetCommand.class, FindCommand.class, RankCommand.class,
-            CompareCommand.class, SufficesCommand.class, BarsCommand.class, ScatterCommand.class},
+            CompareCommand.class, SufficesCommand.class, BarsCommand.class, ScatterCommand.class,
+            NewPartCommand.class, ImportCommand.class, ExportCommand.class},
         footer = {"", "Catalog folder: --catalog DIR, else $AMPSIEVE_CATALOG, else the demo catalog.",
             "Exit codes: 0 ok, 1 problems in your data or a 'no' answer, 2 usage error, 3 internal error."})
 public final class RootCommand implements Callable<Integer> {
@@ -109,6 +110,19 @@ public final class RootCommand implements Callable<Integer> {
     }
 
     static final String CATALOG_VARIABLE = "AMPSIEVE_CATALOG";
+
+    /**
+     * Where a new part file goes by default: the catalog folder the user chose (--catalog, else
+     * $AMPSIEVE_CATALOG), else the current folder; never the demo catalog, which is not theirs.
+     */
+    public Path chosenCatalogDir() {
+        String env = System.getenv(CATALOG_VARIABLE);
+        String empty = emptyCatalogChoice(catalogDir, env);
+        if (empty != null) {
+            throw new UserException(empty, ExitCode.USAGE);
+        }
+        return catalogDir != null ? catalogDir : env != null ? Path.of(env) : Path.of(".");
+    }
 
     static Path chooseCatalog(Path option, String env, String home) {
         if (option != null) {

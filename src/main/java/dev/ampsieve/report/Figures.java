@@ -56,8 +56,16 @@ final class Figures {
         return plain(p.supply().min()) + "-" + plain(p.supply().max()) + " V";
     }
 
+    /**
+     * The price with no stage to pick a break: the lowest-quantity break's unit price, followed by
+     * "(from N)" when the part has price breaks (that price holds for orders from N up).
+     */
     static String price(Part p) {
-        return p.price() == null ? NONE : money(p.price().unit());
+        if (p.price() == null) {
+            return NONE;
+        }
+        String m = money(p.price().unit());
+        return p.price().hasBreaks() ? m + " (from " + p.price().quantity() + ")" : m;
     }
 
     static String money(double x) {

@@ -45,6 +45,10 @@ public final class FindReport {
                 }
             }
             o.append("vos, drift, ib: guaranteed maximum, else typical; en: white noise density; supply: total, V+ to V-.\n");
+            if (parts.stream().anyMatch(p -> p.price() != null && p.price().hasBreaks())) {
+                o.append("price (from N): the part has price breaks; this is the unit price for orders from N up,"
+                        + " and rank uses the break for the stage's quantity.\n");
+            }
         }
         o.append('\n').append(Caution.TEXT).append('\n');
         return Wrap.prose(Visible.lines(o.toString()), width);

@@ -194,7 +194,7 @@ public final class RankReport {
         }
         for (Rejected x : r.rejected()) {
             o.append(String.join(",", List.of("", csv(x.id()), "rejected", num(x.part().price() == null ? Double.NaN
-                    : x.part().price().unit()), csv(x.part().price() == null ? "" : x.part().price().currency()),
+                    : x.part().price().at(r.stage().quantity())), csv(x.part().price() == null ? "" : x.part().price().currency()),
                     "", "", "", "", "", "", "", "", "", "", "", "false", csv(x.reason())))).append('\n');
         }
         o.append("# ").append(Caution.TEXT).append('\n');
@@ -204,10 +204,6 @@ public final class RankReport {
     private static String num(double v) {
         return Double.isFinite(v) ? String.format(Locale.ROOT, "%.6g", v) : "";
     }
-
-    /** A plain decimal or scientific number, which a spreadsheet reads as a number and never as a formula. */
-    private static final java.util.regex.Pattern CSV_NUMBER =
-            java.util.regex.Pattern.compile("[-+]?(\\d+\\.?\\d*|\\.\\d+)([eE][-+]?\\d+)?");
 
     /**
      * One text field: control characters made {@link Visible}; a field a spreadsheet would run as a
@@ -219,7 +215,7 @@ public final class RankReport {
         if (s == null) {
             return "";
         }
-        boolean formula = !s.isEmpty() && "=+-@\t\r".indexOf(s.charAt(0)) >= 0 && !CSV_NUMBER.matcher(s).matches();
+        boolean formula = dev.ampsieve.text.FormulaCells.runsAsFormula(s);
         String v = (formula ? "'" : "") + Visible.of(s);
         if (formula || v.contains(",") || v.contains("\"") || v.contains("\n") || v.contains("\r")) {
             return "\"" + v.replace("\"", "\"\"") + "\"";

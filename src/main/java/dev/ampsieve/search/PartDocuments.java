@@ -117,7 +117,7 @@ public final class PartDocuments {
             case Schema.SUPPLY_MAX -> p.supply() == null ? null : p.supply().max();
             case Schema.TEMPERATURE_MIN -> p.temperature() == null ? null : p.temperature().min();
             case Schema.TEMPERATURE_MAX -> p.temperature() == null ? null : p.temperature().max();
-            case Schema.PRICE -> p.price() == null ? null : p.price().unit();
+            case Schema.PRICE -> p.price() == null ? null : p.price().unit(); // the lowest-quantity break: no stage here
             case Schema.IQ -> p.quiescentCurrent();
             case Schema.CHANNELS -> p.channels() > 0 ? (double) p.channels() : null;
             case Schema.FCHOP -> p.choppingFrequency();

@@ -23,6 +23,11 @@ public final class BoundedFiles {
      *                        (a folder, pipe, device or socket) or longer than {@code limit}
      */
     public static byte[] read(Path file, long limit) throws InputException {
+        return read(file, limit, "YAML");
+    }
+
+    /** As {@link #read(Path, long)}, for a file of another kind ("CSV"), which the messages name. */
+    public static byte[] read(Path file, long limit, String kind) throws InputException {
         if (limit < 0 || limit >= Integer.MAX_VALUE) {
             throw new IllegalArgumentException("limit " + limit);
         }
@@ -34,7 +39,7 @@ public final class BoundedFiles {
         }
         if (!attrs.isRegularFile()) {
             throw new InputException(Problem.error(Located.nowhere(file), "", "not a regular file (" + kind(file, attrs) + ")",
-                    "give a YAML file"));
+                    "give a " + kind + " file"));
         }
         // The type is checked before opening because opening a named pipe for reading waits for a
         // writer, and Java has no non-blocking open. A file swapped for a pipe between the check
@@ -48,7 +53,7 @@ public final class BoundedFiles {
         }
         if (bytes.length > limit) {
             throw new InputException(Problem.error(Located.nowhere(file), "",
-                    "file is over the limit of " + limit + " bytes" + mebibytes(limit) + " for one YAML file",
+                    "file is over the limit of " + limit + " bytes" + mebibytes(limit) + " for one " + kind + " file",
                     "split it into several files (sub-folders are fine)"));
         }
         return bytes;

@@ -61,6 +61,7 @@ public final class PartBuilder {
     public PartBuilder packages(String... v) { packages = List.of(v); return this; }
     public PartBuilder tags(String... v) { tags = List.of(v); return this; }
     public PartBuilder price(double unit) { price = new Price(unit, 1000, "USD"); return this; }
+    public PartBuilder price(Price v) { price = v; return this; }
     public PartBuilder noPrice() { price = null; return this; }
     public PartBuilder supply(double min, double max) { supply = new Range(min, max); return this; }
     public PartBuilder temperature(double min, double max) { temperature = new Range(min, max); return this; }
