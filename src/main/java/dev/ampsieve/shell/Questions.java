@@ -25,6 +25,9 @@ final class Questions {
     /** Only asked when a trim is allowed. */
     static final Set<String> TRIM_DETAILS = Set.of("trim.method", "trim.resolution", "trim.cost");
 
+    /** Only asked for a two-temperature calibration. */
+    static final Set<String> CALIBRATION_POINTS = Set.of("trim.cold", "trim.hot");
+
     /** Every question, in order. */
     static List<String> order() {
         List<String> out = new ArrayList<>(FIRST);
@@ -39,6 +42,9 @@ final class Questions {
 
     /** Whether {@code id} is asked given the answers so far. */
     static boolean applies(String id, Map<String, String> answers) {
+        if (CALIBRATION_POINTS.contains(id)) {
+            return "true".equals(answers.get("trim.allowed")) && "two-temperature".equals(answers.get("trim.method"));
+        }
         return !TRIM_DETAILS.contains(id) || "true".equals(answers.get("trim.allowed"));
     }
 
