@@ -176,7 +176,7 @@ public final class StageKeys {
                     "random seed, so a yield can be reproduced"),
             k("trim.allowed", Kind.BOOLEAN, List.of(), "false (true once a trim block is written)", "true",
                     "whether each unit may be calibrated; a trim can make a cheaper part fit"),
-            k("trim.method", Kind.CHOICE, TRIM_METHODS, "one-point", "one-point",
+            k("trim.method", Kind.CHOICE, TRIM_METHODS, "one-point", "two-temperature",
                     "one-point removes offset at 25 C; two-point also removes the static gain error at 25 C; "
                             + "two-temperature removes offset and its linear drift (calibrated at trim.cold and trim.hot)"),
             q("trim.cold", Dimension.TEMPERATURE, "temperature.min (two-temperature only)", "-40 C",
