@@ -78,12 +78,12 @@ public final class BiasTerm implements ErrorTerm {
      * unit's current error is read at both calibration temperatures and the line through the two
      * readings is subtracted.
      * <ul>
-     * <li>FET, CMOS and zero-drift inputs: a unit's current follows the engine's curve
+     * <li>FET, CMOS and zero-drift inputs with a 25 °C figure: a unit's current follows the engine's curve
      * ({@link PartValues#biasAt}) scaled by its own 25 °C value, |a| &lt;= 1 of the limit; what is
      * left is a times the curve's deviation from its chord, at most
      * {@link CalibrationLine#deviation} of the limit curve over the range;</li>
-     * <li>plain bipolar inputs (and any input whose current has no shape in the engine, only a
-     * bound at each temperature): the three readings I(T), I(cold), I(hot) are bounded
+     * <li>plain bipolar inputs, and a current known only as an over-temperature maximum (no
+     * shape in the engine, only a bound at each temperature): the three readings I(T), I(cold), I(hot) are bounded
      * independently, each in [lo, hi] at its temperature with lo = 0 where the sign is known, else
      * -hi; the residual I(T) - w1 I(cold) - w2 I(hot) is then at most
      * hi(T) - sum of min(w lo, w hi) (and its negative likewise), the shape-free bound of the
@@ -96,16 +96,35 @@ public final class BiasTerm implements ErrorTerm {
         DcModel m = DcModel.of(s);
         double dIb;
         double dIos;
-        if (PartValues.exponential(v.part())) {
-            double knee = Double.isNaN(v.ibOverTemp()) ? Double.NaN : v.ratedHigh();
-            dIb = line.deviation(v::ibAt, knee, s.tMin(), s.tMax());
-            double iosKnee = Double.isNaN(v.iosOverTemp()) ? Double.NaN : v.ratedHigh();
-            dIos = line.deviation(v::iosAt, iosKnee, s.tMin(), s.tMax());
-        } else {
-            dIb = shapeFree(v::ibAt, v.biasSignKnown(), line, s);
-            dIos = shapeFree(v::iosAt, false, line, s);
-        }
+        dIb = ibShaped(v) ? line.deviation(v::ibAt, ibKnee(v), s.tMin(), s.tMax())
+                : shapeFree(v::ibAt, v.biasSignKnown(), line, s);
+        dIos = iosShaped(v) ? line.deviation(v::iosAt, iosKnee(v), s.tMin(), s.tMax())
+                : shapeFree(v::iosAt, false, line, s);
         return m.currentBound(dIb, dIos);
+    }
+
+    /**
+     * Whether a unit's IB follows the engine's curve: FET, CMOS and zero-drift inputs with a 25 °C
+     * figure. A current known only as an over-temperature maximum has no curve (the engine holds it
+     * flat), so it is bounded shape-free.
+     */
+    static boolean ibShaped(PartValues v) {
+        return PartValues.exponential(v.part()) && v.ibKnownAt25();
+    }
+
+    /** The same for IOS. */
+    static boolean iosShaped(PartValues v) {
+        return PartValues.exponential(v.part()) && v.iosKnownAt25();
+    }
+
+    /** Where the IB curve stops growing, °C: the rated upper end when an over-temperature figure caps it, else NaN. */
+    static double ibKnee(PartValues v) {
+        return Double.isNaN(v.ibOverTemp()) ? Double.NaN : v.ratedHigh();
+    }
+
+    /** The same for IOS. */
+    static double iosKnee(PartValues v) {
+        return Double.isNaN(v.iosOverTemp()) ? Double.NaN : v.ratedHigh();
     }
 
     /** The bipolar rule above: the largest |I(T) - w1 I(cold) - w2 I(hot)| with each reading only bounded. */

@@ -19,11 +19,11 @@ import org.apache.commons.math3.random.Well19937c;
  * them exactly; e1, e2 are the readings' resolution errors, uniform in +/- the resolution; L is
  * the line through the unit's own currents at the two calibration temperatures.
  * <ul>
- * <li>FET, CMOS, zero-drift inputs: a unit's currents are its 25 °C draws (as {@link YieldModel}
+ * <li>FET, CMOS, zero-drift inputs with a 25 °C figure: a unit's currents are its 25 °C draws (as {@link YieldModel}
  * draws them) times the engine's curve over the 25 °C limit, so IB(T) - L_IB(T) is the draw
  * times the curve's deviation from its chord ({@link BiasTerm#afterTwoTemperature}). Evaluated
  * at the temperatures where that deviation can peak ({@link CalibrationLine#candidates}).</li>
- * <li>Other inputs: the currents have no shape in the engine, only a bound at each temperature,
+ * <li>Other inputs, and a current known only over temperature: the currents have no shape in the engine, only a bound at each temperature,
  * so each unit gets an independent draw at every temperature used (range ends, 25 °C inside the
  * range, both calibration points), each inside its bound there and never below zero where the
  * sign is known.</li>
@@ -42,8 +42,10 @@ final class TwoTemperatureYield {
     private final double gainCoef;
     private final double tol;
     private final double resolution;
-    private final boolean shaped;
-    /** Evaluation temperatures and, for shape-free currents, the calibration points after them. */
+    /** A unit's IB (IOS) follows the engine's curve ({@link BiasTerm#ibShaped}); otherwise drawn anew at each temperature. */
+    private final boolean ibShaped;
+    private final boolean iosShaped;
+    /** Evaluation temperatures, then the calibration points where they are not among them. */
     private final double[] temps;
     private final int evaluated;
     private final int coldIndex;
@@ -72,23 +74,20 @@ final class TwoTemperatureYield {
         this.gainCoef = vfs * ResistorTerm.sensitivity(s);
         this.tol = s.ratioTolerance();
         this.resolution = BudgetCalculator.trimOf(s).resolution();
-        this.shaped = PartValues.exponential(v.part());
-        List<Double> at = new ArrayList<>();
-        if (shaped) {
-            double ibKnee = Double.isNaN(v.ibOverTemp()) ? Double.NaN : v.ratedHigh();
-            double iosKnee = Double.isNaN(v.iosOverTemp()) ? Double.NaN : v.ratedHigh();
-            addNew(at, line.candidates(v::ibAt, ibKnee, s.tMin(), s.tMax()));
-            addNew(at, line.candidates(v::iosAt, iosKnee, s.tMin(), s.tMax()));
-        } else {
-            addNew(at, List.of(s.tMin(), s.tMax()));
-            if (Stage.T_REF > s.tMin() && Stage.T_REF < s.tMax()) {
-                addNew(at, List.of(Stage.T_REF));
-            }
+        this.ibShaped = BiasTerm.ibShaped(v);
+        this.iosShaped = BiasTerm.iosShaped(v);
+        List<Double> at = new ArrayList<>(List.of(s.tMin(), s.tMax()));
+        if (Stage.T_REF > s.tMin() && Stage.T_REF < s.tMax()) {
+            addNew(at, List.of(Stage.T_REF));
+        }
+        if (ibShaped) {
+            addNew(at, line.candidates(v::ibAt, BiasTerm.ibKnee(v), s.tMin(), s.tMax()));
+        }
+        if (iosShaped) {
+            addNew(at, line.candidates(v::iosAt, BiasTerm.iosKnee(v), s.tMin(), s.tMax()));
         }
         this.evaluated = at.size();
-        if (!shaped) {
-            addNew(at, List.of(line.cold(), line.hot()));
-        }
+        addNew(at, List.of(line.cold(), line.hot())); // shape-free currents are also read there
         this.temps = at.stream().mapToDouble(Double::doubleValue).toArray();
         this.coldIndex = at.indexOf(line.cold());
         this.hotIndex = at.indexOf(line.hot());
@@ -179,9 +178,8 @@ final class TwoTemperatureYield {
 
         Sampler(RandomGenerator rng, int n) {
             this.rng = rng;
-            int draws = shaped ? 1 : temps.length;
-            ib = new double[draws][n];
-            ios = new double[draws][n];
+            ib = new double[ibShaped ? 1 : temps.length][n];
+            ios = new double[iosShaped ? 1 : temps.length][n];
             aging = new double[n];
             ratio = new double[n];
             e1 = new double[n];
@@ -189,9 +187,11 @@ final class TwoTemperatureYield {
         }
 
         void errors(int size, double[] out) {
-            for (int d = 0; d < ib.length; d++) {
-                fill(ibD, ib[d], size);
-                fill(iosD, ios[d], size);
+            for (double[] d : ib) {
+                fill(ibD, d, size);
+            }
+            for (double[] d : ios) {
+                fill(iosD, d, size);
             }
             fill(agingD, aging, size);
             uniform(tol, ratio, size);
@@ -200,20 +200,18 @@ final class TwoTemperatureYield {
             for (int i = 0; i < size; i++) {
                 double worst = 0;
                 for (int j = 0; j < evaluated; j++) {
-                    double currents;
-                    if (shaped) {
-                        currents = perIb * ib[0][i] * ibDev[j] + perIos * ios[0][i] * iosDev[j];
-                    } else {
-                        currents = perIb * (ibFac[j] * ib[j][i] - w1[j] * ibFac[coldIndex] * ib[coldIndex][i]
-                                - w2[j] * ibFac[hotIndex] * ib[hotIndex][i])
-                                + perIos * (iosFac[j] * ios[j][i] - w1[j] * iosFac[coldIndex] * ios[coldIndex][i]
-                                - w2[j] * iosFac[hotIndex] * ios[hotIndex][i]);
-                    }
+                    double currents = perIb * (ibShaped ? ib[0][i] * ibDev[j] : line(ib, ibFac, i, j))
+                            + perIos * (iosShaped ? ios[0][i] * iosDev[j] : line(ios, iosFac, i, j));
                     double e = ng * aging[i] + e1[i] * w1[j] + e2[i] * w2[j] + currents;
                     worst = Math.max(worst, Math.abs(e));
                 }
                 out[i] = fixed + worst + Math.abs(gainCoef * ratio[i]);
             }
+        }
+
+        /** Unit i's shape-free current at temperature j minus the line through its readings at the calibration points, A. */
+        private double line(double[][] draws, double[] fac, int i, int j) {
+            return fac[j] * draws[j][i] - w1[j] * fac[coldIndex] * draws[coldIndex][i] - w2[j] * fac[hotIndex] * draws[hotIndex][i];
         }
 
         private void fill(TruncatedNormal d, double[] a, int n) {

@@ -151,6 +151,25 @@ class TwoTemperatureTrimTest {
     }
 
     @Test
+    void aCmosCurrentKnownOnlyOverTemperatureHasNoCurveToCredit() {
+        // CMOS, IB given only as 1 nA over the rated range (IOS = IB): the engine holds it flat at 1 nA, so a
+        // curve would "deviate" by nothing and the calibration would seem to remove it all. Its 25 °C value and
+        // shape are unknown, so each reading is bounded alone, either sign: at the cold point IB(T) - IB(cold) up
+        // to 1 + 1 nA, at 25 °C 1 + 0.48 x 1 + 0.52 x 1 = 2 nA; the same for IOS. Follower through 1 MΩ:
+        // 1 MΩ x 2 nA + 1 MΩ x 2 nA / 2 = 3 mV [Calc]
+        StageFixture f = StageFixture.follower().temps(-40, 85).limitV(1);
+        f.rs = 1e6;
+        f.trim = new Trim(true, Trim.Method.TWO_TEMPERATURE, 0, 0);
+        PartFixture p = PartFixture.ideal();
+        p.input = InputType.CMOS;
+        p.temperature = new Range(-40, 125);
+        p.ib = new Spread(null, null, 1e-9);
+        p.ios = Spread.NONE;
+        Budget b = BudgetCalculator.compute(f.build(), p.build());
+        assertEquals(3e-3 + b.term("noise").outputV(), b.trimmed().worstCaseV(), 1e-12);
+    }
+
+    @Test
     void theMonteCarloSamplesTheCurvatureWhereItPeaks() {
         // IB given without a typical is held at its 25 °C maximum in every unit (YieldModel), so every unit's
         // IB part alone is 1 GΩ x 40.2862 pA = 40.2862 mV, at T* = 53.56 °C, between the calibration points:
