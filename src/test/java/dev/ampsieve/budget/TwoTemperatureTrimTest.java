@@ -151,6 +151,34 @@ class TwoTemperatureTrimTest {
     }
 
     @Test
+    void theClosedFormMatchesADenseScanForOtherCurvesAndPoints() {
+        // second method only: |I(T) - chord(T)| scanned every 0.001 °C over -40..85 °C on the engine's curve, for
+        // the curve with and without an over-temperature figure (doubling every 10 °C) and for calibration points
+        // at the ends, inside (extrapolated) and off-centre
+        for (Double overTemp : new Double[] {1e-9, null}) {
+            PartFixture p = PartFixture.ideal();
+            p.input = InputType.CMOS;
+            p.temperature = new Range(-40, 125);
+            p.ib = new Spread(null, 1e-12, overTemp);
+            p.ios = Spread.NONE;
+            Part part = p.build();
+            for (double[] pts : new double[][] {{-40, 85}, {0, 50}, {30, 60}, {-40, 25}}) {
+                Stage s = cmosStage(twoTemperature(0, pts[0], pts[1]));
+                PartValues v = PartValues.of(part, s);
+                double cold = v.ibAt(pts[0]);
+                double hot = v.ibAt(pts[1]);
+                double worst = 0;
+                for (int i = 0; i <= 125_000; i++) {
+                    double t = -40 + i * 0.001;
+                    worst = Math.max(worst, Math.abs(v.ibAt(t) - (cold + (hot - cold) * (t - pts[0]) / (pts[1] - pts[0]))));
+                }
+                double closedForm = BiasTerm.afterTwoTemperature(s, v, CalibrationLine.of(s, s.trim())) / 1.5e9;
+                assertEquals(worst, closedForm, 1e-7 * worst, overTemp + " at " + pts[0] + ", " + pts[1]);
+            }
+        }
+    }
+
+    @Test
     void aCmosCurrentKnownOnlyOverTemperatureHasNoCurveToCredit() {
         // CMOS, IB given only as 1 nA over the rated range (IOS = IB): the engine holds it flat at 1 nA, so a
         // curve would "deviate" by nothing and the calibration would seem to remove it all. Its 25 °C value and
