@@ -138,7 +138,11 @@ public final class Advisor {
 
     private static java.util.Optional<String> trimLine(Stage stage, TrimAdvice t) {
         int q = stage.quantity();
-        String trimName = StageEdit.trim(stage).method() == Trim.Method.TWO_POINT ? "two-point calibration" : "one-point trim";
+        String trimName = switch (StageEdit.trim(stage).method()) {
+            case TWO_POINT -> "two-point calibration";
+            case TWO_TEMPERATURE -> "two-temperature calibration";
+            default -> "one-point trim";
+        };
         String cost = StageEdit.trim(stage).cost() > 0
                 ? money(StageEdit.trim(stage).cost(), t.withTrim() == null ? "" : t.withTrim().currency())
                 : "no stated cost (stage trim.cost; counted as 0)";
@@ -439,7 +443,7 @@ public final class Advisor {
         Trim tried;
         Change.Kind kind;
         if (!t.allowed()) {
-            tried = new Trim(true, t.method(), t.resolution(), t.cost());
+            tried = new Trim(true, t.method(), t.resolution(), t.cost(), t.cold(), t.hot());
             kind = Change.Kind.ALLOW_TRIM;
         } else if (t.method() == Trim.Method.ONE_POINT) {
             tried = new Trim(true, Trim.Method.TWO_POINT, t.resolution(), t.cost());
@@ -454,7 +458,8 @@ public final class Advisor {
         Candidate c = Candidate.of(b);
         String cost = t.cost() > 0 ? money(t.cost(), c.currency()) + " per unit" : "the trim's cost per unit (not given)";
         String what = kind == Change.Kind.ALLOW_TRIM
-                ? "allow a " + (tried.method() == Trim.Method.TWO_POINT ? "two-point calibration" : "one-point trim at 25 °C")
+                ? "allow a " + (tried.method() == Trim.Method.TWO_POINT ? "two-point calibration"
+                        : tried.method() == Trim.Method.TWO_TEMPERATURE ? "two-temperature calibration" : "one-point trim at 25 °C")
                 : "a two-point calibration instead of the one-point trim";
         Map<String, Double> v = new LinkedHashMap<>();
         v.put("errorAfterTrimV", c.errorV());

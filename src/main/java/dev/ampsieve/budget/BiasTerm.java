@@ -73,6 +73,92 @@ public final class BiasTerm implements ErrorTerm {
         return worst;
     }
 
+    /**
+     * What a two-temperature calibration ({@link CalibrationLine}) leaves of the term, V: each
+     * unit's current error is read at both calibration temperatures and the line through the two
+     * readings is subtracted.
+     * <ul>
+     * <li>FET, CMOS and zero-drift inputs with a 25 °C figure: a unit's current follows the engine's curve
+     * ({@link PartValues#biasAt}) scaled by its own 25 °C value, |a| &lt;= 1 of the limit; what is
+     * left is a times the curve's deviation from its chord, at most
+     * {@link CalibrationLine#deviation} of the limit curve over the range;</li>
+     * <li>plain bipolar inputs, and a current known only as an over-temperature maximum (no
+     * shape in the engine, only a bound at each temperature): the three readings I(T), I(cold), I(hot) are bounded
+     * independently, each in [lo, hi] at its temperature with lo = 0 where the sign is known, else
+     * -hi; the residual I(T) - w1 I(cold) - w2 I(hot) is then at most
+     * hi(T) - sum of min(w lo, w hi) (and its negative likewise), the shape-free bound of the
+     * one-point rules ({@link #afterTrim}) carried to two points. Its largest value over the range
+     * is at a range end (or 25 °C, where the bound changes).</li>
+     * </ul>
+     * IB and IOS are bounded separately and added ({@link DcModel#currentBound}).
+     */
+    static double afterTwoTemperature(Stage s, PartValues v, CalibrationLine line) {
+        DcModel m = DcModel.of(s);
+        double dIb;
+        double dIos;
+        dIb = ibShaped(v) ? line.deviation(v::ibAt, ibKnee(v), s.tMin(), s.tMax())
+                : shapeFree(v::ibAt, v.biasSignKnown(), line, s);
+        dIos = iosShaped(v) ? line.deviation(v::iosAt, iosKnee(v), s.tMin(), s.tMax())
+                : shapeFree(v::iosAt, false, line, s);
+        return m.currentBound(dIb, dIos);
+    }
+
+    /**
+     * Whether a unit's IB follows the engine's curve: FET, CMOS and zero-drift inputs with a 25 °C
+     * figure. A current known only as an over-temperature maximum has no curve (the engine holds it
+     * flat), so it is bounded shape-free.
+     */
+    static boolean ibShaped(PartValues v) {
+        return PartValues.exponential(v.part()) && v.ibKnownAt25();
+    }
+
+    /** The same for IOS. */
+    static boolean iosShaped(PartValues v) {
+        return PartValues.exponential(v.part()) && v.iosKnownAt25();
+    }
+
+    /** Where the IB curve stops growing, °C: the rated upper end when an over-temperature figure caps it, else NaN. */
+    static double ibKnee(PartValues v) {
+        return Double.isNaN(v.ibOverTemp()) ? Double.NaN : v.ratedHigh();
+    }
+
+    /** The same for IOS. */
+    static double iosKnee(PartValues v) {
+        return Double.isNaN(v.iosOverTemp()) ? Double.NaN : v.ratedHigh();
+    }
+
+    /** The bipolar rule above: the largest |I(T) - w1 I(cold) - w2 I(hot)| with each reading only bounded. */
+    static double shapeFree(java.util.function.DoubleUnaryOperator hi, boolean signKnown, CalibrationLine line, Stage s) {
+        double worst = 0;
+        double hiC = hi.applyAsDouble(line.cold());
+        double hiH = hi.applyAsDouble(line.hot());
+        for (double t : new double[] {s.tMin(), s.tMax(), Stage.T_REF}) {
+            if (t < s.tMin() || t > s.tMax()) {
+                continue;
+            }
+            double hiT = hi.applyAsDouble(t);
+            double w1 = line.w1(t);
+            double w2 = line.w2(t);
+            double loT = signKnown ? 0 : -hiT;
+            double up = hiT - lowest(w1, hiC, signKnown) - lowest(w2, hiH, signKnown);
+            double down = loT - highest(w1, hiC, signKnown) - highest(w2, hiH, signKnown);
+            worst = Math.max(worst, Math.max(up, -down));
+        }
+        return worst;
+    }
+
+    /** min of w x I over I in [lo, hi]. */
+    private static double lowest(double w, double hi, boolean signKnown) {
+        double lo = signKnown ? 0 : -hi;
+        return Math.min(w * lo, w * hi);
+    }
+
+    /** max of w x I over I in [lo, hi]. */
+    private static double highest(double w, double hi, boolean signKnown) {
+        double lo = signKnown ? 0 : -hi;
+        return Math.max(w * lo, w * hi);
+    }
+
     @Override
     public TermResult evaluate(Stage s, PartValues v) {
         double lo = magnitude(s, v.ibAt(s.tMin()), v.iosAt(s.tMin()));

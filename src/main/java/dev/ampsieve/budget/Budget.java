@@ -12,7 +12,7 @@ import java.util.List;
  * @param rssV         root-sum-square of the same
  * @param noiseRmsV    integrated output noise, rms volts
  * @param limitV       the stage limit, output volts
- * @param trimmed      totals after the stage's trim method (one-point unless the stage says two-point)
+ * @param trimmed      totals after the stage's trim method (one-point unless the stage names another method)
  * @param limitingTerm key of the largest term (for no-fit: the one that most needs to shrink)
  * @param warnings     estimated or missing catalog values, chopper caveats and similar
  */

@@ -123,6 +123,9 @@ public final class BudgetCalculator {
         boolean two = trimOf(stage).method() == Trim.Method.TWO_POINT;
         double fixed = fixedInYield(stage, terms, true, two);
         double bound = trimmed(stage, v, terms, trimOf(stage).method()).worstCaseV();
+        if (trimOf(stage).method() == Trim.Method.TWO_TEMPERATURE) {
+            return new TwoTemperatureYield(stage, v, fixed, CalibrationLine.of(stage, trimOf(stage))).run(yieldTarget(stage), bound);
+        }
         return new YieldModel(stage, v, fixed, true, two).run(yieldTarget(stage), bound);
     }
 
@@ -179,10 +182,15 @@ public final class BudgetCalculator {
      * term 3 from 25 °C ({@link BiasTerm#afterTrim}), keeps term 2 without its over-temperature
      * cap ({@link DriftTerm#afterTrim}), adds
      * the trim resolution. Two-point: also removes the static gain errors (term 6
-     * and the tolerance part of term 8).
+     * and the tolerance part of term 8). Two-temperature ({@link CalibrationLine}): removes terms
+     * 1 and 2 (the engine's offset is linear in temperature per unit: vos + drift x (T - 25)),
+     * leaves of term 3 its part not linear in temperature ({@link BiasTerm#afterTwoTemperature}),
+     * keeps every gain term, and the resolution grows by {@link CalibrationLine#resolutionFactor}
+     * where the range reaches beyond the calibration points.
      */
     private static Trimmed trimmed(Stage stage, PartValues v, List<TermResult> terms, Trim.Method method) {
         boolean two = method == Trim.Method.TWO_POINT;
+        CalibrationLine line = method == Trim.Method.TWO_TEMPERATURE ? CalibrationLine.of(stage, trimOf(stage)) : null;
         double wc = 0;
         double sq = 0;
         for (ErrorTerm t : TERMS) {
@@ -192,8 +200,8 @@ public final class BudgetCalculator {
             double o = find(terms, t.key()).outputV();
             switch (t.key()) {
                 case OffsetTerm.KEY -> o = 0;
-                case DriftTerm.KEY -> o = DriftTerm.afterTrim(stage, v);
-                case BiasTerm.KEY -> o = BiasTerm.afterTrim(stage, v);
+                case DriftTerm.KEY -> o = line != null ? 0 : DriftTerm.afterTrim(stage, v);
+                case BiasTerm.KEY -> o = line != null ? BiasTerm.afterTwoTemperature(stage, v, line) : BiasTerm.afterTrim(stage, v);
                 case OpenLoopGainTerm.KEY -> o = two ? 0 : o;
                 case ResistorTerm.KEY -> o = two ? ResistorTerm.tempcoPart(stage) : o;
                 default -> { }
@@ -201,7 +209,7 @@ public final class BudgetCalculator {
             wc += o;
             sq += o * o;
         }
-        double res = trimOf(stage).resolution();
+        double res = trimOf(stage).resolution() * (line != null ? line.resolutionFactor(stage.tMin(), stage.tMax()) : 1.0);
         wc += res;
         sq += res * res;
         return new Trimmed(wc, Math.sqrt(sq));
@@ -256,6 +264,12 @@ public final class BudgetCalculator {
                     + ", as if nothing after the amplifier limited it (a first-order filter at band.high would end it at "
                     + Units.format(NoiseModel.SINGLE_POLE_ENBW * stage.bandHigh(), Dimension.FREQUENCY)
                     + "); give the filter's order if one follows");
+        }
+        Trim trim = trimOf(stage);
+        if (trim.allowed() && trim.method() == Trim.Method.TWO_TEMPERATURE && (Double.isNaN(trim.cold()) || Double.isNaN(trim.hot()))) {
+            w.add("trim: two-temperature calibration at " + Units.format(trim.coldIn(stage), Dimension.TEMPERATURE) + " and "
+                    + Units.format(trim.hotIn(stage), Dimension.TEMPERATURE) + (Double.isNaN(trim.cold()) && Double.isNaN(trim.hot())
+                    ? ", the range ends (trim.cold and trim.hot not given)" : " (a calibration temperature not given is the range end)"));
         }
         if (stage.acCoupled()) {
             w.add("ac-coupled: offset, drift, bias and aging count only toward output headroom, not the error");

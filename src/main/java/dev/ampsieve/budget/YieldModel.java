@@ -109,7 +109,7 @@ final class YieldModel {
     }
 
     /** Zero-centred spread: s = max(typ, bound/k) (bound/k without a typical) truncated at +/- bound. */
-    private static TruncatedNormal symmetric(Figure f, double bound, double k) {
+    static TruncatedNormal symmetric(Figure f, double bound, double k) {
         if (f.basis() == Basis.MISSING || bound == 0 || !Double.isFinite(bound)) {
             return null;
         }
@@ -122,7 +122,7 @@ final class YieldModel {
      * truncated at +/- its bound k x typ; never below zero when the sign is known; fixed at its bound
      * without a typical.
      */
-    private static TruncatedNormal bias(Figure f, double k, boolean signKnown) {
+    static TruncatedNormal bias(Figure f, double k, boolean signKnown) {
         if (f.basis() == Basis.MISSING || f.bound() == 0) {
             return null;
         }

@@ -78,9 +78,15 @@ public final class BudgetText {
         line(o, "Yield      %s", yieldLine(b.yield(), s));
         Trim trim = BudgetCalculator.trimOf(s);
         for (Trim.Method m : Trim.Method.values()) {
+            boolean twoTemp = m == Trim.Method.TWO_TEMPERATURE;
+            if (twoTemp && !(trim.coldIn(s) < trim.hotIn(s))) {
+                continue; // a range of one temperature gives no second calibration point
+            }
             Trimmed t = m == trim.method() ? b.trimmed() : BudgetCalculator.trimmed(s, b.part(), m);
-            line(o, "%-10s %s at 25 °C%s: worst-case %s (%s), RSS %s (%s)%s", m == Trim.Method.ONE_POINT ? "Trimmed" : "",
-                    methodName(m), trim.resolution() > 0 ? ", resolution " + v(trim.resolution()) : "",
+            String where = twoTemp ? "at " + Units.format(trim.coldIn(s), Dimension.TEMPERATURE) + " and "
+                    + Units.format(trim.hotIn(s), Dimension.TEMPERATURE) : "at 25 °C";
+            line(o, "%-10s %s %s%s: worst-case %s (%s), RSS %s (%s)%s", m == Trim.Method.ONE_POINT ? "Trimmed" : "",
+                    methodName(m), where, trim.resolution() > 0 ? ", resolution " + v(trim.resolution()) : "",
                     v(t.worstCaseV()), share(t.worstCaseV(), limit).strip(), v(t.rssV()), share(t.rssV(), limit).strip(),
                     // one space before the note: two would mark a table row, which Wrap never folds
                     m == trim.method() ? (trim.allowed() ? "; the stage's trim" : "; the stage's method, trim not allowed") : "");
@@ -167,7 +173,7 @@ public final class BudgetText {
     }
 
     static String methodName(Trim.Method m) {
-        return m == Trim.Method.TWO_POINT ? "two-point" : "one-point";
+        return m.key();
     }
 
     static String pct(double ratio) {

@@ -32,6 +32,9 @@ final class Questions {
     /** Only asked when a trim is allowed. */
     static final Set<String> TRIM_DETAILS = Set.of("trim.method", "trim.resolution", "trim.cost");
 
+    /** Only asked for a two-temperature calibration. */
+    static final Set<String> CALIBRATION_POINTS = Set.of("trim.cold", "trim.hot");
+
     /** Every question, in order; the combined ranges stand for their two keys. */
     static List<String> order() {
         List<String> out = new ArrayList<>(FIRST);
@@ -56,6 +59,9 @@ final class Questions {
     static boolean applies(String id, Map<String, String> answers) {
         if (HEADROOM.contains(id)) {
             return answers.containsKey("supply.voltage");
+        }
+        if (CALIBRATION_POINTS.contains(id)) {
+            return "true".equals(answers.get("trim.allowed")) && "two-temperature".equals(answers.get("trim.method"));
         }
         return !TRIM_DETAILS.contains(id) || "true".equals(answers.get("trim.allowed"));
     }

@@ -87,7 +87,7 @@ public final class StageKeys {
 
     public static final List<String> TOPOLOGIES = List.of("non-inverting", "inverting", "follower");
     public static final List<String> CRITERIA = List.of("worst-case", "rss", "yield 99.9 %");
-    public static final List<String> TRIM_METHODS = List.of("one-point", "two-point");
+    public static final List<String> TRIM_METHODS = java.util.Arrays.stream(Trim.Method.values()).map(Trim.Method::key).toList();
     /** band.filter-order: "none", or the order of the Butterworth low-pass at band.high, 1..{@link Stage#MAX_FILTER_ORDER}. */
     public static final List<String> FILTER_ORDERS = java.util.stream.Stream.concat(java.util.stream.Stream.of("none"),
             java.util.stream.IntStream.rangeClosed(1, Stage.MAX_FILTER_ORDER).mapToObj(String::valueOf)).toList();
@@ -180,8 +180,13 @@ public final class StageKeys {
                     "random seed, so a yield can be reproduced"),
             k("trim.allowed", Kind.BOOLEAN, List.of(), "false (true once a trim block is written)", "true",
                     "whether each unit may be calibrated; a trim can make a cheaper part fit"),
-            k("trim.method", Kind.CHOICE, TRIM_METHODS, "one-point", "one-point",
-                    "one-point removes offset at 25 C; two-point also removes the static gain error"),
+            k("trim.method", Kind.CHOICE, TRIM_METHODS, "one-point", "two-temperature",
+                    "one-point removes offset at 25 C; two-point also removes the static gain error at 25 C; "
+                            + "two-temperature removes offset and its linear drift (calibrated at trim.cold and trim.hot)"),
+            q("trim.cold", Dimension.TEMPERATURE, "temperature.min (two-temperature only)", "-40 C",
+                    "lower calibration temperature of a two-temperature trim; outside cold..hot the resolution's error grows"),
+            q("trim.hot", Dimension.TEMPERATURE, "temperature.max (two-temperature only)", "85 C",
+                    "upper calibration temperature of a two-temperature trim; a wider spacing makes the correction line steadier"),
             q("trim.resolution", Dimension.VOLTAGE, "0 V", "0.5 mV", "the step of the correction, at the output; it stays"),
             k("trim.cost", Kind.NUMBER, List.of(), "0", "0.60",
                     "cost of trimming one unit (labour, trimmer or DAC, test time), to compare with a better part"),

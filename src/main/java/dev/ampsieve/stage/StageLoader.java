@@ -257,7 +257,7 @@ public final class StageLoader {
             }
             Integer trials = f.integer(m, "", "trials", StageKeys.MIN_TRIALS, StageKeys.MAX_TRIALS);
             Long seed = f.longValue(m, "", "seed");
-            Trim trim = trim(m);
+            Trim trim = trim(m, tMin, tMax);
             Integer quantity = f.integer(m, "", "quantity", 1, StageKeys.MAX_QUANTITY);
             Double maxPrice = positive(m, "", "max-price", Dimension.NUMBER);
             money(m, "", "max-price", maxPrice);
@@ -640,7 +640,7 @@ public final class StageLoader {
             return Criterion.WORST_CASE;
         }
 
-        private Trim trim(Node.Mapping m) {
+        private Trim trim(Node.Mapping m, double tMin, double tMax) {
             Node v = m.entries().get("trim");
             if (v == null || v instanceof Node.Scalar s && s.text() == null) {
                 return Trim.NONE;
@@ -660,8 +660,57 @@ public final class StageLoader {
             volts(t, "trim", "resolution", resolution);
             double cost = nonNegative(t, "trim", "cost", Dimension.NUMBER, 0.0);
             money(t, "trim", "cost", cost);
-            return new Trim(allowed == null || allowed,
-                    "two-point".equals(method) ? Trim.Method.TWO_POINT : Trim.Method.ONE_POINT, resolution, cost);
+            Trim.Method how = Trim.Method.ONE_POINT;
+            for (Trim.Method each : Trim.Method.values()) {
+                if (each.key().equals(method)) {
+                    how = each;
+                }
+            }
+            double[] at = calibrationTemperatures(t, how, tMin, tMax);
+            return new Trim(allowed == null || allowed, how, resolution, cost, at[0], at[1]);
+        }
+
+        /**
+         * trim.cold and trim.hot: only with method two-temperature, each an ambient a circuit can see,
+         * cold below hot; an absent one is NaN (the range end). Returns {cold, hot}.
+         */
+        private double[] calibrationTemperatures(Node.Mapping t, Trim.Method how, double tMin, double tMax) {
+            Double cold = f.quantity(t, "trim", "cold", Dimension.TEMPERATURE);
+            Double hot = f.quantity(t, "trim", "hot", Dimension.TEMPERATURE);
+            if (how != Trim.Method.TWO_TEMPERATURE) {
+                for (String key : List.of("cold", "hot")) {
+                    if (present(t, key)) {
+                        f.error(Fields.where(t, key), "trim." + key, "a calibration temperature belongs to method "
+                                + "two-temperature, but the method is " + how.key(),
+                                "write 'method: two-temperature', or remove 'trim." + key + "'");
+                    }
+                }
+                return new double[] {Double.NaN, Double.NaN};
+            }
+            for (String key : List.of("cold", "hot")) {
+                Double v = key.equals("cold") ? cold : hot;
+                if (v != null && (v < MIN_AMBIENT || v > MAX_AMBIENT)) {
+                    f.error(Fields.where(t, key), "trim." + key, Units.format(v, Dimension.TEMPERATURE) + " is outside "
+                            + Units.format(MIN_AMBIENT, Dimension.TEMPERATURE) + " to " + Units.format(MAX_AMBIENT, Dimension.TEMPERATURE)
+                            + ", an ambient no circuit sees", "write the calibration temperature in °C, such as '"
+                            + StageKeys.get("trim." + key).example() + "'");
+                    return new double[] {Double.NaN, Double.NaN};
+                }
+            }
+            double c = cold != null ? cold : tMin;
+            double h = hot != null ? hot : tMax;
+            if (!(c < h)) {
+                // a line needs two distinct points; name the key the user wrote (or the range when both defaulted)
+                String key = hot != null ? "hot" : cold != null ? "cold" : null;
+                String problem = "the two calibration temperatures must differ, cold below hot; they are "
+                        + Units.format(c, Dimension.TEMPERATURE) + (cold == null ? " (temperature.min)" : "") + " and "
+                        + Units.format(h, Dimension.TEMPERATURE) + (hot == null ? " (temperature.max)" : "");
+                String fix = key == null ? "give 'trim.cold' and 'trim.hot', such as '-40 C' and '85 C'"
+                        : "write 'trim.cold' below 'trim.hot', such as 'cold: -40 C' and 'hot: 85 C'";
+                f.error(key == null ? Fields.where(t, "method") : Fields.where(t, key), key == null ? "trim.method" : "trim." + key,
+                        problem, fix);
+            }
+            return new double[] {cold != null ? cold : Double.NaN, hot != null ? hot : Double.NaN};
         }
 
         // ------------------------------------------------------------ helpers

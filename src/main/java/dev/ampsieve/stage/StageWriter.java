@@ -226,7 +226,13 @@ public final class StageWriter {
         a.put("seed", String.valueOf(s.seed()));
         Trim t = s.trim();
         a.put("trim.allowed", String.valueOf(t.allowed()));
-        a.put("trim.method", t.method() == Trim.Method.TWO_POINT ? "two-point" : "one-point");
+        a.put("trim.method", t.method().key());
+        if (!Double.isNaN(t.cold())) {
+            a.put("trim.cold", exact(t.cold(), Dimension.TEMPERATURE));
+        }
+        if (!Double.isNaN(t.hot())) {
+            a.put("trim.hot", exact(t.hot(), Dimension.TEMPERATURE));
+        }
         a.put("trim.resolution", exact(t.resolution(), Dimension.VOLTAGE));
         a.put("trim.cost", exact(t.cost(), Dimension.NUMBER));
         a.put("quantity", String.valueOf(s.quantity()));

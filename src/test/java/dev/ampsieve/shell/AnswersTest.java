@@ -71,7 +71,9 @@ class AnswersTest {
         assertEquals("true", Answers.interpret("trim.allowed", "yes", Map.of()).put().get("trim.allowed"));
         assertEquals("false", Answers.interpret("ac-coupled", "N", Map.of()).put().get("ac-coupled"));
         assertEquals("inverting", Answers.interpret("topology", "inv", Map.of()).put().get("topology"));
-        assertEquals("two-point", Answers.interpret("trim.method", "two", Map.of()).put().get("trim.method"));
+        // "two" alone would fit two-point and two-temperature; a longer prefix settles it
+        assertEquals("two-point", Answers.interpret("trim.method", "two-p", Map.of()).put().get("trim.method"));
+        assertEquals("two-temperature", Answers.interpret("trim.method", "two-t", Map.of()).put().get("trim.method"));
         AnswerException e = assertThrows(AnswerException.class, () -> Answers.interpret("topology", "bridge", Map.of()));
         assertTrue(e.line().contains("non-inverting, inverting, follower"), e.line());
     }
