@@ -5,6 +5,7 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.ampsieve.advice.Advice;
 import dev.ampsieve.advice.Candidate;
 import dev.ampsieve.advice.Change;
+import dev.ampsieve.advice.PartTarget;
 import dev.ampsieve.advice.NoFitAdvice;
 import dev.ampsieve.advice.Ranking;
 import dev.ampsieve.advice.Rejected;
@@ -298,6 +299,13 @@ public final class RankReport {
                 cn.put("text", c.text());
                 ObjectNode vals = cn.putObject("values");
                 c.values().forEach((k, v) -> JsonSupport.put(vals, k, v));
+            }
+            ArrayNode tg = f.putArray("targets");
+            for (PartTarget pt : nf.targets()) {
+                ObjectNode tn2 = tg.addObject();
+                tn2.put("quantity", pt.quantity().key());
+                JsonSupport.put(tn2, "value", pt.value());
+                JsonSupport.put(tn2, "atC", pt.atC());
             }
         }
         ArrayNode lines = n.putArray("lines");
