@@ -47,6 +47,9 @@ public final class Advisor {
         Candidate asIs = fitting.stream().filter(c -> !c.trimmed()).findFirst().orElse(null);
         TrimAdvice trim = trim(stage, ranked, fitting, asIs);
         ZeroDriftAdvice zeroDrift = zeroDrift(stage, fitting);
+        if (zeroDrift.warranted()) {
+            zeroDrift = zeroDrift.withResistorOption(resistorOption(stage, ranked, zeroDrift.selfCorrecting(), budgets));
+        }
         NoFitAdvice noFit = fitting.isEmpty() ? noFit(stage, ranked, budgets) : null;
 
         List<String> lines = new ArrayList<>();
@@ -260,6 +263,33 @@ public final class Advisor {
         return c.trimmed() ? " with the trim" : "";
     }
 
+    /**
+     * Under a worst-case or RSS criterion, when a zero-drift part is warranted: the closest
+     * standard part cheaper than it that does not fit, and the resistors that would let it fit
+     * ({@link #betterResistors}), so that a designer sees both ways out. Not under the yield
+     * criterion, where each try is a Monte Carlo run. Null when there is none.
+     */
+    static ZeroDriftAdvice.ResistorOption resistorOption(Stage stage, List<Candidate> ranked, Candidate zeroDrift,
+            BudgetFunction budgets) {
+        if (stage.criterion().kind() == Criterion.Kind.YIELD || zeroDrift == null) {
+            return null;
+        }
+        Candidate std = ranked.stream()
+                .filter(c -> !c.part().selfCorrecting() && !c.fits() && c.constraintsMet())
+                .filter(c -> !(c.effectiveCost() >= zeroDrift.effectiveCost()))
+                .max(Comparator.comparingDouble(Candidate::margin).thenComparing(Candidate::id, Comparator.reverseOrder()))
+                .orElse(null);
+        if (std == null) {
+            return null;
+        }
+        Part p = std.part();
+        Predicate<Stage> fits = s -> {
+            Budget b = budgets.compute(s, p);
+            return b.constraintsMet() && b.verdict() != Verdict.NO_FIT;
+        };
+        return betterResistors(stage, fits).map(ch -> new ZeroDriftAdvice.ResistorOption(std, ch)).orElse(null);
+    }
+
     private static void zeroDriftLines(Stage stage, ZeroDriftAdvice z, List<Candidate> fitting, List<String> lines) {
         int q = stage.quantity();
         Candidate s = z.selfCorrecting();
@@ -288,6 +318,12 @@ public final class Advisor {
         if (z.warranted()) {
             lines.add("With " + s.id() + ", check:");
             z.caveats().forEach(c -> lines.add("  - " + c));
+        }
+        if (z.resistorOption() != null) {
+            Candidate o = z.resistorOption().part();
+            lines.add("Or a standard part with better resistors: " + o.id() + " at " + money(o.effectiveCost(), o.currency())
+                    + withTrim(o) + " would fit with " + z.resistorOption().change().text()
+                    + " (the resistors' cost is not in the figures); now " + standing(o) + ".");
         }
     }
 

@@ -284,6 +284,15 @@ public final class RankReport {
         JsonSupport.put(zn, "savingTotal", z.savingTotal());
         ArrayNode cav = zn.putArray("caveats");
         z.caveats().forEach(cav::add);
+        if (z.resistorOption() == null) {
+            zn.putNull("resistorOption");
+        } else {
+            ObjectNode ro = zn.putObject("resistorOption");
+            ro.set("part", ref(z.resistorOption().part()));
+            ro.put("text", z.resistorOption().change().text());
+            ObjectNode rv = ro.putObject("values");
+            z.resistorOption().change().values().forEach((k, v) -> JsonSupport.put(rv, k, v));
+        }
         NoFitAdvice nf = a.noFit();
         if (nf == null) {
             n.putNull("noFit");

@@ -227,4 +227,26 @@ class ActionableAdviceTest {
         Ranking r = Ranker.rank(s, List.of(p), engine);
         assertFalse(changes(r).containsKey(Change.Kind.LOWER_SOURCE_RESISTANCE), r.advice().lines().toString());
     }
+
+    @Test
+    void betterResistorsAreOfferedBesideAWarrantedZeroDriftPart() {
+        // LinearEngine, NG 100, ratio tolerance 0.01 %: resistor term 2.5 V x 0.99 x 1e-4 = 247.5 µV.
+        // Zero-drift Z (3.00): 100 x 1 µV + 247.5 µV = 347.5 µV fits, the only part that does.
+        // Standard S (1.00): 100 x 8 µV + 247.5 µV = 1.0475 mV misses; with resistors of
+        // tol <= (1 mV - 0.8 mV) / 2.475 V = 8.0808e-5 it fits: printed 0.00808 % (rounded down)
+        Stage s = stage().ratioTolerance(1e-4).build();
+        Part z = part("Z").architecture(dev.ampsieve.catalog.Architecture.CHOPPER).price(3.0).vos(null, 1e-6).build();
+        Part std = part("S").price(1.0).vos(null, 8e-6).build();
+        Ranking r = Ranker.rank(s, List.of(z, std), new LinearEngine());
+        ZeroDriftAdvice zd = r.advice().zeroDrift();
+        assertEquals(ZeroDriftAdvice.Status.ONLY_OPTION, zd.status());
+        assertNotNull(zd.resistorOption(), r.advice().lines().toString());
+        assertEquals("S", zd.resistorOption().part().id());
+        assertEquals(8.08e-5, zd.resistorOption().change().values().get("ratioTolerance"), 1e-12);
+        assertTrue(r.advice().lines().stream().anyMatch(l -> l.startsWith("Or a standard part with better resistors: S at"
+                + " 1.00 USD would fit with resistors matched to 80.8 ppm")), r.advice().lines().toString());
+        // re-checked as printed
+        assertTrue(fits(new LinearEngine(), StageEdit.withResistors(s, 8.08e-5 / 1e-4), std));
+        assertFalse(fits(new LinearEngine(), StageEdit.withResistors(s, 8.09e-5 / 1e-4), std));
+    }
 }
