@@ -285,7 +285,7 @@ public final class Advisor {
         Part p = std.part();
         Predicate<Stage> fits = s -> {
             Budget b = budgets.compute(s, p);
-            return b.constraintsMet() && b.verdict() != Verdict.NO_FIT;
+            return fitsBy(b);
         };
         return betterResistors(stage, fits).map(ch -> new ZeroDriftAdvice.ResistorOption(std, ch)).orElse(null);
     }
@@ -343,11 +343,19 @@ public final class Advisor {
                 partTargets(stage, closest, budgets));
     }
 
+    /**
+     * A re-run budget counts as a fit only on a positive verdict with every constraint met: any
+     * verdict other than the two that say "fits" is not one, so an offered change never rests on it.
+     */
+    static boolean fitsBy(Budget b) {
+        return b.constraintsMet() && (b.verdict() == Verdict.FITS || b.verdict() == Verdict.FITS_AFTER_TRIM);
+    }
+
     static List<Change> changes(Stage stage, Candidate closest, BudgetFunction budgets) {
         Part p = closest.part();
         Predicate<Stage> fits = s -> {
             Budget b = budgets.compute(s, p);
-            return b.constraintsMet() && b.verdict() != Verdict.NO_FIT;
+            return fitsBy(b);
         };
         List<Change> out = new ArrayList<>();
         lowerGain(stage, fits).ifPresent(out::add);
@@ -591,7 +599,7 @@ public final class Advisor {
             return java.util.Optional.empty();
         }
         Budget b = budgets.compute(StageEdit.withTrim(stage, tried), p);
-        if (!b.constraintsMet() || b.verdict() == Verdict.NO_FIT) {
+        if (!fitsBy(b)) {
             return java.util.Optional.empty();
         }
         Candidate c = Candidate.of(b);
@@ -668,7 +676,7 @@ public final class Advisor {
         Part p = closest.part();
         Predicate<Part> fits = q -> {
             Budget b = budgets.compute(stage, q);
-            return b.constraintsMet() && b.verdict() != Verdict.NO_FIT;
+            return fitsBy(b);
         };
         dev.ampsieve.budget.PartValues v = dev.ampsieve.budget.PartValues.of(p, stage);
         List<PartTarget> out = new ArrayList<>();
