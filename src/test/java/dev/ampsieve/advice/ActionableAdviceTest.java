@@ -87,6 +87,31 @@ class ActionableAdviceTest {
     }
 
     @Test
+    void vosAndDriftTargetsThroughTheRealBudget() {
+        // follower fed from 0 Ω (no bias or resistor-noise term), no noise of its own, no common-mode or supply
+        // change, no gain terms (no full scale), no service life: the budget is offset + drift alone,
+        // vos + drift x 45 °C (0..70 °C), against 100 µV
+        Stage s = new Stage(Topology.FOLLOWER, 0, 1e3, 0, 0, 0, 70, 5.0, 0, 0, null, null, 0.1, 10, 1, null, 0, 0, 0,
+                Limit.output(100e-6), Criterion.WORST_CASE, 3, 2000, 1L, Trim.NONE, 1000, null, false, null);
+        Part p = part("P").vos(null, 80e-6).drift(null, 0.51e-6).ib(null, 1e-9).noise(0.0, 0.0, 0.0, 0.0).build();
+        BudgetFunction engine = BudgetCalculator::compute;
+        Ranking r = Ranker.rank(s, List.of(p), engine);
+        // 80 µV + 0.51 µV/°C x 45 °C = 80 + 22.95 = 102.95 µV > 100 µV
+        assertEquals(102.95e-6, r.candidates().get(0).budget().worstCaseV(), 1e-12);
+        Map<PartTarget.Quantity, PartTarget> t = targets(r);
+        // vos: Y + 22.95 µV <= 100 µV  ->  Y <= 77.05 µV, printed rounded down: 77.0 µV
+        assertEquals(77.0e-6, t.get(PartTarget.Quantity.VOS).value(), 1e-15);
+        // drift: 80 µV + Z x 45 °C <= 100 µV  ->  Z <= 20 µV / 45 °C = 0.4444 µV/°C, printed 444 nV/°C
+        assertEquals(444e-9, t.get(PartTarget.Quantity.DRIFT).value(), 1e-15);
+        assertTrue(fits(engine, s, PartEdit.withVos(p, 77.0e-6, p.vosDrift())));
+        assertFalse(fits(engine, s, PartEdit.withVos(p, 77.1e-6, p.vosDrift())));
+        assertTrue(fits(engine, s, PartEdit.withDrift(p, 444e-9)));
+        assertFalse(fits(engine, s, PartEdit.withDrift(p, 445e-9)));
+        // no resistance at the inputs: the bias current does nothing here, so no IB target
+        assertFalse(t.containsKey(PartTarget.Quantity.IB));
+    }
+
+    @Test
     void vosAndDriftTargetsAreWorkedFromTheirTerms() {
         // LinearEngine: NG 100, 0..70 °C (dT 45), limit 1 mV; vos 8 µV -> 0.8 mV, drift 0.123 µV/°C -> 0.5535 mV
         Stage s = stage().build();
