@@ -6,8 +6,9 @@ import dev.ampsieve.catalog.Spread;
 /**
  * Copies of a part with one catalog figure replaced, for "what part would fit" searches. The
  * copy keeps nothing of the original that a different part could not be counted on to have:
- * its over-temperature maxima of the changed figures are dropped, so the engine's own rules for
- * an absent figure (never flattering) apply to them.
+ * the offset's over-temperature maximum (which caps the drift) and the offset current are
+ * dropped where the changed figure would make them stale, so the engine's own rules for an
+ * absent figure (never flattering) apply to them.
  */
 final class PartEdit {
     private PartEdit() {
@@ -30,8 +31,8 @@ final class PartEdit {
 
     /**
      * vos.max = {@code vos}, with the over-temperature maximum dropped (it belongs to the closest
-     * part) and the drift held at {@code drift} V/°C, the closest part's drift bound, so that a
-     * drift estimated from the offset does not shrink with it.
+     * part) and the drift figures set to {@code drift} (the closest part's, or the bound the
+     * engine used for it), so that a drift estimated from the offset does not shrink with it.
      */
     static Part withVos(Part p, double vos, Spread drift) {
         Spread s = new Spread(cappedTyp(p.vos().typ(), vos), vos, null);
