@@ -47,6 +47,9 @@ public final class Advisor {
         Candidate asIs = fitting.stream().filter(c -> !c.trimmed()).findFirst().orElse(null);
         TrimAdvice trim = trim(stage, ranked, fitting, asIs);
         ZeroDriftAdvice zeroDrift = zeroDrift(stage, fitting);
+        if (zeroDrift.warranted()) {
+            zeroDrift = zeroDrift.withResistorOption(resistorOption(stage, ranked, zeroDrift.selfCorrecting(), budgets));
+        }
         NoFitAdvice noFit = fitting.isEmpty() ? noFit(stage, ranked, budgets) : null;
 
         List<String> lines = new ArrayList<>();
@@ -264,6 +267,33 @@ public final class Advisor {
         return c.trimmed() ? " with the trim" : "";
     }
 
+    /**
+     * Under a worst-case or RSS criterion, when a zero-drift part is warranted: the closest
+     * standard part cheaper than it that does not fit, and the resistors that would let it fit
+     * ({@link #betterResistors}), so that a designer sees both ways out. Not under the yield
+     * criterion, where each try is a Monte Carlo run. Null when there is none.
+     */
+    static ZeroDriftAdvice.ResistorOption resistorOption(Stage stage, List<Candidate> ranked, Candidate zeroDrift,
+            BudgetFunction budgets) {
+        if (stage.criterion().kind() == Criterion.Kind.YIELD || zeroDrift == null) {
+            return null;
+        }
+        Candidate std = ranked.stream()
+                .filter(c -> !c.part().selfCorrecting() && !c.fits() && c.constraintsMet())
+                .filter(c -> !(c.effectiveCost() >= zeroDrift.effectiveCost()))
+                .max(Comparator.comparingDouble(Candidate::margin).thenComparing(Candidate::id, Comparator.reverseOrder()))
+                .orElse(null);
+        if (std == null) {
+            return null;
+        }
+        Part p = std.part();
+        Predicate<Stage> fits = s -> {
+            Budget b = budgets.compute(s, p);
+            return fitsBy(b);
+        };
+        return betterResistors(stage, fits).map(ch -> new ZeroDriftAdvice.ResistorOption(std, ch)).orElse(null);
+    }
+
     private static void zeroDriftLines(Stage stage, ZeroDriftAdvice z, List<Candidate> fitting, List<String> lines) {
         int q = stage.quantity();
         Candidate s = z.selfCorrecting();
@@ -293,6 +323,12 @@ public final class Advisor {
             lines.add("With " + s.id() + ", check:");
             z.caveats().forEach(c -> lines.add("  - " + c));
         }
+        if (z.resistorOption() != null) {
+            Candidate o = z.resistorOption().part();
+            lines.add("Or a standard part with better resistors: " + o.id() + " at " + money(o.effectiveCost(), o.currency())
+                    + withTrim(o) + " would fit with " + z.resistorOption().change().text()
+                    + " (the resistors' cost is not in the figures); now " + standing(o) + ".");
+        }
     }
 
     // ------------------------------------------------------------------ nothing fits
@@ -302,19 +338,28 @@ public final class Advisor {
                 .max(Comparator.comparingDouble(Candidate::margin).thenComparing(Candidate::id, Comparator.reverseOrder()))
                 .orElse(null);
         if (closest == null) {
-            return new NoFitAdvice(null, null, Double.NaN, List.of());
+            return new NoFitAdvice(null, null, Double.NaN, List.of(), List.of());
         }
         String limiting = closest.budget().limitingTerm();
         TermResult t = limiting == null ? null : closest.budget().term(limiting);
         List<Change> changes = changes(stage, closest, budgets);
-        return new NoFitAdvice(closest, limiting, t == null ? Double.NaN : t.outputV(), changes);
+        return new NoFitAdvice(closest, limiting, t == null ? Double.NaN : t.outputV(), changes,
+                partTargets(stage, closest, budgets));
+    }
+
+    /**
+     * A re-run budget counts as a fit only on a positive verdict with every constraint met: any
+     * verdict other than the two that say "fits" is not one, so an offered change never rests on it.
+     */
+    static boolean fitsBy(Budget b) {
+        return b.constraintsMet() && (b.verdict() == Verdict.FITS || b.verdict() == Verdict.FITS_AFTER_TRIM);
     }
 
     static List<Change> changes(Stage stage, Candidate closest, BudgetFunction budgets) {
         Part p = closest.part();
         Predicate<Stage> fits = s -> {
             Budget b = budgets.compute(s, p);
-            return b.constraintsMet() && b.verdict() != Verdict.NO_FIT;
+            return fitsBy(b);
         };
         List<Change> out = new ArrayList<>();
         lowerGain(stage, fits).ifPresent(out::add);
@@ -342,49 +387,155 @@ public final class Advisor {
         return r >= x || fits.test(r) ? r : r + Phrases.unit3(r);
     }
 
+    /**
+     * A change of gain never takes the stage below this share of its gain: a stage cut further
+     * is no longer the stage designed, and the advice is to split the gain with a later stage.
+     */
+    static final double MIN_GAIN_SHARE = 0.5;
+
+    /** The least gain a split leaves in this stage (non-inverting: Rf = Rg). */
+    static final double SPLIT_MIN_HERE = 2.0;
+
+    /**
+     * No change offers a resistor below this, ohms: common practice, wiring, contacts and board
+     * tracks are of this order, so a smaller value cannot be built as stated.
+     */
+    static final double RESISTOR_FLOOR = 10.0;
+
+    /** Rf that gives |signal gain| {@code g} with the stage's Rg (and Rs, inverting). */
+    static double rfFor(Stage stage, double g) {
+        return stage.topology() == Topology.INVERTING ? g * stage.rgEffective() : (g - 1.0) * stage.rg();
+    }
+
+    /** |signal gain| with feedback resistor {@code rf}. */
+    static double gainWith(Stage stage, double rf) {
+        return StageEdit.withRf(stage, rf).sourceGain();
+    }
+
     private static java.util.Optional<Change> lowerGain(Stage stage, Predicate<Stage> fits) {
         if (stage.topology() == Topology.FOLLOWER || stage.rf() <= 0) {
             return java.util.Optional.empty();
         }
         double rf = stage.rf();
         double rgEff = stage.rgEffective();
-        // scale Rf down: to a noise gain of 1 (non-inverting) or a signal gain of -1 (inverting)
-        double low = stage.topology() == Topology.NON_INVERTING ? 0.0 : Math.min(1.0, rgEff / rf);
-        if (low >= 1.0 || !fits.test(StageEdit.withRf(stage, rf * low))) {
+        // the lowest Rf offered: half the gain (inverting: at least a gain of -1), never below the resistor floor
+        double least = Math.max(MIN_GAIN_SHARE * stage.sourceGain(), stage.topology() == Topology.INVERTING ? 1.0 : 0.0);
+        double rfMin = Math.max(rfFor(stage, least), RESISTOR_FLOOR);
+        if (rfMin >= rf) {
             return java.util.Optional.empty();
         }
-        double k = Bisection.largest(x -> fits.test(StageEdit.withRf(stage, rf * x)), low, 1.0);
-        double ng = Math.max(1.0, reportLargest(StageEdit.withRf(stage, rf * k).noiseGain(),
-                g -> fits.test(StageEdit.withRf(stage, (g - 1.0) * rgEff))));
+        if (!fits.test(StageEdit.withGain(stage, rfMin))) {
+            return splitGain(stage, fits);
+        }
+        double found = Bisection.largest(x -> fits.test(StageEdit.withGain(stage, x)), rfMin, rf);
+        double ng = Math.max(1.0, reportLargest(StageEdit.withRf(stage, found).noiseGain(),
+                g -> fits.test(StageEdit.withGain(stage, (g - 1.0) * rgEff))));
         double rfNeeded = (ng - 1.0) * rgEff;
         Stage at = StageEdit.withRf(stage, rfNeeded);
         // the resistor as printed (3 digits), rounded toward the lower gain so that building it fits
         double rfShown = Phrases.round3Down(rfNeeded);
-        if (!fits.test(StageEdit.withRf(stage, rfShown))) {
+        if (!fits.test(StageEdit.withGain(stage, rfShown))) {
             rfShown -= Phrases.unit3(rfShown);
+        }
+        if (rfShown < rfMin * (1 - 1e-12) || !fits.test(StageEdit.withGain(stage, rfShown))) {
+            return splitGain(stage, fits); // the printed resistor would cross the half-gain line
         }
         Map<String, Double> v = new LinkedHashMap<>();
         v.put("noiseGain", at.noiseGain());
         v.put("signalGain", at.signalGain());
         v.put("rf", rfShown);
+        Double vfs = StageEdit.withGain(stage, rfShown).fullScaleOutput();
+        if (vfs != null) {
+            v.put("fullScaleOutput", vfs);
+        }
         String resistors = "Rf " + Phrases.ohms(rfShown) + " with Rg " + Phrases.ohms(stage.rg());
+        // the input signal stays: the output's full scale shrinks with the gain
+        String swing = vfs == null ? "" : "; full-scale output then " + volts(vfs) + " (now " + volts(stage.fullScaleOutput()) + ")";
         String text = stage.topology() == Topology.INVERTING
                 ? "a gain of " + Phrases.number(at.signalGain()) + " or less in magnitude (now "
-                + Phrases.number(stage.signalGain()) + "; noise gain " + Phrases.number(at.noiseGain()) + "): " + resistors
+                + Phrases.number(stage.signalGain()) + "; noise gain " + Phrases.number(at.noiseGain()) + "): " + resistors + swing
                 : "a gain of " + Phrases.number(at.noiseGain()) + " or lower (now " + Phrases.number(stage.noiseGain())
-                + "): " + resistors;
+                + "): " + resistors + swing;
         return java.util.Optional.of(new Change(Change.Kind.LOWER_GAIN, text, v));
+    }
+
+    /**
+     * The stage with {@code here} of its gain (|signal gain|) and the rest, G / here, in a later
+     * stage: its full-scale output scaled with the gain, and its share of the limit the limit
+     * divided by the later gain (the later stage multiplies this stage's error by it).
+     */
+    static Stage splitAt(Stage stage, double rf) {
+        double after = stage.sourceGain() / gainWith(stage, rf);
+        return StageEdit.withLimit(StageEdit.withGain(stage, rf), Limit.output(stage.limitVolts() / after));
+    }
+
+    /**
+     * When even half the gain does not fit: the largest gain here that fits when a later stage
+     * supplies the rest, each judged by the same budget with the limit scaled; null when not even
+     * a gain of {@link #SPLIT_MIN_HERE} here fits (then no split helps: the part's input errors
+     * stay the same however the gain is shared).
+     */
+    private static java.util.Optional<Change> splitGain(Stage stage, Predicate<Stage> fits) {
+        double g = stage.sourceGain();
+        double e = stage.limitVolts();
+        if (!(e > 0) || !Double.isFinite(e) || MIN_GAIN_SHARE * g <= SPLIT_MIN_HERE) {
+            return java.util.Optional.empty();
+        }
+        double rfLow = Math.max(rfFor(stage, SPLIT_MIN_HERE), RESISTOR_FLOOR);
+        double rfHigh = rfFor(stage, MIN_GAIN_SHARE * g);
+        java.util.function.DoublePredicate ok = rf -> fits.test(splitAt(stage, rf));
+        if (!(rfLow < rfHigh) || !ok.test(rfLow)) {
+            return java.util.Optional.empty();
+        }
+        double found = ok.test(rfHigh) ? rfHigh : Bisection.largest(ok, rfLow, rfHigh);
+        // the resistor as printed, rounded toward less gain here, and re-checked
+        double rfShown = Phrases.round3Down(found);
+        if (!ok.test(rfShown)) {
+            rfShown -= Phrases.unit3(rfShown);
+        }
+        if (rfShown < rfLow * (1 - 1e-12) || !ok.test(rfShown)) {
+            return java.util.Optional.empty();
+        }
+        Stage here = splitAt(stage, rfShown);
+        double gHere = here.sourceGain();
+        double after = g / gHere;
+        Map<String, Double> v = new LinkedHashMap<>();
+        v.put("gainHere", here.signalGain());
+        v.put("gainAfter", after);
+        v.put("noiseGain", here.noiseGain());
+        v.put("rf", rfShown);
+        v.put("limitHereV", here.limitVolts());
+        String text = "split the gain with a later stage: a gain of " + Phrases.number(stage.signalGain())
+                + " in one stage does not fit even at half of it; " + Phrases.number(here.signalGain()) + " here (Rf "
+                + Phrases.ohms(rfShown) + " with Rg " + Phrases.ohms(stage.rg()) + ") and " + Phrases.number(after)
+                + " after it would, this stage held to " + volts(here.limitVolts()) + " at its output (the limit divided by "
+                + Phrases.number(after) + "): the later stage's errors are divided by " + Phrases.number(gHere)
+                + " when referred to the input";
+        return java.util.Optional.of(new Change(Change.Kind.SPLIT_GAIN, text, v));
     }
 
     private static java.util.Optional<Change> lowerSource(Stage stage, Predicate<Stage> fits) {
         double rs = stage.sourceResistance();
-        if (rs <= 0 || !fits.test(StageEdit.withSourceResistance(stage, 0))) {
+        // never "remove the source resistor": nothing below the resistor floor is offered
+        if (rs <= RESISTOR_FLOOR || !fits.test(StageEdit.withSourceResistance(stage, RESISTOR_FLOOR))) {
             return java.util.Optional.empty();
         }
         java.util.function.DoublePredicate ok = r -> fits.test(StageEdit.withSourceResistance(stage, r));
-        double x = reportLargest(Bisection.largest(ok, 0, rs), ok);
+        double x = Math.max(RESISTOR_FLOOR, reportLargest(Bisection.largest(ok, RESISTOR_FLOOR, rs), ok));
+        if (!ok.test(x)) {
+            return java.util.Optional.empty();
+        }
+        Map<String, Double> v = new LinkedHashMap<>();
+        v.put("sourceResistance", x);
         String text = "a source resistance of " + Phrases.ohms(x) + " or lower (now " + Phrases.ohms(rs) + ")";
-        return java.util.Optional.of(new Change(Change.Kind.LOWER_SOURCE_RESISTANCE, text, Map.of("sourceResistance", x)));
+        if (stage.topology() == Topology.INVERTING) {
+            // Rs is part of the gain resistor here: the gain (and the output's full scale) rises with it
+            Stage at = StageEdit.withSourceResistance(stage, x);
+            v.put("signalGain", at.signalGain());
+            text += "; the signal gain then " + Phrases.number(at.signalGain())
+                    + (at.fullScaleOutput() == null ? "" : ", full-scale output " + volts(at.fullScaleOutput()));
+        }
+        return java.util.Optional.of(new Change(Change.Kind.LOWER_SOURCE_RESISTANCE, text, v));
     }
 
     private static java.util.Optional<Change> narrowerTemperature(Stage stage, Predicate<Stage> fits) {
@@ -452,7 +603,7 @@ public final class Advisor {
             return java.util.Optional.empty();
         }
         Budget b = budgets.compute(StageEdit.withTrim(stage, tried), p);
-        if (!b.constraintsMet() || b.verdict() == Verdict.NO_FIT) {
+        if (!fitsBy(b)) {
             return java.util.Optional.empty();
         }
         Candidate c = Candidate.of(b);
@@ -512,6 +663,71 @@ public final class Advisor {
         return java.util.Optional.of(new Change(Change.Kind.LOOSER_LIMIT, text.toString(), v));
     }
 
+    /**
+     * Floors of the part-side targets: below them no catalog part is to be had, so the target
+     * would not be advice (common practice, orders of magnitude [from memory]: the best
+     * electrometer inputs guarantee tens of fA, the best zero-drift parts about 1 µV and 5 nV/°C).
+     */
+    static final double IB_FLOOR = 1e-15;
+    static final double VOS_FLOOR = 0.5e-6;
+    static final double DRIFT_FLOOR = 2e-9;
+
+    /**
+     * The part-side figures that would make the stage fit as it is, each found by bisection on a
+     * copy of the closest part with that one figure changed ({@link PartEdit}), judged by the same
+     * budget function, printed rounded down to 3 digits and re-checked as printed.
+     */
+    static List<PartTarget> partTargets(Stage stage, Candidate closest, BudgetFunction budgets) {
+        Part p = closest.part();
+        Predicate<Part> fits = q -> {
+            Budget b = budgets.compute(stage, q);
+            return fitsBy(b);
+        };
+        dev.ampsieve.budget.PartValues v = dev.ampsieve.budget.PartValues.of(p, stage);
+        List<PartTarget> out = new ArrayList<>();
+
+        // IB at the temperature where the closest part's bias term is worst (over the range when it does not depend on it)
+        TermResult bias = closest.budget().term(dev.ampsieve.budget.BiasTerm.KEY);
+        double atC = bias != null && Double.isFinite(bias.worstAtC()) ? bias.worstAtC() : Double.NaN;
+        double ibNow = Double.isNaN(atC) ? Math.max(v.ibAt(stage.tMin()), v.ibAt(stage.tMax())) : v.ibAt(atC);
+        target(fits, x -> PartEdit.withIb(p, x), ibNow, IB_FLOOR)
+                .ifPresent(x -> out.add(new PartTarget(PartTarget.Quantity.IB, x, atC)));
+
+        // vos.max, the drift held at the closest part's (its figure, or the bound the engine used for it)
+        double dT = stage.deltaT();
+        dev.ampsieve.catalog.Spread drift = p.vosDrift().max() != null || p.vosDrift().typ() != null ? p.vosDrift()
+                : new dev.ampsieve.catalog.Spread(null, v.driftBound(dT), null);
+        target(fits, x -> PartEdit.withVos(p, x, drift), v.vos().bound(), VOS_FLOOR)
+                .ifPresent(x -> out.add(new PartTarget(PartTarget.Quantity.VOS, x, Double.NaN)));
+
+        if (dT > 0) {
+            target(fits, x -> PartEdit.withDrift(p, x), v.driftBound(dT), DRIFT_FLOOR)
+                    .ifPresent(x -> out.add(new PartTarget(PartTarget.Quantity.DRIFT, x, Double.NaN)));
+        }
+        return out;
+    }
+
+    /**
+     * The largest value of one part figure that fits, 3 digits rounded down and re-checked; empty
+     * when the part's own value already fits with the edit (the figure is not what stops it), or
+     * when not even the floor does.
+     */
+    private static java.util.OptionalDouble target(Predicate<Part> fits, java.util.function.DoubleFunction<Part> edit,
+            double now, double floor) {
+        if (!(now > floor) || !Double.isFinite(now) || fits.test(edit.apply(now)) || !fits.test(edit.apply(floor))) {
+            return java.util.OptionalDouble.empty();
+        }
+        double x = Bisection.largest(y -> fits.test(edit.apply(y)), floor, now);
+        double r = Phrases.round3Down(x);
+        if (!fits.test(edit.apply(r))) {
+            r -= Phrases.unit3(r);
+        }
+        if (r < floor || !fits.test(edit.apply(r))) {
+            return java.util.OptionalDouble.empty();
+        }
+        return java.util.OptionalDouble.of(r);
+    }
+
     /** Steps of 0.1 % tried below the first guess before giving up (the re-runs are Monte Carlo runs). */
     static final int YIELD_STEPS = 10;
 
@@ -557,6 +773,11 @@ public final class Advisor {
         } else {
             lines.add("It would fit with any one of these changes:");
             n.changes().forEach(ch -> lines.add("  - " + ch.text()));
+        }
+        if (!n.targets().isEmpty()) {
+            lines.add("A part would fit the stage as it is with any one of these figures, the rest as " + c.id() + "'s:");
+            Stage stage = c.budget().stage();
+            n.targets().forEach(t -> lines.add("  - " + Phrases.target(t, stage)));
         }
     }
 }

@@ -7,7 +7,7 @@ import java.util.Map;
 /**
  * One change to the stage that makes a part fit, found by re-running the budget.
  *
- * @param values the numbers needed, SI units, e.g. {@code noiseGain}, {@code rf},
+ * @param values the numbers needed, SI units, e.g. {@code noiseGain}, {@code rf}, {@code gainHere},
  *               {@code sourceResistance}, {@code tMin}/{@code tMax}, {@code limitV}
  */
 public record Change(Kind kind, String text, Map<String, Double> values) {
@@ -18,6 +18,8 @@ public record Change(Kind kind, String text, Map<String, Double> values) {
 
     public enum Kind {
         LOWER_GAIN("lower-gain"),
+        /** The gain split with a later stage: values gainHere, gainAfter, noiseGain, rf, limitHereV. */
+        SPLIT_GAIN("split-gain"),
         LOWER_SOURCE_RESISTANCE("lower-source-resistance"),
         NARROWER_TEMPERATURE("narrower-temperature"),
         BETTER_RESISTORS("better-resistors"),

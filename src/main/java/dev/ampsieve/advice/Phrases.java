@@ -97,6 +97,18 @@ final class Phrases {
                 + yieldPercent(y.low()) + "; target " + percentFine(c.budget().stage().criterion().yieldTarget()) + ")";
     }
 
+    /** "IB ≤ 12.3 pA at 70 °C (IOS counted equal to it)", "vos.max ≤ 25.0 µV", "drift ≤ 0.250 µV/°C". */
+    static String target(PartTarget t, dev.ampsieve.stage.Stage stage) {
+        return switch (t.quantity()) {
+            case IB -> "IB ≤ " + Units.format(t.value(), Dimension.CURRENT)
+                    + (Double.isNaN(t.atC()) ? " from " + celsius(stage.tMin()) + " to " + celsius(stage.tMax())
+                            : " at " + celsius(t.atC()))
+                    + " (IOS counted equal to it)";
+            case VOS -> "vos.max ≤ " + volts(t.value()) + " at 25 °C (drift as now)";
+            case DRIFT -> "drift ≤ " + Units.format(t.value(), Dimension.VOLTAGE_DRIFT);
+        };
+    }
+
     static String number(double x) {
         return Units.format(x, Dimension.NUMBER);
     }

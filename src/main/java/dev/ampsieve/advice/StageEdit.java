@@ -18,10 +18,55 @@ final class StageEdit {
                 s.acCoupled(), s.where());
     }
 
+    /**
+     * Rs changed. In an inverting stage Rs is in series with Rg, so the signal gain moves with
+     * it and the output with the gain ({@link #withOutputScaled}).
+     */
     static Stage withSourceResistance(Stage s, double rs) {
+        Stage e = withSourceResistanceOnly(s, rs);
+        return s.topology() == dev.ampsieve.stage.Topology.INVERTING ? withOutputScaled(e, s) : e;
+    }
+
+    private static Stage withSourceResistanceOnly(Stage s, double rs) {
         return new Stage(s.topology(), s.rf(), s.rg(), rs, s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
                 s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
+                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
+                s.acCoupled(), s.where());
+    }
+
+    /**
+     * Rf changed with what a change of gain moves with it: the input signal stays, so the
+     * full-scale output and the output swing scale with the signal gain ({@link #withOutputScaled}).
+     */
+    static Stage withGain(Stage s, double rf) {
+        return withOutputScaled(withRf(s, rf), s);
+    }
+
+    /**
+     * {@code edited} (a copy of {@code original} with a resistor changed) with the full-scale
+     * output scaled by the ratio of the signal gains, the input signal being the same. A stated
+     * output range is kept when the gain falls (the smaller swing lies inside it); when the gain
+     * rises each end moves out by the whole span times (ratio - 1), since the stage does not say
+     * where in its range the output's zero sits. A limit given as a share of full scale follows
+     * the full-scale output; one given at the input follows the gain; one at the output (or in
+     * LSB) stays where it is.
+     */
+    static Stage withOutputScaled(Stage edited, Stage original) {
+        double ratio = edited.sourceGain() / original.sourceGain();
+        if (!Double.isFinite(ratio) || ratio == 1.0) {
+            return edited;
+        }
+        Stage s = edited;
+        Double vfs = s.fullScaleOutput() == null ? null : s.fullScaleOutput() * ratio;
+        dev.ampsieve.catalog.Range out = s.outputRange();
+        if (out != null && ratio > 1) {
+            double widen = (out.max() - out.min()) * (ratio - 1);
+            out = new dev.ampsieve.catalog.Range(out.min() - widen, out.max() + widen);
+        }
+        return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
+                s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), out,
+                s.bandLow(), s.bandHigh(), s.filterOrder(), vfs, s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
                 s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
                 s.acCoupled(), s.where());
     }

@@ -10,9 +10,26 @@ import java.util.List;
  * @param standard       the cheapest fitting standard part, or null
  * @param savingPerUnit  standard cost minus self-correcting cost; NaN when either is missing
  * @param caveats        what to check with the self-correcting part, with numbers
+ * @param resistorOption when a zero-drift part is warranted under a worst-case or RSS criterion: a
+ *                       standard part cheaper than it that would fit with better resistors, and
+ *                       the resistors it needs; null when there is none
  */
 public record ZeroDriftAdvice(Status status, Candidate selfCorrecting, Candidate standard, double savingPerUnit,
-        double savingTotal, List<String> caveats) {
+        double savingTotal, List<String> caveats, ResistorOption resistorOption) {
+
+    /** A standard part and the change of resistors ({@link Change.Kind#BETTER_RESISTORS}) that lets it fit. */
+    public record ResistorOption(Candidate part, Change change) {
+    }
+
+    public ZeroDriftAdvice(Status status, Candidate selfCorrecting, Candidate standard, double savingPerUnit,
+            double savingTotal, List<String> caveats) {
+        this(status, selfCorrecting, standard, savingPerUnit, savingTotal, caveats, null);
+    }
+
+    /** The same advice with {@code option} as its resistor option. */
+    public ZeroDriftAdvice withResistorOption(ResistorOption option) {
+        return new ZeroDriftAdvice(status, selfCorrecting, standard, savingPerUnit, savingTotal, caveats, option);
+    }
 
     public ZeroDriftAdvice {
         caveats = List.copyOf(caveats);

@@ -5,6 +5,7 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.ampsieve.advice.Advice;
 import dev.ampsieve.advice.Candidate;
 import dev.ampsieve.advice.Change;
+import dev.ampsieve.advice.PartTarget;
 import dev.ampsieve.advice.NoFitAdvice;
 import dev.ampsieve.advice.Ranking;
 import dev.ampsieve.advice.Rejected;
@@ -323,6 +324,15 @@ public final class RankReport {
         JsonSupport.put(zn, "savingTotal", z.savingTotal());
         ArrayNode cav = zn.putArray("caveats");
         z.caveats().forEach(cav::add);
+        if (z.resistorOption() == null) {
+            zn.putNull("resistorOption");
+        } else {
+            ObjectNode ro = zn.putObject("resistorOption");
+            ro.set("part", ref(z.resistorOption().part()));
+            ro.put("text", z.resistorOption().change().text());
+            ObjectNode rv = ro.putObject("values");
+            z.resistorOption().change().values().forEach((k, v) -> JsonSupport.put(rv, k, v));
+        }
         NoFitAdvice nf = a.noFit();
         if (nf == null) {
             n.putNull("noFit");
@@ -338,6 +348,13 @@ public final class RankReport {
                 cn.put("text", c.text());
                 ObjectNode vals = cn.putObject("values");
                 c.values().forEach((k, v) -> JsonSupport.put(vals, k, v));
+            }
+            ArrayNode tg = f.putArray("targets");
+            for (PartTarget pt : nf.targets()) {
+                ObjectNode tn2 = tg.addObject();
+                tn2.put("quantity", pt.quantity().key());
+                JsonSupport.put(tn2, "value", pt.value());
+                JsonSupport.put(tn2, "atC", pt.atC());
             }
         }
         ArrayNode lines = n.putArray("lines");
