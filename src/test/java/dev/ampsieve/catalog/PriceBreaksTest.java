@@ -27,7 +27,8 @@ class PriceBreaksTest {
     }
 
     private static List<String> problems(String price) {
-        return read(price).problems().stream().map(Problem::toString).toList();
+        // the absent-figure warnings of the minimal part (PartReader.warnAbsences) are not about prices
+        return read(price).problems().stream().map(Problem::toString).filter(t -> !t.contains(": not given: ")).toList();
     }
 
     @Test
@@ -38,7 +39,7 @@ class PriceBreaksTest {
                   - {quantity: 1, unit: 2.10, currency: EUR}
                   - {quantity: 100, unit: 1.60}
                 """);
-        assertEquals(List.of(), r.problems());
+        assertEquals(List.of(), r.problems().stream().filter(q -> !q.toString().contains(": not given: ")).toList());
         Price p = r.part().price();
         assertEquals(List.of(new Price.Break(1, 2.10), new Price.Break(100, 1.60), new Price.Break(1000, 1.25)), p.breaks());
         assertEquals("EUR", p.currency());

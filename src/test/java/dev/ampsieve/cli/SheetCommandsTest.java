@@ -50,7 +50,8 @@ class SheetCommandsTest {
         // the catalog's bound for vos (CatalogKeys.BOUNDS: error above 1 V), placed at row 3, column 4
         assertEquals(csv + ":3:4: vos.max: 2.00 V is above 1.00 V, impossible for an op amp (an offset of volts leaves"
                 + " no room for a signal); check the unit prefix (p, n, u, m, k, M) and the datasheet column; the largest"
-                + " size accepted here is 1.00 V\n", r.err());
+                + " size accepted here is 1.00 V", String.join("\n", r.err().lines()
+                        .filter(l -> !l.contains(": warning: ")).toList())); // the minimal rows' absent-figure warnings aside
         assertEquals(csv + ": 3 row(s), 2 part file(s) written to " + into + ", 1 row(s) not written (see above)\n", r.out());
         assertEquals(List.of("good-01.yaml", "good-03.yaml"), names(into)); // nothing else: no temporary file
         Catalog c = CatalogLoader.load(into, true);
