@@ -95,6 +95,14 @@ public final class RootCommand implements Callable<Integer> {
         this.stageNames = names;
     }
 
+    /** Notes already printed by this root (stage warnings): the shell runs many commands, each note shows once. */
+    private final java.util.Set<String> shownNotes = new java.util.HashSet<>();
+
+    /** True the first time {@code note} is offered to this root. */
+    boolean firstTime(String note) {
+        return shownNotes.add(note);
+    }
+
     /** The name the shell gives this stage file, or null (the command line keeps the path). */
     public String stageName(Path file) {
         return stageNames.apply(file);

@@ -9,6 +9,7 @@ import java.util.Collection;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
+import java.util.function.Function;
 
 /**
  * Reads typed values out of a {@link Node.Mapping}, collecting a {@link Problem} for each
@@ -18,9 +19,17 @@ import java.util.Set;
 public final class Fields {
 
     private final List<Problem> problems;
+    /** A field's own example value by dotted path, or null for its dimension's example. */
+    private final Function<String, String> examples;
 
     public Fields(List<Problem> problems) {
+        this(problems, path -> null);
+    }
+
+    /** @param examples the example an error suggests for a field path ({@code supply.voltage} → {@code 5 V}), or null */
+    public Fields(List<Problem> problems, Function<String, String> examples) {
         this.problems = problems;
+        this.examples = examples;
     }
 
     public List<Problem> problems() {
@@ -94,12 +103,17 @@ public final class Fields {
 
     /** A quantity of dimension {@code d} in SI units, or null. */
     public Double quantity(Node.Mapping m, String path, String key, Dimension d) {
+        return quantity(m, path, key, d, examples.apply(join(path, key)));
+    }
+
+    /** As {@link #quantity(Node.Mapping, String, String, Dimension)}; an error suggests {@code example}. */
+    public Double quantity(Node.Mapping m, String path, String key, Dimension d, String example) {
         Node.Scalar s = scalar(m, path, key);
         if (s == null) {
             return null;
         }
         try {
-            return Units.parse(s.text(), d);
+            return Units.parse(s.text(), d, example);
         } catch (UnitException e) {
             error(s.at(), join(path, key), e.problem(), e.fix());
             return null;
