@@ -28,6 +28,7 @@ public final class Commands {
         cl.setOut(out);
         cl.setErr(err);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
+        FindCommand.configure(cl.getSubcommands().get("find"));
         // the query grammar in find's help is laid out for about 110 columns; a narrower terminal wins
         cl.setUsageHelpWidth(110);
         cl.setUsageHelpAutoWidth(true);

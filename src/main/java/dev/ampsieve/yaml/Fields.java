@@ -264,7 +264,24 @@ public final class Fields {
         return bestD <= allowed ? best : null;
     }
 
-    /** Levenshtein distance; ten lines do not justify a dependency. */
+    /**
+     * Up to {@code n} of {@code candidates} within the edit distance {@link #closest} allows,
+     * nearest first (ties in the candidates' order): suggestions by spelling, never by substring.
+     */
+    public static List<String> nearest(String word, Collection<String> candidates, int n) {
+        String w = word.toLowerCase(Locale.ROOT).replace('_', '-');
+        int allowed = Math.max(2, w.length() / 3);
+        List<String> within = new ArrayList<>();
+        for (String c : candidates) {
+            if (distance(w, c.toLowerCase(Locale.ROOT)) <= allowed && !within.contains(c)) {
+                within.add(c);
+            }
+        }
+        within.sort(java.util.Comparator.comparingInt(c -> distance(w, c.toLowerCase(Locale.ROOT))));
+        return List.copyOf(within.subList(0, Math.min(n, within.size())));
+    }
+
+    /** Levenshtein distance; ten lines do not justify a dependency (commons-text has one, but nothing else here needs it). */
     static int distance(String a, String b) {
         int[] prev = new int[b.length() + 1];
         int[] cur = new int[b.length() + 1];
