@@ -96,10 +96,10 @@ public final class StageLoader {
     static final double WARN_GAIN = 1e5;
 
     /**
-     * z of the two-sided 95 % interval the yield is reported with, 1.959964 (the normal quantile
-     * at 0.975, [from memory]; commons-math3 gives the same in {@code YieldModel}).
+     * z of the two-sided 95 % interval the yield is reported with: the normal quantile at 0.975,
+     * as {@code stats.Wilson.Z95} (the stage package may not depend on stats; a test keeps them equal).
      */
-    static final double Z95 = 1.959964;
+    static final double Z95 = 1.959963984540054;
 
     /**
      * The fewest trials whose sample can confirm a yield {@code target}: when all n units pass,
