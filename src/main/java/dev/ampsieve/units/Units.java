@@ -115,6 +115,16 @@ public final class Units {
         }
     }
 
+    /** The SI prefixes read, with their factors, in order (for the reference page). */
+    public static Map<String, Double> prefixes() {
+        return java.util.Collections.unmodifiableMap(PREFIXES);
+    }
+
+    /** Every unit symbol read as written (before any prefix), in order (for the reference page). */
+    public static java.util.List<String> symbols() {
+        return java.util.List.copyOf(BASES.keySet());
+    }
+
     /** Bases that take no SI prefix (a prefix on them would be a typo). */
     private static boolean prefixable(Base b) {
         return switch (b) {
