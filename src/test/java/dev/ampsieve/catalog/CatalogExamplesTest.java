@@ -85,4 +85,17 @@ class CatalogExamplesTest {
         assertTrue(CatalogLoader.load(dir, false).problems().stream()
                 .anyMatch(p -> p.file().equals(stage) && p.isError() && p.field().equals("id")));
     }
+
+    @Test
+    void anOffsetAbove1VAndACmrrAbove200DbAreErrors() throws Exception {
+        // CatalogKeys.BOUNDS (GUIDE.md section 9): no op amp has either, so the part is refused
+        List<Problem> vos = errors(PART.replace("vos: {max: 1 mV}", "vos: {max: 1.5 V}"));
+        assertEquals(1, vos.size(), vos.toString());
+        assertEquals("vos.max", vos.get(0).field());
+        List<Problem> cmrr = errors(PART + "cmrr: {min: 210 dB}\n");
+        assertEquals(1, cmrr.size(), cmrr.toString());
+        assertEquals("cmrr.min", cmrr.get(0).field());
+        // just inside: 0.9 V and 190 dB load, with warnings only
+        assertEquals(List.of(), errors(PART.replace("vos: {max: 1 mV}", "vos: {max: 0.9 V}") + "cmrr: {min: 190 dB}\n"));
+    }
 }
