@@ -196,7 +196,7 @@ public final class QueryLanguage {
         Dimension dim = num != null ? num.dimension() : iv.dimension();
         if (op.equals(":")) {
             throw new TermException(shown, "'" + name + "' is " + dim.noun() + ", not a word",
-                    "compare it: " + name + "<" + dim.example().replace(" ", "") + ", " + name + "=lo..hi", false);
+                    "compare it: " + name + "<" + example(field, dim).replace(" ", "") + ", " + name + "=lo..hi", false);
         }
         double[] v = values(shown, name, op, value, dim);
         PartQuery.Op kind = kind(op, value);
@@ -302,19 +302,19 @@ public final class QueryLanguage {
         String v = value.strip();
         if (v.isEmpty() || v.equals("..")) {
             throw new TermException(shown, "no value after '" + op + "'",
-                    "write e.g. " + name + op + dim.example().replace(" ", ""), false);
+                    "write e.g. " + name + op + example(field(name), dim).replace(" ", ""), false);
         }
         int dots = v.indexOf("..");
         if (dots < 0) {
-            return new double[] {quantity(shown, v, dim)};
+            return new double[] {quantity(shown, v, dim, example(field(name), dim))};
         }
         if (!op.equals("=")) {
             throw new TermException(shown, "a range takes '=', not '" + op + "'", "write " + name + "=lo..hi", false);
         }
         String a = v.substring(0, dots);
         String b = v.substring(dots + 2);
-        double lo = a.isBlank() ? Double.NEGATIVE_INFINITY : quantity(shown, a, dim);
-        double hi = b.isBlank() ? Double.POSITIVE_INFINITY : quantity(shown, b, dim);
+        double lo = a.isBlank() ? Double.NEGATIVE_INFINITY : quantity(shown, a, dim, example(field(name), dim));
+        double hi = b.isBlank() ? Double.POSITIVE_INFINITY : quantity(shown, b, dim, example(field(name), dim));
         if (lo > hi) {
             throw new TermException(shown, "the lower end is above the upper end",
                     "write the smaller value first: " + name + "=" + b + ".." + a, false);
@@ -322,9 +322,34 @@ public final class QueryLanguage {
         return new double[] {lo, hi};
     }
 
-    private static double quantity(String shown, String text, Dimension dim) throws TermException {
+    /** The field a name stands for (through an alias). */
+    private static String field(String name) {
+        return Schema.ALIASES.getOrDefault(name, name);
+    }
+
+    /**
+     * A value to show in a fix, in the field's own range: a supply is volts, not the microvolts
+     * of the dimension's example.
+     */
+    static String example(String field, Dimension dim) {
+        if (field.startsWith(Schema.SUPPLY)) {
+            return "5 V";
+        }
+        if (field.contains("headroom")) {
+            return "0.1 V";
+        }
+        if (field.equals(Schema.PRICE)) {
+            return "1.5";
+        }
+        if (field.equals(Schema.CHANNELS)) {
+            return "2";
+        }
+        return dim.example();
+    }
+
+    private static double quantity(String shown, String text, Dimension dim, String example) throws TermException {
         try {
-            return Units.parse(text, dim);
+            return Units.parse(text, dim, example);
         } catch (UnitException e) {
             boolean missing = e.problem().endsWith("has no unit");
             throw new TermException(shown, e.problem(), e.fix(), missing);

@@ -173,4 +173,12 @@ class QueryLanguageTest {
             assertTrue(!line.contains("%"), "picocli formats the footer: " + line);
         }
     }
+
+    @Test
+    void theExampleInAFixIsInTheFieldsOwnRange() {
+        // a supply is volts: the fix shows 5 V, not the microvolts of an offset
+        assertEquals("write a voltage with its unit, such as '5 V'", onlyProblem("supply>=5").fix());
+        assertEquals("write a voltage with its unit, such as '5 V'", onlyProblem("supply.min<3").fix());
+        assertEquals("write a voltage with its unit, such as '2.5 uV'", onlyProblem("vos<10").fix());
+    }
 }
