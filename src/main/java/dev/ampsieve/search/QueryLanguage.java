@@ -116,8 +116,14 @@ public final class QueryLanguage {
                         term(t, next).ifPresent(clauses::add);
                         i++;
                         continue;
-                    } catch (TermException ignored) {
-                        // the next word was not a unit after all: report the first reading
+                    } catch (TermException apart) {
+                        // "vos<10 UV": a unit in the wrong case is still the unit; its fix is the useful one
+                        if (apart.problem.message().endsWith("is not an SI prefix")) {
+                            problems.add(apart.problem);
+                            i++;
+                            continue;
+                        }
+                        // otherwise the next word was not a unit after all: report the first reading
                     }
                 }
                 problems.add(e.problem);

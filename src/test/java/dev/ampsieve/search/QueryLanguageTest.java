@@ -181,4 +181,11 @@ class QueryLanguageTest {
         assertEquals("write a voltage with its unit, such as '5 V'", onlyProblem("supply.min<3").fix());
         assertEquals("write a voltage with its unit, such as '2.5 uV'", onlyProblem("vos<10").fix());
     }
+
+    @Test
+    void aUnitWrittenApartInTheWrongCaseGetsThePrefixFix() {
+        Problem p = onlyProblem("vos<10 UV");
+        assertEquals("query term 'vos<10 UV'", p.field());
+        assertEquals("write '10uV' (prefixes are case-sensitive: m milli, M mega, k kilo, u micro)", p.fix());
+    }
 }
