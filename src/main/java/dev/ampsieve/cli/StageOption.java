@@ -31,8 +31,9 @@ public final class StageOption {
             Object root = mixee.root().userObject();
             String shown = shellName();
             for (Problem p : loaded.warnings()) {
+                // the shell writes its stage to a file of its own: its lines are not the user's, so no place
                 Problem named = shown == null ? p
-                        : new Problem(p.severity(), Path.of(shown), p.line(), p.column(), p.field(), p.message(), p.fix());
+                        : new Problem(p.severity(), Path.of(shown), 0, 0, p.field(), p.message(), p.fix());
                 String line = named.toString();
                 if (!(root instanceof RootCommand r) || r.firstTime(line)) {
                     err.println(line);
