@@ -44,4 +44,16 @@ class StageWarningCliTest {
         tree.execute("budget", "prec-bip-02", "--stage", stage.toString());
         assertEquals(1, err.toString().lines().filter(l -> l.contains("warning: limit:")).count(), err.toString());
     }
+
+    @Test
+    void aStageTheShellNamesIsShownByItsNameWithoutTheCopysLines() throws Exception {
+        // the shell hands commands a copy of its stage: the copy's line numbers would point into the wrong file
+        Path copy = Files.writeString(dir.resolve("copy.yaml"), "# written by the shell\ngain: 10\nlimit: 10 V\nsupply: {voltage: 5 V}\n");
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        RootCommand root = new RootCommand();
+        root.setStageNames(f -> f.equals(copy) ? "bridge.yaml" : null);
+        Commands.build(root, new PrintWriter(out), new PrintWriter(err)).execute("budget", "prec-bip-02", "--stage", copy.toString());
+        assertTrue(err.toString().lines().anyMatch(l -> l.startsWith("bridge.yaml: warning: limit: a limit of 10.0 V")), err.toString());
+    }
 }
