@@ -223,6 +223,37 @@ public final class CatalogKeys {
      */
     public static final Map<String, Bounds> BOUNDS;
 
+    /**
+     * Example values for the quantities whose dimension's example would mislead in an error's fix
+     * (a supply is volts, not the microvolts of an offset); the rest use {@link Dimension#example}.
+     */
+    private static final Map<String, String> EXAMPLES = Map.ofEntries(
+            Map.entry(path(PRICE, UNIT), "1.25"),
+            Map.entry(path(SUPPLY, MIN), "2.7 V"),
+            Map.entry(path(SUPPLY, MAX), "36 V"),
+            Map.entry(path(TEMPERATURE, MIN), "-40 C"),
+            Map.entry(path(TEMPERATURE, MAX), "125 C"),
+            Map.entry(path(NOISE, EN_CORNER), "10 Hz"),
+            Map.entry(path(NOISE, IN_CORNER), "100 Hz"),
+            Map.entry(path(LONG_TERM_DRIFT, VALUE), "5 uV"),
+            Map.entry(path(LONG_TERM_DRIFT, PER), "1000 h"),
+            Map.entry(path(INPUT_HEADROOM, LOW), "0.1 V"),
+            Map.entry(path(INPUT_HEADROOM, HIGH), "1.5 V"),
+            Map.entry(path(OUTPUT_HEADROOM, LOW), "50 mV"),
+            Map.entry(path(OUTPUT_HEADROOM, HIGH), "50 mV"),
+            Map.entry(CHOPPING_FREQUENCY, "100 kHz"),
+            Map.entry(QUIESCENT_CURRENT, "1 mA"));
+
+    /**
+     * A well-formed value for the quantity at {@code path} (a list prefix such as {@code parts[2].}
+     * is ignored), for the fix of an error; null when the path is not a quantity.
+     */
+    public static String example(String path) {
+        String p = path.replaceFirst("^" + PARTS + "\\[\\d+]\\.", "");
+        Dimension d = QUANTITIES.get(p);
+        return d == null ? null : EXAMPLES.getOrDefault(p, d.example());
+    }
+
     /** {@code section.key}. */
     public static String path(String section, String key) {
         return section + "." + key;

@@ -333,6 +333,18 @@ public final class CatalogLoader {
                 "split the catalog into smaller folders and give one with --catalog DIR"));
     }
 
+    /**
+     * Top-level keys of a stage file that no part has (the stage package's key table; the catalog
+     * may not depend on it, so {@code CatalogLoaderTest} checks these against {@code StageKeys}).
+     */
+    static final List<String> STAGE_KEYS = List.of("limit", "gain", "criterion", "topology", "rf", "rg", "band",
+            "full-scale-output", "source-resistance", "max-to-sigma", "trials");
+
+    /** A mapping with no {@code id} and at least one key only stage files have. */
+    private static boolean looksLikeStage(Node.Mapping m) {
+        return !m.entries().containsKey(CatalogKeys.ID) && m.entries().keySet().stream().anyMatch(STAGE_KEYS::contains);
+    }
+
     private static boolean isCatalogFile(Path file) {
         String name = file.getFileName().toString();
         String lower = name.toLowerCase(Locale.ROOT);
@@ -385,6 +397,13 @@ public final class CatalogLoader {
                 problems.add(Problem.error(list.at(), CatalogKeys.PARTS, "expected a list of parts, found " + list.kind(),
                         "write each part as an item starting with '- id: ...', indented below 'parts:'"));
             }
+            return;
+        }
+        if (root instanceof Node.Mapping m && looksLikeStage(m)) {
+            problems.add(Problem.warning(root.at(), "", "looks like a stage file (it has "
+                    + String.join(", ", m.entries().keySet().stream().filter(STAGE_KEYS::contains).limit(3).toList())
+                    + " and no id); skipped",
+                    "move it to a '" + STAGES_FOLDER + "' folder (which the catalog does not read) and pass it with --stage"));
             return;
         }
         if (root instanceof Node.Seq) {

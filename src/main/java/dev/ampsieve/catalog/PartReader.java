@@ -247,7 +247,7 @@ final class PartReader {
         if (m.entries().containsKey(key)) {
             written.add(keyPath);
         }
-        Double v = f.quantity(m, section == null ? prefix : join(prefix, section), key, d);
+        Double v = f.quantity(m, section == null ? prefix : join(prefix, section), key, d, CatalogKeys.example(keyPath));
         if (v != null) {
             values.put(keyPath, v);
             at.put(keyPath, Fields.where(m, key));

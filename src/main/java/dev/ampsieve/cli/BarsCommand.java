@@ -18,7 +18,9 @@ import picocli.CommandLine.Spec;
 @Command(name = "bars", header = "One part's error terms as bars against the limit.", mixinStandardHelpOptions = true,
         description = "Each error term of one part in a stage as a bar at the output, the totals below, and the "
             + "limit marked across: which term to attack first, at a glance. Sized to the terminal; --ascii "
-            + "draws with plain characters.")
+            + "draws with plain characters.",
+        footer = {"", "Example:",
+            "  ampsieve bars prec-bip-02 --stage demo-catalog/stages/bridge-amp.yaml"})
 public final class BarsCommand implements Callable<Integer> {
 
     @ParentCommand

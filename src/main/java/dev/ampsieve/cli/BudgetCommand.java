@@ -21,7 +21,15 @@ import picocli.CommandLine.Spec;
 
 /** {@code ampsieve budget PART --stage FILE [--json]}: the full error budget of one part in one stage. */
 @Command(name = "budget", header = "Full error budget of one part in one stage.", mixinStandardHelpOptions = true,
-        description = "Full output error budget of one catalog part in one stage: every term output- and input-referred, worst-case and RSS totals, Monte Carlo yield, trimmed totals, constraints, verdict.")
+        description = "Full output error budget of one catalog part in one stage: every term output- and input-referred, "
+            + "largest first, with its share of the limit and the temperature where it is worst; worst-case and RSS "
+            + "totals; integrated noise; the Monte Carlo yield with its 95 %% interval; what a one- or two-point trim "
+            + "leaves; the hard constraints; the verdict and the limiting term; and a warning for every value that "
+            + "was estimated, typical-only or missing. The stage's own warnings go to stderr.",
+        footer = {"", "Examples:",
+            "  ampsieve budget prec-bip-02 --stage demo-catalog/stages/bridge-amp.yaml",
+            "  ampsieve budget prec-bip-02 --stage my-stage.yaml --json > budget.json",
+            "Stage keys: 'ampsieve help stage-keys'."})
 public final class BudgetCommand implements Callable<Integer> {
 
     @ParentCommand

@@ -24,10 +24,19 @@ public final class Commands {
     }
 
     public static CommandLine build(RootCommand root, PrintWriter out, PrintWriter err) {
+        return build(root, out, err, false);
+    }
+
+    /** @param withHelp add the {@code help} command (the command line has it; the shell brings its own) */
+    static CommandLine build(RootCommand root, PrintWriter out, PrintWriter err, boolean withHelp) {
         CommandLine cl = new CommandLine(root);
+        if (withHelp) {
+            cl.addSubcommand(new HelpCommand());
+        }
         cl.setOut(out);
         cl.setErr(err);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
+        FindCommand.configure(cl.getSubcommands().get("find"));
         // the query grammar in find's help is laid out for about 110 columns; a narrower terminal wins
         cl.setUsageHelpWidth(110);
         cl.setUsageHelpAutoWidth(true);
@@ -46,7 +55,8 @@ public final class Commands {
     }
 
     public static int run(String[] args, PrintWriter out, PrintWriter err) {
-        int code = build(out, err).execute(args);
+        // the command line's help with reference topics; the shell adds its own 'help' instead
+        int code = build(new RootCommand(), out, err, true).execute(args);
         out.flush();
         err.flush();
         return code;

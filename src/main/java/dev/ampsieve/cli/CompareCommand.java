@@ -17,7 +17,10 @@ import picocli.CommandLine.Spec;
 
 /** {@code ampsieve compare A B --stage FILE}: two budgets side by side, term by term, and which to use. */
 @Command(name = "compare", header = "Two parts in one stage, term by term.", mixinStandardHelpOptions = true,
-        description = "Two parts in one stage, term by term: which is better and by how much, the totals, the cost, and a one-line conclusion.")
+        description = "Two parts in one stage, term by term: which is better and by how much, the totals, the cost, "
+            + "and a one-line conclusion, for the written record of a part change or a second source.",
+        footer = {"", "Example:",
+            "  ampsieve compare prec-bip-02 zd-chop-04 --stage demo-catalog/stages/bridge-amp.yaml"})
 public final class CompareCommand implements Callable<Integer> {
 
     @ParentCommand

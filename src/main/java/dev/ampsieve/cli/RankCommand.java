@@ -20,8 +20,11 @@ import picocli.CommandLine.Spec;
 /** {@code ampsieve rank --stage FILE}: every candidate budgeted, ranked, with the stage advice. */
 @Command(name = "rank", header = "Rank the catalog for a stage, with trim and zero-drift advice.", mixinStandardHelpOptions = true,
         description = "Budget every catalog part (or those matching --query) in a stage, drop those failing a hard constraint, and rank the rest: parts that fit by unit cost (trim included where needed), then by margin; the Pareto front of error against cost; and advice on trims and zero-drift parts.",
-        footer = {"", "--query takes the language of 'ampsieve find' (see 'ampsieve find --help'), e.g.",
-            "  --query \"input:cmos supply>=5V\""})
+        footer = {"", "--query takes the language of 'ampsieve find' ('ampsieve help query' lists every field), e.g.",
+            "  --query \"input:cmos supply>=5V\"",
+            "", "Examples:",
+            "  ampsieve rank --stage demo-catalog/stages/bridge-amp.yaml",
+            "  ampsieve rank --stage my-stage.yaml --query '-chopper vos<50uV' --csv > ranking.csv"})
 public final class RankCommand implements Callable<Integer> {
 
     @ParentCommand

@@ -28,9 +28,10 @@ import picocli.CommandLine.Spec;
         description = "Picks operational amplifiers for a stage by its full output error budget, computed from your own YAML catalog of datasheet values.",
         subcommands = {CheckCommand.class, BudgetCommand.class, FindCommand.class, RankCommand.class,
             CompareCommand.class, SufficesCommand.class, BarsCommand.class, ScatterCommand.class,
-            NewPartCommand.class, ImportCommand.class, ExportCommand.class},
+            NewPartCommand.class, ImportCommand.class, ExportCommand.class, CompletionCommand.class},
         footer = {"", "Catalog folder: --catalog DIR, else $AMPSIEVE_CATALOG, else the demo catalog.",
-            "Exit codes: 0 ok, 1 problems in your data or a 'no' answer, 2 usage error, 3 internal error."})
+            "Exit codes: 0 ok, 1 problems in your data or a 'no' answer, 2 usage error, 3 internal error.",
+            "Reference: 'ampsieve help query', 'help stage-keys', 'help catalog-keys', 'help units'."})
 public final class RootCommand implements Callable<Integer> {
 
     @Spec
@@ -94,6 +95,14 @@ public final class RootCommand implements Callable<Integer> {
     /** @param names the name to show for a stage file, or null to show the path as given */
     public void setStageNames(java.util.function.Function<Path, String> names) {
         this.stageNames = names;
+    }
+
+    /** Notes already printed by this root (stage warnings): the shell runs many commands, each note shows once. */
+    private final java.util.Set<String> shownNotes = new java.util.HashSet<>();
+
+    /** True the first time {@code note} is offered to this root. */
+    boolean firstTime(String note) {
+        return shownNotes.add(note);
     }
 
     /** The name the shell gives this stage file, or null (the command line keeps the path). */

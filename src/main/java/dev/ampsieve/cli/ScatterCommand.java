@@ -21,7 +21,9 @@ import picocli.CommandLine.Spec;
         mixinStandardHelpOptions = true,
         description = "The candidates of 'rank' (hard constraints met) as letters on a plane of output error "
             + "(log scale) against effective unit cost, with the limit drawn across and a legend. Sized to the "
-            + "terminal; --ascii draws with plain characters.")
+            + "terminal; --ascii draws with plain characters.",
+        footer = {"", "Example:",
+            "  ampsieve scatter --stage demo-catalog/stages/bridge-amp.yaml --query 'input:bipolar'"})
 public final class ScatterCommand implements Callable<Integer> {
 
     @ParentCommand

@@ -17,7 +17,9 @@ import picocli.CommandLine.Spec;
 
 /** {@code ampsieve suffices PART --stage FILE}: can this part meet the spec without a trim? */
 @Command(name = "suffices", header = "Does this part meet the stage untrimmed? yes or no.", mixinStandardHelpOptions = true,
-        description = "Answer whether one part meets the stage's limit and hard constraints as it is, with no trim: 'yes' or 'no' on the first line, then worst-case, RSS, yield and the largest term. Exit 0 for yes, 1 for no.")
+        description = "Answer whether one part meets the stage's limit and hard constraints as it is, with no trim: 'yes' or 'no' on the first line, then worst-case, RSS, yield and the largest term. Exit 0 for yes, 1 for no, so scripts can test it.",
+        footer = {"", "Example:",
+            "  ampsieve suffices prec-bip-02 --stage demo-catalog/stages/bridge-amp.yaml && echo keep it"})
 public final class SufficesCommand implements Callable<Integer> {
 
     @ParentCommand

@@ -20,9 +20,7 @@ public final class FindReport {
     /** @param width columns the table fits in (the terminal's, in the shell) */
     public static String text(String query, List<Part> parts, int width) {
         StringBuilder o = new StringBuilder();
-        String what = query.isBlank() ? "in the catalog" : "match '" + Visible.of(query) + "'";
-        o.append(parts.size()).append(parts.size() == 1 ? " part " : " parts ").append(what)
-                .append(parts.isEmpty() ? "." : ", most relevant first, then cheapest:").append('\n');
+        o.append(headline(query, parts.size())).append(parts.isEmpty() ? "." : ", most relevant first, then cheapest:").append('\n');
         if (!parts.isEmpty()) {
             String cur = Figures.currency(parts);
             TextTable t = new TextTable().left("id").right(cur.isEmpty() ? "price" : "price " + cur).right("vos")
@@ -52,6 +50,15 @@ public final class FindReport {
         }
         o.append('\n').append(Caution.TEXT).append('\n');
         return Wrap.prose(Visible.lines(o.toString()), width);
+    }
+
+    /** "no part matches 'q'", "1 part matches 'q'", "3 parts match 'q'"; without a query "... in the catalog". */
+    static String headline(String query, int n) {
+        String count = n == 0 ? "no part" : n == 1 ? "1 part" : n + " parts";
+        if (query.isBlank()) {
+            return count + " in the catalog";
+        }
+        return count + (n == 1 || n == 0 ? " matches '" : " match '") + Visible.of(query) + "'";
     }
 
     /** JSON: {query, count, parts[{id, title, architecture, input, price, currency, figures in SI...}], caution}. */

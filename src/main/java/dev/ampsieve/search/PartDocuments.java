@@ -1,5 +1,6 @@
 package dev.ampsieve.search;
 
+import dev.ampsieve.catalog.CatalogKeys;
 import dev.ampsieve.catalog.Headroom;
 import dev.ampsieve.catalog.MinTyp;
 import dev.ampsieve.catalog.Part;
@@ -46,6 +47,13 @@ public final class PartDocuments {
         p.packages().forEach(v -> keyword(d, Schema.PACKAGE, v));
         p.tags().forEach(v -> keyword(d, Schema.TAG, v));
         keyword(d, Schema.TRIM, p.factoryTrim().key());
+        keyword(d, Schema.NULL_PINS, String.valueOf(p.nullPins()));
+        if (p.price() != null) {
+            keyword(d, Schema.CURRENCY, p.price().currency());
+        }
+        // words of one text each, for notes:word and source:word (the title has its own field above)
+        d.add(new TextField(Schema.NOTES, p.notes(), Field.Store.NO));
+        d.add(new TextField(Schema.SOURCE, p.source(), Field.Store.NO));
         if (railToRail(p.inputHeadroom())) {
             keyword(d, Schema.RAIL, "input");
         }
@@ -124,6 +132,11 @@ public final class PartDocuments {
             case Schema.AGING -> p.longTermDrift() == null || p.longTermDrift().per() <= 0 ? null
                     // offset change scales with the square root of time (error-model.md, term 9)
                     : Math.abs(p.longTermDrift().value()) * Math.sqrt(1000 * 3600.0 / p.longTermDrift().per());
+            case "ios.maxtemp" -> abs(p.ios().maxOverTemp());
+            case "price.quantity" -> p.price() == null ? null : (double) p.price().quantity();
+            // the catalog's own paths, as CatalogKeys reads them (headrooms signed, as typed)
+            case "long-term-drift.value", "long-term-drift.per", "input-headroom.low", "input-headroom.high",
+                    "output-headroom.low", "output-headroom.high" -> CatalogKeys.value(p, name);
             default -> throw new IllegalArgumentException("no value for index field " + name);
         };
     }

@@ -39,13 +39,17 @@ public record PartQuery(String text, List<Clause> clauses) {
     }
 
     /** One space-separated term of the query. */
-    public sealed interface Clause permits Word, KeywordIs, NumberIs, RatedAt {
+    public sealed interface Clause permits Word, WordIn, KeywordIs, NumberIs, RatedAt {
         /** The term as the user wrote it. */
         String written();
     }
 
     /** A free word, matched in the part's words (see {@link Words}); {@code excluded} for {@code -word}. */
     public record Word(String written, String word, boolean excluded) implements Clause {
+    }
+
+    /** {@code notes:word}: a free word in one text field only; {@code excluded} for {@code -notes:word}. */
+    public record WordIn(String written, Schema.Text field, String word, boolean excluded) implements Clause {
     }
 
     /** {@code field:value} on a keyword field; {@code excluded} for {@code -field:value}. */
@@ -80,6 +84,13 @@ public record PartQuery(String text, List<Clause> clauses) {
                             .setMinimumNumberShouldMatch(1)
                             .build();
                     b.add(scored, Occur.MUST);
+                    positive = true;
+                }
+            } else if (c instanceof WordIn w) {
+                if (w.excluded()) {
+                    b.add(wordQuery(w.field().name(), w.word()), Occur.MUST_NOT);
+                } else {
+                    b.add(wordQuery(w.field().name(), w.word()), Occur.FILTER);
                     positive = true;
                 }
             } else if (c instanceof KeywordIs k) {

@@ -60,27 +60,46 @@ public final class QueryLanguage {
      */
     public static final String HELP =
             "Query: words and constraints separated by spaces; every term must hold.%n"
-            + "  word            in id, title, tags, notes, packages, architecture, input; -word excludes%n"
+            + "  word            in id, title, tags, notes, packages, architecture, input%n"
+            + "  -word           excludes: find 'drift<=1uV/C' -chopper (no '--' needed; -field:word too)%n"
             + "  field<value     also <=, >, >=, = ; values with units as in the catalog (10uV, 1.5MHz, 110dB)%n"
             + "  field=lo..hi    both ends included; field=lo.. (at least), field=..hi (at most) need no quotes%n"
-            + "  field:word      input:cmos architecture:zero-drift package:sot-23 tag:x rail:output trim:laser%n"
+            + "  field:word      input:cmos architecture:zero-drift package:sot-23 null-pins:true trim:laser%n"
             + "vos, drift, ib, ios: the guaranteed maximum when given, else typical (vos.max, vos.typ: one column).%n"
             + "cmrr, psrr, aol: the guaranteed minimum, else typical. A part lacking a value never matches.%n"
             + "supply>=5V or supply=5V: rated to run on 5 V; temperature>=125C: rated up to 125 C or beyond;%n"
             + "  supply=4.5V..5.5V: rated over the whole interval. Comparisons allow 1 part in 1e9.%n"
-            + "Numbers: vos vos.typ vos.max vos.maxtemp drift drift.typ drift.max ib ib.typ ib.max ib.maxtemp%n"
-            + "  ios ios.typ ios.max cmrr cmrr.min cmrr.typ psrr psrr.min psrr.typ aol aol.min aol.typ gbw slew%n"
-            + "  en en.corner in in.corner supply.min supply.max temperature.min temperature.max price iq%n"
-            + "  channels fchop aging.  Aliases: temp, offset (vos), tc (drift), quiescent (iq), pkg, arch.%n"
             + "Relevance: a word in the title counts 2, elsewhere 1; equal relevance lists the cheaper part first.%n"
             + "Example: ampsieve find zero-drift 'vos<10uV' 'supply>=5V' sot-23   (quote < and > in a shell)";
 
-    /** {@link #HELP} as lines. */
+    /** {@link #HELP} as lines, then every field name from {@link Schema}, wrapped at 100 columns. */
     public static List<String> helpLines() {
-        return List.of(HELP.split("%n"));
+        List<String> out = new ArrayList<>(List.of(HELP.split("%n")));
+        out.addAll(wrap("Words (field:word): ", Schema.KEYWORDS.stream().map(Schema.Keyword::name).toList(), ""));
+        out.addAll(wrap("Text (field:word, by word): ", Schema.TEXTS.stream().map(Schema.Text::name).toList(), ""));
+        out.addAll(wrap("Ranges (rated at a value): ", Schema.INTERVALS.stream().map(Schema.Interval::name).toList(), ""));
+        out.addAll(wrap("Numbers: ", Schema.NUMERIC.stream().map(Schema.Numeric::name).toList(), "."));
+        out.addAll(wrap("Aliases: ", Schema.ALIASES.entrySet().stream().map(e -> e.getKey() + " (" + e.getValue() + ")").toList(), "."));
+        return out;
     }
 
-    private static final Pattern CONSTRAINT = Pattern.compile("^([A-Za-z][A-Za-z0-9.]*)(<=|>=|<|>|=|:)(.*)$");
+    /** {@code head} then the words separated by spaces, in lines of at most 100 columns, continued with two spaces. */
+    static List<String> wrap(String head, List<String> words, String end) {
+        List<String> lines = new ArrayList<>();
+        StringBuilder line = new StringBuilder(head.strip());
+        for (int i = 0; i < words.size(); i++) {
+            String w = words.get(i) + (i == words.size() - 1 ? end : "");
+            if (line.length() + 1 + w.length() > 100) {
+                lines.add(line.toString());
+                line = new StringBuilder(" ");
+            }
+            line.append(' ').append(w);
+        }
+        lines.add(line.toString());
+        return lines;
+    }
+
+    private static final Pattern CONSTRAINT = Pattern.compile("^([A-Za-z][A-Za-z0-9.-]*)(<=|>=|<|>|=|:)(.*)$");
 
     /**
      * Most terms a query may hold: far beyond a typed query, and with {@link #MAX_WORD_SEARCHES}
@@ -118,8 +137,14 @@ public final class QueryLanguage {
                         term(t, next).ifPresent(clauses::add);
                         i++;
                         continue;
-                    } catch (TermException ignored) {
-                        // the next word was not a unit after all: report the first reading
+                    } catch (TermException apart) {
+                        // "vos<10 UV": a unit in the wrong case is still the unit; its fix is the useful one
+                        if (apart.problem.message().endsWith("is not an SI prefix")) {
+                            problems.add(apart.problem);
+                            i++;
+                            continue;
+                        }
+                        // otherwise the next word was not a unit after all: report the first reading
                     }
                 }
                 problems.add(e.problem);
@@ -197,13 +222,18 @@ public final class QueryLanguage {
         if (kw != null) {
             return Optional.of(keyword(shown, kw, op, value, excluded));
         }
+        Schema.Text text = Schema.TEXTS.stream().filter(k -> k.name().equals(field)).findFirst().orElse(null);
+        if (text != null) {
+            List<String> words = Words.split(value);
+            if (!op.equals(":") || words.isEmpty()) {
+                throw new TermException(shown, "'" + name + "' is searched by word", "write " + name + ":word", false);
+            }
+            return Optional.of(new PartQuery.WordIn(shown, text, String.join(" ", words), excluded));
+        }
         Schema.Numeric num = Schema.NUMERIC.stream().filter(n -> n.name().equals(field)).findFirst().orElse(null);
         Schema.Interval iv = Schema.INTERVALS.stream().filter(n -> n.name().equals(field)).findFirst().orElse(null);
         if (num == null && iv == null) {
-            String near = Fields.closest(name, Schema.queryNames());
-            throw new TermException(shown, "unknown field '" + name + "'",
-                    near != null ? "did you mean '" + near + "'?"
-                            : "fields: " + String.join(", ", Schema.queryNames()), false);
+            throw new TermException(shown, "unknown field '" + name + "'", unknownFieldFix(name), false);
         }
         if (excluded) {
             throw new TermException(shown, "a comparison cannot be excluded with '-'",
@@ -212,7 +242,7 @@ public final class QueryLanguage {
         Dimension dim = num != null ? num.dimension() : iv.dimension();
         if (op.equals(":")) {
             throw new TermException(shown, "'" + name + "' is " + dim.noun() + ", not a word",
-                    "compare it: " + name + "<" + dim.example().replace(" ", "") + ", " + name + "=lo..hi", false);
+                    "compare it: " + name + "<" + example(field, dim).replace(" ", "") + ", " + name + "=lo..hi", false);
         }
         double[] v = values(shown, name, op, value, dim);
         PartQuery.Op kind = kind(op, value);
@@ -222,6 +252,18 @@ public final class QueryLanguage {
         }
         double[] r = rated(kind, v);
         return Optional.of(new PartQuery.RatedAt(shown, iv, kind, r[0], r[1]));
+    }
+
+    /**
+     * The fix for a field the query does not know: the nearest field names by edit distance
+     * (Levenshtein, {@link Fields#nearest}), at most three, else where the list of fields is.
+     */
+    static String unknownFieldFix(String name) {
+        List<String> near = Fields.nearest(name, Schema.queryNames(), 3);
+        if (near.isEmpty()) {
+            return "'ampsieve help query' lists every field";
+        }
+        return "did you mean " + String.join(" or ", near.stream().map(n -> "'" + n + "'").toList()) + "?";
     }
 
     private static PartQuery.KeywordIs keyword(String shown, Schema.Keyword kw, String op, String value, boolean excluded)
@@ -306,19 +348,19 @@ public final class QueryLanguage {
         String v = value.strip();
         if (v.isEmpty() || v.equals("..")) {
             throw new TermException(shown, "no value after '" + op + "'",
-                    "write e.g. " + name + op + dim.example().replace(" ", ""), false);
+                    "write e.g. " + name + op + example(field(name), dim).replace(" ", ""), false);
         }
         int dots = v.indexOf("..");
         if (dots < 0) {
-            return new double[] {quantity(shown, v, dim)};
+            return new double[] {quantity(shown, v, dim, example(field(name), dim))};
         }
         if (!op.equals("=")) {
             throw new TermException(shown, "a range takes '=', not '" + op + "'", "write " + name + "=lo..hi", false);
         }
         String a = v.substring(0, dots);
         String b = v.substring(dots + 2);
-        double lo = a.isBlank() ? Double.NEGATIVE_INFINITY : quantity(shown, a, dim);
-        double hi = b.isBlank() ? Double.POSITIVE_INFINITY : quantity(shown, b, dim);
+        double lo = a.isBlank() ? Double.NEGATIVE_INFINITY : quantity(shown, a, dim, example(field(name), dim));
+        double hi = b.isBlank() ? Double.POSITIVE_INFINITY : quantity(shown, b, dim, example(field(name), dim));
         if (lo > hi) {
             throw new TermException(shown, "the lower end is above the upper end",
                     "write the smaller value first: " + name + "=" + b + ".." + a, false);
@@ -326,9 +368,34 @@ public final class QueryLanguage {
         return new double[] {lo, hi};
     }
 
-    private static double quantity(String shown, String text, Dimension dim) throws TermException {
+    /** The field a name stands for (through an alias). */
+    private static String field(String name) {
+        return Schema.ALIASES.getOrDefault(name, name);
+    }
+
+    /**
+     * A value to show in a fix, in the field's own range: a supply is volts, not the microvolts
+     * of the dimension's example.
+     */
+    static String example(String field, Dimension dim) {
+        if (field.startsWith(Schema.SUPPLY)) {
+            return "5 V";
+        }
+        if (field.contains("headroom")) {
+            return "0.1 V";
+        }
+        if (field.equals(Schema.PRICE)) {
+            return "1.5";
+        }
+        if (field.equals(Schema.CHANNELS)) {
+            return "2";
+        }
+        return dim.example();
+    }
+
+    private static double quantity(String shown, String text, Dimension dim, String example) throws TermException {
         try {
-            return Units.parse(text, dim);
+            return Units.parse(text, dim, example);
         } catch (UnitException e) {
             boolean missing = e.problem().endsWith("has no unit");
             throw new TermException(shown, e.problem(), e.fix(), missing);

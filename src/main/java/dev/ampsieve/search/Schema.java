@@ -15,6 +15,8 @@ import java.util.stream.Stream;
  *
  * <p>To add a searchable number: add a {@link Numeric} to {@link #NUMERIC}, give it a value in
  * {@code PartDocuments.value}, bump {@link #VERSION} (old indexes then rebuild themselves).
+ * Every catalog key ({@code CatalogKeys}) must be a query name, directly or through
+ * {@link #ALIASES}; {@code SchemaTest} checks it.
  */
 public final class Schema {
     private Schema() {
@@ -24,7 +26,7 @@ public final class Schema {
      * Stored in each commit beside the catalog fingerprint; any change to the fields or to how
      * a value is derived must change it so that existing on-disk indexes rebuild.
      */
-    public static final String VERSION = "1";
+    public static final String VERSION = "2";
 
     // ------------------------------------------------------------ identity and words
 
@@ -52,6 +54,11 @@ public final class Schema {
     /** Rail-to-rail: input (no input headroom), output (no output headroom). */
     public static final String RAIL = "rail";
 
+    /** Whether the maker's offset null pins are brought out: true, false. */
+    public static final String NULL_PINS = "null-pins";
+    /** The price's currency, lower-case. */
+    public static final String CURRENCY = "currency";
+
     /** A word field and the values it can hold (empty: free values). */
     public record Keyword(String name, List<String> values, String meaning) {
         public Keyword {
@@ -67,7 +74,25 @@ public final class Schema {
             new Keyword(PACKAGE, List.of(), "package; package:sot-23 also finds sot-23-5"),
             new Keyword(TAG, List.of(), "a tag from the catalog"),
             new Keyword(TRIM, List.of("none", "laser", "fuse", "other"), "factory offset trim"),
-            new Keyword(RAIL, List.of("input", "output"), "rail-to-rail input or output (headroom 0 or less)"));
+            new Keyword(RAIL, List.of("input", "output"), "rail-to-rail input or output (headroom 0 or less)"),
+            new Keyword(NULL_PINS, List.of("true", "false"), "offset null pins brought out"),
+            new Keyword(CURRENCY, List.of(), "the currency of the price, as in the catalog"));
+
+    // ------------------------------------------------------------ words of one text (field:word)
+
+    /** Words of the notes only. */
+    public static final String NOTES = "notes";
+    /** Words of the source (datasheet name, revision) only. */
+    public static final String SOURCE = "source";
+
+    /** A free-text field searched by word ({@code notes:settling}), as the free words are. */
+    public record Text(String name, String meaning) {
+    }
+
+    public static final List<Text> TEXTS = List.of(
+            new Text(TITLE, "a word of the title"),
+            new Text(NOTES, "a word of the notes"),
+            new Text(SOURCE, "a word of the source (datasheet name, revision)"));
 
     // ------------------------------------------------------------ numbers (field<value ...)
 
@@ -134,7 +159,15 @@ public final class Schema {
             new Numeric(IQ, Dimension.CURRENT, "quiescent current per amplifier"),
             new Numeric(CHANNELS, Dimension.NUMBER, "amplifiers per package"),
             new Numeric(FCHOP, Dimension.FREQUENCY, "chopping or auto-zero frequency"),
-            new Numeric(AGING, Dimension.VOLTAGE, "long-term offset change over 1000 h (scaled with the square root of time)"));
+            new Numeric(AGING, Dimension.VOLTAGE, "long-term offset change over 1000 h (scaled with the square root of time)"),
+            new Numeric("ios.maxtemp", Dimension.CURRENT, "maximum input offset current over temperature"),
+            new Numeric("long-term-drift.value", Dimension.VOLTAGE, "long-term offset change as the catalog gives it"),
+            new Numeric("long-term-drift.per", Dimension.TIME, "the time the long-term offset change is given for"),
+            new Numeric("input-headroom.low", Dimension.VOLTAGE, "how far above V- the inputs must stay"),
+            new Numeric("input-headroom.high", Dimension.VOLTAGE, "how far below V+ the inputs must stay"),
+            new Numeric("output-headroom.low", Dimension.VOLTAGE, "how close to V- the output swings"),
+            new Numeric("output-headroom.high", Dimension.VOLTAGE, "how close to V+ the output swings"),
+            new Numeric("price.quantity", Dimension.NUMBER, "the quantity the price is given for"));
 
     // ------------------------------------------------------------ ranges (rated at a value)
 
@@ -167,6 +200,25 @@ public final class Schema {
         m.put("quiescent", IQ);
         m.put("pkg", PACKAGE);
         m.put("arch", ARCHITECTURE);
+        // the catalog's own key names, so a user can search by what they typed
+        m.put("factory-trim", TRIM);
+        m.put("packages", PACKAGE);
+        m.put("tags", TAG);
+        m.put("vos.max-over-temp", "vos.maxtemp");
+        m.put("vos-drift", DRIFT);
+        m.put("vos-drift.typ", "drift.typ");
+        m.put("vos-drift.max", "drift.max");
+        m.put("ib.max-over-temp", "ib.maxtemp");
+        m.put("ios.max-over-temp", "ios.maxtemp");
+        m.put("noise.en", EN);
+        m.put("noise.en-corner", "en.corner");
+        m.put("noise.in", IN);
+        m.put("noise.in-corner", "in.corner");
+        m.put("price.unit", PRICE);
+        m.put("price.currency", CURRENCY);
+        m.put("chopping-frequency", FCHOP);
+        m.put("quiescent-current", IQ);
+        m.put("long-term-drift", AGING);
         return m;
     }
 
@@ -174,6 +226,7 @@ public final class Schema {
     public static List<String> queryNames() {
         return Stream.of(
                         KEYWORDS.stream().map(Keyword::name),
+                        TEXTS.stream().map(Text::name),
                         NUMERIC.stream().map(Numeric::name),
                         INTERVALS.stream().map(Interval::name),
                         ALIASES.keySet().stream())

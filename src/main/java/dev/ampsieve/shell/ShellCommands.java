@@ -465,7 +465,7 @@ final class ShellCommands {
         }
     }
 
-    @Command(name = "help", description = "List the commands, or show one command's options (help COMMAND).")
+    @Command(name = "help", description = "List the commands, show one command's options (help COMMAND), or a reference page (help query|stage-keys|catalog-keys|units).")
     static final class Help extends Base {
         @Parameters(arity = "0..1", paramLabel = "COMMAND", description = "A command name.")
         String command;
@@ -478,6 +478,11 @@ final class ShellCommands {
         public Integer call() {
             CommandLine tree = spec.commandLine().getParent();
             PrintWriter out = out();
+            if (command != null && dev.ampsieve.report.ReferencePages.TOPICS.contains(command)) {
+                // the reference pages of 'ampsieve help TOPIC', at the terminal's width
+                out.print(dev.ampsieve.report.ReferencePages.page(command, ctx.style.width()));
+                return ExitCode.OK;
+            }
             if (command != null) {
                 CommandLine sub = tree.getSubcommands().get(command);
                 if (sub == null) {
@@ -509,6 +514,7 @@ final class ShellCommands {
             out.println("Commands that take --stage FILE use the current stage when it is left out.");
             out.println("Tab completes commands, options, part ids, stage keys and units.");
             out.println("Ctrl-C drops the line or stops a running command; Ctrl-D leaves.");
+            out.println("Reference: help " + String.join(", help ", dev.ampsieve.report.ReferencePages.TOPICS) + ".");
             return ExitCode.OK;
         }
 

@@ -63,12 +63,58 @@ public final class StageLoader {
 
     /** Reads and validates one stage file. */
     public static Stage load(Path file) throws InputException {
-        return read(YamlFiles.read(file));
+        return read(YamlFiles.read(file)).stage();
     }
 
     /** Validates stage text; {@code nameForMessages} only names it in messages (may be null). */
     public static Stage parse(String yaml, Path nameForMessages) throws InputException {
+        return read(YamlFiles.parse(yaml, nameForMessages)).stage();
+    }
+
+    /**
+     * A valid stage and the warnings about it: values that are allowed but probably not meant
+     * (a gain above {@link #WARN_GAIN}, a limit no output error can reach, too few trials for the
+     * yield target), each with its place, reason and fix.
+     */
+    public record Loaded(Stage stage, List<Problem> warnings) {
+        public Loaded {
+            warnings = List.copyOf(warnings);
+        }
+    }
+
+    /** As {@link #load}, with the warnings. */
+    public static Loaded loadWithWarnings(Path file) throws InputException {
+        return read(YamlFiles.read(file));
+    }
+
+    /** As {@link #parse}, with the warnings. */
+    public static Loaded parseWithWarnings(String yaml, Path nameForMessages) throws InputException {
         return read(YamlFiles.parse(yaml, nameForMessages));
+    }
+
+    /** Above this gain a warning (above {@link #MAX_GAIN} an error): loop gain runs short even with a good part. */
+    static final double WARN_GAIN = 1e5;
+
+    /**
+     * z of the two-sided 95 % interval the yield is reported with: the normal quantile at 0.975,
+     * as {@code stats.Wilson.Z95} (the stage package may not depend on stats; a test keeps them equal).
+     */
+    static final double Z95 = 1.959963984540054;
+
+    /**
+     * The fewest trials whose sample can confirm a yield {@code target}: when all n units pass,
+     * the Wilson (1927) score interval's lower end is n / (n + z²) (its centre
+     * (1 + z²/2n)/(1 + z²/n) less its half-width (z²/2n)/(1 + z²/n)), which reaches the target
+     * only for n ≥ target · z² / (1 − target).
+     */
+    static long trialsToConfirm(double target) {
+        return (long) Math.ceil(target * Z95 * Z95 / (1 - target));
+    }
+
+    /** The example value of a stage key, for the fix of an error; null when the path is not a key. */
+    private static String example(String path) {
+        StageKeys.Key k = StageKeys.get(path);
+        return k == null ? null : k.example();
     }
 
     /**
@@ -108,7 +154,7 @@ public final class StageLoader {
         }
     }
 
-    private static Stage read(Node root) throws InputException {
+    private static Loaded read(Node root) throws InputException {
         if (root instanceof Node.Scalar s && s.text() == null) {
             throw new InputException(Problem.error(root.at(), "", "the stage file is empty",
                     "write at least 'gain: 100' and 'limit: 1 mV'"));
@@ -117,14 +163,15 @@ public final class StageLoader {
             throw new InputException(Problem.error(root.at(), "", "a stage file must be 'key: value' lines, found " + root.kind(),
                     "write at least 'gain: 100' and 'limit: 1 mV', one per line"));
         }
-        Reader r = new Reader(new Fields(new ArrayList<>()));
+        Reader r = new Reader(new Fields(new ArrayList<>(), StageLoader::example));
         Stage stage = r.stage(m);
         List<Problem> problems = new ArrayList<>(r.f.problems());
         if (problems.stream().anyMatch(Problem::isError)) {
             problems.sort(Comparator.comparingInt(Problem::line).thenComparingInt(Problem::column));
             throw new InputException(problems);
         }
-        return stage;
+        problems.sort(Comparator.comparingInt(Problem::line).thenComparingInt(Problem::column));
+        return new Loaded(stage, problems);
     }
 
     /** One pass over one file; holds the problem list. */
@@ -271,7 +318,48 @@ public final class StageLoader {
             if (limit != null && !f.hasErrors()) {
                 limitSize(m, stage);
             }
+            if (!f.hasErrors()) {
+                sanity(m, stage);
+            }
             return stage;
+        }
+
+        /** Warnings about a valid stage whose values are allowed but probably not what was meant. */
+        private void sanity(Node.Mapping m, Stage stage) {
+            double ratio = stage.topology() == Topology.INVERTING ? stage.rf() / stage.rg() : stage.noiseGain();
+            if (ratio > WARN_GAIN) {
+                String where = present(m, "gain") ? "gain" : "rf";
+                f.warning(Fields.where(m, where), where.equals("gain") ? "gain" : "rf", "a gain of "
+                        + Units.format(ratio, Dimension.NUMBER) + " is above " + Units.format(WARN_GAIN, Dimension.NUMBER)
+                        + ": even 140 dB (1e7) of open-loop gain leaves under 40 dB of loop gain, and the closed-loop"
+                        + " bandwidth is GBW/" + Units.format(stage.noiseGain(), Dimension.NUMBER),
+                        "split the gain over two stages, or check the value (100 dB is a gain of 100000)");
+            }
+            double limit = stage.limitVolts();
+            Located limitAt = Fields.where(m, "limit");
+            if (stage.supplyVoltage() != null && limit >= stage.supplyVoltage()) {
+                f.warning(limitAt, "limit", "a limit of " + Units.format(limit, Dimension.VOLTAGE) + " at the output is not below the"
+                        + " whole supply of " + Units.format(stage.supplyVoltage(), Dimension.VOLTAGE)
+                        + ": no output error can reach it, so the stage constrains nothing",
+                        "write the largest error allowed at the output, such as '1 mV' (check the prefix)");
+            } else if (stage.fullScaleOutput() != null && limit >= stage.fullScaleOutput()) {
+                f.warning(limitAt, "limit", "a limit of " + Units.format(limit, Dimension.VOLTAGE) + " at the output is not below the"
+                        + " full-scale output of " + Units.format(stage.fullScaleOutput(), Dimension.VOLTAGE)
+                        + ": an error as large as the whole signal",
+                        "write the largest error allowed at the output, such as '1 mV' (check the prefix)");
+            }
+            Criterion c = stage.criterion();
+            if (c != null && c.kind() == Criterion.Kind.YIELD) {
+                long needed = trialsToConfirm(c.yieldTarget());
+                if (stage.trials() < needed && needed <= StageKeys.MAX_TRIALS) {
+                    Located at = present(m, "trials") ? Fields.where(m, "trials") : Fields.where(m, "criterion");
+                    f.warning(at, present(m, "trials") ? "trials" : "criterion", stage.trials() + " trials cannot confirm a yield of "
+                            + Units.format(c.yieldTarget(), Dimension.RATIO, 7) + ": even when every unit passes, the 95 % interval's"
+                            + " lower end is " + Units.format(stage.trials() / (stage.trials() + Z95 * Z95), Dimension.RATIO, 4)
+                            + ", so the verdict can only be uncertain",
+                            "write 'trials: " + needed + "' or more (at most " + StageKeys.MAX_TRIALS + ")");
+                }
+            }
         }
 
         /**

@@ -16,7 +16,12 @@ import java.util.regex.Pattern;
  * <p>SI prefixes follow the SI Brochure (BIPM, 9th edition, 2019, table 7): f 1e-15,
  * p 1e-12, n 1e-9, u/µ 1e-6, m 1e-3, k 1e3, M 1e6, G 1e9, T 1e12. Prefixes are
  * case-sensitive as in the brochure (m milli, M mega); {@code K} is also read as kilo
- * before a unit (as in "KHz", a common misspelling), never in a temperature field.
+ * before a unit (as in "KHz", a common misspelling: no SI prefix K exists), never in a
+ * temperature field. A prefix in the wrong case that has no reading ({@code 10 UV}) is refused
+ * with the spelling that exists ({@code 10 uV}). Unit symbols after the prefix are read
+ * case-blind where that is unambiguous: {@code 10uv}, {@code 1.5 MHZ}, {@code 10 KOHM},
+ * {@code 110 DB}; so {@code 10 mv} is 10 millivolts and {@code 10 MV} 10 megavolts (which the
+ * plausibility bounds then refuse in any op amp field).
  *
  * <p>A unit is read as numerator[/denominator], each with an optional prefix, so
  * {@code V/us} is volts per microsecond. The dimension expected by the field decides
@@ -97,6 +102,29 @@ public final class Units {
         }
     }
 
+    /** Base symbols read case-blind (see {@link #base}). */
+    private static final Map<String, Base> BASES_FOLDED = new LinkedHashMap<>();
+
+    static {
+        for (Map.Entry<String, Base> e : BASES.entrySet()) {
+            String k = e.getKey();
+            // one-letter symbols stay as written except V, A and C, which nothing else could mean here
+            if (k.length() > 1 || k.equals("V") || k.equals("A") || k.equals("C")) {
+                BASES_FOLDED.putIfAbsent(k.toLowerCase(Locale.ROOT), e.getValue());
+            }
+        }
+    }
+
+    /** The SI prefixes read, with their factors, in order (for the reference page). */
+    public static Map<String, Double> prefixes() {
+        return java.util.Collections.unmodifiableMap(PREFIXES);
+    }
+
+    /** Every unit symbol read as written (before any prefix), in order (for the reference page). */
+    public static java.util.List<String> symbols() {
+        return java.util.List.copyOf(BASES.keySet());
+    }
+
     /** Bases that take no SI prefix (a prefix on them would be a typo). */
     private static boolean prefixable(Base b) {
         return switch (b) {
@@ -112,33 +140,44 @@ public final class Units {
      * @throws UnitException naming what was found and an example of what to write
      */
     public static double parse(String text, Dimension expected) throws UnitException {
+        return parse(text, expected, expected.example());
+    }
+
+    /**
+     * As {@link #parse(String, Dimension)}, with {@code example} as the well-formed value an error
+     * suggests: a field's own example ({@code 5 V} for a supply) reads better than the dimension's.
+     */
+    public static double parse(String text, Dimension expected, String example) throws UnitException {
+        if (example == null || example.isBlank()) {
+            example = example;
+        }
         if (text == null || text.isBlank()) {
-            throw new UnitException("empty value", "write " + expected.noun() + " such as '" + expected.example() + "'");
+            throw new UnitException("empty value", "write " + expected.noun() + " such as '" + example + "'");
         }
         String t = text.strip();
         String lower = t.toLowerCase(Locale.ROOT);
         if (lower.contains("nan") || lower.contains("inf")) {
             throw new UnitException("'" + t + "' is not a finite number",
-                    "write " + expected.noun() + " such as '" + expected.example() + "'");
+                    "write " + expected.noun() + " such as '" + example + "'");
         }
         Matcher m = QUANTITY.matcher(t);
         if (!m.matches()) {
             throw new UnitException("'" + t + "' does not start with a number",
-                    "write " + expected.noun() + " such as '" + expected.example() + "'");
+                    "write " + expected.noun() + " such as '" + example + "'");
         }
         double number = Double.parseDouble(m.group(1));
         String unitText = m.group(2);
         if (expected == Dimension.DECIBEL && unitText.replace(" ", "").matches("V/[mµu]?V")) {
             throw gainAsRatio(t, number, unitText.replace(" ", ""));
         }
-        double value = number * interpret(unitText, expected, t);
+        double value = number * interpret(unitText, expected, t, example);
         if (expected == Dimension.TEMPERATURE && isKelvin(unitText)) {
             value = number - 273.15;
         }
         if (!Double.isFinite(value)) {
             // 1e400 V, or 1e308 kV: past the largest double (about 1.8e308) the value would be infinite
             throw new UnitException("'" + t + "' is out of range: beyond the largest number (about 1.8e308 in SI units)",
-                    "check the exponent and the prefix; write " + expected.noun() + " such as '" + expected.example() + "'");
+                    "check the exponent and the prefix; write " + expected.noun() + " such as '" + example + "'");
         }
         if (value == 0 && number != 0 || number == 0 && NONZERO_DIGIT.matcher(m.group(1)).find()) {
             // 1e-400 V would silently read as 0 V
@@ -147,7 +186,7 @@ public final class Units {
         }
         if (expected == Dimension.TEMPERATURE && value < ABSOLUTE_ZERO_C) {
             throw new UnitException("'" + t + "' is below absolute zero (-273.15 °C)",
-                    "write the temperature in °C, such as '" + expected.example() + "'");
+                    "write the temperature in °C, such as '" + example + "'");
         }
         return value;
     }
@@ -177,13 +216,13 @@ public final class Units {
     }
 
     /** Returns the factor to SI for {@code unitText} in a field of dimension {@code expected}. */
-    private static double interpret(String unitText, Dimension expected, String whole) throws UnitException {
+    private static double interpret(String unitText, Dimension expected, String whole, String example) throws UnitException {
         String u = unitText.replace(" ", "");
         if (u.isEmpty()) {
             return switch (expected) {
                 case NUMBER, RATIO, DECIBEL, RESISTANCE -> 1.0;
                 default -> throw new UnitException("'" + whole + "' has no unit",
-                        "write " + expected.noun() + " with its unit, such as '" + expected.example() + "'");
+                        "write " + expected.noun() + " with its unit, such as '" + example + "'");
             };
         }
         if (expected == Dimension.TEMPERATURE && u.equals("K")) {
@@ -200,16 +239,16 @@ public final class Units {
             num = u.substring(0, slash);
             den = u.substring(slash + 1);
         }
-        Unit n = num.isEmpty() && den != null ? new Unit(Base.NONE, 1.0) : unit(num, whole, expected);
-        Unit d = den == null ? null : unit(den, whole, expected);
+        Unit n = num.isEmpty() && den != null ? new Unit(Base.NONE, 1.0) : unit(num, whole, expected, example);
+        Unit d = den == null ? null : unit(den, whole, expected, example);
         Dimension found = dimensionOf(n.base(), d == null ? null : d.base());
         if (found == null) {
             throw new UnitException("unit '" + unitText + "' in '" + whole + "' is not one this tool reads",
-                    "write " + expected.noun() + " such as '" + expected.example() + "'");
+                    "write " + expected.noun() + " such as '" + example + "'");
         }
         if (found != expected && !(expected == Dimension.NUMBER && found == Dimension.RATIO)) {
             throw new UnitException("'" + whole + "' is " + found.noun() + " but " + expected.noun() + " belongs here",
-                    "write " + expected.noun() + " such as '" + expected.example() + "'");
+                    "write " + expected.noun() + " such as '" + example + "'");
         }
         double factor = n.factor() * baseFactor(n.base());
         if (d != null) {
@@ -218,21 +257,56 @@ public final class Units {
         return factor;
     }
 
-    private static Unit unit(String s, String whole, Dimension expected) throws UnitException {
-        Base exact = BASES.get(s);
+    private static Unit unit(String s, String whole, Dimension expected, String example) throws UnitException {
+        Unit u = unitOrNull(s);
+        if (u != null) {
+            return u;
+        }
+        // "10 UV": the prefix letter in the wrong case; SI prefixes stay case-sensitive (m milli, M mega),
+        // so the fix names the one reading that exists instead of guessing
+        if (!s.isEmpty()) {
+            String first = s.substring(0, 1);
+            String swapped = first.equals(first.toUpperCase(Locale.ROOT)) ? first.toLowerCase(Locale.ROOT) : first.toUpperCase(Locale.ROOT);
+            Unit alt = PREFIXES.containsKey(swapped) ? unitOrNull(swapped + s.substring(1)) : null;
+            if (alt != null && !swapped.equals(first)) {
+                String fixed = whole.replace(s, swapped + s.substring(1));
+                throw new UnitException("'" + first + "' in '" + whole + "' is not an SI prefix",
+                        "write '" + fixed + "' (prefixes are case-sensitive: m milli, M mega, k kilo, u micro)");
+            }
+        }
+        throw new UnitException("unit '" + s + "' in '" + whole + "' is not one this tool reads",
+                "write " + expected.noun() + " such as '" + example + "'");
+    }
+
+    /** A unit symbol, with an optional prefix (case-sensitive) before a base (case-blind where unambiguous), or null. */
+    private static Unit unitOrNull(String s) {
+        Base exact = base(s);
         if (exact != null) {
             return new Unit(exact, 1.0);
         }
         for (Map.Entry<String, Double> p : PREFIXES.entrySet()) {
             if (s.startsWith(p.getKey()) && s.length() > p.getKey().length()) {
-                Base b = BASES.get(s.substring(p.getKey().length()));
+                Base b = base(s.substring(p.getKey().length()));
                 if (b != null && prefixable(b)) {
                     return new Unit(b, p.getValue());
                 }
             }
         }
-        throw new UnitException("unit '" + s + "' in '" + whole + "' is not one this tool reads",
-                "write " + expected.noun() + " such as '" + expected.example() + "'");
+        return null;
+    }
+
+    /**
+     * A base symbol as written, else read case-blind: {@code OHM}, {@code HZ}, {@code DB},
+     * {@code v}, {@code a} have one meaning each. Not {@code K}/{@code k} (kelvin against the
+     * kilo prefix), {@code S} or {@code H} (siemens and henry are other units), nor the one-letter
+     * time units, which stay as listed.
+     */
+    private static Base base(String s) {
+        Base exact = BASES.get(s);
+        if (exact != null) {
+            return exact;
+        }
+        return BASES_FOLDED.get(s.toLowerCase(Locale.ROOT));
     }
 
     private static double baseFactor(Base b) {

@@ -9,6 +9,7 @@ import java.util.Collection;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
+import java.util.function.Function;
 
 /**
  * Reads typed values out of a {@link Node.Mapping}, collecting a {@link Problem} for each
@@ -18,9 +19,17 @@ import java.util.Set;
 public final class Fields {
 
     private final List<Problem> problems;
+    /** A field's own example value by dotted path, or null for its dimension's example. */
+    private final Function<String, String> examples;
 
     public Fields(List<Problem> problems) {
+        this(problems, path -> null);
+    }
+
+    /** @param examples the example an error suggests for a field path ({@code supply.voltage} → {@code 5 V}), or null */
+    public Fields(List<Problem> problems, Function<String, String> examples) {
         this.problems = problems;
+        this.examples = examples;
     }
 
     public List<Problem> problems() {
@@ -94,12 +103,17 @@ public final class Fields {
 
     /** A quantity of dimension {@code d} in SI units, or null. */
     public Double quantity(Node.Mapping m, String path, String key, Dimension d) {
+        return quantity(m, path, key, d, examples.apply(join(path, key)));
+    }
+
+    /** As {@link #quantity(Node.Mapping, String, String, Dimension)}; an error suggests {@code example}. */
+    public Double quantity(Node.Mapping m, String path, String key, Dimension d, String example) {
         Node.Scalar s = scalar(m, path, key);
         if (s == null) {
             return null;
         }
         try {
-            return Units.parse(s.text(), d);
+            return Units.parse(s.text(), d, example);
         } catch (UnitException e) {
             error(s.at(), join(path, key), e.problem(), e.fix());
             return null;
@@ -250,7 +264,24 @@ public final class Fields {
         return bestD <= allowed ? best : null;
     }
 
-    /** Levenshtein distance; ten lines do not justify a dependency. */
+    /**
+     * Up to {@code n} of {@code candidates} within the edit distance {@link #closest} allows,
+     * nearest first (ties in the candidates' order): suggestions by spelling, never by substring.
+     */
+    public static List<String> nearest(String word, Collection<String> candidates, int n) {
+        String w = word.toLowerCase(Locale.ROOT).replace('_', '-');
+        int allowed = Math.max(2, w.length() / 3);
+        List<String> within = new ArrayList<>();
+        for (String c : candidates) {
+            if (distance(w, c.toLowerCase(Locale.ROOT)) <= allowed && !within.contains(c)) {
+                within.add(c);
+            }
+        }
+        within.sort(java.util.Comparator.comparingInt(c -> distance(w, c.toLowerCase(Locale.ROOT))));
+        return List.copyOf(within.subList(0, Math.min(n, within.size())));
+    }
+
+    /** Levenshtein distance; ten lines do not justify a dependency (commons-text has one, but nothing else here needs it). */
     static int distance(String a, String b) {
         int[] prev = new int[b.length() + 1];
         int[] cur = new int[b.length() + 1];

@@ -55,9 +55,11 @@ class CheckCommandTest {
         Run r = run("--catalog", dir.toString(), "check");
         assertEquals(ExitCode.OK, r.code(), r.out() + r.err());
         assertEquals(List.of(
+                "== " + f + ": part check-amp: 1 warning",
                 f + ":1:1: warning: noise: not given: en, en-corner, in will be estimated for a cmos input (common practice,"
                         + " conservative) and marked estimated; add 'noise: {en: 12 nV/rtHz, in: 0.1 pA/rtHz}' with the"
                         + " datasheet's white-noise densities and their 1/f corners",
+                "",
                 dir + ": 1 file(s), 1 part(s), 0 error(s), 1 warning(s)",
                 "",
                 dev.ampsieve.report.Caution.TEXT), r.outLines()); // every text output ends with the caution (RULES.md)
@@ -102,7 +104,52 @@ class CheckCommandTest {
         Path f = Files.writeString(dir.resolve("broken.yaml"), "id: x\nvos: {max: 1 mV\n");
         Run r = run("--catalog", dir.toString(), "check");
         assertEquals(ExitCode.FINDINGS, r.code());
-        assertTrue(r.outLines().get(0).startsWith(f + ":3:1: YAML syntax: "), r.out());
+        assertEquals("== " + f + ": no part loaded: 1 error", r.outLines().get(0));
+        assertTrue(r.outLines().get(1).startsWith(f + ":3:1: YAML syntax: "), r.out());
         assertFalse((r.out() + r.err()).contains("Exception"));
+    }
+
+    @Test
+    void problemsAreGroupedUnderOneHeadingPerFile() throws IOException {
+        Path a = Files.writeString(dir.resolve("a.yaml"), PART);
+        Path b = Files.writeString(dir.resolve("b.yaml"), PART.replace("check-amp", "other-amp").replace("gbw: 2 MHz", "gbw: 2 mA"));
+        Run r = run("--catalog", dir.toString(), "check");
+        List<String> lines = r.outLines();
+        // a.yaml: its part loads with the one noise warning; b.yaml: the gbw error (a part with an error
+        // gets no absence warnings), and its part is left out
+        assertEquals("== " + a + ": part check-amp: 1 warning", lines.get(0));
+        assertTrue(lines.get(1).startsWith(a + ":1:1: warning: noise: not given:"), lines.get(1));
+        assertEquals("", lines.get(2));
+        assertEquals("== " + b + ": no part loaded: 1 error", lines.get(3));
+    }
+
+    @Test
+    void quietShowsOnlyErrorsAndTheSummary() throws IOException {
+        Files.writeString(dir.resolve("a.yaml"), PART);
+        Path b = Files.writeString(dir.resolve("b.yaml"), PART.replace("check-amp", "other-amp").replace("gbw: 2 MHz", "gbw: 2 mA"));
+        Run r = run("--catalog", dir.toString(), "check", "--quiet");
+        assertEquals(ExitCode.FINDINGS, r.code());
+        assertEquals(List.of(
+                "== " + b + ": no part loaded: 1 error",
+                b + ":5:6: gbw: '2 mA' is a current but a frequency belongs here; write a frequency such as '1.5 MHz'",
+                "",
+                dir + ": 2 file(s), 1 part(s), 1 error(s), 1 warning(s)"), r.outLines());
+        // no error at all: the summary line alone, exit 0
+        Files.delete(b);
+        Run clean = run("--catalog", dir.toString(), "check", "-q");
+        assertEquals(ExitCode.OK, clean.code());
+        assertEquals(List.of(dir + ": 1 file(s), 1 part(s), 0 error(s), 1 warning(s)"), clean.outLines());
+    }
+
+    @Test
+    void aStageFileInTheCatalogFolderIsSkippedWithOneLine() throws IOException {
+        Files.writeString(dir.resolve("amp.yaml"), PART);
+        Path stage = Files.writeString(dir.resolve("bridge.yaml"), "gain: 100\nlimit: 1 mV\ncriterion: worst-case\n");
+        Run r = run("--catalog", dir.toString(), "check");
+        assertEquals(ExitCode.OK, r.code(), r.out());
+        assertTrue(r.outLines().contains(stage + ":1:1: warning: looks like a stage file (it has gain, limit, criterion and no id);"
+                + " skipped; move it to a 'stages' folder (which the catalog does not read) and pass it with --stage"), r.out());
+        // one line for the file, not one per missing part key
+        assertEquals(1, r.outLines().stream().filter(l -> l.startsWith(stage.toString())).count(), r.out());
     }
 }

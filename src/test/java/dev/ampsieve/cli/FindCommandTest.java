@@ -143,7 +143,7 @@ class FindCommandTest {
     void noMatchSaysSoAndExitsOne() {
         CliRun r = find("input:jfet", "gbw>100MHz");
         assertEquals(ExitCode.FINDINGS, r.code());
-        assertTrue(r.out().startsWith("0 parts match 'input:jfet gbw>100MHz'."), r.out());
+        assertTrue(r.out().startsWith("no part matches 'input:jfet gbw>100MHz'."), r.out()); // by hand: no demo JFET part is that fast
     }
 
     @Test
@@ -161,5 +161,47 @@ class FindCommandTest {
         assertTrue(r.out().contains("field=lo..hi    both ends included"), r.out());
         assertTrue(r.out().contains("supply>=5V or supply=5V: rated to run on 5 V"), r.out());
         assertFalse(r.out().contains("%n"), r.out());
+    }
+
+    @Test
+    void aDashWordExcludesWithoutDoubleDash() {
+        // by hand: fx-chop-1 is the only chopper; the other three, cheapest first
+        CliRun r = find("-chopper");
+        assertEquals(ExitCode.OK, r.code(), r.toString());
+        assertEquals(List.of("fx-bip-1", "fx-az-1", "fx-jfet-1"), ids(r));
+        assertTrue(r.out().startsWith("3 parts match '-chopper', most relevant first"), r.out());
+        // the same with '--', as before
+        assertEquals(List.of("fx-bip-1", "fx-az-1", "fx-jfet-1"), ids(find("--", "-chopper")));
+    }
+
+    @Test
+    void aDashWordStartingWithAShortOptionLetterIsStillAWord() {
+        // -h and -V are options; "-jfet" excludes, "-hot" and "-Vx" exclude words no part has
+        assertEquals(List.of("fx-bip-1", "fx-az-1", "fx-chop-1"), ids(find("-jfet", "-hot", "-Vx")));
+    }
+
+    @Test
+    void realOptionsStillWorkBetweenDashWords() {
+        CliRun r = find("-chopper", "--json", "cmos");
+        assertEquals(ExitCode.OK, r.code(), r.toString());
+        // by hand: cmos parts are fx-chop-1 and fx-az-1; without the chopper, one remains
+        assertTrue(r.out().contains("\"query\" : \"-chopper cmos\""), r.out());
+        assertTrue(r.out().contains("\"count\" : 1"), r.out());
+        assertTrue(find("-h").out().contains("Usage: ampsieve find"));
+    }
+
+    @Test
+    void messagesSaySingularOrPlural() {
+        assertTrue(find("fx-jfet-1").out().startsWith("1 part matches 'fx-jfet-1', most relevant first"));
+        assertTrue(find("cmos").out().startsWith("2 parts match 'cmos', most relevant first"));
+        assertTrue(find().out().startsWith("4 parts in the catalog, most relevant first"));
+    }
+
+    @Test
+    void helpShowsHowToExcludeAndListsTheCatalogNames() {
+        CliRun r = CliRun.of("find", "--help");
+        assertTrue(r.out().contains("  -word           excludes: find 'drift<=1uV/C' -chopper (no '--' needed"), r.out());
+        assertTrue(r.out().contains("null-pins"), r.out());
+        assertTrue(r.out().contains("factory-trim (trim)"), r.out());
     }
 }

@@ -103,7 +103,7 @@ class HostileTextTest {
     void aQueryEchoedBackIsEscaped() {
         CliRun r = run("find", ESC + "]0;x" + (char) 7);
         assertInert(r);
-        assertTrue(r.out().contains("match '\\x1b]0;x\\x07'"), r.toString());
+        assertTrue(r.out().contains("1 part matches '\\x1b]0;x\\x07'"), r.toString());
         CliRun bad = run("find", "vos<" + ESC + "[2J");
         assertEquals(ExitCode.FINDINGS, bad.code(), bad.toString());
         assertInert(bad);

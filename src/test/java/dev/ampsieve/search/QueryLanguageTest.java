@@ -32,10 +32,50 @@ class QueryLanguageTest {
     }
 
     @Test
-    void unknownFieldFarFromAnyNameListsTheFields() {
+    void unknownFieldFarFromAnyNameSaysWhereTheFieldsAreListed() {
+        // no field name is within edit distance 2 of "wobble": the fix points at the reference
         Problem p = onlyProblem("wobble>3");
-        assertTrue(p.fix().startsWith("fields: id, input, architecture"), p.fix());
-        assertTrue(p.fix().contains("gbw"), p.fix());
+        assertEquals("'ampsieve help query' lists every field", p.fix());
+    }
+
+    @Test
+    void unknownFieldSuggestsByEditDistanceNotBySubstring() {
+        // "nullpins" is one insertion from "null-pins"; "gbwx" one deletion from "gbw"
+        assertEquals("did you mean 'null-pins'?", onlyProblem("nullpins:true").fix());
+        assertEquals("did you mean 'gbw'?", onlyProblem("gbwx>1MHz").fix());
+        // by hand: "pricequantity" is 1 edit from "price.quantity" and 4 from "price.unit" (q->., drop a, t, y),
+        // within the 13/3 = 4 allowed; "price" itself, a substring, is 8 away and not offered
+        assertEquals("did you mean 'price.quantity' or 'price.unit'?", onlyProblem("pricequantity>10").fix());
+        // by hand: "drif" is 1 from "drift" and 2 from "trim" (d->t, f->m), nearest first; others 3 or more
+        assertEquals("did you mean 'drift' or 'trim'?", onlyProblem("drif<1uV/C").fix());
+    }
+
+    @Test
+    void everyCatalogKeyIsAQueryName() {
+        // each key a catalog file may hold, as the user typed it, is searchable (dotted for section keys)
+        java.util.Set<String> names = new java.util.HashSet<>(Schema.queryNames());
+        for (String key : dev.ampsieve.catalog.CatalogKeys.PART_KEYS) {
+            List<String> sub = dev.ampsieve.catalog.CatalogKeys.subKeys(key);
+            if (sub.isEmpty() || key.equals("supply") || key.equals("temperature")) {
+                assertTrue(names.contains(key), key);
+            }
+            for (String k : sub) {
+                assertTrue(names.contains(key + "." + k), key + "." + k);
+            }
+        }
+    }
+
+    @Test
+    void textFieldsAndBooleansParse() throws InputException {
+        PartQuery q = QueryLanguage.parse("null-pins:true -notes:settling factory-trim:laser");
+        PartQuery.KeywordIs pins = (PartQuery.KeywordIs) q.clauses().get(0);
+        assertEquals(Schema.NULL_PINS, pins.field().name());
+        assertEquals("true", pins.value());
+        PartQuery.WordIn notes = (PartQuery.WordIn) q.clauses().get(1);
+        assertEquals(Schema.NOTES, notes.field().name());
+        assertTrue(notes.excluded());
+        assertEquals(Schema.TRIM, ((PartQuery.KeywordIs) q.clauses().get(2)).field().name());
+        assertEquals("did you mean 'null-pins:true'?", onlyProblem("null-pins:treu").fix());
     }
 
     @Test
@@ -170,5 +210,20 @@ class QueryLanguageTest {
             // 197 pieces + 3 = 200 word searches, the most allowed; no fixture part has the piece "zq"
             assertEquals(List.of(), index.search(QueryLanguage.parse("zq-".repeat(196) + "zq")));
         }
+    }
+
+    @Test
+    void theExampleInAFixIsInTheFieldsOwnRange() {
+        // a supply is volts: the fix shows 5 V, not the microvolts of an offset
+        assertEquals("write a voltage with its unit, such as '5 V'", onlyProblem("supply>=5").fix());
+        assertEquals("write a voltage with its unit, such as '5 V'", onlyProblem("supply.min<3").fix());
+        assertEquals("write a voltage with its unit, such as '2.5 uV'", onlyProblem("vos<10").fix());
+    }
+
+    @Test
+    void aUnitWrittenApartInTheWrongCaseGetsThePrefixFix() {
+        Problem p = onlyProblem("vos<10 UV");
+        assertEquals("query term 'vos<10 UV'", p.field());
+        assertEquals("write '10uV' (prefixes are case-sensitive: m milli, M mega, k kilo, u micro)", p.fix());
     }
 }

@@ -254,7 +254,7 @@ class ShellSessionTest {
         String printed = session("set gain 100", "set limit 1 mV", "budget zz-nothing-like-it", "help rank");
         String flat = dev.ampsieve.testing.Flat.of(printed);
         assertTrue(flat.contains("; 'check' lists what was read"), printed);
-        assertTrue(flat.contains("--query takes the language of 'find' (see 'find --help')"), printed);
+        assertTrue(flat.contains("--query takes the language of 'find' ('help query' lists every field)"), printed);
         assertFalse(printed.contains("'ampsieve "), printed);
         // only where a command follows: the version in the banner keeps the program's name
         assertTrue(printed.contains(new dev.ampsieve.cli.RootCommand.Version().getVersion()[0]), printed);

@@ -244,7 +244,8 @@ class StageLoaderTest {
 
         @Test
         void aBadAnswerGetsItsProblemWithoutLocation() {
-            assertEquals(List.of("rf: '10 mV' is a voltage but a resistance belongs here; write a resistance such as '10 kohm'"),
+            // the example is rf's own (StageKeys), not the dimension's
+            assertEquals(List.of("rf: '10 mV' is a voltage but a resistance belongs here; write a resistance such as '100 kohm'"),
                     StageLoader.checkAnswer("rf", "10 mV").stream().map(Problem::toString).toList());
             assertEquals(List.of("trials: 50 is outside 100..10000000; write a whole number from 100 to 10000000"),
                     StageLoader.checkAnswer("trials", "50").stream().map(Problem::toString).toList());
@@ -311,10 +312,10 @@ class StageLoaderTest {
 
         @Test
         void wrongUnitNamesBothDimensions() {
-            assertEquals("s.yaml:2:5: rf: '10 mV' is a voltage but a resistance belongs here; write a resistance such as '10 kohm'",
+            assertEquals("s.yaml:2:5: rf: '10 mV' is a voltage but a resistance belongs here; write a resistance such as '100 kohm'",
                     problem("gain: 10\nrf: 10 mV\nlimit: 1 mV\n"));
             assertEquals("s.yaml:3:9: band.high: '10 kohm' is a resistance but a frequency belongs here; "
-                            + "write a frequency such as '1.5 MHz'",
+                            + "write a frequency such as '1 kHz'", // band.high's own example (StageKeys)
                     problem("gain: 10\nband:\n  high: 10 kohm\nlimit: 1 mV\n"));
         }
 

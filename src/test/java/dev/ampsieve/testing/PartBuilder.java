@@ -84,10 +84,14 @@ public final class PartBuilder {
     public PartBuilder fchop(double v) { fchop = v; return this; }
     public PartBuilder iq(double v) { iq = v; return this; }
     public PartBuilder notes(String v) { notes = v; return this; }
+    public PartBuilder nullPins(boolean v) { nullPins = v; return this; }
+    public PartBuilder source(String v) { source = v; return this; }
+    private boolean nullPins;
+    private String source = "test fixture";
 
     public Part build() {
-        return new Part(id, title, architecture, input, factoryTrim, false, channels, packages, tags, price, supply,
+        return new Part(id, title, architecture, input, factoryTrim, nullPins, channels, packages, tags, price, supply,
                 temperature, vos, drift, ib, ios, cmrr, psrr, aol, gbw, slew, noise, aging, inputHeadroom,
-                outputHeadroom, fchop, iq, "test fixture", notes, new Located(Path.of("fixture.yaml"), 1, 1));
+                outputHeadroom, fchop, iq, source, notes, new Located(Path.of("fixture.yaml"), 1, 1));
     }
 }
