@@ -14,7 +14,7 @@ final class StageEdit {
         return new Stage(s.topology(), rf, s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
                 s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
+                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
                 s.acCoupled(), s.where());
     }
 
@@ -22,7 +22,7 @@ final class StageEdit {
         return new Stage(s.topology(), s.rf(), s.rg(), rs, s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
                 s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
+                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
                 s.acCoupled(), s.where());
     }
 
@@ -30,7 +30,7 @@ final class StageEdit {
         return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), tMin, tMax,
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
                 s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
+                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
                 s.acCoupled(), s.where());
     }
 
@@ -38,7 +38,7 @@ final class StageEdit {
         return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
                 s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                limit, s.criterion(), s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
+                limit, s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
                 s.acCoupled(), s.where());
     }
 
@@ -52,7 +52,7 @@ final class StageEdit {
         return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
                 s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance() * k, s.ratioTempco() * k,
-                s.serviceLife(), s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(),
+                s.serviceLife(), s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(),
                 s.maxPrice(), s.acCoupled(), s.where());
     }
 
@@ -60,7 +60,7 @@ final class StageEdit {
         return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
                 s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                s.limit(), criterion, s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
+                s.limit(), criterion, s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
                 s.acCoupled(), s.where());
     }
 
@@ -68,7 +68,7 @@ final class StageEdit {
         return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
                 s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.seed(), trim, s.quantity(), s.maxPrice(),
+                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), trim, s.quantity(), s.maxPrice(),
                 s.acCoupled(), s.where());
     }
 }

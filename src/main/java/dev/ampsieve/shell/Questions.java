@@ -20,7 +20,7 @@ final class Questions {
 
     /** Left to {@code set}: derived (rg), detailed headroom, and statistics settings with sound defaults. */
     static final Set<String> NOT_ASKED = Set.of("rg", "common-mode-range.min", "common-mode-range.max",
-            "output-range.min", "output-range.max", "max-to-sigma", "trials", "seed");
+            "output-range.min", "output-range.max", "max-to-sigma", "trials", "max-trials", "seed");
 
     /** Only asked when a trim is allowed. */
     static final Set<String> TRIM_DETAILS = Set.of("trim.method", "trim.resolution", "trim.cost");
