@@ -314,14 +314,16 @@ public final class Advisor {
 
     private static String undecidedLine(Unsettled u) {
         var y = u.yield();
-        String pc = Phrases.percentFine(u.target());
+        // the target as the stage gives it (99.02 %, not 99.0 %); the interval's upper end rounded up, its lower end down
+        String pc = Units.format(u.target(), Dimension.RATIO, 4);
         String more = u.unitsToSettle() == Long.MAX_VALUE
                 ? "no number of units can settle it, as the yield seen is the target itself"
                 : "more units cannot settle it below about " + u.unitsToSettle() + " units at the yield seen"
                         + (u.unitsToSettle() > u.cap() ? " (max-trials is " + u.cap() + ")" : "");
         return u.candidate().id() + " is undecided" + (u.trimmed() ? " after the trim" : "") + ": after " + y.trials()
                 + " simulated units the true yield is within " + Phrases.yieldPercent(y.low()) + " to "
-                + Phrases.yieldPercent(y.high()) + " of the " + pc + " target; " + more
+                + (y.high() >= 1 ? "100 %" : String.format(Locale.ROOT, "%.2f %%", Math.ceil(y.high() * 1e4) / 100))
+                + ", which holds the " + pc + " target; " + more
                 + ". What settles it: a looser target (" + Phrases.yieldPercent(y.low()) + " or less is shown met), a part with "
                 + "a smaller error" + (u.trimAllowed() ? "" : ", or allowing a trim") + ".";
     }
@@ -344,7 +346,7 @@ public final class Advisor {
     static List<Change> changes(Stage stage, Candidate closest, BudgetFunction budgets) {
         Part p = closest.part();
         Predicate<Stage> fits = s -> {
-            Budget b = budgets.compute(s, p);
+            Budget b = budgets.compute(StageEdit.capSampling(s), p); // fast near the target; undecided is no fit
             return b.constraintsMet() && b.verdict().fits();
         };
         List<Change> out = new ArrayList<>();

@@ -71,4 +71,18 @@ final class StageEdit {
                 s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), trim, s.quantity(), s.maxPrice(),
                 s.acCoupled(), s.where());
     }
+
+    /**
+     * The stage with its yield sampling capped at {@code trials} units: the no-fit advice's
+     * bisection steps sit near the yield target, where an uncapped run goes on to max-trials at
+     * each step. An answer left undecided there counts as not fitting, so a capped step can only
+     * offer a change larger than needed, never one that flatters the part.
+     */
+    static Stage capSampling(Stage s) {
+        return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
+                s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
+                s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
+                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.trials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
+                s.acCoupled(), s.where());
+    }
 }

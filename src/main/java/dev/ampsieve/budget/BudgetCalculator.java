@@ -114,8 +114,9 @@ public final class BudgetCalculator {
 
     /**
      * The untrimmed yield of the part with datasheet maxima read as each of {@link #SIGMA_READINGS}
-     * and as the stage's own max-to-sigma, in increasing order of k, each run as the budget runs
-     * it (same seed, target and trial counts; typical-only figures move their worst case with k).
+     * and as the stage's own max-to-sigma, in increasing order of k: the other readings run the
+     * stage's {@code trials} units with its seed and no early stop, so their intervals compare
+     * (typical-only figures move their worst case with k).
      * For the single-part budget only: each is a Monte Carlo run of its own (the stage's own value
      * is the budget's yield, not run again).
      */
@@ -136,8 +137,9 @@ public final class BudgetCalculator {
             List<TermResult> terms = TERMS.stream().map(t -> t.evaluate(sk, v)).toList();
             YieldResult y = terms.stream().anyMatch(t -> !Double.isFinite(t.outputV()))
                     ? new YieldResult(0, 0, 0, 0, "none-pass") // as compute() decides for such a part
+                    // the stage's trials without early stop: comparable intervals at each reading
                     : new YieldModel(sk, v, fixedInYield(sk, terms, false, false), false, false)
-                            .run(yieldTarget(sk), wcCounted(sk, terms));
+                            .run(Double.NaN, wcCounted(sk, terms));
             out.add(new SigmaYield(k, y.value(), y.low(), y.high(), y.trials()));
         }
         return List.copyOf(out);

@@ -40,14 +40,22 @@ public final class BudgetText {
         return Wrap.prose(Visible.lines(table(b, bySigma, stageLabel, width)), width);
     }
 
-    /** "k = 2: 99.512 % (99.41 to 99.60 %), k = 3 (the stage's): ..." on one line. */
+    /**
+     * "2: 93.10 % (91.35..94.52), 3 (stage): 99.02 % (99.00..99.05), 4: ..." on one line: the yield
+     * (rounded down) and its 95 % interval (ends rounded outward) at each max-to-sigma reading.
+     */
     static String sigmaLine(List<SigmaYield> bySigma, Stage s) {
         List<String> parts = new java.util.ArrayList<>();
         for (SigmaYield y : bySigma) {
-            parts.add("k = " + num(y.maxToSigma()) + (y.maxToSigma() == s.maxToSigma() ? " (the stage's)" : "") + ": "
-                    + pct(y.yield()) + " (" + pct(y.low()) + " to " + pct(y.high()) + ")");
+            parts.add(num(y.maxToSigma()) + (y.maxToSigma() == s.maxToSigma() ? " (stage)" : "") + ": "
+                    + points(Math.floor(y.yield() * 1e4) / 1e4) + " % (" + points(Math.floor(y.low() * 1e4) / 1e4) + ".."
+                    + points(Math.ceil(y.high() * 1e4) / 1e4) + ")");
         }
         return String.join(", ", parts);
+    }
+
+    private static String points(double ratio) {
+        return String.format(Locale.ROOT, "%.2f", 100 * ratio);
     }
 
     private static String table(Budget b, List<SigmaYield> bySigma, String stageLabel, int width) {
@@ -94,7 +102,7 @@ public final class BudgetText {
         line(o, "Yield      %s", yieldLine(b.yield(), s));
         if (!bySigma.isEmpty()) {
             // the reading of datasheet maxima moves the yield more than the sampling does
-            line(o, "%-10s by max-to-sigma k (a maximum read as k sigma): %s", "", sigmaLine(bySigma, s));
+            line(o, "%-10s %s", "Max-to-σ", sigmaLine(bySigma, s));
         }
         Trim trim = BudgetCalculator.trimOf(s);
         for (Trim.Method m : Trim.Method.values()) {
@@ -159,7 +167,9 @@ public final class BudgetText {
         double target = s.criterion().yieldTarget();
         int cap = Math.max(s.trials(), s.maxTrials());
         if (y.low() >= target || y.high() < target) {
-            return y.trials() + " units, stopped once the interval lay wholly " + (y.low() >= target ? "above" : "below") + " the target";
+            String side = y.low() >= target ? "above" : "below";
+            return y.trials() >= cap ? y.trials() + " units (max-trials), the interval wholly " + side + " the target"
+                    : y.trials() + " units, stopped once the interval lay wholly " + side + " the target";
         }
         return y.trials() + " units" + (y.trials() >= cap ? ", the max-trials cap" : "") + ", undecided: the interval holds the target";
     }

@@ -114,7 +114,7 @@ public final class RankReport {
             }
             o.append(r.stage().criterion().kind() == Criterion.Kind.YIELD
                     ? "margin: lower end of the yield's 95 % interval minus the target, in points of yield.\n"
-                    : "margin: (limit - " + errorName(r) + ") / limit.").append("  †: largest before the trim.  P: on the Pareto front.\n");
+                    : "margin: (limit - " + errorName(r) + ") / limit.  ").append("†: largest before the trim.  P: on the Pareto front.\n");
         }
         if (!r.pareto().isEmpty()) {
             // error against cost: each step up in cost buys a smaller error
