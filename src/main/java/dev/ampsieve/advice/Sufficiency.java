@@ -43,6 +43,11 @@ public record Sufficiency(boolean yes, Budget budget, double untrimmedErrorV, do
             return new Sufficiency(false, b, err, margin, "no: " + id + " needs the trim; untrimmed " + figure + limited
                     + "; after the trim " + volts(after) + ".");
         }
+        if (b.verdict() == Verdict.UNDECIDED && b.yield().high() >= crit.yieldTarget()) {
+            // not shown met: the answer to "does it suffice" is no, and why is the sampling, not a refutation
+            return new Sufficiency(false, b, err, margin, "no: " + id + " is undecided untrimmed: after " + b.yield().trials()
+                    + " simulated units the 95 % interval of its yield still holds the target; " + figure + limited + ".");
+        }
         return new Sufficiency(false, b, err, margin, "no: " + id + " does not meet the limit untrimmed; " + figure
                 + (margin < 0 ? " (" + Phrases.margin(crit, margin) + ")" : "") + limited + ".");
     }

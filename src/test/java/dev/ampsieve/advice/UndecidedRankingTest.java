@@ -58,6 +58,16 @@ class UndecidedRankingTest {
     }
 
     @Test
+    void sufficesAnswersNoForAnUndecidedPartAndSaysWhy() {
+        StageFixture s = StageFixture.follower().limitV(2e-3);
+        s.criterion = Criterion.yield(within(2) / within(3)); // the part's true yield exactly
+        s.trials = 2000;
+        s.maxTrials = 20_000;
+        Sufficiency a = Sufficiency.of(BudgetCalculator.compute(s.build(), part("p", 1e-3, 1.0).build()));
+        assertTrue(!a.yes() && a.answer().startsWith("no: p is undecided untrimmed: after 20000 simulated units"), a.answer());
+    }
+
+    @Test
     void unitsToSettleFollowTheNormalHalfWidth() {
         // p = 0.999, t = 0.998: n = 1.96² · 0.999 · 0.001 / 0.001² = 3837.7 -> 3838 (by hand)
         assertEquals(3838, Unsettled.unitsToSettle(0.999, 0.998));
