@@ -9,9 +9,10 @@ import java.util.List;
  * @param pick         the first candidate of the ranking that fits, or null
  * @param cheapestAsIs the cheapest part that fits without a trim, or null
  * @param noFit        what would make the closest part fit; null when something fits
+ * @param undecided    the best-ranked part whose yield the sampling left undecided; null when none
  */
 public record Advice(Candidate pick, Candidate cheapestAsIs, TrimAdvice trim, ZeroDriftAdvice zeroDrift,
-        NoFitAdvice noFit, List<String> lines) {
+        NoFitAdvice noFit, Unsettled undecided, List<String> lines) {
     public Advice {
         lines = List.copyOf(lines);
     }

@@ -71,6 +71,10 @@ public final class Advisor {
             trimLine(stage, trim).ifPresent(lines::add);
         }
         zeroDriftLines(stage, zeroDrift, fitting, lines);
+        Unsettled undecided = undecided(stage, ranked);
+        if (undecided != null) {
+            lines.add(undecidedLine(undecided));
+        }
         if (noFit != null) {
             noFitLines(noFit, rejected, lines);
         }
@@ -93,7 +97,7 @@ public final class Advisor {
                     + String.join(", ", larger.stream().map(String::valueOf).toList()) + " units), not for this build of "
                     + stage.quantity() + ": smaller orders usually cost more per unit.");
         }
-        return new Advice(pick, asIs, trim, zeroDrift, noFit, lines);
+        return new Advice(pick, asIs, trim, zeroDrift, noFit, undecided, lines);
     }
 
     // ------------------------------------------------------------------ trim
@@ -103,7 +107,7 @@ public final class Advisor {
         if (!StageEdit.trim(stage).allowed()) {
             // judged on the after-trim totals the engine computed for every part
             Candidate would = ranked.stream()
-                    .filter(c -> c.verdict() == Verdict.NO_FIT && fitsAfterTrim(c.budget()))
+                    .filter(c -> !c.verdict().fits() && fitsAfterTrim(c.budget()))
                     .map(c -> Candidate.withTrim(c.budget()))
                     .min(Comparator.comparingDouble(Candidate::effectiveCost).thenComparing(Candidate::id))
                     .orElse(null);
@@ -331,6 +335,39 @@ public final class Advisor {
         }
     }
 
+    // ------------------------------------------------------------------ undecided yield
+
+    /** The best-ranked part whose yield interval still holds the target, with what would settle it; null when none. */
+    static Unsettled undecided(Stage stage, List<Candidate> ranked) {
+        Candidate c = ranked.stream().filter(x -> x.constraintsMet() && x.verdict() == Verdict.UNDECIDED).findFirst().orElse(null);
+        if (c == null) {
+            return null;
+        }
+        double target = stage.criterion().yieldTarget();
+        var asIs = c.budget().yield();
+        var after = c.budget().trimmed() == null ? null : c.budget().trimmed().yield();
+        boolean trimmed = asIs.high() < target && after != null; // only the trim's run holds the target
+        var y = trimmed ? after : asIs;
+        return new Unsettled(c, y, trimmed, target, Math.max(stage.trials(), stage.maxTrials()),
+                Unsettled.unitsToSettle(y.value(), target), StageEdit.trim(stage).allowed());
+    }
+
+    private static String undecidedLine(Unsettled u) {
+        var y = u.yield();
+        // the target as the stage gives it (99.02 %, not 99.0 %); the interval's upper end rounded up, its lower end down
+        String pc = Units.format(u.target(), Dimension.RATIO, 4);
+        String more = u.unitsToSettle() == Long.MAX_VALUE
+                ? "no number of units can settle it, as the yield seen is the target itself"
+                : "more units cannot settle it below about " + u.unitsToSettle() + " units at the yield seen"
+                        + (u.unitsToSettle() > u.cap() ? " (max-trials is " + u.cap() + ")" : "");
+        return u.candidate().id() + " is undecided" + (u.trimmed() ? " after the trim" : "") + ": after " + y.trials()
+                + " simulated units the true yield is within " + Phrases.yieldPercent(y.low()) + " to "
+                + (y.high() >= 1 ? "100 %" : String.format(Locale.ROOT, "%.2f %%", Math.ceil(y.high() * 1e4) / 100))
+                + ", which holds the " + pc + " target; " + more
+                + ". What settles it: a looser target (" + Phrases.yieldPercent(y.low()) + " or less is shown met), a part with "
+                + "a smaller error" + (u.trimAllowed() ? "" : ", or allowing a trim") + ".";
+    }
+
     // ------------------------------------------------------------------ nothing fits
 
     static NoFitAdvice noFit(Stage stage, List<Candidate> ranked, BudgetFunction budgets) {
@@ -358,7 +395,7 @@ public final class Advisor {
     static List<Change> changes(Stage stage, Candidate closest, BudgetFunction budgets) {
         Part p = closest.part();
         Predicate<Stage> fits = s -> {
-            Budget b = budgets.compute(s, p);
+            Budget b = budgets.compute(StageEdit.capSampling(s), p); // fast near the target; undecided is no fit
             return fitsBy(b);
         };
         List<Change> out = new ArrayList<>();

@@ -1,6 +1,8 @@
 package dev.ampsieve.advice;
 
 import dev.ampsieve.budget.Budget;
+import dev.ampsieve.budget.BudgetCalculator;
+import dev.ampsieve.budget.YieldResult;
 import dev.ampsieve.budget.Verdict;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.stage.Criterion;
@@ -14,7 +16,10 @@ import dev.ampsieve.stage.Stage;
  * @param effectiveCost unit price at the stage quantity (its price break) plus the trim cost when trimmed; NaN when the catalog has no price
  * @param errorV        the total the criterion judges (worst-case sum; RSS for the RSS and
  *                      yield criteria), output volts
- * @param margin        (E - errorV) / E with E the stage limit; negative when over the limit
+ * @param margin        the margin of the criterion in force: (E - errorV) / E with E the stage limit under
+ *                      the worst-case and RSS criteria; under a yield criterion the lower end of the
+ *                      yield's 95 % interval minus the target (as a fraction: 0.0005 is 0.05 points),
+ *                      never an RSS figure; negative when the criterion is not shown met
  */
 public record Candidate(Part part, Budget budget, boolean trimmed, double effectiveCost, double errorV, double margin) {
 
@@ -30,9 +35,9 @@ public record Candidate(Part part, Budget budget, boolean trimmed, double effect
         return budget.constraintsMet();
     }
 
-    /** Meets every hard constraint and the limit, as it is or after the stage's trim. */
+    /** Meets every hard constraint and the limit, as it is or after the stage's trim (an undecided yield does not). */
     public boolean fits() {
-        return constraintsMet() && verdict() != Verdict.NO_FIT;
+        return constraintsMet() && verdict().fits();
     }
 
     /** The counted terms of the figures the verdict judges (after the trim when trimmed) that rest on an estimate. */
@@ -63,8 +68,19 @@ public record Candidate(Part part, Budget budget, boolean trimmed, double effect
             case FITS -> untrimmed(b, untrimmed);
             case FITS_AFTER_TRIM -> trimmed(b, after);
             // a part that fits neither way is shown as it comes closest, trim included when allowed
-            case NO_FIT -> StageEdit.trim(s).allowed() && after < untrimmed ? trimmed(b, after) : untrimmed(b, untrimmed);
+            case UNDECIDED, NO_FIT -> closer(b, untrimmed, after);
         };
+    }
+
+    /** The untrimmed or (when the stage allows it) trimmed figures, whichever stand closer to the criterion. */
+    private static Candidate closer(Budget b, double untrimmed, double after) {
+        if (!StageEdit.trim(b.stage()).allowed()) {
+            return untrimmed(b, untrimmed);
+        }
+        if (b.stage().criterion().kind() == Criterion.Kind.YIELD && b.trimmed().yield() != null) {
+            return b.trimmed().yield().low() > b.yield().low() ? trimmed(b, after) : untrimmed(b, untrimmed);
+        }
+        return after < untrimmed ? trimmed(b, after) : untrimmed(b, untrimmed);
     }
 
     /** The part with the stage's trim applied, whatever its verdict (used to weigh a trim not yet allowed). */
@@ -73,12 +89,30 @@ public record Candidate(Part part, Budget budget, boolean trimmed, double effect
     }
 
     private static Candidate untrimmed(Budget b, double error) {
-        return new Candidate(b.part(), b, false, price(b.part(), b.stage().quantity()), error, margin(b.limitV(), error));
+        return new Candidate(b.part(), b, false, price(b.part(), b.stage().quantity()), error, marginOf(b, b.yield(), error));
     }
 
     private static Candidate trimmed(Budget b, double error) {
         double cost = price(b.part(), b.stage().quantity()) + StageEdit.trim(b.stage()).cost();
-        return new Candidate(b.part(), b, true, cost, error, margin(b.limitV(), error));
+        YieldResult y = b.trimmed() == null ? null : b.trimmed().yield();
+        if (y == null && b.stage().criterion().kind() == Criterion.Kind.YIELD) {
+            // a trim the stage does not allow was not simulated with the budget: simulate it for its margin
+            y = BudgetCalculator.trimmedYield(b.stage(), b.part());
+        }
+        return new Candidate(b.part(), b, true, cost, error, marginOf(b, y, error));
+    }
+
+    /**
+     * The margin of the criterion in force: under a yield criterion the lower end of the 95 %
+     * interval of {@code y} minus the target (never the RSS margin, which says nothing about the
+     * yield); otherwise (E - error) / E.
+     */
+    public static double marginOf(Budget b, YieldResult y, double error) {
+        Criterion c = b.stage().criterion();
+        if (c.kind() == Criterion.Kind.YIELD) {
+            return y == null ? Double.NaN : y.low() - c.yieldTarget();
+        }
+        return margin(b.limitV(), error);
     }
 
     /** Unit price for a build of {@code quantity}: the catalog's price break for it ({@code Price.at}). */
@@ -92,7 +126,7 @@ public record Candidate(Part part, Budget budget, boolean trimmed, double effect
 
     /**
      * The total a criterion compares with the limit. The yield criterion is decided by the
-     * Monte Carlo yield; its error figure for margins and the Pareto front is the RSS total,
+     * Monte Carlo yield; its error figure for the Pareto front is the RSS total,
      * the statistical sum the yield spreads around.
      */
     public static double total(Criterion c, double worstCaseV, double rssV) {

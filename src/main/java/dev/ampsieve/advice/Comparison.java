@@ -93,20 +93,20 @@ public record Comparison(Candidate a, Candidate b, List<TermDelta> terms, String
             Candidate o = p == a ? b : a;
             double d = o.effectiveCost() - p.effectiveCost();
             if (preferred == null) {
-                return "Both fit at the same cost with the same margin (" + percent(a.margin()) + "): either will do.";
+                return "Both fit at the same cost with the same margin (" + Phrases.marginValue(a) + "): either will do.";
             }
             if (Math.abs(d) < COST_EPS) {
-                return "Both fit at the same cost; " + p.id() + " has the larger margin (" + percent(p.margin())
-                        + " against " + percent(o.margin()) + "): " + p.id() + ".";
+                return "Both fit at the same cost; " + p.id() + " has the larger margin (" + Phrases.marginValue(p)
+                        + " against " + Phrases.marginValue(o) + "): " + p.id() + ".";
             }
             return "Both fit; " + p.id() + " costs " + money(d, p.currency()) + " less per unit ("
-                    + money(d * q, p.currency()) + " over " + q + " units), margin " + percent(p.margin()) + " against "
-                    + percent(o.margin()) + ": " + p.id() + ".";
+                    + money(d * q, p.currency()) + " over " + q + " units), margin " + Phrases.marginValue(p) + " against "
+                    + Phrases.marginValue(o) + ": " + p.id() + ".";
         }
         if (a.fits() || b.fits()) {
             Candidate p = a.fits() ? a : b;
             Candidate o = p == a ? b : a;
-            return p.id() + " fits" + (p.trimmed() ? " after the trim" : "") + " (margin " + percent(p.margin()) + ") and "
+            return p.id() + " fits" + (p.trimmed() ? " after the trim" : "") + " (margin " + Phrases.marginValue(p) + ") and "
                     + o.id() + " does not (" + whyNot(o) + "): " + p.id() + ".";
         }
         if (preferred == null) {

@@ -50,14 +50,43 @@ final class Phrases {
     /** How a candidate stands against the limit: "worst-case 1.20 mV of 2.00 mV (margin 40 %)". */
     static String standing(Candidate c) {
         Criterion crit = c.budget().stage().criterion();
-        String s = totalName(crit) + (c.trimmed() ? " after the trim " : " ") + volts(c.errorV()) + " of "
-                + volts(c.limitV()) + (c.margin() >= 0 ? " (margin " + percent(c.margin()) + ")"
-                : " (" + percent(-c.margin()) + " over)");
-        // after a trim only the yield after it applies
-        if (crit.kind() == Criterion.Kind.YIELD && yieldOf(c) != null) {
-            s = yieldText(c) + ", " + s;
+        String s = totalName(crit) + (c.trimmed() ? " after the trim " : " ") + volts(c.errorV()) + " of " + volts(c.limitV());
+        if (crit.kind() == Criterion.Kind.YIELD) {
+            // the margin of a yield criterion is the yield's, never the RSS figure's; after a trim only the yield after it applies
+            if (yieldOf(c) != null) {
+                s = yieldText(c) + " (" + margin(crit, c.margin()) + "), " + s;
+            }
+        } else {
+            s += " (" + margin(crit, c.margin()) + ")";
         }
         return s + estimateNote(c);
+    }
+
+    /**
+     * A margin in words: "margin 40 %" or "40 % over" (of the limit); under a yield criterion
+     * "margin +0.05 %" or "margin -0.12 %" (the interval's lower end minus the target, in points of
+     * yield, rounded down so it never claims more than was found).
+     */
+    static String margin(Criterion crit, double m) {
+        if (crit.kind() == Criterion.Kind.YIELD) {
+            return "margin " + yieldMargin(m);
+        }
+        return m >= 0 ? "margin " + percent(m) : percent(-m) + " over";
+    }
+
+    /** A candidate's margin as a number: "40 %" of the limit, or "+0.05 %" of yield under a yield criterion. */
+    static String marginValue(Candidate c) {
+        return c.budget().stage().criterion().kind() == Criterion.Kind.YIELD ? yieldMargin(c.margin()) : percent(c.margin());
+    }
+
+    /** "+0.05 %", "-0.12 %": points of yield to 0.01 (0.0001 below 0.01), rounded down. */
+    static String yieldMargin(double m) {
+        if (Double.isNaN(m)) {
+            return "unknown";
+        }
+        double scale = Math.abs(m) < 1e-4 && m != 0 ? 1e6 : 1e4;
+        double r = Math.floor(m * scale + 1e-9) / scale * 100;
+        return String.format(Locale.ROOT, scale > 1e4 ? "%+.4f %%" : "%+.2f %%", r);
     }
 
     /**

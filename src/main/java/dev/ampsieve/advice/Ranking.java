@@ -8,7 +8,7 @@ import java.util.List;
  * parts with the reason, the Pareto front of error against effective cost, the advice.
  *
  * @param candidates parts that fit (as they are or after the trim) by effective cost, then by
- *                   margin; then parts that do not fit, closest first
+ *                   margin; then undecided parts, then parts that do not fit, each closest first
  * @param pareto     the candidates on the Pareto front, cheapest first
  */
 public record Ranking(Stage stage, List<Candidate> candidates, List<Rejected> rejected, List<Candidate> pareto,

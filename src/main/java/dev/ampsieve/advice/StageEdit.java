@@ -14,7 +14,7 @@ final class StageEdit {
         return new Stage(s.topology(), rf, s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
                 s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
+                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
                 s.acCoupled(), s.where());
     }
 
@@ -31,7 +31,7 @@ final class StageEdit {
         return new Stage(s.topology(), s.rf(), s.rg(), rs, s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
                 s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
+                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
                 s.acCoupled(), s.where());
     }
 
@@ -67,7 +67,7 @@ final class StageEdit {
         return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), out,
                 s.bandLow(), s.bandHigh(), s.filterOrder(), vfs, s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
+                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
                 s.acCoupled(), s.where());
     }
 
@@ -75,7 +75,7 @@ final class StageEdit {
         return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), tMin, tMax,
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
                 s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
+                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
                 s.acCoupled(), s.where());
     }
 
@@ -83,7 +83,7 @@ final class StageEdit {
         return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
                 s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                limit, s.criterion(), s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
+                limit, s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
                 s.acCoupled(), s.where());
     }
 
@@ -97,7 +97,7 @@ final class StageEdit {
         return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
                 s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance() * k, s.ratioTempco() * k,
-                s.serviceLife(), s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(),
+                s.serviceLife(), s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(),
                 s.maxPrice(), s.acCoupled(), s.where());
     }
 
@@ -105,7 +105,7 @@ final class StageEdit {
         return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
                 s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                s.limit(), criterion, s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
+                s.limit(), criterion, s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
                 s.acCoupled(), s.where());
     }
 
@@ -113,7 +113,21 @@ final class StageEdit {
         return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
                 s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.seed(), trim, s.quantity(), s.maxPrice(),
+                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), trim, s.quantity(), s.maxPrice(),
+                s.acCoupled(), s.where());
+    }
+
+    /**
+     * The stage with its yield sampling capped at {@code trials} units: the no-fit advice's
+     * bisection steps sit near the yield target, where an uncapped run goes on to max-trials at
+     * each step. An answer left undecided there counts as not fitting, so a capped step can only
+     * offer a change larger than needed, never one that flatters the part.
+     */
+    static Stage capSampling(Stage s) {
+        return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
+                s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
+                s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
+                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.trials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
                 s.acCoupled(), s.where());
     }
 }

@@ -1,6 +1,5 @@
 package dev.ampsieve.advice;
 
-import static dev.ampsieve.advice.Phrases.percent;
 import static dev.ampsieve.advice.Phrases.volts;
 
 import dev.ampsieve.budget.Budget;
@@ -20,7 +19,7 @@ public record Sufficiency(boolean yes, Budget budget, double untrimmedErrorV, do
     public static Sufficiency of(Budget b) {
         Criterion crit = b.stage().criterion();
         double err = Candidate.total(crit, b.worstCaseV(), b.rssV());
-        double margin = (b.limitV() - err) / b.limitV();
+        double margin = Candidate.marginOf(b, b.yield(), err); // the criterion's own margin
         String id = b.part().id();
         String name = Phrases.totalName(crit);
         String figure = name + " " + volts(err) + " against " + volts(b.limitV());
@@ -35,7 +34,7 @@ public record Sufficiency(boolean yes, Budget budget, double untrimmedErrorV, do
         }
         if (b.verdict() == Verdict.FITS) {
             return new Sufficiency(true, b, err, margin, "yes: " + id + " meets the limit untrimmed; " + figure
-                    + " (margin " + percent(margin) + ").");
+                    + " (" + Phrases.margin(crit, margin) + ").");
         }
         TermResult t = b.limitingTerm() == null ? null : b.term(b.limitingTerm());
         String limited = t == null ? "" : ", limited by " + t.label() + " (" + volts(t.outputV()) + ")";
@@ -44,7 +43,12 @@ public record Sufficiency(boolean yes, Budget budget, double untrimmedErrorV, do
             return new Sufficiency(false, b, err, margin, "no: " + id + " needs the trim; untrimmed " + figure + limited
                     + "; after the trim " + volts(after) + ".");
         }
+        if (b.verdict() == Verdict.UNDECIDED && b.yield().high() >= crit.yieldTarget()) {
+            // not shown met: the answer to "does it suffice" is no, and why is the sampling, not a refutation
+            return new Sufficiency(false, b, err, margin, "no: " + id + " is undecided untrimmed: after " + b.yield().trials()
+                    + " simulated units the 95 % interval of its yield still holds the target; " + figure + limited + ".");
+        }
         return new Sufficiency(false, b, err, margin, "no: " + id + " does not meet the limit untrimmed; " + figure
-                + (margin < 0 ? " (" + percent(-margin) + " over)" : "") + limited + ".");
+                + (margin < 0 ? " (" + Phrases.margin(crit, margin) + ")" : "") + limited + ".");
     }
 }

@@ -109,6 +109,42 @@ public final class BudgetCalculator {
         return TERMS.stream().filter(t -> t.key().equals(key)).findFirst().map(t -> counts(stage, t)).orElse(true);
     }
 
+    /** The max-to-sigma values {@link #yieldBySigma} shows besides the stage's own. */
+    public static final List<Double> SIGMA_READINGS = List.of(2.0, 4.0);
+
+    /**
+     * The untrimmed yield of the part with datasheet maxima read as each of {@link #SIGMA_READINGS}
+     * and as the stage's own max-to-sigma, in increasing order of k: the other readings run the
+     * stage's {@code trials} units with its seed and no early stop, so their intervals compare
+     * (typical-only figures move their worst case with k).
+     * For the single-part budget only: each is a Monte Carlo run of its own (the stage's own value
+     * is the budget's yield, not run again).
+     */
+    public static List<SigmaYield> yieldBySigma(Budget b) {
+        Stage stage = b.stage();
+        Part part = b.part();
+        java.util.TreeSet<Double> ks = new java.util.TreeSet<>(SIGMA_READINGS);
+        ks.add(stage.maxToSigma());
+        List<SigmaYield> out = new ArrayList<>();
+        for (double k : ks) {
+            if (k == stage.maxToSigma()) {
+                YieldResult y = b.yield();
+                out.add(new SigmaYield(k, y.value(), y.low(), y.high(), y.trials()));
+                continue;
+            }
+            Stage sk = stage.withMaxToSigma(k);
+            PartValues v = PartValues.of(part, sk);
+            List<TermResult> terms = TERMS.stream().map(t -> t.evaluate(sk, v)).toList();
+            YieldResult y = terms.stream().anyMatch(t -> !Double.isFinite(t.outputV()))
+                    ? new YieldResult(0, 0, 0, 0, "none-pass") // as compute() decides for such a part
+                    // the stage's trials without early stop: comparable intervals at each reading
+                    : new YieldModel(sk, v, fixedInYield(sk, terms, false, false), false, false)
+                            .run(Double.NaN, wcCounted(sk, terms));
+            out.add(new SigmaYield(k, y.value(), y.low(), y.high(), y.trials()));
+        }
+        return List.copyOf(out);
+    }
+
     /** Yield after the stage's trim (for the yield criterion), simulated with the same seed. */
     public static YieldResult trimmedYield(Stage stage, Part part) {
         PartValues v = PartValues.of(part, stage);
@@ -218,7 +254,8 @@ public final class BudgetCalculator {
     /**
      * The verdict: a failed constraint is no-fit; otherwise the criterion decides, first as
      * the part is, then (when the stage allows a trim) after it. A yield criterion is met
-     * when the lower end of the 95 % interval reaches the target.
+     * (demonstrated) when the lower end of the 95 % interval reaches the target, refuted when
+     * its upper end is below the target, and otherwise {@link Verdict#UNDECIDED}.
      */
     static Verdict verdict(Stage stage, double wc, double rss, YieldResult yield, Trimmed trimmed,
             boolean constraintsOk, double limit, java.util.function.Supplier<YieldResult> trimmedYield) {
@@ -241,10 +278,17 @@ public final class BudgetCalculator {
                 return trimAllowed && trimmed.rssV() <= limit ? Verdict.FITS_AFTER_TRIM : Verdict.NO_FIT;
             }
             default -> {
-                if (yield.low() >= c.yieldTarget()) {
+                double target = c.yieldTarget();
+                if (yield.low() >= target) {
                     return Verdict.FITS;
                 }
-                return trimAllowed && trimmedYield.get().low() >= c.yieldTarget() ? Verdict.FITS_AFTER_TRIM : Verdict.NO_FIT;
+                YieldResult after = trimAllowed ? trimmedYield.get() : null;
+                if (after != null && after.low() >= target) {
+                    return Verdict.FITS_AFTER_TRIM;
+                }
+                // the interval still holds the target (as it is, or after an allowed trim): neither shown nor refuted
+                boolean open = yield.high() >= target || after != null && after.high() >= target;
+                return open ? Verdict.UNDECIDED : Verdict.NO_FIT;
             }
         }
     }

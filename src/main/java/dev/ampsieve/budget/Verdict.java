@@ -1,8 +1,12 @@
 package dev.ampsieve.budget;
 
-/** The outcome for one part in one stage. */
+/**
+ * The outcome for one part in one stage. {@link #UNDECIDED} only under a yield criterion: the
+ * 95 % interval of the yield still contains the target after {@code max-trials} units (and the
+ * trim, where allowed, does not show the target met either).
+ */
 public enum Verdict {
-    FITS("fits"), FITS_AFTER_TRIM("fits-after-trim"), NO_FIT("no-fit");
+    FITS("fits"), FITS_AFTER_TRIM("fits-after-trim"), UNDECIDED("undecided"), NO_FIT("no-fit");
 
     private final String key;
 
@@ -12,5 +16,10 @@ public enum Verdict {
 
     public String key() {
         return key;
+    }
+
+    /** Shown to meet the criterion, as it is or after the trim; an undecided part is not. */
+    public boolean fits() {
+        return this == FITS || this == FITS_AFTER_TRIM;
     }
 }

@@ -142,7 +142,11 @@ final class YieldModel {
         return new TruncatedNormal(f.typ(), sigma, signKnown ? Math.max(0.0, lo) : lo, f.bound());
     }
 
-    /** Runs the estimate; {@code target} NaN means no early stop. */
+    /**
+     * Runs the estimate; {@code target} NaN means the stage's {@code trials} units, no early stop.
+     * With a target the run looks after every block and goes on up to {@code max-trials} units
+     * while the answer is not plain ({@link SequentialYield}).
+     */
     YieldResult run(double target) {
         return run(target, Double.POSITIVE_INFINITY);
     }
@@ -176,7 +180,9 @@ final class YieldModel {
         double[] aging = new double[n];
         double[] res = new double[n];
         boolean need25 = trimmed || atRef[0] || atRef[1];
-        SequentialYield.Estimate e = SequentialYield.run(Math.max(1, s.trials()), target, size -> {
+        // without a target every one of the stage's units; with one, blocks until the answer is plain or the cap
+        int units = Double.isNaN(target) ? s.trials() : Math.max(s.trials(), s.maxTrials());
+        SequentialYield.Estimate e = SequentialYield.run(Math.max(1, units), target, size -> {
             fill(vosD, rng, vos, size);
             fill(driftD, rng, drift, size);
             // a unit's 25 °C currents matter only after a trim or at a range end at 25 °C; an end at 25 °C uses them

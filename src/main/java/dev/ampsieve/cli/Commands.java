@@ -35,6 +35,9 @@ public final class Commands {
         }
         cl.setOut(out);
         cl.setErr(err);
+        // plain help: picocli's own colour codes (SGR 39, 22 ...) are not ours, so the output guard
+        // (VisibleWriter) would show them as escapes
+        cl.setColorScheme(CommandLine.Help.defaultColorScheme(CommandLine.Help.Ansi.OFF));
         cl.setCaseInsensitiveEnumValuesAllowed(true);
         FindCommand.configure(cl.getSubcommands().get("find"));
         // the query grammar in find's help is laid out for about 110 columns; a narrower terminal wins

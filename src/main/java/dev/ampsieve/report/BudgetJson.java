@@ -94,8 +94,25 @@ public final class BudgetJson {
     }
 
     public static String render(Budget b, String stageLabel) {
+        return render(b, java.util.List.of(), stageLabel);
+    }
+
+    /** @param bySigma written as {@code yieldBySigma} (left out when empty) */
+    public static String render(Budget b, java.util.List<dev.ampsieve.budget.SigmaYield> bySigma, String stageLabel) {
+        ObjectNode o = tree(b, stageLabel);
+        if (!bySigma.isEmpty()) {
+            var arr = o.putArray("yieldBySigma");
+            for (var y : bySigma) {
+                ObjectNode n = arr.addObject();
+                put(n, "maxToSigma", y.maxToSigma());
+                put(n, "yield", y.yield());
+                put(n, "low", y.low());
+                put(n, "high", y.high());
+                n.put("trials", y.trials());
+            }
+        }
         try {
-            return MAPPER.writeValueAsString(tree(b, stageLabel)) + "\n";
+            return MAPPER.writeValueAsString(o) + "\n";
         } catch (JsonProcessingException e) {
             throw new IllegalStateException("a JSON tree failed to print", e);
         }

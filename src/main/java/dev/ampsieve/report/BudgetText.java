@@ -4,6 +4,7 @@ import dev.ampsieve.budget.Budget;
 import dev.ampsieve.budget.BudgetCalculator;
 import dev.ampsieve.budget.ConstraintResult;
 import dev.ampsieve.budget.NoiseModel;
+import dev.ampsieve.budget.SigmaYield;
 import dev.ampsieve.budget.TermResult;
 import dev.ampsieve.budget.Trimmed;
 import dev.ampsieve.budget.YieldResult;
@@ -30,11 +31,34 @@ public final class BudgetText {
 
     /** @param width columns prose lines are folded at (the terminal's, in the shell) */
     public static String render(Budget b, String stageLabel, int width) {
-        // warnings and constraint details quote catalog text: no control character gets through
-        return Wrap.prose(Visible.lines(table(b, stageLabel, width)), width);
+        return render(b, List.of(), stageLabel, width);
     }
 
-    private static String table(Budget b, String stageLabel, int width) {
+    /** @param bySigma the yield at other max-to-sigma readings ({@code BudgetCalculator.yieldBySigma}); empty to leave the line out */
+    public static String render(Budget b, List<SigmaYield> bySigma, String stageLabel, int width) {
+        // warnings and constraint details quote catalog text: no control character gets through
+        return Wrap.prose(Visible.lines(table(b, bySigma, stageLabel, width)), width);
+    }
+
+    /**
+     * "2: 93.10 % (91.35..94.52), 3 (stage): 99.02 % (99.00..99.05), 4: ..." on one line: the yield
+     * (rounded down) and its 95 % interval (ends rounded outward) at each max-to-sigma reading.
+     */
+    static String sigmaLine(List<SigmaYield> bySigma, Stage s) {
+        List<String> parts = new java.util.ArrayList<>();
+        for (SigmaYield y : bySigma) {
+            parts.add(num(y.maxToSigma()) + (y.maxToSigma() == s.maxToSigma() ? " (stage)" : "") + ": "
+                    + points(Math.floor(y.yield() * 1e4) / 1e4) + " % (" + points(Math.floor(y.low() * 1e4) / 1e4) + ".."
+                    + points(Math.ceil(y.high() * 1e4) / 1e4) + ")");
+        }
+        return String.join(", ", parts);
+    }
+
+    private static String points(double ratio) {
+        return String.format(Locale.ROOT, "%.2f", 100 * ratio);
+    }
+
+    private static String table(Budget b, List<SigmaYield> bySigma, String stageLabel, int width) {
         Stage s = b.stage();
         StringBuilder o = new StringBuilder();
         double limit = b.limitV();
@@ -76,6 +100,10 @@ public final class BudgetText {
                 v(NoiseModel.PEAK_TO_PEAK * b.noiseRmsV() / g));
         o.append('\n');
         line(o, "Yield      %s", yieldLine(b.yield(), s));
+        if (!bySigma.isEmpty()) {
+            // the reading of datasheet maxima moves the yield more than the sampling does
+            line(o, "%-10s %s", "Max-to-σ", sigmaLine(bySigma, s));
+        }
         Trim trim = BudgetCalculator.trimOf(s);
         for (Trim.Method m : Trim.Method.values()) {
             boolean twoTemp = m == Trim.Method.TWO_TEMPERATURE;
@@ -138,11 +166,23 @@ public final class BudgetText {
             case "none-pass" -> "0 % (decided without sampling: even the smallest error the catalog's limits allow"
                     + " exceeds the limit" + target + ")";
             default -> pct(y.value()) + " (95 % interval " + pct(y.low()) + " to " + pct(y.high()) + ", "
-                    + (y.trials() < s.trials() ? y.trials() + " of " + s.trials() + " units, stopped once the interval lay wholly "
-                            + (y.low() >= s.criterion().yieldTarget() ? "above" : "below") + " the target"
-                            : y.trials() + " units")
-                    + ", seed " + s.seed() + target + ")";
+                    + units(y, s) + ", seed " + s.seed() + target + ")";
         };
+    }
+
+    /** How many units were simulated and why the run stopped there. */
+    private static String units(YieldResult y, Stage s) {
+        if (s.criterion().kind() != Criterion.Kind.YIELD) {
+            return y.trials() + " units";
+        }
+        double target = s.criterion().yieldTarget();
+        int cap = Math.max(s.trials(), s.maxTrials());
+        if (y.low() >= target || y.high() < target) {
+            String side = y.low() >= target ? "above" : "below";
+            return y.trials() >= cap ? y.trials() + " units (max-trials), the interval wholly " + side + " the target"
+                    : y.trials() + " units, stopped once the interval lay wholly " + side + " the target";
+        }
+        return y.trials() + " units" + (y.trials() >= cap ? ", the max-trials cap" : "") + ", undecided: the interval holds the target";
     }
 
     /**
@@ -151,13 +191,24 @@ public final class BudgetText {
      */
     static String yieldMiss(Budget b) {
         Stage s = b.stage();
-        if (s.criterion().kind() != Criterion.Kind.YIELD || b.verdict() != dev.ampsieve.budget.Verdict.NO_FIT
-                || !b.constraintsMet()) {
+        if (s.criterion().kind() != Criterion.Kind.YIELD || !b.constraintsMet()) {
             return null;
         }
         boolean trimmed = b.trimmed() != null && b.trimmed().yield() != null;
         YieldResult y = trimmed ? b.trimmed().yield() : b.yield();
         double target = s.criterion().yieldTarget();
+        if (b.verdict() == dev.ampsieve.budget.Verdict.UNDECIDED) {
+            // the run whose interval still holds the target: as it is, or after the trim
+            trimmed = trimmed && b.yield().high() < target;
+            y = trimmed ? b.trimmed().yield() : b.yield();
+            int cap = Math.max(s.trials(), s.maxTrials());
+            return "undecided: " + y.trials() + " simulated units" + (y.trials() >= cap ? " (max-trials)" : "")
+                    + " leave the true yield " + (trimmed ? "after the trim " : "") + "within " + pct(y.low()) + " to "
+                    + pct(y.high()) + ", which holds the " + pct(target) + " target: the sample neither shows it met nor missed";
+        }
+        if (b.verdict() != dev.ampsieve.budget.Verdict.NO_FIT) {
+            return null;
+        }
         if (y == null || y.value() < target) {
             return null;
         }

@@ -74,7 +74,10 @@ public final class CompareReport {
                 bb.yield() == null ? Figures.NONE : Figures.yield(bb.yield().value()));
         s.row("verdict", verdict(c.a()), verdict(c.b()));
         s.row("unit cost", cost(c.a()), cost(c.b()));
-        s.row("margin", Figures.percent(c.a().margin()), Figures.percent(c.b().margin()));
+        // the margin of the criterion in force: points of yield under a yield criterion
+        boolean byYield = ba.stage().criterion().kind() == dev.ampsieve.stage.Criterion.Kind.YIELD;
+        s.row("margin", byYield ? Figures.yieldMargin(c.a().margin()) : Figures.percent(c.a().margin()),
+                byYield ? Figures.yieldMargin(c.b().margin()) : Figures.percent(c.b().margin()));
         s.row("largest term", largest(ba), largest(bb));
         s.lines(width).forEach(l -> o.append(l).append('\n'));
         String both = Uncounted.words(Uncounted.ofStage(ba.notCounted()));

@@ -79,6 +79,20 @@ final class Figures {
         return Double.isNaN(v) ? NONE : Units.format(v, Dimension.VOLTAGE);
     }
 
+    /**
+     * A yield margin (the interval's lower end minus the target) in points of yield: "+0.05 %",
+     * "-0.12 %"; to 0.0001 points when smaller than 0.01; rounded down, so it never claims more
+     * than was found.
+     */
+    static String yieldMargin(double m) {
+        if (Double.isNaN(m)) {
+            return NONE;
+        }
+        double scale = Math.abs(m) < 1e-4 && m != 0 ? 1e6 : 1e4;
+        double r = Math.floor(m * scale + 1e-9) / scale * 100;
+        return String.format(Locale.ROOT, scale > 1e4 ? "%+.4f %%" : "%+.2f %%", r);
+    }
+
     static String percent(double ratio) {
         if (Double.isNaN(ratio)) {
             return NONE;

@@ -32,6 +32,7 @@ public final class RankReport {
         return switch (c.verdict()) {
             case FITS -> "fits";
             case FITS_AFTER_TRIM -> "+trim";
+            case UNDECIDED -> "undecided";
             case NO_FIT -> "no";
         };
     }
@@ -54,6 +55,11 @@ public final class RankReport {
     private static String yieldCell(Candidate c) {
         YieldResult y = c.trimmed() ? c.budget().trimmed().yield() : c.budget().yield();
         return y == null ? Figures.NONE : Figures.yield(y.value());
+    }
+
+    /** The margin of the criterion in force: points of yield under a yield criterion, else a share of the limit. */
+    private static String marginCell(Ranking r, Candidate c) {
+        return r.stage().criterion().kind() == Criterion.Kind.YIELD ? Figures.yieldMargin(c.margin()) : Figures.percent(c.margin());
     }
 
     private static double worstCase(Candidate c) {
@@ -104,17 +110,21 @@ public final class RankReport {
             for (Candidate c : shown) {
                 t.row(Integer.toString(++i), c.id(), verdict(c) + (c.restsOnEstimate() ? ESTIMATE_MARK : ""),
                         Figures.money(c.effectiveCost()) + (cur.isEmpty() && c.part().price() != null ? " " + c.currency() : ""),
-                        Figures.volts(worstCase(c)), Figures.volts(rss(c)), yieldCell(c), Figures.percent(c.margin()),
+                        Figures.volts(worstCase(c)), Figures.volts(rss(c)), yieldCell(c), marginCell(r, c),
                         limiting(c), front.contains(c.id()) ? "*" : "");
             }
             t.lines(width).forEach(l -> o.append(l).append('\n'));
-            o.append("verdict: fits as it is, +trim after the stage's trim (its cost and figures include it), no.\n");
+            o.append("verdict: fits as it is, +trim after the stage's trim (its cost and figures include it)"
+                    + (shown.stream().anyMatch(c -> c.verdict() == Verdict.UNDECIDED)
+                            ? ", undecided (the yield's 95 % interval still holds the target after max-trials units)" : "")
+                    + ", no.\n");
             if (shown.stream().anyMatch(Candidate::restsOnEstimate)) {
                 o.append(ESTIMATE_MARK).append(" after the verdict: it rests on an estimated or typical-only figure"
                         + " (ampsieve budget PART names it; enter the datasheet value to firm it up).\n");
             }
-            o.append("margin: (limit - ").append(r.stage().criterion().kind() == Criterion.Kind.WORST_CASE
-                    ? "worst-case" : "RSS").append(") / limit.  †: largest before the trim.  P: on the Pareto front.\n");
+            o.append(r.stage().criterion().kind() == Criterion.Kind.YIELD
+                    ? "margin: lower end of the yield's 95 % interval minus the target, in points of yield.\n"
+                    : "margin: (limit - " + errorName(r) + ") / limit.  ").append("†: largest before the trim.  P: on the Pareto front.\n");
         }
         notCounted(o, r, shown);
         if (!frontList.isEmpty()) {
@@ -355,6 +365,22 @@ public final class RankReport {
                 tn2.put("quantity", pt.quantity().key());
                 JsonSupport.put(tn2, "value", pt.value());
                 JsonSupport.put(tn2, "atC", pt.atC());
+            }
+        }
+        dev.ampsieve.advice.Unsettled u = a.undecided();
+        if (u == null) {
+            n.putNull("undecided");
+        } else {
+            ObjectNode un = n.putObject("undecided");
+            un.set("part", ref(u.candidate()));
+            un.put("afterTrim", u.trimmed());
+            putYield(un, "yield", u.yield());
+            JsonSupport.put(un, "target", u.target());
+            un.put("maxTrials", u.cap());
+            if (u.unitsToSettle() == Long.MAX_VALUE) {
+                un.putNull("unitsToSettle");
+            } else {
+                un.put("unitsToSettle", u.unitsToSettle());
             }
         }
         ArrayNode lines = n.putArray("lines");

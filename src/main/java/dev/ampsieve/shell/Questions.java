@@ -27,7 +27,7 @@ final class Questions {
     static final List<String> HEADROOM = List.of("output-range", "common-mode-range");
 
     /** Left to {@code set}: derived (rg) and statistics settings with sound defaults. */
-    static final Set<String> NOT_ASKED = Set.of("rg", "max-to-sigma", "trials", "seed");
+    static final Set<String> NOT_ASKED = Set.of("rg", "max-to-sigma", "trials", "max-trials", "seed");
 
     /** Only asked when a trim is allowed. */
     static final Set<String> TRIM_DETAILS = Set.of("trim.method", "trim.resolution", "trim.cost");

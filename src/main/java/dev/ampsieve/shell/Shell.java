@@ -139,6 +139,7 @@ public final class Shell {
         tree.setOut(out);
         tree.setErr(err);
         tree.setCaseInsensitiveEnumValuesAllowed(true);
+        tree.setColorScheme(CommandLine.Help.defaultColorScheme(CommandLine.Help.Ansi.OFF)); // see Commands.build
         // "set temperature -40..85 C": a negative value is a value, not an unknown option
         tree.getSubcommands().get("set").setUnmatchedOptionsArePositionalParams(true);
         tree.setParameterExceptionHandler((ex, args) -> {

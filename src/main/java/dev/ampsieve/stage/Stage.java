@@ -22,6 +22,10 @@ import dev.ampsieve.yaml.Located;
  * @param fullScaleOutput   full-scale output: the peak output excursion from the output's zero (V), the
  *                          amplitude of a full-scale sine; null when not stated
  * @param serviceLife       seconds of operation for long-term drift
+ * @param trials            simulated units for the yield; under a yield criterion the run may stop
+ *                          earlier once the answer is plain, or go on while it is undecided
+ * @param maxTrials         under a yield criterion, the most units simulated while the answer is
+ *                          undecided (at least {@code trials})
  * @param quantity          build quantity (for price)
  * @param maxPrice          price ceiling per unit, null for none
  * @param acCoupled         DC terms only count toward headroom, not toward the error
@@ -51,6 +55,7 @@ public record Stage(
         Criterion criterion,
         double maxToSigma,
         int trials,
+        int maxTrials,
         long seed,
         Trim trim,
         int quantity,
@@ -134,7 +139,14 @@ public record Stage(
     public Stage withWhere(Located place) {
         return new Stage(topology, rf, rg, sourceResistance, balanceResistance, tMin, tMax, supplyVoltage, supplyVariation,
                 commonModeSwing, commonModeRange, outputRange, bandLow, bandHigh, filterOrder, fullScaleOutput, ratioTolerance, ratioTempco,
-                serviceLife, limit, criterion, maxToSigma, trials, seed, trim, quantity, maxPrice, acCoupled, place);
+                serviceLife, limit, criterion, maxToSigma, trials, maxTrials, seed, trim, quantity, maxPrice, acCoupled, place);
+    }
+
+    /** The same stage with datasheet maxima read as {@code k} standard deviations. */
+    public Stage withMaxToSigma(double k) {
+        return new Stage(topology, rf, rg, sourceResistance, balanceResistance, tMin, tMax, supplyVoltage, supplyVariation,
+                commonModeSwing, commonModeRange, outputRange, bandLow, bandHigh, filterOrder, fullScaleOutput, ratioTolerance, ratioTempco,
+                serviceLife, limit, criterion, k, trials, maxTrials, seed, trim, quantity, maxPrice, acCoupled, where);
     }
 
     /** The error limit in output volts. */

@@ -82,6 +82,8 @@ public final class StageKeys {
     public static final int DEFAULT_TRIALS = 20_000;
     public static final int MIN_TRIALS = 100;
     public static final int MAX_TRIALS = 10_000_000;
+    /** Cap on the units simulated under a yield criterion while the answer is undecided. */
+    public static final int DEFAULT_MAX_TRIALS = 1_000_000;
     public static final int DEFAULT_QUANTITY = 1000;
     public static final int MAX_QUANTITY = 1_000_000_000;
 
@@ -176,6 +178,8 @@ public final class StageKeys {
                     "how many standard deviations a datasheet maximum stands for (for the yield)"),
             k("trials", Kind.INTEGER, List.of(), String.valueOf(DEFAULT_TRIALS), "20000",
                     "simulated units for the yield; more gives a narrower interval"),
+            k("max-trials", Kind.INTEGER, List.of(), String.valueOf(DEFAULT_MAX_TRIALS), "1000000",
+                    "under a yield criterion, the most units simulated while the interval still contains the target"),
             k("seed", Kind.INTEGER, List.of(), String.valueOf(DEFAULT_SEED), "42",
                     "random seed, so a yield can be reproduced"),
             k("trim.allowed", Kind.BOOLEAN, List.of(), "false (true once a trim block is written)", "true",

@@ -303,6 +303,14 @@ public final class StageLoader {
                 maxToSigma = k;
             }
             Integer trials = f.integer(m, "", "trials", StageKeys.MIN_TRIALS, StageKeys.MAX_TRIALS);
+            Integer maxTrials = f.integer(m, "", "max-trials", StageKeys.MIN_TRIALS, StageKeys.MAX_TRIALS);
+            int n = trials != null ? trials : StageKeys.DEFAULT_TRIALS;
+            int cap = maxTrials != null ? maxTrials : Math.max(n, StageKeys.DEFAULT_MAX_TRIALS);
+            if (maxTrials != null && maxTrials < n) {
+                // the cap on an undecided yield cannot stop the run before the units it always simulates
+                f.error(Fields.where(m, "max-trials"), "max-trials", maxTrials + " is below trials (" + n + ")",
+                        "write max-trials at least " + n + ", or lower trials");
+            }
             Long seed = f.longValue(m, "", "seed");
             Trim trim = trim(m, tMin, tMax);
             Integer quantity = f.integer(m, "", "quantity", 1, StageKeys.MAX_QUANTITY);
@@ -312,7 +320,7 @@ public final class StageLoader {
 
             Stage stage = new Stage(topology, rf, rg, rs, rp, tMin, tMax, supplyVoltage, supplyVariation, commonModeSwing,
                     cmRange, outRange, bandLow, bandHigh, filterOrder, fullScale, tolerance, tempco, life, limit, criterion, maxToSigma,
-                    trials != null ? trials : StageKeys.DEFAULT_TRIALS, seed != null ? seed : StageKeys.DEFAULT_SEED, trim,
+                    n, cap, seed != null ? seed : StageKeys.DEFAULT_SEED, trim,
                     quantity != null ? quantity : StageKeys.DEFAULT_QUANTITY, maxPrice, ac != null && ac,
                     m.at());
             if (limit != null && !f.hasErrors()) {

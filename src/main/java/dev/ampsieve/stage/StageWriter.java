@@ -223,6 +223,7 @@ public final class StageWriter {
         });
         a.put("max-to-sigma", exact(s.maxToSigma(), Dimension.NUMBER));
         a.put("trials", String.valueOf(s.trials()));
+        a.put("max-trials", String.valueOf(s.maxTrials()));
         a.put("seed", String.valueOf(s.seed()));
         Trim t = s.trim();
         a.put("trim.allowed", String.valueOf(t.allowed()));

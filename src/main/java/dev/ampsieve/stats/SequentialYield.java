@@ -7,8 +7,10 @@ package dev.ampsieve.stats;
  * would pass a part whose true yield sits just at the target several times more often than the
  * 2.5 % one look allows (repeated significance tests); interim looks therefore use the
  * Haybittle-Peto bound {@link #INTERIM_Z} (two-sided p &lt; 0.001), and the result is always
- * reported with the 95 % Wilson interval. Blocks are fixed in size, so for a given seed the
- * stopping point, and thus the result, is reproducible.
+ * reported with the 95 % Wilson interval. Only the last look, at {@code maxTrials} (the stage's
+ * {@code max-trials} under a yield criterion), judges by the 95 % interval itself; an interval
+ * that still holds the target there is the undecided outcome. Blocks are fixed in size, so for a
+ * given seed the stopping point, and thus the result, is reproducible.
  *
  * <p>Before each block the run checks whether its thread was interrupted (Ctrl-C in the shell)
  * and then stops with {@link Cancelled}: one block takes well under a millisecond.

@@ -227,7 +227,7 @@ class TwoTemperatureTrimTest {
         return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
                 s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.seed(), t, s.quantity(),
+                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), t, s.quantity(),
                 s.maxPrice(), s.acCoupled(), s.where());
     }
 

@@ -42,7 +42,7 @@ class WorstCaseBoundsYieldTest {
         return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
                 s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                Limit.output(limitV), Criterion.WORST_CASE, s.maxToSigma(), s.trials(), s.seed(), s.trim(), s.quantity(),
+                Limit.output(limitV), Criterion.WORST_CASE, s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(),
                 s.maxPrice(), s.acCoupled(), s.where());
     }
 
@@ -96,7 +96,7 @@ class WorstCaseBoundsYieldTest {
         return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
                 s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
                 s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.seed(), t, s.quantity(),
+                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), t, s.quantity(),
                 s.maxPrice(), s.acCoupled(), s.where());
     }
 }

@@ -26,6 +26,7 @@ public final class StageBuilder {
     private Trim trim = Trim.NONE;
     private int quantity = 1000;
     private Double maxPrice;
+    private int maxTrials = dev.ampsieve.stage.StageKeys.DEFAULT_MAX_TRIALS;
 
     public static StageBuilder stage() {
         return new StageBuilder();
@@ -51,9 +52,10 @@ public final class StageBuilder {
     public StageBuilder trim(Trim v) { trim = v; return this; }
     public StageBuilder quantity(int v) { quantity = v; return this; }
     public StageBuilder maxPrice(Double v) { maxPrice = v; return this; }
+    public StageBuilder maxTrials(int v) { maxTrials = v; return this; }
 
     public Stage build() {
         return new Stage(topology, rf, rg, rs, 0, tMin, tMax, supply, 0, 0, (Range) null, (Range) null, 0.1, bandHigh,
-                filterOrder, fullScale, ratioTolerance, 0, 0, limit, criterion, 3, 2000, 1L, trim, quantity, maxPrice, false, null);
+                filterOrder, fullScale, ratioTolerance, 0, 0, limit, criterion, 3, 2000, maxTrials, 1L, trim, quantity, maxPrice, false, null);
     }
 }
