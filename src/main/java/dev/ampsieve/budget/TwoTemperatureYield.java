@@ -138,7 +138,9 @@ final class TwoTemperatureYield {
         }
         Sampler u = new Sampler(new Well19937c(s.seed()), SequentialYield.BLOCK);
         double[] err = new double[SequentialYield.BLOCK];
-        SequentialYield.Estimate e = SequentialYield.run(Math.max(1, s.trials()), target, size -> {
+        // as YieldModel: without a target every one of the stage's units; with one, blocks until the answer is plain or the cap
+        int units = Double.isNaN(target) ? s.trials() : Math.max(s.trials(), s.maxTrials());
+        SequentialYield.Estimate e = SequentialYield.run(Math.max(1, units), target, size -> {
             u.errors(size, err);
             int passes = 0;
             for (int i = 0; i < size; i++) {
