@@ -124,8 +124,9 @@ final class Figures {
         if (!Double.isFinite(ratio)) {
             return NONE;
         }
-        return ratio >= 0.99 ? String.format(Locale.ROOT, "%.2f %%", Math.ceil(ratio * 10000 - 1e-9) / 100)
-                : String.format(Locale.ROOT, "%.1f %%", Math.ceil(ratio * 1000 - 1e-9) / 10);
+        // + 0.0 turns the -0.0 that ceil gives for a yield of 0 into 0.0 (printed "0.0 %", not "-0.0 %")
+        return ratio >= 0.99 ? String.format(Locale.ROOT, "%.2f %%", Math.ceil(ratio * 10000 - 1e-9) / 100 + 0.0)
+                : String.format(Locale.ROOT, "%.1f %%", Math.ceil(ratio * 1000 - 1e-9) / 10 + 0.0);
     }
 
     /** A voltage number without trailing zeros: 2.7, 36, 1.8. */

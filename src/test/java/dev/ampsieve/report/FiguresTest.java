@@ -18,6 +18,8 @@ class FiguresTest {
         // the upper end of an interval rounds up, so the printed interval is never narrower than found
         assertEquals("100.00 %", Figures.yieldHigh(0.99996));
         assertEquals("85.7 %", Figures.yieldHigh(0.85672));
+        // a yield of 0 (none passed): the upper end reads "0.0 %", never "-0.0 %" (rounding up -1e-9)
+        assertEquals("0.0 %", Figures.yieldHigh(0.0));
     }
 
     @Test
