@@ -11,11 +11,7 @@ final class StageEdit {
     }
 
     static Stage withRf(Stage s, double rf) {
-        return new Stage(s.topology(), rf, s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
-                s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
-                s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
-                s.acCoupled(), s.where());
+        return s.toBuilder().rf(rf).build();
     }
 
     /**
@@ -28,11 +24,7 @@ final class StageEdit {
     }
 
     private static Stage withSourceResistanceOnly(Stage s, double rs) {
-        return new Stage(s.topology(), s.rf(), s.rg(), rs, s.balanceResistance(), s.tMin(), s.tMax(),
-                s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
-                s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
-                s.acCoupled(), s.where());
+        return s.toBuilder().sourceResistance(rs).build();
     }
 
     /**
@@ -64,27 +56,15 @@ final class StageEdit {
             double widen = (out.max() - out.min()) * (ratio - 1);
             out = new dev.ampsieve.catalog.Range(out.min() - widen, out.max() + widen);
         }
-        return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
-                s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), out,
-                s.bandLow(), s.bandHigh(), s.filterOrder(), vfs, s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
-                s.acCoupled(), s.where());
+        return s.toBuilder().outputRange(out).fullScaleOutput(vfs).build();
     }
 
     static Stage withTemperature(Stage s, double tMin, double tMax) {
-        return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), tMin, tMax,
-                s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
-                s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
-                s.acCoupled(), s.where());
+        return s.toBuilder().tMin(tMin).tMax(tMax).build();
     }
 
     static Stage withLimit(Stage s, Limit limit) {
-        return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
-                s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
-                s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                limit, s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
-                s.acCoupled(), s.where());
+        return s.toBuilder().limit(limit).build();
     }
 
     /** The stage's trim, {@link Trim#NONE} when the stage has none. */
@@ -94,27 +74,15 @@ final class StageEdit {
 
     /** Resistor ratio tolerance and tempco both scaled by {@code k}. */
     static Stage withResistors(Stage s, double k) {
-        return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
-                s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
-                s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance() * k, s.ratioTempco() * k,
-                s.serviceLife(), s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(),
-                s.maxPrice(), s.acCoupled(), s.where());
+        return s.toBuilder().ratioTolerance(s.ratioTolerance() * k).ratioTempco(s.ratioTempco() * k).build();
     }
 
     static Stage withCriterion(Stage s, Criterion criterion) {
-        return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
-                s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
-                s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                s.limit(), criterion, s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
-                s.acCoupled(), s.where());
+        return s.toBuilder().criterion(criterion).build();
     }
 
     static Stage withTrim(Stage s, Trim trim) {
-        return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
-                s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
-                s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), trim, s.quantity(), s.maxPrice(),
-                s.acCoupled(), s.where());
+        return s.toBuilder().trim(trim).build();
     }
 
     /**
@@ -124,10 +92,6 @@ final class StageEdit {
      * offer a change larger than needed, never one that flatters the part.
      */
     static Stage capSampling(Stage s) {
-        return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
-                s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
-                s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.trials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(),
-                s.acCoupled(), s.where());
+        return s.toBuilder().maxTrials(s.trials()).build();
     }
 }

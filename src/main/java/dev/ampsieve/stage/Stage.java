@@ -137,20 +137,249 @@ public record Stage(
 
     /** The same stage said to come from {@code place} (null: typed in); for comparing stages read from different files. */
     public Stage withWhere(Located place) {
-        return new Stage(topology, rf, rg, sourceResistance, balanceResistance, tMin, tMax, supplyVoltage, supplyVariation,
-                commonModeSwing, commonModeRange, outputRange, bandLow, bandHigh, filterOrder, fullScaleOutput, ratioTolerance, ratioTempco,
-                serviceLife, limit, criterion, maxToSigma, trials, maxTrials, seed, trim, quantity, maxPrice, acCoupled, place);
+        return toBuilder().where(place).build();
     }
 
     /** The same stage with datasheet maxima read as {@code k} standard deviations. */
     public Stage withMaxToSigma(double k) {
-        return new Stage(topology, rf, rg, sourceResistance, balanceResistance, tMin, tMax, supplyVoltage, supplyVariation,
-                commonModeSwing, commonModeRange, outputRange, bandLow, bandHigh, filterOrder, fullScaleOutput, ratioTolerance, ratioTempco,
-                serviceLife, limit, criterion, k, trials, maxTrials, seed, trim, quantity, maxPrice, acCoupled, where);
+        return toBuilder().maxToSigma(k).build();
     }
 
     /** The error limit in output volts. */
     public double limitVolts() {
         return limit.outputVolts(sourceGain(), fullScaleOutput);
+    }
+
+    /** A builder holding every value of this stage, to change a few and build a new stage. */
+    public Builder toBuilder() {
+        return new Builder(this);
+    }
+
+    /**
+     * A copy of a stage with some values changed: {@code s.toBuilder().rf(20e3).build()}. Every
+     * value starts as the original's, so a new stage field never needs edits at each copy site
+     * (the compact constructor still checks the result).
+     */
+    public static final class Builder {
+        private Topology topology;
+        private double rf;
+        private double rg;
+        private double sourceResistance;
+        private double balanceResistance;
+        private double tMin;
+        private double tMax;
+        private Double supplyVoltage;
+        private double supplyVariation;
+        private double commonModeSwing;
+        private Range commonModeRange;
+        private Range outputRange;
+        private double bandLow;
+        private double bandHigh;
+        private Integer filterOrder;
+        private Double fullScaleOutput;
+        private double ratioTolerance;
+        private double ratioTempco;
+        private double serviceLife;
+        private Limit limit;
+        private Criterion criterion;
+        private double maxToSigma;
+        private int trials;
+        private int maxTrials;
+        private long seed;
+        private Trim trim;
+        private int quantity;
+        private Double maxPrice;
+        private boolean acCoupled;
+        private Located where;
+
+        private Builder(Stage s) {
+            topology = s.topology;
+            rf = s.rf;
+            rg = s.rg;
+            sourceResistance = s.sourceResistance;
+            balanceResistance = s.balanceResistance;
+            tMin = s.tMin;
+            tMax = s.tMax;
+            supplyVoltage = s.supplyVoltage;
+            supplyVariation = s.supplyVariation;
+            commonModeSwing = s.commonModeSwing;
+            commonModeRange = s.commonModeRange;
+            outputRange = s.outputRange;
+            bandLow = s.bandLow;
+            bandHigh = s.bandHigh;
+            filterOrder = s.filterOrder;
+            fullScaleOutput = s.fullScaleOutput;
+            ratioTolerance = s.ratioTolerance;
+            ratioTempco = s.ratioTempco;
+            serviceLife = s.serviceLife;
+            limit = s.limit;
+            criterion = s.criterion;
+            maxToSigma = s.maxToSigma;
+            trials = s.trials;
+            maxTrials = s.maxTrials;
+            seed = s.seed;
+            trim = s.trim;
+            quantity = s.quantity;
+            maxPrice = s.maxPrice;
+            acCoupled = s.acCoupled;
+            where = s.where;
+        }
+
+        public Builder topology(Topology topology) {
+            this.topology = topology;
+            return this;
+        }
+
+        public Builder rf(double rf) {
+            this.rf = rf;
+            return this;
+        }
+
+        public Builder rg(double rg) {
+            this.rg = rg;
+            return this;
+        }
+
+        public Builder sourceResistance(double sourceResistance) {
+            this.sourceResistance = sourceResistance;
+            return this;
+        }
+
+        public Builder balanceResistance(double balanceResistance) {
+            this.balanceResistance = balanceResistance;
+            return this;
+        }
+
+        public Builder tMin(double tMin) {
+            this.tMin = tMin;
+            return this;
+        }
+
+        public Builder tMax(double tMax) {
+            this.tMax = tMax;
+            return this;
+        }
+
+        public Builder supplyVoltage(Double supplyVoltage) {
+            this.supplyVoltage = supplyVoltage;
+            return this;
+        }
+
+        public Builder supplyVariation(double supplyVariation) {
+            this.supplyVariation = supplyVariation;
+            return this;
+        }
+
+        public Builder commonModeSwing(double commonModeSwing) {
+            this.commonModeSwing = commonModeSwing;
+            return this;
+        }
+
+        public Builder commonModeRange(Range commonModeRange) {
+            this.commonModeRange = commonModeRange;
+            return this;
+        }
+
+        public Builder outputRange(Range outputRange) {
+            this.outputRange = outputRange;
+            return this;
+        }
+
+        public Builder bandLow(double bandLow) {
+            this.bandLow = bandLow;
+            return this;
+        }
+
+        public Builder bandHigh(double bandHigh) {
+            this.bandHigh = bandHigh;
+            return this;
+        }
+
+        public Builder filterOrder(Integer filterOrder) {
+            this.filterOrder = filterOrder;
+            return this;
+        }
+
+        public Builder fullScaleOutput(Double fullScaleOutput) {
+            this.fullScaleOutput = fullScaleOutput;
+            return this;
+        }
+
+        public Builder ratioTolerance(double ratioTolerance) {
+            this.ratioTolerance = ratioTolerance;
+            return this;
+        }
+
+        public Builder ratioTempco(double ratioTempco) {
+            this.ratioTempco = ratioTempco;
+            return this;
+        }
+
+        public Builder serviceLife(double serviceLife) {
+            this.serviceLife = serviceLife;
+            return this;
+        }
+
+        public Builder limit(Limit limit) {
+            this.limit = limit;
+            return this;
+        }
+
+        public Builder criterion(Criterion criterion) {
+            this.criterion = criterion;
+            return this;
+        }
+
+        public Builder maxToSigma(double maxToSigma) {
+            this.maxToSigma = maxToSigma;
+            return this;
+        }
+
+        public Builder trials(int trials) {
+            this.trials = trials;
+            return this;
+        }
+
+        public Builder maxTrials(int maxTrials) {
+            this.maxTrials = maxTrials;
+            return this;
+        }
+
+        public Builder seed(long seed) {
+            this.seed = seed;
+            return this;
+        }
+
+        public Builder trim(Trim trim) {
+            this.trim = trim;
+            return this;
+        }
+
+        public Builder quantity(int quantity) {
+            this.quantity = quantity;
+            return this;
+        }
+
+        public Builder maxPrice(Double maxPrice) {
+            this.maxPrice = maxPrice;
+            return this;
+        }
+
+        public Builder acCoupled(boolean acCoupled) {
+            this.acCoupled = acCoupled;
+            return this;
+        }
+
+        public Builder where(Located where) {
+            this.where = where;
+            return this;
+        }
+
+        public Stage build() {
+            return new Stage(topology, rf, rg, sourceResistance, balanceResistance, tMin, tMax, supplyVoltage,
+                    supplyVariation, commonModeSwing, commonModeRange, outputRange, bandLow, bandHigh, filterOrder,
+                    fullScaleOutput, ratioTolerance, ratioTempco, serviceLife, limit, criterion, maxToSigma, trials,
+                    maxTrials, seed, trim, quantity, maxPrice, acCoupled, where);
+        }
     }
 }

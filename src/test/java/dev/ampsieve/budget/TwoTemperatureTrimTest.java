@@ -224,11 +224,7 @@ class TwoTemperatureTrimTest {
     }
 
     private static Stage withTrim(Stage s, Trim t) {
-        return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
-                s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
-                s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), t, s.quantity(),
-                s.maxPrice(), s.acCoupled(), s.where());
+        return s.toBuilder().trim(t).build();
     }
 
     @Test

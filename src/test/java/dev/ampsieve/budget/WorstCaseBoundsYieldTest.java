@@ -39,11 +39,7 @@ class WorstCaseBoundsYieldTest {
 
     /** {@code s} judged by the worst case against {@code limitV} output volts. */
     private static Stage worstCase(Stage s, double limitV) {
-        return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
-                s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
-                s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                Limit.output(limitV), Criterion.WORST_CASE, s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(),
-                s.maxPrice(), s.acCoupled(), s.where());
+        return s.toBuilder().limit(Limit.output(limitV)).criterion(Criterion.WORST_CASE).build();
     }
 
     @Test
@@ -93,10 +89,6 @@ class WorstCaseBoundsYieldTest {
     }
 
     private static Stage withTrim(Stage s, Trim t) {
-        return new Stage(s.topology(), s.rf(), s.rg(), s.sourceResistance(), s.balanceResistance(), s.tMin(), s.tMax(),
-                s.supplyVoltage(), s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(),
-                s.bandLow(), s.bandHigh(), s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(),
-                s.limit(), s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), t, s.quantity(),
-                s.maxPrice(), s.acCoupled(), s.where());
+        return s.toBuilder().trim(t).build();
     }
 }
