@@ -3,21 +3,14 @@ package dev.ampsieve.stage;
 import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.UnitException;
 import dev.ampsieve.units.Units;
+import dev.ampsieve.yaml.AtomicFiles;
 import dev.ampsieve.yaml.InputException;
 import dev.ampsieve.yaml.Located;
 import dev.ampsieve.yaml.Problem;
-import java.io.IOException;
 import java.math.BigDecimal;
 import java.math.MathContext;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
-import java.nio.file.LinkOption;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.nio.file.attribute.PosixFileAttributeView;
-import java.nio.file.attribute.PosixFilePermissions;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -347,69 +340,9 @@ public final class StageWriter {
      */
     public static void save(String yaml, Path file, boolean overwrite) throws InputException {
         StageLoader.parse(yaml, file);
-        Path target = file.toAbsolutePath();
-        Path dir = target.getParent();
-        if (Files.isDirectory(target)) {
+        if (Files.isDirectory(file.toAbsolutePath())) {
             throw new InputException(Problem.error(Located.nowhere(file), "", "is a folder", "give a file name such as 'stage.yaml'"));
         }
-        boolean exists = Files.exists(target, LinkOption.NOFOLLOW_LINKS);
-        if (exists && !overwrite) {
-            throw refused(file);
-        }
-        Path tmp = null;
-        try {
-            tmp = Files.createTempFile(dir, "." + target.getFileName() + ".", ".tmp");
-            Files.writeString(tmp, yaml, StandardCharsets.UTF_8);
-            permissions(tmp, exists ? target : null);
-            if (overwrite) {
-                try {
-                    Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-                } catch (AtomicMoveNotSupportedException e) {
-                    Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
-                }
-            } else {
-                // a hard link fails when the name is taken, even if it appeared a moment ago
-                try {
-                    Files.createLink(target, tmp);
-                } catch (UnsupportedOperationException | IOException e) {
-                    if (e instanceof FileAlreadyExistsException) {
-                        throw e;
-                    }
-                    Files.move(tmp, target);
-                }
-            }
-        } catch (FileAlreadyExistsException e) {
-            throw refused(file);
-        } catch (IOException e) {
-            throw new InputException(Problem.error(Located.nowhere(file), "", "cannot write the file (" + e.getMessage() + ")",
-                    "check that the folder exists and is writable"));
-        } finally {
-            if (tmp != null) {
-                try {
-                    Files.deleteIfExists(tmp);
-                } catch (IOException e) {
-                    // a stray temporary file is harmless; the save itself succeeded or already failed
-                }
-            }
-        }
-    }
-
-    private static InputException refused(Path file) {
-        return new InputException(Problem.error(Located.nowhere(file), "", "the file already exists and was left as it was",
-                "choose another file name, or ask explicitly to overwrite it"));
-    }
-
-    /** A new file gets rw-r--r--; a replaced file keeps its permissions. Temporary files start private. */
-    private static void permissions(Path tmp, Path existing) throws IOException {
-        PosixFileAttributeView view = Files.getFileAttributeView(tmp, PosixFileAttributeView.class);
-        if (view == null) {
-            return;
-        }
-        if (existing != null) {
-            PosixFileAttributeView old = Files.getFileAttributeView(existing, PosixFileAttributeView.class);
-            view.setPermissions(old.readAttributes().permissions());
-        } else {
-            view.setPermissions(PosixFilePermissions.fromString("rw-r--r--"));
-        }
+        AtomicFiles.write(file, yaml, overwrite, "choose another file name, or ask explicitly to overwrite it");
     }
 }

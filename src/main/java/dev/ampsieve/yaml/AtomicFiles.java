@@ -52,7 +52,7 @@ public final class AtomicFiles {
         try {
             tmp = Files.createTempFile(dir, "." + target.getFileName() + ".", TEMP_SUFFIX);
             Files.writeString(tmp, text, StandardCharsets.UTF_8);
-            readable(tmp);
+            permissions(tmp, attrs != null ? target : null);
             if (replace) {
                 try {
                     Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
@@ -90,10 +90,18 @@ public final class AtomicFiles {
                 fix));
     }
 
-    /** rw-r--r--: temporary files start private, a catalog file is for sharing. */
-    private static void readable(Path tmp) throws IOException {
+    /**
+     * A new file gets rw-r--r-- (temporary files start private; a catalog or stage file is for
+     * sharing); a replaced file keeps its permissions.
+     */
+    private static void permissions(Path tmp, Path existing) throws IOException {
         PosixFileAttributeView view = Files.getFileAttributeView(tmp, PosixFileAttributeView.class);
-        if (view != null) {
+        if (view == null) {
+            return;
+        }
+        if (existing != null) {
+            view.setPermissions(Files.getFileAttributeView(existing, PosixFileAttributeView.class).readAttributes().permissions());
+        } else {
             view.setPermissions(PosixFilePermissions.fromString("rw-r--r--"));
         }
     }
