@@ -315,6 +315,13 @@ public final class BudgetCalculator {
                     + Units.format(trim.hotIn(stage), Dimension.TEMPERATURE) + (Double.isNaN(trim.cold()) && Double.isNaN(trim.hot())
                     ? ", the range ends (trim.cold and trim.hot not given)" : " (a calibration temperature not given is the range end)"));
         }
+        if (trim.allowed() && trim.method() == Trim.Method.TWO_TEMPERATURE) {
+            // the engine's per-unit offset is a straight line in temperature; a datasheet's drift figure
+            // (a box over the range) does not promise one, and no catalog holds the curvature
+            w.add("trim: a two-temperature calibration removes the offset's straight-line drift only; the offset's"
+                    + " curvature over temperature is in no datasheet and not counted: confirm the residual on a few"
+                    + " units at a temperature between the calibration points");
+        }
         if (stage.acCoupled()) {
             w.add("ac-coupled: offset, drift, bias and aging count only toward output headroom, not the error");
         }

@@ -23,7 +23,7 @@ import picocli.CommandLine.Spec;
 @Command(name = "budget", header = "Full error budget of one part in one stage.", mixinStandardHelpOptions = true,
         description = "Full output error budget of one catalog part in one stage: every term output- and input-referred, "
             + "largest first, with its share of the limit and the temperature where it is worst; worst-case and RSS "
-            + "totals; integrated noise; the Monte Carlo yield with its 95 %% interval; what a one- or two-point trim "
+            + "totals; integrated noise; the Monte Carlo yield with its 95 %% interval; what each trim method "
             + "leaves; the hard constraints; the verdict and the limiting term; and a warning for every value that "
             + "was estimated, typical-only or missing. The stage's own warnings go to stderr.",
         footer = {"", "Examples:",

@@ -61,4 +61,13 @@ class TwoTemperatureUndecidedTest {
         // z = 3.29 half-width sqrt(0.9025 x 0.0975 / 1000) x 3.29 is about 0.031 at 1000 units
         assertTrue(y.trials() <= 2000, () -> y.trials() + " units");
     }
+
+    @Test
+    void theOffsetsCurvatureIsSaidToBeUncounted() {
+        // no datasheet gives the offset's curvature over temperature (a drift figure bounds a box, not a line):
+        // the budget must say the calibration's benefit rests on a straight line
+        Budget b = BudgetCalculator.compute(stage(9.5e-6, 0.80).build(), PART.build());
+        assertTrue(b.warnings().stream().anyMatch(w -> w.contains("curvature over temperature is in no datasheet and not counted")),
+                () -> b.warnings().toString());
+    }
 }
