@@ -441,7 +441,27 @@ public final class Advisor {
 
     /** Rf that gives |signal gain| {@code g} with the stage's Rg (and Rs, inverting). */
     static double rfFor(Stage stage, double g) {
-        return stage.topology() == Topology.INVERTING ? g * stage.rgEffective() : (g - 1.0) * stage.rg();
+        return stage.network().feedbackFor(g);
+    }
+
+    /** The gain-setting resistors as built with feedback {@code rf}, for the wording of a gain change. */
+    private static String resistorsText(Stage stage, double rf) {
+        dev.ampsieve.stage.Network n = stage.network().withFeedback(rf);
+        return switch (n.topology()) {
+            case NON_INVERTING -> "Rf " + Phrases.ohms(rf) + " with Rg " + Phrases.ohms(((dev.ampsieve.stage.NonInverting) n).rg());
+            case INVERTING -> "Rf " + Phrases.ohms(rf) + " with Rg " + Phrases.ohms(((dev.ampsieve.stage.Inverting) n).rg());
+            case DIFFERENCE -> {
+                dev.ampsieve.stage.Difference d = (dev.ampsieve.stage.Difference) n;
+                yield "R2 " + Phrases.ohms(d.r2()) + " with R1 " + Phrases.ohms(d.r1()) + ", R4 " + Phrases.ohms(d.r4())
+                        + " with R3 " + Phrases.ohms(d.r3());
+            }
+            case TRANSIMPEDANCE -> {
+                dev.ampsieve.stage.Transimpedance t = (dev.ampsieve.stage.Transimpedance) n;
+                yield "Rf " + Phrases.ohms(rf) + (t.cf() > 0 ? " with Cf " + dev.ampsieve.units.Units.format(t.cf(),
+                        dev.ampsieve.units.Dimension.CAPACITANCE) + " (the same signal bandwidth)" : "");
+            }
+            case FOLLOWER -> "Rf " + Phrases.ohms(rf);
+        };
     }
 
     /** |signal gain| with feedback resistor {@code rf}. */
@@ -450,11 +470,12 @@ public final class Advisor {
     }
 
     private static java.util.Optional<Change> lowerGain(Stage stage, Predicate<Stage> fits) {
-        if (stage.topology() == Topology.FOLLOWER || stage.rf() <= 0) {
+        if (!stage.network().gainAdjustable()) {
             return java.util.Optional.empty();
         }
         double rf = stage.rf();
-        double rgEff = stage.rgEffective();
+        // the resistance the noise gain divides Rf by: NG = 1 + Rf/rgEff in every adjustable network
+        double rgEff = rf / (stage.noiseGain() - 1.0);
         // the lowest Rf offered: half the gain (inverting: at least a gain of -1), never below the resistor floor
         double least = Math.max(MIN_GAIN_SHARE * stage.sourceGain(), stage.topology() == Topology.INVERTING ? 1.0 : 0.0);
         double rfMin = Math.max(rfFor(stage, least), RESISTOR_FLOOR);
@@ -465,9 +486,12 @@ public final class Advisor {
             return splitGain(stage, fits);
         }
         double found = Bisection.largest(x -> fits.test(StageEdit.withGain(stage, x)), rfMin, rf);
-        double ng = Math.max(1.0, reportLargest(StageEdit.withRf(stage, found).noiseGain(),
-                g -> fits.test(StageEdit.withGain(stage, (g - 1.0) * rgEff))));
-        double rfNeeded = (ng - 1.0) * rgEff;
+        double rfNeeded = switch (stage.topology()) {
+            // the gain is Rf itself: rounded below, as printed
+            case TRANSIMPEDANCE, FOLLOWER -> found;
+            case NON_INVERTING, INVERTING, DIFFERENCE -> (Math.max(1.0, reportLargest(StageEdit.withRf(stage, found).noiseGain(),
+                    g -> fits.test(StageEdit.withGain(stage, (g - 1.0) * rgEff)))) - 1.0) * rgEff;
+        };
         Stage at = StageEdit.withRf(stage, rfNeeded);
         // the resistor as printed (3 digits), rounded toward the lower gain so that building it fits
         double rfShown = Phrases.round3Down(rfNeeded);
@@ -485,14 +509,17 @@ public final class Advisor {
         if (vfs != null) {
             v.put("fullScaleOutput", vfs);
         }
-        String resistors = "Rf " + Phrases.ohms(rfShown) + " with Rg " + Phrases.ohms(stage.rg());
+        String resistors = resistorsText(stage, rfShown);
         // the input signal stays: the output's full scale shrinks with the gain
         String swing = vfs == null ? "" : "; full-scale output then " + volts(vfs) + " (now " + volts(stage.fullScaleOutput()) + ")";
-        String text = stage.topology() == Topology.INVERTING
-                ? "a gain of " + Phrases.number(at.signalGain()) + " or less in magnitude (now "
-                + Phrases.number(stage.signalGain()) + "; noise gain " + Phrases.number(at.noiseGain()) + "): " + resistors + swing
-                : "a gain of " + Phrases.number(at.noiseGain()) + " or lower (now " + Phrases.number(stage.noiseGain())
-                + "): " + resistors + swing;
+        String text = switch (stage.topology()) {
+            case INVERTING, DIFFERENCE -> "a gain of " + Phrases.number(at.signalGain()) + " or less in magnitude (now "
+                    + Phrases.number(stage.signalGain()) + "; noise gain " + Phrases.number(at.noiseGain()) + "): " + resistors + swing;
+            case TRANSIMPEDANCE -> "a smaller feedback resistor: " + resistors + " or less (now " + Phrases.ohms(stage.rf())
+                    + "); the output per ampere falls with it" + swing;
+            case NON_INVERTING, FOLLOWER -> "a gain of " + Phrases.number(at.noiseGain()) + " or lower (now "
+                    + Phrases.number(stage.noiseGain()) + "): " + resistors + swing;
+        };
         return java.util.Optional.of(new Change(Change.Kind.LOWER_GAIN, text, v));
     }
 
@@ -515,6 +542,9 @@ public final class Advisor {
     private static java.util.Optional<Change> splitGain(Stage stage, Predicate<Stage> fits) {
         double g = stage.sourceGain();
         double e = stage.limitVolts();
+        if (stage.topology() == Topology.TRANSIMPEDANCE) {
+            return java.util.Optional.empty(); // a later voltage gain after a smaller Rf: not offered yet
+        }
         if (!(e > 0) || !Double.isFinite(e) || MIN_GAIN_SHARE * g <= SPLIT_MIN_HERE) {
             return java.util.Optional.empty();
         }
@@ -543,8 +573,8 @@ public final class Advisor {
         v.put("rf", rfShown);
         v.put("limitHereV", here.limitVolts());
         String text = "split the gain with a later stage: a gain of " + Phrases.number(stage.signalGain())
-                + " in one stage does not fit even at half of it; " + Phrases.number(here.signalGain()) + " here (Rf "
-                + Phrases.ohms(rfShown) + " with Rg " + Phrases.ohms(stage.rg()) + ") and " + Phrases.number(after)
+                + " in one stage does not fit even at half of it; " + Phrases.number(here.signalGain()) + " here ("
+                + resistorsText(stage, rfShown) + ") and " + Phrases.number(after)
                 + " after it would, this stage held to " + volts(here.limitVolts()) + " at its output (the limit divided by "
                 + Phrases.number(after) + "): the later stage's errors are divided by " + Phrases.number(gHere)
                 + " when referred to the input";

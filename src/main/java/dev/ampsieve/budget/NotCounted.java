@@ -56,6 +56,14 @@ public record NotCounted(String term, Reason reason) {
      * follower's resistor term, which has no gain resistors. With {@code p} null only the
      * stage's own causes are listed (for a stage described before any part is chosen).
      */
+    /** Whether the amplifier's inputs move with the signal, so that a common-mode swing of 0 leaves a real term out. */
+    private static boolean inputsMoveWithSignal(Stage s) {
+        return switch (s.topology()) {
+            case NON_INVERTING, FOLLOWER, DIFFERENCE -> true;
+            case INVERTING, TRANSIMPEDANCE -> false; // the + input sits at the reference
+        };
+    }
+
     public static List<NotCounted> of(Stage s, Part p) {
         List<NotCounted> out = new ArrayList<>();
         boolean noFullScale = s.fullScaleOutput() == null;
@@ -65,8 +73,7 @@ public record NotCounted(String term, Reason reason) {
                 continue;
             }
             Reason r = switch (t.key()) {
-                case CmrrTerm.KEY -> s.commonModeSwing() == 0 && s.topology() != Topology.INVERTING
-                        ? Reason.NO_COMMON_MODE_SWING : null;
+                case CmrrTerm.KEY -> s.commonModeSwing() == 0 && inputsMoveWithSignal(s) ? Reason.NO_COMMON_MODE_SWING : null;
                 case PsrrTerm.KEY -> s.supplyVariation() == 0 ? Reason.NO_SUPPLY_VARIATION : null;
                 case OpenLoopGainTerm.KEY -> noFullScale ? Reason.NO_FULL_SCALE_OUTPUT : null;
                 case BandwidthTerm.KEY -> noFullScale ? Reason.NO_FULL_SCALE_OUTPUT

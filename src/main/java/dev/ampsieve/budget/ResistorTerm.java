@@ -8,7 +8,7 @@ import dev.ampsieve.units.Units;
 /**
  * Term 8, resistor ratio: {@code VFS * S * (tolR + tcR * dT)}, volts at the output, with
  * VFS the full-scale output as a peak excursion, tolR the ratio tolerance, tcR the ratio temperature coefficient (1/°C), dT in °C, and the
- * gain sensitivity S = (NG-1)/NG non-inverting, 1 inverting, 0 follower: from
+ * gain sensitivity S = (NG-1)/NG non-inverting, 1 inverting, 0 follower ({@link dev.ampsieve.stage.Network#ratioSensitivity}): from
  * dG/G = (1 - 1/G)(δRf - δRg) non-inverting and δRf - δRg inverting (Sedra &amp; Smith, 7th
  * ed., ch. 2; Franco, 4th ed., ch. 1 [from memory]). First order in the tolerances.
  */
@@ -32,11 +32,7 @@ public final class ResistorTerm implements ErrorTerm {
 
     /** Gain sensitivity to the resistor ratio. */
     public static double sensitivity(Stage s) {
-        return switch (s.topology()) {
-            case NON_INVERTING -> (s.noiseGain() - 1.0) / s.noiseGain();
-            case INVERTING -> 1.0;
-            case FOLLOWER -> 0.0;
-        };
+        return s.network().ratioSensitivity();
     }
 
     /** The tolerance part alone (what a two-point calibration removes), V. */

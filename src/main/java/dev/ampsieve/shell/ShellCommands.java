@@ -283,15 +283,18 @@ final class ShellCommands {
             out.println(paint.bold("Derived"));
             out.println("  " + pad("noise gain", w) + Units.format(s.noiseGain(), Dimension.NUMBER, 4)
                     + "   (input errors reach the output multiplied by this)");
-            out.println("  " + pad("signal gain", w) + Units.format(s.signalGain(), Dimension.NUMBER, 4));
-            if (Double.isFinite(s.rg())) {
-                out.println("  " + pad("rf, rg", w) + Units.format(s.rf(), Dimension.RESISTANCE) + ", "
-                        + Units.format(s.rg(), Dimension.RESISTANCE));
+            boolean currentIn = s.topology() == dev.ampsieve.stage.Topology.TRANSIMPEDANCE;
+            out.println("  " + pad("signal gain", w) + (currentIn ? Units.format(s.signalGain(), Dimension.RESISTANCE, 4)
+                    + " (volts per ampere)" : Units.format(s.signalGain(), Dimension.NUMBER, 4)));
+            String resistors = resistorLine(s.network());
+            if (!resistors.isEmpty()) {
+                out.println("  " + pad("network", w) + resistors);
             }
             double limit = s.limitVolts();
             out.println("  " + pad("limit at the output", w) + Units.format(limit, Dimension.VOLTAGE)
                     + "   (" + s.criterion() + ")");
-            out.println("  " + pad("limit at the input", w) + Units.format(limit / s.sourceGain(), Dimension.VOLTAGE));
+            out.println("  " + pad("limit at the input", w) + Units.format(limit / s.sourceGain(), currentIn ? Dimension.CURRENT
+                    : Dimension.VOLTAGE));
             out.println("  " + pad("farthest from 25 °C", w) + Units.format(s.deltaT(), Dimension.NUMBER) + " °C");
             String left = dev.ampsieve.report.Uncounted.ofStage(s);
             if (!left.isEmpty()) {
@@ -317,7 +320,34 @@ final class ShellCommands {
             return out;
         }
 
-        private static String pad(String s, int w) {
+        /** The network's parts in one line, as the stage file names them. */
+    private static String resistorLine(dev.ampsieve.stage.Network n) {
+        return switch (n.topology()) {
+            case NON_INVERTING -> {
+                dev.ampsieve.stage.NonInverting x = (dev.ampsieve.stage.NonInverting) n;
+                yield "rf " + ohms(x.rf()) + ", rg " + ohms(x.rg());
+            }
+            case INVERTING -> {
+                dev.ampsieve.stage.Inverting x = (dev.ampsieve.stage.Inverting) n;
+                yield "rf " + ohms(x.rf()) + ", rg " + ohms(x.rg());
+            }
+            case FOLLOWER -> "";
+            case DIFFERENCE -> {
+                dev.ampsieve.stage.Difference x = (dev.ampsieve.stage.Difference) n;
+                yield "r1 " + ohms(x.r1()) + ", r2 " + ohms(x.r2()) + ", r3 " + ohms(x.r3()) + ", r4 " + ohms(x.r4());
+            }
+            case TRANSIMPEDANCE -> {
+                dev.ampsieve.stage.Transimpedance x = (dev.ampsieve.stage.Transimpedance) n;
+                yield "rf " + ohms(x.rf()) + ", cf " + Units.format(x.cf(), Dimension.CAPACITANCE);
+            }
+        };
+    }
+
+    private static String ohms(double v) {
+        return Units.format(v, Dimension.RESISTANCE);
+    }
+
+    private static String pad(String s, int w) {
             return s.length() >= w ? s + " " : s + " ".repeat(w - s.length());
         }
     }

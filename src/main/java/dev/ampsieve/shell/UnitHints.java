@@ -20,6 +20,7 @@ final class UnitHints {
             case CURRENT -> List.of("A", "mA", "uA", "nA", "pA", "fA");
             case RESISTANCE -> List.of("ohm", "kohm", "Mohm");
             case FREQUENCY -> List.of("Hz", "kHz", "MHz");
+            case CAPACITANCE -> List.of("pF", "nF", "fF");
             case DECIBEL -> List.of("dB");
             case TEMPERATURE -> List.of("C", "K");
             case VOLTAGE_DRIFT -> List.of("uV/C", "nV/C");

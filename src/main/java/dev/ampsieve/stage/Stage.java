@@ -8,13 +8,11 @@ import dev.ampsieve.yaml.Located;
  * Derived values (noise gain, R+, R-, dT) follow the conventions of Franco,
  * <i>Design with Operational Amplifiers</i>, 4th ed., ch. 1 and 5 (recalled from memory).
  *
- * @param rf                feedback resistor, ohm (follower: 0 allowed)
- * @param rg                gain resistor, ohm (follower: infinite)
- * @param sourceResistance  Rs: in series with + input (non-inverting, follower); added to Rg (inverting)
- * @param balanceResistance Rp: + input to reference; in series with Rs for non-inverting
+ * @param network           the topology with its resistors (and capacitors) and the source's resistance
  * @param supplyVoltage     total supply (V), null when not stated
  * @param supplyVariation   peak supply change (V) seen by PSRR
- * @param commonModeSwing   peak common-mode change (V) seen by CMRR
+ * @param commonModeSwing   peak common-mode change (V) seen by CMRR, where the stage states it (at the
+ *                          amplifier's pins; difference amplifier: at the source, see {@link Network#commonModeShare})
  * @param commonModeRange   input common-mode range needed, volts above the negative rail (null: mid-supply +/- commonModeSwing)
  * @param outputRange       output range needed, volts above the negative rail (null: mid-supply +/- fullScaleOutput)
  * @param filterOrder       order of the Butterworth low-pass at bandHigh that limits the noise band; 0: no
@@ -32,11 +30,7 @@ import dev.ampsieve.yaml.Located;
  * @param where             the file the stage came from (null when typed in)
  */
 public record Stage(
-        Topology topology,
-        double rf,
-        double rg,
-        double sourceResistance,
-        double balanceResistance,
+        Network network,
         double tMin,
         double tMax,
         Double supplyVoltage,
@@ -83,26 +77,19 @@ public record Stage(
         return filterOrder == null ? NO_FILTER : filterOrder;
     }
 
-    /** Effective gain resistor: inverting stages see the source in series with Rg. */
-    public double rgEffective() {
-        return topology == Topology.INVERTING ? rg + sourceResistance : rg;
+    /** The topology's stage-file word. */
+    public Topology topology() {
+        return network.topology();
     }
 
-    /** Noise gain 1 + Rf/Rg (inverting: Rg + Rs); 1 for a follower. */
+    /** DC noise gain ({@link Network#noiseGain}). */
     public double noiseGain() {
-        if (topology == Topology.FOLLOWER) {
-            return 1.0;
-        }
-        return 1.0 + rf / rgEffective();
+        return network.noiseGain();
     }
 
-    /** Signal gain: 1 + Rf/Rg, or -Rf/(Rg + Rs) inverting, 1 follower. */
+    /** Signed signal gain, V/V (transimpedance: V/A) ({@link Network#signalGain}). */
     public double signalGain() {
-        return switch (topology) {
-            case FOLLOWER -> 1.0;
-            case NON_INVERTING -> 1.0 + rf / rg;
-            case INVERTING -> -rf / (rg + sourceResistance);
-        };
+        return network.signalGain();
     }
 
     /**
@@ -115,19 +102,24 @@ public record Stage(
         return Math.abs(signalGain());
     }
 
-    /** Resistance seen from the - input: Rf || Rg (inverting Rf || (Rg + Rs)); follower Rf. */
+    /** Resistance seen from the - input ({@link Network#rMinus}). */
     public double rMinus() {
-        if (topology == Topology.FOLLOWER) {
-            return rf;
-        }
-        double a = rf;
-        double b = rgEffective();
-        return a * b / (a + b);
+        return network.rMinus();
     }
 
-    /** Resistance seen from the + input: Rs + Rp (inverting: Rp). */
+    /** Resistance seen from the + input ({@link Network#rPlus}). */
     public double rPlus() {
-        return topology == Topology.INVERTING ? balanceResistance : sourceResistance + balanceResistance;
+        return network.rPlus();
+    }
+
+    /** The feedback resistor from the output to the - input ({@link Network#feedback}). */
+    public double rf() {
+        return network.feedback();
+    }
+
+    /** The source's resistance ({@link Network#sourceResistance}). */
+    public double sourceResistance() {
+        return network.sourceResistance();
     }
 
     /** Largest distance of the range from 25 °C. */
@@ -161,11 +153,7 @@ public record Stage(
      * (the compact constructor still checks the result).
      */
     public static final class Builder {
-        private Topology topology;
-        private double rf;
-        private double rg;
-        private double sourceResistance;
-        private double balanceResistance;
+        private Network network;
         private double tMin;
         private double tMax;
         private Double supplyVoltage;
@@ -193,11 +181,7 @@ public record Stage(
         private Located where;
 
         private Builder(Stage s) {
-            topology = s.topology;
-            rf = s.rf;
-            rg = s.rg;
-            sourceResistance = s.sourceResistance;
-            balanceResistance = s.balanceResistance;
+            network = s.network;
             tMin = s.tMin;
             tMax = s.tMax;
             supplyVoltage = s.supplyVoltage;
@@ -225,28 +209,20 @@ public record Stage(
             where = s.where;
         }
 
-        public Builder topology(Topology topology) {
-            this.topology = topology;
+        public Builder network(Network network) {
+            this.network = network;
             return this;
         }
 
+        /** The gain-setting resistor changed ({@link Network#withFeedback}). */
         public Builder rf(double rf) {
-            this.rf = rf;
+            this.network = network.withFeedback(rf);
             return this;
         }
 
-        public Builder rg(double rg) {
-            this.rg = rg;
-            return this;
-        }
-
+        /** The source resistance changed ({@link Network#withSourceResistance}). */
         public Builder sourceResistance(double sourceResistance) {
-            this.sourceResistance = sourceResistance;
-            return this;
-        }
-
-        public Builder balanceResistance(double balanceResistance) {
-            this.balanceResistance = balanceResistance;
+            this.network = network.withSourceResistance(sourceResistance);
             return this;
         }
 
@@ -376,7 +352,7 @@ public record Stage(
         }
 
         public Stage build() {
-            return new Stage(topology, rf, rg, sourceResistance, balanceResistance, tMin, tMax, supplyVoltage,
+            return new Stage(network, tMin, tMax, supplyVoltage,
                     supplyVariation, commonModeSwing, commonModeRange, outputRange, bandLow, bandHigh, filterOrder,
                     fullScaleOutput, ratioTolerance, ratioTempco, serviceLife, limit, criterion, maxToSigma, trials,
                     maxTrials, seed, trim, quantity, maxPrice, acCoupled, where);

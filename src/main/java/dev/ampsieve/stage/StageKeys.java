@@ -87,7 +87,7 @@ public final class StageKeys {
     public static final int DEFAULT_QUANTITY = 1000;
     public static final int MAX_QUANTITY = 1_000_000_000;
 
-    public static final List<String> TOPOLOGIES = List.of("non-inverting", "inverting", "follower");
+    public static final List<String> TOPOLOGIES = java.util.Arrays.stream(Topology.values()).map(Topology::key).toList();
     public static final List<String> CRITERIA = List.of("worst-case", "rss", "yield 99.9 %");
     public static final List<String> TRIM_METHODS = java.util.Arrays.stream(Trim.Method.values()).map(Trim.Method::key).toList();
     /** band.filter-order: "none", or the order of the Butterworth low-pass at band.high, 1..{@link Stage#MAX_FILTER_ORDER}. */
@@ -106,7 +106,8 @@ public final class StageKeys {
     public static final List<Key> ORDERED = List.of(
             k("gain", Kind.GAIN, List.of(), "required unless rf and rg are given", "100",
                     "every input error reaches the output multiplied by the noise gain; non-inverting: 1 + rf/rg, "
-                            + "inverting: the ratio rf/rg (a sign is ignored), also as '40 dB'"),
+                            + "inverting: the ratio rf/rg (a sign is ignored); difference: r2/r1; also as '40 dB' "
+                            + "(transimpedance: none, rf is the gain)"),
             q("temperature.min", Dimension.TEMPERATURE, "0 C", "-40 C",
                     "drift terms grow with the distance from 25 C; the part must be rated down to here"),
             q("temperature.max", Dimension.TEMPERATURE, "70 C", "85 C",
@@ -117,6 +118,8 @@ public final class StageKeys {
             q("limit.input", Dimension.VOLTAGE, "none", "10 uV",
                     "the limit referred to the signal source instead; multiplied by the signal gain's magnitude "
                             + "(inverting: rf/(rg + source-resistance))"),
+            q("limit.input-current", Dimension.CURRENT, "none", "1 nA",
+                    "transimpedance only: the limit as a current at the source; multiplied by rf"),
             q("limit.percent-of-full-scale", Dimension.RATIO, "none", "0.1 %",
                     "the limit as a share of full-scale-output, the peak excursion (a bare number is read as percent)"),
             k("limit.lsb", Kind.NUMBER, List.of(), "none", "0.5",
@@ -124,17 +127,39 @@ public final class StageKeys {
             k("limit.bits", Kind.INTEGER, List.of(), "none", "16", "converter resolution for limit.lsb"),
             q("limit.reference", Dimension.VOLTAGE, "none", "2.5 V", "converter reference (full span) for limit.lsb"),
             k("topology", Kind.CHOICE, TOPOLOGIES, "non-inverting", "non-inverting",
-                    "sets the noise gain, how the source resistance enters and the common-mode swing"),
-            q("rf", Dimension.RESISTANCE, "10 kohm (follower: 0)", "100 kohm",
-                    "bias current times rf appears at the output, and rf adds thermal noise"),
+                    "sets the noise gain, how the source enters and the common-mode swing: non-inverting, inverting, "
+                            + "follower, difference (one amplifier, four resistors: a bridge or a shunt), transimpedance "
+                            + "(a current source such as a photodiode)"),
+            q("rf", Dimension.RESISTANCE, "10 kohm (follower: 0; transimpedance: required)", "100 kohm",
+                    "bias current times rf appears at the output, and rf adds thermal noise; transimpedance: the gain "
+                            + "in volts per ampere"),
             q("rg", Dimension.RESISTANCE, "derived from gain and rf", "1 kohm",
                     "with rf sets the gain; give it with rf instead of 'gain'"),
-            q("source-resistance", Dimension.RESISTANCE, "0 ohm", "350 ohm",
-                    "bias current and current noise flow through it; its thermal noise adds"),
+            q("r1", Dimension.RESISTANCE, "r2/gain", "1 kohm",
+                    "difference: the input resistor of the inverting side (the minus leg drives it)"),
+            q("r2", Dimension.RESISTANCE, "10 kohm", "10 kohm",
+                    "difference: the feedback resistor; the gain is r2/r1"),
+            q("r3", Dimension.RESISTANCE, "r1", "1 kohm",
+                    "difference: the input resistor of the non-inverting side (the plus leg drives it)"),
+            q("r4", Dimension.RESISTANCE, "r2", "10 kohm",
+                    "difference: from the + input to the reference; r4/r3 must match r2/r1 to reject the common mode"),
+            q("cf", Dimension.CAPACITANCE, "0 F (the stability check then names the capacitor needed)", "2 pF",
+                    "transimpedance: the capacitor across rf; it sets the signal bandwidth and the phase margin"),
+            q("source-capacitance", Dimension.CAPACITANCE, "required (transimpedance)", "50 pF",
+                    "transimpedance: the source's capacitance (a photodiode's junction plus wiring); above the zero it sets "
+                            + "the voltage noise is amplified by 1 + Cs/Cf"),
+            q("source-resistance", Dimension.RESISTANCE, "0 ohm (transimpedance: required)", "350 ohm",
+                    "bias current and current noise flow through it; its thermal noise adds; difference: both legs, or "
+                            + "give source-resistance.minus and .plus; transimpedance: the source's shunt resistance"),
+            q("source-resistance.minus", Dimension.RESISTANCE, "0 ohm", "350 ohm",
+                    "difference: the resistance of the leg driving r1"),
+            q("source-resistance.plus", Dimension.RESISTANCE, "0 ohm", "350 ohm",
+                    "difference: the resistance of the leg driving r3; unequal legs unbalance the two ratios"),
             q("balance-resistance", Dimension.RESISTANCE, "0 ohm", "1 kohm",
                     "a resistor from the + input to the reference, in series with source-resistance (non-inverting, "
                             + "follower): matched bias currents cancel when source-resistance + balance-resistance equals "
-                            + "rf||rg (inverting: when balance-resistance equals rf||(rg + source-resistance))"),
+                            + "rf||rg (inverting: when balance-resistance equals rf||(rg + source-resistance); "
+                            + "transimpedance: rf||source-resistance); not for a difference stage"),
             q("full-scale-output", Dimension.VOLTAGE, "none (open-loop gain, bandwidth and resistor terms not counted)", "2.5 V",
                     "the peak output excursion from the output's zero (a sine's amplitude, not its span): gain errors "
                             + "(open-loop gain, bandwidth, resistors) scale with it, the slew rate needed is 2 pi x band.high x it, "
@@ -154,10 +179,12 @@ public final class StageKeys {
                     "peak supply change, times the part's supply rejection; a regulator's tolerance plus "
                             + "ripple (5 % of the supply is common practice for a plain linear regulator)"),
             q("common-mode-swing", Dimension.VOLTAGE,
-                    "non-inverting: full-scale-output/gain; follower: full-scale-output; inverting: 0; "
-                            + "without full-scale-output 0 (common-mode rejection not counted)", "1 V",
+                    "non-inverting: full-scale-output/gain; follower: full-scale-output; inverting, transimpedance: 0; "
+                            + "difference: full-scale-output/(2 x gain); without full-scale-output 0 (common-mode rejection "
+                            + "not counted)", "1 V",
                     "peak common-mode change at the inputs (not peak-to-peak); multiplied by the part's common-mode "
-                            + "rejection, and without common-mode-range the inputs must reach mid-supply +/- it"),
+                            + "rejection, and without common-mode-range the inputs must reach mid-supply +/- it; difference: "
+                            + "at the source, where the resistor mismatch also turns it into output error"),
             q("common-mode-range.min", Dimension.VOLTAGE, "mid-supply - common-mode-swing", "0.5 V",
                     "lowest input voltage needed, volts above the negative rail"),
             q("common-mode-range.max", Dimension.VOLTAGE, "mid-supply + common-mode-swing", "4 V",
@@ -167,7 +194,9 @@ public final class StageKeys {
             q("output-range.max", Dimension.VOLTAGE, "mid-supply + full-scale-output", "4.9 V",
                     "highest output voltage needed, volts above the negative rail"),
             q("resistor-ratio.tolerance", Dimension.RATIO, "0 (with tempco 0: resistor ratio not counted)", "0.1 %",
-                    "the rf/rg ratio error becomes a gain error at full scale"),
+                    "the rf/rg ratio error becomes a gain error at full scale; difference: per pair (r2/r1 and r4/r3), "
+                            + "which also limits the common-mode rejection to about (1 + gain)/(2 x tolerance); transimpedance: "
+                            + "rf's own tolerance"),
             q("resistor-ratio.tempco", Dimension.RATIO_DRIFT, "0", "10 ppm/C",
                     "ratio change with temperature; a trim at 25 C cannot remove it"),
             q("service-life", Dimension.TIME, "0 h (long-term drift not counted)", "10 y",
@@ -224,6 +253,24 @@ public final class StageKeys {
             out.add(key.section().isEmpty() ? key.path() : key.section());
         }
         return List.copyOf(out);
+    }
+
+    /**
+     * Whether {@code key} means anything in a stage of {@code topology}: the resistor keys of one
+     * network are refused by the others, so the writer leaves them out and the shell does not ask.
+     */
+    public static boolean appliesTo(Key key, Topology topology) {
+        String p = key.path();
+        return switch (p) {
+            case "gain" -> topology != Topology.TRANSIMPEDANCE;
+            case "rg" -> topology == Topology.NON_INVERTING || topology == Topology.INVERTING;
+            case "rf" -> topology != Topology.DIFFERENCE;
+            case "r1", "r2", "r3", "r4", "source-resistance.minus", "source-resistance.plus" -> topology == Topology.DIFFERENCE;
+            case "cf", "source-capacitance", "limit.input-current" -> topology == Topology.TRANSIMPEDANCE;
+            case "limit.input" -> topology != Topology.TRANSIMPEDANCE;
+            case "balance-resistance" -> topology != Topology.DIFFERENCE;
+            default -> true;
+        };
     }
 
     /** Names allowed inside the block {@code section}. */

@@ -15,6 +15,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.regex.Pattern;
 
 /**
@@ -94,6 +95,10 @@ public final class StageLoader {
 
     /** Above this gain a warning (above {@link #MAX_GAIN} an error): loop gain runs short even with a good part. */
     static final double WARN_GAIN = 1e5;
+    /** Largest shunt resistance of a transimpedance source: beyond it only the insulation decides. */
+    static final double MAX_SHUNT = 1e15;
+    /** Largest capacitance at a transimpedance input or in its feedback. */
+    static final double MAX_CAPACITANCE = 1e-6;
 
     /**
      * z of the two-sided 95 % interval the yield is reported with: the normal quantile at 0.975,
@@ -189,14 +194,10 @@ public final class StageLoader {
             boolean topologyKnown = topologyText != null || !m.entries().containsKey("topology");
             Topology topology = topologyText == null ? Topology.NON_INVERTING : Topology.of(topologyText);
 
-            double rs = resistance(m, "source-resistance", nonNegative(m, "", "source-resistance", Dimension.RESISTANCE, 0.0));
-            double rp = resistance(m, "balance-resistance", nonNegative(m, "", "balance-resistance", Dimension.RESISTANCE, 0.0));
-            double[] rfRg = topologyKnown ? resistors(m, topology) : new double[] {StageKeys.DEFAULT_RF, Double.POSITIVE_INFINITY};
+            Network network = topologyKnown ? network(m, topology) : new Follower(StageKeys.DEFAULT_RF, 0, 0);
             if (!topologyKnown) {
                 topology = Topology.FOLLOWER; // keeps the derived values finite; the file is rejected anyway
             }
-            double rf = rfRg[0];
-            double rg = rfRg[1];
 
             Node.Mapping temp = section(m, "temperature");
             double tMin = StageKeys.DEFAULT_T_MIN;
@@ -230,7 +231,7 @@ public final class StageLoader {
 
             Double swing = nonNegativeOrNull(m, "", "common-mode-swing", Dimension.VOLTAGE);
             volts(m, "", "common-mode-swing", swing);
-            double commonModeSwing = swing != null ? swing : defaultSwing(topology, rf, rg, fullScale);
+            double commonModeSwing = swing != null ? swing : defaultSwing(network, fullScale);
 
             Range cmRange = range(m, "common-mode-range", null);
             Range outRange = range(m, "output-range", supplyVoltage);
@@ -291,7 +292,7 @@ public final class StageLoader {
                         + Units.format(MAX_LIFE, Dimension.TIME) + ", longer than any circuit is kept in service",
                         "write the operating time in hours or years, such as '10 y'");
             }
-            Limit limit = limit(m, fullScale);
+            Limit limit = limit(m, fullScale, topology);
             Criterion criterion = criterion(m);
 
             double maxToSigma = StageKeys.DEFAULT_MAX_TO_SIGMA;
@@ -318,7 +319,7 @@ public final class StageLoader {
             money(m, "", "max-price", maxPrice);
             Boolean ac = f.bool(m, "", "ac-coupled");
 
-            Stage stage = new Stage(topology, rf, rg, rs, rp, tMin, tMax, supplyVoltage, supplyVariation, commonModeSwing,
+            Stage stage = new Stage(network, tMin, tMax, supplyVoltage, supplyVariation, commonModeSwing,
                     cmRange, outRange, bandLow, bandHigh, filterOrder, fullScale, tolerance, tempco, life, limit, criterion, maxToSigma,
                     n, cap, seed != null ? seed : StageKeys.DEFAULT_SEED, trim,
                     quantity != null ? quantity : StageKeys.DEFAULT_QUANTITY, maxPrice, ac != null && ac,
@@ -334,7 +335,8 @@ public final class StageLoader {
 
         /** Warnings about a valid stage whose values are allowed but probably not what was meant. */
         private void sanity(Node.Mapping m, Stage stage) {
-            double ratio = stage.topology() == Topology.INVERTING ? stage.rf() / stage.rg() : stage.noiseGain();
+            // the loop gain left is what a large gain costs: the noise gain (inverting: the ratio rf/rg is what the file says)
+            double ratio = stage.topology() == Topology.INVERTING ? stage.noiseGain() - 1.0 : stage.noiseGain();
             if (ratio > WARN_GAIN) {
                 String where = present(m, "gain") ? "gain" : "rf";
                 f.warning(Fields.where(m, where), where.equals("gain") ? "gain" : "rf", "a gain of "
@@ -379,9 +381,13 @@ public final class StageLoader {
             Node v = m.entries().get("limit");
             Located at = v == null ? m.at() : v.at();
             String form = stage.limit().kind() == Limit.Kind.OUTPUT ? "" : " (" + Units.format(out, Dimension.VOLTAGE) + " at the output)";
+            Dimension written = switch (stage.limit().kind()) {
+                case LSB, PERCENT_OF_FULL_SCALE -> Dimension.NUMBER;
+                case INPUT_CURRENT -> Dimension.CURRENT;
+                case OUTPUT, INPUT -> Dimension.VOLTAGE;
+            };
             if (out > MAX_LIMIT) {
-                f.error(at, "limit", "a limit of " + Units.format(stage.limit().value(), stage.limit().kind() == Limit.Kind.LSB
-                        || stage.limit().kind() == Limit.Kind.PERCENT_OF_FULL_SCALE ? Dimension.NUMBER : Dimension.VOLTAGE) + form
+                f.error(at, "limit", "a limit of " + Units.format(stage.limit().value(), written) + form
                         + " is above " + Units.format(MAX_LIMIT, Dimension.VOLTAGE) + " at the output, no error limit at all",
                         "check the prefix: write the largest error allowed, such as '1 mV'");
             } else if (out < MIN_LIMIT) {
@@ -431,6 +437,191 @@ public final class StageLoader {
         }
 
         // ------------------------------------------------------------ resistors and gain
+
+        /** The keys that belong to one topology only, with the topology they belong to. */
+        private static final Map<String, Topology> OWN_KEYS = ownKeys();
+
+        private static Map<String, Topology> ownKeys() {
+            Map<String, Topology> k = new java.util.LinkedHashMap<>();
+            for (String key : List.of("r1", "r2", "r3", "r4")) {
+                k.put(key, Topology.DIFFERENCE);
+            }
+            k.put("cf", Topology.TRANSIMPEDANCE);
+            k.put("source-capacitance", Topology.TRANSIMPEDANCE);
+            return k;
+        }
+
+        /** The network of {@code topology} from the file's resistor keys. */
+        private Network network(Node.Mapping m, Topology topology) {
+            for (Map.Entry<String, Topology> e : OWN_KEYS.entrySet()) {
+                if (e.getValue() != topology && present(m, e.getKey())) {
+                    f.error(Fields.where(m, e.getKey()), e.getKey(), "'" + e.getKey() + "' belongs to a " + e.getValue().key()
+                            + " stage, and this one is " + topology.key(), "remove it, or write 'topology: " + e.getValue().key() + "'");
+                }
+            }
+            if (topology != Topology.DIFFERENCE && m.entries().get("source-resistance") instanceof Node.Mapping) {
+                f.error(Fields.where(m, "source-resistance"), "source-resistance", "a source resistance per leg ({minus, plus})"
+                        + " belongs to a difference stage", "write one value, such as 'source-resistance: 350 ohm'");
+                return new Follower(StageKeys.DEFAULT_RF, 0, 0);
+            }
+            return switch (topology) {
+                case NON_INVERTING, INVERTING, FOLLOWER -> {
+                    double rs = resistance(m, "source-resistance", nonNegative(m, "", "source-resistance", Dimension.RESISTANCE, 0.0));
+                    double rp = resistance(m, "balance-resistance", nonNegative(m, "", "balance-resistance", Dimension.RESISTANCE, 0.0));
+                    double[] rfRg = resistors(m, topology);
+                    yield switch (topology) {
+                        case NON_INVERTING -> new NonInverting(rfRg[0], rfRg[1], rs, rp);
+                        case INVERTING -> new Inverting(rfRg[0], rfRg[1], rs, rp);
+                        default -> new Follower(rfRg[0], rs, rp);
+                    };
+                }
+                case DIFFERENCE -> difference(m);
+                case TRANSIMPEDANCE -> transimpedance(m);
+            };
+        }
+
+        /** An optional resistor key: null when absent, an error (and null) when 0 or negative or absurd. */
+        private Double resistor(Node.Mapping m, String key) {
+            if (!present(m, key)) {
+                return null;
+            }
+            Double v = positive(m, "", key, Dimension.RESISTANCE);
+            return v == null ? null : resistance(m, key, v);
+        }
+
+        /**
+         * r1..r4 from 'gain' with r2 (or r1), or from r1 and r2; r3 and r4 default to r1 and r2 (a
+         * matched design); the source resistance as one value for both legs or {minus, plus}.
+         */
+        private Network difference(Node.Mapping m) {
+            Network bad = new Difference(1e3, 1e3, 1e3, 1e3, 0, 0);
+            for (String key : List.of("rf", "rg", "balance-resistance")) {
+                if (present(m, key)) {
+                    f.error(Fields.where(m, key), key, "a difference stage has r1, r2 (inverting side) and r3, r4 (non-inverting"
+                            + " side), not '" + key + "'", key.equals("rf") ? "write 'r2' for the feedback resistor"
+                            : key.equals("rg") ? "write 'r1' for the input resistor" : "remove it: r4 returns the + input to the reference");
+                }
+            }
+            Double gain = present(m, "gain") ? gain(m) : null;
+            Double r1 = resistor(m, "r1");
+            Double r2 = resistor(m, "r2");
+            Double r3 = resistor(m, "r3");
+            Double r4 = resistor(m, "r4");
+            double[] legs = legs(m);
+            if (f.hasErrors()) {
+                return bad;
+            }
+            double g;
+            if (gain != null) {
+                g = Math.abs(gain);
+                if (r1 != null && r2 != null) {
+                    f.error(Fields.where(m, "gain"), "gain", "'gain', 'r1' and 'r2' are all given and may disagree",
+                            "give 'gain' with 'r2' (or with 'r1'), or 'r1' and 'r2' without 'gain'");
+                    return bad;
+                }
+                if (!(g > 0) || g > MAX_GAIN) {
+                    f.error(Fields.where(m, "gain"), "gain", "a difference gain of " + plain(g) + " cannot be built",
+                            "write the ratio r2/r1, such as 10 (at most " + plain(MAX_GAIN) + ")");
+                    return bad;
+                }
+                if (r2 == null) {
+                    r2 = r1 != null ? r1 * g : StageKeys.DEFAULT_RF;
+                }
+                if (r1 == null) {
+                    r1 = r2 / g;
+                }
+            } else if (r1 == null || r2 == null) {
+                Located at = r1 != null ? Fields.where(m, "r1") : r2 != null ? Fields.where(m, "r2") : m.at();
+                f.error(at, "gain", "the gain is not given", "add 'gain: 10' (with 'r2', default 10 kohm), or both 'r1' and 'r2'");
+                return bad;
+            } else if (!(r2 / r1 <= MAX_GAIN)) {
+                f.error(Fields.where(m, "r1"), "r1", "r2/r1 = " + Units.format(r2 / r1, Dimension.NUMBER) + " is a gain above "
+                        + Units.format(MAX_GAIN, Dimension.NUMBER), "check the prefixes of r1 and r2 (kohm, Mohm)");
+                return bad;
+            }
+            if ((r3 == null) != (r4 == null)) {
+                String given = r3 != null ? "r3" : "r4";
+                f.error(Fields.where(m, given), given, "only one of r3 and r4 is given",
+                        "give both, or neither (then r3 = r1 and r4 = r2, the matched design)");
+                return bad;
+            }
+            if (r3 == null) {
+                r3 = r1;
+                r4 = r2;
+            }
+            return new Difference(r1, r2, r3, r4, legs[0], legs[1]);
+        }
+
+        /** {Rs-, Rs+}: 'source-resistance' as one value (both legs) or as {minus, plus}; 0 when absent. */
+        private double[] legs(Node.Mapping m) {
+            Node v = m.entries().get("source-resistance");
+            if (!(v instanceof Node.Mapping sm)) {
+                double rs = resistance(m, "source-resistance", nonNegative(m, "", "source-resistance", Dimension.RESISTANCE, 0.0));
+                return new double[] {rs, rs};
+            }
+            f.onlyKeys(sm, "source-resistance", StageKeys.inside("source-resistance"));
+            double[] out = new double[2];
+            int i = 0;
+            for (String leg : List.of("minus", "plus")) {
+                if (!present(sm, leg)) {
+                    f.error(sm.at(), "source-resistance." + leg, "missing: per-leg source resistances need both legs",
+                            "add '" + leg + ": 350 ohm' (the resistance of the leg driving " + (leg.equals("minus") ? "r1" : "r3") + ")");
+                }
+                double r = nonNegative(sm, "source-resistance", leg, Dimension.RESISTANCE, 0.0);
+                if (r > MAX_RESISTANCE) {
+                    f.error(Fields.where(sm, leg), "source-resistance." + leg, Units.format(r, Dimension.RESISTANCE) + " is above "
+                            + Units.format(MAX_RESISTANCE, Dimension.RESISTANCE) + ", where board leakage decides the value",
+                            "check the prefix (kohm, Mohm)");
+                }
+                out[i++] = r;
+            }
+            return out;
+        }
+
+        /** rf, cf, the source's shunt resistance and capacitance (both required: neither has a default that would not flatter). */
+        private Network transimpedance(Node.Mapping m) {
+            Network bad = new Transimpedance(1e6, 0, 1e9, 0, 0);
+            for (String key : List.of("gain", "rg")) {
+                if (present(m, key)) {
+                    f.error(Fields.where(m, key), key, "a transimpedance stage's gain is rf itself, in volts per ampere",
+                            "remove '" + key + "'; write 'rf: 1 Mohm'");
+                }
+            }
+            Double rf = resistor(m, "rf");
+            if (rf == null && !present(m, "rf")) {
+                f.error(m.at(), "rf", "required for a transimpedance stage: the output is the source current times rf",
+                        "add 'rf: 1 Mohm'");
+            }
+            double cf = nonNegative(m, "", "cf", Dimension.CAPACITANCE, 0.0);
+            Double rsh = present(m, "source-resistance") ? positive(m, "", "source-resistance", Dimension.RESISTANCE) : null;
+            if (!present(m, "source-resistance")) {
+                f.error(m.at(), "source-resistance", "required for a transimpedance stage: the source's shunt resistance sets the"
+                        + " DC noise gain 1 + rf/source-resistance", "add 'source-resistance: 1 Gohm' (a photodiode's shunt"
+                        + " resistance at the hottest temperature; a current source: a large value such as 100 Gohm)");
+            }
+            Double cs = present(m, "source-capacitance") ? nonNegativeOrNull(m, "", "source-capacitance", Dimension.CAPACITANCE) : null;
+            if (!present(m, "source-capacitance")) {
+                f.error(m.at(), "source-capacitance", "required for a transimpedance stage: the source's capacitance raises the"
+                        + " noise gain above its zero and decides stability", "add 'source-capacitance: 50 pF' (the photodiode's"
+                        + " junction capacitance at its bias, plus the wiring)");
+            }
+            double rp = resistance(m, "balance-resistance", nonNegative(m, "", "balance-resistance", Dimension.RESISTANCE, 0.0));
+            if (rf == null || rsh == null || cs == null) {
+                return bad;
+            }
+            if (rsh > MAX_SHUNT) {
+                f.error(Fields.where(m, "source-resistance"), "source-resistance", Units.format(rsh, Dimension.RESISTANCE)
+                        + " is above " + Units.format(MAX_SHUNT, Dimension.RESISTANCE), "check the prefix (Mohm, Gohm)");
+                return bad;
+            }
+            if (cs > MAX_CAPACITANCE || cf > MAX_CAPACITANCE) {
+                String key = cs > MAX_CAPACITANCE ? "source-capacitance" : "cf";
+                f.error(Fields.where(m, key), key, Units.format(Math.max(cs, cf), Dimension.CAPACITANCE) + " is above "
+                        + Units.format(MAX_CAPACITANCE, Dimension.CAPACITANCE), "check the prefix (pF, nF)");
+                return bad;
+            }
+            return new Transimpedance(rf, cf, rsh, cs, rp);
+        }
 
         /** {rf, rg} from gain / rf / rg, by topology; follower rg is infinite. */
         private double[] resistors(Node.Mapping m, Topology topology) {
@@ -578,20 +769,28 @@ public final class StageLoader {
         }
 
         /** non-inverting: the full-scale input; follower: the full-scale output; inverting: 0 (virtual ground). */
-        private static double defaultSwing(Topology topology, double rf, double rg, Double fullScale) {
+        /**
+         * The common-mode change when the stage names none: what the signal itself moves. A follower's
+         * input is the signal; a non-inverting input moves by the output over the gain; an inverting
+         * or transimpedance input sits at the reference. A difference amplifier's common mode is at the
+         * source: half the differential full scale, as when one leg is held (a bridge moves both legs
+         * and less, so this does not flatter it).
+         */
+        private static double defaultSwing(Network network, Double fullScale) {
             if (fullScale == null) {
                 return 0.0;
             }
-            return switch (topology) {
+            return switch (network.topology()) {
                 case FOLLOWER -> fullScale;
-                case NON_INVERTING -> fullScale / (1.0 + rf / rg);
-                case INVERTING -> 0.0;
+                case NON_INVERTING -> fullScale / network.noiseGain();
+                case INVERTING, TRANSIMPEDANCE -> 0.0;
+                case DIFFERENCE -> fullScale / (2.0 * network.signalGain());
             };
         }
 
         // ------------------------------------------------------------ limit and criterion
 
-        private Limit limit(Node.Mapping m, Double fullScale) {
+        private Limit limit(Node.Mapping m, Double fullScale, Topology topology) {
             Node v = m.entries().get("limit");
             if (v == null || v instanceof Node.Scalar s && s.text() == null) {
                 f.error(v != null ? v.at() : m.at(), "limit", "required field is missing: the error limit decides which parts fit",
@@ -612,6 +811,9 @@ public final class StageLoader {
             if (present(lm, "input")) {
                 forms.add("input");
             }
+            if (present(lm, "input-current")) {
+                forms.add("input-current");
+            }
             if (present(lm, "percent-of-full-scale")) {
                 forms.add("percent-of-full-scale");
             }
@@ -627,7 +829,22 @@ public final class StageLoader {
                 f.error(lm.at(), "limit", "more than one form of limit given (" + String.join(", ", forms) + ")", "keep one of them");
                 return null;
             }
+            boolean currentIn = topology == Topology.TRANSIMPEDANCE;
+            if (forms.get(0).equals("input") && currentIn) {
+                f.error(Fields.where(lm, "input"), "limit.input", "a transimpedance stage's input is a current",
+                        "write 'input-current: 1 nA' (multiplied by rf), or the limit at the output");
+                return null;
+            }
+            if (forms.get(0).equals("input-current") && !currentIn) {
+                f.error(Fields.where(lm, "input-current"), "limit.input-current", "only a transimpedance stage has a current input",
+                        "write 'input: 10 uV' (at the signal source), or 'topology: transimpedance'");
+                return null;
+            }
             switch (forms.get(0)) {
+                case "input-current": {
+                    Double amps = positive(lm, "limit", "input-current", Dimension.CURRENT);
+                    return amps == null ? null : new Limit(Limit.Kind.INPUT_CURRENT, amps, 0, 0);
+                }
                 case "input": {
                     Double volts = positive(lm, "limit", "input", Dimension.VOLTAGE);
                     return volts == null ? null : new Limit(Limit.Kind.INPUT, volts, 0, 0);

@@ -51,8 +51,12 @@ public final class StageWriter {
         out.append("# Every value carries its unit (10 kohm, 1 mV, 25 ppm/C, 10 y); '#' starts a comment.\n");
         out.append("# Keys left as comments take the default shown.\n");
 
+        Topology topology = topologyOf(answers.get("topology"));
         Map<String, List<StageKeys.Key>> groups = new LinkedHashMap<>();
         for (StageKeys.Key key : StageKeys.ORDERED) {
+            if (!StageKeys.appliesTo(key, topology)) {
+                continue; // a key of another topology would only be refused on reading
+            }
             String group = key.section().isEmpty() ? key.path() : key.section();
             groups.computeIfAbsent(group, g -> new ArrayList<>()).add(key);
         }
@@ -64,6 +68,12 @@ public final class StageWriter {
             } else if (group.equals("gain") && !answers.containsKey("gain") && answers.containsKey("rf") && answers.containsKey("rg")) {
                 comment(out, "", g.getValue().get(0).why());
                 out.append("# gain: set by rf and rg below\n");
+            } else if (group.equals("source-resistance") && answers.keySet().stream().anyMatch(k -> k.startsWith("source-resistance."))) {
+                comment(out, "", g.getValue().get(0).why());
+                out.append("source-resistance:\n");
+                for (StageKeys.Key key : g.getValue().subList(1, g.getValue().size())) {
+                    line(out, "  ", key.name(), key, answers.get(key.path()));
+                }
             } else if (!StageKeys.SECTIONS.contains(group)) {
                 StageKeys.Key key = g.getValue().get(0);
                 line(out, "", key.path(), key, answers.get(key.path()));
@@ -72,6 +82,16 @@ public final class StageWriter {
             }
         }
         return out.toString();
+    }
+
+    /** The topology an answer names; non-inverting (the default) when none or an unknown word. */
+    private static Topology topologyOf(String answer) {
+        for (Topology t : Topology.values()) {
+            if (t.key().equals(answer)) {
+                return t;
+            }
+        }
+        return Topology.NON_INVERTING;
     }
 
     private static void block(StringBuilder out, String section, List<StageKeys.Key> keys, Map<String, String> answers) {
@@ -153,22 +173,51 @@ public final class StageWriter {
     /** The stage as answers: every value written out exactly, so reading it back gives the same doubles. */
     public static Map<String, String> answers(Stage s) {
         Map<String, String> a = new LinkedHashMap<>();
-        a.put("topology", s.topology().key());
-        if (s.topology() == Topology.FOLLOWER) {
-            if (s.rf() != 0) {
-                a.put("rf", exact(s.rf(), Dimension.RESISTANCE));
+        Network n = s.network();
+        a.put("topology", n.topology().key());
+        switch (n.topology()) {
+            case FOLLOWER -> {
+                Follower x = (Follower) n;
+                if (x.rf() != 0) {
+                    a.put("rf", exact(x.rf(), Dimension.RESISTANCE));
+                }
+                a.put("source-resistance", exact(x.rs(), Dimension.RESISTANCE));
+                a.put("balance-resistance", exact(x.rp(), Dimension.RESISTANCE));
             }
-        } else {
-            String gain = gainText(s);
-            if (gain != null) {
-                a.put("gain", gain);
-            } else {
-                a.put("rg", exact(s.rg(), Dimension.RESISTANCE));
+            case NON_INVERTING -> {
+                NonInverting x = (NonInverting) n;
+                gainOrRg(a, x.rf(), x.rg(), true);
+                a.put("source-resistance", exact(x.rs(), Dimension.RESISTANCE));
+                a.put("balance-resistance", exact(x.rp(), Dimension.RESISTANCE));
             }
-            a.put("rf", exact(s.rf(), Dimension.RESISTANCE));
+            case INVERTING -> {
+                Inverting x = (Inverting) n;
+                gainOrRg(a, x.rf(), x.rg(), false);
+                a.put("source-resistance", exact(x.rs(), Dimension.RESISTANCE));
+                a.put("balance-resistance", exact(x.rp(), Dimension.RESISTANCE));
+            }
+            case DIFFERENCE -> {
+                Difference x = (Difference) n;
+                a.put("r1", exact(x.r1(), Dimension.RESISTANCE));
+                a.put("r2", exact(x.r2(), Dimension.RESISTANCE));
+                a.put("r3", exact(x.r3(), Dimension.RESISTANCE));
+                a.put("r4", exact(x.r4(), Dimension.RESISTANCE));
+                if (x.rsMinus() == x.rsPlus()) {
+                    a.put("source-resistance", exact(x.rsMinus(), Dimension.RESISTANCE));
+                } else {
+                    a.put("source-resistance.minus", exact(x.rsMinus(), Dimension.RESISTANCE));
+                    a.put("source-resistance.plus", exact(x.rsPlus(), Dimension.RESISTANCE));
+                }
+            }
+            case TRANSIMPEDANCE -> {
+                Transimpedance x = (Transimpedance) n;
+                a.put("rf", exact(x.rf(), Dimension.RESISTANCE));
+                a.put("cf", exact(x.cf(), Dimension.CAPACITANCE));
+                a.put("source-resistance", exact(x.rsh(), Dimension.RESISTANCE));
+                a.put("source-capacitance", exact(x.cs(), Dimension.CAPACITANCE));
+                a.put("balance-resistance", exact(x.rp(), Dimension.RESISTANCE));
+            }
         }
-        a.put("source-resistance", exact(s.sourceResistance(), Dimension.RESISTANCE));
-        a.put("balance-resistance", exact(s.balanceResistance(), Dimension.RESISTANCE));
         a.put("temperature.min", exact(s.tMin(), Dimension.TEMPERATURE));
         a.put("temperature.max", exact(s.tMax(), Dimension.TEMPERATURE));
         if (s.supplyVoltage() != null) {
@@ -200,6 +249,7 @@ public final class StageWriter {
             switch (l.kind()) {
                 case OUTPUT -> a.put("limit", exact(l.value(), Dimension.VOLTAGE));
                 case INPUT -> a.put("limit.input", exact(l.value(), Dimension.VOLTAGE));
+                case INPUT_CURRENT -> a.put("limit.input-current", exact(l.value(), Dimension.CURRENT));
                 case PERCENT_OF_FULL_SCALE -> a.put("limit.percent-of-full-scale", exact(l.value(), Dimension.RATIO, "%"));
                 case LSB -> {
                     a.put("limit.lsb", exact(l.value(), Dimension.NUMBER));
@@ -241,15 +291,25 @@ public final class StageWriter {
      * The gain as the shortest number from which the loader derives exactly the stage's rg
      * (rg = rf/(gain - 1), inverting rf/gain), or null when none does; then rf and rg are written.
      */
-    private static String gainText(Stage s) {
-        double ratio = s.rf() / s.rg();
-        double gain = s.topology() == Topology.NON_INVERTING ? 1.0 + ratio : ratio;
+    private static void gainOrRg(Map<String, String> a, double rf, double rg, boolean nonInverting) {
+        String gain = gainText(rf, rg, nonInverting);
+        if (gain != null) {
+            a.put("gain", gain);
+        } else {
+            a.put("rg", exact(rg, Dimension.RESISTANCE));
+        }
+        a.put("rf", exact(rf, Dimension.RESISTANCE));
+    }
+
+    private static String gainText(double rf, double rg, boolean nonInverting) {
+        double ratio = rf / rg;
+        double gain = nonInverting ? 1.0 + ratio : ratio;
         BigDecimal exactGain = new BigDecimal(gain);
         for (int digits = 1; digits <= 17; digits++) {
             BigDecimal g = exactGain.round(new MathContext(digits));
             double back = g.doubleValue();
-            double rg = s.topology() == Topology.NON_INVERTING ? s.rf() / (back - 1.0) : s.rf() / back;
-            if (Double.compare(rg, s.rg()) == 0) {
+            double rgBack = nonInverting ? rf / (back - 1.0) : rf / back;
+            if (Double.compare(rgBack, rg) == 0) {
                 return digits <= 6 ? g.stripTrailingZeros().toPlainString() : null; // a long gain reads worse than rf and rg
             }
         }
@@ -264,6 +324,7 @@ public final class StageWriter {
             case VOLTAGE -> engineering(v, d, "V");
             case CURRENT -> engineering(v, d, "A");
             case RESISTANCE -> engineering(v, d, "ohm");
+            case CAPACITANCE -> engineering(v, d, "F");
             case FREQUENCY -> engineering(v, d, "Hz");
             case TEMPERATURE -> plain(v) + " C";
             case RATIO -> exact(v, d, "%");

@@ -1,8 +1,9 @@
 package dev.ampsieve.stage;
 
-/** Amplifier connection. */
+/** The stage-file word for each {@link Network}. */
 public enum Topology {
-    NON_INVERTING("non-inverting"), INVERTING("inverting"), FOLLOWER("follower");
+    NON_INVERTING("non-inverting"), INVERTING("inverting"), FOLLOWER("follower"), DIFFERENCE("difference"),
+    TRANSIMPEDANCE("transimpedance");
 
     private final String key;
 

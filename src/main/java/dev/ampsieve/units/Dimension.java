@@ -10,6 +10,7 @@ public enum Dimension {
     CURRENT("a current", "A", "2 nA"),
     RESISTANCE("a resistance", "ohm", "10 kohm"),
     FREQUENCY("a frequency", "Hz", "1.5 MHz"),
+    CAPACITANCE("a capacitance", "F", "10 pF"),
     DECIBEL("a level in decibels", "dB", "110 dB"),
     TEMPERATURE("a temperature", "°C", "-40 C"),
     VOLTAGE_DRIFT("a voltage drift", "V/°C", "0.6 uV/C"),

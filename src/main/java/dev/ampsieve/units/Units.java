@@ -62,7 +62,7 @@ public final class Units {
 
     /** Base unit symbols (numerator side) and what they measure. */
     private enum Base {
-        VOLT, AMPERE, OHM, HERTZ, DECIBEL, CELSIUS, KELVIN, PERCENT, PPM, SECOND, HOUR, YEAR, MONTH, DAY, NONE, ROOT_HERTZ
+        VOLT, AMPERE, OHM, FARAD, HERTZ, DECIBEL, CELSIUS, KELVIN, PERCENT, PPM, SECOND, HOUR, YEAR, MONTH, DAY, NONE, ROOT_HERTZ
     }
 
     private record Unit(Base base, double factor) {
@@ -77,6 +77,7 @@ public final class Units {
         for (String s : new String[] {"ohm", "ohms", "Ohm", "Ohms", "\u03a9", "\u2126", "R"}) {
             BASES.put(s, Base.OHM);
         }
+        BASES.put("F", Base.FARAD);
         BASES.put("Hz", Base.HERTZ);
         BASES.put("hz", Base.HERTZ);
         BASES.put("dB", Base.DECIBEL);
@@ -128,7 +129,7 @@ public final class Units {
     /** Bases that take no SI prefix (a prefix on them would be a typo). */
     private static boolean prefixable(Base b) {
         return switch (b) {
-            case VOLT, AMPERE, OHM, HERTZ, SECOND, ROOT_HERTZ -> true;
+            case VOLT, AMPERE, OHM, FARAD, HERTZ, SECOND, ROOT_HERTZ -> true;
             default -> false;
         };
     }
@@ -327,6 +328,7 @@ public final class Units {
                 case VOLT -> Dimension.VOLTAGE;
                 case AMPERE -> Dimension.CURRENT;
                 case OHM -> Dimension.RESISTANCE;
+                case FARAD -> Dimension.CAPACITANCE;
                 case HERTZ -> Dimension.FREQUENCY;
                 case DECIBEL -> Dimension.DECIBEL;
                 case CELSIUS, KELVIN -> Dimension.TEMPERATURE;

@@ -1,5 +1,6 @@
 package dev.ampsieve.advice;
 
+import dev.ampsieve.stage.Follower;
 import static dev.ampsieve.testing.PartBuilder.part;
 import static dev.ampsieve.testing.StageBuilder.stage;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -54,7 +55,7 @@ class ActionableAdviceTest {
     void aBipolarPartOnATenMegohmSourceGetsAnIbTargetThroughTheRealBudget() {
         // follower (Rf 0), Rs 10 MΩ, 0..70 °C, limit 1 mV, no gain terms (no full scale), no supply or
         // common-mode change, no service life: what is left is offset, drift, bias and the resistor noise
-        Stage s = new Stage(Topology.FOLLOWER, 0, 1e3, 10e6, 0, 0, 70, 5.0, 0, 0, null, null, 0.1, 10, 1, null, 0, 0, 0,
+        Stage s = new Stage(new Follower(0, 10e6, 0), 0, 70, 5.0, 0, 0, null, null, 0.1, 10, 1, null, 0, 0, 0,
                 Limit.output(1e-3), Criterion.WORST_CASE, 3, 2000, 2000, 1L, Trim.NONE, 1000, null, false, null);
         // bipolar: vos 100 µV, drift 1 µV/°C, IB 2 nA at 25 °C and 4 nA over temperature, IOS 1 nA; no noise of its own
         Part base = part("BIP").vos(null, 100e-6).drift(null, 1e-6).ios(null, 1e-9).noise(0.0, 0.0, 0.0, 0.0).build();
@@ -91,7 +92,7 @@ class ActionableAdviceTest {
         // follower fed from 0 Ω (no bias or resistor-noise term), no noise of its own, no common-mode or supply
         // change, no gain terms (no full scale), no service life: the budget is offset + drift alone,
         // vos + drift x 45 °C (0..70 °C), against 100 µV
-        Stage s = new Stage(Topology.FOLLOWER, 0, 1e3, 0, 0, 0, 70, 5.0, 0, 0, null, null, 0.1, 10, 1, null, 0, 0, 0,
+        Stage s = new Stage(new Follower(0, 0, 0), 0, 70, 5.0, 0, 0, null, null, 0.1, 10, 1, null, 0, 0, 0,
                 Limit.output(100e-6), Criterion.WORST_CASE, 3, 2000, 2000, 1L, Trim.NONE, 1000, null, false, null);
         Part p = part("P").vos(null, 80e-6).drift(null, 0.51e-6).ib(null, 1e-9).noise(0.0, 0.0, 0.0, 0.0).build();
         BudgetFunction engine = BudgetCalculator::compute;
@@ -243,7 +244,7 @@ class ActionableAdviceTest {
         Part p = part("P").vos(null, 10e-6).build();
         BudgetFunction engine = withSwing();
         // the old edit (Rs changed, output left at 2 V) would have fitted at 400 Ω
-        Stage old = new Stage(s.topology(), s.rf(), s.rg(), 400, s.balanceResistance(), s.tMin(), s.tMax(), s.supplyVoltage(),
+        Stage old = new Stage(s.network().withSourceResistance(400), s.tMin(), s.tMax(), s.supplyVoltage(),
                 s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(), s.bandLow(), s.bandHigh(),
                 s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(), s.limit(),
                 s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(), s.acCoupled(), null);

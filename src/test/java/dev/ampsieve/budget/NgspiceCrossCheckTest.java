@@ -1,5 +1,6 @@
 package dev.ampsieve.budget;
 
+import dev.ampsieve.testing.Networks;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -61,7 +62,7 @@ class NgspiceCrossCheckTest {
         }
 
         Stage stage() {
-            return new Stage(topology, rf, rg, rs, rp, 0, 70, null, 0, 0, null, null, f1, f2, 1, null, 0, 0, 0,
+            return new Stage(Networks.of(topology, rf, rg, rs, rp), 0, 70, null, 0, 0, null, null, f1, f2, 1, null, 0, 0, 0,
                     Limit.output(1e-3), Criterion.WORST_CASE, 3, 20_000, 1_000_000, 1, Trim.NONE, 1000, null, false, null);
         }
 
@@ -71,6 +72,7 @@ class NgspiceCrossCheckTest {
                 case FOLLOWER -> 1.0;
                 case NON_INVERTING -> 1.0 + rf / rg;
                 case INVERTING -> 1.0 + rf / (rg + rs);
+                case DIFFERENCE, TRANSIMPEDANCE -> throw new IllegalArgumentException("checked in their own tests");
             };
         }
     }
@@ -192,6 +194,7 @@ class NgspiceCrossCheckTest {
             case NON_INVERTING -> (1 + c.rf() / c.rg()) * (c.vos() - c.ibPlus() * (c.rs() + c.rp())) + c.ibMinus() * c.rf();
             case INVERTING -> (1 + c.rf() / (c.rg() + c.rs())) * (c.vos() - c.ibPlus() * c.rp()) + c.ibMinus() * c.rf();
             case FOLLOWER -> c.vos() - c.ibPlus() * (c.rs() + c.rp()) + c.ibMinus() * c.rf();
+            case DIFFERENCE, TRANSIMPEDANCE -> throw new IllegalArgumentException("checked in their own tests");
         };
     }
 
@@ -301,7 +304,7 @@ class NgspiceCrossCheckTest {
     }
 
     private static Stage stageAt(Combo c, double t1, double t2, Trim trim) {
-        return new Stage(c.topology(), c.rf(), c.rg(), c.rs(), c.rp(), t1, t2, null, 0, 0, null, null, c.f1(), c.f2(), 1, null,
+        return new Stage(Networks.of(c.topology(), c.rf(), c.rg(), c.rs(), c.rp()), t1, t2, null, 0, 0, null, null, c.f1(), c.f2(), 1, null,
                 0, 0, 0, Limit.output(1), Criterion.WORST_CASE, 3, 20_000, 1_000_000, 1, trim, 1000, null, false, null);
     }
 

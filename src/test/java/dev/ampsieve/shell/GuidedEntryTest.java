@@ -1,5 +1,6 @@
 package dev.ampsieve.shell;
 
+import dev.ampsieve.testing.Networks;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -104,7 +105,7 @@ class GuidedEntryTest {
         assertEquals(2.5e-3, s.limitVolts(), 1e-15); // 0.1 % of 2.5 V
         assertEquals(Topology.NON_INVERTING, s.topology()); // Enter kept it
         assertEquals(1e3, s.rf()); // the answer after topology
-        assertEquals(1e3 / 9, s.rg(), 1e-9);
+        assertEquals(1e3 / 9, Networks.rg(s), 1e-9);
     }
 
     @Test

@@ -113,7 +113,7 @@ class ShellCompleterTest {
         assertTrue(keys.containsAll(List.of("gain", "temperature", "temperature.min", "limit", "limit.input", "rf")), keys.toString());
         assertEquals(List.of("10V", "10mV", "10uV", "10nV"), complete("set limit 10"));
         assertEquals(List.of("100ohm", "100kohm", "100Mohm"), complete("set rf 100"));
-        assertEquals(List.of("non-inverting", "inverting", "follower"), complete("set topology "));
+        assertEquals(List.of("non-inverting", "inverting", "follower", "difference", "transimpedance"), complete("set topology "));
         assertTrue(complete("set gain 100").isEmpty()); // a plain number has no unit to offer
         assertTrue(complete("unset tr").contains("trim.allowed"));
     }

@@ -75,7 +75,7 @@ class StageWriterTest {
     void awkwardValuesReadBackExactly() throws InputException {
         // values no short decimal with a prefix reproduces: the writer falls back to plain digits
         Stage base = StageLoader.parse("gain: 10\nlimit: 1 mV\n", NAME);
-        Stage odd = new Stage(Topology.NON_INVERTING, Math.PI * 1e4, Math.E * 1e2, 1.0 / 3, 2.0 / 7, -40.0 / 3, 85.1, Math.sqrt(2) * 5,
+        Stage odd = new Stage(new NonInverting(Math.PI * 1e4, Math.E * 1e2, 1.0 / 3, 2.0 / 7), -40.0 / 3, 85.1, Math.sqrt(2) * 5,
                 0.1 + 0.2, 1.0 / 30, new Range(0.3, 0.7), null, 1.0 / 7, 1e5 / 3, 3, 2.0 / 3, 1e-3 / 3, 1e-6 / 7, 1e6 / 7,
                 new Limit(Limit.Kind.INPUT, 1e-6 / 3, 0, 0), Criterion.yield(0.999 + 1e-12), 3.0, 20000, 123_457, 1, base.trim(), 1000,
                 null, false, null);
@@ -94,7 +94,7 @@ class StageWriterTest {
         assertTrue(yaml.contains("\n  min: -40 C\n"), yaml);
         assertTrue(yaml.contains("\n  # max: 85 C    # default: 70 C\n"), yaml);
         assertTrue(yaml.contains("\n# supply:\n#   "), yaml);
-        assertTrue(yaml.contains("\n# rf: 100 kohm    # default: 10 kohm (follower: 0)\n"), yaml);
+        assertTrue(yaml.contains("\n# rf: 100 kohm    # default: 10 kohm (follower: 0; transimpedance: required)\n"), yaml);
         // the "why" of every answered key is above it
         assertTrue(yaml.contains("# " + StageKeys.get("gain").why() + "\ngain: 100\n"), yaml);
     }

@@ -55,7 +55,7 @@ public final class StageBuilder {
     public StageBuilder maxTrials(int v) { maxTrials = v; return this; }
 
     public Stage build() {
-        return new Stage(topology, rf, rg, rs, 0, tMin, tMax, supply, 0, 0, (Range) null, (Range) null, 0.1, bandHigh,
+        return new Stage(Networks.of(topology, rf, rg, rs, 0), tMin, tMax, supply, 0, 0, (Range) null, (Range) null, 0.1, bandHigh,
                 filterOrder, fullScale, ratioTolerance, 0, 0, limit, criterion, 3, 2000, maxTrials, 1L, trim, quantity, maxPrice, false, null);
     }
 }
