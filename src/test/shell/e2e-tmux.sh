@@ -59,6 +59,8 @@ wait_for "Type ask to describe your stage" 300
 wait_for "ampsieve> $" 60
 
 type_line "ask"
+wait_for "topology \[non-inverting\] > $"
+type_line ""
 wait_for "gain \[required\] > $"
 type_line "100"
 wait_for "temperature \[0\.\.70 C\] > $"
@@ -74,7 +76,7 @@ wait_for "supply\.voltage \[none\] > $"
 type_line ""
 wait_for "supply\.variation \[0 V \(supply rejection not counted\)\] > $"
 type_line ""
-wait_for "topology \[non-inverting\] > $"
+wait_for "rf \[10 kohm \(follower: 0; transimpedance: required\)\] > $"
 type_line "done"
 wait_for "limit at the output +1\.00 mV"
 wait_for "^Every verdict: open-loop gain, closed-loop bandwidth and resistor ratio not counted: no"

@@ -1,6 +1,7 @@
 package dev.ampsieve.shell;
 
 import dev.ampsieve.stage.StageKeys;
+import dev.ampsieve.stage.Topology;
 import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.UnitException;
 import dev.ampsieve.units.Units;
@@ -138,7 +139,7 @@ final class Answers {
             return supply(t);
         }
         if (id.equals(LIMIT)) {
-            return limit(t);
+            return limit(t, Questions.topology(current) == Topology.TRANSIMPEDANCE);
         }
         if (id.startsWith("limit.")) {
             // one form of the limit replaces the others; lsb, bits and reference form one together
@@ -152,6 +153,9 @@ final class Answers {
         StageKeys.Key key = StageKeys.get(id);
         if (key == null) {
             throw new AnswerException("'" + id + "' is not a stage key", "`show --all` lists them");
+        }
+        if (id.equals("topology")) {
+            return topology(choice(t, key.choices()), current);
         }
         return switch (key.kind()) {
             case BOOLEAN -> new Change(Map.of(id, yesNo(t)), Set.of(), null);
@@ -260,7 +264,7 @@ final class Answers {
      * "1 mV" at the output; "10 uV input"; "0.1 %" of full scale; "0.5 lsb 16 bits 2.5 V".
      * Each form replaces the others.
      */
-    private static Change limit(String t) throws AnswerException {
+    private static Change limit(String t, boolean currentIn) throws AnswerException {
         Map<String, String> put = new LinkedHashMap<>();
         Matcher m;
         if ((m = LSB.matcher(t)).matches()) {
@@ -268,7 +272,7 @@ final class Answers {
             put.put("limit.bits", m.group(2));
             put.put("limit.reference", m.group(3).strip());
         } else if ((m = INPUT.matcher(t)).matches()) {
-            put.put("limit.input", (m.group(1) != null ? m.group(1) : m.group(2)).strip());
+            put.put(currentIn ? "limit.input-current" : "limit.input", (m.group(1) != null ? m.group(1) : m.group(2)).strip());
         } else if ((m = PERCENT.matcher(t)).matches()) {
             put.put("limit.percent-of-full-scale", m.group(1).strip());
         } else if (t.toLowerCase(Locale.ROOT).contains("lsb")) {
@@ -281,6 +285,23 @@ final class Answers {
         Set<String> drop = new LinkedHashSet<>(limitPaths());
         drop.removeAll(put.keySet());
         return new Change(put, drop, null);
+    }
+
+    /**
+     * A new topology drops the answers that mean nothing in it (another network's resistors, the
+     * gain of a transimpedance stage, an input limit of the other kind), and says which.
+     */
+    private static Change topology(String word, Map<String, String> current) {
+        Topology t = Topology.of(word);
+        Set<String> drop = new LinkedHashSet<>();
+        for (String path : current.keySet()) {
+            StageKeys.Key k = StageKeys.get(path);
+            if (k != null && !StageKeys.appliesTo(k, t)) {
+                drop.add(path);
+            }
+        }
+        String note = drop.isEmpty() ? null : String.join(", ", drop) + " dropped: not part of a " + word + " stage";
+        return new Change(Map.of("topology", word), drop, note);
     }
 
     /** Gain 1 in a non-inverting stage is a follower: say so rather than refuse the answer. */

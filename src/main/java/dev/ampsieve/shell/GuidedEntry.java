@@ -61,8 +61,8 @@ final class GuidedEntry {
 
     /** Runs the questions starting from {@code start}; returns the new answers. */
     Map<String, String> run(Map<String, String> start) throws Cancelled {
-        out.println(ctx.fold("Describe the stage: gain, temperature range, error limit, full-scale output and supply first "
-                + "(they decide the verdict), then the rest."));
+        out.println(ctx.fold("Describe the stage: topology, gain, temperature range, error limit, full-scale output and supply "
+                + "first (they decide the verdict), then the rest."));
         out.println(ctx.fold("Enter keeps the value in [ ], ? explains a question, 'done' keeps all remaining values, "
                 + "Ctrl-C stops and keeps the answers given.", paint::dim));
         Map<String, String> a = new LinkedHashMap<>(start);
@@ -73,7 +73,7 @@ final class GuidedEntry {
             boolean restSaid = false;
             for (int i = 0; i < order.size() && !finishing; i++) {
                 String id = order.get(i);
-                if (!Questions.applies(id, a)) {
+                if (!Questions.applies(order, i, a)) {
                     continue;
                 }
                 if (i >= Questions.FIRST.size() && !restSaid) {
@@ -98,7 +98,7 @@ final class GuidedEntry {
         int n = 0;
         int at = 0;
         for (int j = 0; j < order.size(); j++) {
-            if (Questions.applies(order.get(j), a)) {
+            if (Questions.applies(order, j, a)) {
                 n++;
                 if (j <= i) {
                     at = n;
@@ -114,16 +114,16 @@ final class GuidedEntry {
         header(position + " " + id, Questions.why(id));
         while (true) {
             String current = Questions.current(id, a);
-            String shown = current != null ? current : Questions.required(id) ? "required" : Questions.defaultText(id);
+            String shown = current != null ? current : Questions.required(id, a) ? "required" : Questions.defaultText(id);
             String line = read("  " + id + " [" + shown + "] > ", id).strip();
             if (line.equals(EXPLAIN)) {
-                explain(id, shown);
+                explain(id, shown, a);
                 continue;
             }
             if (line.equalsIgnoreCase(DONE)) {
-                if (Questions.FIRST.contains(id)) {
+                if (Questions.first(id, a)) {
                     say("  'done' comes after the supply questions", ": they decide which error terms count. "
-                            + (Questions.required(id) && current == null ? "" : "Enter keeps [" + shown + "]."));
+                            + (Questions.required(id, a) && current == null ? "" : "Enter keeps [" + shown + "]."));
                     continue;
                 }
                 String missing = missingRequired(a);
@@ -135,7 +135,7 @@ final class GuidedEntry {
                 return a;
             }
             if (line.isEmpty()) {
-                if (current == null && Questions.required(id)) {
+                if (current == null && Questions.required(id, a)) {
                     say("  " + id + " has no default", "; " + Questions.why(id));
                     continue;
                 }
@@ -229,8 +229,8 @@ final class GuidedEntry {
         out.println(ctx.fold("  (" + id + ": " + Questions.why(id) + ")", paint::dim));
     }
 
-    private void explain(String id, String shown) {
-        boolean needed = Questions.required(id) && shown.equals("required");
+    private void explain(String id, String shown, Map<String, String> a) {
+        boolean needed = shown.equals("required");
         out.println(ctx.fold("  " + id + ": " + Questions.why(id) + "."));
         out.println(ctx.fold("  for example: " + Questions.example(id)));
         java.util.List<String> units = UnitHints.of(Answers.dimension(id));
@@ -240,14 +240,14 @@ final class GuidedEntry {
         out.println(ctx.fold(needed ? "  no default: an answer is needed" : "  default: " + Questions.defaultText(id)
                 + (shown.equals(Questions.defaultText(id)) ? "" : "; now: " + shown)));
         out.println(ctx.fold("  " + (needed ? "" : "Enter keeps [" + shown + "]; ")
-                + (Questions.FIRST.contains(id) ? "'done' comes after the supply questions" : "'done' keeps all remaining values")
+                + (Questions.first(id, a) ? "'done' comes after the supply questions" : "'done' keeps all remaining values")
                 + "; Ctrl-C stops and keeps the answers given.", paint::dim));
     }
 
     /** The first required question still unanswered, or null. */
     private static String missingRequired(Map<String, String> a) {
         for (String id : Questions.FIRST) {
-            if (Questions.required(id) && Questions.current(id, a) == null) {
+            if (Questions.applies(id, a) && Questions.required(id, a) && Questions.current(id, a) == null) {
                 return id;
             }
         }

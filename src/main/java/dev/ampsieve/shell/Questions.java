@@ -1,6 +1,7 @@
 package dev.ampsieve.shell;
 
 import dev.ampsieve.stage.StageKeys;
+import dev.ampsieve.stage.Topology;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -20,14 +21,21 @@ final class Questions {
      * absent full-scale output or supply variation leaves error terms out (the verdict line
      * then says which).
      */
-    static final List<String> FIRST = List.of("gain", Answers.TEMPERATURE, Answers.LIMIT, "full-scale-output",
-            "supply.voltage", "supply.variation");
+    static final List<String> FIRST = List.of("topology", "gain", "rf", "source-resistance", "source-capacitance", "cf",
+            Answers.TEMPERATURE, Answers.LIMIT, "full-scale-output", "supply.voltage", "supply.variation");
+
+    /**
+     * Of {@link #FIRST}, the questions asked there only for a transimpedance stage (which has no
+     * gain: its parts are its gain); the other topologies meet them, where they apply, among the rest.
+     */
+    static final Set<String> FIRST_FOR_CURRENT_INPUT = Set.of("rf", "source-resistance", "source-capacitance", "cf");
 
     /** Asked after the supply when it is given: on a single supply the mid-supply default is rarely right. */
     static final List<String> HEADROOM = List.of("output-range", "common-mode-range");
 
     /** Left to {@code set}: derived (rg) and statistics settings with sound defaults. */
-    static final Set<String> NOT_ASKED = Set.of("rg", "max-to-sigma", "trials", "max-trials", "seed");
+    static final Set<String> NOT_ASKED = Set.of("rg", "r1", "r3", "r4", "source-resistance.minus", "source-resistance.plus",
+            "max-to-sigma", "trials", "max-trials", "seed");
 
     /** Only asked when a trim is allowed. */
     static final Set<String> TRIM_DETAILS = Set.of("trim.method", "trim.resolution", "trim.cost");
@@ -35,17 +43,50 @@ final class Questions {
     /** Only asked for a two-temperature calibration. */
     static final Set<String> CALIBRATION_POINTS = Set.of("trim.cold", "trim.hot");
 
-    /** Every question, in order; the combined ranges stand for their two keys. */
+    /**
+     * Every question, in order; the combined ranges stand for their two keys. A question may stand
+     * twice (among the first for one topology, among the rest for the others): {@link #applies}
+     * with its index decides which place asks it.
+     */
     static List<String> order() {
         List<String> out = new ArrayList<>(FIRST);
         out.addAll(HEADROOM);
         for (String p : StageKeys.paths()) {
-            if (covered(p) || NOT_ASKED.contains(p)) {
+            if (covered(p) && !FIRST_FOR_CURRENT_INPUT.contains(p) || NOT_ASKED.contains(p) || p.equals("topology")) {
                 continue;
             }
             out.add(p.equals("band.low") ? "band" : p);
         }
         return out;
+    }
+
+    /** The topology the answers name (non-inverting, the default, when none). */
+    static Topology topology(Map<String, String> answers) {
+        String t = answers.get("topology");
+        for (Topology x : Topology.values()) {
+            if (x.key().equals(t)) {
+                return x;
+            }
+        }
+        return Topology.NON_INVERTING;
+    }
+
+    /** Whether {@code id} is one of the first questions for this topology ('done' is refused there). */
+    static boolean first(String id, Map<String, String> answers) {
+        return FIRST.contains(id) && (!FIRST_FOR_CURRENT_INPUT.contains(id) || topology(answers) == Topology.TRANSIMPEDANCE);
+    }
+
+    /** Whether the question at {@code index} of {@link #order()} is asked given the answers so far. */
+    static boolean applies(List<String> order, int index, Map<String, String> answers) {
+        String id = order.get(index);
+        boolean inFirst = index < FIRST.size();
+        if (FIRST_FOR_CURRENT_INPUT.contains(id)) {
+            boolean currentIn = topology(answers) == Topology.TRANSIMPEDANCE;
+            if (inFirst != currentIn) {
+                return false;
+            }
+        }
+        return applies(id, answers);
     }
 
     /** Whether a key is asked as part of an earlier question (or, band.high, by the band question). */
@@ -55,8 +96,12 @@ final class Questions {
                 || p.equals("band.high");
     }
 
-    /** Whether {@code id} is asked given the answers so far. */
+    /** Whether {@code id} is asked given the answers so far (wherever it stands in the order). */
     static boolean applies(String id, Map<String, String> answers) {
+        StageKeys.Key key = StageKeys.get(id);
+        if (key != null && !StageKeys.appliesTo(key, topology(answers))) {
+            return false; // another topology's resistor, or the gain of a transimpedance stage
+        }
         if (HEADROOM.contains(id)) {
             return answers.containsKey("supply.voltage");
         }
@@ -67,8 +112,9 @@ final class Questions {
     }
 
     /** Keys only {@code set} reaches, for the closing hint. */
-    static List<String> setOnly() {
-        return StageKeys.paths().stream().filter(NOT_ASKED::contains).toList();
+    static List<String> setOnly(Map<String, String> answers) {
+        return StageKeys.paths().stream().filter(NOT_ASKED::contains)
+                .filter(p -> StageKeys.appliesTo(StageKeys.get(p), topology(answers))).toList();
     }
 
     static String why(String id) {
@@ -116,7 +162,8 @@ final class Questions {
             return "5 V, or with its change: 5 V ± 0.25 V";
         }
         if (id.equals(Answers.LIMIT)) {
-            return "1 mV (at the output), 10 uV input, 0.1 % (of full-scale-output), 0.5 lsb 16 bits 2.5 V";
+            return "1 mV (at the output), 10 uV input (transimpedance: 1 nA input), 0.1 % (of full-scale-output), "
+                    + "0.5 lsb 16 bits 2.5 V";
         }
         return StageKeys.get(id).example();
     }
@@ -138,6 +185,11 @@ final class Questions {
 
     static boolean required(String id) {
         return defaultText(id).startsWith("required");
+    }
+
+    /** {@link #required(String)}, and the source and feedback of a transimpedance stage, which have no default. */
+    static boolean required(String id, Map<String, String> answers) {
+        return required(id) || topology(answers) == Topology.TRANSIMPEDANCE && Set.of("rf", "source-resistance").contains(id);
     }
 
     /** The value the answers hold for {@code id}, in the shorthand a user would type; null when unanswered. */
@@ -163,6 +215,9 @@ final class Questions {
             }
             if (a.containsKey("limit.input")) {
                 return a.get("limit.input") + " input";
+            }
+            if (a.containsKey("limit.input-current")) {
+                return a.get("limit.input-current") + " input";
             }
             if (a.containsKey("limit.percent-of-full-scale")) {
                 String p = a.get("limit.percent-of-full-scale");

@@ -123,7 +123,7 @@ final class ShellCommands {
             out().println();
             out().println(ctx.foldBold("Next: rank lists the parts that fit, save FILE keeps this stage, "
                     + "set KEY VALUE changes one value.", "rank", "save FILE", "set KEY VALUE"));
-            List<String> more = Questions.setOnly();
+            List<String> more = Questions.setOnly(ctx.state.answers());
             out().println(ctx.fold("Not asked (set them if needed): " + String.join(", ", more) + ".", paint()::dim));
             return code;
         }

@@ -23,8 +23,9 @@ final class StageCheck {
     /** How a typed-in stage is named in messages. */
     static final Path NAME = Path.of("(current stage)");
 
-    /** gain, rf, rg and topology decide the resistors together; a problem in one concerns all four. */
-    private static final Set<String> RESISTORS = Set.of("gain", "rf", "rg", "topology");
+    /** The topology and its network's keys decide the network together; a problem in one concerns them all. */
+    private static final Set<String> RESISTORS = Set.of("gain", "rf", "rg", "topology", "r1", "r2", "r3", "r4", "cf",
+            "source-resistance", "source-capacitance", "balance-resistance");
 
     /** The stage the answers describe. */
     static Stage stage(Map<String, String> answers) throws InputException {
@@ -45,8 +46,15 @@ final class StageCheck {
     static List<Problem> problemsFor(Map<String, String> answers, Collection<String> paths) {
         return problems(answers).stream()
                 .filter(Problem::isError)
+                // a key not answered yet (a required one is asked later): not this answer's fault
+                .filter(p -> p.field().isEmpty() || paths.contains(p.field()) || answered(answers, p.field()))
                 .filter(p -> paths.stream().anyMatch(path -> concerns(p.field(), path)))
                 .toList();
+    }
+
+    /** Whether the answers hold {@code field} or a key inside it. */
+    private static boolean answered(Map<String, String> answers, String field) {
+        return answers.keySet().stream().anyMatch(k -> k.equals(field) || k.startsWith(field + "."));
     }
 
     /** A problem in {@code field} concerns {@code path} when both sit in one block or both set the resistors. */

@@ -63,7 +63,20 @@ class AnswersTest {
         assertThrows(AnswerException.class, () -> Answers.interpret("limit", "0.5 lsb", Map.of()));
         // one block form replaces the scalar, and the three LSB keys stay together
         Answers.Change bits = Answers.interpret("limit.bits", "12", Map.of("limit", "1 mV", "limit.lsb", "1"));
-        assertEquals(Set.of("limit", "limit.input", "limit.percent-of-full-scale"), bits.remove());
+        assertEquals(Set.of("limit", "limit.input", "limit.input-current", "limit.percent-of-full-scale"), bits.remove());
+        // a transimpedance stage's input is a current: "input" there means limit.input-current
+        assertEquals(Map.of("limit.input-current", "100 pA"),
+                Answers.interpret("limit", "100 pA input", Map.of("topology", "transimpedance")).put());
+    }
+
+    @Test
+    void aNewTopologyDropsTheAnswersThatMeanNothingInIt() throws AnswerException {
+        Answers.Change c = Answers.interpret("topology", "trans", Map.of("gain", "100", "rf", "1 Mohm", "limit.input", "1 uV"));
+        assertEquals(Map.of("topology", "transimpedance"), c.put());
+        assertEquals(Set.of("gain", "limit.input"), c.remove()); // rf stays: it is the transimpedance
+        Answers.Change d = Answers.interpret("topology", "difference", Map.of("gain", "10", "rf", "100 kohm", "rg", "10 kohm"));
+        assertEquals(Set.of("rf", "rg"), d.remove()); // the gain stays: r2/r1
+        assertTrue(d.note().contains("rf, rg dropped"), d.note());
     }
 
     @Test

@@ -23,12 +23,12 @@ class GuidedEntryTest {
     @Test
     void threeAnswersThenDoneMakeTheCurrentStage() throws Exception {
         Path file = dir.resolve("bridge.yaml");
-        String printed = Sessions.run("ask", "100", "-40..85 C", "1 mV", "5 V", "12 V", "0.6 V", "done",
+        String printed = Sessions.run("ask", "", "100", "-40..85 C", "1 mV", "5 V", "12 V", "0.6 V", "done",
                 "save " + file);
 
-        // 6 first questions and 15 more (Questions.order); the 2 ranges join once a supply is given
-        assertTrue(printed.contains("[1/21] gain"), printed);
-        assertTrue(printed.contains("[7/23] output-range"), printed);
+        // topology, 6 first questions and 14 more (Questions.order); the 2 ranges join once a supply is given
+        assertTrue(printed.contains("[2/21] gain"), printed);
+        assertTrue(printed.contains("[8/23] output-range"), printed);
         assertTrue(printed.contains("gain [required] >"), printed);
         assertTrue(printed.contains("temperature [0..70 C] >"), printed);
         assertTrue(printed.contains("output-range [mid-supply +/- full-scale-output] >"), printed);
@@ -53,8 +53,8 @@ class GuidedEntryTest {
     @Test
     void aSupplyBringsTheRangeQuestionsAndEachTakesARangeInOneAnswer() throws Exception {
         Path file = dir.resolve("single.yaml");
-        String printed = Sessions.run("ask", "100", "", "1 mV", "2 V", "5 V ± 0.25 V", "", "0.1..4.9 V", "0.5..2.5",
-                "", "", "", "", "0.1 Hz..1k", "done", "save " + file);
+        String printed = Sessions.run("ask", "", "100", "", "1 mV", "2 V", "5 V ± 0.25 V", "", "0.1..4.9 V", "0.5..2.5",
+                "", "", "", "0.1 Hz..1k", "done", "save " + file);
         assertTrue(printed.contains("supply.variation [0.25 V] >"), printed); // the ± answer gave it
         assertTrue(Flat.of(printed).contains("On a single supply the signal rarely sits at mid-supply"), printed);
         Stage s = StageLoader.load(file);
@@ -71,7 +71,7 @@ class GuidedEntryTest {
     @Test
     void aBadAnswerIsAskedAgainWithTheReason() throws Exception {
         Path file = dir.resolve("s.yaml");
-        String printed = Sessions.run("ask", "abc", "40 dB", "85..-40", "-40 to 125", "2 V/us", "10 uV input", "", "", "",
+        String printed = Sessions.run("ask", "", "abc", "40 dB", "85..-40", "-40 to 125", "2 V/us", "10 uV input", "", "", "",
                 "done", "save " + file);
 
         String flat = Flat.of(printed);
@@ -90,7 +90,7 @@ class GuidedEntryTest {
     @Test
     void questionMarkExplainsAndEnterKeepsTheDefault() throws Exception {
         Path file = dir.resolve("s.yaml");
-        String printed = Sessions.run("ask", "10", "?", "", "0.1 %", "2.5 V", "", "", "", "", "1 kohm", "done",
+        String printed = Sessions.run("ask", "", "10", "?", "", "0.1 %", "2.5 V", "", "", "", "1 kohm", "done",
                 "save " + file);
 
         assertTrue(printed.contains("for example: -40..85 C"), printed);
@@ -110,7 +110,7 @@ class GuidedEntryTest {
 
     @Test
     void ctrlCBeforeTheLimitKeepsNothingAndNotTheShellEither() {
-        String printed = Sessions.run("ask", "100", "-40..85 C\u0003", "show", "help");
+        String printed = Sessions.run("ask", "", "100", "-40..85 C\u0003", "show", "help");
         assertTrue(printed.contains("Stopped; nothing kept (a stage needs the gain and the limit); no stage yet."),
                 printed);
         assertTrue(printed.contains("No current stage yet"), printed);
@@ -120,7 +120,7 @@ class GuidedEntryTest {
     @Test
     void ctrlCAfterTheLimitKeepsTheAnswersGiven() throws Exception {
         Path file = dir.resolve("s.yaml");
-        String printed = Sessions.run("ask", "100", "-40..85 C", "10 uV input", "inv\u0003", "show", "save " + file);
+        String printed = Sessions.run("ask", "", "100", "-40..85 C", "10 uV input", "inv\u0003", "show", "save " + file);
         assertTrue(printed.contains("Stopped; kept the 3 answers given: 'show' lists them, 'ask' starts again."), printed);
         assertTrue(printed.contains("Stage (typed in, not saved)"), printed);
 
@@ -134,14 +134,14 @@ class GuidedEntryTest {
     @Test
     void ctrlCOnAStageKeepsItsNewAnswersAndOnlyThem() throws Exception {
         Path file = dir.resolve("s.yaml");
-        String printed = Sessions.run("set gain 20", "set limit 5 mV", "ask", "50", "\u0003", "save " + file);
+        String printed = Sessions.run("set gain 20", "set limit 5 mV", "ask", "", "50", "\u0003", "save " + file);
         assertTrue(printed.contains("Stopped; kept the one answer given: 'show' lists them, 'ask' starts again."), printed);
         Stage s = StageLoader.load(file);
         assertEquals(50.0, s.noiseGain(), 1e-12);
         assertEquals(5e-3, s.limitVolts(), 1e-15);
 
         // a fresh start that never reaches the limit leaves the stage there was
-        printed = Sessions.run("set gain 20", "set limit 5 mV", "ask --fresh", "7", "\u0003", "show");
+        printed = Sessions.run("set gain 20", "set limit 5 mV", "ask --fresh", "", "7", "\u0003", "show");
         assertTrue(Flat.of(printed).contains("Stopped; nothing kept (a stage needs the gain and the limit); "
                 + "the current stage is as it was."), printed);
         assertTrue(printed.matches("(?s).*Stopped.*gain\\s+20\\s.*"), printed);
@@ -150,7 +150,7 @@ class GuidedEntryTest {
     @Test
     void questionsReasonsAndExplanationsAreFoldedToTheWidth() {
         // the dumb terminal reports no width: 80 columns (OutputStyle)
-        String printed = Sessions.run("ask", "100", "?", "2 parsecs", "-40..85 C", "?", "\u0003");
+        String printed = Sessions.run("ask", "", "100", "?", "2 parsecs", "-40..85 C", "?", "\u0003");
         String flat = printed.replace("\r", "");
         for (String line : flat.split("\n")) {
             line = Sessions.withoutPrompts(line); // the dumb terminal leaves output on the prompt's line
@@ -158,8 +158,8 @@ class GuidedEntryTest {
         }
         // the temperature reason is longer than a line: it hangs under itself after the key
         String why = Questions.why(Answers.TEMPERATURE);
-        assertTrue(why.length() > 80 - "[2/21] temperature  ".length(), why); // the check below means something
-        assertTrue(flat.contains("[2/21] temperature  drift and FET bias currents"), printed);
+        assertTrue(why.length() > 80 - "[3/21] temperature  ".length(), why); // the check below means something
+        assertTrue(flat.contains("[3/21] temperature  drift and FET bias currents"), printed);
         assertTrue(flat.matches("(?s).*\\n {20}\\S.*"), printed); // a continuation under the reason's first word
         assertTrue(Flat.of(flat).contains("temperature: " + why + "."), printed);
     }
@@ -167,8 +167,8 @@ class GuidedEntryTest {
     @Test
     void askingAgainStartsFromTheCurrentAnswersAndCancelKeepsThem() throws Exception {
         Path file = dir.resolve("s.yaml");
-        String printed = Sessions.run("set gain 20", "set limit 5 mV", "ask", "", "", "\u0003", "ask", "", "", "", "", "", "",
-                "inv", "done", "save " + file);
+        String printed = Sessions.run("set gain 20", "set limit 5 mV", "ask", "", "", "", "\u0003", "ask", "inv", "", "", "", "", "", "",
+                "done", "save " + file);
         assertTrue(printed.contains("gain [20] >"), printed);
         assertTrue(printed.contains("limit [5 mV] >"), printed);
         assertTrue(printed.contains("Stopped; the current stage is as it was."), printed);
@@ -182,14 +182,14 @@ class GuidedEntryTest {
     @Test
     void gainOneBecomesAFollower() throws Exception {
         Path file = dir.resolve("s.yaml");
-        String printed = Sessions.run("ask", "1", "", "1 mV", "", "", "", "done", "save " + file);
+        String printed = Sessions.run("ask", "", "1", "", "1 mV", "", "", "", "done", "save " + file);
         assertTrue(printed.contains("gain 1: taken as a follower"), printed);
         assertEquals(Topology.FOLLOWER, StageLoader.load(file).topology());
     }
 
     @Test
     void doneIsRefusedUntilTheFullScaleAndSupplyQuestions() {
-        String printed = Sessions.run("ask", "100", "done", "", "1 mV", "done", "", "", "", "done", "show");
+        String printed = Sessions.run("ask", "", "100", "done", "", "1 mV", "done", "", "", "", "done", "show");
         // refused at the temperature and at the full-scale output question
         assertEquals(2, printed.split("'done' comes after the supply questions", -1).length - 1, printed);
         assertTrue(printed.matches("(?s).*limit at the output\\s+1\\.00 mV.*"), printed);

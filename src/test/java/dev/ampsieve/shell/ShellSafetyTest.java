@@ -183,7 +183,7 @@ class ShellSafetyTest {
 
     @Test
     void anOverLongAnswerStopsTheQuestionsLikeCtrlC() {
-        String printed = session("ask", "100", "x".repeat(5000), "show");
+        String printed = session("ask", "", "100", "x".repeat(5000), "show");
         assertTrue(Flat.of(printed).contains("Refused a line of 5000 characters"), printed);
         assertTrue(printed.contains("Stopped;"), printed);
     }

@@ -140,7 +140,7 @@ class ShellSessionTest {
     @Test
     void aNewUserAcceptingEveryDefaultIsToldWhatNoVerdictCounts() {
         // the session: gain 200, 0..70 °C, 2 mV, Enter at full scale and supply, 'done' at the first chance
-        String printed = session("ask", "200", "0..70", "2 mV", "", "", "", "done", "rank --top 3");
+        String printed = session("ask", "", "200", "0..70", "2 mV", "", "", "", "done", "rank --top 3");
         String flat = dev.ampsieve.testing.Flat.of(printed);
         String left = "open-loop gain, closed-loop bandwidth and resistor ratio not counted: no full-scale-output; "
                 + "supply rejection not counted: no supply.variation; common-mode rejection not counted: "
@@ -212,7 +212,7 @@ class ShellSessionTest {
     @Test
     void historyIsKeptInTheGivenFile() throws IOException {
         Path history = dir.resolve("data/ampsieve/history");
-        Sessions.run(List.of("--catalog", catalog.toString()), history, Map.of(), "help", "show", "ask", "100", "\u0003");
+        Sessions.run(List.of("--catalog", catalog.toString()), history, Map.of(), "help", "show", "ask", "", "100", "\u0003");
         List<String> lines = Files.readAllLines(history);
         assertTrue(lines.stream().anyMatch(l -> l.endsWith("help")), lines.toString());
         assertTrue(lines.stream().anyMatch(l -> l.endsWith("ask")), lines.toString());
