@@ -294,9 +294,9 @@ final class Answers {
     private static Change topology(String word, Map<String, String> current) {
         Topology t = Topology.of(word);
         Set<String> drop = new LinkedHashSet<>();
-        for (String path : current.keySet()) {
+        for (String path : StageKeys.paths()) { // in the key table's order, so the note reads the same each time
             StageKeys.Key k = StageKeys.get(path);
-            if (k != null && !StageKeys.appliesTo(k, t)) {
+            if (current.containsKey(path) && !StageKeys.appliesTo(k, t)) {
                 drop.add(path);
             }
         }
