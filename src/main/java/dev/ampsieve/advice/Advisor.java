@@ -724,7 +724,11 @@ public final class Advisor {
                 text.append(Units.format(Phrases.round3Up(needed / fs), Dimension.RATIO)).append(" of full scale (").append(volts(needed))
                         .append(" at the output) or looser (now ").append(Units.format(l.value(), Dimension.RATIO)).append(")");
             }
-            case OUTPUT -> text.append(volts(needed)).append(" at the output (").append(volts(needed / g))
+            case INPUT_CURRENT -> text.append(Units.format(Phrases.round3Up(needed / g), Dimension.CURRENT)).append(" at the input (")
+                    .append(volts(needed)).append(" at the output) or looser (now ").append(Units.format(l.value(), Dimension.CURRENT))
+                    .append(" at the input)");
+            case OUTPUT -> text.append(volts(needed)).append(" at the output (").append(stage.topology() == Topology.TRANSIMPEDANCE
+                    ? Units.format(needed / g, Dimension.CURRENT) : volts(needed / g))
                     .append(" at the input) or looser (now ").append(volts(e)).append(")");
         }
         return java.util.Optional.of(new Change(Change.Kind.LOOSER_LIMIT, text.toString(), v));

@@ -49,7 +49,7 @@ public final class BudgetBars {
         }
         o.append("Verdict ").append(b.verdict().key())
                 .append(b.limitingTerm() == null ? "" : "; largest term: " + BudgetText.termLabel(b, b.limitingTerm()))
-                .append("; input-referred limit ").append(Units.format(b.limitV() / b.stage().sourceGain(), Dimension.VOLTAGE))
+                .append("; input-referred limit ").append(Figures.atInput(b.stage(), b.limitV() / b.stage().sourceGain()))
                 .append('\n');
         o.append('\n').append(Caution.TEXT).append('\n');
         return style.glyphs().text(Wrap.prose(o.toString(), style.width()));

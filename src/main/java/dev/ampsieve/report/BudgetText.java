@@ -65,13 +65,17 @@ public final class BudgetText {
         double g = s.sourceGain(); // input-referred = at the signal source
         line(o, "Part       %s%s", Visible.of(b.part().id()),
                 b.part().title().isBlank() ? "" : "  (" + Visible.of(b.part().title()) + ")");
+        boolean currentIn = Figures.inputDimension(s) == Dimension.CURRENT;
         line(o, "Stage      %s%s, noise gain %s, signal gain %s", stageLabel == null ? "" : Visible.of(stageLabel) + ": ",
-                s.topology().key(), num(b.noiseGain()), num(s.signalGain()));
-        line(o, "Limit      %s at the output (%s at the input), criterion %s", v(limit), v(limit / g),
+                s.topology().key(), num(b.noiseGain()), currentIn ? Units.format(s.signalGain(), Dimension.RESISTANCE, 4)
+                + " (V/A)" : num(s.signalGain()));
+        java.util.function.DoubleFunction<String> in = x -> Figures.atInput(s, x);
+        line(o, "Limit      %s at the output (%s at the input), criterion %s", v(limit), in.apply(limit / g),
                 s.criterion());
         o.append('\n');
         // the input column's convention, stated where it is read
-        line(o, "input = output / |signal gain| %s: referred to the signal source", num(g));
+        line(o, "input = output / |signal gain| %s: referred to the signal source", currentIn
+                ? Units.format(g, Dimension.RESISTANCE, 4) + ", a current" : num(g));
         line(o, "%-24s %11s %11s %9s %10s", "term", "output", "input", "of limit", "worst at");
         boolean anyEstimated = false;
         boolean anyUncounted = false;
@@ -80,7 +84,7 @@ public final class BudgetText {
             String mark = t.estimated() ? "*" : "";
             anyEstimated |= t.estimated();
             anyUncounted |= !counted;
-            line(o, "%-24s %11s %11s %9s %10s%s", t.label() + mark, v(t.outputV()), v(t.inputV()),
+            line(o, "%-24s %11s %11s %9s %10s%s", t.label() + mark, v(t.outputV()), in.apply(t.inputV()),
                     share(t.outputV(), limit), Double.isNaN(t.worstAtC()) ? "-" : Units.format(t.worstAtC(), Dimension.TEMPERATURE),
                     counted ? "" : "  headroom only");
         }
@@ -92,12 +96,12 @@ public final class BudgetText {
         }
         o.append('\n');
         line(o, "%-24s %11s %11s %9s", "total", "output", "input", "of limit");
-        line(o, "%-24s %11s %11s %9s", "worst-case sum", v(b.worstCaseV()), v(b.worstCaseV() / g),
+        line(o, "%-24s %11s %11s %9s", "worst-case sum", v(b.worstCaseV()), in.apply(b.worstCaseV() / g),
                 share(b.worstCaseV(), limit));
-        line(o, "%-24s %11s %11s %9s", "root-sum-square", v(b.rssV()), v(b.rssV() / g), share(b.rssV(), limit));
-        line(o, "%-24s %11s %11s", "noise rms", v(b.noiseRmsV()), v(b.noiseRmsV() / g));
+        line(o, "%-24s %11s %11s %9s", "root-sum-square", v(b.rssV()), in.apply(b.rssV() / g), share(b.rssV(), limit));
+        line(o, "%-24s %11s %11s", "noise rms", v(b.noiseRmsV()), in.apply(b.noiseRmsV() / g));
         line(o, "%-24s %11s %11s", "noise peak-to-peak", v(NoiseModel.PEAK_TO_PEAK * b.noiseRmsV()),
-                v(NoiseModel.PEAK_TO_PEAK * b.noiseRmsV() / g));
+                in.apply(NoiseModel.PEAK_TO_PEAK * b.noiseRmsV() / g));
         o.append('\n');
         line(o, "Yield      %s", yieldLine(b.yield(), s));
         if (!bySigma.isEmpty()) {

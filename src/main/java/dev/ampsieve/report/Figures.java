@@ -80,6 +80,22 @@ final class Figures {
     }
 
     /**
+     * A figure referred to the signal source: volts, or amperes for a transimpedance stage, whose
+     * source is a current (output volts over its signal gain in ohms).
+     */
+    static String atInput(dev.ampsieve.stage.Stage s, double v) {
+        return Double.isNaN(v) ? NONE : Units.format(v, inputDimension(s));
+    }
+
+    /** What a figure at the signal source measures. */
+    static Dimension inputDimension(dev.ampsieve.stage.Stage s) {
+        return switch (s.topology()) {
+            case TRANSIMPEDANCE -> Dimension.CURRENT;
+            case NON_INVERTING, INVERTING, FOLLOWER, DIFFERENCE -> Dimension.VOLTAGE;
+        };
+    }
+
+    /**
      * A yield margin (the interval's lower end minus the target) in points of yield: "+0.05 %",
      * "-0.12 %"; to 0.0001 points when smaller than 0.01; rounded down, so it never claims more
      * than was found.

@@ -15,7 +15,7 @@ final class StageLine {
         return "Stage " + (label == null ? "" : Visible.of(label) + ": ") + s.topology().key() + ", noise gain "
                 + Units.format(s.noiseGain(), Dimension.NUMBER, 4) + ", " + Units.format(s.tMin(), Dimension.TEMPERATURE)
                 + " to " + Units.format(s.tMax(), Dimension.TEMPERATURE) + "\n"
-                + "Limit " + Figures.volts(e) + " at the output (" + Figures.volts(e / s.sourceGain()) + " at the input), "
+                + "Limit " + Figures.volts(e) + " at the output (" + Figures.atInput(s, e / s.sourceGain()) + " at the input), "
                 + s.criterion() + ", quantity " + s.quantity();
     }
 }
