@@ -582,6 +582,13 @@ public final class Advisor {
     }
 
     private static java.util.Optional<Change> lowerSource(Stage stage, Predicate<Stage> fits) {
+        boolean lever = switch (stage.topology()) {
+            case NON_INVERTING, INVERTING, FOLLOWER, DIFFERENCE -> true;
+            case TRANSIMPEDANCE -> false; // a lower shunt raises the noise gain: never a way out
+        };
+        if (!lever) {
+            return java.util.Optional.empty();
+        }
         double rs = stage.sourceResistance();
         // never "remove the source resistor": nothing below the resistor floor is offered
         if (rs <= RESISTOR_FLOOR || !fits.test(StageEdit.withSourceResistance(stage, RESISTOR_FLOOR))) {
@@ -649,10 +656,18 @@ public final class Advisor {
         Map<String, Double> v = new LinkedHashMap<>();
         v.put("ratioTolerance", tol);
         v.put("ratioTempco", tc);
-        String text = "resistors matched to " + Units.format(tol, Dimension.RATIO) + " with "
-                + Units.format(tc, Dimension.RATIO_DRIFT) + " tracking or better (now "
-                + Units.format(stage.ratioTolerance(), Dimension.RATIO) + ", "
+        String now = " (now " + Units.format(stage.ratioTolerance(), Dimension.RATIO) + ", "
                 + Units.format(stage.ratioTempco(), Dimension.RATIO_DRIFT) + ")";
+        String text = switch (stage.topology()) {
+            case NON_INVERTING, INVERTING, FOLLOWER -> "resistors matched to " + Units.format(tol, Dimension.RATIO) + " with "
+                    + Units.format(tc, Dimension.RATIO_DRIFT) + " tracking or better" + now;
+            // the pairs' match sets both the gain and the rejection of the common mode
+            case DIFFERENCE -> "better-matched resistor pairs: r2/r1 and r4/r3 each within " + Units.format(tol, Dimension.RATIO)
+                    + " with " + Units.format(tc, Dimension.RATIO_DRIFT) + " tracking or better" + now
+                    + "; a matched four-resistor network also raises the common-mode rejection";
+            case TRANSIMPEDANCE -> "a feedback resistor of " + Units.format(tol, Dimension.RATIO) + " tolerance and "
+                    + Units.format(tc, Dimension.RATIO_DRIFT) + " or better" + now;
+        };
         return java.util.Optional.of(new Change(Change.Kind.BETTER_RESISTORS, text, v));
     }
 
