@@ -31,6 +31,8 @@ final class Answers {
     static final String TEMPERATURE = "temperature";
     /** The limit in any of its forms. */
     static final String LIMIT = "limit";
+    /** The source resistance: one value, or one per leg of a difference stage. */
+    static final String SOURCE = "source-resistance";
     /** The supply in one line: "5 V", "5 V ± 0.25 V" (also "+-"). */
     static final String SUPPLY = "supply";
 
@@ -156,6 +158,17 @@ final class Answers {
         }
         if (id.equals("topology")) {
             return topology(choice(t, key.choices()), current);
+        }
+        if (id.equals(SOURCE)) {
+            return new Change(Map.of(id, t), Set.of(SOURCE + ".minus", SOURCE + ".plus"), null); // one value for both legs
+        }
+        if (id.startsWith(SOURCE + ".") && current.containsKey(SOURCE)) {
+            // one leg given where both had one value: the other leg keeps that value
+            String other = id.endsWith(".minus") ? SOURCE + ".plus" : SOURCE + ".minus";
+            Map<String, String> put = new LinkedHashMap<>();
+            put.put(id, t);
+            put.putIfAbsent(other, current.get(SOURCE));
+            return new Change(put, Set.of(SOURCE), other + " keeps " + current.get(SOURCE));
         }
         return switch (key.kind()) {
             case BOOLEAN -> new Change(Map.of(id, yesNo(t)), Set.of(), null);
@@ -300,7 +313,7 @@ final class Answers {
                 drop.add(path);
             }
         }
-        String note = drop.isEmpty() ? null : String.join(", ", drop) + " dropped: not part of a " + word + " stage";
+        String note = drop.isEmpty() ? null : String.join(", ", drop) + " dropped: not part of the " + word + " topology";
         return new Change(Map.of("topology", word), drop, note);
     }
 

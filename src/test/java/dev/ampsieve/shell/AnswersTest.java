@@ -80,6 +80,16 @@ class AnswersTest {
     }
 
     @Test
+    void oneLegOfTheSourceKeepsTheOtherAtTheCommonValue() throws AnswerException {
+        Answers.Change c = Answers.interpret("source-resistance.minus", "350 ohm", Map.of("source-resistance", "300 ohm"));
+        assertEquals(Map.of("source-resistance.minus", "350 ohm", "source-resistance.plus", "300 ohm"), c.put());
+        assertEquals(Set.of("source-resistance"), c.remove());
+        Answers.Change back = Answers.interpret("source-resistance", "1 kohm",
+                Map.of("source-resistance.minus", "350 ohm", "source-resistance.plus", "300 ohm"));
+        assertEquals(Set.of("source-resistance.minus", "source-resistance.plus"), back.remove());
+    }
+
+    @Test
     void wordsYesNoAndPrefixes() throws AnswerException {
         assertEquals("true", Answers.interpret("trim.allowed", "yes", Map.of()).put().get("trim.allowed"));
         assertEquals("false", Answers.interpret("ac-coupled", "N", Map.of()).put().get("ac-coupled"));
