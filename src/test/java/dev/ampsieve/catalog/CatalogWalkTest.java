@@ -4,6 +4,7 @@ import static dev.ampsieve.catalog.CatalogFixtures.BASE;
 import static dev.ampsieve.catalog.CatalogFixtures.with;
 import static dev.ampsieve.catalog.CatalogFixtures.write;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTimeoutPreemptively;
 
@@ -60,6 +61,7 @@ class CatalogWalkTest {
         SpecialFiles.fifo(dir.resolve("notes.txt")); // not a catalog name: not looked at, as any other file
         Path sock = dir.resolve("sock.yml");
         try (ServerSocketChannel ch = SpecialFiles.socket(sock)) {
+            assertTrue(ch.isOpen()); // the socket is listening while the catalog is read
             Catalog c = load();
             assertEquals(List.of("amp-a"), ids(c));
             assertEquals(List.of(

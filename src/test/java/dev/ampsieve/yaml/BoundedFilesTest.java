@@ -64,6 +64,7 @@ class BoundedFilesTest {
     void aSocketAndAFolderAreRefused() throws Exception {
         Path sock = dir.resolve("s.yaml");
         try (ServerSocketChannel ch = SpecialFiles.socket(sock)) {
+            assertTrue(ch.isOpen()); // the socket is listening while it is refused
             assertEquals("not a regular file (a socket)", refusal(sock).message());
         }
         Path folder = Files.createDirectory(dir.resolve("folder.yaml"));
