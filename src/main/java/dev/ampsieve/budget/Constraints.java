@@ -89,16 +89,32 @@ public final class Constraints {
         return range(TEMPERATURE, s.tMin(), s.tMax(), p.temperature(), Dimension.TEMPERATURE, "ambient", "rated");
     }
 
-    /** Needed common-mode range: the stage's, else mid-supply +/- the common-mode swing (a peak change). */
+    /**
+     * Needed common-mode range at the amplifier's pins: the stage's, else mid-supply +/- the
+     * common-mode swing (a peak change). A difference stage states both at the source; its pins see
+     * them divided, {@code pins = mid + (source - mid) x share} with share = R4/(R3 + Rs+ + R4)
+     * ({@link dev.ampsieve.stage.Network#commonModeShare}), assuming the reference (R4's far end) is at
+     * mid-supply, where a single-supply stage centres its output (a stated range should include the
+     * + leg's half of the differential signal, which the default swing already does).
+     */
     public static Range neededCommonMode(Stage s) {
-        if (s.commonModeRange() != null) {
-            return s.commonModeRange();
-        }
-        if (s.supplyVoltage() == null) {
+        Range source = s.commonModeRange();
+        if (source == null && s.supplyVoltage() == null) {
             return null;
         }
-        double mid = s.supplyVoltage() / 2;
-        return new Range(mid - s.commonModeSwing(), mid + s.commonModeSwing());
+        return switch (s.topology()) {
+            case NON_INVERTING, INVERTING, FOLLOWER, TRANSIMPEDANCE -> source != null ? source
+                    : new Range(s.supplyVoltage() / 2 - s.commonModeSwing(), s.supplyVoltage() / 2 + s.commonModeSwing());
+            case DIFFERENCE -> {
+                if (s.supplyVoltage() == null) {
+                    yield source; // not checked without a supply (headroom says so): kept as stated
+                }
+                double mid = s.supplyVoltage() / 2;
+                double share = s.network().commonModeShare();
+                Range at = source != null ? source : new Range(mid - s.commonModeSwing(), mid + s.commonModeSwing());
+                yield new Range(mid + (at.min() - mid) * share, mid + (at.max() - mid) * share);
+            }
+        };
     }
 
     /**
@@ -117,7 +133,13 @@ public final class Constraints {
     }
 
     static ConstraintResult commonMode(Stage s, Part p, List<String> w) {
-        return headroom(COMMON_MODE, "input common mode", neededCommonMode(s), 0.0, s, p.inputHeadroom(), w);
+        ConstraintResult r = headroom(COMMON_MODE, "input common mode", neededCommonMode(s), 0.0, s, p.inputHeadroom(), w);
+        return switch (s.topology()) {
+            case NON_INVERTING, INVERTING, FOLLOWER, TRANSIMPEDANCE -> r;
+            case DIFFERENCE -> s.supplyVoltage() == null ? r : new ConstraintResult(r.name(), r.ok(), r.detail()
+                    + " (at the pins: the source's common mode x " + Units.format(s.network().commonModeShare(), Dimension.NUMBER, 4)
+                    + " about mid-supply, the reference taken at mid-supply)");
+        };
     }
 
     static ConstraintResult outputSwing(Stage s, Part p, double dc, List<String> w) {

@@ -93,43 +93,55 @@ class HandCheckedBudgetTest {
 
     @Test
     void bridgeAmplifierWithTheTopGradeBipolarPart() throws Exception {
-        // non-inverting, gain 100 with Rf 100 k; Rs 350 Ω + Rp 649 Ω = R+ 999 Ω; -40..85 °C (dT 65 °C)
+        // difference stage: r1 = r3 = 4.99 k, r2 = r4 = 499 k, both legs 175 Ω; -40..85 °C (dT 65 °C).
+        // a = b = 499 k / (4.99 k + 175) = 499 000 / 5 165 = 96.611810; NG = 1 + a = 97.611810 (Franco §2.2 [from memory])
         Budget b = budget("bridge-amp", "prec-bip-01");
-        near(100, b.noiseGain(), "NG");
-        near(2.5e-3, b.term("offset").outputV(), "offset: 100 x 25 µV");
-        // 100 x 0.3 µV/°C x 65 °C = 1.95 mV, under the cap 100 x (45 - 25) µV = 2.0 mV (error-model.md term 2)
-        near(1.95e-3, b.term("drift").outputV(), "drift");
+        near(97.611810, b.noiseGain(), "NG");
+        // matched pairs: signal gain [(1 + a) b/(1 + b) + a]/2 = a = 96.611810; the 6 mV limit is 6 mV / 96.611810
+        // = 62.10421 µV at the bridge
+        near(96.611810, b.stage().sourceGain(), "gain");
+        near(6e-3, b.limitV(), "limit at the output");
+        near(62.10421e-6, b.limitV() / b.stage().sourceGain(), "limit at the bridge");
+        near(2.4402953e-3, b.term("offset").outputV(), "offset: 97.611810 x 25 µV");
+        // 97.611810 x 0.3 µV/°C x 65 °C = 1.9034303 mV, under the cap 97.611810 x (45 - 25) µV = 1.952236 mV
+        near(1.9034303e-3, b.term("drift").outputV(), "drift");
         // over-temperature maxima given: IB 4 nA, IOS 3 nA at the worst temperature.
-        // |NG R+ - Rf| = |99 900 - 100 000| = 100 Ω; NG R+ + Rf = 199 900 Ω:
-        // 100 x 4 nA + 199 900 x 1.5 nA = 0.4 µV + 299.85 µV (nearly the IOS x Rf of a balanced input: Eggleston §6.4)
-        near(300.25e-6, b.term("bias").outputV(), "bias");
-        // 100 x 0.15 V x 10^(-126/20) = 15 x 0.5011872 µV/V
-        near(7.517809e-6, b.term("cmrr").outputV(), "cmrr");
-        // 100 x 0.25 V x 10^(-120/20) = 25 x 1 µV/V (reference-checks §4: 120 dB = 1 µV/V)
-        near(25.0e-6, b.term("psrr").outputV(), "psrr");
-        // 1 V x 100 / (10^(126/20) + 100) = 100 / 1 995 362.3
-        near(50.11621e-6, b.term("open-loop-gain").outputV(), "aol");
-        // 1 V x (1 - 1/sqrt(1 + (10 x 100 / 1 MHz)^2)) = 1 - 1/sqrt(1 + 1e-6)
-        assertEquals(4.999996e-7, b.term("bandwidth").outputV(), 1e-12, "bandwidth");
-        // 1 V x 0.99 x (0.1 % + 10 ppm/°C x 65 °C) = 0.99 x 0.00165
-        near(1.6335e-3, b.term("resistors").outputV(), "resistors");
-        // 100 x 0.3 µV x sqrt(87 660 h / 1000 h) (10 Julian years; √t model: reference-checks §6) = 30 µV x 9.362692
-        // = 280.8808 µV at the typical figure; the worst case takes max-to-sigma 3 x typical (error-model.md
-        // "Missing and typical-only figures"): 842.6423 µV, flagged
-        near(842.6423e-6, b.term("aging").outputV(), "aging");
+        // R+ = 5 165 || 499 k = 5 112.0863 Ω; NG R+ = (5 165 + 499 000)/5 165 x 5 165 x 499 000/504 165 = 499 000 = Rf,
+        // so IB cancels: |NG R+ - Rf| x 4 nA + (NG R+ + Rf) x 1.5 nA = 0 + 998 000 x 1.5 nA = 1.497 mV (Eggleston §6.4)
+        near(1.497e-3, b.term("bias").outputV(), "bias");
+        // common mode: dVcm 0.15 V at the bridge; per pair e = 0.1 % + 10 ppm/°C x 65 °C = 0.00165.
+        // resistors: worst |b(1-e) - a(1+e)|/(1 + b(1-e)) = 2ae/(1 + a - ae) with a = b:
+        //   2 x 96.611810 x 0.00165 = 0.3188190; 1 + 96.611810 - 0.1594095 = 97.452401;
+        //   0.3188190/97.452401 = 3.271535e-3 V/V, x 0.15 V = 490.7303 µV (first order 0.15 x 2e a/(1+a): 489.9 µV)
+        // amplifier: NG x share x dVcm x 10^(-126/20), share b/(1 + b): NG x share = a = 96.611810;
+        //   96.611810 x 0.15 V x 0.5011872e-6 = 7.263091 µV
+        // sum (signs unknown): 497.9934 µV
+        near(497.9934e-6, b.term("cmrr").outputV(), "cmrr: resistors and amplifier");
+        // NG x 0.25 V x 10^(-120/20) = 97.611810 x 0.25 x 1 µV/V (reference-checks §4: 120 dB = 1 µV/V)
+        near(24.402953e-6, b.term("psrr").outputV(), "psrr");
+        // 1 V x NG / (10^(126/20) + NG) = 97.611810 / 1 995 359.9
+        near(48.91940e-6, b.term("open-loop-gain").outputV(), "aol");
+        // 1 V x (1 - 1/sqrt(1 + (10 Hz x 97.611810 / 1 MHz)^2)) = 1 - 1/sqrt(1 + 9.528066e-7)
+        assertEquals(4.764029e-7, b.term("bandwidth").outputV(), 1e-12, "bandwidth");
+        // 1 V x S x (0.1 % + 10 ppm/°C x 65 °C), S = 1 for matched pairs (each pair's error moves G by half of it, and
+        // the two add)
+        near(1.65e-3, b.term("resistors").outputV(), "resistors");
+        // 3 (max-to-sigma) x 97.611810 x 0.3 µV x sqrt(87 660 h / 1000 h) (10 Julian years; √t model: reference-checks
+        // §6) = 87.850629 µV x 9.362692 = 822.5184 µV, flagged
+        near(822.5184e-6, b.term("aging").outputV(), "aging");
         org.junit.jupiter.api.Assertions.assertTrue(b.term("aging").estimated());
-        // first-order filter at 10 Hz (the stage file): fN = (π/2) x 10 Hz = 15.70796 Hz; from 0.1 Hz: white
-        // 15.60796 Hz, ln(157.0796) = 5.056753. Resistors at the hottest 85 °C: 4kT = 4 x 1.380649e-23 x 358.15 K
-        // = 1.977918e-20 (Johnson-Nyquist; k from SI9).
-        // en^2 (15.60796 + 3 x 5.056753) + in^2 (999^2 + 1000^2)(15.60796 + 100 x 5.056753) + 4kT x 1999 x 15.60796
-        // = 64e-18 x 30.77822 + 2.25e-26 x 1.998001e6 x 521.2833 + 1.977918e-20 x 1999 x 15.60796
-        // = 1.969806e-15 + 2.343430e-17 + 6.171165e-16 = 2.610357e-15 -> x 100 -> 5.109165 µV rms (Franco ch. 7
-        // [from memory])
-        near(5.109165e-6, b.noiseRmsV(), "noise rms");
-        // totals with 1 x the typical aging were 6.764625 mV, RSS 3.590731 mV; with 3 x aging:
-        // 6.764625 - 0.280881 + 0.842642; sqrt(3.590731^2 - 0.280881^2 + 0.842642^2)
-        near(7.326386e-3, b.worstCaseV(), "worst-case");
-        near(3.677567e-3, b.rssV(), "rss");
+        // first-order filter at 10 Hz: fN = (π/2) x 10 Hz = 15.70796 Hz; from 0.1 Hz: white 15.60796 Hz,
+        // ln(157.0796) = 5.056753. Resistors at the hottest 85 °C: 4kT = 1.977918e-20 (Johnson-Nyquist; k from SI9).
+        // R+ = R- = 5 112.0863 Ω (the legs count in both):
+        // en^2 (15.60796 + 3 x 5.056753) + in^2 (2 x 5 112.0863^2)(15.60796 + 100 x 5.056753) + 4kT x 2 x 5 112.0863 x 15.60796
+        // = 64e-18 x 30.77822 + 2.25e-26 x 5.226689e7 x 521.2833 + 1.977918e-20 x 10 224.173 x 15.60796
+        // = 1.969806e-15 + 6.130313e-16 + 3.156332e-15 = 5.739169e-15 -> sqrt x 97.611810 = 7.394808 µV rms
+        // (Franco ch. 7 [from memory])
+        near(7.394808e-6, b.noiseRmsV(), "noise rms");
+        // worst case: 2.440295 + 1.903430 + 1.497 + 0.497993 + 0.024403 + 0.048919 + 0.000476 + 1.65 + 0.822518
+        //   + 3.3 x 0.007394808 = 8.909439 mV; RSS of the same ten: 3.933156 mV
+        near(8.909439e-3, b.worstCaseV(), "worst-case");
+        near(3.933156e-3, b.rssV(), "rss");
     }
 
     @Test

@@ -128,7 +128,7 @@ class HostileTextTest {
         assertEquals(ExitCode.OK, r.code(), r.toString());
         assertInert(r);
         assertTrue(r.out().contains("Part       hostile-01  (" + TITLE_SHOWN + ")"), r.out());
-        assertTrue(r.out().contains("br\\x1b[2Jidge.yaml: non-inverting"), r.out());
+        assertTrue(r.out().contains("br\\x1b[2Jidge.yaml: difference"), r.out());
         CliRun json = run("budget", "hostile-01", "--stage", stage.toString(), "--json");
         assertInert(json);
         assertTrue(json.out().contains("br\\u001B[2Jidge.yaml"), json.out());
@@ -139,7 +139,7 @@ class HostileTextTest {
         CliRun text = run("rank", "--stage", stage.toString(), "--top", "100");
         assertEquals(ExitCode.OK, text.code(), text.toString());
         assertInert(text);
-        assertTrue(text.out().startsWith("Stage br\\x1b[2Jidge.yaml: non-inverting"), text.out());
+        assertTrue(text.out().startsWith("Stage br\\x1b[2Jidge.yaml: difference"), text.out());
         assertTrue(text.out().contains("hostile-01"), text.out());
 
         CliRun csv = run("rank", "--stage", stage.toString(), "--csv");
@@ -158,7 +158,7 @@ class HostileTextTest {
         CliRun c = run("compare", "hostile-01", "gp-bip-07", "--stage", stage.toString());
         assertEquals(ExitCode.OK, c.code(), c.toString());
         assertInert(c);
-        assertTrue(c.out().startsWith("Stage br\\x1b[2Jidge.yaml: non-inverting"), c.out());
+        assertTrue(c.out().startsWith("Stage br\\x1b[2Jidge.yaml: difference"), c.out());
         for (String cmd : List.of("bars", "scatter")) {
             List<String> args = new ArrayList<>(List.of(cmd));
             if (cmd.equals("bars")) {

@@ -214,14 +214,15 @@ class RankCommandTest {
 
     @Test
     void aTermTheCatalogLacksIsEstimatedNotZero() {
-        // demo prec-bip-02 gives a long-term drift (0.5 µV per 1000 h, typical), zd-chop-04 gives none. Bridge stage:
-        // NG 100, 10 Julian years = 87 660 h, sqrt(87.66) = 9.362692 (√t model, reference-checks §6).
-        // prec-bip-02: 3 (max-to-sigma) x 100 x 0.5 µV x 9.362692 = 1.404 mV; zd-chop-04: the zero-drift estimate
-        // 1 µV per sqrt(1000 h) (common practice, budget/Assumed) x 100 x 9.362692 = 936.3 µV. Neither is 0 V,
+        // demo prec-bip-02 gives a long-term drift (0.5 µV per 1000 h, typical), zd-chop-04 gives none. Bridge stage
+        // (a difference stage): NG = 1 + 499 k/(4.99 k + 175 ohm) = 97.61181, 10 Julian years = 87 660 h,
+        // sqrt(87.66) = 9.362692 (√t model, reference-checks §6).
+        // prec-bip-02: 3 (max-to-sigma) x 97.61181 x 0.5 µV x 9.362692 = 1.371 mV; zd-chop-04: the zero-drift estimate
+        // 1 µV per sqrt(1000 h) (common practice, budget/Assumed) x 97.61181 x 9.362692 = 913.9 µV. Neither is 0 V,
         // and both are marked as resting on a non-guaranteed figure
         CliRun r = run("compare", "prec-bip-02", "zd-chop-04", "--stage", stage("bridge-amp"));
         String aging = r.outLines().stream().filter(l -> l.startsWith("long-term drift")).findFirst().orElseThrow();
-        assertTrue(aging.matches("long-term drift\\s+1\\.40 mV\\*\\s+936 µV\\*\\s+zd-chop-04.*"), aging);
+        assertTrue(aging.matches("long-term drift\\s+1\\.37 mV\\*\\s+914 µV\\*\\s+zd-chop-04.*"), aging);
         assertFalse(dev.ampsieve.testing.Flat.of(r.out()).contains("0 V only because the catalog lacks the value"), r.out());
     }
 

@@ -66,15 +66,16 @@ class ShellSessionTest {
     void aLoadedStageIsNamedByItsFileUntilItChanges() {
         String stage = catalog.resolve("stages/bridge-amp.yaml").toString();
         String printed = session("load " + stage, "rank --top 2", "set quantity 10", "rank --top 2");
-        assertTrue(printed.contains("Stage bridge-amp.yaml: non-inverting, noise gain 100"), printed);
-        assertTrue(printed.contains("Stage (current stage): non-inverting, noise gain 100"), printed);
+        // the demo bridge is a difference stage: NG = 1 + 499 k/(4.99 k + 175 ohm) = 97.61
+        assertTrue(printed.contains("Stage bridge-amp.yaml: difference, noise gain 97.61"), printed);
+        assertTrue(printed.contains("Stage (current stage): difference, noise gain 97.61"), printed);
     }
 
     @Test
     void aStageGivenOnTheLineWins() {
         String stage = catalog.resolve("stages/bridge-amp.yaml").toString();
         String printed = session("set gain 10", "set limit 1 V", "rank --top 1 --stage " + stage);
-        assertTrue(printed.contains("Stage bridge-amp.yaml: non-inverting, noise gain 100"), printed);
+        assertTrue(printed.contains("Stage bridge-amp.yaml: difference, noise gain 97.61"), printed);
     }
 
     @Test

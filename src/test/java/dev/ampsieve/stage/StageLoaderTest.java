@@ -295,9 +295,10 @@ class StageLoaderTest {
             assertEquals(Limit.Kind.INPUT, tc.limit().kind());
             assertEquals(200.0, tc.noiseGain(), 1e-12);
             assertEquals(8e-3, tc.limitVolts(), 1e-15);
-            // bridge: gain 100 with rf 100 kohm gives rg = rf/99
+            // bridge: a difference stage, r1 = r3 = 4.99 k, r2 = r4 = 499 k, 175 ohm legs; the limit 6 mV at the output
             Stage bridge = StageLoader.load(DIR.resolve("bridge-amp.yaml"));
-            assertEquals(100e3 / 99, Networks.rg(bridge), 1e-12);
+            assertEquals(new Difference(4.99e3, 499e3, 4.99e3, 499e3, 175, 175), bridge.network());
+            assertEquals(6e-3, bridge.limitVolts(), 1e-15);
             assertEquals(Criterion.Kind.YIELD, bridge.criterion().kind());
         }
     }
