@@ -186,9 +186,10 @@ public final class StageKeys {
                             + "rejection, and without common-mode-range the inputs must reach mid-supply +/- it; difference: "
                             + "at the source, where the resistor mismatch also turns it into output error"),
             q("common-mode-range.min", Dimension.VOLTAGE, "mid-supply - common-mode-swing", "0.5 V",
-                    "lowest input voltage needed, volts above the negative rail"),
+                    "lowest input voltage needed, volts above the negative rail (difference: at the source; the pins see "
+                            + "it divided by r4/(r3 + r4) about mid-supply)"),
             q("common-mode-range.max", Dimension.VOLTAGE, "mid-supply + common-mode-swing", "4 V",
-                    "highest input voltage needed, volts above the negative rail"),
+                    "highest input voltage needed, volts above the negative rail (difference: at the source)"),
             q("output-range.min", Dimension.VOLTAGE, "mid-supply - full-scale-output", "0.1 V",
                     "lowest output voltage needed, volts above the negative rail"),
             q("output-range.max", Dimension.VOLTAGE, "mid-supply + full-scale-output", "4.9 V",
