@@ -1,0 +1,4 @@
+/**
+ * Quantities with SI prefixes and units: parsing, printing, dimensions and physical constants; imports nothing.
+ */
+package dev.ampsieve.units;
