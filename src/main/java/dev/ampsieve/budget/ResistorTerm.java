@@ -57,7 +57,12 @@ public final class ResistorTerm implements ErrorTerm {
                 + Units.format(s.ratioTolerance(), Dimension.RATIO) + " + tc "
                 + Units.format(s.ratioTempco(), Dimension.RATIO_DRIFT) + " x "
                 + Units.format(s.deltaT(), Dimension.NUMBER) + " °C)"
-                + (s.topology() == Topology.FOLLOWER ? "; a follower has no gain resistors" : "");
+                + switch (s.topology()) {
+                    case FOLLOWER -> "; a follower has no gain resistors";
+                    case DIFFERENCE -> "; tolerance per pair, r2/r1 and r4/r3";
+                    case TRANSIMPEDANCE -> "; rf's own tolerance: the gain is rf";
+                    case NON_INVERTING, INVERTING -> "";
+                };
         return ErrorTerm.result(this, s, out, at, false, note);
     }
 }
