@@ -14,14 +14,72 @@ import org.junit.jupiter.api.Test;
 class PartDocumentsTest {
 
     @Test
-    void everySchemaNumberHasAValueRule() {
-        for (Part p : FixtureCatalog.parts()) {
-            for (Schema.Numeric n : Schema.NUMERIC) {
-                PartDocuments.value(n.name(), p); // throws for a field without a rule
-            }
-            for (Schema.Interval i : Schema.INTERVALS) {
-                PartDocuments.value(i.min(), p);
-                PartDocuments.value(i.max(), p);
+    void everySchemaNumberIndexesTheValueTyped() {
+        // one part with a different invented value in every field, each expected value written out here
+        // (signed figures are indexed as magnitudes, rejections as the minimum, aging per 1000 h)
+        Part p = part("A").vos(-3e-6, 8e-6).drift(0.05e-6, 0.2e-6).ib(-40e-12, 150e-12).ios(5e-12, 30e-12)
+                .cmrr(96.0, 112.0).psrr(92.0, 108.0).aol(118.0, 130.0).gbw(3.5e6).slew(1.7e6)
+                .noise(11e-9, 7.0, 2e-15, 40.0).supply(2.7, 5.5).temperature(-40, 125).price(1.85).iq(0.9e-3)
+                .channels(2).fchop(150e3).aging(2e-6, 4000 * 3600.0).inputHeadroom(-0.1, 1.5).outputHeadroom(0.05, 0.08)
+                .build();
+        java.util.Map<String, Double> expected = new java.util.HashMap<>();
+        expected.put(Schema.VOS, 8e-6);
+        expected.put("vos.typ", 3e-6);
+        expected.put("vos.max", 8e-6);
+        expected.put("vos.maxtemp", null); // not typed
+        expected.put(Schema.DRIFT, 0.2e-6);
+        expected.put("drift.typ", 0.05e-6);
+        expected.put("drift.max", 0.2e-6);
+        expected.put(Schema.IB, 150e-12);
+        expected.put("ib.typ", 40e-12);
+        expected.put("ib.max", 150e-12);
+        expected.put("ib.maxtemp", null);
+        expected.put(Schema.IOS, 30e-12);
+        expected.put("ios.typ", 5e-12);
+        expected.put("ios.max", 30e-12);
+        expected.put("ios.maxtemp", null);
+        expected.put(Schema.CMRR, 96.0);
+        expected.put("cmrr.min", 96.0);
+        expected.put("cmrr.typ", 112.0);
+        expected.put(Schema.PSRR, 92.0);
+        expected.put("psrr.min", 92.0);
+        expected.put("psrr.typ", 108.0);
+        expected.put(Schema.AOL, 118.0);
+        expected.put("aol.min", 118.0);
+        expected.put("aol.typ", 130.0);
+        expected.put(Schema.GBW, 3.5e6);
+        expected.put(Schema.SLEW, 1.7e6);
+        expected.put(Schema.EN, 11e-9);
+        expected.put("en.corner", 7.0);
+        expected.put(Schema.IN, 2e-15);
+        expected.put("in.corner", 40.0);
+        expected.put(Schema.SUPPLY_MIN, 2.7);
+        expected.put(Schema.SUPPLY_MAX, 5.5);
+        expected.put(Schema.TEMPERATURE_MIN, -40.0);
+        expected.put(Schema.TEMPERATURE_MAX, 125.0);
+        expected.put(Schema.PRICE, 1.85);
+        expected.put("price.quantity", 1000.0);
+        expected.put(Schema.IQ, 0.9e-3);
+        expected.put(Schema.CHANNELS, 2.0);
+        expected.put(Schema.FCHOP, 150e3);
+        expected.put(Schema.AGING, 1e-6); // 2 µV per 4000 h x sqrt(1000/4000)
+        expected.put("long-term-drift.value", 2e-6);
+        expected.put("long-term-drift.per", 4000 * 3600.0);
+        expected.put("input-headroom.low", -0.1);
+        expected.put("input-headroom.high", 1.5);
+        expected.put("output-headroom.low", 0.05);
+        expected.put("output-headroom.high", 0.08);
+        java.util.List<String> names = new java.util.ArrayList<>();
+        Schema.NUMERIC.forEach(n -> names.add(n.name()));
+        Schema.INTERVALS.forEach(i -> names.addAll(java.util.List.of(i.min(), i.max())));
+        for (String name : names) {
+            assertTrue(expected.containsKey(name), "a new index field needs its expected value here: " + name);
+            Double want = expected.get(name);
+            Double got = PartDocuments.value(name, p);
+            if (want == null) {
+                assertNull(got, name);
+            } else {
+                assertEquals(want, got, Math.abs(want) * 1e-12, name);
             }
         }
     }
