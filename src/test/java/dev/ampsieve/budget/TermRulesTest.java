@@ -217,12 +217,15 @@ class TermRulesTest {
         p.noise = new dev.ampsieve.catalog.Noise(10e-9, 5.0, 1e-12, 50.0);
         Stage s = sf.build();
         Budget b = BudgetCalculator.compute(s, p.build());
-        double rms = NoiseModel.outputRms(s, 10e-9, 5, 1e-12, 50, 0.1, Math.PI / 2 * 1e3, 343.15);
-        assertEquals(rms, b.noiseRmsV(), rms * 1e-12);
-        assertEquals(3.3 * rms, b.term("noise").outputV(), rms * 1e-12);
+        // the density NG² [en²(1 + 5/f) + in²(1 + 50/f)(R+² + R-²) + 4kT(R+ + R-)], NG 100, R+ 1 k, R- 990 Ω,
+        // integrated numerically (Simpson's rule on ln f, 2e6 steps, a second method beside the closed form)
+        // from 0.1 Hz to π/2 x 1 kHz: 47.45540 µV rms
+        double rms = 47.45540181e-6;
+        assertEquals(rms, b.noiseRmsV(), rms * 1e-8);
+        assertEquals(3.3 * rms, b.term("noise").outputV(), rms * 1e-8);
         p.gbw = 50e3; // closed-loop pole 500 Hz: the amplifier limits
-        double rms2 = NoiseModel.outputRms(s, 10e-9, 5, 1e-12, 50, 0.1, Math.PI / 2 * 500, 343.15);
-        assertEquals(rms2, BudgetCalculator.compute(s, p.build()).noiseRmsV(), rms2 * 1e-12);
+        double rms2 = 33.92231492e-6; // the same integral to π/2 x 500 Hz
+        assertEquals(rms2, BudgetCalculator.compute(s, p.build()).noiseRmsV(), rms2 * 1e-8);
     }
 
     @Test
