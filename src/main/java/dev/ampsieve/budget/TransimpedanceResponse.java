@@ -206,6 +206,9 @@ public record TransimpedanceResponse(double rf, double cf, double rsh, double ct
         if (g.value(hi) < 0) {
             return Double.NaN;
         }
+        if (g.value(lo) >= 0) {
+            return Math.pow(10, lo); // 1 aF already does: the scan below needs a bracket with g(lo) < 0
+        }
         int n = (int) Math.ceil((hi - lo) * PER_DECADE);
         double prev = lo;
         for (int i = 1; i <= n; i++) {
