@@ -11,6 +11,10 @@ import dev.ampsieve.units.Units;
  * hottest temperature of the range (4kTR grows with T in kelvin), carried in the total as {@code 3.3 x rms}
  * (half the 6.6 x rms peak-to-peak convention: the error stays inside it 99.9 % of the time;
  * Franco, 4th ed., ch. 7 [from memory]). Volts at the output.
+ *
+ * <p>A transimpedance stage's noise gain rises with frequency (the source's capacitance), so its
+ * noise is the numerical integral of {@link TransimpedanceNoise} instead of the closed form; the
+ * other topologies keep {@link NoiseModel}'s flat-gain form.
  */
 public final class NoiseTerm implements ErrorTerm {
     public static final String KEY = "noise";
