@@ -41,6 +41,14 @@ final class Assumed {
      */
     static final double HEADROOM_V = 1.5;
 
+    /**
+     * Input capacitance (common-mode plus differential) when none is given: 20 pF, F (common
+     * practice: general-purpose and precision inputs publish a few pF to about 15 pF, large-area
+     * low-noise JFET inputs 20 pF and more [from memory]). It only enters a transimpedance stage,
+     * where more capacitance raises the noise gain and lowers the phase margin: the large end.
+     */
+    static final double INPUT_CAPACITANCE = 20e-12;
+
     /** One thousand hours, s: the time base of long-term drift figures. */
     static final double THOUSAND_HOURS = 1000 * 3600.0;
 

@@ -10,6 +10,11 @@ import dev.ampsieve.units.Units;
  * of a full-scale sine at fH. The closed loop is a
  * single pole at GBW/NG (Franco, 4th ed., ch. 6; Sedra &amp; Smith, 7th ed., ch. 2
  * [from memory]); valid for a dominant-pole amplifier well below its second pole.
+ *
+ * <p>Transimpedance stage: {@code VFS * |1 - |H(fH)|/|H(0)||} with H the closed-loop
+ * transimpedance of {@link TransimpedanceResponse} (Rf || Cf, the source's Ct, a single-pole
+ * amplifier), exact within that model; peaking above |H(0)| counts as an error too. Referred to
+ * |H(0)| rather than Rf: the DC shortfall of a finite loop gain is term 6's.
  */
 public final class BandwidthTerm implements ErrorTerm {
     public static final String KEY = "bandwidth";
@@ -35,8 +40,34 @@ public final class BandwidthTerm implements ErrorTerm {
         return 1.0 - 1.0 / Math.sqrt(1.0 + x * x);
     }
 
+    /** Transimpedance: |1 - |H(fH)|/|H(0)||, the relative amplitude change at fH. */
+    public static double transimpedanceError(TransimpedanceResponse r, double fH) {
+        return Math.abs(1.0 - r.transimpedanceMagnitude(fH) / r.transimpedanceMagnitude(0));
+    }
+
     @Override
     public TermResult evaluate(Stage s, PartValues v) {
+        return switch (s.topology()) {
+            case NON_INVERTING, INVERTING, FOLLOWER, DIFFERENCE -> singlePole(s, v);
+            case TRANSIMPEDANCE -> transimpedance(s, v);
+        };
+    }
+
+    private TermResult transimpedance(Stage s, PartValues v) {
+        double vfs = s.fullScaleOutput() == null ? 0.0 : s.fullScaleOutput();
+        if (Double.isNaN(v.gbw())) {
+            return ErrorTerm.result(this, s, 0.0, Double.NaN, true, "GBW not given: not counted"); // as NotCounted says
+        }
+        TransimpedanceResponse r = TransimpedanceResponse.of(s, v);
+        double out = vfs * transimpedanceError(r, s.bandHigh());
+        double bw = r.bandwidth();
+        String note = "fH " + Units.format(s.bandHigh(), Dimension.FREQUENCY) + ", signal bandwidth (-3 dB) "
+                + Units.format(bw, Dimension.FREQUENCY);
+        boolean est = v.inputCapacitance().basis() != Basis.GUARANTEED;
+        return ErrorTerm.result(this, s, out, Double.NaN, est, note);
+    }
+
+    private TermResult singlePole(Stage s, PartValues v) {
         double vfs = s.fullScaleOutput() == null ? 0.0 : s.fullScaleOutput();
         if (Double.isNaN(v.gbw())) {
             return ErrorTerm.result(this, s, 0.0, Double.NaN, true, "GBW not given: not counted");

@@ -41,7 +41,96 @@ public final class Constraints {
         out.add(outputSwing(s, p, dcHeadroomV, warnings));
         out.add(slew(s, p, warnings));
         out.add(price(s, p, warnings));
+        out.addAll(speed(s, p));
         return out;
+    }
+
+    // ---------------------------------------------------------------- transimpedance stability and speed
+
+    /** Transimpedance: the loop's phase margin. */
+    public static final String PHASE_MARGIN = "phase-margin";
+    /** Transimpedance: the -3 dB signal bandwidth against band.high. */
+    public static final String SIGNAL_BANDWIDTH = "signal-bandwidth";
+    /**
+     * Least phase margin accepted, degrees: 45° (common practice: below it the step response rings
+     * and the closed loop peaks; Franco, 4th ed., ch. 8; Graeme, <i>Photodiode Amplifiers</i>, 1996,
+     * ch. 2 [from memory]).
+     */
+    public static final double MIN_PHASE_MARGIN = 45.0;
+
+    /** The stability and speed checks a topology needs beyond the others (only a transimpedance stage has them). */
+    private static List<ConstraintResult> speed(Stage s, Part p) {
+        return switch (s.topology()) {
+            case NON_INVERTING, INVERTING, FOLLOWER, DIFFERENCE -> List.of();
+            case TRANSIMPEDANCE -> transimpedance(s, PartValues.of(p, s));
+        };
+    }
+
+    /**
+     * Phase margin at least {@link #MIN_PHASE_MARGIN} and -3 dB signal bandwidth at least band.high,
+     * both from {@link TransimpedanceResponse} (the part's minimum open-loop gain, GBW and input
+     * capacitance, assumed where missing: PartValues warns). A failure names the feedback capacitor
+     * range that meets both, or says none does.
+     */
+    static List<ConstraintResult> transimpedance(Stage s, PartValues v) {
+        if (Double.isNaN(v.gbw())) {
+            return List.of(new ConstraintResult(PHASE_MARGIN, true, "not checked: no GBW in the catalog"),
+                    new ConstraintResult(SIGNAL_BANDWIDTH, true, "not checked: no GBW in the catalog"));
+        }
+        TransimpedanceResponse r = TransimpedanceResponse.of(s, v);
+        double pm = r.phaseMargin();
+        double bw = r.bandwidth();
+        double fH = s.bandHigh();
+        boolean pmOk = pm >= MIN_PHASE_MARGIN;
+        boolean bwOk = bw >= fH;
+        String ct = "Ct " + Units.format(r.ct(), Dimension.CAPACITANCE) + " (source "
+                + Units.format(r.ct() - v.inputCapacitance().bound(), Dimension.CAPACITANCE) + " + input "
+                + Units.format(v.inputCapacitance().bound(), Dimension.CAPACITANCE)
+                + (v.inputCapacitance().basis() != Basis.GUARANTEED ? ", assumed" : "") + ")";
+        String cfNow = "cf " + Units.format(r.cf(), Dimension.CAPACITANCE);
+        String advice = "";
+        if (!pmOk || !bwOk) {
+            double least = r.cfForPhaseMargin(MIN_PHASE_MARGIN);
+            double most = Double.isNaN(least) ? Double.NaN : largestCfFor(r, least, fH);
+            String graeme = "Graeme's estimate sqrt(Ct/(2π rf GBW)) = "
+                    + Units.format(TransimpedanceResponse.graemeCf(r.rf(), r.ct(), r.gbw()), Dimension.CAPACITANCE);
+            if (Double.isNaN(least) || Double.isNaN(most)) {
+                advice = "; no cf gives both " + Units.format(MIN_PHASE_MARGIN, Dimension.NUMBER) + "° and a -3 dB bandwidth of "
+                        + Units.format(fH, Dimension.FREQUENCY) + ": the part's GBW is too low for this rf and source capacitance"
+                        + (Double.isNaN(least) ? "" : " (cf " + Units.format(least, Dimension.CAPACITANCE) + " gives "
+                                + Units.format(MIN_PHASE_MARGIN, Dimension.NUMBER) + "° and "
+                                + Units.format(r.withCf(least).bandwidth(), Dimension.FREQUENCY) + "; " + graeme + ")");
+            } else {
+                advice = "; cf from " + Units.format(least, Dimension.CAPACITANCE) + " to " + Units.format(most, Dimension.CAPACITANCE)
+                        + " gives both (" + graeme + ")";
+            }
+        }
+        String pmText = "needs a phase margin of at least " + Units.format(MIN_PHASE_MARGIN, Dimension.NUMBER) + "° (common practice); "
+                + (Double.isNaN(pm) ? "the loop gain never reaches 1" : "part " + Units.format(pm, Dimension.NUMBER, 3) + "° at the loop crossover "
+                        + Units.format(r.crossover(), Dimension.FREQUENCY))
+                + " with " + cfNow + ", " + ct + (pmOk ? "" : advice);
+        String bwText = "needs a -3 dB signal bandwidth of at least band.high " + Units.format(fH, Dimension.FREQUENCY) + "; part "
+                + Units.format(bw, Dimension.FREQUENCY) + " with " + cfNow + (bwOk ? "" : advice);
+        return List.of(new ConstraintResult(PHASE_MARGIN, pmOk, pmText),
+                new ConstraintResult(SIGNAL_BANDWIDTH, bwOk, bwText));
+    }
+
+    /**
+     * The largest cf, at least {@code least}, whose -3 dB bandwidth still reaches {@code fH} (the
+     * bandwidth falls as cf grows past the one that settles the loop): Brent on log cf; NaN when
+     * even {@code least} is too slow.
+     */
+    private static double largestCfFor(TransimpedanceResponse r, double least, double fH) {
+        double lo = Math.log10(Math.max(least, 1e-18));
+        if (!(r.withCf(Math.pow(10, lo)).bandwidth() >= fH)) {
+            return Double.NaN;
+        }
+        double hi = lo + 6;
+        org.apache.commons.math3.analysis.UnivariateFunction g = x -> Math.log(r.withCf(Math.pow(10, x)).bandwidth() / fH);
+        if (g.value(hi) >= 0) {
+            return Math.pow(10, hi);
+        }
+        return Math.pow(10, new org.apache.commons.math3.analysis.solvers.BrentSolver(1e-10).solve(1000, g, lo, hi));
     }
 
     /**

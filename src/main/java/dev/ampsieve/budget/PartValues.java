@@ -41,6 +41,8 @@ import java.util.List;
  * @param noiseEstimated a noise figure came from {@link Assumed}
  * @param aging          input-referred long-term drift over the stage's service life, V (bound
  *                       = the worst case, typ = one sigma where the catalog's typical figure is used)
+ * @param inputCapacitance the capacitance one input presents (common-mode plus differential), F: the
+ *                       catalog's, else {@link Assumed#INPUT_CAPACITANCE} (basis ASSUMED)
  */
 public record PartValues(
         Part part,
@@ -62,6 +64,7 @@ public record PartValues(
         double inCorner,
         boolean noiseEstimated,
         Figure aging,
+        Figure inputCapacitance,
         List<String> warnings) {
 
     public PartValues {
@@ -213,6 +216,19 @@ public record PartValues(
 
         Figure aging = aging(part.longTermDrift(), stage.serviceLife(), input, sc, k, w);
 
+        Figure cin;
+        if (part.inputCapacitance() != null) {
+            cin = Figure.of(part.inputCapacitance(), Basis.GUARANTEED);
+        } else {
+            cin = Figure.of(Assumed.INPUT_CAPACITANCE, Basis.ASSUMED);
+            if (stage.topology() == dev.ampsieve.stage.Topology.TRANSIMPEDANCE) {
+                // only a transimpedance stage puts the input's capacitance in its noise gain
+                w.add("input-capacitance: not given; " + Units.format(Assumed.INPUT_CAPACITANCE, Dimension.CAPACITANCE)
+                        + " is assumed (common practice, conservative): it adds to the source capacitance in the noise"
+                        + " gain and the stability check; enter the datasheet's common-mode plus differential figure");
+            }
+        }
+
         if (Double.isNaN(ibOt) && exponential(part) && stage.tMax() > Stage.T_REF) {
             double f = Math.pow(2.0, (stage.tMax() - Stage.T_REF) / 10.0);
             w.add("ib: no maximum over temperature; the 25 °C maximum is doubled every 10 °C above 25 °C "
@@ -230,7 +246,7 @@ public record PartValues(
                     + " enter the datasheet's over-temperature maxima");
         }
         return new PartValues(part, vos, vosOt, drift, ib, ios, ibOt, iosOt, ratedHigh, cmrr, psrr, aol, gbw,
-                en, enC, in, inC, noiseEst, aging, w);
+                en, enC, in, inC, noiseEst, aging, cin, w);
     }
 
     private static InputType inputOf(Part part) {

@@ -49,6 +49,7 @@ public final class CatalogKeys {
     public static final String OUTPUT_HEADROOM = "output-headroom";
     public static final String CHOPPING_FREQUENCY = "chopping-frequency";
     public static final String QUIESCENT_CURRENT = "quiescent-current";
+    public static final String INPUT_CAPACITANCE = "input-capacitance";
     public static final String SOURCE = "source";
     public static final String NOTES = "notes";
 
@@ -72,7 +73,7 @@ public final class CatalogKeys {
     /** Top-level keys of a part, template order. */
     public static final List<String> PART_KEYS = List.of(ID, TITLE, ARCHITECTURE, INPUT, FACTORY_TRIM, NULL_PINS,
             CHANNELS, PACKAGES, TAGS, PRICE, SUPPLY, TEMPERATURE, VOS, VOS_DRIFT, IB, IOS, CMRR, PSRR, AOL, GBW, SLEW,
-            NOISE, LONG_TERM_DRIFT, INPUT_HEADROOM, OUTPUT_HEADROOM, CHOPPING_FREQUENCY, QUIESCENT_CURRENT, SOURCE, NOTES);
+            NOISE, LONG_TERM_DRIFT, INPUT_HEADROOM, OUTPUT_HEADROOM, CHOPPING_FREQUENCY, QUIESCENT_CURRENT, INPUT_CAPACITANCE, SOURCE, NOTES);
 
     /** Keys a part cannot do without. {@code vos} needs typ or max; range sections need both ends. */
     public static final List<String> REQUIRED = List.of(ID, ARCHITECTURE, INPUT, VOS, GBW, SUPPLY, TEMPERATURE, PRICE);
@@ -137,6 +138,7 @@ public final class CatalogKeys {
         r.headroom(OUTPUT_HEADROOM, Part::outputHeadroom);
         r.put(CHOPPING_FREQUENCY, Dimension.FREQUENCY, Part::choppingFrequency);
         r.put(QUIESCENT_CURRENT, Dimension.CURRENT, Part::quiescentCurrent);
+        r.put(INPUT_CAPACITANCE, Dimension.CAPACITANCE, Part::inputCapacitance);
         QUANTITIES = Collections.unmodifiableMap(r.dimensions);
         GETTERS = Collections.unmodifiableMap(r.getters);
 
@@ -198,6 +200,8 @@ public final class CatalogKeys {
                 "a chopping clock cannot be faster than the fastest amplifier's gain-bandwidth"));
         b.put(QUIESCENT_CURRENT, new Bounds(NONE, 1, NONE, 100, false,
                 "even power amplifiers draw well under an ampere at rest"));
+        b.put(INPUT_CAPACITANCE, new Bounds(0.1e-12, 100e-12, 1e-15, 100e-9, false,
+                "an amplifier's input pins are a few pF; 100 nF is a discrete capacitor, not a pin"));
         BOUNDS = Collections.unmodifiableMap(b);
     }
 
@@ -242,7 +246,8 @@ public final class CatalogKeys {
             Map.entry(path(OUTPUT_HEADROOM, LOW), "50 mV"),
             Map.entry(path(OUTPUT_HEADROOM, HIGH), "50 mV"),
             Map.entry(CHOPPING_FREQUENCY, "100 kHz"),
-            Map.entry(QUIESCENT_CURRENT, "1 mA"));
+            Map.entry(QUIESCENT_CURRENT, "1 mA"),
+            Map.entry(INPUT_CAPACITANCE, "7 pF"));
 
     /**
      * A well-formed value for the quantity at {@code path} (a list prefix such as {@code parts[2].}

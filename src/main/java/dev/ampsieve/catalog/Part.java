@@ -11,6 +11,8 @@ import java.util.List;
  *
  * @param supply      total supply voltage range (V+ minus V-), volts
  * @param temperature rated ambient range, °C
+ * @param inputCapacitance the capacitance one input presents: common-mode plus differential, F; null
+ *                    when not given (a transimpedance budget then assumes a conservative value)
  * @param where       file and line the part was read from, for messages and reports
  */
 public record Part(
@@ -41,6 +43,7 @@ public record Part(
         Headroom outputHeadroom,
         Double choppingFrequency,
         Double quiescentCurrent,
+        Double inputCapacitance,
         String source,
         String notes,
         Located where) {

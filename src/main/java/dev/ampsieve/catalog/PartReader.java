@@ -15,6 +15,7 @@ import static dev.ampsieve.catalog.CatalogKeys.IB;
 import static dev.ampsieve.catalog.CatalogKeys.ID;
 import static dev.ampsieve.catalog.CatalogKeys.IN;
 import static dev.ampsieve.catalog.CatalogKeys.INPUT;
+import static dev.ampsieve.catalog.CatalogKeys.INPUT_CAPACITANCE;
 import static dev.ampsieve.catalog.CatalogKeys.INPUT_HEADROOM;
 import static dev.ampsieve.catalog.CatalogKeys.IN_CORNER;
 import static dev.ampsieve.catalog.CatalogKeys.IOS;
@@ -162,6 +163,7 @@ final class PartReader {
         Headroom outHead = readHeadroom(OUTPUT_HEADROOM);
         Double chop = quantity(part, null, CHOPPING_FREQUENCY);
         Double iq = quantity(part, null, QUIESCENT_CURRENT);
+        Double cin = quantity(part, null, INPUT_CAPACITANCE);
         String source = f.text(part, prefix, SOURCE);
         String notes = f.text(part, prefix, NOTES);
 
@@ -178,7 +180,7 @@ final class PartReader {
         Part p = new Part(id, title, Architecture.of(arch), InputType.of(input),
                 trim == null ? FactoryTrim.NONE : FactoryTrim.of(trim),
                 nullPins != null && nullPins, channels == null ? 1 : channels, packages, tags, price, supply,
-                temperature, vos, vosDrift, ib, ios, cmrr, psrr, aol, gbw, slew, noise, ltd, inHead, outHead, chop, iq,
+                temperature, vos, vosDrift, ib, ios, cmrr, psrr, aol, gbw, slew, noise, ltd, inHead, outHead, chop, iq, cin,
                 source, notes, part.at());
         return new Result(prefix, id, idAt, p, problems);
     }
@@ -484,6 +486,8 @@ final class PartReader {
         positive(path(LONG_TERM_DRIFT, PER), "write the time the drift figure is given for, for example '1000 h'");
         positive(CHOPPING_FREQUENCY, "write the chopping or auto-zero clock, for example '100 kHz'");
         positive(QUIESCENT_CURRENT, "write the supply current, for example '1.5 mA'");
+        positive(INPUT_CAPACITANCE, "write the common-mode plus differential input capacitance, for example '7 pF';"
+                + " leave the key out when unknown");
     }
 
     private void checkOrder() {

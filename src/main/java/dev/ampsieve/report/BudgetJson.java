@@ -32,6 +32,9 @@ public final class BudgetJson {
         o.put("topology", b.stage().topology().key());
         put(o, "noiseGain", b.noiseGain());
         put(o, "signalGain", b.stage().signalGain());
+        if (b.stage().topology() == dev.ampsieve.stage.Topology.TRANSIMPEDANCE) {
+            put(o, "signalGainOhms", b.stage().signalGain()); // -Rf: the signal gain named with its unit, V/A
+        }
         o.put("criterion", b.stage().criterion().toString());
         ArrayNode terms = o.putArray("terms");
         for (TermResult t : b.terms()) {

@@ -127,6 +127,7 @@ public final class PartDocuments {
             case Schema.TEMPERATURE_MAX -> p.temperature() == null ? null : p.temperature().max();
             case Schema.PRICE -> p.price() == null ? null : p.price().unit(); // the lowest-quantity break: no stage here
             case Schema.IQ -> p.quiescentCurrent();
+            case Schema.CIN -> p.inputCapacitance();
             case Schema.CHANNELS -> p.channels() > 0 ? (double) p.channels() : null;
             case Schema.FCHOP -> p.choppingFrequency();
             case Schema.AGING -> p.longTermDrift() == null || p.longTermDrift().per() <= 0 ? null

@@ -26,7 +26,7 @@ public final class Schema {
      * Stored in each commit beside the catalog fingerprint; any change to the fields or to how
      * a value is derived must change it so that existing on-disk indexes rebuild.
      */
-    public static final String VERSION = "2";
+    public static final String VERSION = "3";
 
     // ------------------------------------------------------------ identity and words
 
@@ -117,6 +117,7 @@ public final class Schema {
     public static final String TEMPERATURE_MAX = "temperature.max";
     public static final String PRICE = "price";
     public static final String IQ = "iq";
+    public static final String CIN = "cin";
     public static final String CHANNELS = "channels";
     public static final String FCHOP = "fchop";
     public static final String AGING = "aging";
@@ -157,6 +158,7 @@ public final class Schema {
             new Numeric(TEMPERATURE_MAX, Dimension.TEMPERATURE, "upper end of the rated ambient range"),
             new Numeric(PRICE, Dimension.NUMBER, "unit price in the catalog's currency"),
             new Numeric(IQ, Dimension.CURRENT, "quiescent current per amplifier"),
+            new Numeric(CIN, Dimension.CAPACITANCE, "input capacitance, common-mode plus differential"),
             new Numeric(CHANNELS, Dimension.NUMBER, "amplifiers per package"),
             new Numeric(FCHOP, Dimension.FREQUENCY, "chopping or auto-zero frequency"),
             new Numeric(AGING, Dimension.VOLTAGE, "long-term offset change over 1000 h (scaled with the square root of time)"),
@@ -218,6 +220,7 @@ public final class Schema {
         m.put("price.currency", CURRENCY);
         m.put("chopping-frequency", FCHOP);
         m.put("quiescent-current", IQ);
+        m.put("input-capacitance", CIN);
         m.put("long-term-drift", AGING);
         return m;
     }

@@ -85,6 +85,7 @@ public final class Columns {
         }
         u.put("chopping-frequency", "kHz");
         u.put("quiescent-current", "mA");
+        u.put("input-capacitance", "pF");
         UNITS = Collections.unmodifiableMap(u);
 
         List<Column> all = new ArrayList<>();
@@ -129,6 +130,7 @@ public final class Columns {
         a.put("encorner", "noise.en-corner");
         a.put("incorner", "noise.in-corner");
         a.put("iq", "quiescent-current");
+        a.put("cin", "input-capacitance");
         a.put("slewrate", "slew");
         a.put("gainbandwidth", "gbw");
         ALIASES = Collections.unmodifiableMap(a);

@@ -115,6 +115,7 @@ class CatalogBoundsTest {
         "output-headroom.high     | 2.1 kV       | 2.10 kV is above 2.00 kV",
         "chopping-frequency       | 1 THz        | 1.00 THz is above 100 GHz",
         "quiescent-current        | 200 A        | 200 A is above 100 A",
+        "input-capacitance        | 1 uF         | 1.00 µF is above 100 nF",
         "vos.max                  | 1e308 V      | 1.00e+308 V is above 1.00 V"})
     void aValueNoOpAmpHasIsAnErrorWithItsPlaceAndFix(String path, String value, String message) throws Exception {
         Object[] r = replaced(path, value);

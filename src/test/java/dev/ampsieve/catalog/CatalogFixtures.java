@@ -111,6 +111,7 @@ final class CatalogFixtures {
               high: 0.25 V
             chopping-frequency: 150 kHz
             quiescent-current: 1.8 mA
+            input-capacitance: 7 pF
             source: invented for tests
             notes: nothing real
             """;

@@ -96,6 +96,7 @@ class CatalogLoaderTest {
         }
         assertEquals(150e3, CatalogKeys.value(p, "chopping-frequency"), 1e-9);
         assertEquals(1.8e-3, CatalogKeys.value(p, "quiescent-current"), 1e-15);
+        assertEquals(7e-12, CatalogKeys.value(p, "input-capacitance"), 1e-24);
         assertEquals(0.3e-6, p.longTermDrift().value(), 1e-18);
         assertEquals(1000 * 3600.0, p.longTermDrift().per(), 1e-6);
         assertEquals(new Headroom(1.5, -0.1), p.inputHeadroom());

@@ -30,8 +30,8 @@ class CatalogFieldSearchTest {
                 part("QA-1").factoryTrim(FactoryTrim.LASER).nullPins(true).notes("settles in 2 us").source("sheet rev B")
                         .inputHeadroom(0.1, 1.5).outputHeadroom(0.05, 0.05).aging(5e-6, 1000 * 3600.0).build(),
                 part("QA-2").factoryTrim(FactoryTrim.FUSE).notes("low power").source("sheet rev C")
-                        .inputHeadroom(-0.1, -0.1).build(),
-                part("QA-3").inputHeadroom(0.5, 0.5).build());
+                        .inputHeadroom(-0.1, -0.1).inputCapacitance(18e-12).build(),
+                part("QA-3").inputHeadroom(0.5, 0.5).inputCapacitance(6e-12).build());
         index = PartIndex.inMemory(new Catalog(Path.of("no-such-folder"), parts, List.of(), 1));
     }
 
@@ -68,6 +68,9 @@ class CatalogFieldSearchTest {
         "long-term-drift.per=1000h           | QA-1",
         "price.quantity=1000                 | QA-1 QA-2 QA-3",
         "currency:usd                        | QA-1 QA-2 QA-3",
+        // input capacitance: 18 pF on QA-2, 6 pF on QA-3, none on QA-1 (a missing value matches no comparison)
+        "input-capacitance<10pF              | QA-3",
+        "cin>=10pF                           | QA-2",
     })
     void matches(String query, String expected) throws Exception {
         Set<String> want = expected.isBlank() ? Set.of() : new TreeSet<>(List.of(expected.strip().split("\\s+")));

@@ -43,6 +43,7 @@ public final class PartBuilder {
     private Headroom outputHeadroom = new Headroom(1.0, 1.0);
     private Double fchop;
     private Double iq;
+    private Double cin;
     private String notes = "";
 
     private PartBuilder(String id) {
@@ -83,6 +84,7 @@ public final class PartBuilder {
     public PartBuilder outputHeadroom(double low, double high) { outputHeadroom = new Headroom(low, high); return this; }
     public PartBuilder fchop(double v) { fchop = v; return this; }
     public PartBuilder iq(double v) { iq = v; return this; }
+    public PartBuilder inputCapacitance(Double v) { cin = v; return this; }
     public PartBuilder notes(String v) { notes = v; return this; }
     public PartBuilder nullPins(boolean v) { nullPins = v; return this; }
     public PartBuilder source(String v) { source = v; return this; }
@@ -92,6 +94,6 @@ public final class PartBuilder {
     public Part build() {
         return new Part(id, title, architecture, input, factoryTrim, nullPins, channels, packages, tags, price, supply,
                 temperature, vos, drift, ib, ios, cmrr, psrr, aol, gbw, slew, noise, aging, inputHeadroom,
-                outputHeadroom, fchop, iq, source, notes, new Located(Path.of("fixture.yaml"), 1, 1));
+                outputHeadroom, fchop, iq, cin, source, notes, new Located(Path.of("fixture.yaml"), 1, 1));
     }
 }
