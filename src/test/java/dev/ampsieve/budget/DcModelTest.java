@@ -70,6 +70,10 @@ class DcModelTest {
         // 50 µV / 11 k (from the grounded source through Rg + Rs) + (Vout + 50 µV) / 100 k = IB- = 30 nA, so
         // Vout + 50 µV = 100 k x (30 nA - 4.545454... nA) = 2.5454545... mV: Vout = 2.4954545... mV
         assertEquals(2.49545454545e-3, DcModel.outputError(inv, 50e-6, 20e-9, 30e-9), 1e-14);
+        // follower with a feedback resistor and a source resistance
+        StageFixture g = StageFixture.follower();
+        g.rf = 10e3;
+        g.rs = 10e3;
         // by hand: the + pin at -1 nA x 10 k = -10 µV, the - pin (and the amplifier's own +) at 1 mV - 10 µV = 990 µV,
         // and the output above it by IB- Rf = 2 nA x 10 k = 20 µV: 1.010 mV
         assertEquals(1.010e-3, DcModel.outputError(g.build(), 1e-3, 1e-9, 2e-9), 1e-15);
