@@ -21,7 +21,7 @@ class PartDocumentsTest {
                 .cmrr(96.0, 112.0).psrr(92.0, 108.0).aol(118.0, 130.0).gbw(3.5e6).slew(1.7e6)
                 .noise(11e-9, 7.0, 2e-15, 40.0).supply(2.7, 5.5).temperature(-40, 125).price(1.85).iq(0.9e-3)
                 .channels(2).fchop(150e3).aging(2e-6, 4000 * 3600.0).inputHeadroom(-0.1, 1.5).outputHeadroom(0.05, 0.08)
-                .build();
+                .inputCapacitance(7.5e-12).build();
         java.util.Map<String, Double> expected = new java.util.HashMap<>();
         expected.put(Schema.VOS, 8e-6);
         expected.put("vos.typ", 3e-6);
@@ -69,6 +69,7 @@ class PartDocumentsTest {
         expected.put("input-headroom.high", 1.5);
         expected.put("output-headroom.low", 0.05);
         expected.put("output-headroom.high", 0.08);
+        expected.put(Schema.CIN, 7.5e-12);
         java.util.List<String> names = new java.util.ArrayList<>();
         Schema.NUMERIC.forEach(n -> names.add(n.name()));
         Schema.INTERVALS.forEach(i -> names.addAll(java.util.List.of(i.min(), i.max())));
