@@ -42,7 +42,8 @@ public final class BudgetJson {
             n.put("key", t.key());
             n.put("label", t.label());
             put(n, "outputV", t.outputV());
-            put(n, "inputV", t.inputV());
+            // at the signal source: amperes for a transimpedance stage, named so
+            put(n, Figures.inputDimension(b.stage()) == dev.ampsieve.units.Dimension.CURRENT ? "inputA" : "inputV", t.inputV());
             put(n, "shareOfLimit", b.limitV() > 0 ? t.outputV() / b.limitV() : Double.NaN);
             put(n, "worstAtC", t.worstAtC());
             n.put("estimated", t.estimated());
