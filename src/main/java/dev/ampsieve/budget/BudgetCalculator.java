@@ -24,11 +24,14 @@ public final class BudgetCalculator {
     /** Every error term, in the order of error-model.md. Add a new term here. */
     public static final List<ErrorTerm> TERMS = List.of(
             new OffsetTerm(), new DriftTerm(), new BiasTerm(), new CmrrTerm(), new PsrrTerm(),
-            new OpenLoopGainTerm(), new BandwidthTerm(), new ResistorTerm(), new AgingTerm(), new NoiseTerm());
+            new OpenLoopGainTerm(), new BandwidthTerm(), new ResistorTerm(), new AgingTerm(), new NoiseTerm(),
+            // board-level: 0 V unless the stage names them
+            new ThermalEmfTerm(), new LeakageTerm());
 
     /** Keys of the terms that stay at their limits in the Monte Carlo (not drawn per unit). */
     private static final Set<String> FIXED_IN_YIELD = Set.of(
-            CmrrTerm.KEY, PsrrTerm.KEY, OpenLoopGainTerm.KEY, BandwidthTerm.KEY, NoiseTerm.KEY);
+            CmrrTerm.KEY, PsrrTerm.KEY, OpenLoopGainTerm.KEY, BandwidthTerm.KEY, NoiseTerm.KEY,
+            ThermalEmfTerm.KEY, LeakageTerm.KEY);
 
     /** Chopping frequency should be at least this many times the band edge (common practice). */
     static final double CHOP_MARGIN = 10.0;
@@ -102,6 +105,11 @@ public final class BudgetCalculator {
     /** Whether {@code t} counts toward the error: DC terms of an AC-coupled stage count only toward headroom. */
     public static boolean counts(Stage stage, ErrorTerm t) {
         return !(stage.acCoupled() && t.dc());
+    }
+
+    /** The kind of the term with {@code key}; {@link TermKind#PART} for a key no term has. */
+    public static TermKind kindOf(String key) {
+        return TERMS.stream().filter(t -> t.key().equals(key)).findFirst().map(ErrorTerm::kind).orElse(TermKind.PART);
     }
 
     /** Same, by key. */

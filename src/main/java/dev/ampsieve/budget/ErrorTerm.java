@@ -20,6 +20,11 @@ public interface ErrorTerm {
     /** True for static (DC) terms, which an AC-coupled stage counts only toward headroom. */
     boolean dc();
 
+    /** Where the term comes from; the part's own figures unless a term says otherwise. */
+    default TermKind kind() {
+        return TermKind.PART;
+    }
+
     /** Evaluates the term for one part (its values already resolved) in one stage. */
     TermResult evaluate(Stage stage, PartValues values);
 

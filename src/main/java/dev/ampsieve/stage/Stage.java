@@ -27,6 +27,7 @@ import dev.ampsieve.yaml.Located;
  * @param quantity          build quantity (for price)
  * @param maxPrice          price ceiling per unit, null for none
  * @param acCoupled         DC terms only count toward headroom, not toward the error
+ * @param board             board-level error sources (thermal EMF, leakage); {@link Board#NONE} when none is named
  * @param where             the file the stage came from (null when typed in)
  */
 public record Stage(
@@ -55,6 +56,7 @@ public record Stage(
         int quantity,
         Double maxPrice,
         boolean acCoupled,
+        Board board,
         Located where) {
 
     /** Reference temperature of datasheet 25 °C columns and of a one-point trim. */
@@ -67,6 +69,7 @@ public record Stage(
     public static final int MAX_FILTER_ORDER = 8;
 
     public Stage {
+        board = board == null ? Board.NONE : board;
         if (filterOrder != null && (filterOrder < NO_FILTER || filterOrder > MAX_FILTER_ORDER)) {
             throw new IllegalArgumentException("filter order " + filterOrder + " outside 0.." + MAX_FILTER_ORDER);
         }
@@ -178,6 +181,7 @@ public record Stage(
         private int quantity;
         private Double maxPrice;
         private boolean acCoupled;
+        private Board board;
         private Located where;
 
         private Builder(Stage s) {
@@ -206,6 +210,7 @@ public record Stage(
             quantity = s.quantity;
             maxPrice = s.maxPrice;
             acCoupled = s.acCoupled;
+            board = s.board;
             where = s.where;
         }
 
@@ -341,6 +346,11 @@ public record Stage(
             return this;
         }
 
+        public Builder board(Board board) {
+            this.board = board;
+            return this;
+        }
+
         public Builder acCoupled(boolean acCoupled) {
             this.acCoupled = acCoupled;
             return this;
@@ -355,7 +365,7 @@ public record Stage(
             return new Stage(network, tMin, tMax, supplyVoltage,
                     supplyVariation, commonModeSwing, commonModeRange, outputRange, bandLow, bandHigh, filterOrder,
                     fullScaleOutput, ratioTolerance, ratioTempco, serviceLife, limit, criterion, maxToSigma, trials,
-                    maxTrials, seed, trim, quantity, maxPrice, acCoupled, where);
+                    maxTrials, seed, trim, quantity, maxPrice, acCoupled, board, where);
         }
     }
 }

@@ -202,6 +202,23 @@ public final class StageKeys {
                     "ratio change with temperature; a trim at 25 C cannot remove it"),
             q("service-life", Dimension.TIME, "0 h (long-term drift not counted)", "10 y",
                     "long-term offset drift grows with the square root of operating time"),
+            k("thermal-emf.junctions", Kind.INTEGER, List.of(), "0 (thermal EMF not counted)", "2",
+                    "board-level: unpaired junctions of dissimilar metals in the input path (a connector, a relay, solder to"
+                            + " a lead frame); each adds seebeck x gradient in series with the input"),
+            q("thermal-emf.seebeck", Dimension.VOLTAGE_DRIFT, "required with junctions", "3 uV/C",
+                    "volts per degree of one junction; common practice: copper to copper under 0.2 uV/C, copper to "
+                            + "tin-lead solder 1 to 3 uV/C, copper to a Kovar lead frame about 40 uV/C, oxidised copper up to "
+                            + "1 mV/C"),
+            q("thermal-emf.gradient", Dimension.TEMPERATURE, "required with junctions", "0.5 C",
+                    "the temperature difference across the junctions (a warm regulator or part beside them)"),
+            q("leakage.resistance", Dimension.RESISTANCE, "none (leakage not counted)", "10 Gohm",
+                    "board-level: surface leakage from a nearby trace into the high-impedance input (board, flux residue,"
+                            + " humidity); its current adds to that input's bias current"),
+            q("leakage.voltage", Dimension.VOLTAGE, "required with resistance", "12 V",
+                    "the potential of that trace relative to the node"),
+            k("leakage.input", Kind.CHOICE, List.of("plus", "minus"),
+                    "plus (non-inverting, follower, difference); minus (inverting, transimpedance)", "plus",
+                    "the input the leakage reaches: the high-impedance node"),
             k("criterion", Kind.CRITERION, CRITERIA, "worst-case", "yield 99.9 %",
                     "worst-case sum, root-sum-square, or the share of built units that must pass"),
             k("max-to-sigma", Kind.NUMBER, List.of(), "3", "3",
@@ -235,7 +252,7 @@ public final class StageKeys {
 
     /** Blocks: top-level keys whose value is a mapping of their own. */
     public static final Set<String> SECTIONS = Set.of("temperature", "supply", "common-mode-range", "output-range",
-            "band", "resistor-ratio", "trim");
+            "band", "resistor-ratio", "trim", "thermal-emf", "leakage");
 
     /** The key at {@code path}, or null. */
     public static Key get(String path) {

@@ -95,6 +95,12 @@ public final class StageLoader {
 
     /** Above this gain a warning (above {@link #MAX_GAIN} an error): loop gain runs short even with a good part. */
     static final double WARN_GAIN = 1e5;
+    /** Most unpaired junctions a stage may name: beyond it the input path is a wiring harness, not a board. */
+    static final int MAX_JUNCTIONS = 100;
+    /** Largest thermoelectric coefficient: an oxidised copper contact reaches about 1 mV/°C (common practice). */
+    static final double MAX_SEEBECK = 2e-3;
+    /** Largest temperature difference across input junctions on one board. */
+    static final double MAX_GRADIENT = 50.0;
     /** Largest shunt resistance of a transimpedance source: beyond it only the insulation decides. */
     static final double MAX_SHUNT = 1e15;
     /** Largest capacitance at a transimpedance input or in its feedback. */
@@ -318,11 +324,12 @@ public final class StageLoader {
             Double maxPrice = positive(m, "", "max-price", Dimension.NUMBER);
             money(m, "", "max-price", maxPrice);
             Boolean ac = f.bool(m, "", "ac-coupled");
+            Board board = board(m, network.topology());
 
             Stage stage = new Stage(network, tMin, tMax, supplyVoltage, supplyVariation, commonModeSwing,
                     cmRange, outRange, bandLow, bandHigh, filterOrder, fullScale, tolerance, tempco, life, limit, criterion, maxToSigma,
                     n, cap, seed != null ? seed : StageKeys.DEFAULT_SEED, trim,
-                    quantity != null ? quantity : StageKeys.DEFAULT_QUANTITY, maxPrice, ac != null && ac,
+                    quantity != null ? quantity : StageKeys.DEFAULT_QUANTITY, maxPrice, ac != null && ac, board,
                     m.at());
             if (limit != null && !f.hasErrors()) {
                 limitSize(m, stage);
@@ -951,6 +958,64 @@ public final class StageLoader {
                     near != null ? "did you mean '" + (near.equals("yield") ? "yield 99.9 %" : near) + "'?"
                             : "write 'worst-case', 'rss' or 'yield 99.9 %'");
             return Criterion.WORST_CASE;
+        }
+
+        /** thermal-emf and leakage: each off unless its block is written, and then complete. */
+        private Board board(Node.Mapping m, Topology topology) {
+            int junctions = 0;
+            double seebeck = 0;
+            double gradient = 0;
+            Node.Mapping emf = section(m, "thermal-emf");
+            if (emf != null) {
+                Integer n = f.integer(emf, "thermal-emf", "junctions", 0, MAX_JUNCTIONS);
+                Double s = nonNegativeOrNull(emf, "thermal-emf", "seebeck", Dimension.VOLTAGE_DRIFT);
+                Double g = nonNegativeOrNull(emf, "thermal-emf", "gradient", Dimension.TEMPERATURE);
+                for (String key : List.of("junctions", "seebeck", "gradient")) {
+                    if (!present(emf, key)) {
+                        f.error(emf.at(), "thermal-emf." + key, "missing: thermal EMF needs junctions, seebeck and gradient",
+                                "add '" + key + ": " + StageKeys.get("thermal-emf." + key).example() + "' ("
+                                        + StageKeys.get("thermal-emf." + key).why() + ")");
+                    }
+                }
+                if (s != null && s > MAX_SEEBECK) {
+                    f.error(Fields.where(emf, "seebeck"), "thermal-emf.seebeck", Units.format(s, Dimension.VOLTAGE_DRIFT)
+                            + " is above " + Units.format(MAX_SEEBECK, Dimension.VOLTAGE_DRIFT) + ", more than an oxidised copper"
+                            + " contact (about 1 mV/C)", "check the prefix: write microvolts per degree, such as '3 uV/C'");
+                }
+                if (g != null && g > MAX_GRADIENT) {
+                    f.error(Fields.where(emf, "gradient"), "thermal-emf.gradient", Units.format(g, Dimension.TEMPERATURE)
+                            + " is above " + Units.format(MAX_GRADIENT, Dimension.TEMPERATURE) + " between junctions a few"
+                            + " millimetres apart", "write the temperature difference across the junctions, such as '0.5 C'");
+                }
+                junctions = n == null ? 0 : n;
+                seebeck = s == null ? 0 : s;
+                gradient = g == null ? 0 : g;
+            }
+            double rLeak = Double.POSITIVE_INFINITY;
+            double vLeak = 0;
+            Board.Input input = Board.defaultInput(topology);
+            Node.Mapping leak = section(m, "leakage");
+            if (leak != null) {
+                Double r = positive(leak, "leakage", "resistance", Dimension.RESISTANCE);
+                Double v = f.quantity(leak, "leakage", "voltage", Dimension.VOLTAGE);
+                for (String key : List.of("resistance", "voltage")) {
+                    if (!present(leak, key)) {
+                        f.error(leak.at(), "leakage." + key, "missing: leakage needs the resistance and the voltage across it",
+                                "add '" + key + ": " + StageKeys.get("leakage." + key).example() + "'");
+                    }
+                }
+                if (v != null && Math.abs(v) > MAX_VOLTAGE) {
+                    f.error(Fields.where(leak, "voltage"), "leakage.voltage", Units.format(v, Dimension.VOLTAGE) + " is above "
+                            + Units.format(MAX_VOLTAGE, Dimension.VOLTAGE), "write the potential of the nearby trace relative to the node");
+                }
+                String which = f.choice(leak, "leakage", "input", List.of("plus", "minus"));
+                if (which != null) {
+                    input = which.equals("plus") ? Board.Input.PLUS : Board.Input.MINUS;
+                }
+                rLeak = r == null ? Double.POSITIVE_INFINITY : r;
+                vLeak = v == null ? 0 : v;
+            }
+            return new Board(junctions, seebeck, gradient, rLeak, vLeak, input);
         }
 
         private Trim trim(Node.Mapping m, double tMin, double tMax) {

@@ -284,6 +284,17 @@ public final class StageWriter {
             a.put("max-price", exact(s.maxPrice(), Dimension.NUMBER));
         }
         a.put("ac-coupled", String.valueOf(s.acCoupled()));
+        Board b = s.board();
+        if (b.thermalEmf()) {
+            a.put("thermal-emf.junctions", String.valueOf(b.junctions()));
+            a.put("thermal-emf.seebeck", exact(b.seebeck(), Dimension.VOLTAGE_DRIFT));
+            a.put("thermal-emf.gradient", exact(b.gradient(), Dimension.TEMPERATURE));
+        }
+        if (b.leakage()) {
+            a.put("leakage.resistance", exact(b.leakageResistance(), Dimension.RESISTANCE));
+            a.put("leakage.voltage", exact(b.leakageVoltage(), Dimension.VOLTAGE));
+            a.put("leakage.input", b.leakageInput().key());
+        }
         return a;
     }
 
@@ -325,6 +336,7 @@ public final class StageWriter {
             case CURRENT -> engineering(v, d, "A");
             case RESISTANCE -> engineering(v, d, "ohm");
             case CAPACITANCE -> engineering(v, d, "F");
+            case VOLTAGE_DRIFT -> engineering(v, d, "V/C");
             case FREQUENCY -> engineering(v, d, "Hz");
             case TEMPERATURE -> plain(v) + " C";
             case RATIO -> exact(v, d, "%");

@@ -1,5 +1,6 @@
 package dev.ampsieve.testing;
 
+import dev.ampsieve.stage.Board;
 import dev.ampsieve.catalog.Range;
 import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.stage.Limit;
@@ -56,6 +57,6 @@ public final class StageBuilder {
 
     public Stage build() {
         return new Stage(Networks.of(topology, rf, rg, rs, 0), tMin, tMax, supply, 0, 0, (Range) null, (Range) null, 0.1, bandHigh,
-                filterOrder, fullScale, ratioTolerance, 0, 0, limit, criterion, 3, 2000, maxTrials, 1L, trim, quantity, maxPrice, false, null);
+                filterOrder, fullScale, ratioTolerance, 0, 0, limit, criterion, 3, 2000, maxTrials, 1L, trim, quantity, maxPrice, false, Board.NONE, null);
     }
 }
