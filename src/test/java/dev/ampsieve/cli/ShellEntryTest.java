@@ -1,5 +1,6 @@
 package dev.ampsieve.cli;
 
+import dev.ampsieve.failure.ExitCode;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -13,7 +14,7 @@ class ShellEntryTest {
     void withoutAConsoleNoCommandPrintsTheUsage() {
         assertNull(System.console(), "tests run without a console");
         CliRun r = CliRun.of();
-        assertEquals(ExitCode.OK, r.code(), r.toString());
+        assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         assertTrue(r.out().contains("Usage: ampsieve"), r.out());
         assertTrue(r.out().contains("scatter") && r.out().contains("bars"), r.out());
     }

@@ -1,5 +1,6 @@
 package dev.ampsieve.cli;
 
+import dev.ampsieve.commands.VisibleWriter;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.io.PrintWriter;
@@ -24,7 +25,7 @@ class VisibleWriterTest {
     @Test
     void lineFeedsStayAndAPartialLineGoesOutOnFlush() {
         StringWriter sink = new StringWriter();
-        PrintWriter w = new PrintWriter(new VisibleWriter(sink));
+        PrintWriter w = new PrintWriter(VisibleWriter.over(sink));
         w.print("a" + ESC + "[3");  // a sequence split across two writes is still one line
         w.print("1mred" + ESC + "[0m\nb\tc");
         w.flush();

@@ -2,7 +2,7 @@ package dev.ampsieve.shell;
 
 import static java.nio.charset.StandardCharsets.UTF_8;
 
-import dev.ampsieve.cli.RootCommand;
+import dev.ampsieve.commands.RootCommand;
 import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;

@@ -1,5 +1,8 @@
-package dev.ampsieve.cli;
+package dev.ampsieve.commands;
 
+import dev.ampsieve.failure.Place;
+import dev.ampsieve.failure.Refusal;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.advice.Ranker;
 import dev.ampsieve.advice.Ranking;
 import dev.ampsieve.budget.BudgetCalculator;
@@ -48,7 +51,8 @@ public final class ScatterCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         if (top < 1 || height < 5) {
-            throw new UserException("--top must be 1 or more and --height 5 or more", ExitCode.USAGE);
+            throw new Refusal("--top must be 1 or more and --height 5 or more", ExitCode.USAGE,
+                    Place.field(top < 1 ? "--top" : "--height"));
         }
         Catalog catalog = root.catalog();
         Candidates.noteProblems(catalog, spec.commandLine().getErr());
@@ -57,6 +61,6 @@ public final class ScatterCommand implements Callable<Integer> {
         Ranking r = Ranker.rank(stage, parts, BudgetCalculator::compute);
         String name = stageOption.name();
         spec.commandLine().getOut().print(RankScatter.render(r, name, top, height, root.outputStyle()));
-        return ExitCode.OK;
+        return ExitCode.OK.code();
     }
 }

@@ -1,5 +1,8 @@
-package dev.ampsieve.cli;
+package dev.ampsieve.commands;
 
+import dev.ampsieve.failure.Place;
+import dev.ampsieve.failure.Refusal;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.advice.Ranker;
 import dev.ampsieve.advice.Ranking;
 import dev.ampsieve.budget.BudgetCalculator;
@@ -47,20 +50,12 @@ public final class RankCommand implements Callable<Integer> {
     boolean all;
 
     @ArgGroup(exclusive = true)
-    Format format = new Format();
-
-    static final class Format {
-        @Option(names = "--json", description = "Print JSON.")
-        boolean json;
-
-        @Option(names = "--csv", description = "Print CSV, one row per part.")
-        boolean csv;
-    }
+    TableFormat format = new TableFormat();
 
     @Override
     public Integer call() throws Exception {
         if (top < 1) {
-            throw new UserException("--top must be 1 or more, not " + top, ExitCode.USAGE);
+            throw new Refusal("--top must be 1 or more, not " + top, ExitCode.USAGE, Place.field("--top"));
         }
         Catalog catalog = root.catalog();
         Candidates.noteProblems(catalog, spec.commandLine().getErr());
@@ -69,9 +64,9 @@ public final class RankCommand implements Callable<Integer> {
         Ranking r = Ranker.rank(stage, parts, BudgetCalculator::compute);
         String label = stageOption.label();
         String name = stageOption.name(); // text headers stay within 100 columns
-        String out = format.json ? RankReport.json(r, label, query, top, all)
-                : format.csv ? RankReport.csv(r, top) : RankReport.text(r, name, query, top, root.textWidth(), all);
+        String out = format.json() ? RankReport.json(r, label, query, top, all)
+                : format.csv() ? RankReport.csv(r, top) : RankReport.text(r, name, query, top, root.textWidth(), all);
         spec.commandLine().getOut().print(out);
-        return ExitCode.OK;
+        return ExitCode.OK.code();
     }
 }
