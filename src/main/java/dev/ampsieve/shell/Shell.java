@@ -7,6 +7,8 @@ import dev.ampsieve.commands.RootCommand;
 import dev.ampsieve.commands.StageOption;
 import dev.ampsieve.commands.VisibleWriter;
 import dev.ampsieve.failure.ExitCode;
+import dev.ampsieve.failure.Place;
+import dev.ampsieve.failure.Refusal;
 import dev.ampsieve.report.Caution;
 import dev.ampsieve.report.Glyphs;
 import dev.ampsieve.report.OutputStyle;
@@ -64,6 +66,10 @@ public final class Shell {
     private boolean cancelRequested;
     private LineLimit lineLimit;
     private ShellState state;
+    /** Each line's exit code, in order (the shell's own verbs and the shared commands alike), for tests. */
+    private final List<Integer> exitCodes = new ArrayList<>();
+    /** Commands added to the tree after the shell's own (tests add one that fails in a way no user can cause). */
+    private final List<Object> extraCommands = new ArrayList<>();
 
     /**
      * @param rootArgs    the options the shell was started with ({@code --catalog DIR} ...), given
@@ -143,6 +149,7 @@ public final class Shell {
 
         CommandLine tree = Commands.build(root, out, err);
         ShellCommands.all(ctx).forEach(tree::addSubcommand);
+        extraCommands.forEach(tree::addSubcommand);
         // picocli hands these settings to the subcommands present when they are set: set them again
         tree.setOut(out);
         tree.setErr(err);
@@ -229,14 +236,25 @@ public final class Shell {
         return words;
     }
 
+    /** Adds a command to the tree the shell builds; call before {@link #run}. */
+    Shell withCommand(Object command) {
+        extraCommands.add(command);
+        return this;
+    }
+
+    /** The exit code of each line run so far, in order. */
+    List<Integer> exitCodes() {
+        return List.copyOf(exitCodes);
+    }
+
     /** Runs one line through the tree; never throws. */
     void execute(ShellContext ctx, CommandLine tree, List<String> words, PrintWriter err) {
         String name = words.get(0);
         CommandLine sub = tree.getSubcommands().get(name);
         if (sub == null && !name.startsWith("-")) {
             String near = Fields.closest(name, tree.getSubcommands().keySet());
-            err.println("unknown command '" + name + "'" + (near != null ? "; did you mean '" + near + "'?" : "")
-                    + " ('help' lists the commands)");
+            exitCodes.add(failure(new Refusal("unknown command '" + name + "'" + (near != null ? "; did you mean '" + near + "'?" : "")
+                    + " ('help' lists the commands)", ExitCode.USAGE, Place.field(name)), err));
             return;
         }
         // a Ctrl-C at the prompt can leave this thread interrupted (the line reader restores the
@@ -248,15 +266,16 @@ public final class Shell {
         }
         boolean cancelled;
         try {
-            List<String> line = new ArrayList<>(words);
-            if (sub != null && !withStage(ctx, sub, line, err)) {
+            Refusal noStage = sub == null ? null : missingStage(ctx, sub, words);
+            if (noStage != null) {
+                exitCodes.add(failure(noStage, err));
                 return;
             }
             List<String> args = new ArrayList<>(rootArgs);
-            args.addAll(line);
-            tree.execute(args.toArray(String[]::new));
+            args.addAll(words);
+            exitCodes.add(tree.execute(args.toArray(String[]::new)));
         } catch (RuntimeException | StackOverflowError e) {
-            failure(e, err);
+            exitCodes.add(failure(e, err));
         } finally {
             synchronized (commandLock) {
                 running = null; // from here on Ctrl-C's handler leaves this thread alone
@@ -298,33 +317,24 @@ public final class Shell {
     }
 
     /**
-     * Whether the line can run as far as its stage goes: the command takes none, the line names
-     * a file, or there is a current stage (the command takes it from the root); false, with a
-     * line saying what to do, when a command needs a stage and there is none.
+     * Null when the line can run as far as its stage goes: the command takes none, the line names
+     * a file, or there is a current stage (the command takes it from the root); else the refusal
+     * saying how to get one.
      */
-    private static boolean withStage(ShellContext ctx, CommandLine sub, List<String> line, PrintWriter err) {
+    private static Refusal missingStage(ShellContext ctx, CommandLine sub, List<String> line) {
         OptionSpec stage = sub.getCommandSpec().findOption(StageOption.NAME);
-        if (stage == null) {
-            return true;
+        if (stage == null || ctx.state.hasStage() || line.contains("--help") || line.contains("-h")) {
+            return null;
         }
         for (String w : line) {
             for (String n : stage.names()) {
                 if (w.equals(n) || w.startsWith(n + "=")) {
-                    return true;
+                    return null;
                 }
             }
         }
-        if (line.contains("--help") || line.contains("-h")) {
-            return true;
-        }
-        if (ctx.state.hasStage()) {
-            return true;
-        }
-        if (stage != null) {
-            err.println("'" + line.get(0) + "' needs a stage: type 'ask' to describe one, 'load FILE', or add --stage FILE");
-            return false;
-        }
-        return true;
+        return new Refusal("'" + line.get(0) + "' needs a stage: type 'ask' to describe one, 'load FILE', or add --stage FILE",
+                ExitCode.USAGE, Place.field(StageOption.NAME));
     }
 
     /** Exit status of a command stopped by Ctrl-C: 128 + SIGINT, as shells report it. */
@@ -411,7 +421,7 @@ public final class Shell {
                     + " warning(s): 'check' lists them.");
         } catch (InputException e) {
             return "Catalog " + root.catalogDir() + ": " + e.problems().size() + " problem(s); 'check' lists them.";
-        } catch (dev.ampsieve.failure.Refusal | RuntimeException e) {
+        } catch (Refusal | RuntimeException e) {
             return "Catalog " + root.catalogDir() + ": not loaded (" + e.getMessage() + ").";
         }
     }
