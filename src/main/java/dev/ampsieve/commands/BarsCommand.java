@@ -1,9 +1,9 @@
 package dev.ampsieve.commands;
 
-import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.budget.BudgetCalculator;
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.report.BudgetBars;
 import dev.ampsieve.stage.Stage;
 import java.util.concurrent.Callable;

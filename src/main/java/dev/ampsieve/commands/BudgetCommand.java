@@ -1,10 +1,10 @@
 package dev.ampsieve.commands;
 
-import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.budget.Budget;
 import dev.ampsieve.budget.BudgetCalculator;
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.report.BudgetJson;
 import dev.ampsieve.report.BudgetText;
 import dev.ampsieve.stage.Stage;

@@ -1,8 +1,8 @@
 package dev.ampsieve.commands;
 
-import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.report.Caution;
 import dev.ampsieve.text.Visible;
 import dev.ampsieve.yaml.Problem;

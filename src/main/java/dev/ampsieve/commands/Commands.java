@@ -1,12 +1,12 @@
 package dev.ampsieve.commands;
 
 import java.io.PrintWriter;
-import picocli.CommandLine;
 import picocli.CommandLine.IParameterExceptionHandler;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Model.OptionSpec;
 import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.ParseResult;
+import picocli.CommandLine;
 
 /**
  * Builds the one command tree both front ends use (the command line and the shell feed it the

@@ -1,11 +1,11 @@
 package dev.ampsieve.commands;
 
-import dev.ampsieve.failure.Refusal;
-import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.advice.Comparison;
 import dev.ampsieve.budget.BudgetCalculator;
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.failure.ExitCode;
+import dev.ampsieve.failure.Refusal;
 import dev.ampsieve.report.CompareReport;
 import dev.ampsieve.stage.Stage;
 import java.util.concurrent.Callable;

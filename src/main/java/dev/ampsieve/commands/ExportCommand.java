@@ -1,7 +1,7 @@
 package dev.ampsieve.commands;
 
-import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.catalog.Catalog;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.sheet.SheetExport;
 import dev.ampsieve.text.Visible;
 import dev.ampsieve.yaml.AtomicFiles;

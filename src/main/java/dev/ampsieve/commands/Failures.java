@@ -5,9 +5,9 @@ import dev.ampsieve.failure.UserError;
 import dev.ampsieve.text.Visible;
 import java.io.PrintWriter;
 import java.util.List;
-import picocli.CommandLine;
 import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.UnmatchedArgumentException;
+import picocli.CommandLine;
 
 /**
  * The one handler both front ends use: a {@link UserError} is printed as its lines (each with

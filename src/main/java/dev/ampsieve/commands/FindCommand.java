@@ -1,20 +1,20 @@
 package dev.ampsieve.commands;
 
-import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.report.FindReport;
 import dev.ampsieve.search.QueryLanguage;
 import java.util.ArrayList;
 import java.util.List;
-import picocli.CommandLine;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.ParentCommand;
 import picocli.CommandLine.Spec;
+import picocli.CommandLine;
 
 /** {@code ampsieve find QUERY...}: catalog parts matching words and constraints. */
 @Command(name = "find", header = "List catalog parts matching words and constraints.", mixinStandardHelpOptions = true,

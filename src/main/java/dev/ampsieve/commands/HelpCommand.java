@@ -1,7 +1,7 @@
 package dev.ampsieve.commands;
 
-import dev.ampsieve.failure.Refusal;
 import dev.ampsieve.failure.ExitCode;
+import dev.ampsieve.failure.Refusal;
 import dev.ampsieve.report.OutputStyle;
 import dev.ampsieve.report.ReferencePages;
 import dev.ampsieve.text.Visible;
@@ -11,11 +11,11 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
+import picocli.CommandLine;
 
 /** {@code ampsieve help [TOPIC|COMMAND]}: the reference pages, or one command's help. */
 @Command(name = "help", header = "Reference pages (query, stage-keys, catalog-keys, units) and command help.",

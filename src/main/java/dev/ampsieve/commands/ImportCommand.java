@@ -1,11 +1,11 @@
 package dev.ampsieve.commands;
 
-import dev.ampsieve.failure.Refusal;
-import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.CatalogKeys;
 import dev.ampsieve.catalog.CatalogLoader;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.failure.ExitCode;
+import dev.ampsieve.failure.Refusal;
 import dev.ampsieve.sheet.SheetImport;
 import dev.ampsieve.text.Visible;
 import dev.ampsieve.yaml.AtomicFiles;

@@ -1,8 +1,8 @@
 package dev.ampsieve.commands;
 
-import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.catalog.CatalogLoader;
 import dev.ampsieve.catalog.PartTemplate;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.text.Visible;
 import dev.ampsieve.yaml.AtomicFiles;
 import dev.ampsieve.yaml.InputException;

@@ -1,13 +1,13 @@
 package dev.ampsieve.commands;
 
-import dev.ampsieve.failure.Place;
-import dev.ampsieve.failure.Refusal;
-import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.advice.Ranker;
 import dev.ampsieve.advice.Ranking;
 import dev.ampsieve.budget.BudgetCalculator;
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.failure.ExitCode;
+import dev.ampsieve.failure.Place;
+import dev.ampsieve.failure.Refusal;
 import dev.ampsieve.report.RankReport;
 import dev.ampsieve.stage.Stage;
 import java.util.List;

@@ -2,10 +2,10 @@ package dev.ampsieve.commands;
 
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.CatalogLoader;
-import dev.ampsieve.report.OutputStyle;
 import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.failure.Place;
 import dev.ampsieve.failure.Refusal;
+import dev.ampsieve.report.OutputStyle;
 import dev.ampsieve.yaml.InputException;
 import java.io.IOException;
 import java.io.InputStream;

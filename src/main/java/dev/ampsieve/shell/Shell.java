@@ -32,8 +32,8 @@ import org.jline.reader.UserInterruptException;
 import org.jline.reader.impl.DefaultParser;
 import org.jline.terminal.Terminal;
 import org.jline.terminal.TerminalBuilder;
-import picocli.CommandLine;
 import picocli.CommandLine.Model.OptionSpec;
+import picocli.CommandLine;
 
 /**
  * The interactive shell: a JLine line editor in front of the same picocli command tree the

@@ -29,12 +29,12 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 import org.jline.reader.EndOfFileException;
 import org.jline.reader.UserInterruptException;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
+import picocli.CommandLine;
 
 /**
  * The shell's own verbs: describing, changing, showing, saving and loading the current stage,
