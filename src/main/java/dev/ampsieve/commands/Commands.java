@@ -84,7 +84,8 @@ public final class Commands {
         OptionSpec stage = spec.findOption(StageOption.NAME);
         if (stage != null && stage.required()) {
             spec.remove(stage);
-            spec.addOption(OptionSpec.builder(stage).required(false).build());
+            spec.addOption(OptionSpec.builder(stage).required(false)
+                    .description("Stage file (YAML); left out, the current stage.").build());
         }
     }
 

@@ -39,8 +39,8 @@ public final class RankCommand implements Callable<Integer> {
     @Mixin
     StageOption stageOption;
 
-    @Option(names = "--query", paramLabel = "Q", description = "Only parts matching this query.")
-    String query;
+    @Mixin
+    QueryOption query;
 
     @Option(names = "--top", paramLabel = "N", defaultValue = "15",
             description = "Candidates to list (default ${DEFAULT-VALUE}); advice and Pareto front use all.")
@@ -60,12 +60,12 @@ public final class RankCommand implements Callable<Integer> {
         Catalog catalog = root.catalog();
         Candidates.noteProblems(catalog, spec.commandLine().getErr());
         Stage stage = stageOption.load();
-        List<Part> parts = query == null ? catalog.parts() : Candidates.matching(catalog, query, spec.commandLine().getErr());
+        List<Part> parts = query.parts(catalog, spec.commandLine().getErr());
         Ranking r = Ranker.rank(stage, parts, BudgetCalculator::compute);
         String label = stageOption.label();
         String name = stageOption.name(); // text headers stay within 100 columns
-        String out = format.json() ? RankReport.json(r, label, query, top, all)
-                : format.csv() ? RankReport.csv(r, top) : RankReport.text(r, name, query, top, root.textWidth(), all);
+        String out = format.json() ? RankReport.json(r, label, query.text(), top, all)
+                : format.csv() ? RankReport.csv(r, top) : RankReport.text(r, name, query.text(), top, root.textWidth(), all);
         spec.commandLine().getOut().print(out);
         return ExitCode.OK.code();
     }

@@ -38,8 +38,8 @@ public final class ScatterCommand implements Callable<Integer> {
     @Mixin
     StageOption stageOption;
 
-    @Option(names = "--query", paramLabel = "Q", description = "Only parts matching this query (as for 'find').")
-    String query;
+    @Mixin
+    QueryOption query;
 
     @Option(names = "--top", paramLabel = "N", defaultValue = "20",
             description = "Candidates to plot, in ranking order (default ${DEFAULT-VALUE}; letters run out at 52).")
@@ -57,7 +57,7 @@ public final class ScatterCommand implements Callable<Integer> {
         Catalog catalog = root.catalog();
         Candidates.noteProblems(catalog, spec.commandLine().getErr());
         Stage stage = stageOption.load();
-        List<Part> parts = query == null ? catalog.parts() : Candidates.matching(catalog, query, spec.commandLine().getErr());
+        List<Part> parts = query.parts(catalog, spec.commandLine().getErr());
         Ranking r = Ranker.rank(stage, parts, BudgetCalculator::compute);
         String name = stageOption.name();
         spec.commandLine().getOut().print(RankScatter.render(r, name, top, height, root.outputStyle()));
