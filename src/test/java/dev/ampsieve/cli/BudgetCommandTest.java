@@ -1,13 +1,13 @@
 package dev.ampsieve.cli;
 
-import dev.ampsieve.failure.ExitCode;
-import dev.ampsieve.failure.Refusal;
-import dev.ampsieve.commands.Commands;
-import dev.ampsieve.commands.Parts;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
 import dev.ampsieve.catalog.Catalog;
+import dev.ampsieve.commands.Commands;
+import dev.ampsieve.commands.Parts;
+import dev.ampsieve.failure.ExitCode;
+import dev.ampsieve.failure.Refusal;
 import dev.ampsieve.fixtures.PartFixture;
 import java.io.IOException;
 import java.io.PrintWriter;

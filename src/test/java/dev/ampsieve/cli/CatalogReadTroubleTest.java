@@ -1,10 +1,10 @@
 package dev.ampsieve.cli;
 
-import dev.ampsieve.failure.ExitCode;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.ampsieve.failure.ExitCode;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.LinkOption;

@@ -1,13 +1,14 @@
 package dev.ampsieve.cli;
 
-import dev.ampsieve.failure.ExitCode;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.report.Caution;
 import dev.ampsieve.report.Glyphs;
+import dev.ampsieve.testing.DemoCatalog;
 import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.Units;
 import java.io.IOException;
@@ -16,7 +17,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.junit.jupiter.api.BeforeAll;
-import dev.ampsieve.testing.DemoCatalog;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 

@@ -1,11 +1,11 @@
 package dev.ampsieve.cli;
 
-import dev.ampsieve.failure.ExitCode;
-import dev.ampsieve.commands.Commands;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.ampsieve.commands.Commands;
+import dev.ampsieve.failure.ExitCode;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.StringWriter;

@@ -1,12 +1,12 @@
 package dev.ampsieve.cli;
 
-import dev.ampsieve.failure.ExitCode;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.report.Caution;
 import java.nio.file.Files;
 import java.nio.file.Path;

@@ -1,10 +1,10 @@
 package dev.ampsieve.cli;
 
-import dev.ampsieve.failure.ExitCode;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.ampsieve.catalog.CatalogKeys;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.search.Schema;
 import dev.ampsieve.stage.StageKeys;
 import java.util.List;

@@ -1,13 +1,13 @@
 package dev.ampsieve.cli;
 
-import dev.ampsieve.failure.ExitCode;
-import dev.ampsieve.commands.Commands;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.ampsieve.commands.Commands;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.testing.DemoCatalog;
 import java.io.IOException;
 import java.nio.file.Files;

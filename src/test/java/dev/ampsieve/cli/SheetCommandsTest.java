@@ -1,6 +1,5 @@
 package dev.ampsieve.cli;
 
-import dev.ampsieve.failure.ExitCode;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
@@ -10,6 +9,7 @@ import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.CatalogLoader;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.catalog.Price;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.yaml.Problem;
 import java.lang.reflect.RecordComponent;
 import java.nio.charset.StandardCharsets;

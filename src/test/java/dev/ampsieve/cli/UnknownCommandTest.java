@@ -1,10 +1,10 @@
 package dev.ampsieve.cli;
 
-import dev.ampsieve.failure.ExitCode;
-import dev.ampsieve.commands.Commands;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.ampsieve.commands.Commands;
+import dev.ampsieve.failure.ExitCode;
 import java.io.PrintWriter;
 import java.io.StringWriter;
 import org.junit.jupiter.api.Test;

@@ -1,11 +1,11 @@
 package dev.ampsieve.cli;
 
-import dev.ampsieve.failure.ExitCode;
-import dev.ampsieve.commands.RootCommand;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTimeoutPreemptively;
 
+import dev.ampsieve.commands.RootCommand;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.testing.DemoCatalog;
 import dev.ampsieve.testing.SpecialFiles;
 import java.nio.file.Files;

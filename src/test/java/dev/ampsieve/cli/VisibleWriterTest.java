@@ -1,8 +1,8 @@
 package dev.ampsieve.cli;
 
-import dev.ampsieve.commands.VisibleWriter;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
+import dev.ampsieve.commands.VisibleWriter;
 import java.io.PrintWriter;
 import java.io.StringWriter;
 import org.junit.jupiter.api.Test;
