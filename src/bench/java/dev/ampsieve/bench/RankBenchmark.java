@@ -5,7 +5,7 @@ import dev.ampsieve.advice.Ranker;
 import dev.ampsieve.advice.Ranking;
 import dev.ampsieve.budget.BudgetCalculator;
 import dev.ampsieve.catalog.Part;
-import dev.ampsieve.cli.Commands;
+import dev.ampsieve.commands.Commands;
 import dev.ampsieve.report.RankReport;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.StageLoader;

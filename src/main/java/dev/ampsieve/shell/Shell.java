@@ -1,10 +1,14 @@
 package dev.ampsieve.shell;
 
 import dev.ampsieve.catalog.Catalog;
-import dev.ampsieve.cli.Commands;
-import dev.ampsieve.cli.ExitCode;
-import dev.ampsieve.cli.RootCommand;
-import dev.ampsieve.cli.UserException;
+import dev.ampsieve.commands.Commands;
+import dev.ampsieve.commands.Failures;
+import dev.ampsieve.commands.RootCommand;
+import dev.ampsieve.commands.StageOption;
+import dev.ampsieve.commands.VisibleWriter;
+import dev.ampsieve.failure.ExitCode;
+import dev.ampsieve.failure.Place;
+import dev.ampsieve.failure.Refusal;
 import dev.ampsieve.report.Caution;
 import dev.ampsieve.report.Glyphs;
 import dev.ampsieve.report.OutputStyle;
@@ -14,7 +18,6 @@ import dev.ampsieve.yaml.InputException;
 import dev.ampsieve.yaml.Problem;
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -29,21 +32,23 @@ import org.jline.reader.UserInterruptException;
 import org.jline.reader.impl.DefaultParser;
 import org.jline.terminal.Terminal;
 import org.jline.terminal.TerminalBuilder;
-import picocli.CommandLine;
 import picocli.CommandLine.Model.OptionSpec;
+import picocli.CommandLine;
 
 /**
  * The interactive shell: a JLine line editor in front of the same picocli command tree the
  * command line uses, plus the shell's own verbs for the current stage. Each line is split
  * into words (quotes group words) and executed by the tree; a command that takes
- * {@code --stage FILE} gets the current stage when the line gives none.
+ * {@code --stage FILE} gets the current stage, in memory, when the line gives none (the shell
+ * hands it to the root command as its current stage before building the tree).
  *
  * <p>Ctrl-C drops the line being typed (or stops the questions of {@code ask}); while a command
  * runs it interrupts the thread running it, which stops at its next checkpoint with
  * {@link Cancelled} (see DEVELOPERS.md "Stopping a command"), and the shell says so and goes
  * back to the prompt with the stage as it was; it never ends the shell. Keys typed after it
  * are kept for the next line. Ctrl-D leaves. Lines over {@link LineLimit#MAX} characters are
- * refused. Any failure prints one line and the loop goes on; a stack trace only with {@code --verbose}.
+ * refused. Any failure goes to the one handler ({@link Failures}, in the shell's voice) and the
+ * loop goes on; a stack trace only with {@code --verbose}.
  */
 public final class Shell {
     private final RootCommand root;
@@ -61,6 +66,10 @@ public final class Shell {
     private boolean cancelRequested;
     private LineLimit lineLimit;
     private ShellState state;
+    /** Each line's exit code, in order (the shell's own verbs and the shared commands alike), for tests. */
+    private final List<Integer> exitCodes = new ArrayList<>();
+    /** Commands added to the tree after the shell's own (tests add one that fails in a way no user can cause). */
+    private final List<Object> extraCommands = new ArrayList<>();
 
     /**
      * @param rootArgs    the options the shell was started with ({@code --catalog DIR} ...), given
@@ -76,13 +85,19 @@ public final class Shell {
         this.env = Map.copyOf(env);
     }
 
-    /** Opens the shell on the process's terminal; returns the exit code. */
+    /**
+     * Opens the shell on the process's terminal; returns the exit code.
+     *
+     * @param root     the root of the command tree (from {@code Main}); the shell gives it its current stage
+     * @param rootArgs the options the program was started with
+     */
     public static int start(RootCommand root, List<String> rootArgs) {
         try (Terminal t = TerminalBuilder.builder().system(true).name("ampsieve").build()) {
             Map<String, String> env = System.getenv();
             return new Shell(root, rootArgs, t, XdgPaths.history(env, System.getProperty("user.home")), env).run();
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot open the terminal", e);
+            System.err.println("ampsieve: cannot open the terminal (" + e.getMessage() + "); give a command to run instead");
+            return ExitCode.INTERNAL.code();
         }
     }
 
@@ -100,9 +115,8 @@ public final class Shell {
     public int run() {
         OutputStyle style = look(terminal, env, rootArgs.contains("--ascii"));
         PrintWriter raw = terminal.writer();
-        ShellState[] stateRef = new ShellState[1];
-        PrintWriter out = new PrintWriter(new LineFilterWriter(raw, s -> shown(s, stateRef[0], false)), true);
-        PrintWriter err = new PrintWriter(new LineFilterWriter(raw, s -> shown(s, stateRef[0], true)), true);
+        PrintWriter out = new PrintWriter(new TerminalLines(raw, s -> shown(s, false)), true);
+        PrintWriter err = new PrintWriter(new TerminalLines(raw, s -> shown(s, true)), true);
 
         // the completer needs the tree and the context, which need the reader: wire it in after building
         org.jline.reader.Completer[] completer = new org.jline.reader.Completer[1];
@@ -128,13 +142,14 @@ public final class Shell {
         LineReader reader = builder.build();
         lineLimit = LineLimit.install(reader);
         ShellContext ctx = new ShellContext(root, reader, out, style);
-        stateRef[0] = ctx.state;
         state = ctx.state;
         ctx.lineLimit = lineLimit;
-        root.setStageNames(f -> f.equals(ctx.state.stageFileIfWritten()) ? ctx.state.nameInMessages() : null);
+        // commands without --stage FILE take the current stage, in memory, under the name the user knows it by
+        root.useCurrentStage(() -> StageCheck.given(ctx.state.answers(), ctx.state.nameInMessages()));
 
         CommandLine tree = Commands.build(root, out, err);
         ShellCommands.all(ctx).forEach(tree::addSubcommand);
+        extraCommands.forEach(tree::addSubcommand);
         // picocli hands these settings to the subcommands present when they are set: set them again
         tree.setOut(out);
         tree.setErr(err);
@@ -142,16 +157,7 @@ public final class Shell {
         tree.setColorScheme(CommandLine.Help.defaultColorScheme(CommandLine.Help.Ansi.OFF)); // see Commands.build
         // "set temperature -40..85 C": a negative value is a value, not an unknown option
         tree.getSubcommands().get("set").setUnmatchedOptionsArePositionalParams(true);
-        tree.setParameterExceptionHandler((ex, args) -> {
-            String cmd = ex.getCommandLine() == tree ? "" : ex.getCommandLine().getCommandName();
-            StringBuilder sb = new StringBuilder(cmd.isEmpty() ? "" : cmd + ": ").append(ex.getMessage());
-            if (ex instanceof CommandLine.UnmatchedArgumentException u && !u.getSuggestions().isEmpty()) {
-                sb.append("; did you mean ").append(String.join(" or ", u.getSuggestions())).append('?');
-            }
-            sb.append(cmd.isEmpty() ? " ('help' lists the commands)" : " ('help " + cmd + "' shows its options)");
-            err.println(sb);
-            return ExitCode.USAGE;
-        });
+        tree.setParameterExceptionHandler((ex, args) -> Failures.usage(ex, args, Failures.Voice.SHELL, null));
         tree.setExecutionExceptionHandler((ex, line, parsed) -> failure(ex, err));
         completer[0] = new ShellCompleter(ctx, tree);
         commands = java.util.Set.copyOf(tree.getSubcommands().keySet());
@@ -169,11 +175,10 @@ public final class Shell {
             loop(ctx, reader, tree, err);
         } finally {
             terminal.handle(Terminal.Signal.INT, previous != null ? previous : Terminal.SignalHandler.SIG_DFL);
-            ctx.state.close();
             out.flush();
             err.flush();
         }
-        return ExitCode.OK;
+        return ExitCode.OK.code();
     }
 
     private void loop(ShellContext ctx, LineReader reader, CommandLine tree, PrintWriter err) {
@@ -231,14 +236,25 @@ public final class Shell {
         return words;
     }
 
+    /** Adds a command to the tree the shell builds; call before {@link #run}. */
+    Shell withCommand(Object command) {
+        extraCommands.add(command);
+        return this;
+    }
+
+    /** The exit code of each line run so far, in order. */
+    List<Integer> exitCodes() {
+        return List.copyOf(exitCodes);
+    }
+
     /** Runs one line through the tree; never throws. */
     void execute(ShellContext ctx, CommandLine tree, List<String> words, PrintWriter err) {
         String name = words.get(0);
         CommandLine sub = tree.getSubcommands().get(name);
         if (sub == null && !name.startsWith("-")) {
             String near = Fields.closest(name, tree.getSubcommands().keySet());
-            err.println("unknown command '" + name + "'" + (near != null ? "; did you mean '" + near + "'?" : "")
-                    + " ('help' lists the commands)");
+            exitCodes.add(failure(new Refusal("unknown command '" + name + "'" + (near != null ? "; did you mean '" + near + "'?" : "")
+                    + " ('help' lists the commands)", ExitCode.USAGE, Place.field(name)), err));
             return;
         }
         // a Ctrl-C at the prompt can leave this thread interrupted (the line reader restores the
@@ -250,15 +266,16 @@ public final class Shell {
         }
         boolean cancelled;
         try {
-            List<String> line = new ArrayList<>(words);
-            if (sub != null && !withStage(ctx, sub, line, err)) {
+            Refusal noStage = sub == null ? null : missingStage(ctx, sub, words);
+            if (noStage != null) {
+                exitCodes.add(failure(noStage, err));
                 return;
             }
             List<String> args = new ArrayList<>(rootArgs);
-            args.addAll(line);
-            tree.execute(args.toArray(String[]::new));
+            args.addAll(words);
+            exitCodes.add(tree.execute(args.toArray(String[]::new)));
         } catch (RuntimeException | StackOverflowError e) {
-            failure(e, err);
+            exitCodes.add(failure(e, err));
         } finally {
             synchronized (commandLock) {
                 running = null; // from here on Ctrl-C's handler leaves this thread alone
@@ -299,37 +316,31 @@ public final class Shell {
         }
     }
 
-    /** Adds {@code --stage CURRENT} when the command takes a stage and the line gives none; false to skip the line. */
-    private static boolean withStage(ShellContext ctx, CommandLine sub, List<String> line, PrintWriter err) {
-        OptionSpec stage = sub.getCommandSpec().findOption("--stage");
-        if (stage == null) {
-            return true;
+    /**
+     * Null when the line can run as far as its stage goes: the command takes none, the line names
+     * a file, or there is a current stage (the command takes it from the root); else the refusal
+     * saying how to get one.
+     */
+    private static Refusal missingStage(ShellContext ctx, CommandLine sub, List<String> line) {
+        OptionSpec stage = sub.getCommandSpec().findOption(StageOption.NAME);
+        if (stage == null || ctx.state.hasStage() || line.contains("--help") || line.contains("-h")) {
+            return null;
         }
         for (String w : line) {
             for (String n : stage.names()) {
                 if (w.equals(n) || w.startsWith(n + "=")) {
-                    return true;
+                    return null;
                 }
             }
         }
-        if (line.contains("--help") || line.contains("-h")) {
-            return true;
-        }
-        if (ctx.state.hasStage()) {
-            line.addAll(1, List.of("--stage", ctx.state.stageFile().toString()));
-            return true;
-        }
-        if (stage.required()) {
-            err.println("'" + line.get(0) + "' needs a stage: type 'ask' to describe one, 'load FILE', or add --stage FILE");
-            return false;
-        }
-        return true;
+        return new Refusal("'" + line.get(0) + "' needs a stage: type 'ask' to describe one, 'load FILE', or add --stage FILE",
+                ExitCode.USAGE, Place.field(StageOption.NAME));
     }
 
     /** Exit status of a command stopped by Ctrl-C: 128 + SIGINT, as shells report it. */
     private static final int INTERRUPTED = 130;
 
-    /** One line per failure; the stack trace only when --verbose was given. */
+    /** Ctrl-C's line, else the one handler's lines; the stack trace only when --verbose was given. */
     private int failure(Throwable ex, PrintWriter err) {
         if (ex instanceof Cancelled || cancelRequested()) {
             // whatever a command throws after Ctrl-C (Cancelled, or a read cut short) is the interrupt
@@ -338,35 +349,16 @@ public final class Shell {
             err.println(state != null && state.hasStage() ? "Interrupted; the current stage is as it was." : "Interrupted.");
             return INTERRUPTED;
         }
-        if (ex instanceof InputException ie) {
-            for (Problem p : ie.problems()) {
-                err.println(p);
-            }
-            return ExitCode.FINDINGS;
-        }
-        if (ex instanceof UserException ue) {
-            err.println(dev.ampsieve.text.Visible.lines(ue.getMessage()));
-            return ue.exitCode();
-        }
-        if (root.verbose()) {
-            ex.printStackTrace(err);
-        } else {
-            err.println("internal error: " + ex + " (add --verbose to the command for the details)");
-        }
-        return ExitCode.INTERNAL;
+        return Failures.report(ex, err, root.verbose(), Failures.Voice.SHELL).code();
     }
 
     /**
-     * What a printed line looks like on this terminal. Error lines are folded to its width here,
-     * after the stage is named and before they are painted, so the terminal never breaks a word.
+     * What a printed line looks like on this terminal: guarded, in ASCII where the terminal is not
+     * UTF-8, commands spelled as the shell takes them. Error lines are folded to its width and
+     * painted, so the terminal never breaks a word.
      */
-    private String shown(String s, ShellState state, boolean error) {
-        s = dev.ampsieve.cli.VisibleWriter.guard(s); // before our own colours: only they may reach the terminal
-        Path tmp = state == null ? null : state.stageFileIfWritten();
-        if (tmp != null) {
-            String name = state.nameInMessages();
-            s = s.replace(tmp.toString(), name).replace(ShellState.STAGE_FILE_NAME, name);
-        }
+    private String shown(String s, boolean error) {
+        s = VisibleWriter.guard(s); // before our own colours: only they may reach the terminal
         s = withoutProgramName(s, commands);
         OutputStyle st = look(terminal, env, rootArgs.contains("--ascii"));
         if (!st.unicode()) {
@@ -429,7 +421,7 @@ public final class Shell {
                     + " warning(s): 'check' lists them.");
         } catch (InputException e) {
             return "Catalog " + root.catalogDir() + ": " + e.problems().size() + " problem(s); 'check' lists them.";
-        } catch (RuntimeException e) {
+        } catch (Refusal | RuntimeException e) {
             return "Catalog " + root.catalogDir() + ": not loaded (" + e.getMessage() + ").";
         }
     }

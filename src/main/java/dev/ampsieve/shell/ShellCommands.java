@@ -1,7 +1,9 @@
 package dev.ampsieve.shell;
 
-import dev.ampsieve.cli.ExitCode;
-import dev.ampsieve.cli.UserException;
+import dev.ampsieve.failure.ExitCode;
+import dev.ampsieve.failure.Place;
+import dev.ampsieve.failure.Refusal;
+import dev.ampsieve.failure.UserError;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.StageKeys;
 import dev.ampsieve.stage.StageLoader;
@@ -27,12 +29,12 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 import org.jline.reader.EndOfFileException;
 import org.jline.reader.UserInterruptException;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
+import picocli.CommandLine;
 
 /**
  * The shell's own verbs: describing, changing, showing, saving and loading the current stage,
@@ -99,9 +101,9 @@ final class ShellCommands {
         }
 
         @Override
-        public Integer call() {
+        public Integer call() throws UserError {
             if (ctx.reader == null) {
-                throw new UserException("questions need a terminal; use 'set KEY VALUE' or a stage file", ExitCode.USAGE);
+                throw new Refusal("questions need a terminal; use 'set KEY VALUE' or a stage file", ExitCode.USAGE);
             }
             Map<String, String> start = fresh ? Map.of() : ctx.state.answers();
             Map<String, String> answers;
@@ -111,7 +113,7 @@ final class ShellCommands {
                 out().println();
                 noteRefusal();
                 out().println(ctx.fold(stopped(e)));
-                return ExitCode.OK;
+                return ExitCode.OK.code();
             }
             if (ctx.state.hasStage() && !fresh) {
                 ctx.state.update(answers);
@@ -169,20 +171,20 @@ final class ShellCommands {
         }
 
         @Override
-        public Integer call() {
+        public Integer call() throws UserError {
             String id;
             Answers.Change change;
             try {
                 id = Answers.id(key);
                 change = Answers.interpret(id, String.join(" ", value), ctx.state.answers());
             } catch (AnswerException e) {
-                throw new UserException(key + ": " + e.line(), ExitCode.USAGE);
+                throw new Refusal(key + ": " + e.line(), ExitCode.USAGE, Place.field(key));
             }
             Map<String, String> next = change.applyTo(ctx.state.answers());
             List<Problem> problems = StageCheck.problemsFor(next, change.paths());
             if (!problems.isEmpty()) {
-                throw new UserException(id + ": " + StageCheck.brief(problems.get(0)) + " (" + Questions.why(id) + ")",
-                        ExitCode.FINDINGS);
+                throw new Refusal(id + ": " + StageCheck.brief(problems.get(0)) + " (" + Questions.why(id) + ")",
+                        ExitCode.FINDINGS, Place.field(id));
             }
             boolean had = ctx.state.hasStage();
             if (had) {
@@ -195,7 +197,7 @@ final class ShellCommands {
             if (!rest.isEmpty()) {
                 out().println(ctx.fold("The stage is not complete yet: " + StageCheck.brief(rest.get(0)), paint()::dim));
             }
-            return ExitCode.OK;
+            return ExitCode.OK.code();
         }
     }
 
@@ -209,14 +211,14 @@ final class ShellCommands {
         }
 
         @Override
-        public Integer call() {
+        public Integer call() throws UserError {
             Map<String, String> next = new LinkedHashMap<>(ctx.state.answers());
             for (String k : keys) {
                 String id;
                 try {
                     id = Answers.id(k);
                 } catch (AnswerException e) {
-                    throw new UserException(k + ": " + e.line(), ExitCode.USAGE);
+                    throw new Refusal(k + ": " + e.line(), ExitCode.USAGE, Place.field(k));
                 }
                 Answers.RangeId r = Answers.range(id);
                 if (r != null) {
@@ -232,7 +234,7 @@ final class ShellCommands {
             }
             ctx.state.update(next);
             out().println("Back to the default: " + String.join(", ", keys));
-            return ExitCode.OK;
+            return ExitCode.OK.code();
         }
     }
 
@@ -246,10 +248,10 @@ final class ShellCommands {
         }
 
         @Override
-        public Integer call() {
+        public Integer call() throws UserError {
             if (!ctx.state.hasStage() && !all) {
                 out().println("No current stage yet: type 'ask' to describe one, or 'load FILE'.");
-                return ExitCode.OK;
+                return ExitCode.OK.code();
             }
             return print(ctx, out(), all);
         }
@@ -278,7 +280,7 @@ final class ShellCommands {
                 for (Problem p : e.problems()) {
                     out.println("  " + (p.field().isEmpty() ? "" : p.field() + ": ") + StageCheck.brief(p));
                 }
-                return ExitCode.FINDINGS;
+                return ExitCode.FINDINGS.code();
             }
             out.println(paint.bold("Derived"));
             out.println("  " + pad("noise gain", w) + Units.format(s.noiseGain(), Dimension.NUMBER, 4)
@@ -304,7 +306,7 @@ final class ShellCommands {
             if (!all) {
                 out.println(paint.dim("Other keys keep their defaults: 'show --all' lists them, 'set KEY VALUE' changes one."));
             }
-            return ExitCode.OK;
+            return ExitCode.OK.code();
         }
 
         /** Every key once, the temperature range and the limit as one each. */
@@ -365,32 +367,32 @@ final class ShellCommands {
         }
 
         @Override
-        public Integer call() throws InputException {
+        public Integer call() throws UserError {
             if (!ctx.state.hasStage()) {
-                throw new UserException("no current stage to save; type 'ask' to describe one");
+                throw new Refusal("no current stage to save; type 'ask' to describe one");
             }
             String notAFile = notARegularFile(file);
             if (notAFile != null) {
-                throw new UserException(file + " is " + notAFile + "; save replaces only regular files, so it was left as it is: "
+                throw new Refusal(file + " is " + notAFile + "; save replaces only regular files, so it was left as it is: "
                         + "give a new file name", ExitCode.USAGE);
             }
             boolean overwrite = force;
             if (Files.exists(file, LinkOption.NOFOLLOW_LINKS) && !force) {
                 if (!confirm(file + " exists. Replace it? [y/N] ")) {
                     out().println("Left " + file + " as it was.");
-                    return ExitCode.OK;
+                    return ExitCode.OK.code();
                 }
                 overwrite = true;
             }
             StageWriter.save(StageWriter.toYaml(ctx.state.answers()), file, overwrite);
             ctx.state.savedAs(file);
             out().println("Saved " + file + ".");
-            return ExitCode.OK;
+            return ExitCode.OK.code();
         }
 
-        private boolean confirm(String question) {
+        private boolean confirm(String question) throws Refusal {
             if (ctx.reader == null) {
-                throw new UserException(file + " exists; add --force to replace it", ExitCode.USAGE);
+                throw new Refusal(file + " exists; add --force to replace it", ExitCode.USAGE);
             }
             try {
                 String a = ctx.reader.readLine(question).strip().toLowerCase(Locale.ROOT);
@@ -460,13 +462,13 @@ final class ShellCommands {
         }
 
         @Override
-        public Integer call() throws InputException {
+        public Integer call() throws UserError {
             StageLoader.load(file); // all checks, with file:line:col
             ctx.state.replace(answers(YamlFiles.read(file)), file, true);
             Map<String, String> a = ctx.state.answers();
             out().println(ctx.fold("Loaded " + file + ": gain " + Questions.current("gain", a) + ", "
                     + Questions.current(Answers.LIMIT, a) + " limit. 'show' lists it."));
-            return ExitCode.OK;
+            return ExitCode.OK.code();
         }
 
         /** The file's values as typed, by key path (the loader has already checked them). */
@@ -505,21 +507,21 @@ final class ShellCommands {
         }
 
         @Override
-        public Integer call() {
+        public Integer call() throws UserError {
             CommandLine tree = spec.commandLine().getParent();
             PrintWriter out = out();
             if (command != null && dev.ampsieve.report.ReferencePages.TOPICS.contains(command)) {
                 // the reference pages of 'ampsieve help TOPIC', at the terminal's width
                 out.print(dev.ampsieve.report.ReferencePages.page(command, ctx.style.width()));
-                return ExitCode.OK;
+                return ExitCode.OK.code();
             }
             if (command != null) {
                 CommandLine sub = tree.getSubcommands().get(command);
                 if (sub == null) {
-                    throw new UserException("no command '" + command + "'; 'help' lists them", ExitCode.USAGE);
+                    throw new Refusal("no command '" + command + "'; 'help' lists them", ExitCode.USAGE);
                 }
                 sub.usage(out);
-                return ExitCode.OK;
+                return ExitCode.OK.code();
             }
             List<String> shared = new ArrayList<>();
             for (Map.Entry<String, CommandLine> e : tree.getSubcommands().entrySet()) {
@@ -545,7 +547,7 @@ final class ShellCommands {
             out.println("Tab completes commands, options, part ids, stage keys and units.");
             out.println("Ctrl-C drops the line or stops a running command; Ctrl-D leaves.");
             out.println("Reference: help " + String.join(", help ", dev.ampsieve.report.ReferencePages.TOPICS) + ".");
-            return ExitCode.OK;
+            return ExitCode.OK.code();
         }
 
         private void line(PrintWriter out, CommandLine tree, String name) {
@@ -569,14 +571,14 @@ final class ShellCommands {
         }
 
         @Override
-        public Integer call() {
+        public Integer call() throws UserError {
             if (ctx.state.unsaved() && !ctx.warnedUnsaved) {
                 ctx.warnedUnsaved = true;
                 out().println(ctx.fold("The current stage is not saved: 'save FILE' keeps it; 'quit' again leaves without saving."));
-                return ExitCode.OK;
+                return ExitCode.OK.code();
             }
             ctx.quit = true;
-            return ExitCode.OK;
+            return ExitCode.OK.code();
         }
     }
 }

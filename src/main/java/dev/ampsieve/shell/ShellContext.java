@@ -1,6 +1,6 @@
 package dev.ampsieve.shell;
 
-import dev.ampsieve.cli.RootCommand;
+import dev.ampsieve.commands.RootCommand;
 import dev.ampsieve.report.OutputStyle;
 import dev.ampsieve.report.Wrap;
 import java.io.PrintWriter;

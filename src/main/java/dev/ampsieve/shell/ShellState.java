@@ -1,10 +1,5 @@
 package dev.ampsieve.shell;
 
-import dev.ampsieve.stage.StageWriter;
-import java.io.IOException;
-import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Collections;
 import java.util.LinkedHashMap;
@@ -13,16 +8,12 @@ import java.util.Map;
 /**
  * What the shell remembers between lines: the current stage as answers (key path to the text
  * typed or read from a file), where it came from, and whether it changed since. Commands that
- * take {@code --stage FILE} get it as a file written here.
+ * take a stage get it in memory, through the root command's current stage (see {@code Shell}).
  */
 final class ShellState {
-    /** Name of the file commands get; unusual enough to be replaced in their messages by "(current stage)". */
-    static final String STAGE_FILE_NAME = "shell-current-stage.yaml";
-
     private Map<String, String> answers = new LinkedHashMap<>();
     private Path file;
     private boolean unsaved;
-    private Path workDir;
 
     boolean hasStage() {
         return !answers.isEmpty();
@@ -73,36 +64,5 @@ final class ShellState {
     /** How commands' output names the stage: its file while the stage is as saved there, else "(current stage)". */
     String nameInMessages() {
         return file != null && !unsaved ? file.getFileName().toString() : StageCheck.NAME.toString();
-    }
-
-    /** The folder for the stage file handed to commands; made on first use, removed by {@link #close}. */
-    Path stageFile() {
-        try {
-            if (workDir == null) {
-                workDir = Files.createTempDirectory("ampsieve-shell-");
-            }
-            Path f = workDir.resolve(STAGE_FILE_NAME);
-            Files.writeString(f, StageWriter.toYaml(answers), StandardCharsets.UTF_8);
-            return f;
-        } catch (IOException e) {
-            throw new UncheckedIOException("cannot write the current stage to a temporary file", e);
-        }
-    }
-
-    /** The path commands would see, for hiding it in their messages; null before first use. */
-    Path stageFileIfWritten() {
-        return workDir == null ? null : workDir.resolve(STAGE_FILE_NAME);
-    }
-
-    void close() {
-        if (workDir == null) {
-            return;
-        }
-        try {
-            Files.deleteIfExists(workDir.resolve(STAGE_FILE_NAME));
-            Files.deleteIfExists(workDir);
-        } catch (IOException e) {
-            // a leftover file in the temp folder is harmless; the shell is closing anyway
-        }
     }
 }

@@ -1,5 +1,6 @@
 package dev.ampsieve.shell;
 
+import dev.ampsieve.commands.StageSource;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.StageLoader;
 import dev.ampsieve.stage.StageWriter;
@@ -30,6 +31,27 @@ final class StageCheck {
     /** The stage the answers describe. */
     static Stage stage(Map<String, String> answers) throws InputException {
         return StageLoader.parse(StageWriter.toYaml(answers), NAME);
+    }
+
+    /**
+     * The answers as the commands receive them: the stage built in memory, named {@code name}
+     * ("(current stage)" or the file it was loaded from). The lines of the YAML built from the
+     * answers are not the user's, so problems name the stage without a line or column.
+     */
+    static StageSource.Given given(Map<String, String> answers, String name) throws InputException {
+        Path shown = Path.of(name);
+        StageLoader.Loaded loaded;
+        try {
+            loaded = StageLoader.parseWithWarnings(StageWriter.toYaml(answers), shown);
+        } catch (InputException e) {
+            throw new InputException(e.problems().stream().map(p -> unplaced(p, shown)).toList());
+        }
+        List<Problem> warnings = loaded.warnings().stream().map(p -> unplaced(p, shown)).toList();
+        return new StageSource.Given(loaded.stage(), warnings, name, name);
+    }
+
+    private static Problem unplaced(Problem p, Path name) {
+        return new Problem(p.severity(), name, 0, 0, p.field(), p.message(), p.fix());
     }
 
     /** Every problem with the answers (empty when they make a valid stage). */

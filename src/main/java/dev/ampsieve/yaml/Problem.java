@@ -1,5 +1,6 @@
 package dev.ampsieve.yaml;
 
+import dev.ampsieve.failure.Place;
 import dev.ampsieve.text.Visible;
 import java.nio.file.Path;
 
@@ -28,6 +29,11 @@ public record Problem(Severity severity, Path file, int line, int column, String
 
     public static Problem warning(Located at, String field, String message, String fix) {
         return new Problem(Severity.WARNING, at.file(), at.line(), at.column(), field, message, fix);
+    }
+
+    /** Where it is, as the error model types places. */
+    public Place place() {
+        return new Place(file, line, column, field);
     }
 
     public boolean isError() {

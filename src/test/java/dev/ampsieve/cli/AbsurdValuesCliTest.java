@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.testing.DemoCatalog;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -45,7 +46,7 @@ class AbsurdValuesCliTest {
     void checkNamesThePlaceFieldAndFix() throws Exception {
         Path c = catalog();
         CliRun r = CliRun.of("--catalog", c.toString(), "check");
-        assertEquals(ExitCode.FINDINGS, r.code(), r.toString());
+        assertEquals(ExitCode.FINDINGS.code(), r.code(), r.toString());
         // 1e200 nV = 1e191 V; the limit is 1 mV/rtHz
         assertTrue(r.out().contains(c.resolve("loud.yaml") + ":12:7: noise.en: 1.00e+191 V/√Hz is above 1.00 mV/√Hz,"
                 + " impossible for an op amp (the quietest inputs reach a few tenths of a nV/√Hz; a mV/√Hz is no"
@@ -59,7 +60,7 @@ class AbsurdValuesCliTest {
     void rankGoesOnWithoutThePart() throws Exception {
         Path c = catalog();
         CliRun r = CliRun.of("--catalog", c.toString(), "rank", "--stage", c.resolve("stages/bridge-amp.yaml").toString());
-        assertEquals(ExitCode.OK, r.code(), r.toString());
+        assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         assertFalse(r.err().contains("internal error"), r.toString());
         assertTrue(r.err().contains("1 catalog error(s); parts of files with errors are left out"), r.toString());
         assertTrue(r.out().contains("Candidates (28 budgeted"), r.toString());

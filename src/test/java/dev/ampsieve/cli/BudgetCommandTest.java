@@ -4,6 +4,10 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
 import dev.ampsieve.catalog.Catalog;
+import dev.ampsieve.commands.Commands;
+import dev.ampsieve.commands.Parts;
+import dev.ampsieve.failure.ExitCode;
+import dev.ampsieve.failure.Refusal;
 import dev.ampsieve.fixtures.PartFixture;
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -35,7 +39,7 @@ class BudgetCommandTest {
         StringWriter err = new StringWriter();
         int code = Commands.run(new String[] {"--catalog", dir.toString(), "budget", "cli-amp-1", "--stage", "s.yaml"},
                 new PrintWriter(out), new PrintWriter(err));
-        assertEquals(ExitCode.FINDINGS, code);
+        assertEquals(ExitCode.FINDINGS.code(), code);
         assertEquals("ampsieve: no part 'cli-amp-1' in the catalog " + dir + "; did you mean 'cli-amp-01'?\n",
                 err.toString().replace(System.lineSeparator(), "\n"));
         assertEquals("", out.toString());
@@ -51,19 +55,19 @@ class BudgetCommandTest {
 
     @Test
     void unknownPartSuggestsTheClosestId() {
-        UserException e = assertThrows(UserException.class, () -> BudgetCommand.find(catalog(), "prec-amp01"));
+        Refusal e = assertThrows(Refusal.class, () -> Parts.find(catalog(), "prec-amp01"));
         assertEquals("no part 'prec-amp01' in the catalog cat; did you mean 'prec-amp-01'?", e.getMessage());
         assertEquals(ExitCode.FINDINGS, e.exitCode());
     }
 
     @Test
     void farOffIdsGetNoGuess() {
-        UserException e = assertThrows(UserException.class, () -> BudgetCommand.find(catalog(), "zzzzzzzzzz"));
+        Refusal e = assertThrows(Refusal.class, () -> Parts.find(catalog(), "zzzzzzzzzz"));
         assertEquals("no part 'zzzzzzzzzz' in the catalog cat; 'ampsieve check' lists what was read", e.getMessage());
     }
 
     @Test
-    void knownPartIsFound() {
-        assertEquals("fast-amp-02", BudgetCommand.find(catalog(), "fast-amp-02").id());
+    void knownPartIsFound() throws Exception {
+        assertEquals("fast-amp-02", Parts.find(catalog(), "fast-amp-02").id());
     }
 }

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.ampsieve.failure.ExitCode;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.LinkOption;
@@ -67,7 +68,7 @@ class CatalogReadTroubleTest {
     void aLinkToAFileOutsideIsSkippedByFindAndNamedByCheck() throws Exception {
         Path broken = unreadableForAnyone();
         CliRun r = run("find", "zero-drift", "vos<=10uV");
-        assertEquals(ExitCode.OK, r.code(), r.toString());
+        assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         assertEquals(List.of("fx-az-1", "fx-chop-1"), ids(r)); // as FindCommandTest finds them without the broken file
         assertEquals("", r.err(), r.toString());
         CliRun check = run("check");
@@ -79,10 +80,10 @@ class CatalogReadTroubleTest {
     void rankAndBudgetSkipItTheSameWay() throws Exception {
         unreadableForAnyone();
         CliRun rank = run("rank", "--stage", STAGE, "--query", "zero-drift");
-        assertEquals(ExitCode.OK, rank.code(), rank.toString());
+        assertEquals(ExitCode.OK.code(), rank.code(), rank.toString());
         assertTrue(rank.out().contains("fx-az-1") && rank.out().contains("fx-chop-1") && !rank.out().contains("fx-bip-1"), rank.out());
         for (CliRun r : List.of(rank, run("budget", "fx-az-1", "--stage", STAGE), run("compare", "fx-az-1", "fx-chop-1", "--stage", STAGE))) {
-            assertEquals(ExitCode.OK, r.code(), r.toString());
+            assertEquals(ExitCode.OK.code(), r.code(), r.toString());
             assertEquals("", r.err(), r.toString());
         }
     }
@@ -94,7 +95,7 @@ class CatalogReadTroubleTest {
         Files.setPosixFilePermissions(secret, PosixFilePermissions.fromString("---------"));
         Assumptions.assumeFalse(Files.isReadable(secret), "running as root, who reads any file: skipped");
         for (CliRun r : List.of(run("find", "zero-drift", "vos<=10uV"), run("rank", "--stage", STAGE, "--query", "zero-drift"))) {
-            assertEquals(ExitCode.OK, r.code(), r.toString());
+            assertEquals(ExitCode.OK.code(), r.code(), r.toString());
             assertEquals(List.of(secret + ": cannot read the file (permission denied: " + secret + "); check that it exists and is readable"),
                     r.err().lines().toList());
         }
@@ -109,7 +110,7 @@ class CatalogReadTroubleTest {
         try {
             Assumptions.assumeFalse(Files.isReadable(locked), "running as root, who reads any folder: skipped");
             for (CliRun r : List.of(run("find", "zero-drift", "vos<=10uV"), run("rank", "--stage", STAGE, "--query", "zero-drift"))) {
-                assertEquals(ExitCode.OK, r.code(), r.toString());
+                assertEquals(ExitCode.OK.code(), r.code(), r.toString());
                 List<String> err = r.err().lines().toList();
                 assertEquals(1, err.size(), r.err());
                 assertTrue(err.get(0).startsWith(locked + ": cannot read (permission denied"), err.get(0));

@@ -5,8 +5,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.report.Caution;
 import dev.ampsieve.report.Glyphs;
+import dev.ampsieve.testing.DemoCatalog;
 import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.Units;
 import java.io.IOException;
@@ -15,7 +17,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.junit.jupiter.api.BeforeAll;
-import dev.ampsieve.testing.DemoCatalog;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -51,7 +52,7 @@ class ChartCommandsTest {
         JsonNode b = new ObjectMapper().readTree(run("budget", "zd-chop-01", "--stage", stage("bridge-amp"), "--json").out());
         // --ascii: the same output whatever charset the test JVM's stdout has
         CliRun r = run("--ascii", "bars", "zd-chop-01", "--stage", stage("bridge-amp"));
-        assertEquals(ExitCode.OK, r.code(), r.toString());
+        assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         double limit = b.get("limitV").asDouble();
         for (JsonNode t : b.get("terms")) {
             double v = t.get("outputV").asDouble();
@@ -71,7 +72,7 @@ class ChartCommandsTest {
     @Test
     void asciiBarsAreAsciiThroughout() {
         CliRun r = run("--ascii", "bars", "prec-bip-02", "--stage", stage("bridge-amp"));
-        assertEquals(ExitCode.OK, r.code(), r.toString());
+        assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         assertTrue(r.out().chars().allMatch(c -> c < 128), r.out());
         assertTrue(r.out().contains("^ limit") || r.out().contains("limit 6.00 mV ^"), r.out());
     }
@@ -80,7 +81,7 @@ class ChartCommandsTest {
     void scatterLettersFollowTheRanking() throws IOException {
         JsonNode rank = new ObjectMapper().readTree(run("rank", "--stage", stage("thermocouple"), "--json", "--top", "5").out());
         CliRun r = run("--ascii", "scatter", "--stage", stage("thermocouple"), "--top", "5");
-        assertEquals(ExitCode.OK, r.code(), r.toString());
+        assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         JsonNode first = rank.get("candidates").get(0);
         String legendA = r.outLines().stream().filter(l -> l.startsWith("  a  ")).findFirst().orElseThrow();
         assertTrue(legendA.contains(first.get("part").asText()), legendA);
@@ -94,6 +95,6 @@ class ChartCommandsTest {
     @Test
     void badNumbersAreUsageErrors() {
         CliRun r = run("scatter", "--stage", stage("thermocouple"), "--height", "2");
-        assertEquals(ExitCode.USAGE, r.code(), r.toString());
+        assertEquals(ExitCode.USAGE.code(), r.code(), r.toString());
     }
 }

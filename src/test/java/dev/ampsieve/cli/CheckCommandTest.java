@@ -4,6 +4,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.ampsieve.commands.Commands;
+import dev.ampsieve.failure.ExitCode;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.StringWriter;
@@ -53,7 +55,7 @@ class CheckCommandTest {
     void aCatalogWithOnlyWarningsChecksClean() throws IOException {
         Path f = Files.writeString(dir.resolve("amp.yaml"), PART);
         Run r = run("--catalog", dir.toString(), "check");
-        assertEquals(ExitCode.OK, r.code(), r.out() + r.err());
+        assertEquals(ExitCode.OK.code(), r.code(), r.out() + r.err());
         assertEquals(List.of(
                 "== " + f + ": part check-amp: 1 warning",
                 f + ":1:1: warning: noise: not given: en, en-corner, in will be estimated for a cmos input (common practice,"
@@ -72,7 +74,7 @@ class CheckCommandTest {
         Path bad = Files.writeString(dir.resolve("sub-bad.yaml"), PART.replace("check-amp", "other-amp")
                 .replace("gbw: 2 MHz", "gbw: 2 mA"));
         Run r = run("--catalog", dir.toString(), "check");
-        assertEquals(ExitCode.FINDINGS, r.code());
+        assertEquals(ExitCode.FINDINGS.code(), r.code());
         assertTrue(r.outLines().contains(bad + ":5:6: gbw: '2 mA' is a current but a frequency belongs here;"
                 + " write a frequency such as '1.5 MHz'"), r.out());
         assertEquals(dir + ": 2 file(s), 1 part(s), 1 error(s), 1 warning(s)", r.outLines().get(r.outLines().size() - 3));
@@ -83,7 +85,7 @@ class CheckCommandTest {
     void strictRefusesTheCatalogAndListsEveryProblemOnStderr() throws IOException {
         Files.writeString(dir.resolve("amp.yaml"), PART.replace("gbw: 2 MHz", "gbw: 2 mA"));
         Run r = run("--catalog", dir.toString(), "--strict", "check");
-        assertEquals(ExitCode.FINDINGS, r.code());
+        assertEquals(ExitCode.FINDINGS.code(), r.code());
         assertEquals("", r.out());
         assertEquals(1, r.err().lines().count(), r.err());
         assertTrue(r.err().contains("amp.yaml:5:6: gbw: '2 mA' is a current"), r.err());
@@ -93,7 +95,7 @@ class CheckCommandTest {
     void aMissingCatalogFolderIsOneLineWithTheFixNotAStackTrace() {
         Path missing = dir.resolve("nope");
         Run r = run("check", "--catalog", missing.toString());
-        assertEquals(ExitCode.FINDINGS, r.code());
+        assertEquals(ExitCode.FINDINGS.code(), r.code());
         assertEquals(missing + ": catalog folder not found; give the catalog folder with --catalog DIR"
                 + " or the environment variable AMPSIEVE_CATALOG", r.err().strip());
         assertFalse(r.err().contains("Exception"), r.err());
@@ -103,7 +105,7 @@ class CheckCommandTest {
     void malformedYamlIsReportedWithoutAStackTrace() throws IOException {
         Path f = Files.writeString(dir.resolve("broken.yaml"), "id: x\nvos: {max: 1 mV\n");
         Run r = run("--catalog", dir.toString(), "check");
-        assertEquals(ExitCode.FINDINGS, r.code());
+        assertEquals(ExitCode.FINDINGS.code(), r.code());
         assertEquals("== " + f + ": no part loaded: 1 error", r.outLines().get(0));
         assertTrue(r.outLines().get(1).startsWith(f + ":3:1: YAML syntax: "), r.out());
         assertFalse((r.out() + r.err()).contains("Exception"));
@@ -128,7 +130,7 @@ class CheckCommandTest {
         Files.writeString(dir.resolve("a.yaml"), PART);
         Path b = Files.writeString(dir.resolve("b.yaml"), PART.replace("check-amp", "other-amp").replace("gbw: 2 MHz", "gbw: 2 mA"));
         Run r = run("--catalog", dir.toString(), "check", "--quiet");
-        assertEquals(ExitCode.FINDINGS, r.code());
+        assertEquals(ExitCode.FINDINGS.code(), r.code());
         assertEquals(List.of(
                 "== " + b + ": no part loaded: 1 error",
                 b + ":5:6: gbw: '2 mA' is a current but a frequency belongs here; write a frequency such as '1.5 MHz'",
@@ -137,7 +139,7 @@ class CheckCommandTest {
         // no error at all: the summary line alone, exit 0
         Files.delete(b);
         Run clean = run("--catalog", dir.toString(), "check", "-q");
-        assertEquals(ExitCode.OK, clean.code());
+        assertEquals(ExitCode.OK.code(), clean.code());
         assertEquals(List.of(dir + ": 1 file(s), 1 part(s), 0 error(s), 1 warning(s)"), clean.outLines());
     }
 
@@ -146,7 +148,7 @@ class CheckCommandTest {
         Files.writeString(dir.resolve("amp.yaml"), PART);
         Path stage = Files.writeString(dir.resolve("bridge.yaml"), "gain: 100\nlimit: 1 mV\ncriterion: worst-case\n");
         Run r = run("--catalog", dir.toString(), "check");
-        assertEquals(ExitCode.OK, r.code(), r.out());
+        assertEquals(ExitCode.OK.code(), r.code(), r.out());
         assertTrue(r.outLines().contains(stage + ":1:1: warning: looks like a stage file (it has gain, limit, criterion and no id);"
                 + " skipped; move it to a 'stages' folder (which the catalog does not read) and pass it with --stage"), r.out());
         // one line for the file, not one per missing part key

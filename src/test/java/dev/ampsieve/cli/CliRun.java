@@ -1,5 +1,6 @@
 package dev.ampsieve.cli;
 
+import dev.ampsieve.commands.Commands;
 import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.util.List;

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.report.Caution;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -91,7 +92,7 @@ class FindCommandTest {
     @Test
     void listsMatchesWithFiguresAndTheCaution() {
         CliRun r = find("zero-drift", "vos<=10uV");
-        assertEquals(ExitCode.OK, r.code(), r.toString());
+        assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         // both titles say "amplifier" only; relevance ties, so the cheaper auto-zero part comes first
         assertEquals(List.of("fx-az-1", "fx-chop-1"), ids(r));
         String chop = r.outLines().stream().filter(l -> l.startsWith("fx-chop-1")).findFirst().orElseThrow();
@@ -117,7 +118,7 @@ class FindCommandTest {
     @Test
     void jsonCarriesSiValuesAndTheCaution() throws Exception {
         CliRun r = find("--json", "supply>=5V");
-        assertEquals(ExitCode.OK, r.code(), r.toString());
+        assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         JsonNode j = new ObjectMapper().readTree(r.out());
         assertEquals("supply>=5V", j.get("query").asText());
         // rated at 5 V: fx-chop-1 (2.7-5.5), fx-az-1 (1.8-5.5), fx-bip-1 (5-36); fx-jfet-1 starts at 9 V
@@ -131,7 +132,7 @@ class FindCommandTest {
     @Test
     void queryErrorsAreOneLineEachWithExitOne() {
         CliRun r = find("vos<5nA", "inptu:cmos");
-        assertEquals(ExitCode.FINDINGS, r.code(), r.toString());
+        assertEquals(ExitCode.FINDINGS.code(), r.code(), r.toString());
         List<String> err = r.err().lines().toList();
         assertEquals(2, err.size(), r.err());
         assertTrue(err.get(0).contains("'5nA' is a current but a voltage belongs here"), err.get(0));
@@ -142,7 +143,7 @@ class FindCommandTest {
     @Test
     void noMatchSaysSoAndExitsOne() {
         CliRun r = find("input:jfet", "gbw>100MHz");
-        assertEquals(ExitCode.FINDINGS, r.code());
+        assertEquals(ExitCode.FINDINGS.code(), r.code());
         assertTrue(r.out().startsWith("no part matches 'input:jfet gbw>100MHz'."), r.out()); // by hand: no demo JFET part is that fast
     }
 
@@ -157,7 +158,7 @@ class FindCommandTest {
     @Test
     void helpDocumentsTheQueryLanguage() {
         CliRun r = CliRun.of("find", "--help");
-        assertEquals(ExitCode.OK, r.code());
+        assertEquals(ExitCode.OK.code(), r.code());
         assertTrue(r.out().contains("field=lo..hi    both ends included"), r.out());
         assertTrue(r.out().contains("supply>=5V or supply=5V: rated to run on 5 V"), r.out());
         assertFalse(r.out().contains("%n"), r.out());
@@ -167,7 +168,7 @@ class FindCommandTest {
     void aDashWordExcludesWithoutDoubleDash() {
         // by hand: fx-chop-1 is the only chopper; the other three, cheapest first
         CliRun r = find("-chopper");
-        assertEquals(ExitCode.OK, r.code(), r.toString());
+        assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         assertEquals(List.of("fx-bip-1", "fx-az-1", "fx-jfet-1"), ids(r));
         assertTrue(r.out().startsWith("3 parts match '-chopper', most relevant first"), r.out());
         // the same with '--', as before
@@ -183,7 +184,7 @@ class FindCommandTest {
     @Test
     void realOptionsStillWorkBetweenDashWords() {
         CliRun r = find("-chopper", "--json", "cmos");
-        assertEquals(ExitCode.OK, r.code(), r.toString());
+        assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         // by hand: cmos parts are fx-chop-1 and fx-az-1; without the chopper, one remains
         assertTrue(r.out().contains("\"query\" : \"-chopper cmos\""), r.out());
         assertTrue(r.out().contains("\"count\" : 1"), r.out());

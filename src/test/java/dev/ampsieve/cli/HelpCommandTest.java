@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.ampsieve.catalog.CatalogKeys;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.search.Schema;
 import dev.ampsieve.stage.StageKeys;
 import java.util.List;
@@ -17,7 +18,7 @@ class HelpCommandTest {
     @Test
     void helpAloneListsTheCommandsAndTheTopics() {
         CliRun r = CliRun.of("help");
-        assertEquals(ExitCode.OK, r.code(), r.toString());
+        assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         assertTrue(r.out().contains("Reference topics (ampsieve help TOPIC):"), r.out());
         assertTrue(r.out().contains("  stage-keys    every key of a stage file: default, example, why it matters"), r.out());
         assertTrue(r.out().contains("  completion  Print a shell completion script (bash or zsh)."), r.out());
@@ -70,7 +71,7 @@ class HelpCommandTest {
     @Test
     void aTopicNameWithATypoGetsASuggestionAndExitTwo() {
         CliRun r = CliRun.of("help", "querry");
-        assertEquals(ExitCode.USAGE, r.code());
+        assertEquals(ExitCode.USAGE.code(), r.code());
         assertEquals("ampsieve: no help topic or command 'querry'; did you mean 'query'?", r.err().strip());
     }
 
@@ -83,7 +84,7 @@ class HelpCommandTest {
     @ValueSource(strings = {"check", "budget", "find", "rank", "compare", "suffices", "bars", "scatter", "completion", "help"})
     void everyCommandsHelpHasAParagraphAndAnExample(String command) {
         CliRun r = CliRun.of(command, "--help");
-        assertEquals(ExitCode.OK, r.code(), r.toString());
+        assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         assertTrue(r.out().contains("Example: ampsieve") || r.out().contains("Examples:\n  ampsieve")
                 || r.out().contains("Example:\n  ampsieve"), r.out());
         assertTrue(!r.out().contains("%n") && !r.err().contains("WARN"), r.toString());
@@ -92,7 +93,7 @@ class HelpCommandTest {
     @Test
     void completionScriptsAreGeneratedFromTheCommandTree() {
         CliRun bash = CliRun.of("completion", "bash");
-        assertEquals(ExitCode.OK, bash.code(), bash.toString());
+        assertEquals(ExitCode.OK.code(), bash.code(), bash.toString());
         assertTrue(bash.out().contains("complete -F _complete_ampsieve"), bash.out());
         // every command and the options of check, as the tree has them
         for (String c : List.of("check", "budget", "find", "rank", "compare", "suffices", "bars", "scatter", "completion", "help")) {
@@ -103,6 +104,6 @@ class HelpCommandTest {
         CliRun zsh = CliRun.of("completion", "zsh");
         assertEquals(bash.out(), zsh.out());
         assertTrue(zsh.out().contains("bashcompinit"), zsh.out());
-        assertEquals(ExitCode.USAGE, CliRun.of("completion", "fish").code());
+        assertEquals(ExitCode.USAGE.code(), CliRun.of("completion", "fish").code());
     }
 }

@@ -6,6 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.ampsieve.commands.Commands;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.testing.DemoCatalog;
 import java.io.IOException;
 import java.nio.file.Files;
@@ -92,7 +94,7 @@ class HostileTextTest {
     @Test
     void findShowsTheTitleEscaped() {
         CliRun r = run("find", "harmless");
-        assertEquals(ExitCode.OK, r.code(), r.toString());
+        assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         assertInert(r);
         assertTrue(r.out().contains(TITLE_SHOWN), r.out());
         // the currency a spreadsheet would run is shown as typed: only a CSV cell needs defusing
@@ -105,7 +107,7 @@ class HostileTextTest {
         assertInert(r);
         assertTrue(r.out().contains("1 part matches '\\x1b]0;x\\x07'"), r.toString());
         CliRun bad = run("find", "vos<" + ESC + "[2J");
-        assertEquals(ExitCode.FINDINGS, bad.code(), bad.toString());
+        assertEquals(ExitCode.FINDINGS.code(), bad.code(), bad.toString());
         assertInert(bad);
         assertTrue(bad.err().contains("vos<\\x1b[2J"), bad.toString());
     }
@@ -113,7 +115,7 @@ class HostileTextTest {
     @Test
     void jsonEscapesControlsAndKeepsTheTextExact() throws IOException {
         CliRun r = run("find", "harmless", "--json");
-        assertEquals(ExitCode.OK, r.code(), r.toString());
+        assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         assertInert(r);
         // RFC 8259 section 7: control characters as \\u00XX; Jackson writes the hex upper-case
         assertTrue(r.out().contains("Harmless amp \\u001B]0;owned\\u0007\\u001B[2J\\u009B31m \\u202Eevil"), r.out());
@@ -125,7 +127,7 @@ class HostileTextTest {
     @Test
     void budgetShowsTitleAndStageNameEscaped() {
         CliRun r = run("budget", "hostile-01", "--stage", stage.toString());
-        assertEquals(ExitCode.OK, r.code(), r.toString());
+        assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         assertInert(r);
         assertTrue(r.out().contains("Part       hostile-01  (" + TITLE_SHOWN + ")"), r.out());
         assertTrue(r.out().contains("br\\x1b[2Jidge.yaml: difference"), r.out());
@@ -137,7 +139,7 @@ class HostileTextTest {
     @Test
     void rankInEveryFormat() {
         CliRun text = run("rank", "--stage", stage.toString(), "--top", "100");
-        assertEquals(ExitCode.OK, text.code(), text.toString());
+        assertEquals(ExitCode.OK.code(), text.code(), text.toString());
         assertInert(text);
         assertTrue(text.out().startsWith("Stage br\\x1b[2Jidge.yaml: difference"), text.out());
         assertTrue(text.out().contains("hostile-01"), text.out());
@@ -156,7 +158,7 @@ class HostileTextTest {
     @Test
     void compareAndChartsShowTheStageNameEscaped() {
         CliRun c = run("compare", "hostile-01", "gp-bip-07", "--stage", stage.toString());
-        assertEquals(ExitCode.OK, c.code(), c.toString());
+        assertEquals(ExitCode.OK.code(), c.code(), c.toString());
         assertInert(c);
         assertTrue(c.out().startsWith("Stage br\\x1b[2Jidge.yaml: difference"), c.out());
         for (String cmd : List.of("bars", "scatter")) {
@@ -166,7 +168,7 @@ class HostileTextTest {
             }
             args.addAll(List.of("--stage", stage.toString()));
             CliRun r = run(args.toArray(String[]::new));
-            assertEquals(ExitCode.OK, r.code(), r.toString());
+            assertEquals(ExitCode.OK.code(), r.code(), r.toString());
             assertInert(r);
             assertTrue(r.out().contains("br\\x1b[2Jidge.yaml"), r.out());
         }
@@ -175,7 +177,7 @@ class HostileTextTest {
     @Test
     void checkNamesEachFieldWithAControlCharacter() {
         CliRun r = run("check");
-        assertEquals(ExitCode.OK, r.code(), r.toString()); // warnings only
+        assertEquals(ExitCode.OK.code(), r.code(), r.toString()); // warnings only
         assertInert(r);
         List<String> lines = r.outLines();
         // names: Unicode NameAliases (ESCAPE, CONTROL SEQUENCE INTRODUCER) and UnicodeData [from memory]
@@ -192,17 +194,17 @@ class HostileTextTest {
     @Test
     void unknownIdsAndWordsTypedByTheUserAreEchoedEscaped() {
         CliRun r = run("budget", "x" + ESC + "]0;t" + (char) 7, "--stage", stage.toString());
-        assertEquals(ExitCode.FINDINGS, r.code(), r.toString());
+        assertEquals(ExitCode.FINDINGS.code(), r.code(), r.toString());
         assertInert(r);
         assertTrue(r.err().startsWith("ampsieve: no part 'x\\x1b]0;t\\x07' in the catalog "), r.err());
 
         CliRun u = run("rank", "--stage", stage.toString(), ESC + "[2J");
-        assertEquals(ExitCode.USAGE, u.code(), u.toString());
+        assertEquals(ExitCode.USAGE.code(), u.code(), u.toString());
         assertInert(u);
         assertTrue(u.err().contains("'\\x1b[2J'"), u.err());
 
         CliRun missing = run("rank", "--stage", "no" + ESC + "[2J.yaml");
-        assertEquals(ExitCode.FINDINGS, missing.code(), missing.toString());
+        assertEquals(ExitCode.FINDINGS.code(), missing.code(), missing.toString());
         assertInert(missing);
         assertTrue(missing.err().startsWith("no\\x1b[2J.yaml"), missing.err());
     }
@@ -213,7 +215,7 @@ class HostileTextTest {
                 + "notes: |\n  first line\n  second\tline\n";
         Files.writeString(dir.resolve("amp.yaml"), plain);
         CliRun r = CliRun.of("--catalog", dir.toString(), "check");
-        assertEquals(ExitCode.OK, r.code(), r.toString());
+        assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         assertFalse(r.out().contains("control character"), r.out());
     }
 
@@ -221,7 +223,7 @@ class HostileTextTest {
     void anIdWithAControlCharacterIsAnErrorEchoedEscaped(@TempDir Path dir) throws IOException {
         Path f = Files.writeString(dir.resolve("bad.yaml"), HOSTILE.replace("id: hostile-01", "id: \"bad\\e[2Jid\""));
         CliRun r = CliRun.of("--catalog", dir.toString(), "check");
-        assertEquals(ExitCode.FINDINGS, r.code(), r.toString());
+        assertEquals(ExitCode.FINDINGS.code(), r.code(), r.toString());
         assertInert(r);
         assertTrue(r.out().contains(f + ":1:5: id: 'bad\\x1b[2Jid' is not a valid id"), r.out());
     }

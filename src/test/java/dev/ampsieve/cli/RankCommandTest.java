@@ -6,13 +6,14 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.report.Caution;
+import dev.ampsieve.testing.DemoCatalog;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.BeforeAll;
-import dev.ampsieve.testing.DemoCatalog;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -46,7 +47,7 @@ class RankCommandTest {
     }
 
     static JsonNode json(CliRun r) throws IOException {
-        assertEquals(ExitCode.OK, r.code(), r.toString());
+        assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         return new ObjectMapper().readTree(r.out());
     }
 
@@ -119,7 +120,7 @@ class RankCommandTest {
     @Test
     void textEndsWithTheCautionAndTablesFit100Columns() {
         CliRun r = run("rank", "--stage", stage("bridge-amp"), "--top", "5");
-        assertEquals(ExitCode.OK, r.code(), r.toString());
+        assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         assertTrue(r.out().contains("Candidates (") && r.out().contains("Advice\n"), r.out());
         assertTrue(dev.ampsieve.testing.Flat.of(r.out()).endsWith(Caution.TEXT));
         r.outLines().stream().filter(l -> !l.startsWith("  ") && !l.equals(Caution.TEXT))
@@ -142,7 +143,7 @@ class RankCommandTest {
     @Test
     void csvHasAHeaderOneRowPerPartAndTheCaution() {
         CliRun r = run("rank", "--stage", stage("adc-driver"), "--csv", "--top", "100");
-        assertEquals(ExitCode.OK, r.code(), r.toString());
+        assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         List<String> lines = r.outLines();
         assertTrue(lines.get(0).startsWith("rank,part,verdict,"));
         assertEquals(1 + 48 + 1, lines.size());
@@ -152,11 +153,11 @@ class RankCommandTest {
     @Test
     void badQueryAndBadTopAreOneLineErrors() {
         CliRun q = run("rank", "--stage", stage("adc-driver"), "--query", "vos<3nA");
-        assertEquals(ExitCode.FINDINGS, q.code());
+        assertEquals(ExitCode.FINDINGS.code(), q.code());
         assertEquals(1, q.err().lines().count(), q.err());
         assertTrue(q.err().contains("'3nA' is a current but a voltage belongs here"), q.err());
         CliRun t = run("rank", "--stage", stage("adc-driver"), "--top", "0");
-        assertEquals(ExitCode.USAGE, t.code());
+        assertEquals(ExitCode.USAGE.code(), t.code());
         assertEquals("ampsieve: --top must be 1 or more, not 0", t.err().strip());
     }
 
@@ -175,17 +176,17 @@ class RankCommandTest {
             }
         }
         CliRun yes = run("suffices", fits, "--stage", stage("bridge-amp"));
-        assertEquals(ExitCode.OK, yes.code(), yes.toString());
+        assertEquals(ExitCode.OK.code(), yes.code(), yes.toString());
         assertTrue(yes.outLines().get(0).startsWith("yes: " + fits + " meets the limit untrimmed"), yes.out());
         assertTrue(dev.ampsieve.testing.Flat.of(yes.out()).endsWith(Caution.TEXT));
         CliRun no = run("suffices", noFit, "--stage", stage("bridge-amp"), "--json");
-        assertEquals(ExitCode.FINDINGS, no.code(), no.toString());
+        assertEquals(ExitCode.FINDINGS.code(), no.code(), no.toString());
         JsonNode n = new ObjectMapper().readTree(no.out());
         assertEquals("no", n.get("answer").asText());
         assertTrue(n.get("text").asText().startsWith("no: " + noFit), n.toString());
         String rejected = j.get("rejected").get(0).get("part").asText();
         CliRun rej = run("suffices", rejected, "--stage", stage("bridge-amp"));
-        assertEquals(ExitCode.FINDINGS, rej.code());
+        assertEquals(ExitCode.FINDINGS.code(), rej.code());
         assertTrue(rej.outLines().get(0).startsWith("no: " + rejected + " fails a hard constraint: "), rej.out());
     }
 
@@ -229,11 +230,11 @@ class RankCommandTest {
     @Test
     void compareWithAnUnknownPartSuggestsTheNearestId() {
         CliRun r = run("compare", "prec-bip-2", "zd-chop-01", "--stage", stage("thermocouple"));
-        assertEquals(ExitCode.FINDINGS, r.code());
+        assertEquals(ExitCode.FINDINGS.code(), r.code());
         assertTrue(r.err().contains("no part 'prec-bip-2' in the catalog") && r.err().contains("did you mean 'prec-bip-02'?"),
                 r.err());
         CliRun both = run("compare", "prec-bip-2", "zd-chop-1", "--stage", stage("thermocouple"));
-        assertEquals(ExitCode.FINDINGS, both.code());
+        assertEquals(ExitCode.FINDINGS.code(), both.code());
         assertTrue(both.err().contains("did you mean 'prec-bip-02'?") && both.err().contains("did you mean 'zd-chop-01'?"),
                 both.err());
         assertEquals(2, both.err().lines().filter(l -> l.startsWith("ampsieve: no part")).count(), both.err());

@@ -9,6 +9,7 @@ import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.CatalogLoader;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.catalog.Price;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.yaml.Problem;
 import java.lang.reflect.RecordComponent;
 import java.nio.charset.StandardCharsets;
@@ -46,7 +47,7 @@ class SheetCommandsTest {
         Path csv = write(dir, "parts.csv", CSV);
         Path into = dir.resolve("catalog");
         CliRun r = CliRun.of("import", csv.toString(), "--into", into.toString());
-        assertEquals(ExitCode.FINDINGS, r.code(), r.toString());
+        assertEquals(ExitCode.FINDINGS.code(), r.code(), r.toString());
         // the catalog's bound for vos (CatalogKeys.BOUNDS: error above 1 V), placed at row 3, column 4
         assertEquals(csv + ":3:4: vos.max: 2.00 V is above 1.00 V, impossible for an op amp (an offset of volts leaves"
                 + " no room for a signal); check the unit prefix (p, n, u, m, k, M) and the datasheet column; the largest"
@@ -67,7 +68,7 @@ class SheetCommandsTest {
         Files.write(into.resolve("good-01.yaml"), mine);
 
         CliRun r = CliRun.of("import", csv.toString(), "--into", into.toString());
-        assertEquals(ExitCode.FINDINGS, r.code(), r.toString());
+        assertEquals(ExitCode.FINDINGS.code(), r.code(), r.toString());
         assertTrue(r.err().contains(csv + ":2:1: id: " + into.resolve("good-01.yaml") + ": the file already exists and was"
                 + " left as it was; add --force to replace it, or give the part another id\n"), r.err());
         assertArrayEquals(mine, Files.readAllBytes(into.resolve("good-01.yaml")));
@@ -115,10 +116,10 @@ class SheetCommandsTest {
         Path demo = dev.ampsieve.testing.DemoCatalog.copyTo(dir);
         Path csv = dir.resolve("demo.csv");
         CliRun e = CliRun.of("--catalog", demo.toString(), "export", "--csv", "--out", csv.toString());
-        assertEquals(ExitCode.OK, e.code(), e.toString());
+        assertEquals(ExitCode.OK.code(), e.code(), e.toString());
         Path into = dir.resolve("again");
         CliRun i = CliRun.of("import", csv.toString(), "--into", into.toString());
-        assertEquals(ExitCode.OK, i.code(), i.toString());
+        assertEquals(ExitCode.OK.code(), i.code(), i.toString());
         List<Part> before = unplaced(CatalogLoader.load(demo, false));
         assertEquals(48, before.size()); // the demo catalog's part count (ShippedCatalogsTest)
         assertEquals(before, unplaced(CatalogLoader.load(into, true)));
@@ -145,7 +146,7 @@ class SheetCommandsTest {
                 notes: "first line\\nsecond line, with \\"quotes\\""
                 """);
         Path csv = dir.resolve("odd.csv");
-        assertEquals(ExitCode.OK, CliRun.of("--catalog", cat.toString(), "export", "--csv", "--out", csv.toString()).code());
+        assertEquals(ExitCode.OK.code(), CliRun.of("--catalog", cat.toString(), "export", "--csv", "--out", csv.toString()).code());
         String sheet = Files.readString(csv);
         // defused for a spreadsheet: title, and the list cell that starts with '-'
         assertTrue(sheet.contains("\"'=1+2, a title a spreadsheet would compute\""), sheet);
@@ -153,7 +154,7 @@ class SheetCommandsTest {
         assertTrue(sheet.contains(",EUR,\"1: 2.1; 1000: 1.25\","), sheet);
         Path into = dir.resolve("again");
         CliRun i = CliRun.of("import", csv.toString(), "--into", into.toString());
-        assertEquals(ExitCode.OK, i.code(), i.toString());
+        assertEquals(ExitCode.OK.code(), i.code(), i.toString());
         Part back = CatalogLoader.load(into, true).parts().get(0);
         assertEquals(unplaced(CatalogLoader.load(cat, true).parts().get(0)), unplaced(back));
         assertEquals("=1+2, a title a spreadsheet would compute", back.title());
@@ -165,11 +166,11 @@ class SheetCommandsTest {
     void exportRefusesToReplaceAFileWithoutForce(@TempDir Path dir) throws Exception {
         Path out = write(dir, "mine.csv", "keep me\n");
         CliRun r = CliRun.of("export", "--csv", "--out", out.toString());
-        assertEquals(ExitCode.FINDINGS, r.code());
+        assertEquals(ExitCode.FINDINGS.code(), r.code());
         assertEquals(out + ": the file already exists and was left as it was; add --force to replace it, or give another"
                 + " --out FILE\n", r.err());
         assertEquals("keep me\n", Files.readString(out));
-        assertEquals(ExitCode.OK, CliRun.of("export", "--csv", "--out", out.toString(), "--force").code());
+        assertEquals(ExitCode.OK.code(), CliRun.of("export", "--csv", "--out", out.toString(), "--force").code());
         assertTrue(Files.readString(out).startsWith("id,title,architecture,input,"));
         assertEquals(List.of("mine.csv"), names(dir));
     }
@@ -177,7 +178,7 @@ class SheetCommandsTest {
     @Test
     void newPartLeavesExactlyTheRequiredValuesToType(@TempDir Path dir) throws Exception {
         CliRun r = CliRun.of("new-part", "lownoise-01", "--into", dir.toString());
-        assertEquals(ExitCode.OK, r.code(), r.toString());
+        assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         Path f = dir.resolve("lownoise-01.yaml");
         Catalog c = CatalogLoader.load(dir, false);
         assertEquals(List.of(), c.parts());
@@ -224,13 +225,13 @@ class SheetCommandsTest {
     @Test
     void newPartRefusesABadIdAndAnExistingFile(@TempDir Path dir) throws Exception {
         CliRun bad = CliRun.of("new-part", "My_Part", "--into", dir.toString());
-        assertEquals(ExitCode.FINDINGS, bad.code());
+        assertEquals(ExitCode.FINDINGS.code(), bad.code());
         assertEquals("id: 'My_Part' is not a valid id (lowercase letters, digits and single dashes, at most 64"
                 + " characters); write for example 'my-part'\n", bad.err());
         assertEquals(List.of(), names(dir));
         Path f = write(dir, "amp-01.yaml", "mine\n");
         CliRun again = CliRun.of("new-part", "amp-01", "--into", dir.toString());
-        assertEquals(ExitCode.FINDINGS, again.code());
+        assertEquals(ExitCode.FINDINGS.code(), again.code());
         assertEquals(f + ": the file already exists and was left as it was; choose another id, or edit the file that is"
                 + " there\n", again.err());
         assertEquals("mine\n", Files.readString(f));
@@ -241,7 +242,7 @@ class SheetCommandsTest {
         Path victim = write(dir, "victim.txt", "precious\n");
         Path link = Files.createSymbolicLink(dir.resolve("out.csv"), victim);
         CliRun r = CliRun.of("export", "--csv", "--out", link.toString(), "--force");
-        assertEquals(ExitCode.FINDINGS, r.code());
+        assertEquals(ExitCode.FINDINGS.code(), r.code());
         assertEquals(link + ": is a link; left as it was; give the name of a regular file\n", r.err());
         assertEquals("precious\n", Files.readString(victim));
         assertTrue(Files.isSymbolicLink(link));
@@ -250,7 +251,7 @@ class SheetCommandsTest {
     @Test
     void importReadsOnlyARegularFile() {
         CliRun r = CliRun.of("import", "/dev/zero", "--into", "/nonexistent-never-made");
-        assertEquals(ExitCode.FINDINGS, r.code());
+        assertEquals(ExitCode.FINDINGS.code(), r.code());
         assertEquals("/dev/zero: not a regular file (a character device); give a CSV file\n", r.err());
         assertTrue(!Files.exists(Path.of("/nonexistent-never-made")));
     }
@@ -258,7 +259,7 @@ class SheetCommandsTest {
     @Test
     void exportToTheTerminalEndsLinesWithLineFeedsOnly() {
         CliRun r = CliRun.of("export", "--csv");
-        assertEquals(ExitCode.OK, r.code(), r.err());
+        assertEquals(ExitCode.OK.code(), r.code(), r.err());
         assertTrue(r.out().startsWith("id,title,architecture,input,factory-trim,null-pins,channels,packages,tags,price.unit,"
                 + "price.quantity,price.currency,price.breaks,\"supply.min [V]\",\"supply.max [V]\","), r.out());
         assertEquals(49, r.outLines().size()); // the header and the demo catalog's 48 parts

@@ -1,12 +1,20 @@
 package dev.ampsieve.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.ampsieve.commands.Commands;
+import dev.ampsieve.commands.RootCommand;
+import dev.ampsieve.commands.StageSource;
+import dev.ampsieve.failure.ExitCode;
+import dev.ampsieve.stage.StageLoader;
+import dev.ampsieve.yaml.Problem;
 import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -46,14 +54,23 @@ class StageWarningCliTest {
     }
 
     @Test
-    void aStageTheShellNamesIsShownByItsNameWithoutTheCopysLines() throws Exception {
-        // the shell hands commands a copy of its stage: the copy's line numbers would point into the wrong file
-        Path copy = Files.writeString(dir.resolve("copy.yaml"), "# written by the shell\ngain: 10\nlimit: 10 V\nsupply: {voltage: 5 V}\n");
+    void aCurrentStageInMemoryIsUsedWithoutStageAndNamedAsItsSourceSays() throws Exception {
+        // the shell hands commands its stage in memory, with the name the user knows it by and
+        // its warnings without a line (the YAML behind them is not the user's)
+        StageLoader.Loaded loaded = StageLoader.parseWithWarnings("gain: 10\nlimit: 10 V\nsupply: {voltage: 5 V}\n",
+                Path.of("bridge.yaml"));
+        List<Problem> unplaced = loaded.warnings().stream()
+                .map(p -> new Problem(p.severity(), p.file(), 0, 0, p.field(), p.message(), p.fix())).toList();
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
         RootCommand root = new RootCommand();
-        root.setStageNames(f -> f.equals(copy) ? "bridge.yaml" : null);
-        Commands.build(root, new PrintWriter(out), new PrintWriter(err)).execute("budget", "prec-bip-02", "--stage", copy.toString());
+        root.useCurrentStage(() -> new StageSource.Given(loaded.stage(), unplaced, "bridge.yaml", "bridge.yaml"));
+        int code = Commands.build(root, new PrintWriter(out), new PrintWriter(err)).execute("budget", "prec-bip-02", "--json");
+        assertEquals(ExitCode.OK.code(), code, err.toString());
         assertTrue(err.toString().lines().anyMatch(l -> l.startsWith("bridge.yaml: warning: limit: a limit of 10.0 V")), err.toString());
+        assertTrue(out.toString().contains("\"stage\" : \"bridge.yaml\""), out.toString());
+        try (var written = Files.list(dir)) {
+            assertFalse(written.findAny().isPresent(), "nothing written to disk");
+        }
     }
 }

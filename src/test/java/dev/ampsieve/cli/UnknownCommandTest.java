@@ -3,6 +3,8 @@ package dev.ampsieve.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.ampsieve.commands.Commands;
+import dev.ampsieve.failure.ExitCode;
 import java.io.PrintWriter;
 import java.io.StringWriter;
 import org.junit.jupiter.api.Test;
@@ -20,7 +22,7 @@ class UnknownCommandTest {
     @Test
     void aMisspelledCommandGetsTheNearestOne() {
         String[] r = run("rnak");
-        assertEquals(Integer.toString(ExitCode.USAGE), r[0]);
+        assertEquals(Integer.toString(ExitCode.USAGE.code()), r[0]);
         assertEquals("ampsieve: unknown command 'rnak'; did you mean 'rank'? ('ampsieve --help' lists the commands)\n",
                 r[2].replace("\r", ""));
     }
@@ -35,7 +37,7 @@ class UnknownCommandTest {
     @Test
     void anExtraWordAfterACommandIsNamedWithIt() {
         String[] r = run("rank", "--stage", "s.yaml", "extra");
-        assertEquals(Integer.toString(ExitCode.USAGE), r[0]);
+        assertEquals(Integer.toString(ExitCode.USAGE.code()), r[0]);
         assertEquals("ampsieve rank: unexpected word 'extra' ('ampsieve rank --help' shows what it takes)\n",
                 r[2].replace("\r", ""));
     }

@@ -4,6 +4,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTimeoutPreemptively;
 
+import dev.ampsieve.commands.RootCommand;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.testing.DemoCatalog;
 import dev.ampsieve.testing.SpecialFiles;
 import java.nio.file.Files;
@@ -26,7 +28,7 @@ class UnreadableInputTest {
         // the old reader filled the heap with zeros and died with an OutOfMemoryError trace
         Path catalog = DemoCatalog.copyTo(dir);
         CliRun r = run("--catalog", catalog.toString(), "budget", "prec-bip-02", "--stage", SpecialFiles.devZero().toString());
-        assertEquals(ExitCode.FINDINGS, r.code(), r.toString()); // as any other unusable stage file
+        assertEquals(ExitCode.FINDINGS.code(), r.code(), r.toString()); // as any other unusable stage file
         assertEquals("/dev/zero: not a regular file (a character device); give a YAML file\n", r.err(), r.toString());
         assertEquals("", r.out());
     }
@@ -36,14 +38,14 @@ class UnreadableInputTest {
         Path catalog = DemoCatalog.copyTo(dir);
         Path fifo = SpecialFiles.fifo(dir.resolve("stage.yaml"));
         CliRun r = run("--catalog", catalog.toString(), "budget", "prec-bip-02", "--stage", fifo.toString());
-        assertEquals(ExitCode.FINDINGS, r.code(), r.toString());
+        assertEquals(ExitCode.FINDINGS.code(), r.code(), r.toString());
         assertEquals(fifo + ": not a regular file (a named pipe); give a YAML file\n", r.err(), r.toString());
     }
 
     @Test
     void anEmptyCatalogOptionIsAUsageErrorNotTheCurrentFolder() {
         CliRun r = run("check", "--catalog", "");
-        assertEquals(ExitCode.USAGE, r.code(), r.toString());
+        assertEquals(ExitCode.USAGE.code(), r.code(), r.toString());
         assertEquals("ampsieve: --catalog was given an empty folder name; give the catalog folder (--catalog DIR), or"
                 + " leave the option out to use $AMPSIEVE_CATALOG or the demo catalog\n", r.err());
         assertEquals("", r.out());

@@ -2,6 +2,7 @@ package dev.ampsieve.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
+import dev.ampsieve.commands.VisibleWriter;
 import java.io.PrintWriter;
 import java.io.StringWriter;
 import org.junit.jupiter.api.Test;
@@ -24,7 +25,7 @@ class VisibleWriterTest {
     @Test
     void lineFeedsStayAndAPartialLineGoesOutOnFlush() {
         StringWriter sink = new StringWriter();
-        PrintWriter w = new PrintWriter(new VisibleWriter(sink));
+        PrintWriter w = new PrintWriter(VisibleWriter.over(sink));
         w.print("a" + ESC + "[3");  // a sequence split across two writes is still one line
         w.print("1mred" + ESC + "[0m\nb\tc");
         w.flush();

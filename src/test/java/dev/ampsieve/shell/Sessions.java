@@ -2,7 +2,7 @@ package dev.ampsieve.shell;
 
 import static java.nio.charset.StandardCharsets.UTF_8;
 
-import dev.ampsieve.cli.RootCommand;
+import dev.ampsieve.commands.RootCommand;
 import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
@@ -23,6 +23,20 @@ final class Sessions {
 
     /** Lines typed, each ended by Enter; the session ends at the end of the input (as Ctrl-D). */
     static String run(List<String> rootArgs, Path history, Map<String, String> env, String... lines) {
+        return session(rootArgs, history, env, List.of(), lines).printed();
+    }
+
+    /** What a session printed and each line's exit code, in order. */
+    record Ran(String printed, List<Integer> codes) {
+    }
+
+    /** As {@link #run}, with commands added to the shell's tree, and the exit code of each line. */
+    static Ran withCodes(List<String> rootArgs, List<Object> extraCommands, String... lines) {
+        return session(rootArgs, null, Map.of(), extraCommands, lines);
+    }
+
+    private static Ran session(List<String> rootArgs, Path history, Map<String, String> env, List<Object> extra,
+            String... lines) {
         StringBuilder typed = new StringBuilder();
         for (String l : lines) {
             typed.append(l);
@@ -32,11 +46,13 @@ final class Sessions {
         }
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         try (Terminal t = terminal(new Typed(typed.toString().getBytes(UTF_8)), out)) {
-            new Shell(new RootCommand(), rootArgs, t, history, env).run();
+            Shell shell = new Shell(new RootCommand(), rootArgs, t, history, env);
+            extra.forEach(shell::withCommand);
+            shell.run();
+            return new Ran(out.toString(UTF_8), shell.exitCodes());
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
-        return out.toString(UTF_8);
     }
 
     /** JLine's dumb terminal on the given keys, set up as a tty is. */

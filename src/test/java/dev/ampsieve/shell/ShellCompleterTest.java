@@ -6,8 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.ampsieve.cli.Commands;
-import dev.ampsieve.cli.RootCommand;
+import dev.ampsieve.commands.Commands;
+import dev.ampsieve.commands.RootCommand;
 import dev.ampsieve.report.OutputStyle;
 import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;

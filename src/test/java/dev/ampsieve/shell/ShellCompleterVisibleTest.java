@@ -4,8 +4,8 @@ import static java.nio.charset.StandardCharsets.UTF_8;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.ampsieve.cli.Commands;
-import dev.ampsieve.cli.RootCommand;
+import dev.ampsieve.commands.Commands;
+import dev.ampsieve.commands.RootCommand;
 import dev.ampsieve.report.OutputStyle;
 import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;

@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.ampsieve.cli.RootCommand;
+import dev.ampsieve.commands.RootCommand;
 import dev.ampsieve.report.OutputStyle;
 import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.Units;

@@ -7,7 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertTimeoutPreemptively;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.ampsieve.cli.RootCommand;
+import dev.ampsieve.commands.RootCommand;
 import dev.ampsieve.stage.StageLoader;
 import dev.ampsieve.testing.DemoCatalog;
 import dev.ampsieve.testing.Flat;

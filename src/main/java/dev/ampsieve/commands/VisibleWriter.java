@@ -1,4 +1,4 @@
-package dev.ampsieve.cli;
+package dev.ampsieve.commands;
 
 import dev.ampsieve.text.Visible;
 import java.io.IOException;
@@ -24,6 +24,11 @@ public final class VisibleWriter extends Writer {
 
     VisibleWriter(Writer target) {
         this.target = target;
+    }
+
+    /** The guard in front of {@code target}. */
+    public static VisibleWriter over(Writer target) {
+        return new VisibleWriter(target);
     }
 
     /** One line (without its line feed) as it may reach a terminal; the shell passes its lines through it too. */

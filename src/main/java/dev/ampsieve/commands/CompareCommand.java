@@ -1,16 +1,17 @@
-package dev.ampsieve.cli;
+package dev.ampsieve.commands;
 
 import dev.ampsieve.advice.Comparison;
 import dev.ampsieve.budget.BudgetCalculator;
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.failure.ExitCode;
+import dev.ampsieve.failure.Refusal;
 import dev.ampsieve.report.CompareReport;
 import dev.ampsieve.stage.Stage;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.ParentCommand;
 import picocli.CommandLine.Spec;
@@ -38,8 +39,8 @@ public final class CompareCommand implements Callable<Integer> {
     @Mixin
     StageOption stageOption;
 
-    @Option(names = "--json", description = "Print JSON instead of the table.")
-    boolean json;
+    @Mixin
+    JsonOption format;
 
     @Override
     public Integer call() throws Exception {
@@ -47,22 +48,22 @@ public final class CompareCommand implements Callable<Integer> {
         Candidates.noteUnusedFiles(catalog, spec.commandLine().getErr());
         Part pa;
         try {
-            pa = BudgetCommand.find(catalog, a);
-        } catch (UserException missingA) {
+            pa = Parts.find(catalog, a);
+        } catch (Refusal missingA) {
             // name both unknown ids at once, so the user fixes the line in one go
             try {
-                BudgetCommand.find(catalog, b);
-            } catch (UserException missingB) {
-                throw new UserException(missingA.getMessage() + "\nampsieve: " + missingB.getMessage(), ExitCode.FINDINGS);
+                Parts.find(catalog, b);
+            } catch (Refusal missingB) {
+                throw new Refusal(missingA.getMessage() + "\n" + missingB.getMessage(), ExitCode.FINDINGS, missingA.place());
             }
             throw missingA;
         }
-        Part pb = BudgetCommand.find(catalog, b);
+        Part pb = Parts.find(catalog, b);
         Stage stage = stageOption.load();
         Comparison c = Comparison.of(BudgetCalculator.compute(stage, pa), BudgetCalculator.compute(stage, pb));
         String label = stageOption.label();
         String name = stageOption.name(); // text headers stay within 100 columns
-        spec.commandLine().getOut().print(json ? CompareReport.json(c, label) : CompareReport.text(c, name, root.textWidth()));
-        return ExitCode.OK;
+        spec.commandLine().getOut().print(format.json() ? CompareReport.json(c, label) : CompareReport.text(c, name, root.textWidth()));
+        return ExitCode.OK.code();
     }
 }

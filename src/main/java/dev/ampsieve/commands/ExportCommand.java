@@ -1,6 +1,7 @@
-package dev.ampsieve.cli;
+package dev.ampsieve.commands;
 
 import dev.ampsieve.catalog.Catalog;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.sheet.SheetExport;
 import dev.ampsieve.text.Visible;
 import dev.ampsieve.yaml.AtomicFiles;
@@ -48,11 +49,11 @@ public final class ExportCommand implements Callable<Integer> {
         if (out == null) {
             o.print(SheetExport.csv(catalog.parts(), "\n"));
             o.flush();
-            return ExitCode.OK;
+            return ExitCode.OK.code();
         }
         AtomicFiles.write(out, SheetExport.csv(catalog.parts()), force, "add --force to replace it, or give another --out FILE");
         o.println(catalog.parts().size() + " part(s) written to " + Visible.of(out.toString()));
         o.flush();
-        return ExitCode.OK;
+        return ExitCode.OK.code();
     }
 }

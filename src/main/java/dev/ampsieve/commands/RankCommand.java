@@ -1,10 +1,13 @@
-package dev.ampsieve.cli;
+package dev.ampsieve.commands;
 
 import dev.ampsieve.advice.Ranker;
 import dev.ampsieve.advice.Ranking;
 import dev.ampsieve.budget.BudgetCalculator;
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.failure.ExitCode;
+import dev.ampsieve.failure.Place;
+import dev.ampsieve.failure.Refusal;
 import dev.ampsieve.report.RankReport;
 import dev.ampsieve.stage.Stage;
 import java.util.List;
@@ -36,8 +39,8 @@ public final class RankCommand implements Callable<Integer> {
     @Mixin
     StageOption stageOption;
 
-    @Option(names = "--query", paramLabel = "Q", description = "Only parts matching this query.")
-    String query;
+    @Mixin
+    QueryOption query;
 
     @Option(names = "--top", paramLabel = "N", defaultValue = "15",
             description = "Candidates to list (default ${DEFAULT-VALUE}); advice and Pareto front use all.")
@@ -47,31 +50,23 @@ public final class RankCommand implements Callable<Integer> {
     boolean all;
 
     @ArgGroup(exclusive = true)
-    Format format = new Format();
-
-    static final class Format {
-        @Option(names = "--json", description = "Print JSON.")
-        boolean json;
-
-        @Option(names = "--csv", description = "Print CSV, one row per part.")
-        boolean csv;
-    }
+    TableFormat format = new TableFormat();
 
     @Override
     public Integer call() throws Exception {
         if (top < 1) {
-            throw new UserException("--top must be 1 or more, not " + top, ExitCode.USAGE);
+            throw new Refusal("--top must be 1 or more, not " + top, ExitCode.USAGE, Place.field("--top"));
         }
         Catalog catalog = root.catalog();
         Candidates.noteProblems(catalog, spec.commandLine().getErr());
         Stage stage = stageOption.load();
-        List<Part> parts = query == null ? catalog.parts() : Candidates.matching(catalog, query, spec.commandLine().getErr());
+        List<Part> parts = query.parts(catalog, spec.commandLine().getErr());
         Ranking r = Ranker.rank(stage, parts, BudgetCalculator::compute);
         String label = stageOption.label();
         String name = stageOption.name(); // text headers stay within 100 columns
-        String out = format.json ? RankReport.json(r, label, query, top, all)
-                : format.csv ? RankReport.csv(r, top) : RankReport.text(r, name, query, top, root.textWidth(), all);
+        String out = format.json() ? RankReport.json(r, label, query.text(), top, all)
+                : format.csv() ? RankReport.csv(r, top) : RankReport.text(r, name, query.text(), top, root.textWidth(), all);
         spec.commandLine().getOut().print(out);
-        return ExitCode.OK;
+        return ExitCode.OK.code();
     }
 }

@@ -1,4 +1,4 @@
-package dev.ampsieve.cli;
+package dev.ampsieve.commands;
 
 import dev.ampsieve.report.OutputStyle;
 import java.nio.charset.Charset;

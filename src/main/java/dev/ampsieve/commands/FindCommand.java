@@ -1,19 +1,20 @@
-package dev.ampsieve.cli;
+package dev.ampsieve.commands;
 
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.report.FindReport;
 import dev.ampsieve.search.QueryLanguage;
 import java.util.ArrayList;
 import java.util.List;
-import picocli.CommandLine;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.ParentCommand;
 import picocli.CommandLine.Spec;
+import picocli.CommandLine;
 
 /** {@code ampsieve find QUERY...}: catalog parts matching words and constraints. */
 @Command(name = "find", header = "List catalog parts matching words and constraints.", mixinStandardHelpOptions = true,
@@ -74,8 +75,8 @@ public final class FindCommand implements Callable<Integer> {
             description = "Words and constraints; all must hold; -word excludes. None: every part.")
     List<String> query = List.of();
 
-    @Option(names = "--json", description = "Print JSON instead of the table.")
-    boolean json;
+    @Mixin
+    JsonOption format;
 
     @Override
     public Integer call() throws Exception {
@@ -83,7 +84,7 @@ public final class FindCommand implements Callable<Integer> {
         Candidates.noteProblems(catalog, spec.commandLine().getErr());
         String text = String.join(" ", query).strip();
         List<Part> parts = Candidates.matching(catalog, text, spec.commandLine().getErr());
-        spec.commandLine().getOut().print(json ? FindReport.json(text, parts) : FindReport.text(text, parts, root.textWidth()));
-        return parts.isEmpty() ? ExitCode.FINDINGS : ExitCode.OK;
+        spec.commandLine().getOut().print(format.json() ? FindReport.json(text, parts) : FindReport.text(text, parts, root.textWidth()));
+        return parts.isEmpty() ? ExitCode.FINDINGS.code() : ExitCode.OK.code();
     }
 }

@@ -1,17 +1,16 @@
-package dev.ampsieve.cli;
+package dev.ampsieve.commands;
 
 import dev.ampsieve.advice.Sufficiency;
 import dev.ampsieve.budget.BudgetCalculator;
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.report.SufficesReport;
 import dev.ampsieve.stage.Stage;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.ParentCommand;
 import picocli.CommandLine.Spec;
 
@@ -28,25 +27,25 @@ public final class SufficesCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "PART", description = "Part id from the catalog.")
-    String partId;
+    @Mixin
+    PartArgument part;
 
     @Mixin
     StageOption stageOption;
 
-    @Option(names = "--json", description = "Print JSON instead of text.")
-    boolean json;
+    @Mixin
+    JsonOption format;
 
     @Override
     public Integer call() throws Exception {
         Catalog catalog = root.catalog();
         Candidates.noteUnusedFiles(catalog, spec.commandLine().getErr());
-        Part part = BudgetCommand.find(catalog, partId);
+        Part p = part.in(catalog);
         Stage stage = stageOption.load();
-        Sufficiency s = Sufficiency.of(BudgetCalculator.compute(stage, part));
+        Sufficiency s = Sufficiency.of(BudgetCalculator.compute(stage, p));
         String label = stageOption.label();
         String name = stageOption.name(); // text headers stay within 100 columns
-        spec.commandLine().getOut().print(json ? SufficesReport.json(s, label) : SufficesReport.text(s, name, root.textWidth()));
-        return s.yes() ? ExitCode.OK : ExitCode.FINDINGS;
+        spec.commandLine().getOut().print(format.json() ? SufficesReport.json(s, label) : SufficesReport.text(s, name, root.textWidth()));
+        return s.yes() ? ExitCode.OK.code() : ExitCode.FINDINGS.code();
     }
 }

@@ -1,10 +1,13 @@
-package dev.ampsieve.cli;
+package dev.ampsieve.commands;
 
 import dev.ampsieve.advice.Ranker;
 import dev.ampsieve.advice.Ranking;
 import dev.ampsieve.budget.BudgetCalculator;
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.failure.ExitCode;
+import dev.ampsieve.failure.Place;
+import dev.ampsieve.failure.Refusal;
 import dev.ampsieve.report.RankScatter;
 import dev.ampsieve.stage.Stage;
 import java.util.List;
@@ -35,8 +38,8 @@ public final class ScatterCommand implements Callable<Integer> {
     @Mixin
     StageOption stageOption;
 
-    @Option(names = "--query", paramLabel = "Q", description = "Only parts matching this query (as for 'find').")
-    String query;
+    @Mixin
+    QueryOption query;
 
     @Option(names = "--top", paramLabel = "N", defaultValue = "20",
             description = "Candidates to plot, in ranking order (default ${DEFAULT-VALUE}; letters run out at 52).")
@@ -48,15 +51,16 @@ public final class ScatterCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         if (top < 1 || height < 5) {
-            throw new UserException("--top must be 1 or more and --height 5 or more", ExitCode.USAGE);
+            throw new Refusal("--top must be 1 or more and --height 5 or more", ExitCode.USAGE,
+                    Place.field(top < 1 ? "--top" : "--height"));
         }
         Catalog catalog = root.catalog();
         Candidates.noteProblems(catalog, spec.commandLine().getErr());
         Stage stage = stageOption.load();
-        List<Part> parts = query == null ? catalog.parts() : Candidates.matching(catalog, query, spec.commandLine().getErr());
+        List<Part> parts = query.parts(catalog, spec.commandLine().getErr());
         Ranking r = Ranker.rank(stage, parts, BudgetCalculator::compute);
         String name = stageOption.name();
         spec.commandLine().getOut().print(RankScatter.render(r, name, top, height, root.outputStyle()));
-        return ExitCode.OK;
+        return ExitCode.OK.code();
     }
 }

@@ -1,5 +1,7 @@
-package dev.ampsieve.cli;
+package dev.ampsieve.commands;
 
+import dev.ampsieve.failure.ExitCode;
+import dev.ampsieve.failure.Refusal;
 import dev.ampsieve.report.OutputStyle;
 import dev.ampsieve.report.ReferencePages;
 import dev.ampsieve.text.Visible;
@@ -9,11 +11,11 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
+import picocli.CommandLine;
 
 /** {@code ampsieve help [TOPIC|COMMAND]}: the reference pages, or one command's help. */
 @Command(name = "help", header = "Reference pages (query, stage-keys, catalog-keys, units) and command help.",
@@ -34,7 +36,7 @@ public final class HelpCommand implements Callable<Integer> {
     String topic;
 
     @Override
-    public Integer call() {
+    public Integer call() throws Refusal {
         CommandLine root = spec.root().commandLine();
         PrintWriter out = spec.commandLine().getOut();
         if (topic == null) {
@@ -44,22 +46,22 @@ public final class HelpCommand implements Callable<Integer> {
             for (String t : ReferencePages.TOPICS) {
                 out.println("  " + String.format(Locale.ROOT, "%-14s", t) + ReferencePages.summary(t));
             }
-            return ExitCode.OK;
+            return ExitCode.OK.code();
         }
         String t = topic.strip().toLowerCase(Locale.ROOT);
         if (ReferencePages.TOPICS.contains(t)) {
             out.print(ReferencePages.page(t, OutputStyle.TEXT_WIDTH)); // as every text report on the command line
-            return ExitCode.OK;
+            return ExitCode.OK.code();
         }
         CommandLine sub = root.getSubcommands().get(t);
         if (sub != null) {
             sub.usage(out);
-            return ExitCode.OK;
+            return ExitCode.OK.code();
         }
         List<String> known = new ArrayList<>(ReferencePages.TOPICS);
         known.addAll(root.getSubcommands().keySet());
         String near = Fields.closest(t, known);
-        throw new UserException("no help topic or command '" + Visible.of(topic) + "'; "
+        throw new Refusal("no help topic or command '" + Visible.of(topic) + "'; "
                 + (near != null ? "did you mean '" + near + "'?" : "topics: " + String.join(", ", ReferencePages.TOPICS)),
                 ExitCode.USAGE);
     }

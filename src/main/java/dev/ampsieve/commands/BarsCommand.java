@@ -1,16 +1,15 @@
-package dev.ampsieve.cli;
+package dev.ampsieve.commands;
 
 import dev.ampsieve.budget.BudgetCalculator;
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.report.BudgetBars;
 import dev.ampsieve.stage.Stage;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Option;
 import picocli.CommandLine.ParentCommand;
 import picocli.CommandLine.Spec;
 
@@ -29,8 +28,8 @@ public final class BarsCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "PART", description = "Part id from the catalog.")
-    String partId;
+    @Mixin
+    PartArgument part;
 
     @Mixin
     StageOption stageOption;
@@ -39,10 +38,10 @@ public final class BarsCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         Catalog catalog = root.catalog();
         Candidates.noteUnusedFiles(catalog, spec.commandLine().getErr());
-        Part part = BudgetCommand.find(catalog, partId);
+        Part p = part.in(catalog);
         Stage stage = stageOption.load();
         String name = stageOption.name();
-        spec.commandLine().getOut().print(BudgetBars.render(BudgetCalculator.compute(stage, part), name, root.outputStyle()));
-        return ExitCode.OK;
+        spec.commandLine().getOut().print(BudgetBars.render(BudgetCalculator.compute(stage, p), name, root.outputStyle()));
+        return ExitCode.OK.code();
     }
 }

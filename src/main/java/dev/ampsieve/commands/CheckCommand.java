@@ -1,7 +1,8 @@
-package dev.ampsieve.cli;
+package dev.ampsieve.commands;
 
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.report.Caution;
 import dev.ampsieve.text.Visible;
 import dev.ampsieve.yaml.Problem;
@@ -68,7 +69,7 @@ public final class CheckCommand implements Callable<Integer> {
             out.println();
             out.println(Caution.TEXT);
         }
-        return errors > 0 ? ExitCode.FINDINGS : ExitCode.OK;
+        return errors > 0 ? ExitCode.FINDINGS.code() : ExitCode.OK.code();
     }
 
     /** {@code == FILE: parts a, b: 1 error, 2 warnings}. */

@@ -1,9 +1,11 @@
-package dev.ampsieve.cli;
+package dev.ampsieve.commands;
 
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.CatalogLoader;
+import dev.ampsieve.failure.ExitCode;
+import dev.ampsieve.failure.Place;
+import dev.ampsieve.failure.Refusal;
 import dev.ampsieve.report.OutputStyle;
-import dev.ampsieve.shell.Shell;
 import dev.ampsieve.yaml.InputException;
 import java.io.IOException;
 import java.io.InputStream;
@@ -59,14 +61,11 @@ public final class RootCommand implements Callable<Integer> {
         return verbose;
     }
 
-    /** With a terminal and no command: the interactive shell. Without a terminal: the usage. */
+    /** No command: the usage. ({@code Main} opens the shell instead when there is a terminal.) */
     @Override
     public Integer call() {
-        if (System.console() != null) {
-            return Shell.start(this, spec.commandLine().getParseResult().originalArgs());
-        }
         spec.commandLine().usage(spec.commandLine().getOut());
-        return ExitCode.OK;
+        return ExitCode.OK.code();
     }
 
     /** Width, charset and colours for text output: the shell's terminal, else what stdout looks like. */
@@ -85,16 +84,21 @@ public final class RootCommand implements Callable<Integer> {
         this.style = s;
     }
 
-    /**
-     * How output names a stage file: the shell hands commands its current stage as a temporary
-     * file and names it by what the user knows ("bridge-amp.yaml", "(current stage)"). Naming it
-     * before the text is laid out keeps folded lines folded at the right place.
-     */
-    private java.util.function.Function<Path, String> stageNames = p -> null;
+    /** The front end's current stage (the shell's), used when a command is given no --stage FILE; null on the command line. */
+    private StageSource currentStage;
 
-    /** @param names the name to show for a stage file, or null to show the path as given */
-    public void setStageNames(java.util.function.Function<Path, String> names) {
-        this.stageNames = names;
+    /** The shell hands its current stage to the commands this way, before it builds the tree. */
+    public void useCurrentStage(StageSource source) {
+        this.currentStage = source;
+    }
+
+    boolean hasCurrentStage() {
+        return currentStage != null;
+    }
+
+    /** The current stage, or null when the front end has none to offer. */
+    StageSource currentStage() {
+        return currentStage;
     }
 
     /** Notes already printed by this root (stage warnings): the shell runs many commands, each note shows once. */
@@ -103,11 +107,6 @@ public final class RootCommand implements Callable<Integer> {
     /** True the first time {@code note} is offered to this root. */
     boolean firstTime(String note) {
         return shownNotes.add(note);
-    }
-
-    /** The name the shell gives this stage file, or null (the command line keeps the path). */
-    public String stageName(Path file) {
-        return stageNames.apply(file);
     }
 
     /**
@@ -124,16 +123,16 @@ public final class RootCommand implements Callable<Integer> {
      * Where a new part file goes by default: the catalog folder the user chose (--catalog, else
      * $AMPSIEVE_CATALOG), else the current folder; never the demo catalog, which is not theirs.
      */
-    public Path chosenCatalogDir() {
+    public Path chosenCatalogDir() throws Refusal {
         String env = System.getenv(CATALOG_VARIABLE);
         String empty = emptyCatalogChoice(catalogDir, env);
         if (empty != null) {
-            throw new UserException(empty, ExitCode.USAGE);
+            throw new Refusal(empty, ExitCode.USAGE, Place.field("--catalog"));
         }
         return catalogDir != null ? catalogDir : env != null ? Path.of(env) : Path.of(".");
     }
 
-    static Path chooseCatalog(Path option, String env, String home) {
+    public static Path chooseCatalog(Path option, String env, String home) {
         if (option != null) {
             return option;
         }
@@ -156,7 +155,7 @@ public final class RootCommand implements Callable<Integer> {
      * variable was unset, and ranking invented parts as if they were the user's would be worse
      * than stopping.
      */
-    static String emptyCatalogChoice(Path option, String env) {
+    public static String emptyCatalogChoice(Path option, String env) {
         if (option != null) {
             return option.toString().isBlank()
                     ? "--catalog was given an empty folder name; give the catalog folder (--catalog DIR), or leave the"
@@ -171,13 +170,13 @@ public final class RootCommand implements Callable<Integer> {
     /**
      * Loads the catalog once per command tree; problems stay on the result for the caller to show.
      *
-     * @throws UserException (exit code 2) when --catalog or AMPSIEVE_CATALOG is empty
+     * @throws Refusal (exit code 2) when --catalog or AMPSIEVE_CATALOG is empty
      */
-    public Catalog catalog() throws InputException {
+    public Catalog catalog() throws InputException, Refusal {
         if (catalog == null) {
             String empty = emptyCatalogChoice(catalogDir, System.getenv(CATALOG_VARIABLE));
             if (empty != null) {
-                throw new UserException(empty, ExitCode.USAGE);
+                throw new Refusal(empty, ExitCode.USAGE, Place.field("--catalog"));
             }
             catalog = CatalogLoader.load(catalogDir(), strict);
         }

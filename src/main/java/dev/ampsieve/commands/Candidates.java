@@ -1,4 +1,4 @@
-package dev.ampsieve.cli;
+package dev.ampsieve.commands;
 
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;

@@ -1,5 +1,6 @@
-package dev.ampsieve.cli;
+package dev.ampsieve.commands;
 
+import dev.ampsieve.failure.ExitCode;
 import java.util.concurrent.Callable;
 import picocli.AutoComplete;
 import picocli.CommandLine.Command;
@@ -38,6 +39,6 @@ public final class CompletionCommand implements Callable<Integer> {
         // (without re-running compinit when completion is already set up)
         String script = AutoComplete.bash("ampsieve", spec.root().commandLine());
         spec.commandLine().getOut().print(script);
-        return ExitCode.OK;
+        return ExitCode.OK.code();
     }
 }

@@ -5,16 +5,16 @@ import java.io.Writer;
 import java.util.function.UnaryOperator;
 
 /**
- * Passes text on line by line through a function: hides the shell's temporary stage file
- * behind "(current stage)", spells µ and ° in ASCII on terminals that cannot show them,
- * colours error lines. A partial line (no newline yet) goes out, filtered, on flush.
+ * Passes text to the terminal a line at a time through the shell's presentation: the guard
+ * against control characters, µ and ° in ASCII on terminals that cannot show them, error lines
+ * folded and coloured. A partial line (no newline yet) goes out on flush.
  */
-final class LineFilterWriter extends Writer {
+final class TerminalLines extends Writer {
     private final Writer target;
     private final UnaryOperator<String> filter;
     private final StringBuilder line = new StringBuilder();
 
-    LineFilterWriter(Writer target, UnaryOperator<String> filter) {
+    TerminalLines(Writer target, UnaryOperator<String> filter) {
         this.target = target;
         this.filter = filter;
     }

@@ -1,9 +1,11 @@
-package dev.ampsieve.cli;
+package dev.ampsieve.commands;
 
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.CatalogKeys;
 import dev.ampsieve.catalog.CatalogLoader;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.failure.ExitCode;
+import dev.ampsieve.failure.Refusal;
 import dev.ampsieve.sheet.SheetImport;
 import dev.ampsieve.text.Visible;
 import dev.ampsieve.yaml.AtomicFiles;
@@ -67,7 +69,7 @@ public final class ImportCommand implements Callable<Integer> {
             problems.forEach(err::println);
             err.println("ampsieve: nothing imported: the header needs fixing first");
             err.flush();
-            return ExitCode.FINDINGS;
+            return ExitCode.FINDINGS.code();
         }
         prepare(into);
         Map<String, Located> known = knownIds(into);
@@ -101,18 +103,18 @@ public final class ImportCommand implements Callable<Integer> {
         if (written > 0) {
             root.forgetCatalog(); // the shell reads the catalog again before its next command
         }
-        return problems.stream().anyMatch(Problem::isError) ? ExitCode.FINDINGS : ExitCode.OK;
+        return problems.stream().anyMatch(Problem::isError) ? ExitCode.FINDINGS.code() : ExitCode.OK.code();
     }
 
-    static void prepare(Path dir) {
+    static void prepare(Path dir) throws Refusal {
         if (Files.exists(dir) && !Files.isDirectory(dir)) {
-            throw new UserException(Visible.of(dir.toString()) + " is not a folder; give the folder to write into with --into DIR",
+            throw new Refusal(Visible.of(dir.toString()) + " is not a folder; give the folder to write into with --into DIR",
                     ExitCode.USAGE);
         }
         try {
             Files.createDirectories(dir);
         } catch (IOException e) {
-            throw new UserException("cannot make the folder " + Visible.of(dir.toString()) + " ("
+            throw new Refusal("cannot make the folder " + Visible.of(dir.toString()) + " ("
                     + dev.ampsieve.yaml.YamlFiles.describe(e) + ")", ExitCode.FINDINGS);
         }
     }

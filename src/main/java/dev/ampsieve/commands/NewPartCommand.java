@@ -1,7 +1,8 @@
-package dev.ampsieve.cli;
+package dev.ampsieve.commands;
 
 import dev.ampsieve.catalog.CatalogLoader;
 import dev.ampsieve.catalog.PartTemplate;
+import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.text.Visible;
 import dev.ampsieve.yaml.AtomicFiles;
 import dev.ampsieve.yaml.InputException;
@@ -56,6 +57,6 @@ public final class NewPartCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         out.println("Wrote " + Visible.of(target.toString()) + ": type the values left empty; 'ampsieve check' lists them.");
         out.flush();
-        return ExitCode.OK;
+        return ExitCode.OK.code();
     }
 }
