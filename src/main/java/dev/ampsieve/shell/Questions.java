@@ -35,7 +35,10 @@ final class Questions {
 
     /** Left to {@code set}: derived (rg) and statistics settings with sound defaults. */
     static final Set<String> NOT_ASKED = Set.of("rg", "r1", "r3", "r4", "source-resistance.minus", "source-resistance.plus",
-            "max-to-sigma", "trials", "max-trials", "seed");
+            "max-to-sigma", "trials", "max-trials", "seed",
+            // board-level sources: off unless named, set when the layout is known
+            "thermal-emf.junctions", "thermal-emf.seebeck", "thermal-emf.gradient", "leakage.resistance", "leakage.voltage",
+            "leakage.input");
 
     /** Only asked when a trim is allowed. */
     static final Set<String> TRIM_DETAILS = Set.of("trim.method", "trim.resolution", "trim.cost");

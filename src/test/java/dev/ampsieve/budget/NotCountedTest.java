@@ -64,10 +64,18 @@ class NotCountedTest {
                 supply: {voltage: 10 V, variation: 0.5 V}
                 resistor-ratio: {tolerance: 0.1 %}
                 service-life: 10 y
+                thermal-emf: {junctions: 2, seebeck: 3 uV/C, gradient: 0.5 C}
+                leakage: {resistance: 10 Gohm, voltage: 12 V}
                 """);
         Budget b = BudgetCalculator.compute(s, FULL);
         assertEquals(List.of(), b.notCounted());
+        // board-level, by hand: NG 200 x 2 x 3 µV/°C x 0.5 °C = 0.6 mV; 12 V / 10 GΩ = 1.2 nA into the + input, whose
+        // resistance is 0 here (no source named): 0 V, so the source's resistance is what a leakage needs to matter
+        assertEquals(0.6e-3, b.term(ThermalEmfTerm.KEY).outputV(), 1e-15);
         for (TermResult t : b.terms()) {
+            if (t.key().equals(LeakageTerm.KEY)) {
+                continue; // 0 V through R+ = 0, worked above
+            }
             assertTrue(t.outputV() > 0, t.key() + " is 0 V though nothing is said of it");
         }
         // by hand: NG x dVs x 10^(-60/20) = 200 x 0.5 V x 0.001 = 0.1 V, PSRR assumed 60 dB (Assumed.PSRR_DB)
