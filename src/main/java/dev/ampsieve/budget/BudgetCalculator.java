@@ -43,7 +43,7 @@ public final class BudgetCalculator {
         double wc = 0;
         double sumSq = 0;
         double dcOnly = 0;
-        for (ErrorTerm t : TERMS) {
+        for (ErrorTerm t : termsFor(stage)) {
             TermResult r = t.evaluate(stage, v);
             terms.add(r);
             if (counts(stage, t)) {
@@ -86,7 +86,7 @@ public final class BudgetCalculator {
 
         String limiting = null; // stays null when nothing contributes
         double largest = 0;
-        for (ErrorTerm t : TERMS) {
+        for (ErrorTerm t : termsFor(stage)) {
             if (!counts(stage, t)) {
                 continue;
             }
@@ -105,6 +105,11 @@ public final class BudgetCalculator {
     /** Whether {@code t} counts toward the error: DC terms of an AC-coupled stage count only toward headroom. */
     public static boolean counts(Stage stage, ErrorTerm t) {
         return !(stage.acCoupled() && t.dc());
+    }
+
+    /** The terms that apply to {@code stage}: every part term, and the board-level terms the stage names. */
+    public static List<ErrorTerm> termsFor(Stage stage) {
+        return TERMS.stream().filter(t -> t.appliesTo(stage)).toList();
     }
 
     /** The kind of the term with {@code key}; {@link TermKind#PART} for a key no term has. */
@@ -142,7 +147,7 @@ public final class BudgetCalculator {
             }
             Stage sk = stage.withMaxToSigma(k);
             PartValues v = PartValues.of(part, sk);
-            List<TermResult> terms = TERMS.stream().map(t -> t.evaluate(sk, v)).toList();
+            List<TermResult> terms = termsFor(sk).stream().map(t -> t.evaluate(sk, v)).toList();
             YieldResult y = terms.stream().anyMatch(t -> !Double.isFinite(t.outputV()))
                     ? new YieldResult(0, 0, 0, 0, "none-pass") // as compute() decides for such a part
                     // the stage's trials without early stop: comparable intervals at each reading
@@ -156,7 +161,7 @@ public final class BudgetCalculator {
     /** Yield after the stage's trim (for the yield criterion), simulated with the same seed. */
     public static YieldResult trimmedYield(Stage stage, Part part) {
         PartValues v = PartValues.of(part, stage);
-        List<TermResult> terms = TERMS.stream().map(t -> t.evaluate(stage, v)).toList();
+        List<TermResult> terms = termsFor(stage).stream().map(t -> t.evaluate(stage, v)).toList();
         if (terms.stream().anyMatch(t -> !Double.isFinite(t.outputV()))) {
             return new YieldResult(0, 0, 0, 0, "none-pass"); // as compute() decides for such a part
         }
@@ -176,7 +181,7 @@ public final class BudgetCalculator {
     /** The worst-case total of the terms that count. */
     private static double wcCounted(Stage stage, List<TermResult> terms) {
         double wc = 0;
-        for (ErrorTerm t : TERMS) {
+        for (ErrorTerm t : termsFor(stage)) {
             if (counts(stage, t)) {
                 wc += find(terms, t.key()).outputV();
             }
@@ -217,7 +222,7 @@ public final class BudgetCalculator {
     /** Totals after a calibration by {@code method} at 25 °C, whatever the stage says (for comparison tables). */
     public static Trimmed trimmed(Stage stage, Part part, Trim.Method method) {
         PartValues v = PartValues.of(part, stage);
-        List<TermResult> terms = TERMS.stream().map(t -> t.evaluate(stage, v)).toList();
+        List<TermResult> terms = termsFor(stage).stream().map(t -> t.evaluate(stage, v)).toList();
         return trimmed(stage, v, terms, method);
     }
 
@@ -237,7 +242,7 @@ public final class BudgetCalculator {
         CalibrationLine line = method == Trim.Method.TWO_TEMPERATURE ? CalibrationLine.of(stage, trimOf(stage)) : null;
         double wc = 0;
         double sq = 0;
-        for (ErrorTerm t : TERMS) {
+        for (ErrorTerm t : termsFor(stage)) {
             if (!counts(stage, t)) {
                 continue;
             }

@@ -25,6 +25,11 @@ public interface ErrorTerm {
         return TermKind.PART;
     }
 
+    /** Whether the term belongs in this stage's budget: every part term does; a board-level term only when named. */
+    default boolean appliesTo(Stage stage) {
+        return true;
+    }
+
     /** Evaluates the term for one part (its values already resolved) in one stage. */
     TermResult evaluate(Stage stage, PartValues values);
 

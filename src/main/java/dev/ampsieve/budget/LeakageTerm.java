@@ -33,6 +33,11 @@ public final class LeakageTerm implements ErrorTerm {
     }
 
     @Override
+    public boolean appliesTo(Stage s) {
+        return s.board().leakage();
+    }
+
+    @Override
     public TermKind kind() {
         return TermKind.BOARD;
     }

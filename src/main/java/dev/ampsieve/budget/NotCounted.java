@@ -67,7 +67,7 @@ public record NotCounted(String term, Reason reason) {
     public static List<NotCounted> of(Stage s, Part p) {
         List<NotCounted> out = new ArrayList<>();
         boolean noFullScale = s.fullScaleOutput() == null;
-        for (ErrorTerm t : BudgetCalculator.TERMS) {
+        for (ErrorTerm t : BudgetCalculator.termsFor(s)) {
             if (!BudgetCalculator.counts(s, t)) {
                 out.add(new NotCounted(t.key(), Reason.AC_COUPLED));
                 continue;

@@ -35,6 +35,11 @@ public final class ThermalEmfTerm implements ErrorTerm {
     }
 
     @Override
+    public boolean appliesTo(Stage s) {
+        return s.board().thermalEmf();
+    }
+
+    @Override
     public TermKind kind() {
         return TermKind.BOARD;
     }

@@ -46,10 +46,11 @@ class ShellSessionTest {
         assertTrue(printed.contains("Stage (current stage): non-inverting, noise gain 100, -40 °C to 85 °C"), printed);
         assertTrue(printed.contains("Candidates ("), printed);
         assertTrue(dev.ampsieve.testing.Flat.of(printed).contains("zd-chop-01 in (current stage): error at the output, term by term"), printed);
-        // zd-chop-01's worst case (739 µV) is under the 1 mV limit, so the limit is the chart's full scale: its mark
-        // sits at the right end of the bars, with no room after it, and its label goes to the left (BarChart)
-        assertTrue(printed.contains("limit 1.00 mV ▲"), printed);
-        assertFalse(printed.contains("▲ limit"), printed);
+        // no filter is named, so zd-chop-01's noise runs to the closed-loop bandwidth and its worst case (2.00 mV) is
+        // over the 1 mV limit: the worst case is the chart's full scale, the limit's mark falls at half of it, and its
+        // label has room on the right (BarChart)
+        assertTrue(printed.contains("▲ limit 1.00 mV"), printed);
+        assertFalse(printed.contains("limit 1.00 mV ▲"), printed);
         assertTrue(dev.ampsieve.testing.Flat.of(printed).contains("(current stage): worst-case error at the output (log scale) against effective unit cost"), printed);
         assertFalse(printed.contains("ampsieve-shell-"), printed);
     }
