@@ -60,6 +60,7 @@ public final class Advisor {
             lines.add("Pick " + pick.id() + ": " + money(pick.effectiveCost(), pick.currency()) + " per unit"
                     + (pick.trimmed() ? " including the trim" : "") + ", fits " + (pick.trimmed() ? "after the trim" : "as it is")
                     + "; " + standing(pick) + ".");
+            boardLine(stage, pick).ifPresent(lines::add);
             if (asIs == null) {
                 lines.add("No part fits as it is.");
             } else if (asIs != pick) {
@@ -98,6 +99,25 @@ public final class Advisor {
                     + stage.quantity() + ": smaller orders usually cost more per unit.");
         }
         return new Advice(pick, asIs, trim, zeroDrift, noFit, undecided, lines);
+    }
+
+    /**
+     * When the pick's largest term comes from the board rather than the part, say so and name the
+     * lever: a better part would not help, the layout would.
+     */
+    static java.util.Optional<String> boardLine(Stage stage, Candidate pick) {
+        String key = pick.budget().limitingTerm();
+        if (key == null || dev.ampsieve.budget.BudgetCalculator.kindOf(key) != dev.ampsieve.budget.TermKind.BOARD) {
+            return java.util.Optional.empty();
+        }
+        dev.ampsieve.budget.TermResult t = pick.budget().term(key);
+        dev.ampsieve.stage.Board b = stage.board();
+        String lever = key.equals(dev.ampsieve.budget.ThermalEmfTerm.KEY)
+                ? "pair the " + b.junctions() + " junction(s) so their EMFs cancel, or keep heat away from them"
+                : "a guard ring at the node's potential, a lower voltage beside the node, or a cleaner, drier board";
+        return java.util.Optional.of("Its largest term comes from the board, not the part: " + t.label() + ", "
+                + volts(t.outputV()) + " at the output (" + Phrases.percent(t.outputV() / pick.limitV())
+                + " of the limit); a better part would not remove it: " + lever + ".");
     }
 
     // ------------------------------------------------------------------ trim
@@ -403,6 +423,8 @@ public final class Advisor {
         lowerSource(stage, fits).ifPresent(out::add);
         narrowerTemperature(stage, fits).ifPresent(out::add);
         betterResistors(stage, fits).ifPresent(out::add);
+        lessThermalEmf(stage, fits).ifPresent(out::add);
+        lessLeakage(stage, fits).ifPresent(out::add);
         trimChange(stage, p, budgets).ifPresent(out::add);
         looserLimit(stage, closest, fits).ifPresent(out::add);
         lowerYieldTarget(stage, closest, fits).ifPresent(out::add);
@@ -610,6 +632,63 @@ public final class Advisor {
                     + (at.fullScaleOutput() == null ? "" : ", full-scale output " + volts(at.fullScaleOutput()));
         }
         return java.util.Optional.of(new Change(Change.Kind.LOWER_SOURCE_RESISTANCE, text, v));
+    }
+
+    /**
+     * Board-level: the largest temperature difference across the stage's unpaired junctions that lets
+     * the part fit, with the thermal EMF it allows at the input; the levers are pairing the junctions
+     * (equal and opposite EMFs cancel) and keeping heat sources away from them (Keithley, Low Level
+     * Measurements Handbook, 7th ed., §3.2 [from memory]).
+     */
+    private static java.util.Optional<Change> lessThermalEmf(Stage stage, Predicate<Stage> fits) {
+        dev.ampsieve.stage.Board b = stage.board();
+        if (!b.thermalEmf() || b.gradient() <= 0 || !fits.test(StageEdit.withGradient(stage, 0))) {
+            return java.util.Optional.empty();
+        }
+        java.util.function.DoublePredicate ok = g -> fits.test(StageEdit.withGradient(stage, g));
+        double g = reportLargest(Bisection.largest(ok, 0, b.gradient()), ok);
+        if (!(g > 0) || !ok.test(g)) {
+            return java.util.Optional.empty();
+        }
+        double emf = b.junctions() * b.seebeck() * g;
+        Map<String, Double> v = new LinkedHashMap<>();
+        v.put("thermalEmfV", emf);
+        v.put("gradient", g);
+        String text = "less thermal EMF at the input: " + Units.format(emf, Dimension.VOLTAGE) + " or less (now "
+                + Units.format(b.junctions() * b.seebeck() * b.gradient(), Dimension.VOLTAGE) + "): pair the "
+                + b.junctions() + " junction(s) so their EMFs cancel, or keep them within " + Phrases.number(g)
+                + " °C of each other (now " + Phrases.number(b.gradient()) + " °C)";
+        return java.util.Optional.of(new Change(Change.Kind.LESS_THERMAL_EMF, text, v));
+    }
+
+    /** Board-level: the smallest surface leakage resistance into the input that lets the part fit; a guard ring removes the voltage across it. */
+    private static java.util.Optional<Change> lessLeakage(Stage stage, Predicate<Stage> fits) {
+        dev.ampsieve.stage.Board b = stage.board();
+        double none = Double.POSITIVE_INFINITY;
+        if (!b.leakage() || !fits.test(StageEdit.withLeakageResistance(stage, none))) {
+            return java.util.Optional.empty();
+        }
+        // bisection on the logarithm: leakage resistances span decades
+        java.util.function.DoublePredicate okLog = x -> fits.test(StageEdit.withLeakageResistance(stage, Math.pow(10, x)));
+        double hi = Math.log10(b.leakageResistance());
+        double top = hi;
+        while (!okLog.test(top) && top < hi + 12) {
+            top += 1;
+        }
+        if (!okLog.test(top)) {
+            return java.util.Optional.empty();
+        }
+        java.util.function.DoublePredicate ok = r -> fits.test(StageEdit.withLeakageResistance(stage, r));
+        double r = reportSmallest(Math.pow(10, Bisection.smallest(okLog, hi, top)), ok);
+        if (!ok.test(r)) {
+            return java.util.Optional.empty();
+        }
+        Map<String, Double> v = new LinkedHashMap<>();
+        v.put("leakageResistance", r);
+        String text = "less leakage into the " + (b.leakageInput() == dev.ampsieve.stage.Board.Input.PLUS ? "+" : "-")
+                + " input: " + Phrases.ohms(r) + " or more (now " + Phrases.ohms(b.leakageResistance())
+                + "), or a guard ring driven at the node's potential so that no voltage drives it";
+        return java.util.Optional.of(new Change(Change.Kind.LESS_LEAKAGE, text, v));
     }
 
     private static java.util.Optional<Change> narrowerTemperature(Stage stage, Predicate<Stage> fits) {

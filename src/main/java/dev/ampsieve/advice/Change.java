@@ -23,6 +23,10 @@ public record Change(Kind kind, String text, Map<String, Double> values) {
         LOWER_SOURCE_RESISTANCE("lower-source-resistance"),
         NARROWER_TEMPERATURE("narrower-temperature"),
         BETTER_RESISTORS("better-resistors"),
+        /** Board-level: the thermal EMF allowed at the input; values thermalEmfV, gradient. */
+        LESS_THERMAL_EMF("less-thermal-emf"),
+        /** Board-level: the leakage resistance needed; values leakageResistance. */
+        LESS_LEAKAGE("less-leakage"),
         ALLOW_TRIM("allow-trim"),
         TWO_POINT_TRIM("two-point-trim"),
         LOOSER_LIMIT("looser-limit"),

@@ -77,6 +77,20 @@ final class StageEdit {
         return s.toBuilder().ratioTolerance(s.ratioTolerance() * k).ratioTempco(s.ratioTempco() * k).build();
     }
 
+    /** The board's thermal-EMF gradient changed. */
+    static Stage withGradient(Stage s, double gradient) {
+        dev.ampsieve.stage.Board b = s.board();
+        return s.toBuilder().board(new dev.ampsieve.stage.Board(b.junctions(), b.seebeck(), gradient, b.leakageResistance(),
+                b.leakageVoltage(), b.leakageInput())).build();
+    }
+
+    /** The board's leakage resistance changed. */
+    static Stage withLeakageResistance(Stage s, double ohms) {
+        dev.ampsieve.stage.Board b = s.board();
+        return s.toBuilder().board(new dev.ampsieve.stage.Board(b.junctions(), b.seebeck(), b.gradient(), ohms,
+                b.leakageVoltage(), b.leakageInput())).build();
+    }
+
     static Stage withCriterion(Stage s, Criterion criterion) {
         return s.toBuilder().criterion(criterion).build();
     }

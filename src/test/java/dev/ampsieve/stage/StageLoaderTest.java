@@ -275,9 +275,9 @@ class StageLoaderTest {
             try (var list = java.nio.file.Files.list(DIR)) {
                 files = list.filter(p -> p.toString().endsWith(".yaml")).sorted().toList();
             }
-            // photodiode.yaml: the transimpedance demo stage
+            // photodiode.yaml: the transimpedance demo stage; relay-scanner.yaml: the board-level one
             assertEquals(List.of(DIR.resolve("adc-driver.yaml"), DIR.resolve("bridge-amp.yaml"), DIR.resolve("photodiode.yaml"),
-                    DIR.resolve("thermocouple.yaml")), files);
+                    DIR.resolve("relay-scanner.yaml"), DIR.resolve("thermocouple.yaml")), files);
             for (Path f : files) {
                 Stage s = StageLoader.load(f); // throws with every problem listed if one is wrong
                 assertEquals(f, s.where().file());
