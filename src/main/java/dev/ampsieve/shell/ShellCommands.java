@@ -466,7 +466,10 @@ final class ShellCommands {
             StageLoader.load(file); // all checks, with file:line:col
             ctx.state.replace(answers(YamlFiles.read(file)), file, true);
             Map<String, String> a = ctx.state.answers();
-            out().println(ctx.fold("Loaded " + file + ": gain " + Questions.current("gain", a) + ", "
+            // a transimpedance stage has no gain: its rf is what sets the output per ampere
+            String gain = Questions.topology(a) == dev.ampsieve.stage.Topology.TRANSIMPEDANCE ? "rf " + a.get("rf")
+                    : "gain " + Questions.current("gain", a);
+            out().println(ctx.fold("Loaded " + file + ": " + Questions.topology(a).key() + ", " + gain + ", "
                     + Questions.current(Answers.LIMIT, a) + " limit. 'show' lists it."));
             return ExitCode.OK.code();
         }

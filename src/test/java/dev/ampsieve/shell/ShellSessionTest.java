@@ -125,7 +125,8 @@ class ShellSessionTest {
         Path copy = dir.resolve("copy.yaml");
         String printed = session("load " + good, "show", "load " + bad, "show", "save " + copy);
 
-        assertTrue(printed.contains("Loaded " + good + ": gain 40 dB, 50 uV input limit."), printed);
+        assertTrue(dev.ampsieve.testing.Flat.of(printed).contains("Loaded " + good + ": non-inverting, gain 40 dB, 50 uV input limit."),
+                printed);
         assertTrue(printed.matches("(?s).*temperature\\s+-20 C\\.\\.60 C.*"), printed);
         assertTrue(printed.matches("(?s).*limit at the output\\s+5\\.00 mV.*"), printed); // 50 uV x noise gain 100
         assertTrue(printed.contains(bad + ":2:8: limit:"), printed); // file:line:col of the bad value
@@ -266,5 +267,13 @@ class ShellSessionTest {
         assertTrue(printed.contains(new dev.ampsieve.commands.RootCommand.Version().getVersion()[0]), printed);
         assertEquals("run 'check' or 'ampsieve-x check'; ampsieve 1.0",
                 Shell.withoutProgramName("run 'ampsieve check' or 'ampsieve-x check'; ampsieve 1.0", java.util.Set.of("check")));
+    }
+
+    @Test
+    void loadingATransimpedanceStageNamesItsRfNotAGain() {
+        String printed = session("load demo-catalog/stages/photodiode.yaml");
+        assertTrue(dev.ampsieve.testing.Flat.of(printed).contains(
+                "Loaded demo-catalog/stages/photodiode.yaml: transimpedance, rf 1 Mohm, 5 nA input limit."), printed);
+        assertFalse(printed.contains("gain null"), printed);
     }
 }
