@@ -56,8 +56,6 @@ public final class Shell {
     private final Terminal terminal;
     private final Path historyFile;
     private final Map<String, String> env;
-    /** The command names, for taking the program name off "'ampsieve check'" in messages; set once the tree is built. */
-    private volatile java.util.Set<String> commands = java.util.Set.of();
     /** Guards {@link #running} and {@link #cancelRequested} between the reader and Ctrl-C's handler. */
     private final Object commandLock = new Object();
     /** The thread running a command; null at the prompt. */
@@ -160,7 +158,6 @@ public final class Shell {
         tree.setParameterExceptionHandler((ex, args) -> Failures.usage(ex, args, Failures.Voice.SHELL, null));
         tree.setExecutionExceptionHandler((ex, line, parsed) -> failure(ex, err));
         completer[0] = new ShellCompleter(ctx, tree);
-        commands = java.util.Set.copyOf(tree.getSubcommands().keySet());
 
         try {
             tree.parseArgs(rootArgs.toArray(String[]::new)); // --catalog and friends before the banner reads the catalog
@@ -226,15 +223,27 @@ public final class Shell {
                     words.add(w);
                 }
             }
-            return words;
+            return withoutLeadingProgramName(words);
         }
         for (String w : parsed.words()) {
             if (!w.isEmpty()) {
                 words.add(w);
             }
         }
-        return words;
+        return withoutLeadingProgramName(words);
     }
+
+    /**
+     * The words without a leading "ampsieve": messages and help name commands as the command line
+     * types them ("run 'ampsieve check'"), and the shell takes that form as it is, so no printed
+     * text needs rewriting for it.
+     */
+    static List<String> withoutLeadingProgramName(List<String> words) {
+        return words.size() > 1 && words.get(0).equals(PROGRAM_NAME) ? new ArrayList<>(words.subList(1, words.size())) : words;
+    }
+
+    /** The program's name as the command line types it. */
+    static final String PROGRAM_NAME = "ampsieve";
 
     /** Adds a command to the tree the shell builds; call before {@link #run}. */
     Shell withCommand(Object command) {
@@ -354,12 +363,12 @@ public final class Shell {
 
     /**
      * What a printed line looks like on this terminal: guarded, in ASCII where the terminal is not
-     * UTF-8, commands spelled as the shell takes them. Error lines are folded to its width and
-     * painted, so the terminal never breaks a word.
+     * UTF-8. Error lines are folded to its width and
+     * painted, so the terminal never breaks a word. Commands are named as the command line types
+     * them ('ampsieve check'), which the shell also takes ({@link #withoutLeadingProgramName}).
      */
     private String shown(String s, boolean error) {
         s = VisibleWriter.guard(s); // before our own colours: only they may reach the terminal
-        s = withoutProgramName(s, commands);
         OutputStyle st = look(terminal, env, rootArgs.contains("--ascii"));
         if (!st.unicode()) {
             s = Glyphs.ascii(s);
@@ -370,26 +379,6 @@ public final class Shell {
         Paint paint = new Paint(st.color());
         return java.util.Arrays.stream(dev.ampsieve.report.Wrap.prose(s, st.width()).split("\n", -1)).map(paint::red)
                 .collect(java.util.stream.Collectors.joining("\n"));
-    }
-
-    /** "ampsieve " where it starts a command: the program name, which the shell's own lines go without. */
-    private static final java.util.regex.Pattern PROGRAM = java.util.regex.Pattern.compile("(?<![\\w/.\\\\-])ampsieve ([a-z][a-z-]*)\\b");
-
-    /**
-     * Messages shared with the command line say "run 'ampsieve check'"; in the shell the same
-     * command is typed without the program name, so it is taken off where a command name follows.
-     */
-    static String withoutProgramName(String s, java.util.Set<String> commands) {
-        if (!s.contains("ampsieve ")) {
-            return s;
-        }
-        java.util.regex.Matcher m = PROGRAM.matcher(s);
-        StringBuilder sb = new StringBuilder();
-        while (m.find()) {
-            m.appendReplacement(sb, java.util.regex.Matcher.quoteReplacement(commands.contains(m.group(1)) ? m.group(1) : m.group()));
-        }
-        m.appendTail(sb);
-        return sb.toString();
     }
 
     private String prompt(ShellContext ctx) {
