@@ -162,13 +162,17 @@ final class Answers {
         if (id.equals(SOURCE)) {
             return new Change(Map.of(id, t), Set.of(SOURCE + ".minus", SOURCE + ".plus"), null); // one value for both legs
         }
-        if (id.startsWith(SOURCE + ".") && current.containsKey(SOURCE)) {
-            // one leg given where both had one value: the other leg keeps that value
+        if (id.startsWith(SOURCE + ".")) {
+            // one leg given where both had one value (or the default): the other leg keeps that value
             String other = id.endsWith(".minus") ? SOURCE + ".plus" : SOURCE + ".minus";
+            if (current.containsKey(other)) {
+                return new Change(Map.of(id, t), Set.of(SOURCE), null);
+            }
+            String both = current.getOrDefault(SOURCE, "0 ohm");
             Map<String, String> put = new LinkedHashMap<>();
             put.put(id, t);
-            put.putIfAbsent(other, current.get(SOURCE));
-            return new Change(put, Set.of(SOURCE), other + " keeps " + current.get(SOURCE));
+            put.put(other, both);
+            return new Change(put, Set.of(SOURCE), other + " keeps " + both);
         }
         return switch (key.kind()) {
             case BOOLEAN -> new Change(Map.of(id, yesNo(t)), Set.of(), null);

@@ -84,6 +84,12 @@ class AnswersTest {
         Answers.Change c = Answers.interpret("source-resistance.minus", "350 ohm", Map.of("source-resistance", "300 ohm"));
         assertEquals(Map.of("source-resistance.minus", "350 ohm", "source-resistance.plus", "300 ohm"), c.put());
         assertEquals(Set.of("source-resistance"), c.remove());
+        // no common value yet: the other leg keeps the default, 0 ohm
+        assertEquals(Map.of("source-resistance.plus", "120 ohm", "source-resistance.minus", "0 ohm"),
+                Answers.interpret("source-resistance.plus", "120 ohm", Map.of()).put());
+        // the other leg already given: only this one changes
+        assertEquals(Map.of("source-resistance.plus", "120 ohm"),
+                Answers.interpret("source-resistance.plus", "120 ohm", Map.of("source-resistance.minus", "350 ohm")).put());
         Answers.Change back = Answers.interpret("source-resistance", "1 kohm",
                 Map.of("source-resistance.minus", "350 ohm", "source-resistance.plus", "300 ohm"));
         assertEquals(Set.of("source-resistance.minus", "source-resistance.plus"), back.remove());
