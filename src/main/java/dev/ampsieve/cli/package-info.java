@@ -1,4 +1,4 @@
 /**
- * The command-line front end: the picocli command tree, exit codes and output guarding; may use every package below it.
+ * The program's entry point alone: Main chooses between the interactive shell and one command; may use commands and shell.
  */
 package dev.ampsieve.cli;
