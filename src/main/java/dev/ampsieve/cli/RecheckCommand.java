@@ -11,6 +11,7 @@ import dev.ampsieve.record.RecordFacts;
 import dev.ampsieve.report.RecordReport;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.StageLoader;
+import dev.ampsieve.text.Visible;
 import dev.ampsieve.yaml.BoundedFiles;
 import dev.ampsieve.yaml.InputException;
 import dev.ampsieve.yaml.Problem;
@@ -64,6 +65,12 @@ public final class RecheckCommand implements Callable<Integer> {
             } catch (InputException e) {
                 problems.addAll(e.problems()); // the other records are still checked
                 continue;
+            }
+            if (catalog.hasErrors()) {
+                // a part in a file with errors is missing from today's catalog: say why it may be reported gone
+                err.println("ampsieve: note: the catalog " + Visible.of(catalog.root().toString()) + " has files with errors;"
+                        + " their parts are left out ('ampsieve check' lists them)");
+                err.flush();
             }
             List<Part> present = new ArrayList<>();
             for (PartFacts p : was.parts()) {

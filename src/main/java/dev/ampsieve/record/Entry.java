@@ -3,6 +3,8 @@ package dev.ampsieve.record;
 import dev.ampsieve.catalog.CatalogKeys;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.catalog.Price;
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.nio.charset.StandardCharsets;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
@@ -13,8 +15,8 @@ import java.util.Map;
 
 /**
  * A part's catalog entry in a canonical form: every catalog key path (in the order of
- * {@link CatalogKeys#PART_KEYS}) with its value as text, numbers in SI units as Java writes a
- * double (the shortest decimal that reads back as the same double). Comments, key order,
+ * {@link CatalogKeys#PART_KEYS}) with its value as text, numbers in SI units to 12 significant
+ * digits ({@link #canonical}). Comments, key order,
  * quoting, the unit prefix the user typed and the file's line do not enter it, so the hash
  * changes exactly when a value the budget or the record can use changes.
  *
@@ -63,7 +65,7 @@ public record Entry(Map<String, String> fields, String sha256) {
         }
         put(f, "price.currency", price.currency());
         for (Price.Break b : price.breaks()) {
-            put(f, "price.break." + b.quantity(), Double.toString(b.unit()));
+            put(f, "price.break." + b.quantity(), canonical(b.unit()));
         }
     }
 
@@ -89,7 +91,19 @@ public record Entry(Map<String, String> fields, String sha256) {
             return null; // a key that is not a quantity and not named above: nothing to compare
         }
         Double v = CatalogKeys.value(p, path);
-        return v == null || v.isNaN() ? null : Double.toString(v);
+        return v == null || v.isNaN() ? null : canonical(v);
+    }
+
+    /**
+     * {@code v} to 12 significant digits, as {@link BigDecimal#toString} writes it: "5 uV" and
+     * "0.005 mV" parse to doubles one unit in the last place apart, which is no revision of a
+     * datasheet; no datasheet figure has 12 digits.
+     */
+    static String canonical(double v) {
+        if (Double.isInfinite(v)) {
+            return v > 0 ? "Infinity" : "-Infinity";
+        }
+        return new BigDecimal(v).round(new MathContext(12)).stripTrailingZeros().toString();
     }
 
     private static void put(Map<String, String> f, String path, String value) {

@@ -174,7 +174,8 @@ final class RecordContent {
         rows.add(List.of("effective cost", Figures.money(c.a().effectiveCost()) + " " + c.a().currency(),
                 Figures.money(c.b().effectiveCost()) + " " + c.b().currency(), "", ""));
         rows.add(List.of("verdict", verdict(c.a()), verdict(c.b()), "", ""));
-        o.add(table(List.of("term (output)", c.a().id() + " (from)", c.b().id() + " (to)", "better", "by"), rows, true));
+        o.add(table(List.of("term (output)", c.a().id() + " (from)", c.b().id() + " (to)", "better", "by"), rows,
+                List.of(false, true, true, false, true)));
         o.add(new RecordDoc.Para("Conclusion: " + c.conclusion()));
     }
 
