@@ -32,7 +32,7 @@ final class RecordHtml {
             svg circle.pareto{stroke:#111;stroke-width:2}svg polyline.pareto{fill:none;stroke:#111;stroke-dasharray:4 3}
             .page-break{break-before:page}
             @media print{body{margin:0;max-width:none;font-size:10.5px}h2{break-after:avoid}h3{break-after:avoid}
-            tr,svg{break-inside:avoid}.page-break{break-before:page;page-break-before:always}
+            tr,svg{break-inside:avoid}p:has(+table),p:has(+svg){break-after:avoid}.page-break{break-before:page;page-break-before:always}
             @page{size:A4;margin:14mm}}
             """;
 
