@@ -80,7 +80,8 @@ class HelpCommandTest {
     }
 
     @ParameterizedTest
-    @ValueSource(strings = {"check", "budget", "find", "rank", "compare", "suffices", "bars", "scatter", "completion", "help"})
+    @ValueSource(strings = {"check", "budget", "find", "rank", "compare", "suffices", "bars", "scatter", "completion", "help",
+        "record", "recheck"})
     void everyCommandsHelpHasAParagraphAndAnExample(String command) {
         CliRun r = CliRun.of(command, "--help");
         assertEquals(ExitCode.OK, r.code(), r.toString());
