@@ -51,7 +51,7 @@ public final class RecordCommand implements Callable<Integer> {
     @Mixin
     StageOption stageOption;
 
-    @Option(names = "--parts", paramLabel = "A,B,...", split = ",",
+    @Option(names = "--parts", paramLabel = "PART", split = ",",
             description = "The parts to record (default: the ranking's first " + DecisionRecord.DEFAULT_SHORTLIST
                 + " parts that fit, or the closest when none fits).")
     List<String> parts;

@@ -44,7 +44,9 @@ final class RecordContent {
                 List.of("tool", "ampsieve " + f.toolVersion()),
                 List.of("stage file", f.stagePath()),
                 List.of("catalog folder", f.catalogPath()),
-                List.of(change ? "change" : "shortlist", String.join(", ", f.parts().stream().map(p -> p.id()).toList())),
+                List.of(change ? "change" : "shortlist", f.parts().isEmpty()
+                        ? "none: every part fails a hard constraint (see the rejected parts)"
+                        : String.join(", ", f.parts().stream().map(p -> p.id()).toList())),
                 List.of("cheapest part that fits", f.cheapestFit() == null ? "none fits"
                         : f.cheapestFit().id() + " at " + Figures.money(f.cheapestFit().effectiveCost()) + " "
                                 + f.cheapestFit().currency() + (f.cheapestFit().trimmed() ? " (trim included)" : ""))),

@@ -64,6 +64,19 @@ class RecordCommandTest {
     }
 
     @Test
+    void aChangedStringReachesTheTerminalOnlyAsEscapes() throws Exception {
+        Path c = copy("hostile");
+        Path f = c.resolve("zero-drift/chopper.yaml");
+        // the chopper file's sources (zd-chop-01 among them) gain an ESC sequence (YAML's \e) that would turn a terminal red
+        Files.writeString(f, Files.readString(f).replace("source: invented demo data",
+                "source: \"invented demo data\\e[31m\""));
+        CliRun r = CliRun.of("--catalog", c.toString(), "recheck", record.toString());
+        assertEquals(1, r.code(), r.toString());
+        assertTrue(r.out().contains("    source: \"invented demo data\" -> \"invented demo data\\x1b[31m\"\n"), r.out());
+        assertTrue(!r.out().contains("\u001b"), "no raw ESC");
+    }
+
+    @Test
     void aCommentOnlyEditChangesNothing() throws Exception {
         Path c = copy("commented");
         Path f = c.resolve("zero-drift/chopper.yaml");
