@@ -112,6 +112,7 @@ final class RecordCharts {
         double ly = y(limit, dLo, dHi);
         s.append(line("limit", SC_X0, ly, SC_X0 + SC_W, ly));
         s.append(text("limit-label", SC_X0 + SC_W - 4, ly - 5, "end", "limit " + Figures.volts(limit)));
+        List<double[]> placed = new ArrayList<>();
         for (Candidate c : shown) {
             double cx = x(c.effectiveCost(), xTop);
             double cy = y(c.errorV(), dLo, dHi);
@@ -121,10 +122,32 @@ final class RecordCharts {
                     RecordHtml.esc(c.id() + ": " + Figures.volts(c.errorV()) + ", " + Figures.money(c.effectiveCost()) + " "
                             + c.currency())));
             if (front.contains(c.id())) {
-                s.append(text("point-label", cx + 6, cy - 6, "start", c.id()));
+                label(s, placed, cx, cy, c.id());
             }
         }
         return s.append("</svg>\n").toString();
+    }
+
+    /** Approximate width of one character of an 11 px label, px. */
+    private static final double CHAR_W = 6.2;
+
+    /**
+     * A point's label beside it where it overlaps no label placed before: above right, below
+     * right, above left, below left; else above right anyway.
+     */
+    private static void label(StringBuilder s, List<double[]> placed, double cx, double cy, String words) {
+        double w = CHAR_W * words.length();
+        double[][] tries = {{cx + 6, cy - 6}, {cx + 6, cy + 15}, {cx - 6 - w, cy - 6}, {cx - 6 - w, cy + 15}};
+        double[] at = tries[0];
+        for (double[] t : tries) {
+            boolean free = placed.stream().noneMatch(b -> t[0] < b[0] + b[2] && b[0] < t[0] + w && t[1] - 11 < b[1] && b[1] - 11 < t[1]);
+            if (free) {
+                at = t;
+                break;
+            }
+        }
+        placed.add(new double[] {at[0], at[1], w});
+        s.append(text("point-label", at[0], at[1], "start", words));
     }
 
     static double x(double cost, double xTop) {

@@ -56,10 +56,11 @@ final class RecordContent {
                 "note"));
 
         assumptions(o, d);
-        ranking(o, d);
+        // a change record is about the change: it comes before the ranking that places it
         if (d.comparison() != null) {
             comparison(o, d.comparison());
         }
+        ranking(o, d);
         for (Candidate c : d.shortlist()) {
             o.add(new RecordDoc.PageBreak());
             part(o, c);
