@@ -128,6 +128,17 @@ class RecordCommandTest {
     }
 
     @Test
+    void aDamagedBlockIsNamedWithTheFix() throws Exception {
+        Path bad = dir.resolve("damaged.md");
+        Files.writeString(bad, "# a record\n<!-- ampsieve-decision-record\n{\"recordFormat\": 1, \"kind\": \"shortlist\"\n-->\n");
+        CliRun r = CliRun.of("recheck", bad.toString());
+        assertEquals(1, r.code(), r.toString());
+        assertTrue(r.err().startsWith(bad + ": ampsieve-decision-record: the record's block is damaged ("), r.err());
+        assertTrue(r.err().contains("write the record again with 'ampsieve record', or restore the file from version control"),
+                r.err());
+    }
+
+    @Test
     void anotherFileIsNeverOverwrittenWithoutForce() throws Exception {
         Path mine = dir.resolve("mine.html");
         Files.writeString(mine, "<p>my own page</p>\n");
