@@ -30,7 +30,7 @@ import picocli.CommandLine.Spec;
         description = "Picks operational amplifiers for a stage by its full output error budget, computed from your own YAML catalog of datasheet values.",
         subcommands = {CheckCommand.class, BudgetCommand.class, FindCommand.class, RankCommand.class,
             CompareCommand.class, SufficesCommand.class, BarsCommand.class, ScatterCommand.class,
-            NewPartCommand.class, ImportCommand.class, ExportCommand.class, CompletionCommand.class},
+            NewPartCommand.class, ImportCommand.class, ExportCommand.class, CompletionCommand.class, RecordCommand.class, RecheckCommand.class},
         footer = {"", "Catalog folder: --catalog DIR, else $AMPSIEVE_CATALOG, else the demo catalog.",
             "Exit codes: 0 ok, 1 problems in your data or a 'no' answer, 2 usage error, 3 internal error.",
             "Reference: 'ampsieve help query', 'help stage-keys', 'help catalog-keys', 'help units'."})

@@ -81,7 +81,8 @@ class HelpCommandTest {
     }
 
     @ParameterizedTest
-    @ValueSource(strings = {"check", "budget", "find", "rank", "compare", "suffices", "bars", "scatter", "completion", "help"})
+    @ValueSource(strings = {"check", "budget", "find", "rank", "compare", "suffices", "bars", "scatter", "completion", "help",
+        "record", "recheck"})
     void everyCommandsHelpHasAParagraphAndAnExample(String command) {
         CliRun r = CliRun.of(command, "--help");
         assertEquals(ExitCode.OK.code(), r.code(), r.toString());
