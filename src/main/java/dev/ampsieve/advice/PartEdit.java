@@ -53,6 +53,7 @@ final class PartEdit {
         return new Part(p.id(), p.title(), p.architecture(), p.input(), p.factoryTrim(), p.nullPins(), p.channels(),
                 p.packages(), p.tags(), p.price(), p.supply(), p.temperature(), vos, drift, ib, ios, p.cmrr(), p.psrr(),
                 p.aol(), p.gbw(), p.slew(), p.noise(), p.longTermDrift(), p.inputHeadroom(), p.outputHeadroom(),
-                p.choppingFrequency(), p.quiescentCurrent(), p.inputCapacitance(), p.source(), p.notes(), p.where());
+                p.choppingFrequency(), p.quiescentCurrent(), p.inputCapacitance(),
+                p.testConditions(), p.inputCrossover(), p.thetaJa(), p.choppingRipple(), p.source(), p.notes(), p.where());
     }
 }

@@ -20,11 +20,16 @@ public interface ErrorTerm {
     /** True for static (DC) terms, which an AC-coupled stage counts only toward headroom. */
     boolean dc();
 
+    /** Where the term comes from; the part's own figures unless a term says otherwise. */
+    default TermKind kind() {
+        return TermKind.PART;
+    }
+
     /** Evaluates the term for one part (its values already resolved) in one stage. */
     TermResult evaluate(Stage stage, PartValues values);
 
     /** Builds a result with the input-referred value derived from the output value. */
     static TermResult result(ErrorTerm t, Stage s, double outputV, double worstAtC, boolean estimated, String note) {
-        return new TermResult(t.key(), t.label(), outputV, outputV / s.sourceGain(), worstAtC, estimated, note);
+        return new TermResult(t.key(), t.label(), outputV, outputV / s.sourceGain(), worstAtC, estimated, note, t.kind());
     }
 }

@@ -79,17 +79,22 @@ public final class BudgetText {
         line(o, "%-24s %11s %11s %9s %10s", "term", "output", "input", "of limit", "worst at");
         boolean anyEstimated = false;
         boolean anyUncounted = false;
+        boolean anyTagged = false;
         for (TermResult t : b.terms()) {
+            anyTagged |= t.kind() != dev.ampsieve.budget.TermKind.PART;
             boolean counted = BudgetCalculator.counts(s, t.key());
             String mark = t.estimated() ? "*" : "";
             anyEstimated |= t.estimated();
             anyUncounted |= !counted;
-            line(o, "%-24s %11s %11s %9s %10s%s", t.label() + mark, v(t.outputV()), in.apply(t.inputV()),
+            line(o, "%-24s %11s %11s %9s %10s%s", t.label() + Figures.kindTag(t.kind()) + mark, v(t.outputV()), in.apply(t.inputV()),
                     share(t.outputV(), limit), Double.isNaN(t.worstAtC()) ? "-" : Units.format(t.worstAtC(), Dimension.TEMPERATURE),
                     counted ? "" : "  headroom only");
         }
         if (anyEstimated) {
             line(o, "* estimated, typical-only or assumed value: see the warnings");
+        }
+        if (anyTagged) {
+            line(o, "%s", Figures.KIND_LEGEND);
         }
         if (anyUncounted) {
             line(o, "headroom only: AC-coupled stage, the DC term does not count toward the error");

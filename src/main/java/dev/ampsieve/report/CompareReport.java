@@ -53,7 +53,7 @@ public final class CompareReport {
             // a figure the catalog lacks counts as 0 V: it must not win the row on that alone
             boolean winnerUnknown = d.better().equals("a") ? ea && d.aV() == 0 : d.better().equals("b") && eb && d.bV() == 0;
             anyUnknown |= winnerUnknown;
-            t.row(d.label(), Figures.volts(d.aV()) + (ea ? "*" : ""), Figures.volts(d.bV()) + (eb ? "*" : ""),
+            t.row(d.label() + Figures.kindTag(Figures.kindOf(d.key())), Figures.volts(d.aV()) + (ea ? "*" : ""), Figures.volts(d.bV()) + (eb ? "*" : ""),
                     winnerUnknown ? "unknown" : better(c, d.better()), winnerUnknown ? "" : by(d.differenceV(), d.ratio()));
         }
         total(t, c, "worst-case sum", ba.worstCaseV(), bb.worstCaseV());
@@ -123,7 +123,7 @@ public final class CompareReport {
             return Figures.NONE;
         }
         TermResult t = b.term(b.limitingTerm());
-        return t == null ? b.limitingTerm() : t.label();
+        return t == null ? b.limitingTerm() : t.label() + Figures.kindTag(t.kind());
     }
 
     public static String json(Comparison c, String stageLabel) {
@@ -136,6 +136,7 @@ public final class CompareReport {
             ObjectNode n = terms.addObject();
             n.put("key", d.key());
             n.put("label", d.label());
+            n.put("kind", Figures.kindOf(d.key()).key());
             JsonSupport.put(n, "aV", d.aV());
             JsonSupport.put(n, "bV", d.bV());
             n.put("better", d.better().equals("=") ? "=" : better(c, d.better()));

@@ -48,7 +48,7 @@ public final class RankReport {
         }
         TermResult t = c.budget().term(key);
         // the engine names the largest term of the untrimmed budget
-        return (t == null ? key : t.label()) + (c.trimmed() ? " †" : "");
+        return (t == null ? key : t.label() + Figures.kindTag(t.kind())) + (c.trimmed() ? " †" : "");
     }
 
     /** Yield of the part as ranked: after the stage's trim when it needs one. */
@@ -280,6 +280,8 @@ public final class RankReport {
             putYield(n, "trimmedYield", c.budget().trimmed().yield());
         }
         JsonSupport.put(n, "limitingTerm", c.budget().limitingTerm());
+        JsonSupport.put(n, "limitingKind", c.budget().limitingTerm() == null ? null
+                : Figures.kindOf(c.budget().limitingTerm()).key());
         n.put("trimmed", c.trimmed());
         if (c.budget().trimmed() != null) {
             JsonSupport.put(n, "trimmedWorstCaseV", c.budget().trimmed().worstCaseV());

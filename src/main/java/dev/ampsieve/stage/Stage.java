@@ -27,6 +27,9 @@ import dev.ampsieve.yaml.Located;
  * @param quantity          build quantity (for price)
  * @param maxPrice          price ceiling per unit, null for none
  * @param acCoupled         DC terms only count toward headroom, not toward the error
+ * @param loadResistance    resistance the output drives, returned to mid-supply (ohm); null: no load
+ *                          stated (self-heating not counted)
+ * @param sampleRate        rate of the converter that samples the output (Hz); null: none stated
  * @param where             the file the stage came from (null when typed in)
  */
 public record Stage(
@@ -55,6 +58,8 @@ public record Stage(
         int quantity,
         Double maxPrice,
         boolean acCoupled,
+        Double loadResistance,
+        Double sampleRate,
         Located where) {
 
     /** Reference temperature of datasheet 25 °C columns and of a one-point trim. */
@@ -178,6 +183,8 @@ public record Stage(
         private int quantity;
         private Double maxPrice;
         private boolean acCoupled;
+        private Double loadResistance;
+        private Double sampleRate;
         private Located where;
 
         private Builder(Stage s) {
@@ -206,6 +213,8 @@ public record Stage(
             quantity = s.quantity;
             maxPrice = s.maxPrice;
             acCoupled = s.acCoupled;
+            loadResistance = s.loadResistance;
+            sampleRate = s.sampleRate;
             where = s.where;
         }
 
@@ -346,6 +355,16 @@ public record Stage(
             return this;
         }
 
+        public Builder loadResistance(Double loadResistance) {
+            this.loadResistance = loadResistance;
+            return this;
+        }
+
+        public Builder sampleRate(Double sampleRate) {
+            this.sampleRate = sampleRate;
+            return this;
+        }
+
         public Builder where(Located where) {
             this.where = where;
             return this;
@@ -355,7 +374,7 @@ public record Stage(
             return new Stage(network, tMin, tMax, supplyVoltage,
                     supplyVariation, commonModeSwing, commonModeRange, outputRange, bandLow, bandHigh, filterOrder,
                     fullScaleOutput, ratioTolerance, ratioTempco, serviceLife, limit, criterion, maxToSigma, trials,
-                    maxTrials, seed, trim, quantity, maxPrice, acCoupled, where);
+                    maxTrials, seed, trim, quantity, maxPrice, acCoupled, loadResistance, sampleRate, where);
         }
     }
 }

@@ -284,6 +284,13 @@ public final class StageWriter {
             a.put("max-price", exact(s.maxPrice(), Dimension.NUMBER));
         }
         a.put("ac-coupled", String.valueOf(s.acCoupled()));
+        // operating point: written only when stated (absent: not counted)
+        if (s.loadResistance() != null) {
+            a.put("load-resistance", exact(s.loadResistance(), Dimension.RESISTANCE));
+        }
+        if (s.sampleRate() != null) {
+            a.put("sample-rate", exact(s.sampleRate(), Dimension.FREQUENCY));
+        }
         return a;
     }
 
