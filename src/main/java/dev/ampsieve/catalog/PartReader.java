@@ -283,9 +283,9 @@ final class PartReader {
 
     /** Errors when {@code key} is missing inside a present section. */
     private void requireIn(Node.Mapping m, String section, String key) {
-        Dimension d = CatalogKeys.dimension(path(section, key));
         String example = SECTION_EXAMPLE.get(path(section, key));
-        f.require(m, join(prefix, section), key, example != null ? example : d == null ? "..." : d.example());
+        String fallback = CatalogKeys.example(path(section, key));
+        f.require(m, join(prefix, section), key, example != null ? example : fallback != null ? fallback : "...");
     }
 
     /** At most this many price breaks; distributors list a handful. */
