@@ -25,7 +25,7 @@ public final class InputCrossoverTerm implements ErrorTerm {
 
     @Override
     public String label() {
-        return "input crossover step";
+        return "input crossover";
     }
 
     @Override

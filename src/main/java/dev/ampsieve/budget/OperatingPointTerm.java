@@ -31,7 +31,7 @@ public final class OperatingPointTerm implements ErrorTerm {
 
     @Override
     public String label() {
-        return "operating point (supply, common mode)";
+        return "operating point";
     }
 
     @Override

@@ -37,7 +37,7 @@ public final class SelfHeatingTerm implements ErrorTerm {
 
     @Override
     public String label() {
-        return "self-heating (die above ambient)";
+        return "self-heating";
     }
 
     @Override

@@ -38,6 +38,7 @@ class DifferenceAmplifierTest {
     /** An otherwise ideal part with a CMRR of {@code db}. */
     private static Part partWithCmrr(double db) {
         PartFixture p = PartFixture.ideal();
+        p.testConditions = new dev.ampsieve.catalog.TestConditions(5.0, 2.5); // the stages' own: no operating-point move
         p.cmrr = new MinTyp(db, null);
         return p.build();
     }

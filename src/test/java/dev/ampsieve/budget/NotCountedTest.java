@@ -37,7 +37,7 @@ class NotCountedTest {
     }
 
     @Test
-    void theFewestKeysAStageTakesLeaveOutSixTermsAndSayWhy() throws Exception {
+    void theFewestKeysAStageTakesLeaveOutEightTermsAndSayWhy() throws Exception {
         Stage s = stage("gain: 200\nlimit: 2 mV\n");
         Map<String, Reason> left = of(s, FULL);
         assertEquals(Map.of(
@@ -46,7 +46,9 @@ class NotCountedTest {
                 OpenLoopGainTerm.KEY, Reason.NO_FULL_SCALE_OUTPUT,
                 BandwidthTerm.KEY, Reason.NO_FULL_SCALE_OUTPUT,
                 ResistorTerm.KEY, Reason.NO_FULL_SCALE_OUTPUT,
-                AgingTerm.KEY, Reason.NO_SERVICE_LIFE), left);
+                AgingTerm.KEY, Reason.NO_SERVICE_LIFE,
+                OperatingPointTerm.KEY, Reason.NO_SUPPLY_VOLTAGE, // no supply: no operating point to compare
+                SelfHeatingTerm.KEY, Reason.NO_LOAD_RESISTANCE), left);
         // and each is truly 0 V in the budget: the list is what the verdict lacks
         Budget b = BudgetCalculator.compute(s, FULL);
         for (String key : left.keySet()) {
@@ -64,10 +66,14 @@ class NotCountedTest {
                 supply: {voltage: 10 V, variation: 0.5 V}
                 resistor-ratio: {tolerance: 0.1 %}
                 service-life: 10 y
+                load-resistance: 2 kohm
                 """);
         Budget b = BudgetCalculator.compute(s, FULL);
         assertEquals(List.of(), b.notCounted());
         for (TermResult t : b.terms()) {
+            if (t.key().equals(InputCrossoverTerm.KEY) || t.key().equals(ChoppingRippleTerm.KEY)) {
+                continue; // 0 V by the part, not by the stage: one input pair (headroom 1.5 V), no chopping
+            }
             assertTrue(t.outputV() > 0, t.key() + " is 0 V though nothing is said of it");
         }
         // by hand: NG x dVs x 10^(-60/20) = 200 x 0.5 V x 0.001 = 0.1 V, PSRR assumed 60 dB (Assumed.PSRR_DB)
