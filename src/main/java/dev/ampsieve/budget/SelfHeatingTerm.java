@@ -94,7 +94,7 @@ public final class SelfHeatingTerm implements ErrorTerm {
         boolean ok = d.hot() <= v.ratedHigh();
         String detail = "die up to " + Units.format(d.hot(), Dimension.TEMPERATURE) + " (ambient "
                 + Units.format(s.tMax(), Dimension.TEMPERATURE) + " + " + Units.format(d.thetaJa(), Dimension.THERMAL_RESISTANCE)
-                + " x " + Units.format(d.power(), Dimension.NUMBER) + " W), rated to " + Units.format(v.ratedHigh(), Dimension.TEMPERATURE)
+                + " x " + Units.format(d.power() * 1e3, Dimension.NUMBER) + " mW), rated to " + Units.format(v.ratedHigh(), Dimension.TEMPERATURE)
                 + (ok ? "" : ": " + Units.format(d.hot() - v.ratedHigh(), Dimension.NUMBER) + " °C too hot");
         return List.of(new ConstraintResult(Constraints.DIE_TEMPERATURE, ok, detail));
     }

@@ -46,7 +46,9 @@ public final class CompareReport {
         Budget bb = c.b().budget();
         boolean anyMarked = false;
         boolean anyUnknown = false;
+        boolean anyTagged = false;
         for (Comparison.TermDelta d : c.terms()) {
+            anyTagged |= Figures.kindOf(d.key()) != dev.ampsieve.budget.TermKind.PART;
             boolean ea = estimated(ba, d.key());
             boolean eb = estimated(bb, d.key());
             anyMarked |= ea || eb;
@@ -66,6 +68,9 @@ public final class CompareReport {
             o.append("* estimated, typical-only or missing in the catalog ('budget PART' lists the warnings)")
                     .append(anyUnknown ? "; unknown: the smaller figure is 0 V only because the catalog lacks the value" : "")
                     .append('\n');
+        }
+        if (anyTagged) {
+            o.append(Figures.KIND_LEGEND).append('\n');
         }
         o.append('\n');
         TextTable s = new TextTable().left("").right(a).right(b);
