@@ -79,9 +79,9 @@ public final class BudgetText {
         line(o, "%-24s %11s %11s %9s %10s", "term", "output", "input", "of limit", "worst at");
         boolean anyEstimated = false;
         boolean anyUncounted = false;
-        boolean anyTagged = false;
+        java.util.Set<dev.ampsieve.budget.TermKind> kinds = java.util.EnumSet.noneOf(dev.ampsieve.budget.TermKind.class);
         for (TermResult t : b.terms()) {
-            anyTagged |= t.kind() != dev.ampsieve.budget.TermKind.PART;
+            kinds.add(t.kind());
             boolean counted = BudgetCalculator.counts(s, t.key());
             String mark = t.estimated() ? "*" : "";
             anyEstimated |= t.estimated();
@@ -93,8 +93,9 @@ public final class BudgetText {
         if (anyEstimated) {
             line(o, "* estimated, typical-only or assumed value: see the warnings");
         }
-        if (anyTagged) {
-            line(o, "%s", Figures.KIND_LEGEND);
+        String legend = Figures.kindLegend(kinds);
+        if (!legend.isEmpty()) {
+            line(o, "%s", legend);
         }
         if (anyUncounted) {
             line(o, "headroom only: AC-coupled stage, the DC term does not count toward the error");

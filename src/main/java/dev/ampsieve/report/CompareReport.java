@@ -46,9 +46,9 @@ public final class CompareReport {
         Budget bb = c.b().budget();
         boolean anyMarked = false;
         boolean anyUnknown = false;
-        boolean anyTagged = false;
+        java.util.Set<dev.ampsieve.budget.TermKind> kinds = java.util.EnumSet.noneOf(dev.ampsieve.budget.TermKind.class);
         for (Comparison.TermDelta d : c.terms()) {
-            anyTagged |= Figures.kindOf(d.key()) != dev.ampsieve.budget.TermKind.PART;
+            kinds.add(Figures.kindOf(d.key()));
             boolean ea = estimated(ba, d.key());
             boolean eb = estimated(bb, d.key());
             anyMarked |= ea || eb;
@@ -69,8 +69,9 @@ public final class CompareReport {
                     .append(anyUnknown ? "; unknown: the smaller figure is 0 V only because the catalog lacks the value" : "")
                     .append('\n');
         }
-        if (anyTagged) {
-            o.append(Figures.KIND_LEGEND).append('\n');
+        String legend = Figures.kindLegend(kinds);
+        if (!legend.isEmpty()) {
+            o.append(legend).append('\n');
         }
         o.append('\n');
         TextTable s = new TextTable().left("").right(a).right(b);

@@ -28,9 +28,17 @@ final class Figures {
                 .map(dev.ampsieve.budget.ErrorTerm::kind).findFirst().orElse(dev.ampsieve.budget.TermKind.PART);
     }
 
-    /** The legend of {@link #kindTag}, printed under a table that shows one. */
-    static final String KIND_LEGEND = "(op) operating-point term: where the part runs (its supply and common mode,"
-            + " die temperature, chopping); (board) board-level term";
+    /** The legend of the tags {@link #kindTag} puts on the terms of {@code kinds}, printed under a table that shows one. */
+    static String kindLegend(java.util.Collection<dev.ampsieve.budget.TermKind> kinds) {
+        java.util.List<String> out = new java.util.ArrayList<>();
+        if (kinds.contains(dev.ampsieve.budget.TermKind.OPERATING_POINT)) {
+            out.add("(op) operating-point term: where the part runs (its supply and common mode, die temperature, chopping)");
+        }
+        if (kinds.contains(dev.ampsieve.budget.TermKind.BOARD)) {
+            out.add("(board) board-level term: the board around the part");
+        }
+        return String.join("; ", out);
+    }
 
     static final String NONE = "-";
 

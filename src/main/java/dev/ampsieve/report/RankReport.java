@@ -125,9 +125,10 @@ public final class RankReport {
             o.append(r.stage().criterion().kind() == Criterion.Kind.YIELD
                     ? "margin: lower end of the yield's 95 % interval minus the target, in points of yield.\n"
                     : "margin: (limit - " + errorName(r) + ") / limit.  ").append("†: largest before the trim.  P: on the Pareto front.\n");
-            if (shown.stream().anyMatch(c -> c.budget().limitingTerm() != null
-                    && Figures.kindOf(c.budget().limitingTerm()) != dev.ampsieve.budget.TermKind.PART)) {
-                o.append(Figures.KIND_LEGEND).append(".\n");
+            String legend = Figures.kindLegend(shown.stream().filter(c -> c.budget().limitingTerm() != null)
+                    .map(c -> Figures.kindOf(c.budget().limitingTerm())).toList());
+            if (!legend.isEmpty()) {
+                o.append(legend).append(".\n");
             }
         }
         notCounted(o, r, shown);
