@@ -102,7 +102,8 @@ final class BenchData {
                     p.supply(), p.temperature(), scale(p.vos(), k), scale(p.vosDrift(), k), scale(p.ib(), k),
                     scale(p.ios(), k), p.cmrr(), p.psrr(), p.aol(), p.gbw() * g,
                     p.slew() == null ? null : p.slew() * g, p.noise(), p.longTermDrift(), p.inputHeadroom(),
-                    p.outputHeadroom(), p.choppingFrequency(), p.quiescentCurrent(), p.inputCapacitance(), p.source(), p.notes(), p.where()));
+                    p.outputHeadroom(), p.choppingFrequency(), p.quiescentCurrent(), p.inputCapacitance(),
+                    p.testConditions(), p.inputCrossover(), p.thetaJa(), p.choppingRipple(), p.source(), p.notes(), p.where()));
         }
         return out;
     }

@@ -428,6 +428,9 @@ public final class Advisor {
         trimChange(stage, p, budgets).ifPresent(out::add);
         looserLimit(stage, closest, fits).ifPresent(out::add);
         lowerYieldTarget(stage, closest, fits).ifPresent(out::add);
+        // operating point
+        higherLoad(stage, fits).ifPresent(out::add);
+        steeperFilter(stage, closest, fits).ifPresent(out::add);
         return out;
     }
 
@@ -691,6 +694,46 @@ public final class Advisor {
         return java.util.Optional.of(new Change(Change.Kind.LESS_LEAKAGE, text, v));
     }
 
+    /** Highest load resistance tried: 1 Gohm, no load to speak of (a higher one is the same stage). */
+    static final double LOAD_CEILING = 1e9;
+
+    /**
+     * The least load resistance that fits when the stage's load heats the die too much: bisection on
+     * ln R between the stage's load and {@link #LOAD_CEILING}, printed rounded up to 3 digits.
+     */
+    private static java.util.Optional<Change> higherLoad(Stage stage, Predicate<Stage> fits) {
+        Double rl = stage.loadResistance();
+        if (rl == null || rl >= LOAD_CEILING || !fits.test(StageEdit.withLoadResistance(stage, LOAD_CEILING))) {
+            return java.util.Optional.empty();
+        }
+        java.util.function.DoublePredicate ok = r -> fits.test(StageEdit.withLoadResistance(stage, r));
+        double ln = Bisection.smallest(x -> ok.test(Math.exp(x)), Math.log(rl), Math.log(LOAD_CEILING));
+        double x = reportSmallest(Math.exp(ln), ok);
+        if (!ok.test(x)) {
+            return java.util.Optional.empty();
+        }
+        String text = "a load resistance of " + Phrases.ohms(x) + " or higher (now " + Phrases.ohms(rl)
+                + "): less output current heats the die less";
+        return java.util.Optional.of(new Change(Change.Kind.HIGHER_LOAD_RESISTANCE, text, Map.of("loadResistance", x)));
+    }
+
+    /** The lowest filter order at band.high, above the stage's, that makes a chopper or auto-zero part fit. */
+    private static java.util.Optional<Change> steeperFilter(Stage stage, Candidate closest, Predicate<Stage> fits) {
+        TermResult ripple = closest.budget().term(dev.ampsieve.budget.ChoppingRippleTerm.KEY);
+        if (ripple == null || !(ripple.outputV() > 0)) {
+            return java.util.Optional.empty();
+        }
+        for (int n = stage.noiseFilterOrder() + 1; n <= Stage.MAX_FILTER_ORDER; n++) {
+            if (fits.test(StageEdit.withFilterOrder(stage, n))) {
+                String text = "a Butterworth low-pass of order " + n + " at " + Units.format(stage.bandHigh(), Dimension.FREQUENCY)
+                        + " after the amplifier (now " + (stage.noiseFilterOrder() == 0 ? "none" : "order " + stage.noiseFilterOrder())
+                        + "): it removes the chopping ripple (and shortens the noise band)";
+                return java.util.Optional.of(new Change(Change.Kind.STEEPER_FILTER, text, Map.of("filterOrder", (double) n)));
+            }
+        }
+        return java.util.Optional.empty();
+    }
+
     private static java.util.Optional<Change> narrowerTemperature(Stage stage, Predicate<Stage> fits) {
         // shrink toward the trim / datasheet reference temperature, or the nearest end of the range
         double c = Math.max(stage.tMin(), Math.min(stage.tMax(), Stage.T_REF));
@@ -836,6 +879,8 @@ public final class Advisor {
     static final double IB_FLOOR = 1e-15;
     static final double VOS_FLOOR = 0.5e-6;
     static final double DRIFT_FLOOR = 2e-9;
+    /** No package is cooler than a few °C/W without a heat sink (common practice). */
+    static final double THETA_FLOOR = 5.0;
 
     /**
      * The part-side figures that would make the stage fit as it is, each found by bisection on a
@@ -868,6 +913,12 @@ public final class Advisor {
         if (dT > 0) {
             target(fits, x -> PartEdit.withDrift(p, x), v.driftBound(dT), DRIFT_FLOOR)
                     .ifPresent(x -> out.add(new PartTarget(PartTarget.Quantity.DRIFT, x, Double.NaN)));
+        }
+
+        // operating point: a cooler package, when the stage's load heats the die
+        if (stage.loadResistance() != null && stage.supplyVoltage() != null) {
+            target(fits, x -> PartEdit.withThetaJa(p, x), v.operating().thetaJa().bound(), THETA_FLOOR)
+                    .ifPresent(x -> out.add(new PartTarget(PartTarget.Quantity.THETA_JA, x, Double.NaN)));
         }
         return out;
     }

@@ -30,7 +30,11 @@ public record Change(Kind kind, String text, Map<String, Double> values) {
         ALLOW_TRIM("allow-trim"),
         TWO_POINT_TRIM("two-point-trim"),
         LOOSER_LIMIT("looser-limit"),
-        LOWER_YIELD_TARGET("lower-yield-target");
+        LOWER_YIELD_TARGET("lower-yield-target"),
+        /** Operating point: a higher load resistance, value loadResistance (a cooler die). */
+        HIGHER_LOAD_RESISTANCE("higher-load-resistance"),
+        /** Operating point: a steeper stage filter at band.high, value filterOrder (removes chopping ripple). */
+        STEEPER_FILTER("steeper-filter");
 
         private final String key;
 

@@ -17,7 +17,9 @@ public record PartTarget(Quantity quantity, double value, double atC) {
         /** Input offset voltage, maximum at 25 °C. */
         VOS("vos"),
         /** Offset drift, maximum. */
-        DRIFT("vos-drift");
+        DRIFT("vos-drift"),
+        /** Junction-to-ambient thermal resistance, largest: a cooler package or more copper. */
+        THETA_JA("theta-ja");
 
         private final String key;
 

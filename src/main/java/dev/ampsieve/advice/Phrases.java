@@ -111,7 +111,19 @@ final class Phrases {
         if (t == null) {
             return "";
         }
-        return (c.trimmed() ? ", largest term before the trim " : ", limited by ") + t.label() + " (" + volts(t.outputV()) + ")";
+        String where = t.kind() == dev.ampsieve.budget.TermKind.OPERATING_POINT ? ", an operating-point term: " + lever(t.key()) : "";
+        return (c.trimmed() ? ", largest term before the trim " : ", limited by ") + t.label() + " (" + volts(t.outputV()) + where + ")";
+    }
+
+    /** The lever of an operating-point term, in words (no numbers: the changes below give those). */
+    static String lever(String key) {
+        return switch (key) {
+            case "self-heating" -> "a cooler part (lower quiescent power or theta-ja) or a higher load resistance";
+            case "chopping-ripple" -> "a stage filter that removes the ripple, or a part with less ripple";
+            case "operating-point" -> "a part whose datasheet table is nearer this supply and common mode, or better PSRR and CMRR";
+            case "input-crossover" -> "keep the common mode clear of the crossover, or a part without one";
+            default -> "where the part runs";
+        };
     }
 
     /** The yield the candidate is judged by: after the trim when its figures include one; null when not simulated. */
@@ -135,6 +147,8 @@ final class Phrases {
                     + " (IOS counted equal to it)";
             case VOS -> "vos.max ≤ " + volts(t.value()) + " at 25 °C (drift as now)";
             case DRIFT -> "drift ≤ " + Units.format(t.value(), Dimension.VOLTAGE_DRIFT);
+            case THETA_JA -> "theta-ja ≤ " + Units.format(t.value(), Dimension.THERMAL_RESISTANCE)
+                    + " (a cooler package, or more copper under it)";
         };
     }
 

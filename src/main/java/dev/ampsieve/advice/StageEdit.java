@@ -10,6 +10,14 @@ final class StageEdit {
     private StageEdit() {
     }
 
+    static Stage withLoadResistance(Stage s, double ohms) {
+        return s.toBuilder().loadResistance(ohms).build();
+    }
+
+    static Stage withFilterOrder(Stage s, int order) {
+        return s.toBuilder().filterOrder(order).build();
+    }
+
     static Stage withRf(Stage s, double rf) {
         return s.toBuilder().rf(rf).build();
     }

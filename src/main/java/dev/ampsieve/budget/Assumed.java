@@ -49,6 +49,36 @@ final class Assumed {
      */
     static final double INPUT_CAPACITANCE = 20e-12;
 
+    /**
+     * Junction-to-ambient thermal resistance when none is given, °C/W (common practice: SO-8
+     * packages publish about 100 to 160 °C/W on a standard test board, SOT-23 and SC-70 packages
+     * 200 to 300 °C/W [from memory]): the small-package end.
+     */
+    static final double THETA_JA = 250.0;
+
+    /**
+     * Supply current per amplifier when none is given, A (common practice: precision amplifiers
+     * draw from about 10 µA to a few mA [from memory]): the upper end, which heats the die most.
+     */
+    static final double QUIESCENT_CURRENT = 5e-3;
+
+    /**
+     * Input-referred ripple at the chopping frequency of a chopper or auto-zero part when none is
+     * given, V peak (common practice: parts with ripple suppression publish a few µV, early chopper
+     * designs without it tens of µV [from memory]): the large end.
+     */
+    static final double CHOPPING_RIPPLE = 20e-6;
+
+    /**
+     * Where a rail-to-rail input without a published crossover hands over between its pairs, V below
+     * the positive rail (common practice: complementary-pair inputs switch about 0.8 to 1.5 V below
+     * it [from memory]); a wider band, 0.5 to 2 V, is taken so the unknown place is covered.
+     */
+    static final double CROSSOVER_NEAREST = 0.5;
+
+    /** The far end of that band, V below the positive rail (see {@link #CROSSOVER_NEAREST}). */
+    static final double CROSSOVER_FARTHEST = 2.0;
+
     /** One thousand hours, s: the time base of long-term drift figures. */
     static final double THOUSAND_HOURS = 1000 * 3600.0;
 

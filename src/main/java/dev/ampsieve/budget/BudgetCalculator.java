@@ -25,12 +25,16 @@ public final class BudgetCalculator {
     public static final List<ErrorTerm> TERMS = List.of(
             new OffsetTerm(), new DriftTerm(), new BiasTerm(), new CmrrTerm(), new PsrrTerm(),
             new OpenLoopGainTerm(), new BandwidthTerm(), new ResistorTerm(), new AgingTerm(), new NoiseTerm(),
+            // operating point (TermKind.OPERATING_POINT)
+            new OperatingPointTerm(), new InputCrossoverTerm(), new SelfHeatingTerm(), new ChoppingRippleTerm(),
             // board-level: 0 V unless the stage names them
             new ThermalEmfTerm(), new LeakageTerm());
 
     /** Keys of the terms that stay at their limits in the Monte Carlo (not drawn per unit). */
     private static final Set<String> FIXED_IN_YIELD = Set.of(
             CmrrTerm.KEY, PsrrTerm.KEY, OpenLoopGainTerm.KEY, BandwidthTerm.KEY, NoiseTerm.KEY,
+            // operating point: bounds of unknown sign, held at their limits (conservative)
+            OperatingPointTerm.KEY, InputCrossoverTerm.KEY, SelfHeatingTerm.KEY, ChoppingRippleTerm.KEY,
             ThermalEmfTerm.KEY, LeakageTerm.KEY);
 
     /** Chopping frequency should be at least this many times the band edge (common practice). */
@@ -60,6 +64,7 @@ public final class BudgetCalculator {
 
         List<String> cw = new ArrayList<>();
         List<ConstraintResult> constraints = new ArrayList<>(Constraints.check(stage, part, dcOnly, cw));
+        constraints.addAll(SelfHeatingTerm.dieLimit(stage, v));
         warnings.addAll(cw);
 
         Trimmed trimmed = trimmed(stage, v, terms);
@@ -204,6 +209,9 @@ public final class BudgetCalculator {
                 if (trimmed && twoPoint && r.key().equals(OpenLoopGainTerm.KEY)) {
                     continue;
                 }
+                if (trimmed && r.key().equals(OperatingPointTerm.KEY)) {
+                    continue; // a static offset at the operating point: every trim removes it
+                }
                 f += r.outputV();
             }
         }
@@ -235,7 +243,9 @@ public final class BudgetCalculator {
      * 1 and 2 (the engine's offset is linear in temperature per unit: vos + drift x (T - 25)),
      * leaves of term 3 its part not linear in temperature ({@link BiasTerm#afterTwoTemperature}),
      * keeps every gain term, and the resolution grows by {@link CalibrationLine#resolutionFactor}
-     * where the range reaches beyond the calibration points.
+     * where the range reaches beyond the calibration points. Of the operating-point terms every
+     * method removes the offset's move to the operating point ({@link OperatingPointTerm}, a static
+     * offset there) and none the crossover step, the self-heating or the chopping ripple.
      */
     private static Trimmed trimmed(Stage stage, PartValues v, List<TermResult> terms, Trim.Method method) {
         boolean two = method == Trim.Method.TWO_POINT;
@@ -248,7 +258,7 @@ public final class BudgetCalculator {
             }
             double o = find(terms, t.key()).outputV();
             switch (t.key()) {
-                case OffsetTerm.KEY -> o = 0;
+                case OffsetTerm.KEY, OperatingPointTerm.KEY -> o = 0;
                 case DriftTerm.KEY -> o = line != null ? 0 : DriftTerm.afterTrim(stage, v);
                 case BiasTerm.KEY -> o = line != null ? BiasTerm.afterTwoTemperature(stage, v, line) : BiasTerm.afterTrim(stage, v);
                 case OpenLoopGainTerm.KEY -> o = two ? 0 : o;
@@ -350,6 +360,16 @@ public final class BudgetCalculator {
                         + (stage.bandHigh() >= fc ? " is above the chopping frequency " : " is not far below the chopping frequency ")
                         + Units.format(fc, Dimension.FREQUENCY)
                         + " (keep fH under a tenth of it): expect ripple and intermodulation in band");
+            }
+            if (fc != null && stage.sampleRate() != null) {
+                for (ChoppingRippleTerm.Alias a : ChoppingRippleTerm.aliases(fc, stage.sampleRate(), stage.bandHigh())) {
+                    w.add("sample-rate: " + (a.harmonic() == 1 ? "the chopping frequency " : "harmonic " + a.harmonic()
+                            + " of the chopping frequency, ") + Units.format(a.frequency(), Dimension.FREQUENCY) + ", sampled at "
+                            + Units.format(stage.sampleRate(), Dimension.FREQUENCY) + " aliases to "
+                            + Units.format(a.alias(), Dimension.FREQUENCY) + ", inside the band (up to "
+                            + Units.format(stage.bandHigh(), Dimension.FREQUENCY) + "): filter it out before the converter,"
+                            + " or choose a sample rate whose multiples keep away from it");
+                }
             }
         }
     }

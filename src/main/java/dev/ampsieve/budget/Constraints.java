@@ -27,6 +27,8 @@ public final class Constraints {
     public static final String PRICE = "price";
     /** Every figure of the budget is a finite number (a product of extreme catalog and stage values may overflow). */
     public static final String FINITE = "finite";
+    /** The self-heated die within the part's rated temperature ({@link SelfHeatingTerm#dieLimit}). */
+    public static final String DIE_TEMPERATURE = "die-temperature";
 
     /**
      * @param dcHeadroomV output-referred DC error an AC-coupled stage must still swing around

@@ -24,7 +24,7 @@ public final class LeakageTerm implements ErrorTerm {
 
     @Override
     public String label() {
-        return "leakage (board)";
+        return "leakage";
     }
 
     @Override

@@ -30,6 +30,10 @@ public record NotCounted(String term, Reason reason) {
         NO_SERVICE_LIFE("no-service-life"),
         /** the part's catalog entry lacks the figure the term needs. */
         NOT_IN_CATALOG("not-in-catalog"),
+        /** supply.voltage absent: the operating point (and the die's power, a crossover's place) needs it. */
+        NO_SUPPLY_VOLTAGE("no-supply-voltage"),
+        /** load-resistance absent: self-heating is not counted. */
+        NO_LOAD_RESISTANCE("no-load-resistance"),
         /** an AC-coupled stage counts the DC terms toward headroom only. */
         AC_COUPLED("ac-coupled");
 
@@ -83,6 +87,12 @@ public record NotCounted(String term, Reason reason) {
                         : s.ratioTolerance() == 0 && s.ratioTempco() == 0 ? Reason.NO_RESISTOR_TOLERANCE : null;
                 // a missing long-term drift, bias current or noise figure is estimated (Assumed, flagged), not left out
                 case AgingTerm.KEY -> s.serviceLife() <= 0 ? Reason.NO_SERVICE_LIFE : null;
+                // operating point: a part without a crossover or chopping has truly none (not listed)
+                case OperatingPointTerm.KEY -> s.supplyVoltage() == null ? Reason.NO_SUPPLY_VOLTAGE : null;
+                case InputCrossoverTerm.KEY -> s.supplyVoltage() == null && p != null
+                        && (p.inputCrossover() != null || OperatingFigures.railToRailInput(p)) ? Reason.NO_SUPPLY_VOLTAGE : null;
+                case SelfHeatingTerm.KEY -> s.loadResistance() == null ? Reason.NO_LOAD_RESISTANCE
+                        : s.supplyVoltage() == null ? Reason.NO_SUPPLY_VOLTAGE : null;
                 default -> null;
             };
             if (r != null) {

@@ -43,6 +43,8 @@ import java.util.List;
  *                       = the worst case, typ = one sigma where the catalog's typical figure is used)
  * @param inputCapacitance the capacitance one input presents (common-mode plus differential), F: the
  *                       catalog's, else {@link Assumed#INPUT_CAPACITANCE} (basis ASSUMED)
+ * @param operating      the figures of the operating-point terms (test conditions, crossover, thermal
+ *                       resistance, quiescent current, chopping ripple), resolved by the same rules
  */
 public record PartValues(
         Part part,
@@ -65,6 +67,7 @@ public record PartValues(
         boolean noiseEstimated,
         Figure aging,
         Figure inputCapacitance,
+        OperatingFigures operating,
         List<String> warnings) {
 
     public PartValues {
@@ -245,8 +248,9 @@ public record PartValues(
                     + ", ios by the sum of both ends as it can change sign):"
                     + " enter the datasheet's over-temperature maxima");
         }
+        OperatingFigures operating = OperatingFigures.of(part, stage, vos, w);
         return new PartValues(part, vos, vosOt, drift, ib, ios, ibOt, iosOt, ratedHigh, cmrr, psrr, aol, gbw,
-                en, enC, in, inC, noiseEst, aging, cin, w);
+                en, enC, in, inC, noiseEst, aging, cin, operating, w);
     }
 
     private static InputType inputOf(Part part) {

@@ -1,12 +1,14 @@
 package dev.ampsieve.budget;
 
-/** Where an error term comes from: the part's datasheet figures, where the part runs, or the board around it. */
+/**
+ * Where an error term comes from, so reports can group and mark it: the part's own datasheet
+ * figures in the stage as stated ({@link #PART}), where the part really runs (its supply, common
+ * mode, die temperature and chopping: {@link #OPERATING_POINT}), or the board around it
+ * ({@link #BOARD}). {@link #key()} is the word used in JSON.
+ */
 public enum TermKind {
-    /** the amplifier's own figures at the datasheet's conditions */
     PART("part"),
-    /** the part away from the datasheet's conditions: supply, common mode, die temperature, ripple */
     OPERATING_POINT("operating-point"),
-    /** the board around the part: thermal EMF, leakage */
     BOARD("board");
 
     private final String key;
@@ -15,7 +17,7 @@ public enum TermKind {
         this.key = key;
     }
 
-    /** The word used in JSON. */
+    /** The stable JSON word: part, operating-point, board. */
     public String key() {
         return key;
     }

@@ -11,6 +11,17 @@ package dev.ampsieve.budget;
  * @param worstAtC  ambient temperature (°C) at which it is largest; NaN when it does not depend on it
  * @param estimated true when a missing catalog value was replaced by an estimate
  * @param note      how it was computed, briefly (which catalog values, which rule)
+ * @param kind      where the term comes from: the part, its operating point, or the board
  */
-public record TermResult(String key, String label, double outputV, double inputV, double worstAtC, boolean estimated, String note) {
+public record TermResult(String key, String label, double outputV, double inputV, double worstAtC, boolean estimated, String note,
+        TermKind kind) {
+
+    public TermResult {
+        kind = kind == null ? TermKind.PART : kind;
+    }
+
+    /** A term of the part's own figures ({@link TermKind#PART}). */
+    public TermResult(String key, String label, double outputV, double inputV, double worstAtC, boolean estimated, String note) {
+        this(key, label, outputV, inputV, worstAtC, estimated, note, TermKind.PART);
+    }
 }

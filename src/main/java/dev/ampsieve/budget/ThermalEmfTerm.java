@@ -26,7 +26,7 @@ public final class ThermalEmfTerm implements ErrorTerm {
 
     @Override
     public String label() {
-        return "thermal EMF (board)";
+        return "thermal EMF";
     }
 
     @Override

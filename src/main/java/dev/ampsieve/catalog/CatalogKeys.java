@@ -50,6 +50,11 @@ public final class CatalogKeys {
     public static final String CHOPPING_FREQUENCY = "chopping-frequency";
     public static final String QUIESCENT_CURRENT = "quiescent-current";
     public static final String INPUT_CAPACITANCE = "input-capacitance";
+    // operating point (datasheet test conditions, input crossover, self-heating, chopping ripple)
+    public static final String TEST_CONDITIONS = "test-conditions";
+    public static final String INPUT_CROSSOVER = "input-crossover";
+    public static final String THETA_JA = "theta-ja";
+    public static final String CHOPPING_RIPPLE = "chopping-ripple";
     public static final String SOURCE = "source";
     public static final String NOTES = "notes";
 
@@ -69,11 +74,16 @@ public final class CatalogKeys {
     public static final String PER = "per";
     public static final String LOW = "low";
     public static final String HIGH = "high";
+    public static final String COMMON_MODE = "common-mode";
+    public static final String FROM_POSITIVE_RAIL = "from-positive-rail";
+    public static final String OFFSET_STEP = "offset-step";
 
     /** Top-level keys of a part, template order. */
     public static final List<String> PART_KEYS = List.of(ID, TITLE, ARCHITECTURE, INPUT, FACTORY_TRIM, NULL_PINS,
             CHANNELS, PACKAGES, TAGS, PRICE, SUPPLY, TEMPERATURE, VOS, VOS_DRIFT, IB, IOS, CMRR, PSRR, AOL, GBW, SLEW,
-            NOISE, LONG_TERM_DRIFT, INPUT_HEADROOM, OUTPUT_HEADROOM, CHOPPING_FREQUENCY, QUIESCENT_CURRENT, INPUT_CAPACITANCE, SOURCE, NOTES);
+            NOISE, LONG_TERM_DRIFT, INPUT_HEADROOM, OUTPUT_HEADROOM, CHOPPING_FREQUENCY, QUIESCENT_CURRENT, INPUT_CAPACITANCE,
+            TEST_CONDITIONS, INPUT_CROSSOVER, THETA_JA, CHOPPING_RIPPLE,
+            SOURCE, NOTES);
 
     /** Keys a part cannot do without. {@code vos} needs typ or max; range sections need both ends. */
     public static final List<String> REQUIRED = List.of(ID, ARCHITECTURE, INPUT, VOS, GBW, SUPPLY, TEMPERATURE, PRICE);
@@ -110,6 +120,8 @@ public final class CatalogKeys {
         s.put(LONG_TERM_DRIFT, List.of(VALUE, PER));
         s.put(INPUT_HEADROOM, HEADROOM);
         s.put(OUTPUT_HEADROOM, HEADROOM);
+        s.put(TEST_CONDITIONS, List.of(SUPPLY, COMMON_MODE));
+        s.put(INPUT_CROSSOVER, List.of(FROM_POSITIVE_RAIL, OFFSET_STEP));
         SECTIONS = Collections.unmodifiableMap(s);
 
         Registry r = new Registry();
@@ -139,6 +151,15 @@ public final class CatalogKeys {
         r.put(CHOPPING_FREQUENCY, Dimension.FREQUENCY, Part::choppingFrequency);
         r.put(QUIESCENT_CURRENT, Dimension.CURRENT, Part::quiescentCurrent);
         r.put(INPUT_CAPACITANCE, Dimension.CAPACITANCE, Part::inputCapacitance);
+        r.put(path(TEST_CONDITIONS, SUPPLY), Dimension.VOLTAGE, p -> p.testConditions() == null ? null : p.testConditions().supply());
+        r.put(path(TEST_CONDITIONS, COMMON_MODE), Dimension.VOLTAGE,
+                p -> p.testConditions() == null ? null : p.testConditions().commonMode());
+        r.put(path(INPUT_CROSSOVER, FROM_POSITIVE_RAIL), Dimension.VOLTAGE,
+                p -> p.inputCrossover() == null ? null : p.inputCrossover().fromPositiveRail());
+        r.put(path(INPUT_CROSSOVER, OFFSET_STEP), Dimension.VOLTAGE,
+                p -> p.inputCrossover() == null ? null : p.inputCrossover().offsetStep());
+        r.put(THETA_JA, Dimension.THERMAL_RESISTANCE, Part::thetaJa);
+        r.put(CHOPPING_RIPPLE, Dimension.VOLTAGE, Part::choppingRipple);
         QUANTITIES = Collections.unmodifiableMap(r.dimensions);
         GETTERS = Collections.unmodifiableMap(r.getters);
 
@@ -202,6 +223,18 @@ public final class CatalogKeys {
                 "even power amplifiers draw well under an ampere at rest"));
         b.put(INPUT_CAPACITANCE, new Bounds(0.1e-12, 100e-12, 1e-15, 100e-9, false,
                 "an amplifier's input pins are a few pF; 100 nF is a discrete capacitor, not a pin"));
+        b.put(path(TEST_CONDITIONS, SUPPLY), supply);
+        b.put(path(TEST_CONDITIONS, COMMON_MODE), new Bounds(NONE, 1000, NONE, 2000, false,
+                "the common mode lies between the rails, and no op amp's supply exceeds 2 kV"));
+        b.put(path(INPUT_CROSSOVER, FROM_POSITIVE_RAIL), new Bounds(0.1, 5, NONE, 2000, false,
+                "the crossover lies between the rails, and no op amp's supply exceeds 2 kV"));
+        b.put(path(INPUT_CROSSOVER, OFFSET_STEP), new Bounds(NONE, 10e-3, NONE, 1, false,
+                "a step of volts between the two input pairs leaves no room for a signal"));
+        b.put(THETA_JA, new Bounds(5, 500, 0.5, 5000, false,
+                "a bare die in still air is a few hundred °C/W and a package on a heat sink a few; beyond 5000 °C/W"
+                        + " a milliwatt would melt silicon"));
+        b.put(CHOPPING_RIPPLE, new Bounds(NONE, 10e-3, NONE, 1, false,
+                "a ripple of volts at the input leaves no room for a signal"));
         BOUNDS = Collections.unmodifiableMap(b);
     }
 
@@ -247,7 +280,13 @@ public final class CatalogKeys {
             Map.entry(path(OUTPUT_HEADROOM, HIGH), "50 mV"),
             Map.entry(CHOPPING_FREQUENCY, "100 kHz"),
             Map.entry(QUIESCENT_CURRENT, "1 mA"),
-            Map.entry(INPUT_CAPACITANCE, "7 pF"));
+            Map.entry(INPUT_CAPACITANCE, "7 pF"),
+            Map.entry(path(TEST_CONDITIONS, SUPPLY), "30 V"),
+            Map.entry(path(TEST_CONDITIONS, COMMON_MODE), "15 V"),
+            Map.entry(path(INPUT_CROSSOVER, FROM_POSITIVE_RAIL), "1.2 V"),
+            Map.entry(path(INPUT_CROSSOVER, OFFSET_STEP), "50 uV"),
+            Map.entry(THETA_JA, "150 C/W"),
+            Map.entry(CHOPPING_RIPPLE, "5 uV"));
 
     /**
      * A well-formed value for the quantity at {@code path} (a list prefix such as {@code parts[2].}

@@ -13,6 +13,11 @@ import java.util.List;
  * @param temperature rated ambient range, °C
  * @param inputCapacitance the capacitance one input presents: common-mode plus differential, F; null
  *                    when not given (a transimpedance budget then assumes a conservative value)
+ * @param testConditions the supply and common mode of the datasheet's 25 °C table; null when not given
+ * @param inputCrossover where a rail-to-rail input hands over between its input pairs, and the offset
+ *                    step there; null when not given
+ * @param thetaJa     junction-to-ambient thermal resistance, °C/W; null when not given
+ * @param choppingRipple input-referred ripple at the chopping frequency (peak), V; null when not given
  * @param where       file and line the part was read from, for messages and reports
  */
 public record Part(
@@ -44,6 +49,10 @@ public record Part(
         Double choppingFrequency,
         Double quiescentCurrent,
         Double inputCapacitance,
+        TestConditions testConditions,
+        InputCrossover inputCrossover,
+        Double thetaJa,
+        Double choppingRipple,
         String source,
         String notes,
         Located where) {

@@ -16,6 +16,13 @@ import static dev.ampsieve.catalog.CatalogKeys.ID;
 import static dev.ampsieve.catalog.CatalogKeys.IN;
 import static dev.ampsieve.catalog.CatalogKeys.INPUT;
 import static dev.ampsieve.catalog.CatalogKeys.INPUT_CAPACITANCE;
+import static dev.ampsieve.catalog.CatalogKeys.INPUT_CROSSOVER;
+import static dev.ampsieve.catalog.CatalogKeys.TEST_CONDITIONS;
+import static dev.ampsieve.catalog.CatalogKeys.THETA_JA;
+import static dev.ampsieve.catalog.CatalogKeys.CHOPPING_RIPPLE;
+import static dev.ampsieve.catalog.CatalogKeys.COMMON_MODE;
+import static dev.ampsieve.catalog.CatalogKeys.FROM_POSITIVE_RAIL;
+import static dev.ampsieve.catalog.CatalogKeys.OFFSET_STEP;
 import static dev.ampsieve.catalog.CatalogKeys.INPUT_HEADROOM;
 import static dev.ampsieve.catalog.CatalogKeys.IN_CORNER;
 import static dev.ampsieve.catalog.CatalogKeys.IOS;
@@ -164,6 +171,10 @@ final class PartReader {
         Double chop = quantity(part, null, CHOPPING_FREQUENCY);
         Double iq = quantity(part, null, QUIESCENT_CURRENT);
         Double cin = quantity(part, null, INPUT_CAPACITANCE);
+        TestConditions tests = readTestConditions();
+        InputCrossover crossover = readCrossover();
+        Double thetaJa = quantity(part, null, THETA_JA);
+        Double ripple = quantity(part, null, CHOPPING_RIPPLE);
         String source = f.text(part, prefix, SOURCE);
         String notes = f.text(part, prefix, NOTES);
 
@@ -181,7 +192,7 @@ final class PartReader {
                 trim == null ? FactoryTrim.NONE : FactoryTrim.of(trim),
                 nullPins != null && nullPins, channels == null ? 1 : channels, packages, tags, price, supply,
                 temperature, vos, vosDrift, ib, ios, cmrr, psrr, aol, gbw, slew, noise, ltd, inHead, outHead, chop, iq, cin,
-                source, notes, part.at());
+                tests, crossover, thetaJa, ripple, source, notes, part.at());
         return new Result(prefix, id, idAt, p, problems);
     }
 
@@ -272,9 +283,9 @@ final class PartReader {
 
     /** Errors when {@code key} is missing inside a present section. */
     private void requireIn(Node.Mapping m, String section, String key) {
-        Dimension d = CatalogKeys.dimension(path(section, key));
         String example = SECTION_EXAMPLE.get(path(section, key));
-        f.require(m, join(prefix, section), key, example != null ? example : d == null ? "..." : d.example());
+        String fallback = CatalogKeys.example(path(section, key));
+        f.require(m, join(prefix, section), key, example != null ? example : fallback != null ? fallback : "...");
     }
 
     /** At most this many price breaks; distributors list a handful. */
@@ -452,6 +463,30 @@ final class PartReader {
         return low == null || high == null ? null : new Headroom(low, high);
     }
 
+    /** {@code test-conditions: {supply, common-mode}}: either may be left out. */
+    private TestConditions readTestConditions() {
+        Node.Mapping m = section(TEST_CONDITIONS);
+        if (m == null) {
+            return null;
+        }
+        Double vs = quantity(m, TEST_CONDITIONS, SUPPLY);
+        Double cm = quantity(m, TEST_CONDITIONS, COMMON_MODE);
+        return vs == null && cm == null ? null : new TestConditions(vs, cm);
+    }
+
+    /** {@code input-crossover: {from-positive-rail, offset-step}}: both are needed. */
+    private InputCrossover readCrossover() {
+        Node.Mapping m = section(INPUT_CROSSOVER);
+        if (m == null) {
+            return null;
+        }
+        requireIn(m, INPUT_CROSSOVER, FROM_POSITIVE_RAIL);
+        requireIn(m, INPUT_CROSSOVER, OFFSET_STEP);
+        Double from = quantity(m, INPUT_CROSSOVER, FROM_POSITIVE_RAIL);
+        Double step = quantity(m, INPUT_CROSSOVER, OFFSET_STEP);
+        return from == null || step == null ? null : new InputCrossover(from, step);
+    }
+
     // ------------------------------------------------------------------ checks
 
     private static final String MAGNITUDE_FIX = "write the magnitude without a sign: the value is read as a ± limit";
@@ -488,6 +523,15 @@ final class PartReader {
         positive(QUIESCENT_CURRENT, "write the supply current, for example '1.5 mA'");
         positive(INPUT_CAPACITANCE, "write the common-mode plus differential input capacitance, for example '7 pF';"
                 + " leave the key out when unknown");
+        positive(path(TEST_CONDITIONS, SUPPLY), "write the total supply of the datasheet's table (V+ minus V-), for example '30 V'");
+        nonNegative(path(TEST_CONDITIONS, COMMON_MODE), "write the common mode in volts above the negative rail"
+                + " (mid-supply of a 30 V table is '15 V')");
+        nonNegative(path(INPUT_CROSSOVER, FROM_POSITIVE_RAIL), "write the distance below the positive rail as a"
+                + " positive value, for example '1.2 V'");
+        nonNegative(path(INPUT_CROSSOVER, OFFSET_STEP), MAGNITUDE_FIX);
+        positive(THETA_JA, "write the package's junction-to-ambient thermal resistance, for example '150 C/W';"
+                + " leave the key out when unknown");
+        nonNegative(CHOPPING_RIPPLE, MAGNITUDE_FIX);
     }
 
     private void checkOrder() {
@@ -511,6 +555,10 @@ final class PartReader {
         }
         notAbove(path(SUPPLY, MIN), path(SUPPLY, MAX), false, "swap them: min is the lowest total supply");
         notAbove(path(TEMPERATURE, MIN), path(TEMPERATURE, MAX), false, "swap them: min is the coldest rated ambient");
+        notAbove(path(TEST_CONDITIONS, COMMON_MODE), path(TEST_CONDITIONS, SUPPLY), false,
+                "the common mode is measured above the negative rail, so it lies inside the supply; check the datasheet's conditions");
+        notAbove(path(INPUT_CROSSOVER, FROM_POSITIVE_RAIL), path(SUPPLY, MAX), false,
+                "the crossover lies between the rails; write its distance below the positive rail");
     }
 
     /**

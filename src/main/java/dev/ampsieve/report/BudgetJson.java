@@ -41,7 +41,7 @@ public final class BudgetJson {
             ObjectNode n = terms.addObject();
             n.put("key", t.key());
             n.put("label", t.label());
-            n.put("kind", BudgetCalculator.kindOf(t.key()).key());
+            n.put("kind", t.kind().key());
             put(n, "outputV", t.outputV());
             // at the signal source: amperes for a transimpedance stage, named so
             put(n, Figures.inputDimension(b.stage()) == dev.ampsieve.units.Dimension.CURRENT ? "inputA" : "inputV", t.inputV());

@@ -79,17 +79,23 @@ public final class BudgetText {
         line(o, "%-24s %11s %11s %9s %10s", "term", "output", "input", "of limit", "worst at");
         boolean anyEstimated = false;
         boolean anyUncounted = false;
+        java.util.Set<dev.ampsieve.budget.TermKind> kinds = java.util.EnumSet.noneOf(dev.ampsieve.budget.TermKind.class);
         for (TermResult t : b.terms()) {
+            kinds.add(t.kind());
             boolean counted = BudgetCalculator.counts(s, t.key());
             String mark = t.estimated() ? "*" : "";
             anyEstimated |= t.estimated();
             anyUncounted |= !counted;
-            line(o, "%-24s %11s %11s %9s %10s%s", t.label() + mark, v(t.outputV()), in.apply(t.inputV()),
+            line(o, "%-24s %11s %11s %9s %10s%s", t.label() + Figures.kindTag(t.kind()) + mark, v(t.outputV()), in.apply(t.inputV()),
                     share(t.outputV(), limit), Double.isNaN(t.worstAtC()) ? "-" : Units.format(t.worstAtC(), Dimension.TEMPERATURE),
                     counted ? "" : "  headroom only");
         }
         if (anyEstimated) {
             line(o, "* estimated, typical-only or assumed value: see the warnings");
+        }
+        String legend = Figures.kindLegend(kinds);
+        if (!legend.isEmpty()) {
+            line(o, "%s", legend);
         }
         if (anyUncounted) {
             line(o, "headroom only: AC-coupled stage, the DC term does not count toward the error");

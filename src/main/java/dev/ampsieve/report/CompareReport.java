@@ -46,14 +46,16 @@ public final class CompareReport {
         Budget bb = c.b().budget();
         boolean anyMarked = false;
         boolean anyUnknown = false;
+        java.util.Set<dev.ampsieve.budget.TermKind> kinds = java.util.EnumSet.noneOf(dev.ampsieve.budget.TermKind.class);
         for (Comparison.TermDelta d : c.terms()) {
+            kinds.add(Figures.kindOf(d.key()));
             boolean ea = estimated(ba, d.key());
             boolean eb = estimated(bb, d.key());
             anyMarked |= ea || eb;
             // a figure the catalog lacks counts as 0 V: it must not win the row on that alone
             boolean winnerUnknown = d.better().equals("a") ? ea && d.aV() == 0 : d.better().equals("b") && eb && d.bV() == 0;
             anyUnknown |= winnerUnknown;
-            t.row(d.label(), Figures.volts(d.aV()) + (ea ? "*" : ""), Figures.volts(d.bV()) + (eb ? "*" : ""),
+            t.row(d.label() + Figures.kindTag(Figures.kindOf(d.key())), Figures.volts(d.aV()) + (ea ? "*" : ""), Figures.volts(d.bV()) + (eb ? "*" : ""),
                     winnerUnknown ? "unknown" : better(c, d.better()), winnerUnknown ? "" : by(d.differenceV(), d.ratio()));
         }
         total(t, c, "worst-case sum", ba.worstCaseV(), bb.worstCaseV());
@@ -66,6 +68,10 @@ public final class CompareReport {
             o.append("* estimated, typical-only or missing in the catalog ('budget PART' lists the warnings)")
                     .append(anyUnknown ? "; unknown: the smaller figure is 0 V only because the catalog lacks the value" : "")
                     .append('\n');
+        }
+        String legend = Figures.kindLegend(kinds);
+        if (!legend.isEmpty()) {
+            o.append(legend).append('\n');
         }
         o.append('\n');
         TextTable s = new TextTable().left("").right(a).right(b);
@@ -123,7 +129,7 @@ public final class CompareReport {
             return Figures.NONE;
         }
         TermResult t = b.term(b.limitingTerm());
-        return t == null ? b.limitingTerm() : t.label();
+        return t == null ? b.limitingTerm() : t.label() + Figures.kindTag(t.kind());
     }
 
     public static String json(Comparison c, String stageLabel) {
@@ -136,6 +142,7 @@ public final class CompareReport {
             ObjectNode n = terms.addObject();
             n.put("key", d.key());
             n.put("label", d.label());
+            n.put("kind", Figures.kindOf(d.key()).key());
             JsonSupport.put(n, "aV", d.aV());
             JsonSupport.put(n, "bV", d.bV());
             n.put("better", d.better().equals("=") ? "=" : better(c, d.better()));

@@ -13,6 +13,33 @@ final class Figures {
     private Figures() {
     }
 
+    /** After a term's label: where the term comes from ("" for the part's own figures). */
+    static String kindTag(dev.ampsieve.budget.TermKind k) {
+        return switch (k) {
+            case PART -> "";
+            case OPERATING_POINT -> " (op)";
+            case BOARD -> " (board)";
+        };
+    }
+
+    /** The kind of the term {@code key} ({@link dev.ampsieve.budget.TermKind#PART} for a key no term has). */
+    static dev.ampsieve.budget.TermKind kindOf(String key) {
+        return dev.ampsieve.budget.BudgetCalculator.TERMS.stream().filter(t -> t.key().equals(key))
+                .map(dev.ampsieve.budget.ErrorTerm::kind).findFirst().orElse(dev.ampsieve.budget.TermKind.PART);
+    }
+
+    /** The legend of the tags {@link #kindTag} puts on the terms of {@code kinds}, printed under a table that shows one. */
+    static String kindLegend(java.util.Collection<dev.ampsieve.budget.TermKind> kinds) {
+        java.util.List<String> out = new java.util.ArrayList<>();
+        if (kinds.contains(dev.ampsieve.budget.TermKind.OPERATING_POINT)) {
+            out.add("(op) operating-point term: where the part runs (its supply and common mode, die temperature, chopping)");
+        }
+        if (kinds.contains(dev.ampsieve.budget.TermKind.BOARD)) {
+            out.add("(board) board-level term: the board around the part");
+        }
+        return String.join("; ", out);
+    }
+
     static final String NONE = "-";
 
     static String q(Double v, Dimension d) {

@@ -48,7 +48,7 @@ public final class RankReport {
         }
         TermResult t = c.budget().term(key);
         // the engine names the largest term of the untrimmed budget
-        return (t == null ? key : t.label()) + (c.trimmed() ? " †" : "");
+        return (t == null ? key : t.label() + Figures.kindTag(t.kind())) + (c.trimmed() ? " †" : "");
     }
 
     /** Yield of the part as ranked: after the stage's trim when it needs one. */
@@ -125,6 +125,11 @@ public final class RankReport {
             o.append(r.stage().criterion().kind() == Criterion.Kind.YIELD
                     ? "margin: lower end of the yield's 95 % interval minus the target, in points of yield.\n"
                     : "margin: (limit - " + errorName(r) + ") / limit.  ").append("†: largest before the trim.  P: on the Pareto front.\n");
+            String legend = Figures.kindLegend(shown.stream().filter(c -> c.budget().limitingTerm() != null)
+                    .map(c -> Figures.kindOf(c.budget().limitingTerm())).toList());
+            if (!legend.isEmpty()) {
+                o.append(legend).append(".\n");
+            }
         }
         notCounted(o, r, shown);
         if (!frontList.isEmpty()) {
@@ -280,6 +285,8 @@ public final class RankReport {
             putYield(n, "trimmedYield", c.budget().trimmed().yield());
         }
         JsonSupport.put(n, "limitingTerm", c.budget().limitingTerm());
+        JsonSupport.put(n, "limitingKind", c.budget().limitingTerm() == null ? null
+                : Figures.kindOf(c.budget().limitingTerm()).key());
         n.put("trimmed", c.trimmed());
         if (c.budget().trimmed() != null) {
             JsonSupport.put(n, "trimmedWorstCaseV", c.budget().trimmed().worstCaseV());

@@ -26,6 +26,8 @@ public final class Uncounted {
             case NO_RESISTOR_TOLERANCE -> "no resistor-ratio tolerance";
             case NO_SERVICE_LIFE -> "no service-life";
             case NOT_IN_CATALOG -> "not in the catalog";
+            case NO_SUPPLY_VOLTAGE -> "no supply.voltage";
+            case NO_LOAD_RESISTANCE -> "no load-resistance";
             case AC_COUPLED -> "ac-coupled, headroom only";
         };
     }

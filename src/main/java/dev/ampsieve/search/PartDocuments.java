@@ -137,7 +137,11 @@ public final class PartDocuments {
             case "price.quantity" -> p.price() == null ? null : (double) p.price().quantity();
             // the catalog's own paths, as CatalogKeys reads them (headrooms signed, as typed)
             case "long-term-drift.value", "long-term-drift.per", "input-headroom.low", "input-headroom.high",
-                    "output-headroom.low", "output-headroom.high" -> CatalogKeys.value(p, name);
+                    "output-headroom.low", "output-headroom.high",
+                    "test-conditions.supply", "test-conditions.common-mode", "input-crossover.from-positive-rail",
+                    "input-crossover.offset-step" -> CatalogKeys.value(p, name);
+            case Schema.THETA_JA -> p.thetaJa();
+            case Schema.RIPPLE -> p.choppingRipple();
             default -> throw new IllegalArgumentException("no value for index field " + name);
         };
     }

@@ -26,7 +26,7 @@ public final class Schema {
      * Stored in each commit beside the catalog fingerprint; any change to the fields or to how
      * a value is derived must change it so that existing on-disk indexes rebuild.
      */
-    public static final String VERSION = "3";
+    public static final String VERSION = "4";
 
     // ------------------------------------------------------------ identity and words
 
@@ -121,6 +121,8 @@ public final class Schema {
     public static final String CHANNELS = "channels";
     public static final String FCHOP = "fchop";
     public static final String AGING = "aging";
+    public static final String THETA_JA = "theta-ja";
+    public static final String RIPPLE = "ripple";
 
     public static final List<Numeric> NUMERIC = List.of(
             new Numeric(VOS, Dimension.VOLTAGE, "offset voltage at 25 °C: the guaranteed maximum, else the typical"),
@@ -169,7 +171,16 @@ public final class Schema {
             new Numeric("input-headroom.high", Dimension.VOLTAGE, "how far below V+ the inputs must stay"),
             new Numeric("output-headroom.low", Dimension.VOLTAGE, "how close to V- the output swings"),
             new Numeric("output-headroom.high", Dimension.VOLTAGE, "how close to V+ the output swings"),
-            new Numeric("price.quantity", Dimension.NUMBER, "the quantity the price is given for"));
+            new Numeric("price.quantity", Dimension.NUMBER, "the quantity the price is given for"),
+            // operating point
+            new Numeric("test-conditions.supply", Dimension.VOLTAGE, "total supply of the datasheet's 25 °C table"),
+            new Numeric("test-conditions.common-mode", Dimension.VOLTAGE,
+                    "common mode of the datasheet's 25 °C table, above the negative rail"),
+            new Numeric("input-crossover.from-positive-rail", Dimension.VOLTAGE,
+                    "where a rail-to-rail input hands over between its pairs, below the positive rail"),
+            new Numeric("input-crossover.offset-step", Dimension.VOLTAGE, "the offset step at the input crossover"),
+            new Numeric(THETA_JA, Dimension.THERMAL_RESISTANCE, "junction-to-ambient thermal resistance"),
+            new Numeric(RIPPLE, Dimension.VOLTAGE, "input-referred chopping ripple at the chopping frequency"));
 
     // ------------------------------------------------------------ ranges (rated at a value)
 
@@ -222,6 +233,7 @@ public final class Schema {
         m.put("quiescent-current", IQ);
         m.put("input-capacitance", CIN);
         m.put("long-term-drift", AGING);
+        m.put("chopping-ripple", RIPPLE);
         return m;
     }
 

@@ -86,6 +86,12 @@ public final class Columns {
         u.put("chopping-frequency", "kHz");
         u.put("quiescent-current", "mA");
         u.put("input-capacitance", "pF");
+        u.put("test-conditions.supply", "V");
+        u.put("test-conditions.common-mode", "V");
+        u.put("input-crossover.from-positive-rail", "V");
+        u.put("input-crossover.offset-step", "uV");
+        u.put("theta-ja", "°C/W");
+        u.put("chopping-ripple", "uV");
         UNITS = Collections.unmodifiableMap(u);
 
         List<Column> all = new ArrayList<>();

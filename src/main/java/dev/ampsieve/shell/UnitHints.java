@@ -30,6 +30,7 @@ final class UnitHints {
             case RATIO -> List.of("%", "ppm");
             case RATIO_DRIFT -> List.of("ppm/C", "%/C");
             case TIME -> List.of("h", "d", "y");
+            case THERMAL_RESISTANCE -> List.of("C/W", "K/W");
             case NUMBER -> List.of();
         };
     }

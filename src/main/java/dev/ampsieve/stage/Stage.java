@@ -27,6 +27,9 @@ import dev.ampsieve.yaml.Located;
  * @param quantity          build quantity (for price)
  * @param maxPrice          price ceiling per unit, null for none
  * @param acCoupled         DC terms only count toward headroom, not toward the error
+ * @param loadResistance    resistance the output drives, returned to mid-supply (ohm); null: no load
+ *                          stated (self-heating not counted)
+ * @param sampleRate        rate of the converter that samples the output (Hz); null: none stated
  * @param board             board-level error sources (thermal EMF, leakage); {@link Board#NONE} when none is named
  * @param where             the file the stage came from (null when typed in)
  */
@@ -56,6 +59,8 @@ public record Stage(
         int quantity,
         Double maxPrice,
         boolean acCoupled,
+        Double loadResistance,
+        Double sampleRate,
         Board board,
         Located where) {
 
@@ -181,6 +186,8 @@ public record Stage(
         private int quantity;
         private Double maxPrice;
         private boolean acCoupled;
+        private Double loadResistance;
+        private Double sampleRate;
         private Board board;
         private Located where;
 
@@ -210,6 +217,8 @@ public record Stage(
             quantity = s.quantity;
             maxPrice = s.maxPrice;
             acCoupled = s.acCoupled;
+            loadResistance = s.loadResistance;
+            sampleRate = s.sampleRate;
             board = s.board;
             where = s.where;
         }
@@ -356,6 +365,16 @@ public record Stage(
             return this;
         }
 
+        public Builder loadResistance(Double loadResistance) {
+            this.loadResistance = loadResistance;
+            return this;
+        }
+
+        public Builder sampleRate(Double sampleRate) {
+            this.sampleRate = sampleRate;
+            return this;
+        }
+
         public Builder where(Located where) {
             this.where = where;
             return this;
@@ -365,7 +384,7 @@ public record Stage(
             return new Stage(network, tMin, tMax, supplyVoltage,
                     supplyVariation, commonModeSwing, commonModeRange, outputRange, bandLow, bandHigh, filterOrder,
                     fullScaleOutput, ratioTolerance, ratioTempco, serviceLife, limit, criterion, maxToSigma, trials,
-                    maxTrials, seed, trim, quantity, maxPrice, acCoupled, board, where);
+                    maxTrials, seed, trim, quantity, maxPrice, acCoupled, loadResistance, sampleRate, board, where);
         }
     }
 }

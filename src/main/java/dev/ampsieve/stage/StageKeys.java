@@ -245,7 +245,14 @@ public final class StageKeys {
                     "build quantity, for totals over the build (prices stay the catalog's, at their stated quantity)"),
             k("max-price", Kind.NUMBER, List.of(), "none", "5.00", "ceiling on the part's catalog price per unit (trim cost not included); dearer parts are excluded"),
             k("ac-coupled", Kind.BOOLEAN, List.of(), "false", "false",
-                    "when true, DC errors count only toward output headroom, not toward the error"));
+                    "when true, DC errors count only toward output headroom, not toward the error"),
+            // operating point
+            q("load-resistance", Dimension.RESISTANCE, "none (self-heating not counted)", "2 kohm",
+                    "the resistance the output drives, returned to mid-supply: with the quiescent current it heats the "
+                            + "die (theta-ja), and drift and FET bias currents are read at the die's temperature"),
+            q("sample-rate", Dimension.FREQUENCY, "none (aliases not checked)", "30 kHz",
+                    "the rate of the converter sampling the output: a chopping frequency or harmonic that folds into the "
+                            + "band is named"));
 
     private static final Map<String, Key> BY_PATH = ORDERED.stream()
             .collect(Collectors.toUnmodifiableMap(Key::path, Function.identity()));

@@ -105,6 +105,8 @@ public final class StageLoader {
     static final double MAX_SHUNT = 1e15;
     /** Largest capacitance at a transimpedance input or in its feedback. */
     static final double MAX_CAPACITANCE = 1e-6;
+    /** Below this load an op amp's output is shorted (common practice: precision outputs drive 1 to 10 kohm, power ones some ohms). */
+    static final double MIN_LOAD = 1.0;
 
     /**
      * z of the two-sided 95 % interval the yield is reported with: the normal quantile at 0.975,
@@ -325,12 +327,32 @@ public final class StageLoader {
             money(m, "", "max-price", maxPrice);
             Boolean ac = f.bool(m, "", "ac-coupled");
             Board board = board(m, network.topology());
+            // operating point: the output's load (self-heating) and the converter sampling the output (aliases)
+            Double loadResistance = positive(m, "", "load-resistance", Dimension.RESISTANCE);
+            if (loadResistance != null && loadResistance < MIN_LOAD) {
+                f.error(Fields.where(m, "load-resistance"), "load-resistance", Units.format(loadResistance, Dimension.RESISTANCE)
+                        + " is below " + Units.format(MIN_LOAD, Dimension.RESISTANCE) + ", a short for an op amp's output",
+                        "write the resistance the output drives, such as '2 kohm'; leave the key out for no load");
+                loadResistance = null;
+            } else if (loadResistance != null && loadResistance > MAX_RESISTANCE) {
+                f.error(Fields.where(m, "load-resistance"), "load-resistance", Units.format(loadResistance, Dimension.RESISTANCE)
+                        + " is above " + Units.format(MAX_RESISTANCE, Dimension.RESISTANCE) + ", no load at all",
+                        "leave the key out when the output drives no load");
+                loadResistance = null;
+            }
+            Double sampleRate = positive(m, "", "sample-rate", Dimension.FREQUENCY);
+            if (sampleRate != null && sampleRate > MAX_FREQUENCY) {
+                f.error(Fields.where(m, "sample-rate"), "sample-rate", Units.format(sampleRate, Dimension.FREQUENCY) + " is above "
+                        + Units.format(MAX_FREQUENCY, Dimension.FREQUENCY) + ", faster than any converter samples",
+                        "check the prefix (Hz, kHz, MHz); write the converter's sample rate, such as '30 kHz'");
+                sampleRate = null;
+            }
 
             Stage stage = new Stage(network, tMin, tMax, supplyVoltage, supplyVariation, commonModeSwing,
                     cmRange, outRange, bandLow, bandHigh, filterOrder, fullScale, tolerance, tempco, life, limit, criterion, maxToSigma,
                     n, cap, seed != null ? seed : StageKeys.DEFAULT_SEED, trim,
-                    quantity != null ? quantity : StageKeys.DEFAULT_QUANTITY, maxPrice, ac != null && ac, board,
-                    m.at());
+                    quantity != null ? quantity : StageKeys.DEFAULT_QUANTITY, maxPrice, ac != null && ac,
+                    loadResistance, sampleRate, board, m.at());
             if (limit != null && !f.hasErrors()) {
                 limitSize(m, stage);
             }

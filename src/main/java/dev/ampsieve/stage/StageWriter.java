@@ -295,6 +295,13 @@ public final class StageWriter {
             a.put("leakage.voltage", exact(b.leakageVoltage(), Dimension.VOLTAGE));
             a.put("leakage.input", b.leakageInput().key());
         }
+        // operating point: written only when stated (absent: not counted)
+        if (s.loadResistance() != null) {
+            a.put("load-resistance", exact(s.loadResistance(), Dimension.RESISTANCE));
+        }
+        if (s.sampleRate() != null) {
+            a.put("sample-rate", exact(s.sampleRate(), Dimension.FREQUENCY));
+        }
         return a;
     }
 

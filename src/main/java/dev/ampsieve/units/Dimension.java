@@ -20,6 +20,8 @@ public enum Dimension {
     RATIO("a ratio", "", "0.1 %"),
     RATIO_DRIFT("a temperature coefficient", "/°C", "25 ppm/C"),
     TIME("a time", "s", "1000 h"),
+    /** Junction-to-ambient thermal resistance, °C per watt (kelvin per watt: the same size). */
+    THERMAL_RESISTANCE("a thermal resistance", "°C/W", "150 C/W"),
     NUMBER("a plain number", "", "100");
 
     private final String noun;

@@ -62,7 +62,7 @@ public final class Units {
 
     /** Base unit symbols (numerator side) and what they measure. */
     private enum Base {
-        VOLT, AMPERE, OHM, FARAD, HERTZ, DECIBEL, CELSIUS, KELVIN, PERCENT, PPM, SECOND, HOUR, YEAR, MONTH, DAY, NONE, ROOT_HERTZ
+        VOLT, AMPERE, OHM, FARAD, HERTZ, DECIBEL, CELSIUS, KELVIN, PERCENT, PPM, SECOND, HOUR, YEAR, MONTH, DAY, NONE, ROOT_HERTZ, WATT
     }
 
     private record Unit(Base base, double factor) {
@@ -98,6 +98,7 @@ public final class Units {
         BASES.put("months", Base.MONTH);
         BASES.put("d", Base.DAY);
         BASES.put("days", Base.DAY);
+        BASES.put("W", Base.WATT); // only under a degree, for a thermal resistance (°C/W)
         for (String s : new String[] {"rtHz", "√Hz", "sqrt(Hz)", "sqrtHz", "Hz^0.5", "Hz^(1/2)", "rthz"}) {
             BASES.put(s, Base.ROOT_HERTZ);
         }
@@ -352,6 +353,9 @@ public final class Units {
                 default -> null;
             };
         }
+        if (den == Base.WATT && (num == Base.CELSIUS || num == Base.KELVIN)) {
+            return Dimension.THERMAL_RESISTANCE;
+        }
         if (den == Base.SECOND && num == Base.VOLT) {
             return Dimension.SLEW_RATE;
         }
@@ -393,6 +397,7 @@ public final class Units {
             // datasheets quote V/µs; a tiny requirement (a slow stage) reads better in V/s or mV/µs
             case SLEW_RATE -> Math.abs(si) >= 1e4 || si == 0 ? sig(si * 1e-6, digits) + " V/µs" : engineering(si, digits) + "V/s";
             case RESISTANCE -> engineering(si, digits) + "Ω";
+            case THERMAL_RESISTANCE -> trim(sig(si, digits)) + " °C/W"; // no prefix: a few to a few hundred
             default -> engineering(si, digits) + d.symbol();
         };
     }

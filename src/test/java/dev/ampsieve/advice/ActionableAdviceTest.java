@@ -57,7 +57,7 @@ class ActionableAdviceTest {
         // follower (Rf 0), Rs 10 MΩ, 0..70 °C, limit 1 mV, no gain terms (no full scale), no supply or
         // common-mode change, no service life: what is left is offset, drift, bias and the resistor noise
         Stage s = new Stage(new Follower(0, 10e6, 0), 0, 70, 5.0, 0, 0, null, null, 0.1, 10, 1, null, 0, 0, 0,
-                Limit.output(1e-3), Criterion.WORST_CASE, 3, 2000, 2000, 1L, Trim.NONE, 1000, null, false, Board.NONE, null);
+                Limit.output(1e-3), Criterion.WORST_CASE, 3, 2000, 2000, 1L, Trim.NONE, 1000, null, false, null, null, Board.NONE, null);
         // bipolar: vos 100 µV, drift 1 µV/°C, IB 2 nA at 25 °C and 4 nA over temperature, IOS 1 nA; no noise of its own
         Part base = part("BIP").vos(null, 100e-6).drift(null, 1e-6).ios(null, 1e-9).noise(0.0, 0.0, 0.0, 0.0).build();
         Part p = PartEdit.copy(base, base.vos(), base.vosDrift(), new Spread(null, 2e-9, 4e-9), base.ios());
@@ -94,7 +94,7 @@ class ActionableAdviceTest {
         // change, no gain terms (no full scale), no service life: the budget is offset + drift alone,
         // vos + drift x 45 °C (0..70 °C), against 100 µV
         Stage s = new Stage(new Follower(0, 0, 0), 0, 70, 5.0, 0, 0, null, null, 0.1, 10, 1, null, 0, 0, 0,
-                Limit.output(100e-6), Criterion.WORST_CASE, 3, 2000, 2000, 1L, Trim.NONE, 1000, null, false, Board.NONE, null);
+                Limit.output(100e-6), Criterion.WORST_CASE, 3, 2000, 2000, 1L, Trim.NONE, 1000, null, false, null, null, Board.NONE, null);
         Part p = part("P").vos(null, 80e-6).drift(null, 0.51e-6).ib(null, 1e-9).noise(0.0, 0.0, 0.0, 0.0).build();
         BudgetFunction engine = BudgetCalculator::compute;
         Ranking r = Ranker.rank(s, List.of(p), engine);
@@ -248,7 +248,7 @@ class ActionableAdviceTest {
         Stage old = new Stage(s.network().withSourceResistance(400), s.tMin(), s.tMax(), s.supplyVoltage(),
                 s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(), s.bandLow(), s.bandHigh(),
                 s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(), s.limit(),
-                s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(), s.acCoupled(), Board.NONE, null);
+                s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(), s.acCoupled(), null, null, Board.NONE, null);
         assertTrue(fits(engine, old, p));
         assertEquals(2.0 * (20.0 / 1.4) / 10.0, StageEdit.withSourceResistance(s, 400).fullScaleOutput(), 1e-12);
         Ranking r = Ranker.rank(s, List.of(p), engine);

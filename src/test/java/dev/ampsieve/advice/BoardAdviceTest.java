@@ -32,7 +32,7 @@ class BoardAdviceTest {
         p.vos = new Spread(null, 1e-6, null);
         Ranking r = Ranker.rank(s, List.of(p.build()), BudgetCalculator::compute);
         assertTrue(r.advice().lines().stream().anyMatch(l -> l.startsWith("Its largest term comes from the board, not the part:"
-                + " thermal EMF (board), 800 µV at the output (80 % of the limit)")), r.advice().lines().toString());
+                + " thermal EMF, 800 µV at the output (80 % of the limit)")), r.advice().lines().toString());
     }
 
     @Test

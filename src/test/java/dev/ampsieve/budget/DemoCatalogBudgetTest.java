@@ -61,7 +61,7 @@ class DemoCatalogBudgetTest {
             for (Part p : c.parts()) {
                 Budget b = BudgetCalculator.compute(s, p);
                 String what = p.id() + " in " + s.topology();
-                assertEquals(10, b.terms().size(), what); // the part's ten; these stages name no board-level source
+                assertEquals(14, b.terms().size(), what); // ten of the part, four of its operating point
                 assertTrue(Double.isFinite(b.worstCaseV()) && Double.isFinite(b.rssV()), what);
                 assertTrue(b.terms().stream().allMatch(t -> t.outputV() >= 0 && Double.isFinite(t.outputV())), what);
                 assertTrue(b.yield().low() <= b.yield().value() && b.yield().value() <= b.yield().high(), what);

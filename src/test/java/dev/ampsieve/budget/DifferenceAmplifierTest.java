@@ -33,12 +33,13 @@ class DifferenceAmplifierTest {
     private static Stage stage(double swing, Range cmRange, Double supply, double tol, double tc, double tMin, double tMax,
             Trim trim) {
         return new Stage(new Difference(10e3, 100e3, 10e3, 100e3, 0, 0), tMin, tMax, supply, 0, swing, cmRange, null, 0.1, 10, 1,
-                1.0, tol, tc, 0, Limit.output(10e-3), Criterion.WORST_CASE, 3, 2000, 2000, 1, trim, 1000, null, false, Board.NONE, null);
+                1.0, tol, tc, 0, Limit.output(10e-3), Criterion.WORST_CASE, 3, 2000, 2000, 1, trim, 1000, null, false, null, null, Board.NONE, null);
     }
 
     /** An otherwise ideal part with a CMRR of {@code db}. */
     private static Part partWithCmrr(double db) {
         PartFixture p = PartFixture.ideal();
+        p.testConditions = new dev.ampsieve.catalog.TestConditions(5.0, 2.5); // the stages' own: no operating-point move
         p.cmrr = new MinTyp(db, null);
         return p.build();
     }

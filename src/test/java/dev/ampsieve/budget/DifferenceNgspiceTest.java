@@ -52,7 +52,7 @@ class DifferenceNgspiceTest {
         /** The stage, with a first-order filter at f2 (so NoiseTerm's band edge is (π/2) f2) and 25 °C resistors. */
         Stage stage() {
             return new Stage(network(), 25, 25, null, 0, 0, null, null, f1, f2, 1, null, 0, 0, 0, Limit.output(1e-3),
-                    Criterion.WORST_CASE, 3, 20_000, 1_000_000, 1, Trim.NONE, 1000, null, false, Board.NONE, null);
+                    Criterion.WORST_CASE, 3, 20_000, 1_000_000, 1, Trim.NONE, 1000, null, false, null, null, Board.NONE, null);
         }
     }
 

@@ -77,17 +77,28 @@ class HandCheckedBudgetTest {
         near(25.27119e-6, b.noiseRmsV(), "noise rms");
         near(83.39492e-6, b.term("noise").outputV(), "noise allowance");
         // totals: worst-case sum; RSS (GUM eq. 10 for the root-sum-square)
-        // 2.0 + 0.45 + 2.262742 + 0.031623 + 0.158114 + 0.888824 + 0.000001 + 3.606875 + 1.324085 + 0.083395 mV
-        near(10.806213e-3, b.worstCaseV(), "worst-case");
-        // sqrt(4.811965^2 + 1.324085^2) mV: the total without aging plus the estimate
-        near(4.990812e-3, b.rssV(), "rss");
+        // 11. operating point: the table at 5 V, common mode 2.5 V (mid-supply); the stage's pins at 1.2..1.3 V,
+        //     centre 1.25 V, 1.25 V below mid-supply; same supply: NG x 1.25 V x 10^(-110/20) = 200 x 1.25 x 3.162278 µV/V
+        near(790.5694e-6, b.term("operating-point").outputV(), "operating point");
+        // 12. chopping ripple 1 µV at 12 kHz: |NG(f)| = 200/sqrt(1 + (12 kHz x 200/1.5 MHz)^2) = 200/sqrt(3.56) = 105.99979;
+        //     first-order filter at 5 Hz: 1/sqrt(1 + 2400^2) = 4.166666e-4; 1 µV x 105.99979 x 4.166666e-4 = 44.16657 nV
+        near(44.16657e-9, b.term("chopping-ripple").outputV(), "chopping ripple");
+        // 13, 14: the common mode stays far below the assumed crossover (3.0..4.5 V); no load: no self-heating
+        assertEquals(0.0, b.term("input-crossover").outputV(), 0.0);
+        assertEquals(0.0, b.term("self-heating").outputV(), 0.0);
+        // 2.0 + 0.45 + 2.262742 + 0.031623 + 0.158114 + 0.888824 + 0.000001 + 3.606875 + 1.324085 + 0.083395
+        //   + 0.790569 + 0.000044 mV
+        near(11.596827e-3, b.worstCaseV(), "worst-case");
+        // sqrt(4.811965^2 + 1.324085^2 + 0.790569^2 + 0.000044^2) mV
+        near(5.053039e-3, b.rssV(), "rss");
         // two-point calibration at 25 °C (the stage's): removes offset, the open-loop gain and the resistor
         // tolerance. What it leaves of the bias term is bounded by the datasheet (error-model.md term 3): a CMOS
         // input's IB and IOS may change sign, so each changes by up to its 70 °C value plus its 25 °C one:
         // 180 k x (5.656854 + 0.25) nA + 110 k x (11.313708 + 0.5) nA = 1.063234 + 1.299508 = 2.362742 mV.
         // Keeps the rest and adds the 1 mV resolution:
         // 0.45 + 2.362742 + 0.031623 + 0.158114 + 0.000556 (bandwidth) + 1.119375 + 0.083395 + 1.0 + 1.324085 mV
-        near(6.529889e-3, b.trimmed().worstCaseV(), "after the two-point trim");
+        //   + 0.000044 (the ripple; the trim removes the operating point's move)
+        near(6.529933e-3, b.trimmed().worstCaseV(), "after the two-point trim");
         assertEquals(Verdict.FITS_AFTER_TRIM, b.verdict());
     }
 
@@ -140,8 +151,16 @@ class HandCheckedBudgetTest {
         near(7.394808e-6, b.noiseRmsV(), "noise rms");
         // worst case: 2.440295 + 1.903430 + 1.497 + 0.497993 + 0.024403 + 0.048919 + 0.000476 + 1.65 + 0.822518
         //   + 3.3 x 0.007394808 = 8.909439 mV; RSS of the same ten: 3.933156 mV
-        near(8.909439e-3, b.worstCaseV(), "worst-case");
-        near(3.933156e-3, b.rssV(), "rss");
+        // operating point: the table at 30 V, common mode 15 V (mid-supply); the stage at 5 V, the pins centred at
+        // mid-supply (2.5 + (2.5 - 2.5) x share): NG x 25 V x 10^(-120/20) = 97.611810 x 25 µV = 2.440295 mV
+        near(2.440295e-3, b.term("operating-point").outputV(), "operating point");
+        // one input pair (headroom 1 V), no load, no chopping: the other three are 0 V
+        for (String k : java.util.List.of("input-crossover", "self-heating", "chopping-ripple")) {
+            assertEquals(0.0, b.term(k).outputV(), 0.0, k);
+        }
+        // 8.909439 + 2.440295 = 11.349734 mV; RSS sqrt(3.933156^2 + 2.440295^2) = 4.628688 mV
+        near(11.349734e-3, b.worstCaseV(), "worst-case");
+        near(4.628688e-3, b.rssV(), "rss");
     }
 
     @Test
@@ -176,9 +195,18 @@ class HandCheckedBudgetTest {
         // = 4.187123 µV (common practice, budget/Assumed)
         near(4.187123e-6, b.term("aging").outputV(), "aging (estimated)");
         // 10 + 1.25 + 0.244664 + 3.556559 + 0.4445699 + 1.999998 + 15.99981 + 3.3 x 14.50443 + 4.187123 µV
-        near(85.54734e-6, b.worstCaseV(), "worst-case");
+        // operating point: the table at 5 V, 2.5 V; the pins at 0.05..4.05 V, centre 2.05 V, 0.45 V below mid-supply:
+        //   0.45 V x 10^(-115/20) = 0.45 x 1.778279 µV = 800.2257 nV
+        near(800.2257e-9, b.term("operating-point").outputV(), "operating point");
+        // ripple 2 µV at 200 kHz, no filter (none): 2 µV / sqrt(1 + (200 kHz / 5 MHz)^2) = 1.998402 µV
+        near(1.998402e-6, b.term("chopping-ripple").outputV(), "chopping ripple");
+        // crossover 1.3 V below V+ (3.7 V, inside 0.05..4.05 V) with a 0 V step: nothing
+        assertEquals(0.0, b.term("input-crossover").outputV(), 0.0);
+        //   + 0.800226 + 1.998402 µV = 88.34597 µV
+        near(88.34597e-6, b.worstCaseV(), "worst-case");
         // root of the sum of the squares of the same nine terms
-        near(51.79785e-6, b.rssV(), "rss");
+        // sqrt(51.79785^2 + 0.800226^2 + 1.998402^2) µV
+        near(51.84256e-6, b.rssV(), "rss");
         assertEquals(Verdict.FITS, b.verdict(), "RSS criterion: 51.8 µV of 125 µV");
     }
 }

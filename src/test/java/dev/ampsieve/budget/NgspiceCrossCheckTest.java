@@ -64,7 +64,7 @@ class NgspiceCrossCheckTest {
 
         Stage stage() {
             return new Stage(Networks.of(topology, rf, rg, rs, rp), 0, 70, null, 0, 0, null, null, f1, f2, 1, null, 0, 0, 0,
-                    Limit.output(1e-3), Criterion.WORST_CASE, 3, 20_000, 1_000_000, 1, Trim.NONE, 1000, null, false, Board.NONE, null);
+                    Limit.output(1e-3), Criterion.WORST_CASE, 3, 20_000, 1_000_000, 1, Trim.NONE, 1000, null, false, null, null, Board.NONE, null);
         }
 
         /** Noise gain from the resistors, written out here rather than taken from Stage. */
@@ -306,7 +306,7 @@ class NgspiceCrossCheckTest {
 
     private static Stage stageAt(Combo c, double t1, double t2, Trim trim) {
         return new Stage(Networks.of(c.topology(), c.rf(), c.rg(), c.rs(), c.rp()), t1, t2, null, 0, 0, null, null, c.f1(), c.f2(), 1, null,
-                0, 0, 0, Limit.output(1), Criterion.WORST_CASE, 3, 20_000, 1_000_000, 1, trim, 1000, null, false, Board.NONE, null);
+                0, 0, 0, Limit.output(1), Criterion.WORST_CASE, 3, 20_000, 1_000_000, 1, trim, 1000, null, false, null, null, Board.NONE, null);
     }
 
     /** Largest |v(out)| ngspice gives with IB and IOS of either sign (vos 0), corrected for the finite gain. */

@@ -45,7 +45,7 @@ class TransimpedanceNgspiceTest {
 
     private static Stage stage(double fLow, double fHigh) {
         return new Stage(new Transimpedance(RF, CF, RSH, CS, RP), 0, 25, null, 0, 0, null, null, fLow, fHigh, 0, 1.0, 0, 0, 0,
-                Limit.output(1e-3), Criterion.WORST_CASE, 3, 20_000, 1_000_000, 1, Trim.NONE, 1000, null, false, Board.NONE, null);
+                Limit.output(1e-3), Criterion.WORST_CASE, 3, 20_000, 1_000_000, 1, Trim.NONE, 1000, null, false, null, null, Board.NONE, null);
     }
 
     private static Part part() {

@@ -116,6 +116,13 @@ class CatalogBoundsTest {
         "chopping-frequency       | 1 THz        | 1.00 THz is above 100 GHz",
         "quiescent-current        | 200 A        | 200 A is above 100 A",
         "input-capacitance        | 1 uF         | 1.00 µF is above 100 nF",
+        "test-conditions.supply   | 3 kV         | 3.00 kV is above 2.00 kV",
+        "test-conditions.common-mode | 2.5 kV    | 2.50 kV is above 2.00 kV",
+        "input-crossover.from-positive-rail | 3 kV | 3.00 kV is above 2.00 kV",
+        "input-crossover.offset-step | 2 V       | 2.00 V is above 1.00 V",
+        "theta-ja                 | 6000 C/W     | 6000 °C/W is above 5000 °C/W",
+        "theta-ja                 | 0.2 K/W      | 0.2 °C/W is below 0.5 °C/W",
+        "chopping-ripple          | 1.5 V        | 1.50 V is above 1.00 V",
         "vos.max                  | 1e308 V      | 1.00e+308 V is above 1.00 V"})
     void aValueNoOpAmpHasIsAnErrorWithItsPlaceAndFix(String path, String value, String message) throws Exception {
         Object[] r = replaced(path, value);

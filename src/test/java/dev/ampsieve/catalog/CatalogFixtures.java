@@ -112,6 +112,14 @@ final class CatalogFixtures {
             chopping-frequency: 150 kHz
             quiescent-current: 1.8 mA
             input-capacitance: 7 pF
+            test-conditions:
+              supply: 30 V
+              common-mode: 15 V
+            input-crossover:
+              from-positive-rail: 1.2 V
+              offset-step: 40 uV
+            theta-ja: 160 C/W
+            chopping-ripple: 3 uV
             source: invented for tests
             notes: nothing real
             """;

@@ -27,11 +27,16 @@ class PartTemplateTest {
                 keys.add(m.group(1));
             }
         }
-        // chopping-frequency is shown commented out (it belongs to chopper and auto-zero parts only)
+        // chopping-frequency and chopping-ripple are shown commented out (chopper and auto-zero parts only),
+        // input-crossover too (rail-to-rail inputs only)
         List<String> expected = new ArrayList<>(CatalogKeys.PART_KEYS);
         expected.remove(CatalogKeys.CHOPPING_FREQUENCY);
+        expected.remove(CatalogKeys.CHOPPING_RIPPLE);
+        expected.remove(CatalogKeys.INPUT_CROSSOVER);
         assertEquals(expected, keys);
         assertTrue(PartTemplate.text().contains("\n# chopping-frequency: "));
+        assertTrue(PartTemplate.text().contains("\n# chopping-ripple: "));
+        assertTrue(PartTemplate.text().contains("\n# input-crossover:\n#   from-positive-rail: "));
     }
 
     @Test

@@ -56,7 +56,7 @@ class HelpCommandTest {
         for (String name : Schema.queryNames()) {
             assertTrue(r.outLines().stream().anyMatch(l -> l.startsWith(name + " ")), name);
         }
-        assertTrue(r.out().contains("null-pins              word          offset null pins brought out (true, false)"), r.out());
+        assertTrue(r.out().contains("null-pins                           word          offset null pins brought out (true, false)"), r.out());
     }
 
     @Test

@@ -41,7 +41,16 @@ class BudgetReportTest {
         List<String> keys = new ArrayList<>();
         j.get("terms").forEach(t -> keys.add(t.get("key").asText()));
         assertEquals(List.of("offset", "drift", "bias", "cmrr", "psrr", "open-loop-gain", "bandwidth", "resistors",
-                "aging", "noise").stream().sorted().toList(), keys.stream().sorted().toList());
+                "aging", "noise", "operating-point", "input-crossover", "self-heating", "chopping-ripple").stream().sorted().toList(),
+                keys.stream().sorted().toList());
+        // each term says where it comes from: the part's own figures, or where the part runs
+        java.util.Map<String, String> kinds = new java.util.HashMap<>();
+        j.get("terms").forEach(t -> kinds.put(t.get("key").asText(), t.get("kind").asText()));
+        assertEquals("part", kinds.get("offset"));
+        assertEquals("part", kinds.get("noise"));
+        for (String k : List.of("operating-point", "input-crossover", "self-heating", "chopping-ripple")) {
+            assertEquals("operating-point", kinds.get(k), k);
+        }
         JsonNode offset = j.get("terms").get(0);
         assertEquals("offset", offset.get("key").asText()); // largest first
         assertEquals(10e-3, offset.get("outputV").asDouble(), 1e-15);

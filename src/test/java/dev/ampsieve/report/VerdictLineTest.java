@@ -33,7 +33,8 @@ class VerdictLineTest {
     /** Every term the bare stage leaves out, grouped by cause, full scale first (NotCounted.Reason order). */
     private static final String LEFT_OUT = "open-loop gain, closed-loop bandwidth and resistor ratio not counted: "
             + "no full-scale-output; supply rejection not counted: no supply.variation; common-mode rejection not "
-            + "counted: no common-mode-swing; long-term drift not counted: no service-life";
+            + "counted: no common-mode-swing; long-term drift not counted: no service-life; operating point not counted: "
+            + "no supply.voltage; self-heating not counted: no load-resistance";
 
     // FIT by hand, NG 10: offset 10 x 10 uV = 0.1 mV; drift estimated 10 uV / 298 K x 45 °C x 10 = 15 uV;
     // bias 10 kohm x 1 nA = 10 uV, ios assumed = ib: 10 kohm x 1 nA / 2 = 5 uV; noise well under 0.5 mV: fits 1 mV
@@ -63,7 +64,8 @@ class VerdictLineTest {
         j.get("notCounted").forEach(n -> pairs.add(n.get("term").asText() + "/" + n.get("reason").asText()));
         // in the order of the terms (error-model.md)
         assertEquals(List.of("cmrr/no-common-mode-swing", "psrr/no-supply-variation", "open-loop-gain/no-full-scale-output",
-                "bandwidth/no-full-scale-output", "resistors/no-full-scale-output", "aging/no-service-life"), pairs);
+                "bandwidth/no-full-scale-output", "resistors/no-full-scale-output", "aging/no-service-life",
+                "operating-point/no-supply-voltage", "self-heating/no-load-resistance"), pairs);
     }
 
     @Test
@@ -71,7 +73,7 @@ class VerdictLineTest {
         Part aging = part("AGED").price(2.00).vos(null, 10e-6).ib(null, 1e-9).noise(10e-9, 10.0, 1e-12, 100.0)
                 .aging(5e-6, 1000 * 3600.0).build();
         Budget b = BudgetCalculator.compute(stage(BARE + "full-scale-output: 1 V\nsupply: {voltage: 10 V, variation: 0.5 V}\n"
-                + "resistor-ratio: {tolerance: 0.1 %}\nservice-life: 1 y\n"), aging);
+                + "resistor-ratio: {tolerance: 0.1 %}\nservice-life: 1 y\nload-resistance: 10 kohm\n"), aging);
         assertTrue(!BudgetText.render(b, "s.yaml").contains("not counted:"));
         assertEquals(0, new ObjectMapper().readTree(BudgetJson.render(b, "s.yaml")).get("notCounted").size());
     }
@@ -81,9 +83,9 @@ class VerdictLineTest {
         Sufficiency s = Sufficiency.of(BudgetCalculator.compute(stage(BARE), FIT));
         String text = SufficesReport.text(s, "s.yaml");
         assertTrue(Flat.of(text).contains("But " + LEFT_OUT), text);
-        assertTrue(Flat.of(text).contains("verdict fits; 6 terms not counted (named above)"), text);
+        assertTrue(Flat.of(text).contains("verdict fits; 8 terms not counted (named above)"), text);
         JsonNode j = new ObjectMapper().readTree(SufficesReport.json(s, "s.yaml"));
-        assertEquals(6, j.get("notCounted").size());
+        assertEquals(8, j.get("notCounted").size());
     }
 
     @Test
@@ -96,8 +98,8 @@ class VerdictLineTest {
         assertTrue(!flat.contains("Verdict of NOEN:"), flat);
         assertTrue(!flat.contains("Verdict of FIT:"), flat);
         JsonNode j = new ObjectMapper().readTree(CompareReport.json(c, "s.yaml"));
-        assertEquals(6, j.get("b").get("notCounted").size());
-        assertEquals(6, j.get("a").get("notCounted").size());
+        assertEquals(8, j.get("b").get("notCounted").size());
+        assertEquals(8, j.get("a").get("notCounted").size());
     }
 
     @Test
@@ -116,7 +118,7 @@ class VerdictLineTest {
         ObjectMapper m = new ObjectMapper();
         assertEquals("[\"FIT\"]", m.readTree(RankReport.json(r, "s.yaml", null, 15)).get("pareto").toString());
         assertEquals("[\"CHEAP\",\"FIT\"]", m.readTree(RankReport.json(r, "s.yaml", null, 15, true)).get("pareto").toString());
-        assertEquals(6, m.readTree(RankReport.json(r, "s.yaml", null, 15)).get("candidates").get(0).get("notCounted").size());
+        assertEquals(8, m.readTree(RankReport.json(r, "s.yaml", null, 15)).get("candidates").get(0).get("notCounted").size());
     }
 
     @Test

@@ -21,7 +21,8 @@ class PartDocumentsTest {
                 .cmrr(96.0, 112.0).psrr(92.0, 108.0).aol(118.0, 130.0).gbw(3.5e6).slew(1.7e6)
                 .noise(11e-9, 7.0, 2e-15, 40.0).supply(2.7, 5.5).temperature(-40, 125).price(1.85).iq(0.9e-3)
                 .channels(2).fchop(150e3).aging(2e-6, 4000 * 3600.0).inputHeadroom(-0.1, 1.5).outputHeadroom(0.05, 0.08)
-                .inputCapacitance(7.5e-12).build();
+                .inputCapacitance(7.5e-12).testConditions(30.0, 15.0).crossover(1.2, 40e-6).thetaJa(160.0)
+                .choppingRipple(3e-6).build();
         java.util.Map<String, Double> expected = new java.util.HashMap<>();
         expected.put(Schema.VOS, 8e-6);
         expected.put("vos.typ", 3e-6);
@@ -70,6 +71,12 @@ class PartDocumentsTest {
         expected.put("output-headroom.low", 0.05);
         expected.put("output-headroom.high", 0.08);
         expected.put(Schema.CIN, 7.5e-12);
+        expected.put("test-conditions.supply", 30.0);
+        expected.put("test-conditions.common-mode", 15.0);
+        expected.put("input-crossover.from-positive-rail", 1.2);
+        expected.put("input-crossover.offset-step", 40e-6);
+        expected.put(Schema.THETA_JA, 160.0);
+        expected.put(Schema.RIPPLE, 3e-6);
         java.util.List<String> names = new java.util.ArrayList<>();
         Schema.NUMERIC.forEach(n -> names.add(n.name()));
         Schema.INTERVALS.forEach(i -> names.addAll(java.util.List.of(i.min(), i.max())));

@@ -27,8 +27,8 @@ class GuidedEntryTest {
                 "save " + file);
 
         // topology, 6 first questions and 14 more (Questions.order); the 2 ranges join once a supply is given
-        assertTrue(printed.contains("[2/21] gain"), printed);
-        assertTrue(printed.contains("[8/23] output-range"), printed);
+        assertTrue(printed.contains("[2/23] gain"), printed);
+        assertTrue(printed.contains("[8/25] output-range"), printed);
         assertTrue(printed.contains("gain [required] >"), printed);
         assertTrue(printed.contains("temperature [0..70 C] >"), printed);
         assertTrue(printed.contains("output-range [mid-supply +/- full-scale-output] >"), printed);
@@ -158,8 +158,8 @@ class GuidedEntryTest {
         }
         // the temperature reason is longer than a line: it hangs under itself after the key
         String why = Questions.why(Answers.TEMPERATURE);
-        assertTrue(why.length() > 80 - "[3/21] temperature  ".length(), why); // the check below means something
-        assertTrue(flat.contains("[3/21] temperature  drift and FET bias currents"), printed);
+        assertTrue(why.length() > 80 - "[3/23] temperature  ".length(), why); // the check below means something
+        assertTrue(flat.contains("[3/23] temperature  drift and FET bias currents"), printed);
         assertTrue(flat.matches("(?s).*\\n {20}\\S.*"), printed); // a continuation under the reason's first word
         assertTrue(Flat.of(flat).contains("temperature: " + why + "."), printed);
     }

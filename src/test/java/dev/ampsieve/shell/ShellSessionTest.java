@@ -151,7 +151,8 @@ class ShellSessionTest {
         String flat = dev.ampsieve.testing.Flat.of(printed);
         String left = "open-loop gain, closed-loop bandwidth and resistor ratio not counted: no full-scale-output; "
                 + "supply rejection not counted: no supply.variation; common-mode rejection not counted: "
-                + "no common-mode-swing; long-term drift not counted: no service-life";
+                + "no common-mode-swing; long-term drift not counted: no service-life; operating point not counted: "
+                + "no supply.voltage; self-heating not counted: no load-resistance";
         assertTrue(flat.contains("without it the open-loop gain, bandwidth and resistor terms are not counted; "
                 + "the verdict will say so."), printed);
         assertTrue(flat.contains("without it supply rejection is not counted"), printed);

@@ -78,7 +78,7 @@ class StageWriterTest {
         Stage odd = new Stage(new NonInverting(Math.PI * 1e4, Math.E * 1e2, 1.0 / 3, 2.0 / 7), -40.0 / 3, 85.1, Math.sqrt(2) * 5,
                 0.1 + 0.2, 1.0 / 30, new Range(0.3, 0.7), null, 1.0 / 7, 1e5 / 3, 3, 2.0 / 3, 1e-3 / 3, 1e-6 / 7, 1e6 / 7,
                 new Limit(Limit.Kind.INPUT, 1e-6 / 3, 0, 0), Criterion.yield(0.999 + 1e-12), 3.0, 20000, 123_457, 1, base.trim(), 1000,
-                null, false, Board.NONE, null);
+                null, false, 1e4 / 3, 1e5 / 7, Board.NONE, null);
         assertRoundTrip(odd);
     }
 

@@ -44,6 +44,11 @@ public final class PartBuilder {
     private Double fchop;
     private Double iq;
     private Double cin;
+    /** The datasheet table at 5 V, mid-supply: the default stage of {@code StageBuilder}, so the operating point moves nothing. */
+    private dev.ampsieve.catalog.TestConditions testConditions = new dev.ampsieve.catalog.TestConditions(5.0, 2.5);
+    private dev.ampsieve.catalog.InputCrossover crossover;
+    private Double thetaJa;
+    private Double ripple;
     private String notes = "";
 
     private PartBuilder(String id) {
@@ -85,6 +90,16 @@ public final class PartBuilder {
     public PartBuilder fchop(double v) { fchop = v; return this; }
     public PartBuilder iq(double v) { iq = v; return this; }
     public PartBuilder inputCapacitance(Double v) { cin = v; return this; }
+    public PartBuilder testConditions(Double supply, Double commonMode) {
+        testConditions = supply == null && commonMode == null ? null : new dev.ampsieve.catalog.TestConditions(supply, commonMode);
+        return this;
+    }
+    public PartBuilder crossover(double fromPositiveRail, double step) {
+        crossover = new dev.ampsieve.catalog.InputCrossover(fromPositiveRail, step);
+        return this;
+    }
+    public PartBuilder thetaJa(Double v) { thetaJa = v; return this; }
+    public PartBuilder choppingRipple(Double v) { ripple = v; return this; }
     public PartBuilder notes(String v) { notes = v; return this; }
     public PartBuilder nullPins(boolean v) { nullPins = v; return this; }
     public PartBuilder source(String v) { source = v; return this; }
@@ -94,6 +109,6 @@ public final class PartBuilder {
     public Part build() {
         return new Part(id, title, architecture, input, factoryTrim, nullPins, channels, packages, tags, price, supply,
                 temperature, vos, drift, ib, ios, cmrr, psrr, aol, gbw, slew, noise, aging, inputHeadroom,
-                outputHeadroom, fchop, iq, cin, source, notes, new Located(Path.of("fixture.yaml"), 1, 1));
+                outputHeadroom, fchop, iq, cin, testConditions, crossover, thetaJa, ripple, source, notes, new Located(Path.of("fixture.yaml"), 1, 1));
     }
 }

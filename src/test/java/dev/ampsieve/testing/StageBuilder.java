@@ -57,6 +57,6 @@ public final class StageBuilder {
 
     public Stage build() {
         return new Stage(Networks.of(topology, rf, rg, rs, 0), tMin, tMax, supply, 0, 0, (Range) null, (Range) null, 0.1, bandHigh,
-                filterOrder, fullScale, ratioTolerance, 0, 0, limit, criterion, 3, 2000, maxTrials, 1L, trim, quantity, maxPrice, false, Board.NONE, null);
+                filterOrder, fullScale, ratioTolerance, 0, 0, limit, criterion, 3, 2000, maxTrials, 1L, trim, quantity, maxPrice, false, null, null, Board.NONE, null);
     }
 }
