@@ -33,8 +33,9 @@ class RecordHtmlTest {
     }
 
     /** The ten error terms of a budget (TermResult's keys; README "Error terms"). */
+    /** The part's ten terms and the four of its operating point; the bridge stage names no board-level source. */
     static final Set<String> TERMS = Set.of("offset", "drift", "bias", "cmrr", "psrr", "open-loop-gain", "bandwidth",
-            "resistors", "aging", "noise");
+            "resistors", "aging", "noise", "operating-point", "input-crossover", "self-heating", "chopping-ripple");
 
     private static String row(Element table, String name) {
         for (Element tr : table.select("tr")) {
@@ -75,10 +76,10 @@ class RecordHtmlTest {
             assertEquals("invented demo data", row(info, "source"), id);
             assertTrue(row(info, "catalog file").matches(".*demo-catalog/zero-drift/[a-z-]+\\.yaml:\\d+"), row(info, "catalog file"));
             assertTrue(row(info, "entry SHA-256").matches("[0-9a-f]{64}"));
-            // the part's own chart: one bar per term, each of the ten terms once
+            // the part's own chart: one bar per term, each of the fourteen terms once
             Element svg = chartAfter(h);
             Elements bars = svg.select("rect.term");
-            assertEquals(10, bars.size(), id);
+            assertEquals(14, bars.size(), id);
             assertEquals(TERMS, bars.stream().map(b -> b.attr("data-term")).collect(Collectors.toSet()), id);
         }
         // zd-chop-01: 97.61 × 5 µV (vos.max in zero-drift/chopper.yaml) = 488 µV of initial offset (by hand)
