@@ -53,12 +53,29 @@ class ArchitectureTest {
             Map.entry("sheet", withBottom("units", "yaml", "catalog")),
             Map.entry("advice", withBottom("units", "yaml", "catalog", "stage", "stats", "budget", "search")),
             Map.entry("record", withBottom("units", "yaml", "catalog", "stage", "stats", "budget", "search", "advice")),
-            Map.entry("report", withBottom("units", "yaml", "catalog", "stage", "stats", "budget", "search", "advice",
-                    "record")),
-            Map.entry("commands", withBottom("units", "yaml", "catalog", "stage", "stats", "budget", "search", "advice",
-                    "record", "report", "sheet")),
-            Map.entry("shell", withBottom("units", "yaml", "catalog", "stage", "stats", "budget", "search", "advice",
-                    "record", "report", "sheet", "commands")),
+            Map.entry(
+                    "report",
+                    withBottom("units", "yaml", "catalog", "stage", "stats", "budget", "search", "advice", "record")),
+            Map.entry(
+                    "commands",
+                    withBottom(
+                            "units", "yaml", "catalog", "stage", "stats", "budget", "search", "advice", "record",
+                            "report", "sheet")),
+            Map.entry(
+                    "shell",
+                    withBottom(
+                            "units",
+                            "yaml",
+                            "catalog",
+                            "stage",
+                            "stats",
+                            "budget",
+                            "search",
+                            "advice",
+                            "record",
+                            "report",
+                            "sheet",
+                            "commands")),
             Map.entry("cli", Set.of("commands", "shell")));
 
     /** A name of ours: {@code dev.ampsieve.PKG.} in an import or written inline. */
@@ -126,8 +143,9 @@ class ArchitectureTest {
     @Test
     void domainCodeNeverPrints() throws IOException {
         List<String> violations = new ArrayList<>();
-        for (String pkg : List.of("text", "failure", "units", "yaml", "catalog", "stage", "stats", "budget", "search",
-                "advice", "record", "sheet")) {
+        for (String pkg : List.of(
+                "text", "failure", "units", "yaml", "catalog", "stage", "stats", "budget", "search", "advice", "record",
+                "sheet")) {
             Path dir = MAIN.resolve(pkg);
             if (!Files.isDirectory(dir)) {
                 continue;
@@ -213,8 +231,8 @@ class ArchitectureTest {
         return List.of();
     }
 
-    private static List<String> visit(String node, Map<String, Set<String>> graph, Map<String, Integer> state,
-            LinkedHashSet<String> path) {
+    private static List<String> visit(
+            String node, Map<String, Set<String>> graph, Map<String, Integer> state, LinkedHashSet<String> path) {
         Integer st = state.get(node);
         if (st != null && st == 2) {
             return List.of();

@@ -27,8 +27,7 @@ import java.util.stream.Stream;
  * directory (bench/run starts JMH from the project folder; JMH forks inherit it).
  */
 final class BenchData {
-    private BenchData() {
-    }
+    private BenchData() {}
 
     /** Stage file names in demo-catalog/stages/, without ".yaml". */
     static final String BRIDGE = "bridge-amp";
@@ -90,20 +89,51 @@ final class BenchData {
         List<Part> out = new ArrayList<>(n);
         for (int i = 0; i < n; i++) {
             Part p = demo.get(i % demo.size());
-            double k = 0.5 + 1.5 * r.nextDouble();      // offset, drift, bias in 0.5x .. 2x
-            double g = 0.7 + 0.6 * r.nextDouble();      // bandwidth in 0.7x .. 1.3x
-            double c = 0.8 + 0.4 * r.nextDouble();      // price in 0.8x .. 1.2x
+            double k = 0.5 + 1.5 * r.nextDouble(); // offset, drift, bias in 0.5x .. 2x
+            double g = 0.7 + 0.6 * r.nextDouble(); // bandwidth in 0.7x .. 1.3x
+            double c = 0.8 + 0.4 * r.nextDouble(); // price in 0.8x .. 1.2x
             String id = String.format(Locale.ROOT, "bench-%05d", i + 1);
             List<String> tags = new ArrayList<>(p.tags());
             tags.add("series-" + (i % 37));
-            out.add(new Part(id, p.title() + " (variant " + (i + 1) + ")", p.architecture(), p.input(),
-                    p.factoryTrim(), p.nullPins(), p.channels(), p.packages(), tags,
-                    new Price(p.price().unit() * c, p.price().quantity(), p.price().currency()),
-                    p.supply(), p.temperature(), scale(p.vos(), k), scale(p.vosDrift(), k), scale(p.ib(), k),
-                    scale(p.ios(), k), p.cmrr(), p.psrr(), p.aol(), p.gbw() * g,
-                    p.slew() == null ? null : p.slew() * g, p.noise(), p.longTermDrift(), p.inputHeadroom(),
-                    p.outputHeadroom(), p.choppingFrequency(), p.quiescentCurrent(), p.inputCapacitance(),
-                    p.testConditions(), p.inputCrossover(), p.thetaJa(), p.choppingRipple(), p.source(), p.notes(), p.where()));
+            out.add(new Part(
+                    id,
+                    p.title() + " (variant " + (i + 1) + ")",
+                    p.architecture(),
+                    p.input(),
+                    p.factoryTrim(),
+                    p.nullPins(),
+                    p.channels(),
+                    p.packages(),
+                    tags,
+                    new Price(
+                            p.price().unit() * c,
+                            p.price().quantity(),
+                            p.price().currency()),
+                    p.supply(),
+                    p.temperature(),
+                    scale(p.vos(), k),
+                    scale(p.vosDrift(), k),
+                    scale(p.ib(), k),
+                    scale(p.ios(), k),
+                    p.cmrr(),
+                    p.psrr(),
+                    p.aol(),
+                    p.gbw() * g,
+                    p.slew() == null ? null : p.slew() * g,
+                    p.noise(),
+                    p.longTermDrift(),
+                    p.inputHeadroom(),
+                    p.outputHeadroom(),
+                    p.choppingFrequency(),
+                    p.quiescentCurrent(),
+                    p.inputCapacitance(),
+                    p.testConditions(),
+                    p.inputCrossover(),
+                    p.thetaJa(),
+                    p.choppingRipple(),
+                    p.source(),
+                    p.notes(),
+                    p.where()));
         }
         return out;
     }

@@ -51,7 +51,8 @@ public class IndexBenchmark {
     @Setup(Level.Trial)
     public void setUp() throws InputException, IOException {
         root = BenchData.tempDir("ampsieve-bench-catalog");
-        catalog = BenchData.catalogOf(root, BenchData.scaledParts(BenchData.demoCatalog().parts(), parts));
+        catalog = BenchData.catalogOf(
+                root, BenchData.scaledParts(BenchData.demoCatalog().parts(), parts));
         parsed = QueryLanguage.parse(query);
         warmFolder = BenchData.tempDir("ampsieve-bench-warm");
         try (PartIndex built = PartIndex.open(catalog, warmFolder)) {

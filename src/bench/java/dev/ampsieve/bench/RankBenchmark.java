@@ -41,6 +41,7 @@ public class RankBenchmark {
 
     /** The bridge stage's limit, and the one that leaves nothing fitting (checked in setup). */
     static final String LIMIT_LINE = "limit: \"6 mV\"";
+
     static final String TIGHT_LIMIT = "1 mV";
 
     private Stage stage;
@@ -55,8 +56,13 @@ public class RankBenchmark {
         tight = tightened();
         parts = BenchData.demoCatalog().parts();
         ranked = rank();
-        args = new String[] {"--catalog", BenchData.demoCatalogDir().toString(),
-            "rank", "--stage", BenchData.stageFile(BenchData.BRIDGE).toString()};
+        args = new String[] {
+            "--catalog",
+            BenchData.demoCatalogDir().toString(),
+            "rank",
+            "--stage",
+            BenchData.stageFile(BenchData.BRIDGE).toString()
+        };
         // the command must succeed, or we would time an error message
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
@@ -75,8 +81,8 @@ public class RankBenchmark {
                 throw new IllegalStateException(file + " no longer has the line " + LIMIT_LINE);
             }
             Stage s = StageLoader.parse(text.replace(LIMIT_LINE, "limit: \"" + TIGHT_LIMIT + "\""), file);
-            if (Ranker.rank(s, BenchData.demoCatalog().parts(), BudgetCalculator::compute)
-                    .candidates().stream().anyMatch(Candidate::fits)) {
+            if (Ranker.rank(s, BenchData.demoCatalog().parts(), BudgetCalculator::compute).candidates().stream()
+                    .anyMatch(Candidate::fits)) {
                 throw new IllegalStateException("a part fits the bridge stage at " + TIGHT_LIMIT + ": tighten further");
             }
             return s;

@@ -19,7 +19,8 @@ public final class YieldProbe {
 
     public static YieldProbe untrimmed(Stage stage, Part part) {
         PartValues v = PartValues.of(part, stage);
-        List<TermResult> terms = BudgetCalculator.TERMS.stream().map(t -> t.evaluate(stage, v)).toList();
+        List<TermResult> terms =
+                BudgetCalculator.TERMS.stream().map(t -> t.evaluate(stage, v)).toList();
         double fixed = BudgetCalculator.fixedInYield(stage, terms, false, false);
         return new YieldProbe(new YieldModel(stage, v, fixed, false, false));
     }

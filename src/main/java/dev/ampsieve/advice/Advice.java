@@ -11,8 +11,14 @@ import java.util.List;
  * @param noFit        what would make the closest part fit; null when something fits
  * @param undecided    the best-ranked part whose yield the sampling left undecided; null when none
  */
-public record Advice(Candidate pick, Candidate cheapestAsIs, TrimAdvice trim, ZeroDriftAdvice zeroDrift,
-        NoFitAdvice noFit, Unsettled undecided, List<String> lines) {
+public record Advice(
+        Candidate pick,
+        Candidate cheapestAsIs,
+        TrimAdvice trim,
+        ZeroDriftAdvice zeroDrift,
+        NoFitAdvice noFit,
+        Unsettled undecided,
+        List<String> lines) {
     public Advice {
         lines = List.copyOf(lines);
     }

@@ -32,8 +32,7 @@ import java.util.function.Predicate;
  * budget on modified stages.
  */
 public final class Advisor {
-    private Advisor() {
-    }
+    private Advisor() {}
 
     /**
      * Band-edge ratio below which chopping ripple and intermodulation are called "near the
@@ -48,7 +47,8 @@ public final class Advisor {
         TrimAdvice trim = trim(stage, ranked, fitting, asIs);
         ZeroDriftAdvice zeroDrift = zeroDrift(stage, fitting);
         if (zeroDrift.warranted()) {
-            zeroDrift = zeroDrift.withResistorOption(resistorOption(stage, ranked, zeroDrift.selfCorrecting(), budgets));
+            zeroDrift =
+                    zeroDrift.withResistorOption(resistorOption(stage, ranked, zeroDrift.selfCorrecting(), budgets));
         }
         NoFitAdvice noFit = fitting.isEmpty() ? noFit(stage, ranked, budgets) : null;
 
@@ -58,14 +58,15 @@ public final class Advisor {
         }
         if (pick != null) {
             lines.add("Pick " + pick.id() + ": " + money(pick.effectiveCost(), pick.currency()) + " per unit"
-                    + (pick.trimmed() ? " including the trim" : "") + ", fits " + (pick.trimmed() ? "after the trim" : "as it is")
+                    + (pick.trimmed() ? " including the trim" : "") + ", fits "
+                    + (pick.trimmed() ? "after the trim" : "as it is")
                     + "; " + standing(pick) + ".");
             boardLine(stage, pick).ifPresent(lines::add);
             if (asIs == null) {
                 lines.add("No part fits as it is.");
             } else if (asIs != pick) {
-                lines.add("Cheapest part that fits as it is: " + asIs.id() + " at " + money(asIs.effectiveCost(), asIs.currency())
-                        + "; " + standing(asIs) + ".");
+                lines.add("Cheapest part that fits as it is: " + asIs.id() + " at "
+                        + money(asIs.effectiveCost(), asIs.currency()) + "; " + standing(asIs) + ".");
             }
         }
         if (!ranked.isEmpty()) { // with no part at all, no trim can help or fail to
@@ -91,11 +92,14 @@ public final class Advisor {
         }
         // one price per part, at the quantity it was quoted for: nothing to pick a price break from
         TreeSet<Integer> larger = new TreeSet<>();
-        ranked.stream().map(c -> c.part().price()).filter(p -> p != null && p.quantity() > stage.quantity())
+        ranked.stream()
+                .map(c -> c.part().price())
+                .filter(p -> p != null && p.quantity() > stage.quantity())
                 .forEach(p -> larger.add(p.quantity()));
         if (!larger.isEmpty()) {
             lines.add("Prices are the catalog's, each for its stated order quantity ("
-                    + String.join(", ", larger.stream().map(String::valueOf).toList()) + " units), not for this build of "
+                    + String.join(", ", larger.stream().map(String::valueOf).toList())
+                    + " units), not for this build of "
                     + stage.quantity() + ": smaller orders usually cost more per unit.");
         }
         return new Advice(pick, asIs, trim, zeroDrift, noFit, undecided, lines);
@@ -135,13 +139,22 @@ public final class Advisor {
                 double saving = asIs == null ? Double.NaN : asIs.effectiveCost() - would.effectiveCost();
                 return new TrimAdvice(TrimAdvice.Status.WOULD_PAY_IF_ALLOWED, would, asIs, saving, saving * q);
             }
-            return new TrimAdvice(asIs != null ? TrimAdvice.Status.NOT_NEEDED : TrimAdvice.Status.NO_HELP,
-                    null, asIs, Double.NaN, Double.NaN);
+            return new TrimAdvice(
+                    asIs != null ? TrimAdvice.Status.NOT_NEEDED : TrimAdvice.Status.NO_HELP,
+                    null,
+                    asIs,
+                    Double.NaN,
+                    Double.NaN);
         }
-        Candidate withTrim = fitting.stream().filter(Candidate::trimmed).findFirst().orElse(null);
+        Candidate withTrim =
+                fitting.stream().filter(Candidate::trimmed).findFirst().orElse(null);
         if (withTrim == null) {
-            return new TrimAdvice(asIs != null ? TrimAdvice.Status.NOT_NEEDED : TrimAdvice.Status.NO_HELP,
-                    null, asIs, Double.NaN, Double.NaN);
+            return new TrimAdvice(
+                    asIs != null ? TrimAdvice.Status.NOT_NEEDED : TrimAdvice.Status.NO_HELP,
+                    null,
+                    asIs,
+                    Double.NaN,
+                    Double.NaN);
         }
         if (asIs == null) {
             return new TrimAdvice(TrimAdvice.Status.REQUIRED, withTrim, null, Double.NaN, Double.NaN);
@@ -159,7 +172,9 @@ public final class Advisor {
         if (b.trimmed() == null) {
             return false;
         }
-        double total = b.stage().criterion().kind() == Criterion.Kind.RSS ? b.trimmed().rssV() : b.trimmed().worstCaseV();
+        double total = b.stage().criterion().kind() == Criterion.Kind.RSS
+                ? b.trimmed().rssV()
+                : b.trimmed().worstCaseV();
         return total <= b.limitV();
     }
 
@@ -171,38 +186,59 @@ public final class Advisor {
             default -> "one-point trim";
         };
         String cost = StageEdit.trim(stage).cost() > 0
-                ? money(StageEdit.trim(stage).cost(), t.withTrim() == null ? "" : t.withTrim().currency())
+                ? money(
+                        StageEdit.trim(stage).cost(),
+                        t.withTrim() == null ? "" : t.withTrim().currency())
                 : "no stated cost (stage trim.cost; counted as 0)";
         Candidate w = t.withTrim();
         Candidate a = t.asIs();
-        return java.util.Optional.ofNullable(switch (t.status()) {
-            case WARRANTED -> "A " + trimName + " is warranted: " + w.id() + " at " + money(Candidate.price(w.part(), q), w.currency())
-                    + " plus the trim at " + cost + " costs " + money(w.effectiveCost(), w.currency()) + " per unit, "
-                    + money(t.savingPerUnit(), w.currency()) + " less than " + a.id() + " as it is ("
-                    + money(t.savingTotal(), w.currency()) + " over " + q + " units); " + standing(w) + ".";
-            case REQUIRED -> "A " + trimName + " is required: no part fits as it is; " + w.id() + " fits after it at "
-                    + money(w.effectiveCost(), w.currency()) + " per unit including " + cost + " for the trim; "
-                    + standing(w) + ".";
-            case NOT_WARRANTED -> "A " + trimName + " does not pay: " + w.id() + " fits after it at "
-                    + money(w.effectiveCost(), w.currency()) + " per unit including the trim, "
-                    + money(-t.savingPerUnit(), w.currency()) + " more than " + a.id() + " as it is.";
-            case NOT_NEEDED -> StageEdit.trim(stage).allowed() ? "No part needs the " + trimName + " to fit; leave it out." : null;
-            case WOULD_PAY_IF_ALLOWED -> "The stage allows no trim; a " + trimName + " would let " + w.id() + " fit at "
-                    + money(w.effectiveCost(), w.currency()) + " per unit (price "
-                    + money(Candidate.price(w.part(), q), w.currency()) + " plus the trim: " + cost + ")"
-                    + (a == null ? ", and nothing fits without one"
-                    : ", " + money(t.savingPerUnit(), w.currency()) + " less than " + a.id() + " as it is ("
-                    + money(t.savingTotal(), w.currency()) + " over " + q + " units)")
-                    + "; " + standing(w) + ".";
-            case NO_HELP -> StageEdit.trim(stage).allowed() ? "Not even a trimmed part fits." : null;
-        });
+        return java.util.Optional.ofNullable(
+                switch (t.status()) {
+                    case WARRANTED ->
+                        "A " + trimName + " is warranted: " + w.id() + " at "
+                                + money(Candidate.price(w.part(), q), w.currency())
+                                + " plus the trim at " + cost + " costs " + money(w.effectiveCost(), w.currency())
+                                + " per unit, "
+                                + money(t.savingPerUnit(), w.currency()) + " less than " + a.id() + " as it is ("
+                                + money(t.savingTotal(), w.currency()) + " over " + q + " units); " + standing(w) + ".";
+                    case REQUIRED ->
+                        "A " + trimName + " is required: no part fits as it is; " + w.id() + " fits after it at "
+                                + money(w.effectiveCost(), w.currency()) + " per unit including " + cost
+                                + " for the trim; "
+                                + standing(w) + ".";
+                    case NOT_WARRANTED ->
+                        "A " + trimName + " does not pay: " + w.id() + " fits after it at "
+                                + money(w.effectiveCost(), w.currency()) + " per unit including the trim, "
+                                + money(-t.savingPerUnit(), w.currency()) + " more than " + a.id() + " as it is.";
+                    case NOT_NEEDED ->
+                        StageEdit.trim(stage).allowed()
+                                ? "No part needs the " + trimName + " to fit; leave it out."
+                                : null;
+                    case WOULD_PAY_IF_ALLOWED ->
+                        "The stage allows no trim; a " + trimName + " would let " + w.id() + " fit at "
+                                + money(w.effectiveCost(), w.currency()) + " per unit (price "
+                                + money(Candidate.price(w.part(), q), w.currency()) + " plus the trim: " + cost + ")"
+                                + (a == null
+                                        ? ", and nothing fits without one"
+                                        : ", " + money(t.savingPerUnit(), w.currency()) + " less than " + a.id()
+                                                + " as it is (" + money(t.savingTotal(), w.currency()) + " over " + q
+                                                + " units)")
+                                + "; " + standing(w) + ".";
+                    case NO_HELP -> StageEdit.trim(stage).allowed() ? "Not even a trimmed part fits." : null;
+                });
     }
 
     // ------------------------------------------------------------------ zero-drift
 
     static ZeroDriftAdvice zeroDrift(Stage stage, List<Candidate> fitting) {
-        Candidate self = fitting.stream().filter(c -> c.part().selfCorrecting()).findFirst().orElse(null);
-        Candidate std = fitting.stream().filter(c -> !c.part().selfCorrecting()).findFirst().orElse(null);
+        Candidate self = fitting.stream()
+                .filter(c -> c.part().selfCorrecting())
+                .findFirst()
+                .orElse(null);
+        Candidate std = fitting.stream()
+                .filter(c -> !c.part().selfCorrecting())
+                .findFirst()
+                .orElse(null);
         List<String> caveats = self == null ? List.of() : caveats(stage, self);
         int q = stage.quantity();
         if (self == null) {
@@ -236,8 +272,11 @@ public final class Advisor {
             }
             out.add("bias current up to " + Units.format(Math.abs(ib), Dimension.CURRENT) + hot
                     + " (charge injection at the input switches, more than a plain CMOS input draws)"
-                    + (bias != null ? ": " + volts(bias.outputV()) + " at the output here, "
-                    + Phrases.percent(bias.outputV() / c.limitV()) + " of the limit" : "") + ".");
+                    + (bias != null
+                            ? ": " + volts(bias.outputV()) + " at the output here, "
+                                    + Phrases.percent(bias.outputV() / c.limitV()) + " of the limit"
+                            : "")
+                    + ".");
         } else {
             out.add("bias current is not in the catalog: chopper and auto-zero inputs draw charge-injection current;"
                     + " take it from the datasheet.");
@@ -275,8 +314,9 @@ public final class Advisor {
                         + band + " band edge: ripple and intermodulation land near the band; check the datasheet's"
                         + " ripple and filter (common practice: keep it 10 times above the band).");
             } else {
-                out.add("chopping at " + Units.format(fchop, Dimension.FREQUENCY) + " is " + times + " the " + band
-                        + " band edge: the ripple lies well above the band; filter it before any ADC so it cannot alias.");
+                out.add(
+                        "chopping at " + Units.format(fchop, Dimension.FREQUENCY) + " is " + times + " the " + band
+                                + " band edge: the ripple lies well above the band; filter it before any ADC so it cannot alias.");
             }
         }
         return out;
@@ -297,15 +337,16 @@ public final class Advisor {
      * ({@link #betterResistors}), so that a designer sees both ways out. Not under the yield
      * criterion, where each try is a Monte Carlo run. Null when there is none.
      */
-    static ZeroDriftAdvice.ResistorOption resistorOption(Stage stage, List<Candidate> ranked, Candidate zeroDrift,
-            BudgetFunction budgets) {
+    static ZeroDriftAdvice.ResistorOption resistorOption(
+            Stage stage, List<Candidate> ranked, Candidate zeroDrift, BudgetFunction budgets) {
         if (stage.criterion().kind() == Criterion.Kind.YIELD || zeroDrift == null) {
             return null;
         }
         Candidate std = ranked.stream()
                 .filter(c -> !c.part().selfCorrecting() && !c.fits() && c.constraintsMet())
                 .filter(c -> !(c.effectiveCost() >= zeroDrift.effectiveCost()))
-                .max(Comparator.comparingDouble(Candidate::margin).thenComparing(Candidate::id, Comparator.reverseOrder()))
+                .max(Comparator.comparingDouble(Candidate::margin)
+                        .thenComparing(Candidate::id, Comparator.reverseOrder()))
                 .orElse(null);
         if (std == null) {
             return null;
@@ -315,7 +356,9 @@ public final class Advisor {
             Budget b = budgets.compute(s, p);
             return fitsBy(b);
         };
-        return betterResistors(stage, fits).map(ch -> new ZeroDriftAdvice.ResistorOption(std, ch)).orElse(null);
+        return betterResistors(stage, fits)
+                .map(ch -> new ZeroDriftAdvice.ResistorOption(std, ch))
+                .orElse(null);
     }
 
     private static void zeroDriftLines(Stage stage, ZeroDriftAdvice z, List<Candidate> fitting, List<String> lines) {
@@ -327,21 +370,29 @@ public final class Advisor {
                 // "only X fits" would be false when several zero-drift parts fit: name the cheapest then
                 long n = fitting.stream().filter(c -> c.part().selfCorrecting()).count();
                 lines.add("A zero-drift part is warranted: "
-                        + (n > 1 ? "only zero-drift parts fit (" + n + "); the cheapest, " + s.id() + " ("
-                                + s.part().architecture().key() + "), costs "
-                                : "only " + s.id() + " (" + s.part().architecture().key() + ") fits, at ")
-                        + money(s.effectiveCost(), s.currency()) + " per unit" + withTrim(s) + "; " + standing(s) + ".");
+                        + (n > 1
+                                ? "only zero-drift parts fit (" + n + "); the cheapest, " + s.id() + " ("
+                                        + s.part().architecture().key() + "), costs "
+                                : "only " + s.id() + " ("
+                                        + s.part().architecture().key() + ") fits, at ")
+                        + money(s.effectiveCost(), s.currency()) + " per unit" + withTrim(s) + "; " + standing(s)
+                        + ".");
             }
-            case CHEAPER -> lines.add("A zero-drift part is warranted: " + s.id() + " (" + s.part().architecture().key()
-                    + flagged(s) + ") fits at " + money(s.effectiveCost(), s.currency()) + withTrim(s) + ", " + money(z.savingPerUnit(), s.currency())
-                    + " less per unit than the cheapest standard part " + std.id() + " at "
-                    + money(std.effectiveCost(), std.currency()) + withTrim(std) + " (" + money(z.savingTotal(), s.currency())
-                    + " over " + q + " units).");
-            case NOT_WARRANTED -> lines.add("A zero-drift part is not needed: " + std.id() + " (standard" + flagged(std) + ") fits at "
-                    + money(std.effectiveCost(), std.currency()) + withTrim(std) + ", " + money(-z.savingPerUnit(), std.currency())
-                    + " less than the cheapest zero-drift part that fits, " + s.id() + ".");
-            case NONE_FITS -> {
-            }
+            case CHEAPER ->
+                lines.add("A zero-drift part is warranted: " + s.id() + " ("
+                        + s.part().architecture().key()
+                        + flagged(s) + ") fits at " + money(s.effectiveCost(), s.currency()) + withTrim(s) + ", "
+                        + money(z.savingPerUnit(), s.currency())
+                        + " less per unit than the cheapest standard part " + std.id() + " at "
+                        + money(std.effectiveCost(), std.currency()) + withTrim(std) + " ("
+                        + money(z.savingTotal(), s.currency())
+                        + " over " + q + " units).");
+            case NOT_WARRANTED ->
+                lines.add("A zero-drift part is not needed: " + std.id() + " (standard" + flagged(std) + ") fits at "
+                        + money(std.effectiveCost(), std.currency()) + withTrim(std) + ", "
+                        + money(-z.savingPerUnit(), std.currency())
+                        + " less than the cheapest zero-drift part that fits, " + s.id() + ".");
+            case NONE_FITS -> {}
         }
         if (z.warranted()) {
             lines.add("With " + s.id() + ", check:");
@@ -349,8 +400,10 @@ public final class Advisor {
         }
         if (z.resistorOption() != null) {
             Candidate o = z.resistorOption().part();
-            lines.add("Or a standard part with better resistors: " + o.id() + " at " + money(o.effectiveCost(), o.currency())
-                    + withTrim(o) + " would fit with " + z.resistorOption().change().text()
+            lines.add("Or a standard part with better resistors: " + o.id() + " at "
+                    + money(o.effectiveCost(), o.currency())
+                    + withTrim(o) + " would fit with "
+                    + z.resistorOption().change().text()
                     + " (the resistors' cost is not in the figures); now " + standing(o) + ".");
         }
     }
@@ -359,7 +412,10 @@ public final class Advisor {
 
     /** The best-ranked part whose yield interval still holds the target, with what would settle it; null when none. */
     static Unsettled undecided(Stage stage, List<Candidate> ranked) {
-        Candidate c = ranked.stream().filter(x -> x.constraintsMet() && x.verdict() == Verdict.UNDECIDED).findFirst().orElse(null);
+        Candidate c = ranked.stream()
+                .filter(x -> x.constraintsMet() && x.verdict() == Verdict.UNDECIDED)
+                .findFirst()
+                .orElse(null);
         if (c == null) {
             return null;
         }
@@ -368,13 +424,20 @@ public final class Advisor {
         var after = c.budget().trimmed() == null ? null : c.budget().trimmed().yield();
         boolean trimmed = asIs.high() < target && after != null; // only the trim's run holds the target
         var y = trimmed ? after : asIs;
-        return new Unsettled(c, y, trimmed, target, Math.max(stage.trials(), stage.maxTrials()),
-                Unsettled.unitsToSettle(y.value(), target), StageEdit.trim(stage).allowed());
+        return new Unsettled(
+                c,
+                y,
+                trimmed,
+                target,
+                Math.max(stage.trials(), stage.maxTrials()),
+                Unsettled.unitsToSettle(y.value(), target),
+                StageEdit.trim(stage).allowed());
     }
 
     private static String undecidedLine(Unsettled u) {
         var y = u.yield();
-        // the target as the stage gives it (99.02 %, not 99.0 %); the interval's upper end rounded up, its lower end down
+        // the target as the stage gives it (99.02 %, not 99.0 %); the interval's upper end rounded up, its lower end
+        // down
         String pc = Units.format(u.target(), Dimension.RATIO, 4);
         String more = u.unitsToSettle() == Long.MAX_VALUE
                 ? "no number of units can settle it, as the yield seen is the target itself"
@@ -384,7 +447,8 @@ public final class Advisor {
                 + " simulated units the true yield is within " + Phrases.yieldPercent(y.low()) + " to "
                 + (y.high() >= 1 ? "100 %" : String.format(Locale.ROOT, "%.2f %%", Math.ceil(y.high() * 1e4) / 100))
                 + ", which holds the " + pc + " target; " + more
-                + ". What settles it: a looser target (" + Phrases.yieldPercent(y.low()) + " or less is shown met), a part with "
+                + ". What settles it: a looser target (" + Phrases.yieldPercent(y.low())
+                + " or less is shown met), a part with "
                 + "a smaller error" + (u.trimAllowed() ? "" : ", or allowing a trim") + ".";
     }
 
@@ -392,7 +456,8 @@ public final class Advisor {
 
     static NoFitAdvice noFit(Stage stage, List<Candidate> ranked, BudgetFunction budgets) {
         Candidate closest = ranked.stream()
-                .max(Comparator.comparingDouble(Candidate::margin).thenComparing(Candidate::id, Comparator.reverseOrder()))
+                .max(Comparator.comparingDouble(Candidate::margin)
+                        .thenComparing(Candidate::id, Comparator.reverseOrder()))
                 .orElse(null);
         if (closest == null) {
             return new NoFitAdvice(null, null, Double.NaN, List.of(), List.of());
@@ -400,8 +465,8 @@ public final class Advisor {
         String limiting = closest.budget().limitingTerm();
         TermResult t = limiting == null ? null : closest.budget().term(limiting);
         List<Change> changes = changes(stage, closest, budgets);
-        return new NoFitAdvice(closest, limiting, t == null ? Double.NaN : t.outputV(), changes,
-                partTargets(stage, closest, budgets));
+        return new NoFitAdvice(
+                closest, limiting, t == null ? Double.NaN : t.outputV(), changes, partTargets(stage, closest, budgets));
     }
 
     /**
@@ -473,8 +538,10 @@ public final class Advisor {
     private static String resistorsText(Stage stage, double rf) {
         dev.ampsieve.stage.Network n = stage.network().withFeedback(rf);
         return switch (n.topology()) {
-            case NON_INVERTING -> "Rf " + Phrases.ohms(rf) + " with Rg " + Phrases.ohms(((dev.ampsieve.stage.NonInverting) n).rg());
-            case INVERTING -> "Rf " + Phrases.ohms(rf) + " with Rg " + Phrases.ohms(((dev.ampsieve.stage.Inverting) n).rg());
+            case NON_INVERTING ->
+                "Rf " + Phrases.ohms(rf) + " with Rg " + Phrases.ohms(((dev.ampsieve.stage.NonInverting) n).rg());
+            case INVERTING ->
+                "Rf " + Phrases.ohms(rf) + " with Rg " + Phrases.ohms(((dev.ampsieve.stage.Inverting) n).rg());
             case DIFFERENCE -> {
                 dev.ampsieve.stage.Difference d = (dev.ampsieve.stage.Difference) n;
                 yield "R2 " + Phrases.ohms(d.r2()) + " with R1 " + Phrases.ohms(d.r1()) + ", R4 " + Phrases.ohms(d.r4())
@@ -482,8 +549,13 @@ public final class Advisor {
             }
             case TRANSIMPEDANCE -> {
                 dev.ampsieve.stage.Transimpedance t = (dev.ampsieve.stage.Transimpedance) n;
-                yield "Rf " + Phrases.ohms(rf) + (t.cf() > 0 ? " with Cf " + dev.ampsieve.units.Units.format(t.cf(),
-                        dev.ampsieve.units.Dimension.CAPACITANCE) + " (the same signal bandwidth)" : "");
+                yield "Rf " + Phrases.ohms(rf)
+                        + (t.cf() > 0
+                                ? " with Cf "
+                                        + dev.ampsieve.units.Units.format(
+                                                t.cf(), dev.ampsieve.units.Dimension.CAPACITANCE)
+                                        + " (the same signal bandwidth)"
+                                : "");
             }
             case FOLLOWER -> "Rf " + Phrases.ohms(rf);
         };
@@ -502,7 +574,8 @@ public final class Advisor {
         // the resistance the noise gain divides Rf by: NG = 1 + Rf/rgEff in every adjustable network
         double rgEff = rf / (stage.noiseGain() - 1.0);
         // the lowest Rf offered: half the gain (inverting: at least a gain of -1), never below the resistor floor
-        double least = Math.max(MIN_GAIN_SHARE * stage.sourceGain(), stage.topology() == Topology.INVERTING ? 1.0 : 0.0);
+        double least =
+                Math.max(MIN_GAIN_SHARE * stage.sourceGain(), stage.topology() == Topology.INVERTING ? 1.0 : 0.0);
         double rfMin = Math.max(rfFor(stage, least), RESISTOR_FLOOR);
         if (rfMin >= rf) {
             return java.util.Optional.empty();
@@ -514,8 +587,14 @@ public final class Advisor {
         double rfNeeded = switch (stage.topology()) {
             // the gain is Rf itself: rounded below, as printed
             case TRANSIMPEDANCE, FOLLOWER -> found;
-            case NON_INVERTING, INVERTING, DIFFERENCE -> (Math.max(1.0, reportLargest(StageEdit.withRf(stage, found).noiseGain(),
-                    g -> fits.test(StageEdit.withGain(stage, (g - 1.0) * rgEff)))) - 1.0) * rgEff;
+            case NON_INVERTING, INVERTING, DIFFERENCE ->
+                (Math.max(
+                                        1.0,
+                                        reportLargest(
+                                                StageEdit.withRf(stage, found).noiseGain(),
+                                                g -> fits.test(StageEdit.withGain(stage, (g - 1.0) * rgEff))))
+                                - 1.0)
+                        * rgEff;
         };
         Stage at = StageEdit.withRf(stage, rfNeeded);
         // the resistor as printed (3 digits), rounded toward the lower gain so that building it fits
@@ -536,14 +615,20 @@ public final class Advisor {
         }
         String resistors = resistorsText(stage, rfShown);
         // the input signal stays: the output's full scale shrinks with the gain
-        String swing = vfs == null ? "" : "; full-scale output then " + volts(vfs) + " (now " + volts(stage.fullScaleOutput()) + ")";
+        String swing = vfs == null
+                ? ""
+                : "; full-scale output then " + volts(vfs) + " (now " + volts(stage.fullScaleOutput()) + ")";
         String text = switch (stage.topology()) {
-            case INVERTING, DIFFERENCE -> "a gain of " + Phrases.number(at.signalGain()) + " or less in magnitude (now "
-                    + Phrases.number(stage.signalGain()) + "; noise gain " + Phrases.number(at.noiseGain()) + "): " + resistors + swing;
-            case TRANSIMPEDANCE -> "a smaller feedback resistor: " + resistors + " or less (now " + Phrases.ohms(stage.rf())
-                    + "); the output per ampere falls with it" + swing;
-            case NON_INVERTING, FOLLOWER -> "a gain of " + Phrases.number(at.noiseGain()) + " or lower (now "
-                    + Phrases.number(stage.noiseGain()) + "): " + resistors + swing;
+            case INVERTING, DIFFERENCE ->
+                "a gain of " + Phrases.number(at.signalGain()) + " or less in magnitude (now "
+                        + Phrases.number(stage.signalGain()) + "; noise gain " + Phrases.number(at.noiseGain()) + "): "
+                        + resistors + swing;
+            case TRANSIMPEDANCE ->
+                "a smaller feedback resistor: " + resistors + " or less (now " + Phrases.ohms(stage.rf())
+                        + "); the output per ampere falls with it" + swing;
+            case NON_INVERTING, FOLLOWER ->
+                "a gain of " + Phrases.number(at.noiseGain()) + " or lower (now " + Phrases.number(stage.noiseGain())
+                        + "): " + resistors + swing;
         };
         return java.util.Optional.of(new Change(Change.Kind.LOWER_GAIN, text, v));
     }
@@ -600,7 +685,8 @@ public final class Advisor {
         String text = "split the gain with a later stage: a gain of " + Phrases.number(stage.signalGain())
                 + " in one stage does not fit even at half of it; " + Phrases.number(here.signalGain()) + " here ("
                 + resistorsText(stage, rfShown) + ") and " + Phrases.number(after)
-                + " after it would, this stage held to " + volts(here.limitVolts()) + " at its output (the limit divided by "
+                + " after it would, this stage held to " + volts(here.limitVolts())
+                + " at its output (the limit divided by "
                 + Phrases.number(after) + "): the later stage's errors are divided by " + Phrases.number(gHere)
                 + " when referred to the input";
         return java.util.Optional.of(new Change(Change.Kind.SPLIT_GAIN, text, v));
@@ -672,7 +758,8 @@ public final class Advisor {
             return java.util.Optional.empty();
         }
         // bisection on the logarithm: leakage resistances span decades
-        java.util.function.DoublePredicate okLog = x -> fits.test(StageEdit.withLeakageResistance(stage, Math.pow(10, x)));
+        java.util.function.DoublePredicate okLog =
+                x -> fits.test(StageEdit.withLeakageResistance(stage, Math.pow(10, x)));
         double hi = Math.log10(b.leakageResistance());
         double top = hi;
         while (!okLog.test(top) && top < hi + 12) {
@@ -725,10 +812,13 @@ public final class Advisor {
         }
         for (int n = stage.noiseFilterOrder() + 1; n <= Stage.MAX_FILTER_ORDER; n++) {
             if (fits.test(StageEdit.withFilterOrder(stage, n))) {
-                String text = "a Butterworth low-pass of order " + n + " at " + Units.format(stage.bandHigh(), Dimension.FREQUENCY)
-                        + " after the amplifier (now " + (stage.noiseFilterOrder() == 0 ? "none" : "order " + stage.noiseFilterOrder())
+                String text = "a Butterworth low-pass of order " + n + " at "
+                        + Units.format(stage.bandHigh(), Dimension.FREQUENCY)
+                        + " after the amplifier (now "
+                        + (stage.noiseFilterOrder() == 0 ? "none" : "order " + stage.noiseFilterOrder())
                         + "): it removes the chopping ripple (and shortens the noise band)";
-                return java.util.Optional.of(new Change(Change.Kind.STEEPER_FILTER, text, Map.of("filterOrder", (double) n)));
+                return java.util.Optional.of(
+                        new Change(Change.Kind.STEEPER_FILTER, text, Map.of("filterOrder", (double) n)));
             }
         }
         return java.util.Optional.empty();
@@ -738,8 +828,8 @@ public final class Advisor {
         // shrink toward the trim / datasheet reference temperature, or the nearest end of the range
         double c = Math.max(stage.tMin(), Math.min(stage.tMax(), Stage.T_REF));
         double dMax = Math.max(c - stage.tMin(), stage.tMax() - c);
-        java.util.function.DoubleFunction<Stage> at = d ->
-                StageEdit.withTemperature(stage, Math.max(stage.tMin(), c - d), Math.min(stage.tMax(), c + d));
+        java.util.function.DoubleFunction<Stage> at =
+                d -> StageEdit.withTemperature(stage, Math.max(stage.tMin(), c - d), Math.min(stage.tMax(), c + d));
         if (dMax <= 0 || !fits.test(at.apply(0))) {
             return java.util.Optional.empty();
         }
@@ -781,14 +871,17 @@ public final class Advisor {
         String now = " (now " + Units.format(stage.ratioTolerance(), Dimension.RATIO) + ", "
                 + Units.format(stage.ratioTempco(), Dimension.RATIO_DRIFT) + ")";
         String text = switch (stage.topology()) {
-            case NON_INVERTING, INVERTING, FOLLOWER -> "resistors matched to " + Units.format(tol, Dimension.RATIO) + " with "
-                    + Units.format(tc, Dimension.RATIO_DRIFT) + " tracking or better" + now;
+            case NON_INVERTING, INVERTING, FOLLOWER ->
+                "resistors matched to " + Units.format(tol, Dimension.RATIO) + " with "
+                        + Units.format(tc, Dimension.RATIO_DRIFT) + " tracking or better" + now;
             // the pairs' match sets both the gain and the rejection of the common mode
-            case DIFFERENCE -> "better-matched resistor pairs: r2/r1 and r4/r3 each within " + Units.format(tol, Dimension.RATIO)
-                    + " with " + Units.format(tc, Dimension.RATIO_DRIFT) + " tracking or better" + now
-                    + "; a matched four-resistor network also raises the common-mode rejection";
-            case TRANSIMPEDANCE -> "a feedback resistor of " + Units.format(tol, Dimension.RATIO) + " tolerance and "
-                    + Units.format(tc, Dimension.RATIO_DRIFT) + " or better" + now;
+            case DIFFERENCE ->
+                "better-matched resistor pairs: r2/r1 and r4/r3 each within " + Units.format(tol, Dimension.RATIO)
+                        + " with " + Units.format(tc, Dimension.RATIO_DRIFT) + " tracking or better" + now
+                        + "; a matched four-resistor network also raises the common-mode rejection";
+            case TRANSIMPEDANCE ->
+                "a feedback resistor of " + Units.format(tol, Dimension.RATIO) + " tolerance and "
+                        + Units.format(tc, Dimension.RATIO_DRIFT) + " or better" + now;
         };
         return java.util.Optional.of(new Change(Change.Kind.BETTER_RESISTORS, text, v));
     }
@@ -811,10 +904,15 @@ public final class Advisor {
             return java.util.Optional.empty();
         }
         Candidate c = Candidate.of(b);
-        String cost = t.cost() > 0 ? money(t.cost(), c.currency()) + " per unit" : "the trim's cost per unit (not given)";
+        String cost =
+                t.cost() > 0 ? money(t.cost(), c.currency()) + " per unit" : "the trim's cost per unit (not given)";
         String what = kind == Change.Kind.ALLOW_TRIM
-                ? "allow a " + (tried.method() == Trim.Method.TWO_POINT ? "two-point calibration"
-                        : tried.method() == Trim.Method.TWO_TEMPERATURE ? "two-temperature calibration" : "one-point trim at 25 °C")
+                ? "allow a "
+                        + (tried.method() == Trim.Method.TWO_POINT
+                                ? "two-point calibration"
+                                : tried.method() == Trim.Method.TWO_TEMPERATURE
+                                        ? "two-temperature calibration"
+                                        : "one-point trim at 25 °C")
                 : "a two-point calibration instead of the one-point trim";
         Map<String, Double> v = new LinkedHashMap<>();
         v.put("errorAfterTrimV", c.errorV());
@@ -847,26 +945,50 @@ public final class Advisor {
         // said the way the user wrote the limit, with the output figure beside it
         switch (l.kind()) {
             // each figure in the user's form rounded toward the looser side, so that the limit as printed fits
-            case INPUT -> text.append(volts(Phrases.round3Up(needed / g))).append(" at the input (").append(volts(needed))
-                    .append(" at the output) or looser (now ").append(volts(l.value())).append(" at the input)");
+            case INPUT ->
+                text.append(volts(Phrases.round3Up(needed / g)))
+                        .append(" at the input (")
+                        .append(volts(needed))
+                        .append(" at the output) or looser (now ")
+                        .append(volts(l.value()))
+                        .append(" at the input)");
             case LSB -> {
                 double lsb = l.reference() / Math.pow(2, l.bits());
                 v.put("limitLsb", needed / lsb);
-                text.append(String.format(Locale.ROOT, "%.2f", Math.ceil(needed / lsb * 100 - 1e-9) / 100)).append(" LSB (").append(volts(needed))
-                        .append(" at the output) or looser (now ").append(Phrases.number(l.value())).append(" LSB)");
+                text.append(String.format(Locale.ROOT, "%.2f", Math.ceil(needed / lsb * 100 - 1e-9) / 100))
+                        .append(" LSB (")
+                        .append(volts(needed))
+                        .append(" at the output) or looser (now ")
+                        .append(Phrases.number(l.value()))
+                        .append(" LSB)");
             }
             case PERCENT_OF_FULL_SCALE -> {
                 double fs = stage.fullScaleOutput() == null ? Double.NaN : stage.fullScaleOutput();
                 v.put("limitFraction", needed / fs);
-                text.append(Units.format(Phrases.round3Up(needed / fs), Dimension.RATIO)).append(" of full scale (").append(volts(needed))
-                        .append(" at the output) or looser (now ").append(Units.format(l.value(), Dimension.RATIO)).append(")");
+                text.append(Units.format(Phrases.round3Up(needed / fs), Dimension.RATIO))
+                        .append(" of full scale (")
+                        .append(volts(needed))
+                        .append(" at the output) or looser (now ")
+                        .append(Units.format(l.value(), Dimension.RATIO))
+                        .append(")");
             }
-            case INPUT_CURRENT -> text.append(Units.format(Phrases.round3Up(needed / g), Dimension.CURRENT)).append(" at the input (")
-                    .append(volts(needed)).append(" at the output) or looser (now ").append(Units.format(l.value(), Dimension.CURRENT))
-                    .append(" at the input)");
-            case OUTPUT -> text.append(volts(needed)).append(" at the output (").append(stage.topology() == Topology.TRANSIMPEDANCE
-                    ? Units.format(needed / g, Dimension.CURRENT) : volts(needed / g))
-                    .append(" at the input) or looser (now ").append(volts(e)).append(")");
+            case INPUT_CURRENT ->
+                text.append(Units.format(Phrases.round3Up(needed / g), Dimension.CURRENT))
+                        .append(" at the input (")
+                        .append(volts(needed))
+                        .append(" at the output) or looser (now ")
+                        .append(Units.format(l.value(), Dimension.CURRENT))
+                        .append(" at the input)");
+            case OUTPUT ->
+                text.append(volts(needed))
+                        .append(" at the output (")
+                        .append(
+                                stage.topology() == Topology.TRANSIMPEDANCE
+                                        ? Units.format(needed / g, Dimension.CURRENT)
+                                        : volts(needed / g))
+                        .append(" at the input) or looser (now ")
+                        .append(volts(e))
+                        .append(")");
         }
         return java.util.Optional.of(new Change(Change.Kind.LOOSER_LIMIT, text.toString(), v));
     }
@@ -877,6 +999,7 @@ public final class Advisor {
      * electrometer inputs guarantee tens of fA, the best zero-drift parts about 1 µV and 5 nV/°C).
      */
     static final double IB_FLOOR = 1e-15;
+
     static final double VOS_FLOOR = 0.5e-6;
     static final double DRIFT_FLOOR = 2e-9;
     /** No package is cooler than a few °C/W without a heat sink (common practice). */
@@ -896,7 +1019,8 @@ public final class Advisor {
         dev.ampsieve.budget.PartValues v = dev.ampsieve.budget.PartValues.of(p, stage);
         List<PartTarget> out = new ArrayList<>();
 
-        // IB at the temperature where the closest part's bias term is worst (over the range when it does not depend on it)
+        // IB at the temperature where the closest part's bias term is worst (over the range when it does not depend on
+        // it)
         TermResult bias = closest.budget().term(dev.ampsieve.budget.BiasTerm.KEY);
         double atC = bias != null && Double.isFinite(bias.worstAtC()) ? bias.worstAtC() : Double.NaN;
         double ibNow = Double.isNaN(atC) ? Math.max(v.ibAt(stage.tMin()), v.ibAt(stage.tMax())) : v.ibAt(atC);
@@ -905,8 +1029,10 @@ public final class Advisor {
 
         // vos.max, the drift held at the closest part's (its figure, or the bound the engine used for it)
         double dT = stage.deltaT();
-        dev.ampsieve.catalog.Spread drift = p.vosDrift().max() != null || p.vosDrift().typ() != null ? p.vosDrift()
-                : new dev.ampsieve.catalog.Spread(null, v.driftBound(dT), null);
+        dev.ampsieve.catalog.Spread drift =
+                p.vosDrift().max() != null || p.vosDrift().typ() != null
+                        ? p.vosDrift()
+                        : new dev.ampsieve.catalog.Spread(null, v.driftBound(dT), null);
         target(fits, x -> PartEdit.withVos(p, x, drift), v.vos().bound(), VOS_FLOOR)
                 .ifPresent(x -> out.add(new PartTarget(PartTarget.Quantity.VOS, x, Double.NaN)));
 
@@ -917,7 +1043,11 @@ public final class Advisor {
 
         // operating point: a cooler package, when the stage's load heats the die
         if (stage.loadResistance() != null && stage.supplyVoltage() != null) {
-            target(fits, x -> PartEdit.withThetaJa(p, x), v.operating().thetaJa().bound(), THETA_FLOOR)
+            target(
+                            fits,
+                            x -> PartEdit.withThetaJa(p, x),
+                            v.operating().thetaJa().bound(),
+                            THETA_FLOOR)
                     .ifPresent(x -> out.add(new PartTarget(PartTarget.Quantity.THETA_JA, x, Double.NaN)));
         }
         return out;
@@ -928,8 +1058,8 @@ public final class Advisor {
      * when the part's own value already fits with the edit (the figure is not what stops it), or
      * when not even the floor does.
      */
-    private static java.util.OptionalDouble target(Predicate<Part> fits, java.util.function.DoubleFunction<Part> edit,
-            double now, double floor) {
+    private static java.util.OptionalDouble target(
+            Predicate<Part> fits, java.util.function.DoubleFunction<Part> edit, double now, double floor) {
         if (!(now > floor) || !Double.isFinite(now) || fits.test(edit.apply(now)) || !fits.test(edit.apply(floor))) {
             return java.util.OptionalDouble.empty();
         }
@@ -991,7 +1121,8 @@ public final class Advisor {
             n.changes().forEach(ch -> lines.add("  - " + ch.text()));
         }
         if (!n.targets().isEmpty()) {
-            lines.add("A part would fit the stage as it is with any one of these figures, the rest as " + c.id() + "'s:");
+            lines.add(
+                    "A part would fit the stage as it is with any one of these figures, the rest as " + c.id() + "'s:");
             Stage stage = c.budget().stage();
             n.targets().forEach(t -> lines.add("  - " + Phrases.target(t, stage)));
         }

@@ -9,11 +9,11 @@ import java.util.function.DoublePredicate;
  * actually tried and fitted.
  */
 final class Bisection {
-    private Bisection() {
-    }
+    private Bisection() {}
 
     /** Relative width at which to stop: far finer than the 3 digits reported. */
     static final double REL_TOL = 1e-4;
+
     static final int MAX_STEPS = 40;
 
     /** The largest x in [fitting, failing] that fits; {@code fits(fitting)} must hold, {@code fits(failing)} not. */

@@ -2,8 +2,8 @@ package dev.ampsieve.advice;
 
 import dev.ampsieve.budget.Budget;
 import dev.ampsieve.budget.BudgetCalculator;
-import dev.ampsieve.budget.YieldResult;
 import dev.ampsieve.budget.Verdict;
+import dev.ampsieve.budget.YieldResult;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.stage.Stage;
@@ -63,7 +63,9 @@ public record Candidate(Part part, Budget budget, boolean trimmed, double effect
     public static Candidate of(Budget b) {
         Stage s = b.stage();
         double untrimmed = total(s.criterion(), b.worstCaseV(), b.rssV());
-        double after = b.trimmed() == null ? Double.NaN : total(s.criterion(), b.trimmed().worstCaseV(), b.trimmed().rssV());
+        double after = b.trimmed() == null
+                ? Double.NaN
+                : total(s.criterion(), b.trimmed().worstCaseV(), b.trimmed().rssV());
         return switch (b.verdict()) {
             case FITS -> untrimmed(b, untrimmed);
             case FITS_AFTER_TRIM -> trimmed(b, after);
@@ -85,15 +87,22 @@ public record Candidate(Part part, Budget budget, boolean trimmed, double effect
 
     /** The part with the stage's trim applied, whatever its verdict (used to weigh a trim not yet allowed). */
     public static Candidate withTrim(Budget b) {
-        return trimmed(b, total(b.stage().criterion(), b.trimmed().worstCaseV(), b.trimmed().rssV()));
+        return trimmed(
+                b,
+                total(
+                        b.stage().criterion(),
+                        b.trimmed().worstCaseV(),
+                        b.trimmed().rssV()));
     }
 
     private static Candidate untrimmed(Budget b, double error) {
-        return new Candidate(b.part(), b, false, price(b.part(), b.stage().quantity()), error, marginOf(b, b.yield(), error));
+        return new Candidate(
+                b.part(), b, false, price(b.part(), b.stage().quantity()), error, marginOf(b, b.yield(), error));
     }
 
     private static Candidate trimmed(Budget b, double error) {
-        double cost = price(b.part(), b.stage().quantity()) + StageEdit.trim(b.stage()).cost();
+        double cost = price(b.part(), b.stage().quantity())
+                + StageEdit.trim(b.stage()).cost();
         YieldResult y = b.trimmed() == null ? null : b.trimmed().yield();
         if (y == null && b.stage().criterion().kind() == Criterion.Kind.YIELD) {
             // a trim the stage does not allow was not simulated with the budget: simulate it for its margin

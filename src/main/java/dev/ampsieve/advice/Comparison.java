@@ -1,7 +1,6 @@
 package dev.ampsieve.advice;
 
 import static dev.ampsieve.advice.Phrases.money;
-import static dev.ampsieve.advice.Phrases.percent;
 import static dev.ampsieve.advice.Phrases.volts;
 
 import dev.ampsieve.budget.Budget;
@@ -30,9 +29,8 @@ public record Comparison(Candidate a, Candidate b, List<TermDelta> terms, String
      * @param differenceV how much smaller the better one is, output volts
      * @param ratio       larger / smaller (infinite when the smaller is 0; 1 when equal)
      */
-    public record TermDelta(String key, String label, double aV, double bV, String better, double differenceV,
-            double ratio) {
-    }
+    public record TermDelta(
+            String key, String label, double aV, double bV, String better, double differenceV, double ratio) {}
 
     /** Cost differences below half a cent count as equal. */
     static final double COST_EPS = 0.005;
@@ -93,21 +91,23 @@ public record Comparison(Candidate a, Candidate b, List<TermDelta> terms, String
             Candidate o = p == a ? b : a;
             double d = o.effectiveCost() - p.effectiveCost();
             if (preferred == null) {
-                return "Both fit at the same cost with the same margin (" + Phrases.marginValue(a) + "): either will do.";
+                return "Both fit at the same cost with the same margin (" + Phrases.marginValue(a)
+                        + "): either will do.";
             }
             if (Math.abs(d) < COST_EPS) {
                 return "Both fit at the same cost; " + p.id() + " has the larger margin (" + Phrases.marginValue(p)
                         + " against " + Phrases.marginValue(o) + "): " + p.id() + ".";
             }
             return "Both fit; " + p.id() + " costs " + money(d, p.currency()) + " less per unit ("
-                    + money(d * q, p.currency()) + " over " + q + " units), margin " + Phrases.marginValue(p) + " against "
+                    + money(d * q, p.currency()) + " over " + q + " units), margin " + Phrases.marginValue(p)
+                    + " against "
                     + Phrases.marginValue(o) + ": " + p.id() + ".";
         }
         if (a.fits() || b.fits()) {
             Candidate p = a.fits() ? a : b;
             Candidate o = p == a ? b : a;
-            return p.id() + " fits" + (p.trimmed() ? " after the trim" : "") + " (margin " + Phrases.marginValue(p) + ") and "
-                    + o.id() + " does not (" + whyNot(o) + "): " + p.id() + ".";
+            return p.id() + " fits" + (p.trimmed() ? " after the trim" : "") + " (margin " + Phrases.marginValue(p)
+                    + ") and " + o.id() + " does not (" + whyNot(o) + "): " + p.id() + ".";
         }
         if (preferred == null) {
             return "Neither fits (" + a.id() + ": " + whyNot(a) + "; " + b.id() + ": " + whyNot(b) + ").";
@@ -122,7 +122,8 @@ public record Comparison(Candidate a, Candidate b, List<TermDelta> terms, String
         if (!c.constraintsMet()) {
             return Rejected.of(c.budget()).reason();
         }
-        if (c.budget().stage().criterion().kind() == dev.ampsieve.stage.Criterion.Kind.YIELD && Phrases.yieldOf(c) != null) {
+        if (c.budget().stage().criterion().kind() == dev.ampsieve.stage.Criterion.Kind.YIELD
+                && Phrases.yieldOf(c) != null) {
             // judged by the yield: an error total inside the limit would not say why it misses
             return Phrases.yieldText(c) + Phrases.limitedBy(c);
         }

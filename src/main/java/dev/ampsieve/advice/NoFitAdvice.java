@@ -14,8 +14,8 @@ import java.util.List;
  * @param targets      part-side figures (IB, vos, drift), each alone enough with the rest of the
  *                     closest part, each re-checked through the budget
  */
-public record NoFitAdvice(Candidate closest, String limitingTerm, double limitingV, List<Change> changes,
-        List<PartTarget> targets) {
+public record NoFitAdvice(
+        Candidate closest, String limitingTerm, double limitingV, List<Change> changes, List<PartTarget> targets) {
     public NoFitAdvice {
         changes = List.copyOf(changes);
         targets = List.copyOf(targets);

@@ -9,8 +9,7 @@ import java.util.List;
  * without a price take no part.
  */
 public final class Pareto {
-    private Pareto() {
-    }
+    private Pareto() {}
 
     public static List<Candidate> front(List<Candidate> candidates) {
         List<Candidate> priced = candidates.stream()
@@ -18,14 +17,16 @@ public final class Pareto {
                 .toList();
         return priced.stream()
                 .filter(c -> priced.stream().noneMatch(d -> dominates(d, c)))
-                .sorted(Comparator.comparingDouble(Candidate::effectiveCost).thenComparing(Candidate::errorV)
+                .sorted(Comparator.comparingDouble(Candidate::effectiveCost)
+                        .thenComparing(Candidate::errorV)
                         .thenComparing(Candidate::id))
                 .toList();
     }
 
     /** d is no worse than c in both and better in one (exact comparisons: ties are not domination). */
     static boolean dominates(Candidate d, Candidate c) {
-        return d.effectiveCost() <= c.effectiveCost() && d.errorV() <= c.errorV()
+        return d.effectiveCost() <= c.effectiveCost()
+                && d.errorV() <= c.errorV()
                 && (d.effectiveCost() < c.effectiveCost() || d.errorV() < c.errorV());
     }
 }

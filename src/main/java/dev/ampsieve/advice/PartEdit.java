@@ -11,8 +11,7 @@ import dev.ampsieve.catalog.Spread;
  * absent figure (never flattering) apply to them.
  */
 final class PartEdit {
-    private PartEdit() {
-    }
+    private PartEdit() {}
 
     /** A typical value no larger than the new maximum (the Monte Carlo reads typ as a sigma floor). */
     private static Double cappedTyp(Double typ, double max) {
@@ -50,19 +49,81 @@ final class PartEdit {
 
     /** The part with its junction-to-ambient thermal resistance replaced (a cooler package). */
     static Part withThetaJa(Part p, double thetaJa) {
-        return new Part(p.id(), p.title(), p.architecture(), p.input(), p.factoryTrim(), p.nullPins(), p.channels(),
-                p.packages(), p.tags(), p.price(), p.supply(), p.temperature(), p.vos(), p.vosDrift(), p.ib(), p.ios(), p.cmrr(),
-                p.psrr(), p.aol(), p.gbw(), p.slew(), p.noise(), p.longTermDrift(), p.inputHeadroom(), p.outputHeadroom(),
-                p.choppingFrequency(), p.quiescentCurrent(), p.inputCapacitance(),
-                p.testConditions(), p.inputCrossover(), thetaJa, p.choppingRipple(), p.source(), p.notes(), p.where());
+        return new Part(
+                p.id(),
+                p.title(),
+                p.architecture(),
+                p.input(),
+                p.factoryTrim(),
+                p.nullPins(),
+                p.channels(),
+                p.packages(),
+                p.tags(),
+                p.price(),
+                p.supply(),
+                p.temperature(),
+                p.vos(),
+                p.vosDrift(),
+                p.ib(),
+                p.ios(),
+                p.cmrr(),
+                p.psrr(),
+                p.aol(),
+                p.gbw(),
+                p.slew(),
+                p.noise(),
+                p.longTermDrift(),
+                p.inputHeadroom(),
+                p.outputHeadroom(),
+                p.choppingFrequency(),
+                p.quiescentCurrent(),
+                p.inputCapacitance(),
+                p.testConditions(),
+                p.inputCrossover(),
+                thetaJa,
+                p.choppingRipple(),
+                p.source(),
+                p.notes(),
+                p.where());
     }
 
     /** The part with its four DC figures replaced (tests derive parts with an over-temperature figure through it). */
     static Part copy(Part p, Spread vos, Spread drift, Spread ib, Spread ios) {
-        return new Part(p.id(), p.title(), p.architecture(), p.input(), p.factoryTrim(), p.nullPins(), p.channels(),
-                p.packages(), p.tags(), p.price(), p.supply(), p.temperature(), vos, drift, ib, ios, p.cmrr(), p.psrr(),
-                p.aol(), p.gbw(), p.slew(), p.noise(), p.longTermDrift(), p.inputHeadroom(), p.outputHeadroom(),
-                p.choppingFrequency(), p.quiescentCurrent(), p.inputCapacitance(),
-                p.testConditions(), p.inputCrossover(), p.thetaJa(), p.choppingRipple(), p.source(), p.notes(), p.where());
+        return new Part(
+                p.id(),
+                p.title(),
+                p.architecture(),
+                p.input(),
+                p.factoryTrim(),
+                p.nullPins(),
+                p.channels(),
+                p.packages(),
+                p.tags(),
+                p.price(),
+                p.supply(),
+                p.temperature(),
+                vos,
+                drift,
+                ib,
+                ios,
+                p.cmrr(),
+                p.psrr(),
+                p.aol(),
+                p.gbw(),
+                p.slew(),
+                p.noise(),
+                p.longTermDrift(),
+                p.inputHeadroom(),
+                p.outputHeadroom(),
+                p.choppingFrequency(),
+                p.quiescentCurrent(),
+                p.inputCapacitance(),
+                p.testConditions(),
+                p.inputCrossover(),
+                p.thetaJa(),
+                p.choppingRipple(),
+                p.source(),
+                p.notes(),
+                p.where());
     }
 }

@@ -7,14 +7,14 @@ import java.util.Locale;
 
 /** Numbers in words, the same way in every sentence of the advice. */
 final class Phrases {
-    private Phrases() {
-    }
+    private Phrases() {}
 
     static String money(double amount, String currency) {
         if (Double.isNaN(amount)) {
             return "no price";
         }
-        return String.format(Locale.ROOT, "%.2f", amount) + (currency == null || currency.isEmpty() ? "" : " " + currency);
+        return String.format(Locale.ROOT, "%.2f", amount)
+                + (currency == null || currency.isEmpty() ? "" : " " + currency);
     }
 
     static String volts(double v) {
@@ -50,9 +50,11 @@ final class Phrases {
     /** How a candidate stands against the limit: "worst-case 1.20 mV of 2.00 mV (margin 40 %)". */
     static String standing(Candidate c) {
         Criterion crit = c.budget().stage().criterion();
-        String s = totalName(crit) + (c.trimmed() ? " after the trim " : " ") + volts(c.errorV()) + " of " + volts(c.limitV());
+        String s = totalName(crit) + (c.trimmed() ? " after the trim " : " ") + volts(c.errorV()) + " of "
+                + volts(c.limitV());
         if (crit.kind() == Criterion.Kind.YIELD) {
-            // the margin of a yield criterion is the yield's, never the RSS figure's; after a trim only the yield after it applies
+            // the margin of a yield criterion is the yield's, never the RSS figure's; after a trim only the yield after
+            // it applies
             if (yieldOf(c) != null) {
                 s = yieldText(c) + " (" + margin(crit, c.margin()) + "), " + s;
             }
@@ -76,7 +78,9 @@ final class Phrases {
 
     /** A candidate's margin as a number: "40 %" of the limit, or "+0.05 %" of yield under a yield criterion. */
     static String marginValue(Candidate c) {
-        return c.budget().stage().criterion().kind() == Criterion.Kind.YIELD ? yieldMargin(c.margin()) : percent(c.margin());
+        return c.budget().stage().criterion().kind() == Criterion.Kind.YIELD
+                ? yieldMargin(c.margin())
+                : percent(c.margin());
     }
 
     /** "+0.05 %", "-0.12 %": points of yield to 0.01 (0.0001 below 0.01), rounded down. */
@@ -98,7 +102,11 @@ final class Phrases {
             return "";
         }
         return "; resting on estimated or typical-only figures for "
-                + String.join(", ", c.estimatedTerms().stream().map(dev.ampsieve.budget.TermResult::label).toList());
+                + String.join(
+                        ", ",
+                        c.estimatedTerms().stream()
+                                .map(dev.ampsieve.budget.TermResult::label)
+                                .toList());
     }
 
     /**
@@ -111,8 +119,11 @@ final class Phrases {
         if (t == null) {
             return "";
         }
-        String where = t.kind() == dev.ampsieve.budget.TermKind.OPERATING_POINT ? ", an operating-point term: " + lever(t.key()) : "";
-        return (c.trimmed() ? ", largest term before the trim " : ", limited by ") + t.label() + " (" + volts(t.outputV()) + where + ")";
+        String where = t.kind() == dev.ampsieve.budget.TermKind.OPERATING_POINT
+                ? ", an operating-point term: " + lever(t.key())
+                : "";
+        return (c.trimmed() ? ", largest term before the trim " : ", limited by ") + t.label() + " ("
+                + volts(t.outputV()) + where + ")";
     }
 
     /** The lever of an operating-point term, in words (no numbers: the changes below give those). */
@@ -120,7 +131,8 @@ final class Phrases {
         return switch (key) {
             case "self-heating" -> "a cooler part (lower quiescent power or theta-ja) or a higher load resistance";
             case "chopping-ripple" -> "a stage filter that removes the ripple, or a part with less ripple";
-            case "operating-point" -> "a part whose datasheet table is nearer this supply and common mode, or better PSRR and CMRR";
+            case "operating-point" ->
+                "a part whose datasheet table is nearer this supply and common mode, or better PSRR and CMRR";
             case "input-crossover" -> "keep the common mode clear of the crossover, or a part without one";
             default -> "where the part runs";
         };
@@ -128,27 +140,33 @@ final class Phrases {
 
     /** The yield the candidate is judged by: after the trim when its figures include one; null when not simulated. */
     static dev.ampsieve.budget.YieldResult yieldOf(Candidate c) {
-        return c.trimmed() ? (c.budget().trimmed() == null ? null : c.budget().trimmed().yield()) : c.budget().yield();
+        return c.trimmed()
+                ? (c.budget().trimmed() == null ? null : c.budget().trimmed().yield())
+                : c.budget().yield();
     }
 
     /** "yield 99.71 % (95 % interval from 99.62 %; target 99.0 %)"; "yield after the trim ..." for trimmed figures. */
     static String yieldText(Candidate c) {
         var y = yieldOf(c);
         return "yield " + (c.trimmed() ? "after the trim " : "") + yieldPercent(y.value()) + " (95 % interval from "
-                + yieldPercent(y.low()) + "; target " + percentFine(c.budget().stage().criterion().yieldTarget()) + ")";
+                + yieldPercent(y.low()) + "; target "
+                + percentFine(c.budget().stage().criterion().yieldTarget()) + ")";
     }
 
     /** "IB ≤ 12.3 pA at 70 °C (IOS counted equal to it)", "vos.max ≤ 25.0 µV", "drift ≤ 0.250 µV/°C". */
     static String target(PartTarget t, dev.ampsieve.stage.Stage stage) {
         return switch (t.quantity()) {
-            case IB -> "IB ≤ " + Units.format(t.value(), Dimension.CURRENT)
-                    + (Double.isNaN(t.atC()) ? " from " + celsius(stage.tMin()) + " to " + celsius(stage.tMax())
-                            : " at " + celsius(t.atC()))
-                    + " (IOS counted equal to it)";
+            case IB ->
+                "IB ≤ " + Units.format(t.value(), Dimension.CURRENT)
+                        + (Double.isNaN(t.atC())
+                                ? " from " + celsius(stage.tMin()) + " to " + celsius(stage.tMax())
+                                : " at " + celsius(t.atC()))
+                        + " (IOS counted equal to it)";
             case VOS -> "vos.max ≤ " + volts(t.value()) + " at 25 °C (drift as now)";
             case DRIFT -> "drift ≤ " + Units.format(t.value(), Dimension.VOLTAGE_DRIFT);
-            case THETA_JA -> "theta-ja ≤ " + Units.format(t.value(), Dimension.THERMAL_RESISTANCE)
-                    + " (a cooler package, or more copper under it)";
+            case THETA_JA ->
+                "theta-ja ≤ " + Units.format(t.value(), Dimension.THERMAL_RESISTANCE)
+                        + " (a cooler package, or more copper under it)";
         };
     }
 

@@ -11,16 +11,14 @@ import java.util.List;
 
 /** Budgets every part for a stage and ranks the result. Pure: no printing, no files. */
 public final class Ranker {
-    private Ranker() {
-    }
+    private Ranker() {}
 
     /**
      * Fitting candidates first, by effective unit cost (no price last), then by margin, then
      * by id; then the undecided parts (a yield whose interval still holds the target), then the
      * parts that do not fit, each closest (largest margin) first.
      */
-    public static final Comparator<Candidate> ORDER = Comparator
-            .comparingInt(Ranker::group)
+    public static final Comparator<Candidate> ORDER = Comparator.comparingInt(Ranker::group)
             .thenComparing((a, b) -> a.fits() ? Double.compare(a.effectiveCost(), b.effectiveCost()) : 0)
             .thenComparing(Comparator.comparingDouble(Candidate::margin).reversed())
             .thenComparing((a, b) -> Double.compare(a.effectiveCost(), b.effectiveCost()))

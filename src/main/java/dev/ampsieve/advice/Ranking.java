@@ -11,8 +11,8 @@ import java.util.List;
  *                   margin; then undecided parts, then parts that do not fit, each closest first
  * @param pareto     the candidates on the Pareto front, cheapest first
  */
-public record Ranking(Stage stage, List<Candidate> candidates, List<Rejected> rejected, List<Candidate> pareto,
-        Advice advice) {
+public record Ranking(
+        Stage stage, List<Candidate> candidates, List<Rejected> rejected, List<Candidate> pareto, Advice advice) {
     public Ranking {
         candidates = List.copyOf(candidates);
         rejected = List.copyOf(rejected);

@@ -23,16 +23,22 @@ public record Rejected(Part part, Budget budget, String reason) {
 
     /** The first failed constraint in full, the others by name: one line for a table. */
     public String shortReason() {
-        List<ConstraintResult> failed = budget.constraints().stream().filter(c -> !c.ok()).toList();
+        List<ConstraintResult> failed =
+                budget.constraints().stream().filter(c -> !c.ok()).toList();
         if (failed.size() <= 1) {
             return reason;
         }
         return failed.get(0).name() + ": " + failed.get(0).detail() + "; also "
-                + failed.subList(1, failed.size()).stream().map(ConstraintResult::name).collect(Collectors.joining(", "));
+                + failed.subList(1, failed.size()).stream()
+                        .map(ConstraintResult::name)
+                        .collect(Collectors.joining(", "));
     }
 
     /** Names of the failed constraints. */
     public List<String> failed() {
-        return budget.constraints().stream().filter(c -> !c.ok()).map(ConstraintResult::name).toList();
+        return budget.constraints().stream()
+                .filter(c -> !c.ok())
+                .map(ConstraintResult::name)
+                .toList();
     }
 }

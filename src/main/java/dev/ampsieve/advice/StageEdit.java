@@ -7,8 +7,7 @@ import dev.ampsieve.stage.Trim;
 
 /** Copies of a stage with one thing changed, for "what would make it fit" searches. */
 final class StageEdit {
-    private StageEdit() {
-    }
+    private StageEdit() {}
 
     static Stage withLoadResistance(Stage s, double ohms) {
         return s.toBuilder().loadResistance(ohms).build();
@@ -82,21 +81,33 @@ final class StageEdit {
 
     /** Resistor ratio tolerance and tempco both scaled by {@code k}. */
     static Stage withResistors(Stage s, double k) {
-        return s.toBuilder().ratioTolerance(s.ratioTolerance() * k).ratioTempco(s.ratioTempco() * k).build();
+        return s.toBuilder()
+                .ratioTolerance(s.ratioTolerance() * k)
+                .ratioTempco(s.ratioTempco() * k)
+                .build();
     }
 
     /** The board's thermal-EMF gradient changed. */
     static Stage withGradient(Stage s, double gradient) {
         dev.ampsieve.stage.Board b = s.board();
-        return s.toBuilder().board(new dev.ampsieve.stage.Board(b.junctions(), b.seebeck(), gradient, b.leakageResistance(),
-                b.leakageVoltage(), b.leakageInput())).build();
+        return s.toBuilder()
+                .board(new dev.ampsieve.stage.Board(
+                        b.junctions(),
+                        b.seebeck(),
+                        gradient,
+                        b.leakageResistance(),
+                        b.leakageVoltage(),
+                        b.leakageInput()))
+                .build();
     }
 
     /** The board's leakage resistance changed. */
     static Stage withLeakageResistance(Stage s, double ohms) {
         dev.ampsieve.stage.Board b = s.board();
-        return s.toBuilder().board(new dev.ampsieve.stage.Board(b.junctions(), b.seebeck(), b.gradient(), ohms,
-                b.leakageVoltage(), b.leakageInput())).build();
+        return s.toBuilder()
+                .board(new dev.ampsieve.stage.Board(
+                        b.junctions(), b.seebeck(), b.gradient(), ohms, b.leakageVoltage(), b.leakageInput()))
+                .build();
     }
 
     static Stage withCriterion(Stage s, Criterion criterion) {

@@ -29,26 +29,52 @@ public record Sufficiency(boolean yes, Budget budget, double untrimmedErrorV, do
                     + "), " + figure;
         }
         if (!b.constraintsMet()) {
-            return new Sufficiency(false, b, err, margin,
+            return new Sufficiency(
+                    false,
+                    b,
+                    err,
+                    margin,
                     "no: " + id + " fails a hard constraint: " + Rejected.of(b).reason());
         }
         if (b.verdict() == Verdict.FITS) {
-            return new Sufficiency(true, b, err, margin, "yes: " + id + " meets the limit untrimmed; " + figure
-                    + " (" + Phrases.margin(crit, margin) + ").");
+            return new Sufficiency(
+                    true,
+                    b,
+                    err,
+                    margin,
+                    "yes: " + id + " meets the limit untrimmed; " + figure + " (" + Phrases.margin(crit, margin)
+                            + ").");
         }
         TermResult t = b.limitingTerm() == null ? null : b.term(b.limitingTerm());
         String limited = t == null ? "" : ", limited by " + t.label() + " (" + volts(t.outputV()) + ")";
         if (b.verdict() == Verdict.FITS_AFTER_TRIM) {
-            double after = Candidate.total(crit, b.trimmed().worstCaseV(), b.trimmed().rssV());
-            return new Sufficiency(false, b, err, margin, "no: " + id + " needs the trim; untrimmed " + figure + limited
-                    + "; after the trim " + volts(after) + ".");
+            double after =
+                    Candidate.total(crit, b.trimmed().worstCaseV(), b.trimmed().rssV());
+            return new Sufficiency(
+                    false,
+                    b,
+                    err,
+                    margin,
+                    "no: " + id + " needs the trim; untrimmed " + figure + limited + "; after the trim " + volts(after)
+                            + ".");
         }
         if (b.verdict() == Verdict.UNDECIDED && b.yield().high() >= crit.yieldTarget()) {
             // not shown met: the answer to "does it suffice" is no, and why is the sampling, not a refutation
-            return new Sufficiency(false, b, err, margin, "no: " + id + " is undecided untrimmed: after " + b.yield().trials()
-                    + " simulated units the 95 % interval of its yield still holds the target; " + figure + limited + ".");
+            return new Sufficiency(
+                    false,
+                    b,
+                    err,
+                    margin,
+                    "no: " + id + " is undecided untrimmed: after " + b.yield().trials()
+                            + " simulated units the 95 % interval of its yield still holds the target; " + figure
+                            + limited + ".");
         }
-        return new Sufficiency(false, b, err, margin, "no: " + id + " does not meet the limit untrimmed; " + figure
-                + (margin < 0 ? " (" + Phrases.margin(crit, margin) + ")" : "") + limited + ".");
+        return new Sufficiency(
+                false,
+                b,
+                err,
+                margin,
+                "no: " + id + " does not meet the limit untrimmed; " + figure
+                        + (margin < 0 ? " (" + Phrases.margin(crit, margin) + ")" : "") + limited + ".");
     }
 }

@@ -17,8 +17,14 @@ import dev.ampsieve.stats.Wilson;
  *                      when the yield seen is the target itself
  * @param trimAllowed   the stage already allows a trim
  */
-public record Unsettled(Candidate candidate, YieldResult yield, boolean trimmed, double target, int cap,
-        long unitsToSettle, boolean trimAllowed) {
+public record Unsettled(
+        Candidate candidate,
+        YieldResult yield,
+        boolean trimmed,
+        double target,
+        int cap,
+        long unitsToSettle,
+        boolean trimAllowed) {
 
     /**
      * Units n at which the 95 % interval around a yield p stops holding the target t: its

@@ -14,15 +14,25 @@ import java.util.List;
  *                       standard part cheaper than it that would fit with better resistors, and
  *                       the resistors it needs; null when there is none
  */
-public record ZeroDriftAdvice(Status status, Candidate selfCorrecting, Candidate standard, double savingPerUnit,
-        double savingTotal, List<String> caveats, ResistorOption resistorOption) {
+public record ZeroDriftAdvice(
+        Status status,
+        Candidate selfCorrecting,
+        Candidate standard,
+        double savingPerUnit,
+        double savingTotal,
+        List<String> caveats,
+        ResistorOption resistorOption) {
 
     /** A standard part and the change of resistors ({@link Change.Kind#BETTER_RESISTORS}) that lets it fit. */
-    public record ResistorOption(Candidate part, Change change) {
-    }
+    public record ResistorOption(Candidate part, Change change) {}
 
-    public ZeroDriftAdvice(Status status, Candidate selfCorrecting, Candidate standard, double savingPerUnit,
-            double savingTotal, List<String> caveats) {
+    public ZeroDriftAdvice(
+            Status status,
+            Candidate selfCorrecting,
+            Candidate standard,
+            double savingPerUnit,
+            double savingTotal,
+            List<String> caveats) {
         this(status, selfCorrecting, standard, savingPerUnit, savingTotal, caveats, null);
     }
 
@@ -36,7 +46,10 @@ public record ZeroDriftAdvice(Status status, Candidate selfCorrecting, Candidate
     }
 
     public enum Status {
-        ONLY_OPTION("only-option"), CHEAPER("cheaper"), NOT_WARRANTED("not-warranted"), NONE_FITS("none-fits");
+        ONLY_OPTION("only-option"),
+        CHEAPER("cheaper"),
+        NOT_WARRANTED("not-warranted"),
+        NONE_FITS("none-fits");
 
         private final String key;
 

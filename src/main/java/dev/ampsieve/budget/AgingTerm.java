@@ -51,13 +51,14 @@ public final class AgingTerm implements ErrorTerm {
         LongTermDrift d = v.part().longTermDrift();
         String note;
         if (a.basis() == Basis.ESTIMATED) {
-            note = "NG x " + Units.format(a.bound(), Dimension.VOLTAGE) + " over "
-                    + Units.format(life, Dimension.TIME) + " (estimated: no long-term drift figure in the catalog)";
+            note = "NG x " + Units.format(a.bound(), Dimension.VOLTAGE) + " over " + Units.format(life, Dimension.TIME)
+                    + " (estimated: no long-term drift figure in the catalog)";
         } else {
             note = "NG x " + Units.format(s.maxToSigma(), Dimension.NUMBER) + " x "
                     + Units.format(d.value(), Dimension.VOLTAGE) + " per "
                     + Units.format(d.per(), Dimension.TIME) + " x sqrt(" + Units.format(life, Dimension.TIME)
-                    + " / " + Units.format(d.per(), Dimension.TIME) + ") (random walk; max-to-sigma x the typical figure)";
+                    + " / " + Units.format(d.per(), Dimension.TIME)
+                    + ") (random walk; max-to-sigma x the typical figure)";
         }
         return ErrorTerm.result(this, s, out, Double.NaN, a.basis().uncertain() && out > 0, note);
     }

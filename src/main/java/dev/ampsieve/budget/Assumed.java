@@ -22,8 +22,7 @@ import dev.ampsieve.units.PhysicalConstants;
  * </pre>
  */
 final class Assumed {
-    private Assumed() {
-    }
+    private Assumed() {}
 
     /** Common-mode rejection when none is given: 60 dB, below any general-purpose datasheet minimum we know of [from memory]. */
     static final double CMRR_DB = 60.0;

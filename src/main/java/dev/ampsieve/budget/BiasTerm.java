@@ -96,9 +96,11 @@ public final class BiasTerm implements ErrorTerm {
         DcModel m = DcModel.of(s);
         double dIb;
         double dIos;
-        dIb = ibShaped(v) ? line.deviation(v::ibAt, ibKnee(v), s.tMin(), s.tMax())
+        dIb = ibShaped(v)
+                ? line.deviation(v::ibAt, ibKnee(v), s.tMin(), s.tMax())
                 : shapeFree(v::ibAt, v.biasSignKnown(), line, s);
-        dIos = iosShaped(v) ? line.deviation(v::iosAt, iosKnee(v), s.tMin(), s.tMax())
+        dIos = iosShaped(v)
+                ? line.deviation(v::iosAt, iosKnee(v), s.tMin(), s.tMax())
                 : shapeFree(v::iosAt, false, line, s);
         return m.currentBound(dIb, dIos);
     }
@@ -128,7 +130,8 @@ public final class BiasTerm implements ErrorTerm {
     }
 
     /** The bipolar rule above: the largest |I(T) - w1 I(cold) - w2 I(hot)| with each reading only bounded. */
-    static double shapeFree(java.util.function.DoubleUnaryOperator hi, boolean signKnown, CalibrationLine line, Stage s) {
+    static double shapeFree(
+            java.util.function.DoubleUnaryOperator hi, boolean signKnown, CalibrationLine line, Stage s) {
         double worst = 0;
         double hiC = hi.applyAsDouble(line.cold());
         double hiH = hi.applyAsDouble(line.hot());
@@ -165,12 +168,17 @@ public final class BiasTerm implements ErrorTerm {
         double hi = magnitude(s, v.ibAt(s.tMax()), v.iosAt(s.tMax()));
         double out = Math.max(lo, hi);
         double at = hi >= lo ? s.tMax() : s.tMin();
-        boolean dependsOnT = v.ibFactor(s.tMin()) != 1.0 || v.ibFactor(s.tMax()) != 1.0
-                || v.iosFactor(s.tMin()) != 1.0 || v.iosFactor(s.tMax()) != 1.0;
+        boolean dependsOnT = v.ibFactor(s.tMin()) != 1.0
+                || v.ibFactor(s.tMax()) != 1.0
+                || v.iosFactor(s.tMin()) != 1.0
+                || v.iosFactor(s.tMax()) != 1.0;
         String note = "ib " + Units.format(v.ibAt(at), Dimension.CURRENT) + ", ios "
                 + Units.format(v.iosAt(at), Dimension.CURRENT)
-                + (dependsOnT ? " at " + Units.format(at, Dimension.TEMPERATURE) : " (25 °C limits hold over the range)")
-                + "; R+ " + Units.format(s.rPlus(), Dimension.RESISTANCE) + ", Rf " + Units.format(s.rf(), Dimension.RESISTANCE);
+                + (dependsOnT
+                        ? " at " + Units.format(at, Dimension.TEMPERATURE)
+                        : " (25 °C limits hold over the range)")
+                + "; R+ " + Units.format(s.rPlus(), Dimension.RESISTANCE) + ", Rf "
+                + Units.format(s.rf(), Dimension.RESISTANCE);
         if (v.ib().basis() == Basis.ESTIMATED) {
             note += " (ib estimated: not in the catalog)";
         }

@@ -18,24 +18,43 @@ import java.util.Set;
  * Pure and deterministic: the same stage (with its seed) and part give the same budget.
  */
 public final class BudgetCalculator {
-    private BudgetCalculator() {
-    }
+    private BudgetCalculator() {}
 
     /** Every error term, in the order of error-model.md. Add a new term here. */
     public static final List<ErrorTerm> TERMS = List.of(
-            new OffsetTerm(), new DriftTerm(), new BiasTerm(), new CmrrTerm(), new PsrrTerm(),
-            new OpenLoopGainTerm(), new BandwidthTerm(), new ResistorTerm(), new AgingTerm(), new NoiseTerm(),
+            new OffsetTerm(),
+            new DriftTerm(),
+            new BiasTerm(),
+            new CmrrTerm(),
+            new PsrrTerm(),
+            new OpenLoopGainTerm(),
+            new BandwidthTerm(),
+            new ResistorTerm(),
+            new AgingTerm(),
+            new NoiseTerm(),
             // operating point (TermKind.OPERATING_POINT)
-            new OperatingPointTerm(), new InputCrossoverTerm(), new SelfHeatingTerm(), new ChoppingRippleTerm(),
+            new OperatingPointTerm(),
+            new InputCrossoverTerm(),
+            new SelfHeatingTerm(),
+            new ChoppingRippleTerm(),
             // board-level: 0 V unless the stage names them
-            new ThermalEmfTerm(), new LeakageTerm());
+            new ThermalEmfTerm(),
+            new LeakageTerm());
 
     /** Keys of the terms that stay at their limits in the Monte Carlo (not drawn per unit). */
     private static final Set<String> FIXED_IN_YIELD = Set.of(
-            CmrrTerm.KEY, PsrrTerm.KEY, OpenLoopGainTerm.KEY, BandwidthTerm.KEY, NoiseTerm.KEY,
+            CmrrTerm.KEY,
+            PsrrTerm.KEY,
+            OpenLoopGainTerm.KEY,
+            BandwidthTerm.KEY,
+            NoiseTerm.KEY,
             // operating point: bounds of unknown sign, held at their limits (conservative)
-            OperatingPointTerm.KEY, InputCrossoverTerm.KEY, SelfHeatingTerm.KEY, ChoppingRippleTerm.KEY,
-            ThermalEmfTerm.KEY, LeakageTerm.KEY);
+            OperatingPointTerm.KEY,
+            InputCrossoverTerm.KEY,
+            SelfHeatingTerm.KEY,
+            ChoppingRippleTerm.KEY,
+            ThermalEmfTerm.KEY,
+            LeakageTerm.KEY);
 
     /** Chopping frequency should be at least this many times the band edge (common practice). */
     static final double CHOP_MARGIN = 10.0;
@@ -73,12 +92,26 @@ public final class BudgetCalculator {
             // no Monte Carlo on numbers past the largest double: the part is refused with the terms that overflowed
             constraints.add(finite);
             YieldResult none = new YieldResult(0, 0, 0, 0, "none-pass");
-            return new Budget(part, stage, stage.noiseGain(), terms, wc, rss, noiseRms, limit, none, trimmed.withYield(none),
-                    Verdict.NO_FIT, null, constraints, List.copyOf(warnings));
+            return new Budget(
+                    part,
+                    stage,
+                    stage.noiseGain(),
+                    terms,
+                    wc,
+                    rss,
+                    noiseRms,
+                    limit,
+                    none,
+                    trimmed.withYield(none),
+                    Verdict.NO_FIT,
+                    null,
+                    constraints,
+                    List.copyOf(warnings));
         }
 
         double fixed = fixedInYield(stage, terms, false, false);
-        YieldResult yield = new YieldModel(stage, v, fixed, false, false).run(yieldTarget(stage), wcCounted(stage, terms));
+        YieldResult yield =
+                new YieldModel(stage, v, fixed, false, false).run(yieldTarget(stage), wcCounted(stage, terms));
 
         boolean constraintsOk = constraints.stream().allMatch(ConstraintResult::ok);
         if (stage.criterion().kind() == Criterion.Kind.YIELD && trimOf(stage).allowed()) {
@@ -86,7 +119,14 @@ public final class BudgetCalculator {
             trimmed = trimmed.withYield(trimmedYield(stage, v, terms));
         }
         Trimmed afterTrim = trimmed;
-        Verdict verdict = verdict(stage, wc, rss, yield, trimmed, constraintsOk, limit,
+        Verdict verdict = verdict(
+                stage,
+                wc,
+                rss,
+                yield,
+                trimmed,
+                constraintsOk,
+                limit,
                 () -> afterTrim.yield() != null ? afterTrim.yield() : trimmedYield(stage, v, terms));
 
         String limiting = null; // stays null when nothing contributes
@@ -103,8 +143,21 @@ public final class BudgetCalculator {
         }
         List<TermResult> sorted = new ArrayList<>(terms);
         sorted.sort(Comparator.comparingDouble(TermResult::outputV).reversed());
-        return new Budget(part, stage, stage.noiseGain(), sorted, wc, rss, noiseRms, limit, yield, trimmed,
-                verdict, limiting, constraints, List.copyOf(warnings));
+        return new Budget(
+                part,
+                stage,
+                stage.noiseGain(),
+                sorted,
+                wc,
+                rss,
+                noiseRms,
+                limit,
+                yield,
+                trimmed,
+                verdict,
+                limiting,
+                constraints,
+                List.copyOf(warnings));
     }
 
     /** Whether {@code t} counts toward the error: DC terms of an AC-coupled stage count only toward headroom. */
@@ -119,12 +172,20 @@ public final class BudgetCalculator {
 
     /** The kind of the term with {@code key}; {@link TermKind#PART} for a key no term has. */
     public static TermKind kindOf(String key) {
-        return TERMS.stream().filter(t -> t.key().equals(key)).findFirst().map(ErrorTerm::kind).orElse(TermKind.PART);
+        return TERMS.stream()
+                .filter(t -> t.key().equals(key))
+                .findFirst()
+                .map(ErrorTerm::kind)
+                .orElse(TermKind.PART);
     }
 
     /** Same, by key. */
     public static boolean counts(Stage stage, String key) {
-        return TERMS.stream().filter(t -> t.key().equals(key)).findFirst().map(t -> counts(stage, t)).orElse(true);
+        return TERMS.stream()
+                .filter(t -> t.key().equals(key))
+                .findFirst()
+                .map(t -> counts(stage, t))
+                .orElse(true);
     }
 
     /** The max-to-sigma values {@link #yieldBySigma} shows besides the stage's own. */
@@ -152,7 +213,8 @@ public final class BudgetCalculator {
             }
             Stage sk = stage.withMaxToSigma(k);
             PartValues v = PartValues.of(part, sk);
-            List<TermResult> terms = termsFor(sk).stream().map(t -> t.evaluate(sk, v)).toList();
+            List<TermResult> terms =
+                    termsFor(sk).stream().map(t -> t.evaluate(sk, v)).toList();
             YieldResult y = terms.stream().anyMatch(t -> !Double.isFinite(t.outputV()))
                     ? new YieldResult(0, 0, 0, 0, "none-pass") // as compute() decides for such a part
                     // the stage's trials without early stop: comparable intervals at each reading
@@ -166,7 +228,8 @@ public final class BudgetCalculator {
     /** Yield after the stage's trim (for the yield criterion), simulated with the same seed. */
     public static YieldResult trimmedYield(Stage stage, Part part) {
         PartValues v = PartValues.of(part, stage);
-        List<TermResult> terms = termsFor(stage).stream().map(t -> t.evaluate(stage, v)).toList();
+        List<TermResult> terms =
+                termsFor(stage).stream().map(t -> t.evaluate(stage, v)).toList();
         if (terms.stream().anyMatch(t -> !Double.isFinite(t.outputV()))) {
             return new YieldResult(0, 0, 0, 0, "none-pass"); // as compute() decides for such a part
         }
@@ -178,7 +241,8 @@ public final class BudgetCalculator {
         double fixed = fixedInYield(stage, terms, true, two);
         double bound = trimmed(stage, v, terms, trimOf(stage).method()).worstCaseV();
         if (trimOf(stage).method() == Trim.Method.TWO_TEMPERATURE) {
-            return new TwoTemperatureYield(stage, v, fixed, CalibrationLine.of(stage, trimOf(stage))).run(yieldTarget(stage), bound);
+            return new TwoTemperatureYield(stage, v, fixed, CalibrationLine.of(stage, trimOf(stage)))
+                    .run(yieldTarget(stage), bound);
         }
         return new YieldModel(stage, v, fixed, true, two).run(yieldTarget(stage), bound);
     }
@@ -195,7 +259,9 @@ public final class BudgetCalculator {
     }
 
     private static double yieldTarget(Stage stage) {
-        return stage.criterion().kind() == Criterion.Kind.YIELD ? stage.criterion().yieldTarget() : Double.NaN;
+        return stage.criterion().kind() == Criterion.Kind.YIELD
+                ? stage.criterion().yieldTarget()
+                : Double.NaN;
     }
 
     /**
@@ -230,7 +296,8 @@ public final class BudgetCalculator {
     /** Totals after a calibration by {@code method} at 25 °C, whatever the stage says (for comparison tables). */
     public static Trimmed trimmed(Stage stage, Part part, Trim.Method method) {
         PartValues v = PartValues.of(part, stage);
-        List<TermResult> terms = termsFor(stage).stream().map(t -> t.evaluate(stage, v)).toList();
+        List<TermResult> terms =
+                termsFor(stage).stream().map(t -> t.evaluate(stage, v)).toList();
         return trimmed(stage, v, terms, method);
     }
 
@@ -260,15 +327,17 @@ public final class BudgetCalculator {
             switch (t.key()) {
                 case OffsetTerm.KEY, OperatingPointTerm.KEY -> o = 0;
                 case DriftTerm.KEY -> o = line != null ? 0 : DriftTerm.afterTrim(stage, v);
-                case BiasTerm.KEY -> o = line != null ? BiasTerm.afterTwoTemperature(stage, v, line) : BiasTerm.afterTrim(stage, v);
+                case BiasTerm.KEY ->
+                    o = line != null ? BiasTerm.afterTwoTemperature(stage, v, line) : BiasTerm.afterTrim(stage, v);
                 case OpenLoopGainTerm.KEY -> o = two ? 0 : o;
                 case ResistorTerm.KEY -> o = two ? ResistorTerm.tempcoPart(stage) : o;
-                default -> { }
+                default -> {}
             }
             wc += o;
             sq += o * o;
         }
-        double res = trimOf(stage).resolution() * (line != null ? line.resolutionFactor(stage.tMin(), stage.tMax()) : 1.0);
+        double res =
+                trimOf(stage).resolution() * (line != null ? line.resolutionFactor(stage.tMin(), stage.tMax()) : 1.0);
         wc += res;
         sq += res * res;
         return new Trimmed(wc, Math.sqrt(sq));
@@ -280,8 +349,15 @@ public final class BudgetCalculator {
      * (demonstrated) when the lower end of the 95 % interval reaches the target, refuted when
      * its upper end is below the target, and otherwise {@link Verdict#UNDECIDED}.
      */
-    static Verdict verdict(Stage stage, double wc, double rss, YieldResult yield, Trimmed trimmed,
-            boolean constraintsOk, double limit, java.util.function.Supplier<YieldResult> trimmedYield) {
+    static Verdict verdict(
+            Stage stage,
+            double wc,
+            double rss,
+            YieldResult yield,
+            Trimmed trimmed,
+            boolean constraintsOk,
+            double limit,
+            java.util.function.Supplier<YieldResult> trimmedYield) {
         if (!constraintsOk || Double.isNaN(limit)) {
             return Verdict.NO_FIT;
         }
@@ -325,18 +401,25 @@ public final class BudgetCalculator {
         }
         double loop = part.gbw() / stage.noiseGain();
         if (stage.filterOrder() == null && loop > stage.bandHigh()) {
-            // the conservative default (NoiseModel.noiseBandEdge): say so, since a filter the user forgot to name costs noise
+            // the conservative default (NoiseModel.noiseBandEdge): say so, since a filter the user forgot to name costs
+            // noise
             w.add("band.filter-order: not given; noise is integrated to pi/2 x the closed-loop bandwidth "
-                    + Units.format(loop, Dimension.FREQUENCY) + " = " + Units.format(NoiseModel.SINGLE_POLE_ENBW * loop, Dimension.FREQUENCY)
+                    + Units.format(loop, Dimension.FREQUENCY) + " = "
+                    + Units.format(NoiseModel.SINGLE_POLE_ENBW * loop, Dimension.FREQUENCY)
                     + ", as if nothing after the amplifier limited it (a first-order filter at band.high would end it at "
                     + Units.format(NoiseModel.SINGLE_POLE_ENBW * stage.bandHigh(), Dimension.FREQUENCY)
                     + "); give the filter's order if one follows");
         }
         Trim trim = trimOf(stage);
-        if (trim.allowed() && trim.method() == Trim.Method.TWO_TEMPERATURE && (Double.isNaN(trim.cold()) || Double.isNaN(trim.hot()))) {
-            w.add("trim: two-temperature calibration at " + Units.format(trim.coldIn(stage), Dimension.TEMPERATURE) + " and "
-                    + Units.format(trim.hotIn(stage), Dimension.TEMPERATURE) + (Double.isNaN(trim.cold()) && Double.isNaN(trim.hot())
-                    ? ", the range ends (trim.cold and trim.hot not given)" : " (a calibration temperature not given is the range end)"));
+        if (trim.allowed()
+                && trim.method() == Trim.Method.TWO_TEMPERATURE
+                && (Double.isNaN(trim.cold()) || Double.isNaN(trim.hot()))) {
+            w.add("trim: two-temperature calibration at " + Units.format(trim.coldIn(stage), Dimension.TEMPERATURE)
+                    + " and "
+                    + Units.format(trim.hotIn(stage), Dimension.TEMPERATURE)
+                    + (Double.isNaN(trim.cold()) && Double.isNaN(trim.hot())
+                            ? ", the range ends (trim.cold and trim.hot not given)"
+                            : " (a calibration temperature not given is the range end)"));
         }
         if (trim.allowed() && trim.method() == Trim.Method.TWO_TEMPERATURE) {
             // the engine's per-unit offset is a straight line in temperature; a datasheet's drift figure
@@ -354,20 +437,28 @@ public final class BudgetCalculator {
                     + "chopping frequency");
             Double fc = part.choppingFrequency();
             if (fc == null) {
-                w.add(part.architecture().key() + ": chopping frequency not given; ripple cannot be checked against the band");
+                w.add(part.architecture().key()
+                        + ": chopping frequency not given; ripple cannot be checked against the band");
             } else if (stage.bandHigh() > fc / CHOP_MARGIN) {
                 w.add(part.architecture().key() + ": band edge " + Units.format(stage.bandHigh(), Dimension.FREQUENCY)
-                        + (stage.bandHigh() >= fc ? " is above the chopping frequency " : " is not far below the chopping frequency ")
+                        + (stage.bandHigh() >= fc
+                                ? " is above the chopping frequency "
+                                : " is not far below the chopping frequency ")
                         + Units.format(fc, Dimension.FREQUENCY)
                         + " (keep fH under a tenth of it): expect ripple and intermodulation in band");
             }
             if (fc != null && stage.sampleRate() != null) {
-                for (ChoppingRippleTerm.Alias a : ChoppingRippleTerm.aliases(fc, stage.sampleRate(), stage.bandHigh())) {
-                    w.add("sample-rate: " + (a.harmonic() == 1 ? "the chopping frequency " : "harmonic " + a.harmonic()
-                            + " of the chopping frequency, ") + Units.format(a.frequency(), Dimension.FREQUENCY) + ", sampled at "
+                for (ChoppingRippleTerm.Alias a :
+                        ChoppingRippleTerm.aliases(fc, stage.sampleRate(), stage.bandHigh())) {
+                    w.add("sample-rate: "
+                            + (a.harmonic() == 1
+                                    ? "the chopping frequency "
+                                    : "harmonic " + a.harmonic() + " of the chopping frequency, ")
+                            + Units.format(a.frequency(), Dimension.FREQUENCY) + ", sampled at "
                             + Units.format(stage.sampleRate(), Dimension.FREQUENCY) + " aliases to "
                             + Units.format(a.alias(), Dimension.FREQUENCY) + ", inside the band (up to "
-                            + Units.format(stage.bandHigh(), Dimension.FREQUENCY) + "): filter it out before the converter,"
+                            + Units.format(stage.bandHigh(), Dimension.FREQUENCY)
+                            + "): filter it out before the converter,"
                             + " or choose a sample rate whose multiples keep away from it");
                 }
             }

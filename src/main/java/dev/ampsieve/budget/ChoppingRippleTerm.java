@@ -30,8 +30,7 @@ public final class ChoppingRippleTerm implements ErrorTerm {
     public static final int HARMONICS = 5;
 
     /** One harmonic of the chopping frequency that a converter folds into the band. */
-    public record Alias(int harmonic, double frequency, double alias) {
-    }
+    public record Alias(int harmonic, double frequency, double alias) {}
 
     @Override
     public String key() {
@@ -109,19 +108,28 @@ public final class ChoppingRippleTerm implements ErrorTerm {
     public TermResult evaluate(Stage s, PartValues v) {
         Figure r = v.operating().choppingRipple();
         if (r.bound() == 0) {
-            return ErrorTerm.result(this, s, 0.0, Double.NaN, false,
+            return ErrorTerm.result(
+                    this,
+                    s,
+                    0.0,
+                    Double.NaN,
+                    false,
                     v.part().selfCorrecting() ? "ripple 0 V in the catalog" : "not a chopper or auto-zero part");
         }
         int n = s.noiseFilterOrder();
         double out = output(s, v, n);
         Double fc = v.part().choppingFrequency();
-        String note = "ripple " + Units.format(r.bound(), Dimension.VOLTAGE) + (r.basis() == Basis.ASSUMED ? " (assumed)" : "");
+        String note = "ripple " + Units.format(r.bound(), Dimension.VOLTAGE)
+                + (r.basis() == Basis.ASSUMED ? " (assumed)" : "");
         if (fc == null) {
             note += " x NG: chopping frequency not given, no loop or filter roll-off credited";
         } else {
-            note += " at " + Units.format(fc, Dimension.FREQUENCY) + " x |NG| " + Units.format(loopGain(s, v, fc), Dimension.NUMBER)
-                    + (n == 0 ? ", no filter" : " x |H| " + Units.format(butterworth(n, s.bandHigh(), fc), Dimension.NUMBER)
-                            + " (order " + n + " at " + Units.format(s.bandHigh(), Dimension.FREQUENCY) + ")");
+            note += " at " + Units.format(fc, Dimension.FREQUENCY) + " x |NG| "
+                    + Units.format(loopGain(s, v, fc), Dimension.NUMBER)
+                    + (n == 0
+                            ? ", no filter"
+                            : " x |H| " + Units.format(butterworth(n, s.bandHigh(), fc), Dimension.NUMBER) + " (order "
+                                    + n + " at " + Units.format(s.bandHigh(), Dimension.FREQUENCY) + ")");
         }
         return ErrorTerm.result(this, s, out, Double.NaN, r.basis().uncertain() || fc == null, note);
     }

@@ -70,18 +70,26 @@ public final class CmrrTerm implements ErrorTerm {
         double amp = amplifierPart(s, db.bound());
         String ampNote = "CMRR " + Units.format(db.bound(), Dimension.DECIBEL, 4) + basisNote(db.basis());
         return switch (s.topology()) {
-            case NON_INVERTING, INVERTING, FOLLOWER, TRANSIMPEDANCE -> ErrorTerm.result(this, s, amp, Double.NaN,
-                    db.basis().uncertain(), "dVcm " + Units.format(s.commonModeSwing(), Dimension.VOLTAGE) + ", " + ampNote);
+            case NON_INVERTING, INVERTING, FOLLOWER, TRANSIMPEDANCE ->
+                ErrorTerm.result(
+                        this,
+                        s,
+                        amp,
+                        Double.NaN,
+                        db.basis().uncertain(),
+                        "dVcm " + Units.format(s.commonModeSwing(), Dimension.VOLTAGE) + ", " + ampNote);
             case DIFFERENCE -> {
                 double res = resistorPart(s);
                 double at = s.ratioTempco() != 0 && s.deltaT() > 0 && res > 0 ? DriftTerm.farEnd(s) : Double.NaN;
-                String note = "dVcm " + Units.format(s.commonModeSwing(), Dimension.VOLTAGE) + " at the source; resistors "
-                        + Units.format(res, Dimension.VOLTAGE) + " (each pair within tol "
-                        + Units.format(s.ratioTolerance(), Dimension.RATIO) + " + tc "
-                        + Units.format(s.ratioTempco(), Dimension.RATIO_DRIFT) + " x "
-                        + Units.format(s.deltaT(), Dimension.NUMBER) + " °C); amplifier "
-                        + Units.format(amp, Dimension.VOLTAGE) + " (pins at " + Units.format(s.network().commonModeShare(),
-                        Dimension.NUMBER, 4) + " x dVcm, " + ampNote + ")";
+                String note =
+                        "dVcm " + Units.format(s.commonModeSwing(), Dimension.VOLTAGE) + " at the source; resistors "
+                                + Units.format(res, Dimension.VOLTAGE) + " (each pair within tol "
+                                + Units.format(s.ratioTolerance(), Dimension.RATIO) + " + tc "
+                                + Units.format(s.ratioTempco(), Dimension.RATIO_DRIFT) + " x "
+                                + Units.format(s.deltaT(), Dimension.NUMBER) + " °C); amplifier "
+                                + Units.format(amp, Dimension.VOLTAGE) + " (pins at "
+                                + Units.format(s.network().commonModeShare(), Dimension.NUMBER, 4) + " x dVcm, "
+                                + ampNote + ")";
                 yield ErrorTerm.result(this, s, res + amp, at, db.basis().uncertain(), note);
             }
         };

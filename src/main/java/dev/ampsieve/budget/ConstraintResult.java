@@ -7,5 +7,4 @@ package dev.ampsieve.budget;
  * @param ok     met or not
  * @param detail what is needed against what the part offers, and by how much it misses
  */
-public record ConstraintResult(String name, boolean ok, String detail) {
-}
+public record ConstraintResult(String name, boolean ok, String detail) {}

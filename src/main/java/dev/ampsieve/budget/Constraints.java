@@ -16,8 +16,7 @@ import java.util.List;
  * "not checked" in its detail and a warning, so the user sees what was not verified.
  */
 public final class Constraints {
-    private Constraints() {
-    }
+    private Constraints() {}
 
     public static final String SUPPLY = "supply";
     public static final String TEMPERATURE = "temperature";
@@ -76,7 +75,8 @@ public final class Constraints {
      */
     static List<ConstraintResult> transimpedance(Stage s, PartValues v) {
         if (Double.isNaN(v.gbw())) {
-            return List.of(new ConstraintResult(PHASE_MARGIN, true, "not checked: no GBW in the catalog"),
+            return List.of(
+                    new ConstraintResult(PHASE_MARGIN, true, "not checked: no GBW in the catalog"),
                     new ConstraintResult(SIGNAL_BANDWIDTH, true, "not checked: no GBW in the catalog"));
         }
         TransimpedanceResponse r = TransimpedanceResponse.of(s, v);
@@ -97,24 +97,32 @@ public final class Constraints {
             String graeme = "Graeme's estimate sqrt(Ct/(2π rf GBW)) = "
                     + Units.format(TransimpedanceResponse.graemeCf(r.rf(), r.ct(), r.gbw()), Dimension.CAPACITANCE);
             if (Double.isNaN(least) || Double.isNaN(most)) {
-                advice = "; no cf gives both " + Units.format(MIN_PHASE_MARGIN, Dimension.NUMBER) + "° and a -3 dB bandwidth of "
-                        + Units.format(fH, Dimension.FREQUENCY) + ": the part's GBW is too low for this rf and source capacitance"
-                        + (Double.isNaN(least) ? "" : " (cf " + Units.format(least, Dimension.CAPACITANCE) + " gives "
-                                + Units.format(MIN_PHASE_MARGIN, Dimension.NUMBER) + "° and "
-                                + Units.format(r.withCf(least).bandwidth(), Dimension.FREQUENCY) + "; " + graeme + ")");
+                advice = "; no cf gives both " + Units.format(MIN_PHASE_MARGIN, Dimension.NUMBER)
+                        + "° and a -3 dB bandwidth of "
+                        + Units.format(fH, Dimension.FREQUENCY)
+                        + ": the part's GBW is too low for this rf and source capacitance"
+                        + (Double.isNaN(least)
+                                ? ""
+                                : " (cf " + Units.format(least, Dimension.CAPACITANCE) + " gives "
+                                        + Units.format(MIN_PHASE_MARGIN, Dimension.NUMBER) + "° and "
+                                        + Units.format(r.withCf(least).bandwidth(), Dimension.FREQUENCY) + "; " + graeme
+                                        + ")");
             } else {
-                advice = "; cf from " + Units.format(least, Dimension.CAPACITANCE) + " to " + Units.format(most, Dimension.CAPACITANCE)
-                        + " gives both (" + graeme + ")";
+                advice = "; cf from " + Units.format(least, Dimension.CAPACITANCE) + " to "
+                        + Units.format(most, Dimension.CAPACITANCE) + " gives both (" + graeme + ")";
             }
         }
-        String pmText = "needs a phase margin of at least " + Units.format(MIN_PHASE_MARGIN, Dimension.NUMBER) + "° (common practice); "
-                + (Double.isNaN(pm) ? "the loop gain never reaches 1" : "part " + Units.format(pm, Dimension.NUMBER, 3) + "° at the loop crossover "
-                        + Units.format(r.crossover(), Dimension.FREQUENCY))
+        String pmText = "needs a phase margin of at least " + Units.format(MIN_PHASE_MARGIN, Dimension.NUMBER)
+                + "° (common practice); "
+                + (Double.isNaN(pm)
+                        ? "the loop gain never reaches 1"
+                        : "part " + Units.format(pm, Dimension.NUMBER, 3) + "° at the loop crossover "
+                                + Units.format(r.crossover(), Dimension.FREQUENCY))
                 + " with " + cfNow + ", " + ct + (pmOk ? "" : advice);
-        String bwText = "needs a -3 dB signal bandwidth of at least band.high " + Units.format(fH, Dimension.FREQUENCY) + "; part "
-                + Units.format(bw, Dimension.FREQUENCY) + " with " + cfNow + (bwOk ? "" : advice);
-        return List.of(new ConstraintResult(PHASE_MARGIN, pmOk, pmText),
-                new ConstraintResult(SIGNAL_BANDWIDTH, bwOk, bwText));
+        String bwText = "needs a -3 dB signal bandwidth of at least band.high " + Units.format(fH, Dimension.FREQUENCY)
+                + "; part " + Units.format(bw, Dimension.FREQUENCY) + " with " + cfNow + (bwOk ? "" : advice);
+        return List.of(
+                new ConstraintResult(PHASE_MARGIN, pmOk, pmText), new ConstraintResult(SIGNAL_BANDWIDTH, bwOk, bwText));
     }
 
     /**
@@ -128,7 +136,8 @@ public final class Constraints {
             return Double.NaN;
         }
         double hi = lo + 6;
-        org.apache.commons.math3.analysis.UnivariateFunction g = x -> Math.log(r.withCf(Math.pow(10, x)).bandwidth() / fH);
+        org.apache.commons.math3.analysis.UnivariateFunction g =
+                x -> Math.log(r.withCf(Math.pow(10, x)).bandwidth() / fH);
         if (g.value(hi) >= 0) {
             return Math.pow(10, hi);
         }
@@ -148,15 +157,22 @@ public final class Constraints {
                 bad.add(t.label() + " (" + t.note() + ")");
             }
         }
-        if (bad.isEmpty() && !(Double.isFinite(wc) && Double.isFinite(rss) && Double.isFinite(noiseRms)
-                && Double.isFinite(trimmed.worstCaseV()) && Double.isFinite(trimmed.rssV()))) {
+        if (bad.isEmpty()
+                && !(Double.isFinite(wc)
+                        && Double.isFinite(rss)
+                        && Double.isFinite(noiseRms)
+                        && Double.isFinite(trimmed.worstCaseV())
+                        && Double.isFinite(trimmed.rssV()))) {
             bad.add("the totals of " + terms.stream().map(TermResult::label).toList());
         }
         if (bad.isEmpty()) {
             return new ConstraintResult(FINITE, true, "every figure is a finite number");
         }
-        return new ConstraintResult(FINITE, false, "too large to compute: " + String.join("; ", bad)
-                + "; check these catalog and stage values for a wrong prefix or exponent");
+        return new ConstraintResult(
+                FINITE,
+                false,
+                "too large to compute: " + String.join("; ", bad)
+                        + "; check these catalog and stage values for a wrong prefix or exponent");
     }
 
     static ConstraintResult supply(Stage s, Part p, List<String> w) {
@@ -194,8 +210,12 @@ public final class Constraints {
             return null;
         }
         return switch (s.topology()) {
-            case NON_INVERTING, INVERTING, FOLLOWER, TRANSIMPEDANCE -> source != null ? source
-                    : new Range(s.supplyVoltage() / 2 - s.commonModeSwing(), s.supplyVoltage() / 2 + s.commonModeSwing());
+            case NON_INVERTING, INVERTING, FOLLOWER, TRANSIMPEDANCE ->
+                source != null
+                        ? source
+                        : new Range(
+                                s.supplyVoltage() / 2 - s.commonModeSwing(),
+                                s.supplyVoltage() / 2 + s.commonModeSwing());
             case DIFFERENCE -> {
                 if (s.supplyVoltage() == null) {
                     yield source; // not checked without a supply (headroom says so): kept as stated
@@ -224,12 +244,20 @@ public final class Constraints {
     }
 
     static ConstraintResult commonMode(Stage s, Part p, List<String> w) {
-        ConstraintResult r = headroom(COMMON_MODE, "input common mode", neededCommonMode(s), 0.0, s, p.inputHeadroom(), w);
+        ConstraintResult r =
+                headroom(COMMON_MODE, "input common mode", neededCommonMode(s), 0.0, s, p.inputHeadroom(), w);
         return switch (s.topology()) {
             case NON_INVERTING, INVERTING, FOLLOWER, TRANSIMPEDANCE -> r;
-            case DIFFERENCE -> s.supplyVoltage() == null ? r : new ConstraintResult(r.name(), r.ok(), r.detail()
-                    + " (at the pins: the source's common mode x " + Units.format(s.network().commonModeShare(), Dimension.NUMBER, 4)
-                    + " about mid-supply, the reference taken at mid-supply)");
+            case DIFFERENCE ->
+                s.supplyVoltage() == null
+                        ? r
+                        : new ConstraintResult(
+                                r.name(),
+                                r.ok(),
+                                r.detail()
+                                        + " (at the pins: the source's common mode x "
+                                        + Units.format(s.network().commonModeShare(), Dimension.NUMBER, 4)
+                                        + " about mid-supply, the reference taken at mid-supply)");
         };
     }
 
@@ -237,11 +265,14 @@ public final class Constraints {
         return headroom(OUTPUT_SWING, "output", neededOutput(s), dc, s, p.outputHeadroom(), w);
     }
 
-    private static ConstraintResult headroom(String name, String what, Range need, double widen, Stage s,
-            Headroom h, List<String> w) {
+    private static ConstraintResult headroom(
+            String name, String what, Range need, double widen, Stage s, Headroom h, List<String> w) {
         if (need == null) {
-            return new ConstraintResult(name, true, "not checked: the stage gives no supply voltage"
-                    + (name.equals(OUTPUT_SWING) ? " or full-scale output" : ""));
+            return new ConstraintResult(
+                    name,
+                    true,
+                    "not checked: the stage gives no supply voltage"
+                            + (name.equals(OUTPUT_SWING) ? " or full-scale output" : ""));
         }
         if (s.supplyVoltage() == null) {
             return new ConstraintResult(name, true, "not checked: the stage gives no supply voltage");
@@ -260,18 +291,26 @@ public final class Constraints {
         if (offer.min() > offer.max()) {
             // "reachable 3.00 V to 1.75 V" reads as a typo: say why there is no range at all
             String v = Units.format(vLow, Dimension.VOLTAGE);
-            r = new ConstraintResult(r.name(), false, r.detail().replace(
-                    "part reachable " + Units.format(offer.min(), Dimension.VOLTAGE) + " to "
-                            + Units.format(offer.max(), Dimension.VOLTAGE),
-                    "part reachable nowhere on a " + v + " supply (headroom " + Units.format(h.low(), Dimension.VOLTAGE)
-                            + " from the low rail plus " + Units.format(h.high(), Dimension.VOLTAGE) + " from the high rail)"));
+            r = new ConstraintResult(
+                    r.name(),
+                    false,
+                    r.detail()
+                            .replace(
+                                    "part reachable " + Units.format(offer.min(), Dimension.VOLTAGE) + " to "
+                                            + Units.format(offer.max(), Dimension.VOLTAGE),
+                                    "part reachable nowhere on a " + v + " supply (headroom "
+                                            + Units.format(h.low(), Dimension.VOLTAGE) + " from the low rail plus "
+                                            + Units.format(h.high(), Dimension.VOLTAGE) + " from the high rail)"));
         }
         if (assumed) {
             r = new ConstraintResult(r.name(), r.ok(), r.detail() + " (headroom assumed, not in the catalog)");
         }
         if (widen > 0) {
-            return new ConstraintResult(r.name(), r.ok(), r.detail() + " (includes " + Units.format(widen, Dimension.VOLTAGE)
-                    + " of DC error an AC-coupled stage still carries)");
+            return new ConstraintResult(
+                    r.name(),
+                    r.ok(),
+                    r.detail() + " (includes " + Units.format(widen, Dimension.VOLTAGE)
+                            + " of DC error an AC-coupled stage still carries)");
         }
         return r;
     }
@@ -316,22 +355,30 @@ public final class Constraints {
         return new ConstraintResult(PRICE, ok, d);
     }
 
-    private static ConstraintResult range(String name, double lo, double hi, Range offer, Dimension d,
-            String needWhat, String offerWhat) {
+    private static ConstraintResult range(
+            String name, double lo, double hi, Range offer, Dimension d, String needWhat, String offerWhat) {
         boolean ok = lo >= offer.min() && hi <= offer.max();
         StringBuilder sb = new StringBuilder();
         sb.append("needs ").append(needWhat).append(' ').append(Units.format(lo, d));
         if (hi != lo) {
             sb.append(" to ").append(Units.format(hi, d));
         }
-        sb.append("; part ").append(offerWhat).append(' ')
-                .append(Units.format(offer.min(), d)).append(" to ").append(Units.format(offer.max(), d));
+        sb.append("; part ")
+                .append(offerWhat)
+                .append(' ')
+                .append(Units.format(offer.min(), d))
+                .append(" to ")
+                .append(Units.format(offer.max(), d));
         if (!ok) {
             if (lo < offer.min()) {
-                sb.append("; short by ").append(Units.format(offer.min() - lo, d)).append(" at the low end");
+                sb.append("; short by ")
+                        .append(Units.format(offer.min() - lo, d))
+                        .append(" at the low end");
             }
             if (hi > offer.max()) {
-                sb.append("; short by ").append(Units.format(hi - offer.max(), d)).append(" at the high end");
+                sb.append("; short by ")
+                        .append(Units.format(hi - offer.max(), d))
+                        .append(" at the high end");
             }
         }
         return new ConstraintResult(name, ok, sb.toString());

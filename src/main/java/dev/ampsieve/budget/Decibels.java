@@ -7,8 +7,7 @@ package dev.ampsieve.budget;
  * level convention).
  */
 public final class Decibels {
-    private Decibels() {
-    }
+    private Decibels() {}
 
     /** Amplitude ratio of {@code db} decibels: 10^(dB/20). */
     public static double toRatio(double db) {

@@ -69,8 +69,7 @@ public final class DriftTerm implements ErrorTerm {
             double left = Math.max(0.0, ng * cap - OffsetTerm.magnitude(s, v));
             if (out > left) {
                 out = left;
-                note += "; capped: offset + drift <= NG x vos over temperature "
-                        + Units.format(cap, Dimension.VOLTAGE);
+                note += "; capped: offset + drift <= NG x vos over temperature " + Units.format(cap, Dimension.VOLTAGE);
             }
         }
         if (v.drift().basis() == Basis.ESTIMATED) {

@@ -35,6 +35,7 @@ public interface ErrorTerm {
 
     /** Builds a result with the input-referred value derived from the output value. */
     static TermResult result(ErrorTerm t, Stage s, double outputV, double worstAtC, boolean estimated, String note) {
-        return new TermResult(t.key(), t.label(), outputV, outputV / s.sourceGain(), worstAtC, estimated, note, t.kind());
+        return new TermResult(
+                t.key(), t.label(), outputV, outputV / s.sourceGain(), worstAtC, estimated, note, t.kind());
     }
 }

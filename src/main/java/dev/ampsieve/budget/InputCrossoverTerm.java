@@ -63,18 +63,23 @@ public final class InputCrossoverTerm implements ErrorTerm {
             return ErrorTerm.result(this, s, 0.0, Double.NaN, false, "supply.voltage not given: not checked");
         }
         double at = s.supplyVoltage() - o.crossoverNear();
-        String where = o.crossoverNear() == o.crossoverFar() ? "crossover at " + Units.format(at, Dimension.VOLTAGE)
+        String where = o.crossoverNear() == o.crossoverFar()
+                ? "crossover at " + Units.format(at, Dimension.VOLTAGE)
                 : "crossover assumed " + Units.format(s.supplyVoltage() - o.crossoverFar(), Dimension.VOLTAGE) + " to "
                         + Units.format(at, Dimension.VOLTAGE);
         Range cm = Constraints.neededCommonMode(s);
-        String range = cm == null ? "" : ", common mode " + Units.format(cm.min(), Dimension.VOLTAGE) + " to "
-                + Units.format(cm.max(), Dimension.VOLTAGE);
+        String range = cm == null
+                ? ""
+                : ", common mode " + Units.format(cm.min(), Dimension.VOLTAGE) + " to "
+                        + Units.format(cm.max(), Dimension.VOLTAGE);
         if (!crossed(s, o.crossoverNear(), o.crossoverFar())) {
             return ErrorTerm.result(this, s, 0.0, Double.NaN, false, where + range + ": not crossed");
         }
         double out = s.noiseGain() * o.crossoverStep().bound();
-        String note = where + range + ": NG x step " + Units.format(o.crossoverStep().bound(), Dimension.VOLTAGE)
+        String note = where + range + ": NG x step "
+                + Units.format(o.crossoverStep().bound(), Dimension.VOLTAGE)
                 + (o.crossoverStep().basis() == Basis.ASSUMED ? " (assumed 2 x vos)" : "") + "; a trim leaves it";
-        return ErrorTerm.result(this, s, out, Double.NaN, o.crossoverStep().basis().uncertain(), note);
+        return ErrorTerm.result(
+                this, s, out, Double.NaN, o.crossoverStep().basis().uncertain(), note);
     }
 }

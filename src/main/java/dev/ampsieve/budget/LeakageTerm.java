@@ -45,7 +45,8 @@ public final class LeakageTerm implements ErrorTerm {
     /** Output volts per ampere of leakage into the board's input: |NG x R+| or |Rf|. */
     public static double perAmpere(Stage s) {
         return s.board().leakageInput() == Board.Input.PLUS
-                ? Math.abs(DcModel.outputError(s, 0, 1.0, 0)) : Math.abs(DcModel.outputError(s, 0, 0, 1.0));
+                ? Math.abs(DcModel.outputError(s, 0, 1.0, 0))
+                : Math.abs(DcModel.outputError(s, 0, 0, 1.0));
     }
 
     @Override
@@ -53,10 +54,15 @@ public final class LeakageTerm implements ErrorTerm {
         Board b = s.board();
         double i = b.leakageCurrent();
         double out = i * perAmpere(s);
-        String note = b.leakage() ? Units.format(Math.abs(b.leakageVoltage()), Dimension.VOLTAGE) + " / "
-                + Units.format(b.leakageResistance(), Dimension.RESISTANCE) + " = " + Units.format(i, Dimension.CURRENT)
-                + " into the " + (b.leakageInput() == Board.Input.PLUS ? "+ input, x NG x R+ " + Units.format(s.rPlus(), Dimension.RESISTANCE)
-                : "- input, x Rf " + Units.format(s.rf(), Dimension.RESISTANCE)) : "no leakage named";
+        String note = b.leakage()
+                ? Units.format(Math.abs(b.leakageVoltage()), Dimension.VOLTAGE) + " / "
+                        + Units.format(b.leakageResistance(), Dimension.RESISTANCE) + " = "
+                        + Units.format(i, Dimension.CURRENT)
+                        + " into the "
+                        + (b.leakageInput() == Board.Input.PLUS
+                                ? "+ input, x NG x R+ " + Units.format(s.rPlus(), Dimension.RESISTANCE)
+                                : "- input, x Rf " + Units.format(s.rf(), Dimension.RESISTANCE))
+                : "no leakage named";
         return ErrorTerm.result(this, s, out, Double.NaN, false, note);
     }
 }

@@ -24,8 +24,7 @@ import dev.ampsieve.units.PhysicalConstants;
  * bandwidth (π/2 times the -3 dB frequency for a single pole), see {@link #noiseBandEdge}.
  */
 public final class NoiseModel {
-    private NoiseModel() {
-    }
+    private NoiseModel() {}
 
     /**
      * Equivalent noise bandwidth of a single pole as a multiple of its -3 dB frequency:
@@ -48,8 +47,8 @@ public final class NoiseModel {
      * @param f2         upper band edge, Hz
      * @param tempKelvin resistor temperature, K
      */
-    public static double outputRms(Stage s, double en, double enCorner, double in, double inCorner,
-            double f1, double f2, double tempKelvin) {
+    public static double outputRms(
+            Stage s, double en, double enCorner, double in, double inCorner, double f1, double f2, double tempKelvin) {
         if (!(f2 > f1) || f1 < 0) {
             return 0.0;
         }

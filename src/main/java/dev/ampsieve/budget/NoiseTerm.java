@@ -46,7 +46,8 @@ public final class NoiseTerm implements ErrorTerm {
         return switch (s.topology()) {
             case NON_INVERTING, INVERTING, FOLLOWER, DIFFERENCE -> {
                 double fN = NoiseModel.noiseBandEdge(s, v.gbw());
-                yield NoiseModel.outputRms(s, v.en(), v.enCorner(), v.in(), v.inCorner(), s.bandLow(), fN, resistorKelvin(s));
+                yield NoiseModel.outputRms(
+                        s, v.en(), v.enCorner(), v.in(), v.inCorner(), s.bandLow(), fN, resistorKelvin(s));
             }
             case TRANSIMPEDANCE -> TransimpedanceNoise.rms(s, v);
         };
@@ -68,7 +69,9 @@ public final class NoiseTerm implements ErrorTerm {
             return filterName(order);
         }
         return "closed-loop bandwidth " + Units.format(gbw / s.noiseGain(), Dimension.FREQUENCY)
-                + (order != Stage.NO_FILTER ? ", below the filter" : s.filterOrder() == null ? ", no filter stated" : ", no filter");
+                + (order != Stage.NO_FILTER
+                        ? ", below the filter"
+                        : s.filterOrder() == null ? ", no filter stated" : ", no filter");
     }
 
     private static String filterName(int order) {
@@ -94,14 +97,20 @@ public final class NoiseTerm implements ErrorTerm {
         double high = r.cf() > 0 ? 1 + r.ct() / r.cf() : Double.POSITIVE_INFINITY;
         int order = s.noiseFilterOrder();
         String note = "en " + Units.format(v.en(), Dimension.VOLTAGE_DENSITY) + ", in "
-                + Units.format(v.in(), Dimension.CURRENT_DENSITY) + "; noise gain " + Units.format(s.noiseGain(), Dimension.NUMBER)
-                + " at DC" + (Double.isFinite(high) ? " rising to " + Units.format(high, Dimension.NUMBER) + " (1 + Ct/Cf)" : " rising with f (no cf)")
-                + ", Ct " + Units.format(r.ct(), Dimension.CAPACITANCE) + (cinAssumed ? " (input capacitance assumed)" : "")
+                + Units.format(v.in(), Dimension.CURRENT_DENSITY) + "; noise gain "
+                + Units.format(s.noiseGain(), Dimension.NUMBER)
+                + " at DC"
+                + (Double.isFinite(high)
+                        ? " rising to " + Units.format(high, Dimension.NUMBER) + " (1 + Ct/Cf)"
+                        : " rising with f (no cf)")
+                + ", Ct " + Units.format(r.ct(), Dimension.CAPACITANCE)
+                + (cinAssumed ? " (input capacitance assumed)" : "")
                 + "; rms " + Units.format(rms, Dimension.VOLTAGE) + ", pp (6.6 x rms) "
                 + Units.format(NoiseModel.PEAK_TO_PEAK * rms, Dimension.VOLTAGE) + ", integrated from "
                 + Units.format(s.bandLow(), Dimension.FREQUENCY) + " through "
-                + (Double.isNaN(v.gbw()) ? "a flat band to " + Units.format(NoiseModel.noiseBandEdge(s, v.gbw()), Dimension.FREQUENCY)
-                        + " (GBW not given)"
+                + (Double.isNaN(v.gbw())
+                        ? "a flat band to " + Units.format(NoiseModel.noiseBandEdge(s, v.gbw()), Dimension.FREQUENCY)
+                                + " (GBW not given)"
                         : (order == Stage.NO_FILTER ? "the closed loop" : filterName(order) + " and the closed loop"))
                 + ", resistors at " + Units.format(s.tMax(), Dimension.TEMPERATURE) + "; counted as 3.3 x rms";
         boolean est = v.noiseEstimated() || Double.isNaN(v.gbw()) || cinAssumed;
@@ -112,7 +121,8 @@ public final class NoiseTerm implements ErrorTerm {
         double rms = rms(s, v);
         double fN = NoiseModel.noiseBandEdge(s, v.gbw());
         String note = "en " + Units.format(v.en(), Dimension.VOLTAGE_DENSITY) + ", in "
-                + Units.format(v.in(), Dimension.CURRENT_DENSITY) + "; rms " + Units.format(rms, Dimension.VOLTAGE) + ", pp (6.6 x rms) "
+                + Units.format(v.in(), Dimension.CURRENT_DENSITY) + "; rms " + Units.format(rms, Dimension.VOLTAGE)
+                + ", pp (6.6 x rms) "
                 + Units.format(NoiseModel.PEAK_TO_PEAK * rms, Dimension.VOLTAGE) + ", "
                 + Units.format(s.bandLow(), Dimension.FREQUENCY) + " to fN "
                 + Units.format(fN, Dimension.FREQUENCY) + " (" + bandNote(s, v.gbw(), fN) + "), resistors at "

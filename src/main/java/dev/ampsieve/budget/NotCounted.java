@@ -77,22 +77,38 @@ public record NotCounted(String term, Reason reason) {
                 continue;
             }
             Reason r = switch (t.key()) {
-                case CmrrTerm.KEY -> s.commonModeSwing() == 0 && inputsMoveWithSignal(s) ? Reason.NO_COMMON_MODE_SWING : null;
+                case CmrrTerm.KEY ->
+                    s.commonModeSwing() == 0 && inputsMoveWithSignal(s) ? Reason.NO_COMMON_MODE_SWING : null;
                 case PsrrTerm.KEY -> s.supplyVariation() == 0 ? Reason.NO_SUPPLY_VARIATION : null;
                 case OpenLoopGainTerm.KEY -> noFullScale ? Reason.NO_FULL_SCALE_OUTPUT : null;
-                case BandwidthTerm.KEY -> noFullScale ? Reason.NO_FULL_SCALE_OUTPUT
-                        : p == null ? null : !(p.gbw() > 0 && Double.isFinite(p.gbw())) ? Reason.NOT_IN_CATALOG : null;
-                case ResistorTerm.KEY -> s.topology() == Topology.FOLLOWER ? null
-                        : noFullScale ? Reason.NO_FULL_SCALE_OUTPUT
-                        : s.ratioTolerance() == 0 && s.ratioTempco() == 0 ? Reason.NO_RESISTOR_TOLERANCE : null;
+                case BandwidthTerm.KEY ->
+                    noFullScale
+                            ? Reason.NO_FULL_SCALE_OUTPUT
+                            : p == null
+                                    ? null
+                                    : !(p.gbw() > 0 && Double.isFinite(p.gbw())) ? Reason.NOT_IN_CATALOG : null;
+                case ResistorTerm.KEY ->
+                    s.topology() == Topology.FOLLOWER
+                            ? null
+                            : noFullScale
+                                    ? Reason.NO_FULL_SCALE_OUTPUT
+                                    : s.ratioTolerance() == 0 && s.ratioTempco() == 0
+                                            ? Reason.NO_RESISTOR_TOLERANCE
+                                            : null;
                 // a missing long-term drift, bias current or noise figure is estimated (Assumed, flagged), not left out
                 case AgingTerm.KEY -> s.serviceLife() <= 0 ? Reason.NO_SERVICE_LIFE : null;
                 // operating point: a part without a crossover or chopping has truly none (not listed)
                 case OperatingPointTerm.KEY -> s.supplyVoltage() == null ? Reason.NO_SUPPLY_VOLTAGE : null;
-                case InputCrossoverTerm.KEY -> s.supplyVoltage() == null && p != null
-                        && (p.inputCrossover() != null || OperatingFigures.railToRailInput(p)) ? Reason.NO_SUPPLY_VOLTAGE : null;
-                case SelfHeatingTerm.KEY -> s.loadResistance() == null ? Reason.NO_LOAD_RESISTANCE
-                        : s.supplyVoltage() == null ? Reason.NO_SUPPLY_VOLTAGE : null;
+                case InputCrossoverTerm.KEY ->
+                    s.supplyVoltage() == null
+                                    && p != null
+                                    && (p.inputCrossover() != null || OperatingFigures.railToRailInput(p))
+                            ? Reason.NO_SUPPLY_VOLTAGE
+                            : null;
+                case SelfHeatingTerm.KEY ->
+                    s.loadResistance() == null
+                            ? Reason.NO_LOAD_RESISTANCE
+                            : s.supplyVoltage() == null ? Reason.NO_SUPPLY_VOLTAGE : null;
                 default -> null;
             };
             if (r != null) {

@@ -39,6 +39,7 @@ public final class OffsetTerm implements ErrorTerm {
         Figure vos = v.vos();
         String note = "NG x vos " + Units.format(vos.bound(), Dimension.VOLTAGE)
                 + (vos.basis() == Basis.TYPICAL_ONLY ? " (max-to-sigma x typical: no guaranteed maximum)" : "");
-        return ErrorTerm.result(this, s, magnitude(s, v), Stage.T_REF, vos.basis().uncertain(), note);
+        return ErrorTerm.result(
+                this, s, magnitude(s, v), Stage.T_REF, vos.basis().uncertain(), note);
     }
 }

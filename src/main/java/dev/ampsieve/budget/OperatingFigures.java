@@ -30,8 +30,15 @@ import java.util.List;
  * @param choppingRipple  input-referred ripple at the chopping frequency, V peak: 0 for a part that
  *                        does not chop; else the catalog's, or (ASSUMED) {@link Assumed#CHOPPING_RIPPLE}
  */
-public record OperatingFigures(Figure testSupply, Figure testCommonMode, double crossoverNear, double crossoverFar,
-        Figure crossoverStep, Figure thetaJa, Figure quiescentCurrent, Figure choppingRipple) {
+public record OperatingFigures(
+        Figure testSupply,
+        Figure testCommonMode,
+        double crossoverNear,
+        double crossoverFar,
+        Figure crossoverStep,
+        Figure thetaJa,
+        Figure quiescentCurrent,
+        Figure choppingRipple) {
 
     static OperatingFigures of(Part part, Stage stage, Figure vos, List<String> w) {
         Double vs = stage.supplyVoltage();
@@ -45,7 +52,8 @@ public record OperatingFigures(Figure testSupply, Figure testCommonMode, double 
             Range r = part.supply();
             double far = Math.abs(r.max() - vs) >= Math.abs(vs - r.min()) ? r.max() : r.min();
             testSupply = Figure.of(far, Basis.ASSUMED);
-            w.add("test-conditions.supply: not given; the datasheet's table is taken at " + Units.format(far, Dimension.VOLTAGE)
+            w.add("test-conditions.supply: not given; the datasheet's table is taken at "
+                    + Units.format(far, Dimension.VOLTAGE)
                     + ", the end of the rated supply farthest from the stage's " + Units.format(vs, Dimension.VOLTAGE)
                     + " (conservative): enter the supply of the datasheet's 25 °C table");
         }
@@ -59,7 +67,8 @@ public record OperatingFigures(Figure testSupply, Figure testCommonMode, double 
             double rail = fromMid >= 0 ? 0.0 : testSupply.bound(); // the rail on the other side of mid-supply
             testCm = Figure.of(rail, Basis.ASSUMED);
             w.add("test-conditions.common-mode: not given; the datasheet's table is taken at the "
-                    + (rail == 0 ? "negative" : "positive") + " rail of its supply, the farthest from the stage's common mode"
+                    + (rail == 0 ? "negative" : "positive")
+                    + " rail of its supply, the farthest from the stage's common mode"
                     + " (conservative): enter the common mode of the datasheet's 25 °C table");
         }
 
@@ -84,9 +93,11 @@ public record OperatingFigures(Figure testSupply, Figure testCommonMode, double 
             }
         }
 
-        Figure theta = part.thetaJa() != null ? Figure.of(part.thetaJa(), Basis.GUARANTEED)
+        Figure theta = part.thetaJa() != null
+                ? Figure.of(part.thetaJa(), Basis.GUARANTEED)
                 : Figure.of(Assumed.THETA_JA, Basis.ASSUMED);
-        Figure iq = part.quiescentCurrent() != null ? Figure.of(part.quiescentCurrent(), Basis.GUARANTEED)
+        Figure iq = part.quiescentCurrent() != null
+                ? Figure.of(part.quiescentCurrent(), Basis.GUARANTEED)
                 : Figure.of(Assumed.QUIESCENT_CURRENT, Basis.ASSUMED);
         if (stage.loadResistance() != null && vs != null) {
             if (theta.basis() == Basis.ASSUMED) {

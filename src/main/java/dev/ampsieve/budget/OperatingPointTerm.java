@@ -60,8 +60,10 @@ public final class OperatingPointTerm implements ErrorTerm {
             return 0.0;
         }
         double dVs = Math.abs(s.supplyVoltage() - o.testSupply().bound());
-        double dVcm = Math.abs(commonModeFromMid(s) - (o.testCommonMode().bound() - o.testSupply().bound() / 2));
-        return dVs * Decibels.rejected(v.psrrDb().bound()) + dVcm * Decibels.rejected(v.cmrrDb().bound());
+        double dVcm = Math.abs(commonModeFromMid(s)
+                - (o.testCommonMode().bound() - o.testSupply().bound() / 2));
+        return dVs * Decibels.rejected(v.psrrDb().bound())
+                + dVcm * Decibels.rejected(v.cmrrDb().bound());
     }
 
     @Override
@@ -72,16 +74,20 @@ public final class OperatingPointTerm implements ErrorTerm {
         }
         double out = s.noiseGain() * inputShift(s, v);
         double dVs = Math.abs(s.supplyVoltage() - o.testSupply().bound());
-        double dVcm = Math.abs(commonModeFromMid(s) - (o.testCommonMode().bound() - o.testSupply().bound() / 2));
+        double dVcm = Math.abs(commonModeFromMid(s)
+                - (o.testCommonMode().bound() - o.testSupply().bound() / 2));
         String note = "table at " + Units.format(o.testSupply().bound(), Dimension.VOLTAGE)
                 + (o.testSupply().basis() == Basis.ASSUMED ? " (assumed)" : "") + ", common mode "
                 + Units.format(o.testCommonMode().bound(), Dimension.VOLTAGE)
                 + (o.testCommonMode().basis() == Basis.ASSUMED ? " (assumed)" : "") + "; NG x (dVs "
-                + Units.format(dVs, Dimension.VOLTAGE) + " / PSRR " + Units.format(v.psrrDb().bound(), Dimension.DECIBEL, 4)
+                + Units.format(dVs, Dimension.VOLTAGE) + " / PSRR "
+                + Units.format(v.psrrDb().bound(), Dimension.DECIBEL, 4)
                 + " + dVcm " + Units.format(dVcm, Dimension.VOLTAGE) + " / CMRR "
                 + Units.format(v.cmrrDb().bound(), Dimension.DECIBEL, 4) + ")";
-        boolean est = o.testSupply().basis().uncertain() || o.testCommonMode().basis().uncertain()
-                || dVs > 0 && v.psrrDb().basis().uncertain() || dVcm > 0 && v.cmrrDb().basis().uncertain();
+        boolean est = o.testSupply().basis().uncertain()
+                || o.testCommonMode().basis().uncertain()
+                || dVs > 0 && v.psrrDb().basis().uncertain()
+                || dVcm > 0 && v.cmrrDb().basis().uncertain();
         return ErrorTerm.result(this, s, out, Double.NaN, est, note);
     }
 }

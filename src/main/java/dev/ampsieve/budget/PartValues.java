@@ -121,8 +121,8 @@ public record PartValues(
             String rule = "vos-drift: not given; estimated as vos / T = "
                     + Units.format(drift.bound(), Dimension.VOLTAGE_DRIFT) + " (bipolar pair rule, T = 298.15 K)";
             if (input != InputType.BIPOLAR) {
-                rule += "; this rule holds for bipolar pairs and may understate a "
-                        + input.key() + " input's drift: enter the datasheet figure";
+                rule += "; this rule holds for bipolar pairs and may understate a " + input.key()
+                        + " input's drift: enter the datasheet figure";
             }
             w.add(rule);
         }
@@ -161,8 +161,10 @@ public record PartValues(
         }
         double ibOt = ibS.maxOverTemp() != null ? ibS.maxOverTemp() : Double.NaN;
         // an assumed IOS = IB follows IB with temperature
-        double iosOt = ios.basis() == Basis.ASSUMED ? ibOt : iosS.maxOverTemp() != null ? iosS.maxOverTemp() : Double.NaN;
-        double ratedHigh = part.temperature() == null ? Double.NaN : part.temperature().max();
+        double iosOt =
+                ios.basis() == Basis.ASSUMED ? ibOt : iosS.maxOverTemp() != null ? iosS.maxOverTemp() : Double.NaN;
+        double ratedHigh =
+                part.temperature() == null ? Double.NaN : part.temperature().max();
 
         Figure cmrr = rejection("cmrr", part.cmrr(), Assumed.CMRR_DB, k, w);
         Figure psrr = rejection("psrr", part.psrr(), Assumed.PSRR_DB, k, w);
@@ -202,7 +204,8 @@ public record PartValues(
             in = Assumed.in(input, sc, ib.bound());
             noiseEst = true;
             w.add("noise.in: not given; estimated as " + Units.format(in, Dimension.CURRENT_DENSITY)
-                    + (input == InputType.BIPOLAR || sc ? " (at least 1 pA/√Hz, common practice)"
+                    + (input == InputType.BIPOLAR || sc
+                            ? " (at least 1 pA/√Hz, common practice)"
                             : " (shot noise of ib, √(2 q ib))"));
         }
         double inC;
@@ -237,20 +240,23 @@ public record PartValues(
             w.add("ib: no maximum over temperature; the 25 °C maximum is doubled every 10 °C above 25 °C "
                     + "(junction-leakage rule, common practice), " + Units.format(ib.bound() * f, Dimension.CURRENT)
                     + " at " + Units.format(stage.tMax(), Dimension.TEMPERATURE)
-                    + (sc ? "; pessimistic for a chopper or auto-zero part, whose bias current is mostly charge"
+                    + (sc
+                            ? "; pessimistic for a chopper or auto-zero part, whose bias current is mostly charge"
                                     + " injection: enter the datasheet's over-temperature maximum"
                             : "; enter the datasheet's over-temperature maximum"));
         }
         if (stage.trim() != null && stage.trim().allowed() && stage.deltaT() > 0 && Double.isNaN(ibOt)) {
             w.add("ib: no maximum over temperature; what a trim at 25 °C leaves of the bias currents is estimated"
                     + " from the 25 °C maxima" + (exponential(part) ? " and the doubling rule" : "")
-                    + " (ib may change by " + (inputOf(part) == InputType.BIPOLAR && !sc ? "up to its larger end" : "the sum of both ends")
+                    + " (ib may change by "
+                    + (inputOf(part) == InputType.BIPOLAR && !sc ? "up to its larger end" : "the sum of both ends")
                     + ", ios by the sum of both ends as it can change sign):"
                     + " enter the datasheet's over-temperature maxima");
         }
         OperatingFigures operating = OperatingFigures.of(part, stage, vos, w);
-        return new PartValues(part, vos, vosOt, drift, ib, ios, ibOt, iosOt, ratedHigh, cmrr, psrr, aol, gbw,
-                en, enC, in, inC, noiseEst, aging, cin, operating, w);
+        return new PartValues(
+                part, vos, vosOt, drift, ib, ios, ibOt, iosOt, ratedHigh, cmrr, psrr, aol, gbw, en, enC, in, inC,
+                noiseEst, aging, cin, operating, w);
     }
 
     private static InputType inputOf(Part part) {
@@ -277,7 +283,8 @@ public record PartValues(
         }
         if (d == null || d.per() <= 0) {
             double est = Assumed.agingPer1000h(input, sc) * Math.sqrt(life / Assumed.THOUSAND_HOURS);
-            w.add("long-term-drift: not given; estimated as " + Units.format(Assumed.agingPer1000h(input, sc), Dimension.VOLTAGE)
+            w.add("long-term-drift: not given; estimated as "
+                    + Units.format(Assumed.agingPer1000h(input, sc), Dimension.VOLTAGE)
                     + " per √(1000 h) for a " + kind(input, sc) + " part (common practice, conservative), "
                     + Units.format(est, Dimension.VOLTAGE) + " over the service life");
             return Figure.of(est, Basis.ESTIMATED);

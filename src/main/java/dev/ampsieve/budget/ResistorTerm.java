@@ -1,7 +1,6 @@
 package dev.ampsieve.budget;
 
 import dev.ampsieve.stage.Stage;
-import dev.ampsieve.stage.Topology;
 import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.Units;
 

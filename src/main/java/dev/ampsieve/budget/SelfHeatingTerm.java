@@ -27,8 +27,7 @@ public final class SelfHeatingTerm implements ErrorTerm {
     public static final String KEY = "self-heating";
 
     /** The die's temperature span and what heats it. */
-    public record Die(double power, double quiescentPower, double thetaJa, double hot, double cold) {
-    }
+    public record Die(double power, double quiescentPower, double thetaJa, double hot, double cold) {}
 
     @Override
     public String key() {
@@ -93,8 +92,10 @@ public final class SelfHeatingTerm implements ErrorTerm {
         }
         boolean ok = d.hot() <= v.ratedHigh();
         String detail = "die up to " + Units.format(d.hot(), Dimension.TEMPERATURE) + " (ambient "
-                + Units.format(s.tMax(), Dimension.TEMPERATURE) + " + " + Units.format(d.thetaJa(), Dimension.THERMAL_RESISTANCE)
-                + " x " + Units.format(d.power() * 1e3, Dimension.NUMBER) + " mW), rated to " + Units.format(v.ratedHigh(), Dimension.TEMPERATURE)
+                + Units.format(s.tMax(), Dimension.TEMPERATURE) + " + "
+                + Units.format(d.thetaJa(), Dimension.THERMAL_RESISTANCE)
+                + " x " + Units.format(d.power() * 1e3, Dimension.NUMBER) + " mW), rated to "
+                + Units.format(v.ratedHigh(), Dimension.TEMPERATURE)
                 + (ok ? "" : ": " + Units.format(d.hot() - v.ratedHigh(), Dimension.NUMBER) + " °C too hot");
         return List.of(new ConstraintResult(Constraints.DIE_TEMPERATURE, ok, detail));
     }
@@ -111,8 +112,15 @@ public final class SelfHeatingTerm implements ErrorTerm {
     public TermResult evaluate(Stage s, PartValues v) {
         Die d = die(s, v);
         if (d == null) {
-            return ErrorTerm.result(this, s, 0.0, Double.NaN, false,
-                    s.loadResistance() == null ? "load-resistance not given: not counted" : "supply.voltage not given: not counted");
+            return ErrorTerm.result(
+                    this,
+                    s,
+                    0.0,
+                    Double.NaN,
+                    false,
+                    s.loadResistance() == null
+                            ? "load-resistance not given: not counted"
+                            : "supply.voltage not given: not counted");
         }
         double dT = s.deltaT();
         double dTdie = Math.max(Math.abs(d.hot() - Stage.T_REF), Math.abs(d.cold() - Stage.T_REF));
@@ -121,13 +129,18 @@ public final class SelfHeatingTerm implements ErrorTerm {
         double dieBias = Math.max(biasPart(s, v, d.cold()), biasPart(s, v, d.hot()));
         double bias = Math.max(0, dieBias - ambientBias);
         double out = drift + bias;
-        String note = "die " + Units.format(d.cold(), Dimension.TEMPERATURE) + " to " + Units.format(d.hot(), Dimension.TEMPERATURE)
-                + " (" + Units.format(d.thetaJa(), Dimension.THERMAL_RESISTANCE) + " x " + Units.format(d.power() * 1e3, Dimension.NUMBER)
-                + " mW); drift adds " + Units.format(drift, Dimension.VOLTAGE) + ", bias adds " + Units.format(bias, Dimension.VOLTAGE)
+        String note = "die " + Units.format(d.cold(), Dimension.TEMPERATURE) + " to "
+                + Units.format(d.hot(), Dimension.TEMPERATURE)
+                + " (" + Units.format(d.thetaJa(), Dimension.THERMAL_RESISTANCE) + " x "
+                + Units.format(d.power() * 1e3, Dimension.NUMBER)
+                + " mW); drift adds " + Units.format(drift, Dimension.VOLTAGE) + ", bias adds "
+                + Units.format(bias, Dimension.VOLTAGE)
                 + " (ib " + Units.format(v.ibAt(d.hot()), Dimension.CURRENT) + " at the die)";
         OperatingFigures o = v.operating();
-        boolean est = o.thetaJa().basis().uncertain() || o.quiescentCurrent().basis().uncertain()
-                || drift > 0 && v.drift().basis().uncertain() || bias > 0 && (v.ib().basis().uncertain() || v.ibExtrapolated(d.hot()));
+        boolean est = o.thetaJa().basis().uncertain()
+                || o.quiescentCurrent().basis().uncertain()
+                || drift > 0 && v.drift().basis().uncertain()
+                || bias > 0 && (v.ib().basis().uncertain() || v.ibExtrapolated(d.hot()));
         return ErrorTerm.result(this, s, out, out > 0 ? s.tMax() : Double.NaN, est, note);
     }
 }

@@ -11,5 +11,4 @@ package dev.ampsieve.budget;
  * @param high       upper end
  * @param trials     units simulated (0 when decided without sampling)
  */
-public record SigmaYield(double maxToSigma, double yield, double low, double high, int trials) {
-}
+public record SigmaYield(double maxToSigma, double yield, double low, double high, int trials) {}

@@ -13,7 +13,14 @@ package dev.ampsieve.budget;
  * @param note      how it was computed, briefly (which catalog values, which rule)
  * @param kind      where the term comes from: the part, its operating point, or the board
  */
-public record TermResult(String key, String label, double outputV, double inputV, double worstAtC, boolean estimated, String note,
+public record TermResult(
+        String key,
+        String label,
+        double outputV,
+        double inputV,
+        double worstAtC,
+        boolean estimated,
+        String note,
         TermKind kind) {
 
     public TermResult {
@@ -21,7 +28,8 @@ public record TermResult(String key, String label, double outputV, double inputV
     }
 
     /** A term of the part's own figures ({@link TermKind#PART}). */
-    public TermResult(String key, String label, double outputV, double inputV, double worstAtC, boolean estimated, String note) {
+    public TermResult(
+            String key, String label, double outputV, double inputV, double worstAtC, boolean estimated, String note) {
         this(key, label, outputV, inputV, worstAtC, estimated, note, TermKind.PART);
     }
 }

@@ -53,9 +53,12 @@ public final class ThermalEmfTerm implements ErrorTerm {
     public TermResult evaluate(Stage s, PartValues v) {
         Board b = s.board();
         double out = s.noiseGain() * inputVolts(b);
-        String note = b.thermalEmf() ? "NG x " + b.junctions() + " junction(s) x " + Units.format(b.seebeck(), Dimension.VOLTAGE_DRIFT)
-                + " x " + Units.format(b.gradient(), Dimension.NUMBER) + " °C = " + Units.format(inputVolts(b), Dimension.VOLTAGE)
-                + " in series with the input" : "no thermal-emf named";
+        String note = b.thermalEmf()
+                ? "NG x " + b.junctions() + " junction(s) x " + Units.format(b.seebeck(), Dimension.VOLTAGE_DRIFT)
+                        + " x " + Units.format(b.gradient(), Dimension.NUMBER) + " °C = "
+                        + Units.format(inputVolts(b), Dimension.VOLTAGE)
+                        + " in series with the input"
+                : "no thermal-emf named";
         return ErrorTerm.result(this, s, out, Double.NaN, false, note);
     }
 }

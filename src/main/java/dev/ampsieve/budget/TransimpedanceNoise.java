@@ -29,15 +29,13 @@ import org.apache.commons.math3.analysis.integration.IterativeLegendreGaussInteg
  * Hz, K in; V² and V rms out.
  */
 public final class TransimpedanceNoise {
-    private TransimpedanceNoise() {
-    }
+    private TransimpedanceNoise() {}
 
     /** Upper integration limit as a multiple of max(GBW, fH); the tail beyond is added in closed form. */
     static final double TOP_FACTOR = 1000.0;
 
     /** The amplifier's noise and the + input's resistor, as they enter the density. */
-    public record Sources(double en, double enCorner, double in, double inCorner, double rp, double kelvin) {
-    }
+    public record Sources(double en, double enCorner, double in, double inCorner, double rp, double kelvin) {}
 
     /** The part's and stage's sources at the resistor temperature of {@link NoiseTerm#resistorKelvin}. */
     public static Sources sources(Stage s, PartValues v) {
@@ -68,7 +66,8 @@ public final class TransimpedanceNoise {
         if (!(f2 > f1) || !(f1 > 0)) {
             return 0.0;
         }
-        IterativeLegendreGaussIntegrator gauss = new IterativeLegendreGaussIntegrator(8, 1e-10, Double.MIN_VALUE, 2, 64);
+        IterativeLegendreGaussIntegrator gauss =
+                new IterativeLegendreGaussIntegrator(8, 1e-10, Double.MIN_VALUE, 2, 64);
         double u1 = Math.log(f1);
         double u2 = Math.log(f2);
         double step = Math.log(10) / 2;
@@ -77,10 +76,14 @@ public final class TransimpedanceNoise {
         for (int i = 0; i < n; i++) {
             double a = u1 + (u2 - u1) * i / n;
             double b = u1 + (u2 - u1) * (i + 1) / n;
-            sum += gauss.integrate(1_000_000, u -> {
-                double f = Math.exp(u);
-                return density2(r, src, f) * filter2(order, fH, f) * f; // df = f du
-            }, a, b);
+            sum += gauss.integrate(
+                    1_000_000,
+                    u -> {
+                        double f = Math.exp(u);
+                        return density2(r, src, f) * filter2(order, fH, f) * f; // df = f du
+                    },
+                    a,
+                    b);
         }
         return sum;
     }
@@ -96,7 +99,8 @@ public final class TransimpedanceNoise {
         Sources src = sources(s, v);
         int order = s.noiseFilterOrder();
         if (Double.isNaN(v.gbw())) {
-            return Math.sqrt(integrate(r, src, s.bandLow(), NoiseModel.noiseBandEdge(s, v.gbw()), Stage.NO_FILTER, s.bandHigh()));
+            return Math.sqrt(integrate(
+                    r, src, s.bandLow(), NoiseModel.noiseBandEdge(s, v.gbw()), Stage.NO_FILTER, s.bandHigh()));
         }
         double top = TOP_FACTOR * Math.max(v.gbw(), s.bandHigh());
         double tail = density2(r, src, top) * filter2(order, s.bandHigh(), top) * top;

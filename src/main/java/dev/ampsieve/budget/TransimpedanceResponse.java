@@ -51,7 +51,8 @@ public record TransimpedanceResponse(double rf, double cf, double rsh, double ct
         Transimpedance t = (Transimpedance) s.network();
         double a0 = Decibels.toRatio(v.aolDb().bound());
         double gbw = Double.isNaN(v.gbw()) ? Double.POSITIVE_INFINITY : v.gbw();
-        return new TransimpedanceResponse(t.rf(), t.cf(), t.rsh(), t.cs() + v.inputCapacitance().bound(), a0, gbw);
+        return new TransimpedanceResponse(
+                t.rf(), t.cf(), t.rsh(), t.cs() + v.inputCapacitance().bound(), a0, gbw);
     }
 
     /** The same response with another feedback capacitor. */

@@ -44,9 +44,11 @@ final class TwoTemperatureYield {
     private final double resolution;
     /** A unit's IB (IOS) follows the engine's curve ({@link BiasTerm#ibShaped}); otherwise drawn anew at each temperature. */
     private final boolean ibShaped;
+
     private final boolean iosShaped;
     /** Evaluation temperatures, then the calibration points where they are not among them. */
     private final double[] temps;
+
     private final int evaluated;
     private final int coldIndex;
     private final int hotIndex;
@@ -54,9 +56,11 @@ final class TwoTemperatureYield {
     private final double[] w2;
     /** Shaped currents: the curve's deviation from its chord at each evaluation temperature, per ampere at 25 °C. */
     private final double[] ibDev;
+
     private final double[] iosDev;
     /** Shape-free currents: the limit at each temperature over the 25 °C limit. */
     private final double[] ibFac;
+
     private final double[] iosFac;
     private final TruncatedNormal ibD;
     private final TruncatedNormal iosD;
@@ -138,7 +142,8 @@ final class TwoTemperatureYield {
         }
         Sampler u = new Sampler(new Well19937c(s.seed()), SequentialYield.BLOCK);
         double[] err = new double[SequentialYield.BLOCK];
-        // as YieldModel: without a target every one of the stage's units; with one, blocks until the answer is plain or the cap
+        // as YieldModel: without a target every one of the stage's units; with one, blocks until the answer is plain or
+        // the cap
         int units = Double.isNaN(target) ? s.trials() : Math.max(s.trials(), s.maxTrials());
         SequentialYield.Estimate e = SequentialYield.run(Math.max(1, units), target, size -> {
             u.errors(size, err);
@@ -213,7 +218,9 @@ final class TwoTemperatureYield {
 
         /** Unit i's shape-free current at temperature j minus the line through its readings at the calibration points, A. */
         private double line(double[][] draws, double[] fac, int i, int j) {
-            return fac[j] * draws[j][i] - w1[j] * fac[coldIndex] * draws[coldIndex][i] - w2[j] * fac[hotIndex] * draws[hotIndex][i];
+            return fac[j] * draws[j][i]
+                    - w1[j] * fac[coldIndex] * draws[coldIndex][i]
+                    - w2[j] * fac[hotIndex] * draws[hotIndex][i];
         }
 
         private void fill(TruncatedNormal d, double[] a, int n) {

@@ -6,7 +6,10 @@ package dev.ampsieve.budget;
  * trim, where allowed, does not show the target met either).
  */
 public enum Verdict {
-    FITS("fits"), FITS_AFTER_TRIM("fits-after-trim"), UNDECIDED("undecided"), NO_FIT("no-fit");
+    FITS("fits"),
+    FITS_AFTER_TRIM("fits-after-trim"),
+    UNDECIDED("undecided"),
+    NO_FIT("no-fit");
 
     private final String key;
 

@@ -57,10 +57,12 @@ final class YieldModel {
     private final double[] fios = new double[2];
     /** A range end at exactly 25 °C uses the unit's 25 °C currents instead of a fresh draw. */
     private final boolean[] atRef = new boolean[2];
+
     private final TruncatedNormal vosD;
     private final TruncatedNormal driftD;
     /** Drift is each unit's vos / T (estimated from the offset), not drawn. */
     private final boolean driftFromVos;
+
     private final TruncatedNormal ibD;
     private final TruncatedNormal iosD;
     private final TruncatedNormal agingD;
@@ -68,6 +70,7 @@ final class YieldModel {
     private final double resolution;
     /** What a trim at 25 °C removes of each unit's IB and IOS: 1, or 0 when only an over-temperature maximum is known. */
     private final double ibTrimmed;
+
     private final double iosTrimmed;
 
     /**
@@ -200,8 +203,19 @@ final class YieldModel {
         return new YieldResult(e.value(), e.low(), e.high(), (int) e.trials(), "sampled");
     }
 
-    private int count(int size, double[] vos, double[] drift, double[] ib25, double[] ib0, double[] ib1,
-            double[] ios25, double[] ios0, double[] ios1, double[] ratio, double[] aging, double[] res) {
+    private int count(
+            int size,
+            double[] vos,
+            double[] drift,
+            double[] ib25,
+            double[] ib0,
+            double[] ib1,
+            double[] ios25,
+            double[] ios0,
+            double[] ios1,
+            double[] ratio,
+            double[] aging,
+            double[] res) {
         int passes = 0;
         double room = limit - fixed;
         double vosRemoved = trimmed ? 1.0 : 0.0;
@@ -220,8 +234,10 @@ final class YieldModel {
                 // each unit's currents at this end: its 25 °C draw at 25 °C, else its own draw scaled to the limit here
                 double ibT = atRef[j] ? ib25[i] : fib[j] * (j == 0 ? ib0[i] : ib1[i]);
                 double iosT = atRef[j] ? ios25[i] : fios[j] * (j == 0 ? ios0[i] : ios1[i]);
-                double e = ng * (vT - vosRemoved * v25 + aging[i]) + perIb * (ibT - ibTrimmed * ib25[i])
-                        + perIos * (iosT - iosTrimmed * ios25[i]) + res[i];
+                double e = ng * (vT - vosRemoved * v25 + aging[i])
+                        + perIb * (ibT - ibTrimmed * ib25[i])
+                        + perIos * (iosT - iosTrimmed * ios25[i])
+                        + res[i];
                 worst = Math.max(worst, Math.abs(e));
             }
             worst += Math.abs(gainCoef * ratio[i]); // at the end of the swing where it adds to the offset
@@ -273,7 +289,8 @@ final class YieldModel {
     private double[] range(int j) {
         double[] v = span(vosD);
         double[] d = driftFromVos ? scaled(v, 1.0 / PhysicalConstants.ROOM_KELVIN) : span(driftD);
-        double[] vd = driftFromVos ? scaled(v, 1.0 + dt[j] / PhysicalConstants.ROOM_KELVIN)
+        double[] vd = driftFromVos
+                ? scaled(v, 1.0 + dt[j] / PhysicalConstants.ROOM_KELVIN)
                 : new double[] {v[0] + scaled(d, dt[j])[0], v[1] + scaled(d, dt[j])[1]};
         double vtLo = Math.max(-clamp, Math.min(clamp, vd[0]));
         double vtHi = Math.max(-clamp, Math.min(clamp, vd[1]));
@@ -289,9 +306,11 @@ final class YieldModel {
         double[] g = scaled(span(agingD), ng);
         double[] b25 = span(ibD);
         double[] o25 = span(iosD);
-        double[] ib = atRef[j] ? scaled(b25, perIb * (1.0 - ibTrimmed))
+        double[] ib = atRef[j]
+                ? scaled(b25, perIb * (1.0 - ibTrimmed))
                 : sum(scaled(b25, perIb * fib[j]), scaled(b25, -perIb * ibTrimmed));
-        double[] io = atRef[j] ? scaled(o25, perIos * (1.0 - iosTrimmed))
+        double[] io = atRef[j]
+                ? scaled(o25, perIos * (1.0 - iosTrimmed))
                 : sum(scaled(o25, perIos * fios[j]), scaled(o25, -perIos * iosTrimmed));
         return new double[] {off[0] + g[0] + ib[0] + io[0] - resolution, off[1] + g[1] + ib[1] + io[1] + resolution};
     }

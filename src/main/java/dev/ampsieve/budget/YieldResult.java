@@ -8,5 +8,4 @@ package dev.ampsieve.budget;
  * @param decided  "sampled", "all-pass" (worst case within the limit) or "none-pass"
  *                 (the smallest possible error exceeds the limit)
  */
-public record YieldResult(double value, double low, double high, int trials, String decided) {
-}
+public record YieldResult(double value, double low, double high, int trials, String decided) {}

@@ -2,7 +2,9 @@ package dev.ampsieve.catalog;
 
 /** How the amplifier treats its own offset. */
 public enum Architecture {
-    STANDARD("standard"), CHOPPER("chopper"), AUTO_ZERO("auto-zero");
+    STANDARD("standard"),
+    CHOPPER("chopper"),
+    AUTO_ZERO("auto-zero");
 
     private final String key;
 

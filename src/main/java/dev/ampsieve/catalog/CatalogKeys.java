@@ -15,8 +15,7 @@ import java.util.function.Function;
  * <p>Paths are dotted without the list prefix: {@code vos.max}, {@code noise.en}, {@code gbw}.
  */
 public final class CatalogKeys {
-    private CatalogKeys() {
-    }
+    private CatalogKeys() {}
 
     /** The key of the list in a file holding several parts. */
     public static final String PARTS = "parts";
@@ -79,11 +78,41 @@ public final class CatalogKeys {
     public static final String OFFSET_STEP = "offset-step";
 
     /** Top-level keys of a part, template order. */
-    public static final List<String> PART_KEYS = List.of(ID, TITLE, ARCHITECTURE, INPUT, FACTORY_TRIM, NULL_PINS,
-            CHANNELS, PACKAGES, TAGS, PRICE, SUPPLY, TEMPERATURE, VOS, VOS_DRIFT, IB, IOS, CMRR, PSRR, AOL, GBW, SLEW,
-            NOISE, LONG_TERM_DRIFT, INPUT_HEADROOM, OUTPUT_HEADROOM, CHOPPING_FREQUENCY, QUIESCENT_CURRENT, INPUT_CAPACITANCE,
-            TEST_CONDITIONS, INPUT_CROSSOVER, THETA_JA, CHOPPING_RIPPLE,
-            SOURCE, NOTES);
+    public static final List<String> PART_KEYS = List.of(
+            ID,
+            TITLE,
+            ARCHITECTURE,
+            INPUT,
+            FACTORY_TRIM,
+            NULL_PINS,
+            CHANNELS,
+            PACKAGES,
+            TAGS,
+            PRICE,
+            SUPPLY,
+            TEMPERATURE,
+            VOS,
+            VOS_DRIFT,
+            IB,
+            IOS,
+            CMRR,
+            PSRR,
+            AOL,
+            GBW,
+            SLEW,
+            NOISE,
+            LONG_TERM_DRIFT,
+            INPUT_HEADROOM,
+            OUTPUT_HEADROOM,
+            CHOPPING_FREQUENCY,
+            QUIESCENT_CURRENT,
+            INPUT_CAPACITANCE,
+            TEST_CONDITIONS,
+            INPUT_CROSSOVER,
+            THETA_JA,
+            CHOPPING_RIPPLE,
+            SOURCE,
+            NOTES);
 
     /** Keys a part cannot do without. {@code vos} needs typ or max; range sections need both ends. */
     public static final List<String> REQUIRED = List.of(ID, ARCHITECTURE, INPUT, VOS, GBW, SUPPLY, TEMPERATURE, PRICE);
@@ -142,21 +171,34 @@ public final class CatalogKeys {
         r.put(path(NOISE, EN_CORNER), Dimension.FREQUENCY, p -> p.noise().enCorner());
         r.put(path(NOISE, IN), Dimension.CURRENT_DENSITY, p -> p.noise().in());
         r.put(path(NOISE, IN_CORNER), Dimension.FREQUENCY, p -> p.noise().inCorner());
-        r.put(path(LONG_TERM_DRIFT, VALUE), Dimension.VOLTAGE,
+        r.put(
+                path(LONG_TERM_DRIFT, VALUE),
+                Dimension.VOLTAGE,
                 p -> p.longTermDrift() == null ? null : p.longTermDrift().value());
-        r.put(path(LONG_TERM_DRIFT, PER), Dimension.TIME,
+        r.put(
+                path(LONG_TERM_DRIFT, PER),
+                Dimension.TIME,
                 p -> p.longTermDrift() == null ? null : p.longTermDrift().per());
         r.headroom(INPUT_HEADROOM, Part::inputHeadroom);
         r.headroom(OUTPUT_HEADROOM, Part::outputHeadroom);
         r.put(CHOPPING_FREQUENCY, Dimension.FREQUENCY, Part::choppingFrequency);
         r.put(QUIESCENT_CURRENT, Dimension.CURRENT, Part::quiescentCurrent);
         r.put(INPUT_CAPACITANCE, Dimension.CAPACITANCE, Part::inputCapacitance);
-        r.put(path(TEST_CONDITIONS, SUPPLY), Dimension.VOLTAGE, p -> p.testConditions() == null ? null : p.testConditions().supply());
-        r.put(path(TEST_CONDITIONS, COMMON_MODE), Dimension.VOLTAGE,
+        r.put(
+                path(TEST_CONDITIONS, SUPPLY),
+                Dimension.VOLTAGE,
+                p -> p.testConditions() == null ? null : p.testConditions().supply());
+        r.put(
+                path(TEST_CONDITIONS, COMMON_MODE),
+                Dimension.VOLTAGE,
                 p -> p.testConditions() == null ? null : p.testConditions().commonMode());
-        r.put(path(INPUT_CROSSOVER, FROM_POSITIVE_RAIL), Dimension.VOLTAGE,
+        r.put(
+                path(INPUT_CROSSOVER, FROM_POSITIVE_RAIL),
+                Dimension.VOLTAGE,
                 p -> p.inputCrossover() == null ? null : p.inputCrossover().fromPositiveRail());
-        r.put(path(INPUT_CROSSOVER, OFFSET_STEP), Dimension.VOLTAGE,
+        r.put(
+                path(INPUT_CROSSOVER, OFFSET_STEP),
+                Dimension.VOLTAGE,
                 p -> p.inputCrossover() == null ? null : p.inputCrossover().offsetStep());
         r.put(THETA_JA, Dimension.THERMAL_RESISTANCE, Part::thetaJa);
         r.put(CHOPPING_RIPPLE, Dimension.VOLTAGE, Part::choppingRipple);
@@ -164,13 +206,24 @@ public final class CatalogKeys {
         GETTERS = Collections.unmodifiableMap(r.getters);
 
         Map<String, Bounds> b = new LinkedHashMap<>();
-        b.put(path(PRICE, UNIT), new Bounds(NONE, 10_000, NONE, 1e7, false,
-                "no single amplifier is sold for more than ten million"));
-        Bounds supply = new Bounds(0.5, 1000, 0.1, 2000, false,
+        b.put(
+                path(PRICE, UNIT),
+                new Bounds(NONE, 10_000, NONE, 1e7, false, "no single amplifier is sold for more than ten million"));
+        Bounds supply = new Bounds(
+                0.5,
+                1000,
+                0.1,
+                2000,
+                false,
                 "transistors need a few kT/q (about 0.1 V) to amplify, and no op amp is built for more than about 1.2 kV");
         b.put(path(SUPPLY, MIN), supply);
         b.put(path(SUPPLY, MAX), supply);
-        Bounds temp = new Bounds(-100, 300, -273.15, 1000, true,
+        Bounds temp = new Bounds(
+                -100,
+                300,
+                -273.15,
+                1000,
+                true,
                 "nothing is colder than absolute zero, and no amplifier works near 1000 °C (silicon melts at 1414 °C)");
         b.put(path(TEMPERATURE, MIN), temp);
         b.put(path(TEMPERATURE, MAX), temp);
@@ -178,63 +231,158 @@ public final class CatalogKeys {
         for (String k : SPREAD) {
             b.put(path(VOS, k), vos);
         }
-        Bounds drift = new Bounds(NONE, 100e-6, NONE, 1e-3, false,
+        Bounds drift = new Bounds(
+                NONE,
+                100e-6,
+                NONE,
+                1e-3,
+                false,
                 "1 mV/°C is what a 1 V offset would drift (vos / T), and no amplifier has that offset");
         b.put(path(VOS_DRIFT, TYP), drift);
         b.put(path(VOS_DRIFT, MAX), drift);
-        Bounds current = new Bounds(NONE, 100e-6, NONE, 100e-3, false,
+        Bounds current = new Bounds(
+                NONE,
+                100e-6,
+                NONE,
+                100e-3,
+                false,
                 "input pins are commonly rated for at most 10 mA (absolute maximum), ten times less");
         for (String k : SPREAD) {
             b.put(path(IB, k), current);
             b.put(path(IOS, k), current);
         }
-        Bounds rejection = new Bounds(NONE, 180, NONE, 200, false,
+        Bounds rejection = new Bounds(
+                NONE,
+                180,
+                NONE,
+                200,
+                false,
                 "200 dB is a ratio of ten billion; the best amplifiers reach about 160 dB");
         for (String sec : List.of(CMRR, PSRR, AOL)) {
             b.put(path(sec, MIN), rejection);
             b.put(path(sec, TYP), rejection);
         }
-        b.put(GBW, new Bounds(100, 10e9, 1, 100e9, false,
-                "the fastest amplifiers reach a few GHz, and none is slower than 1 Hz"));
-        b.put(SLEW, new Bounds(NONE, 1e11, NONE, 1e12, false,
-                "the fastest amplifiers slew a few thousand V/µs, far below 1 MV/µs"));
-        b.put(path(NOISE, EN), new Bounds(0.1e-9, 1e-6, 10e-12, 1e-3, false,
-                "the quietest inputs reach a few tenths of a nV/√Hz; a mV/√Hz is no amplifier's noise"));
+        b.put(
+                GBW,
+                new Bounds(
+                        100,
+                        10e9,
+                        1,
+                        100e9,
+                        false,
+                        "the fastest amplifiers reach a few GHz, and none is slower than 1 Hz"));
+        b.put(
+                SLEW,
+                new Bounds(
+                        NONE,
+                        1e11,
+                        NONE,
+                        1e12,
+                        false,
+                        "the fastest amplifiers slew a few thousand V/µs, far below 1 MV/µs"));
+        b.put(
+                path(NOISE, EN),
+                new Bounds(
+                        0.1e-9,
+                        1e-6,
+                        10e-12,
+                        1e-3,
+                        false,
+                        "the quietest inputs reach a few tenths of a nV/√Hz; a mV/√Hz is no amplifier's noise"));
         Bounds corner = new Bounds(NONE, 1e6, NONE, 1e9, false, "a 1/f corner above 1 GHz is no amplifier's");
         b.put(path(NOISE, EN_CORNER), corner);
-        b.put(path(NOISE, IN), new Bounds(NONE, 1e-9, NONE, 1e-6, false,
-                "even 100 mA of bias current has only about 0.2 nA/√Hz of shot noise"));
+        b.put(
+                path(NOISE, IN),
+                new Bounds(
+                        NONE,
+                        1e-9,
+                        NONE,
+                        1e-6,
+                        false,
+                        "even 100 mA of bias current has only about 0.2 nA/√Hz of shot noise"));
         b.put(path(NOISE, IN_CORNER), corner);
-        b.put(path(LONG_TERM_DRIFT, VALUE), new Bounds(NONE, 10e-3, NONE, 1, false,
-                "an offset change of volts leaves no room for a signal"));
+        b.put(
+                path(LONG_TERM_DRIFT, VALUE),
+                new Bounds(NONE, 10e-3, NONE, 1, false, "an offset change of volts leaves no room for a signal"));
         double hour = 3600;
         double year = 365.25 * 86400;
-        b.put(path(LONG_TERM_DRIFT, PER), new Bounds(24 * hour, 10 * year, hour, 100 * year, false,
-                "aging is measured over hundreds of hours to years, never less than an hour nor over a century"));
-        Bounds headroom = new Bounds(NONE, 10, NONE, 2000, false,
-                "headroom is part of the supply, which is at most 2 kV");
+        b.put(
+                path(LONG_TERM_DRIFT, PER),
+                new Bounds(
+                        24 * hour,
+                        10 * year,
+                        hour,
+                        100 * year,
+                        false,
+                        "aging is measured over hundreds of hours to years, never less than an hour nor over a century"));
+        Bounds headroom =
+                new Bounds(NONE, 10, NONE, 2000, false, "headroom is part of the supply, which is at most 2 kV");
         for (String sec : List.of(INPUT_HEADROOM, OUTPUT_HEADROOM)) {
             b.put(path(sec, LOW), headroom);
             b.put(path(sec, HIGH), headroom);
         }
-        b.put(CHOPPING_FREQUENCY, new Bounds(NONE, 100e6, NONE, 100e9, false,
-                "a chopping clock cannot be faster than the fastest amplifier's gain-bandwidth"));
-        b.put(QUIESCENT_CURRENT, new Bounds(NONE, 1, NONE, 100, false,
-                "even power amplifiers draw well under an ampere at rest"));
-        b.put(INPUT_CAPACITANCE, new Bounds(0.1e-12, 100e-12, 1e-15, 100e-9, false,
-                "an amplifier's input pins are a few pF; 100 nF is a discrete capacitor, not a pin"));
+        b.put(
+                CHOPPING_FREQUENCY,
+                new Bounds(
+                        NONE,
+                        100e6,
+                        NONE,
+                        100e9,
+                        false,
+                        "a chopping clock cannot be faster than the fastest amplifier's gain-bandwidth"));
+        b.put(
+                QUIESCENT_CURRENT,
+                new Bounds(NONE, 1, NONE, 100, false, "even power amplifiers draw well under an ampere at rest"));
+        b.put(
+                INPUT_CAPACITANCE,
+                new Bounds(
+                        0.1e-12,
+                        100e-12,
+                        1e-15,
+                        100e-9,
+                        false,
+                        "an amplifier's input pins are a few pF; 100 nF is a discrete capacitor, not a pin"));
         b.put(path(TEST_CONDITIONS, SUPPLY), supply);
-        b.put(path(TEST_CONDITIONS, COMMON_MODE), new Bounds(NONE, 1000, NONE, 2000, false,
-                "the common mode lies between the rails, and no op amp's supply exceeds 2 kV"));
-        b.put(path(INPUT_CROSSOVER, FROM_POSITIVE_RAIL), new Bounds(0.1, 5, NONE, 2000, false,
-                "the crossover lies between the rails, and no op amp's supply exceeds 2 kV"));
-        b.put(path(INPUT_CROSSOVER, OFFSET_STEP), new Bounds(NONE, 10e-3, NONE, 1, false,
-                "a step of volts between the two input pairs leaves no room for a signal"));
-        b.put(THETA_JA, new Bounds(5, 500, 0.5, 5000, false,
-                "a bare die in still air is a few hundred °C/W and a package on a heat sink a few; beyond 5000 °C/W"
-                        + " a milliwatt would melt silicon"));
-        b.put(CHOPPING_RIPPLE, new Bounds(NONE, 10e-3, NONE, 1, false,
-                "a ripple of volts at the input leaves no room for a signal"));
+        b.put(
+                path(TEST_CONDITIONS, COMMON_MODE),
+                new Bounds(
+                        NONE,
+                        1000,
+                        NONE,
+                        2000,
+                        false,
+                        "the common mode lies between the rails, and no op amp's supply exceeds 2 kV"));
+        b.put(
+                path(INPUT_CROSSOVER, FROM_POSITIVE_RAIL),
+                new Bounds(
+                        0.1,
+                        5,
+                        NONE,
+                        2000,
+                        false,
+                        "the crossover lies between the rails, and no op amp's supply exceeds 2 kV"));
+        b.put(
+                path(INPUT_CROSSOVER, OFFSET_STEP),
+                new Bounds(
+                        NONE,
+                        10e-3,
+                        NONE,
+                        1,
+                        false,
+                        "a step of volts between the two input pairs leaves no room for a signal"));
+        b.put(
+                THETA_JA,
+                new Bounds(
+                        5,
+                        500,
+                        0.5,
+                        5000,
+                        false,
+                        "a bare die in still air is a few hundred °C/W and a package on a heat sink a few; beyond 5000 °C/W"
+                                + " a milliwatt would melt silicon"));
+        b.put(
+                CHOPPING_RIPPLE,
+                new Bounds(NONE, 10e-3, NONE, 1, false, "a ripple of volts at the input leaves no room for a signal"));
         BOUNDS = Collections.unmodifiableMap(b);
     }
 
@@ -249,9 +397,8 @@ public final class CatalogKeys {
      *
      * @param why for the error: the physical reason no op amp goes beyond {@code errorAbove}
      */
-    public record Bounds(double warnBelow, double warnAbove, double errorBelow, double errorAbove, boolean signed,
-            String why) {
-    }
+    public record Bounds(
+            double warnBelow, double warnAbove, double errorBelow, double errorAbove, boolean signed, String why) {}
 
     /**
      * The bounds of every quantity in {@link #QUANTITIES}. Warning bounds are common practice,
@@ -354,8 +501,14 @@ public final class CatalogKeys {
         }
 
         void headroom(String section, Function<Part, Headroom> get) {
-            put(path(section, LOW), Dimension.VOLTAGE, p -> get.apply(p) == null ? null : get.apply(p).low());
-            put(path(section, HIGH), Dimension.VOLTAGE, p -> get.apply(p) == null ? null : get.apply(p).high());
+            put(
+                    path(section, LOW),
+                    Dimension.VOLTAGE,
+                    p -> get.apply(p) == null ? null : get.apply(p).low());
+            put(
+                    path(section, HIGH),
+                    Dimension.VOLTAGE,
+                    p -> get.apply(p) == null ? null : get.apply(p).high());
         }
     }
 }

@@ -33,14 +33,14 @@ import java.util.Map;
  * left out and the rest load, unless {@code strict}.
  */
 public final class CatalogLoader {
-    private CatalogLoader() {
-    }
+    private CatalogLoader() {}
 
     /** Sub-folders of this name hold stage files, which the catalog does not read. */
     public static final String STAGES_FOLDER = "stages";
 
     /** The fix for a catalog folder that cannot be used. */
-    static final String ROOT_FIX = "give the catalog folder with --catalog DIR or the environment variable AMPSIEVE_CATALOG";
+    static final String ROOT_FIX =
+            "give the catalog folder with --catalog DIR or the environment variable AMPSIEVE_CATALOG";
 
     /** At most this many catalog files (*.yaml, *.yml); a hand-typed catalog has tens to hundreds. */
     public static final int MAX_FILES = 20_000;
@@ -76,7 +76,10 @@ public final class CatalogLoader {
             throw new InputException(Problem.error(Located.nowhere(root), "", "catalog folder not found", ROOT_FIX));
         }
         if (!Files.isDirectory(root)) {
-            throw new InputException(Problem.error(Located.nowhere(root), "", "this is a file, not a catalog folder",
+            throw new InputException(Problem.error(
+                    Located.nowhere(root),
+                    "",
+                    "this is a file, not a catalog folder",
                     ROOT_FIX + " (the folder holding the *.yaml files)"));
         }
         List<Problem> problems = new ArrayList<>();
@@ -92,7 +95,10 @@ public final class CatalogLoader {
             problems.addAll(fileProblems);
         }
         if (files.isEmpty() && problems.isEmpty()) {
-            problems.add(Problem.warning(Located.nowhere(root), "", "no catalog files (*.yaml, *.yml) below this folder",
+            problems.add(Problem.warning(
+                    Located.nowhere(root),
+                    "",
+                    "no catalog files (*.yaml, *.yml) below this folder",
                     "add parts (catalog-template/part.yaml shows every key) or " + ROOT_FIX));
         }
         currencies(parts, problems);
@@ -122,10 +128,14 @@ public final class CatalogLoader {
         try {
             walk.run();
         } catch (IOException e) {
-            found.add(Problem.error(Located.nowhere(root), "", "cannot list the folder (" + YamlFiles.describe(e) + ")",
+            found.add(Problem.error(
+                    Located.nowhere(root),
+                    "",
+                    "cannot list the folder (" + YamlFiles.describe(e) + ")",
                     "check its permissions"));
         }
-        Comparator<Path> byPath = Comparator.comparing(p -> root.relativize(p).toString().replace('\\', '/'));
+        Comparator<Path> byPath =
+                Comparator.comparing(p -> root.relativize(p).toString().replace('\\', '/'));
         found.sort(Comparator.comparing(Problem::file, byPath)); // stable: one file's problems keep their order
         problems.addAll(found);
         List<Path> files = walk.files;
@@ -148,8 +158,7 @@ public final class CatalogLoader {
      */
     private static final class Walk {
         /** A link to a regular file inside the catalog: where it is, its target, the target's size. */
-        private record FileLink(Path link, Path real, long size) {
-        }
+        private record FileLink(Path link, Path real, long size) {}
 
         final Path root;
         final List<Problem> problems;
@@ -159,6 +168,7 @@ public final class CatalogLoader {
         final Map<Path, Path> taken = new HashMap<>();
         /** Links to files inside the catalog, taken after the walk so a file's own name wins. */
         final List<FileLink> fileLinks = new ArrayList<>();
+
         Path rootReal;
         int entries;
         long bytes;
@@ -175,7 +185,9 @@ public final class CatalogLoader {
             for (FileLink link : fileLinks) {
                 Path first = taken.get(link.real());
                 if (first != null) {
-                    problems.add(Problem.warning(Located.nowhere(link.link()), "",
+                    problems.add(Problem.warning(
+                            Located.nowhere(link.link()),
+                            "",
                             "the link leads to " + first + ", which is read under its own name; skipped",
                             "remove the link (each file is read once)"));
                 } else {
@@ -190,19 +202,28 @@ public final class CatalogLoader {
             try (DirectoryStream<Path> stream = Files.newDirectoryStream(dir)) {
                 for (Path child : stream) {
                     if (++entries > limits.entries()) {
-                        throw new InputException(Problem.error(Located.nowhere(root), "",
-                                "more than " + limits.entries() + " files and folders below the catalog folder; stopped",
+                        throw new InputException(Problem.error(
+                                Located.nowhere(root),
+                                "",
+                                "more than " + limits.entries()
+                                        + " files and folders below the catalog folder; stopped",
                                 "give the folder that holds the catalog files with --catalog DIR (the limit keeps a"
                                         + " mistyped folder such as / from being searched)"));
                     }
                     children.add(child);
                 }
             } catch (IOException e) {
-                problems.add(Problem.error(Located.nowhere(dir), "", "cannot read (" + YamlFiles.describe(e) + ")",
+                problems.add(Problem.error(
+                        Located.nowhere(dir),
+                        "",
+                        "cannot read (" + YamlFiles.describe(e) + ")",
                         "check its permissions"));
                 return;
             } catch (DirectoryIteratorException e) { // an entry that fails while listing (e.g. in /proc)
-                problems.add(Problem.error(Located.nowhere(dir), "", "cannot read (" + YamlFiles.describe(e.getCause()) + ")",
+                problems.add(Problem.error(
+                        Located.nowhere(dir),
+                        "",
+                        "cannot read (" + YamlFiles.describe(e.getCause()) + ")",
                         "check its permissions"));
                 return;
             }
@@ -223,7 +244,10 @@ public final class CatalogLoader {
                 own = Files.readAttributes(child, BasicFileAttributes.class, LinkOption.NOFOLLOW_LINKS);
             } catch (IOException e) {
                 if (catalogName) {
-                    problems.add(Problem.error(Located.nowhere(child), "", "cannot read (" + YamlFiles.describe(e) + ")",
+                    problems.add(Problem.error(
+                            Located.nowhere(child),
+                            "",
+                            "cannot read (" + YamlFiles.describe(e) + ")",
                             "check its permissions"));
                 }
                 return;
@@ -251,13 +275,16 @@ public final class CatalogLoader {
                 target = Files.readAttributes(real, BasicFileAttributes.class, LinkOption.NOFOLLOW_LINKS);
             } catch (NoSuchFileException e) {
                 if (catalogName) {
-                    problems.add(Problem.error(Located.nowhere(child), "", "the link's target does not exist",
-                            "fix or remove the link"));
+                    problems.add(Problem.error(
+                            Located.nowhere(child), "", "the link's target does not exist", "fix or remove the link"));
                 }
                 return;
             } catch (IOException e) {
                 if (catalogName) {
-                    problems.add(Problem.error(Located.nowhere(child), "", "cannot follow the link (" + YamlFiles.describe(e) + ")",
+                    problems.add(Problem.error(
+                            Located.nowhere(child),
+                            "",
+                            "cannot follow the link (" + YamlFiles.describe(e) + ")",
                             "fix or remove the link"));
                 }
                 return;
@@ -281,10 +308,15 @@ public final class CatalogLoader {
             if (!real.startsWith(rootReal)) {
                 outside(link, real);
             } else if (holderReal.startsWith(real)) {
-                problems.add(Problem.warning(Located.nowhere(link), "",
-                        "the link leads back to " + shown(real) + ", which holds it (a loop); skipped", "remove the link"));
+                problems.add(Problem.warning(
+                        Located.nowhere(link),
+                        "",
+                        "the link leads back to " + shown(real) + ", which holds it (a loop); skipped",
+                        "remove the link"));
             } else {
-                problems.add(Problem.warning(Located.nowhere(link), "",
+                problems.add(Problem.warning(
+                        Located.nowhere(link),
+                        "",
                         "the link leads to " + shown(real) + ", a folder inside the catalog; links to folders are not"
                                 + " followed (the folder is read, or skipped, in its own place)",
                         "remove the link"));
@@ -292,13 +324,18 @@ public final class CatalogLoader {
         }
 
         private void outside(Path link, Path real) {
-            problems.add(Problem.warning(Located.nowhere(link), "",
+            problems.add(Problem.warning(
+                    Located.nowhere(link),
+                    "",
                     "the link leads outside the catalog folder (to " + real + "); skipped",
                     "copy what it points to into the catalog folder, or give that folder with --catalog DIR"));
         }
 
         private void special(Path file, BasicFileAttributes attrs) {
-            problems.add(Problem.error(Located.nowhere(file), "", "not a regular file (" + BoundedFiles.kind(file, attrs) + "); skipped",
+            problems.add(Problem.error(
+                    Located.nowhere(file),
+                    "",
+                    "not a regular file (" + BoundedFiles.kind(file, attrs) + "); skipped",
                     "remove it or rename it: the catalog reads only regular *.yaml and *.yml files"));
         }
 
@@ -322,14 +359,19 @@ public final class CatalogLoader {
     }
 
     private static InputException tooManyFiles(Path root, Limits limits) {
-        return new InputException(Problem.error(Located.nowhere(root), "",
+        return new InputException(Problem.error(
+                Located.nowhere(root),
+                "",
                 "more than " + limits.files() + " catalog files (*.yaml, *.yml) below this folder; stopped",
                 "split the catalog into folders of fewer files and give one with --catalog DIR"));
     }
 
     private static InputException tooManyBytes(Path root, Limits limits) {
-        return new InputException(Problem.error(Located.nowhere(root), "",
-                "the catalog files add up to more than " + limits.bytes() + " bytes" + BoundedFiles.mebibytes(limits.bytes()) + "; stopped",
+        return new InputException(Problem.error(
+                Located.nowhere(root),
+                "",
+                "the catalog files add up to more than " + limits.bytes() + " bytes"
+                        + BoundedFiles.mebibytes(limits.bytes()) + "; stopped",
                 "split the catalog into smaller folders and give one with --catalog DIR"));
     }
 
@@ -337,12 +379,23 @@ public final class CatalogLoader {
      * Top-level keys of a stage file that no part has (the stage package's key table; the catalog
      * may not depend on it, so {@code CatalogLoaderTest} checks these against {@code StageKeys}).
      */
-    static final List<String> STAGE_KEYS = List.of("limit", "gain", "criterion", "topology", "rf", "rg", "band",
-            "full-scale-output", "source-resistance", "max-to-sigma", "trials");
+    static final List<String> STAGE_KEYS = List.of(
+            "limit",
+            "gain",
+            "criterion",
+            "topology",
+            "rf",
+            "rg",
+            "band",
+            "full-scale-output",
+            "source-resistance",
+            "max-to-sigma",
+            "trials");
 
     /** A mapping with no {@code id} and at least one key only stage files have. */
     private static boolean looksLikeStage(Node.Mapping m) {
-        return !m.entries().containsKey(CatalogKeys.ID) && m.entries().keySet().stream().anyMatch(STAGE_KEYS::contains);
+        return !m.entries().containsKey(CatalogKeys.ID)
+                && m.entries().keySet().stream().anyMatch(STAGE_KEYS::contains);
     }
 
     private static boolean isCatalogFile(Path file) {
@@ -351,8 +404,15 @@ public final class CatalogLoader {
         return !name.startsWith(".") && (lower.endsWith(".yaml") || lower.endsWith(".yml"));
     }
 
-    private static void readFile(Path catalogRoot, Path file, Limits limits, long[] bytesRead, List<Part> parts,
-            Map<String, Located> ids, List<Problem> problems) throws InputException {
+    private static void readFile(
+            Path catalogRoot,
+            Path file,
+            Limits limits,
+            long[] bytesRead,
+            List<Part> parts,
+            Map<String, Located> ids,
+            List<Problem> problems)
+            throws InputException {
         byte[] bytes;
         Node root;
         try {
@@ -373,14 +433,19 @@ public final class CatalogLoader {
             return;
         }
         if (root instanceof Node.Scalar s && s.text() == null) {
-            problems.add(Problem.warning(root.at(), "", "empty file, no parts",
+            problems.add(Problem.warning(
+                    root.at(),
+                    "",
+                    "empty file, no parts",
                     "add a part (catalog-template/part.yaml shows every key) or delete the file"));
             return;
         }
         if (root instanceof Node.Mapping m && m.entries().containsKey(CatalogKeys.PARTS)) {
             for (var e : m.keyAt().entrySet()) {
                 if (!e.getKey().equals(CatalogKeys.PARTS)) {
-                    problems.add(Problem.error(e.getValue(), e.getKey(),
+                    problems.add(Problem.error(
+                            e.getValue(),
+                            e.getKey(),
                             "unknown key beside 'parts:' (a file with a parts list holds only that list)",
                             "move it into one of the parts, or remove it"));
                 }
@@ -388,26 +453,45 @@ public final class CatalogLoader {
             Node list = m.entries().get(CatalogKeys.PARTS);
             if (list instanceof Node.Seq seq) {
                 for (int i = 0; i < seq.items().size(); i++) {
-                    accept(PartReader.read(seq.items().get(i), CatalogKeys.PARTS + "[" + i + "]", false), parts, ids,
+                    accept(
+                            PartReader.read(seq.items().get(i), CatalogKeys.PARTS + "[" + i + "]", false),
+                            parts,
+                            ids,
                             problems);
                 }
             } else if (list instanceof Node.Scalar s && s.text() == null) {
-                problems.add(Problem.warning(list.at(), CatalogKeys.PARTS, "the list is empty", "add parts as '- id: ...' items"));
+                problems.add(Problem.warning(
+                        list.at(), CatalogKeys.PARTS, "the list is empty", "add parts as '- id: ...' items"));
             } else {
-                problems.add(Problem.error(list.at(), CatalogKeys.PARTS, "expected a list of parts, found " + list.kind(),
+                problems.add(Problem.error(
+                        list.at(),
+                        CatalogKeys.PARTS,
+                        "expected a list of parts, found " + list.kind(),
                         "write each part as an item starting with '- id: ...', indented below 'parts:'"));
             }
             return;
         }
         if (root instanceof Node.Mapping m && looksLikeStage(m)) {
-            problems.add(Problem.warning(root.at(), "", "looks like a stage file (it has "
-                    + String.join(", ", m.entries().keySet().stream().filter(STAGE_KEYS::contains).limit(3).toList())
-                    + " and no id); skipped",
-                    "move it to a '" + STAGES_FOLDER + "' folder (which the catalog does not read) and pass it with --stage"));
+            problems.add(Problem.warning(
+                    root.at(),
+                    "",
+                    "looks like a stage file (it has "
+                            + String.join(
+                                    ", ",
+                                    m.entries().keySet().stream()
+                                            .filter(STAGE_KEYS::contains)
+                                            .limit(3)
+                                            .toList())
+                            + " and no id); skipped",
+                    "move it to a '" + STAGES_FOLDER
+                            + "' folder (which the catalog does not read) and pass it with --stage"));
             return;
         }
         if (root instanceof Node.Seq) {
-            problems.add(Problem.error(root.at(), "", "the file is a bare list",
+            problems.add(Problem.error(
+                    root.at(),
+                    "",
+                    "the file is a bare list",
                     "put 'parts:' on a line of its own above the list and indent the list below it"));
             return;
         }
@@ -415,8 +499,7 @@ public final class CatalogLoader {
     }
 
     /** What {@link #readPart} found: the part (null when it has an error) and every problem. */
-    public record PartText(Part part, List<Problem> problems) {
-    }
+    public record PartText(Part part, List<Problem> problems) {}
 
     /**
      * Reads YAML text holding one part with exactly the rules a catalog file gets (for tools that
@@ -442,14 +525,18 @@ public final class CatalogLoader {
     }
 
     /** Keeps the part unless it has errors or its id was taken by an earlier part. */
-    private static void accept(PartReader.Result r, List<Part> parts, Map<String, Located> ids, List<Problem> problems) {
+    private static void accept(
+            PartReader.Result r, List<Part> parts, Map<String, Located> ids, List<Problem> problems) {
         problems.addAll(r.problems());
         boolean ok = r.part() != null;
         if (r.id() != null) {
             Located first = ids.putIfAbsent(r.id(), r.idAt());
             if (first != null) {
-                problems.add(Problem.error(r.idAt(), idField(r), "id '" + r.id() + "' is already used at "
-                        + first.file() + ":" + first.line(), "give each part its own id"));
+                problems.add(Problem.error(
+                        r.idAt(),
+                        idField(r),
+                        "id '" + r.id() + "' is already used at " + first.file() + ":" + first.line(),
+                        "give each part its own id"));
                 ok = false;
             }
         }
@@ -470,9 +557,13 @@ public final class CatalogLoader {
         }
         if (byCurrency.size() > 1) {
             Part other = new ArrayList<>(byCurrency.values()).get(1);
-            problems.add(Problem.warning(other.where(), "", "part '" + other.id() + "' is priced in "
-                    + other.price().currency() + "; the catalog uses " + String.join(", ", byCurrency.keySet())
-                    + ", and prices are compared as plain numbers", "convert every price to one currency"));
+            problems.add(Problem.warning(
+                    other.where(),
+                    "",
+                    "part '" + other.id() + "' is priced in "
+                            + other.price().currency() + "; the catalog uses " + String.join(", ", byCurrency.keySet())
+                            + ", and prices are compared as plain numbers",
+                    "convert every price to one currency"));
         }
     }
 }

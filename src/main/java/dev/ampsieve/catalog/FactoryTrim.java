@@ -2,7 +2,10 @@ package dev.ampsieve.catalog;
 
 /** How the maker trimmed the offset at the wafer or package stage. */
 public enum FactoryTrim {
-    NONE("none"), LASER("laser"), FUSE("fuse"), OTHER("other");
+    NONE("none"),
+    LASER("laser"),
+    FUSE("fuse"),
+    OTHER("other");
 
     private final String key;
 

@@ -5,5 +5,4 @@ package dev.ampsieve.catalog;
  * volts below the positive rail, and the offset changes there by up to {@code offsetStep} (V,
  * a magnitude).
  */
-public record InputCrossover(double fromPositiveRail, double offsetStep) {
-}
+public record InputCrossover(double fromPositiveRail, double offsetStep) {}

@@ -2,7 +2,9 @@ package dev.ampsieve.catalog;
 
 /** The input stage technology; decides how bias current behaves with temperature. */
 public enum InputType {
-    BIPOLAR("bipolar"), JFET("jfet"), CMOS("cmos");
+    BIPOLAR("bipolar"),
+    JFET("jfet"),
+    CMOS("cmos");
 
     private final String key;
 

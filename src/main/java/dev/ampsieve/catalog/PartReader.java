@@ -4,11 +4,14 @@ import static dev.ampsieve.catalog.CatalogKeys.AOL;
 import static dev.ampsieve.catalog.CatalogKeys.ARCHITECTURE;
 import static dev.ampsieve.catalog.CatalogKeys.CHANNELS;
 import static dev.ampsieve.catalog.CatalogKeys.CHOPPING_FREQUENCY;
+import static dev.ampsieve.catalog.CatalogKeys.CHOPPING_RIPPLE;
 import static dev.ampsieve.catalog.CatalogKeys.CMRR;
+import static dev.ampsieve.catalog.CatalogKeys.COMMON_MODE;
 import static dev.ampsieve.catalog.CatalogKeys.CURRENCY;
 import static dev.ampsieve.catalog.CatalogKeys.EN;
 import static dev.ampsieve.catalog.CatalogKeys.EN_CORNER;
 import static dev.ampsieve.catalog.CatalogKeys.FACTORY_TRIM;
+import static dev.ampsieve.catalog.CatalogKeys.FROM_POSITIVE_RAIL;
 import static dev.ampsieve.catalog.CatalogKeys.GBW;
 import static dev.ampsieve.catalog.CatalogKeys.HIGH;
 import static dev.ampsieve.catalog.CatalogKeys.IB;
@@ -17,12 +20,6 @@ import static dev.ampsieve.catalog.CatalogKeys.IN;
 import static dev.ampsieve.catalog.CatalogKeys.INPUT;
 import static dev.ampsieve.catalog.CatalogKeys.INPUT_CAPACITANCE;
 import static dev.ampsieve.catalog.CatalogKeys.INPUT_CROSSOVER;
-import static dev.ampsieve.catalog.CatalogKeys.TEST_CONDITIONS;
-import static dev.ampsieve.catalog.CatalogKeys.THETA_JA;
-import static dev.ampsieve.catalog.CatalogKeys.CHOPPING_RIPPLE;
-import static dev.ampsieve.catalog.CatalogKeys.COMMON_MODE;
-import static dev.ampsieve.catalog.CatalogKeys.FROM_POSITIVE_RAIL;
-import static dev.ampsieve.catalog.CatalogKeys.OFFSET_STEP;
 import static dev.ampsieve.catalog.CatalogKeys.INPUT_HEADROOM;
 import static dev.ampsieve.catalog.CatalogKeys.IN_CORNER;
 import static dev.ampsieve.catalog.CatalogKeys.IOS;
@@ -34,6 +31,7 @@ import static dev.ampsieve.catalog.CatalogKeys.MIN;
 import static dev.ampsieve.catalog.CatalogKeys.NOISE;
 import static dev.ampsieve.catalog.CatalogKeys.NOTES;
 import static dev.ampsieve.catalog.CatalogKeys.NULL_PINS;
+import static dev.ampsieve.catalog.CatalogKeys.OFFSET_STEP;
 import static dev.ampsieve.catalog.CatalogKeys.OUTPUT_HEADROOM;
 import static dev.ampsieve.catalog.CatalogKeys.PACKAGES;
 import static dev.ampsieve.catalog.CatalogKeys.PARTS;
@@ -47,6 +45,8 @@ import static dev.ampsieve.catalog.CatalogKeys.SOURCE;
 import static dev.ampsieve.catalog.CatalogKeys.SUPPLY;
 import static dev.ampsieve.catalog.CatalogKeys.TAGS;
 import static dev.ampsieve.catalog.CatalogKeys.TEMPERATURE;
+import static dev.ampsieve.catalog.CatalogKeys.TEST_CONDITIONS;
+import static dev.ampsieve.catalog.CatalogKeys.THETA_JA;
 import static dev.ampsieve.catalog.CatalogKeys.TITLE;
 import static dev.ampsieve.catalog.CatalogKeys.TYP;
 import static dev.ampsieve.catalog.CatalogKeys.UNIT;
@@ -81,11 +81,11 @@ import java.util.regex.Pattern;
 final class PartReader {
 
     /** What reading one part gave: its id and where it was written (for duplicate checks), the part or null. */
-    record Result(String prefix, String id, Located idAt, Part part, List<Problem> problems) {
-    }
+    record Result(String prefix, String id, Located idAt, Part part, List<Problem> problems) {}
 
     /** Lowercase words of letters and digits joined by single dashes; no leading dash (it would read as an option). */
     static final Pattern ID_FORMAT = Pattern.compile("[a-z0-9]+(?:-[a-z0-9]+)*");
+
     static final int MAX_ID_LENGTH = 64;
     static final int MAX_CHANNELS = 64;
 
@@ -106,6 +106,7 @@ final class PartReader {
     private final Fields f = new Fields(problems);
     /** Quantities read so far, by key path (vos.max), and where each was written. */
     private final Map<String, Double> values = new HashMap<>();
+
     private final Map<String, Located> at = new HashMap<>();
     /** Key paths written in the file, valid or not: an absence warning is only for keys really absent. */
     private final Set<String> written = new HashSet<>();
@@ -121,7 +122,9 @@ final class PartReader {
      */
     static Result read(Node node, String prefix, boolean topLevel) {
         if (!(node instanceof Node.Mapping m)) {
-            List<Problem> p = List.of(Problem.error(node.at(), prefix,
+            List<Problem> p = List.of(Problem.error(
+                    node.at(),
+                    prefix,
                     "expected a part (id: ..., architecture: ..., ...), found " + node.kind(),
                     "write each part as 'key: value' lines; see catalog-template/part.yaml"));
             return new Result(prefix, null, node.at(), null, p);
@@ -155,7 +158,8 @@ final class PartReader {
         Range temperature = readRange(TEMPERATURE);
         Spread vos = readSpread(VOS, true);
         Node.Mapping drift = section(VOS_DRIFT);
-        Spread vosDrift = drift == null ? null
+        Spread vosDrift = drift == null
+                ? null
                 : new Spread(quantity(drift, VOS_DRIFT, TYP), quantity(drift, VOS_DRIFT, MAX), null);
         Spread ib = readSpread(IB, false);
         Spread ios = readSpread(IOS, false);
@@ -188,11 +192,42 @@ final class PartReader {
         if (f.hasErrors()) {
             return new Result(prefix, id, idAt, null, problems);
         }
-        Part p = new Part(id, title, Architecture.of(arch), InputType.of(input),
+        Part p = new Part(
+                id,
+                title,
+                Architecture.of(arch),
+                InputType.of(input),
                 trim == null ? FactoryTrim.NONE : FactoryTrim.of(trim),
-                nullPins != null && nullPins, channels == null ? 1 : channels, packages, tags, price, supply,
-                temperature, vos, vosDrift, ib, ios, cmrr, psrr, aol, gbw, slew, noise, ltd, inHead, outHead, chop, iq, cin,
-                tests, crossover, thetaJa, ripple, source, notes, part.at());
+                nullPins != null && nullPins,
+                channels == null ? 1 : channels,
+                packages,
+                tags,
+                price,
+                supply,
+                temperature,
+                vos,
+                vosDrift,
+                ib,
+                ios,
+                cmrr,
+                psrr,
+                aol,
+                gbw,
+                slew,
+                noise,
+                ltd,
+                inHead,
+                outHead,
+                chop,
+                iq,
+                cin,
+                tests,
+                crossover,
+                thetaJa,
+                ripple,
+                source,
+                notes,
+                part.at());
         return new Result(prefix, id, idAt, p, problems);
     }
 
@@ -214,8 +249,12 @@ final class PartReader {
     /** The catalog's id rule: null when {@code id} is valid, else the error, at {@code at}. */
     static Problem idProblem(String id, Located at, String field) {
         if (id.length() > MAX_ID_LENGTH || !ID_FORMAT.matcher(id).matches()) {
-            return Problem.error(at, field, "'" + id + "' is not a valid id (lowercase letters, digits and single dashes,"
-                    + " at most " + MAX_ID_LENGTH + " characters)", "write for example '" + suggestId(id) + "'");
+            return Problem.error(
+                    at,
+                    field,
+                    "'" + id + "' is not a valid id (lowercase letters, digits and single dashes," + " at most "
+                            + MAX_ID_LENGTH + " characters)",
+                    "write for example '" + suggestId(id) + "'");
         }
         return null;
     }
@@ -229,9 +268,12 @@ final class PartReader {
         return s.isEmpty() ? "my-part-01" : s;
     }
 
-    private static final List<String> ARCHITECTURES = Arrays.stream(Architecture.values()).map(Architecture::key).toList();
-    private static final List<String> INPUTS = Arrays.stream(InputType.values()).map(InputType::key).toList();
-    private static final List<String> TRIMS = Arrays.stream(FactoryTrim.values()).map(FactoryTrim::key).toList();
+    private static final List<String> ARCHITECTURES =
+            Arrays.stream(Architecture.values()).map(Architecture::key).toList();
+    private static final List<String> INPUTS =
+            Arrays.stream(InputType.values()).map(InputType::key).toList();
+    private static final List<String> TRIMS =
+            Arrays.stream(FactoryTrim.values()).map(FactoryTrim::key).toList();
 
     /** The mapping at {@code key}, its keys checked; null when absent or not a mapping (with a problem). */
     private Node.Mapping section(String key) {
@@ -248,7 +290,10 @@ final class PartReader {
         Dimension d = CatalogKeys.dimension(path(key, first));
         // "vos: 2 mV" most likely meant the maximum: show the user's own value in place
         String example = v instanceof Node.Scalar s ? s.text() : d == null ? "..." : d.example();
-        f.error(v.at(), join(prefix, key), "expected its keys (" + String.join(", ", sub) + ") below it, found " + v.kind(),
+        f.error(
+                v.at(),
+                join(prefix, key),
+                "expected its keys (" + String.join(", ", sub) + ") below it, found " + v.kind(),
                 "write '" + key + ": {" + first + ": " + example + "}'");
         return null;
     }
@@ -260,7 +305,8 @@ final class PartReader {
         if (m.entries().containsKey(key)) {
             written.add(keyPath);
         }
-        Double v = f.quantity(m, section == null ? prefix : join(prefix, section), key, d, CatalogKeys.example(keyPath));
+        Double v =
+                f.quantity(m, section == null ? prefix : join(prefix, section), key, d, CatalogKeys.example(keyPath));
         if (v != null) {
             values.put(keyPath, v);
             at.put(keyPath, Fields.where(m, key));
@@ -315,12 +361,18 @@ final class PartReader {
     private Price readPriceBreaks(Node.Seq seq) {
         String field = join(prefix, PRICE);
         if (seq.items().isEmpty()) {
-            f.error(seq.at(), field, "the list of price breaks is empty",
+            f.error(
+                    seq.at(),
+                    field,
+                    "the list of price breaks is empty",
                     "write '- {quantity: 1, unit: 2.10}' items, or 'price: {unit: 1.20, quantity: 1000}'");
             return null;
         }
         if (seq.items().size() > MAX_PRICE_BREAKS) {
-            f.error(seq.at(), field, seq.items().size() + " price breaks, more than " + MAX_PRICE_BREAKS,
+            f.error(
+                    seq.at(),
+                    field,
+                    seq.items().size() + " price breaks, more than " + MAX_PRICE_BREAKS,
                     "keep the breaks your orders can reach");
             return null;
         }
@@ -333,7 +385,10 @@ final class PartReader {
             String itemField = field + "[" + i + "]";
             Node item = seq.items().get(i);
             if (!(item instanceof Node.Mapping m)) {
-                f.error(item.at(), itemField, "expected a price break {quantity, unit}, found " + item.kind(),
+                f.error(
+                        item.at(),
+                        itemField,
+                        "expected a price break {quantity, unit}, found " + item.kind(),
                         "write '- {quantity: 1000, unit: 1.25}'");
                 ok = false;
                 continue;
@@ -346,8 +401,11 @@ final class PartReader {
             String cur = f.text(m, itemField, CURRENCY);
             if (cur != null) {
                 if (currency != null && !currency.equals(cur)) {
-                    f.error(Fields.where(m, CURRENCY), join(itemField, CURRENCY), "'" + cur + "' differs from '" + currency
-                            + "' at " + currencyField, "give every break in one currency");
+                    f.error(
+                            Fields.where(m, CURRENCY),
+                            join(itemField, CURRENCY),
+                            "'" + cur + "' differs from '" + currency + "' at " + currencyField,
+                            "give every break in one currency");
                     ok = false;
                 } else if (currency == null) {
                     currency = cur;
@@ -357,15 +415,21 @@ final class PartReader {
             if (unit != null) {
                 Located unitAt = Fields.where(m, UNIT);
                 if (unit < 0) {
-                    f.error(unitAt, join(itemField, UNIT), Units.format(unit, Dimension.NUMBER)
-                            + " is negative, which is impossible here", "write the unit price as a positive number");
+                    f.error(
+                            unitAt,
+                            join(itemField, UNIT),
+                            Units.format(unit, Dimension.NUMBER) + " is negative, which is impossible here",
+                            "write the unit price as a positive number");
                 } else {
                     checkBound(path(PRICE, UNIT), join(itemField, UNIT), unit, unitAt);
                 }
             }
             if (qty != null && seen.containsKey(qty)) {
-                f.error(Fields.where(m, QUANTITY), join(itemField, QUANTITY), "quantity " + qty + " is already a break at "
-                        + seen.get(qty), "give each break its own quantity");
+                f.error(
+                        Fields.where(m, QUANTITY),
+                        join(itemField, QUANTITY),
+                        "quantity " + qty + " is already a break at " + seen.get(qty),
+                        "give each break its own quantity");
                 ok = false;
             } else if (qty != null) {
                 seen.put(qty, itemField);
@@ -384,8 +448,16 @@ final class PartReader {
             Price.Break lower = price.breaks().get(i - 1);
             Price.Break higher = price.breaks().get(i);
             if (higher.unit() > lower.unit()) {
-                f.warning(seq.at(), field, String.format(Locale.ROOT, "the unit price at %d (%.2f) is above the price at"
-                        + " %d (%.2f)", higher.quantity(), higher.unit(), lower.quantity(), lower.unit()),
+                f.warning(
+                        seq.at(),
+                        field,
+                        String.format(
+                                Locale.ROOT,
+                                "the unit price at %d (%.2f) is above the price at" + " %d (%.2f)",
+                                higher.quantity(),
+                                higher.unit(),
+                                lower.quantity(),
+                                lower.unit()),
                         "check the columns: larger orders usually cost less per unit");
             }
         }
@@ -412,7 +484,10 @@ final class PartReader {
         Spread s = new Spread(quantity(m, key, TYP), quantity(m, key, MAX), quantity(m, key, MAX_OVER_TEMP));
         // a value, not only a key: 'max:' left empty gives no figure either
         if (typOrMaxRequired && !written(m, TYP) && !written(m, MAX)) {
-            f.error(m.at(), join(prefix, key), "neither typ nor max is given",
+            f.error(
+                    m.at(),
+                    join(prefix, key),
+                    "neither typ nor max is given",
                     "add 'max: " + CatalogKeys.dimension(path(key, MAX)).example()
                             + "' from the datasheet's 25 °C column (typ when it gives no max)");
         }
@@ -435,7 +510,10 @@ final class PartReader {
         if (m == null) {
             return null;
         }
-        return new Noise(quantity(m, NOISE, EN), quantity(m, NOISE, EN_CORNER), quantity(m, NOISE, IN),
+        return new Noise(
+                quantity(m, NOISE, EN),
+                quantity(m, NOISE, EN_CORNER),
+                quantity(m, NOISE, IN),
                 quantity(m, NOISE, IN_CORNER));
     }
 
@@ -505,13 +583,17 @@ final class PartReader {
         nonNegative(path(IB, MAX_OVER_TEMP), ibFix);
         for (String s : List.of(CMRR, PSRR, AOL)) {
             for (String k : List.of(MIN, TYP)) {
-                nonNegative(path(s, k), "write the level as a positive number of dB (some datasheets print -100 dB for 100 dB)");
+                nonNegative(
+                        path(s, k),
+                        "write the level as a positive number of dB (some datasheets print -100 dB for 100 dB)");
             }
         }
         positive(path(SUPPLY, MIN), "write the total supply (V+ minus V-), for example '2.7 V'");
         positive(path(SUPPLY, MAX), "write the total supply (V+ minus V-), for example '36 V'");
         positive(GBW, "write the gain-bandwidth product from the datasheet, for example '1.5 MHz'");
-        positive(SLEW, "write the slew rate as a positive value, for example '0.5 V/us'; leave the key out when unknown");
+        positive(
+                SLEW,
+                "write the slew rate as a positive value, for example '0.5 V/us'; leave the key out when unknown");
         positive(path(NOISE, EN), "write the white-noise density, for example '12 nV/rtHz'; leave it out when unknown");
         positive(path(NOISE, IN), "write the white-noise density, for example '3 fA/rtHz'; leave it out when unknown");
         nonNegative(path(NOISE, EN_CORNER), "write 0 Hz when there is no 1/f region, else the corner frequency");
@@ -521,21 +603,30 @@ final class PartReader {
         positive(path(LONG_TERM_DRIFT, PER), "write the time the drift figure is given for, for example '1000 h'");
         positive(CHOPPING_FREQUENCY, "write the chopping or auto-zero clock, for example '100 kHz'");
         positive(QUIESCENT_CURRENT, "write the supply current, for example '1.5 mA'");
-        positive(INPUT_CAPACITANCE, "write the common-mode plus differential input capacitance, for example '7 pF';"
-                + " leave the key out when unknown");
-        positive(path(TEST_CONDITIONS, SUPPLY), "write the total supply of the datasheet's table (V+ minus V-), for example '30 V'");
-        nonNegative(path(TEST_CONDITIONS, COMMON_MODE), "write the common mode in volts above the negative rail"
-                + " (mid-supply of a 30 V table is '15 V')");
-        nonNegative(path(INPUT_CROSSOVER, FROM_POSITIVE_RAIL), "write the distance below the positive rail as a"
-                + " positive value, for example '1.2 V'");
+        positive(
+                INPUT_CAPACITANCE,
+                "write the common-mode plus differential input capacitance, for example '7 pF';"
+                        + " leave the key out when unknown");
+        positive(
+                path(TEST_CONDITIONS, SUPPLY),
+                "write the total supply of the datasheet's table (V+ minus V-), for example '30 V'");
+        nonNegative(
+                path(TEST_CONDITIONS, COMMON_MODE),
+                "write the common mode in volts above the negative rail" + " (mid-supply of a 30 V table is '15 V')");
+        nonNegative(
+                path(INPUT_CROSSOVER, FROM_POSITIVE_RAIL),
+                "write the distance below the positive rail as a" + " positive value, for example '1.2 V'");
         nonNegative(path(INPUT_CROSSOVER, OFFSET_STEP), MAGNITUDE_FIX);
-        positive(THETA_JA, "write the package's junction-to-ambient thermal resistance, for example '150 C/W';"
-                + " leave the key out when unknown");
+        positive(
+                THETA_JA,
+                "write the package's junction-to-ambient thermal resistance, for example '150 C/W';"
+                        + " leave the key out when unknown");
         nonNegative(CHOPPING_RIPPLE, MAGNITUDE_FIX);
     }
 
     private void checkOrder() {
-        String spreadFix = "typ is the usual value and max the guaranteed limit; check which datasheet column each came from";
+        String spreadFix =
+                "typ is the usual value and max the guaranteed limit; check which datasheet column each came from";
         String tempFix = "max-over-temp covers the whole rated range, which includes 25 °C, so it is at least max;"
                 + " check the columns";
         for (String s : List.of(VOS, IB, IOS)) {
@@ -550,14 +641,23 @@ final class PartReader {
             farAbove(path(s, TYP), path(s, MAX));
         }
         for (String s : List.of(CMRR, PSRR, AOL)) {
-            notAbove(path(s, MIN), path(s, TYP), false,
+            notAbove(
+                    path(s, MIN),
+                    path(s, TYP),
+                    false,
                     "min is the guaranteed floor and typ the usual value; check which datasheet column each came from");
         }
         notAbove(path(SUPPLY, MIN), path(SUPPLY, MAX), false, "swap them: min is the lowest total supply");
         notAbove(path(TEMPERATURE, MIN), path(TEMPERATURE, MAX), false, "swap them: min is the coldest rated ambient");
-        notAbove(path(TEST_CONDITIONS, COMMON_MODE), path(TEST_CONDITIONS, SUPPLY), false,
+        notAbove(
+                path(TEST_CONDITIONS, COMMON_MODE),
+                path(TEST_CONDITIONS, SUPPLY),
+                false,
                 "the common mode is measured above the negative rail, so it lies inside the supply; check the datasheet's conditions");
-        notAbove(path(INPUT_CROSSOVER, FROM_POSITIVE_RAIL), path(SUPPLY, MAX), false,
+        notAbove(
+                path(INPUT_CROSSOVER, FROM_POSITIVE_RAIL),
+                path(SUPPLY, MAX),
+                false,
                 "the crossover lies between the rails; write its distance below the positive rail");
     }
 
@@ -585,27 +685,42 @@ final class PartReader {
         boolean sized = b.signed() || x > 0; // zero is for the sign checks
         String what = d == Dimension.TEMPERATURE ? "a rated range" : "an op amp";
         if (x > b.errorAbove()) {
-            f.error(where, field, beyond(v, b.errorAbove(), d) + ", impossible for " + what + " (" + b.why() + ")",
+            f.error(
+                    where,
+                    field,
+                    beyond(v, b.errorAbove(), d) + ", impossible for " + what + " (" + b.why() + ")",
                     "check the unit prefix (p, n, u, m, k, M) and the datasheet column; the largest "
                             + (b.signed() ? "value" : "size") + " accepted here is " + Units.format(b.errorAbove(), d));
         } else if (sized && x < b.errorBelow()) {
-            f.error(where, field, Units.format(v, d) + " is below " + Units.format(b.errorBelow(), d) + ", impossible for "
-                    + what + " (" + b.why() + ")", "check the unit prefix (p, n, u, m, k, M) and the datasheet"
-                    + " column; the smallest " + (b.signed() ? "value" : "size") + " accepted here is "
-                    + Units.format(b.errorBelow(), d));
+            f.error(
+                    where,
+                    field,
+                    Units.format(v, d) + " is below " + Units.format(b.errorBelow(), d) + ", impossible for " + what
+                            + " (" + b.why() + ")",
+                    "check the unit prefix (p, n, u, m, k, M) and the datasheet"
+                            + " column; the smallest " + (b.signed() ? "value" : "size") + " accepted here is "
+                            + Units.format(b.errorBelow(), d));
         } else if (x > b.warnAbove()) {
-            f.warning(where, field, beyond(v, b.warnAbove(), d) + ", implausible for " + what,
+            f.warning(
+                    where,
+                    field,
+                    beyond(v, b.warnAbove(), d) + ", implausible for " + what,
                     "check the unit prefix (u, m, k, M) and the column");
         } else if (sized && x < b.warnBelow()) {
-            f.warning(where, field, Units.format(v, d) + " is below " + Units.format(b.warnBelow(), d)
-                    + ", implausible for " + what, b.signed() ? "check the sign and the unit"
-                    : "check the unit prefix (p, n, u, k, M) and the column");
+            f.warning(
+                    where,
+                    field,
+                    Units.format(v, d) + " is below " + Units.format(b.warnBelow(), d) + ", implausible for " + what,
+                    b.signed()
+                            ? "check the sign and the unit"
+                            : "check the unit prefix (p, n, u, k, M) and the column");
         }
     }
 
     /** "2.00 V is above 1.00 V", or for a negative value compared by size "-2.00 V is below -1.00 V". */
     private static String beyond(double v, double limit, Dimension d) {
-        return v < 0 && limit > 0 ? Units.format(v, d) + " is below " + Units.format(-limit, d)
+        return v < 0 && limit > 0
+                ? Units.format(v, d) + " is below " + Units.format(-limit, d)
                 : Units.format(v, d) + " is above " + Units.format(limit, d);
     }
 
@@ -613,7 +728,9 @@ final class PartReader {
     private void warnAbsences(String arch, String input) {
         if (arch == null || input == null) {
             if (!written.contains(path(NOISE, EN))) {
-                problems.add(Problem.warning(part.at(), join(prefix, path(NOISE, EN)),
+                problems.add(Problem.warning(
+                        part.at(),
+                        join(prefix, path(NOISE, EN)),
                         "not given: it will be estimated (common practice, conservative) and marked estimated",
                         "add 'noise: {en: 12 nV/rtHz}' with the datasheet's white-noise density"));
             }
@@ -623,7 +740,8 @@ final class PartReader {
         boolean selfCorrecting = !arch.equals(Architecture.STANDARD.key());
         boolean plainBipolar = !selfCorrecting && input.equals(InputType.BIPOLAR.key());
         String kind = selfCorrecting ? arch + " (" + input + ")" : input;
-        String estimated = " will be estimated for a " + kind + " input (common practice, conservative) and marked estimated";
+        String estimated =
+                " will be estimated for a " + kind + " input (common practice, conservative) and marked estimated";
         List<String> noise = new ArrayList<>();
         noise.add(EN);
         if (!selfCorrecting) {
@@ -633,53 +751,75 @@ final class PartReader {
         if (plainBipolar) {
             noise.add(IN_CORNER);
         }
-        List<String> absent = noise.stream().filter(k -> !written.contains(path(NOISE, k))).toList();
+        List<String> absent =
+                noise.stream().filter(k -> !written.contains(path(NOISE, k))).toList();
         boolean noNoise = noise.stream().noneMatch(k -> written.contains(path(NOISE, k)))
-                && !written.contains(path(NOISE, EN_CORNER)) && !written.contains(path(NOISE, IN_CORNER));
+                && !written.contains(path(NOISE, EN_CORNER))
+                && !written.contains(path(NOISE, IN_CORNER));
         if (noNoise) {
-            problems.add(Problem.warning(part.at(), join(prefix, NOISE),
+            problems.add(Problem.warning(
+                    part.at(),
+                    join(prefix, NOISE),
                     "not given: " + String.join(", ", absent) + estimated,
                     "add 'noise: {en: 12 nV/rtHz, in: 0.1 pA/rtHz}' with the datasheet's white-noise densities"
                             + (selfCorrecting ? "" : " and their 1/f corners")));
         } else {
             for (String k : absent) {
-                problems.add(Problem.warning(part.at(), join(prefix, path(NOISE, k)), "not given: it" + estimated,
+                problems.add(Problem.warning(
+                        part.at(),
+                        join(prefix, path(NOISE, k)),
+                        "not given: it" + estimated,
                         "add noise." + k + " from the datasheet"));
             }
         }
-        boolean noIb = !written.contains(path(IB, TYP)) && !written.contains(path(IB, MAX))
+        boolean noIb = !written.contains(path(IB, TYP))
+                && !written.contains(path(IB, MAX))
                 && !written.contains(path(IB, MAX_OVER_TEMP));
         if (noIb) {
-            problems.add(Problem.warning(part.at(), join(prefix, IB), "not given: bias current" + estimated,
+            problems.add(Problem.warning(
+                    part.at(),
+                    join(prefix, IB),
+                    "not given: bias current" + estimated,
                     "add 'ib: {typ: ..., max: ..., max-over-temp: ...}' from the datasheet"));
         }
-        boolean noIos = !written.contains(path(IOS, TYP)) && !written.contains(path(IOS, MAX))
+        boolean noIos = !written.contains(path(IOS, TYP))
+                && !written.contains(path(IOS, MAX))
                 && !written.contains(path(IOS, MAX_OVER_TEMP));
         if (noIos) {
-            problems.add(Problem.warning(part.at(), join(prefix, IOS),
+            problems.add(Problem.warning(
+                    part.at(),
+                    join(prefix, IOS),
                     "not given: offset current will be taken equal to ib (conservative) and marked estimated",
                     "add 'ios: {typ: ..., max: ..., max-over-temp: ...}' from the datasheet"));
         }
         for (String[] r : new String[][] {{CMRR, "60 dB"}, {PSRR, "60 dB"}, {AOL, "80 dB"}}) {
             if (!written.contains(path(r[0], MIN)) && !written.contains(path(r[0], TYP))) {
-                problems.add(Problem.warning(part.at(), join(prefix, r[0]),
+                problems.add(Problem.warning(
+                        part.at(),
+                        join(prefix, r[0]),
                         "not given: a pessimistic " + r[1] + " will be assumed and marked estimated",
                         "add '" + r[0] + ": {min: ..., typ: ...}' from the datasheet"));
             }
         }
         if (!written.contains(path(LONG_TERM_DRIFT, VALUE))) {
-            problems.add(Problem.warning(part.at(), join(prefix, LONG_TERM_DRIFT),
+            problems.add(Problem.warning(
+                    part.at(),
+                    join(prefix, LONG_TERM_DRIFT),
                     "not given: aging over a stage's service life" + estimated,
                     "add 'long-term-drift: {value: ..., per: 1000 h}' from the datasheet"));
         }
         boolean noDrift = !written.contains(path(VOS_DRIFT, TYP)) && !written.contains(path(VOS_DRIFT, MAX));
         boolean standardBipolar = arch.equals(Architecture.STANDARD.key()) && input.equals(InputType.BIPOLAR.key());
         if (noDrift && standardBipolar) {
-            problems.add(Problem.warning(part.at(), join(prefix, VOS_DRIFT),
+            problems.add(Problem.warning(
+                    part.at(),
+                    join(prefix, VOS_DRIFT),
                     "not given: drift will be estimated from vos (VOS/T rule, about 3.3 µV/°C per mV) and marked as estimated",
                     "add 'vos-drift: {typ: ..., max: ...}' when the datasheet gives it"));
         } else if (noDrift && !written.contains(path(VOS, MAX_OVER_TEMP))) {
-            problems.add(Problem.warning(part.at(), join(prefix, VOS_DRIFT),
+            problems.add(Problem.warning(
+                    part.at(),
+                    join(prefix, VOS_DRIFT),
                     "not given, nor vos.max-over-temp: drift over temperature will be an assumed default,"
                             + " not a datasheet figure (the VOS/T estimate holds for standard bipolar inputs only)",
                     "add vos-drift or vos.max-over-temp from the datasheet"));
@@ -689,7 +829,10 @@ final class PartReader {
     private void nonNegative(String keyPath, String fix) {
         Double v = values.get(keyPath);
         if (v != null && v < 0) {
-            err(keyPath, Units.format(v, CatalogKeys.dimension(keyPath)) + " is negative, which is impossible here", fix);
+            err(
+                    keyPath,
+                    Units.format(v, CatalogKeys.dimension(keyPath)) + " is negative, which is impossible here",
+                    fix);
         }
     }
 
@@ -708,7 +851,10 @@ final class PartReader {
             return;
         }
         Dimension d = CatalogKeys.dimension(low);
-        err(low, last(low) + " (" + Units.format(a, d) + ") is above " + last(high) + " (" + Units.format(b, d) + ")", fix);
+        err(
+                low,
+                last(low) + " (" + Units.format(a, d) + ") is above " + last(high) + " (" + Units.format(b, d) + ")",
+                fix);
     }
 
     /**
@@ -723,8 +869,11 @@ final class PartReader {
             return;
         }
         Dimension d = CatalogKeys.dimension(typ);
-        warn(max, last(max) + " (" + Units.format(b, d) + ") is " + Math.round(Math.abs(b / a)) + " times "
-                + last(typ) + " (" + Units.format(a, d) + ")", "check the prefixes (u, n, m, p) of both against the datasheet");
+        warn(
+                max,
+                last(max) + " (" + Units.format(b, d) + ") is " + Math.round(Math.abs(b / a)) + " times " + last(typ)
+                        + " (" + Units.format(a, d) + ")",
+                "check the prefixes (u, n, m, p) of both against the datasheet");
     }
 
     /** Ratio of max to typ beyond which a prefix slip is suspected. */

@@ -18,15 +18,23 @@ import java.util.regex.Pattern;
  * figures: until the empty values are typed, {@code check} names each one as an error.
  */
 public final class PartTemplate {
-    private PartTemplate() {
-    }
+    private PartTemplate() {}
 
     /** Where the build puts the template in the jar. */
     static final String RESOURCE = "/dev/ampsieve/template/part.yaml";
 
     /** Key paths left empty: the values a part cannot load without (vos needs typ or max: max is asked for). */
-    public static final Set<String> TO_TYPE = Set.of(CatalogKeys.ARCHITECTURE, CatalogKeys.INPUT, CatalogKeys.GBW,
-            "price.unit", "price.quantity", "supply.min", "supply.max", "temperature.min", "temperature.max", "vos.max");
+    public static final Set<String> TO_TYPE = Set.of(
+            CatalogKeys.ARCHITECTURE,
+            CatalogKeys.INPUT,
+            CatalogKeys.GBW,
+            "price.unit",
+            "price.quantity",
+            "supply.min",
+            "supply.max",
+            "temperature.min",
+            "temperature.max",
+            "vos.max");
 
     private static final Pattern TOP = Pattern.compile("^([a-z][a-z-]*):(.*)$");
     private static final Pattern SUB = Pattern.compile("^  ([a-z][a-z-]*):(.*)$");

@@ -14,17 +14,18 @@ import java.util.List;
 public record Price(List<Break> breaks, String currency) {
 
     /** Unit price for orders of {@code quantity} or more (until the next break). */
-    public record Break(int quantity, double unit) {
-    }
+    public record Break(int quantity, double unit) {}
 
     public Price {
         if (breaks == null || breaks.isEmpty()) {
             throw new IllegalArgumentException("a price needs at least one break");
         }
-        breaks = breaks.stream().sorted(Comparator.comparingInt(Break::quantity)).toList();
+        breaks =
+                breaks.stream().sorted(Comparator.comparingInt(Break::quantity)).toList();
         for (int i = 1; i < breaks.size(); i++) {
             if (breaks.get(i).quantity() == breaks.get(i - 1).quantity()) {
-                throw new IllegalArgumentException("two breaks at quantity " + breaks.get(i).quantity());
+                throw new IllegalArgumentException(
+                        "two breaks at quantity " + breaks.get(i).quantity());
             }
         }
         currency = currency == null || currency.isBlank() ? "USD" : currency;

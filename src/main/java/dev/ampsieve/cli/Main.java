@@ -15,16 +15,17 @@ import java.util.List;
  * which runs one command of the shared tree and exits with its code.
  */
 public final class Main {
-    private Main() {
-    }
+    private Main() {}
 
     public static void main(String[] args) {
         if (System.console() != null && Commands.namesNoCommand(args)) {
             System.exit(Shell.start(new RootCommand(), List.of(args)));
         }
         // the default charset is what the terminal was set up with; VisibleWriter is the last guard
-        PrintWriter out = new PrintWriter(VisibleWriter.over(new OutputStreamWriter(System.out, Charset.defaultCharset())), true);
-        PrintWriter err = new PrintWriter(VisibleWriter.over(new OutputStreamWriter(System.err, Charset.defaultCharset())), true);
+        PrintWriter out =
+                new PrintWriter(VisibleWriter.over(new OutputStreamWriter(System.out, Charset.defaultCharset())), true);
+        PrintWriter err =
+                new PrintWriter(VisibleWriter.over(new OutputStreamWriter(System.err, Charset.defaultCharset())), true);
         System.exit(Commands.run(args, out, err));
     }
 }

@@ -14,12 +14,14 @@ import picocli.CommandLine.ParentCommand;
 import picocli.CommandLine.Spec;
 
 /** {@code ampsieve bars PART --stage FILE}: one part's error terms as bars against the limit. */
-@Command(name = "bars", header = "One part's error terms as bars against the limit.", mixinStandardHelpOptions = true,
+@Command(
+        name = "bars",
+        header = "One part's error terms as bars against the limit.",
+        mixinStandardHelpOptions = true,
         description = "Each error term of one part in a stage as a bar at the output, the totals below, and the "
-            + "limit marked across: which term to attack first, at a glance. Sized to the terminal; --ascii "
-            + "draws with plain characters.",
-        footer = {"", "Example:",
-            "  ampsieve bars prec-bip-02 --stage demo-catalog/stages/bridge-amp.yaml"})
+                + "limit marked across: which term to attack first, at a glance. Sized to the terminal; --ascii "
+                + "draws with plain characters.",
+        footer = {"", "Example:", "  ampsieve bars prec-bip-02 --stage demo-catalog/stages/bridge-amp.yaml"})
 public final class BarsCommand implements Callable<Integer> {
 
     @ParentCommand
@@ -41,7 +43,9 @@ public final class BarsCommand implements Callable<Integer> {
         Part p = part.in(catalog);
         Stage stage = stageOption.load();
         String name = stageOption.name();
-        spec.commandLine().getOut().print(BudgetBars.render(BudgetCalculator.compute(stage, p), name, root.outputStyle()));
+        spec.commandLine()
+                .getOut()
+                .print(BudgetBars.render(BudgetCalculator.compute(stage, p), name, root.outputStyle()));
         return ExitCode.OK.code();
     }
 }

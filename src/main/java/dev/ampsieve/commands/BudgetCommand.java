@@ -16,16 +16,23 @@ import picocli.CommandLine.ParentCommand;
 import picocli.CommandLine.Spec;
 
 /** {@code ampsieve budget PART --stage FILE [--json]}: the full error budget of one part in one stage. */
-@Command(name = "budget", header = "Full error budget of one part in one stage.", mixinStandardHelpOptions = true,
-        description = "Full output error budget of one catalog part in one stage: every term output- and input-referred, "
-            + "largest first, with its share of the limit and the temperature where it is worst; worst-case and RSS "
-            + "totals; integrated noise; the Monte Carlo yield with its 95 %% interval; what each trim method "
-            + "leaves; the hard constraints; the verdict and the limiting term; and a warning for every value that "
-            + "was estimated, typical-only or missing. The stage's own warnings go to stderr.",
-        footer = {"", "Examples:",
+@Command(
+        name = "budget",
+        header = "Full error budget of one part in one stage.",
+        mixinStandardHelpOptions = true,
+        description =
+                "Full output error budget of one catalog part in one stage: every term output- and input-referred, "
+                        + "largest first, with its share of the limit and the temperature where it is worst; worst-case and RSS "
+                        + "totals; integrated noise; the Monte Carlo yield with its 95 %% interval; what each trim method "
+                        + "leaves; the hard constraints; the verdict and the limiting term; and a warning for every value that "
+                        + "was estimated, typical-only or missing. The stage's own warnings go to stderr.",
+        footer = {
+            "",
+            "Examples:",
             "  ampsieve budget prec-bip-02 --stage demo-catalog/stages/bridge-amp.yaml",
             "  ampsieve budget prec-bip-02 --stage my-stage.yaml --json > budget.json",
-            "Stage keys: 'ampsieve help stage-keys'."})
+            "Stage keys: 'ampsieve help stage-keys'."
+        })
 public final class BudgetCommand implements Callable<Integer> {
 
     @ParentCommand
@@ -53,8 +60,12 @@ public final class BudgetCommand implements Callable<Integer> {
         String label = stageOption.label();
         // the yield at other readings of a datasheet maximum: extra Monte Carlo runs, for this one part only
         var bySigma = BudgetCalculator.yieldBySigma(b);
-        spec.commandLine().getOut().print(format.json() ? BudgetJson.render(b, bySigma, label)
-                : BudgetText.render(b, bySigma, label, root.textWidth()));
+        spec.commandLine()
+                .getOut()
+                .print(
+                        format.json()
+                                ? BudgetJson.render(b, bySigma, label)
+                                : BudgetText.render(b, bySigma, label, root.textWidth()));
         return ExitCode.OK.code();
     }
 }

@@ -18,8 +18,7 @@ import java.util.concurrent.ConcurrentHashMap;
 
 /** Shared steps of the commands that pick parts from the catalog through the index. */
 final class Candidates {
-    private Candidates() {
-    }
+    private Candidates() {}
 
     /** Index notes already shown by this process: the shell runs many commands, each note is shown once. */
     private static final Set<String> SHOWN = ConcurrentHashMap.newKeySet();
@@ -48,8 +47,8 @@ final class Candidates {
         long shown = noteUnusedFiles(catalog, err);
         long n = catalog.problems().stream().filter(Problem::isError).count() - shown;
         if (n > 0) {
-            err.println("ampsieve: note: " + (shown > 0 ? n + " more" : n) + " catalog error(s); parts of files with errors"
-                    + " are left out ('ampsieve check' lists them)");
+            err.println("ampsieve: note: " + (shown > 0 ? n + " more" : n)
+                    + " catalog error(s); parts of files with errors" + " are left out ('ampsieve check' lists them)");
         }
         err.flush();
     }
@@ -88,8 +87,8 @@ final class Candidates {
                 case FOREIGN_ENTRY -> "move that out, or delete the folder, to let ampsieve use it";
                 case UNREADABLE -> "check its permissions";
             };
-            String line = "ampsieve: note: " + r.folder() + " " + what + "; it was left untouched and the search index is kept "
-                    + where + " instead; " + fix;
+            String line = "ampsieve: note: " + r.folder() + " " + what
+                    + "; it was left untouched and the search index is kept " + where + " instead; " + fix;
             if (SHOWN.add(line)) {
                 err.println(line);
             }

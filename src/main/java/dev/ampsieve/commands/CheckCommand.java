@@ -25,16 +25,24 @@ import picocli.CommandLine.Spec;
  * a heading line per file (its parts and its counts), then one line per problem, each still
  * starting with {@code file:line:col:} so editors and grep can jump to it.
  */
-@Command(name = "check", header = "Check every catalog file; list each problem with its place and fix.", mixinStandardHelpOptions = true,
-        description = {"Read the whole catalog and list every problem, grouped by file: a heading line naming the file, "
-            + "the parts it holds and how many errors and warnings it has, then one line per problem as "
-            + "file:line:col: field: problem; fix. An error leaves its part out of every search and ranking; a "
-            + "warning says what the budget will estimate or leave out. A file that looks like a stage file is "
-            + "skipped with one line. Exit 0 when there is no error, 1 when there is one."},
-        footer = {"", "Examples:",
+@Command(
+        name = "check",
+        header = "Check every catalog file; list each problem with its place and fix.",
+        mixinStandardHelpOptions = true,
+        description = {
+            "Read the whole catalog and list every problem, grouped by file: a heading line naming the file, "
+                    + "the parts it holds and how many errors and warnings it has, then one line per problem as "
+                    + "file:line:col: field: problem; fix. An error leaves its part out of every search and ranking; a "
+                    + "warning says what the budget will estimate or leave out. A file that looks like a stage file is "
+                    + "skipped with one line. Exit 0 when there is no error, 1 when there is one."
+        },
+        footer = {
+            "",
+            "Examples:",
             "  ampsieve check                      every problem, grouped by file",
             "  ampsieve check --quiet              errors only, and the summary line",
-            "  ampsieve --catalog ~/amps check --strict   refuse the catalog at the first file with an error"})
+            "  ampsieve --catalog ~/amps check --strict   refuse the catalog at the first file with an error"
+        })
 public final class CheckCommand implements Callable<Integer> {
 
     @ParentCommand
@@ -43,7 +51,9 @@ public final class CheckCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Option(names = {"-q", "--quiet"}, description = "Show only errors (and the summary line); leave out warnings.")
+    @Option(
+            names = {"-q", "--quiet"},
+            description = "Show only errors (and the summary line); leave out warnings.")
     boolean quiet;
 
     @Override
@@ -63,7 +73,8 @@ public final class CheckCommand implements Callable<Integer> {
             e.getValue().forEach(out::println);
             out.println();
         }
-        out.printf("%s: %d file(s), %d part(s), %d error(s), %d warning(s)%n",
+        out.printf(
+                "%s: %d file(s), %d part(s), %d error(s), %d warning(s)%n",
                 Visible.of(c.root().toString()), c.files(), c.parts().size(), errors, warnings);
         if (!quiet) {
             out.println();
@@ -76,10 +87,14 @@ public final class CheckCommand implements Callable<Integer> {
     static String heading(Path file, List<Problem> problems, List<Part> parts) {
         long e = problems.stream().filter(Problem::isError).count();
         long w = problems.size() - e;
-        List<String> ids = parts.stream().filter(p -> p.where() != null && Objects.equals(p.where().file(), file))
-                .map(Part::id).toList();
-        String what = ids.isEmpty() ? "no part loaded"
-                : (ids.size() == 1 ? "part " : "parts ") + String.join(", ", ids.subList(0, Math.min(5, ids.size())))
+        List<String> ids = parts.stream()
+                .filter(p -> p.where() != null && Objects.equals(p.where().file(), file))
+                .map(Part::id)
+                .toList();
+        String what = ids.isEmpty()
+                ? "no part loaded"
+                : (ids.size() == 1 ? "part " : "parts ")
+                        + String.join(", ", ids.subList(0, Math.min(5, ids.size())))
                         + (ids.size() > 5 ? " and " + (ids.size() - 5) + " more" : "");
         List<String> counts = new ArrayList<>();
         if (e > 0) {

@@ -1,20 +1,19 @@
 package dev.ampsieve.commands;
 
 import java.io.PrintWriter;
+import picocli.CommandLine;
 import picocli.CommandLine.IParameterExceptionHandler;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Model.OptionSpec;
 import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.ParseResult;
-import picocli.CommandLine;
 
 /**
  * Builds the one command tree both front ends use (the command line and the shell feed it the
  * same words); failures go to the one handler, {@link Failures}.
  */
 public final class Commands {
-    private Commands() {
-    }
+    private Commands() {}
 
     /** A fresh tree whose commands print to {@code out} and {@code err}. */
     public static CommandLine build(PrintWriter out, PrintWriter err) {
@@ -49,10 +48,12 @@ public final class Commands {
         // the query grammar in find's help is laid out for about 110 columns; a narrower terminal wins
         cl.setUsageHelpWidth(110);
         cl.setUsageHelpAutoWidth(true);
-        cl.setExecutionExceptionHandler((ex, line, parseResult) ->
-                Failures.report(ex, line.getErr(), root.verbose(), Failures.Voice.COMMAND_LINE).code());
+        cl.setExecutionExceptionHandler((ex, line, parseResult) -> Failures.report(
+                        ex, line.getErr(), root.verbose(), Failures.Voice.COMMAND_LINE)
+                .code());
         IParameterExceptionHandler picocliDefault = cl.getParameterExceptionHandler();
-        cl.setParameterExceptionHandler((ex, args) -> Failures.usage(ex, args, Failures.Voice.COMMAND_LINE, picocliDefault));
+        cl.setParameterExceptionHandler(
+                (ex, args) -> Failures.usage(ex, args, Failures.Voice.COMMAND_LINE, picocliDefault));
         return cl;
     }
 
@@ -84,9 +85,10 @@ public final class Commands {
         OptionSpec stage = spec.findOption(StageOption.NAME);
         if (stage != null && stage.required()) {
             spec.remove(stage);
-            spec.addOption(OptionSpec.builder(stage).required(false)
-                    .description("Stage file (YAML); left out, the current stage.").build());
+            spec.addOption(OptionSpec.builder(stage)
+                    .required(false)
+                    .description("Stage file (YAML); left out, the current stage.")
+                    .build());
         }
     }
-
 }

@@ -17,11 +17,17 @@ import picocli.CommandLine.ParentCommand;
 import picocli.CommandLine.Spec;
 
 /** {@code ampsieve compare A B --stage FILE}: two budgets side by side, term by term, and which to use. */
-@Command(name = "compare", header = "Two parts in one stage, term by term.", mixinStandardHelpOptions = true,
+@Command(
+        name = "compare",
+        header = "Two parts in one stage, term by term.",
+        mixinStandardHelpOptions = true,
         description = "Two parts in one stage, term by term: which is better and by how much, the totals, the cost, "
-            + "and a one-line conclusion, for the written record of a part change or a second source.",
-        footer = {"", "Example:",
-            "  ampsieve compare prec-bip-02 zd-chop-04 --stage demo-catalog/stages/bridge-amp.yaml"})
+                + "and a one-line conclusion, for the written record of a part change or a second source.",
+        footer = {
+            "",
+            "Example:",
+            "  ampsieve compare prec-bip-02 zd-chop-04 --stage demo-catalog/stages/bridge-amp.yaml"
+        })
 public final class CompareCommand implements Callable<Integer> {
 
     @ParentCommand
@@ -54,7 +60,8 @@ public final class CompareCommand implements Callable<Integer> {
             try {
                 Parts.find(catalog, b);
             } catch (Refusal missingB) {
-                throw new Refusal(missingA.getMessage() + "\n" + missingB.getMessage(), ExitCode.FINDINGS, missingA.place());
+                throw new Refusal(
+                        missingA.getMessage() + "\n" + missingB.getMessage(), ExitCode.FINDINGS, missingA.place());
             }
             throw missingA;
         }
@@ -63,7 +70,9 @@ public final class CompareCommand implements Callable<Integer> {
         Comparison c = Comparison.of(BudgetCalculator.compute(stage, pa), BudgetCalculator.compute(stage, pb));
         String label = stageOption.label();
         String name = stageOption.name(); // text headers stay within 100 columns
-        spec.commandLine().getOut().print(format.json() ? CompareReport.json(c, label) : CompareReport.text(c, name, root.textWidth()));
+        spec.commandLine()
+                .getOut()
+                .print(format.json() ? CompareReport.json(c, label) : CompareReport.text(c, name, root.textWidth()));
         return ExitCode.OK.code();
     }
 }

@@ -14,18 +14,27 @@ import picocli.CommandLine.Spec;
  * bash only; zsh runs the same script through its bash compatibility ({@code bashcompinit}),
  * which the script turns on itself when {@code $ZSH_VERSION} is set, so both words print it.
  */
-@Command(name = "completion", header = "Print a shell completion script (bash or zsh).", mixinStandardHelpOptions = true,
+@Command(
+        name = "completion",
+        header = "Print a shell completion script (bash or zsh).",
+        mixinStandardHelpOptions = true,
         description = "Print a script that completes ampsieve's commands and options as you type them in bash or "
-            + "zsh. It is generated from the command tree, so it always matches this version; load it from your "
-            + "shell's start-up file.",
-        footer = {"", "Examples:",
+                + "zsh. It is generated from the command tree, so it always matches this version; load it from your "
+                + "shell's start-up file.",
+        footer = {
+            "",
+            "Examples:",
             "  ampsieve completion bash > ~/.local/share/bash-completion/completions/ampsieve",
             "  source <(ampsieve completion bash)      in ~/.bashrc",
-            "  source <(ampsieve completion zsh)       in ~/.zshrc"})
+            "  source <(ampsieve completion zsh)       in ~/.zshrc"
+        })
 public final class CompletionCommand implements Callable<Integer> {
 
     /** The shells a script can be printed for. */
-    public enum Shell { bash, zsh }
+    public enum Shell {
+        bash,
+        zsh
+    }
 
     @Spec
     CommandSpec spec;

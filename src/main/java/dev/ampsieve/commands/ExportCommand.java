@@ -15,15 +15,22 @@ import picocli.CommandLine.ParentCommand;
 import picocli.CommandLine.Spec;
 
 /** {@code ampsieve export --csv [--out FILE]}: the catalog as one spreadsheet. */
-@Command(name = "export", header = "Write the catalog as a spreadsheet (CSV).", mixinStandardHelpOptions = true,
+@Command(
+        name = "export",
+        header = "Write the catalog as a spreadsheet (CSV).",
+        mixinStandardHelpOptions = true,
         description = "Write every part of the catalog as one CSV sheet, one part a row, in the layout 'import' reads:"
                 + " a header of catalog keys with units in brackets (vos.max [uV], gbw [MHz]), every number exact, price"
                 + " breaks as '1: 2.10; 1000: 1.25'. A text cell a spreadsheet could run as a formula (starting with"
                 + " = + - @) gets a leading ' that import takes off again. Parts of catalog files with errors are left"
                 + " out ('ampsieve check' lists them). Without --out the sheet goes to standard output.",
-        footer = {"", "Example:", "  ampsieve --catalog my-catalog export --csv --out parts.csv",
+        footer = {
+            "",
+            "Example:",
+            "  ampsieve --catalog my-catalog export --csv --out parts.csv",
             "  (edit parts.csv in a spreadsheet, export it as CSV again)",
-            "  ampsieve import parts.csv --into my-catalog --force"})
+            "  ampsieve import parts.csv --into my-catalog --force"
+        })
 public final class ExportCommand implements Callable<Integer> {
 
     @ParentCommand
@@ -32,10 +39,16 @@ public final class ExportCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Option(names = "--csv", required = true, description = "Write CSV (the one format there is; named so others can follow).")
+    @Option(
+            names = "--csv",
+            required = true,
+            description = "Write CSV (the one format there is; named so others can follow).")
     boolean csv;
 
-    @Option(names = "--out", paramLabel = "FILE", description = "Write to FILE (whole or not at all) instead of standard output.")
+    @Option(
+            names = "--out",
+            paramLabel = "FILE",
+            description = "Write to FILE (whole or not at all) instead of standard output.")
     Path out;
 
     @Option(names = "--force", description = "Replace FILE when it exists.")
@@ -51,7 +64,8 @@ public final class ExportCommand implements Callable<Integer> {
             o.flush();
             return ExitCode.OK.code();
         }
-        AtomicFiles.write(out, SheetExport.csv(catalog.parts()), force, "add --force to replace it, or give another --out FILE");
+        AtomicFiles.write(
+                out, SheetExport.csv(catalog.parts()), force, "add --force to replace it, or give another --out FILE");
         o.println(catalog.parts().size() + " part(s) written to " + Visible.of(out.toString()));
         o.flush();
         return ExitCode.OK.code();

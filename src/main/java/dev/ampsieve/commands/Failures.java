@@ -5,9 +5,9 @@ import dev.ampsieve.failure.UserError;
 import dev.ampsieve.text.Visible;
 import java.io.PrintWriter;
 import java.util.List;
+import picocli.CommandLine;
 import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.UnmatchedArgumentException;
-import picocli.CommandLine;
 
 /**
  * The one handler both front ends use: a {@link UserError} is printed as its lines (each with
@@ -16,8 +16,7 @@ import picocli.CommandLine;
  * The front ends differ only in their {@link Voice}.
  */
 public final class Failures {
-    private Failures() {
-    }
+    private Failures() {}
 
     /**
      * How a front end words the handler's lines.
@@ -27,7 +26,8 @@ public final class Failures {
      * @param shell       true for the shell: usage errors name the shell's own help
      */
     public record Voice(String prefix, String verboseHint, boolean shell) {
-        public static final Voice COMMAND_LINE = new Voice("ampsieve: ", "run again with --verbose for the details", false);
+        public static final Voice COMMAND_LINE =
+                new Voice("ampsieve: ", "run again with --verbose for the details", false);
         public static final Voice SHELL = new Voice("", "add --verbose to the command for the details", true);
     }
 
@@ -37,7 +37,8 @@ public final class Failures {
             print(ue, err, voice);
             return ue.exitCode();
         }
-        err.println(voice.prefix() + "internal error: " + oneLine(ex) + (verbose ? "" : " (" + voice.verboseHint() + ")"));
+        err.println(
+                voice.prefix() + "internal error: " + oneLine(ex) + (verbose ? "" : " (" + voice.verboseHint() + ")"));
         if (verbose) {
             ex.printStackTrace(err);
         }
@@ -67,15 +68,20 @@ public final class Failures {
      * suggestions, the command's usage) for options and names an unknown word in one line; the
      * shell says it in one line with the help to type.
      */
-    public static int usage(ParameterException ex, String[] args, Voice voice,
-            CommandLine.IParameterExceptionHandler picocliDefault) throws Exception {
+    public static int usage(
+            ParameterException ex, String[] args, Voice voice, CommandLine.IParameterExceptionHandler picocliDefault)
+            throws Exception {
         PrintWriter err = ex.getCommandLine().getErr();
         if (voice.shell()) {
             CommandLine at = ex.getCommandLine();
             String cmd = at.getParent() == null ? "" : at.getCommandName();
-            StringBuilder sb = new StringBuilder(cmd.isEmpty() ? "" : cmd + ": ").append(Visible.lines(ex.getMessage()));
-            if (ex instanceof UnmatchedArgumentException u && !u.getSuggestions().isEmpty()) {
-                sb.append("; did you mean ").append(String.join(" or ", u.getSuggestions())).append('?');
+            StringBuilder sb =
+                    new StringBuilder(cmd.isEmpty() ? "" : cmd + ": ").append(Visible.lines(ex.getMessage()));
+            if (ex instanceof UnmatchedArgumentException u
+                    && !u.getSuggestions().isEmpty()) {
+                sb.append("; did you mean ")
+                        .append(String.join(" or ", u.getSuggestions()))
+                        .append('?');
             }
             sb.append(cmd.isEmpty() ? " ('help' lists the commands)" : " ('help " + cmd + "' shows its options)");
             err.println(sb);
@@ -120,11 +126,13 @@ public final class Failures {
         CommandLine at = u.getCommandLine();
         String shown = "'" + Visible.of(word) + "'";
         if (at.getParent() == null) {
-            String near = dev.ampsieve.yaml.Fields.closest(word, at.getSubcommands().keySet());
+            String near =
+                    dev.ampsieve.yaml.Fields.closest(word, at.getSubcommands().keySet());
             return "ampsieve: unknown command " + shown + (near != null ? "; did you mean '" + near + "'?" : "")
                     + " ('ampsieve --help' lists the commands)";
         }
         String name = at.getCommandName();
-        return "ampsieve " + name + ": unexpected word " + shown + " ('ampsieve " + name + " --help' shows what it takes)";
+        return "ampsieve " + name + ": unexpected word " + shown + " ('ampsieve " + name
+                + " --help' shows what it takes)";
     }
 }

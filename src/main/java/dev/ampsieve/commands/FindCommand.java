@@ -8,20 +8,23 @@ import dev.ampsieve.search.QueryLanguage;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.ParentCommand;
 import picocli.CommandLine.Spec;
-import picocli.CommandLine;
 
 /** {@code ampsieve find QUERY...}: catalog parts matching words and constraints. */
-@Command(name = "find", header = "List catalog parts matching words and constraints.", mixinStandardHelpOptions = true,
+@Command(
+        name = "find",
+        header = "List catalog parts matching words and constraints.",
+        mixinStandardHelpOptions = true,
         description = "List the catalog parts that match a query of words and constraints, most relevant first, then "
-            + "cheapest, with their key figures (offset, drift, bias current, gain-bandwidth, noise, supply). Every "
-            + "term must hold; a word with a leading '-' excludes the parts that have it, with no '--' needed. "
-            + "Exit 0 when something matches, 1 when nothing does.")
+                + "cheapest, with their key figures (offset, drift, bias current, gain-bandwidth, noise, supply). Every "
+                + "term must hold; a word with a leading '-' excludes the parts that have it, with no '--' needed. "
+                + "Exit 0 when something matches, 1 when nothing does.")
 public final class FindCommand implements Callable<Integer> {
 
     @ParentCommand
@@ -54,9 +57,13 @@ public final class FindCommand implements Callable<Integer> {
      */
     static final class QueryWords implements CommandLine.IParameterPreprocessor {
         @Override
-        public boolean preprocess(java.util.Stack<String> args, CommandLine.Model.CommandSpec spec,
-                CommandLine.Model.ArgSpec argSpec, java.util.Map<String, Object> info) {
-            List<String> words = new ArrayList<>(argSpec.getValue() == null ? List.of() : argSpec.<List<String>>getValue());
+        public boolean preprocess(
+                java.util.Stack<String> args,
+                CommandLine.Model.CommandSpec spec,
+                CommandLine.Model.ArgSpec argSpec,
+                java.util.Map<String, Object> info) {
+            List<String> words =
+                    new ArrayList<>(argSpec.getValue() == null ? List.of() : argSpec.<List<String>>getValue());
             while (!args.isEmpty() && !realOption(args.peek(), spec)) {
                 words.add(args.pop());
             }
@@ -66,12 +73,16 @@ public final class FindCommand implements Callable<Integer> {
 
         private static boolean realOption(String arg, CommandLine.Model.CommandSpec spec) {
             int eq = arg.indexOf('=');
-            return arg.equals("--") || spec.optionsMap().containsKey(arg)
+            return arg.equals("--")
+                    || spec.optionsMap().containsKey(arg)
                     || arg.startsWith("--") && eq > 0 && spec.optionsMap().containsKey(arg.substring(0, eq));
         }
     }
 
-    @Parameters(paramLabel = "QUERY", arity = "0..*", preprocessor = QueryWords.class,
+    @Parameters(
+            paramLabel = "QUERY",
+            arity = "0..*",
+            preprocessor = QueryWords.class,
             description = "Words and constraints; all must hold; -word excludes. None: every part.")
     List<String> query = List.of();
 
@@ -84,7 +95,9 @@ public final class FindCommand implements Callable<Integer> {
         Candidates.noteProblems(catalog, spec.commandLine().getErr());
         String text = String.join(" ", query).strip();
         List<Part> parts = Candidates.matching(catalog, text, spec.commandLine().getErr());
-        spec.commandLine().getOut().print(format.json() ? FindReport.json(text, parts) : FindReport.text(text, parts, root.textWidth()));
+        spec.commandLine()
+                .getOut()
+                .print(format.json() ? FindReport.json(text, parts) : FindReport.text(text, parts, root.textWidth()));
         return parts.isEmpty() ? ExitCode.FINDINGS.code() : ExitCode.OK.code();
     }
 }

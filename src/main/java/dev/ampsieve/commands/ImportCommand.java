@@ -31,16 +31,25 @@ import picocli.CommandLine.ParentCommand;
 import picocli.CommandLine.Spec;
 
 /** {@code ampsieve import FILE.csv --into DIR}: a spreadsheet of parts into catalog part files. */
-@Command(name = "import", header = "Turn a spreadsheet (CSV) of parts into catalog part files.", mixinStandardHelpOptions = true,
-        description = "Read a CSV export of a spreadsheet (a header row of catalog keys such as id, architecture, input,"
-                + " vos.max [uV], gbw [MHz], one part a row) and write one part file per row, <id>.yaml, into DIR."
-                + " Each row is checked with the catalog's own rules before it is written; a row that does not"
-                + " convert is reported as file.csv:row:col: field: problem; fix, and the other rows are still"
-                + " written. An existing file is left as it is unless --force; each file is written whole or not"
-                + " at all. Exit 0 when every row converted, 1 when a row or the header has an error.",
-        footer = {"", "Example:", "  ampsieve import parts.csv --into my-catalog",
-            "  ampsieve --catalog my-catalog check", "",
-            "Columns, units and the accepted spellings: README, section \"Spreadsheets\"; 'ampsieve export --csv' writes the layout."})
+@Command(
+        name = "import",
+        header = "Turn a spreadsheet (CSV) of parts into catalog part files.",
+        mixinStandardHelpOptions = true,
+        description =
+                "Read a CSV export of a spreadsheet (a header row of catalog keys such as id, architecture, input,"
+                        + " vos.max [uV], gbw [MHz], one part a row) and write one part file per row, <id>.yaml, into DIR."
+                        + " Each row is checked with the catalog's own rules before it is written; a row that does not"
+                        + " convert is reported as file.csv:row:col: field: problem; fix, and the other rows are still"
+                        + " written. An existing file is left as it is unless --force; each file is written whole or not"
+                        + " at all. Exit 0 when every row converted, 1 when a row or the header has an error.",
+        footer = {
+            "",
+            "Example:",
+            "  ampsieve import parts.csv --into my-catalog",
+            "  ampsieve --catalog my-catalog check",
+            "",
+            "Columns, units and the accepted spellings: README, section \"Spreadsheets\"; 'ampsieve export --csv' writes the layout."
+        })
 public final class ImportCommand implements Callable<Integer> {
 
     @ParentCommand
@@ -49,10 +58,16 @@ public final class ImportCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "FILE.csv", description = "The CSV file (UTF-8, comma-separated, decimal point).")
+    @Parameters(
+            index = "0",
+            paramLabel = "FILE.csv",
+            description = "The CSV file (UTF-8, comma-separated, decimal point).")
     Path csv;
 
-    @Option(names = "--into", paramLabel = "DIR", required = true,
+    @Option(
+            names = "--into",
+            paramLabel = "DIR",
+            required = true,
             description = "Folder to write the part files into (made if missing); usually your catalog folder.")
     Path into;
 
@@ -79,8 +94,11 @@ public final class ImportCommand implements Callable<Integer> {
             Located at = new Located(csv, row.row(), row.idColumn());
             Located there = known.get(row.id());
             if (there != null && !sameFile(there.file(), target)) {
-                problems.add(Problem.error(at, CatalogKeys.ID, "id '" + row.id() + "' is already in " + there.file() + ":"
-                        + there.line() + "; not written", "give the part another id, or remove the other one"));
+                problems.add(Problem.error(
+                        at,
+                        CatalogKeys.ID,
+                        "id '" + row.id() + "' is already in " + there.file() + ":" + there.line() + "; not written",
+                        "give the part another id, or remove the other one"));
                 continue;
             }
             try {
@@ -89,7 +107,10 @@ public final class ImportCommand implements Callable<Integer> {
             } catch (InputException e) {
                 Problem p = e.problems().get(0);
                 boolean exists = p.message().startsWith("the file already exists");
-                problems.add(Problem.error(at, CatalogKeys.ID, target + ": " + p.message(),
+                problems.add(Problem.error(
+                        at,
+                        CatalogKeys.ID,
+                        target + ": " + p.message(),
                         exists ? "add --force to replace it, or give the part another id" : p.fix()));
             }
         }
@@ -97,8 +118,9 @@ public final class ImportCommand implements Callable<Integer> {
         problems.forEach(err::println);
         err.flush();
         long failed = r.dataRows() - written;
-        out.println(Visible.of(csv.toString()) + ": " + r.dataRows() + " row(s), " + written + " part file(s) written to "
-                + Visible.of(into.toString()) + (failed > 0 ? ", " + failed + " row(s) not written (see above)" : ""));
+        out.println(Visible.of(csv.toString()) + ": " + r.dataRows() + " row(s), " + written
+                + " part file(s) written to " + Visible.of(into.toString())
+                + (failed > 0 ? ", " + failed + " row(s) not written (see above)" : ""));
         out.flush();
         if (written > 0) {
             root.forgetCatalog(); // the shell reads the catalog again before its next command
@@ -108,14 +130,17 @@ public final class ImportCommand implements Callable<Integer> {
 
     static void prepare(Path dir) throws Refusal {
         if (Files.exists(dir) && !Files.isDirectory(dir)) {
-            throw new Refusal(Visible.of(dir.toString()) + " is not a folder; give the folder to write into with --into DIR",
+            throw new Refusal(
+                    Visible.of(dir.toString()) + " is not a folder; give the folder to write into with --into DIR",
                     ExitCode.USAGE);
         }
         try {
             Files.createDirectories(dir);
         } catch (IOException e) {
-            throw new Refusal("cannot make the folder " + Visible.of(dir.toString()) + " ("
-                    + dev.ampsieve.yaml.YamlFiles.describe(e) + ")", ExitCode.FINDINGS);
+            throw new Refusal(
+                    "cannot make the folder " + Visible.of(dir.toString()) + " ("
+                            + dev.ampsieve.yaml.YamlFiles.describe(e) + ")",
+                    ExitCode.FINDINGS);
         }
     }
 

@@ -11,8 +11,7 @@ import java.util.Optional;
 
 /** Finding a part the user named, for every command that takes part ids. */
 public final class Parts {
-    private Parts() {
-    }
+    private Parts() {}
 
     /** The part, or a one-line refusal (exit 1) naming the closest id. */
     public static Part find(Catalog catalog, String id) throws Refusal {
@@ -21,7 +20,8 @@ public final class Parts {
             return p.get();
         }
         String near = Fields.closest(id, catalog.parts().stream().map(Part::id).toList());
-        String msg = "no part '" + Visible.of(id) + "' in the catalog " + Visible.of(catalog.root().toString())
+        String msg = "no part '" + Visible.of(id) + "' in the catalog "
+                + Visible.of(catalog.root().toString())
                 + (near != null ? "; did you mean '" + near + "'?" : "; 'ampsieve check' lists what was read");
         if (catalog.hasErrors()) {
             msg += " (some catalog files have errors and were left out: run 'ampsieve check')";

@@ -11,7 +11,10 @@ import picocli.CommandLine.Option;
 /** {@code --query Q} (a picocli mixin) for the commands that budget many parts: which of them to take. */
 public final class QueryOption {
 
-    @Option(names = "--query", paramLabel = "Q", description = "Only parts matching this query (the language of 'find').")
+    @Option(
+            names = "--query",
+            paramLabel = "Q",
+            description = "Only parts matching this query (the language of 'find').")
     String query;
 
     /** The query as typed, or null for every part. */

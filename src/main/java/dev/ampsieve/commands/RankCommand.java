@@ -21,13 +21,21 @@ import picocli.CommandLine.ParentCommand;
 import picocli.CommandLine.Spec;
 
 /** {@code ampsieve rank --stage FILE}: every candidate budgeted, ranked, with the stage advice. */
-@Command(name = "rank", header = "Rank the catalog for a stage, with trim and zero-drift advice.", mixinStandardHelpOptions = true,
-        description = "Budget every catalog part (or those matching --query) in a stage, drop those failing a hard constraint, and rank the rest: parts that fit by unit cost (trim included where needed), then by margin; the Pareto front of error against cost; and advice on trims and zero-drift parts.",
-        footer = {"", "--query takes the language of 'ampsieve find' ('ampsieve help query' lists every field), e.g.",
+@Command(
+        name = "rank",
+        header = "Rank the catalog for a stage, with trim and zero-drift advice.",
+        mixinStandardHelpOptions = true,
+        description =
+                "Budget every catalog part (or those matching --query) in a stage, drop those failing a hard constraint, and rank the rest: parts that fit by unit cost (trim included where needed), then by margin; the Pareto front of error against cost; and advice on trims and zero-drift parts.",
+        footer = {
+            "",
+            "--query takes the language of 'ampsieve find' ('ampsieve help query' lists every field), e.g.",
             "  --query \"input:cmos supply>=5V\"",
-            "", "Examples:",
+            "",
+            "Examples:",
             "  ampsieve rank --stage demo-catalog/stages/bridge-amp.yaml",
-            "  ampsieve rank --stage my-stage.yaml --query '-chopper vos<50uV' --csv > ranking.csv"})
+            "  ampsieve rank --stage my-stage.yaml --query '-chopper vos<50uV' --csv > ranking.csv"
+        })
 public final class RankCommand implements Callable<Integer> {
 
     @ParentCommand
@@ -42,7 +50,10 @@ public final class RankCommand implements Callable<Integer> {
     @Mixin
     QueryOption query;
 
-    @Option(names = "--top", paramLabel = "N", defaultValue = "15",
+    @Option(
+            names = "--top",
+            paramLabel = "N",
+            defaultValue = "15",
             description = "Candidates to list (default ${DEFAULT-VALUE}); advice and Pareto front use all.")
     int top;
 
@@ -64,8 +75,11 @@ public final class RankCommand implements Callable<Integer> {
         Ranking r = Ranker.rank(stage, parts, BudgetCalculator::compute);
         String label = stageOption.label();
         String name = stageOption.name(); // text headers stay within 100 columns
-        String out = format.json() ? RankReport.json(r, label, query.text(), top, all)
-                : format.csv() ? RankReport.csv(r, top) : RankReport.text(r, name, query.text(), top, root.textWidth(), all);
+        String out = format.json()
+                ? RankReport.json(r, label, query.text(), top, all)
+                : format.csv()
+                        ? RankReport.csv(r, top)
+                        : RankReport.text(r, name, query.text(), top, root.textWidth(), all);
         spec.commandLine().getOut().print(out);
         return ExitCode.OK.code();
     }

@@ -24,17 +24,21 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.ParseResult;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.ParseResult;
 import picocli.CommandLine.Spec;
 
 /** {@code ampsieve recheck RECORD...}: does each recorded decision still hold against today's catalog? */
-@Command(name = "recheck", header = "Re-check decision records against today's catalog.", mixinStandardHelpOptions = true,
-        description = "Re-runs each record written by 'ampsieve record' (HTML or Markdown) with its recorded stage against "
-            + "today's catalog (--catalog DIR, else the folder the record names) and says whether it still holds: a "
-            + "part's catalog entry changed (each field, old and new), a part disappeared, a cheaper part now fits, a "
-            + "verdict or the largest term changed. Exit code 0 when every record holds, 1 when any changed.",
+@Command(
+        name = "recheck",
+        header = "Re-check decision records against today's catalog.",
+        mixinStandardHelpOptions = true,
+        description =
+                "Re-runs each record written by 'ampsieve record' (HTML or Markdown) with its recorded stage against "
+                        + "today's catalog (--catalog DIR, else the folder the record names) and says whether it still holds: a "
+                        + "part's catalog entry changed (each field, old and new), a part disappeared, a cheaper part now fits, a "
+                        + "verdict or the largest term changed. Exit code 0 when every record holds, 1 when any changed.",
         footer = {"", "Example:", "  ampsieve recheck reviews/*.html"})
 public final class RecheckCommand implements Callable<Integer> {
 
@@ -44,7 +48,10 @@ public final class RecheckCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Parameters(arity = "1..*", paramLabel = "RECORD", description = "Record files (.html or .md) written by 'ampsieve record'.")
+    @Parameters(
+            arity = "1..*",
+            paramLabel = "RECORD",
+            description = "Record files (.html or .md) written by 'ampsieve record'.")
     List<Path> records;
 
     @Override
@@ -59,7 +66,8 @@ public final class RecheckCommand implements Callable<Integer> {
             Stage stage;
             Catalog catalog;
             try {
-                String text = new String(BoundedFiles.read(file, RecordCommand.MAX_RECORD_BYTES, "record"), StandardCharsets.UTF_8);
+                String text = new String(
+                        BoundedFiles.read(file, RecordCommand.MAX_RECORD_BYTES, "record"), StandardCharsets.UTF_8);
                 was = RecordReport.read(text, file);
                 stage = StageLoader.parse(was.stageYaml(), file);
                 catalog = chosen ? root.catalog() : CatalogLoader.load(Path.of(was.catalogPath()), false);
@@ -69,7 +77,8 @@ public final class RecheckCommand implements Callable<Integer> {
             }
             if (catalog.hasErrors()) {
                 // a part in a file with errors is missing from today's catalog: say why it may be reported gone
-                err.println("ampsieve: note: the catalog " + Visible.of(catalog.root().toString()) + " has files with errors;"
+                err.println("ampsieve: note: the catalog "
+                        + Visible.of(catalog.root().toString()) + " has files with errors;"
                         + " their parts are left out ('ampsieve check' lists them)");
                 err.flush();
             }
@@ -79,8 +88,15 @@ public final class RecheckCommand implements Callable<Integer> {
             }
             // a change needs both parts; with one gone the rest is checked as a shortlist
             boolean change = was.kind() == RecordFacts.Kind.CHANGE && present.size() == 2;
-            DecisionRecord today = DecisionRecord.build(stage, was.stagePath(), catalog.root().toString(), catalog.parts(),
-                    present, change, was.date(), was.toolVersion());
+            DecisionRecord today = DecisionRecord.build(
+                    stage,
+                    was.stagePath(),
+                    catalog.root().toString(),
+                    catalog.parts(),
+                    present,
+                    change,
+                    was.date(),
+                    was.toolVersion());
             List<Finding> findings = Recheck.compare(was, today.facts());
             out.print(RecordReport.recheck(file.toString(), was, catalog.root().toString(), findings));
             out.flush();

@@ -31,16 +31,21 @@ import picocli.CommandLine.ParentCommand;
 import picocli.CommandLine.Spec;
 
 /** {@code ampsieve record --stage FILE (--html OUT | --md OUT)}: a decision record to attach to a review. */
-@Command(name = "record", header = "Write a decision record (HTML or Markdown) for a stage and a shortlist or a part change.",
+@Command(
+        name = "record",
+        header = "Write a decision record (HTML or Markdown) for a stage and a shortlist or a part change.",
         mixinStandardHelpOptions = true,
         description = "A self-contained decision record: the stage and every assumption, the ranking with verdicts and "
-            + "the advice, each shortlisted part's full budget term by term, its catalog source and entry hash, the "
-            + "date, the tool version and the caution. HTML has charts and prints with each part on its own page; "
-            + "Markdown has the same content in tables. Both embed what 'ampsieve recheck' needs to re-run it.",
-        footer = {"", "Examples:",
+                + "the advice, each shortlisted part's full budget term by term, its catalog source and entry hash, the "
+                + "date, the tool version and the caution. HTML has charts and prints with each part on its own page; "
+                + "Markdown has the same content in tables. Both embed what 'ampsieve recheck' needs to re-run it.",
+        footer = {
+            "",
+            "Examples:",
             "  ampsieve record --stage demo-catalog/stages/bridge-amp.yaml --html bridge-record.html",
             "  ampsieve record --stage my-stage.yaml --parts prec-bip-02,zd-chop-04 --md choice.md",
-            "  ampsieve record --stage my-stage.yaml --change prec-bip-02 zd-chop-04 --html change.html"})
+            "  ampsieve record --stage my-stage.yaml --change prec-bip-02 zd-chop-04 --html change.html"
+        })
 public final class RecordCommand implements Callable<Integer> {
 
     @ParentCommand
@@ -52,12 +57,18 @@ public final class RecordCommand implements Callable<Integer> {
     @Mixin
     StageOption stageOption;
 
-    @Option(names = "--parts", paramLabel = "PART", split = ",",
+    @Option(
+            names = "--parts",
+            paramLabel = "PART",
+            split = ",",
             description = "The parts to record (default: the ranking's first " + DecisionRecord.DEFAULT_SHORTLIST
-                + " parts that fit, or the closest when none fits).")
+                    + " parts that fit, or the closest when none fits).")
     List<String> parts;
 
-    @Option(names = "--change", arity = "2", paramLabel = "PART",
+    @Option(
+            names = "--change",
+            arity = "2",
+            paramLabel = "PART",
             description = "Record a change from the first part to the second.")
     List<String> change;
 
@@ -94,12 +105,22 @@ public final class RecordCommand implements Callable<Integer> {
         Stage stage = stageOption.load();
         String date = Instant.now().truncatedTo(ChronoUnit.SECONDS).toString();
         String version = new RootCommand.Version().getVersion()[0].replaceFirst("^ampsieve ", "");
-        DecisionRecord d = DecisionRecord.build(stage, stageOption.label(), root.catalogDir().toString(), catalog.parts(),
-                chosen, change != null, date, version);
+        DecisionRecord d = DecisionRecord.build(
+                stage,
+                stageOption.label(),
+                root.catalogDir().toString(),
+                catalog.parts(),
+                chosen,
+                change != null,
+                date,
+                version);
         String text = output.html != null ? RecordReport.html(d) : RecordReport.markdown(d);
         AtomicFiles.write(out, text, replace, "choose another name, or add --force to replace it");
-        spec.commandLine().getOut().println("wrote " + Visible.of(out.toString()) + " (" + d.shortlist().size()
-                + " part(s); 'ampsieve recheck " + Visible.of(out.toString()) + "' re-checks it)");
+        spec.commandLine()
+                .getOut()
+                .println("wrote " + Visible.of(out.toString()) + " ("
+                        + d.shortlist().size() + " part(s); 'ampsieve recheck " + Visible.of(out.toString())
+                        + "' re-checks it)");
         return ExitCode.OK.code();
     }
 
@@ -115,9 +136,14 @@ public final class RecordCommand implements Callable<Integer> {
             return true; // AtomicFiles refuses a link, folder or device whatever force says
         }
         boolean small = Files.size(out) <= MAX_RECORD_BYTES;
-        if (!small || !RecordReport.isRecord(new String(BoundedFiles.read(out, MAX_RECORD_BYTES, "record"), StandardCharsets.UTF_8))) {
-            throw new InputException(Problem.error(Located.nowhere(out), "", "exists and is not an ampsieve decision record;"
-                    + " left as it was", "choose another name, or add --force to replace it"));
+        if (!small
+                || !RecordReport.isRecord(
+                        new String(BoundedFiles.read(out, MAX_RECORD_BYTES, "record"), StandardCharsets.UTF_8))) {
+            throw new InputException(Problem.error(
+                    Located.nowhere(out),
+                    "",
+                    "exists and is not an ampsieve decision record;" + " left as it was",
+                    "choose another name, or add --force to replace it"));
         }
         return true;
     }

@@ -24,33 +24,58 @@ import picocli.CommandLine.Spec;
  * {@code ampsieve}: the root of the command tree. Holds the options every command shares
  * (which catalog, strictness, verbosity) and the catalog once loaded.
  */
-@Command(name = "ampsieve",
+@Command(
+        name = "ampsieve",
         mixinStandardHelpOptions = true,
         versionProvider = RootCommand.Version.class,
-        description = "Picks operational amplifiers for a stage by its full output error budget, computed from your own YAML catalog of datasheet values.",
-        subcommands = {CheckCommand.class, BudgetCommand.class, FindCommand.class, RankCommand.class,
-            CompareCommand.class, SufficesCommand.class, BarsCommand.class, ScatterCommand.class,
-            NewPartCommand.class, ImportCommand.class, ExportCommand.class, CompletionCommand.class, RecordCommand.class, RecheckCommand.class},
-        footer = {"", "Catalog folder: --catalog DIR, else $AMPSIEVE_CATALOG, else the demo catalog.",
+        description =
+                "Picks operational amplifiers for a stage by its full output error budget, computed from your own YAML catalog of datasheet values.",
+        subcommands = {
+            CheckCommand.class,
+            BudgetCommand.class,
+            FindCommand.class,
+            RankCommand.class,
+            CompareCommand.class,
+            SufficesCommand.class,
+            BarsCommand.class,
+            ScatterCommand.class,
+            NewPartCommand.class,
+            ImportCommand.class,
+            ExportCommand.class,
+            CompletionCommand.class,
+            RecordCommand.class,
+            RecheckCommand.class
+        },
+        footer = {
+            "",
+            "Catalog folder: --catalog DIR, else $AMPSIEVE_CATALOG, else the demo catalog.",
             "Exit codes: 0 ok, 1 problems in your data or a 'no' answer, 2 usage error, 3 internal error.",
-            "Reference: 'ampsieve help query', 'help stage-keys', 'help catalog-keys', 'help units'."})
+            "Reference: 'ampsieve help query', 'help stage-keys', 'help catalog-keys', 'help units'."
+        })
 public final class RootCommand implements Callable<Integer> {
 
     @Spec
     CommandSpec spec;
 
-    @Option(names = "--catalog", paramLabel = "DIR", scope = ScopeType.INHERIT,
+    @Option(
+            names = "--catalog",
+            paramLabel = "DIR",
+            scope = ScopeType.INHERIT,
             description = "Folder of catalog YAML files (default: $AMPSIEVE_CATALOG, else demo-catalog).")
     Path catalogDir;
 
-    @Option(names = "--strict", scope = ScopeType.INHERIT,
+    @Option(
+            names = "--strict",
+            scope = ScopeType.INHERIT,
             description = "Refuse the whole catalog when any file has an error.")
     boolean strict;
 
     @Option(names = "--verbose", scope = ScopeType.INHERIT, description = "Show stack traces of internal errors.")
     boolean verbose;
 
-    @Option(names = "--ascii", scope = ScopeType.INHERIT,
+    @Option(
+            names = "--ascii",
+            scope = ScopeType.INHERIT,
             description = "Draw charts with ASCII characters only (automatic when the terminal is not UTF-8).")
     boolean ascii;
 
@@ -163,7 +188,8 @@ public final class RootCommand implements Callable<Integer> {
                     : null;
         }
         return env != null && env.isBlank()
-                ? CATALOG_VARIABLE + " is set but empty; set it to the catalog folder, or unset it to use the demo catalog"
+                ? CATALOG_VARIABLE
+                        + " is set but empty; set it to the catalog folder, or unset it to use the demo catalog"
                 : null;
     }
 

@@ -21,8 +21,8 @@ import java.util.List;
  *                   hard constraint as its budget comes closest)
  * @param comparison for a change from the first to the second part; null otherwise
  */
-public record DecisionRecord(Stage stage, Ranking ranking, List<Candidate> shortlist, Comparison comparison,
-        RecordFacts facts) {
+public record DecisionRecord(
+        Stage stage, Ranking ranking, List<Candidate> shortlist, Comparison comparison, RecordFacts facts) {
 
     /** How many parts a record shortlists when none are named. */
     public static final int DEFAULT_SHORTLIST = 3;
@@ -38,15 +38,25 @@ public record DecisionRecord(Stage stage, Ranking ranking, List<Candidate> short
      *               {@link #DEFAULT_SHORTLIST} parts that fit, or its closest part when none fits
      * @param change a change from {@code chosen[0]} to {@code chosen[1]}
      */
-    public static DecisionRecord build(Stage stage, String stagePath, String catalogPath, List<Part> catalogParts,
-            List<Part> chosen, boolean change, String date, String toolVersion) {
+    public static DecisionRecord build(
+            Stage stage,
+            String stagePath,
+            String catalogPath,
+            List<Part> catalogParts,
+            List<Part> chosen,
+            boolean change,
+            String date,
+            String toolVersion) {
         if (change && (chosen == null || chosen.size() != 2)) {
             throw new IllegalArgumentException("a change names two parts");
         }
         Ranking r = Ranker.rank(stage, catalogParts, BudgetCalculator::compute);
         List<Candidate> list = new ArrayList<>();
         if (chosen == null) {
-            r.candidates().stream().filter(Candidate::fits).limit(DEFAULT_SHORTLIST).forEach(list::add);
+            r.candidates().stream()
+                    .filter(Candidate::fits)
+                    .limit(DEFAULT_SHORTLIST)
+                    .forEach(list::add);
             if (list.isEmpty() && !r.candidates().isEmpty()) {
                 list.add(r.candidates().get(0));
             }
@@ -55,12 +65,21 @@ public record DecisionRecord(Stage stage, Ranking ranking, List<Candidate> short
                 list.add(candidate(r, stage, p));
             }
         }
-        Comparison cmp = change ? Comparison.of(list.get(0).budget(), list.get(1).budget()) : null;
-        Candidate pick = r.candidates().stream().filter(Candidate::fits).findFirst().orElse(null);
-        RecordFacts facts = new RecordFacts(change ? RecordFacts.Kind.CHANGE : RecordFacts.Kind.SHORTLIST, stagePath,
-                StageWriter.toYaml(stage), catalogPath, date, toolVersion,
-                list.stream().map(PartFacts::of).toList(), pick == null ? null : PartFacts.of(pick),
-                r.candidates().size(), r.rejected().size());
+        Comparison cmp =
+                change ? Comparison.of(list.get(0).budget(), list.get(1).budget()) : null;
+        Candidate pick =
+                r.candidates().stream().filter(Candidate::fits).findFirst().orElse(null);
+        RecordFacts facts = new RecordFacts(
+                change ? RecordFacts.Kind.CHANGE : RecordFacts.Kind.SHORTLIST,
+                stagePath,
+                StageWriter.toYaml(stage),
+                catalogPath,
+                date,
+                toolVersion,
+                list.stream().map(PartFacts::of).toList(),
+                pick == null ? null : PartFacts.of(pick),
+                r.candidates().size(),
+                r.rejected().size());
         return new DecisionRecord(stage, r, list, cmp, facts);
     }
 

@@ -13,12 +13,10 @@ public sealed interface Finding {
     }
 
     /** One catalog field of an entry, then and now; null where the entry does not give it. */
-    record FieldChange(String path, String was, String now) {
-    }
+    record FieldChange(String path, String was, String now) {}
 
     /** The part is no longer in the catalog. */
-    record Disappeared(String id) implements Finding {
-    }
+    record Disappeared(String id) implements Finding {}
 
     /**
      * A part now fits at a lower effective cost than the recorded cheapest fitting part (or
@@ -26,14 +24,11 @@ public sealed interface Finding {
      *
      * @param was the recorded cheapest fitting part, or null when none fitted
      */
-    record CheaperFits(PartFacts now, PartFacts was) implements Finding {
-    }
+    record CheaperFits(PartFacts now, PartFacts was) implements Finding {}
 
     /** A recorded part's verdict is another today. */
-    record VerdictChanged(String id, String was, String now) implements Finding {
-    }
+    record VerdictChanged(String id, String was, String now) implements Finding {}
 
     /** A recorded part's largest (limiting) term is another today. */
-    record LimitingChanged(String id, String was, String now) implements Finding {
-    }
+    record LimitingChanged(String id, String was, String now) implements Finding {}
 }

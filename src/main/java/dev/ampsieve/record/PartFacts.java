@@ -13,16 +13,38 @@ import dev.ampsieve.advice.Candidate;
  * @param effectiveCost unit price at the stage quantity plus the trim cost when trimmed; NaN without a price
  * @param constraintsMet every hard constraint met
  */
-public record PartFacts(String id, String file, Entry entry, String verdict, String limitingTerm, boolean trimmed,
-        double errorV, double worstCaseV, double rssV, double limitV, double effectiveCost, String currency,
+public record PartFacts(
+        String id,
+        String file,
+        Entry entry,
+        String verdict,
+        String limitingTerm,
+        boolean trimmed,
+        double errorV,
+        double worstCaseV,
+        double rssV,
+        double limitV,
+        double effectiveCost,
+        String currency,
         boolean constraintsMet) {
 
     public static PartFacts of(Candidate c) {
         var where = c.part().where();
         String file = where == null || where.file() == null ? "" : where.file().toString();
-        return new PartFacts(c.id(), file, Entry.of(c.part()), c.verdict().key(), c.budget().limitingTerm(),
-                c.trimmed(), c.errorV(), c.budget().worstCaseV(), c.budget().rssV(), c.limitV(), c.effectiveCost(),
-                c.currency(), c.constraintsMet());
+        return new PartFacts(
+                c.id(),
+                file,
+                Entry.of(c.part()),
+                c.verdict().key(),
+                c.budget().limitingTerm(),
+                c.trimmed(),
+                c.errorV(),
+                c.budget().worstCaseV(),
+                c.budget().rssV(),
+                c.limitV(),
+                c.effectiveCost(),
+                c.currency(),
+                c.constraintsMet());
     }
 
     /** Fits as it is or after the trim, every hard constraint met. */

@@ -9,8 +9,7 @@ import java.util.Set;
 
 /** A recorded decision against the same record made again today: what no longer holds. */
 public final class Recheck {
-    private Recheck() {
-    }
+    private Recheck() {}
 
     /** Cost differences below half a cent count as equal (as {@code Comparison} has it). */
     static final double COST_EPS = 0.005;
@@ -29,7 +28,8 @@ public final class Recheck {
                 continue;
             }
             if (!old.entry().sha256().equals(now.entry().sha256())) {
-                out.add(new Finding.EntryChanged(old.id(), changes(old.entry().fields(), now.entry().fields())));
+                out.add(new Finding.EntryChanged(
+                        old.id(), changes(old.entry().fields(), now.entry().fields())));
             }
             if (!old.verdict().equals(now.verdict()) || old.constraintsMet() != now.constraintsMet()) {
                 out.add(new Finding.VerdictChanged(old.id(), verdictWord(old), verdictWord(now)));

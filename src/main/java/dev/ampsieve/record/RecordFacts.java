@@ -14,11 +14,21 @@ import java.util.List;
  * @param parts        the shortlisted parts (for a change: from, then to)
  * @param cheapestFit  the first part of the ranking that fits (the cheapest), or null when none fits
  */
-public record RecordFacts(Kind kind, String stagePath, String stageYaml, String catalogPath, String date,
-        String toolVersion, List<PartFacts> parts, PartFacts cheapestFit, int candidates, int rejected) {
+public record RecordFacts(
+        Kind kind,
+        String stagePath,
+        String stageYaml,
+        String catalogPath,
+        String date,
+        String toolVersion,
+        List<PartFacts> parts,
+        PartFacts cheapestFit,
+        int candidates,
+        int rejected) {
 
     public enum Kind {
-        SHORTLIST("shortlist"), CHANGE("change");
+        SHORTLIST("shortlist"),
+        CHANGE("change");
 
         private final String key;
 

@@ -2,8 +2,7 @@ package dev.ampsieve.report;
 
 /** The few ANSI SGR sequences the text output uses (ECMA-48, section 8.3.117). */
 final class Ansi {
-    private Ansi() {
-    }
+    private Ansi() {}
 
     static final String RED = "\u001b[31m";
     static final String GREEN = "\u001b[32m";

@@ -21,8 +21,7 @@ import java.util.Locale;
  * </pre>
  */
 public final class BarChart {
-    private BarChart() {
-    }
+    private BarChart() {}
 
     /** One bar: a label and a magnitude in volts (NaN when unknown: drawn empty, printed n/a). */
     public record Bar(String label, double value) {
@@ -89,8 +88,17 @@ public final class BarChart {
         return lines.stream().map(g::text).toList();
     }
 
-    private static String row(Bar b, int labelW, int valueW, int shareW, int barW, int limitCol, double max,
-            double limit, Glyphs g, boolean color) {
+    private static String row(
+            Bar b,
+            int labelW,
+            int valueW,
+            int shareW,
+            int barW,
+            int limitCol,
+            double max,
+            double limit,
+            Glyphs g,
+            boolean color) {
         StringBuilder bar = new StringBuilder();
         int cells = 0;
         if (Double.isFinite(b.value())) {
@@ -110,8 +118,13 @@ public final class BarChart {
         for (int i = cells; i <= barW; i++) {
             area.append(i == limitCol ? g.vertical() : ' ');
         }
-        String line = pad(b.label(), labelW) + " ".repeat(GAP) + area + " ".repeat(GAP)
-                + lpad(value(b), valueW) + " ".repeat(GAP) + lpad(share(b, limit), shareW);
+        String line = pad(b.label(), labelW)
+                + " ".repeat(GAP)
+                + area
+                + " ".repeat(GAP)
+                + lpad(value(b), valueW)
+                + " ".repeat(GAP)
+                + lpad(share(b, limit), shareW);
         return line.stripTrailing();
     }
 

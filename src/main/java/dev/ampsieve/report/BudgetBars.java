@@ -5,15 +5,12 @@ import dev.ampsieve.budget.BudgetCalculator;
 import dev.ampsieve.budget.TermResult;
 import dev.ampsieve.stage.Trim;
 import dev.ampsieve.text.Visible;
-import dev.ampsieve.units.Dimension;
-import dev.ampsieve.units.Units;
 import java.util.ArrayList;
 import java.util.List;
 
 /** One part's budget as a bar chart: each counted term, the totals, and the limit marked. */
 public final class BudgetBars {
-    private BudgetBars() {
-    }
+    private BudgetBars() {}
 
     /** @param stageLabel how to name the stage (its file), or null */
     public static String render(Budget b, String stageLabel, OutputStyle style) {
@@ -34,9 +31,11 @@ public final class BudgetBars {
             totals.add(new BarChart.Bar("after the trim", b.trimmed().worstCaseV()));
         }
         StringBuilder o = new StringBuilder();
-        o.append(Visible.of(b.part().id())).append(stageLabel == null ? "" : " in " + Visible.of(stageLabel))
+        o.append(Visible.of(b.part().id()))
+                .append(stageLabel == null ? "" : " in " + Visible.of(stageLabel))
                 .append(": error at the output, term by term, against the limit (")
-                .append(b.stage().criterion()).append(")\n\n");
+                .append(b.stage().criterion())
+                .append(")\n\n");
         for (String line : BarChart.render(terms, totals, b.limitV(), style)) {
             o.append(line).append('\n');
         }
@@ -45,11 +44,15 @@ public final class BudgetBars {
             o.append("* estimated, typical-only or assumed value ('budget' lists the warnings)\n");
         }
         if (!skipped.isEmpty()) {
-            o.append("Not counted (AC-coupled, headroom only): ").append(String.join(", ", skipped)).append('\n');
+            o.append("Not counted (AC-coupled, headroom only): ")
+                    .append(String.join(", ", skipped))
+                    .append('\n');
         }
-        o.append("Verdict ").append(b.verdict().key())
+        o.append("Verdict ")
+                .append(b.verdict().key())
                 .append(b.limitingTerm() == null ? "" : "; largest term: " + BudgetText.termLabel(b, b.limitingTerm()))
-                .append("; input-referred limit ").append(Figures.atInput(b.stage(), b.limitV() / b.stage().sourceGain()))
+                .append("; input-referred limit ")
+                .append(Figures.atInput(b.stage(), b.limitV() / b.stage().sourceGain()))
                 .append('\n');
         o.append('\n').append(Caution.TEXT).append('\n');
         return style.glyphs().text(Wrap.prose(o.toString(), style.width()));

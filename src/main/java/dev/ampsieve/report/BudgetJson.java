@@ -10,7 +10,6 @@ import dev.ampsieve.budget.ConstraintResult;
 import dev.ampsieve.budget.NoiseModel;
 import dev.ampsieve.budget.TermResult;
 import dev.ampsieve.budget.YieldResult;
-import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.stage.Trim;
 
 /**
@@ -18,8 +17,7 @@ import dev.ampsieve.stage.Trim;
  * fractions, temperatures in °C; NaN (not applicable) is written as null.
  */
 public final class BudgetJson {
-    private BudgetJson() {
-    }
+    private BudgetJson() {}
 
     private static final ObjectMapper MAPPER = JsonSupport.MAPPER;
 
@@ -44,7 +42,10 @@ public final class BudgetJson {
             n.put("kind", t.kind().key());
             put(n, "outputV", t.outputV());
             // at the signal source: amperes for a transimpedance stage, named so
-            put(n, Figures.inputDimension(b.stage()) == dev.ampsieve.units.Dimension.CURRENT ? "inputA" : "inputV", t.inputV());
+            put(
+                    n,
+                    Figures.inputDimension(b.stage()) == dev.ampsieve.units.Dimension.CURRENT ? "inputA" : "inputV",
+                    t.inputV());
             put(n, "shareOfLimit", b.limitV() > 0 ? t.outputV() / b.limitV() : Double.NaN);
             put(n, "worstAtC", t.worstAtC());
             n.put("estimated", t.estimated());

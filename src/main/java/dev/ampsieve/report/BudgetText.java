@@ -19,8 +19,7 @@ import java.util.Locale;
 
 /** The budget of one part in one stage as a plain-text table for a terminal. */
 public final class BudgetText {
-    private BudgetText() {
-    }
+    private BudgetText() {}
 
     /**
      * @param stageLabel how to name the stage in the header (its file), or null
@@ -48,7 +47,8 @@ public final class BudgetText {
         List<String> parts = new java.util.ArrayList<>();
         for (SigmaYield y : bySigma) {
             parts.add(num(y.maxToSigma()) + (y.maxToSigma() == s.maxToSigma() ? " (stage)" : "") + ": "
-                    + points(Math.floor(y.yield() * 1e4) / 1e4) + " % (" + points(Math.floor(y.low() * 1e4) / 1e4) + ".."
+                    + points(Math.floor(y.yield() * 1e4) / 1e4) + " % (" + points(Math.floor(y.low() * 1e4) / 1e4)
+                    + ".."
                     + points(Math.ceil(y.high() * 1e4) / 1e4) + ")");
         }
         return String.join(", ", parts);
@@ -63,31 +63,51 @@ public final class BudgetText {
         StringBuilder o = new StringBuilder();
         double limit = b.limitV();
         double g = s.sourceGain(); // input-referred = at the signal source
-        line(o, "Part       %s%s", Visible.of(b.part().id()),
+        line(
+                o,
+                "Part       %s%s",
+                Visible.of(b.part().id()),
                 b.part().title().isBlank() ? "" : "  (" + Visible.of(b.part().title()) + ")");
         boolean currentIn = Figures.inputDimension(s) == Dimension.CURRENT;
-        line(o, "Stage      %s%s, noise gain %s, signal gain %s", stageLabel == null ? "" : Visible.of(stageLabel) + ": ",
-                s.topology().key(), num(b.noiseGain()), currentIn ? Units.format(s.signalGain(), Dimension.RESISTANCE, 4)
-                + " (V/A)" : num(s.signalGain()));
+        line(
+                o,
+                "Stage      %s%s, noise gain %s, signal gain %s",
+                stageLabel == null ? "" : Visible.of(stageLabel) + ": ",
+                s.topology().key(),
+                num(b.noiseGain()),
+                currentIn ? Units.format(s.signalGain(), Dimension.RESISTANCE, 4) + " (V/A)" : num(s.signalGain()));
         java.util.function.DoubleFunction<String> in = x -> Figures.atInput(s, x);
-        line(o, "Limit      %s at the output (%s at the input), criterion %s", v(limit), in.apply(limit / g),
+        line(
+                o,
+                "Limit      %s at the output (%s at the input), criterion %s",
+                v(limit),
+                in.apply(limit / g),
                 s.criterion());
         o.append('\n');
         // the input column's convention, stated where it is read
-        line(o, "input = output / |signal gain| %s: referred to the signal source", currentIn
-                ? Units.format(g, Dimension.RESISTANCE, 4) + ", a current" : num(g));
+        line(
+                o,
+                "input = output / |signal gain| %s: referred to the signal source",
+                currentIn ? Units.format(g, Dimension.RESISTANCE, 4) + ", a current" : num(g));
         line(o, "%-24s %11s %11s %9s %10s", "term", "output", "input", "of limit", "worst at");
         boolean anyEstimated = false;
         boolean anyUncounted = false;
-        java.util.Set<dev.ampsieve.budget.TermKind> kinds = java.util.EnumSet.noneOf(dev.ampsieve.budget.TermKind.class);
+        java.util.Set<dev.ampsieve.budget.TermKind> kinds =
+                java.util.EnumSet.noneOf(dev.ampsieve.budget.TermKind.class);
         for (TermResult t : b.terms()) {
             kinds.add(t.kind());
             boolean counted = BudgetCalculator.counts(s, t.key());
             String mark = t.estimated() ? "*" : "";
             anyEstimated |= t.estimated();
             anyUncounted |= !counted;
-            line(o, "%-24s %11s %11s %9s %10s%s", t.label() + Figures.kindTag(t.kind()) + mark, v(t.outputV()), in.apply(t.inputV()),
-                    share(t.outputV(), limit), Double.isNaN(t.worstAtC()) ? "-" : Units.format(t.worstAtC(), Dimension.TEMPERATURE),
+            line(
+                    o,
+                    "%-24s %11s %11s %9s %10s%s",
+                    t.label() + Figures.kindTag(t.kind()) + mark,
+                    v(t.outputV()),
+                    in.apply(t.inputV()),
+                    share(t.outputV(), limit),
+                    Double.isNaN(t.worstAtC()) ? "-" : Units.format(t.worstAtC(), Dimension.TEMPERATURE),
                     counted ? "" : "  headroom only");
         }
         if (anyEstimated) {
@@ -102,11 +122,20 @@ public final class BudgetText {
         }
         o.append('\n');
         line(o, "%-24s %11s %11s %9s", "total", "output", "input", "of limit");
-        line(o, "%-24s %11s %11s %9s", "worst-case sum", v(b.worstCaseV()), in.apply(b.worstCaseV() / g),
+        line(
+                o,
+                "%-24s %11s %11s %9s",
+                "worst-case sum",
+                v(b.worstCaseV()),
+                in.apply(b.worstCaseV() / g),
                 share(b.worstCaseV(), limit));
         line(o, "%-24s %11s %11s %9s", "root-sum-square", v(b.rssV()), in.apply(b.rssV() / g), share(b.rssV(), limit));
         line(o, "%-24s %11s %11s", "noise rms", v(b.noiseRmsV()), in.apply(b.noiseRmsV() / g));
-        line(o, "%-24s %11s %11s", "noise peak-to-peak", v(NoiseModel.PEAK_TO_PEAK * b.noiseRmsV()),
+        line(
+                o,
+                "%-24s %11s %11s",
+                "noise peak-to-peak",
+                v(NoiseModel.PEAK_TO_PEAK * b.noiseRmsV()),
                 in.apply(NoiseModel.PEAK_TO_PEAK * b.noiseRmsV() / g));
         o.append('\n');
         line(o, "Yield      %s", yieldLine(b.yield(), s));
@@ -121,17 +150,33 @@ public final class BudgetText {
                 continue; // a range of one temperature gives no second calibration point
             }
             Trimmed t = m == trim.method() ? b.trimmed() : BudgetCalculator.trimmed(s, b.part(), m);
-            String where = twoTemp ? "at " + Units.format(trim.coldIn(s), Dimension.TEMPERATURE) + " and "
-                    + Units.format(trim.hotIn(s), Dimension.TEMPERATURE) : "at 25 °C";
-            line(o, "%-10s %s %s%s: worst-case %s (%s), RSS %s (%s)%s", m == Trim.Method.ONE_POINT ? "Trimmed" : "",
-                    methodName(m), where, trim.resolution() > 0 ? ", resolution " + v(trim.resolution()) : "",
-                    v(t.worstCaseV()), share(t.worstCaseV(), limit).strip(), v(t.rssV()), share(t.rssV(), limit).strip(),
+            String where = twoTemp
+                    ? "at " + Units.format(trim.coldIn(s), Dimension.TEMPERATURE) + " and "
+                            + Units.format(trim.hotIn(s), Dimension.TEMPERATURE)
+                    : "at 25 °C";
+            line(
+                    o,
+                    "%-10s %s %s%s: worst-case %s (%s), RSS %s (%s)%s",
+                    m == Trim.Method.ONE_POINT ? "Trimmed" : "",
+                    methodName(m),
+                    where,
+                    trim.resolution() > 0 ? ", resolution " + v(trim.resolution()) : "",
+                    v(t.worstCaseV()),
+                    share(t.worstCaseV(), limit).strip(),
+                    v(t.rssV()),
+                    share(t.rssV(), limit).strip(),
                     // one space before the note: two would mark a table row, which Wrap never folds
-                    m == trim.method() ? (trim.allowed() ? "; the stage's trim" : "; the stage's method, trim not allowed") : "");
+                    m == trim.method()
+                            ? (trim.allowed() ? "; the stage's trim" : "; the stage's method, trim not allowed")
+                            : "");
         }
         if (b.trimmed().yield() != null) {
-            line(o, "%-10s %s", "", "yield after the " + methodName(trim.method()) + " trim: "
-                    + yieldLine(b.trimmed().yield(), s));
+            line(
+                    o,
+                    "%-10s %s",
+                    "",
+                    "yield after the " + methodName(trim.method()) + " trim: "
+                            + yieldLine(b.trimmed().yield(), s));
         }
         o.append('\n');
         line(o, "Constraints");
@@ -146,7 +191,10 @@ public final class BudgetText {
             o.append("  ").append(row).append('\n');
         }
         o.append('\n');
-        line(o, "Verdict    %s%s", b.verdict().key(),
+        line(
+                o,
+                "Verdict    %s%s",
+                b.verdict().key(),
                 b.limitingTerm() == null ? "" : "   (largest term: " + termLabel(b, b.limitingTerm()) + ")");
         String left = Uncounted.words(b.notCounted());
         if (!left.isEmpty()) {
@@ -169,14 +217,19 @@ public final class BudgetText {
     }
 
     static String yieldLine(YieldResult y, Stage s) {
-        String target = s.criterion().kind() == Criterion.Kind.YIELD ? ", target " + pct(s.criterion().yieldTarget()) : "";
+        String target = s.criterion().kind() == Criterion.Kind.YIELD
+                ? ", target " + pct(s.criterion().yieldTarget())
+                : "";
         return switch (y.decided()) {
-            case "all-pass" -> "100 % (decided without sampling: even the largest error the catalog's limits allow is"
-                    + " within the limit" + target + ")";
-            case "none-pass" -> "0 % (decided without sampling: even the smallest error the catalog's limits allow"
-                    + " exceeds the limit" + target + ")";
-            default -> pct(y.value()) + " (95 % interval " + pct(y.low()) + " to " + pct(y.high()) + ", "
-                    + units(y, s) + ", seed " + s.seed() + target + ")";
+            case "all-pass" ->
+                "100 % (decided without sampling: even the largest error the catalog's limits allow is"
+                        + " within the limit" + target + ")";
+            case "none-pass" ->
+                "0 % (decided without sampling: even the smallest error the catalog's limits allow"
+                        + " exceeds the limit" + target + ")";
+            default ->
+                pct(y.value()) + " (95 % interval " + pct(y.low()) + " to " + pct(y.high()) + ", " + units(y, s)
+                        + ", seed " + s.seed() + target + ")";
         };
     }
 
@@ -189,10 +242,12 @@ public final class BudgetText {
         int cap = Math.max(s.trials(), s.maxTrials());
         if (y.low() >= target || y.high() < target) {
             String side = y.low() >= target ? "above" : "below";
-            return y.trials() >= cap ? y.trials() + " units (max-trials), the interval wholly " + side + " the target"
+            return y.trials() >= cap
+                    ? y.trials() + " units (max-trials), the interval wholly " + side + " the target"
                     : y.trials() + " units, stopped once the interval lay wholly " + side + " the target";
         }
-        return y.trials() + " units" + (y.trials() >= cap ? ", the max-trials cap" : "") + ", undecided: the interval holds the target";
+        return y.trials() + " units" + (y.trials() >= cap ? ", the max-trials cap" : "")
+                + ", undecided: the interval holds the target";
     }
 
     /**
@@ -214,7 +269,8 @@ public final class BudgetText {
             int cap = Math.max(s.trials(), s.maxTrials());
             return "undecided: " + y.trials() + " simulated units" + (y.trials() >= cap ? " (max-trials)" : "")
                     + " leave the true yield " + (trimmed ? "after the trim " : "") + "within " + pct(y.low()) + " to "
-                    + pct(y.high()) + ", which holds the " + pct(target) + " target: the sample neither shows it met nor missed";
+                    + pct(y.high()) + ", which holds the " + pct(target)
+                    + " target: the sample neither shows it met nor missed";
         }
         if (b.verdict() != dev.ampsieve.budget.Verdict.NO_FIT) {
             return null;

@@ -12,8 +12,7 @@ import dev.ampsieve.units.Units;
 
 /** What {@code ampsieve compare} prints: two budgets side by side and the conclusion. */
 public final class CompareReport {
-    private CompareReport() {
-    }
+    private CompareReport() {}
 
     private static String better(Comparison c, String side) {
         return switch (side) {
@@ -41,32 +40,51 @@ public final class CompareReport {
         o.append(StageLine.of(c.a().budget().stage(), stageLabel)).append('\n').append('\n');
         String a = c.a().id();
         String b = c.b().id();
-        TextTable t = new TextTable().left("output error").right(a).right(b).left("better").flex("by");
+        TextTable t = new TextTable()
+                .left("output error")
+                .right(a)
+                .right(b)
+                .left("better")
+                .flex("by");
         Budget ba = c.a().budget();
         Budget bb = c.b().budget();
         boolean anyMarked = false;
         boolean anyUnknown = false;
-        java.util.Set<dev.ampsieve.budget.TermKind> kinds = java.util.EnumSet.noneOf(dev.ampsieve.budget.TermKind.class);
+        java.util.Set<dev.ampsieve.budget.TermKind> kinds =
+                java.util.EnumSet.noneOf(dev.ampsieve.budget.TermKind.class);
         for (Comparison.TermDelta d : c.terms()) {
             kinds.add(Figures.kindOf(d.key()));
             boolean ea = estimated(ba, d.key());
             boolean eb = estimated(bb, d.key());
             anyMarked |= ea || eb;
             // a figure the catalog lacks counts as 0 V: it must not win the row on that alone
-            boolean winnerUnknown = d.better().equals("a") ? ea && d.aV() == 0 : d.better().equals("b") && eb && d.bV() == 0;
+            boolean winnerUnknown =
+                    d.better().equals("a") ? ea && d.aV() == 0 : d.better().equals("b") && eb && d.bV() == 0;
             anyUnknown |= winnerUnknown;
-            t.row(d.label() + Figures.kindTag(Figures.kindOf(d.key())), Figures.volts(d.aV()) + (ea ? "*" : ""), Figures.volts(d.bV()) + (eb ? "*" : ""),
-                    winnerUnknown ? "unknown" : better(c, d.better()), winnerUnknown ? "" : by(d.differenceV(), d.ratio()));
+            t.row(
+                    d.label() + Figures.kindTag(Figures.kindOf(d.key())),
+                    Figures.volts(d.aV()) + (ea ? "*" : ""),
+                    Figures.volts(d.bV()) + (eb ? "*" : ""),
+                    winnerUnknown ? "unknown" : better(c, d.better()),
+                    winnerUnknown ? "" : by(d.differenceV(), d.ratio()));
         }
         total(t, c, "worst-case sum", ba.worstCaseV(), bb.worstCaseV());
         total(t, c, "root-sum-square", ba.rssV(), bb.rssV());
         if (ba.trimmed() != null && bb.trimmed() != null) {
-            total(t, c, "worst-case after trim", ba.trimmed().worstCaseV(), bb.trimmed().worstCaseV());
+            total(
+                    t,
+                    c,
+                    "worst-case after trim",
+                    ba.trimmed().worstCaseV(),
+                    bb.trimmed().worstCaseV());
         }
         t.lines(width).forEach(l -> o.append(l).append('\n'));
         if (anyMarked) {
             o.append("* estimated, typical-only or missing in the catalog ('budget PART' lists the warnings)")
-                    .append(anyUnknown ? "; unknown: the smaller figure is 0 V only because the catalog lacks the value" : "")
+                    .append(
+                            anyUnknown
+                                    ? "; unknown: the smaller figure is 0 V only because the catalog lacks the value"
+                                    : "")
                     .append('\n');
         }
         String legend = Figures.kindLegend(kinds);
@@ -76,13 +94,17 @@ public final class CompareReport {
         o.append('\n');
         TextTable s = new TextTable().left("").right(a).right(b);
         s.row("limit", Figures.volts(ba.limitV()), Figures.volts(bb.limitV()));
-        s.row("yield as it is", ba.yield() == null ? Figures.NONE : Figures.yield(ba.yield().value()),
+        s.row(
+                "yield as it is",
+                ba.yield() == null ? Figures.NONE : Figures.yield(ba.yield().value()),
                 bb.yield() == null ? Figures.NONE : Figures.yield(bb.yield().value()));
         s.row("verdict", verdict(c.a()), verdict(c.b()));
         s.row("unit cost", cost(c.a()), cost(c.b()));
         // the margin of the criterion in force: points of yield under a yield criterion
         boolean byYield = ba.stage().criterion().kind() == dev.ampsieve.stage.Criterion.Kind.YIELD;
-        s.row("margin", byYield ? Figures.yieldMargin(c.a().margin()) : Figures.percent(c.a().margin()),
+        s.row(
+                "margin",
+                byYield ? Figures.yieldMargin(c.a().margin()) : Figures.percent(c.a().margin()),
                 byYield ? Figures.yieldMargin(c.b().margin()) : Figures.percent(c.b().margin()));
         s.row("largest term", largest(ba), largest(bb));
         s.lines(width).forEach(l -> o.append(l).append('\n'));
@@ -120,7 +142,8 @@ public final class CompareReport {
     }
 
     private static String cost(Candidate c) {
-        return Figures.money(c.effectiveCost()) + (c.currency().isEmpty() ? "" : " " + c.currency())
+        return Figures.money(c.effectiveCost())
+                + (c.currency().isEmpty() ? "" : " " + c.currency())
                 + (c.trimmed() ? " incl. trim" : "");
     }
 

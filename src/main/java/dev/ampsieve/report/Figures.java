@@ -10,8 +10,7 @@ import java.util.Locale;
  * figure is not a number), {@code ∞} for an infinite one, scientific notation past the SI prefixes.
  */
 final class Figures {
-    private Figures() {
-    }
+    private Figures() {}
 
     /** After a term's label: where the term comes from ("" for the part's own figures). */
     static String kindTag(dev.ampsieve.budget.TermKind k) {
@@ -24,15 +23,19 @@ final class Figures {
 
     /** The kind of the term {@code key} ({@link dev.ampsieve.budget.TermKind#PART} for a key no term has). */
     static dev.ampsieve.budget.TermKind kindOf(String key) {
-        return dev.ampsieve.budget.BudgetCalculator.TERMS.stream().filter(t -> t.key().equals(key))
-                .map(dev.ampsieve.budget.ErrorTerm::kind).findFirst().orElse(dev.ampsieve.budget.TermKind.PART);
+        return dev.ampsieve.budget.BudgetCalculator.TERMS.stream()
+                .filter(t -> t.key().equals(key))
+                .map(dev.ampsieve.budget.ErrorTerm::kind)
+                .findFirst()
+                .orElse(dev.ampsieve.budget.TermKind.PART);
     }
 
     /** The legend of the tags {@link #kindTag} puts on the terms of {@code kinds}, printed under a table that shows one. */
     static String kindLegend(java.util.Collection<dev.ampsieve.budget.TermKind> kinds) {
         java.util.List<String> out = new java.util.ArrayList<>();
         if (kinds.contains(dev.ampsieve.budget.TermKind.OPERATING_POINT)) {
-            out.add("(op) operating-point term: where the part runs (its supply and common mode, die temperature, chopping)");
+            out.add(
+                    "(op) operating-point term: where the part runs (its supply and common mode, die temperature, chopping)");
         }
         if (kinds.contains(dev.ampsieve.budget.TermKind.BOARD)) {
             out.add("(board) board-level term: the board around the part");
@@ -141,7 +144,9 @@ final class Figures {
             return NONE;
         }
         double pct = 100 * ratio;
-        return Math.abs(pct) < BIG ? String.format(Locale.ROOT, "%.0f %%", pct) : Units.format(pct, Dimension.NUMBER) + " %";
+        return Math.abs(pct) < BIG
+                ? String.format(Locale.ROOT, "%.0f %%", pct)
+                : Units.format(pct, Dimension.NUMBER) + " %";
     }
 
     /** From here on a fixed-point number is a long row of digits: printed as 1e+12 (or ∞) instead. */
@@ -158,7 +163,8 @@ final class Figures {
         if (ratio >= 1.0) {
             return "100 %";
         }
-        return ratio >= 0.99 ? String.format(Locale.ROOT, "%.2f %%", Math.floor(ratio * 10000 + 1e-9) / 100)
+        return ratio >= 0.99
+                ? String.format(Locale.ROOT, "%.2f %%", Math.floor(ratio * 10000 + 1e-9) / 100)
                 : String.format(Locale.ROOT, "%.1f %%", Math.floor(ratio * 1000 + 1e-9) / 10);
     }
 
@@ -168,7 +174,8 @@ final class Figures {
             return NONE;
         }
         // + 0.0 turns the -0.0 that ceil gives for a yield of 0 into 0.0 (printed "0.0 %", not "-0.0 %")
-        return ratio >= 0.99 ? String.format(Locale.ROOT, "%.2f %%", Math.ceil(ratio * 10000 - 1e-9) / 100 + 0.0)
+        return ratio >= 0.99
+                ? String.format(Locale.ROOT, "%.2f %%", Math.ceil(ratio * 10000 - 1e-9) / 100 + 0.0)
                 : String.format(Locale.ROOT, "%.1f %%", Math.ceil(ratio * 1000 - 1e-9) / 10 + 0.0);
     }
 

@@ -9,8 +9,7 @@ import java.util.List;
 
 /** What {@code ampsieve find} prints: the matching parts with their key figures. */
 public final class FindReport {
-    private FindReport() {
-    }
+    private FindReport() {}
 
     /** @param parts the matches, most relevant first */
     public static String text(String query, List<Part> parts) {
@@ -20,15 +19,34 @@ public final class FindReport {
     /** @param width columns the table fits in (the terminal's, in the shell) */
     public static String text(String query, List<Part> parts, int width) {
         StringBuilder o = new StringBuilder();
-        o.append(headline(query, parts.size())).append(parts.isEmpty() ? "." : ", most relevant first, then cheapest:").append('\n');
+        o.append(headline(query, parts.size()))
+                .append(parts.isEmpty() ? "." : ", most relevant first, then cheapest:")
+                .append('\n');
         if (!parts.isEmpty()) {
             String cur = Figures.currency(parts);
-            TextTable t = new TextTable().left("id").right(cur.isEmpty() ? "price" : "price " + cur).right("vos")
-                    .right("drift").right("ib").right("gbw").right("en").right("supply");
+            TextTable t = new TextTable()
+                    .left("id")
+                    .right(cur.isEmpty() ? "price" : "price " + cur)
+                    .right("vos")
+                    .right("drift")
+                    .right("ib")
+                    .right("gbw")
+                    .right("en")
+                    .right("supply");
             int idWidth = 2;
             for (Part p : parts) {
-                t.row(p.id(), Figures.price(p) + (cur.isEmpty() && p.price() != null ? " " + p.price().currency() : ""),
-                        Figures.vos(p), Figures.drift(p), Figures.ib(p), Figures.gbw(p), Figures.en(p), Figures.supply(p));
+                t.row(
+                        p.id(),
+                        Figures.price(p)
+                                + (cur.isEmpty() && p.price() != null
+                                        ? " " + p.price().currency()
+                                        : ""),
+                        Figures.vos(p),
+                        Figures.drift(p),
+                        Figures.ib(p),
+                        Figures.gbw(p),
+                        Figures.en(p),
+                        Figures.supply(p));
                 idWidth = Math.max(idWidth, p.id().length());
             }
             // the title goes on its own line under the figures, so neither has to be cut short
@@ -42,7 +60,8 @@ public final class FindReport {
                     o.append(TextTable.cut(indent + title, width)).append('\n');
                 }
             }
-            o.append("vos, drift, ib: guaranteed maximum, else typical; en: white noise density; supply: total, V+ to V-.\n");
+            o.append(
+                    "vos, drift, ib: guaranteed maximum, else typical; en: white noise density; supply: total, V+ to V-.\n");
             if (parts.stream().anyMatch(p -> p.price() != null && p.price().hasBreaks())) {
                 o.append("price (from N): the part has price breaks; this is the unit price for orders from N up,"
                         + " and rank uses the break for the stage's quantity.\n");
@@ -71,7 +90,10 @@ public final class FindReport {
             ObjectNode n = arr.addObject();
             n.put("id", p.id());
             n.put("title", p.title());
-            JsonSupport.put(n, "architecture", p.architecture() == null ? null : p.architecture().key());
+            JsonSupport.put(
+                    n,
+                    "architecture",
+                    p.architecture() == null ? null : p.architecture().key());
             JsonSupport.put(n, "input", p.input() == null ? null : p.input().key());
             putValue(n, "vosV", "vos", p);
             putValue(n, "driftVPerC", "drift", p);
@@ -82,7 +104,11 @@ public final class FindReport {
             putValue(n, "supplyMaxV", "supply.max", p);
             putValue(n, "price", "price", p);
             JsonSupport.put(n, "currency", p.price() == null ? null : p.price().currency());
-            n.put("file", p.where() == null || p.where().file() == null ? null : p.where().file().toString());
+            n.put(
+                    "file",
+                    p.where() == null || p.where().file() == null
+                            ? null
+                            : p.where().file().toString());
         }
         return JsonSupport.render(o);
     }

@@ -14,8 +14,16 @@ package dev.ampsieve.report;
  * @param pointer  points up at the limit, under a bar chart
  * @param collide  two or more points in one cell of a scatter
  */
-public record Glyphs(String partials, char full, char vertical, char rule, char cross, char tick, char corner,
-        char pointer, char collide) {
+public record Glyphs(
+        String partials,
+        char full,
+        char vertical,
+        char rule,
+        char cross,
+        char tick,
+        char corner,
+        char pointer,
+        char collide) {
 
     public static final Glyphs UNICODE = new Glyphs("▏▎▍▌▋▊▉", '█', '│', '─', '┼', '┤', '└', '▲', '◆');
 
@@ -50,7 +58,7 @@ public record Glyphs(String partials, char full, char vertical, char rule, char 
             char c = s.charAt(i);
             switch (c) {
                 case '\u00b5', '\u03bc' -> b.append('u'); // micro sign, Greek mu
-                case '\u00b0' -> { } // degree sign: "°C" reads as "C"
+                case '\u00b0' -> {} // degree sign: "°C" reads as "C"
                 case '\u03a9', '\u2126' -> b.append("ohm");
                 case '\u221a' -> b.append("rt");
                 case '\u00b1' -> b.append("+/-");

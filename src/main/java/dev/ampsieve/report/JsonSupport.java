@@ -11,8 +11,7 @@ import dev.ampsieve.text.Visible;
 
 /** Shared JSON conventions: SI numbers, NaN (not applicable) as null, indented, a caution field. */
 final class JsonSupport {
-    private JsonSupport() {
-    }
+    private JsonSupport() {}
 
     static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
 
@@ -40,7 +39,9 @@ final class JsonSupport {
 
         @Override
         public SerializableString getEscapeSequence(int ch) {
-            return Visible.isControl(ch) ? new SerializedString(String.format(java.util.Locale.ROOT, "\\u%04X", ch)) : null;
+            return Visible.isControl(ch)
+                    ? new SerializedString(String.format(java.util.Locale.ROOT, "\\u%04X", ch))
+                    : null;
         }
     }
 

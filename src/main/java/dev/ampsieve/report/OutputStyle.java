@@ -11,6 +11,7 @@ public record OutputStyle(int width, boolean unicode, boolean color) {
 
     /** Narrower than this, no chart is readable; wider is capped so lines stay easy to follow. */
     public static final int MIN_WIDTH = 40;
+
     public static final int MAX_WIDTH = 160;
 
     /** Columns of text tables on the command line (files, pipes, logs); the shell uses its terminal's width. */

@@ -5,8 +5,8 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.ampsieve.advice.Advice;
 import dev.ampsieve.advice.Candidate;
 import dev.ampsieve.advice.Change;
-import dev.ampsieve.advice.PartTarget;
 import dev.ampsieve.advice.NoFitAdvice;
+import dev.ampsieve.advice.PartTarget;
 import dev.ampsieve.advice.Ranking;
 import dev.ampsieve.advice.Rejected;
 import dev.ampsieve.advice.TrimAdvice;
@@ -22,8 +22,7 @@ import java.util.Set;
 
 /** What {@code ampsieve rank} prints: candidates, Pareto front, rejected parts, advice; text, CSV or JSON. */
 public final class RankReport {
-    private RankReport() {
-    }
+    private RankReport() {}
 
     /** Marks a row whose verdict rests on an estimated, assumed or typical-only figure (as '*' marks such a term in a budget). */
     static final String ESTIMATE_MARK = "*";
@@ -59,7 +58,9 @@ public final class RankReport {
 
     /** The margin of the criterion in force: points of yield under a yield criterion, else a share of the limit. */
     private static String marginCell(Ranking r, Candidate c) {
-        return r.stage().criterion().kind() == Criterion.Kind.YIELD ? Figures.yieldMargin(c.margin()) : Figures.percent(c.margin());
+        return r.stage().criterion().kind() == Criterion.Kind.YIELD
+                ? Figures.yieldMargin(c.margin())
+                : Figures.percent(c.margin());
     }
 
     private static double worstCase(Candidate c) {
@@ -102,31 +103,54 @@ public final class RankReport {
         }
         o.append("; ").append(r.rejected().size()).append(" rejected)\n");
         if (!shown.isEmpty()) {
-            String cur = Figures.currency(r.candidates().stream().map(Candidate::part).toList());
-            TextTable t = new TextTable().right("#").left("part").left("verdict")
-                    .right(cur.isEmpty() ? "cost" : "cost " + cur).right("worst-case").right("RSS").right("yield")
-                    .right("margin").flex("largest term").left("P");
+            String cur = Figures.currency(
+                    r.candidates().stream().map(Candidate::part).toList());
+            TextTable t = new TextTable()
+                    .right("#")
+                    .left("part")
+                    .left("verdict")
+                    .right(cur.isEmpty() ? "cost" : "cost " + cur)
+                    .right("worst-case")
+                    .right("RSS")
+                    .right("yield")
+                    .right("margin")
+                    .flex("largest term")
+                    .left("P");
             int i = 0;
             for (Candidate c : shown) {
-                t.row(Integer.toString(++i), c.id(), verdict(c) + (c.restsOnEstimate() ? ESTIMATE_MARK : ""),
-                        Figures.money(c.effectiveCost()) + (cur.isEmpty() && c.part().price() != null ? " " + c.currency() : ""),
-                        Figures.volts(worstCase(c)), Figures.volts(rss(c)), yieldCell(c), marginCell(r, c),
-                        limiting(c), front.contains(c.id()) ? "*" : "");
+                t.row(
+                        Integer.toString(++i),
+                        c.id(),
+                        verdict(c) + (c.restsOnEstimate() ? ESTIMATE_MARK : ""),
+                        Figures.money(c.effectiveCost())
+                                + (cur.isEmpty() && c.part().price() != null ? " " + c.currency() : ""),
+                        Figures.volts(worstCase(c)),
+                        Figures.volts(rss(c)),
+                        yieldCell(c),
+                        marginCell(r, c),
+                        limiting(c),
+                        front.contains(c.id()) ? "*" : "");
             }
             t.lines(width).forEach(l -> o.append(l).append('\n'));
             o.append("verdict: fits as it is, +trim after the stage's trim (its cost and figures include it)"
                     + (shown.stream().anyMatch(c -> c.verdict() == Verdict.UNDECIDED)
-                            ? ", undecided (the yield's 95 % interval still holds the target after max-trials units)" : "")
+                            ? ", undecided (the yield's 95 % interval still holds the target after max-trials units)"
+                            : "")
                     + ", no.\n");
             if (shown.stream().anyMatch(Candidate::restsOnEstimate)) {
-                o.append(ESTIMATE_MARK).append(" after the verdict: it rests on an estimated or typical-only figure"
-                        + " (ampsieve budget PART names it; enter the datasheet value to firm it up).\n");
+                o.append(ESTIMATE_MARK)
+                        .append(" after the verdict: it rests on an estimated or typical-only figure"
+                                + " (ampsieve budget PART names it; enter the datasheet value to firm it up).\n");
             }
-            o.append(r.stage().criterion().kind() == Criterion.Kind.YIELD
-                    ? "margin: lower end of the yield's 95 % interval minus the target, in points of yield.\n"
-                    : "margin: (limit - " + errorName(r) + ") / limit.  ").append("†: largest before the trim.  P: on the Pareto front.\n");
-            String legend = Figures.kindLegend(shown.stream().filter(c -> c.budget().limitingTerm() != null)
-                    .map(c -> Figures.kindOf(c.budget().limitingTerm())).toList());
+            o.append(
+                            r.stage().criterion().kind() == Criterion.Kind.YIELD
+                                    ? "margin: lower end of the yield's 95 % interval minus the target, in points of yield.\n"
+                                    : "margin: (limit - " + errorName(r) + ") / limit.  ")
+                    .append("†: largest before the trim.  P: on the Pareto front.\n");
+            String legend = Figures.kindLegend(shown.stream()
+                    .filter(c -> c.budget().limitingTerm() != null)
+                    .map(c -> Figures.kindOf(c.budget().limitingTerm()))
+                    .toList());
             if (!legend.isEmpty()) {
                 o.append(legend).append(".\n");
             }
@@ -134,12 +158,21 @@ public final class RankReport {
         notCounted(o, r, shown);
         if (!frontList.isEmpty()) {
             // error against cost: each step up in cost buys a smaller error
-            o.append('\n').append("Pareto front of error against cost (no other part is cheaper and better; ")
-                    .append(allOnFront ? "every candidate" : "parts that fit; --all for every candidate").append(")\n");
-            TextTable p = new TextTable().left("part").right("cost").right(errorName(r)).left("verdict");
+            o.append('\n')
+                    .append("Pareto front of error against cost (no other part is cheaper and better; ")
+                    .append(allOnFront ? "every candidate" : "parts that fit; --all for every candidate")
+                    .append(")\n");
+            TextTable p = new TextTable()
+                    .left("part")
+                    .right("cost")
+                    .right(errorName(r))
+                    .left("verdict");
             for (Candidate c : frontList) {
-                p.row(c.id(), Figures.money(c.effectiveCost()) + (c.currency().isEmpty() ? "" : " " + c.currency()),
-                        Figures.volts(c.errorV()), verdictWord(c) + (c.trimmed() ? " (trim included)" : ""));
+                p.row(
+                        c.id(),
+                        Figures.money(c.effectiveCost()) + (c.currency().isEmpty() ? "" : " " + c.currency()),
+                        Figures.volts(c.errorV()),
+                        verdictWord(c) + (c.trimmed() ? " (trim included)" : ""));
             }
             p.lines(width).forEach(l -> o.append(l).append('\n'));
         }
@@ -160,8 +193,12 @@ public final class RankReport {
         }
         Candidate pick = r.advice().pick();
         if (pick != null && !pick.budget().warnings().isEmpty()) {
-            o.append('\n').append("Notes from the budget of ").append(pick.id())
-                    .append(" (ampsieve budget ").append(pick.id()).append(" shows it in full)\n");
+            o.append('\n')
+                    .append("Notes from the budget of ")
+                    .append(pick.id())
+                    .append(" (ampsieve budget ")
+                    .append(pick.id())
+                    .append(" shows it in full)\n");
             pick.budget().warnings().forEach(w -> o.append("  - ").append(w).append('\n'));
         }
         o.append('\n').append(Caution.TEXT).append('\n');
@@ -171,8 +208,11 @@ public final class RankReport {
 
     /** The front shown: of every candidate, or of those that fit (as they are or after the trim). */
     static List<Candidate> front(Ranking r, boolean all) {
-        return all ? r.pareto() : dev.ampsieve.advice.Pareto.front(
-                r.candidates().stream().filter(c -> c.verdict() != Verdict.NO_FIT).toList());
+        return all
+                ? r.pareto()
+                : dev.ampsieve.advice.Pareto.front(r.candidates().stream()
+                        .filter(c -> c.verdict() != Verdict.NO_FIT)
+                        .toList());
     }
 
     /** Under the candidates: what no verdict counts (the stage's doing), then what a listed part's catalog lacks. */
@@ -180,7 +220,8 @@ public final class RankReport {
         if (r.candidates().isEmpty()) {
             return;
         }
-        String every = Uncounted.words(Uncounted.ofStage(r.candidates().get(0).budget().notCounted()));
+        String every =
+                Uncounted.words(Uncounted.ofStage(r.candidates().get(0).budget().notCounted()));
         if (!every.isEmpty()) {
             o.append("Every verdict: ").append(every).append('\n');
         }
@@ -202,16 +243,60 @@ public final class RankReport {
         int i = 0;
         for (Candidate c : r.candidates().stream().limit(Math.max(0, top)).toList()) {
             YieldResult y = c.budget().yield();
-            o.append(String.join(",", List.of(Integer.toString(++i), csv(c.id()), c.verdict().key(), num(c.effectiveCost()),
-                    csv(c.currency()), num(c.errorV()), num(c.margin()), num(c.budget().worstCaseV()), num(c.budget().rssV()),
-                    Boolean.toString(c.trimmed()), num(c.budget().trimmed().worstCaseV()), num(c.budget().trimmed().rssV()),
-                    y == null ? "" : num(y.value()), y == null ? "" : num(y.low()), y == null ? "" : num(y.high()),
-                    csv(c.budget().limitingTerm()), Boolean.toString(front.contains(c.id())), ""))).append('\n');
+            o.append(String.join(
+                            ",",
+                            List.of(
+                                    Integer.toString(++i),
+                                    csv(c.id()),
+                                    c.verdict().key(),
+                                    num(c.effectiveCost()),
+                                    csv(c.currency()),
+                                    num(c.errorV()),
+                                    num(c.margin()),
+                                    num(c.budget().worstCaseV()),
+                                    num(c.budget().rssV()),
+                                    Boolean.toString(c.trimmed()),
+                                    num(c.budget().trimmed().worstCaseV()),
+                                    num(c.budget().trimmed().rssV()),
+                                    y == null ? "" : num(y.value()),
+                                    y == null ? "" : num(y.low()),
+                                    y == null ? "" : num(y.high()),
+                                    csv(c.budget().limitingTerm()),
+                                    Boolean.toString(front.contains(c.id())),
+                                    "")))
+                    .append('\n');
         }
         for (Rejected x : r.rejected()) {
-            o.append(String.join(",", List.of("", csv(x.id()), "rejected", num(x.part().price() == null ? Double.NaN
-                    : x.part().price().at(r.stage().quantity())), csv(x.part().price() == null ? "" : x.part().price().currency()),
-                    "", "", "", "", "", "", "", "", "", "", "", "false", csv(x.reason())))).append('\n');
+            o.append(String.join(
+                            ",",
+                            List.of(
+                                    "",
+                                    csv(x.id()),
+                                    "rejected",
+                                    num(
+                                            x.part().price() == null
+                                                    ? Double.NaN
+                                                    : x.part()
+                                                            .price()
+                                                            .at(r.stage().quantity())),
+                                    csv(
+                                            x.part().price() == null
+                                                    ? ""
+                                                    : x.part().price().currency()),
+                                    "",
+                                    "",
+                                    "",
+                                    "",
+                                    "",
+                                    "",
+                                    "",
+                                    "",
+                                    "",
+                                    "",
+                                    "",
+                                    "false",
+                                    csv(x.reason()))))
+                    .append('\n');
         }
         o.append("# ").append(Caution.TEXT).append('\n');
         return o.toString();
@@ -285,8 +370,12 @@ public final class RankReport {
             putYield(n, "trimmedYield", c.budget().trimmed().yield());
         }
         JsonSupport.put(n, "limitingTerm", c.budget().limitingTerm());
-        JsonSupport.put(n, "limitingKind", c.budget().limitingTerm() == null ? null
-                : Figures.kindOf(c.budget().limitingTerm()).key());
+        JsonSupport.put(
+                n,
+                "limitingKind",
+                c.budget().limitingTerm() == null
+                        ? null
+                        : Figures.kindOf(c.budget().limitingTerm()).key());
         n.put("trimmed", c.trimmed());
         if (c.budget().trimmed() != null) {
             JsonSupport.put(n, "trimmedWorstCaseV", c.budget().trimmed().worstCaseV());

@@ -25,8 +25,7 @@ import java.util.stream.Collectors;
  * horizontal line.
  */
 final class RecordCharts {
-    private RecordCharts() {
-    }
+    private RecordCharts() {}
 
     static final double BAR_X0 = 200;
     static final double BAR_W = 520;
@@ -43,7 +42,11 @@ final class RecordCharts {
     static String bars(Budget b) {
         List<TermResult> terms = b.terms();
         double limit = b.limitV();
-        double largest = terms.stream().mapToDouble(TermResult::outputV).filter(Double::isFinite).max().orElse(0);
+        double largest = terms.stream()
+                .mapToDouble(TermResult::outputV)
+                .filter(Double::isFinite)
+                .max()
+                .orElse(0);
         double top = 1.25 * Math.max(limit, largest);
         double h = BAR_TOP + ROW * terms.size() + 10;
         StringBuilder s = new StringBuilder();
@@ -59,9 +62,17 @@ final class RecordCharts {
             double y = BAR_TOP + ROW * i;
             double w = Double.isFinite(t.outputV()) && top > 0 ? BAR_W * Math.min(t.outputV(), top) / top : 0;
             s.append(text("label", BAR_X0 - 8, y + ROW * 0.68, "end", t.label()));
-            s.append(String.format(Locale.ROOT, "<rect class=\"term%s\" data-term=\"%s\" x=\"%s\" y=\"%s\" width=\"%s\" height=\"%s\">"
-                    + "<title>%s</title></rect>\n", t.outputV() > limit ? " over" : "", RecordHtml.esc(t.key()), n(BAR_X0),
-                    n(y + 3), n(w), n(ROW - 6), RecordHtml.esc(t.label() + ": " + Figures.volts(t.outputV()))));
+            s.append(String.format(
+                    Locale.ROOT,
+                    "<rect class=\"term%s\" data-term=\"%s\" x=\"%s\" y=\"%s\" width=\"%s\" height=\"%s\">"
+                            + "<title>%s</title></rect>\n",
+                    t.outputV() > limit ? " over" : "",
+                    RecordHtml.esc(t.key()),
+                    n(BAR_X0),
+                    n(y + 3),
+                    n(w),
+                    n(ROW - 6),
+                    RecordHtml.esc(t.label() + ": " + Figures.volts(t.outputV()))));
         }
         double lx = BAR_X0 + BAR_W * limit / top;
         s.append(line("limit", lx, BAR_TOP - 4, lx, h - 10));
@@ -75,10 +86,13 @@ final class RecordCharts {
                 .filter(c -> Double.isFinite(c.effectiveCost()) && c.errorV() > 0 && Double.isFinite(c.errorV()))
                 .toList();
         double limit = r.stage().limitVolts();
-        double maxCost = shown.stream().mapToDouble(Candidate::effectiveCost).max().orElse(1);
+        double maxCost =
+                shown.stream().mapToDouble(Candidate::effectiveCost).max().orElse(1);
         double xTop = 1.1 * (maxCost > 0 ? maxCost : 1);
-        double lo = Math.min(limit, shown.stream().mapToDouble(Candidate::errorV).min().orElse(limit));
-        double hi = Math.max(limit, shown.stream().mapToDouble(Candidate::errorV).max().orElse(limit));
+        double lo = Math.min(
+                limit, shown.stream().mapToDouble(Candidate::errorV).min().orElse(limit));
+        double hi = Math.max(
+                limit, shown.stream().mapToDouble(Candidate::errorV).max().orElse(limit));
         int dLo = (int) Math.floor(Math.log10(lo));
         int dHi = (int) Math.ceil(Math.log10(hi));
         if (dHi <= dLo) {
@@ -107,7 +121,9 @@ final class RecordCharts {
             }
         }
         if (path.size() > 1) {
-            s.append("<polyline class=\"pareto\" points=\"").append(String.join(" ", path)).append("\"/>\n");
+            s.append("<polyline class=\"pareto\" points=\"")
+                    .append(String.join(" ", path))
+                    .append("\"/>\n");
         }
         double ly = y(limit, dLo, dHi);
         s.append(line("limit", SC_X0, ly, SC_X0 + SC_W, ly));
@@ -117,10 +133,16 @@ final class RecordCharts {
             double cx = x(c.effectiveCost(), xTop);
             double cy = y(c.errorV(), dLo, dHi);
             String cls = "candidate" + (c.fits() ? " fits" : "") + (front.contains(c.id()) ? " pareto" : "");
-            s.append(String.format(Locale.ROOT, "<circle class=\"%s\" data-part=\"%s\" cx=\"%s\" cy=\"%s\" r=\"4\">"
-                    + "<title>%s</title></circle>\n", cls, RecordHtml.esc(c.id()), n(cx), n(cy),
-                    RecordHtml.esc(c.id() + ": " + Figures.volts(c.errorV()) + ", " + Figures.money(c.effectiveCost()) + " "
-                            + c.currency())));
+            s.append(String.format(
+                    Locale.ROOT,
+                    "<circle class=\"%s\" data-part=\"%s\" cx=\"%s\" cy=\"%s\" r=\"4\">"
+                            + "<title>%s</title></circle>\n",
+                    cls,
+                    RecordHtml.esc(c.id()),
+                    n(cx),
+                    n(cy),
+                    RecordHtml.esc(c.id() + ": " + Figures.volts(c.errorV()) + ", " + Figures.money(c.effectiveCost())
+                            + " " + c.currency())));
             if (front.contains(c.id())) {
                 label(s, placed, cx, cy, c.id());
             }
@@ -140,7 +162,8 @@ final class RecordCharts {
         double[][] tries = {{cx + 6, cy - 6}, {cx + 6, cy + 15}, {cx - 6 - w, cy - 6}, {cx - 6 - w, cy + 15}};
         double[] at = tries[0];
         for (double[] t : tries) {
-            boolean free = placed.stream().noneMatch(b -> t[0] < b[0] + b[2] && b[0] < t[0] + w && t[1] - 11 < b[1] && b[1] - 11 < t[1]);
+            boolean free = placed.stream()
+                    .noneMatch(b -> t[0] < b[0] + b[2] && b[0] < t[0] + w && t[1] - 11 < b[1] && b[1] - 11 < t[1]);
             if (free) {
                 at = t;
                 break;
@@ -159,22 +182,43 @@ final class RecordCharts {
     }
 
     private static String open(double w, double h, String title) {
-        return String.format(Locale.ROOT, "<svg xmlns=\"http://www.w3.org/2000/svg\" class=\"chart\" viewBox=\"0 0 %s %s\" "
-                + "width=\"%s\" height=\"%s\" role=\"img\" aria-label=\"%s\">\n", n(w), n(h), n(w), n(h), RecordHtml.esc(title));
+        return String.format(
+                Locale.ROOT,
+                "<svg xmlns=\"http://www.w3.org/2000/svg\" class=\"chart\" viewBox=\"0 0 %s %s\" "
+                        + "width=\"%s\" height=\"%s\" role=\"img\" aria-label=\"%s\">\n",
+                n(w),
+                n(h),
+                n(w),
+                n(h),
+                RecordHtml.esc(title));
     }
 
     private static String line(String cls, double x1, double y1, double x2, double y2) {
-        return String.format(Locale.ROOT, "<line class=\"%s\" x1=\"%s\" y1=\"%s\" x2=\"%s\" y2=\"%s\"/>\n", cls, n(x1), n(y1),
-                n(x2), n(y2));
+        return String.format(
+                Locale.ROOT,
+                "<line class=\"%s\" x1=\"%s\" y1=\"%s\" x2=\"%s\" y2=\"%s\"/>\n",
+                cls,
+                n(x1),
+                n(y1),
+                n(x2),
+                n(y2));
     }
 
     private static String text(String cls, double x, double y, String anchor, String words) {
-        return String.format(Locale.ROOT, "<text class=\"%s\" x=\"%s\" y=\"%s\" text-anchor=\"%s\">%s</text>\n", cls, n(x), n(y),
-                anchor, RecordHtml.esc(words));
+        return String.format(
+                Locale.ROOT,
+                "<text class=\"%s\" x=\"%s\" y=\"%s\" text-anchor=\"%s\">%s</text>\n",
+                cls,
+                n(x),
+                n(y),
+                anchor,
+                RecordHtml.esc(words));
     }
 
     /** Two decimals, no trailing zeros: coordinates a test can compare with a hand figure. */
     static String n(double v) {
-        return java.math.BigDecimal.valueOf(Math.round(v * 100) / 100.0).stripTrailingZeros().toPlainString();
+        return java.math.BigDecimal.valueOf(Math.round(v * 100) / 100.0)
+                .stripTrailingZeros()
+                .toPlainString();
     }
 }

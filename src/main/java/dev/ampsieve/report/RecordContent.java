@@ -25,34 +25,54 @@ import java.util.Map;
 
 /** The words of a decision record, once, as blocks both formats lay out. */
 final class RecordContent {
-    private RecordContent() {
-    }
+    private RecordContent() {}
 
-    static final String ENTRY_HASH_NOTE = "Entry SHA-256: over the canonical form of the part's catalog values (every key"
-            + " path with its value in SI units, in the catalog's key order), not over the file's bytes: an edited comment,"
-            + " key order or unit prefix does not change it; any changed value does.";
+    static final String ENTRY_HASH_NOTE =
+            "Entry SHA-256: over the canonical form of the part's catalog values (every key"
+                    + " path with its value in SI units, in the catalog's key order), not over the file's bytes: an edited comment,"
+                    + " key order or unit prefix does not change it; any changed value does.";
 
     static List<RecordDoc.Block> blocks(DecisionRecord d) {
         List<RecordDoc.Block> o = new ArrayList<>();
         RecordFacts f = d.facts();
         Stage s = d.stage();
         boolean change = f.kind() == RecordFacts.Kind.CHANGE;
-        o.add(new RecordDoc.Heading(1, (change ? "Part change record: " + f.parts().get(0).id() + " to " + f.parts().get(1).id()
-                : "Part selection record") + " for " + fileName(f.stagePath()), null));
-        o.add(table(List.of("", ""), List.of(
-                List.of("written", f.date()),
-                List.of("tool", "ampsieve " + f.toolVersion()),
-                List.of("stage file", f.stagePath()),
-                List.of("catalog folder", f.catalogPath()),
-                List.of(change ? "change" : "shortlist", f.parts().isEmpty()
-                        ? "none: every part fails a hard constraint (see the rejected parts)"
-                        : String.join(", ", f.parts().stream().map(p -> p.id()).toList())),
-                List.of("cheapest part that fits", f.cheapestFit() == null ? "none fits"
-                        : f.cheapestFit().id() + " at " + Figures.money(f.cheapestFit().effectiveCost()) + " "
-                                + f.cheapestFit().currency() + (f.cheapestFit().trimmed() ? " (trim included)" : ""))),
+        o.add(new RecordDoc.Heading(
+                1,
+                (change
+                                ? "Part change record: " + f.parts().get(0).id() + " to "
+                                        + f.parts().get(1).id()
+                                : "Part selection record")
+                        + " for " + fileName(f.stagePath()),
+                null));
+        o.add(table(
+                List.of("", ""),
+                List.of(
+                        List.of("written", f.date()),
+                        List.of("tool", "ampsieve " + f.toolVersion()),
+                        List.of("stage file", f.stagePath()),
+                        List.of("catalog folder", f.catalogPath()),
+                        List.of(
+                                change ? "change" : "shortlist",
+                                f.parts().isEmpty()
+                                        ? "none: every part fails a hard constraint (see the rejected parts)"
+                                        : String.join(
+                                                ", ",
+                                                f.parts().stream()
+                                                        .map(p -> p.id())
+                                                        .toList())),
+                        List.of(
+                                "cheapest part that fits",
+                                f.cheapestFit() == null
+                                        ? "none fits"
+                                        : f.cheapestFit().id() + " at "
+                                                + Figures.money(f.cheapestFit().effectiveCost()) + " "
+                                                + f.cheapestFit().currency()
+                                                + (f.cheapestFit().trimmed() ? " (trim included)" : ""))),
                 false));
         o.add(new RecordDoc.Para(Caution.TEXT, "caution"));
-        o.add(new RecordDoc.Para("Re-check this record against today's catalog with: ampsieve recheck FILE (exit 0: it holds).",
+        o.add(new RecordDoc.Para(
+                "Re-check this record against today's catalog with: ampsieve recheck FILE (exit 0: it holds).",
                 "note"));
 
         assumptions(o, d);
@@ -79,27 +99,43 @@ final class RecordContent {
         List<List<String>> rows = new ArrayList<>();
         rows.add(List.of("topology", s.topology().key()));
         rows.add(List.of("noise gain", num(s.noiseGain())));
-        rows.add(List.of("signal gain", Figures.inputDimension(s) == Dimension.CURRENT
-                ? Units.format(s.signalGain(), Dimension.RESISTANCE, 4) + " (V/A)" : num(s.signalGain())));
-        rows.add(List.of("limit", Figures.volts(e) + " at the output (" + Figures.atInput(s, e / s.sourceGain())
-                + " at the input)"));
+        rows.add(List.of(
+                "signal gain",
+                Figures.inputDimension(s) == Dimension.CURRENT
+                        ? Units.format(s.signalGain(), Dimension.RESISTANCE, 4) + " (V/A)"
+                        : num(s.signalGain())));
+        rows.add(List.of(
+                "limit",
+                Figures.volts(e) + " at the output (" + Figures.atInput(s, e / s.sourceGain()) + " at the input)"));
         rows.add(List.of("criterion", s.criterion().toString()));
-        rows.add(List.of("max-to-sigma", num(s.maxToSigma()) + " (a datasheet maximum read as this many standard deviations)"));
-        rows.add(List.of("temperatures", Units.format(s.tMin(), Dimension.TEMPERATURE) + " to "
-                + Units.format(s.tMax(), Dimension.TEMPERATURE) + " (largest distance from 25 °C: "
-                + Units.format(s.deltaT(), Dimension.TEMPERATURE) + ")"));
-        rows.add(List.of("trim", (trim.allowed() ? "allowed" : "not allowed") + ", method " + trim.method().key()
-                + ", cost " + Figures.money(trim.cost()) + " per unit"
-                + (trim.resolution() > 0 ? ", resolution " + Figures.volts(trim.resolution()) : "")));
-        rows.add(List.of("yield sampling", s.trials() + " units" + (s.criterion().kind() == Criterion.Kind.YIELD
-                ? " (up to " + Math.max(s.trials(), s.maxTrials()) + " while undecided)" : "") + ", seed " + s.seed()));
+        rows.add(List.of(
+                "max-to-sigma", num(s.maxToSigma()) + " (a datasheet maximum read as this many standard deviations)"));
+        rows.add(List.of(
+                "temperatures",
+                Units.format(s.tMin(), Dimension.TEMPERATURE) + " to "
+                        + Units.format(s.tMax(), Dimension.TEMPERATURE) + " (largest distance from 25 °C: "
+                        + Units.format(s.deltaT(), Dimension.TEMPERATURE) + ")"));
+        rows.add(List.of(
+                "trim",
+                (trim.allowed() ? "allowed" : "not allowed") + ", method "
+                        + trim.method().key()
+                        + ", cost " + Figures.money(trim.cost()) + " per unit"
+                        + (trim.resolution() > 0 ? ", resolution " + Figures.volts(trim.resolution()) : "")));
+        rows.add(List.of(
+                "yield sampling",
+                s.trials() + " units"
+                        + (s.criterion().kind() == Criterion.Kind.YIELD
+                                ? " (up to " + Math.max(s.trials(), s.maxTrials()) + " while undecided)"
+                                : "")
+                        + ", seed " + s.seed()));
         rows.add(List.of("quantity", Integer.toString(s.quantity())));
         String left = Uncounted.words(Uncounted.ofStage(NotCounted.of(s, null)));
         rows.add(List.of("terms not counted", left.isEmpty() ? "none: every term counts" : left));
         o.add(table(List.of("derived", "value"), rows, false));
         o.add(new RecordDoc.Para("Every value of the stage, as the stage file gives it or as its default:"));
         // two pairs of columns: the stage has some thirty keys
-        List<Map.Entry<String, String>> answers = new ArrayList<>(StageWriter.answers(s).entrySet());
+        List<Map.Entry<String, String>> answers =
+                new ArrayList<>(StageWriter.answers(s).entrySet());
         int half = (answers.size() + 1) / 2;
         List<List<String>> keys = new ArrayList<>();
         for (int i = 0; i < half; i++) {
@@ -110,14 +146,20 @@ final class RecordContent {
         o.add(table(List.of("stage key", "value", "stage key", "value"), keys, false));
         List<List<String>> est = new ArrayList<>();
         for (Candidate c : d.shortlist()) {
-            List<String> terms = c.budget().terms().stream().filter(TermResult::estimated).map(TermResult::label).toList();
+            List<String> terms = c.budget().terms().stream()
+                    .filter(TermResult::estimated)
+                    .map(TermResult::label)
+                    .toList();
             List<NotCounted> partLeft = Uncounted.ofPart(c.budget().notCounted());
-            est.add(List.of(c.id(), terms.isEmpty() ? "none" : String.join(", ", terms),
+            est.add(List.of(
+                    c.id(),
+                    terms.isEmpty() ? "none" : String.join(", ", terms),
                     partLeft.isEmpty() ? "none" : Uncounted.words(partLeft)));
         }
         if (!est.isEmpty()) {
-            o.add(new RecordDoc.Para("What was estimated: terms resting on an estimated, assumed or typical-only catalog"
-                    + " figure (each part's warnings below say which figure and which rule):"));
+            o.add(new RecordDoc.Para(
+                    "What was estimated: terms resting on an estimated, assumed or typical-only catalog"
+                            + " figure (each part's warnings below say which figure and which rule):"));
             o.add(table(List.of("part", "estimated terms", "not counted for this part"), est, false));
         }
     }
@@ -127,23 +169,44 @@ final class RecordContent {
         Stage s = r.stage();
         String errorName = s.criterion().kind() == Criterion.Kind.WORST_CASE ? "worst-case" : "RSS";
         o.add(new RecordDoc.Heading(2, "Ranking", "ranking"));
-        o.add(new RecordDoc.Para(r.candidates().size() + " parts meet the hard constraints, " + r.rejected().size()
+        o.add(new RecordDoc.Para(r.candidates().size() + " parts meet the hard constraints, "
+                + r.rejected().size()
                 + " fail one. Parts that fit come first, cheapest first (trim cost included where the part needs it);"
                 + " then the others, closest first."));
         List<List<String>> rows = new ArrayList<>();
         int i = 1;
         for (Candidate c : r.candidates()) {
-            rows.add(List.of(Integer.toString(i++), c.id(), verdict(c), Figures.money(c.effectiveCost()) + " " + c.currency(),
-                    Figures.volts(c.errorV()), margin(s, c), limiting(c), r.paretoIds().contains(c.id()) ? "yes" : ""));
+            rows.add(List.of(
+                    Integer.toString(i++),
+                    c.id(),
+                    verdict(c),
+                    Figures.money(c.effectiveCost()) + " " + c.currency(),
+                    Figures.volts(c.errorV()),
+                    margin(s, c),
+                    limiting(c),
+                    r.paretoIds().contains(c.id()) ? "yes" : ""));
         }
-        o.add(table(List.of("#", "part", "verdict", "effective cost", errorName + " error", "margin", "largest term",
-                "Pareto"), rows, true));
-        o.add(new RecordDoc.Chart(RecordCharts.scatter(r, errorName), "Chart (HTML record): " + errorName
-                + " error against effective unit cost for every candidate with a price, the Pareto front and the limit"
-                + " line; the table above has the same figures."));
-        o.add(new RecordDoc.Para("Chart: each dot a candidate (filled: fits), the line joins the Pareto front (no other part"
-                + " is both cheaper and better), the red line is the limit " + Figures.volts(s.limitVolts())
-                + ". Error on a log scale."));
+        o.add(table(
+                List.of(
+                        "#",
+                        "part",
+                        "verdict",
+                        "effective cost",
+                        errorName + " error",
+                        "margin",
+                        "largest term",
+                        "Pareto"),
+                rows,
+                true));
+        o.add(new RecordDoc.Chart(
+                RecordCharts.scatter(r, errorName),
+                "Chart (HTML record): " + errorName
+                        + " error against effective unit cost for every candidate with a price, the Pareto front and the limit"
+                        + " line; the table above has the same figures."));
+        o.add(new RecordDoc.Para(
+                "Chart: each dot a candidate (filled: fits), the line joins the Pareto front (no other part"
+                        + " is both cheaper and better), the red line is the limit " + Figures.volts(s.limitVolts())
+                        + ". Error on a log scale."));
         if (!r.rejected().isEmpty()) {
             List<List<String>> rej = new ArrayList<>();
             for (Rejected x : r.rejected()) {
@@ -170,14 +233,24 @@ final class RecordContent {
                 case "b" -> c.b().id();
                 default -> "equal";
             };
-            rows.add(List.of(t.label(), Figures.volts(t.aV()), Figures.volts(t.bV()), better,
+            rows.add(List.of(
+                    t.label(),
+                    Figures.volts(t.aV()),
+                    Figures.volts(t.bV()),
+                    better,
                     t.better().equals("=") ? Figures.NONE : Figures.volts(t.differenceV())));
         }
         rows.add(List.of("judged total", Figures.volts(c.a().errorV()), Figures.volts(c.b().errorV()), "", ""));
-        rows.add(List.of("effective cost", Figures.money(c.a().effectiveCost()) + " " + c.a().currency(),
-                Figures.money(c.b().effectiveCost()) + " " + c.b().currency(), "", ""));
+        rows.add(List.of(
+                "effective cost",
+                Figures.money(c.a().effectiveCost()) + " " + c.a().currency(),
+                Figures.money(c.b().effectiveCost()) + " " + c.b().currency(),
+                "",
+                ""));
         rows.add(List.of("verdict", verdict(c.a()), verdict(c.b()), "", ""));
-        o.add(table(List.of("term (output)", c.a().id() + " (from)", c.b().id() + " (to)", "better", "by"), rows,
+        o.add(table(
+                List.of("term (output)", c.a().id() + " (from)", c.b().id() + " (to)", "better", "by"),
+                rows,
                 List.of(false, true, true, false, true)));
         o.add(new RecordDoc.Para("Conclusion: " + c.conclusion()));
     }
@@ -186,52 +259,92 @@ final class RecordContent {
         Budget b = c.budget();
         Stage s = b.stage();
         double limit = b.limitV();
-        o.add(new RecordDoc.Heading(2, "Part " + c.id() + (b.part().title().isBlank() ? "" : ": " + b.part().title()),
+        o.add(new RecordDoc.Heading(
+                2,
+                "Part " + c.id()
+                        + (b.part().title().isBlank() ? "" : ": " + b.part().title()),
                 "part-" + c.id()));
         var where = b.part().where();
-        String file = where == null || where.file() == null ? Figures.NONE
+        String file = where == null || where.file() == null
+                ? Figures.NONE
                 : where.file() + (where.line() > 0 ? ":" + where.line() : "");
-        o.add(table(List.of("", ""), List.of(
-                List.of("verdict", verdict(c) + (c.trimmed() ? " (figures after the stage's trim)" : "")),
-                List.of("largest term", limiting(c)),
-                List.of("effective cost", Figures.money(c.effectiveCost()) + " " + c.currency() + " at quantity "
-                        + s.quantity()),
-                List.of("source", b.part().source().isBlank() ? "(the catalog entry names no source)" : b.part().source()),
-                List.of("catalog file", file),
-                List.of("entry SHA-256", dev.ampsieve.record.Entry.of(b.part()).sha256()),
-                List.of("notes", b.part().notes().isBlank() ? Figures.NONE : b.part().notes())), false));
+        o.add(table(
+                List.of("", ""),
+                List.of(
+                        List.of("verdict", verdict(c) + (c.trimmed() ? " (figures after the stage's trim)" : "")),
+                        List.of("largest term", limiting(c)),
+                        List.of(
+                                "effective cost",
+                                Figures.money(c.effectiveCost()) + " " + c.currency() + " at quantity " + s.quantity()),
+                        List.of(
+                                "source",
+                                b.part().source().isBlank()
+                                        ? "(the catalog entry names no source)"
+                                        : b.part().source()),
+                        List.of("catalog file", file),
+                        List.of(
+                                "entry SHA-256",
+                                dev.ampsieve.record.Entry.of(b.part()).sha256()),
+                        List.of(
+                                "notes",
+                                b.part().notes().isBlank()
+                                        ? Figures.NONE
+                                        : b.part().notes())),
+                false));
         o.add(new RecordDoc.Para(ENTRY_HASH_NOTE, "note"));
         o.add(new RecordDoc.Heading(3, "Error budget", null));
         List<List<String>> rows = new ArrayList<>();
         for (TermResult t : b.terms()) {
             boolean counted = BudgetCalculator.counts(s, t.key());
-            rows.add(List.of(t.label() + (t.estimated() ? " *" : ""), Figures.volts(t.outputV()), Figures.atInput(s, t.inputV()),
-                    share(t.outputV(), limit), Double.isNaN(t.worstAtC()) ? Figures.NONE
-                            : Units.format(t.worstAtC(), Dimension.TEMPERATURE),
+            rows.add(List.of(
+                    t.label() + (t.estimated() ? " *" : ""),
+                    Figures.volts(t.outputV()),
+                    Figures.atInput(s, t.inputV()),
+                    share(t.outputV(), limit),
+                    Double.isNaN(t.worstAtC()) ? Figures.NONE : Units.format(t.worstAtC(), Dimension.TEMPERATURE),
                     (counted ? "" : "headroom only; ") + t.note()));
         }
         double g = s.sourceGain();
-        rows.add(List.of("worst-case sum", Figures.volts(b.worstCaseV()), Figures.atInput(s, b.worstCaseV() / g),
-                share(b.worstCaseV(), limit), "", ""));
-        rows.add(List.of("root-sum-square", Figures.volts(b.rssV()), Figures.atInput(s, b.rssV() / g), share(b.rssV(), limit),
-                "", ""));
+        rows.add(List.of(
+                "worst-case sum",
+                Figures.volts(b.worstCaseV()),
+                Figures.atInput(s, b.worstCaseV() / g),
+                share(b.worstCaseV(), limit),
+                "",
+                ""));
+        rows.add(List.of(
+                "root-sum-square",
+                Figures.volts(b.rssV()),
+                Figures.atInput(s, b.rssV() / g),
+                share(b.rssV(), limit),
+                "",
+                ""));
         rows.add(List.of("noise rms", Figures.volts(b.noiseRmsV()), Figures.atInput(s, b.noiseRmsV() / g), "", "", ""));
         rows.add(List.of("limit", Figures.volts(limit), Figures.atInput(s, limit / g), "100.0 %", "", ""));
-        o.add(table(List.of("term", "output", "input", "of limit", "worst at", "how (operands)"), rows,
+        o.add(table(
+                List.of("term", "output", "input", "of limit", "worst at", "how (operands)"),
+                rows,
                 List.of(false, true, true, true, true, false)));
         o.add(new RecordDoc.Para("* rests on an estimated, assumed or typical-only figure (see the warnings)."
                 + " Input: referred to the signal source (output / |signal gain|)."));
-        o.add(new RecordDoc.Chart(RecordCharts.bars(b), "Chart (HTML record): each term's output error as a bar against"
-                + " the limit line; the table above has the same figures."));
+        o.add(new RecordDoc.Chart(
+                RecordCharts.bars(b),
+                "Chart (HTML record): each term's output error as a bar against"
+                        + " the limit line; the table above has the same figures."));
         o.add(new RecordDoc.Heading(3, "Totals and outcome", null));
         List<List<String>> out = new ArrayList<>();
         out.add(List.of("yield", yieldText(b.yield(), s)));
         if (b.trimmed() != null) {
             Trim trim = BudgetCalculator.trimOf(s);
-            out.add(List.of("after the " + trim.method().key() + " trim" + (trim.allowed() ? "" : " (not allowed)"),
-                    "worst-case " + Figures.volts(b.trimmed().worstCaseV()) + " (" + share(b.trimmed().worstCaseV(), limit)
-                            + "), RSS " + Figures.volts(b.trimmed().rssV()) + " (" + share(b.trimmed().rssV(), limit) + ")"
-                            + (b.trimmed().yield() == null ? "" : ", yield " + yieldText(b.trimmed().yield(), s))));
+            out.add(List.of(
+                    "after the " + trim.method().key() + " trim" + (trim.allowed() ? "" : " (not allowed)"),
+                    "worst-case " + Figures.volts(b.trimmed().worstCaseV()) + " ("
+                            + share(b.trimmed().worstCaseV(), limit)
+                            + "), RSS " + Figures.volts(b.trimmed().rssV()) + " ("
+                            + share(b.trimmed().rssV(), limit) + ")"
+                            + (b.trimmed().yield() == null
+                                    ? ""
+                                    : ", yield " + yieldText(b.trimmed().yield(), s))));
         }
         out.add(List.of("margin", margin(s, c)));
         String left = Uncounted.words(b.notCounted());
@@ -239,7 +352,9 @@ final class RecordContent {
         o.add(table(List.of("", ""), out, false));
         List<List<String>> cons = new ArrayList<>();
         for (ConstraintResult k : b.constraints()) {
-            cons.add(List.of(k.name(), !k.ok() ? "FAIL" : k.detail().startsWith("not checked") ? "not checked" : "ok",
+            cons.add(List.of(
+                    k.name(),
+                    !k.ok() ? "FAIL" : k.detail().startsWith("not checked") ? "not checked" : "ok",
                     k.detail()));
         }
         o.add(new RecordDoc.Heading(3, "Hard constraints", null));
@@ -253,14 +368,17 @@ final class RecordContent {
     }
 
     static String yieldText(YieldResult y, Stage s) {
-        String target = s.criterion().kind() == Criterion.Kind.YIELD ? ", target " + Figures.yield(s.criterion().yieldTarget())
+        String target = s.criterion().kind() == Criterion.Kind.YIELD
+                ? ", target " + Figures.yield(s.criterion().yieldTarget())
                 : "";
         return switch (y.decided()) {
-            case "all-pass" -> "100 % (decided without sampling: the largest error the catalog's limits allow is within"
-                    + " the limit" + target + ")";
+            case "all-pass" ->
+                "100 % (decided without sampling: the largest error the catalog's limits allow is within" + " the limit"
+                        + target + ")";
             case "none-pass" -> "0 % (decided without sampling: the smallest error exceeds the limit" + target + ")";
-            default -> Figures.yield(y.value()) + " (95 % interval " + Figures.yield(y.low()) + " to "
-                    + Figures.yieldHigh(y.high()) + ", " + y.trials() + " units, seed " + s.seed() + target + ")";
+            default ->
+                Figures.yield(y.value()) + " (95 % interval " + Figures.yield(y.low()) + " to "
+                        + Figures.yieldHigh(y.high()) + ", " + y.trials() + " units, seed " + s.seed() + target + ")";
         };
     }
 
@@ -286,7 +404,8 @@ final class RecordContent {
     }
 
     private static String margin(Stage s, Candidate c) {
-        return s.criterion().kind() == Criterion.Kind.YIELD ? Figures.yieldMargin(c.margin()) + " (points of yield)"
+        return s.criterion().kind() == Criterion.Kind.YIELD
+                ? Figures.yieldMargin(c.margin()) + " (points of yield)"
                 : Figures.percent(c.margin()) + " of the limit";
     }
 

@@ -8,15 +8,12 @@ import java.util.List;
  * string here is raw (data as it came); each writer escapes for its own format.
  */
 final class RecordDoc {
-    private RecordDoc() {
-    }
+    private RecordDoc() {}
 
-    sealed interface Block permits Heading, Para, Table, Chart, Pre, PageBreak {
-    }
+    sealed interface Block permits Heading, Para, Table, Chart, Pre, PageBreak {}
 
     /** @param anchor an id for links, or null */
-    record Heading(int level, String text, String anchor) implements Block {
-    }
+    record Heading(int level, String text, String anchor) implements Block {}
 
     /** @param kind "caution", "note" or null for plain prose */
     record Para(String text, String kind) implements Block {
@@ -35,14 +32,11 @@ final class RecordDoc {
     }
 
     /** An SVG chart (HTML only; Markdown gives {@code text}, what it shows, in its place). */
-    record Chart(String svg, String text) implements Block {
-    }
+    record Chart(String svg, String text) implements Block {}
 
     /** Preformatted text (the stage file). */
-    record Pre(String text) implements Block {
-    }
+    record Pre(String text) implements Block {}
 
     /** Each part of the record starts on a new printed page. */
-    record PageBreak() implements Block {
-    }
+    record PageBreak() implements Block {}
 }

@@ -9,8 +9,7 @@ import java.util.List;
  * record's facts in a JSON block for {@code recheck}.
  */
 final class RecordHtml {
-    private RecordHtml() {
-    }
+    private RecordHtml() {}
 
     /** The style sheet, inline: system fonts only, nothing fetched. */
     private static final String CSS = """
@@ -40,23 +39,39 @@ final class RecordHtml {
         StringBuilder o = new StringBuilder();
         o.append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n")
                 // nothing may be fetched: a record opened years later must look the same, and offline
-                .append("<meta http-equiv=\"Content-Security-Policy\" content=\"default-src 'none'; style-src 'unsafe-inline'; img-src data:\">\n")
+                .append(
+                        "<meta http-equiv=\"Content-Security-Policy\" content=\"default-src 'none'; style-src 'unsafe-inline'; img-src data:\">\n")
                 .append("<meta name=\"generator\" content=\"ampsieve record\">\n")
-                .append("<title>").append(esc(title)).append("</title>\n<style>\n").append(CSS).append("</style>\n</head>\n<body>\n");
+                .append("<title>")
+                .append(esc(title))
+                .append("</title>\n<style>\n")
+                .append(CSS)
+                .append("</style>\n</head>\n<body>\n");
         for (RecordDoc.Block b : blocks) {
             block(o, b);
         }
-        o.append("<script type=\"application/json\" id=\"").append(RecordJson.BLOCK_ID).append("\">\n").append(json)
+        o.append("<script type=\"application/json\" id=\"")
+                .append(RecordJson.BLOCK_ID)
+                .append("\">\n")
+                .append(json)
                 .append("\n</script>\n</body>\n</html>\n");
         return o.toString();
     }
 
     private static void block(StringBuilder o, RecordDoc.Block b) {
         if (b instanceof RecordDoc.Heading h) {
-            o.append("<h").append(h.level()).append(h.anchor() == null ? "" : " id=\"" + esc(h.anchor()) + "\"").append('>')
-                    .append(esc(h.text())).append("</h").append(h.level()).append(">\n");
+            o.append("<h")
+                    .append(h.level())
+                    .append(h.anchor() == null ? "" : " id=\"" + esc(h.anchor()) + "\"")
+                    .append('>')
+                    .append(esc(h.text()))
+                    .append("</h")
+                    .append(h.level())
+                    .append(">\n");
         } else if (b instanceof RecordDoc.Para p) {
-            o.append(p.kind() == null ? "<p>" : "<p class=\"" + p.kind() + "\">").append(esc(p.text())).append("</p>\n");
+            o.append(p.kind() == null ? "<p>" : "<p class=\"" + p.kind() + "\">")
+                    .append(esc(p.text()))
+                    .append("</p>\n");
         } else if (b instanceof RecordDoc.Table t) {
             table(o, t);
         } else if (b instanceof RecordDoc.Chart c) {
@@ -84,7 +99,9 @@ final class RecordHtml {
             o.append("<tr>");
             for (int i = 0; i < row.size(); i++) {
                 boolean num = i < t.numeric().size() && t.numeric().get(i);
-                o.append(num ? "<td class=\"num\">" : "<td>").append(esc(row.get(i))).append("</td>");
+                o.append(num ? "<td class=\"num\">" : "<td>")
+                        .append(esc(row.get(i)))
+                        .append("</td>");
             }
             o.append("</tr>\n");
         }

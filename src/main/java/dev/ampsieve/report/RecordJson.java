@@ -29,8 +29,7 @@ import java.util.Map;
  * back by {@code recheck}.
  */
 final class RecordJson {
-    private RecordJson() {
-    }
+    private RecordJson() {}
 
     static final String BLOCK_ID = "ampsieve-decision-record";
     static final String FORMAT_KEY = "recordFormat";
@@ -70,7 +69,8 @@ final class RecordJson {
         @Override
         public SerializableString getEscapeSequence(int ch) {
             return ch == '<' || ch == '>' || ch == '&' || Visible.isControl(ch)
-                    ? new SerializedString(String.format(java.util.Locale.ROOT, "\\u%04X", ch)) : null;
+                    ? new SerializedString(String.format(java.util.Locale.ROOT, "\\u%04X", ch))
+                    : null;
         }
     }
 
@@ -137,9 +137,12 @@ final class RecordJson {
             json = block(text, MD_START + "\n", MD_END);
         }
         if (json == null) {
-            throw new InputException(Problem.error(Located.nowhere(file), "", "is not an ampsieve decision record (it holds"
-                    + " no " + BLOCK_ID + " block)", "give an .html or .md file written by 'ampsieve record', or write one"
-                    + " with 'ampsieve record --stage FILE --html OUT'"));
+            throw new InputException(Problem.error(
+                    Located.nowhere(file),
+                    "",
+                    "is not an ampsieve decision record (it holds" + " no " + BLOCK_ID + " block)",
+                    "give an .html or .md file written by 'ampsieve record', or write one"
+                            + " with 'ampsieve record --stage FILE --html OUT'"));
         }
         try {
             JsonNode o = MAPPER.readTree(json);
@@ -155,13 +158,24 @@ final class RecordJson {
                 parts.add(part(p));
             }
             JsonNode cheapest = o.path("cheapestFitting");
-            return new RecordFacts(kind, text(o, "stageFile"), text(o, "stageValues"), text(o, "catalogFolder"),
-                    text(o, "written"), text(o, "toolVersion"), parts,
-                    cheapest.isObject() ? part(cheapest) : null, o.path("candidates").asInt(), o.path("rejected").asInt());
+            return new RecordFacts(
+                    kind,
+                    text(o, "stageFile"),
+                    text(o, "stageValues"),
+                    text(o, "catalogFolder"),
+                    text(o, "written"),
+                    text(o, "toolVersion"),
+                    parts,
+                    cheapest.isObject() ? part(cheapest) : null,
+                    o.path("candidates").asInt(),
+                    o.path("rejected").asInt());
         } catch (JsonProcessingException | IllegalArgumentException e) {
             String why = e instanceof JsonProcessingException j ? j.getOriginalMessage() : e.getMessage();
-            throw new InputException(Problem.error(Located.nowhere(file), BLOCK_ID, "the record's block is damaged ("
-                    + why + ")", "write the record again with 'ampsieve record', or restore the file from version control"));
+            throw new InputException(Problem.error(
+                    Located.nowhere(file),
+                    BLOCK_ID,
+                    "the record's block is damaged (" + why + ")",
+                    "write the record again with 'ampsieve record', or restore the file from version control"));
         }
     }
 
@@ -171,16 +185,26 @@ final class RecordJson {
         if (!e.isObject()) {
             throw new IllegalArgumentException("a part has no entry");
         }
-        for (Iterator<Map.Entry<String, JsonNode>> it = e.fields(); it.hasNext();) {
+        for (Iterator<Map.Entry<String, JsonNode>> it = e.fields(); it.hasNext(); ) {
             Map.Entry<String, JsonNode> f = it.next();
             fields.put(f.getKey(), f.getValue().asText());
         }
         String hash = text(p, "entrySha256");
         Entry entry = new Entry(fields, hash);
-        return new PartFacts(text(p, "id"), p.path("file").asText(""), entry, text(p, "verdict"),
-                p.path("limitingTerm").isTextual() ? p.path("limitingTerm").asText() : null, p.path("trimmed").asBoolean(),
-                num(p, "judgedErrorV"), num(p, "worstCaseV"), num(p, "rssV"), num(p, "limitV"), num(p, "effectiveCost"),
-                p.path("currency").asText(""), p.path("constraintsMet").asBoolean(true));
+        return new PartFacts(
+                text(p, "id"),
+                p.path("file").asText(""),
+                entry,
+                text(p, "verdict"),
+                p.path("limitingTerm").isTextual() ? p.path("limitingTerm").asText() : null,
+                p.path("trimmed").asBoolean(),
+                num(p, "judgedErrorV"),
+                num(p, "worstCaseV"),
+                num(p, "rssV"),
+                num(p, "limitV"),
+                num(p, "effectiveCost"),
+                p.path("currency").asText(""),
+                p.path("constraintsMet").asBoolean(true));
     }
 
     private static String text(JsonNode o, String key) {

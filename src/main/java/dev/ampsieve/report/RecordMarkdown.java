@@ -9,16 +9,19 @@ import java.util.List;
  * the table beside it has the figures); the facts in an HTML comment holding JSON.
  */
 final class RecordMarkdown {
-    private RecordMarkdown() {
-    }
+    private RecordMarkdown() {}
 
     static String render(List<RecordDoc.Block> blocks, String json) {
         StringBuilder o = new StringBuilder();
         for (RecordDoc.Block b : blocks) {
             if (b instanceof RecordDoc.Heading h) {
-                o.append("#".repeat(h.level())).append(' ').append(esc(h.text())).append("\n\n");
+                o.append("#".repeat(h.level()))
+                        .append(' ')
+                        .append(esc(h.text()))
+                        .append("\n\n");
             } else if (b instanceof RecordDoc.Para p) {
-                o.append("caution".equals(p.kind()) ? "> " : "warning".equals(p.kind()) ? "- " : "").append(esc(p.text()))
+                o.append("caution".equals(p.kind()) ? "> " : "warning".equals(p.kind()) ? "- " : "")
+                        .append(esc(p.text()))
                         .append("\n\n");
             } else if (b instanceof RecordDoc.Table t) {
                 table(o, t);
@@ -66,7 +69,12 @@ final class RecordMarkdown {
             longest = Math.max(longest, run);
         }
         String f = "`".repeat(Math.max(3, longest + 1));
-        o.append(f).append("yaml\n").append(v).append(v.endsWith("\n") ? "" : "\n").append(f).append("\n\n");
+        o.append(f)
+                .append("yaml\n")
+                .append(v)
+                .append(v.endsWith("\n") ? "" : "\n")
+                .append(f)
+                .append("\n\n");
     }
 
     /** A table cell: as {@link #esc}, with {@code |} escaped so it cannot end the cell. */

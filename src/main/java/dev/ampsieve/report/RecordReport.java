@@ -14,8 +14,7 @@ import java.util.List;
 
 /** Decision records (HTML, Markdown) and the re-check's report; the record format is in README. */
 public final class RecordReport {
-    private RecordReport() {
-    }
+    private RecordReport() {}
 
     public static String html(DecisionRecord d) {
         List<RecordDoc.Block> blocks = RecordContent.blocks(d);
@@ -45,9 +44,16 @@ public final class RecordReport {
      */
     public static String recheck(String file, RecordFacts was, String catalog, List<Finding> findings) {
         StringBuilder o = new StringBuilder();
-        o.append(Visible.of(file)).append(": ").append(findings.isEmpty() ? "holds" : "CHANGED").append(" (recorded ")
-                .append(Visible.of(was.date())).append(" for ").append(Visible.of(was.stagePath())).append("; checked against ")
-                .append(Visible.of(catalog)).append(")\n");
+        o.append(Visible.of(file))
+                .append(": ")
+                .append(findings.isEmpty() ? "holds" : "CHANGED")
+                .append(" (recorded ")
+                .append(Visible.of(was.date()))
+                .append(" for ")
+                .append(Visible.of(was.stagePath()))
+                .append("; checked against ")
+                .append(Visible.of(catalog))
+                .append(")\n");
         if (findings.isEmpty()) {
             o.append("  nothing changed: every recorded part's entry, verdict and largest term are as recorded, and no"
                     + " cheaper part fits\n");
@@ -62,7 +68,11 @@ public final class RecordReport {
         if (f instanceof Finding.EntryChanged e) {
             StringBuilder b = new StringBuilder(id(e.id()) + ": catalog entry changed:");
             for (Finding.FieldChange c : e.fields()) {
-                b.append("\n    ").append(Visible.of(c.path())).append(": ").append(value(c.path(), c.was())).append(" -> ")
+                b.append("\n    ")
+                        .append(Visible.of(c.path()))
+                        .append(": ")
+                        .append(value(c.path(), c.was()))
+                        .append(" -> ")
                         .append(value(c.path(), c.now()));
             }
             return b.toString();
@@ -72,8 +82,10 @@ public final class RecordReport {
         }
         if (f instanceof Finding.CheaperFits c) {
             PartFacts was = c.was();
-            return id(c.now().id()) + " now fits at " + cost(c.now()) + (was == null ? ", where no part fitted"
-                    : ", cheaper than the recorded cheapest fitting part " + id(was.id()) + " at " + cost(was));
+            return id(c.now().id()) + " now fits at " + cost(c.now())
+                    + (was == null
+                            ? ", where no part fitted"
+                            : ", cheaper than the recorded cheapest fitting part " + id(was.id()) + " at " + cost(was));
         }
         if (f instanceof Finding.VerdictChanged v) {
             return id(v.id()) + ": verdict " + Visible.of(v.was()) + " -> " + Visible.of(v.now());
@@ -91,7 +103,8 @@ public final class RecordReport {
     }
 
     private static String cost(PartFacts p) {
-        return Figures.money(p.effectiveCost()) + " " + Visible.of(p.currency()) + (p.trimmed() ? " (trim included)" : "");
+        return Figures.money(p.effectiveCost()) + " " + Visible.of(p.currency())
+                + (p.trimmed() ? " (trim included)" : "");
     }
 
     /** A stored field value as the user reads it: a quantity with its unit, a price as money, text quoted. */

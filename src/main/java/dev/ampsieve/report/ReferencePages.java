@@ -4,8 +4,8 @@ import dev.ampsieve.catalog.CatalogKeys;
 import dev.ampsieve.search.QueryLanguage;
 import dev.ampsieve.search.Schema;
 import dev.ampsieve.stage.StageKeys;
-import dev.ampsieve.units.Dimension;
 import dev.ampsieve.text.Visible;
+import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.Units;
 import java.util.ArrayList;
 import java.util.List;
@@ -18,8 +18,7 @@ import java.util.Map;
  * {@link Units#prefixes}), so a page cannot disagree with what the program accepts.
  */
 public final class ReferencePages {
-    private ReferencePages() {
-    }
+    private ReferencePages() {}
 
     /** The topics, in the order {@code help} lists them. */
     public static final List<String> TOPICS = List.of("query", "stage-keys", "catalog-keys", "units");
@@ -53,7 +52,10 @@ public final class ReferencePages {
         o.append("\nEvery field\n");
         TextTable t = new TextTable().left("field").left("kind").flex("meaning").wrapFlex();
         for (Schema.Keyword k : Schema.KEYWORDS) {
-            t.row(k.name(), "word", k.meaning() + (k.values().isEmpty() ? "" : " (" + String.join(", ", k.values()) + ")"));
+            t.row(
+                    k.name(),
+                    "word",
+                    k.meaning() + (k.values().isEmpty() ? "" : " (" + String.join(", ", k.values()) + ")"));
         }
         for (Schema.Text k : Schema.TEXTS) {
             t.row(k.name(), "text", k.meaning());
@@ -77,8 +79,16 @@ public final class ReferencePages {
                 + " 'min' below 'temperature:'). Only the limit and the gain are required.\n\n");
         for (StageKeys.Key k : StageKeys.ORDERED) {
             String choices = k.choices().isEmpty() ? "" : "; one of " + String.join(" | ", k.choices());
-            o.append("- ").append(k.path()).append(": ").append(k.why()).append(" (default: ").append(k.defaultText())
-                    .append("; example: ").append(k.example()).append(choices).append(")\n");
+            o.append("- ")
+                    .append(k.path())
+                    .append(": ")
+                    .append(k.why())
+                    .append(" (default: ")
+                    .append(k.defaultText())
+                    .append("; example: ")
+                    .append(k.example())
+                    .append(choices)
+                    .append(")\n");
         }
         o.append("\ndemo-catalog/stages/ holds commented examples; 'ampsieve help units' says how to write values.\n");
         return o.toString();
@@ -90,8 +100,14 @@ public final class ReferencePages {
                 + String.join(", ", CatalogKeys.REQUIRED) + ". Beyond a warning bound a value is unusual and warned;"
                 + " beyond an error bound no op amp has it and the part is refused (magnitudes compared; '-' is no"
                 + " bound). A key without a unit holds a word, a list or a whole number.\n\n");
-        TextTable t = new TextTable().left("key").left("unit").right("warn below").right("warn above")
-                .right("error below").right("error above").left("example");
+        TextTable t = new TextTable()
+                .left("key")
+                .left("unit")
+                .right("warn below")
+                .right("warn above")
+                .right("error below")
+                .right("error above")
+                .left("example");
         for (String key : CatalogKeys.PART_KEYS) {
             List<String> sub = CatalogKeys.subKeys(key);
             List<String> paths = new ArrayList<>();
@@ -104,9 +120,14 @@ public final class ReferencePages {
                 Dimension d = CatalogKeys.dimension(path);
                 CatalogKeys.Bounds b = CatalogKeys.BOUNDS.get(path);
                 String required = CatalogKeys.REQUIRED.contains(key) && path.equals(paths.get(0)) ? " *" : "";
-                t.row(path + required, d == null ? "" : unit(d), bound(b == null ? Double.NaN : b.warnBelow(), d),
-                        bound(b == null ? Double.NaN : b.warnAbove(), d), bound(b == null ? Double.NaN : b.errorBelow(), d),
-                        bound(b == null ? Double.NaN : b.errorAbove(), d), d == null ? "" : CatalogKeys.example(path));
+                t.row(
+                        path + required,
+                        d == null ? "" : unit(d),
+                        bound(b == null ? Double.NaN : b.warnBelow(), d),
+                        bound(b == null ? Double.NaN : b.warnAbove(), d),
+                        bound(b == null ? Double.NaN : b.errorBelow(), d),
+                        bound(b == null ? Double.NaN : b.errorAbove(), d),
+                        d == null ? "" : CatalogKeys.example(path));
             }
         }
         t.lines(width).forEach(l -> o.append(l).append('\n'));
@@ -123,16 +144,20 @@ public final class ReferencePages {
         for (Map.Entry<String, Double> p : Units.prefixes().entrySet()) {
             ps.add(p.getKey() + " " + String.format(Locale.ROOT, "%.0e", p.getValue()));
         }
-        o.append("SI prefixes, case-sensitive (m is milli, M is mega): ").append(String.join(", ", ps)).append(".\n");
+        o.append("SI prefixes, case-sensitive (m is milli, M is mega): ")
+                .append(String.join(", ", ps))
+                .append(".\n");
         o.append("K is read as k (no SI prefix K exists), except alone in a temperature field, where it is kelvin."
                 + " A prefix in the wrong case with no other reading is refused with the spelling that exists:"
                 + " '10 UV' gets \"write '10 uV'\".\n\n");
         o.append("Unit symbols after the prefix are read case-blind where one reading exists (10uv, 1.5 MHZ,"
-                + " 10 KOHM, 110 DB), so 10 mv is 10 millivolts and 10 MV is 10 megavolts (refused by the"
-                + " plausibility bounds in any op amp field). Symbols read: ").append(String.join(" ", Units.symbols()))
+                        + " 10 KOHM, 110 DB), so 10 mv is 10 millivolts and 10 MV is 10 megavolts (refused by the"
+                        + " plausibility bounds in any op amp field). Symbols read: ")
+                .append(String.join(" ", Units.symbols()))
                 .append("\n");
         o.append("\nWhat each kind of field takes:\n");
-        TextTable t = new TextTable().left("kind").left("SI unit").flex("example").wrapFlex();
+        TextTable t =
+                new TextTable().left("kind").left("SI unit").flex("example").wrapFlex();
         for (Dimension d : Dimension.values()) {
             t.row(d.noun(), d.symbol().isEmpty() ? "-" : d.symbol(), d.example());
         }

@@ -22,8 +22,7 @@ import java.util.List;
  * </pre>
  */
 public final class ScatterChart {
-    private ScatterChart() {
-    }
+    private ScatterChart() {}
 
     /**
      * One candidate.
@@ -54,8 +53,8 @@ public final class ScatterChart {
      * @param currency shown after the cost axis
      * @param height   rows of the plotting area, at least {@link #MIN_HEIGHT}
      */
-    public static List<String> render(List<Point> points, double limit, String currency, int height,
-            OutputStyle style) {
+    public static List<String> render(
+            List<Point> points, double limit, String currency, int height, OutputStyle style) {
         if (!(limit > 0) || Double.isInfinite(limit)) {
             throw new IllegalArgumentException("limit must be a positive number of volts: " + limit);
         }
@@ -122,12 +121,16 @@ public final class ScatterChart {
         List<String> lines = new ArrayList<>();
         for (int r = 0; r < rows; r++) {
             String label = r == limitRow ? lim : r == 0 ? top : r == rows - 1 ? bottom : "";
-            char axis = r == limitRow ? (style.unicode() ? g.cross() : g.tick()) : label.isEmpty() ? g.vertical() : g.tick();
-            StringBuilder sb = new StringBuilder(BarChart.lpad(label, labelW)).append(' ').append(axis);
+            char axis = r == limitRow
+                    ? (style.unicode() ? g.cross() : g.tick())
+                    : label.isEmpty() ? g.vertical() : g.tick();
+            StringBuilder sb =
+                    new StringBuilder(BarChart.lpad(label, labelW)).append(' ').append(axis);
             for (int c = 0; c < plotW; c++) {
                 int o = owner[r][c];
                 String cell = String.valueOf(grid[r][c]);
-                sb.append(o >= 0 ? Ansi.paint(cell, Ansi.forVerdict(points.get(o).verdict()), style.color()) : cell);
+                sb.append(
+                        o >= 0 ? Ansi.paint(cell, Ansi.forVerdict(points.get(o).verdict()), style.color()) : cell);
             }
             if (r == limitRow) {
                 sb.append(LIMIT_WORD);
@@ -172,8 +175,9 @@ public final class ScatterChart {
             Point p = points.get(i);
             String m = Ansi.paint(String.valueOf(mark(i)), Ansi.forVerdict(p.verdict()), style.color());
             out.add(("  " + m + "  " + BarChart.pad(p.id(), idW) + "  "
-                    + BarChart.lpad(Units.format(p.error(), Dimension.VOLTAGE), errW) + "  "
-                    + BarChart.lpad(cost(p.cost()), costW) + " " + currency + "  " + p.verdict()).stripTrailing());
+                            + BarChart.lpad(Units.format(p.error(), Dimension.VOLTAGE), errW) + "  "
+                            + BarChart.lpad(cost(p.cost()), costW) + " " + currency + "  " + p.verdict())
+                    .stripTrailing());
         }
         return out;
     }

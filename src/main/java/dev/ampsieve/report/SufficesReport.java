@@ -10,8 +10,7 @@ import java.util.Locale;
 
 /** What {@code ampsieve suffices} prints: the yes/no answer first, then the figures behind it. */
 public final class SufficesReport {
-    private SufficesReport() {
-    }
+    private SufficesReport() {}
 
     public static String text(Sufficiency s, String stageLabel) {
         return text(s, stageLabel, TextTable.WIDTH);
@@ -29,18 +28,31 @@ public final class SufficesReport {
         o.append('\n');
         o.append(StageLine.of(b.stage(), stageLabel)).append('\n');
         TextTable t = new TextTable().left("").flex("");
-        t.row("worst-case", Figures.volts(b.worstCaseV()) + " of " + Figures.volts(b.limitV()) + share(b.worstCaseV(), b.limitV()));
+        t.row(
+                "worst-case",
+                Figures.volts(b.worstCaseV()) + " of " + Figures.volts(b.limitV()) + share(b.worstCaseV(), b.limitV()));
         t.row("RSS", Figures.volts(b.rssV()) + share(b.rssV(), b.limitV()));
         YieldResult y = b.yield();
         if (y != null) {
-            t.row("yield", Figures.yield(y.value()) + " (95 % interval " + Figures.yield(y.low()) + " to "
-                    + Figures.yieldHigh(y.high()) + (y.trials() > 0 ? ", " + y.trials() + " units" : ", " + y.decided()) + ")");
+            t.row(
+                    "yield",
+                    Figures.yield(y.value()) + " (95 % interval " + Figures.yield(y.low()) + " to "
+                            + Figures.yieldHigh(y.high())
+                            + (y.trials() > 0 ? ", " + y.trials() + " units" : ", " + y.decided()) + ")");
         }
         TermResult lim = b.limitingTerm() == null ? null : b.term(b.limitingTerm());
-        t.row("largest term", lim == null ? Figures.NONE : lim.label() + ", " + Figures.volts(lim.outputV()) + share(lim.outputV(), b.limitV()));
-        t.row("verdict", (b.constraintsMet() ? b.verdict().key() : "rejected (hard constraint)")
-                + (left.isEmpty() ? "" : "; " + b.notCounted().size() + " term" + (b.notCounted().size() == 1 ? "" : "s")
-                        + " not counted (named above)"));
+        t.row(
+                "largest term",
+                lim == null
+                        ? Figures.NONE
+                        : lim.label() + ", " + Figures.volts(lim.outputV()) + share(lim.outputV(), b.limitV()));
+        t.row(
+                "verdict",
+                (b.constraintsMet() ? b.verdict().key() : "rejected (hard constraint)")
+                        + (left.isEmpty()
+                                ? ""
+                                : "; " + b.notCounted().size() + " term"
+                                        + (b.notCounted().size() == 1 ? "" : "s") + " not counted (named above)"));
         t.lines(width).stream().skip(1).forEach(l -> o.append(l).append('\n'));
         o.append('\n').append(Caution.TEXT).append('\n');
         // the answer quotes the part id: no control character gets through

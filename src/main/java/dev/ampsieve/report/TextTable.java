@@ -15,8 +15,7 @@ final class TextTable {
     /** Width all our tables are sized to. */
     static final int WIDTH = OutputStyle.TEXT_WIDTH;
 
-    private record Column(String header, boolean right, boolean flex) {
-    }
+    private record Column(String header, boolean right, boolean flex) {}
 
     /** Long flexible cells continue on further lines (true) or are cut with an ellipsis (false). */
     private boolean wrap;

@@ -14,8 +14,7 @@ import java.util.Map;
  * "open-loop gain, closed-loop bandwidth and resistor ratio not counted: no full-scale-output".
  */
 public final class Uncounted {
-    private Uncounted() {
-    }
+    private Uncounted() {}
 
     /** Why, in words; the stage key named so the user knows what to set. */
     static String reason(NotCounted.Reason r) {
@@ -33,7 +32,11 @@ public final class Uncounted {
     }
 
     static String label(String key) {
-        return BudgetCalculator.TERMS.stream().filter(t -> t.key().equals(key)).map(ErrorTerm::label).findFirst().orElse(key);
+        return BudgetCalculator.TERMS.stream()
+                .filter(t -> t.key().equals(key))
+                .map(ErrorTerm::label)
+                .findFirst()
+                .orElse(key);
     }
 
     /** "a, b and c not counted: why; d not counted: why", or "" when every term counts. */

@@ -6,8 +6,7 @@ package dev.ampsieve.report;
  * two spaces is taken to be columns, and folding it would scramble them.
  */
 public final class Wrap {
-    private Wrap() {
-    }
+    private Wrap() {}
 
     /** Every prose line of {@code text} longer than {@code width} folded; other lines unchanged. */
     public static String prose(String text, int width) {

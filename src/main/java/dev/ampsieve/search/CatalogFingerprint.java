@@ -12,21 +12,13 @@ import java.io.UncheckedIOException;
 import java.lang.reflect.Method;
 import java.lang.reflect.RecordComponent;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.FileVisitOption;
-import java.nio.file.FileVisitResult;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.SimpleFileVisitor;
-import java.nio.file.attribute.BasicFileAttributes;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
-import java.util.ArrayList;
-import java.util.Comparator;
-import java.util.EnumSet;
 import java.util.HashSet;
 import java.util.HexFormat;
 import java.util.List;
-import java.util.Locale;
 import java.util.Set;
 
 /**
@@ -41,8 +33,7 @@ import java.util.Set;
  * are always hashed, so such a mark can cause an extra rebuild but never a stale index.
  */
 public final class CatalogFingerprint {
-    private CatalogFingerprint() {
-    }
+    private CatalogFingerprint() {}
 
     public static String of(Catalog catalog) {
         return of(catalog, Files::newInputStream);
@@ -134,7 +125,8 @@ public final class CatalogFingerprint {
             try {
                 return method.invoke(r);
             } catch (ReflectiveOperationException e) {
-                throw new IllegalStateException("cannot read " + name + " of " + r.getClass().getName(), e);
+                throw new IllegalStateException(
+                        "cannot read " + name + " of " + r.getClass().getName(), e);
             }
         }
     }

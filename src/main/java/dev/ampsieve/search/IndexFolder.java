@@ -30,8 +30,7 @@ import org.apache.lucene.index.IndexWriter;
  * nothing above the index folder is ever deleted, only the index folder itself is created there.
  */
 final class IndexFolder {
-    private IndexFolder() {
-    }
+    private IndexFolder() {}
 
     /** The marker file; not a name Lucene writes or deletes. */
     static final String MARKER = "made-by-ampsieve.txt";
@@ -139,8 +138,13 @@ final class IndexFolder {
     private static void mark(Path folder) throws IOException {
         Path marker = folder.resolve(MARKER);
         try {
-            Files.writeString(marker, MARKER_TEXT, StandardCharsets.UTF_8,
-                    StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE, LinkOption.NOFOLLOW_LINKS);
+            Files.writeString(
+                    marker,
+                    MARKER_TEXT,
+                    StandardCharsets.UTF_8,
+                    StandardOpenOption.CREATE_NEW,
+                    StandardOpenOption.WRITE,
+                    LinkOption.NOFOLLOW_LINKS);
         } catch (FileAlreadyExistsException e) {
             if (!isRegularFile(marker)) {
                 throw e;

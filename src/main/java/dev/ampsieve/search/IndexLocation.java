@@ -19,8 +19,7 @@ import java.util.function.Predicate;
  * only when ampsieve made it ({@link IndexFolder}); otherwise the next one, else memory.
  */
 public final class IndexLocation {
-    private IndexLocation() {
-    }
+    private IndexLocation() {}
 
     public static final String FOLDER = ".ampsieve-index";
 
@@ -45,7 +44,8 @@ public final class IndexLocation {
         Path inside = root.resolve(FOLDER);
         Path cache = cacheFolder(root, env, home);
         // not following links: for a link the catalog folder decides, and IndexFolder then refuses the link
-        boolean insideOk = Files.isDirectory(inside, LinkOption.NOFOLLOW_LINKS) ? writable.test(inside) : writable.test(root);
+        boolean insideOk =
+                Files.isDirectory(inside, LinkOption.NOFOLLOW_LINKS) ? writable.test(inside) : writable.test(root);
         return insideOk ? List.of(inside, cache) : List.of(cache);
     }
 

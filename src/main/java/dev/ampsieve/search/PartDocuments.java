@@ -21,8 +21,7 @@ import org.apache.lucene.util.BytesRef;
 
 /** Turns one catalog {@link Part} into one Lucene document with the fields of {@link Schema}. */
 public final class PartDocuments {
-    private PartDocuments() {
-    }
+    private PartDocuments() {}
 
     public static Document of(Part p) {
         Document d = new Document();
@@ -123,22 +122,35 @@ public final class PartDocuments {
             case "in.corner" -> p.noise().inCorner();
             case Schema.SUPPLY_MIN -> p.supply() == null ? null : p.supply().min();
             case Schema.SUPPLY_MAX -> p.supply() == null ? null : p.supply().max();
-            case Schema.TEMPERATURE_MIN -> p.temperature() == null ? null : p.temperature().min();
-            case Schema.TEMPERATURE_MAX -> p.temperature() == null ? null : p.temperature().max();
-            case Schema.PRICE -> p.price() == null ? null : p.price().unit(); // the lowest-quantity break: no stage here
+            case Schema.TEMPERATURE_MIN ->
+                p.temperature() == null ? null : p.temperature().min();
+            case Schema.TEMPERATURE_MAX ->
+                p.temperature() == null ? null : p.temperature().max();
+            case Schema.PRICE ->
+                p.price() == null ? null : p.price().unit(); // the lowest-quantity break: no stage here
             case Schema.IQ -> p.quiescentCurrent();
             case Schema.CIN -> p.inputCapacitance();
             case Schema.CHANNELS -> p.channels() > 0 ? (double) p.channels() : null;
             case Schema.FCHOP -> p.choppingFrequency();
-            case Schema.AGING -> p.longTermDrift() == null || p.longTermDrift().per() <= 0 ? null
-                    // offset change scales with the square root of time (error-model.md, term 9)
-                    : Math.abs(p.longTermDrift().value()) * Math.sqrt(1000 * 3600.0 / p.longTermDrift().per());
+            case Schema.AGING ->
+                p.longTermDrift() == null || p.longTermDrift().per() <= 0
+                        ? null
+                        // offset change scales with the square root of time (error-model.md, term 9)
+                        : Math.abs(p.longTermDrift().value())
+                                * Math.sqrt(1000 * 3600.0 / p.longTermDrift().per());
             case "ios.maxtemp" -> abs(p.ios().maxOverTemp());
-            case "price.quantity" -> p.price() == null ? null : (double) p.price().quantity();
+            case "price.quantity" ->
+                p.price() == null ? null : (double) p.price().quantity();
             // the catalog's own paths, as CatalogKeys reads them (headrooms signed, as typed)
-            case "long-term-drift.value", "long-term-drift.per", "input-headroom.low", "input-headroom.high",
-                    "output-headroom.low", "output-headroom.high",
-                    "test-conditions.supply", "test-conditions.common-mode", "input-crossover.from-positive-rail",
+            case "long-term-drift.value",
+                    "long-term-drift.per",
+                    "input-headroom.low",
+                    "input-headroom.high",
+                    "output-headroom.low",
+                    "output-headroom.high",
+                    "test-conditions.supply",
+                    "test-conditions.common-mode",
+                    "input-crossover.from-positive-rail",
                     "input-crossover.offset-step" -> CatalogKeys.value(p, name);
             case Schema.THETA_JA -> p.thetaJa();
             case Schema.RIPPLE -> p.choppingRipple();
@@ -212,8 +224,7 @@ public final class PartDocuments {
             case 1 -> w.add("single");
             case 2 -> w.add("dual");
             case 4 -> w.add("quad");
-            default -> {
-            }
+            default -> {}
         }
         return w;
     }

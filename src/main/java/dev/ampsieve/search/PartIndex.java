@@ -71,8 +71,8 @@ public final class PartIndex implements Closeable {
     private final Path location;
     private final List<FolderRefusal> refusals;
 
-    private PartIndex(Directory directory, DirectoryReader reader, Source source, Path location,
-            List<FolderRefusal> refusals) {
+    private PartIndex(
+            Directory directory, DirectoryReader reader, Source source, Path location, List<FolderRefusal> refusals) {
         this.directory = directory;
         this.reader = reader;
         this.searcher = new IndexSearcher(reader);
@@ -298,10 +298,7 @@ public final class PartIndex implements Closeable {
     }
 
     List<Hit> search(Query query) {
-        Sort order = new Sort(
-                SortField.FIELD_SCORE,
-                priceField(),
-                new SortField(Schema.ID, SortField.Type.STRING));
+        Sort order = new Sort(SortField.FIELD_SCORE, priceField(), new SortField(Schema.ID, SortField.Type.STRING));
         try {
             int n = Math.max(1, reader.maxDoc());
             TopFieldDocs top = searcher.search(query, n, order, true);

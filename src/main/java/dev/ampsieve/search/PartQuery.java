@@ -25,7 +25,12 @@ public record PartQuery(String text, List<Clause> clauses) {
 
     /** The comparison written in a constraint. */
     public enum Op {
-        LT("<"), LE("<="), GT(">"), GE(">="), EQ("="), BETWEEN("=..");
+        LT("<"),
+        LE("<="),
+        GT(">"),
+        GE(">="),
+        EQ("="),
+        BETWEEN("=..");
 
         private final String symbol;
 
@@ -45,24 +50,19 @@ public record PartQuery(String text, List<Clause> clauses) {
     }
 
     /** A free word, matched in the part's words (see {@link Words}); {@code excluded} for {@code -word}. */
-    public record Word(String written, String word, boolean excluded) implements Clause {
-    }
+    public record Word(String written, String word, boolean excluded) implements Clause {}
 
     /** {@code notes:word}: a free word in one text field only; {@code excluded} for {@code -notes:word}. */
-    public record WordIn(String written, Schema.Text field, String word, boolean excluded) implements Clause {
-    }
+    public record WordIn(String written, Schema.Text field, String word, boolean excluded) implements Clause {}
 
     /** {@code field:value} on a keyword field; {@code excluded} for {@code -field:value}. */
-    public record KeywordIs(String written, Schema.Keyword field, String value, boolean excluded) implements Clause {
-    }
+    public record KeywordIs(String written, Schema.Keyword field, String value, boolean excluded) implements Clause {}
 
     /** A number compared with [lo, hi] (both ends inclusive; open ends infinite). */
-    public record NumberIs(String written, Schema.Numeric field, Op op, double lo, double hi) implements Clause {
-    }
+    public record NumberIs(String written, Schema.Numeric field, Op op, double lo, double hi) implements Clause {}
 
     /** The part must be rated over [lo, hi] (a point when lo == hi). */
-    public record RatedAt(String written, Schema.Interval field, Op op, double lo, double hi) implements Clause {
-    }
+    public record RatedAt(String written, Schema.Interval field, Op op, double lo, double hi) implements Clause {}
 
     public boolean isEmpty() {
         return clauses.isEmpty();
@@ -120,7 +120,8 @@ public record PartQuery(String text, List<Clause> clauses) {
     private static Query ratedQuery(RatedAt r) {
         if (r.lo() == r.hi()) {
             double t = QueryLanguage.tol(r.lo());
-            return DoubleRange.newIntersectsQuery(r.field().name(), new double[] {r.lo() - t}, new double[] {r.lo() + t});
+            return DoubleRange.newIntersectsQuery(
+                    r.field().name(), new double[] {r.lo() - t}, new double[] {r.lo() + t});
         }
         return DoubleRange.newContainsQuery(r.field().name(), new double[] {r.lo()}, new double[] {r.hi()});
     }
@@ -138,18 +139,21 @@ public record PartQuery(String text, List<Clause> clauses) {
             for (String p : Words.split(w.replace('-', ' '))) {
                 pieces.add(new TermQuery(new Term(field, p)), Occur.MUST);
             }
-            all.add(new BooleanQuery.Builder()
-                    .add(new TermQuery(new Term(field, w)), Occur.SHOULD)
-                    .add(new TermQuery(new Term(field, w.replace("-", ""))), Occur.SHOULD)
-                    .add(pieces.build(), Occur.SHOULD)
-                    .setMinimumNumberShouldMatch(1)
-                    .build(), Occur.MUST);
+            all.add(
+                    new BooleanQuery.Builder()
+                            .add(new TermQuery(new Term(field, w)), Occur.SHOULD)
+                            .add(new TermQuery(new Term(field, w.replace("-", ""))), Occur.SHOULD)
+                            .add(pieces.build(), Occur.SHOULD)
+                            .setMinimumNumberShouldMatch(1)
+                            .build(),
+                    Occur.MUST);
         }
         return all.build();
     }
 
     private static Query keywordQuery(KeywordIs k) {
-        String field = k.field().name().equals(Schema.ID) ? Schema.ID_LOWER : k.field().name();
+        String field =
+                k.field().name().equals(Schema.ID) ? Schema.ID_LOWER : k.field().name();
         Query exact = new TermQuery(new Term(field, k.value()));
         if (!field.equals(Schema.PACKAGE)) {
             return exact;

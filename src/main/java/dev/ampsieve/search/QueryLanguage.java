@@ -51,15 +51,13 @@ import java.util.regex.Pattern;
  * searches, is refused as a whole (Lucene would refuse it with an internal error).
  */
 public final class QueryLanguage {
-    private QueryLanguage() {
-    }
+    private QueryLanguage() {}
 
     /**
      * The grammar for --help, lines of at most 100 columns separated by {@code %n} (a
      * compile-time constant, so commands can use it in their help footer).
      */
-    public static final String HELP =
-            "Query: words and constraints separated by spaces; every term must hold.%n"
+    public static final String HELP = "Query: words and constraints separated by spaces; every term must hold.%n"
             + "  word            in id, title, tags, notes, packages, architecture, input%n"
             + "  -word           excludes: find 'drift<=1uV/C' -chopper (no '--' needed; -field:word too)%n"
             + "  field<value     also <=, >, >=, = ; values with units as in the catalog (10uV, 1.5MHz, 110dB)%n"
@@ -75,11 +73,26 @@ public final class QueryLanguage {
     /** {@link #HELP} as lines, then every field name from {@link Schema}, wrapped at 100 columns. */
     public static List<String> helpLines() {
         List<String> out = new ArrayList<>(List.of(HELP.split("%n")));
-        out.addAll(wrap("Words (field:word): ", Schema.KEYWORDS.stream().map(Schema.Keyword::name).toList(), ""));
-        out.addAll(wrap("Text (field:word, by word): ", Schema.TEXTS.stream().map(Schema.Text::name).toList(), ""));
-        out.addAll(wrap("Ranges (rated at a value): ", Schema.INTERVALS.stream().map(Schema.Interval::name).toList(), ""));
-        out.addAll(wrap("Numbers: ", Schema.NUMERIC.stream().map(Schema.Numeric::name).toList(), "."));
-        out.addAll(wrap("Aliases: ", Schema.ALIASES.entrySet().stream().map(e -> e.getKey() + " (" + e.getValue() + ")").toList(), "."));
+        out.addAll(wrap(
+                "Words (field:word): ",
+                Schema.KEYWORDS.stream().map(Schema.Keyword::name).toList(),
+                ""));
+        out.addAll(wrap(
+                "Text (field:word, by word): ",
+                Schema.TEXTS.stream().map(Schema.Text::name).toList(),
+                ""));
+        out.addAll(wrap(
+                "Ranges (rated at a value): ",
+                Schema.INTERVALS.stream().map(Schema.Interval::name).toList(),
+                ""));
+        out.addAll(wrap(
+                "Numbers: ", Schema.NUMERIC.stream().map(Schema.Numeric::name).toList(), "."));
+        out.addAll(wrap(
+                "Aliases: ",
+                Schema.ALIASES.entrySet().stream()
+                        .map(e -> e.getKey() + " (" + e.getValue() + ")")
+                        .toList(),
+                "."));
         return out;
     }
 
@@ -121,7 +134,12 @@ public final class QueryLanguage {
         List<PartQuery.Clause> clauses = new ArrayList<>();
         List<String> tokens = tokens(text == null ? "" : text);
         if (tokens.size() > MAX_TERMS) {
-            throw new InputException(new Problem(Problem.Severity.ERROR, null, 0, 0, "query",
+            throw new InputException(new Problem(
+                    Problem.Severity.ERROR,
+                    null,
+                    0,
+                    0,
+                    "query",
                     "too many terms (" + tokens.size() + "; at most " + MAX_TERMS + ")",
                     "use fewer terms: a few distinctive words and constraints find the same parts"));
         }
@@ -152,8 +170,14 @@ public final class QueryLanguage {
         }
         int searches = wordSearches(clauses);
         if (searches > MAX_WORD_SEARCHES) {
-            problems.add(new Problem(Problem.Severity.ERROR, null, 0, 0, "query",
-                    "the words are too many or too long (" + searches + " word searches; at most " + MAX_WORD_SEARCHES + ")",
+            problems.add(new Problem(
+                    Problem.Severity.ERROR,
+                    null,
+                    0,
+                    0,
+                    "query",
+                    "the words are too many or too long (" + searches + " word searches; at most " + MAX_WORD_SEARCHES
+                            + ")",
                     "use fewer words, and fewer hyphenated pieces in each"));
         }
         if (!problems.isEmpty()) {
@@ -168,7 +192,9 @@ public final class QueryLanguage {
         for (PartQuery.Clause c : clauses) {
             if (c instanceof PartQuery.Word w) {
                 for (String word : Words.split(w.word())) {
-                    n += word.contains("-") ? 3 + Words.split(word.replace('-', ' ')).size() : 1;
+                    n += word.contains("-")
+                            ? 3 + Words.split(word.replace('-', ' ')).size()
+                            : 1;
                 }
             }
         }
@@ -177,9 +203,7 @@ public final class QueryLanguage {
 
     /** Words of the query with spaces around operators removed ("vos < 10uV" reads as one term). */
     static List<String> tokens(String text) {
-        String t = text.strip()
-                .replaceAll("\\s*(<=|>=|<|>|=)\\s*", "$1")
-                .replaceAll("\\s*\\.\\.\\s*", "..");
+        String t = text.strip().replaceAll("\\s*(<=|>=|<|>|=)\\s*", "$1").replaceAll("\\s*\\.\\.\\s*", "..");
         List<String> out = new ArrayList<>();
         for (String s : t.split("\\s+")) {
             if (!s.isEmpty()) {
@@ -218,11 +242,17 @@ public final class QueryLanguage {
         String shown = unitApart == null ? written : written + " " + unitApart;
         String field = Schema.ALIASES.getOrDefault(name, name);
 
-        Schema.Keyword kw = Schema.KEYWORDS.stream().filter(k -> k.name().equals(field)).findFirst().orElse(null);
+        Schema.Keyword kw = Schema.KEYWORDS.stream()
+                .filter(k -> k.name().equals(field))
+                .findFirst()
+                .orElse(null);
         if (kw != null) {
             return Optional.of(keyword(shown, kw, op, value, excluded));
         }
-        Schema.Text text = Schema.TEXTS.stream().filter(k -> k.name().equals(field)).findFirst().orElse(null);
+        Schema.Text text = Schema.TEXTS.stream()
+                .filter(k -> k.name().equals(field))
+                .findFirst()
+                .orElse(null);
         if (text != null) {
             List<String> words = Words.split(value);
             if (!op.equals(":") || words.isEmpty()) {
@@ -230,19 +260,31 @@ public final class QueryLanguage {
             }
             return Optional.of(new PartQuery.WordIn(shown, text, String.join(" ", words), excluded));
         }
-        Schema.Numeric num = Schema.NUMERIC.stream().filter(n -> n.name().equals(field)).findFirst().orElse(null);
-        Schema.Interval iv = Schema.INTERVALS.stream().filter(n -> n.name().equals(field)).findFirst().orElse(null);
+        Schema.Numeric num = Schema.NUMERIC.stream()
+                .filter(n -> n.name().equals(field))
+                .findFirst()
+                .orElse(null);
+        Schema.Interval iv = Schema.INTERVALS.stream()
+                .filter(n -> n.name().equals(field))
+                .findFirst()
+                .orElse(null);
         if (num == null && iv == null) {
             throw new TermException(shown, "unknown field '" + name + "'", unknownFieldFix(name), false);
         }
         if (excluded) {
-            throw new TermException(shown, "a comparison cannot be excluded with '-'",
-                    "turn the comparison round, e.g. '" + name + ">=...' instead of '-" + name + "<...'", false);
+            throw new TermException(
+                    shown,
+                    "a comparison cannot be excluded with '-'",
+                    "turn the comparison round, e.g. '" + name + ">=...' instead of '-" + name + "<...'",
+                    false);
         }
         Dimension dim = num != null ? num.dimension() : iv.dimension();
         if (op.equals(":")) {
-            throw new TermException(shown, "'" + name + "' is " + dim.noun() + ", not a word",
-                    "compare it: " + name + "<" + example(field, dim).replace(" ", "") + ", " + name + "=lo..hi", false);
+            throw new TermException(
+                    shown,
+                    "'" + name + "' is " + dim.noun() + ", not a word",
+                    "compare it: " + name + "<" + example(field, dim).replace(" ", "") + ", " + name + "=lo..hi",
+                    false);
         }
         double[] v = values(shown, name, op, value, dim);
         PartQuery.Op kind = kind(op, value);
@@ -263,26 +305,38 @@ public final class QueryLanguage {
         if (near.isEmpty()) {
             return "'ampsieve help query' lists every field";
         }
-        return "did you mean " + String.join(" or ", near.stream().map(n -> "'" + n + "'").toList()) + "?";
+        return "did you mean "
+                + String.join(" or ", near.stream().map(n -> "'" + n + "'").toList()) + "?";
     }
 
-    private static PartQuery.KeywordIs keyword(String shown, Schema.Keyword kw, String op, String value, boolean excluded)
-            throws TermException {
+    private static PartQuery.KeywordIs keyword(
+            String shown, Schema.Keyword kw, String op, String value, boolean excluded) throws TermException {
         if (!op.equals(":")) {
             String example = kw.values().isEmpty() ? "word" : kw.values().get(0);
-            throw new TermException(shown, "'" + kw.name() + "' is a word field, not a number",
-                    "write " + kw.name() + ":" + example, false);
+            throw new TermException(
+                    shown,
+                    "'" + kw.name() + "' is a word field, not a number",
+                    "write " + kw.name() + ":" + example,
+                    false);
         }
         String v = value.strip().toLowerCase(Locale.ROOT);
         if (v.isEmpty()) {
-            throw new TermException(shown, "no word after ':'",
-                    "write " + kw.name() + ":" + (kw.values().isEmpty() ? "word" : kw.values().get(0)), false);
+            throw new TermException(
+                    shown,
+                    "no word after ':'",
+                    "write " + kw.name() + ":"
+                            + (kw.values().isEmpty() ? "word" : kw.values().get(0)),
+                    false);
         }
         if (!kw.values().isEmpty() && !kw.values().contains(v)) {
             String near = Fields.closest(v, kw.values());
-            throw new TermException(shown, "'" + v + "' is not a value of '" + kw.name() + "'",
-                    near != null ? "did you mean '" + kw.name() + ":" + near + "'?"
-                            : "write one of " + String.join(", ", kw.values()), false);
+            throw new TermException(
+                    shown,
+                    "'" + v + "' is not a value of '" + kw.name() + "'",
+                    near != null
+                            ? "did you mean '" + kw.name() + ":" + near + "'?"
+                            : "write one of " + String.join(", ", kw.values()),
+                    false);
         }
         return new PartQuery.KeywordIs(shown, kw, v, excluded);
     }
@@ -347,8 +401,11 @@ public final class QueryLanguage {
             throws TermException {
         String v = value.strip();
         if (v.isEmpty() || v.equals("..")) {
-            throw new TermException(shown, "no value after '" + op + "'",
-                    "write e.g. " + name + op + example(field(name), dim).replace(" ", ""), false);
+            throw new TermException(
+                    shown,
+                    "no value after '" + op + "'",
+                    "write e.g. " + name + op + example(field(name), dim).replace(" ", ""),
+                    false);
         }
         int dots = v.indexOf("..");
         if (dots < 0) {
@@ -362,8 +419,11 @@ public final class QueryLanguage {
         double lo = a.isBlank() ? Double.NEGATIVE_INFINITY : quantity(shown, a, dim, example(field(name), dim));
         double hi = b.isBlank() ? Double.POSITIVE_INFINITY : quantity(shown, b, dim, example(field(name), dim));
         if (lo > hi) {
-            throw new TermException(shown, "the lower end is above the upper end",
-                    "write the smaller value first: " + name + "=" + b + ".." + a, false);
+            throw new TermException(
+                    shown,
+                    "the lower end is above the upper end",
+                    "write the smaller value first: " + name + "=" + b + ".." + a,
+                    false);
         }
         return new double[] {lo, hi};
     }

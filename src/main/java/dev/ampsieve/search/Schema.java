@@ -19,8 +19,7 @@ import java.util.stream.Stream;
  * {@link #ALIASES}; {@code SchemaTest} checks it.
  */
 public final class Schema {
-    private Schema() {
-    }
+    private Schema() {}
 
     /**
      * Stored in each commit beside the catalog fingerprint; any change to the fields or to how
@@ -69,7 +68,9 @@ public final class Schema {
     public static final List<Keyword> KEYWORDS = List.of(
             new Keyword(ID, List.of(), "the part id"),
             new Keyword(INPUT, List.of("bipolar", "jfet", "cmos"), "input stage technology"),
-            new Keyword(ARCHITECTURE, List.of("standard", "chopper", "auto-zero", "zero-drift"),
+            new Keyword(
+                    ARCHITECTURE,
+                    List.of("standard", "chopper", "auto-zero", "zero-drift"),
                     "offset correction; zero-drift = chopper or auto-zero"),
             new Keyword(PACKAGE, List.of(), "package; package:sot-23 also finds sot-23-5"),
             new Keyword(TAG, List.of(), "a tag from the catalog"),
@@ -86,8 +87,7 @@ public final class Schema {
     public static final String SOURCE = "source";
 
     /** A free-text field searched by word ({@code notes:settling}), as the free words are. */
-    public record Text(String name, String meaning) {
-    }
+    public record Text(String name, String meaning) {}
 
     public static final List<Text> TEXTS = List.of(
             new Text(TITLE, "a word of the title"),
@@ -97,8 +97,7 @@ public final class Schema {
     // ------------------------------------------------------------ numbers (field<value ...)
 
     /** A number indexed as a point (search), stored (display) and as doc values (sort). */
-    public record Numeric(String name, Dimension dimension, String meaning) {
-    }
+    public record Numeric(String name, Dimension dimension, String meaning) {}
 
     public static final String VOS = "vos";
     public static final String DRIFT = "drift";
@@ -163,7 +162,10 @@ public final class Schema {
             new Numeric(CIN, Dimension.CAPACITANCE, "input capacitance, common-mode plus differential"),
             new Numeric(CHANNELS, Dimension.NUMBER, "amplifiers per package"),
             new Numeric(FCHOP, Dimension.FREQUENCY, "chopping or auto-zero frequency"),
-            new Numeric(AGING, Dimension.VOLTAGE, "long-term offset change over 1000 h (scaled with the square root of time)"),
+            new Numeric(
+                    AGING,
+                    Dimension.VOLTAGE,
+                    "long-term offset change over 1000 h (scaled with the square root of time)"),
             new Numeric("ios.maxtemp", Dimension.CURRENT, "maximum input offset current over temperature"),
             new Numeric("long-term-drift.value", Dimension.VOLTAGE, "long-term offset change as the catalog gives it"),
             new Numeric("long-term-drift.per", Dimension.TIME, "the time the long-term offset change is given for"),
@@ -174,9 +176,13 @@ public final class Schema {
             new Numeric("price.quantity", Dimension.NUMBER, "the quantity the price is given for"),
             // operating point
             new Numeric("test-conditions.supply", Dimension.VOLTAGE, "total supply of the datasheet's 25 °C table"),
-            new Numeric("test-conditions.common-mode", Dimension.VOLTAGE,
+            new Numeric(
+                    "test-conditions.common-mode",
+                    Dimension.VOLTAGE,
                     "common mode of the datasheet's 25 °C table, above the negative rail"),
-            new Numeric("input-crossover.from-positive-rail", Dimension.VOLTAGE,
+            new Numeric(
+                    "input-crossover.from-positive-rail",
+                    Dimension.VOLTAGE,
                     "where a rail-to-rail input hands over between its pairs, below the positive rail"),
             new Numeric("input-crossover.offset-step", Dimension.VOLTAGE, "the offset step at the input crossover"),
             new Numeric(THETA_JA, Dimension.THERMAL_RESISTANCE, "junction-to-ambient thermal resistance"),
@@ -193,13 +199,20 @@ public final class Schema {
      * mean "runs on 5 V" (min <= 5 V <= max); {@code >} and {@code <} also need the rating to
      * extend beyond the value on that side; {@code lo..hi} needs the whole interval.
      */
-    public record Interval(String name, Dimension dimension, String min, String max, String meaning) {
-    }
+    public record Interval(String name, Dimension dimension, String min, String max, String meaning) {}
 
     public static final List<Interval> INTERVALS = List.of(
-            new Interval(SUPPLY, Dimension.VOLTAGE, SUPPLY_MIN, SUPPLY_MAX,
+            new Interval(
+                    SUPPLY,
+                    Dimension.VOLTAGE,
+                    SUPPLY_MIN,
+                    SUPPLY_MAX,
                     "total supply the part is rated for: supply>=5V means it runs on 5 V"),
-            new Interval(TEMPERATURE, Dimension.TEMPERATURE, TEMPERATURE_MIN, TEMPERATURE_MAX,
+            new Interval(
+                    TEMPERATURE,
+                    Dimension.TEMPERATURE,
+                    TEMPERATURE_MIN,
+                    TEMPERATURE_MAX,
                     "rated ambient range: temperature>=125C means rated up to 125 °C or beyond"));
 
     /** Other spellings users reach for. */

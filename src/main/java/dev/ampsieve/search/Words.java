@@ -14,8 +14,7 @@ import java.util.Set;
  * ({@code sot}, {@code 23}, {@code 5}), so a user finds it however they write it.
  */
 public final class Words {
-    private Words() {
-    }
+    private Words() {}
 
     /** Lower-cased words of {@code text}, split on anything but letters, digits, '-', '+', '.'. */
     public static List<String> split(String text) {

@@ -20,11 +20,19 @@ import java.util.Map;
  * accepted ({@link #ALIASES}).
  */
 public final class Columns {
-    private Columns() {
-    }
+    private Columns() {}
 
     /** What a column holds, which decides how a cell becomes YAML. */
-    public enum Kind { TEXT, WORD, BOOLEAN, INTEGER, NUMBER, LIST, QUANTITY, BREAKS }
+    public enum Kind {
+        TEXT,
+        WORD,
+        BOOLEAN,
+        INTEGER,
+        NUMBER,
+        LIST,
+        QUANTITY,
+        BREAKS
+    }
 
     /**
      * One column.
@@ -145,7 +153,8 @@ public final class Columns {
     private static Column column(String path) {
         Dimension d = CatalogKeys.dimension(path);
         Kind kind = switch (path) {
-            case CatalogKeys.ID, CatalogKeys.TITLE, CatalogKeys.SOURCE, CatalogKeys.NOTES, "price.currency" -> Kind.TEXT;
+            case CatalogKeys.ID, CatalogKeys.TITLE, CatalogKeys.SOURCE, CatalogKeys.NOTES, "price.currency" ->
+                Kind.TEXT;
             case CatalogKeys.ARCHITECTURE, CatalogKeys.INPUT, CatalogKeys.FACTORY_TRIM -> Kind.WORD;
             case CatalogKeys.NULL_PINS -> Kind.BOOLEAN;
             case CatalogKeys.CHANNELS, "price.quantity" -> Kind.INTEGER;
@@ -156,7 +165,8 @@ public final class Columns {
             throw new IllegalStateException("no column kind for catalog key " + path + "; add it to sheet.Columns");
         }
         if (kind == Kind.QUANTITY && !UNITS.containsKey(path)) {
-            throw new IllegalStateException("no column unit for catalog quantity " + path + "; add it to sheet.Columns.UNITS");
+            throw new IllegalStateException(
+                    "no column unit for catalog quantity " + path + "; add it to sheet.Columns.UNITS");
         }
         return new Column(path, kind, kind == Kind.QUANTITY ? UNITS.get(path) : null, kind == Kind.QUANTITY ? d : null);
     }

@@ -23,8 +23,7 @@ import java.util.List;
  * Text is written exactly as the catalog holds it (this is data for a file, not for a terminal).
  */
 public final class SheetExport {
-    private SheetExport() {
-    }
+    private SheetExport() {}
 
     /** For a file: RFC 4180 lines end in CR LF. */
     public static String csv(List<Part> parts) {
@@ -43,7 +42,9 @@ public final class SheetExport {
             rows.add(row);
         }
         try {
-            return new CsvMapper().writer(CsvSchema.emptySchema().withLineSeparator(lineEnd)).writeValueAsString(rows);
+            return new CsvMapper()
+                    .writer(CsvSchema.emptySchema().withLineSeparator(lineEnd))
+                    .writeValueAsString(rows);
         } catch (JsonProcessingException e) {
             throw new IllegalStateException("writing CSV text in memory", e);
         }
@@ -64,8 +65,14 @@ public final class SheetExport {
             case "price.unit" -> price.hasBreaks() ? "" : plain(price.unit());
             case "price.quantity" -> price.hasBreaks() ? "" : Integer.toString(price.quantity());
             case "price.currency" -> price.currency();
-            case Columns.PRICE_BREAKS -> price.hasBreaks() ? String.join("; ",
-                    price.breaks().stream().map(b -> b.quantity() + ": " + plain(b.unit())).toList()) : "";
+            case Columns.PRICE_BREAKS ->
+                price.hasBreaks()
+                        ? String.join(
+                                "; ",
+                                price.breaks().stream()
+                                        .map(b -> b.quantity() + ": " + plain(b.unit()))
+                                        .toList())
+                        : "";
             case CatalogKeys.SOURCE -> p.source();
             case CatalogKeys.NOTES -> p.notes();
             default -> {
@@ -141,9 +148,11 @@ public final class SheetExport {
         int slash = unit.indexOf('/');
         String num = slash < 0 ? unit : unit.substring(0, slash);
         String rest = slash < 0 ? "" : unit.substring(slash);
-        String base = PREFIXABLE.contains(num) ? num
+        String base = PREFIXABLE.contains(num)
+                ? num
                 : num.length() > 1 && PREFIXES.contains(num.substring(0, 1)) && PREFIXABLE.contains(num.substring(1))
-                        ? num.substring(1) : null;
+                        ? num.substring(1)
+                        : null;
         if (base == null) {
             return List.of();
         }

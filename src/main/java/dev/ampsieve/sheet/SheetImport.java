@@ -1,8 +1,8 @@
 package dev.ampsieve.sheet;
 
-import com.fasterxml.jackson.databind.MappingIterator;
 import com.fasterxml.jackson.core.JsonLocation;
 import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.MappingIterator;
 import com.fasterxml.jackson.databind.RuntimeJsonMappingException;
 import com.fasterxml.jackson.dataformat.csv.CsvMapper;
 import com.fasterxml.jackson.dataformat.csv.CsvParser;
@@ -41,8 +41,7 @@ import java.util.regex.Pattern;
  * a formula-like cell is taken off ({@link FormulaCells#restore}); no cell is ever evaluated.
  */
 public final class SheetImport {
-    private SheetImport() {
-    }
+    private SheetImport() {}
 
     /** Larger than any hand-kept parts list (a thousand parts is about half a MiB). */
     public static final long MAX_BYTES = 16L * 1024 * 1024;
@@ -55,8 +54,7 @@ public final class SheetImport {
      * @param yaml the part file's text
      * @param part the part as the catalog reads that text
      */
-    public record Row(int row, int idColumn, String id, String yaml, Part part) {
-    }
+    public record Row(int row, int idColumn, String id, String yaml, Part part) {}
 
     /** Rows that converted, and every problem (errors for rows that did not, warnings for rows that did). */
     public record Result(List<Row> rows, List<Problem> problems, int dataRows) {
@@ -76,12 +74,10 @@ public final class SheetImport {
     private static final Pattern BREAK = Pattern.compile("\\s*([^:]+?)\\s*:\\s*(.+?)\\s*");
 
     /** A header cell that names a column: where it is, and the unit its bare numbers take. */
-    private record Heading(Columns.Column column, int col, String unit) {
-    }
+    private record Heading(Columns.Column column, int col, String unit) {}
 
     /** A cell's text (formula mark taken off) and its 1-based column. */
-    private record Cell(String text, int col) {
-    }
+    private record Cell(String text, int col) {}
 
     /** @param text the file's text, already decoded (a leading byte order mark is skipped) */
     public static Result convert(String text, Path csv) {
@@ -97,23 +93,32 @@ public final class SheetImport {
                 records.add(it.nextValue());
             }
         } catch (IOException | RuntimeJsonMappingException e) {
-            JsonLocation loc = e instanceof JsonProcessingException j ? j.getLocation()
+            JsonLocation loc = e instanceof JsonProcessingException j
+                    ? j.getLocation()
                     : e.getCause() instanceof JsonProcessingException j ? j.getLocation() : null;
             String why = e instanceof JsonProcessingException j ? j.getOriginalMessage() : e.getMessage();
-            problems.add(Problem.error(loc == null ? Located.nowhere(csv) : new Located(csv, loc.getLineNr(), loc.getColumnNr()),
-                    "", "not readable as CSV (" + why + ")",
+            problems.add(Problem.error(
+                    loc == null ? Located.nowhere(csv) : new Located(csv, loc.getLineNr(), loc.getColumnNr()),
+                    "",
+                    "not readable as CSV (" + why + ")",
                     "save the sheet as CSV with comma separators and double quotes around cells that hold commas"));
             return new Result(List.of(), problems, -1);
         }
         if (records.isEmpty()) {
-            problems.add(Problem.error(Located.nowhere(csv), "", "the file is empty",
+            problems.add(Problem.error(
+                    Located.nowhere(csv),
+                    "",
+                    "the file is empty",
                     "export the sheet with a header row naming catalog keys (vos.max [uV], gbw [MHz], ...)"));
             return new Result(List.of(), problems, -1);
         }
         String[] header = records.get(0);
         if (header.length == 1 && header[0] != null && (header[0].contains(";") || header[0].contains("\t"))) {
-            problems.add(Problem.error(new Located(csv, 1, 1), "", "the header is one cell holding "
-                    + (header[0].contains(";") ? "semicolons" : "tabs") + ": the sheet was saved with another separator",
+            problems.add(Problem.error(
+                    new Located(csv, 1, 1),
+                    "",
+                    "the header is one cell holding " + (header[0].contains(";") ? "semicolons" : "tabs")
+                            + ": the sheet was saved with another separator",
                     "save it as CSV with commas as separators and a decimal point"));
             return new Result(List.of(), problems, -1);
         }
@@ -134,8 +139,11 @@ public final class SheetImport {
             if (row != null) {
                 Integer first = ids.putIfAbsent(row.id(), row.row());
                 if (first != null) {
-                    problems.add(Problem.error(new Located(csv, row.row(), row.idColumn()), CatalogKeys.ID,
-                            "id '" + row.id() + "' is already used in row " + first, "give each part its own id"));
+                    problems.add(Problem.error(
+                            new Located(csv, row.row(), row.idColumn()),
+                            CatalogKeys.ID,
+                            "id '" + row.id() + "' is already used in row " + first,
+                            "give each part its own id"));
                 } else {
                     rows.add(row);
                 }
@@ -162,7 +170,10 @@ public final class SheetImport {
             String h = FormulaCells.restore(header[i] == null ? "" : header[i]).strip();
             if (h.isEmpty()) {
                 if (columnHasData(records, i)) {
-                    problems.add(Problem.error(at, "", "this column has values but no header",
+                    problems.add(Problem.error(
+                            at,
+                            "",
+                            "this column has values but no header",
                             "name it with a catalog key such as 'vos.max [uV]' (README, \"Spreadsheets\")"));
                 }
                 out.add(null);
@@ -177,34 +188,51 @@ public final class SheetImport {
             }
             Columns.Column c = Columns.find(name);
             if (c == null) {
-                String near = dev.ampsieve.yaml.Fields.closest(name,
-                        Columns.ALL.stream().map(Columns.Column::path).toList());
-                problems.add(Problem.error(at, "", "unknown column '" + name + "'", near != null
-                        ? "did you mean '" + near + "'?" : "name it with a catalog key path such as 'vos.max' or 'noise.en'"
-                                + " (README, \"Spreadsheets\"), or delete the column"));
+                String near = dev.ampsieve.yaml.Fields.closest(
+                        name, Columns.ALL.stream().map(Columns.Column::path).toList());
+                problems.add(Problem.error(
+                        at,
+                        "",
+                        "unknown column '" + name + "'",
+                        near != null
+                                ? "did you mean '" + near + "'?"
+                                : "name it with a catalog key path such as 'vos.max' or 'noise.en'"
+                                        + " (README, \"Spreadsheets\"), or delete the column"));
                 out.add(null);
                 continue;
             }
             Integer before = seen.put(c, col);
             if (before != null) {
-                problems.add(Problem.error(at, c.path(), "a second column for " + c.path() + " (the first is column "
-                        + before + ")", "keep one of them"));
+                problems.add(Problem.error(
+                        at,
+                        c.path(),
+                        "a second column for " + c.path() + " (the first is column " + before + ")",
+                        "keep one of them"));
             }
             if (unit != null && c.kind() != Columns.Kind.QUANTITY) {
-                problems.add(Problem.error(at, c.path(), "takes no unit, but the header gives '" + unit + "'",
+                problems.add(Problem.error(
+                        at,
+                        c.path(),
+                        "takes no unit, but the header gives '" + unit + "'",
                         "write the header as '" + c.path() + "'"));
             } else if (unit != null) {
                 try {
                     Units.parse("1 " + unit, c.dimension());
                 } catch (UnitException e) {
-                    problems.add(Problem.error(at, c.path(), "header unit: " + e.problem(), e.fix().replace("write ",
-                            "write in brackets ")));
+                    problems.add(Problem.error(
+                            at,
+                            c.path(),
+                            "header unit: " + e.problem(),
+                            e.fix().replace("write ", "write in brackets ")));
                 }
             }
             out.add(new Heading(c, col, unit));
         }
         if (!seen.containsKey(Columns.of(CatalogKeys.ID))) {
-            problems.add(Problem.error(new Located(csv, 1, 0), CatalogKeys.ID, "no id column",
+            problems.add(Problem.error(
+                    new Located(csv, 1, 0),
+                    CatalogKeys.ID,
+                    "no id column",
                     "add a column 'id' with a name for each part (lowercase letters, digits, dashes)"));
         }
         return out;
@@ -232,7 +260,10 @@ public final class SheetImport {
             }
             Heading h = i < headings.size() ? headings.get(i) : null;
             if (h == null) {
-                own.add(Problem.error(new Located(csv, rowNo, i + 1), "", "a value in a column without a header",
+                own.add(Problem.error(
+                        new Located(csv, rowNo, i + 1),
+                        "",
+                        "a value in a column without a header",
                         "give the column a header, or delete the value"));
                 continue;
             }
@@ -248,8 +279,14 @@ public final class SheetImport {
         String id = idCell == null ? null : idCell.text().strip();
         Path target = Path.of("row.yaml"); // only for the reader's messages, which are placed in the CSV instead
         StringBuilder y = new StringBuilder();
-        y.append("# Imported from ").append(oneLine(csv.getFileName() == null ? csv.toString() : csv.getFileName().toString()))
-                .append(", row ").append(rowNo).append(", by 'ampsieve import'. Every value carries its unit;\n")
+        y.append("# Imported from ")
+                .append(oneLine(
+                        csv.getFileName() == null
+                                ? csv.toString()
+                                : csv.getFileName().toString()))
+                .append(", row ")
+                .append(rowNo)
+                .append(", by 'ampsieve import'. Every value carries its unit;\n")
                 .append("# catalog-template/part.yaml explains each key.\n");
         int line = 2;
         Map<Integer, Integer> columnOfLine = new HashMap<>();
@@ -258,7 +295,10 @@ public final class SheetImport {
             if (sub.isEmpty()) {
                 Cell c = byPath.get(key);
                 if (c != null) {
-                    y.append(key).append(": ").append(scalar(Columns.of(key), c, units.get(key), csv, rowNo, own)).append('\n');
+                    y.append(key)
+                            .append(": ")
+                            .append(scalar(Columns.of(key), c, units.get(key), csv, rowNo, own))
+                            .append('\n');
                     columnOfLine.put(++line, c.col());
                 }
                 continue;
@@ -273,13 +313,21 @@ public final class SheetImport {
                 continue;
             }
             y.append(key).append(":\n");
-            Cell firstCell = sub.stream().map(s -> byPath.get(CatalogKeys.path(key, s))).filter(c -> c != null).findFirst().get();
+            Cell firstCell = sub.stream()
+                    .map(s -> byPath.get(CatalogKeys.path(key, s)))
+                    .filter(c -> c != null)
+                    .findFirst()
+                    .get();
             columnOfLine.put(++line, firstCell.col());
             for (String s : sub) {
                 String p = CatalogKeys.path(key, s);
                 Cell c = byPath.get(p);
                 if (c != null) {
-                    y.append("  ").append(s).append(": ").append(scalar(Columns.of(p), c, units.get(p), csv, rowNo, own)).append('\n');
+                    y.append("  ")
+                            .append(s)
+                            .append(": ")
+                            .append(scalar(Columns.of(p), c, units.get(p), csv, rowNo, own))
+                            .append('\n');
                     columnOfLine.put(++line, c.col());
                 }
             }
@@ -345,7 +393,10 @@ public final class SheetImport {
 
     private static void commaCheck(Columns.Column c, Cell cell, Path csv, int rowNo, List<Problem> own) {
         if (DECIMAL_COMMA.matcher(cell.text()).matches()) {
-            own.add(Problem.error(new Located(csv, rowNo, cell.col()), c.path(), "'" + cell.text() + "' has a decimal comma",
+            own.add(Problem.error(
+                    new Located(csv, rowNo, cell.col()),
+                    c.path(),
+                    "'" + cell.text() + "' has a decimal comma",
                     "write a decimal point: '" + cell.text().replaceFirst(",", ".") + "' (or export the sheet with"
                             + " a decimal point)"));
         }
@@ -367,12 +418,22 @@ public final class SheetImport {
         return "[" + String.join(", ", items(t).stream().map(YamlText::quoted).toList()) + "]";
     }
 
-    private static int priceBreaks(StringBuilder y, int line, Cell breaks, Map<String, Cell> byPath,
-            Map<Integer, Integer> columnOfLine, Path csv, int rowNo, List<Problem> own) {
+    private static int priceBreaks(
+            StringBuilder y,
+            int line,
+            Cell breaks,
+            Map<String, Cell> byPath,
+            Map<Integer, Integer> columnOfLine,
+            Path csv,
+            int rowNo,
+            List<Problem> own) {
         Located at = new Located(csv, rowNo, breaks.col());
         for (String other : List.of("price.unit", "price.quantity")) {
             if (byPath.containsKey(other)) {
-                own.add(Problem.error(at, Columns.PRICE_BREAKS, "given together with " + other,
+                own.add(Problem.error(
+                        at,
+                        Columns.PRICE_BREAKS,
+                        "given together with " + other,
                         "give either one price (price.unit, price.quantity) or the breaks, not both"));
                 return line;
             }
@@ -384,7 +445,10 @@ public final class SheetImport {
             }
             Matcher m = BREAK.matcher(item);
             if (!m.matches()) {
-                own.add(Problem.error(at, Columns.PRICE_BREAKS, "'" + item.strip() + "' is not 'quantity: unit price'",
+                own.add(Problem.error(
+                        at,
+                        Columns.PRICE_BREAKS,
+                        "'" + item.strip() + "' is not 'quantity: unit price'",
                         "write the breaks as '1: 2.10; 100: 1.60; 1000: 1.25'"));
                 return line;
             }
@@ -394,7 +458,9 @@ public final class SheetImport {
         y.append(CatalogKeys.PRICE).append(":\n");
         columnOfLine.put(++line, breaks.col());
         for (int i = 0; i < pairs.size(); i++) {
-            y.append("  - {quantity: ").append(YamlText.integer(pairs.get(i)[0])).append(", unit: ")
+            y.append("  - {quantity: ")
+                    .append(YamlText.integer(pairs.get(i)[0]))
+                    .append(", unit: ")
                     .append(YamlText.number(pairs.get(i)[1]));
             if (i == 0 && currency != null) {
                 y.append(", currency: ").append(YamlText.quoted(currency.text()));

@@ -6,8 +6,7 @@ import java.util.regex.Pattern;
 
 /** YAML scalars written by hand: plain where that reads back as the same text, else double-quoted. */
 final class YamlText {
-    private YamlText() {
-    }
+    private YamlText() {}
 
     /** Words YAML 1.1 reads as booleans or null when plain. */
     private static final Set<String> SPECIAL = Set.of("true", "false", "yes", "no", "on", "off", "y", "n", "null", "~");
@@ -52,7 +51,10 @@ final class YamlText {
                 default -> {
                     if (c < 0x20 || c == 0x7f || (c >= 0x80 && c <= 0x9f)) {
                         b.append(String.format(Locale.ROOT, "\\x%02x", c));
-                    } else if (c == 0x2028 || c == 0x2029 || c == 0xfeff || Character.getType(c) == Character.FORMAT
+                    } else if (c == 0x2028
+                            || c == 0x2029
+                            || c == 0xfeff
+                            || Character.getType(c) == Character.FORMAT
                             || Character.getType(c) == Character.SURROGATE) {
                         b.append(String.format(Locale.ROOT, "\\u%04x", c));
                     } else {

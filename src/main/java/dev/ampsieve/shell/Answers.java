@@ -24,8 +24,7 @@ import java.util.regex.Pattern;
  * {@link StageCheck}.
  */
 final class Answers {
-    private Answers() {
-    }
+    private Answers() {}
 
     /** The combined question for temperature.min and temperature.max. */
     static final String TEMPERATURE = "temperature";
@@ -44,8 +43,7 @@ final class Answers {
      * @param high the key of the upper end
      * @param unit the unit a bare number is read in
      */
-    record RangeId(String id, String low, String high, Dimension dimension, String unit) {
-    }
+    record RangeId(String id, String low, String high, Dimension dimension, String unit) {}
 
     /** Every combined range: one answer sets both ends. */
     static final List<RangeId> RANGES = List.of(
@@ -111,8 +109,11 @@ final class Answers {
             return t;
         }
         String near = Fields.closest(t, ids());
-        throw new AnswerException("'" + typed + "' is not a stage key",
-                near != null ? "did you mean '" + near + "'? (`show --all` lists them)" : "`show --all` lists the keys");
+        throw new AnswerException(
+                "'" + typed + "' is not a stage key",
+                near != null
+                        ? "did you mean '" + near + "'? (`show --all` lists them)"
+                        : "`show --all` lists the keys");
     }
 
     /** The dimension of the value under {@code id}, or null when it is not a quantity. */
@@ -137,7 +138,8 @@ final class Answers {
         if (range(id) != null) {
             return range(range(id), t);
         }
-        if (id.equals(SUPPLY) || id.equals("supply.voltage") && PLUS_MINUS.matcher(t).find()) {
+        if (id.equals(SUPPLY)
+                || id.equals("supply.voltage") && PLUS_MINUS.matcher(t).find()) {
             return supply(t);
         }
         if (id.equals(LIMIT)) {
@@ -160,7 +162,8 @@ final class Answers {
             return topology(choice(t, key.choices()), current);
         }
         if (id.equals(SOURCE)) {
-            return new Change(Map.of(id, t), Set.of(SOURCE + ".minus", SOURCE + ".plus"), null); // one value for both legs
+            return new Change(
+                    Map.of(id, t), Set.of(SOURCE + ".minus", SOURCE + ".plus"), null); // one value for both legs
         }
         if (id.startsWith(SOURCE + ".")) {
             // one leg given where both had one value (or the default): the other leg keeps that value
@@ -183,11 +186,14 @@ final class Answers {
     }
 
     private static List<String> limitPaths() {
-        return StageKeys.paths().stream().filter(p -> p.equals(LIMIT) || p.startsWith("limit.")).toList();
+        return StageKeys.paths().stream()
+                .filter(p -> p.equals(LIMIT) || p.startsWith("limit."))
+                .toList();
     }
 
     /** Splits "-40..85 C", "-40 C to 85 C", "-40 to 85" (degrees Celsius unless a unit says otherwise). */
     private static final Pattern RANGE = Pattern.compile("^(.+?)\\s*(?:\\.\\.|…|\\bto\\b)\\s*(.+)$");
+
     private static final Pattern BARE = Pattern.compile("^[-+]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][-+]?\\d+)?$");
 
     /** "low..high unit": a bare end takes the other end's unit, or the range's own. */
@@ -195,7 +201,8 @@ final class Answers {
         String example = Questions.example(r.id());
         Matcher m = RANGE.matcher(t);
         if (!m.matches()) {
-            throw new AnswerException("'" + t + "' is not a range", "write the lower and upper end, such as '" + example + "'");
+            throw new AnswerException(
+                    "'" + t + "' is not a range", "write the lower and upper end, such as '" + example + "'");
         }
         String lo = m.group(1).strip();
         String hi = m.group(2).strip();
@@ -241,7 +248,9 @@ final class Answers {
     private static Change supply(String t) throws AnswerException {
         String[] sides = PLUS_MINUS.split(t, -1);
         if (sides.length > 2 || sides[0].isBlank() || sides.length == 2 && sides[1].isBlank()) {
-            throw new AnswerException("'" + t + "' is not a supply", "write the total supply and its peak change, such as '5 V ± 0.25 V'");
+            throw new AnswerException(
+                    "'" + t + "' is not a supply",
+                    "write the total supply and its peak change, such as '5 V ± 0.25 V'");
         }
         String v = sides[0].strip();
         String dv = sides.length == 2 ? sides[1].strip() : null;
@@ -271,8 +280,10 @@ final class Answers {
         return m.matches() ? m.group(1) : null;
     }
 
-    private static final Pattern INPUT = Pattern.compile("(?i)^(?:input|in|rti)[:\\s]+(.+)$|^(.+?)\\s+(?:input|in|rti|input-referred)$");
-    private static final Pattern OUTPUT = Pattern.compile("(?i)^(?:output|out)[:\\s]+(.+)$|^(.+?)\\s+(?:output|out|at the output)$");
+    private static final Pattern INPUT =
+            Pattern.compile("(?i)^(?:input|in|rti)[:\\s]+(.+)$|^(.+?)\\s+(?:input|in|rti|input-referred)$");
+    private static final Pattern OUTPUT =
+            Pattern.compile("(?i)^(?:output|out)[:\\s]+(.+)$|^(.+?)\\s+(?:output|out|at the output)$");
     private static final Pattern PERCENT = Pattern.compile("(?i)^(.+?%)\\s*(?:of\\s+)?(?:full[- ]scale|fs)?$");
     private static final Pattern LSB = Pattern.compile(
             "(?i)^([-+]?[\\d.]+(?:[eE][-+]?\\d+)?)\\s*lsb[,\\s]+(?:of\\s+|at\\s+)?(\\d+)[\\s-]*bits?[,\\s]+(?:at\\s+|ref(?:erence)?\\s+)?(.+)$");
@@ -289,11 +300,14 @@ final class Answers {
             put.put("limit.bits", m.group(2));
             put.put("limit.reference", m.group(3).strip());
         } else if ((m = INPUT.matcher(t)).matches()) {
-            put.put(currentIn ? "limit.input-current" : "limit.input", (m.group(1) != null ? m.group(1) : m.group(2)).strip());
+            put.put(
+                    currentIn ? "limit.input-current" : "limit.input",
+                    (m.group(1) != null ? m.group(1) : m.group(2)).strip());
         } else if ((m = PERCENT.matcher(t)).matches()) {
             put.put("limit.percent-of-full-scale", m.group(1).strip());
         } else if (t.toLowerCase(Locale.ROOT).contains("lsb")) {
-            throw new AnswerException("an LSB limit needs the count, the bits and the reference",
+            throw new AnswerException(
+                    "an LSB limit needs the count, the bits and the reference",
                     "write it such as '0.5 lsb 16 bits 2.5 V'");
         } else {
             m = OUTPUT.matcher(t);
@@ -317,7 +331,8 @@ final class Answers {
                 drop.add(path);
             }
         }
-        String note = drop.isEmpty() ? null : String.join(", ", drop) + " dropped: not part of the " + word + " topology";
+        String note =
+                drop.isEmpty() ? null : String.join(", ", drop) + " dropped: not part of the " + word + " topology";
         return new Change(Map.of("topology", word), drop, note);
     }
 

@@ -61,10 +61,13 @@ final class GuidedEntry {
 
     /** Runs the questions starting from {@code start}; returns the new answers. */
     Map<String, String> run(Map<String, String> start) throws Cancelled {
-        out.println(ctx.fold("Describe the stage: topology, gain, temperature range, error limit, full-scale output and supply "
-                + "first (they decide the verdict), then the rest."));
-        out.println(ctx.fold("Enter keeps the value in [ ], ? explains a question, 'done' keeps all remaining values, "
-                + "Ctrl-C stops and keeps the answers given.", paint::dim));
+        out.println(ctx.fold(
+                "Describe the stage: topology, gain, temperature range, error limit, full-scale output and supply "
+                        + "first (they decide the verdict), then the rest."));
+        out.println(ctx.fold(
+                "Enter keeps the value in [ ], ? explains a question, 'done' keeps all remaining values, "
+                        + "Ctrl-C stops and keeps the answers given.",
+                paint::dim));
         Map<String, String> a = new LinkedHashMap<>(start);
         Object historyWas = reader.getVariable(LineReader.DISABLE_HISTORY);
         reader.setVariable(LineReader.DISABLE_HISTORY, true); // answers are not commands to recall
@@ -78,7 +81,8 @@ final class GuidedEntry {
                 }
                 if (i >= Questions.FIRST.size() && !restSaid) {
                     restSaid = true;
-                    out.println(ctx.fold("The rest have defaults; Enter keeps them, 'done' keeps them all.", paint::dim));
+                    out.println(
+                            ctx.fold("The rest have defaults; Enter keeps them, 'done' keeps them all.", paint::dim));
                 }
                 try {
                     a = ask(id, a, position(order, i, a));
@@ -114,7 +118,8 @@ final class GuidedEntry {
         header(position + " " + id, Questions.why(id));
         while (true) {
             String current = Questions.current(id, a);
-            String shown = current != null ? current : Questions.required(id, a) ? "required" : Questions.defaultText(id);
+            String shown =
+                    current != null ? current : Questions.required(id, a) ? "required" : Questions.defaultText(id);
             String line = read("  " + id + " [" + shown + "] > ", id).strip();
             if (line.equals(EXPLAIN)) {
                 explain(id, shown, a);
@@ -122,8 +127,12 @@ final class GuidedEntry {
             }
             if (line.equalsIgnoreCase(DONE)) {
                 if (Questions.first(id, a)) {
-                    say("  'done' comes after the supply questions", ": they decide which error terms count. "
-                            + (Questions.required(id, a) && current == null ? "" : "Enter keeps [" + shown + "]."));
+                    say(
+                            "  'done' comes after the supply questions",
+                            ": they decide which error terms count. "
+                                    + (Questions.required(id, a) && current == null
+                                            ? ""
+                                            : "Enter keeps [" + shown + "]."));
                     continue;
                 }
                 String missing = missingRequired(a);
@@ -237,11 +246,18 @@ final class GuidedEntry {
         if (!units.isEmpty()) {
             out.println(ctx.fold("  units: " + String.join(", ", units) + " (Tab after a number offers them)"));
         }
-        out.println(ctx.fold(needed ? "  no default: an answer is needed" : "  default: " + Questions.defaultText(id)
-                + (shown.equals(Questions.defaultText(id)) ? "" : "; now: " + shown)));
-        out.println(ctx.fold("  " + (needed ? "" : "Enter keeps [" + shown + "]; ")
-                + (Questions.first(id, a) ? "'done' comes after the supply questions" : "'done' keeps all remaining values")
-                + "; Ctrl-C stops and keeps the answers given.", paint::dim));
+        out.println(ctx.fold(
+                needed
+                        ? "  no default: an answer is needed"
+                        : "  default: " + Questions.defaultText(id)
+                                + (shown.equals(Questions.defaultText(id)) ? "" : "; now: " + shown)));
+        out.println(ctx.fold(
+                "  " + (needed ? "" : "Enter keeps [" + shown + "]; ")
+                        + (Questions.first(id, a)
+                                ? "'done' comes after the supply questions"
+                                : "'done' keeps all remaining values")
+                        + "; Ctrl-C stops and keeps the answers given.",
+                paint::dim));
     }
 
     /** The first required question still unanswered, or null. */

@@ -34,6 +34,7 @@ final class LineLimit {
     private final LineReader reader;
     /** Length of the line being discarded; 0 while the line is within the limit. */
     private long length;
+
     private String refusal;
 
     private LineLimit(LineReader reader) {
@@ -78,8 +79,12 @@ final class LineLimit {
 
     /** The one line that says a line was refused. */
     static String refusal(long length) {
-        return String.format(Locale.ROOT, "Refused a line of %d characters: the shell takes lines of at most %d characters; "
-                + "nothing was run or kept in the history.", length, MAX);
+        return String.format(
+                Locale.ROOT,
+                "Refused a line of %d characters: the shell takes lines of at most %d characters; "
+                        + "nothing was run or kept in the history.",
+                length,
+                MAX);
     }
 
     private boolean afterInsert() {

@@ -13,16 +13,25 @@ import java.util.Set;
  * combine keys (the temperature range, the limit in any form) add words of their own.
  */
 final class Questions {
-    private Questions() {
-    }
+    private Questions() {}
 
     /**
      * Asked first, and 'done' is offered only after them: each decides the verdict, and an
      * absent full-scale output or supply variation leaves error terms out (the verdict line
      * then says which).
      */
-    static final List<String> FIRST = List.of("topology", "gain", "rf", "source-resistance", "source-capacitance", "cf",
-            Answers.TEMPERATURE, Answers.LIMIT, "full-scale-output", "supply.voltage", "supply.variation");
+    static final List<String> FIRST = List.of(
+            "topology",
+            "gain",
+            "rf",
+            "source-resistance",
+            "source-capacitance",
+            "cf",
+            Answers.TEMPERATURE,
+            Answers.LIMIT,
+            "full-scale-output",
+            "supply.voltage",
+            "supply.variation");
 
     /**
      * Of {@link #FIRST}, the questions asked there only for a transimpedance stage (which has no
@@ -34,10 +43,23 @@ final class Questions {
     static final List<String> HEADROOM = List.of("output-range", "common-mode-range");
 
     /** Left to {@code set}: derived (rg) and statistics settings with sound defaults. */
-    static final Set<String> NOT_ASKED = Set.of("rg", "r1", "r3", "r4", "source-resistance.minus", "source-resistance.plus",
-            "max-to-sigma", "trials", "max-trials", "seed",
+    static final Set<String> NOT_ASKED = Set.of(
+            "rg",
+            "r1",
+            "r3",
+            "r4",
+            "source-resistance.minus",
+            "source-resistance.plus",
+            "max-to-sigma",
+            "trials",
+            "max-trials",
+            "seed",
             // board-level sources: off unless named, set when the layout is known
-            "thermal-emf.junctions", "thermal-emf.seebeck", "thermal-emf.gradient", "leakage.resistance", "leakage.voltage",
+            "thermal-emf.junctions",
+            "thermal-emf.seebeck",
+            "thermal-emf.gradient",
+            "leakage.resistance",
+            "leakage.voltage",
             "leakage.input");
 
     /** Only asked when a trim is allowed. */
@@ -76,7 +98,8 @@ final class Questions {
 
     /** Whether {@code id} is one of the first questions for this topology ('done' is refused there). */
     static boolean first(String id, Map<String, String> answers) {
-        return FIRST.contains(id) && (!FIRST_FOR_CURRENT_INPUT.contains(id) || topology(answers) == Topology.TRANSIMPEDANCE);
+        return FIRST.contains(id)
+                && (!FIRST_FOR_CURRENT_INPUT.contains(id) || topology(answers) == Topology.TRANSIMPEDANCE);
     }
 
     /** Whether the question at {@code index} of {@link #order()} is asked given the answers so far. */
@@ -94,8 +117,13 @@ final class Questions {
 
     /** Whether a key is asked as part of an earlier question (or, band.high, by the band question). */
     private static boolean covered(String p) {
-        return p.equals("gain") || p.startsWith("temperature.") || p.equals("limit") || p.startsWith("limit.")
-                || FIRST.contains(p) || p.startsWith("output-range.") || p.startsWith("common-mode-range.")
+        return p.equals("gain")
+                || p.startsWith("temperature.")
+                || p.equals("limit")
+                || p.startsWith("limit.")
+                || FIRST.contains(p)
+                || p.startsWith("output-range.")
+                || p.startsWith("common-mode-range.")
                 || p.equals("band.high");
     }
 
@@ -116,8 +144,10 @@ final class Questions {
 
     /** Keys only {@code set} reaches, for the closing hint. */
     static List<String> setOnly(Map<String, String> answers) {
-        return StageKeys.paths().stream().filter(NOT_ASKED::contains)
-                .filter(p -> StageKeys.appliesTo(StageKeys.get(p), topology(answers))).toList();
+        return StageKeys.paths().stream()
+                .filter(NOT_ASKED::contains)
+                .filter(p -> StageKeys.appliesTo(StageKeys.get(p), topology(answers)))
+                .toList();
     }
 
     static String why(String id) {
@@ -177,7 +207,8 @@ final class Questions {
         if (r != null) {
             String lo = StageKeys.get(r.low()).defaultText();
             String hi = StageKeys.get(r.high()).defaultText();
-            return lo.startsWith("mid-supply") ? "mid-supply +/- " + (id.equals("output-range") ? "full-scale-output" : "common-mode-swing")
+            return lo.startsWith("mid-supply")
+                    ? "mid-supply +/- " + (id.equals("output-range") ? "full-scale-output" : "common-mode-swing")
                     : lo.replace(" " + r.unit(), "") + ".." + hi;
         }
         if (id.equals(Answers.SUPPLY)) {
@@ -192,7 +223,9 @@ final class Questions {
 
     /** {@link #required(String)}, and the source and feedback of a transimpedance stage, which have no default. */
     static boolean required(String id, Map<String, String> answers) {
-        return required(id) || topology(answers) == Topology.TRANSIMPEDANCE && Set.of("rf", "source-resistance").contains(id);
+        return required(id)
+                || topology(answers) == Topology.TRANSIMPEDANCE
+                        && Set.of("rf", "source-resistance").contains(id);
     }
 
     /** The value the answers hold for {@code id}, in the shorthand a user would type; null when unanswered. */

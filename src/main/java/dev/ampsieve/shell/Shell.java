@@ -32,8 +32,8 @@ import org.jline.reader.UserInterruptException;
 import org.jline.reader.impl.DefaultParser;
 import org.jline.terminal.Terminal;
 import org.jline.terminal.TerminalBuilder;
-import picocli.CommandLine.Model.OptionSpec;
 import picocli.CommandLine;
+import picocli.CommandLine.Model.OptionSpec;
 
 /**
  * The interactive shell: a JLine line editor in front of the same picocli command tree the
@@ -62,6 +62,7 @@ public final class Shell {
     private Thread running;
     /** Ctrl-C was pressed while the current command ran. */
     private boolean cancelRequested;
+
     private LineLimit lineLimit;
     private ShellState state;
     /** Each line's exit code, in order (the shell's own verbs and the shared commands alike), for tests. */
@@ -75,7 +76,8 @@ public final class Shell {
      * @param historyFile where to keep the history; null for none
      * @param env         the environment (NO_COLOR)
      */
-    public Shell(RootCommand root, List<String> rootArgs, Terminal terminal, Path historyFile, Map<String, String> env) {
+    public Shell(
+            RootCommand root, List<String> rootArgs, Terminal terminal, Path historyFile, Map<String, String> env) {
         this.root = root;
         this.rootArgs = List.copyOf(rootArgs);
         this.terminal = terminal;
@@ -90,11 +92,13 @@ public final class Shell {
      * @param rootArgs the options the program was started with
      */
     public static int start(RootCommand root, List<String> rootArgs) {
-        try (Terminal t = TerminalBuilder.builder().system(true).name("ampsieve").build()) {
+        try (Terminal t =
+                TerminalBuilder.builder().system(true).name("ampsieve").build()) {
             Map<String, String> env = System.getenv();
             return new Shell(root, rootArgs, t, XdgPaths.history(env, System.getProperty("user.home")), env).run();
         } catch (IOException e) {
-            System.err.println("ampsieve: cannot open the terminal (" + e.getMessage() + "); give a command to run instead");
+            System.err.println(
+                    "ampsieve: cannot open the terminal (" + e.getMessage() + "); give a command to run instead");
             return ExitCode.INTERNAL.code();
         }
     }
@@ -105,7 +109,8 @@ public final class Shell {
         boolean dumb = type.startsWith("dumb");
         String noColor = env.get("NO_COLOR");
         boolean color = !dumb && (noColor == null || noColor.isEmpty());
-        boolean unicode = !asciiAsked && t.encoding() != null
+        boolean unicode = !asciiAsked
+                && t.encoding() != null
                 && t.encoding().name().toUpperCase(Locale.ROOT).startsWith("UTF");
         return new OutputStyle(t.getWidth(), unicode, color);
     }
@@ -120,13 +125,17 @@ public final class Shell {
         org.jline.reader.Completer[] completer = new org.jline.reader.Completer[1];
         DefaultParser parser = new DefaultParser();
         parser.setEofOnUnclosedQuote(false); // an unclosed quote ends at the end of the line
-        LineReaderBuilder builder = LineReaderBuilder.builder().terminal(terminal).appName("ampsieve").parser(parser)
+        LineReaderBuilder builder = LineReaderBuilder.builder()
+                .terminal(terminal)
+                .appName("ampsieve")
+                .parser(parser)
                 .completer((r, l, c) -> {
                     if (completer[0] != null) {
                         completer[0].complete(r, l, c);
                     }
                 })
-                .variable(LineReader.HISTORY_SIZE, 1000).variable(LineReader.HISTORY_FILE_SIZE, 5000)
+                .variable(LineReader.HISTORY_SIZE, 1000)
+                .variable(LineReader.HISTORY_FILE_SIZE, 5000)
                 .option(LineReader.Option.DISABLE_EVENT_EXPANSION, true) // '!' is text, not a history reference
                 .option(LineReader.Option.HISTORY_IGNORE_SPACE, true)
                 .history(new LineLimit.History());
@@ -160,7 +169,8 @@ public final class Shell {
         completer[0] = new ShellCompleter(ctx, tree);
 
         try {
-            tree.parseArgs(rootArgs.toArray(String[]::new)); // --catalog and friends before the banner reads the catalog
+            tree.parseArgs(
+                    rootArgs.toArray(String[]::new)); // --catalog and friends before the banner reads the catalog
         } catch (CommandLine.ParameterException e) {
             err.println(e.getMessage());
         }
@@ -194,7 +204,9 @@ public final class Shell {
                 if (ctx.state.unsaved() && !ctx.warnedUnsaved) {
                     ctx.warnedUnsaved = true;
                     ctx.out.println();
-                    ctx.out.println(ctx.fold("The current stage is not saved: 'save FILE' keeps it; Ctrl-D again leaves without saving."));
+                    ctx.out.println(
+                            ctx.fold(
+                                    "The current stage is not saved: 'save FILE' keeps it; Ctrl-D again leaves without saving."));
                     continue;
                 }
                 ctx.out.println();
@@ -239,7 +251,9 @@ public final class Shell {
      * text needs rewriting for it.
      */
     static List<String> withoutLeadingProgramName(List<String> words) {
-        return words.size() > 1 && words.get(0).equals(PROGRAM_NAME) ? new ArrayList<>(words.subList(1, words.size())) : words;
+        return words.size() > 1 && words.get(0).equals(PROGRAM_NAME)
+                ? new ArrayList<>(words.subList(1, words.size()))
+                : words;
     }
 
     /** The program's name as the command line types it. */
@@ -262,8 +276,13 @@ public final class Shell {
         CommandLine sub = tree.getSubcommands().get(name);
         if (sub == null && !name.startsWith("-")) {
             String near = Fields.closest(name, tree.getSubcommands().keySet());
-            exitCodes.add(failure(new Refusal("unknown command '" + name + "'" + (near != null ? "; did you mean '" + near + "'?" : "")
-                    + " ('help' lists the commands)", ExitCode.USAGE, Place.field(name)), err));
+            exitCodes.add(failure(
+                    new Refusal(
+                            "unknown command '" + name + "'" + (near != null ? "; did you mean '" + near + "'?" : "")
+                                    + " ('help' lists the commands)",
+                            ExitCode.USAGE,
+                            Place.field(name)),
+                    err));
             return;
         }
         // a Ctrl-C at the prompt can leave this thread interrupted (the line reader restores the
@@ -342,8 +361,10 @@ public final class Shell {
                 }
             }
         }
-        return new Refusal("'" + line.get(0) + "' needs a stage: type 'ask' to describe one, 'load FILE', or add --stage FILE",
-                ExitCode.USAGE, Place.field(StageOption.NAME));
+        return new Refusal(
+                "'" + line.get(0) + "' needs a stage: type 'ask' to describe one, 'load FILE', or add --stage FILE",
+                ExitCode.USAGE,
+                Place.field(StageOption.NAME));
     }
 
     /** Exit status of a command stopped by Ctrl-C: 128 + SIGINT, as shells report it. */
@@ -355,7 +376,10 @@ public final class Shell {
             // whatever a command throws after Ctrl-C (Cancelled, or a read cut short) is the interrupt
             Thread.interrupted(); // printing must not meet it
             err.println();
-            err.println(state != null && state.hasStage() ? "Interrupted; the current stage is as it was." : "Interrupted.");
+            err.println(
+                    state != null && state.hasStage()
+                            ? "Interrupted; the current stage is as it was."
+                            : "Interrupted.");
             return INTERRUPTED;
         }
         return Failures.report(ex, err, root.verbose(), Failures.Voice.SHELL).code();
@@ -377,7 +401,9 @@ public final class Shell {
             return s;
         }
         Paint paint = new Paint(st.color());
-        return java.util.Arrays.stream(dev.ampsieve.report.Wrap.prose(s, st.width()).split("\n", -1)).map(paint::red)
+        return java.util.Arrays.stream(
+                        dev.ampsieve.report.Wrap.prose(s, st.width()).split("\n", -1))
+                .map(paint::red)
                 .collect(java.util.stream.Collectors.joining("\n"));
     }
 
@@ -397,8 +423,10 @@ public final class Shell {
         if (historyNote != null) {
             out.println(ctx.fold(historyNote, paint::dim));
         }
-        out.println(ctx.foldBold("Type ask to describe your stage, help for the commands, Tab to complete, Ctrl-D to leave.",
-                "ask", "help"));
+        out.println(ctx.foldBold(
+                "Type ask to describe your stage, help for the commands, Tab to complete, Ctrl-D to leave.",
+                "ask",
+                "help"));
     }
 
     private String catalogLine() {
@@ -406,8 +434,10 @@ public final class Shell {
             Catalog c = root.catalog();
             long errors = c.problems().stream().filter(Problem::isError).count();
             return "Catalog " + c.root() + ": " + c.parts().size() + " part(s)"
-                    + (c.problems().isEmpty() ? "." : "; " + errors + " error(s), " + (c.problems().size() - errors)
-                    + " warning(s): 'check' lists them.");
+                    + (c.problems().isEmpty()
+                            ? "."
+                            : "; " + errors + " error(s), " + (c.problems().size() - errors)
+                                    + " warning(s): 'check' lists them.");
         } catch (InputException e) {
             return "Catalog " + root.catalogDir() + ": " + e.problems().size() + " problem(s); 'check' lists them.";
         } catch (Refusal | RuntimeException e) {

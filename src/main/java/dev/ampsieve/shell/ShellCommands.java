@@ -29,12 +29,12 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 import org.jline.reader.EndOfFileException;
 import org.jline.reader.UserInterruptException;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
-import picocli.CommandLine;
 
 /**
  * The shell's own verbs: describing, changing, showing, saving and loading the current stage,
@@ -42,8 +42,7 @@ import picocli.CommandLine;
  * is a file), so {@code help} lists them beside the shared commands and completion knows them.
  */
 final class ShellCommands {
-    private ShellCommands() {
-    }
+    private ShellCommands() {}
 
     /** Names of the shell's own verbs, for grouping in help. */
     static final List<String> NAMES = List.of("ask", "set", "unset", "show", "save", "load", "help", "quit");
@@ -59,8 +58,15 @@ final class ShellCommands {
     }
 
     static List<Object> all(ShellContext ctx) {
-        return List.of(new Ask(ctx), new SetKey(ctx), new UnsetKey(ctx), new Show(ctx), new Save(ctx), new Load(ctx),
-                new Help(ctx), new Quit(ctx));
+        return List.of(
+                new Ask(ctx),
+                new SetKey(ctx),
+                new UnsetKey(ctx),
+                new Show(ctx),
+                new Save(ctx),
+                new Load(ctx),
+                new Help(ctx),
+                new Quit(ctx));
     }
 
     /** The base: the context and where to print. */
@@ -123,8 +129,12 @@ final class ShellCommands {
             out().println();
             int code = Show.print(ctx, out(), false);
             out().println();
-            out().println(ctx.foldBold("Next: rank lists the parts that fit, save FILE keeps this stage, "
-                    + "set KEY VALUE changes one value.", "rank", "save FILE", "set KEY VALUE"));
+            out().println(ctx.foldBold(
+                    "Next: rank lists the parts that fit, save FILE keeps this stage, "
+                            + "set KEY VALUE changes one value.",
+                    "rank",
+                    "save FILE",
+                    "set KEY VALUE"));
             List<String> more = Questions.setOnly(ctx.state.answers());
             out().println(ctx.fold("Not asked (set them if needed): " + String.join(", ", more) + ".", paint()::dim));
             return code;
@@ -155,12 +165,17 @@ final class ShellCommands {
         }
     }
 
-    @Command(name = "set", description = "Change one stage value, checked with its unit. Examples: set limit 10 uV input; "
-            + "set temperature -40..85 C; set output-range 0.1..2.4 V; set band 0.1..10 Hz; set supply 5 V ± 0.25 V; "
-            + "set supply.variation 0.25 V; set rf 100k.")
+    @Command(
+            name = "set",
+            description = "Change one stage value, checked with its unit. Examples: set limit 10 uV input; "
+                    + "set temperature -40..85 C; set output-range 0.1..2.4 V; set band 0.1..10 Hz; set supply 5 V ± 0.25 V; "
+                    + "set supply.variation 0.25 V; set rf 100k.")
     static final class SetKey extends Base {
-        @Parameters(index = "0", paramLabel = "KEY", description = "A stage key (Tab lists them; a block's key as block.key), or a range for both ends: "
-                + "temperature, band, output-range, common-mode-range; or supply (voltage ± variation).")
+        @Parameters(
+                index = "0",
+                paramLabel = "KEY",
+                description = "A stage key (Tab lists them; a block's key as block.key), or a range for both ends: "
+                        + "temperature, band, output-range, common-mode-range; or supply (voltage ± variation).")
         String key;
 
         @Parameters(index = "1..*", arity = "1..*", paramLabel = "VALUE", description = "The value with its unit.")
@@ -183,8 +198,10 @@ final class ShellCommands {
             Map<String, String> next = change.applyTo(ctx.state.answers());
             List<Problem> problems = StageCheck.problemsFor(next, change.paths());
             if (!problems.isEmpty()) {
-                throw new Refusal(id + ": " + StageCheck.brief(problems.get(0)) + " (" + Questions.why(id) + ")",
-                        ExitCode.FINDINGS, Place.field(id));
+                throw new Refusal(
+                        id + ": " + StageCheck.brief(problems.get(0)) + " (" + Questions.why(id) + ")",
+                        ExitCode.FINDINGS,
+                        Place.field(id));
             }
             boolean had = ctx.state.hasStage();
             if (had) {
@@ -192,10 +209,13 @@ final class ShellCommands {
             } else {
                 ctx.state.replace(next, null, false);
             }
-            out().println(id + " = " + Questions.current(id, next) + (change.note() != null ? "  (" + change.note() + ")" : ""));
-            List<Problem> rest = StageCheck.problems(next).stream().filter(Problem::isError).toList();
+            out().println(id + " = " + Questions.current(id, next)
+                    + (change.note() != null ? "  (" + change.note() + ")" : ""));
+            List<Problem> rest =
+                    StageCheck.problems(next).stream().filter(Problem::isError).toList();
             if (!rest.isEmpty()) {
-                out().println(ctx.fold("The stage is not complete yet: " + StageCheck.brief(rest.get(0)), paint()::dim));
+                out().println(ctx.fold(
+                        "The stage is not complete yet: " + StageCheck.brief(rest.get(0)), paint()::dim));
             }
             return ExitCode.OK.code();
         }
@@ -286,17 +306,19 @@ final class ShellCommands {
             out.println("  " + pad("noise gain", w) + Units.format(s.noiseGain(), Dimension.NUMBER, 4)
                     + "   (input errors reach the output multiplied by this)");
             boolean currentIn = s.topology() == dev.ampsieve.stage.Topology.TRANSIMPEDANCE;
-            out.println("  " + pad("signal gain", w) + (currentIn ? Units.format(s.signalGain(), Dimension.RESISTANCE, 4)
-                    + " (volts per ampere)" : Units.format(s.signalGain(), Dimension.NUMBER, 4)));
+            out.println("  " + pad("signal gain", w)
+                    + (currentIn
+                            ? Units.format(s.signalGain(), Dimension.RESISTANCE, 4) + " (volts per ampere)"
+                            : Units.format(s.signalGain(), Dimension.NUMBER, 4)));
             String resistors = resistorLine(s.network());
             if (!resistors.isEmpty()) {
                 out.println("  " + pad("network", w) + resistors);
             }
             double limit = s.limitVolts();
-            out.println("  " + pad("limit at the output", w) + Units.format(limit, Dimension.VOLTAGE)
-                    + "   (" + s.criterion() + ")");
-            out.println("  " + pad("limit at the input", w) + Units.format(limit / s.sourceGain(), currentIn ? Dimension.CURRENT
-                    : Dimension.VOLTAGE));
+            out.println("  " + pad("limit at the output", w) + Units.format(limit, Dimension.VOLTAGE) + "   ("
+                    + s.criterion() + ")");
+            out.println("  " + pad("limit at the input", w)
+                    + Units.format(limit / s.sourceGain(), currentIn ? Dimension.CURRENT : Dimension.VOLTAGE));
             out.println("  " + pad("farthest from 25 °C", w) + Units.format(s.deltaT(), Dimension.NUMBER) + " °C");
             String left = dev.ampsieve.report.Uncounted.ofStage(s);
             if (!left.isEmpty()) {
@@ -304,7 +326,8 @@ final class ShellCommands {
                 out.println(ctx.foldBold("Every verdict: " + left + ".", "Every verdict"));
             }
             if (!all) {
-                out.println(paint.dim("Other keys keep their defaults: 'show --all' lists them, 'set KEY VALUE' changes one."));
+                out.println(paint.dim(
+                        "Other keys keep their defaults: 'show --all' lists them, 'set KEY VALUE' changes one."));
             }
             return ExitCode.OK.code();
         }
@@ -313,7 +336,8 @@ final class ShellCommands {
         static List<String> displayIds() {
             List<String> out = new ArrayList<>();
             for (String id : Answers.ids()) {
-                boolean combined = id.equals(Answers.SUPPLY) || Answers.range(id) != null && !id.equals(Answers.TEMPERATURE);
+                boolean combined =
+                        id.equals(Answers.SUPPLY) || Answers.range(id) != null && !id.equals(Answers.TEMPERATURE);
                 if (id.startsWith("temperature.") || id.startsWith("limit.") || combined) {
                     continue;
                 }
@@ -323,33 +347,34 @@ final class ShellCommands {
         }
 
         /** The network's parts in one line, as the stage file names them. */
-    private static String resistorLine(dev.ampsieve.stage.Network n) {
-        return switch (n.topology()) {
-            case NON_INVERTING -> {
-                dev.ampsieve.stage.NonInverting x = (dev.ampsieve.stage.NonInverting) n;
-                yield "rf " + ohms(x.rf()) + ", rg " + ohms(x.rg());
-            }
-            case INVERTING -> {
-                dev.ampsieve.stage.Inverting x = (dev.ampsieve.stage.Inverting) n;
-                yield "rf " + ohms(x.rf()) + ", rg " + ohms(x.rg());
-            }
-            case FOLLOWER -> "";
-            case DIFFERENCE -> {
-                dev.ampsieve.stage.Difference x = (dev.ampsieve.stage.Difference) n;
-                yield "r1 " + ohms(x.r1()) + ", r2 " + ohms(x.r2()) + ", r3 " + ohms(x.r3()) + ", r4 " + ohms(x.r4());
-            }
-            case TRANSIMPEDANCE -> {
-                dev.ampsieve.stage.Transimpedance x = (dev.ampsieve.stage.Transimpedance) n;
-                yield "rf " + ohms(x.rf()) + ", cf " + Units.format(x.cf(), Dimension.CAPACITANCE);
-            }
-        };
-    }
+        private static String resistorLine(dev.ampsieve.stage.Network n) {
+            return switch (n.topology()) {
+                case NON_INVERTING -> {
+                    dev.ampsieve.stage.NonInverting x = (dev.ampsieve.stage.NonInverting) n;
+                    yield "rf " + ohms(x.rf()) + ", rg " + ohms(x.rg());
+                }
+                case INVERTING -> {
+                    dev.ampsieve.stage.Inverting x = (dev.ampsieve.stage.Inverting) n;
+                    yield "rf " + ohms(x.rf()) + ", rg " + ohms(x.rg());
+                }
+                case FOLLOWER -> "";
+                case DIFFERENCE -> {
+                    dev.ampsieve.stage.Difference x = (dev.ampsieve.stage.Difference) n;
+                    yield "r1 " + ohms(x.r1()) + ", r2 " + ohms(x.r2()) + ", r3 " + ohms(x.r3()) + ", r4 "
+                            + ohms(x.r4());
+                }
+                case TRANSIMPEDANCE -> {
+                    dev.ampsieve.stage.Transimpedance x = (dev.ampsieve.stage.Transimpedance) n;
+                    yield "rf " + ohms(x.rf()) + ", cf " + Units.format(x.cf(), Dimension.CAPACITANCE);
+                }
+            };
+        }
 
-    private static String ohms(double v) {
-        return Units.format(v, Dimension.RESISTANCE);
-    }
+        private static String ohms(double v) {
+            return Units.format(v, Dimension.RESISTANCE);
+        }
 
-    private static String pad(String s, int w) {
+        private static String pad(String s, int w) {
             return s.length() >= w ? s + " " : s + " ".repeat(w - s.length());
         }
     }
@@ -373,8 +398,10 @@ final class ShellCommands {
             }
             String notAFile = notARegularFile(file);
             if (notAFile != null) {
-                throw new Refusal(file + " is " + notAFile + "; save replaces only regular files, so it was left as it is: "
-                        + "give a new file name", ExitCode.USAGE);
+                throw new Refusal(
+                        file + " is " + notAFile + "; save replaces only regular files, so it was left as it is: "
+                                + "give a new file name",
+                        ExitCode.USAGE);
             }
             boolean overwrite = force;
             if (Files.exists(file, LinkOption.NOFOLLOW_LINKS) && !force) {
@@ -467,10 +494,12 @@ final class ShellCommands {
             ctx.state.replace(answers(YamlFiles.read(file)), file, true);
             Map<String, String> a = ctx.state.answers();
             // a transimpedance stage has no gain: its rf is what sets the output per ampere
-            String gain = Questions.topology(a) == dev.ampsieve.stage.Topology.TRANSIMPEDANCE ? "rf " + a.get("rf")
+            String gain = Questions.topology(a) == dev.ampsieve.stage.Topology.TRANSIMPEDANCE
+                    ? "rf " + a.get("rf")
                     : "gain " + Questions.current("gain", a);
-            out().println(ctx.fold("Loaded " + file + ": " + Questions.topology(a).key() + ", " + gain + ", "
-                    + Questions.current(Answers.LIMIT, a) + " limit. 'show' lists it."));
+            out().println(ctx.fold(
+                    "Loaded " + file + ": " + Questions.topology(a).key() + ", " + gain + ", "
+                            + Questions.current(Answers.LIMIT, a) + " limit. 'show' lists it."));
             return ExitCode.OK.code();
         }
 
@@ -500,7 +529,10 @@ final class ShellCommands {
         }
     }
 
-    @Command(name = "help", description = "List the commands, show one command's options (help COMMAND), or a reference page (help query|stage-keys|catalog-keys|units).")
+    @Command(
+            name = "help",
+            description =
+                    "List the commands, show one command's options (help COMMAND), or a reference page (help query|stage-keys|catalog-keys|units).")
     static final class Help extends Base {
         @Parameters(arity = "0..1", paramLabel = "COMMAND", description = "A command name.")
         String command;
@@ -577,7 +609,8 @@ final class ShellCommands {
         public Integer call() throws UserError {
             if (ctx.state.unsaved() && !ctx.warnedUnsaved) {
                 ctx.warnedUnsaved = true;
-                out().println(ctx.fold("The current stage is not saved: 'save FILE' keeps it; 'quit' again leaves without saving."));
+                out().println(ctx.fold(
+                        "The current stage is not saved: 'save FILE' keeps it; 'quit' again leaves without saving."));
                 return ExitCode.OK.code();
             }
             ctx.quit = true;

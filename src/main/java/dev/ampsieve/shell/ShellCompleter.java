@@ -37,6 +37,7 @@ final class ShellCompleter implements Completer {
 
     /** A word that ends in a number, so a unit may follow directly. */
     private static final Pattern ENDS_IN_NUMBER = Pattern.compile(".*(\\d|\\d\\.)$");
+
     private static final Pattern NUMBER = Pattern.compile("[-+]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][-+]?\\d+)?");
 
     ShellCompleter(ShellContext ctx, CommandLine tree) {
@@ -60,14 +61,22 @@ final class ShellCompleter implements Completer {
      * putting a raw ESC on the command line.
      */
     static Candidate visible(Candidate c) {
-        return new Candidate(Visible.of(c.value()), Visible.of(c.displ()), Visible.of(c.group()), Visible.of(c.descr()),
-                c.suffix(), c.key(), c.complete(), c.sort());
+        return new Candidate(
+                Visible.of(c.value()),
+                Visible.of(c.displ()),
+                Visible.of(c.group()),
+                Visible.of(c.descr()),
+                c.suffix(),
+                c.key(),
+                c.complete(),
+                c.sort());
     }
 
     private void offer(LineReader reader, ParsedLine line, List<Candidate> out) {
         List<String> words = line.words();
         int idx = line.wordIndex();
-        String word = line.word().substring(0, Math.min(line.wordCursor(), line.word().length()));
+        String word =
+                line.word().substring(0, Math.min(line.wordCursor(), line.word().length()));
         String question = ctx.question;
         if (question != null) {
             value(question, word, idx > 0 ? words.get(idx - 1) : null, out);
@@ -117,7 +126,7 @@ final class ShellCompleter implements Completer {
                 commands(out);
                 return;
             }
-            default -> { }
+            default -> {}
         }
         for (PositionalParamSpec p : spec.positionalParameters()) {
             if (p.index().contains(position)) {
@@ -163,7 +172,8 @@ final class ShellCompleter implements Completer {
     }
 
     private static boolean balanced(String s) {
-        return s.chars().filter(c -> c == '(').count() == s.chars().filter(c -> c == ')').count();
+        return s.chars().filter(c -> c == '(').count()
+                == s.chars().filter(c -> c == ')').count();
     }
 
     /** Index among the positional words before {@code idx}, skipping options and their values. */
@@ -189,8 +199,10 @@ final class ShellCompleter implements Completer {
         Class<?> type = arg.type();
         if (label.contains("PART")) {
             parts(out);
-        } else if (Path.class.isAssignableFrom(type) || File.class.isAssignableFrom(type)
-                || label.contains("FILE") || label.contains("DIR")) {
+        } else if (Path.class.isAssignableFrom(type)
+                || File.class.isAssignableFrom(type)
+                || label.contains("FILE")
+                || label.contains("DIR")) {
             files.complete(reader, line, out);
         } else if (arg.completionCandidates() != null) {
             for (String c : arg.completionCandidates()) {

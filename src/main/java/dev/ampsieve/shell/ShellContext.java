@@ -17,6 +17,7 @@ final class ShellContext {
     Paint paint;
     /** The stage key being asked, so completion offers its words and units; null at the command prompt. */
     volatile String question;
+
     boolean quit;
     /** Set after one warning about an unsaved stage, so a second quit leaves. */
     boolean warnedUnsaved;
@@ -38,7 +39,8 @@ final class ShellContext {
 
     /** Folded, then each line painted on its own (an escape sequence never spans a line break). */
     String fold(String text, UnaryOperator<String> how) {
-        return java.util.Arrays.stream(fold(text).split("\n", -1)).map(how)
+        return java.util.Arrays.stream(fold(text).split("\n", -1))
+                .map(how)
                 .collect(java.util.stream.Collectors.joining("\n"));
     }
 

@@ -18,15 +18,25 @@ import java.util.Set;
  * incomplete; only the problems that concern the keys just answered are reported then.
  */
 final class StageCheck {
-    private StageCheck() {
-    }
+    private StageCheck() {}
 
     /** How a typed-in stage is named in messages. */
     static final Path NAME = Path.of("(current stage)");
 
     /** The topology and its network's keys decide the network together; a problem in one concerns them all. */
-    private static final Set<String> RESISTORS = Set.of("gain", "rf", "rg", "topology", "r1", "r2", "r3", "r4", "cf",
-            "source-resistance", "source-capacitance", "balance-resistance");
+    private static final Set<String> RESISTORS = Set.of(
+            "gain",
+            "rf",
+            "rg",
+            "topology",
+            "r1",
+            "r2",
+            "r3",
+            "r4",
+            "cf",
+            "source-resistance",
+            "source-capacitance",
+            "balance-resistance");
 
     /** The stage the answers describe. */
     static Stage stage(Map<String, String> answers) throws InputException {
@@ -44,9 +54,11 @@ final class StageCheck {
         try {
             loaded = StageLoader.parseWithWarnings(StageWriter.toYaml(answers), shown);
         } catch (InputException e) {
-            throw new InputException(e.problems().stream().map(p -> unplaced(p, shown)).toList());
+            throw new InputException(
+                    e.problems().stream().map(p -> unplaced(p, shown)).toList());
         }
-        List<Problem> warnings = loaded.warnings().stream().map(p -> unplaced(p, shown)).toList();
+        List<Problem> warnings =
+                loaded.warnings().stream().map(p -> unplaced(p, shown)).toList();
         return new StageSource.Given(loaded.stage(), warnings, name, name);
     }
 

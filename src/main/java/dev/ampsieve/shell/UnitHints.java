@@ -8,8 +8,7 @@ import java.util.List;
  * in the spelling {@link dev.ampsieve.units.Units#parse} reads (a test holds them to that).
  */
 final class UnitHints {
-    private UnitHints() {
-    }
+    private UnitHints() {}
 
     static List<String> of(Dimension d) {
         if (d == null) {

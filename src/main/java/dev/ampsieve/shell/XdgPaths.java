@@ -9,8 +9,7 @@ import java.util.Map;
  * The specification says a relative path in the variable is invalid and must be ignored.
  */
 final class XdgPaths {
-    private XdgPaths() {
-    }
+    private XdgPaths() {}
 
     static Path history(Map<String, String> env, String userHome) {
         String data = env.get("XDG_DATA_HOME");

@@ -12,12 +12,18 @@ package dev.ampsieve.stage;
  * @param leakageVoltage    the voltage driving it (a nearby trace's potential relative to the node), V
  * @param leakageInput      the input it flows into
  */
-public record Board(int junctions, double seebeck, double gradient, double leakageResistance, double leakageVoltage,
+public record Board(
+        int junctions,
+        double seebeck,
+        double gradient,
+        double leakageResistance,
+        double leakageVoltage,
         Input leakageInput) {
 
     /** Which amplifier input a leakage current flows into. */
     public enum Input {
-        PLUS("plus"), MINUS("minus");
+        PLUS("plus"),
+        MINUS("minus");
 
         private final String key;
 

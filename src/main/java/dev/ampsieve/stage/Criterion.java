@@ -3,7 +3,11 @@ package dev.ampsieve.stage;
 /** How a part is judged against the limit: worst-case sum, RSS, or a yield target (0..1). */
 public record Criterion(Kind kind, double yieldTarget) {
 
-    public enum Kind { WORST_CASE, RSS, YIELD }
+    public enum Kind {
+        WORST_CASE,
+        RSS,
+        YIELD
+    }
 
     public static final Criterion WORST_CASE = new Criterion(Kind.WORST_CASE, Double.NaN);
     public static final Criterion RSS = new Criterion(Kind.RSS, Double.NaN);
@@ -17,7 +21,8 @@ public record Criterion(Kind kind, double yieldTarget) {
         return switch (kind) {
             case WORST_CASE -> "worst-case";
             case RSS -> "rss";
-            case YIELD -> "yield " + dev.ampsieve.units.Units.format(yieldTarget, dev.ampsieve.units.Dimension.RATIO, 4);
+            case YIELD ->
+                "yield " + dev.ampsieve.units.Units.format(yieldTarget, dev.ampsieve.units.Dimension.RATIO, 4);
         };
     }
 }

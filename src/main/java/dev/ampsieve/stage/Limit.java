@@ -11,7 +11,13 @@ package dev.ampsieve.stage;
  */
 public record Limit(Kind kind, double value, int bits, double reference) {
 
-    public enum Kind { OUTPUT, INPUT, INPUT_CURRENT, PERCENT_OF_FULL_SCALE, LSB }
+    public enum Kind {
+        OUTPUT,
+        INPUT,
+        INPUT_CURRENT,
+        PERCENT_OF_FULL_SCALE,
+        LSB
+    }
 
     public static Limit output(double volts) {
         return new Limit(Kind.OUTPUT, volts, 0, 0);

@@ -381,10 +381,36 @@ public record Stage(
         }
 
         public Stage build() {
-            return new Stage(network, tMin, tMax, supplyVoltage,
-                    supplyVariation, commonModeSwing, commonModeRange, outputRange, bandLow, bandHigh, filterOrder,
-                    fullScaleOutput, ratioTolerance, ratioTempco, serviceLife, limit, criterion, maxToSigma, trials,
-                    maxTrials, seed, trim, quantity, maxPrice, acCoupled, loadResistance, sampleRate, board, where);
+            return new Stage(
+                    network,
+                    tMin,
+                    tMax,
+                    supplyVoltage,
+                    supplyVariation,
+                    commonModeSwing,
+                    commonModeRange,
+                    outputRange,
+                    bandLow,
+                    bandHigh,
+                    filterOrder,
+                    fullScaleOutput,
+                    ratioTolerance,
+                    ratioTempco,
+                    serviceLife,
+                    limit,
+                    criterion,
+                    maxToSigma,
+                    trials,
+                    maxTrials,
+                    seed,
+                    trim,
+                    quantity,
+                    maxPrice,
+                    acCoupled,
+                    loadResistance,
+                    sampleRate,
+                    board,
+                    where);
         }
     }
 }

@@ -19,8 +19,7 @@ import java.util.stream.Collectors;
  */
 public final class StageKeys {
 
-    private StageKeys() {
-    }
+    private StageKeys() {}
 
     /** What kind of value a key takes. */
     public enum Kind {
@@ -51,8 +50,14 @@ public final class StageKeys {
      * @param example     a well-formed value
      * @param why         one line: why the tool asks
      */
-    public record Key(String path, Kind kind, Dimension dimension, List<String> choices, String defaultText,
-                      String example, String why) {
+    public record Key(
+            String path,
+            Kind kind,
+            Dimension dimension,
+            List<String> choices,
+            String defaultText,
+            String example,
+            String why) {
         public Key {
             choices = List.copyOf(choices);
         }
@@ -72,6 +77,7 @@ public final class StageKeys {
 
     /** Seed used when the stage gives none, so two runs of the same files agree. */
     public static final long DEFAULT_SEED = 20_261_201L;
+
     public static final double DEFAULT_RF = 10e3;
     public static final double DEFAULT_T_MIN = 0.0;
     public static final double DEFAULT_T_MAX = 70.0;
@@ -79,20 +85,27 @@ public final class StageKeys {
     public static final double DEFAULT_BAND_HIGH = 10.0;
     /** Datasheet maximum read as 3 sigma: common practice (reference-checks.md §7). */
     public static final double DEFAULT_MAX_TO_SIGMA = 3.0;
+
     public static final int DEFAULT_TRIALS = 20_000;
     public static final int MIN_TRIALS = 100;
     public static final int MAX_TRIALS = 10_000_000;
     /** Cap on the units simulated under a yield criterion while the answer is undecided. */
     public static final int DEFAULT_MAX_TRIALS = 1_000_000;
+
     public static final int DEFAULT_QUANTITY = 1000;
     public static final int MAX_QUANTITY = 1_000_000_000;
 
-    public static final List<String> TOPOLOGIES = java.util.Arrays.stream(Topology.values()).map(Topology::key).toList();
+    public static final List<String> TOPOLOGIES =
+            java.util.Arrays.stream(Topology.values()).map(Topology::key).toList();
     public static final List<String> CRITERIA = List.of("worst-case", "rss", "yield 99.9 %");
-    public static final List<String> TRIM_METHODS = java.util.Arrays.stream(Trim.Method.values()).map(Trim.Method::key).toList();
+    public static final List<String> TRIM_METHODS =
+            java.util.Arrays.stream(Trim.Method.values()).map(Trim.Method::key).toList();
     /** band.filter-order: "none", or the order of the Butterworth low-pass at band.high, 1..{@link Stage#MAX_FILTER_ORDER}. */
-    public static final List<String> FILTER_ORDERS = java.util.stream.Stream.concat(java.util.stream.Stream.of("none"),
-            java.util.stream.IntStream.rangeClosed(1, Stage.MAX_FILTER_ORDER).mapToObj(String::valueOf)).toList();
+    public static final List<String> FILTER_ORDERS = java.util.stream.Stream.concat(
+                    java.util.stream.Stream.of("none"),
+                    java.util.stream.IntStream.rangeClosed(1, Stage.MAX_FILTER_ORDER)
+                            .mapToObj(String::valueOf))
+            .toList();
 
     private static Key q(String path, Dimension d, String def, String example, String why) {
         return new Key(path, Kind.QUANTITY, d, List.of(), def, example, why);
@@ -104,162 +117,405 @@ public final class StageKeys {
 
     /** All keys, most important first. */
     public static final List<Key> ORDERED = List.of(
-            k("gain", Kind.GAIN, List.of(), "required unless rf and rg are given", "100",
+            k(
+                    "gain",
+                    Kind.GAIN,
+                    List.of(),
+                    "required unless rf and rg are given",
+                    "100",
                     "every input error reaches the output multiplied by the noise gain; non-inverting: 1 + rf/rg, "
                             + "inverting: the ratio rf/rg (a sign is ignored); difference: r2/r1; also as '40 dB' "
                             + "(transimpedance: none, rf is the gain)"),
-            q("temperature.min", Dimension.TEMPERATURE, "0 C", "-40 C",
+            q(
+                    "temperature.min",
+                    Dimension.TEMPERATURE,
+                    "0 C",
+                    "-40 C",
                     "drift terms grow with the distance from 25 C; the part must be rated down to here"),
-            q("temperature.max", Dimension.TEMPERATURE, "70 C", "85 C",
+            q(
+                    "temperature.max",
+                    Dimension.TEMPERATURE,
+                    "70 C",
+                    "85 C",
                     "drift and FET bias currents grow with heat; the part must be rated up to here"),
-            q("limit", Dimension.VOLTAGE, "required", "1 mV",
+            q(
+                    "limit",
+                    Dimension.VOLTAGE,
+                    "required",
+                    "1 mV",
                     "the largest error allowed at the output; every part is judged against it "
                             + "(or give one of limit.input, limit.percent-of-full-scale, limit.lsb)"),
-            q("limit.input", Dimension.VOLTAGE, "none", "10 uV",
+            q(
+                    "limit.input",
+                    Dimension.VOLTAGE,
+                    "none",
+                    "10 uV",
                     "the limit referred to the signal source instead; multiplied by the signal gain's magnitude "
                             + "(inverting: rf/(rg + source-resistance))"),
-            q("limit.input-current", Dimension.CURRENT, "none", "1 nA",
+            q(
+                    "limit.input-current",
+                    Dimension.CURRENT,
+                    "none",
+                    "1 nA",
                     "transimpedance only: the limit as a current at the source; multiplied by rf"),
-            q("limit.percent-of-full-scale", Dimension.RATIO, "none", "0.1 %",
+            q(
+                    "limit.percent-of-full-scale",
+                    Dimension.RATIO,
+                    "none",
+                    "0.1 %",
                     "the limit as a share of full-scale-output, the peak excursion (a bare number is read as percent)"),
-            k("limit.lsb", Kind.NUMBER, List.of(), "none", "0.5",
+            k(
+                    "limit.lsb",
+                    Kind.NUMBER,
+                    List.of(),
+                    "none",
+                    "0.5",
                     "the limit in converter codes: lsb x reference / 2^bits"),
             k("limit.bits", Kind.INTEGER, List.of(), "none", "16", "converter resolution for limit.lsb"),
             q("limit.reference", Dimension.VOLTAGE, "none", "2.5 V", "converter reference (full span) for limit.lsb"),
-            k("topology", Kind.CHOICE, TOPOLOGIES, "non-inverting", "non-inverting",
+            k(
+                    "topology",
+                    Kind.CHOICE,
+                    TOPOLOGIES,
+                    "non-inverting",
+                    "non-inverting",
                     "sets the noise gain, how the source enters and the common-mode swing: non-inverting, inverting, "
                             + "follower, difference (one amplifier, four resistors: a bridge or a shunt), transimpedance "
                             + "(a current source such as a photodiode)"),
-            q("rf", Dimension.RESISTANCE, "10 kohm (follower: 0; transimpedance: required)", "100 kohm",
+            q(
+                    "rf",
+                    Dimension.RESISTANCE,
+                    "10 kohm (follower: 0; transimpedance: required)",
+                    "100 kohm",
                     "bias current times rf appears at the output, and rf adds thermal noise; transimpedance: the gain "
                             + "in volts per ampere"),
-            q("rg", Dimension.RESISTANCE, "derived from gain and rf", "1 kohm",
+            q(
+                    "rg",
+                    Dimension.RESISTANCE,
+                    "derived from gain and rf",
+                    "1 kohm",
                     "with rf sets the gain; give it with rf instead of 'gain'"),
-            q("r1", Dimension.RESISTANCE, "r2/gain", "1 kohm",
+            q(
+                    "r1",
+                    Dimension.RESISTANCE,
+                    "r2/gain",
+                    "1 kohm",
                     "difference: the input resistor of the inverting side (the minus leg drives it)"),
-            q("r2", Dimension.RESISTANCE, "10 kohm", "10 kohm",
-                    "difference: the feedback resistor; the gain is r2/r1"),
-            q("r3", Dimension.RESISTANCE, "r1", "1 kohm",
+            q("r2", Dimension.RESISTANCE, "10 kohm", "10 kohm", "difference: the feedback resistor; the gain is r2/r1"),
+            q(
+                    "r3",
+                    Dimension.RESISTANCE,
+                    "r1",
+                    "1 kohm",
                     "difference: the input resistor of the non-inverting side (the plus leg drives it)"),
-            q("r4", Dimension.RESISTANCE, "r2", "10 kohm",
+            q(
+                    "r4",
+                    Dimension.RESISTANCE,
+                    "r2",
+                    "10 kohm",
                     "difference: from the + input to the reference; r4/r3 must match r2/r1 to reject the common mode"),
-            q("cf", Dimension.CAPACITANCE, "0 F (the stability check then names the capacitor needed)", "2 pF",
+            q(
+                    "cf",
+                    Dimension.CAPACITANCE,
+                    "0 F (the stability check then names the capacitor needed)",
+                    "2 pF",
                     "transimpedance: the capacitor across rf; it sets the signal bandwidth and the phase margin"),
-            q("source-capacitance", Dimension.CAPACITANCE, "required (transimpedance)", "50 pF",
+            q(
+                    "source-capacitance",
+                    Dimension.CAPACITANCE,
+                    "required (transimpedance)",
+                    "50 pF",
                     "transimpedance: the source's capacitance (a photodiode's junction plus wiring); above the zero it sets "
                             + "the voltage noise is amplified by 1 + Cs/Cf"),
-            q("source-resistance", Dimension.RESISTANCE, "0 ohm (transimpedance: required)", "350 ohm",
+            q(
+                    "source-resistance",
+                    Dimension.RESISTANCE,
+                    "0 ohm (transimpedance: required)",
+                    "350 ohm",
                     "bias current and current noise flow through it; its thermal noise adds; difference: both legs, or "
                             + "give source-resistance.minus and .plus; transimpedance: the source's shunt resistance"),
-            q("source-resistance.minus", Dimension.RESISTANCE, "0 ohm", "350 ohm",
+            q(
+                    "source-resistance.minus",
+                    Dimension.RESISTANCE,
+                    "0 ohm",
+                    "350 ohm",
                     "difference: the resistance of the leg driving r1"),
-            q("source-resistance.plus", Dimension.RESISTANCE, "0 ohm", "350 ohm",
+            q(
+                    "source-resistance.plus",
+                    Dimension.RESISTANCE,
+                    "0 ohm",
+                    "350 ohm",
                     "difference: the resistance of the leg driving r3; unequal legs unbalance the two ratios"),
-            q("balance-resistance", Dimension.RESISTANCE, "0 ohm", "1 kohm",
+            q(
+                    "balance-resistance",
+                    Dimension.RESISTANCE,
+                    "0 ohm",
+                    "1 kohm",
                     "a resistor from the + input to the reference, in series with source-resistance (non-inverting, "
                             + "follower): matched bias currents cancel when source-resistance + balance-resistance equals "
                             + "rf||rg (inverting: when balance-resistance equals rf||(rg + source-resistance); "
                             + "transimpedance: rf||source-resistance); not for a difference stage"),
-            q("full-scale-output", Dimension.VOLTAGE, "none (open-loop gain, bandwidth and resistor terms not counted)", "2.5 V",
+            q(
+                    "full-scale-output",
+                    Dimension.VOLTAGE,
+                    "none (open-loop gain, bandwidth and resistor terms not counted)",
+                    "2.5 V",
                     "the peak output excursion from the output's zero (a sine's amplitude, not its span): gain errors "
                             + "(open-loop gain, bandwidth, resistors) scale with it, the slew rate needed is 2 pi x band.high x it, "
                             + "and without output-range the output must reach mid-supply +/- it"),
-            q("band.low", Dimension.FREQUENCY, "0.1 Hz", "0.1 Hz",
+            q(
+                    "band.low",
+                    Dimension.FREQUENCY,
+                    "0.1 Hz",
+                    "0.1 Hz",
                     "lower edge for integrating 1/f noise (must be above 0 Hz)"),
-            q("band.high", Dimension.FREQUENCY, "10 Hz", "1 kHz",
+            q(
+                    "band.high",
+                    Dimension.FREQUENCY,
+                    "10 Hz",
+                    "1 kHz",
                     "upper signal frequency: closed-loop gain error, slew rate, and the corner of the filter "
                             + "named by band.filter-order"),
-            k("band.filter-order", Kind.CHOICE, FILTER_ORDERS,
-                    "none", "2",
+            k(
+                    "band.filter-order",
+                    Kind.CHOICE,
+                    FILTER_ORDERS,
+                    "none",
+                    "2",
                     "sets the noise bandwidth: the order of a Butterworth low-pass at band.high after the amplifier "
                             + "(1, an RC: pi/2 x band.high; 2: 1.11 x; 3: 1.05 x), never beyond pi/2 x GBW/NG; 'none' (the "
                             + "default, which never understates the noise): only the closed-loop bandwidth GBW/NG limits it"),
             q("supply.voltage", Dimension.VOLTAGE, "none", "5 V", "the part must run from this total supply"),
-            q("supply.variation", Dimension.VOLTAGE, "0 V (supply rejection not counted)", "0.25 V",
+            q(
+                    "supply.variation",
+                    Dimension.VOLTAGE,
+                    "0 V (supply rejection not counted)",
+                    "0.25 V",
                     "peak supply change, times the part's supply rejection; a regulator's tolerance plus "
                             + "ripple (5 % of the supply is common practice for a plain linear regulator)"),
-            q("common-mode-swing", Dimension.VOLTAGE,
+            q(
+                    "common-mode-swing",
+                    Dimension.VOLTAGE,
                     "non-inverting: full-scale-output/gain; follower: full-scale-output; inverting, transimpedance: 0; "
                             + "difference: full-scale-output/(2 x gain); without full-scale-output 0 (common-mode rejection "
-                            + "not counted)", "1 V",
+                            + "not counted)",
+                    "1 V",
                     "peak common-mode change at the inputs (not peak-to-peak); multiplied by the part's common-mode "
                             + "rejection, and without common-mode-range the inputs must reach mid-supply +/- it; difference: "
                             + "at the source, where the resistor mismatch also turns it into output error"),
-            q("common-mode-range.min", Dimension.VOLTAGE, "mid-supply - common-mode-swing", "0.5 V",
+            q(
+                    "common-mode-range.min",
+                    Dimension.VOLTAGE,
+                    "mid-supply - common-mode-swing",
+                    "0.5 V",
                     "lowest input voltage needed, volts above the negative rail (difference: at the source; the pins see "
                             + "it divided by r4/(r3 + r4) about mid-supply)"),
-            q("common-mode-range.max", Dimension.VOLTAGE, "mid-supply + common-mode-swing", "4 V",
+            q(
+                    "common-mode-range.max",
+                    Dimension.VOLTAGE,
+                    "mid-supply + common-mode-swing",
+                    "4 V",
                     "highest input voltage needed, volts above the negative rail (difference: at the source)"),
-            q("output-range.min", Dimension.VOLTAGE, "mid-supply - full-scale-output", "0.1 V",
+            q(
+                    "output-range.min",
+                    Dimension.VOLTAGE,
+                    "mid-supply - full-scale-output",
+                    "0.1 V",
                     "lowest output voltage needed, volts above the negative rail"),
-            q("output-range.max", Dimension.VOLTAGE, "mid-supply + full-scale-output", "4.9 V",
+            q(
+                    "output-range.max",
+                    Dimension.VOLTAGE,
+                    "mid-supply + full-scale-output",
+                    "4.9 V",
                     "highest output voltage needed, volts above the negative rail"),
-            q("resistor-ratio.tolerance", Dimension.RATIO, "0 (with tempco 0: resistor ratio not counted)", "0.1 %",
+            q(
+                    "resistor-ratio.tolerance",
+                    Dimension.RATIO,
+                    "0 (with tempco 0: resistor ratio not counted)",
+                    "0.1 %",
                     "the rf/rg ratio error becomes a gain error at full scale; difference: per pair (r2/r1 and r4/r3), "
                             + "which also limits the common-mode rejection to about (1 + gain)/(2 x tolerance); transimpedance: "
                             + "rf's own tolerance"),
-            q("resistor-ratio.tempco", Dimension.RATIO_DRIFT, "0", "10 ppm/C",
+            q(
+                    "resistor-ratio.tempco",
+                    Dimension.RATIO_DRIFT,
+                    "0",
+                    "10 ppm/C",
                     "ratio change with temperature; a trim at 25 C cannot remove it"),
-            q("service-life", Dimension.TIME, "0 h (long-term drift not counted)", "10 y",
+            q(
+                    "service-life",
+                    Dimension.TIME,
+                    "0 h (long-term drift not counted)",
+                    "10 y",
                     "long-term offset drift grows with the square root of operating time"),
-            k("thermal-emf.junctions", Kind.INTEGER, List.of(), "0 (thermal EMF not counted)", "2",
+            k(
+                    "thermal-emf.junctions",
+                    Kind.INTEGER,
+                    List.of(),
+                    "0 (thermal EMF not counted)",
+                    "2",
                     "board-level: unpaired junctions of dissimilar metals in the input path (a connector, a relay, solder to"
                             + " a lead frame); each adds seebeck x gradient in series with the input"),
-            q("thermal-emf.seebeck", Dimension.VOLTAGE_DRIFT, "required with junctions", "3 uV/C",
+            q(
+                    "thermal-emf.seebeck",
+                    Dimension.VOLTAGE_DRIFT,
+                    "required with junctions",
+                    "3 uV/C",
                     "volts per degree of one junction; common practice: copper to copper under 0.2 uV/C, copper to "
                             + "tin-lead solder 1 to 3 uV/C, copper to a Kovar lead frame about 40 uV/C, oxidised copper up to "
                             + "1 mV/C"),
-            q("thermal-emf.gradient", Dimension.TEMPERATURE, "required with junctions", "0.5 C",
+            q(
+                    "thermal-emf.gradient",
+                    Dimension.TEMPERATURE,
+                    "required with junctions",
+                    "0.5 C",
                     "the temperature difference across the junctions (a warm regulator or part beside them)"),
-            q("leakage.resistance", Dimension.RESISTANCE, "none (leakage not counted)", "10 Gohm",
+            q(
+                    "leakage.resistance",
+                    Dimension.RESISTANCE,
+                    "none (leakage not counted)",
+                    "10 Gohm",
                     "board-level: surface leakage from a nearby trace into the high-impedance input (board, flux residue,"
                             + " humidity); its current adds to that input's bias current"),
-            q("leakage.voltage", Dimension.VOLTAGE, "required with resistance", "12 V",
+            q(
+                    "leakage.voltage",
+                    Dimension.VOLTAGE,
+                    "required with resistance",
+                    "12 V",
                     "the potential of that trace relative to the node"),
-            k("leakage.input", Kind.CHOICE, List.of("plus", "minus"),
-                    "plus (non-inverting, follower, difference); minus (inverting, transimpedance)", "plus",
+            k(
+                    "leakage.input",
+                    Kind.CHOICE,
+                    List.of("plus", "minus"),
+                    "plus (non-inverting, follower, difference); minus (inverting, transimpedance)",
+                    "plus",
                     "the input the leakage reaches: the high-impedance node"),
-            k("criterion", Kind.CRITERION, CRITERIA, "worst-case", "yield 99.9 %",
+            k(
+                    "criterion",
+                    Kind.CRITERION,
+                    CRITERIA,
+                    "worst-case",
+                    "yield 99.9 %",
                     "worst-case sum, root-sum-square, or the share of built units that must pass"),
-            k("max-to-sigma", Kind.NUMBER, List.of(), "3", "3",
+            k(
+                    "max-to-sigma",
+                    Kind.NUMBER,
+                    List.of(),
+                    "3",
+                    "3",
                     "how many standard deviations a datasheet maximum stands for (for the yield)"),
-            k("trials", Kind.INTEGER, List.of(), String.valueOf(DEFAULT_TRIALS), "20000",
+            k(
+                    "trials",
+                    Kind.INTEGER,
+                    List.of(),
+                    String.valueOf(DEFAULT_TRIALS),
+                    "20000",
                     "simulated units for the yield; more gives a narrower interval"),
-            k("max-trials", Kind.INTEGER, List.of(), String.valueOf(DEFAULT_MAX_TRIALS), "1000000",
+            k(
+                    "max-trials",
+                    Kind.INTEGER,
+                    List.of(),
+                    String.valueOf(DEFAULT_MAX_TRIALS),
+                    "1000000",
                     "under a yield criterion, the most units simulated while the interval still contains the target"),
-            k("seed", Kind.INTEGER, List.of(), String.valueOf(DEFAULT_SEED), "42",
+            k(
+                    "seed",
+                    Kind.INTEGER,
+                    List.of(),
+                    String.valueOf(DEFAULT_SEED),
+                    "42",
                     "random seed, so a yield can be reproduced"),
-            k("trim.allowed", Kind.BOOLEAN, List.of(), "false (true once a trim block is written)", "true",
+            k(
+                    "trim.allowed",
+                    Kind.BOOLEAN,
+                    List.of(),
+                    "false (true once a trim block is written)",
+                    "true",
                     "whether each unit may be calibrated; a trim can make a cheaper part fit"),
-            k("trim.method", Kind.CHOICE, TRIM_METHODS, "one-point", "two-temperature",
+            k(
+                    "trim.method",
+                    Kind.CHOICE,
+                    TRIM_METHODS,
+                    "one-point",
+                    "two-temperature",
                     "one-point removes offset at 25 C; two-point also removes the static gain error at 25 C; "
                             + "two-temperature removes offset and its linear drift (calibrated at trim.cold and trim.hot)"),
-            q("trim.cold", Dimension.TEMPERATURE, "temperature.min (two-temperature only)", "-40 C",
+            q(
+                    "trim.cold",
+                    Dimension.TEMPERATURE,
+                    "temperature.min (two-temperature only)",
+                    "-40 C",
                     "lower calibration temperature of a two-temperature trim; outside cold..hot the resolution's error grows"),
-            q("trim.hot", Dimension.TEMPERATURE, "temperature.max (two-temperature only)", "85 C",
+            q(
+                    "trim.hot",
+                    Dimension.TEMPERATURE,
+                    "temperature.max (two-temperature only)",
+                    "85 C",
                     "upper calibration temperature of a two-temperature trim; a wider spacing makes the correction line steadier"),
-            q("trim.resolution", Dimension.VOLTAGE, "0 V", "0.5 mV", "the step of the correction, at the output; it stays"),
-            k("trim.cost", Kind.NUMBER, List.of(), "0", "0.60",
+            q(
+                    "trim.resolution",
+                    Dimension.VOLTAGE,
+                    "0 V",
+                    "0.5 mV",
+                    "the step of the correction, at the output; it stays"),
+            k(
+                    "trim.cost",
+                    Kind.NUMBER,
+                    List.of(),
+                    "0",
+                    "0.60",
                     "cost of trimming one unit (labour, trimmer or DAC, test time), to compare with a better part"),
-            k("quantity", Kind.INTEGER, List.of(), String.valueOf(DEFAULT_QUANTITY), "1000",
+            k(
+                    "quantity",
+                    Kind.INTEGER,
+                    List.of(),
+                    String.valueOf(DEFAULT_QUANTITY),
+                    "1000",
                     "build quantity, for totals over the build (prices stay the catalog's, at their stated quantity)"),
-            k("max-price", Kind.NUMBER, List.of(), "none", "5.00", "ceiling on the part's catalog price per unit (trim cost not included); dearer parts are excluded"),
-            k("ac-coupled", Kind.BOOLEAN, List.of(), "false", "false",
+            k(
+                    "max-price",
+                    Kind.NUMBER,
+                    List.of(),
+                    "none",
+                    "5.00",
+                    "ceiling on the part's catalog price per unit (trim cost not included); dearer parts are excluded"),
+            k(
+                    "ac-coupled",
+                    Kind.BOOLEAN,
+                    List.of(),
+                    "false",
+                    "false",
                     "when true, DC errors count only toward output headroom, not toward the error"),
             // operating point
-            q("load-resistance", Dimension.RESISTANCE, "none (self-heating not counted)", "2 kohm",
+            q(
+                    "load-resistance",
+                    Dimension.RESISTANCE,
+                    "none (self-heating not counted)",
+                    "2 kohm",
                     "the resistance the output drives, returned to mid-supply: with the quiescent current it heats the "
                             + "die (theta-ja), and drift and FET bias currents are read at the die's temperature"),
-            q("sample-rate", Dimension.FREQUENCY, "none (aliases not checked)", "30 kHz",
+            q(
+                    "sample-rate",
+                    Dimension.FREQUENCY,
+                    "none (aliases not checked)",
+                    "30 kHz",
                     "the rate of the converter sampling the output: a chopping frequency or harmonic that folds into the "
                             + "band is named"));
 
-    private static final Map<String, Key> BY_PATH = ORDERED.stream()
-            .collect(Collectors.toUnmodifiableMap(Key::path, Function.identity()));
+    private static final Map<String, Key> BY_PATH =
+            ORDERED.stream().collect(Collectors.toUnmodifiableMap(Key::path, Function.identity()));
 
     /** Blocks: top-level keys whose value is a mapping of their own. */
-    public static final Set<String> SECTIONS = Set.of("temperature", "supply", "common-mode-range", "output-range",
-            "band", "resistor-ratio", "trim", "thermal-emf", "leakage");
+    public static final Set<String> SECTIONS = Set.of(
+            "temperature",
+            "supply",
+            "common-mode-range",
+            "output-range",
+            "band",
+            "resistor-ratio",
+            "trim",
+            "thermal-emf",
+            "leakage");
 
     /** The key at {@code path}, or null. */
     public static Key get(String path) {
@@ -290,7 +546,8 @@ public final class StageKeys {
             case "gain" -> topology != Topology.TRANSIMPEDANCE;
             case "rg" -> topology == Topology.NON_INVERTING || topology == Topology.INVERTING;
             case "rf" -> topology != Topology.DIFFERENCE;
-            case "r1", "r2", "r3", "r4", "source-resistance.minus", "source-resistance.plus" -> topology == Topology.DIFFERENCE;
+            case "r1", "r2", "r3", "r4", "source-resistance.minus", "source-resistance.plus" ->
+                topology == Topology.DIFFERENCE;
             case "cf", "source-capacitance", "limit.input-current" -> topology == Topology.TRANSIMPEDANCE;
             case "limit.input" -> topology != Topology.TRANSIMPEDANCE;
             case "balance-resistance" -> topology != Topology.DIFFERENCE;

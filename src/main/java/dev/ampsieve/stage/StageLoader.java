@@ -30,8 +30,7 @@ import java.util.regex.Pattern;
  */
 public final class StageLoader {
 
-    private StageLoader() {
-    }
+    private StageLoader() {}
 
     // Values no circuit has. Each is refused with its reason (README, "The stage file"); they
     // also keep the budget's arithmetic finite.
@@ -47,6 +46,7 @@ public final class StageLoader {
     static final double MIN_LIMIT = 1e-12;
     /** Coldest and hottest ambient any circuit sees (liquid nitrogen is -196 °C; solder melts near 200 to 300 °C). */
     static final double MIN_AMBIENT = -200;
+
     static final double MAX_AMBIENT = 500;
     /** Longest service life: a century. */
     static final double MAX_LIFE = 100 * 365.25 * 86400;
@@ -169,11 +169,14 @@ public final class StageLoader {
 
     private static Loaded read(Node root) throws InputException {
         if (root instanceof Node.Scalar s && s.text() == null) {
-            throw new InputException(Problem.error(root.at(), "", "the stage file is empty",
-                    "write at least 'gain: 100' and 'limit: 1 mV'"));
+            throw new InputException(Problem.error(
+                    root.at(), "", "the stage file is empty", "write at least 'gain: 100' and 'limit: 1 mV'"));
         }
         if (!(root instanceof Node.Mapping m)) {
-            throw new InputException(Problem.error(root.at(), "", "a stage file must be 'key: value' lines, found " + root.kind(),
+            throw new InputException(Problem.error(
+                    root.at(),
+                    "",
+                    "a stage file must be 'key: value' lines, found " + root.kind(),
                     "write at least 'gain: 100' and 'limit: 1 mV', one per line"));
         }
         Reader r = new Reader(new Fields(new ArrayList<>(), StageLoader::example));
@@ -214,8 +217,12 @@ public final class StageLoader {
                 tMin = ambient(temp, "min", temperature(temp, "min", tMin));
                 tMax = ambient(temp, "max", temperature(temp, "max", tMax));
                 if (tMin > tMax) {
-                    f.error(Fields.where(temp, "min"), "temperature", "min " + Units.format(tMin, Dimension.TEMPERATURE)
-                            + " is above max " + Units.format(tMax, Dimension.TEMPERATURE), "swap the two values");
+                    f.error(
+                            Fields.where(temp, "min"),
+                            "temperature",
+                            "min " + Units.format(tMin, Dimension.TEMPERATURE) + " is above max "
+                                    + Units.format(tMax, Dimension.TEMPERATURE),
+                            "swap the two values");
                 }
             }
 
@@ -227,10 +234,16 @@ public final class StageLoader {
                 supplyVariation = nonNegative(supply, "supply", "variation", Dimension.VOLTAGE, 0.0);
                 volts(supply, "supply", "voltage", supplyVoltage);
                 if (supplyVoltage != null && supplyVariation >= supplyVoltage) {
-                    f.error(Fields.where(supply, "variation"), "supply.variation", "a variation of "
-                            + Units.format(supplyVariation, Dimension.VOLTAGE) + " on a " + Units.format(supplyVoltage, Dimension.VOLTAGE)
-                            + " supply would take it to 0 V or below", "write the peak change, well below the supply, such as '"
-                            + Units.format(supplyVoltage * 0.05, Dimension.VOLTAGE).replace("µ", "u") + "' (5 %)");
+                    f.error(
+                            Fields.where(supply, "variation"),
+                            "supply.variation",
+                            "a variation of "
+                                    + Units.format(supplyVariation, Dimension.VOLTAGE) + " on a "
+                                    + Units.format(supplyVoltage, Dimension.VOLTAGE)
+                                    + " supply would take it to 0 V or below",
+                            "write the peak change, well below the supply, such as '"
+                                    + Units.format(supplyVoltage * 0.05, Dimension.VOLTAGE)
+                                            .replace("µ", "u") + "' (5 %)");
                 }
             }
 
@@ -255,25 +268,40 @@ public final class StageLoader {
                 for (String side : List.of("low", "high")) {
                     Double v = side.equals("low") ? lo : hi;
                     if (v != null && v > MAX_FREQUENCY) {
-                        f.error(Fields.where(band, side), "band." + side, Units.format(v, Dimension.FREQUENCY) + " is above "
-                                + Units.format(MAX_FREQUENCY, Dimension.FREQUENCY) + ", beyond the fastest op amp's gain-bandwidth",
+                        f.error(
+                                Fields.where(band, side),
+                                "band." + side,
+                                Units.format(v, Dimension.FREQUENCY) + " is above "
+                                        + Units.format(MAX_FREQUENCY, Dimension.FREQUENCY)
+                                        + ", beyond the fastest op amp's gain-bandwidth",
                                 "check the prefix (Hz, kHz, MHz); write the top signal frequency, such as '1 kHz'");
                     }
                 }
                 if (lo != null && lo <= 0) {
-                    f.error(Fields.where(band, "low"), "band.low", "the band must start above 0 Hz: 1/f noise grows without bound toward DC",
+                    f.error(
+                            Fields.where(band, "low"),
+                            "band.low",
+                            "the band must start above 0 Hz: 1/f noise grows without bound toward DC",
                             "write 'low: 0.1 Hz' (a common choice for DC stages: about a 10 s observation)");
                 } else if (lo != null) {
                     bandLow = lo;
                 }
                 if (hi != null && hi <= 0) {
-                    f.error(Fields.where(band, "high"), "band.high", "must be more than 0 Hz", "write 'high: 10 Hz' or the top signal frequency");
+                    f.error(
+                            Fields.where(band, "high"),
+                            "band.high",
+                            "must be more than 0 Hz",
+                            "write 'high: 10 Hz' or the top signal frequency");
                 } else if (hi != null) {
                     bandHigh = hi;
                 }
                 if (lo != null && hi != null && lo > 0 && hi > 0 && lo >= hi) {
-                    f.error(Fields.where(band, "low"), "band", "low " + Units.format(lo, Dimension.FREQUENCY)
-                            + " is not below high " + Units.format(hi, Dimension.FREQUENCY), "make 'low' smaller than 'high'");
+                    f.error(
+                            Fields.where(band, "low"),
+                            "band",
+                            "low " + Units.format(lo, Dimension.FREQUENCY) + " is not below high "
+                                    + Units.format(hi, Dimension.FREQUENCY),
+                            "make 'low' smaller than 'high'");
                 }
             }
 
@@ -283,21 +311,32 @@ public final class StageLoader {
             if (ratio != null) {
                 tolerance = nonNegative(ratio, "resistor-ratio", "tolerance", Dimension.RATIO, 0.0);
                 if (tolerance >= 1.0) {
-                    f.error(Fields.where(ratio, "tolerance"), "resistor-ratio.tolerance", "a ratio tolerance of "
-                            + Units.format(tolerance, Dimension.RATIO) + " is not a resistor tolerance", "write it with its unit, such as '0.1 %'");
+                    f.error(
+                            Fields.where(ratio, "tolerance"),
+                            "resistor-ratio.tolerance",
+                            "a ratio tolerance of " + Units.format(tolerance, Dimension.RATIO)
+                                    + " is not a resistor tolerance",
+                            "write it with its unit, such as '0.1 %'");
                 }
                 tempco = nonNegative(ratio, "resistor-ratio", "tempco", Dimension.RATIO_DRIFT, 0.0);
                 if (tempco > MAX_TEMPCO) {
-                    f.error(Fields.where(ratio, "tempco"), "resistor-ratio.tempco", Units.format(tempco, Dimension.RATIO_DRIFT)
-                            + " is above " + Units.format(MAX_TEMPCO, Dimension.RATIO_DRIFT) + ", more than any resistor pair drifts",
+                    f.error(
+                            Fields.where(ratio, "tempco"),
+                            "resistor-ratio.tempco",
+                            Units.format(tempco, Dimension.RATIO_DRIFT) + " is above "
+                                    + Units.format(MAX_TEMPCO, Dimension.RATIO_DRIFT)
+                                    + ", more than any resistor pair drifts",
                             "write the ratio tracking in ppm/C, such as '10 ppm/C'");
                 }
             }
 
             double life = nonNegative(m, "", "service-life", Dimension.TIME, 0.0);
             if (life > MAX_LIFE) {
-                f.error(Fields.where(m, "service-life"), "service-life", Units.format(life, Dimension.TIME) + " is above "
-                        + Units.format(MAX_LIFE, Dimension.TIME) + ", longer than any circuit is kept in service",
+                f.error(
+                        Fields.where(m, "service-life"),
+                        "service-life",
+                        Units.format(life, Dimension.TIME) + " is above " + Units.format(MAX_LIFE, Dimension.TIME)
+                                + ", longer than any circuit is kept in service",
                         "write the operating time in hours or years, such as '10 y'");
             }
             Limit limit = limit(m, fullScale, topology);
@@ -306,7 +345,10 @@ public final class StageLoader {
             double maxToSigma = StageKeys.DEFAULT_MAX_TO_SIGMA;
             Double k = f.number(m, "", "max-to-sigma");
             if (k != null && (k < 1 || k > 10)) {
-                f.error(Fields.where(m, "max-to-sigma"), "max-to-sigma", k + " is outside 1..10",
+                f.error(
+                        Fields.where(m, "max-to-sigma"),
+                        "max-to-sigma",
+                        k + " is outside 1..10",
                         "write how many standard deviations a datasheet maximum stands for; 3 is common practice");
             } else if (k != null) {
                 maxToSigma = k;
@@ -317,7 +359,10 @@ public final class StageLoader {
             int cap = maxTrials != null ? maxTrials : Math.max(n, StageKeys.DEFAULT_MAX_TRIALS);
             if (maxTrials != null && maxTrials < n) {
                 // the cap on an undecided yield cannot stop the run before the units it always simulates
-                f.error(Fields.where(m, "max-trials"), "max-trials", maxTrials + " is below trials (" + n + ")",
+                f.error(
+                        Fields.where(m, "max-trials"),
+                        "max-trials",
+                        maxTrials + " is below trials (" + n + ")",
                         "write max-trials at least " + n + ", or lower trials");
             }
             Long seed = f.longValue(m, "", "seed");
@@ -330,29 +375,64 @@ public final class StageLoader {
             // operating point: the output's load (self-heating) and the converter sampling the output (aliases)
             Double loadResistance = positive(m, "", "load-resistance", Dimension.RESISTANCE);
             if (loadResistance != null && loadResistance < MIN_LOAD) {
-                f.error(Fields.where(m, "load-resistance"), "load-resistance", Units.format(loadResistance, Dimension.RESISTANCE)
-                        + " is below " + Units.format(MIN_LOAD, Dimension.RESISTANCE) + ", a short for an op amp's output",
+                f.error(
+                        Fields.where(m, "load-resistance"),
+                        "load-resistance",
+                        Units.format(loadResistance, Dimension.RESISTANCE) + " is below "
+                                + Units.format(MIN_LOAD, Dimension.RESISTANCE) + ", a short for an op amp's output",
                         "write the resistance the output drives, such as '2 kohm'; leave the key out for no load");
                 loadResistance = null;
             } else if (loadResistance != null && loadResistance > MAX_RESISTANCE) {
-                f.error(Fields.where(m, "load-resistance"), "load-resistance", Units.format(loadResistance, Dimension.RESISTANCE)
-                        + " is above " + Units.format(MAX_RESISTANCE, Dimension.RESISTANCE) + ", no load at all",
+                f.error(
+                        Fields.where(m, "load-resistance"),
+                        "load-resistance",
+                        Units.format(loadResistance, Dimension.RESISTANCE) + " is above "
+                                + Units.format(MAX_RESISTANCE, Dimension.RESISTANCE) + ", no load at all",
                         "leave the key out when the output drives no load");
                 loadResistance = null;
             }
             Double sampleRate = positive(m, "", "sample-rate", Dimension.FREQUENCY);
             if (sampleRate != null && sampleRate > MAX_FREQUENCY) {
-                f.error(Fields.where(m, "sample-rate"), "sample-rate", Units.format(sampleRate, Dimension.FREQUENCY) + " is above "
-                        + Units.format(MAX_FREQUENCY, Dimension.FREQUENCY) + ", faster than any converter samples",
+                f.error(
+                        Fields.where(m, "sample-rate"),
+                        "sample-rate",
+                        Units.format(sampleRate, Dimension.FREQUENCY) + " is above "
+                                + Units.format(MAX_FREQUENCY, Dimension.FREQUENCY)
+                                + ", faster than any converter samples",
                         "check the prefix (Hz, kHz, MHz); write the converter's sample rate, such as '30 kHz'");
                 sampleRate = null;
             }
 
-            Stage stage = new Stage(network, tMin, tMax, supplyVoltage, supplyVariation, commonModeSwing,
-                    cmRange, outRange, bandLow, bandHigh, filterOrder, fullScale, tolerance, tempco, life, limit, criterion, maxToSigma,
-                    n, cap, seed != null ? seed : StageKeys.DEFAULT_SEED, trim,
-                    quantity != null ? quantity : StageKeys.DEFAULT_QUANTITY, maxPrice, ac != null && ac,
-                    loadResistance, sampleRate, board, m.at());
+            Stage stage = new Stage(
+                    network,
+                    tMin,
+                    tMax,
+                    supplyVoltage,
+                    supplyVariation,
+                    commonModeSwing,
+                    cmRange,
+                    outRange,
+                    bandLow,
+                    bandHigh,
+                    filterOrder,
+                    fullScale,
+                    tolerance,
+                    tempco,
+                    life,
+                    limit,
+                    criterion,
+                    maxToSigma,
+                    n,
+                    cap,
+                    seed != null ? seed : StageKeys.DEFAULT_SEED,
+                    trim,
+                    quantity != null ? quantity : StageKeys.DEFAULT_QUANTITY,
+                    maxPrice,
+                    ac != null && ac,
+                    loadResistance,
+                    sampleRate,
+                    board,
+                    m.at());
             if (limit != null && !f.hasErrors()) {
                 limitSize(m, stage);
             }
@@ -364,27 +444,38 @@ public final class StageLoader {
 
         /** Warnings about a valid stage whose values are allowed but probably not what was meant. */
         private void sanity(Node.Mapping m, Stage stage) {
-            // the loop gain left is what a large gain costs: the noise gain (inverting: the ratio rf/rg is what the file says)
+            // the loop gain left is what a large gain costs: the noise gain (inverting: the ratio rf/rg is what the
+            // file says)
             double ratio = stage.topology() == Topology.INVERTING ? stage.noiseGain() - 1.0 : stage.noiseGain();
             if (ratio > WARN_GAIN) {
                 String where = present(m, "gain") ? "gain" : "rf";
-                f.warning(Fields.where(m, where), where.equals("gain") ? "gain" : "rf", "a gain of "
-                        + Units.format(ratio, Dimension.NUMBER) + " is above " + Units.format(WARN_GAIN, Dimension.NUMBER)
-                        + ": even 140 dB (1e7) of open-loop gain leaves under 40 dB of loop gain, and the closed-loop"
-                        + " bandwidth is GBW/" + Units.format(stage.noiseGain(), Dimension.NUMBER),
+                f.warning(
+                        Fields.where(m, where),
+                        where.equals("gain") ? "gain" : "rf",
+                        "a gain of "
+                                + Units.format(ratio, Dimension.NUMBER) + " is above "
+                                + Units.format(WARN_GAIN, Dimension.NUMBER)
+                                + ": even 140 dB (1e7) of open-loop gain leaves under 40 dB of loop gain, and the closed-loop"
+                                + " bandwidth is GBW/" + Units.format(stage.noiseGain(), Dimension.NUMBER),
                         "split the gain over two stages, or check the value (100 dB is a gain of 100000)");
             }
             double limit = stage.limitVolts();
             Located limitAt = Fields.where(m, "limit");
             if (stage.supplyVoltage() != null && limit >= stage.supplyVoltage()) {
-                f.warning(limitAt, "limit", "a limit of " + Units.format(limit, Dimension.VOLTAGE) + " at the output is not below the"
-                        + " whole supply of " + Units.format(stage.supplyVoltage(), Dimension.VOLTAGE)
-                        + ": no output error can reach it, so the stage constrains nothing",
+                f.warning(
+                        limitAt,
+                        "limit",
+                        "a limit of " + Units.format(limit, Dimension.VOLTAGE) + " at the output is not below the"
+                                + " whole supply of " + Units.format(stage.supplyVoltage(), Dimension.VOLTAGE)
+                                + ": no output error can reach it, so the stage constrains nothing",
                         "write the largest error allowed at the output, such as '1 mV' (check the prefix)");
             } else if (stage.fullScaleOutput() != null && limit >= stage.fullScaleOutput()) {
-                f.warning(limitAt, "limit", "a limit of " + Units.format(limit, Dimension.VOLTAGE) + " at the output is not below the"
-                        + " full-scale output of " + Units.format(stage.fullScaleOutput(), Dimension.VOLTAGE)
-                        + ": an error as large as the whole signal",
+                f.warning(
+                        limitAt,
+                        "limit",
+                        "a limit of " + Units.format(limit, Dimension.VOLTAGE) + " at the output is not below the"
+                                + " full-scale output of " + Units.format(stage.fullScaleOutput(), Dimension.VOLTAGE)
+                                + ": an error as large as the whole signal",
                         "write the largest error allowed at the output, such as '1 mV' (check the prefix)");
             }
             Criterion c = stage.criterion();
@@ -392,10 +483,15 @@ public final class StageLoader {
                 long needed = trialsToConfirm(c.yieldTarget());
                 if (stage.trials() < needed && needed <= StageKeys.MAX_TRIALS) {
                     Located at = present(m, "trials") ? Fields.where(m, "trials") : Fields.where(m, "criterion");
-                    f.warning(at, present(m, "trials") ? "trials" : "criterion", stage.trials() + " trials cannot confirm a yield of "
-                            + Units.format(c.yieldTarget(), Dimension.RATIO, 7) + ": even when every unit passes, the 95 % interval's"
-                            + " lower end is " + Units.format(stage.trials() / (stage.trials() + Z95 * Z95), Dimension.RATIO, 4)
-                            + ", so the verdict can only be uncertain",
+                    f.warning(
+                            at,
+                            present(m, "trials") ? "trials" : "criterion",
+                            stage.trials() + " trials cannot confirm a yield of "
+                                    + Units.format(c.yieldTarget(), Dimension.RATIO, 7)
+                                    + ": even when every unit passes, the 95 % interval's"
+                                    + " lower end is "
+                                    + Units.format(stage.trials() / (stage.trials() + Z95 * Z95), Dimension.RATIO, 4)
+                                    + ", so the verdict can only be uncertain",
                             "write 'trials: " + needed + "' or more (at most " + StageKeys.MAX_TRIALS + ")");
                 }
             }
@@ -409,19 +505,27 @@ public final class StageLoader {
             double out = stage.limitVolts();
             Node v = m.entries().get("limit");
             Located at = v == null ? m.at() : v.at();
-            String form = stage.limit().kind() == Limit.Kind.OUTPUT ? "" : " (" + Units.format(out, Dimension.VOLTAGE) + " at the output)";
+            String form = stage.limit().kind() == Limit.Kind.OUTPUT
+                    ? ""
+                    : " (" + Units.format(out, Dimension.VOLTAGE) + " at the output)";
             Dimension written = switch (stage.limit().kind()) {
                 case LSB, PERCENT_OF_FULL_SCALE -> Dimension.NUMBER;
                 case INPUT_CURRENT -> Dimension.CURRENT;
                 case OUTPUT, INPUT -> Dimension.VOLTAGE;
             };
             if (out > MAX_LIMIT) {
-                f.error(at, "limit", "a limit of " + Units.format(stage.limit().value(), written) + form
-                        + " is above " + Units.format(MAX_LIMIT, Dimension.VOLTAGE) + " at the output, no error limit at all",
+                f.error(
+                        at,
+                        "limit",
+                        "a limit of " + Units.format(stage.limit().value(), written) + form + " is above "
+                                + Units.format(MAX_LIMIT, Dimension.VOLTAGE) + " at the output, no error limit at all",
                         "check the prefix: write the largest error allowed, such as '1 mV'");
             } else if (out < MIN_LIMIT) {
-                f.error(at, "limit", "a limit of " + Units.format(out, Dimension.VOLTAGE) + " at the output is below "
-                        + Units.format(MIN_LIMIT, Dimension.VOLTAGE) + ", far below the noise of any resistor",
+                f.error(
+                        at,
+                        "limit",
+                        "a limit of " + Units.format(out, Dimension.VOLTAGE) + " at the output is below "
+                                + Units.format(MIN_LIMIT, Dimension.VOLTAGE) + ", far below the noise of any resistor",
                         "check the prefix: write the largest error allowed, such as '1 uV'");
             }
         }
@@ -429,9 +533,14 @@ public final class StageLoader {
         /** Error when {@code ohms} is above {@link #MAX_RESISTANCE}; returns it. */
         private double resistance(Node.Mapping m, String key, double ohms) {
             if (ohms > MAX_RESISTANCE) {
-                f.error(Fields.where(m, key), key, Units.format(ohms, Dimension.RESISTANCE) + " is above "
-                        + Units.format(MAX_RESISTANCE, Dimension.RESISTANCE) + ", where board leakage decides the value",
-                        "check the prefix (kohm, Mohm); write the resistor, such as '" + exampleFor("", key, Dimension.RESISTANCE) + "'");
+                f.error(
+                        Fields.where(m, key),
+                        key,
+                        Units.format(ohms, Dimension.RESISTANCE) + " is above "
+                                + Units.format(MAX_RESISTANCE, Dimension.RESISTANCE)
+                                + ", where board leakage decides the value",
+                        "check the prefix (kohm, Mohm); write the resistor, such as '"
+                                + exampleFor("", key, Dimension.RESISTANCE) + "'");
             }
             return ohms;
         }
@@ -439,17 +548,24 @@ public final class StageLoader {
         /** Error when {@code v} is above {@link #MAX_VOLTAGE}. */
         private void volts(Node.Mapping m, String path, String key, Double v) {
             if (v != null && v > MAX_VOLTAGE) {
-                f.error(Fields.where(m, key), Fields.join(path, key), Units.format(v, Dimension.VOLTAGE) + " is above "
-                        + Units.format(MAX_VOLTAGE, Dimension.VOLTAGE) + ", more than any op amp's supply",
-                        "check the prefix (mV, V, kV); write for example '" + exampleFor(path, key, Dimension.VOLTAGE) + "'");
+                f.error(
+                        Fields.where(m, key),
+                        Fields.join(path, key),
+                        Units.format(v, Dimension.VOLTAGE) + " is above " + Units.format(MAX_VOLTAGE, Dimension.VOLTAGE)
+                                + ", more than any op amp's supply",
+                        "check the prefix (mV, V, kV); write for example '" + exampleFor(path, key, Dimension.VOLTAGE)
+                                + "'");
             }
         }
 
         /** Error when {@code v} is above {@link #MAX_MONEY}. */
         private void money(Node.Mapping m, String path, String key, Double v) {
             if (v != null && v > MAX_MONEY) {
-                f.error(Fields.where(m, key), Fields.join(path, key), Units.format(v, Dimension.NUMBER) + " is above "
-                        + Units.format(MAX_MONEY, Dimension.NUMBER) + ", more than any amplifier costs",
+                f.error(
+                        Fields.where(m, key),
+                        Fields.join(path, key),
+                        Units.format(v, Dimension.NUMBER) + " is above " + Units.format(MAX_MONEY, Dimension.NUMBER)
+                                + ", more than any amplifier costs",
                         "write the amount per unit, for example '" + exampleFor(path, key, Dimension.NUMBER) + "'");
             }
         }
@@ -457,10 +573,15 @@ public final class StageLoader {
         /** {@code t}, with an error when it is outside {@link #MIN_AMBIENT}..{@link #MAX_AMBIENT}. */
         private double ambient(Node.Mapping temp, String key, double t) {
             if (t < MIN_AMBIENT || t > MAX_AMBIENT) {
-                f.error(Fields.where(temp, key), "temperature." + key, Units.format(t, Dimension.TEMPERATURE) + " is outside "
-                        + Units.format(MIN_AMBIENT, Dimension.TEMPERATURE) + " to " + Units.format(MAX_AMBIENT, Dimension.TEMPERATURE)
-                        + ", an ambient no circuit sees", "write the ambient range in °C, such as '" + exampleFor("temperature", key,
-                        Dimension.TEMPERATURE) + "'");
+                f.error(
+                        Fields.where(temp, key),
+                        "temperature." + key,
+                        Units.format(t, Dimension.TEMPERATURE) + " is outside "
+                                + Units.format(MIN_AMBIENT, Dimension.TEMPERATURE) + " to "
+                                + Units.format(MAX_AMBIENT, Dimension.TEMPERATURE)
+                                + ", an ambient no circuit sees",
+                        "write the ambient range in °C, such as '"
+                                + exampleFor("temperature", key, Dimension.TEMPERATURE) + "'");
             }
             return t;
         }
@@ -484,19 +605,30 @@ public final class StageLoader {
         private Network network(Node.Mapping m, Topology topology) {
             for (Map.Entry<String, Topology> e : OWN_KEYS.entrySet()) {
                 if (e.getValue() != topology && present(m, e.getKey())) {
-                    f.error(Fields.where(m, e.getKey()), e.getKey(), "'" + e.getKey() + "' belongs to a " + e.getValue().key()
-                            + " stage, and this one is " + topology.key(), "remove it, or write 'topology: " + e.getValue().key() + "'");
+                    f.error(
+                            Fields.where(m, e.getKey()),
+                            e.getKey(),
+                            "'" + e.getKey() + "' belongs to a " + e.getValue().key() + " stage, and this one is "
+                                    + topology.key(),
+                            "remove it, or write 'topology: " + e.getValue().key() + "'");
                 }
             }
             if (topology != Topology.DIFFERENCE && m.entries().get("source-resistance") instanceof Node.Mapping) {
-                f.error(Fields.where(m, "source-resistance"), "source-resistance", "a source resistance per leg ({minus, plus})"
-                        + " belongs to a difference stage", "write one value, such as 'source-resistance: 350 ohm'");
+                f.error(
+                        Fields.where(m, "source-resistance"),
+                        "source-resistance",
+                        "a source resistance per leg ({minus, plus})" + " belongs to a difference stage",
+                        "write one value, such as 'source-resistance: 350 ohm'");
                 return new Follower(StageKeys.DEFAULT_RF, 0, 0);
             }
             return switch (topology) {
                 case NON_INVERTING, INVERTING, FOLLOWER -> {
-                    double rs = resistance(m, "source-resistance", nonNegative(m, "", "source-resistance", Dimension.RESISTANCE, 0.0));
-                    double rp = resistance(m, "balance-resistance", nonNegative(m, "", "balance-resistance", Dimension.RESISTANCE, 0.0));
+                    double rs = resistance(
+                            m, "source-resistance", nonNegative(m, "", "source-resistance", Dimension.RESISTANCE, 0.0));
+                    double rp = resistance(
+                            m,
+                            "balance-resistance",
+                            nonNegative(m, "", "balance-resistance", Dimension.RESISTANCE, 0.0));
                     double[] rfRg = resistors(m, topology);
                     yield switch (topology) {
                         case NON_INVERTING -> new NonInverting(rfRg[0], rfRg[1], rs, rp);
@@ -526,9 +658,16 @@ public final class StageLoader {
             Network bad = new Difference(1e3, 1e3, 1e3, 1e3, 0, 0);
             for (String key : List.of("rf", "rg", "balance-resistance")) {
                 if (present(m, key)) {
-                    f.error(Fields.where(m, key), key, "a difference stage has r1, r2 (inverting side) and r3, r4 (non-inverting"
-                            + " side), not '" + key + "'", key.equals("rf") ? "write 'r2' for the feedback resistor"
-                            : key.equals("rg") ? "write 'r1' for the input resistor" : "remove it: r4 returns the + input to the reference");
+                    f.error(
+                            Fields.where(m, key),
+                            key,
+                            "a difference stage has r1, r2 (inverting side) and r3, r4 (non-inverting" + " side), not '"
+                                    + key + "'",
+                            key.equals("rf")
+                                    ? "write 'r2' for the feedback resistor"
+                                    : key.equals("rg")
+                                            ? "write 'r1' for the input resistor"
+                                            : "remove it: r4 returns the + input to the reference");
                 }
             }
             Double gain = present(m, "gain") ? gain(m) : null;
@@ -544,12 +683,18 @@ public final class StageLoader {
             if (gain != null) {
                 g = Math.abs(gain);
                 if (r1 != null && r2 != null) {
-                    f.error(Fields.where(m, "gain"), "gain", "'gain', 'r1' and 'r2' are all given and may disagree",
+                    f.error(
+                            Fields.where(m, "gain"),
+                            "gain",
+                            "'gain', 'r1' and 'r2' are all given and may disagree",
                             "give 'gain' with 'r2' (or with 'r1'), or 'r1' and 'r2' without 'gain'");
                     return bad;
                 }
                 if (!(g > 0) || g > MAX_GAIN) {
-                    f.error(Fields.where(m, "gain"), "gain", "a difference gain of " + plain(g) + " cannot be built",
+                    f.error(
+                            Fields.where(m, "gain"),
+                            "gain",
+                            "a difference gain of " + plain(g) + " cannot be built",
                             "write the ratio r2/r1, such as 10 (at most " + plain(MAX_GAIN) + ")");
                     return bad;
                 }
@@ -561,16 +706,27 @@ public final class StageLoader {
                 }
             } else if (r1 == null || r2 == null) {
                 Located at = r1 != null ? Fields.where(m, "r1") : r2 != null ? Fields.where(m, "r2") : m.at();
-                f.error(at, "gain", "the gain is not given", "add 'gain: 10' (with 'r2', default 10 kohm), or both 'r1' and 'r2'");
+                f.error(
+                        at,
+                        "gain",
+                        "the gain is not given",
+                        "add 'gain: 10' (with 'r2', default 10 kohm), or both 'r1' and 'r2'");
                 return bad;
             } else if (!(r2 / r1 <= MAX_GAIN)) {
-                f.error(Fields.where(m, "r1"), "r1", "r2/r1 = " + Units.format(r2 / r1, Dimension.NUMBER) + " is a gain above "
-                        + Units.format(MAX_GAIN, Dimension.NUMBER), "check the prefixes of r1 and r2 (kohm, Mohm)");
+                f.error(
+                        Fields.where(m, "r1"),
+                        "r1",
+                        "r2/r1 = " + Units.format(r2 / r1, Dimension.NUMBER) + " is a gain above "
+                                + Units.format(MAX_GAIN, Dimension.NUMBER),
+                        "check the prefixes of r1 and r2 (kohm, Mohm)");
                 return bad;
             }
             if ((r3 == null) != (r4 == null)) {
                 String given = r3 != null ? "r3" : "r4";
-                f.error(Fields.where(m, given), given, "only one of r3 and r4 is given",
+                f.error(
+                        Fields.where(m, given),
+                        given,
+                        "only one of r3 and r4 is given",
                         "give both, or neither (then r3 = r1 and r4 = r2, the matched design)");
                 return bad;
             }
@@ -585,7 +741,8 @@ public final class StageLoader {
         private double[] legs(Node.Mapping m) {
             Node v = m.entries().get("source-resistance");
             if (!(v instanceof Node.Mapping sm)) {
-                double rs = resistance(m, "source-resistance", nonNegative(m, "", "source-resistance", Dimension.RESISTANCE, 0.0));
+                double rs = resistance(
+                        m, "source-resistance", nonNegative(m, "", "source-resistance", Dimension.RESISTANCE, 0.0));
                 return new double[] {rs, rs};
             }
             f.onlyKeys(sm, "source-resistance", StageKeys.inside("source-resistance"));
@@ -593,13 +750,21 @@ public final class StageLoader {
             int i = 0;
             for (String leg : List.of("minus", "plus")) {
                 if (!present(sm, leg)) {
-                    f.error(sm.at(), "source-resistance." + leg, "missing: per-leg source resistances need both legs",
-                            "add '" + leg + ": 350 ohm' (the resistance of the leg driving " + (leg.equals("minus") ? "r1" : "r3") + ")");
+                    f.error(
+                            sm.at(),
+                            "source-resistance." + leg,
+                            "missing: per-leg source resistances need both legs",
+                            "add '" + leg + ": 350 ohm' (the resistance of the leg driving "
+                                    + (leg.equals("minus") ? "r1" : "r3") + ")");
                 }
                 double r = nonNegative(sm, "source-resistance", leg, Dimension.RESISTANCE, 0.0);
                 if (r > MAX_RESISTANCE) {
-                    f.error(Fields.where(sm, leg), "source-resistance." + leg, Units.format(r, Dimension.RESISTANCE) + " is above "
-                            + Units.format(MAX_RESISTANCE, Dimension.RESISTANCE) + ", where board leakage decides the value",
+                    f.error(
+                            Fields.where(sm, leg),
+                            "source-resistance." + leg,
+                            Units.format(r, Dimension.RESISTANCE) + " is above "
+                                    + Units.format(MAX_RESISTANCE, Dimension.RESISTANCE)
+                                    + ", where board leakage decides the value",
                             "check the prefix (kohm, Mohm)");
                 }
                 out[i++] = r;
@@ -612,41 +777,67 @@ public final class StageLoader {
             Network bad = new Transimpedance(1e6, 0, 1e9, 0, 0);
             for (String key : List.of("gain", "rg")) {
                 if (present(m, key)) {
-                    f.error(Fields.where(m, key), key, "a transimpedance stage's gain is rf itself, in volts per ampere",
+                    f.error(
+                            Fields.where(m, key),
+                            key,
+                            "a transimpedance stage's gain is rf itself, in volts per ampere",
                             "remove '" + key + "'; write 'rf: 1 Mohm'");
                 }
             }
             Double rf = resistor(m, "rf");
             if (rf == null && !present(m, "rf")) {
-                f.error(m.at(), "rf", "required for a transimpedance stage: the output is the source current times rf",
+                f.error(
+                        m.at(),
+                        "rf",
+                        "required for a transimpedance stage: the output is the source current times rf",
                         "add 'rf: 1 Mohm'");
             }
             double cf = nonNegative(m, "", "cf", Dimension.CAPACITANCE, 0.0);
-            Double rsh = present(m, "source-resistance") ? positive(m, "", "source-resistance", Dimension.RESISTANCE) : null;
+            Double rsh =
+                    present(m, "source-resistance") ? positive(m, "", "source-resistance", Dimension.RESISTANCE) : null;
             if (!present(m, "source-resistance")) {
-                f.error(m.at(), "source-resistance", "required for a transimpedance stage: the source's shunt resistance sets the"
-                        + " DC noise gain 1 + rf/source-resistance", "add 'source-resistance: 1 Gohm' (a photodiode's shunt"
-                        + " resistance at the hottest temperature; a current source: a large value such as 100 Gohm)");
+                f.error(
+                        m.at(),
+                        "source-resistance",
+                        "required for a transimpedance stage: the source's shunt resistance sets the"
+                                + " DC noise gain 1 + rf/source-resistance",
+                        "add 'source-resistance: 1 Gohm' (a photodiode's shunt"
+                                + " resistance at the hottest temperature; a current source: a large value such as 100 Gohm)");
             }
-            Double cs = present(m, "source-capacitance") ? nonNegativeOrNull(m, "", "source-capacitance", Dimension.CAPACITANCE) : null;
+            Double cs = present(m, "source-capacitance")
+                    ? nonNegativeOrNull(m, "", "source-capacitance", Dimension.CAPACITANCE)
+                    : null;
             if (!present(m, "source-capacitance")) {
-                f.error(m.at(), "source-capacitance", "required for a transimpedance stage: the source's capacitance raises the"
-                        + " noise gain above its zero and decides stability", "add 'source-capacitance: 50 pF' (the photodiode's"
-                        + " junction capacitance at its bias, plus the wiring)");
+                f.error(
+                        m.at(),
+                        "source-capacitance",
+                        "required for a transimpedance stage: the source's capacitance raises the"
+                                + " noise gain above its zero and decides stability",
+                        "add 'source-capacitance: 50 pF' (the photodiode's"
+                                + " junction capacitance at its bias, plus the wiring)");
             }
-            double rp = resistance(m, "balance-resistance", nonNegative(m, "", "balance-resistance", Dimension.RESISTANCE, 0.0));
+            double rp = resistance(
+                    m, "balance-resistance", nonNegative(m, "", "balance-resistance", Dimension.RESISTANCE, 0.0));
             if (rf == null || rsh == null || cs == null) {
                 return bad;
             }
             if (rsh > MAX_SHUNT) {
-                f.error(Fields.where(m, "source-resistance"), "source-resistance", Units.format(rsh, Dimension.RESISTANCE)
-                        + " is above " + Units.format(MAX_SHUNT, Dimension.RESISTANCE), "check the prefix (Mohm, Gohm)");
+                f.error(
+                        Fields.where(m, "source-resistance"),
+                        "source-resistance",
+                        Units.format(rsh, Dimension.RESISTANCE) + " is above "
+                                + Units.format(MAX_SHUNT, Dimension.RESISTANCE),
+                        "check the prefix (Mohm, Gohm)");
                 return bad;
             }
             if (cs > MAX_CAPACITANCE || cf > MAX_CAPACITANCE) {
                 String key = cs > MAX_CAPACITANCE ? "source-capacitance" : "cf";
-                f.error(Fields.where(m, key), key, Units.format(Math.max(cs, cf), Dimension.CAPACITANCE) + " is above "
-                        + Units.format(MAX_CAPACITANCE, Dimension.CAPACITANCE), "check the prefix (pF, nF)");
+                f.error(
+                        Fields.where(m, key),
+                        key,
+                        Units.format(Math.max(cs, cf), Dimension.CAPACITANCE) + " is above "
+                                + Units.format(MAX_CAPACITANCE, Dimension.CAPACITANCE),
+                        "check the prefix (pF, nF)");
                 return bad;
             }
             return new Transimpedance(rf, cf, rsh, cs, rp);
@@ -668,36 +859,58 @@ public final class StageLoader {
                 resistance(m, "rg", rg);
             }
             if (gain != null && !(Math.abs(gain) <= MAX_GAIN)) {
-                f.error(Fields.where(m, "gain"), "gain", "gain " + Units.format(Math.abs(gain), Dimension.NUMBER) + " is above "
-                        + Units.format(MAX_GAIN, Dimension.NUMBER) + ", more than any op amp can hold (the best have about"
-                        + " 1e8 of open-loop gain, which would leave under 40 dB of loop gain)",
+                f.error(
+                        Fields.where(m, "gain"),
+                        "gain",
+                        "gain " + Units.format(Math.abs(gain), Dimension.NUMBER) + " is above "
+                                + Units.format(MAX_GAIN, Dimension.NUMBER)
+                                + ", more than any op amp can hold (the best have about"
+                                + " 1e8 of open-loop gain, which would leave under 40 dB of loop gain)",
                         "split the gain over two stages, or check the value (40 dB is a gain of 100)");
                 return new double[] {bad, bad};
             }
 
             if (topology == Topology.FOLLOWER) {
                 if (hasRg) {
-                    f.error(Fields.where(m, "rg"), "rg", "a follower has no gain resistor",
+                    f.error(
+                            Fields.where(m, "rg"),
+                            "rg",
+                            "a follower has no gain resistor",
                             "remove 'rg', or write 'topology: non-inverting'");
                 }
                 if (gain != null && gain != 1.0) {
-                    f.error(Fields.where(m, "gain"), "gain", "a follower has gain 1, not " + plain(gain),
+                    f.error(
+                            Fields.where(m, "gain"),
+                            "gain",
+                            "a follower has gain 1, not " + plain(gain),
                             "remove 'gain', or write 'topology: non-inverting'");
                 }
                 return new double[] {rf != null ? rf : 0.0, Double.POSITIVE_INFINITY};
             }
 
             if (hasGain && hasRf && hasRg) {
-                f.error(Fields.where(m, "gain"), "gain", "'gain', 'rf' and 'rg' are all given and may disagree",
+                f.error(
+                        Fields.where(m, "gain"),
+                        "gain",
+                        "'gain', 'rf' and 'rg' are all given and may disagree",
                         "give 'gain' with 'rf' (or with 'rg'), or give 'rf' and 'rg' without 'gain'");
                 return new double[] {bad, bad};
             }
             if (rf != null && rf == 0) {
-                f.error(Fields.where(m, "rf"), "rf", "0 ohm feedback leaves no gain", topology == Topology.NON_INVERTING
-                        ? "write the feedback resistor, or 'topology: follower' for unity gain" : "write the feedback resistor, such as '10 kohm'");
+                f.error(
+                        Fields.where(m, "rf"),
+                        "rf",
+                        "0 ohm feedback leaves no gain",
+                        topology == Topology.NON_INVERTING
+                                ? "write the feedback resistor, or 'topology: follower' for unity gain"
+                                : "write the feedback resistor, such as '10 kohm'");
             }
             if (rg != null && rg == 0) {
-                f.error(Fields.where(m, "rg"), "rg", "0 ohm gives an infinite gain", "write the gain resistor, such as '1 kohm'");
+                f.error(
+                        Fields.where(m, "rg"),
+                        "rg",
+                        "0 ohm gives an infinite gain",
+                        "write the gain resistor, such as '1 kohm'");
             }
             if (!hasGain) {
                 if (hasRf && hasRg) {
@@ -705,17 +918,25 @@ public final class StageLoader {
                         return new double[] {bad, bad};
                     }
                     if (!(rf / rg <= MAX_GAIN)) {
-                        f.error(Fields.where(m, "rg"), "rg", "rf/rg = " + Units.format(rf / rg, Dimension.NUMBER)
-                                + " is a gain above " + Units.format(MAX_GAIN, Dimension.NUMBER)
-                                + ", more than any op amp can hold", "check the prefixes of rf and rg (kohm, Mohm)");
+                        f.error(
+                                Fields.where(m, "rg"),
+                                "rg",
+                                "rf/rg = " + Units.format(rf / rg, Dimension.NUMBER)
+                                        + " is a gain above " + Units.format(MAX_GAIN, Dimension.NUMBER)
+                                        + ", more than any op amp can hold",
+                                "check the prefixes of rf and rg (kohm, Mohm)");
                         return new double[] {bad, bad};
                     }
                     return new double[] {rf, rg};
                 }
                 Located at = hasRf ? Fields.where(m, "rf") : hasRg ? Fields.where(m, "rg") : m.at();
-                f.error(at, "gain", "the gain is not given", hasRf || hasRg
-                        ? "add 'gain: 100', or give both 'rf' and 'rg'"
-                        : "add 'gain: 100' (with 'rf', default 10 kohm), or 'rf' and 'rg'");
+                f.error(
+                        at,
+                        "gain",
+                        "the gain is not given",
+                        hasRf || hasRg
+                                ? "add 'gain: 100', or give both 'rf' and 'rg'"
+                                : "add 'gain: 100' (with 'rf', default 10 kohm), or 'rf' and 'rg'");
                 return new double[] {bad, bad};
             }
             if (gain == null) {
@@ -725,12 +946,20 @@ public final class StageLoader {
             double ratio;
             if (topology == Topology.NON_INVERTING) {
                 if (gain < 1.0) {
-                    f.error(Fields.where(m, "gain"), "gain", "a non-inverting stage cannot have gain " + plain(gain) + " (below 1)",
-                            gain < 0 ? "write the magnitude with 'topology: inverting'" : "write a gain of 1 or more, or use 'topology: inverting'");
+                    f.error(
+                            Fields.where(m, "gain"),
+                            "gain",
+                            "a non-inverting stage cannot have gain " + plain(gain) + " (below 1)",
+                            gain < 0
+                                    ? "write the magnitude with 'topology: inverting'"
+                                    : "write a gain of 1 or more, or use 'topology: inverting'");
                     return new double[] {bad, bad};
                 }
                 if (gain == 1.0) {
-                    f.error(Fields.where(m, "gain"), "gain", "gain 1 needs no gain resistor (rg would be infinite)",
+                    f.error(
+                            Fields.where(m, "gain"),
+                            "gain",
+                            "gain 1 needs no gain resistor (rg would be infinite)",
                             "write 'topology: follower'");
                     return new double[] {bad, bad};
                 }
@@ -738,7 +967,11 @@ public final class StageLoader {
             } else {
                 ratio = Math.abs(gain);
                 if (ratio == 0.0) {
-                    f.error(Fields.where(m, "gain"), "gain", "gain 0 is no amplifier", "write the resistor ratio rf/rg, such as 10");
+                    f.error(
+                            Fields.where(m, "gain"),
+                            "gain",
+                            "gain 0 is no amplifier",
+                            "write the resistor ratio rf/rg, such as 10");
                     return new double[] {bad, bad};
                 }
             }
@@ -768,7 +1001,11 @@ public final class StageLoader {
                 }
                 return Units.parse(t, Dimension.NUMBER);
             } catch (UnitException e) {
-                f.error(Fields.where(m, "gain"), "gain", "'" + text + "' is not a gain", "write a plain number such as '100', or decibels such as '40 dB'");
+                f.error(
+                        Fields.where(m, "gain"),
+                        "gain",
+                        "'" + text + "' is not a gain",
+                        "write a plain number such as '100', or decibels such as '40 dB'");
                 return null;
             }
         }
@@ -791,7 +1028,10 @@ public final class StageLoader {
             } catch (NumberFormatException e) {
                 // reported below
             }
-            f.error(Fields.where(band, "filter-order"), "band.filter-order", "'" + text + "' is not a filter order",
+            f.error(
+                    Fields.where(band, "filter-order"),
+                    "band.filter-order",
+                    "'" + text + "' is not a filter order",
                     "write 'none' when no filter after the amplifier limits the band, or the filter's order, 1 to "
                             + Stage.MAX_FILTER_ORDER + " (an RC is 1)");
             return null;
@@ -822,7 +1062,10 @@ public final class StageLoader {
         private Limit limit(Node.Mapping m, Double fullScale, Topology topology) {
             Node v = m.entries().get("limit");
             if (v == null || v instanceof Node.Scalar s && s.text() == null) {
-                f.error(v != null ? v.at() : m.at(), "limit", "required field is missing: the error limit decides which parts fit",
+                f.error(
+                        v != null ? v.at() : m.at(),
+                        "limit",
+                        "required field is missing: the error limit decides which parts fit",
                         "add 'limit: 1 mV' (at the output), or 'limit: {input: 10 uV}', '{percent-of-full-scale: 0.1 %}', "
                                 + "'{lsb: 0.5, bits: 16, reference: 2.5 V}'");
                 return null;
@@ -850,22 +1093,35 @@ public final class StageLoader {
                 forms.add("lsb");
             }
             if (forms.isEmpty()) {
-                f.error(lm.at(), "limit", "no limit given in this block",
+                f.error(
+                        lm.at(),
+                        "limit",
+                        "no limit given in this block",
                         "write 'input: 10 uV', 'percent-of-full-scale: 0.1 %', or 'lsb: 0.5', 'bits: 16', 'reference: 2.5 V'");
                 return null;
             }
             if (forms.size() > 1) {
-                f.error(lm.at(), "limit", "more than one form of limit given (" + String.join(", ", forms) + ")", "keep one of them");
+                f.error(
+                        lm.at(),
+                        "limit",
+                        "more than one form of limit given (" + String.join(", ", forms) + ")",
+                        "keep one of them");
                 return null;
             }
             boolean currentIn = topology == Topology.TRANSIMPEDANCE;
             if (forms.get(0).equals("input") && currentIn) {
-                f.error(Fields.where(lm, "input"), "limit.input", "a transimpedance stage's input is a current",
+                f.error(
+                        Fields.where(lm, "input"),
+                        "limit.input",
+                        "a transimpedance stage's input is a current",
                         "write 'input-current: 1 nA' (multiplied by rf), or the limit at the output");
                 return null;
             }
             if (forms.get(0).equals("input-current") && !currentIn) {
-                f.error(Fields.where(lm, "input-current"), "limit.input-current", "only a transimpedance stage has a current input",
+                f.error(
+                        Fields.where(lm, "input-current"),
+                        "limit.input-current",
+                        "only a transimpedance stage has a current input",
                         "write 'input: 10 uV' (at the signal source), or 'topology: transimpedance'");
                 return null;
             }
@@ -881,8 +1137,11 @@ public final class StageLoader {
                 case "percent-of-full-scale": {
                     Double share = percent(lm);
                     if (share != null && fullScale == null) {
-                        f.error(Fields.where(lm, "percent-of-full-scale"), "limit.percent-of-full-scale",
-                                "a share of full scale needs the full-scale output", "add 'full-scale-output: 2.5 V', or give the limit in volts");
+                        f.error(
+                                Fields.where(lm, "percent-of-full-scale"),
+                                "limit.percent-of-full-scale",
+                                "a share of full scale needs the full-scale output",
+                                "add 'full-scale-output: 2.5 V', or give the limit in volts");
                         return null;
                     }
                     return share == null ? null : new Limit(Limit.Kind.PERCENT_OF_FULL_SCALE, share, 0, 0);
@@ -891,8 +1150,12 @@ public final class StageLoader {
                     boolean ok = true;
                     for (String key : List.of("lsb", "bits", "reference")) {
                         if (!present(lm, key)) {
-                            f.error(lm.at(), "limit." + key, "missing: an LSB limit needs lsb, bits and reference",
-                                    "add '" + key + ": " + StageKeys.get("limit." + key).example() + "'");
+                            f.error(
+                                    lm.at(),
+                                    "limit." + key,
+                                    "missing: an LSB limit needs lsb, bits and reference",
+                                    "add '" + key + ": "
+                                            + StageKeys.get("limit." + key).example() + "'");
                             ok = false;
                         }
                     }
@@ -907,7 +1170,8 @@ public final class StageLoader {
             }
         }
 
-        private static final Pattern BARE_NUMBER = Pattern.compile("\\s*[-+]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][-+]?\\d+)?\\s*");
+        private static final Pattern BARE_NUMBER =
+                Pattern.compile("\\s*[-+]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][-+]?\\d+)?\\s*");
 
         /** The key says percent, so a bare number is read as percent ("0.1" = 0.1 %). */
         private Double percent(Node.Mapping lm) {
@@ -920,12 +1184,19 @@ public final class StageLoader {
             try {
                 share = Units.parse(t, Dimension.RATIO);
             } catch (UnitException e) {
-                f.error(Fields.where(lm, "percent-of-full-scale"), "limit.percent-of-full-scale", e.problem(), "write a percentage such as '0.1 %'");
+                f.error(
+                        Fields.where(lm, "percent-of-full-scale"),
+                        "limit.percent-of-full-scale",
+                        e.problem(),
+                        "write a percentage such as '0.1 %'");
                 return null;
             }
             if (share <= 0 || share > 1) {
-                f.error(Fields.where(lm, "percent-of-full-scale"), "limit.percent-of-full-scale",
-                        Units.format(share, Dimension.RATIO) + " is outside (0, 100] %", "write a percentage such as '0.1 %'");
+                f.error(
+                        Fields.where(lm, "percent-of-full-scale"),
+                        "limit.percent-of-full-scale",
+                        Units.format(share, Dimension.RATIO) + " is outside (0, 100] %",
+                        "write a percentage such as '0.1 %'");
                 return null;
             }
             return share;
@@ -962,22 +1233,32 @@ public final class StageLoader {
                 }
                 if (!(target > 0 && target < 1)) {
                     // 100 % cannot be shown by sampling; 0 % asks nothing
-                    f.error(at, "criterion", "yield target " + rest + " is outside (0, 100) %",
+                    f.error(
+                            at,
+                            "criterion",
+                            "yield target " + rest + " is outside (0, 100) %",
                             "write a target above 0 % and below 100 %, such as 'yield 99.9 %'");
                     return Criterion.WORST_CASE;
                 }
                 if (target > MAX_YIELD_TARGET) {
                     // 99.99999999 % would print as 100 % and no sample within the trial cap could show it
-                    f.error(at, "criterion", "yield target " + rest + " is above 99.9999 %, closer to 100 % than "
-                            + StageKeys.MAX_TRIALS + " simulated units (the most allowed) can show",
+                    f.error(
+                            at,
+                            "criterion",
+                            "yield target " + rest + " is above 99.9999 %, closer to 100 % than " + StageKeys.MAX_TRIALS
+                                    + " simulated units (the most allowed) can show",
                             "write at most 'yield 99.9999 %'; for an error no unit may exceed, write 'worst-case'");
                     return Criterion.WORST_CASE;
                 }
                 return Criterion.yield(target);
             }
             String near = Fields.closest(t, List.of("worst-case", "rss", "yield"));
-            f.error(at, "criterion", "'" + text + "' is not one of worst-case | rss | yield P %",
-                    near != null ? "did you mean '" + (near.equals("yield") ? "yield 99.9 %" : near) + "'?"
+            f.error(
+                    at,
+                    "criterion",
+                    "'" + text + "' is not one of worst-case | rss | yield P %",
+                    near != null
+                            ? "did you mean '" + (near.equals("yield") ? "yield 99.9 %" : near) + "'?"
                             : "write 'worst-case', 'rss' or 'yield 99.9 %'");
             return Criterion.WORST_CASE;
         }
@@ -994,20 +1275,34 @@ public final class StageLoader {
                 Double g = nonNegativeOrNull(emf, "thermal-emf", "gradient", Dimension.TEMPERATURE);
                 for (String key : List.of("junctions", "seebeck", "gradient")) {
                     if (!present(emf, key)) {
-                        f.error(emf.at(), "thermal-emf." + key, "missing: thermal EMF needs junctions, seebeck and gradient",
-                                "add '" + key + ": " + StageKeys.get("thermal-emf." + key).example() + "' ("
+                        f.error(
+                                emf.at(),
+                                "thermal-emf." + key,
+                                "missing: thermal EMF needs junctions, seebeck and gradient",
+                                "add '" + key + ": "
+                                        + StageKeys.get("thermal-emf." + key).example() + "' ("
                                         + StageKeys.get("thermal-emf." + key).why() + ")");
                     }
                 }
                 if (s != null && s > MAX_SEEBECK) {
-                    f.error(Fields.where(emf, "seebeck"), "thermal-emf.seebeck", Units.format(s, Dimension.VOLTAGE_DRIFT)
-                            + " is above " + Units.format(MAX_SEEBECK, Dimension.VOLTAGE_DRIFT) + ", more than an oxidised copper"
-                            + " contact (about 1 mV/C)", "check the prefix: write microvolts per degree, such as '3 uV/C'");
+                    f.error(
+                            Fields.where(emf, "seebeck"),
+                            "thermal-emf.seebeck",
+                            Units.format(s, Dimension.VOLTAGE_DRIFT)
+                                    + " is above " + Units.format(MAX_SEEBECK, Dimension.VOLTAGE_DRIFT)
+                                    + ", more than an oxidised copper"
+                                    + " contact (about 1 mV/C)",
+                            "check the prefix: write microvolts per degree, such as '3 uV/C'");
                 }
                 if (g != null && g > MAX_GRADIENT) {
-                    f.error(Fields.where(emf, "gradient"), "thermal-emf.gradient", Units.format(g, Dimension.TEMPERATURE)
-                            + " is above " + Units.format(MAX_GRADIENT, Dimension.TEMPERATURE) + " between junctions a few"
-                            + " millimetres apart", "write the temperature difference across the junctions, such as '0.5 C'");
+                    f.error(
+                            Fields.where(emf, "gradient"),
+                            "thermal-emf.gradient",
+                            Units.format(g, Dimension.TEMPERATURE)
+                                    + " is above " + Units.format(MAX_GRADIENT, Dimension.TEMPERATURE)
+                                    + " between junctions a few"
+                                    + " millimetres apart",
+                            "write the temperature difference across the junctions, such as '0.5 C'");
                 }
                 junctions = n == null ? 0 : n;
                 seebeck = s == null ? 0 : s;
@@ -1022,13 +1317,21 @@ public final class StageLoader {
                 Double v = f.quantity(leak, "leakage", "voltage", Dimension.VOLTAGE);
                 for (String key : List.of("resistance", "voltage")) {
                     if (!present(leak, key)) {
-                        f.error(leak.at(), "leakage." + key, "missing: leakage needs the resistance and the voltage across it",
-                                "add '" + key + ": " + StageKeys.get("leakage." + key).example() + "'");
+                        f.error(
+                                leak.at(),
+                                "leakage." + key,
+                                "missing: leakage needs the resistance and the voltage across it",
+                                "add '" + key + ": "
+                                        + StageKeys.get("leakage." + key).example() + "'");
                     }
                 }
                 if (v != null && Math.abs(v) > MAX_VOLTAGE) {
-                    f.error(Fields.where(leak, "voltage"), "leakage.voltage", Units.format(v, Dimension.VOLTAGE) + " is above "
-                            + Units.format(MAX_VOLTAGE, Dimension.VOLTAGE), "write the potential of the nearby trace relative to the node");
+                    f.error(
+                            Fields.where(leak, "voltage"),
+                            "leakage.voltage",
+                            Units.format(v, Dimension.VOLTAGE) + " is above "
+                                    + Units.format(MAX_VOLTAGE, Dimension.VOLTAGE),
+                            "write the potential of the nearby trace relative to the node");
                 }
                 String which = f.choice(leak, "leakage", "input", List.of("plus", "minus"));
                 if (which != null) {
@@ -1080,8 +1383,11 @@ public final class StageLoader {
             if (how != Trim.Method.TWO_TEMPERATURE) {
                 for (String key : List.of("cold", "hot")) {
                     if (present(t, key)) {
-                        f.error(Fields.where(t, key), "trim." + key, "a calibration temperature belongs to method "
-                                + "two-temperature, but the method is " + how.key(),
+                        f.error(
+                                Fields.where(t, key),
+                                "trim." + key,
+                                "a calibration temperature belongs to method " + "two-temperature, but the method is "
+                                        + how.key(),
                                 "write 'method: two-temperature', or remove 'trim." + key + "'");
                     }
                 }
@@ -1090,10 +1396,15 @@ public final class StageLoader {
             for (String key : List.of("cold", "hot")) {
                 Double v = key.equals("cold") ? cold : hot;
                 if (v != null && (v < MIN_AMBIENT || v > MAX_AMBIENT)) {
-                    f.error(Fields.where(t, key), "trim." + key, Units.format(v, Dimension.TEMPERATURE) + " is outside "
-                            + Units.format(MIN_AMBIENT, Dimension.TEMPERATURE) + " to " + Units.format(MAX_AMBIENT, Dimension.TEMPERATURE)
-                            + ", an ambient no circuit sees", "write the calibration temperature in °C, such as '"
-                            + StageKeys.get("trim." + key).example() + "'");
+                    f.error(
+                            Fields.where(t, key),
+                            "trim." + key,
+                            Units.format(v, Dimension.TEMPERATURE) + " is outside "
+                                    + Units.format(MIN_AMBIENT, Dimension.TEMPERATURE) + " to "
+                                    + Units.format(MAX_AMBIENT, Dimension.TEMPERATURE)
+                                    + ", an ambient no circuit sees",
+                            "write the calibration temperature in °C, such as '"
+                                    + StageKeys.get("trim." + key).example() + "'");
                     return new double[] {Double.NaN, Double.NaN};
                 }
             }
@@ -1105,10 +1416,14 @@ public final class StageLoader {
                 String problem = "the two calibration temperatures must differ, cold below hot; they are "
                         + Units.format(c, Dimension.TEMPERATURE) + (cold == null ? " (temperature.min)" : "") + " and "
                         + Units.format(h, Dimension.TEMPERATURE) + (hot == null ? " (temperature.max)" : "");
-                String fix = key == null ? "give 'trim.cold' and 'trim.hot', such as '-40 C' and '85 C'"
+                String fix = key == null
+                        ? "give 'trim.cold' and 'trim.hot', such as '-40 C' and '85 C'"
                         : "write 'trim.cold' below 'trim.hot', such as 'cold: -40 C' and 'hot: 85 C'";
-                f.error(key == null ? Fields.where(t, "method") : Fields.where(t, key), key == null ? "trim.method" : "trim." + key,
-                        problem, fix);
+                f.error(
+                        key == null ? Fields.where(t, "method") : Fields.where(t, key),
+                        key == null ? "trim.method" : "trim." + key,
+                        problem,
+                        fix);
             }
             return new double[] {cold != null ? cold : Double.NaN, hot != null ? hot : Double.NaN};
         }
@@ -1130,10 +1445,18 @@ public final class StageLoader {
                 List<String> inside = StageKeys.inside(key);
                 StringBuilder example = new StringBuilder("write '" + key + ":' with ");
                 for (int i = 0; i < inside.size(); i++) {
-                    example.append(i == 0 ? "" : ", ").append('\'').append(inside.get(i)).append(": ")
-                            .append(StageKeys.get(key + "." + inside.get(i)).example()).append('\'');
+                    example.append(i == 0 ? "" : ", ")
+                            .append('\'')
+                            .append(inside.get(i))
+                            .append(": ")
+                            .append(StageKeys.get(key + "." + inside.get(i)).example())
+                            .append('\'');
                 }
-                f.error(v.at(), key, "expected a block of 'key: value' lines, found " + v.kind(), example + " indented below it");
+                f.error(
+                        v.at(),
+                        key,
+                        "expected a block of 'key: value' lines, found " + v.kind(),
+                        example + " indented below it");
                 return null;
             }
             f.onlyKeys(block, key, StageKeys.inside(key));
@@ -1157,21 +1480,33 @@ public final class StageLoader {
             volts(r, key, "max", hi == null ? null : Math.abs(hi));
             for (String side : List.of("min", "max")) {
                 if (!present(r, side)) {
-                    f.error(r.at(), key + "." + side, "required in this block (both ends of the range)",
-                            "add '" + side + ": " + StageKeys.get(key + "." + side).example() + "' (volts above the negative rail)");
+                    f.error(
+                            r.at(),
+                            key + "." + side,
+                            "required in this block (both ends of the range)",
+                            "add '" + side + ": "
+                                    + StageKeys.get(key + "." + side).example() + "' (volts above the negative rail)");
                 }
             }
             if (lo == null || hi == null) {
                 return null;
             }
             if (lo > hi) {
-                f.error(Fields.where(r, "min"), key, "min " + Units.format(lo, Dimension.VOLTAGE) + " is above max "
-                        + Units.format(hi, Dimension.VOLTAGE), "swap the two values");
+                f.error(
+                        Fields.where(r, "min"),
+                        key,
+                        "min " + Units.format(lo, Dimension.VOLTAGE) + " is above max "
+                                + Units.format(hi, Dimension.VOLTAGE),
+                        "swap the two values");
                 return null;
             }
             if (rail != null && (lo < 0 || hi > rail)) {
-                f.error(Fields.where(r, lo < 0 ? "min" : "max"), key, "an output cannot go beyond the supply rails (0 to "
-                        + Units.format(rail, Dimension.VOLTAGE) + ")", "write volts above the negative rail, within the supply");
+                f.error(
+                        Fields.where(r, lo < 0 ? "min" : "max"),
+                        key,
+                        "an output cannot go beyond the supply rails (0 to " + Units.format(rail, Dimension.VOLTAGE)
+                                + ")",
+                        "write volts above the negative rail, within the supply");
                 return null;
             }
             return new Range(lo, hi);
@@ -1180,7 +1515,10 @@ public final class StageLoader {
         private Double nonNegativeOrNull(Node.Mapping m, String path, String key, Dimension d) {
             Double v = f.quantity(m, path, key, d);
             if (v != null && v < 0) {
-                f.error(Fields.where(m, key), Fields.join(path, key), "must not be negative",
+                f.error(
+                        Fields.where(m, key),
+                        Fields.join(path, key),
+                        "must not be negative",
                         "write " + d.noun() + " of 0 or more, such as '" + exampleFor(path, key, d) + "'");
                 return null;
             }
@@ -1195,7 +1533,10 @@ public final class StageLoader {
         private Double positive(Node.Mapping m, String path, String key, Dimension d) {
             Double v = f.quantity(m, path, key, d);
             if (v != null && v <= 0) {
-                f.error(Fields.where(m, key), Fields.join(path, key), "must be more than 0",
+                f.error(
+                        Fields.where(m, key),
+                        Fields.join(path, key),
+                        "must be more than 0",
                         "write " + d.noun() + " such as '" + exampleFor(path, key, d) + "'");
                 return null;
             }

@@ -26,8 +26,7 @@ import java.util.regex.Pattern;
  */
 public final class StageWriter {
 
-    private StageWriter() {
-    }
+    private StageWriter() {}
 
     /**
      * A commented stage file holding {@code answers} (key path to the text the user typed,
@@ -65,10 +64,14 @@ public final class StageWriter {
             String group = g.getKey();
             if (group.equals("limit")) {
                 writeLimit(out, g.getValue(), answers, limitBlock);
-            } else if (group.equals("gain") && !answers.containsKey("gain") && answers.containsKey("rf") && answers.containsKey("rg")) {
+            } else if (group.equals("gain")
+                    && !answers.containsKey("gain")
+                    && answers.containsKey("rf")
+                    && answers.containsKey("rg")) {
                 comment(out, "", g.getValue().get(0).why());
                 out.append("# gain: set by rf and rg below\n");
-            } else if (group.equals("source-resistance") && answers.keySet().stream().anyMatch(k -> k.startsWith("source-resistance."))) {
+            } else if (group.equals("source-resistance")
+                    && answers.keySet().stream().anyMatch(k -> k.startsWith("source-resistance."))) {
                 comment(out, "", g.getValue().get(0).why());
                 out.append("source-resistance:\n");
                 for (StageKeys.Key key : g.getValue().subList(1, g.getValue().size())) {
@@ -94,7 +97,8 @@ public final class StageWriter {
         return Topology.NON_INVERTING;
     }
 
-    private static void block(StringBuilder out, String section, List<StageKeys.Key> keys, Map<String, String> answers) {
+    private static void block(
+            StringBuilder out, String section, List<StageKeys.Key> keys, Map<String, String> answers) {
         boolean any = keys.stream().anyMatch(k -> answers.containsKey(k.path()));
         out.append(any ? "" : "# ").append(section).append(":\n");
         for (StageKeys.Key key : keys) {
@@ -103,7 +107,8 @@ public final class StageWriter {
         }
     }
 
-    private static void writeLimit(StringBuilder out, List<StageKeys.Key> keys, Map<String, String> answers, boolean asBlock) {
+    private static void writeLimit(
+            StringBuilder out, List<StageKeys.Key> keys, Map<String, String> answers, boolean asBlock) {
         StageKeys.Key scalar = keys.get(0);
         if (!asBlock) {
             line(out, "", "limit", scalar, answers.get("limit"));
@@ -126,8 +131,13 @@ public final class StageWriter {
             out.append(indent).append(name).append(": ").append(scalar(answer)).append('\n');
         } else {
             String lead = indent.startsWith("#") ? indent : indent + "# ";
-            out.append(lead).append(name).append(": ").append(scalar(key.example()))
-                    .append("    # default: ").append(key.defaultText()).append('\n');
+            out.append(lead)
+                    .append(name)
+                    .append(": ")
+                    .append(scalar(key.example()))
+                    .append("    # default: ")
+                    .append(key.defaultText())
+                    .append('\n');
         }
     }
 
@@ -250,7 +260,8 @@ public final class StageWriter {
                 case OUTPUT -> a.put("limit", exact(l.value(), Dimension.VOLTAGE));
                 case INPUT -> a.put("limit.input", exact(l.value(), Dimension.VOLTAGE));
                 case INPUT_CURRENT -> a.put("limit.input-current", exact(l.value(), Dimension.CURRENT));
-                case PERCENT_OF_FULL_SCALE -> a.put("limit.percent-of-full-scale", exact(l.value(), Dimension.RATIO, "%"));
+                case PERCENT_OF_FULL_SCALE ->
+                    a.put("limit.percent-of-full-scale", exact(l.value(), Dimension.RATIO, "%"));
                 case LSB -> {
                     a.put("limit.lsb", exact(l.value(), Dimension.NUMBER));
                     a.put("limit.bits", String.valueOf(l.bits()));
@@ -259,11 +270,13 @@ public final class StageWriter {
             }
         }
         Criterion c = s.criterion();
-        a.put("criterion", switch (c.kind()) {
-            case WORST_CASE -> "worst-case";
-            case RSS -> "rss";
-            case YIELD -> "yield " + exact(c.yieldTarget(), Dimension.RATIO, "%");
-        });
+        a.put(
+                "criterion",
+                switch (c.kind()) {
+                    case WORST_CASE -> "worst-case";
+                    case RSS -> "rss";
+                    case YIELD -> "yield " + exact(c.yieldTarget(), Dimension.RATIO, "%");
+                });
         a.put("max-to-sigma", exact(s.maxToSigma(), Dimension.NUMBER));
         a.put("trials", String.valueOf(s.trials()));
         a.put("max-trials", String.valueOf(s.maxTrials()));
@@ -328,7 +341,9 @@ public final class StageWriter {
             double back = g.doubleValue();
             double rgBack = nonInverting ? rf / (back - 1.0) : rf / back;
             if (Double.compare(rgBack, rg) == 0) {
-                return digits <= 6 ? g.stripTrailingZeros().toPlainString() : null; // a long gain reads worse than rf and rg
+                return digits <= 6
+                        ? g.stripTrailingZeros().toPlainString()
+                        : null; // a long gain reads worse than rf and rg
             }
         }
         return null;
@@ -347,7 +362,8 @@ public final class StageWriter {
             case FREQUENCY -> engineering(v, d, "Hz");
             case TEMPERATURE -> plain(v) + " C";
             case RATIO -> exact(v, d, "%");
-            case RATIO_DRIFT -> firstExact(v, d, List.of("ppm/C", "%/C"), plain(v) + " /C"); // a bare ratio per degree is exact
+            case RATIO_DRIFT ->
+                firstExact(v, d, List.of("ppm/C", "%/C"), plain(v) + " /C"); // a bare ratio per degree is exact
             case TIME -> firstExact(v, d, List.of("y", "h"), plain(v) + " s");
             default -> plain(v);
         };
@@ -383,7 +399,9 @@ public final class StageWriter {
             }
             BigDecimal scaled = new BigDecimal(v / factor);
             for (int digits = 1; digits <= 17; digits++) {
-                String text = scaled.round(new MathContext(digits)).stripTrailingZeros().toPlainString() + " " + unit;
+                String text = scaled.round(new MathContext(digits))
+                                .stripTrailingZeros()
+                                .toPlainString() + " " + unit;
                 try {
                     if (Double.compare(Units.parse(text, d), v) == 0) {
                         if (best == null || text.length() < best.length()) {
@@ -421,7 +439,8 @@ public final class StageWriter {
     public static void save(String yaml, Path file, boolean overwrite) throws InputException {
         StageLoader.parse(yaml, file);
         if (Files.isDirectory(file.toAbsolutePath())) {
-            throw new InputException(Problem.error(Located.nowhere(file), "", "is a folder", "give a file name such as 'stage.yaml'"));
+            throw new InputException(
+                    Problem.error(Located.nowhere(file), "", "is a folder", "give a file name such as 'stage.yaml'"));
         }
         AtomicFiles.write(file, yaml, overwrite, "choose another file name, or ask explicitly to overwrite it");
     }

@@ -2,7 +2,10 @@ package dev.ampsieve.stage;
 
 /** The stage-file word for each {@link Network}. */
 public enum Topology {
-    NON_INVERTING("non-inverting"), INVERTING("inverting"), FOLLOWER("follower"), DIFFERENCE("difference"),
+    NON_INVERTING("non-inverting"),
+    INVERTING("inverting"),
+    FOLLOWER("follower"),
+    DIFFERENCE("difference"),
     TRANSIMPEDANCE("transimpedance");
 
     private final String key;

@@ -16,8 +16,7 @@ package dev.ampsieve.stats;
  * and then stops with {@link Cancelled}: one block takes well under a millisecond.
  */
 public final class SequentialYield {
-    private SequentialYield() {
-    }
+    private SequentialYield() {}
 
     /** Block size between interval checks. */
     public static final int BLOCK = 1000;

@@ -28,7 +28,8 @@ public final class TruncatedNormal {
 
     public TruncatedNormal(double mean, double sigma, double lo, double hi) {
         if (!(sigma >= 0) || !(lo <= hi) || Double.isNaN(mean)) {
-            throw new IllegalArgumentException("need sigma >= 0 and lo <= hi: " + mean + ", " + sigma + ", [" + lo + ", " + hi + "]");
+            throw new IllegalArgumentException(
+                    "need sigma >= 0 and lo <= hi: " + mean + ", " + sigma + ", [" + lo + ", " + hi + "]");
         }
         this.mean = mean;
         this.sigma = sigma;

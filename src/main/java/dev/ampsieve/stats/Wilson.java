@@ -12,8 +12,7 @@ package dev.ampsieve.stats;
  * p = 0 or 1, which matters here: good parts often pass every simulated unit.
  */
 public final class Wilson {
-    private Wilson() {
-    }
+    private Wilson() {}
 
     /** Two-sided 95 % standard normal quantile, Φ⁻¹(0.975) (Abramowitz &amp; Stegun ch. 26). */
     public static final double Z95 = 1.959963984540054;
@@ -44,6 +43,5 @@ public final class Wilson {
     }
 
     /** A closed interval of proportions. */
-    public record Interval(double low, double high) {
-    }
+    public record Interval(double low, double high) {}
 }

@@ -9,8 +9,7 @@ import java.util.regex.Pattern;
  * with {@code '} gets one too, so {@link #restore} can undo the mark exactly.
  */
 public final class FormulaCells {
-    private FormulaCells() {
-    }
+    private FormulaCells() {}
 
     /** A plain decimal or scientific number, which a spreadsheet reads as a number and never as a formula. */
     private static final Pattern NUMBER = Pattern.compile("[-+]?(\\d+\\.?\\d*|\\.\\d+)([eE][-+]?\\d+)?");
@@ -19,7 +18,10 @@ public final class FormulaCells {
 
     /** Whether a spreadsheet could take {@code s} for a formula. */
     public static boolean runsAsFormula(String s) {
-        return s != null && !s.isEmpty() && STARTS.indexOf(s.charAt(0)) >= 0 && !NUMBER.matcher(s).matches();
+        return s != null
+                && !s.isEmpty()
+                && STARTS.indexOf(s.charAt(0)) >= 0
+                && !NUMBER.matcher(s).matches();
     }
 
     /** {@code s} safe to put in a CSV cell: a leading {@code '} when it could run as a formula or starts with {@code '}. */

@@ -22,8 +22,7 @@ package dev.ampsieve.text;
  * characters. Applying it twice changes nothing more.
  */
 public final class Visible {
-    private Visible() {
-    }
+    private Visible() {}
 
     /** {@code s} with every control character written as an escape; null stays null. */
     public static String of(String s) {
@@ -43,7 +42,9 @@ public final class Visible {
             } else {
                 String hex = Integer.toHexString(c);
                 int digits = c <= 0xff ? 2 : 4;
-                out.append(c <= 0xff ? "\\x" : "\\u").append("0".repeat(digits - hex.length())).append(hex);
+                out.append(c <= 0xff ? "\\x" : "\\u")
+                        .append("0".repeat(digits - hex.length()))
+                        .append(hex);
             }
         });
         return out.toString();
@@ -52,8 +53,13 @@ public final class Visible {
     /** True for the characters {@link #of} rewrites. */
     public static boolean isControl(int c) {
         return Character.getType(c) == Character.CONTROL // C0, DEL, C1
-                || c >= 0x202a && c <= 0x202e || c >= 0x2066 && c <= 0x2069
-                || c == 0x200e || c == 0x200f || c == 0x061c || c == 0x2028 || c == 0x2029;
+                || c >= 0x202a && c <= 0x202e
+                || c >= 0x2066 && c <= 0x2069
+                || c == 0x200e
+                || c == 0x200f
+                || c == 0x061c
+                || c == 0x2028
+                || c == 0x2029;
     }
 
     /** Each line of {@code text} made visible; the line feeds between them are kept. */

@@ -5,8 +5,7 @@ package dev.ampsieve.units;
  * 9th edition (2019), where k and e are exact by definition.
  */
 public final class PhysicalConstants {
-    private PhysicalConstants() {
-    }
+    private PhysicalConstants() {}
 
     /** Boltzmann constant k, J/K, exact (SI Brochure 9th ed., 2019). */
     public static final double BOLTZMANN = 1.380649e-23;

@@ -31,14 +31,13 @@ import java.util.regex.Pattern;
  */
 public final class Units {
 
-    private Units() {
-    }
+    private Units() {}
 
     /** 0 K in degrees Celsius (SI Brochure, 9th ed., 2.3.1: t/°C = T/K - 273.15). */
     private static final double ABSOLUTE_ZERO_C = -273.15;
 
-    private static final Pattern QUANTITY = Pattern.compile(
-            "^\\s*([-+]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][-+]?\\d+)?)\\s*(.*?)\\s*$");
+    private static final Pattern QUANTITY =
+            Pattern.compile("^\\s*([-+]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][-+]?\\d+)?)\\s*(.*?)\\s*$");
 
     private static final Map<String, Double> PREFIXES = new LinkedHashMap<>();
 
@@ -62,11 +61,27 @@ public final class Units {
 
     /** Base unit symbols (numerator side) and what they measure. */
     private enum Base {
-        VOLT, AMPERE, OHM, FARAD, HERTZ, DECIBEL, CELSIUS, KELVIN, PERCENT, PPM, SECOND, HOUR, YEAR, MONTH, DAY, NONE, ROOT_HERTZ, WATT
+        VOLT,
+        AMPERE,
+        OHM,
+        FARAD,
+        HERTZ,
+        DECIBEL,
+        CELSIUS,
+        KELVIN,
+        PERCENT,
+        PPM,
+        SECOND,
+        HOUR,
+        YEAR,
+        MONTH,
+        DAY,
+        NONE,
+        ROOT_HERTZ,
+        WATT
     }
 
-    private record Unit(Base base, double factor) {
-    }
+    private record Unit(Base base, double factor) {}
 
     private static final Map<String, Base> BASES = new LinkedHashMap<>();
 
@@ -159,12 +174,13 @@ public final class Units {
         String t = text.strip();
         String lower = t.toLowerCase(Locale.ROOT);
         if (lower.contains("nan") || lower.contains("inf")) {
-            throw new UnitException("'" + t + "' is not a finite number",
-                    "write " + expected.noun() + " such as '" + example + "'");
+            throw new UnitException(
+                    "'" + t + "' is not a finite number", "write " + expected.noun() + " such as '" + example + "'");
         }
         Matcher m = QUANTITY.matcher(t);
         if (!m.matches()) {
-            throw new UnitException("'" + t + "' does not start with a number",
+            throw new UnitException(
+                    "'" + t + "' does not start with a number",
                     "write " + expected.noun() + " such as '" + example + "'");
         }
         double number = Double.parseDouble(m.group(1));
@@ -178,16 +194,20 @@ public final class Units {
         }
         if (!Double.isFinite(value)) {
             // 1e400 V, or 1e308 kV: past the largest double (about 1.8e308) the value would be infinite
-            throw new UnitException("'" + t + "' is out of range: beyond the largest number (about 1.8e308 in SI units)",
+            throw new UnitException(
+                    "'" + t + "' is out of range: beyond the largest number (about 1.8e308 in SI units)",
                     "check the exponent and the prefix; write " + expected.noun() + " such as '" + example + "'");
         }
-        if (value == 0 && number != 0 || number == 0 && NONZERO_DIGIT.matcher(m.group(1)).find()) {
+        if (value == 0 && number != 0
+                || number == 0 && NONZERO_DIGIT.matcher(m.group(1)).find()) {
             // 1e-400 V would silently read as 0 V
-            throw new UnitException("'" + t + "' is out of range: below the smallest number (about 1e-308 in SI units)",
+            throw new UnitException(
+                    "'" + t + "' is out of range: below the smallest number (about 1e-308 in SI units)",
                     "check the exponent and the prefix; write 0 if you mean zero");
         }
         if (expected == Dimension.TEMPERATURE && value < ABSOLUTE_ZERO_C) {
-            throw new UnitException("'" + t + "' is below absolute zero (-273.15 °C)",
+            throw new UnitException(
+                    "'" + t + "' is below absolute zero (-273.15 °C)",
                     "write the temperature in °C, such as '" + example + "'");
         }
         return value;
@@ -201,15 +221,21 @@ public final class Units {
         double perVolt = unit.endsWith("/mV") ? 1e3 : unit.endsWith("/V") && unit.length() == 3 ? 1 : 1e6;
         double ratio = number * perVolt;
         if (!(ratio > 0) || !Double.isFinite(ratio)) {
-            return new UnitException("'" + whole + "' is a gain ratio; this field takes decibels",
+            return new UnitException(
+                    "'" + whole + "' is a gain ratio; this field takes decibels",
                     "write the gain in dB: 20 log10 of the ratio in V/V");
         }
         // rounded down to 0.1 dB: a guaranteed minimum must not grow in the conversion
         double db = Math.floor(200 * Math.log10(ratio) + 1e-9) / 10;
-        return new UnitException("'" + whole + "' is a gain ratio; this field takes decibels",
+        return new UnitException(
+                "'" + whole + "' is a gain ratio; this field takes decibels",
                 "write '" + trim(String.format(Locale.ROOT, "%.1f", db)) + " dB' (20 log10 of "
-                        + (ratio >= PLAIN_MAX ? scientific(ratio, 6)
-                                : new BigDecimal(ratio).round(new MathContext(6)).stripTrailingZeros().toPlainString())
+                        + (ratio >= PLAIN_MAX
+                                ? scientific(ratio, 6)
+                                : new BigDecimal(ratio)
+                                        .round(new MathContext(6))
+                                        .stripTrailingZeros()
+                                        .toPlainString())
                         + " V/V)");
     }
 
@@ -218,13 +244,16 @@ public final class Units {
     }
 
     /** Returns the factor to SI for {@code unitText} in a field of dimension {@code expected}. */
-    private static double interpret(String unitText, Dimension expected, String whole, String example) throws UnitException {
+    private static double interpret(String unitText, Dimension expected, String whole, String example)
+            throws UnitException {
         String u = unitText.replace(" ", "");
         if (u.isEmpty()) {
             return switch (expected) {
                 case NUMBER, RATIO, DECIBEL, RESISTANCE -> 1.0;
-                default -> throw new UnitException("'" + whole + "' has no unit",
-                        "write " + expected.noun() + " with its unit, such as '" + example + "'");
+                default ->
+                    throw new UnitException(
+                            "'" + whole + "' has no unit",
+                            "write " + expected.noun() + " with its unit, such as '" + example + "'");
             };
         }
         if (expected == Dimension.TEMPERATURE && u.equals("K")) {
@@ -245,11 +274,13 @@ public final class Units {
         Unit d = den == null ? null : unit(den, whole, expected, example);
         Dimension found = dimensionOf(n.base(), d == null ? null : d.base());
         if (found == null) {
-            throw new UnitException("unit '" + unitText + "' in '" + whole + "' is not one this tool reads",
+            throw new UnitException(
+                    "unit '" + unitText + "' in '" + whole + "' is not one this tool reads",
                     "write " + expected.noun() + " such as '" + example + "'");
         }
         if (found != expected && !(expected == Dimension.NUMBER && found == Dimension.RATIO)) {
-            throw new UnitException("'" + whole + "' is " + found.noun() + " but " + expected.noun() + " belongs here",
+            throw new UnitException(
+                    "'" + whole + "' is " + found.noun() + " but " + expected.noun() + " belongs here",
                     "write " + expected.noun() + " such as '" + example + "'");
         }
         double factor = n.factor() * baseFactor(n.base());
@@ -268,15 +299,19 @@ public final class Units {
         // so the fix names the one reading that exists instead of guessing
         if (!s.isEmpty()) {
             String first = s.substring(0, 1);
-            String swapped = first.equals(first.toUpperCase(Locale.ROOT)) ? first.toLowerCase(Locale.ROOT) : first.toUpperCase(Locale.ROOT);
+            String swapped = first.equals(first.toUpperCase(Locale.ROOT))
+                    ? first.toLowerCase(Locale.ROOT)
+                    : first.toUpperCase(Locale.ROOT);
             Unit alt = PREFIXES.containsKey(swapped) ? unitOrNull(swapped + s.substring(1)) : null;
             if (alt != null && !swapped.equals(first)) {
                 String fixed = whole.replace(s, swapped + s.substring(1));
-                throw new UnitException("'" + first + "' in '" + whole + "' is not an SI prefix",
+                throw new UnitException(
+                        "'" + first + "' in '" + whole + "' is not an SI prefix",
                         "write '" + fixed + "' (prefixes are case-sensitive: m milli, M mega, k kilo, u micro)");
             }
         }
-        throw new UnitException("unit '" + s + "' in '" + whole + "' is not one this tool reads",
+        throw new UnitException(
+                "unit '" + s + "' in '" + whole + "' is not one this tool reads",
                 "write " + expected.noun() + " such as '" + example + "'");
     }
 
@@ -377,14 +412,16 @@ public final class Units {
             return "n/a";
         }
         if (Double.isInfinite(si)) {
-            return (si < 0 ? "-" : "") + INFINITY + switch (d) {
-                case NUMBER -> "";
-                case RATIO -> " %";
-                case RATIO_DRIFT -> " ppm/°C";
-                case RESISTANCE -> " Ω";
-                case SLEW_RATE -> " V/µs";
-                default -> " " + d.symbol();
-            };
+            return (si < 0 ? "-" : "")
+                    + INFINITY
+                    + switch (d) {
+                        case NUMBER -> "";
+                        case RATIO -> " %";
+                        case RATIO_DRIFT -> " ppm/°C";
+                        case RESISTANCE -> " Ω";
+                        case SLEW_RATE -> " V/µs";
+                        default -> " " + d.symbol();
+                    };
         }
         return switch (d) {
             case DECIBEL -> trim(fixed(si, Math.max(0, digits - 3))) + " dB";
@@ -395,7 +432,8 @@ public final class Units {
             case TIME -> time(si, digits);
             // slew reads in V/µs at every speed (0.5 V/µs ... 2000 V/µs); a prefix there confuses
             // datasheets quote V/µs; a tiny requirement (a slow stage) reads better in V/s or mV/µs
-            case SLEW_RATE -> Math.abs(si) >= 1e4 || si == 0 ? sig(si * 1e-6, digits) + " V/µs" : engineering(si, digits) + "V/s";
+            case SLEW_RATE ->
+                Math.abs(si) >= 1e4 || si == 0 ? sig(si * 1e-6, digits) + " V/µs" : engineering(si, digits) + "V/s";
             case RESISTANCE -> engineering(si, digits) + "Ω";
             case THERMAL_RESISTANCE -> trim(sig(si, digits)) + " °C/W"; // no prefix: a few to a few hundred
             default -> engineering(si, digits) + d.symbol();
@@ -438,6 +476,7 @@ public final class Units {
      * {@code 1.00e+15}. Prefixed values go to scientific notation beyond f and T.
      */
     private static final double PLAIN_MIN = 1e-6;
+
     private static final double PLAIN_MAX = 1e12;
 
     /** {@code 1.00e+30}: {@code digits} significant digits in scientific notation (reads back through parse). */

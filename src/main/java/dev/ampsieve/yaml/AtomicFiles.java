@@ -20,8 +20,7 @@ import java.nio.file.attribute.PosixFilePermissions;
  * folder, a pipe or a device under the name is refused, so no write lands somewhere else.
  */
 public final class AtomicFiles {
-    private AtomicFiles() {
-    }
+    private AtomicFiles() {}
 
     /** Prefix and suffix of the temporary file: hidden, so the catalog walk never reads it. */
     static final String TEMP_SUFFIX = ".tmp";
@@ -42,8 +41,8 @@ public final class AtomicFiles {
         }
         if (attrs != null && !attrs.isRegularFile()) {
             String kind = attrs.isSymbolicLink() ? "a link" : attrs.isDirectory() ? "a folder" : "a special file";
-            throw new InputException(Problem.error(Located.nowhere(file), "", "is " + kind + "; left as it was",
-                    "give the name of a regular file"));
+            throw new InputException(Problem.error(
+                    Located.nowhere(file), "", "is " + kind + "; left as it was", "give the name of a regular file"));
         }
         if (attrs != null && !replace) {
             throw exists(file, replaceFix);
@@ -72,8 +71,11 @@ public final class AtomicFiles {
         } catch (FileAlreadyExistsException e) {
             throw exists(file, replaceFix);
         } catch (IOException e) {
-            throw new InputException(Problem.error(Located.nowhere(file), "", "cannot write the file ("
-                    + YamlFiles.describe(e) + ")", "check that the folder exists and is writable"));
+            throw new InputException(Problem.error(
+                    Located.nowhere(file),
+                    "",
+                    "cannot write the file (" + YamlFiles.describe(e) + ")",
+                    "check that the folder exists and is writable"));
         } finally {
             if (tmp != null) {
                 try {
@@ -86,8 +88,8 @@ public final class AtomicFiles {
     }
 
     private static InputException exists(Path file, String fix) {
-        return new InputException(Problem.error(Located.nowhere(file), "", "the file already exists and was left as it was",
-                fix));
+        return new InputException(
+                Problem.error(Located.nowhere(file), "", "the file already exists and was left as it was", fix));
     }
 
     /**
@@ -100,7 +102,9 @@ public final class AtomicFiles {
             return;
         }
         if (existing != null) {
-            view.setPermissions(Files.getFileAttributeView(existing, PosixFileAttributeView.class).readAttributes().permissions());
+            view.setPermissions(Files.getFileAttributeView(existing, PosixFileAttributeView.class)
+                    .readAttributes()
+                    .permissions());
         } else {
             view.setPermissions(PosixFilePermissions.fromString("rw-r--r--"));
         }

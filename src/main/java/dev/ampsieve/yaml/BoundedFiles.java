@@ -13,8 +13,7 @@ import java.nio.file.attribute.BasicFileAttributes;
  * grow while it is read.
  */
 public final class BoundedFiles {
-    private BoundedFiles() {
-    }
+    private BoundedFiles() {}
 
     /**
      * Reads a regular file (a link to one is fine), at most {@code limit} bytes.
@@ -38,7 +37,10 @@ public final class BoundedFiles {
             throw cannotRead(file, e);
         }
         if (!attrs.isRegularFile()) {
-            throw new InputException(Problem.error(Located.nowhere(file), "", "not a regular file (" + kind(file, attrs) + ")",
+            throw new InputException(Problem.error(
+                    Located.nowhere(file),
+                    "",
+                    "not a regular file (" + kind(file, attrs) + ")",
                     "give a " + kind + " file"));
         }
         // The type is checked before opening because opening a named pipe for reading waits for a
@@ -52,7 +54,9 @@ public final class BoundedFiles {
             throw cannotRead(file, e);
         }
         if (bytes.length > limit) {
-            throw new InputException(Problem.error(Located.nowhere(file), "",
+            throw new InputException(Problem.error(
+                    Located.nowhere(file),
+                    "",
                     "file is over the limit of " + limit + " bytes" + mebibytes(limit) + " for one " + kind + " file",
                     "split it into several files (sub-folders are fine)"));
         }
@@ -66,7 +70,10 @@ public final class BoundedFiles {
     }
 
     private static InputException cannotRead(Path file, IOException e) {
-        return new InputException(Problem.error(Located.nowhere(file), "", "cannot read the file (" + YamlFiles.describe(e) + ")",
+        return new InputException(Problem.error(
+                Located.nowhere(file),
+                "",
+                "cannot read the file (" + YamlFiles.describe(e) + ")",
                 "check that it exists and is readable"));
     }
 
@@ -86,12 +93,18 @@ public final class BoundedFiles {
             Object mode = Files.getAttribute(file, "unix:mode");
             if (mode instanceof Integer m) {
                 switch (m & 0170000) {
-                    case 0010000: return "a named pipe";
-                    case 0020000: return "a character device";
-                    case 0060000: return "a block device";
-                    case 0140000: return "a socket";
-                    case 0040000: return "a folder";
-                    default: break;
+                    case 0010000:
+                        return "a named pipe";
+                    case 0020000:
+                        return "a character device";
+                    case 0060000:
+                        return "a block device";
+                    case 0140000:
+                        return "a socket";
+                    case 0040000:
+                        return "a folder";
+                    default:
+                        break;
                 }
             }
         } catch (IOException | UnsupportedOperationException | IllegalArgumentException | SecurityException e) {

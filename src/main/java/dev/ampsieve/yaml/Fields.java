@@ -57,7 +57,10 @@ public final class Fields {
         if (n instanceof Node.Mapping m) {
             return m;
         }
-        error(n.at(), path, "expected a mapping (key: value lines), found " + n.kind(),
+        error(
+                n.at(),
+                path,
+                "expected a mapping (key: value lines), found " + n.kind(),
                 "indent the keys below '" + (path.isEmpty() ? "the top" : path) + "'");
         return null;
     }
@@ -75,7 +78,10 @@ public final class Fields {
         for (var e : m.keyAt().entrySet()) {
             if (!known.contains(e.getKey())) {
                 String near = closest(e.getKey(), suggest);
-                error(e.getValue(), join(path, e.getKey()), "unknown key",
+                error(
+                        e.getValue(),
+                        join(path, e.getKey()),
+                        "unknown key",
                         near != null ? "did you mean '" + near + "'?" : "known keys here: " + String.join(", ", known));
             }
         }
@@ -137,11 +143,19 @@ public final class Fields {
      * tabs are left alone: YAML block scalars ({@code notes: |}) hold them legitimately.
      */
     private void warnControls(Node.Scalar s, String field) {
-        s.text().codePoints().filter(c -> c != '\n' && c != '\t' && Visible.isControl(c)).findFirst().ifPresent(c -> {
-            String name = Character.getName(c);
-            warning(s.at(), field, String.format(Locale.ROOT, "contains control character U+%04X", c)
-                    + (name == null ? "" : " (" + name + ")"), "remove it");
-        });
+        s.text()
+                .codePoints()
+                .filter(c -> c != '\n' && c != '\t' && Visible.isControl(c))
+                .findFirst()
+                .ifPresent(c -> {
+                    String name = Character.getName(c);
+                    warning(
+                            s.at(),
+                            field,
+                            String.format(Locale.ROOT, "contains control character U+%04X", c)
+                                    + (name == null ? "" : " (" + name + ")"),
+                            "remove it");
+                });
     }
 
     public Boolean bool(Node.Mapping m, String path, String key) {
@@ -168,12 +182,20 @@ public final class Fields {
         try {
             long v = Long.parseLong(s.text().replace("_", "").strip());
             if (v < min || v > max) {
-                error(s.at(), join(path, key), v + " is outside " + min + ".." + max, "write a whole number from " + min + " to " + max);
+                error(
+                        s.at(),
+                        join(path, key),
+                        v + " is outside " + min + ".." + max,
+                        "write a whole number from " + min + " to " + max);
                 return null;
             }
             return (int) v;
         } catch (NumberFormatException e) {
-            error(s.at(), join(path, key), "'" + s.text() + "' is not a whole number", "write a whole number such as 1000");
+            error(
+                    s.at(),
+                    join(path, key),
+                    "'" + s.text() + "' is not a whole number",
+                    "write a whole number such as 1000");
             return null;
         }
     }
@@ -186,7 +208,11 @@ public final class Fields {
         try {
             return Long.parseLong(s.text().replace("_", "").strip());
         } catch (NumberFormatException e) {
-            error(s.at(), join(path, key), "'" + s.text() + "' is not a whole number", "write a whole number such as 42");
+            error(
+                    s.at(),
+                    join(path, key),
+                    "'" + s.text() + "' is not a whole number",
+                    "write a whole number such as 42");
             return null;
         }
     }
@@ -207,7 +233,10 @@ public final class Fields {
             return t;
         }
         String near = closest(t, allowed);
-        error(s.at(), join(path, key), "'" + s.text() + "' is not one of " + String.join(" | ", allowed),
+        error(
+                s.at(),
+                join(path, key),
+                "'" + s.text() + "' is not one of " + String.join(" | ", allowed),
                 near != null ? "did you mean '" + near + "'?" : "write one of " + String.join(", ", allowed));
         return null;
     }
@@ -233,7 +262,11 @@ public final class Fields {
                     warnControls(s, join(path, key) + "[" + i + "]");
                     out.add(s.text());
                 } else {
-                    error(item.at(), join(path, key) + "[" + i + "]", "expected a word, found " + item.kind(), "write '- word'");
+                    error(
+                            item.at(),
+                            join(path, key) + "[" + i + "]",
+                            "expected a word, found " + item.kind(),
+                            "write '- word'");
                 }
             }
             return out;

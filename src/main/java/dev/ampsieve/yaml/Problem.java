@@ -16,7 +16,10 @@ import java.nio.file.Path;
  */
 public record Problem(Severity severity, Path file, int line, int column, String field, String message, String fix) {
 
-    public enum Severity { ERROR, WARNING }
+    public enum Severity {
+        ERROR,
+        WARNING
+    }
 
     public Problem {
         field = field == null ? "" : field;

@@ -18,6 +18,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import org.yaml.snakeyaml.DumperOptions;
 import org.yaml.snakeyaml.LoaderOptions;
 import org.yaml.snakeyaml.Yaml;
 import org.yaml.snakeyaml.error.Mark;
@@ -33,7 +34,6 @@ import org.yaml.snakeyaml.nodes.NodeTuple;
 import org.yaml.snakeyaml.nodes.ScalarNode;
 import org.yaml.snakeyaml.nodes.SequenceNode;
 import org.yaml.snakeyaml.reader.ReaderException;
-import org.yaml.snakeyaml.DumperOptions;
 
 /**
  * Reads a YAML file into {@link Node}s that remember their line and column. Bounded on
@@ -48,11 +48,11 @@ public final class YamlFiles {
     public static final long MAX_BYTES = 4L * 1024 * 1024;
     /** Aliases are legitimate for sharing a block of values; thousands are an attack. */
     public static final int MAX_ALIASES = 50;
+
     public static final int MAX_DEPTH = 30;
     private static final String TOO_DEEP = "refused: YAML nested more than " + MAX_DEPTH + " levels deep";
 
-    private YamlFiles() {
-    }
+    private YamlFiles() {}
 
     /** Reads one file; every failure becomes an {@link InputException} naming the file (and the place, where there is one). */
     public static Node read(Path file) throws InputException {
@@ -65,8 +65,10 @@ public final class YamlFiles {
      * file shows up at once.
      */
     public static String decode(byte[] bytes, Path file) throws InputException {
-        CharsetDecoder decoder = StandardCharsets.UTF_8.newDecoder()
-                .onMalformedInput(CodingErrorAction.REPORT).onUnmappableCharacter(CodingErrorAction.REPORT);
+        CharsetDecoder decoder = StandardCharsets.UTF_8
+                .newDecoder()
+                .onMalformedInput(CodingErrorAction.REPORT)
+                .onUnmappableCharacter(CodingErrorAction.REPORT);
         ByteBuffer in = ByteBuffer.wrap(bytes);
         CharBuffer out = CharBuffer.allocate(bytes.length); // UTF-8 never gives more chars than bytes
         CoderResult r = decoder.decode(in, out, true);
@@ -77,7 +79,9 @@ public final class YamlFiles {
             int bad = in.position();
             String before = new String(bytes, 0, bad, StandardCharsets.UTF_8); // valid up to here
             String shown = before.startsWith("\uFEFF") ? before.substring(1) : before; // as parse() sees it
-            throw new InputException(Problem.error(placeOf(file, shown, shown.length()), "",
+            throw new InputException(Problem.error(
+                    placeOf(file, shown, shown.length()),
+                    "",
                     String.format(java.util.Locale.ROOT, "not valid UTF-8 text (byte 0x%02X)", bytes[bad] & 0xff),
                     "save the file as UTF-8 (Latin-1, Windows-1252 and UTF-16 files are refused)"));
         }
@@ -113,8 +117,12 @@ public final class YamlFiles {
             case "NoSuchFileException" -> "no such file";
             case "AccessDeniedException" -> "permission denied";
             case "FileSystemLoopException" -> "folder links form a loop";
-            default -> e.getClass().getSimpleName().replaceAll("Exception$", "").replaceAll("([a-z])([A-Z])", "$1 $2")
-                    .toLowerCase(java.util.Locale.ROOT);
+            default ->
+                e.getClass()
+                        .getSimpleName()
+                        .replaceAll("Exception$", "")
+                        .replaceAll("([a-z])([A-Z])", "$1 $2")
+                        .toLowerCase(java.util.Locale.ROOT);
         };
         String msg = e.getMessage();
         return msg == null || msg.isBlank() ? kind : kind + ": " + msg;
@@ -123,8 +131,11 @@ public final class YamlFiles {
     /** Parses text; {@code file} is only used in messages and may be null. */
     public static Node parse(String text, Path file) throws InputException {
         if (text.length() > MAX_BYTES) {
-            throw new InputException(Problem.error(Located.nowhere(file), "",
-                    "text is " + text.length() + " characters, over the limit of " + MAX_BYTES + " for one YAML document",
+            throw new InputException(Problem.error(
+                    Located.nowhere(file),
+                    "",
+                    "text is " + text.length() + " characters, over the limit of " + MAX_BYTES
+                            + " for one YAML document",
                     "split it into several files"));
         }
         if (text.startsWith("\uFEFF")) {
@@ -139,7 +150,10 @@ public final class YamlFiles {
         } catch (MarkedYAMLException e) {
             Mark m = e.getProblemMark() != null ? e.getProblemMark() : e.getContextMark();
             String what = e.getProblem() != null ? e.getProblem() : e.getMessage();
-            throw new InputException(Problem.error(at(file, m), "", "YAML syntax: " + firstLine(what),
+            throw new InputException(Problem.error(
+                    at(file, m),
+                    "",
+                    "YAML syntax: " + firstLine(what),
                     unclosed(e).orElse(syntaxFix(what))));
         } catch (YAMLException e) {
             throw new InputException(refusal(file, text, firstLine(e.getMessage())));
@@ -218,15 +232,25 @@ public final class YamlFiles {
         int c = i < text.length() ? text.codePointAt(i) : e.getCodePoint();
         Located at = i < text.length() ? placeOf(file, text, i) : Located.nowhere(file);
         String name = String.format(java.util.Locale.ROOT, "U+%04X", c) + (c == 0 ? " (NUL)" : "");
-        return Problem.error(at, "", "control character " + name + " is not allowed in YAML",
-                c == 0 ? "remove it; a file with NULs is not text, or was saved as UTF-16 (save it as UTF-8)"
+        return Problem.error(
+                at,
+                "",
+                "control character " + name + " is not allowed in YAML",
+                c == 0
+                        ? "remove it; a file with NULs is not text, or was saved as UTF-16 (save it as UTF-8)"
                         : "remove it (write it as an escape such as \"\\t\" inside double quotes if it belongs there)");
     }
 
     /** SnakeYAML's printable set (StreamReader.isPrintable): tab, LF, CR, NEL and non-control characters. */
     private static boolean printable(int c) {
-        return c == 0x9 || c == 0xA || c == 0xD || c == 0x85 || (c >= 0x20 && c <= 0x7E) || (c >= 0xA0 && c <= 0xD7FF)
-                || (c >= 0xE000 && c <= 0xFFFD) || (c >= 0x10000 && c <= 0x10FFFF);
+        return c == 0x9
+                || c == 0xA
+                || c == 0xD
+                || c == 0x85
+                || (c >= 0x20 && c <= 0x7E)
+                || (c >= 0xA0 && c <= 0xD7FF)
+                || (c >= 0xE000 && c <= 0xFFFD)
+                || (c >= 0x10000 && c <= 0x10FFFF);
     }
 
     /**
@@ -236,12 +260,18 @@ public final class YamlFiles {
     private static Problem refusal(Path file, String text, String what) {
         String w = what == null ? "" : what.toLowerCase(java.util.Locale.ROOT);
         if (w.contains("alias")) {
-            return Problem.error(limitAt(file, text, true), "",
-                    "refused: more than " + MAX_ALIASES + " aliases to lists or mappings (an alias-expansion bomb looks like this)",
+            return Problem.error(
+                    limitAt(file, text, true),
+                    "",
+                    "refused: more than " + MAX_ALIASES
+                            + " aliases to lists or mappings (an alias-expansion bomb looks like this)",
                     "write the values out instead of using *aliases");
         }
         if (w.contains("code point") || w.contains("exceeds the limit")) {
-            return Problem.error(Located.nowhere(file), "", "refused: the document is over " + MAX_BYTES + " characters",
+            return Problem.error(
+                    Located.nowhere(file),
+                    "",
+                    "refused: the document is over " + MAX_BYTES + " characters",
                     "split it into several files");
         }
         if (w.contains("nesting depth")) {
@@ -319,7 +349,10 @@ public final class YamlFiles {
             }
             Located loc = at(file, n.getStartMark());
             if (open.contains(n)) {
-                throw new InputException(Problem.error(loc, path, "an alias refers to a value that contains it",
+                throw new InputException(Problem.error(
+                        loc,
+                        path,
+                        "an alias refers to a value that contains it",
                         "write the values out instead of the self-referring *alias"));
             }
             if (depth > MAX_DEPTH) {
@@ -336,7 +369,8 @@ public final class YamlFiles {
             if (n instanceof ScalarNode s) {
                 boolean quoted = s.getScalarStyle() != DumperOptions.ScalarStyle.PLAIN;
                 String v = s.getValue();
-                boolean isNull = !quoted && (v.isEmpty() || v.equals("~") || v.equals("null") || v.equals("Null") || v.equals("NULL"));
+                boolean isNull = !quoted
+                        && (v.isEmpty() || v.equals("~") || v.equals("null") || v.equals("Null") || v.equals("NULL"));
                 return new Node.Scalar(loc, isNull ? null : v, quoted);
             }
             if (n instanceof SequenceNode seq) {
@@ -353,15 +387,15 @@ public final class YamlFiles {
             for (NodeTuple t : map.getValue()) {
                 Located kLoc = at(file, t.getKeyNode().getStartMark());
                 if (!(t.getKeyNode() instanceof ScalarNode key)) {
-                    throw new InputException(Problem.error(kLoc, path, "a key must be a plain word, found a list or mapping",
-                            "write 'name: value'"));
+                    throw new InputException(Problem.error(
+                            kLoc, path, "a key must be a plain word, found a list or mapping", "write 'name: value'"));
                 }
                 String k = key.getValue();
                 String kPath = path.isEmpty() ? k : path + "." + k;
                 if (entries.containsKey(k)) {
                     Located first = keyAt.get(k);
-                    throw new InputException(Problem.error(kLoc, kPath, "key written twice (first on line " + first.line() + ")",
-                            "keep one of them"));
+                    throw new InputException(Problem.error(
+                            kLoc, kPath, "key written twice (first on line " + first.line() + ")", "keep one of them"));
                 }
                 keyAt.put(k, kLoc);
                 entries.put(k, convert(t.getValueNode(), kPath, depth + 1));

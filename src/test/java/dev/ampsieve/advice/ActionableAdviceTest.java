@@ -1,7 +1,5 @@
 package dev.ampsieve.advice;
 
-import dev.ampsieve.stage.Board;
-import dev.ampsieve.stage.Follower;
 import static dev.ampsieve.testing.PartBuilder.part;
 import static dev.ampsieve.testing.StageBuilder.stage;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -18,7 +16,9 @@ import dev.ampsieve.budget.Verdict;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.catalog.Range;
 import dev.ampsieve.catalog.Spread;
+import dev.ampsieve.stage.Board;
 import dev.ampsieve.stage.Criterion;
+import dev.ampsieve.stage.Follower;
 import dev.ampsieve.stage.Limit;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.Topology;
@@ -56,10 +56,43 @@ class ActionableAdviceTest {
     void aBipolarPartOnATenMegohmSourceGetsAnIbTargetThroughTheRealBudget() {
         // follower (Rf 0), Rs 10 MΩ, 0..70 °C, limit 1 mV, no gain terms (no full scale), no supply or
         // common-mode change, no service life: what is left is offset, drift, bias and the resistor noise
-        Stage s = new Stage(new Follower(0, 10e6, 0), 0, 70, 5.0, 0, 0, null, null, 0.1, 10, 1, null, 0, 0, 0,
-                Limit.output(1e-3), Criterion.WORST_CASE, 3, 2000, 2000, 1L, Trim.NONE, 1000, null, false, null, null, Board.NONE, null);
+        Stage s = new Stage(
+                new Follower(0, 10e6, 0),
+                0,
+                70,
+                5.0,
+                0,
+                0,
+                null,
+                null,
+                0.1,
+                10,
+                1,
+                null,
+                0,
+                0,
+                0,
+                Limit.output(1e-3),
+                Criterion.WORST_CASE,
+                3,
+                2000,
+                2000,
+                1L,
+                Trim.NONE,
+                1000,
+                null,
+                false,
+                null,
+                null,
+                Board.NONE,
+                null);
         // bipolar: vos 100 µV, drift 1 µV/°C, IB 2 nA at 25 °C and 4 nA over temperature, IOS 1 nA; no noise of its own
-        Part base = part("BIP").vos(null, 100e-6).drift(null, 1e-6).ios(null, 1e-9).noise(0.0, 0.0, 0.0, 0.0).build();
+        Part base = part("BIP")
+                .vos(null, 100e-6)
+                .drift(null, 1e-6)
+                .ios(null, 1e-9)
+                .noise(0.0, 0.0, 0.0, 0.0)
+                .build();
         Part p = PartEdit.copy(base, base.vos(), base.vosDrift(), new Spread(null, 2e-9, 4e-9), base.ios());
         BudgetFunction engine = BudgetCalculator::compute;
         Ranking r = Ranker.rank(s, List.of(p), engine);
@@ -78,7 +111,8 @@ class ActionableAdviceTest {
         assertNotNull(ib, r.advice().lines().toString());
         assertEquals(56.6e-12, ib.value(), 1e-18);
         assertEquals(70.0, ib.atC(), 0);
-        assertTrue(r.advice().lines().contains("  - IB ≤ 56.6 pA at 70 °C (IOS counted equal to it)"),
+        assertTrue(
+                r.advice().lines().contains("  - IB ≤ 56.6 pA at 70 °C (IOS counted equal to it)"),
                 r.advice().lines().toString());
         // re-checked: the part with the printed figure fits; one unit more in the last digit does not
         assertTrue(fits(engine, s, PartEdit.withIb(p, 56.6e-12)));
@@ -93,9 +127,42 @@ class ActionableAdviceTest {
         // follower fed from 0 Ω (no bias or resistor-noise term), no noise of its own, no common-mode or supply
         // change, no gain terms (no full scale), no service life: the budget is offset + drift alone,
         // vos + drift x 45 °C (0..70 °C), against 100 µV
-        Stage s = new Stage(new Follower(0, 0, 0), 0, 70, 5.0, 0, 0, null, null, 0.1, 10, 1, null, 0, 0, 0,
-                Limit.output(100e-6), Criterion.WORST_CASE, 3, 2000, 2000, 1L, Trim.NONE, 1000, null, false, null, null, Board.NONE, null);
-        Part p = part("P").vos(null, 80e-6).drift(null, 0.51e-6).ib(null, 1e-9).noise(0.0, 0.0, 0.0, 0.0).build();
+        Stage s = new Stage(
+                new Follower(0, 0, 0),
+                0,
+                70,
+                5.0,
+                0,
+                0,
+                null,
+                null,
+                0.1,
+                10,
+                1,
+                null,
+                0,
+                0,
+                0,
+                Limit.output(100e-6),
+                Criterion.WORST_CASE,
+                3,
+                2000,
+                2000,
+                1L,
+                Trim.NONE,
+                1000,
+                null,
+                false,
+                null,
+                null,
+                Board.NONE,
+                null);
+        Part p = part("P")
+                .vos(null, 80e-6)
+                .drift(null, 0.51e-6)
+                .ib(null, 1e-9)
+                .noise(0.0, 0.0, 0.0, 0.0)
+                .build();
         BudgetFunction engine = BudgetCalculator::compute;
         Ranking r = Ranker.rank(s, List.of(p), engine);
         // 80 µV + 0.51 µV/°C x 45 °C = 80 + 22.95 = 102.95 µV > 100 µV
@@ -126,8 +193,12 @@ class ActionableAdviceTest {
         assertEquals(44.4e-9, t.get(PartTarget.Quantity.DRIFT).value(), 1e-15);
         // no bias current in the part: no IB target
         assertFalse(t.containsKey(PartTarget.Quantity.IB));
-        assertTrue(r.advice().lines().contains("  - vos.max ≤ 4.46 µV at 25 °C (drift as now)"), r.advice().lines().toString());
-        assertTrue(r.advice().lines().contains("  - drift ≤ 44.4 nV/°C"), r.advice().lines().toString());
+        assertTrue(
+                r.advice().lines().contains("  - vos.max ≤ 4.46 µV at 25 °C (drift as now)"),
+                r.advice().lines().toString());
+        assertTrue(
+                r.advice().lines().contains("  - drift ≤ 44.4 nV/°C"),
+                r.advice().lines().toString());
         // re-checked as printed
         LinearEngine e = new LinearEngine();
         assertTrue(fits(e, s, PartEdit.withVos(p, 4.46e-6, p.vosDrift())));
@@ -160,11 +231,25 @@ class ActionableAdviceTest {
             double vfs = s.fullScaleOutput() == null ? 0 : s.fullScaleOutput();
             double g = vfs * s.noiseGain() / (a + s.noiseGain());
             List<TermResult> terms = new ArrayList<>(b.terms());
-            terms.add(new TermResult("open-loop-gain", "open-loop gain", g, g / s.sourceGain(), Double.NaN, false, "test"));
+            terms.add(new TermResult(
+                    "open-loop-gain", "open-loop gain", g, g / s.sourceGain(), Double.NaN, false, "test"));
             double wc = b.worstCaseV() + g;
             Verdict v = wc <= b.limitV() ? Verdict.FITS : Verdict.NO_FIT;
-            return new Budget(p, s, b.noiseGain(), terms, wc, wc, 0, b.limitV(), b.yield(), b.trimmed(), v,
-                    b.limitingTerm(), b.constraints(), List.of());
+            return new Budget(
+                    p,
+                    s,
+                    b.noiseGain(),
+                    terms,
+                    wc,
+                    wc,
+                    0,
+                    b.limitV(),
+                    b.yield(),
+                    b.trimmed(),
+                    v,
+                    b.limitingTerm(),
+                    b.constraints(),
+                    List.of());
         };
     }
 
@@ -177,7 +262,10 @@ class ActionableAdviceTest {
         // this stage held to the limit divided by the later gain (10 mV x G1 / 1000 = 10 µV x G1): the same
         // inequality, so G1 <= 321.03; Rf = 320.03 k rounded down to 320 k gives G1 = 321, the later stage
         // 1000 / 321 = 3.115.
-        Stage s = stage().rf(999e3).rg(1e3).limit(new Limit(Limit.Kind.INPUT, 10e-6, 0, 0)).build();
+        Stage s = stage().rf(999e3)
+                .rg(1e3)
+                .limit(new Limit(Limit.Kind.INPUT, 10e-6, 0, 0))
+                .build();
         Part p = part("P").vos(null, 2e-6).build();
         BudgetFunction engine = withGainError(1e5);
         Ranking r = Ranker.rank(s, List.of(p), engine);
@@ -189,10 +277,13 @@ class ActionableAdviceTest {
         assertEquals(321.0, split.values().get("gainHere"), 1e-9);
         assertEquals(1000.0 / 321, split.values().get("gainAfter"), 1e-9);
         assertEquals(3.21e-3, split.values().get("limitHereV"), 1e-12);
-        assertTrue(split.text().startsWith("split the gain with a later stage: a gain of 1000 in one stage does not fit"
-                + " even at half of it; 321 here (Rf 320 kΩ with Rg 1.00 kΩ) and 3.12 after it would, this stage held to"
-                + " 3.21 mV at its output (the limit divided by 3.12): the later stage's errors are divided by 321 when"
-                + " referred to the input"), split.text());
+        assertTrue(
+                split.text()
+                        .startsWith("split the gain with a later stage: a gain of 1000 in one stage does not fit"
+                                + " even at half of it; 321 here (Rf 320 kΩ with Rg 1.00 kΩ) and 3.12 after it would, this stage held to"
+                                + " 3.21 mV at its output (the limit divided by 3.12): the later stage's errors are divided by 321 when"
+                                + " referred to the input"),
+                split.text());
         // re-checked: the split stage as printed fits; Rf one unit higher (321 k, G1 = 322) does not
         assertTrue(fits(engine, Advisor.splitAt(s, 320e3), p));
         assertFalse(fits(engine, Advisor.splitAt(s, 321e3), p));
@@ -206,8 +297,12 @@ class ActionableAdviceTest {
         Stage s = stage().source(10e3).build();
         Part p = part("P").vos(null, 9.995e-6).ib(null, 1e-9).build();
         Ranking r = Ranker.rank(s, List.of(p), new LinearEngine());
-        assertFalse(changes(r).containsKey(Change.Kind.LOWER_SOURCE_RESISTANCE), changes(r).toString());
-        assertTrue(r.advice().lines().stream().noneMatch(l -> l.matches(".* [0-9.]+ Ω or lower.*") && l.contains("source")),
+        assertFalse(
+                changes(r).containsKey(Change.Kind.LOWER_SOURCE_RESISTANCE),
+                changes(r).toString());
+        assertTrue(
+                r.advice().lines().stream()
+                        .noneMatch(l -> l.matches(".* [0-9.]+ Ω or lower.*") && l.contains("source")),
                 r.advice().lines().toString());
         // half the gain does fit (50 x 9.995 µV + 50 x 1 nA x 10 kΩ = 999.75 µV): that is offered instead
         assertTrue(changes(r).containsKey(Change.Kind.LOWER_GAIN));
@@ -228,8 +323,21 @@ class ActionableAdviceTest {
             List<ConstraintResult> cs = new ArrayList<>(b.constraints());
             cs.add(new ConstraintResult(Constraints.OUTPUT_SWING, ok, "test"));
             Verdict v = ok && wc <= b.limitV() ? Verdict.FITS : Verdict.NO_FIT;
-            return new Budget(p, s, b.noiseGain(), b.terms(), wc, wc, 0, b.limitV(), b.yield(), b.trimmed(), v,
-                    b.limitingTerm(), cs, List.of());
+            return new Budget(
+                    p,
+                    s,
+                    b.noiseGain(),
+                    b.terms(),
+                    wc,
+                    wc,
+                    0,
+                    b.limitV(),
+                    b.yield(),
+                    b.trimmed(),
+                    v,
+                    b.limitingTerm(),
+                    cs,
+                    List.of());
         };
         return f::apply;
     }
@@ -241,18 +349,54 @@ class ActionableAdviceTest {
         // But Rs is in series with Rg: at 400 Ω the gain is 20/1.4 = 14.29 and the full scale 2.857 V, so the
         // output must reach 2.5 V +/- 2.857 V, past both rails: not offered. (The largest Rs keeping the swing,
         // 20 k / 10.5 - 1 k = 904.8 Ω, leaves 2 µV/Ω x 904.8 Ω = 1.81 mV: nothing between fits.)
-        Stage s = stage().topology(Topology.INVERTING).rf(20e3).rg(1e3).source(1e3).fullScale(2.0).build();
+        Stage s = stage().topology(Topology.INVERTING)
+                .rf(20e3)
+                .rg(1e3)
+                .source(1e3)
+                .fullScale(2.0)
+                .build();
         Part p = part("P").vos(null, 10e-6).build();
         BudgetFunction engine = withSwing();
         // the old edit (Rs changed, output left at 2 V) would have fitted at 400 Ω
-        Stage old = new Stage(s.network().withSourceResistance(400), s.tMin(), s.tMax(), s.supplyVoltage(),
-                s.supplyVariation(), s.commonModeSwing(), s.commonModeRange(), s.outputRange(), s.bandLow(), s.bandHigh(),
-                s.filterOrder(), s.fullScaleOutput(), s.ratioTolerance(), s.ratioTempco(), s.serviceLife(), s.limit(),
-                s.criterion(), s.maxToSigma(), s.trials(), s.maxTrials(), s.seed(), s.trim(), s.quantity(), s.maxPrice(), s.acCoupled(), null, null, Board.NONE, null);
+        Stage old = new Stage(
+                s.network().withSourceResistance(400),
+                s.tMin(),
+                s.tMax(),
+                s.supplyVoltage(),
+                s.supplyVariation(),
+                s.commonModeSwing(),
+                s.commonModeRange(),
+                s.outputRange(),
+                s.bandLow(),
+                s.bandHigh(),
+                s.filterOrder(),
+                s.fullScaleOutput(),
+                s.ratioTolerance(),
+                s.ratioTempco(),
+                s.serviceLife(),
+                s.limit(),
+                s.criterion(),
+                s.maxToSigma(),
+                s.trials(),
+                s.maxTrials(),
+                s.seed(),
+                s.trim(),
+                s.quantity(),
+                s.maxPrice(),
+                s.acCoupled(),
+                null,
+                null,
+                Board.NONE,
+                null);
         assertTrue(fits(engine, old, p));
-        assertEquals(2.0 * (20.0 / 1.4) / 10.0, StageEdit.withSourceResistance(s, 400).fullScaleOutput(), 1e-12);
+        assertEquals(
+                2.0 * (20.0 / 1.4) / 10.0,
+                StageEdit.withSourceResistance(s, 400).fullScaleOutput(),
+                1e-12);
         Ranking r = Ranker.rank(s, List.of(p), engine);
-        assertFalse(changes(r).containsKey(Change.Kind.LOWER_SOURCE_RESISTANCE), r.advice().lines().toString());
+        assertFalse(
+                changes(r).containsKey(Change.Kind.LOWER_SOURCE_RESISTANCE),
+                r.advice().lines().toString());
     }
 
     @Test
@@ -262,7 +406,11 @@ class ActionableAdviceTest {
         // Standard S (1.00): 100 x 8 µV + 247.5 µV = 1.0475 mV misses; with resistors of
         // tol <= (1 mV - 0.8 mV) / 2.475 V = 8.0808e-5 it fits: printed 0.00808 % (rounded down)
         Stage s = stage().ratioTolerance(1e-4).build();
-        Part z = part("Z").architecture(dev.ampsieve.catalog.Architecture.CHOPPER).price(3.0).vos(null, 1e-6).build();
+        Part z = part("Z")
+                .architecture(dev.ampsieve.catalog.Architecture.CHOPPER)
+                .price(3.0)
+                .vos(null, 1e-6)
+                .build();
         Part std = part("S").price(1.0).vos(null, 8e-6).build();
         Ranking r = Ranker.rank(s, List.of(z, std), new LinearEngine());
         ZeroDriftAdvice zd = r.advice().zeroDrift();
@@ -270,8 +418,11 @@ class ActionableAdviceTest {
         assertNotNull(zd.resistorOption(), r.advice().lines().toString());
         assertEquals("S", zd.resistorOption().part().id());
         assertEquals(8.08e-5, zd.resistorOption().change().values().get("ratioTolerance"), 1e-12);
-        assertTrue(r.advice().lines().stream().anyMatch(l -> l.startsWith("Or a standard part with better resistors: S at"
-                + " 1.00 USD would fit with resistors matched to 80.8 ppm")), r.advice().lines().toString());
+        assertTrue(
+                r.advice().lines().stream()
+                        .anyMatch(l -> l.startsWith("Or a standard part with better resistors: S at"
+                                + " 1.00 USD would fit with resistors matched to 80.8 ppm")),
+                r.advice().lines().toString());
         // re-checked as printed
         assertTrue(fits(new LinearEngine(), StageEdit.withResistors(s, 8.08e-5 / 1e-4), std));
         assertFalse(fits(new LinearEngine(), StageEdit.withResistors(s, 8.09e-5 / 1e-4), std));

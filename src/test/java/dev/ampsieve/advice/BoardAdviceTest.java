@@ -31,8 +31,11 @@ class BoardAdviceTest {
         PartFixture p = PartFixture.ideal();
         p.vos = new Spread(null, 1e-6, null);
         Ranking r = Ranker.rank(s, List.of(p.build()), BudgetCalculator::compute);
-        assertTrue(r.advice().lines().stream().anyMatch(l -> l.startsWith("Its largest term comes from the board, not the part:"
-                + " thermal EMF, 800 µV at the output (80 % of the limit)")), r.advice().lines().toString());
+        assertTrue(
+                r.advice().lines().stream()
+                        .anyMatch(l -> l.startsWith("Its largest term comes from the board, not the part:"
+                                + " thermal EMF, 800 µV at the output (80 % of the limit)")),
+                r.advice().lines().toString());
     }
 
     @Test
@@ -44,11 +47,15 @@ class BoardAdviceTest {
         PartFixture p = PartFixture.ideal();
         p.vos = new Spread(null, 2e-6, null);
         Ranking r = Ranker.rank(s, List.of(p.build()), BudgetCalculator::compute);
-        Map<Change.Kind, Change> c = r.advice().noFit().changes().stream().collect(Collectors.toMap(Change::kind, x -> x));
+        Map<Change.Kind, Change> c =
+                r.advice().noFit().changes().stream().collect(Collectors.toMap(Change::kind, x -> x));
         Change emf = c.get(Change.Kind.LESS_THERMAL_EMF);
         assertEquals(0.0997, emf.values().get("gradient"), 1e-12);
         assertEquals(2 * 40e-6 * 0.0997, emf.values().get("thermalEmfV"), 1e-15);
-        assertTrue(emf.text().startsWith("less thermal EMF at the input: 7.98 µV or less (now 16.0 µV): pair the 2 junction(s)"),
+        assertTrue(
+                emf.text()
+                        .startsWith(
+                                "less thermal EMF at the input: 7.98 µV or less (now 16.0 µV): pair the 2 junction(s)"),
                 emf.text());
     }
 
@@ -59,10 +66,13 @@ class BoardAdviceTest {
         // π/2 x 10 Hz: 3.3 x 100 x sqrt(4kT x 10.1 kΩ x 15.608 Hz) = 3.3 x 100 x 54.66 nV = 18.04 µV) needs
         // I <= 981.96 µV / (100 x 10 kΩ) = 0.98196 nA, R >= 10 V / 0.98196 nA = 10.184 GΩ; printed to 3 digits on
         // the fitting side: 10.2 GΩ
-        Stage s = StageLoader.parse("gain: 100\nlimit: 1 mV\nsource-resistance: 10 kohm\n"
-                + "band: {low: 0.1 Hz, high: 10 Hz, filter-order: 1}\nleakage: {resistance: 1 Gohm, voltage: 10 V}\n", null);
+        Stage s = StageLoader.parse(
+                "gain: 100\nlimit: 1 mV\nsource-resistance: 10 kohm\n"
+                        + "band: {low: 0.1 Hz, high: 10 Hz, filter-order: 1}\nleakage: {resistance: 1 Gohm, voltage: 10 V}\n",
+                null);
         Ranking r = Ranker.rank(s, List.of(PartFixture.ideal().build()), BudgetCalculator::compute);
-        Map<Change.Kind, Change> c = r.advice().noFit().changes().stream().collect(Collectors.toMap(Change::kind, x -> x));
+        Map<Change.Kind, Change> c =
+                r.advice().noFit().changes().stream().collect(Collectors.toMap(Change::kind, x -> x));
         Change leak = c.get(Change.Kind.LESS_LEAKAGE);
         assertEquals(10.2e9, leak.values().get("leakageResistance"), 1e-3);
         assertTrue(leak.text().contains("or a guard ring driven at the node's potential"), leak.text());

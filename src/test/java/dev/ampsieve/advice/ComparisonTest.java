@@ -29,9 +29,14 @@ class ComparisonTest {
         Budget bb = budget(s, b, 1.5e-3, 0.4e-3, 1.2e-3, Verdict.NO_FIT);
         Comparison c = Comparison.of(ba, bb);
         assertEquals("A", c.preferred());
-        assertEquals("A fits (margin 50 %) and B does not (worst-case 1.90 mV against 1.00 mV, limited by initial"
-                + " offset (1.50 mV)): A.", c.conclusion());
-        Comparison.TermDelta offset = c.terms().stream().filter(t -> t.key().equals("offset")).findFirst().orElseThrow();
+        assertEquals(
+                "A fits (margin 50 %) and B does not (worst-case 1.90 mV against 1.00 mV, limited by initial"
+                        + " offset (1.50 mV)): A.",
+                c.conclusion());
+        Comparison.TermDelta offset = c.terms().stream()
+                .filter(t -> t.key().equals("offset"))
+                .findFirst()
+                .orElseThrow();
         // 0.2 mV against 1.5 mV: A better by 1.3 mV, 7.5 times
         assertEquals("a", offset.better());
         assertEquals(1.3e-3, offset.differenceV(), 1e-15);
@@ -40,11 +45,14 @@ class ComparisonTest {
 
     @Test
     void aPartThatMissesEvenAfterTheTrimIsJudgedAfterIt() {
-        Comparison c = Comparison.of(budget(s, a, 0.2e-3, 0.3e-3, 0.31e-3, Verdict.FITS),
+        Comparison c = Comparison.of(
+                budget(s, a, 0.2e-3, 0.3e-3, 0.31e-3, Verdict.FITS),
                 budget(s, b, 1.5e-3, 0.4e-3, 1.2e-3, Verdict.NO_FIT));
         // the limiting term belongs to the untrimmed budget, so it is named as such
-        assertEquals("A fits (margin 50 %) and B does not (worst-case after the trim 1.20 mV against 1.00 mV, largest"
-                + " term before the trim initial offset (1.50 mV)): A.", c.conclusion());
+        assertEquals(
+                "A fits (margin 50 %) and B does not (worst-case after the trim 1.20 mV against 1.00 mV, largest"
+                        + " term before the trim initial offset (1.50 mV)): A.",
+                c.conclusion());
     }
 
     @Test
@@ -53,8 +61,10 @@ class ComparisonTest {
         Budget bb = budget(s, b, 0.4e-3, 0.4e-3, 0.4e-3, Verdict.FITS);
         Comparison c = Comparison.of(ba, bb);
         // 3.00 - 1.00 = 2.00 per unit, 2000.00 over 1000 units; margins 20 % (B) and 50 % (A)
-        assertEquals("Both fit; B costs 2.00 USD less per unit (2000.00 USD over 1000 units), margin 20 % against"
-                + " 50 %: B.", c.conclusion());
+        assertEquals(
+                "Both fit; B costs 2.00 USD less per unit (2000.00 USD over 1000 units), margin 20 % against"
+                        + " 50 %: B.",
+                c.conclusion());
     }
 
     @Test
@@ -67,7 +77,8 @@ class ComparisonTest {
     @Test
     void identicalBudgetsPreferNeither() {
         Part a2 = part("A2").price(3.00).build();
-        Comparison c = Comparison.of(budget(s, a, 0.2e-3, 0.3e-3, 0.3e-3, Verdict.FITS),
+        Comparison c = Comparison.of(
+                budget(s, a, 0.2e-3, 0.3e-3, 0.3e-3, Verdict.FITS),
                 budget(s, a2, 0.2e-3, 0.3e-3, 0.3e-3, Verdict.FITS));
         assertNull(c.preferred());
         assertTrue(c.conclusion().startsWith("Both fit at the same cost with the same margin"), c.conclusion());
@@ -77,16 +88,21 @@ class ComparisonTest {
     void sufficiencyAnswersYesOrNoFirst() {
         Sufficiency yes = Sufficiency.of(budget(s, b, 0.4e-3, 0.4e-3, 0.4e-3, Verdict.FITS));
         assertTrue(yes.yes());
-        assertEquals("yes: B meets the limit untrimmed; worst-case 800 µV against 1.00 mV (margin 20 %).", yes.answer());
+        assertEquals(
+                "yes: B meets the limit untrimmed; worst-case 800 µV against 1.00 mV (margin 20 %).", yes.answer());
 
         Sufficiency trim = Sufficiency.of(budget(s, b, 1.5e-3, 0.4e-3, 0.41e-3, Verdict.FITS_AFTER_TRIM));
         assertFalse(trim.yes());
-        assertEquals("no: B needs the trim; untrimmed worst-case 1.90 mV against 1.00 mV, limited by initial offset"
-                + " (1.50 mV); after the trim 410 µV.", trim.answer());
+        assertEquals(
+                "no: B needs the trim; untrimmed worst-case 1.90 mV against 1.00 mV, limited by initial offset"
+                        + " (1.50 mV); after the trim 410 µV.",
+                trim.answer());
 
         Sufficiency over = Sufficiency.of(budget(s, b, 0.9e-3, 0.3e-3, 0.3e-3, Verdict.NO_FIT));
-        assertEquals("no: B does not meet the limit untrimmed; worst-case 1.20 mV against 1.00 mV (20 % over), limited by"
-                + " initial offset (900 µV).", over.answer());
+        assertEquals(
+                "no: B does not meet the limit untrimmed; worst-case 1.20 mV against 1.00 mV (20 % over), limited by"
+                        + " initial offset (900 µV).",
+                over.answer());
 
         Sufficiency rejected = Sufficiency.of(Budgets.rejected(s, b, "supply", "needs 5 V, rated 9 V to 36 V"));
         assertEquals("no: B fails a hard constraint: supply: needs 5 V, rated 9 V to 36 V", rejected.answer());

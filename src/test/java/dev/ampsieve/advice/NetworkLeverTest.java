@@ -4,8 +4,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.ampsieve.budget.BudgetCalculator;
-import dev.ampsieve.fixtures.PartFixture;
 import dev.ampsieve.catalog.Spread;
+import dev.ampsieve.fixtures.PartFixture;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.StageLoader;
 import java.util.List;
@@ -45,7 +45,10 @@ class NetworkLeverTest {
         p.cin = 2e-12;
         Change c = changes(s, p).get(Change.Kind.LOWER_GAIN);
         assertEquals(9.99e3, c.values().get("rf"), 1e-6);
-        assertTrue(c.text().startsWith("a smaller feedback resistor: Rf 9.99 kΩ with Cf 15.0 pF (the same signal bandwidth)"),
+        assertTrue(
+                c.text()
+                        .startsWith(
+                                "a smaller feedback resistor: Rf 9.99 kΩ with Cf 15.0 pF (the same signal bandwidth)"),
                 c.text()); // Cf x 15/9.99 keeps Rf Cf
         assertTrue(!changes(s, p).containsKey(Change.Kind.LOWER_SOURCE_RESISTANCE)); // a lower shunt only raises NG
     }

@@ -53,14 +53,22 @@ class NoFitAdviceTest {
         // a trim leaves 1.64 - 0.40 + 0.01 = 1.25 mV: no trim helps
         assertTrue(!c.containsKey(Change.Kind.NARROWER_TEMPERATURE));
         assertTrue(!c.containsKey(Change.Kind.ALLOW_TRIM));
-        assertTrue(r.advice().lines().stream().anyMatch(l -> l.startsWith("Nothing fits. Closest: P, worst-case 1.64 mV of"
-                + " 1.00 mV (64 % over), limited by bias current (700 µV).")), r.advice().lines().toString());
+        assertTrue(
+                r.advice().lines().stream()
+                        .anyMatch(l -> l.startsWith("Nothing fits. Closest: P, worst-case 1.64 mV of"
+                                + " 1.00 mV (64 % over), limited by bias current (700 µV).")),
+                r.advice().lines().toString());
         // the input signal stays: full scale 2.5 V x 60.9 / 100 = 1.5225 V
-        assertTrue(r.advice().lines().contains("  - a gain of 60.9 or lower (now 100): Rf 59.9 kΩ with Rg 1.00 kΩ;"
-                + " full-scale output then 1.52 V (now 2.50 V)"), r.advice().lines().toString());
+        assertTrue(
+                r.advice()
+                        .lines()
+                        .contains("  - a gain of 60.9 or lower (now 100): Rf 59.9 kΩ with Rg 1.00 kΩ;"
+                                + " full-scale output then 1.52 V (now 2.50 V)"),
+                r.advice().lines().toString());
         // a part: 100 * (9.4 uV + IB * 10 k) <= 1 mV  ->  IB <= 0.6 uV / 10 k = 60 pA; printed rounded down
         assertEquals(List.of(new PartTarget(PartTarget.Quantity.IB, 59.9e-12, Double.NaN)), n.targets());
-        assertTrue(r.advice().lines().contains("  - IB ≤ 59.9 pA from 0 °C to 70 °C (IOS counted equal to it)"),
+        assertTrue(
+                r.advice().lines().contains("  - IB ≤ 59.9 pA from 0 °C to 70 °C (IOS counted equal to it)"),
                 r.advice().lines().toString());
     }
 
@@ -89,7 +97,10 @@ class NoFitAdviceTest {
     @Test
     void twoPointCalibrationIsOfferedWhenOnePointIsNotEnough() {
         // resistor ratio 0.1 %: 2.5 V * (99/100) * 0.001 = 2.475 mV, which a one-point trim keeps
-        Stage s = stage().fullScale(2.5).ratioTolerance(0.001).trim(new Trim(true, Trim.Method.ONE_POINT, 0, 0.3)).build();
+        Stage s = stage().fullScale(2.5)
+                .ratioTolerance(0.001)
+                .trim(new Trim(true, Trim.Method.ONE_POINT, 0, 0.3))
+                .build();
         Part p = part("P").vos(null, 1e-6).build();
         Ranking r = Ranker.rank(s, List.of(p), new LinearEngine());
         Change c = changes(r).get(Change.Kind.TWO_POINT_TRIM);
@@ -124,7 +135,8 @@ class NoFitAdviceTest {
         Stage s = stage().supply(48.0).build();
         Ranking r = Ranker.rank(s, List.of(part("A").build(), part("B").build()), new LinearEngine());
         assertNull(r.advice().noFit().closest());
-        assertTrue(r.advice().lines().contains("Nothing fits: every part fails a hard constraint: supply (2)."),
+        assertTrue(
+                r.advice().lines().contains("Nothing fits: every part fails a hard constraint: supply (2)."),
                 r.advice().lines().toString());
     }
 
@@ -140,10 +152,21 @@ class NoFitAdviceTest {
             double target = st.criterion().yieldTarget();
             double low = target >= 0.99 ? 0.9504 : 0.9493;
             dev.ampsieve.budget.Budget b = new LinearEngine().compute(st, pt);
-            return new dev.ampsieve.budget.Budget(pt, st, b.noiseGain(), b.terms(), b.worstCaseV(), b.rssV(), 0,
-                    b.limitV(), new dev.ampsieve.budget.YieldResult(0.96, low, 0.97, 20000, "sampled"), b.trimmed(),
+            return new dev.ampsieve.budget.Budget(
+                    pt,
+                    st,
+                    b.noiseGain(),
+                    b.terms(),
+                    b.worstCaseV(),
+                    b.rssV(),
+                    0,
+                    b.limitV(),
+                    new dev.ampsieve.budget.YieldResult(0.96, low, 0.97, 20000, "sampled"),
+                    b.trimmed(),
                     low >= target ? dev.ampsieve.budget.Verdict.FITS : dev.ampsieve.budget.Verdict.NO_FIT,
-                    b.limitingTerm(), b.constraints(), List.of());
+                    b.limitingTerm(),
+                    b.constraints(),
+                    List.of());
         };
         Ranking r = Ranker.rank(s, List.of(p), engine);
         Change c = changes(r).get(Change.Kind.LOWER_YIELD_TARGET);
@@ -180,7 +203,9 @@ class NoFitAdviceTest {
         Ranking r = Ranker.rank(s, List.of(p), new LinearEngine());
         Map<Change.Kind, Change> c = changes(r);
         assertTrue(!c.containsKey(Change.Kind.LOWER_GAIN) && !c.containsKey(Change.Kind.SPLIT_GAIN), c.toString());
-        assertTrue(r.advice().lines().stream().noneMatch(l -> l.contains(" 0 Ω")), r.advice().lines().toString());
+        assertTrue(
+                r.advice().lines().stream().noneMatch(l -> l.contains(" 0 Ω")),
+                r.advice().lines().toString());
     }
 
     @Test
@@ -188,14 +213,18 @@ class NoFitAdviceTest {
         // LSB form: 16 bits of 4.096 V, LSB 62.5 µV (reference-checks §9). Offset only, NG 100 x 1.419 µV
         // = 141.9 µV: the limit needed is 142 µV = 2.272 LSB. Printed as "2.27 LSB" (141.875 µV) it would
         // not fit; 2.28 LSB does.
-        Stage lsb = stage().limit(new dev.ampsieve.stage.Limit(dev.ampsieve.stage.Limit.Kind.LSB, 1, 16, 4.096)).build();
+        Stage lsb = stage().limit(new dev.ampsieve.stage.Limit(dev.ampsieve.stage.Limit.Kind.LSB, 1, 16, 4.096))
+                .build();
         Part p = part("P").vos(null, 1.419e-6).build();
         Change c = changes(Ranker.rank(lsb, List.of(p), new LinearEngine())).get(Change.Kind.LOOSER_LIMIT);
         assertEquals(142e-6, c.values().get("limitV"), 1e-12);
         assertTrue(c.text().startsWith("a limit of 2.28 LSB (142 µV at the output) or looser (now 1 LSB)"), c.text());
         // input form, NG 3 (Rf 2 k, Rg 1 k): 3 x 473.2 µV = 1.4196 mV needs 1.42 mV = 473.33 µV at the input;
         // "473 µV" (1.419 mV at the output) would not fit, 474 µV does
-        Stage in = stage().rf(2e3).rg(1e3).limit(new dev.ampsieve.stage.Limit(dev.ampsieve.stage.Limit.Kind.INPUT, 100e-6, 0, 0)).build();
+        Stage in = stage().rf(2e3)
+                .rg(1e3)
+                .limit(new dev.ampsieve.stage.Limit(dev.ampsieve.stage.Limit.Kind.INPUT, 100e-6, 0, 0))
+                .build();
         Part q = part("Q").vos(null, 473.2e-6).build();
         Change d = changes(Ranker.rank(in, List.of(q), new LinearEngine())).get(Change.Kind.LOOSER_LIMIT);
         assertTrue(d.text().startsWith("a limit of 474 µV at the input (1.42 mV at the output)"), d.text());

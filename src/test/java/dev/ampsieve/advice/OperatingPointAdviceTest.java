@@ -70,7 +70,8 @@ class OperatingPointAdviceTest {
         // The term: IB through 1 Mohm grows 226.274 µV x (2^(dT/10) - 1), drift 1 µV/°C x dT. Beside it the bias
         // term 226.274 µV (10 pA x 2^4.5 x 1 Mohm), the drift term 1 µV/°C x 45 °C = 45 µV and the 1 Mohm's noise
         // allowance, 3.3 x sqrt(4kT R (15.708 - 0.1) Hz) at 343.15 K = 1.795 µV: the term may take
-        // 350 - 226.274 - 45 - 1.795 = 76.93 µV, reached at dT = 4.03 °C (2^0.403 - 1 = 0.32226; x 226.274 = 72.92, + 4.03).
+        // 350 - 226.274 - 45 - 1.795 = 76.93 µV, reached at dT = 4.03 °C (2^0.403 - 1 = 0.32226; x 226.274 = 72.92, +
+        // 4.03).
         // At 100 ohm (P = 72.5 mW, dT 14.5 °C) it is 226.274 x (2^1.45 - 1) + 14.5 = 406.4 µV.
         // Load: 200 x (0.01 + 6.25/RL) = 4.03 -> RL = 6.25/0.010145 = 616 ohm (about).
         // Package: at 100 ohm, P = 72.5 mW: theta-ja <= 4.03 / 0.0725 = 55.6 °C/W (about).
@@ -78,10 +79,15 @@ class OperatingPointAdviceTest {
         Stage s = hotStage();
         Ranking r = Ranker.rank(s, List.of(p), ENGINE);
         assertEquals("self-heating", r.advice().noFit().limitingTerm());
-        assertEquals(406.4e-6, r.candidates().get(0).budget().term("self-heating").outputV(), 0.1e-6);
-        assertTrue(r.advice().lines().stream().anyMatch(l -> l.contains("limited by self-heating (")
-                && l.contains("an operating-point term: a cooler part (lower quiescent power or theta-ja) or a higher load"
-                        + " resistance")), r.advice().lines().toString());
+        assertEquals(
+                406.4e-6, r.candidates().get(0).budget().term("self-heating").outputV(), 0.1e-6);
+        assertTrue(
+                r.advice().lines().stream()
+                        .anyMatch(l -> l.contains("limited by self-heating (")
+                                && l.contains(
+                                        "an operating-point term: a cooler part (lower quiescent power or theta-ja) or a higher load"
+                                                + " resistance")),
+                r.advice().lines().toString());
 
         Change load = changes(r).get(Change.Kind.HIGHER_LOAD_RESISTANCE);
         assertNotNull(load, r.advice().lines().toString());
@@ -92,12 +98,19 @@ class OperatingPointAdviceTest {
         assertFalse(fits(s.toBuilder().loadResistance(rl - Phrases.unit3(rl)).build(), p));
 
         PartTarget theta = r.advice().noFit().targets().stream()
-                .filter(t -> t.quantity() == PartTarget.Quantity.THETA_JA).findFirst().orElseThrow();
+                .filter(t -> t.quantity() == PartTarget.Quantity.THETA_JA)
+                .findFirst()
+                .orElseThrow();
         assertEquals(55.5, theta.value(), 0.1, "hand estimate 55.6 °C/W, printed rounded down");
         assertTrue(fits(s, PartEdit.withThetaJa(p, theta.value())));
         assertFalse(fits(s, PartEdit.withThetaJa(p, theta.value() + Phrases.unit3(theta.value()))));
-        assertTrue(r.advice().lines().contains("  - theta-ja ≤ " + dev.ampsieve.units.Units.format(theta.value(),
-                dev.ampsieve.units.Dimension.THERMAL_RESISTANCE) + " (a cooler package, or more copper under it)"),
+        assertTrue(
+                r.advice()
+                        .lines()
+                        .contains("  - theta-ja ≤ "
+                                + dev.ampsieve.units.Units.format(
+                                        theta.value(), dev.ampsieve.units.Dimension.THERMAL_RESISTANCE)
+                                + " (a cooler package, or more copper under it)"),
                 r.advice().lines().toString());
     }
 
@@ -121,12 +134,18 @@ class OperatingPointAdviceTest {
         Stage s = sf.limitV(10e-6).build();
         Ranking r = Ranker.rank(s, List.of(f.build()), ENGINE);
         assertEquals("chopping-ripple", r.advice().noFit().limitingTerm());
-        assertEquals(19.999e-6, r.candidates().get(0).budget().term("chopping-ripple").outputV(), 1e-9);
+        assertEquals(
+                19.999e-6,
+                r.candidates().get(0).budget().term("chopping-ripple").outputV(),
+                1e-9);
         Change c = changes(r).get(Change.Kind.STEEPER_FILTER);
         assertNotNull(c, r.advice().lines().toString());
         assertEquals(1.0, c.values().get("filterOrder"), 0.0);
-        assertTrue(c.text().startsWith("a Butterworth low-pass of order 1 at 1.00 kHz after the amplifier (now none)"), c.text());
-        assertTrue(r.advice().lines().stream().anyMatch(l -> l.contains("a stage filter that removes the ripple")),
+        assertTrue(
+                c.text().startsWith("a Butterworth low-pass of order 1 at 1.00 kHz after the amplifier (now none)"),
+                c.text());
+        assertTrue(
+                r.advice().lines().stream().anyMatch(l -> l.contains("a stage filter that removes the ripple")),
                 r.advice().lines().toString());
     }
 }

@@ -46,13 +46,21 @@ class OverflowRejectionTest {
         parts.add(loud());
         Ranking with = Ranker.rank(stage, parts, BudgetCalculator::compute);
 
-        Rejected r = with.rejected().stream().filter(x -> x.id().equals("loud-amp")).findFirst().orElseThrow();
+        Rejected r = with.rejected().stream()
+                .filter(x -> x.id().equals("loud-amp"))
+                .findFirst()
+                .orElseThrow();
         assertEquals(List.of(Constraints.FINITE), r.failed());
-        assertTrue(r.reason().startsWith("finite: too large to compute: noise (en 1.00e+191 V/√Hz, in 1.00 pA/√Hz; rms ∞ V"),
+        assertTrue(
+                r.reason()
+                        .startsWith("finite: too large to compute: noise (en 1.00e+191 V/√Hz, in 1.00 pA/√Hz; rms ∞ V"),
                 r.reason());
-        assertTrue(r.reason().endsWith("; check these catalog and stage values for a wrong prefix or exponent"), r.reason());
+        assertTrue(
+                r.reason().endsWith("; check these catalog and stage values for a wrong prefix or exponent"),
+                r.reason());
         // the other 48 parts rank exactly as before
-        assertEquals(without.candidates().stream().map(Candidate::id).toList(),
+        assertEquals(
+                without.candidates().stream().map(Candidate::id).toList(),
                 with.candidates().stream().map(Candidate::id).toList());
         assertEquals(without.rejected().size() + 1, with.rejected().size());
         assertFalse(with.candidates().isEmpty());

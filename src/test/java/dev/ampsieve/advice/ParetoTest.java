@@ -24,7 +24,8 @@ class ParetoTest {
 
     private static Candidate candidate(String id, double cost, double errorV) {
         Part p = part(id).price(cost).build();
-        return Candidate.of(budget(STAGE, p, errorV / 2, errorV / 2, errorV / 2, errorV <= 1e-3 ? Verdict.FITS : Verdict.NO_FIT));
+        return Candidate.of(
+                budget(STAGE, p, errorV / 2, errorV / 2, errorV / 2, errorV <= 1e-3 ? Verdict.FITS : Verdict.NO_FIT));
     }
 
     @Test
@@ -41,9 +42,10 @@ class ParetoTest {
             List<Candidate> front = Pareto.front(cs);
             Set<String> on = new HashSet<>(front.stream().map(Candidate::id).toList());
             for (Candidate c : cs) {
-                boolean dominated = cs.stream().anyMatch(d -> d.effectiveCost() <= c.effectiveCost()
-                        && d.errorV() <= c.errorV()
-                        && (d.effectiveCost() < c.effectiveCost() || d.errorV() < c.errorV()));
+                boolean dominated = cs.stream()
+                        .anyMatch(d -> d.effectiveCost() <= c.effectiveCost()
+                                && d.errorV() <= c.errorV()
+                                && (d.effectiveCost() < c.effectiveCost() || d.errorV() < c.errorV()));
                 // on the front exactly when no other candidate is at least as good in both and better in one
                 assertEquals(!dominated, on.contains(c.id()), "round " + round + " " + c.id());
             }
@@ -52,7 +54,8 @@ class ParetoTest {
                 Candidate prev = front.get(i - 1);
                 Candidate cur = front.get(i);
                 boolean same = cur.effectiveCost() == prev.effectiveCost() && cur.errorV() == prev.errorV();
-                assertTrue(same || cur.effectiveCost() > prev.effectiveCost() && cur.errorV() < prev.errorV(),
+                assertTrue(
+                        same || cur.effectiveCost() > prev.effectiveCost() && cur.errorV() < prev.errorV(),
                         "round " + round);
             }
             assertFalse(front.isEmpty());

@@ -20,11 +20,15 @@ import org.junit.jupiter.api.Test;
 class PriceBreakRankingTest {
 
     /** Dear in small orders, cheap in large ones: 2.00 from 1, 1.40 from 1000, 0.90 from 10000. */
-    private static final Part VOLUME = part("volume").price(new Price(List.of(new Price.Break(1, 2.00),
-            new Price.Break(1000, 1.40), new Price.Break(10_000, 0.90)), "USD")).build();
+    private static final Part VOLUME = part("volume")
+            .price(new Price(
+                    List.of(new Price.Break(1, 2.00), new Price.Break(1000, 1.40), new Price.Break(10_000, 0.90)),
+                    "USD"))
+            .build();
     /** Flatter: 1.50 from 1, 1.20 from 10000. */
-    private static final Part STEADY = part("steady").price(new Price(List.of(new Price.Break(1, 1.50),
-            new Price.Break(10_000, 1.20)), "USD")).build();
+    private static final Part STEADY = part("steady")
+            .price(new Price(List.of(new Price.Break(1, 1.50), new Price.Break(10_000, 1.20)), "USD"))
+            .build();
 
     private static Ranking rank(int quantity) {
         Stage s = stage().quantity(quantity).build();
@@ -36,7 +40,9 @@ class PriceBreakRankingTest {
     void smallBuildPaysTheSmallOrderPrices() {
         Ranking r = rank(10);
         // 10 units: volume pays its 1-unit break 2.00 (10 < 1000), steady its 1.50: steady first
-        assertEquals(List.of("steady", "volume"), r.candidates().stream().map(Candidate::id).toList());
+        assertEquals(
+                List.of("steady", "volume"),
+                r.candidates().stream().map(Candidate::id).toList());
         assertEquals(1.50, r.candidates().get(0).effectiveCost(), 0);
         assertEquals(2.00, r.candidates().get(1).effectiveCost(), 0);
     }
@@ -45,7 +51,9 @@ class PriceBreakRankingTest {
     void largeBuildPaysTheVolumePrices() {
         Ranking r = rank(10_000);
         // 10000 units: volume 0.90, steady 1.20: the order flips
-        assertEquals(List.of("volume", "steady"), r.candidates().stream().map(Candidate::id).toList());
+        assertEquals(
+                List.of("volume", "steady"),
+                r.candidates().stream().map(Candidate::id).toList());
         assertEquals(0.90, r.candidates().get(0).effectiveCost(), 0);
         assertEquals(1.20, r.candidates().get(1).effectiveCost(), 0);
         assertEquals("volume", r.advice().pick().id());
@@ -55,7 +63,9 @@ class PriceBreakRankingTest {
     void theBreakBetweenTwoQuantitiesIsTheLowerOne() {
         // 5000 units: volume's largest break not above 5000 is 1000 (1.40); steady's is 1 (1.50)
         Ranking r = rank(5000);
-        assertEquals(List.of("volume", "steady"), r.candidates().stream().map(Candidate::id).toList());
+        assertEquals(
+                List.of("volume", "steady"),
+                r.candidates().stream().map(Candidate::id).toList());
         assertEquals(1.40, r.candidates().get(0).effectiveCost(), 0);
     }
 
@@ -64,7 +74,12 @@ class PriceBreakRankingTest {
         Stage s = stage().quantity(10).maxPrice(1.80).build();
         Budget b = dev.ampsieve.budget.BudgetCalculator.compute(s, VOLUME);
         // at 10 units volume costs 2.00, over the 1.80 ceiling by 0.20
-        assertEquals("ceiling 1.80 USD; part 2.00 USD; over by 0.20 USD", b.constraints().stream()
-                .filter(c -> c.name().equals("price")).findFirst().orElseThrow().detail());
+        assertEquals(
+                "ceiling 1.80 USD; part 2.00 USD; over by 0.20 USD",
+                b.constraints().stream()
+                        .filter(c -> c.name().equals("price"))
+                        .findFirst()
+                        .orElseThrow()
+                        .detail());
     }
 }

@@ -31,13 +31,15 @@ class RankerCancellationTest {
             parts.add(part("P" + i).price(1.00).build());
         }
         List<String> budgeted = new ArrayList<>();
-        assertThrows(Cancelled.class, () -> Ranker.rank(s, parts, (st, p) -> {
-            budgeted.add(p.id());
-            if (budgeted.size() == 2) {
-                Thread.currentThread().interrupt(); // Ctrl-C while the second part is budgeted
-            }
-            return budget(st, p, 0.1e-3, 0.1e-3, 0.1e-3, Verdict.FITS);
-        }));
+        assertThrows(
+                Cancelled.class,
+                () -> Ranker.rank(s, parts, (st, p) -> {
+                    budgeted.add(p.id());
+                    if (budgeted.size() == 2) {
+                        Thread.currentThread().interrupt(); // Ctrl-C while the second part is budgeted
+                    }
+                    return budget(st, p, 0.1e-3, 0.1e-3, 0.1e-3, Verdict.FITS);
+                }));
         assertEquals(List.of("P1", "P2"), budgeted);
     }
 }

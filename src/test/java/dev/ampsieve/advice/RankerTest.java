@@ -59,12 +59,17 @@ class RankerTest {
         assertEquals(1500.0, t.savingTotal(), 1e-9);
         assertEquals("CHEAP", r.advice().pick().id());
         assertEquals("PREC", r.advice().cheapestAsIs().id());
-        assertEquals(List.of("CHEAP", "PREC"), r.candidates().stream().map(Candidate::id).toList());
+        assertEquals(
+                List.of("CHEAP", "PREC"),
+                r.candidates().stream().map(Candidate::id).toList());
         // margins: CHEAP after the trim (1 - 0.41) = 59 %, PREC (1 - 0.5) = 50 %
         assertEquals(0.59, r.candidates().get(0).margin(), 1e-12);
-        assertTrue(r.advice().lines().stream().anyMatch(l -> l.startsWith("A one-point trim is warranted: CHEAP at 1.00 USD"
-                + " plus the trim at 0.50 USD costs 1.50 USD per unit, 1.50 USD less than PREC as it is (1500.00 USD over"
-                + " 1000 units)")), r.advice().lines().toString());
+        assertTrue(
+                r.advice().lines().stream()
+                        .anyMatch(l -> l.startsWith("A one-point trim is warranted: CHEAP at 1.00 USD"
+                                + " plus the trim at 0.50 USD costs 1.50 USD per unit, 1.50 USD less than PREC as it is (1500.00 USD over"
+                                + " 1000 units)")),
+                r.advice().lines().toString());
     }
 
     @Test
@@ -102,8 +107,14 @@ class RankerTest {
     }
 
     private static Part chopper(double price) {
-        return part("CHOP").architecture(Architecture.CHOPPER).input(InputType.CMOS).price(price)
-                .ib(null, 300e-12).noise(20e-9, null, 150e-15, null).fchop(20e3).build();
+        return part("CHOP")
+                .architecture(Architecture.CHOPPER)
+                .input(InputType.CMOS)
+                .price(price)
+                .ib(null, 300e-12)
+                .noise(20e-9, null, 150e-15, null)
+                .fchop(20e3)
+                .build();
     }
 
     @Test
@@ -119,17 +130,28 @@ class RankerTest {
         assertTrue(z.warranted());
         assertEquals("CHOP", z.selfCorrecting().id());
         // 20 kHz against a 10 Hz band edge: 2000 times, well clear
-        assertTrue(z.caveats().stream().anyMatch(c -> c.startsWith("chopping at 20.0 kHz is 2000 times the 10.0 Hz band edge")),
+        assertTrue(
+                z.caveats().stream()
+                        .anyMatch(c -> c.startsWith("chopping at 20.0 kHz is 2000 times the 10.0 Hz band edge")),
                 z.caveats().toString());
-        assertTrue(z.caveats().stream().anyMatch(c -> c.startsWith("bias current up to 300 pA")), z.caveats().toString());
-        assertTrue(z.caveats().stream().anyMatch(c -> c.startsWith("current noise 150 fA/√Hz")), z.caveats().toString());
+        assertTrue(
+                z.caveats().stream().anyMatch(c -> c.startsWith("bias current up to 300 pA")),
+                z.caveats().toString());
+        assertTrue(
+                z.caveats().stream().anyMatch(c -> c.startsWith("current noise 150 fA/√Hz")),
+                z.caveats().toString());
     }
 
     @Test
     void whenSeveralZeroDriftPartsFitTheAdviceDoesNotSayOnlyOneDoes() {
         Stage s = stage().bandHigh(10).build();
         Part chop = chopper(2.20);
-        Part az = part("AZ").architecture(Architecture.AUTO_ZERO).input(InputType.CMOS).price(3.10).fchop(20e3).build();
+        Part az = part("AZ")
+                .architecture(Architecture.AUTO_ZERO)
+                .input(InputType.CMOS)
+                .price(3.10)
+                .fchop(20e3)
+                .build();
         Part std = part("STD").price(1.00).build();
         Map<Part, Budget> m = new LinkedHashMap<>();
         m.put(chop, budget(s, chop, 0.5e-3, 0.2e-3, 0.2e-3, Verdict.FITS));
@@ -137,12 +159,20 @@ class RankerTest {
         m.put(std, budget(s, std, 1.0e-3, 0.9e-3, 0.9e-3, Verdict.NO_FIT));
         Advice a = rank(s, m).advice();
         assertEquals(ZeroDriftAdvice.Status.ONLY_OPTION, a.zeroDrift().status());
-        String line = a.lines().stream().filter(l -> l.startsWith("A zero-drift part is warranted")).findFirst().orElseThrow();
-        assertTrue(line.startsWith("A zero-drift part is warranted: only zero-drift parts fit (2); the cheapest, CHOP"
-                + " (chopper), costs 2.20"), line);
+        String line = a.lines().stream()
+                .filter(l -> l.startsWith("A zero-drift part is warranted"))
+                .findFirst()
+                .orElseThrow();
+        assertTrue(
+                line.startsWith("A zero-drift part is warranted: only zero-drift parts fit (2); the cheapest, CHOP"
+                        + " (chopper), costs 2.20"),
+                line);
         // a single one is still named as the only one
         m.remove(az);
-        String one = rank(s, m).advice().lines().stream().filter(l -> l.startsWith("A zero-drift")).findFirst().orElseThrow();
+        String one = rank(s, m).advice().lines().stream()
+                .filter(l -> l.startsWith("A zero-drift"))
+                .findFirst()
+                .orElseThrow();
         assertTrue(one.startsWith("A zero-drift part is warranted: only CHOP (chopper) fits, at 2.20"), one);
     }
 
@@ -182,8 +212,12 @@ class RankerTest {
         ZeroDriftAdvice z = r.advice().zeroDrift();
         assertEquals(ZeroDriftAdvice.Status.NOT_WARRANTED, z.status());
         assertEquals(-1.20, z.savingPerUnit(), 1e-12);
-        assertTrue(r.advice().lines().contains("A zero-drift part is not needed: STD (standard) fits at 1.00 USD,"
-                + " 1.20 USD less than the cheapest zero-drift part that fits, CHOP."), r.advice().lines().toString());
+        assertTrue(
+                r.advice()
+                        .lines()
+                        .contains("A zero-drift part is not needed: STD (standard) fits at 1.00 USD,"
+                                + " 1.20 USD less than the cheapest zero-drift part that fits, CHOP."),
+                r.advice().lines().toString());
     }
 
     @Test
@@ -193,9 +227,12 @@ class RankerTest {
         Candidate c = Candidate.of(budget(s, chop, 0.1e-3, 0.1e-3, 0.1e-3, Verdict.FITS));
         List<String> caveats = Advisor.caveats(s, c);
         // 2 kHz / 500 Hz = 4, under the common-practice clearance of 10
-        assertTrue(caveats.stream().anyMatch(l -> l.startsWith("chopping at 2.00 kHz is only 4 times the 500 Hz band edge")),
+        assertTrue(
+                caveats.stream()
+                        .anyMatch(l -> l.startsWith("chopping at 2.00 kHz is only 4 times the 500 Hz band edge")),
                 caveats.toString());
-        assertTrue(caveats.stream().anyMatch(l -> l.startsWith("bias current is not in the catalog")), caveats.toString());
+        assertTrue(
+                caveats.stream().anyMatch(l -> l.startsWith("bias current is not in the catalog")), caveats.toString());
     }
 
     @Test
@@ -216,7 +253,9 @@ class RankerTest {
         m.put(c, budget(s, c, 0.4e-3, 0.4e-3, 0.4e-3, Verdict.FITS));
         Ranking r = rank(s, m);
         assertEquals("C", r.advice().pick().id());
-        assertEquals(List.of("C", "A", "B", "NOFIT"), r.candidates().stream().map(Candidate::id).toList());
+        assertEquals(
+                List.of("C", "A", "B", "NOFIT"),
+                r.candidates().stream().map(Candidate::id).toList());
     }
 
     @Test
@@ -231,7 +270,9 @@ class RankerTest {
         m.put(b, budget(s, b, 0.2e-3, 0.2e-3, 0.2e-3, Verdict.FITS)); // margin 60 %
         m.put(far, budget(s, far, 2e-3, 1e-3, 1e-3, Verdict.NO_FIT)); // 200 % over
         m.put(near, budget(s, near, 0.6e-3, 0.5e-3, 0.5e-3, Verdict.NO_FIT)); // 10 % over
-        assertEquals(List.of("B", "A", "NEAR", "FAR"), rank(s, m).candidates().stream().map(Candidate::id).toList());
+        assertEquals(
+                List.of("B", "A", "NEAR", "FAR"),
+                rank(s, m).candidates().stream().map(Candidate::id).toList());
     }
 
     @Test
@@ -242,7 +283,9 @@ class RankerTest {
         m.put(hot, Budgets.rejected(s, hot, "temperature", "needs 0..70 °C, rated 0..50 °C (20 °C short)"));
         Ranking r = rank(s, m);
         assertEquals(1, r.rejected().size());
-        assertEquals("temperature: needs 0..70 °C, rated 0..50 °C (20 °C short)", r.rejected().get(0).reason());
+        assertEquals(
+                "temperature: needs 0..70 °C, rated 0..50 °C (20 °C short)",
+                r.rejected().get(0).reason());
         assertTrue(r.candidates().stream().noneMatch(c -> c.id().equals("HOT")));
         assertTrue(!r.paretoIds().contains("HOT"));
     }
@@ -261,8 +304,12 @@ class RankerTest {
         // cannot be priced from it, and smaller orders usually cost more per unit (common practice)
         Stage s = stage().trim(true, 10e-6, 0.50).quantity(400).build();
         Ranking r = rank(s, precAndCheap(s, Verdict.FITS_AFTER_TRIM));
-        assertTrue(r.advice().lines().contains("Prices are the catalog's, each for its stated order quantity (1000 units),"
-                + " not for this build of 400: smaller orders usually cost more per unit."), r.advice().lines().toString());
+        assertTrue(
+                r.advice()
+                        .lines()
+                        .contains("Prices are the catalog's, each for its stated order quantity (1000 units),"
+                                + " not for this build of 400: smaller orders usually cost more per unit."),
+                r.advice().lines().toString());
         // a build at or above the quoted quantity needs no such remark
         Stage big = stage().trim(true, 10e-6, 0.50).quantity(1000).build();
         assertTrue(rank(big, precAndCheap(big, Verdict.FITS_AFTER_TRIM)).advice().lines().stream()
@@ -277,7 +324,8 @@ class RankerTest {
         Map<Part, Budget> m = new LinkedHashMap<>();
         m.put(chop, budget(s, chop, 0.5e-3, 0.2e-3, 0.2e-3, Verdict.FITS));
         ZeroDriftAdvice z = rank(s, m).advice().zeroDrift();
-        assertTrue(z.caveats().stream().anyMatch(c -> c.startsWith("chopping at 20.0 kHz is inside the 50.0 kHz band:")),
+        assertTrue(
+                z.caveats().stream().anyMatch(c -> c.startsWith("chopping at 20.0 kHz is inside the 50.0 kHz band:")),
                 z.caveats().toString());
     }
 
@@ -291,7 +339,10 @@ class RankerTest {
         Part chop = chopper(2.20);
         Ranking r = Ranker.rank(s, List.of(chop), dev.ampsieve.budget.BudgetCalculator::compute);
         List<String> caveats = r.advice().zeroDrift().caveats();
-        assertTrue(caveats.stream().anyMatch(c -> c.startsWith("bias current up to 300 pA at 25 °C, 6.79 nA at 70 °C in this"
-                + " budget")), caveats.toString());
+        assertTrue(
+                caveats.stream()
+                        .anyMatch(c -> c.startsWith(
+                                "bias current up to 300 pA at 25 °C, 6.79 nA at 70 °C in this" + " budget")),
+                caveats.toString());
     }
 }

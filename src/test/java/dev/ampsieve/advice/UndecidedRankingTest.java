@@ -41,11 +41,16 @@ class UndecidedRankingTest {
         s.trials = 2000;
         s.maxTrials = 20_000;
         // the cheapest first would be the wrong order: price must not lift an undecided part over a fit
-        List<dev.ampsieve.catalog.Part> parts = List.of(part("no-fit", 2e-3, 0.5).build(),
-                part("undecided", 1e-3, 1.0).build(), part("fits", 0.5e-3, 3.0).build());
+        List<dev.ampsieve.catalog.Part> parts = List.of(
+                part("no-fit", 2e-3, 0.5).build(),
+                part("undecided", 1e-3, 1.0).build(),
+                part("fits", 0.5e-3, 3.0).build());
         Ranking r = Ranker.rank(s.build(), parts, BudgetCalculator::compute);
-        assertEquals(List.of("fits", "undecided", "no-fit"), r.candidates().stream().map(Candidate::id).toList());
-        assertEquals(List.of(Verdict.FITS, Verdict.UNDECIDED, Verdict.NO_FIT),
+        assertEquals(
+                List.of("fits", "undecided", "no-fit"),
+                r.candidates().stream().map(Candidate::id).toList());
+        assertEquals(
+                List.of(Verdict.FITS, Verdict.UNDECIDED, Verdict.NO_FIT),
                 r.candidates().stream().map(Candidate::verdict).toList());
         // an undecided part is no pick, and the advice says what would settle it
         assertEquals("fits", r.advice().pick().id());
@@ -53,7 +58,9 @@ class UndecidedRankingTest {
         assertNotNull(u);
         assertEquals("undecided", u.candidate().id());
         assertEquals(20_000, u.yield().trials());
-        assertTrue(r.advice().lines().stream().anyMatch(l -> l.startsWith("undecided is undecided: after 20000 simulated units")),
+        assertTrue(
+                r.advice().lines().stream()
+                        .anyMatch(l -> l.startsWith("undecided is undecided: after 20000 simulated units")),
                 () -> String.join("\n", r.advice().lines()));
     }
 
@@ -63,8 +70,11 @@ class UndecidedRankingTest {
         s.criterion = Criterion.yield(within(2) / within(3)); // the part's true yield exactly
         s.trials = 2000;
         s.maxTrials = 20_000;
-        Sufficiency a = Sufficiency.of(BudgetCalculator.compute(s.build(), part("p", 1e-3, 1.0).build()));
-        assertTrue(!a.yes() && a.answer().startsWith("no: p is undecided untrimmed: after 20000 simulated units"), a.answer());
+        Sufficiency a = Sufficiency.of(
+                BudgetCalculator.compute(s.build(), part("p", 1e-3, 1.0).build()));
+        assertTrue(
+                !a.yes() && a.answer().startsWith("no: p is undecided untrimmed: after 20000 simulated units"),
+                a.answer());
     }
 
     @Test
@@ -80,10 +90,16 @@ class UndecidedRankingTest {
         StageFixture s = StageFixture.follower().limitV(2e-3).temps(-20, 70);
         PartFixture p = PartFixture.ideal().vos(null, 1e-3, null).drift(null, 10e-6);
         // worst case 1.45 mV: (2 - 1.45) / 2 = 0.275
-        assertEquals(0.275, Candidate.of(BudgetCalculator.compute(s.build(), p.build())).margin(), 1e-12);
+        assertEquals(
+                0.275,
+                Candidate.of(BudgetCalculator.compute(s.build(), p.build())).margin(),
+                1e-12);
         // RSS sqrt(1 + 0.2025) mV = 1.0965856 mV: (2 - 1.0965856) / 2 = 0.4517072
         s.criterion = Criterion.RSS;
-        assertEquals(0.4517072, Candidate.of(BudgetCalculator.compute(s.build(), p.build())).margin(), 1e-7);
+        assertEquals(
+                0.4517072,
+                Candidate.of(BudgetCalculator.compute(s.build(), p.build())).margin(),
+                1e-7);
     }
 
     @Test

@@ -27,8 +27,21 @@ class YieldWordingTest {
     /** Limit 1 mV, yield 99.9 %, one-point trim allowed; one offset term of 0.6 mV (RSS 0.6 mV). */
     private static Budget budget(Stage s, Part p, YieldResult y, YieldResult afterTrim, Verdict v) {
         TermResult t = new TermResult("offset", "initial offset", 0.6e-3, 0.6e-5, 25, false, "test");
-        return new Budget(p, s, s.noiseGain(), List.of(t), 0.6e-3, 0.6e-3, 0, s.limitVolts(), y,
-                new Trimmed(0.5e-3, 0.5e-3, afterTrim), v, "offset", List.of(), List.of());
+        return new Budget(
+                p,
+                s,
+                s.noiseGain(),
+                List.of(t),
+                0.6e-3,
+                0.6e-3,
+                0,
+                s.limitVolts(),
+                y,
+                new Trimmed(0.5e-3, 0.5e-3, afterTrim),
+                v,
+                "offset",
+                List.of(),
+                List.of());
     }
 
     private static Stage stage999() {
@@ -38,8 +51,12 @@ class YieldWordingTest {
     @Test
     void aYieldJustUnder100PercentIsNotPrintedAs100() {
         // 99.993 % observed, 95 % lower end 99.962 %: one decimal would print both as 100.0 %
-        Budget b = budget(stage999(), part("A").build(), new YieldResult(0.99993, 0.99962, 0.99998, 13000, "sampled"),
-                null, Verdict.FITS);
+        Budget b = budget(
+                stage999(),
+                part("A").build(),
+                new YieldResult(0.99993, 0.99962, 0.99998, 13000, "sampled"),
+                null,
+                Verdict.FITS);
         String answer = Sufficiency.of(b).answer();
         assertTrue(answer.contains("yield 99.99 % (95 % interval from 99.96 %, target 99.9 %)"), answer);
         assertFalse(answer.contains("100.0 %"), answer);
@@ -51,11 +68,18 @@ class YieldWordingTest {
         // (0.5 mV) is half the limit; the reason given must be the yield
         Stage s = stage999();
         Budget a = budget(s, part("A").price(3.0).build(), new YieldResult(1, 1, 1, 0, "all-pass"), null, Verdict.FITS);
-        Budget b = budget(s, part("B").price(1.0).build(), new YieldResult(0.8, 0.78, 0.82, 1000, "sampled"),
-                new YieldResult(0.9993, 0.99883, 0.99958, 20000, "sampled"), Verdict.NO_FIT);
+        Budget b = budget(
+                s,
+                part("B").price(1.0).build(),
+                new YieldResult(0.8, 0.78, 0.82, 1000, "sampled"),
+                new YieldResult(0.9993, 0.99883, 0.99958, 20000, "sampled"),
+                Verdict.NO_FIT);
         Comparison c = Comparison.of(a, b);
         assertEquals("A", c.preferred());
-        assertTrue(c.conclusion().contains("B does not (yield after the trim 99.93 % (95 % interval from 99.88 %; target 99.9 %)"),
+        assertTrue(
+                c.conclusion()
+                        .contains(
+                                "B does not (yield after the trim 99.93 % (95 % interval from 99.88 %; target 99.9 %)"),
                 c.conclusion());
     }
 }

@@ -42,7 +42,11 @@ class ChoppingRippleTest {
         for (int n = 1; n <= 8; n++) {
             for (double f : new double[] {0.0, 0.3e3, 1e3, 3.7e3, 100e3}) {
                 double want = fromPoles(n, 1e3, f);
-                assertEquals(want, ChoppingRippleTerm.butterworth(n, 1e3, f), want * 1e-9, "order " + n + " at " + f + " Hz");
+                assertEquals(
+                        want,
+                        ChoppingRippleTerm.butterworth(n, 1e3, f),
+                        want * 1e-9,
+                        "order " + n + " at " + f + " Hz");
             }
         }
         // at the corner every order is -3 dB: 1/√2
@@ -105,15 +109,23 @@ class ChoppingRippleTest {
     void aStandardPartHasNoRipple() {
         PartFixture p = chopper();
         p.architecture = Architecture.STANDARD;
-        assertEquals(0.0, BudgetCalculator.compute(stage(0), p.build()).term(ChoppingRippleTerm.KEY).outputV(), 0.0);
+        assertEquals(
+                0.0,
+                BudgetCalculator.compute(stage(0), p.build())
+                        .term(ChoppingRippleTerm.KEY)
+                        .outputV(),
+                0.0);
     }
 
     @Test
     void aliasesWorkedByHand() {
-        // fchop 100 kHz sampled at 30 kHz: 100 - 3 x 30 = 10 kHz; 200 - 7 x 30 = -10; 300 = 10 x 30 -> 0 Hz (an offset);
+        // fchop 100 kHz sampled at 30 kHz: 100 - 3 x 30 = 10 kHz; 200 - 7 x 30 = -10; 300 = 10 x 30 -> 0 Hz (an
+        // offset);
         // 400 - 13 x 30 = 10; 500 - 17 x 30 = -10
         List<ChoppingRippleTerm.Alias> all = ChoppingRippleTerm.aliases(100e3, 30e3, 10e3);
-        assertEquals(List.of(1, 2, 3, 4, 5), all.stream().map(ChoppingRippleTerm.Alias::harmonic).toList());
+        assertEquals(
+                List.of(1, 2, 3, 4, 5),
+                all.stream().map(ChoppingRippleTerm.Alias::harmonic).toList());
         assertEquals(10e3, all.get(0).alias(), 1e-6);
         assertEquals(0.0, all.get(2).alias(), 1e-6);
         // a 1 kHz band keeps only the third harmonic's 0 Hz
@@ -127,17 +139,23 @@ class ChoppingRippleTest {
         assertEquals(4e3, one.get(0).alias(), 1e-6);
         // 250 kHz at 1 MHz: the fourth harmonic lands on 0 Hz; the others at 250 or 500 kHz
         List<ChoppingRippleTerm.Alias> fourth = ChoppingRippleTerm.aliases(250e3, 1e6, 1e3);
-        assertEquals(List.of(4), fourth.stream().map(ChoppingRippleTerm.Alias::harmonic).toList());
+        assertEquals(
+                List.of(4),
+                fourth.stream().map(ChoppingRippleTerm.Alias::harmonic).toList());
     }
 
     @Test
     void theBudgetNamesTheAliasFrequency() {
         Stage s = stage(2).toBuilder().bandHigh(5e3).sampleRate(96e3).build();
         Budget b = BudgetCalculator.compute(s, chopper().build());
-        assertTrue(b.warnings().stream().anyMatch(w -> w.startsWith("sample-rate: the chopping frequency 100 kHz, sampled at"
-                + " 96.0 kHz aliases to 4.00 kHz, inside the band (up to 5.00 kHz)")), b.warnings().toString());
+        assertTrue(
+                b.warnings().stream()
+                        .anyMatch(w -> w.startsWith("sample-rate: the chopping frequency 100 kHz, sampled at"
+                                + " 96.0 kHz aliases to 4.00 kHz, inside the band (up to 5.00 kHz)")),
+                b.warnings().toString());
         // without a sample rate nothing is said
-        Budget none = BudgetCalculator.compute(stage(2).toBuilder().bandHigh(5e3).build(), chopper().build());
+        Budget none = BudgetCalculator.compute(
+                stage(2).toBuilder().bandHigh(5e3).build(), chopper().build());
         assertTrue(none.warnings().stream().noneMatch(w -> w.startsWith("sample-rate:")));
     }
 }

@@ -16,7 +16,10 @@ import org.junit.jupiter.api.Test;
 class ConstraintsTest {
 
     private static ConstraintResult get(Budget b, String name) {
-        return b.constraints().stream().filter(c -> c.name().equals(name)).findFirst().orElseThrow();
+        return b.constraints().stream()
+                .filter(c -> c.name().equals(name))
+                .findFirst()
+                .orElseThrow();
     }
 
     private static Budget budget(StageFixture s, PartFixture p) {
@@ -74,8 +77,11 @@ class ConstraintsTest {
         p.inHead = new Headroom(3, 2.5);
         ConstraintResult c = get(budget(s, p), "common-mode");
         assertFalse(c.ok());
-        assertTrue(c.detail().contains("part reachable nowhere on a 5.00 V supply (headroom 3.00 V from the low rail"
-                + " plus 2.50 V from the high rail)"), c.detail());
+        assertTrue(
+                c.detail()
+                        .contains("part reachable nowhere on a 5.00 V supply (headroom 3.00 V from the low rail"
+                                + " plus 2.50 V from the high rail)"),
+                c.detail());
         assertTrue(c.detail().contains("short by 500 mV at the low end"), c.detail());
         assertFalse(c.detail().contains("3.00 V to 2.50 V"), c.detail());
     }
@@ -92,7 +98,9 @@ class ConstraintsTest {
         Budget b = budget(s, p);
         assertTrue(get(b, "common-mode").ok(), get(b, "common-mode").detail());
         assertTrue(get(b, "common-mode").detail().contains("assumed"));
-        assertTrue(b.warnings().stream().anyMatch(w -> w.startsWith("common-mode") && w.contains("1.50 V")), b.warnings().toString());
+        assertTrue(
+                b.warnings().stream().anyMatch(w -> w.startsWith("common-mode") && w.contains("1.50 V")),
+                b.warnings().toString());
         s.cmSwing = 1.5;
         assertFalse(get(budget(s, p), "common-mode").ok());
     }
@@ -138,7 +146,8 @@ class ConstraintsTest {
         assertTrue(get(b, "slew").ok());
         assertTrue(get(b, "slew").detail().startsWith("not checked"));
         assertTrue(b.warnings().stream().anyMatch(w -> w.startsWith("slew: not given")));
-        assertEquals(List.of("supply", "temperature", "common-mode", "output-swing", "slew", "price"),
+        assertEquals(
+                List.of("supply", "temperature", "common-mode", "output-swing", "slew", "price"),
                 b.constraints().stream().map(ConstraintResult::name).toList());
     }
 
@@ -157,7 +166,9 @@ class ConstraintsTest {
         // a band reaching past the clock is not "below" it at all: the ripple lies inside the band
         s.fH = 20e3;
         List<String> w = budget(s, p).warnings();
-        assertTrue(w.stream().anyMatch(x -> x.contains("band edge 20.0 kHz is above the chopping frequency 10.0 kHz")), w.toString());
+        assertTrue(
+                w.stream().anyMatch(x -> x.contains("band edge 20.0 kHz is above the chopping frequency 10.0 kHz")),
+                w.toString());
         assertFalse(w.stream().anyMatch(x -> x.contains("not far below")), w.toString());
     }
 }

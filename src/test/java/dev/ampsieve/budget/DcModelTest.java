@@ -31,7 +31,8 @@ class DcModelTest {
     void gainOf100With1mVOffsetGives100mV() {
         // common practice: the offset reaches the output times the (noise) gain; through the offset term
         Stage s = StageFixture.nonInverting(99e3, 1e3).limitV(1).build();
-        Budget b = BudgetCalculator.compute(s, PartFixture.ideal().vos(null, 1e-3, null).build());
+        Budget b = BudgetCalculator.compute(
+                s, PartFixture.ideal().vos(null, 1e-3, null).build());
         assertEquals(100e-3, b.term("offset").outputV(), 1e-12);
         assertEquals(1e-3, b.term("offset").inputV(), 1e-15);
         assertEquals(100e-3, DcModel.outputError(s, 1e-3, 0, 0), 1e-12);

@@ -24,7 +24,8 @@ import org.junit.jupiter.api.Test;
 class DemoCatalogBudgetTest {
 
     private static List<Stage> stages() {
-        StageFixture bridge = StageFixture.nonInverting(100e3, 100e3 / 99).limitV(6e-3).temps(-40, 85);
+        StageFixture bridge =
+                StageFixture.nonInverting(100e3, 100e3 / 99).limitV(6e-3).temps(-40, 85);
         bridge.rs = 350;
         bridge.rp = 649;
         bridge.supply = 5.0;
@@ -64,7 +65,10 @@ class DemoCatalogBudgetTest {
                 assertEquals(14, b.terms().size(), what); // ten of the part, four of its operating point
                 assertTrue(Double.isFinite(b.worstCaseV()) && Double.isFinite(b.rssV()), what);
                 assertTrue(b.terms().stream().allMatch(t -> t.outputV() >= 0 && Double.isFinite(t.outputV())), what);
-                assertTrue(b.yield().low() <= b.yield().value() && b.yield().value() <= b.yield().high(), what);
+                assertTrue(
+                        b.yield().low() <= b.yield().value()
+                                && b.yield().value() <= b.yield().high(),
+                        what);
                 assertEquals(6, b.constraints().size(), what);
                 assertEquals(b, BudgetCalculator.compute(s, p), "deterministic: " + what);
                 assertFalse(BudgetText.render(b, "s").contains("NaN"), what);

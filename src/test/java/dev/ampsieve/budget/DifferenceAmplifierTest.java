@@ -1,6 +1,5 @@
 package dev.ampsieve.budget;
 
-import dev.ampsieve.stage.Board;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -8,6 +7,7 @@ import dev.ampsieve.catalog.MinTyp;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.catalog.Range;
 import dev.ampsieve.fixtures.PartFixture;
+import dev.ampsieve.stage.Board;
 import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.stage.Difference;
 import dev.ampsieve.stage.Limit;
@@ -30,16 +30,45 @@ import org.junit.jupiter.params.provider.CsvSource;
 class DifferenceAmplifierTest {
 
     /** R1 = R3 = 10 k, R2 = R4 = 100 k (G = 10), no source resistance; 1 V full scale; 0.1 % per pair. */
-    private static Stage stage(double swing, Range cmRange, Double supply, double tol, double tc, double tMin, double tMax,
-            Trim trim) {
-        return new Stage(new Difference(10e3, 100e3, 10e3, 100e3, 0, 0), tMin, tMax, supply, 0, swing, cmRange, null, 0.1, 10, 1,
-                1.0, tol, tc, 0, Limit.output(10e-3), Criterion.WORST_CASE, 3, 2000, 2000, 1, trim, 1000, null, false, null, null, Board.NONE, null);
+    private static Stage stage(
+            double swing, Range cmRange, Double supply, double tol, double tc, double tMin, double tMax, Trim trim) {
+        return new Stage(
+                new Difference(10e3, 100e3, 10e3, 100e3, 0, 0),
+                tMin,
+                tMax,
+                supply,
+                0,
+                swing,
+                cmRange,
+                null,
+                0.1,
+                10,
+                1,
+                1.0,
+                tol,
+                tc,
+                0,
+                Limit.output(10e-3),
+                Criterion.WORST_CASE,
+                3,
+                2000,
+                2000,
+                1,
+                trim,
+                1000,
+                null,
+                false,
+                null,
+                null,
+                Board.NONE,
+                null);
     }
 
     /** An otherwise ideal part with a CMRR of {@code db}. */
     private static Part partWithCmrr(double db) {
         PartFixture p = PartFixture.ideal();
-        p.testConditions = new dev.ampsieve.catalog.TestConditions(5.0, 2.5); // the stages' own: no operating-point move
+        p.testConditions =
+                new dev.ampsieve.catalog.TestConditions(5.0, 2.5); // the stages' own: no operating-point move
         p.cmrr = new MinTyp(db, null);
         return p.build();
     }
@@ -82,7 +111,9 @@ class DifferenceAmplifierTest {
         }
         double firstOrder = 4 * eps * g / (1 + g); // 1/CMRR with CMRR = (1 + G)/(4ε) in single-resistor terms
         double bound = 8 * eps * eps / (1 - 2 * eps);
-        assertTrue(exact >= firstOrder, "the exact worst case is not below the first-order one: " + exact + " " + firstOrder);
+        assertTrue(
+                exact >= firstOrder,
+                "the exact worst case is not below the first-order one: " + exact + " " + firstOrder);
         assertEquals(firstOrder, exact, bound, "16 sign patterns");
         // the closed form of the worst pattern, worked above; 1e-8 relative: at G 1000, ε 1e-4 the superposition
         // subtracts two numbers near 1000 to leave 4e-4, so its round-off is about 1e-16 x 1000/4e-4 = 2.5e-10 relative
@@ -91,7 +122,9 @@ class DifferenceAmplifierTest {
         double engine = d.worstCommonModeGain(2 * eps); // per pair 2ε: the (1 + G)/(2e) reading
         assertEquals(firstOrder, engine, bound, "engine, per-pair 2ε");
         // per pair exactly (1+ε)/(1-ε) - 1 = 2ε/(1-ε) covers every four-resistor pattern
-        assertTrue(d.worstCommonModeGain(2 * eps / (1 - eps)) >= exact * (1 - 1e-12), "per-pair bound covers the four resistors");
+        assertTrue(
+                d.worstCommonModeGain(2 * eps / (1 - eps)) >= exact * (1 - 1e-12),
+                "per-pair bound covers the four resistors");
     }
 
     // ------------------------------------------------------------------ the CMRR term
@@ -114,7 +147,8 @@ class DifferenceAmplifierTest {
     @Test
     void theResistorPartGrowsWithTheRatioTempcoAndIsWorstAtTheFarEnd() {
         // -40..85 °C: dT 65 °C; e = 0.1 % + 10 ppm/°C x 65 = 0.00165; 2 x 10 x 0.00165 / (11 - 0.0165) = 0.033/10.9835
-        // = 3.004507e-3, x dVcm 0.5 V = 1.502253 mV; amplifier at 120 dB: 11 x 10/11 x 0.5 x 1e-6 = 5 µV; total 1.507253 mV
+        // = 3.004507e-3, x dVcm 0.5 V = 1.502253 mV; amplifier at 120 dB: 11 x 10/11 x 0.5 x 1e-6 = 5 µV; total
+        // 1.507253 mV
         Stage s = stage(0.5, null, 5.0, 1e-3, 10e-6, -40, 85, Trim.NONE);
         TermResult t = new CmrrTerm().evaluate(s, PartValues.of(partWithCmrr(120), s));
         assertEquals(1.507253e-3, t.outputV(), 1e-9);
@@ -124,7 +158,9 @@ class DifferenceAmplifierTest {
     @Test
     void otherTopologiesKeepTheirFormula() {
         // non-inverting NG 100: NG x dVcm x 10^(-100/20) = 100 x 0.1 V x 1e-5 = 100 µV, the share being 1
-        Stage s = stage(0.1, null, 5.0, 1e-3, 0, 25, 25, Trim.NONE).toBuilder().network(new NonInverting(99e3, 1e3, 0, 0)).build();
+        Stage s = stage(0.1, null, 5.0, 1e-3, 0, 25, 25, Trim.NONE).toBuilder()
+                .network(new NonInverting(99e3, 1e3, 0, 0))
+                .build();
         TermResult t = new CmrrTerm().evaluate(s, PartValues.of(partWithCmrr(100), s));
         assertEquals(100e-6, t.outputV(), 1e-15);
         assertEquals("dVcm 100 mV, CMRR 100 dB", t.note());
@@ -156,14 +192,20 @@ class DifferenceAmplifierTest {
         Range stated = Constraints.neededCommonMode(stage(0.15, new Range(0.5, 4.5), 5.0, 0, 0, 25, 25, Trim.NONE));
         assertEquals(0.6818182, stated.min(), 1e-7);
         assertEquals(4.3181818, stated.max(), 1e-7);
-        // a part reaching 0.7..4.3 V at its pins then misses by 18.2 mV at each end, and the detail says where it is measured
+        // a part reaching 0.7..4.3 V at its pins then misses by 18.2 mV at each end, and the detail says where it is
+        // measured
         PartFixture p = PartFixture.ideal();
         p.inHead = new dev.ampsieve.catalog.Headroom(0.7, 0.7);
         List<String> w = new ArrayList<>();
-        ConstraintResult r = Constraints.commonMode(stage(0.15, new Range(0.5, 4.5), 5.0, 0, 0, 25, 25, Trim.NONE), p.build(), w);
+        ConstraintResult r =
+                Constraints.commonMode(stage(0.15, new Range(0.5, 4.5), 5.0, 0, 0, 25, 25, Trim.NONE), p.build(), w);
         assertTrue(!r.ok() && r.detail().contains("short by 18.2 mV at the low end"), r.detail());
-        assertTrue(r.detail().contains("(at the pins: the source's common mode x 0.9091 about mid-supply, the reference taken"
-                + " at mid-supply)"), r.detail());
+        assertTrue(
+                r.detail()
+                        .contains(
+                                "(at the pins: the source's common mode x 0.9091 about mid-supply, the reference taken"
+                                        + " at mid-supply)"),
+                r.detail());
     }
 
     @Test

@@ -1,10 +1,10 @@
 package dev.ampsieve.budget;
 
-import dev.ampsieve.stage.Board;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import dev.ampsieve.catalog.Noise;
 import dev.ampsieve.fixtures.PartFixture;
+import dev.ampsieve.stage.Board;
 import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.stage.Difference;
 import dev.ampsieve.stage.Limit;
@@ -38,8 +38,23 @@ class DifferenceNgspiceTest {
      * One difference stage: resistors, legs, the amplifier's offset, pin currents and white noise,
      * the source's common-mode and differential voltages, and a noise band [f1, f2].
      */
-    record Combo(String name, double r1, double r2, double r3, double r4, double rsMinus, double rsPlus, double vos,
-                 double ibPlus, double ibMinus, double vcm, double vdm, double en, double in, double f1, double f2) {
+    record Combo(
+            String name,
+            double r1,
+            double r2,
+            double r3,
+            double r4,
+            double rsMinus,
+            double rsPlus,
+            double vos,
+            double ibPlus,
+            double ibMinus,
+            double vcm,
+            double vdm,
+            double en,
+            double in,
+            double f1,
+            double f2) {
         @Override
         public String toString() {
             return name;
@@ -51,28 +66,62 @@ class DifferenceNgspiceTest {
 
         /** The stage, with a first-order filter at f2 (so NoiseTerm's band edge is (π/2) f2) and 25 °C resistors. */
         Stage stage() {
-            return new Stage(network(), 25, 25, null, 0, 0, null, null, f1, f2, 1, null, 0, 0, 0, Limit.output(1e-3),
-                    Criterion.WORST_CASE, 3, 20_000, 1_000_000, 1, Trim.NONE, 1000, null, false, null, null, Board.NONE, null);
+            return new Stage(
+                    network(),
+                    25,
+                    25,
+                    null,
+                    0,
+                    0,
+                    null,
+                    null,
+                    f1,
+                    f2,
+                    1,
+                    null,
+                    0,
+                    0,
+                    0,
+                    Limit.output(1e-3),
+                    Criterion.WORST_CASE,
+                    3,
+                    20_000,
+                    1_000_000,
+                    1,
+                    Trim.NONE,
+                    1000,
+                    null,
+                    false,
+                    null,
+                    null,
+                    Board.NONE,
+                    null);
         }
     }
 
     static Stream<Combo> combos() {
         return Stream.of(
                 // R4/R3 0.1 % above R2/R1, legs 350 and 120 ohm: a bridge-like source at 2.5 V common mode
-                new Combo("gain 10, R4 0.1 % high, legs 350/120 ohm", 10e3, 100e3, 10e3, 100.1e3, 350, 120, 1e-3, 105e-9,
-                        95e-9, 2.5, 10e-3, 10e-9, 1e-12, 10, 10e3),
+                new Combo(
+                        "gain 10, R4 0.1 % high, legs 350/120 ohm",
+                        10e3, 100e3, 10e3, 100.1e3, 350, 120, 1e-3, 105e-9, 95e-9, 2.5, 10e-3, 10e-9, 1e-12, 10, 10e3),
                 // R3 0.1 % low, currents of opposite sign (a unit whose IB is small and IOS large)
-                new Combo("gain 100, R3 0.1 % low, legs 175/180 ohm", 4.99e3, 499e3, 4.985e3, 499e3, 175, 180, -50e-6, 2e-9,
-                        -1.5e-9, -3, 20e-3, 8e-9, 0.15e-12, 0.1, 10),
+                new Combo(
+                        "gain 100, R3 0.1 % low, legs 175/180 ohm",
+                        4.99e3, 499e3, 4.985e3, 499e3, 175, 180, -50e-6, 2e-9, -1.5e-9, -3, 20e-3, 8e-9, 0.15e-12, 0.1,
+                        10),
                 // the unity-gain difference stage, the minus leg driven directly (Rs- 0: a 0 V source)
-                new Combo("gain 1, R4 0.1 % high, Rs- 0, Rs+ 50 ohm", 10e3, 10e3, 10e3, 10.01e3, 0, 50, 0.5e-3, 300e-9,
-                        250e-9, 10, -1, 15e-9, 0.6e-12, 1, 50e3),
+                new Combo(
+                        "gain 1, R4 0.1 % high, Rs- 0, Rs+ 50 ohm",
+                        10e3, 10e3, 10e3, 10.01e3, 0, 50, 0.5e-3, 300e-9, 250e-9, 10, -1, 15e-9, 0.6e-12, 1, 50e3),
                 // an attenuating difference stage (r2/r1 = 0.5) with currents out of the pins
-                new Combo("gain 0.5, R4 0.2 % high, legs 1 k/2 k", 20e3, 10e3, 20e3, 10.02e3, 1e3, 2e3, -0.2e-3, -40e-9,
-                        -35e-9, 5, 2, 4e-9, 3e-12, 0.5, 5e3),
+                new Combo(
+                        "gain 0.5, R4 0.2 % high, legs 1 k/2 k",
+                        20e3, 10e3, 20e3, 10.02e3, 1e3, 2e3, -0.2e-3, -40e-9, -35e-9, 5, 2, 4e-9, 3e-12, 0.5, 5e3),
                 // high gain, R3 0.1 % high, small legs: the common mode meets a large noise gain
-                new Combo("gain 1000, R3 0.1 % high, legs 10/20 ohm", 1e3, 1e6, 1.001e3, 1e6, 10, 20, 10e-6, 1e-9, 1.2e-9,
-                        0.1, 1e-3, 3e-9, 0.4e-12, 0.1, 100));
+                new Combo(
+                        "gain 1000, R3 0.1 % high, legs 10/20 ohm",
+                        1e3, 1e6, 1.001e3, 1e6, 10, 20, 10e-6, 1e-9, 1.2e-9, 0.1, 1e-3, 3e-9, 0.4e-12, 0.1, 100));
     }
 
     /** The stage as a netlist printing v(out) at DC and onoise_total over [f1, (π/2) f2]. */
@@ -103,8 +152,11 @@ class DifferenceNgspiceTest {
         n.append("Rgen_im gen_im 0 1e3\n");
         n.append("Eamp out 0 namp pinn ").append(Ngspice.num(A)).append('\n');
         n.append(".control\nset numdgt=15\nop\nprint v(out)\n");
-        n.append("noise v(out) vp lin 2 ").append(Ngspice.num(c.f1())).append(' ')
-                .append(Ngspice.num(NoiseModel.SINGLE_POLE_ENBW * c.f2())).append('\n');
+        n.append("noise v(out) vp lin 2 ")
+                .append(Ngspice.num(c.f1()))
+                .append(' ')
+                .append(Ngspice.num(NoiseModel.SINGLE_POLE_ENBW * c.f2()))
+                .append('\n');
         n.append("setplot noise2\nprint onoise_total\nquit\n.endc\n.end\n");
         return n.toString();
     }
@@ -112,9 +164,22 @@ class DifferenceNgspiceTest {
     /** A resistor, or a 0 V source (a noiseless wire) for 0 ohm. */
     private static void resistor(StringBuilder n, String name, String a, String b, double ohms) {
         if (ohms == 0) {
-            n.append("V").append(name).append(' ').append(a).append(' ').append(b).append(" DC 0\n");
+            n.append("V")
+                    .append(name)
+                    .append(' ')
+                    .append(a)
+                    .append(' ')
+                    .append(b)
+                    .append(" DC 0\n");
         } else {
-            n.append(name).append(' ').append(a).append(' ').append(b).append(' ').append(Ngspice.num(ohms)).append('\n');
+            n.append(name)
+                    .append(' ')
+                    .append(a)
+                    .append(' ')
+                    .append(b)
+                    .append(' ')
+                    .append(Ngspice.num(ohms))
+                    .append('\n');
         }
     }
 
@@ -135,15 +200,20 @@ class DifferenceNgspiceTest {
         double ib = (c.ibPlus() + c.ibMinus()) / 2;
         double ios = c.ibPlus() - c.ibMinus();
         double errors = DcModel.of(s).error(c.vos(), ib, ios);
-        double signal = Difference.differentialGain(d.a(), d.b()) * c.vdm() + Difference.commonModeGain(d.a(), d.b()) * c.vcm();
+        double signal =
+                Difference.differentialGain(d.a(), d.b()) * c.vdm() + Difference.commonModeGain(d.a(), d.b()) * c.vcm();
         double out = v.get("v(out)");
         // 1e-9 relative to the largest voltage in the circuit: the solver's round-off follows the node voltages
         // (the inputs, up to 10 V here), not the output the common mode nearly cancels to (measured: 4e-10 V
         // off with 2.5 V at the pins and 0.16 V out)
-        double scale = Math.max(Math.abs(out), Math.max(Math.abs(errors) + Math.abs(signal), Math.abs(c.vcm()) + Math.abs(c.vdm())));
+        double scale = Math.max(
+                Math.abs(out), Math.max(Math.abs(errors) + Math.abs(signal), Math.abs(c.vcm()) + Math.abs(c.vdm())));
         assertEquals((errors + signal) / finite, out, 1e-9 * scale, "DC output, " + c);
         // the signed pin-current form the Monte Carlo uses gives the same
-        assertEquals((DcModel.outputError(s, c.vos(), c.ibPlus(), c.ibMinus()) + signal) / finite, out, 1e-9 * scale,
+        assertEquals(
+                (DcModel.outputError(s, c.vos(), c.ibPlus(), c.ibMinus()) + signal) / finite,
+                out,
+                1e-9 * scale,
                 "DcModel.outputError, " + c);
     }
 

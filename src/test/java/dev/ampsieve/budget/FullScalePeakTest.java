@@ -39,7 +39,10 @@ class FullScalePeakTest {
     }
 
     private static ConstraintResult get(Budget b, String name) {
-        return b.constraints().stream().filter(c -> c.name().equals(name)).findFirst().orElseThrow();
+        return b.constraints().stream()
+                .filter(c -> c.name().equals(name))
+                .findFirst()
+                .orElseThrow();
     }
 
     @Test
@@ -52,7 +55,8 @@ class FullScalePeakTest {
 
     @Test
     void openLoopGainErrorAtTwoVoltsPeak() {
-        // by hand: AOL 100 dB = 1e5; VFS NG/(AOL + NG) = 2 x 10/100010 = 199.98 µV (Sedra & Smith 7th ed. ch. 2 [from memory])
+        // by hand: AOL 100 dB = 1e5; VFS NG/(AOL + NG) = 2 x 10/100010 = 199.98 µV (Sedra & Smith 7th ed. ch. 2 [from
+        // memory])
         Budget b = BudgetCalculator.compute(stage().build(), part().build());
         assertEquals(199.98e-6, b.term("open-loop-gain").outputV(), 0.005e-6);
     }

@@ -20,7 +20,8 @@ class GainAndRejectionTest {
         "100, 10, 0.5, 1e5, 0.5",
         "110, 3.1623, 0.00005, 316228, 0.5",
         "120, 1, 0.5, 1e6, 0.5",
-        "140, 0.1, 0.05, 1e7, 0.5"})
+        "140, 0.1, 0.05, 1e7, 0.5"
+    })
     void decibelTable(double db, double microPerVolt, double tolMicro, double gain, double tolGain) {
         assertEquals(microPerVolt * 1e-6, Decibels.rejected(db), tolMicro * 1e-6);
         assertEquals(gain, Decibels.toRatio(db), tolGain);
@@ -36,7 +37,8 @@ class GainAndRejectionTest {
         "100, 100, 100, 99.90010, 0.000005, -999.0",
         "100, 100, 120, 99.99000, 0.000005, -99.99",
         "1000, 1000, 100, 990.0990, 0.00005, -9901",
-        "-99, 100, 100, -98.90110, 0.000005, -999.0"})
+        "-99, 100, 100, -98.90110, 0.000005, -999.0"
+    })
     void finiteOpenLoopGain(double ideal, double ng, double aolDb, double expected, double tol, double ppm) {
         assertEquals(expected, OpenLoopGainTerm.closedLoopGain(ideal, ng, aolDb), tol);
         // error ≈ -NG/A: -999.0 ppm for 100 dB at NG 100; -0.990 % at NG 1000
@@ -62,7 +64,8 @@ class GainAndRejectionTest {
 
     @Test
     void rejectionExamples() {
-        // reference-checks §4 (Franco4 ch. 5 [from memory]): 5 V with CMRR 90 dB -> 158.11 µV; 1 V with PSRR 100 dB -> 10.00 µV
+        // reference-checks §4 (Franco4 ch. 5 [from memory]): 5 V with CMRR 90 dB -> 158.11 µV; 1 V with PSRR 100 dB ->
+        // 10.00 µV
         StageFixture f = StageFixture.follower().limitV(1);
         f.cmSwing = 5;
         f.supplyVariation = 1;
@@ -82,11 +85,21 @@ class GainAndRejectionTest {
         ni.fullScale = 1.0;
         ni.tc = 50e-6;
         Stage s = ni.build();
-        assertEquals(2475e-6, BudgetCalculator.compute(s, PartFixture.ideal().build()).term("resistors").outputV(), 1e-12);
+        assertEquals(
+                2475e-6,
+                BudgetCalculator.compute(s, PartFixture.ideal().build())
+                        .term("resistors")
+                        .outputV(),
+                1e-12);
         StageFixture inv = StageFixture.inverting(100e3, 1e3).limitV(1).temps(25, 75);
         inv.fullScale = 1.0;
         inv.tc = 50e-6;
-        assertEquals(2500e-6, BudgetCalculator.compute(inv.build(), PartFixture.ideal().build()).term("resistors").outputV(), 1e-12);
+        assertEquals(
+                2500e-6,
+                BudgetCalculator.compute(inv.build(), PartFixture.ideal().build())
+                        .term("resistors")
+                        .outputV(),
+                1e-12);
     }
 
     @Test

@@ -28,7 +28,10 @@ class HandCheckedBudgetTest {
 
     private static Budget budget(String stage, String part) throws Exception {
         Stage s = StageLoader.load(Path.of("demo-catalog/stages/" + stage + ".yaml"));
-        Part p = catalog.parts().stream().filter(x -> x.id().equals(part)).findFirst().orElseThrow();
+        Part p = catalog.parts().stream()
+                .filter(x -> x.id().equals(part))
+                .findFirst()
+                .orElseThrow();
         return BudgetCalculator.compute(s, p);
     }
 
@@ -57,11 +60,13 @@ class HandCheckedBudgetTest {
         near(31.62278e-6, b.term("cmrr").outputV(), "cmrr");
         // 5. NG x dVs x 10^(-PSRR/20) = 200 x 0.25 V x 3.162278 µV/V
         near(158.1139e-6, b.term("psrr").outputV(), "psrr");
-        // 6. VFS x NG/(AOL + NG) = 2.5 V x 200 / (10^(115/20) + 200) = 2.5 x 200 / 562541.3 (Sedra & Smith ch. 2 [from memory])
+        // 6. VFS x NG/(AOL + NG) = 2.5 V x 200 / (10^(115/20) + 200) = 2.5 x 200 / 562541.3 (Sedra & Smith ch. 2 [from
+        // memory])
         near(888.8236e-6, b.term("open-loop-gain").outputV(), "aol");
         // 7. VFS (1 - 1/sqrt(1 + (fH NG/GBW)^2)), x = 5 x 200 / 1.5 MHz = 6.6667e-4: 2.5 x 2.22222e-7
         assertEquals(5.555554e-7, b.term("bandwidth").outputV(), 1e-12, "bandwidth");
-        // 8. VFS x (NG-1)/NG x (tol + tc x dT) = 2.5 x 0.995 x (0.001 + 10 ppm/°C x 45) (reference-checks §8 sensitivity)
+        // 8. VFS x (NG-1)/NG x (tol + tc x dT) = 2.5 x 0.995 x (0.001 + 10 ppm/°C x 45) (reference-checks §8
+        // sensitivity)
         near(3.606875e-3, b.term("resistors").outputV(), "resistors");
         // 9. no long-term drift in the catalog: the conservative estimate for a zero-drift part, 1 µV per
         //    sqrt(1000 h) (common practice, budget/Assumed), over 5 Julian years = 43 830 h:
@@ -78,10 +83,13 @@ class HandCheckedBudgetTest {
         near(83.39492e-6, b.term("noise").outputV(), "noise allowance");
         // totals: worst-case sum; RSS (GUM eq. 10 for the root-sum-square)
         // 11. operating point: the table at 5 V, common mode 2.5 V (mid-supply); the stage's pins at 1.2..1.3 V,
-        //     centre 1.25 V, 1.25 V below mid-supply; same supply: NG x 1.25 V x 10^(-110/20) = 200 x 1.25 x 3.162278 µV/V
+        //     centre 1.25 V, 1.25 V below mid-supply; same supply: NG x 1.25 V x 10^(-110/20) = 200 x 1.25 x 3.162278
+        // µV/V
         near(790.5694e-6, b.term("operating-point").outputV(), "operating point");
-        // 12. chopping ripple 1 µV at 12 kHz: |NG(f)| = 200/sqrt(1 + (12 kHz x 200/1.5 MHz)^2) = 200/sqrt(3.56) = 105.99979;
-        //     first-order filter at 5 Hz: 1/sqrt(1 + 2400^2) = 4.166666e-4; 1 µV x 105.99979 x 4.166666e-4 = 44.16657 nV
+        // 12. chopping ripple 1 µV at 12 kHz: |NG(f)| = 200/sqrt(1 + (12 kHz x 200/1.5 MHz)^2) = 200/sqrt(3.56) =
+        // 105.99979;
+        //     first-order filter at 5 Hz: 1/sqrt(1 + 2400^2) = 4.166666e-4; 1 µV x 105.99979 x 4.166666e-4 = 44.16657
+        // nV
         near(44.16657e-9, b.term("chopping-ripple").outputV(), "chopping ripple");
         // 13, 14: the common mode stays far below the assumed crossover (3.0..4.5 V); no load: no self-heating
         assertEquals(0.0, b.term("input-crossover").outputV(), 0.0);
@@ -105,7 +113,8 @@ class HandCheckedBudgetTest {
     @Test
     void bridgeAmplifierWithTheTopGradeBipolarPart() throws Exception {
         // difference stage: r1 = r3 = 4.99 k, r2 = r4 = 499 k, both legs 175 Ω; -40..85 °C (dT 65 °C).
-        // a = b = 499 k / (4.99 k + 175) = 499 000 / 5 165 = 96.611810; NG = 1 + a = 97.611810 (Franco §2.2 [from memory])
+        // a = b = 499 k / (4.99 k + 175) = 499 000 / 5 165 = 96.611810; NG = 1 + a = 97.611810 (Franco §2.2 [from
+        // memory])
         Budget b = budget("bridge-amp", "prec-bip-01");
         near(97.611810, b.noiseGain(), "NG");
         // matched pairs: signal gain [(1 + a) b/(1 + b) + a]/2 = a = 96.611810; the 6 mV limit is 6 mV / 96.611810
@@ -144,7 +153,8 @@ class HandCheckedBudgetTest {
         // first-order filter at 10 Hz: fN = (π/2) x 10 Hz = 15.70796 Hz; from 0.1 Hz: white 15.60796 Hz,
         // ln(157.0796) = 5.056753. Resistors at the hottest 85 °C: 4kT = 1.977918e-20 (Johnson-Nyquist; k from SI9).
         // R+ = R- = 5 112.0863 Ω (the legs count in both):
-        // en^2 (15.60796 + 3 x 5.056753) + in^2 (2 x 5 112.0863^2)(15.60796 + 100 x 5.056753) + 4kT x 2 x 5 112.0863 x 15.60796
+        // en^2 (15.60796 + 3 x 5.056753) + in^2 (2 x 5 112.0863^2)(15.60796 + 100 x 5.056753) + 4kT x 2 x 5 112.0863 x
+        // 15.60796
         // = 64e-18 x 30.77822 + 2.25e-26 x 5.226689e7 x 521.2833 + 1.977918e-20 x 10 224.173 x 15.60796
         // = 1.969806e-15 + 6.130313e-16 + 3.156332e-15 = 5.739169e-15 -> sqrt x 97.611810 = 7.394808 µV rms
         // (Franco ch. 7 [from memory])

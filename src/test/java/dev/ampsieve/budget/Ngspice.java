@@ -28,8 +28,7 @@ import org.junit.jupiter.api.Assumptions;
  */
 final class Ngspice {
 
-    private Ngspice() {
-    }
+    private Ngspice() {}
 
     /** A result line, e.g. {@code v(out) = 9.098999097477645e-02}; the title and TEMP lines do not match. */
     private static final Pattern RESULT = Pattern.compile("^(\\S+) = ([-+]?\\d+(?:\\.\\d*)?(?:[eE][-+]?\\d+)?)$");
@@ -60,7 +59,8 @@ final class Ngspice {
     static Path requireExecutable() {
         Path exe = executable();
         if (exe == null) {
-            String msg = "ngspice is not on PATH (Debian package 'ngspice'), so the outside check against it cannot run";
+            String msg =
+                    "ngspice is not on PATH (Debian package 'ngspice'), so the outside check against it cannot run";
             if ("true".equalsIgnoreCase(System.getenv("CI"))) {
                 fail(msg + "; CI=true requires it");
             }
@@ -83,7 +83,8 @@ final class Ngspice {
             Path out = dir.resolve("out.txt");
             Path err = dir.resolve("err.txt");
             Files.writeString(cir, netlist, StandardCharsets.US_ASCII);
-            Process p = new ProcessBuilder(exe.toString(), "-n", "-b", cir.getFileName().toString())
+            Process p = new ProcessBuilder(
+                            exe.toString(), "-n", "-b", cir.getFileName().toString())
                     .directory(dir.toFile())
                     .redirectInput(ProcessBuilder.Redirect.from(new File("/dev/null")))
                     .redirectOutput(out.toFile())

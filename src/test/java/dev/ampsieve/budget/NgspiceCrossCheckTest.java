@@ -1,15 +1,15 @@
 package dev.ampsieve.budget;
 
-import dev.ampsieve.stage.Board;
-import dev.ampsieve.testing.Networks;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.ampsieve.stage.Board;
 import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.stage.Limit;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.Topology;
 import dev.ampsieve.stage.Trim;
+import dev.ampsieve.testing.Networks;
 import java.util.List;
 import java.util.Map;
 import java.util.stream.Stream;
@@ -49,22 +49,63 @@ class NgspiceCrossCheckTest {
     static final double K_SI = 1.380649e-23;
     /** 25 °C in kelvin; the netlists set {@code .options temp=25 tnom=25} (default would be 27 °C). */
     static final double T = 298.15;
+
     static final double GENERATOR_OHMS = 1e3;
 
     /**
      * One stage with an amplifier's offset, bias currents and white noise densities.
      * rg is infinite for a follower; rf = 0 means direct feedback.
      */
-    record Combo(String name, Topology topology, double rf, double rg, double rs, double rp, double vos, double ibPlus,
-                 double ibMinus, double en, double in, double f1, double f2) {
+    record Combo(
+            String name,
+            Topology topology,
+            double rf,
+            double rg,
+            double rs,
+            double rp,
+            double vos,
+            double ibPlus,
+            double ibMinus,
+            double en,
+            double in,
+            double f1,
+            double f2) {
         @Override
         public String toString() {
             return name;
         }
 
         Stage stage() {
-            return new Stage(Networks.of(topology, rf, rg, rs, rp), 0, 70, null, 0, 0, null, null, f1, f2, 1, null, 0, 0, 0,
-                    Limit.output(1e-3), Criterion.WORST_CASE, 3, 20_000, 1_000_000, 1, Trim.NONE, 1000, null, false, null, null, Board.NONE, null);
+            return new Stage(
+                    Networks.of(topology, rf, rg, rs, rp),
+                    0,
+                    70,
+                    null,
+                    0,
+                    0,
+                    null,
+                    null,
+                    f1,
+                    f2,
+                    1,
+                    null,
+                    0,
+                    0,
+                    0,
+                    Limit.output(1e-3),
+                    Criterion.WORST_CASE,
+                    3,
+                    20_000,
+                    1_000_000,
+                    1,
+                    Trim.NONE,
+                    1000,
+                    null,
+                    false,
+                    null,
+                    null,
+                    Board.NONE,
+                    null);
         }
 
         /** Noise gain from the resistors, written out here rather than taken from Stage. */
@@ -81,36 +122,154 @@ class NgspiceCrossCheckTest {
     private static final double INF = Double.POSITIVE_INFINITY;
     private static final double PARALLEL_100K_1K = 100e3 * 1e3 / (100e3 + 1e3);
 
-    static final Combo NON_INV_G100 = new Combo("non-inverting, NG 100, source and balance resistors", Topology.NON_INVERTING,
-            99e3, 1e3, 350, 649, 1e-3, 105e-9, 95e-9, 10e-9, 1e-12, 10, 10e3);
-    static final Combo NON_INV_G1001 = new Combo("non-inverting, NG 1001", Topology.NON_INVERTING,
-            1e6, 1e3, 100, 900, -25e-6, 2e-9, 1.5e-9, 3e-9, 0.4e-12, 0.1, 10);
-    static final Combo NON_INV_BALANCED = new Combo("non-inverting, R+ = Rf||Rg split between source and balance",
-            Topology.NON_INVERTING, 100e3, 1e3, 390, PARALLEL_100K_1K - 390, -50e-6, 105e-9, 95e-9, 8e-9, 0.8e-12, 1, 1e3);
-    static final Combo INV_NG11 = new Combo("inverting, NG 11 with the source in series with Rg", Topology.INVERTING,
-            100e3, 9.9e3, 100, 9.09e3, -0.3e-3, 2e-9, 2.5e-9, 5e-9, 0.5e-12, 10, 20e3);
-    static final Combo INV_G99 = new Combo("inverting, gain -99", Topology.INVERTING,
-            99e3, 1e3, 47, 1e3, 0.2e-3, 30e-9, 45e-9, 12e-9, 2e-12, 0.1, 100);
-    static final Combo FOLLOWER_RF = new Combo("follower with a feedback resistor", Topology.FOLLOWER,
-            10e3, INF, 8.2e3, 1.8e3, 2e-3, 300e-9, 250e-9, 15e-9, 0.6e-12, 1, 50e3);
-    static final Combo FOLLOWER_DIRECT = new Combo("follower, direct feedback, currents out of the pins", Topology.FOLLOWER,
-            0, INF, 1e3, 2.2e3, 0.5e-3, -40e-9, -35e-9, 4e-9, 3e-12, 0.5, 5e3);
+    static final Combo NON_INV_G100 = new Combo(
+            "non-inverting, NG 100, source and balance resistors",
+            Topology.NON_INVERTING,
+            99e3,
+            1e3,
+            350,
+            649,
+            1e-3,
+            105e-9,
+            95e-9,
+            10e-9,
+            1e-12,
+            10,
+            10e3);
+    static final Combo NON_INV_G1001 = new Combo(
+            "non-inverting, NG 1001",
+            Topology.NON_INVERTING,
+            1e6,
+            1e3,
+            100,
+            900,
+            -25e-6,
+            2e-9,
+            1.5e-9,
+            3e-9,
+            0.4e-12,
+            0.1,
+            10);
+    static final Combo NON_INV_BALANCED = new Combo(
+            "non-inverting, R+ = Rf||Rg split between source and balance",
+            Topology.NON_INVERTING,
+            100e3,
+            1e3,
+            390,
+            PARALLEL_100K_1K - 390,
+            -50e-6,
+            105e-9,
+            95e-9,
+            8e-9,
+            0.8e-12,
+            1,
+            1e3);
+    static final Combo INV_NG11 = new Combo(
+            "inverting, NG 11 with the source in series with Rg",
+            Topology.INVERTING,
+            100e3,
+            9.9e3,
+            100,
+            9.09e3,
+            -0.3e-3,
+            2e-9,
+            2.5e-9,
+            5e-9,
+            0.5e-12,
+            10,
+            20e3);
+    static final Combo INV_G99 = new Combo(
+            "inverting, gain -99",
+            Topology.INVERTING,
+            99e3,
+            1e3,
+            47,
+            1e3,
+            0.2e-3,
+            30e-9,
+            45e-9,
+            12e-9,
+            2e-12,
+            0.1,
+            100);
+    static final Combo FOLLOWER_RF = new Combo(
+            "follower with a feedback resistor",
+            Topology.FOLLOWER,
+            10e3,
+            INF,
+            8.2e3,
+            1.8e3,
+            2e-3,
+            300e-9,
+            250e-9,
+            15e-9,
+            0.6e-12,
+            1,
+            50e3);
+    static final Combo FOLLOWER_DIRECT = new Combo(
+            "follower, direct feedback, currents out of the pins",
+            Topology.FOLLOWER,
+            0,
+            INF,
+            1e3,
+            2.2e3,
+            0.5e-3,
+            -40e-9,
+            -35e-9,
+            4e-9,
+            3e-12,
+            0.5,
+            5e3);
     /** reference-checks.md §2 "Compensated": IB+ 105 nA, IB- 95 nA, Rp = Rf||Rg, G 101 -> -1.000 mV. */
-    static final Combo REF_COMPENSATED = new Combo("reference: compensated bias currents", Topology.NON_INVERTING,
-            100e3, 1e3, 0, PARALLEL_100K_1K, 0, 105e-9, 95e-9, 1e-9, 1e-15, 1, 10);
+    static final Combo REF_COMPENSATED = new Combo(
+            "reference: compensated bias currents",
+            Topology.NON_INVERTING,
+            100e3,
+            1e3,
+            0,
+            PARALLEL_100K_1K,
+            0,
+            105e-9,
+            95e-9,
+            1e-9,
+            1e-15,
+            1,
+            10);
     /** reference-checks.md §2 "No compensation": IB- 95 nA, Rf 100 k, Rp 0 -> +9.50 mV. */
-    static final Combo REF_UNCOMPENSATED = new Combo("reference: no bias compensation", Topology.NON_INVERTING,
-            100e3, 1e3, 0, 0, 0, 105e-9, 95e-9, 1e-9, 1e-15, 1, 10);
+    static final Combo REF_UNCOMPENSATED = new Combo(
+            "reference: no bias compensation",
+            Topology.NON_INVERTING,
+            100e3,
+            1e3,
+            0,
+            0,
+            0,
+            105e-9,
+            95e-9,
+            1e-9,
+            1e-15,
+            1,
+            10);
     /** reference-checks.md §3 N2: non-inverting, Rs 1k, Rf 9k, Rg 1k, en 10 nV, in 1 pA. */
-    static final Combo REF_N2 = new Combo("reference N2", Topology.NON_INVERTING,
-            9e3, 1e3, 1e3, 0, 100e-6, 10e-9, 12e-9, 10e-9, 1e-12, 10, 10e3);
+    static final Combo REF_N2 = new Combo(
+            "reference N2", Topology.NON_INVERTING, 9e3, 1e3, 1e3, 0, 100e-6, 10e-9, 12e-9, 10e-9, 1e-12, 10, 10e3);
     /** reference-checks.md §3 N3: inverting, Rf 100k, Rg 10k, Rp 0, en 5 nV, in 0.5 pA. */
-    static final Combo REF_N3 = new Combo("reference N3", Topology.INVERTING,
-            100e3, 10e3, 0, 0, 1e-3, 10e-9, 12e-9, 5e-9, 0.5e-12, 10, 1e3);
+    static final Combo REF_N3 = new Combo(
+            "reference N3", Topology.INVERTING, 100e3, 10e3, 0, 0, 1e-3, 10e-9, 12e-9, 5e-9, 0.5e-12, 10, 1e3);
 
     static Stream<Combo> combos() {
-        return Stream.of(NON_INV_G100, NON_INV_G1001, NON_INV_BALANCED, INV_NG11, INV_G99, FOLLOWER_RF, FOLLOWER_DIRECT,
-                REF_COMPENSATED, REF_UNCOMPENSATED, REF_N2, REF_N3);
+        return Stream.of(
+                NON_INV_G100,
+                NON_INV_G1001,
+                NON_INV_BALANCED,
+                INV_NG11,
+                INV_G99,
+                FOLLOWER_RF,
+                FOLLOWER_DIRECT,
+                REF_COMPENSATED,
+                REF_UNCOMPENSATED,
+                REF_N2,
+                REF_N3);
     }
 
     // ------------------------------------------------------------------ netlist
@@ -141,15 +300,21 @@ class NgspiceCrossCheckTest {
         n.append("Vos nvos pinp DC ").append(Ngspice.num(c.vos())).append('\n');
         // amplifier voltage noise, in series after the offset
         double unitGenerator = Math.sqrt(4 * K_NGSPICE * T * GENERATOR_OHMS);
-        n.append("Een namp nvos gen_en 0 ").append(Ngspice.num(c.en() / unitGenerator)).append('\n');
+        n.append("Een namp nvos gen_en 0 ")
+                .append(Ngspice.num(c.en() / unitGenerator))
+                .append('\n');
         n.append("Rgen_en gen_en 0 ").append(Ngspice.num(GENERATOR_OHMS)).append('\n');
         // bias currents INTO the pins: each source carries its current from the pin node to ground
         n.append("Ibp pinp 0 DC ").append(Ngspice.num(c.ibPlus())).append('\n');
         n.append("Ibm pinn 0 DC ").append(Ngspice.num(c.ibMinus())).append('\n');
         // current noise at each pin, each from its own generator so the two are uncorrelated
-        n.append("Gip pinp 0 gen_ip 0 ").append(Ngspice.num(c.in() / unitGenerator)).append('\n');
+        n.append("Gip pinp 0 gen_ip 0 ")
+                .append(Ngspice.num(c.in() / unitGenerator))
+                .append('\n');
         n.append("Rgen_ip gen_ip 0 ").append(Ngspice.num(GENERATOR_OHMS)).append('\n');
-        n.append("Gim pinn 0 gen_im 0 ").append(Ngspice.num(c.in() / unitGenerator)).append('\n');
+        n.append("Gim pinn 0 gen_im 0 ")
+                .append(Ngspice.num(c.in() / unitGenerator))
+                .append('\n');
         n.append("Rgen_im gen_im 0 ").append(Ngspice.num(GENERATOR_OHMS)).append('\n');
         n.append("Eamp out 0 namp pinn ").append(Ngspice.num(A)).append('\n');
         n.append(".control\n");
@@ -157,7 +322,11 @@ class NgspiceCrossCheckTest {
         n.append("op\n");
         n.append("print v(out)\n");
         // lin 2: exactly f1 and f2 (a sweep stops at the last point at or below the stop frequency)
-        n.append("noise v(out) vsig lin 2 ").append(Ngspice.num(c.f1())).append(' ').append(Ngspice.num(c.f2())).append('\n');
+        n.append("noise v(out) vsig lin 2 ")
+                .append(Ngspice.num(c.f1()))
+                .append(' ')
+                .append(Ngspice.num(c.f2()))
+                .append('\n');
         n.append("setplot noise2\n");
         n.append("print onoise_total\n");
         n.append("quit\n"); // without it ngspice exits with code 1
@@ -169,14 +338,26 @@ class NgspiceCrossCheckTest {
     /** A resistor, or a 0 V source (a noiseless wire) for 0 ohm, which SPICE does not accept. */
     private static void resistor(StringBuilder n, String name, String a, String b, double ohms) {
         if (ohms == 0) {
-            n.append("V").append(name).append(' ').append(a).append(' ').append(b).append(" DC 0\n");
+            n.append("V")
+                    .append(name)
+                    .append(' ')
+                    .append(a)
+                    .append(' ')
+                    .append(b)
+                    .append(" DC 0\n");
         } else {
-            n.append(name).append(' ').append(a).append(' ').append(b).append(' ').append(Ngspice.num(ohms)).append('\n');
+            n.append(name)
+                    .append(' ')
+                    .append(a)
+                    .append(' ')
+                    .append(b)
+                    .append(' ')
+                    .append(Ngspice.num(ohms))
+                    .append('\n');
         }
     }
 
-    record Result(double dcOut, double noiseRms) {
-    }
+    record Result(double dcOut, double noiseRms) {}
 
     static Result simulate(Combo c) throws Exception {
         Map<String, Double> v = Ngspice.run(netlist(c), List.of("v(out)", "onoise_total"));
@@ -192,7 +373,8 @@ class NgspiceCrossCheckTest {
      */
     static double textbookDc(Combo c) {
         return switch (c.topology()) {
-            case NON_INVERTING -> (1 + c.rf() / c.rg()) * (c.vos() - c.ibPlus() * (c.rs() + c.rp())) + c.ibMinus() * c.rf();
+            case NON_INVERTING ->
+                (1 + c.rf() / c.rg()) * (c.vos() - c.ibPlus() * (c.rs() + c.rp())) + c.ibMinus() * c.rf();
             case INVERTING -> (1 + c.rf() / (c.rg() + c.rs())) * (c.vos() - c.ibPlus() * c.rp()) + c.ibMinus() * c.rf();
             case FOLLOWER -> c.vos() - c.ibPlus() * (c.rs() + c.rp()) + c.ibMinus() * c.rf();
             case DIFFERENCE, TRANSIMPEDANCE -> throw new IllegalArgumentException("checked in their own tests");
@@ -247,12 +429,15 @@ class NgspiceCrossCheckTest {
         Stage s = c.stage();
         double finiteGain = 1 + s.noiseGain() / A;
         // DcModel: ideal amplifier, currents into the pins; ngspice's A = 1e6 corrected exactly
-        assertRelative(DcModel.outputError(s, c.vos(), c.ibPlus(), c.ibMinus()) / finiteGain, r.dcOut(), 1e-9, "DC, " + c);
-        // the coefficients the terms and the Monte Carlo evaluate (IB the mean of the two pin currents, IOS their difference)
+        assertRelative(
+                DcModel.outputError(s, c.vos(), c.ibPlus(), c.ibMinus()) / finiteGain, r.dcOut(), 1e-9, "DC, " + c);
+        // the coefficients the terms and the Monte Carlo evaluate (IB the mean of the two pin currents, IOS their
+        // difference)
         double ib = (c.ibPlus() + c.ibMinus()) / 2;
         double ios = c.ibPlus() - c.ibMinus();
         assertRelative(DcModel.of(s).error(c.vos(), ib, ios) / finiteGain, r.dcOut(), 1e-9, "DcModel.of, " + c);
-        // NoiseModel with white noise only (corners 0) over [f1, f2] at 25 °C; it uses the exact SI k, ngspice CODATA 2014
+        // NoiseModel with white noise only (corners 0) over [f1, f2] at 25 °C; it uses the exact SI k, ngspice CODATA
+        // 2014
         double engine = NoiseModel.outputRms(s, c.en(), 0, c.in(), 0, c.f1(), c.f2(), T);
         assertRelative(engine / finiteGain, r.noiseRms(), 1e-5, "noise, " + c);
     }
@@ -266,14 +451,16 @@ class NgspiceCrossCheckTest {
 
     @Test
     void uncompensatedMinusInputCurrentGivesPlusIbTimesRf() throws Exception {
-        // reference-checks.md §2: IB- 95 nA into the - input, Rf 100 k, Rp 0 -> +9.50 mV (the sign fixes the convention)
+        // reference-checks.md §2: IB- 95 nA into the - input, Rf 100 k, Rp 0 -> +9.50 mV (the sign fixes the
+        // convention)
         Result r = simulate(REF_UNCOMPENSATED);
         assertRelative(9.50e-3, r.dcOut() * (1 + REF_UNCOMPENSATED.ng() / A), 1e-9, "uncompensated");
     }
 
     @Test
     void noiseDensitiesMatchThePublishedExamples() throws Exception {
-        // reference-checks.md §3 N2: 11.5367 nV/√Hz at the input x NG 10; N3: 153.744 nV/√Hz at the output; tolerance 0.01 %
+        // reference-checks.md §3 N2: 11.5367 nV/√Hz at the input x NG 10; N3: 153.744 nV/√Hz at the output; tolerance
+        // 0.01 %
         assertRelative(115.367e-9, textbookDensity(REF_N2, K_SI), 1e-4, "N2 textbook");
         assertRelative(153.744e-9, textbookDensity(REF_N3, K_SI), 1e-4, "N3 textbook");
         Result n2 = simulate(REF_N2);
@@ -289,9 +476,48 @@ class NgspiceCrossCheckTest {
     /** The three topologies with resistors large enough that pA to nA currents give a clear output. */
     static Stream<Combo> biasTopologies() {
         return Stream.of(
-                new Combo("non-inverting NG 11, R+ 50 k", Topology.NON_INVERTING, 1e6, 100e3, 20e3, 30e3, 0, 0, 0, 0, 0, 1, 10),
-                new Combo("inverting NG 11, Rs in series with Rg", Topology.INVERTING, 1e6, 90e3, 10e3, 47e3, 0, 0, 0, 0, 0, 1, 10),
-                new Combo("follower fed through 10 M, Rf 1 M", Topology.FOLLOWER, 1e6, INF, 10e6, 0, 0, 0, 0, 0, 0, 1, 10));
+                new Combo(
+                        "non-inverting NG 11, R+ 50 k",
+                        Topology.NON_INVERTING,
+                        1e6,
+                        100e3,
+                        20e3,
+                        30e3,
+                        0,
+                        0,
+                        0,
+                        0,
+                        0,
+                        1,
+                        10),
+                new Combo(
+                        "inverting NG 11, Rs in series with Rg",
+                        Topology.INVERTING,
+                        1e6,
+                        90e3,
+                        10e3,
+                        47e3,
+                        0,
+                        0,
+                        0,
+                        0,
+                        0,
+                        1,
+                        10),
+                new Combo(
+                        "follower fed through 10 M, Rf 1 M",
+                        Topology.FOLLOWER,
+                        1e6,
+                        INF,
+                        10e6,
+                        0,
+                        0,
+                        0,
+                        0,
+                        0,
+                        0,
+                        1,
+                        10));
     }
 
     /** A CMOS part: IB 20 pA at 25 °C and 2 nA at its rating's upper end 125 °C, IOS 10 pA and 1 nA. */
@@ -305,8 +531,36 @@ class NgspiceCrossCheckTest {
     }
 
     private static Stage stageAt(Combo c, double t1, double t2, Trim trim) {
-        return new Stage(Networks.of(c.topology(), c.rf(), c.rg(), c.rs(), c.rp()), t1, t2, null, 0, 0, null, null, c.f1(), c.f2(), 1, null,
-                0, 0, 0, Limit.output(1), Criterion.WORST_CASE, 3, 20_000, 1_000_000, 1, trim, 1000, null, false, null, null, Board.NONE, null);
+        return new Stage(
+                Networks.of(c.topology(), c.rf(), c.rg(), c.rs(), c.rp()),
+                t1,
+                t2,
+                null,
+                0,
+                0,
+                null,
+                null,
+                c.f1(),
+                c.f2(),
+                1,
+                null,
+                0,
+                0,
+                0,
+                Limit.output(1),
+                Criterion.WORST_CASE,
+                3,
+                20_000,
+                1_000_000,
+                1,
+                trim,
+                1000,
+                null,
+                false,
+                null,
+                null,
+                Board.NONE,
+                null);
     }
 
     /** Largest |v(out)| ngspice gives with IB and IOS of either sign (vos 0), corrected for the finite gain. */
@@ -316,8 +570,20 @@ class NgspiceCrossCheckTest {
             for (int sIos : new int[] {1, -1}) {
                 double i = sIb * ib;
                 double o = sIos * ios;
-                Combo run = new Combo(c.name(), c.topology(), c.rf(), c.rg(), c.rs(), c.rp(), 0, i + o / 2, i - o / 2, 0, 0,
-                        c.f1(), c.f2());
+                Combo run = new Combo(
+                        c.name(),
+                        c.topology(),
+                        c.rf(),
+                        c.rg(),
+                        c.rs(),
+                        c.rp(),
+                        0,
+                        i + o / 2,
+                        i - o / 2,
+                        0,
+                        0,
+                        c.f1(),
+                        c.f2());
                 worst = Math.max(worst, Math.abs(simulate(run).dcOut() * (1 + c.ng() / A)));
             }
         }

@@ -9,9 +9,9 @@ import dev.ampsieve.fixtures.StageFixture;
 import dev.ampsieve.stage.Stage;
 import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.apache.commons.math3.analysis.integration.RombergIntegrator;
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
-import org.junit.jupiter.api.Test;
 
 /** The noise bandwidth a stage really has (error-model.md term 10) and resistor noise at the hottest temperature. */
 class NoiseBandwidthTest {
@@ -76,6 +76,8 @@ class NoiseBandwidthTest {
         assertEquals(14.0638e-9, NoiseModel.resistorDensity(10e3, NoiseTerm.resistorKelvin(s)), 0.00005e-9);
         Budget b = BudgetCalculator.compute(s, p.build());
         assertEquals(557.38e-9, b.noiseRmsV(), 0.005e-9);
-        assertTrue(b.term("noise").note().contains("resistors at 85"), b.term("noise").note());
+        assertTrue(
+                b.term("noise").note().contains("resistors at 85"),
+                b.term("noise").note());
     }
 }

@@ -25,7 +25,8 @@ class NoiseModelTest {
         "1e3, 300.15, 4.0714",
         "10e3, 300.15, 12.8748",
         "100e3, 300.15, 40.7137",
-        "1e3, 300.0, 4.0704"})
+        "1e3, 300.0, 4.0704"
+    })
     void resistorThermalNoise(double ohms, double kelvin, double nvPerRtHz) {
         assertEquals(nvPerRtHz * 1e-9, NoiseModel.resistorDensity(ohms, kelvin), 0.5e-13);
     }
@@ -42,7 +43,8 @@ class NoiseModelTest {
 
     @Test
     void n1FlickerPlusWhite() {
-        // reference-checks N1 (Franco4 ch. 7 [from memory]): 10 nV/√Hz, fc 10 Hz, 0.1-10 Hz -> 74.80 nV rms, 493.7 nV pp
+        // reference-checks N1 (Franco4 ch. 7 [from memory]): 10 nV/√Hz, fc 10 Hz, 0.1-10 Hz -> 74.80 nV rms, 493.7 nV
+        // pp
         double rms = NoiseModel.outputRms(bare(), 10e-9, 10, 0, 0, 0.1, 10, T25);
         assertEquals(74.80e-9, rms, 0.01e-9);
         assertEquals(493.7e-9, NoiseModel.PEAK_TO_PEAK * rms, 0.05e-9);
@@ -50,7 +52,8 @@ class NoiseModelTest {
 
     @Test
     void n1bZeroDrift() {
-        // reference-checks N1b: 20 nV/√Hz, no 1/f (zero-drift, Enz & Temes 1996 [from memory]) -> 62.93 nV rms, 415.3 nV pp
+        // reference-checks N1b: 20 nV/√Hz, no 1/f (zero-drift, Enz & Temes 1996 [from memory]) -> 62.93 nV rms, 415.3
+        // nV pp
         double rms = NoiseModel.outputRms(bare(), 20e-9, 0, 0, 0, 0.1, 10, T25);
         assertEquals(62.93e-9, rms, 0.005e-9);
         assertEquals(415.3e-9, NoiseModel.PEAK_TO_PEAK * rms, 0.05e-9);
@@ -106,7 +109,8 @@ class NoiseModelTest {
             double f = Math.exp(u);
             return (1 + fci / f) * f;
         };
-        double romberg = new RombergIntegrator(1e-13, 1e-15, 3, 32).integrate(10_000_000, inLog, Math.log(a), Math.log(b));
+        double romberg =
+                new RombergIntegrator(1e-13, 1e-15, 3, 32).integrate(10_000_000, inLog, Math.log(a), Math.log(b));
         assertEquals(romberg, NoiseModel.band(fci, a, b), 1e-9 * romberg);
     }
 
@@ -119,8 +123,13 @@ class NoiseModelTest {
         Stage s = sf.build();
         double en = 8e-9, fce = 3, in = 0.4e-12, fci = 50, k4T = 4 * 1.380649e-23 * T25;
         double ng = s.noiseGain(), rp = s.rPlus(), rm = s.rMinus();
-        UnivariateFunction psd = f -> ng * ng * (en * en * (1 + fce / f) + k4T * rp + in * in * (1 + fci / f) * rp * rp
-                + k4T * rm + in * in * (1 + fci / f) * rm * rm);
+        UnivariateFunction psd = f -> ng
+                * ng
+                * (en * en * (1 + fce / f)
+                        + k4T * rp
+                        + in * in * (1 + fci / f) * rp * rp
+                        + k4T * rm
+                        + in * in * (1 + fci / f) * rm * rm);
         double num = new SimpsonIntegrator(1e-12, 1e-30, 3, 64).integrate(10_000_000, psd, 1, 20);
         assertEquals(Math.sqrt(num), NoiseModel.outputRms(s, en, fce, in, fci, 1, 20, T25), 1e-8 * Math.sqrt(num));
     }

@@ -25,8 +25,12 @@ import org.junit.jupiter.api.Test;
 class NotCountedTest {
 
     /** An invented part with every figure the terms need. */
-    private static final Part FULL = part("NC-1").gbw(1e6).aging(5e-6, 1000 * 3600.0).ib(null, 10e-9)
-            .noise(10e-9, 10.0, 1e-12, 100.0).build();
+    private static final Part FULL = part("NC-1")
+            .gbw(1e6)
+            .aging(5e-6, 1000 * 3600.0)
+            .ib(null, 10e-9)
+            .noise(10e-9, 10.0, 1e-12, 100.0)
+            .build();
 
     private static Stage stage(String yaml) throws Exception {
         return StageLoader.parse(yaml, Path.of("s.yaml"));
@@ -40,15 +44,18 @@ class NotCountedTest {
     void theFewestKeysAStageTakesLeaveOutEightTermsAndSayWhy() throws Exception {
         Stage s = stage("gain: 200\nlimit: 2 mV\n");
         Map<String, Reason> left = of(s, FULL);
-        assertEquals(Map.of(
-                CmrrTerm.KEY, Reason.NO_COMMON_MODE_SWING, // its default follows from the absent full scale: 0 V
-                PsrrTerm.KEY, Reason.NO_SUPPLY_VARIATION,
-                OpenLoopGainTerm.KEY, Reason.NO_FULL_SCALE_OUTPUT,
-                BandwidthTerm.KEY, Reason.NO_FULL_SCALE_OUTPUT,
-                ResistorTerm.KEY, Reason.NO_FULL_SCALE_OUTPUT,
-                AgingTerm.KEY, Reason.NO_SERVICE_LIFE,
-                OperatingPointTerm.KEY, Reason.NO_SUPPLY_VOLTAGE, // no supply: no operating point to compare
-                SelfHeatingTerm.KEY, Reason.NO_LOAD_RESISTANCE), left);
+        assertEquals(
+                Map.of(
+                        CmrrTerm.KEY,
+                                Reason.NO_COMMON_MODE_SWING, // its default follows from the absent full scale: 0 V
+                        PsrrTerm.KEY, Reason.NO_SUPPLY_VARIATION,
+                        OpenLoopGainTerm.KEY, Reason.NO_FULL_SCALE_OUTPUT,
+                        BandwidthTerm.KEY, Reason.NO_FULL_SCALE_OUTPUT,
+                        ResistorTerm.KEY, Reason.NO_FULL_SCALE_OUTPUT,
+                        AgingTerm.KEY, Reason.NO_SERVICE_LIFE,
+                        OperatingPointTerm.KEY, Reason.NO_SUPPLY_VOLTAGE, // no supply: no operating point to compare
+                        SelfHeatingTerm.KEY, Reason.NO_LOAD_RESISTANCE),
+                left);
         // and each is truly 0 V in the budget: the list is what the verdict lacks
         Budget b = BudgetCalculator.compute(s, FULL);
         for (String key : left.keySet()) {
@@ -76,7 +83,9 @@ class NotCountedTest {
         // resistance is 0 here (no source named): 0 V, so the source's resistance is what a leakage needs to matter
         assertEquals(0.6e-3, b.term(ThermalEmfTerm.KEY).outputV(), 1e-15);
         for (TermResult t : b.terms()) {
-            if (t.key().equals(LeakageTerm.KEY) || t.key().equals(InputCrossoverTerm.KEY) || t.key().equals(ChoppingRippleTerm.KEY)) {
+            if (t.key().equals(LeakageTerm.KEY)
+                    || t.key().equals(InputCrossoverTerm.KEY)
+                    || t.key().equals(ChoppingRippleTerm.KEY)) {
                 continue; // 0 V: leakage through R+ = 0 (worked above); one input pair (headroom 1.5 V), no chopping
             }
             assertTrue(t.outputV() > 0, t.key() + " is 0 V though nothing is said of it");

@@ -96,13 +96,17 @@ class OperatingPointTermsTest {
             TermResult t = term(b, OperatingPointTerm.KEY);
             assertEquals(9.82455532e-3, t.outputV(), 1e-11);
             assertTrue(t.estimated());
-            assertTrue(b.warnings().stream().anyMatch(w -> w.startsWith("test-conditions.supply: not given; the datasheet's"
-                    + " table is taken at 40.0 V")), b.warnings().toString());
+            assertTrue(
+                    b.warnings().stream()
+                            .anyMatch(w -> w.startsWith("test-conditions.supply: not given; the datasheet's"
+                                    + " table is taken at 40.0 V")),
+                    b.warnings().toString());
             // never better than any table the datasheet could state inside the rated supply
             PartFixture typed = part();
             typed.testConditions = new TestConditions(36.0, 0.0);
-            assertTrue(t.outputV() >= term(BudgetCalculator.compute(gainOfTen().build(), typed.build()),
-                    OperatingPointTerm.KEY).outputV());
+            assertTrue(t.outputV()
+                    >= term(BudgetCalculator.compute(gainOfTen().build(), typed.build()), OperatingPointTerm.KEY)
+                            .outputV());
         }
 
         @Test
@@ -111,7 +115,8 @@ class OperatingPointTermsTest {
             f.supply = null;
             Budget b = BudgetCalculator.compute(f.build(), part().build());
             assertEquals(0.0, term(b, OperatingPointTerm.KEY).outputV(), 0.0);
-            assertTrue(b.notCounted().contains(new NotCounted(OperatingPointTerm.KEY, NotCounted.Reason.NO_SUPPLY_VOLTAGE)));
+            assertTrue(b.notCounted()
+                    .contains(new NotCounted(OperatingPointTerm.KEY, NotCounted.Reason.NO_SUPPLY_VOLTAGE)));
         }
     }
 
@@ -143,7 +148,11 @@ class OperatingPointTermsTest {
         @Test
         void outsideItCountsNothing() {
             // 0.5..3.5 V stays below 3.8 V
-            assertEquals(0.0, term(BudgetCalculator.compute(stage(0.5, 3.5), part().build()), InputCrossoverTerm.KEY).outputV(), 0.0);
+            assertEquals(
+                    0.0,
+                    term(BudgetCalculator.compute(stage(0.5, 3.5), part().build()), InputCrossoverTerm.KEY)
+                            .outputV(),
+                    0.0);
         }
 
         @Test
@@ -151,8 +160,10 @@ class OperatingPointTermsTest {
             // trimmed at one common mode, the other pair's offset stays: the trimmed totals differ by the whole step.
             // The two stages differ only in their common-mode range; the trim removes the operating point's move.
             Part p = part().build();
-            double inside = BudgetCalculator.trimmed(stage(1.0, 4.0), p, Trim.Method.ONE_POINT).worstCaseV();
-            double outside = BudgetCalculator.trimmed(stage(0.5, 3.5), p, Trim.Method.ONE_POINT).worstCaseV();
+            double inside = BudgetCalculator.trimmed(stage(1.0, 4.0), p, Trim.Method.ONE_POINT)
+                    .worstCaseV();
+            double outside = BudgetCalculator.trimmed(stage(0.5, 3.5), p, Trim.Method.ONE_POINT)
+                    .worstCaseV();
             assertEquals(500e-6, inside - outside, 1e-15);
         }
 
@@ -168,7 +179,11 @@ class OperatingPointTermsTest {
             assertEquals(500e-6, t.outputV(), 1e-15);
             assertTrue(t.estimated());
             // up to 2.9 V it stays clear of the assumed band
-            assertEquals(0.0, term(BudgetCalculator.compute(stage(1.0, 2.9), p), InputCrossoverTerm.KEY).outputV(), 0.0);
+            assertEquals(
+                    0.0,
+                    term(BudgetCalculator.compute(stage(1.0, 2.9), p), InputCrossoverTerm.KEY)
+                            .outputV(),
+                    0.0);
         }
 
         @Test
@@ -177,7 +192,11 @@ class OperatingPointTermsTest {
             f.crossover = null;
             f.inHead = new Headroom(0.0, 1.5); // does not reach the positive rail
             f.vos = new Spread(null, 25e-6, null);
-            assertEquals(0.0, term(BudgetCalculator.compute(stage(1.0, 3.4), f.build()), InputCrossoverTerm.KEY).outputV(), 0.0);
+            assertEquals(
+                    0.0,
+                    term(BudgetCalculator.compute(stage(1.0, 3.4), f.build()), InputCrossoverTerm.KEY)
+                            .outputV(),
+                    0.0);
         }
     }
 
@@ -224,7 +243,8 @@ class OperatingPointTermsTest {
 
         @Test
         void theDieTemperatureRaisesDriftAndBiasByHand() {
-            // P = 10 V x 1 mA + 6.25 mW = 16.25 mW; rise 200 °C/W x 16.25 mW = 3.25 °C (hot end), 2.0 °C quiescent only.
+            // P = 10 V x 1 mA + 6.25 mW = 16.25 mW; rise 200 °C/W x 16.25 mW = 3.25 °C (hot end), 2.0 °C quiescent
+            // only.
             // Die 2.0 .. 73.25 °C. Drift: 1 µV/°C x (48.25 - 45) °C = 3.25 µV.
             // Bias through 1 Mohm: 10 pA x 2^(4.825) = 283.4456 pA at the die against 10 pA x 2^4.5 = 226.2742 pA at
             // 70 °C ambient: 283.4456 µV - 226.2742 µV = 57.1714 µV. Total 60.4214 µV (by hand; 2^0.325 = 1.25266).
@@ -240,14 +260,18 @@ class OperatingPointTermsTest {
             assertFalse(t.estimated());
             assertEquals(TermKind.OPERATING_POINT, t.kind());
             // the bias term itself stays at the ambient's 226.27 µV: the rise is this term's alone
-            assertEquals(226.2741700e-6, term(BudgetCalculator.compute(s, p), BiasTerm.KEY).outputV(), 1e-12);
+            assertEquals(
+                    226.2741700e-6,
+                    term(BudgetCalculator.compute(s, p), BiasTerm.KEY).outputV(),
+                    1e-12);
         }
 
         @Test
         void withoutALoadItIsNotCounted() {
             Budget b = BudgetCalculator.compute(stage(null), part().build());
             assertEquals(0.0, term(b, SelfHeatingTerm.KEY).outputV(), 0.0);
-            assertTrue(b.notCounted().contains(new NotCounted(SelfHeatingTerm.KEY, NotCounted.Reason.NO_LOAD_RESISTANCE)));
+            assertTrue(
+                    b.notCounted().contains(new NotCounted(SelfHeatingTerm.KEY, NotCounted.Reason.NO_LOAD_RESISTANCE)));
             assertTrue(b.constraints().stream().noneMatch(c -> c.name().equals(Constraints.DIE_TEMPERATURE)));
         }
 
@@ -258,8 +282,10 @@ class OperatingPointTermsTest {
             PartFixture f = part();
             f.thetaJa = 1000.0;
             Budget b = BudgetCalculator.compute(stage(100.0), f.build());
-            ConstraintResult c = b.constraints().stream().filter(x -> x.name().equals(Constraints.DIE_TEMPERATURE))
-                    .findFirst().orElseThrow();
+            ConstraintResult c = b.constraints().stream()
+                    .filter(x -> x.name().equals(Constraints.DIE_TEMPERATURE))
+                    .findFirst()
+                    .orElseThrow();
             assertFalse(c.ok());
             assertTrue(c.detail().startsWith("die up to 142.5 °C"), c.detail());
             assertTrue(c.detail().endsWith("17.5 °C too hot"), c.detail());
@@ -273,10 +299,14 @@ class OperatingPointTermsTest {
             f.thetaJa = null;
             Stage s = stage(1e3);
             Budget b = BudgetCalculator.compute(s, f.build());
-            assertEquals(70 + 4.0625, SelfHeatingTerm.die(s, PartValues.of(f.build(), s)).hot(), 1e-12);
+            assertEquals(
+                    70 + 4.0625,
+                    SelfHeatingTerm.die(s, PartValues.of(f.build(), s)).hot(),
+                    1e-12);
             assertTrue(term(b, SelfHeatingTerm.KEY).estimated());
             assertTrue(term(b, SelfHeatingTerm.KEY).outputV() > 60.42e-6);
-            assertTrue(b.warnings().stream().anyMatch(w -> w.startsWith("theta-ja: not given; 250 °C/W is assumed")),
+            assertTrue(
+                    b.warnings().stream().anyMatch(w -> w.startsWith("theta-ja: not given; 250 °C/W is assumed")),
                     b.warnings().toString());
         }
     }

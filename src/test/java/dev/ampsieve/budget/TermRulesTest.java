@@ -92,8 +92,10 @@ class TermRulesTest {
         assertEquals(85.0, t.worstAtC(), 0.0);
         // the hot-end currents come from the doubling rule, not the catalog: marked and explained
         assertTrue(t.estimated());
-        assertTrue(budget(s, p).warnings().stream().anyMatch(w -> w.startsWith("ib: no maximum over temperature")
-                && w.contains("64.0 pA at 85")), budget(s, p).warnings().toString());
+        assertTrue(
+                budget(s, p).warnings().stream()
+                        .anyMatch(w -> w.startsWith("ib: no maximum over temperature") && w.contains("64.0 pA at 85")),
+                budget(s, p).warnings().toString());
         // with the datasheet's over-temperature maxima at the rating's upper end 85 °C the figure is the catalog's own
         p.temperature = new dev.ampsieve.catalog.Range(-40, 85);
         p.ib = new Spread(null, 1e-12, 64e-12);
@@ -190,7 +192,8 @@ class TermRulesTest {
 
     @Test
     void agingGrowsWithTheSquareRootOfTime() {
-        // reference-checks §6 [Calc, √t model]: 1 µV per 1000 h -> 2000 h 1.4142 µV, 1 year (8760 h) 2.9597 µV, 10 y 9.3595 µV
+        // reference-checks §6 [Calc, √t model]: 1 µV per 1000 h -> 2000 h 1.4142 µV, 1 year (8760 h) 2.9597 µV, 10 y
+        // 9.3595 µV
         LongTermDrift d = new LongTermDrift(1e-6, 1000 * 3600.0);
         assertEquals(1.4142e-6, AgingTerm.inputAging(d, 2000 * 3600.0), 0.00005e-6);
         assertEquals(2.9597e-6, AgingTerm.inputAging(d, 8760 * 3600.0), 0.00005e-6);
@@ -272,7 +275,9 @@ class TermRulesTest {
         Budget b = budget(s, p);
         assertEquals(2.260331e-6, b.term("noise").outputV(), 0.000001e-6);
         assertTrue(b.term("noise").estimated());
-        assertTrue(warns(b, "noise.en: not given; estimated as 30.0 nV/√Hz"), b.warnings().toString());
+        assertTrue(
+                warns(b, "noise.en: not given; estimated as 30.0 nV/√Hz"),
+                b.warnings().toString());
     }
 
     @Test

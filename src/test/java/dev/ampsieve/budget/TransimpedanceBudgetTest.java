@@ -82,7 +82,10 @@ class TransimpedanceBudgetTest {
         Budget b = BudgetCalculator.compute(stage(""), part());
         double x = 2 * Math.PI * 1e6 * 2e-12 * 1e4;
         assertEquals(0.0156067, b.term(BandwidthTerm.KEY).outputV(), 1e-7);
-        assertEquals(2 * (1 - 1 / Math.sqrt(1 + x * x)), b.term(BandwidthTerm.KEY).outputV(), 1e-7); // the loop (|A(fH)| = 1e8) moves it by 3e-8
+        assertEquals(
+                2 * (1 - 1 / Math.sqrt(1 + x * x)),
+                b.term(BandwidthTerm.KEY).outputV(),
+                1e-7); // the loop (|A(fH)| = 1e8) moves it by 3e-8
         double fp = 1 / (2 * Math.PI * 1e6 * 2e-12);
         double enbw = Math.PI / 2 * fp * 1e4 / (fp + 1e4) - 1.0;
         assertEquals(13953.40, enbw, 0.01);
@@ -102,7 +105,8 @@ class TransimpedanceBudgetTest {
         f.input = InputType.JFET;
         Budget b = BudgetCalculator.compute(stage(""), f.build());
         assertTrue(b.term(NoiseTerm.KEY).estimated());
-        assertTrue(b.warnings().stream().anyMatch(w -> w.startsWith("input-capacitance: not given; 20.0 pF is assumed")),
+        assertTrue(
+                b.warnings().stream().anyMatch(w -> w.startsWith("input-capacitance: not given; 20.0 pF is assumed")),
                 b.warnings().toString());
         // a voltage-gain stage never reads it, and says nothing about it
         Budget plain = BudgetCalculator.compute(StageLoader.parse("gain: 10\nlimit: 1 mV\n", null), f.build());
@@ -139,7 +143,10 @@ class TransimpedanceBudgetTest {
         Stage wide = StageLoader.parse(stageText().replace("high: 10 kHz", "high: 200 kHz"), null);
         List<ConstraintResult> none = Constraints.transimpedance(wide, PartValues.of(slow, wide));
         assertFalse(find(none, Constraints.SIGNAL_BANDWIDTH).ok(), none.toString());
-        assertTrue(find(none, Constraints.SIGNAL_BANDWIDTH).detail().contains("the part's GBW is too low for this rf and source capacitance"),
+        assertTrue(
+                find(none, Constraints.SIGNAL_BANDWIDTH)
+                        .detail()
+                        .contains("the part's GBW is too low for this rf and source capacitance"),
                 none.toString());
         // and the budget carries them: the part is not a fit
         assertFalse(BudgetCalculator.compute(wide, slow).constraintsMet());

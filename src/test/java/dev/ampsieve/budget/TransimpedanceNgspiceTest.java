@@ -1,10 +1,10 @@
 package dev.ampsieve.budget;
 
-import dev.ampsieve.stage.Board;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import dev.ampsieve.catalog.InputType;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.stage.Board;
 import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.stage.Limit;
 import dev.ampsieve.stage.Stage;
@@ -44,13 +44,46 @@ class TransimpedanceNgspiceTest {
     private static final double T = 298.15;
 
     private static Stage stage(double fLow, double fHigh) {
-        return new Stage(new Transimpedance(RF, CF, RSH, CS, RP), 0, 25, null, 0, 0, null, null, fLow, fHigh, 0, 1.0, 0, 0, 0,
-                Limit.output(1e-3), Criterion.WORST_CASE, 3, 20_000, 1_000_000, 1, Trim.NONE, 1000, null, false, null, null, Board.NONE, null);
+        return new Stage(
+                new Transimpedance(RF, CF, RSH, CS, RP),
+                0,
+                25,
+                null,
+                0,
+                0,
+                null,
+                null,
+                fLow,
+                fHigh,
+                0,
+                1.0,
+                0,
+                0,
+                0,
+                Limit.output(1e-3),
+                Criterion.WORST_CASE,
+                3,
+                20_000,
+                1_000_000,
+                1,
+                Trim.NONE,
+                1000,
+                null,
+                false,
+                null,
+                null,
+                Board.NONE,
+                null);
     }
 
     private static Part part() {
-        return PartBuilder.part("tia-check").input(InputType.JFET).aol(AOL_DB, null).gbw(GBW)
-                .noise(EN, 0.0, IN, 0.0).inputCapacitance(CIN).build();
+        return PartBuilder.part("tia-check")
+                .input(InputType.JFET)
+                .aol(AOL_DB, null)
+                .gbw(GBW)
+                .noise(EN, 0.0, IN, 0.0)
+                .inputCapacitance(CIN)
+                .build();
     }
 
     /** The stage as a netlist; {@code control} is the analysis part of the .control block. */
@@ -69,13 +102,19 @@ class TransimpedanceNgspiceTest {
         n.append("Rp pinp 0 ").append(Ngspice.num(RP)).append('\n');
         n.append("Vos nvos pinp DC ").append(Ngspice.num(vos)).append('\n');
         n.append("Een namp nvos gen_en 0 ").append(Ngspice.num(EN / unit)).append('\n');
-        n.append("Rgen_en gen_en 0 ").append(Ngspice.num(NgspiceCrossCheckTest.GENERATOR_OHMS)).append('\n');
+        n.append("Rgen_en gen_en 0 ")
+                .append(Ngspice.num(NgspiceCrossCheckTest.GENERATOR_OHMS))
+                .append('\n');
         n.append("Ibp pinp 0 DC ").append(Ngspice.num(ibp)).append('\n');
         n.append("Ibm pinn 0 DC ").append(Ngspice.num(ibm)).append('\n');
         n.append("Gip pinp 0 gen_ip 0 ").append(Ngspice.num(IN / unit)).append('\n');
-        n.append("Rgen_ip gen_ip 0 ").append(Ngspice.num(NgspiceCrossCheckTest.GENERATOR_OHMS)).append('\n');
+        n.append("Rgen_ip gen_ip 0 ")
+                .append(Ngspice.num(NgspiceCrossCheckTest.GENERATOR_OHMS))
+                .append('\n');
         n.append("Gim pinn 0 gen_im 0 ").append(Ngspice.num(IN / unit)).append('\n');
-        n.append("Rgen_im gen_im 0 ").append(Ngspice.num(NgspiceCrossCheckTest.GENERATOR_OHMS)).append('\n');
+        n.append("Rgen_im gen_im 0 ")
+                .append(Ngspice.num(NgspiceCrossCheckTest.GENERATOR_OHMS))
+                .append('\n');
         // single-pole amplifier: A0 (V(namp) - V(pinn)) into 1 S || 1/(2π fa)
         double fa = GBW / a0;
         n.append("Gamp 0 na namp pinn ").append(Ngspice.num(a0)).append('\n');
@@ -124,7 +163,8 @@ class TransimpedanceNgspiceTest {
         Stage s = stage(f1, f2);
         PartValues pv = PartValues.of(part(), s);
         double a0 = Decibels.toRatio(AOL_DB);
-        String control = "noise v(out) iin dec 400 " + Ngspice.num(f1) + " " + Ngspice.num(f2) + "\nsetplot noise2\nprint onoise_total\n";
+        String control = "noise v(out) iin dec 400 " + Ngspice.num(f1) + " " + Ngspice.num(f2)
+                + "\nsetplot noise2\nprint onoise_total\n";
         Map<String, Double> v = Ngspice.run(netlist(0, 0, 0, 0, a0, control), List.of("onoise_total"));
         TransimpedanceResponse r = TransimpedanceResponse.of(s, pv);
         TransimpedanceNoise.Sources src = TransimpedanceNoise.sources(s, pv);
@@ -146,7 +186,8 @@ class TransimpedanceNgspiceTest {
         double[] h = new double[3];
         for (int i = 0; i < 3; i++) {
             String control = "ac lin 1 " + Ngspice.num(at[i]) + " " + Ngspice.num(at[i]) + "\nprint vm(out)\n";
-            h[i] = Ngspice.run(netlist(0, 0, 0, 0, a0, control), List.of("vm(out)")).get("vm(out)");
+            h[i] = Ngspice.run(netlist(0, 0, 0, 0, a0, control), List.of("vm(out)"))
+                    .get("vm(out)");
         }
         assertEquals(h[0], r.transimpedanceMagnitude(1e-3), h[0] * 1e-9);
         assertEquals(h[1], r.transimpedanceMagnitude(fH), h[1] * 1e-9);

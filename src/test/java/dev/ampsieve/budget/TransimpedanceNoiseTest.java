@@ -37,9 +37,36 @@ class TransimpedanceNoiseTest {
      */
     @Test
     void tailMakesTheSinglePoleIntegralComplete() throws Exception {
-        dev.ampsieve.stage.Stage s = new dev.ampsieve.stage.Stage(new dev.ampsieve.stage.Transimpedance(1e3, 0, 1e15, 0, 0),
-                -273.15, -273.15, null, 0, 0, null, null, 0.1, 10, 0, null, 0, 0, 0, dev.ampsieve.stage.Limit.output(1e-3),
-                dev.ampsieve.stage.Criterion.WORST_CASE, 3, 20_000, 1_000_000, 1, dev.ampsieve.stage.Trim.NONE, 1000, null, false, null, null, null, null);
+        dev.ampsieve.stage.Stage s = new dev.ampsieve.stage.Stage(
+                new dev.ampsieve.stage.Transimpedance(1e3, 0, 1e15, 0, 0),
+                -273.15,
+                -273.15,
+                null,
+                0,
+                0,
+                null,
+                null,
+                0.1,
+                10,
+                0,
+                null,
+                0,
+                0,
+                0,
+                dev.ampsieve.stage.Limit.output(1e-3),
+                dev.ampsieve.stage.Criterion.WORST_CASE,
+                3,
+                20_000,
+                1_000_000,
+                1,
+                dev.ampsieve.stage.Trim.NONE,
+                1000,
+                null,
+                false,
+                null,
+                null,
+                null,
+                null);
         dev.ampsieve.fixtures.PartFixture f = dev.ampsieve.fixtures.PartFixture.ideal();
         f.gbw = 1e6;
         f.aol = new dev.ampsieve.catalog.MinTyp(120.0, null);

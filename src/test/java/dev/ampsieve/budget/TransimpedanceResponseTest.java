@@ -90,7 +90,9 @@ class TransimpedanceResponseTest {
         assertEquals(0.8409 * graeme, exact, 0.8409 * graeme * 0.03);
         assertEquals(45.0, r.withCf(exact).phaseMargin(), 1e-6);
         // Cf = 0 leaves the two-pole loop of the zero at fz = 3.18 kHz: far below 45°
-        assertTrue(r.withCf(0).phaseMargin() < 10, "phase margin without cf " + r.withCf(0).phaseMargin());
+        assertTrue(
+                r.withCf(0).phaseMargin() < 10,
+                "phase margin without cf " + r.withCf(0).phaseMargin());
     }
 
     /**

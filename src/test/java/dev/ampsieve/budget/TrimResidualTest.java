@@ -20,7 +20,8 @@ class TrimResidualTest {
     @Test
     void theOverTemperatureCapDoesNotShrinkTheDriftLeftAfterATrim() {
         // vos max 10 µV, max over temperature 15 µV, drift max 0.5 µV/°C
-        Budget b = BudgetCalculator.compute(stage().build(),
+        Budget b = BudgetCalculator.compute(
+                stage().build(),
                 PartFixture.ideal().vos(null, 10e-6, 15e-6).drift(null, 0.5e-6).build());
         // untrimmed: offset + drift never exceed the over-temperature maximum (error-model.md term 2)
         assertEquals(10e-6, b.term("offset").outputV(), 1e-18);
@@ -37,7 +38,8 @@ class TrimResidualTest {
     void theResidualNeverExceedsWhatTheTwoOffsetGuaranteesAllow() {
         // drift max 1 µV/°C x 45 °C = 45 µV, but |vos(T) - vos(25)| <= vos over temperature + vos at 25 °C
         // = 15 + 10 = 25 µV whatever the drift [Calc, triangle inequality]
-        Budget b = BudgetCalculator.compute(stage().build(),
+        Budget b = BudgetCalculator.compute(
+                stage().build(),
                 PartFixture.ideal().vos(null, 10e-6, 15e-6).drift(null, 1e-6).build());
         assertEquals(25e-6, b.trimmed().worstCaseV(), 1e-15);
     }
@@ -45,7 +47,8 @@ class TrimResidualTest {
     @Test
     void withoutAnOverTemperatureFigureTheResidualIsTheDrift() {
         // no cap at all: drift 0.5 µV/°C x 45 °C, before and after the trim
-        Budget b = BudgetCalculator.compute(stage().build(),
+        Budget b = BudgetCalculator.compute(
+                stage().build(),
                 PartFixture.ideal().vos(null, 10e-6, null).drift(null, 0.5e-6).build());
         assertEquals(22.5e-6, b.term("drift").outputV(), 1e-15);
         assertEquals(22.5e-6, b.trimmed().worstCaseV(), 1e-15);
@@ -57,7 +60,9 @@ class TrimResidualTest {
         // maximum bounds offset plus drift (100 µV); after a trim at 25 °C nothing bounds the change, so
         // the missing drift is estimated as vos / T (bipolar pair: GHLM5 ch. 3 [from memory];
         // reference-checks §5, 3.354 µV/°C per mV): 100 µV / 298.15 K x 45 °C = 15.093 µV, flagged
-        Budget b = BudgetCalculator.compute(stage().build(), PartFixture.ideal().vos(null, null, 100e-6).drift(null, null).build());
+        Budget b = BudgetCalculator.compute(
+                stage().build(),
+                PartFixture.ideal().vos(null, null, 100e-6).drift(null, null).build());
         assertEquals(100e-6, b.worstCaseV(), 1e-15);
         assertEquals(100e-6 / 298.15 * 45, b.trimmed().worstCaseV(), 1e-15);
         org.junit.jupiter.api.Assertions.assertTrue(b.term("drift").estimated());
@@ -84,7 +89,10 @@ class TrimResidualTest {
         // = 1.15 mV (the old proportional reading gave 0.55 mV)
         p.ib = new dev.ampsieve.catalog.Spread(null, 5e-9, 10e-9);
         p.ios = new dev.ampsieve.catalog.Spread(null, 1e-9, 2e-9);
-        assertEquals(1.15e-3 + noise, BudgetCalculator.compute(s.build(), p.build()).trimmed().worstCaseV(), 1e-15);
+        assertEquals(
+                1.15e-3 + noise,
+                BudgetCalculator.compute(s.build(), p.build()).trimmed().worstCaseV(),
+                1e-15);
     }
 
     @Test
@@ -98,8 +106,10 @@ class TrimResidualTest {
         p.ios = new dev.ampsieve.catalog.Spread(null, 1e-9, null);
         Budget b = BudgetCalculator.compute(s.build(), p.build());
         assertEquals(0.6e-3 + b.term("noise").outputV(), b.trimmed().worstCaseV(), 1e-15);
-        org.junit.jupiter.api.Assertions.assertTrue(b.warnings().stream().anyMatch(
-                w -> w.startsWith("ib: no maximum over temperature; what a trim at 25 °C leaves")), b.warnings().toString());
+        org.junit.jupiter.api.Assertions.assertTrue(
+                b.warnings().stream()
+                        .anyMatch(w -> w.startsWith("ib: no maximum over temperature; what a trim at 25 °C leaves")),
+                b.warnings().toString());
     }
 
     @Test
@@ -125,7 +135,9 @@ class TrimResidualTest {
     void driftInferredFromTheOverTemperatureOffsetLeavesTheSumAfterATrim() {
         // vos max 10 µV, over temperature 15 µV, no drift figure: untrimmed, offset + drift <= 15 µV; after a trim
         // a unit may go from -10 µV at 25 °C to +15 µV at 70 °C: NG x (15 + 10) = 25 µV [Calc, triangle inequality]
-        Budget b = BudgetCalculator.compute(stage().build(), PartFixture.ideal().vos(null, 10e-6, 15e-6).drift(null, null).build());
+        Budget b = BudgetCalculator.compute(
+                stage().build(),
+                PartFixture.ideal().vos(null, 10e-6, 15e-6).drift(null, null).build());
         assertEquals(15e-6, b.worstCaseV(), 1e-18);
         assertEquals(25e-6, b.trimmed().worstCaseV(), 1e-15);
     }

@@ -55,7 +55,9 @@ class TwoTemperatureTrimTest {
 
     @Test
     void aBipolarPartCalibratedAtTheRangeEnds() {
-        Budget b = BudgetCalculator.compute(bipolarStage(twoTemperature(10e-6, -40, 85)).build(), bipolarPart().build());
+        Budget b = BudgetCalculator.compute(
+                bipolarStage(twoTemperature(10e-6, -40, 85)).build(),
+                bipolarPart().build());
         double noise = b.term("noise").outputV(); // 100 kΩ's thermal noise: no calibration touches it
         double small = b.term("cmrr").outputV() + b.term("psrr").outputV(); // 400 dB: below 1e-19 V
         // untrimmed for comparison: offset 100 µV + drift 2 µV/°C x 65 °C = 130 µV [Calc]
@@ -87,14 +89,20 @@ class TwoTemperatureTrimTest {
         // (= r (1 + 2 d/(T2 - T1)), d = 40 °C beyond the cold point).
         StageFixture s = StageFixture.follower().temps(-40, 85).limitV(1);
         s.trim = twoTemperature(10e-6, 0, 50);
-        Budget ideal = BudgetCalculator.compute(s.build(), PartFixture.ideal().vos(null, 100e-6, null).drift(null, 1e-6).build());
+        Budget ideal = BudgetCalculator.compute(
+                s.build(),
+                PartFixture.ideal().vos(null, 100e-6, null).drift(null, 1e-6).build());
         assertEquals(26e-6, ideal.trimmed().worstCaseV(), 1e-15);
 
         // bipolar currents, shape unknown: at -40 °C IB(T) - 1.8 IB(0) + 0.8 IB(50), readings in [0, 10 nA]:
         // at most 10 + 0.8 x 10 = 18 nA; IOS (either sign) 2 + 1.8 x 2 + 0.8 x 2 = 7.2 nA; at 85 °C 17 and
         // 6.8 nA. 100 k x 18 nA + 100 k x 7.2 nA / 2 = 2.16 mV [Calc]
-        Budget b = BudgetCalculator.compute(bipolarStage(twoTemperature(10e-6, 0, 50)).build(), bipolarPart().build());
-        double rest = b.term("noise").outputV() + b.term("open-loop-gain").outputV() + b.term("cmrr").outputV()
+        Budget b = BudgetCalculator.compute(
+                bipolarStage(twoTemperature(10e-6, 0, 50)).build(),
+                bipolarPart().build());
+        double rest = b.term("noise").outputV()
+                + b.term("open-loop-gain").outputV()
+                + b.term("cmrr").outputV()
                 + b.term("psrr").outputV();
         assertEquals(2.16e-3 + 26e-6 + rest, b.trimmed().worstCaseV(), 1e-12);
     }
@@ -129,7 +137,10 @@ class TwoTemperatureTrimTest {
         Budget b = BudgetCalculator.compute(s, cmosPart());
         double noise = b.term("noise").outputV();
         assertEquals(60.4294e-3 + noise, b.trimmed().worstCaseV(), 0.0001e-3);
-        assertTrue(b.warnings().stream().anyMatch(w -> w.startsWith("trim: two-temperature calibration at -40 °C and 85 °C, the range ends")),
+        assertTrue(
+                b.warnings().stream()
+                        .anyMatch(w ->
+                                w.startsWith("trim: two-temperature calibration at -40 °C and 85 °C, the range ends")),
                 b.warnings().toString());
 
         // second method: a dense scan (every 0.001 °C) of |I(T) - chord(T)| on the engine's own curve
@@ -147,7 +158,10 @@ class TwoTemperatureTrimTest {
 
         // the one-point trim at 25 °C keeps the drift 5 µV/°C x 65 °C = 325 µV and the bias change
         // (63.0957 + 1) pA x 1.5 GΩ = 96.1436 mV (TrimResidualTest)
-        assertEquals(325e-6 + 96.1436e-3 + noise, BudgetCalculator.trimmed(s, cmosPart(), Trim.Method.ONE_POINT).worstCaseV(), 0.0001e-3);
+        assertEquals(
+                325e-6 + 96.1436e-3 + noise,
+                BudgetCalculator.trimmed(s, cmosPart(), Trim.Method.ONE_POINT).worstCaseV(),
+                0.0001e-3);
     }
 
     @Test
@@ -170,7 +184,8 @@ class TwoTemperatureTrimTest {
                 double worst = 0;
                 for (int i = 0; i <= 125_000; i++) {
                     double t = -40 + i * 0.001;
-                    worst = Math.max(worst, Math.abs(v.ibAt(t) - (cold + (hot - cold) * (t - pts[0]) / (pts[1] - pts[0]))));
+                    worst = Math.max(
+                            worst, Math.abs(v.ibAt(t) - (cold + (hot - cold) * (t - pts[0]) / (pts[1] - pts[0]))));
                 }
                 double closedForm = BiasTerm.afterTwoTemperature(s, v, CalibrationLine.of(s, s.trim())) / 1.5e9;
                 assertEquals(worst, closedForm, 1e-7 * worst, overTemp + " at " + pts[0] + ", " + pts[1]);
@@ -204,22 +219,29 @@ class TwoTemperatureTrimTest {
         // a simulation looking only at the range ends (where the line meets the curve) would see nothing.
         Stage s = cmosStage(new Trim(true, Trim.Method.TWO_TEMPERATURE, 0, 0));
         PartValues v = PartValues.of(cmosPart(), s);
-        List<TermResult> terms = BudgetCalculator.TERMS.stream().map(t -> t.evaluate(s, v)).toList();
+        List<TermResult> terms =
+                BudgetCalculator.TERMS.stream().map(t -> t.evaluate(s, v)).toList();
         double fixed = BudgetCalculator.fixedInYield(s, terms, true, false);
         double largest = new TwoTemperatureYield(s, v, fixed, CalibrationLine.of(s, s.trim())).largestError(5000);
         assertTrue(largest >= 40.2862e-3 + fixed, "largest " + largest);
-        assertTrue(largest <= BudgetCalculator.trimmed(s, cmosPart(), Trim.Method.TWO_TEMPERATURE).worstCaseV() * (1 + 1e-12));
+        assertTrue(largest
+                <= BudgetCalculator.trimmed(s, cmosPart(), Trim.Method.TWO_TEMPERATURE)
+                                .worstCaseV()
+                        * (1 + 1e-12));
     }
 
     private static List<Stage> demoStages() throws Exception {
         try (Stream<Path> files = Files.list(Path.of("demo-catalog/stages"))) {
-            return files.filter(p -> p.toString().endsWith(".yaml")).sorted().map(f -> {
-                try {
-                    return StageLoader.load(f);
-                } catch (Exception e) {
-                    throw new IllegalStateException(e);
-                }
-            }).toList();
+            return files.filter(p -> p.toString().endsWith(".yaml"))
+                    .sorted()
+                    .map(f -> {
+                        try {
+                            return StageLoader.load(f);
+                        } catch (Exception e) {
+                            throw new IllegalStateException(e);
+                        }
+                    })
+                    .toList();
         }
     }
 
@@ -239,11 +261,16 @@ class TwoTemperatureTrimTest {
                 Stage s = withTrim(demo, t);
                 for (Part p : c.parts()) {
                     PartValues v = PartValues.of(p, s);
-                    List<TermResult> terms = BudgetCalculator.TERMS.stream().map(x -> x.evaluate(s, v)).toList();
-                    double bound = BudgetCalculator.trimmed(s, p, Trim.Method.TWO_TEMPERATURE).worstCaseV();
+                    List<TermResult> terms = BudgetCalculator.TERMS.stream()
+                            .map(x -> x.evaluate(s, v))
+                            .toList();
+                    double bound = BudgetCalculator.trimmed(s, p, Trim.Method.TWO_TEMPERATURE)
+                            .worstCaseV();
                     double fixed = BudgetCalculator.fixedInYield(s, terms, true, false);
                     double largest = new TwoTemperatureYield(s, v, fixed, CalibrationLine.of(s, t)).largestError(3000);
-                    assertTrue(largest <= bound * (1 + 1e-12), p.id() + " in " + demo.where() + ", " + t + ": " + largest + " > " + bound);
+                    assertTrue(
+                            largest <= bound * (1 + 1e-12),
+                            p.id() + " in " + demo.where() + ", " + t + ": " + largest + " > " + bound);
                     checked++;
                 }
             }
@@ -255,24 +282,31 @@ class TwoTemperatureTrimTest {
     void withTheLimitAtTheTrimmedWorstCaseEverySampledUnitPasses() {
         // limit set to the trimmed worst case, sampling forced (no bound given to skip it): every unit passes
         Stage wide = cmosStage(new Trim(true, Trim.Method.TWO_TEMPERATURE, 0, 0));
-        double bound = BudgetCalculator.trimmed(wide, cmosPart(), Trim.Method.TWO_TEMPERATURE).worstCaseV();
+        double bound = BudgetCalculator.trimmed(wide, cmosPart(), Trim.Method.TWO_TEMPERATURE)
+                .worstCaseV();
         StageFixture f = StageFixture.follower().temps(-40, 85).limitV(bound);
         f.rs = 1e9;
         f.trim = wide.trim();
         f.trials = 5000;
         Stage s = f.build();
         PartValues v = PartValues.of(cmosPart(), s);
-        List<TermResult> terms = BudgetCalculator.TERMS.stream().map(t -> t.evaluate(s, v)).toList();
-        YieldResult y = new TwoTemperatureYield(s, v, BudgetCalculator.fixedInYield(s, terms, true, false),
-                CalibrationLine.of(s, s.trim())).run(Double.NaN, Double.POSITIVE_INFINITY);
+        List<TermResult> terms =
+                BudgetCalculator.TERMS.stream().map(t -> t.evaluate(s, v)).toList();
+        YieldResult y = new TwoTemperatureYield(
+                        s, v, BudgetCalculator.fixedInYield(s, terms, true, false), CalibrationLine.of(s, s.trim()))
+                .run(Double.NaN, Double.POSITIVE_INFINITY);
         assertEquals("sampled", y.decided());
         assertEquals(1.0, y.value(), 0.0);
         // and a limit 1 % under it fails the few units whose IOS sits within 3 % of its bound with the IB part's
         // sign (IOS ~ N(0, bound/3) truncated at its bound): the samples reach the bound's neighbourhood
         f.limit = dev.ampsieve.stage.Limit.output(0.99 * bound);
         Stage tight = f.build();
-        YieldResult t = new TwoTemperatureYield(tight, v, BudgetCalculator.fixedInYield(tight, terms, true, false),
-                CalibrationLine.of(tight, tight.trim())).run(Double.NaN, Double.POSITIVE_INFINITY);
+        YieldResult t = new TwoTemperatureYield(
+                        tight,
+                        v,
+                        BudgetCalculator.fixedInYield(tight, terms, true, false),
+                        CalibrationLine.of(tight, tight.trim()))
+                .run(Double.NaN, Double.POSITIVE_INFINITY);
         assertTrue(t.value() < 1.0, "yield " + t.value());
     }
 }

@@ -67,7 +67,9 @@ class TwoTemperatureUndecidedTest {
         // no datasheet gives the offset's curvature over temperature (a drift figure bounds a box, not a line):
         // the budget must say the calibration's benefit rests on a straight line
         Budget b = BudgetCalculator.compute(stage(9.5e-6, 0.80).build(), PART.build());
-        assertTrue(b.warnings().stream().anyMatch(w -> w.contains("curvature over temperature is in no datasheet and not counted")),
+        assertTrue(
+                b.warnings().stream()
+                        .anyMatch(w -> w.contains("curvature over temperature is in no datasheet and not counted")),
                 () -> b.warnings().toString());
     }
 }

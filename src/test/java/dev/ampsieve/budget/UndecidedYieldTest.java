@@ -63,7 +63,8 @@ class UndecidedYieldTest {
         Budget b = BudgetCalculator.compute(stage(2e-3, 0.90).build(), PART.build());
         assertEquals(Verdict.FITS, b.verdict());
         assertTrue(b.yield().low() >= 0.90);
-        // at n units the z = 3.29 interval half-width is about 3.29·sqrt(p(1-p)/n): 0.067 at 1000, under the 0.057 gap by 2000
+        // at n units the z = 3.29 interval half-width is about 3.29·sqrt(p(1-p)/n): 0.067 at 1000, under the 0.057 gap
+        // by 2000
         assertTrue(b.yield().trials() <= 2000, () -> b.yield().trials() + " units");
         assertTrue(b.yield().low() <= p && p <= b.yield().high());
     }
@@ -83,16 +84,20 @@ class UndecidedYieldTest {
         // after a one-point trim at 25 °C nothing of a pure offset is left: every unit passes
         StageFixture s = stage(2e-3, closedForm(2e-3, 3));
         s.trim = new dev.ampsieve.stage.Trim(true, dev.ampsieve.stage.Trim.Method.ONE_POINT, 0, 1.0);
-        assertEquals(Verdict.FITS_AFTER_TRIM, BudgetCalculator.compute(s.build(), PART.build()).verdict());
+        assertEquals(
+                Verdict.FITS_AFTER_TRIM,
+                BudgetCalculator.compute(s.build(), PART.build()).verdict());
     }
 
     @Test
     void yieldAtMaxToSigmaTwoAndFourAgainstTheClosedForm() {
-        // limit 2.5 typ: k = 2 truncates at 2 typ, inside the limit (100 %); k = 3: 0.98758/0.99730; k = 4: 0.98758/0.99994
+        // limit 2.5 typ: k = 2 truncates at 2 typ, inside the limit (100 %); k = 3: 0.98758/0.99730; k = 4:
+        // 0.98758/0.99994
         StageFixture s = StageFixture.follower().limitV(2.5e-3);
         Budget b = BudgetCalculator.compute(s.build(), PART.build());
         List<SigmaYield> by = BudgetCalculator.yieldBySigma(b);
-        assertEquals(List.of(2.0, 3.0, 4.0), by.stream().map(SigmaYield::maxToSigma).toList());
+        assertEquals(
+                List.of(2.0, 3.0, 4.0), by.stream().map(SigmaYield::maxToSigma).toList());
         assertEquals(1.0, by.get(0).yield(), 0.0);
         assertEquals(0, by.get(0).trials()); // decided without sampling
         for (SigmaYield y : by.subList(1, 3)) {

@@ -74,7 +74,9 @@ class VerdictTest {
         // the budget carries the same trimmed yield, so reports need not simulate again
         Budget b = BudgetCalculator.compute(s.build(), p.build());
         assertEquals(t, b.trimmed().yield());
-        assertNull(BudgetCalculator.compute(stage(1.0e-3).build(), part().build()).trimmed().yield());
+        assertNull(BudgetCalculator.compute(stage(1.0e-3).build(), part().build())
+                .trimmed()
+                .yield());
     }
 
     @Test
@@ -111,15 +113,22 @@ class VerdictTest {
         double bias = 9e3 * 10e-9 + 9e3 * 2e-9 / 2;
         assertEquals(99e-6, bias, 1e-18);
         double noise = b.term("noise").outputV();
-        assertEquals(drift + bias + aolErr + tolPart + tcPart + noise, b.trimmed().worstCaseV(), 1e-15);
+        assertEquals(
+                drift + bias + aolErr + tolPart + tcPart + noise, b.trimmed().worstCaseV(), 1e-15);
         s.trim = new Trim(false, Trim.Method.TWO_POINT, 10e-6, 0);
         Budget two = BudgetCalculator.compute(s.build(), p.build());
         assertEquals(drift + bias + tcPart + 10e-6 + noise, two.trimmed().worstCaseV(), 1e-15);
-        assertEquals(Math.sqrt(drift * drift + bias * bias + tcPart * tcPart + 1e-10 + noise * noise), two.trimmed().rssV(), 1e-15);
+        assertEquals(
+                Math.sqrt(drift * drift + bias * bias + tcPart * tcPart + 1e-10 + noise * noise),
+                two.trimmed().rssV(),
+                1e-15);
         // the comparison function gives the same totals for either method
         assertEquals(two.trimmed(), BudgetCalculator.trimmed(s.build(), p.build(), Trim.Method.TWO_POINT));
-        assertEquals(drift + bias + aolErr + tolPart + tcPart + noise + 10e-6,
-                BudgetCalculator.trimmed(s.build(), p.build(), Trim.Method.ONE_POINT).worstCaseV(), 1e-15);
+        assertEquals(
+                drift + bias + aolErr + tolPart + tcPart + noise + 10e-6,
+                BudgetCalculator.trimmed(s.build(), p.build(), Trim.Method.ONE_POINT)
+                        .worstCaseV(),
+                1e-15);
     }
 
     @Test
@@ -134,7 +143,10 @@ class VerdictTest {
         assertEquals(Verdict.FITS, b.verdict());
         assertFalse(BudgetCalculator.counts(s.build(), "offset"));
         assertTrue(BudgetCalculator.counts(s.build(), "cmrr"));
-        ConstraintResult swing = b.constraints().stream().filter(c -> c.name().equals("output-swing")).findFirst().orElseThrow();
+        ConstraintResult swing = b.constraints().stream()
+                .filter(c -> c.name().equals("output-swing"))
+                .findFirst()
+                .orElseThrow();
         assertTrue(swing.detail().contains("AC-coupled"), swing.detail());
     }
 }

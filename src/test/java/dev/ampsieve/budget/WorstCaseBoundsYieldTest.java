@@ -30,7 +30,8 @@ class WorstCaseBoundsYieldTest {
     private static List<Stage> demoStages() throws Exception {
         List<Stage> out = new ArrayList<>();
         try (Stream<Path> files = Files.list(Path.of("demo-catalog/stages"))) {
-            for (Path f : files.filter(p -> p.toString().endsWith(".yaml")).sorted().toList()) {
+            for (Path f :
+                    files.filter(p -> p.toString().endsWith(".yaml")).sorted().toList()) {
                 out.add(StageLoader.load(f));
             }
         }
@@ -39,7 +40,10 @@ class WorstCaseBoundsYieldTest {
 
     /** {@code s} judged by the worst case against {@code limitV} output volts. */
     private static Stage worstCase(Stage s, double limitV) {
-        return s.toBuilder().limit(Limit.output(limitV)).criterion(Criterion.WORST_CASE).build();
+        return s.toBuilder()
+                .limit(Limit.output(limitV))
+                .criterion(Criterion.WORST_CASE)
+                .build();
     }
 
     @Test
@@ -68,17 +72,25 @@ class WorstCaseBoundsYieldTest {
     void noSimulatedUnitExceedsTheWorstCaseBeforeOrAfterATrim() throws Exception {
         Catalog c = CatalogLoader.load(Path.of("demo-catalog"), false);
         for (Stage demo : demoStages()) {
-            for (Trim.Method m : List.of(Trim.Method.ONE_POINT, Trim.Method.TWO_POINT)) { // two-temperature: TwoTemperatureTrimTest
-                Stage s = withTrim(demo, new Trim(true, m, demo.trim() == null ? 0 : demo.trim().resolution(), 0));
+            for (Trim.Method m :
+                    List.of(Trim.Method.ONE_POINT, Trim.Method.TWO_POINT)) { // two-temperature: TwoTemperatureTrimTest
+                Stage s = withTrim(
+                        demo,
+                        new Trim(true, m, demo.trim() == null ? 0 : demo.trim().resolution(), 0));
                 boolean two = m == Trim.Method.TWO_POINT;
                 for (Part p : c.parts()) {
                     PartValues v = PartValues.of(p, s);
-                    List<TermResult> terms = BudgetCalculator.TERMS.stream().map(t -> t.evaluate(s, v)).toList();
+                    List<TermResult> terms = BudgetCalculator.TERMS.stream()
+                            .map(t -> t.evaluate(s, v))
+                            .toList();
                     Budget b = BudgetCalculator.compute(s, p);
                     String what = p.id() + " in " + demo.where() + ", " + m;
-                    double untrimmed = new YieldModel(s, v, BudgetCalculator.fixedInYield(s, terms, false, false), false,
-                            false).maxError();
-                    assertTrue(untrimmed <= b.worstCaseV() * (1 + 1e-12), what + ": " + untrimmed + " > " + b.worstCaseV());
+                    double untrimmed = new YieldModel(
+                                    s, v, BudgetCalculator.fixedInYield(s, terms, false, false), false, false)
+                            .maxError();
+                    assertTrue(
+                            untrimmed <= b.worstCaseV() * (1 + 1e-12),
+                            what + ": " + untrimmed + " > " + b.worstCaseV());
                     double trimmed = new YieldModel(s, v, BudgetCalculator.fixedInYield(s, terms, true, two), true, two)
                             .maxError();
                     double bound = BudgetCalculator.trimmed(s, p, m).worstCaseV();

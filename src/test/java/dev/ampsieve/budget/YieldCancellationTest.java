@@ -28,7 +28,8 @@ class YieldCancellationTest {
         return s.build();
     }
 
-    private static final dev.ampsieve.catalog.Part PART = PartFixture.ideal().vos(1e-3, null, null).build();
+    private static final dev.ampsieve.catalog.Part PART =
+            PartFixture.ideal().vos(1e-3, null, null).build();
 
     @Test
     void anInterruptedBudgetStopsWithCancelled() {
@@ -48,13 +49,15 @@ class YieldCancellationTest {
     void anInterruptFromAnotherThreadStopsARunningBudget() throws Exception {
         Stage s = stage(StageKeys.MAX_TRIALS);
         Throwable[] thrown = new Throwable[1];
-        Thread worker = new Thread(() -> {
-            try {
-                BudgetCalculator.compute(s, PART);
-            } catch (Throwable t) {
-                thrown[0] = t;
-            }
-        }, "budget-under-test");
+        Thread worker = new Thread(
+                () -> {
+                    try {
+                        BudgetCalculator.compute(s, PART);
+                    } catch (Throwable t) {
+                        thrown[0] = t;
+                    }
+                },
+                "budget-under-test");
         worker.start();
         Thread.sleep(200); // let it get into the sampling; an earlier interrupt is caught just the same
         worker.interrupt();
@@ -73,6 +76,7 @@ class YieldCancellationTest {
         NormalDistribution z = new NormalDistribution();
         double expected = z.probability(-2, 2) / z.probability(-3, 3);
         assertEquals(0.9570836, expected, 1e-7);
-        assertTrue(y.low() <= expected && expected <= y.high(), expected + " not in [" + y.low() + ", " + y.high() + "]");
+        assertTrue(
+                y.low() <= expected && expected <= y.high(), expected + " not in [" + y.low() + ", " + y.high() + "]");
     }
 }

@@ -32,7 +32,8 @@ class YieldTest {
         YieldResult y = b.yield();
         assertEquals("sampled", y.decided());
         assertEquals(20000, y.trials());
-        assertTrue(y.low() <= expected && expected <= y.high(),
+        assertTrue(
+                y.low() <= expected && expected <= y.high(),
                 expected + " outside the Wilson interval [" + y.low() + ", " + y.high() + "]");
     }
 
@@ -44,14 +45,19 @@ class YieldTest {
         double expected = nd.probability(-2, 2) / nd.probability(-4, 4);
         StageFixture s = StageFixture.follower().limitV(2e-3);
         s.k = 4;
-        YieldResult y = BudgetCalculator.compute(s.build(), offsetOnly(null, 4e-3).build()).yield();
-        assertTrue(y.low() <= expected && expected <= y.high(), expected + " not in [" + y.low() + ", " + y.high() + "]");
+        YieldResult y = BudgetCalculator.compute(
+                        s.build(), offsetOnly(null, 4e-3).build())
+                .yield();
+        assertTrue(
+                y.low() <= expected && expected <= y.high(), expected + " not in [" + y.low() + ", " + y.high() + "]");
     }
 
     @Test
     void allPassWithoutSamplingWhenTheLargestErrorFits() {
         StageFixture s = StageFixture.follower().limitV(2e-3);
-        YieldResult y = BudgetCalculator.compute(s.build(), offsetOnly(null, 1e-3).build()).yield();
+        YieldResult y = BudgetCalculator.compute(
+                        s.build(), offsetOnly(null, 1e-3).build())
+                .yield();
         assertEquals("all-pass", y.decided());
         assertEquals(0, y.trials());
         assertEquals(1.0, y.value(), 0.0);
@@ -85,7 +91,9 @@ class YieldTest {
         s2.cmSwing = 1;
         PartFixture p2 = offsetOnly(null, 1e-3);
         p2.cmrr = new MinTyp(60.0, null);
-        assertEquals("none-pass", BudgetCalculator.compute(s2.build(), p2.build()).yield().decided());
+        assertEquals(
+                "none-pass",
+                BudgetCalculator.compute(s2.build(), p2.build()).yield().decided());
         // near the edge it samples
         s.limitV(1.05e-3);
         YieldResult near = BudgetCalculator.compute(s.build(), p.build()).yield();
@@ -117,7 +125,9 @@ class YieldTest {
     void withoutATargetAllTrialsRun() {
         StageFixture s = StageFixture.follower().limitV(1e-3);
         s.trials = 5000;
-        YieldResult y = BudgetCalculator.compute(s.build(), offsetOnly(1e-3, null).build()).yield();
+        YieldResult y = BudgetCalculator.compute(
+                        s.build(), offsetOnly(1e-3, null).build())
+                .yield();
         assertEquals(5000, y.trials());
     }
 
@@ -153,7 +163,8 @@ class YieldTest {
         assertEquals(0.73628, expected, 1e-5); // [Calc]
         YieldResult y = BudgetCalculator.compute(s.build(), p.build()).yield();
         assertEquals("sampled", y.decided());
-        assertTrue(y.low() <= expected && expected <= y.high(),
+        assertTrue(
+                y.low() <= expected && expected <= y.high(),
                 expected + " not in [" + y.low() + ", " + y.high() + "] (signed sum would give about 0.868)");
     }
 
@@ -184,8 +195,10 @@ class YieldTest {
         PartFixture p = PartFixture.ideal().vos(null, 3e-3, null).drift(null, null);
         YieldResult y = BudgetCalculator.compute(s.build(), p.build()).yield();
         double expected = 0.9544997 / 0.9973002;
-        assertTrue(y.low() <= expected && expected <= y.high(), expected + " not in [" + y.low() + ", " + y.high() + "]");
-        assertTrue(Math.abs(y.value() - expected) < 0.004, "a correlated drift gives " + expected + ", not " + y.value());
+        assertTrue(
+                y.low() <= expected && expected <= y.high(), expected + " not in [" + y.low() + ", " + y.high() + "]");
+        assertTrue(
+                Math.abs(y.value() - expected) < 0.004, "a correlated drift gives " + expected + ", not " + y.value());
     }
 
     @Test
@@ -200,7 +213,8 @@ class YieldTest {
         p.ib = new Spread(10e-9, 40e-9, null);
         YieldResult y = BudgetCalculator.compute(s.build(), p.build()).yield();
         double expected = (0.5 - 0.1586553) / (0.9986501 - 0.1586553);
-        assertTrue(y.low() <= expected && expected <= y.high(), expected + " not in [" + y.low() + ", " + y.high() + "]");
+        assertTrue(
+                y.low() <= expected && expected <= y.high(), expected + " not in [" + y.low() + ", " + y.high() + "]");
     }
 
     @Test

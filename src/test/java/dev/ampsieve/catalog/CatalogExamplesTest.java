@@ -33,7 +33,9 @@ class CatalogExamplesTest {
 
     private List<Problem> errors(String text) throws IOException, InputException {
         Files.writeString(dir.resolve("p.yaml"), text);
-        return CatalogLoader.load(dir, false).problems().stream().filter(Problem::isError).toList();
+        return CatalogLoader.load(dir, false).problems().stream()
+                .filter(Problem::isError)
+                .toList();
     }
 
     @Test
@@ -75,15 +77,18 @@ class CatalogExamplesTest {
         Path stage = Files.writeString(dir.resolve("stage.yaml"), "topology: inverting\ngain: 10\nlimit: 1 mV\n");
         Catalog c = CatalogLoader.load(dir, false);
         assertEquals(1, c.parts().size());
-        List<Problem> about = c.problems().stream().filter(p -> p.file().equals(stage)).toList();
+        List<Problem> about =
+                c.problems().stream().filter(p -> p.file().equals(stage)).toList();
         assertEquals(1, about.size(), about.toString());
-        assertEquals(stage + ":1:1: warning: looks like a stage file (it has topology, gain, limit and no id); skipped;"
-                + " move it to a 'stages' folder (which the catalog does not read) and pass it with --stage",
+        assertEquals(
+                stage + ":1:1: warning: looks like a stage file (it has topology, gain, limit and no id); skipped;"
+                        + " move it to a 'stages' folder (which the catalog does not read) and pass it with --stage",
                 about.get(0).toString());
         // a part that lacks its id but has part keys is still a part with a missing id, not a stage
         Files.writeString(stage, PART.replace("id: ex-amp\n", ""));
         assertTrue(CatalogLoader.load(dir, false).problems().stream()
-                .anyMatch(p -> p.file().equals(stage) && p.isError() && p.field().equals("id")));
+                .anyMatch(
+                        p -> p.file().equals(stage) && p.isError() && p.field().equals("id")));
     }
 
     @Test
@@ -96,6 +101,7 @@ class CatalogExamplesTest {
         assertEquals(1, cmrr.size(), cmrr.toString());
         assertEquals("cmrr.min", cmrr.get(0).field());
         // just inside: 0.9 V and 190 dB load, with warnings only
-        assertEquals(List.of(), errors(PART.replace("vos: {max: 1 mV}", "vos: {max: 0.9 V}") + "cmrr: {min: 190 dB}\n"));
+        assertEquals(
+                List.of(), errors(PART.replace("vos: {max: 1 mV}", "vos: {max: 0.9 V}") + "cmrr: {min: 190 dB}\n"));
     }
 }

@@ -12,8 +12,7 @@ import java.util.List;
 
 /** Invented test parts written in block style, so every value's line and column can be read off the text. */
 final class CatalogFixtures {
-    private CatalogFixtures() {
-    }
+    private CatalogFixtures() {}
 
     /** A valid, invented part with every required key and the common optional ones; all values distinct. */
     static final String BASE = """
@@ -86,8 +85,7 @@ final class CatalogFixtures {
             """;
 
     /** BASE plus every optional key, so each quantity path has a value. */
-    static final String FULL = BASE.substring(0, BASE.indexOf("noise:\n"))
-            + """
+    static final String FULL = BASE.substring(0, BASE.indexOf("noise:\n")) + """
             factory-trim: laser
             null-pins: true
             channels: 2
@@ -202,9 +200,14 @@ final class CatalogFixtures {
 
     /** The one problem about {@code field}. */
     static Problem about(List<Problem> problems, String field) {
-        List<Problem> hits = problems.stream().filter(p -> p.field().equals(field)).toList();
-        assertEquals(1, hits.size(), "problems about '" + field + "' in:\n" + String.join("\n",
-                problems.stream().map(Problem::toString).toList()));
+        List<Problem> hits =
+                problems.stream().filter(p -> p.field().equals(field)).toList();
+        assertEquals(
+                1,
+                hits.size(),
+                "problems about '" + field + "' in:\n"
+                        + String.join(
+                                "\n", problems.stream().map(Problem::toString).toList()));
         return hits.get(0);
     }
 

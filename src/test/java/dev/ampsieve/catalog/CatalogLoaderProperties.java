@@ -50,14 +50,16 @@ class CatalogLoaderProperties {
                 Catalog c = CatalogLoader.load(dir, strict[0]);
                 assertTrue(sound(c.problems(), file), () -> "problems without file or text: " + c.problems());
             });
-            assertArrayEquals(before, sha256(read(file)), () -> "the file changed while loading " + Props.escape(shown));
+            assertArrayEquals(
+                    before, sha256(read(file)), () -> "the file changed while loading " + Props.escape(shown));
             assertEquals(List.of(file), list(dir), "the loader left files behind");
         });
     }
 
     /** Every problem names the file, and says what is wrong. */
     static boolean sound(List<Problem> problems, Path file) {
-        return problems.stream().allMatch(p -> file.equals(p.file()) && !p.message().isBlank());
+        return problems.stream()
+                .allMatch(p -> file.equals(p.file()) && !p.message().isBlank());
     }
 
     static void write(Path file, byte[] bytes) {

@@ -87,7 +87,9 @@ class CatalogLoaderTest {
     void everyCatalogKeyIsReadWithItsDimension() throws Exception {
         // the fixture must use every key, so a key added to CatalogKeys without a reader fails here
         Node.Mapping top = (Node.Mapping) YamlFiles.parse(FULL, null);
-        assertEquals(new LinkedHashSet<>(CatalogKeys.PART_KEYS), new LinkedHashSet<>(top.entries().keySet()));
+        assertEquals(
+                new LinkedHashSet<>(CatalogKeys.PART_KEYS),
+                new LinkedHashSet<>(top.entries().keySet()));
         Catalog c = loadPart(FULL);
         assertEquals(List.of(), c.problems());
         Part p = c.parts().get(0);
@@ -156,7 +158,9 @@ class CatalogLoaderTest {
         Catalog c = load();
         assertEquals(List.of(), errors(c));
         assertEquals(3, c.files());
-        assertEquals(List.of("amp-a", "amp-b", "amp-z"), c.parts().stream().map(Part::id).toList());
+        assertEquals(
+                List.of("amp-a", "amp-b", "amp-z"),
+                c.parts().stream().map(Part::id).toList());
     }
 
     // ------------------------------------------------------------------ one test per validation class
@@ -205,16 +209,19 @@ class CatalogLoaderTest {
     }
 
     @ParameterizedTest
-    @CsvSource(delimiter = '|', value = {
-        "gbw: 1 MHz     | gbw: 2 mV          | gbw      | 2 mV          | '2 mV' is a voltage but a frequency belongs here",
-        "max: 100 nA    | max: 5 mV          | ib.max   | 5 mV          | '5 mV' is a voltage but a current belongs here",
-        "max: 10 uV/C   | max: 10 uV         | vos-drift.max | 10 uV    | '10 uV' is a voltage but a voltage drift belongs here",
-        "en: 12 nV/rtHz | en: 12 pA/rtHz     | noise.en | 12 pA/rtHz    | '12 pA/rtHz' is a current noise density but a voltage noise density belongs here",
-        "slew: 0.5 V/us | slew: 0.5 MHz      | slew     | 0.5 MHz       | '0.5 MHz' is a frequency but a slew rate belongs here",
-        "min: 4.5 V     | min: 4.5           | supply.min | 4.5         | '4.5' has no unit",
-        "gbw: 1 MHz     | gbw: 1 furlong     | gbw      | 1 furlong     | unit 'furlong' in '1 furlong' is not one this tool reads"})
-    void aWrongUnitOrDimensionNamesWhatWasFoundAndWhatBelongs(String from, String to, String field, String value,
-            String message) throws Exception {
+    @CsvSource(
+            delimiter = '|',
+            value = {
+                "gbw: 1 MHz     | gbw: 2 mV          | gbw      | 2 mV          | '2 mV' is a voltage but a frequency belongs here",
+                "max: 100 nA    | max: 5 mV          | ib.max   | 5 mV          | '5 mV' is a voltage but a current belongs here",
+                "max: 10 uV/C   | max: 10 uV         | vos-drift.max | 10 uV    | '10 uV' is a voltage but a voltage drift belongs here",
+                "en: 12 nV/rtHz | en: 12 pA/rtHz     | noise.en | 12 pA/rtHz    | '12 pA/rtHz' is a current noise density but a voltage noise density belongs here",
+                "slew: 0.5 V/us | slew: 0.5 MHz      | slew     | 0.5 MHz       | '0.5 MHz' is a frequency but a slew rate belongs here",
+                "min: 4.5 V     | min: 4.5           | supply.min | 4.5         | '4.5' has no unit",
+                "gbw: 1 MHz     | gbw: 1 furlong     | gbw      | 1 furlong     | unit 'furlong' in '1 furlong' is not one this tool reads"
+            })
+    void aWrongUnitOrDimensionNamesWhatWasFoundAndWhatBelongs(
+            String from, String to, String field, String value, String message) throws Exception {
         String text = with(BASE, from, to);
         Catalog c = loadPart(text);
         Problem p = about(c.problems(), field);
@@ -239,10 +246,9 @@ class CatalogLoaderTest {
     }
 
     @ParameterizedTest
-    @CsvSource(delimiter = '|', value = {
-        "max: 36 V     | supply.max",
-        "min: -40 C    | temperature.min",
-        "unit: 1.20    | price.unit"})
+    @CsvSource(
+            delimiter = '|',
+            value = {"max: 36 V     | supply.max", "min: -40 C    | temperature.min", "unit: 1.20    | price.unit"})
     void aRequiredKeyInsideASectionIsReportedAtTheSection(String line, String field) throws Exception {
         String text = with(BASE, "  " + line + "\n", "");
         String section = field.substring(0, field.indexOf('.'));
@@ -264,24 +270,27 @@ class CatalogLoaderTest {
 
     /** {@code at}: the text of the value the message points at (the lower of the two). */
     @ParameterizedTest
-    @CsvSource(delimiter = '|', value = {
-        // spread: typ above max
-        "typ: 0.5 mV  | typ: 2.5 mV   | vos.typ         | 2.5 mV   | typ (2.50 mV) is above max (2.00 mV)",
-        "typ: 20 nA   | typ: 120 nA   | ib.typ          | 120 nA   | typ (120 nA) is above max (100 nA)",
-        "typ: 20 nA   | typ: -120 nA  | ib.typ          | -120 nA  | typ (-120 nA) is above max (100 nA)",
-        "typ: 2 nA    | typ: 12 nA    | ios.typ         | 12 nA    | typ (12.0 nA) is above max (10.0 nA)",
-        "typ: 2 uV/C  | typ: 12 uV/C  | vos-drift.typ   | 12 uV/C  | typ (12.0 µV/°C) is above max (10.0 µV/°C)",
-        // max above max over temperature
-        "max-over-temp: 3 mV   | max-over-temp: 1.5 mV | vos.max | 2 mV   | max (2.00 mV) is above max-over-temp (1.50 mV)",
-        "max-over-temp: 200 nA | max-over-temp: 50 nA  | ib.max  | 100 nA | max (100 nA) is above max-over-temp (50.0 nA)",
-        "max-over-temp: 20 nA  | max-over-temp: 5 nA   | ios.max | 10 nA  | max (10.0 nA) is above max-over-temp (5.00 nA)",
-        // guaranteed minimum above typical
-        "min: 90 dB   | min: 112 dB   | cmrr.min        | 112 dB   | min (112 dB) is above typ (110 dB)",
-        "min: 95 dB   | min: 116 dB   | psrr.min        | 116 dB   | min (116 dB) is above typ (115 dB)",
-        "min: 100 dB  | min: 121 dB   | aol.min         | 121 dB   | min (121 dB) is above typ (120 dB)",
-        // ranges
-        "min: 4.5 V   | min: 40 V     | supply.min      | 40 V     | min (40.0 V) is above max (36.0 V)",
-        "min: -40 C   | min: 90 C     | temperature.min | 90 C     | min (90 °C) is above max (85 °C)"})
+    @CsvSource(
+            delimiter = '|',
+            value = {
+                // spread: typ above max
+                "typ: 0.5 mV  | typ: 2.5 mV   | vos.typ         | 2.5 mV   | typ (2.50 mV) is above max (2.00 mV)",
+                "typ: 20 nA   | typ: 120 nA   | ib.typ          | 120 nA   | typ (120 nA) is above max (100 nA)",
+                "typ: 20 nA   | typ: -120 nA  | ib.typ          | -120 nA  | typ (-120 nA) is above max (100 nA)",
+                "typ: 2 nA    | typ: 12 nA    | ios.typ         | 12 nA    | typ (12.0 nA) is above max (10.0 nA)",
+                "typ: 2 uV/C  | typ: 12 uV/C  | vos-drift.typ   | 12 uV/C  | typ (12.0 µV/°C) is above max (10.0 µV/°C)",
+                // max above max over temperature
+                "max-over-temp: 3 mV   | max-over-temp: 1.5 mV | vos.max | 2 mV   | max (2.00 mV) is above max-over-temp (1.50 mV)",
+                "max-over-temp: 200 nA | max-over-temp: 50 nA  | ib.max  | 100 nA | max (100 nA) is above max-over-temp (50.0 nA)",
+                "max-over-temp: 20 nA  | max-over-temp: 5 nA   | ios.max | 10 nA  | max (10.0 nA) is above max-over-temp (5.00 nA)",
+                // guaranteed minimum above typical
+                "min: 90 dB   | min: 112 dB   | cmrr.min        | 112 dB   | min (112 dB) is above typ (110 dB)",
+                "min: 95 dB   | min: 116 dB   | psrr.min        | 116 dB   | min (116 dB) is above typ (115 dB)",
+                "min: 100 dB  | min: 121 dB   | aol.min         | 121 dB   | min (121 dB) is above typ (120 dB)",
+                // ranges
+                "min: 4.5 V   | min: 40 V     | supply.min      | 40 V     | min (40.0 V) is above max (36.0 V)",
+                "min: -40 C   | min: 90 C     | temperature.min | 90 C     | min (90 °C) is above max (85 °C)"
+            })
     void valuesOutOfOrderAreReportedAtTheLowerOne(String from, String to, String field, String at, String message)
             throws Exception {
         String text = with(BASE, from, to);
@@ -311,21 +320,28 @@ class CatalogLoaderTest {
         assertEquals("max (75.0 mV) is 3000 times typ (25.0 µV)", p.message());
         // 20 x typ is an ordinary spread: no warning
         String ordinary = with(BASE, "typ: 0.5 mV", "typ: 0.1 mV");
-        assertEquals(List.of(), loadPart(ordinary).problems().stream().filter(q -> q.field().endsWith("vos.max")).toList());
+        assertEquals(
+                List.of(),
+                loadPart(ordinary).problems().stream()
+                        .filter(q -> q.field().endsWith("vos.max"))
+                        .toList());
     }
 
     @ParameterizedTest
-    @CsvSource(delimiter = '|', value = {
-        "max: 2 mV      | max: -2 mV      | vos.max       | -2.00 mV is negative, which is impossible here",
-        "typ: 2 uV/C    | typ: -2 uV/C    | vos-drift.typ | -2.00 µV/°C is negative, which is impossible here",
-        "max: 100 nA    | max: -100 nA    | ib.max        | -100 nA is negative, which is impossible here",
-        "typ: 2 nA      | typ: -2 nA      | ios.typ       | -2.00 nA is negative, which is impossible here",
-        "typ: 110 dB    | typ: -110 dB    | cmrr.typ      | -110 dB is negative, which is impossible here",
-        "gbw: 1 MHz     | gbw: 0 Hz       | gbw           | 0 Hz must be above zero",
-        "slew: 0.5 V/us | slew: -0.5 V/us | slew          | -0.500 V/µs must be above zero",
-        "en: 12 nV/rtHz | en: 0 nV/rtHz   | noise.en      | 0 V/√Hz must be above zero",
-        "unit: 1.20     | unit: -1.20     | price.unit    | -1.2 is negative, which is impossible here",
-        "min: 4.5 V     | min: -4.5 V     | supply.min    | -4.50 V must be above zero"})
+    @CsvSource(
+            delimiter = '|',
+            value = {
+                "max: 2 mV      | max: -2 mV      | vos.max       | -2.00 mV is negative, which is impossible here",
+                "typ: 2 uV/C    | typ: -2 uV/C    | vos-drift.typ | -2.00 µV/°C is negative, which is impossible here",
+                "max: 100 nA    | max: -100 nA    | ib.max        | -100 nA is negative, which is impossible here",
+                "typ: 2 nA      | typ: -2 nA      | ios.typ       | -2.00 nA is negative, which is impossible here",
+                "typ: 110 dB    | typ: -110 dB    | cmrr.typ      | -110 dB is negative, which is impossible here",
+                "gbw: 1 MHz     | gbw: 0 Hz       | gbw           | 0 Hz must be above zero",
+                "slew: 0.5 V/us | slew: -0.5 V/us | slew          | -0.500 V/µs must be above zero",
+                "en: 12 nV/rtHz | en: 0 nV/rtHz   | noise.en      | 0 V/√Hz must be above zero",
+                "unit: 1.20     | unit: -1.20     | price.unit    | -1.2 is negative, which is impossible here",
+                "min: 4.5 V     | min: -4.5 V     | supply.min    | -4.50 V must be above zero"
+            })
     void negativeWhereImpossibleIsAnError(String from, String to, String field, String message) throws Exception {
         String text = with(BASE, from, to);
         Problem p = about(loadPart(text).problems(), field);
@@ -344,26 +360,38 @@ class CatalogLoaderTest {
     }
 
     @ParameterizedTest
-    @CsvSource(delimiter = '|', value = {
-        "gbw: 1 MHz | gbw: .inf  | gbw        | .inf    | is not a finite number",
-        "max: 2 mV  | max: .nan  | vos.max    | .nan    | is not a finite number",
-        "unit: 1.20 | unit: .NaN | price.unit | .NaN    | is not a finite number",
-        "max: 36 V  | max: 1e999 V | supply.max | 1e999 V | is out of range: beyond the largest number (about 1.8e308 in SI units)",
-        "max: 36 V  | max: 1e400 V | supply.max | 1e400 V | is out of range: beyond the largest number (about 1.8e308 in SI units)",
-        "max: 36 V  | max: 1e308 kV | supply.max | 1e308 kV | is out of range: beyond the largest number (about 1.8e308 in SI units)",
-        "max: 2 mV  | max: 1e-400 V | vos.max  | 1e-400 V | is out of range: below the smallest number (about 1e-308 in SI units)"})
+    @CsvSource(
+            delimiter = '|',
+            value = {
+                "gbw: 1 MHz | gbw: .inf  | gbw        | .inf    | is not a finite number",
+                "max: 2 mV  | max: .nan  | vos.max    | .nan    | is not a finite number",
+                "unit: 1.20 | unit: .NaN | price.unit | .NaN    | is not a finite number",
+                "max: 36 V  | max: 1e999 V | supply.max | 1e999 V | is out of range: beyond the largest number (about 1.8e308 in SI units)",
+                "max: 36 V  | max: 1e400 V | supply.max | 1e400 V | is out of range: beyond the largest number (about 1.8e308 in SI units)",
+                "max: 36 V  | max: 1e308 kV | supply.max | 1e308 kV | is out of range: beyond the largest number (about 1.8e308 in SI units)",
+                "max: 2 mV  | max: 1e-400 V | vos.max  | 1e-400 V | is out of range: below the smallest number (about 1e-308 in SI units)"
+            })
     void nanAndInfinityAreRefused(String from, String to, String field, String value, String message) throws Exception {
         String text = with(BASE, from, to);
         Problem p = about(loadPart(text).problems(), field);
         assertTrue(p.isError());
         assertAt(p, part(), lineOf(text, to), columnOf(text, to) + to.indexOf(value));
         assertEquals("'" + value + "' " + message, p.message());
-        assertTrue(p.fix().startsWith(value.equals("1e-400 V") ? "check the exponent and the prefix; write 0 if you mean zero"
-                : value.startsWith("1e") ? "check the exponent and the prefix; write a voltage such as" : "write "), p.fix());
+        assertTrue(
+                p.fix()
+                        .startsWith(
+                                value.equals("1e-400 V")
+                                        ? "check the exponent and the prefix; write 0 if you mean zero"
+                                        : value.startsWith("1e")
+                                                ? "check the exponent and the prefix; write a voltage such as"
+                                                : "write "),
+                p.fix());
     }
 
     @ParameterizedTest
-    @CsvSource(delimiter = '|', value = {"My_Amp 1 | my-amp-1", "-amp | amp", "amp--2 | amp-2", "AMP | amp"})
+    @CsvSource(
+            delimiter = '|',
+            value = {"My_Amp 1 | my-amp-1", "-amp | amp", "amp--2 | amp-2", "AMP | amp"})
     void anIdMustBeLowercaseWordsJoinedByDashes(String id, String suggestion) throws Exception {
         String text = with(BASE, "id: test-amp-01", "id: \"" + id + "\"");
         Problem p = about(loadPart(text).problems(), "id");
@@ -375,28 +403,33 @@ class CatalogLoaderTest {
     @Test
     void aDuplicateIdAcrossFilesNamesBothFiles() throws Exception {
         Path a = write(dir, "a.yaml", BASE);
-        String second = "parts:\n" + asItem(with(MINIMAL, "id: bare-amp", "id: other-amp")) + asItem(
-                with(MINIMAL, "id: bare-amp", "id: test-amp-01"));
+        String second = "parts:\n" + asItem(with(MINIMAL, "id: bare-amp", "id: other-amp"))
+                + asItem(with(MINIMAL, "id: bare-amp", "id: test-amp-01"));
         Path b = write(dir, "b.yaml", second);
         Catalog c = load();
         Problem p = about(c.problems(), "parts[1].id");
         assertAt(p, b, lineOf(second, "id: test-amp-01"), columnOf(second, "test-amp-01"));
         assertEquals("id 'test-amp-01' is already used at " + a + ":1", p.message());
         assertEquals("give each part its own id", p.fix());
-        assertEquals(List.of("test-amp-01", "other-amp"), c.parts().stream().map(Part::id).toList());
+        assertEquals(
+                List.of("test-amp-01", "other-amp"),
+                c.parts().stream().map(Part::id).toList());
     }
 
     @ParameterizedTest
-    @CsvSource(delimiter = '|', value = {
-        "max-over-temp: 3 mV | max-over-temp: 150 mV | vos.max-over-temp | 150 mV is above 100 mV, implausible for an op amp",
-        "gbw: 1 MHz          | gbw: 20 GHz           | gbw               | 20.0 GHz is above 10.0 GHz, implausible for an op amp",
-        "gbw: 1 MHz          | gbw: 50 Hz            | gbw               | 50.0 Hz is below 100 Hz, implausible for an op amp",
-        "max-over-temp: 200 nA | max-over-temp: 1 mA | ib.max-over-temp  | 1.00 mA is above 100 µA, implausible for an op amp",
-        "typ: 110 dB         | typ: 190 dB           | cmrr.typ          | 190 dB is above 180 dB, implausible for an op amp",
-        "en: 12 nV/rtHz      | en: 2 uV/rtHz         | noise.en          | 2.00 µV/√Hz is above 1.00 µV/√Hz, implausible for an op amp",
-        "unit: 1.20          | unit: 20000           | price.unit        | 20000 is above 10000, implausible for an op amp",
-        "max: 36 V           | max: 1500 V           | supply.max        | 1.50 kV is above 1.00 kV, implausible for an op amp",
-        "min: -40 C          | min: -150 C           | temperature.min   | -150 °C is below -100 °C, implausible for a rated range"})
+    @CsvSource(
+            delimiter = '|',
+            value = {
+                "max-over-temp: 3 mV | max-over-temp: 150 mV | vos.max-over-temp | 150 mV is above 100 mV, implausible for an op amp",
+                "gbw: 1 MHz          | gbw: 20 GHz           | gbw               | 20.0 GHz is above 10.0 GHz, implausible for an op amp",
+                "gbw: 1 MHz          | gbw: 50 Hz            | gbw               | 50.0 Hz is below 100 Hz, implausible for an op amp",
+                "max-over-temp: 200 nA | max-over-temp: 1 mA | ib.max-over-temp  | 1.00 mA is above 100 µA, implausible for an op amp",
+                "typ: 110 dB         | typ: 190 dB           | cmrr.typ          | 190 dB is above 180 dB, implausible for an op amp",
+                "en: 12 nV/rtHz      | en: 2 uV/rtHz         | noise.en          | 2.00 µV/√Hz is above 1.00 µV/√Hz, implausible for an op amp",
+                "unit: 1.20          | unit: 20000           | price.unit        | 20000 is above 10000, implausible for an op amp",
+                "max: 36 V           | max: 1500 V           | supply.max        | 1.50 kV is above 1.00 kV, implausible for an op amp",
+                "min: -40 C          | min: -150 C           | temperature.min   | -150 °C is below -100 °C, implausible for a rated range"
+            })
     void implausibleMagnitudesAreWarningsAndThePartStillLoads(String from, String to, String field, String message)
             throws Exception {
         String text = with(BASE, from, to);
@@ -428,7 +461,11 @@ class CatalogLoaderTest {
         assertEquals(List.of(), loadPart(cmos).problems()); // vos.max-over-temp bounds it
         Problem p = about(loadPart(with(cmos, "  max-over-temp: 3 mV\n", "")).problems(), "vos-drift");
         assertEquals(Problem.Severity.WARNING, p.severity());
-        assertTrue(p.message().startsWith("not given, nor vos.max-over-temp: drift over temperature will be an assumed default"), p.message());
+        assertTrue(
+                p.message()
+                        .startsWith(
+                                "not given, nor vos.max-over-temp: drift over temperature will be an assumed default"),
+                p.message());
     }
 
     @Test
@@ -451,14 +488,19 @@ class CatalogLoaderTest {
     void everyAbsentFigureTheBudgetEstimatesIsWarnedAtCheckTime() throws Exception {
         Catalog c = loadPart(without(without(without(BASE, "ib"), "ios"), "long-term-drift"));
         assertTrue(about(c.problems(), "ib").message().startsWith("not given: bias current will be estimated"));
-        assertTrue(about(c.problems(), "ios").message().startsWith("not given: offset current will be taken equal to ib"));
-        assertTrue(about(c.problems(), "long-term-drift").message().startsWith("not given: aging over a stage's service life"));
+        assertTrue(
+                about(c.problems(), "ios").message().startsWith("not given: offset current will be taken equal to ib"));
+        assertTrue(about(c.problems(), "long-term-drift")
+                .message()
+                .startsWith("not given: aging over a stage's service life"));
     }
 
     @Test
     void anAbsentRejectionIsWarnedAsAssumed() throws Exception {
         Catalog c = loadPart(without(BASE, "cmrr"));
-        assertEquals("not given: a pessimistic 60 dB will be assumed and marked estimated", about(c.problems(), "cmrr").message());
+        assertEquals(
+                "not given: a pessimistic 60 dB will be assumed and marked estimated",
+                about(c.problems(), "cmrr").message());
     }
 
     // ------------------------------------------------------------------ other shapes a user may write
@@ -473,9 +515,12 @@ class CatalogLoaderTest {
     }
 
     @ParameterizedTest
-    @CsvSource(delimiter = ';', value = {
-        "architecture: standard; architecture: chopr; architecture; 'chopr' is not one of standard | chopper | auto-zero; chopper",
-        "input: bipolar; input: bipolr; input; 'bipolr' is not one of bipolar | jfet | cmos; bipolar"})
+    @CsvSource(
+            delimiter = ';',
+            value = {
+                "architecture: standard; architecture: chopr; architecture; 'chopr' is not one of standard | chopper | auto-zero; chopper",
+                "input: bipolar; input: bipolr; input; 'bipolr' is not one of bipolar | jfet | cmos; bipolar"
+            })
     void aChoiceOutsideItsWordsSuggestsTheNearest(String from, String to, String field, String message, String near)
             throws Exception {
         String text = with(BASE, from, to);
@@ -491,7 +536,8 @@ class CatalogLoaderTest {
         String text = BASE + "channels: 0\nnull-pins: maybe\n";
         Catalog c = loadPart(text);
         assertEquals("0 is outside 1..64", about(c.problems(), "channels").message());
-        assertEquals("'maybe' is not true or false", about(c.problems(), "null-pins").message());
+        assertEquals(
+                "'maybe' is not true or false", about(c.problems(), "null-pins").message());
         assertAt(about(c.problems(), "null-pins"), part(), lineOf(text, "null-pins"), 12);
     }
 
@@ -500,12 +546,16 @@ class CatalogLoaderTest {
         Path empty = write(dir, "empty.yaml", "# nothing yet\n");
         Path bare = write(dir, "bare.yaml", asItem(BASE));
         Path scalarList = write(dir, "scalar.yaml", "parts: 3\n");
-        Path beside = write(dir, "beside.yaml", "vendor-list: q3\nparts:\n" + asItem(BASE.replace("test-amp-01", "x-1")));
+        Path beside =
+                write(dir, "beside.yaml", "vendor-list: q3\nparts:\n" + asItem(BASE.replace("test-amp-01", "x-1")));
         Path item = write(dir, "item.yaml", "parts:\n  - just text\n");
         Catalog c = load();
         assertEquals(List.of("x-1"), c.parts().stream().map(Part::id).toList());
 
-        Problem p = c.problems().stream().filter(x -> x.file().equals(empty)).findFirst().orElseThrow();
+        Problem p = c.problems().stream()
+                .filter(x -> x.file().equals(empty))
+                .findFirst()
+                .orElseThrow();
         assertEquals(Problem.Severity.WARNING, p.severity());
         assertEquals("empty file, no parts", p.message());
 
@@ -513,12 +563,18 @@ class CatalogLoaderTest {
         assertEquals("the file is a bare list", p.message());
         assertAt(p, bare, 1, 3);
 
-        p = c.problems().stream().filter(x -> x.file().equals(scalarList)).findFirst().orElseThrow();
+        p = c.problems().stream()
+                .filter(x -> x.file().equals(scalarList))
+                .findFirst()
+                .orElseThrow();
         assertEquals("parts", p.field());
         assertEquals("expected a list of parts, found a single value", p.message());
         assertAt(p, scalarList, 1, 8);
 
-        p = c.problems().stream().filter(x -> x.file().equals(beside)).findFirst().orElseThrow();
+        p = c.problems().stream()
+                .filter(x -> x.file().equals(beside))
+                .findFirst()
+                .orElseThrow();
         assertEquals("vendor-list", p.field());
         assertAt(p, beside, 1, 1);
 
@@ -531,24 +587,28 @@ class CatalogLoaderTest {
     @Test
     void mixedCurrenciesAreWarnedOnce() throws Exception {
         write(dir, "a.yaml", BASE);
-        Path b = write(dir, "b.yaml", with(with(BASE, "id: test-amp-01", "id: euro-amp"), "currency: USD", "currency: EUR"));
+        Path b = write(
+                dir, "b.yaml", with(with(BASE, "id: test-amp-01", "id: euro-amp"), "currency: USD", "currency: EUR"));
         Catalog c = load();
         assertEquals(2, c.parts().size());
         Problem p = c.problems().get(0);
         assertEquals(1, c.problems().size());
         assertEquals(Problem.Severity.WARNING, p.severity());
         assertAt(p, b, 1, 1);
-        assertEquals("part 'euro-amp' is priced in EUR; the catalog uses USD, EUR, and prices are compared as plain numbers",
+        assertEquals(
+                "part 'euro-amp' is priced in EUR; the catalog uses USD, EUR, and prices are compared as plain numbers",
                 p.message());
     }
 
     @Test
     void problemsInAFileComeTopToBottom() throws Exception {
         // found in the order: while reading (gbw), order checks (vos.typ), magnitude checks (cmrr.typ)
-        String text = with(with(with(BASE, "gbw: 1 MHz", "gbw: 1 mV"), "typ: 0.5 mV", "typ: 5 mV"),
-                "typ: 110 dB", "typ: 250 dB");
+        String text = with(
+                with(with(BASE, "gbw: 1 MHz", "gbw: 1 mV"), "typ: 0.5 mV", "typ: 5 mV"), "typ: 110 dB", "typ: 250 dB");
         Catalog c = loadPart(text);
-        assertEquals(List.of("vos.typ", "cmrr.typ", "gbw"), c.problems().stream().map(Problem::field).toList());
+        assertEquals(
+                List.of("vos.typ", "cmrr.typ", "gbw"),
+                c.problems().stream().map(Problem::field).toList());
         List<Integer> lines = c.problems().stream().map(Problem::line).toList();
         assertEquals(List.of(lineOf(text, "typ: 5 mV"), lineOf(text, "typ: 250 dB"), lineOf(text, "gbw: 1 mV")), lines);
     }
@@ -563,10 +623,14 @@ class CatalogLoaderTest {
         write(dir, "more/other.yaml", with(MINIMAL, "id: bare-amp", "id: good-amp-2"));
         write(dir, "zz-bomb.yaml", "a: &a [x, x]\n" + "b: [" + "*a, ".repeat(YamlFiles.MAX_ALIASES) + "*a]\n");
         Catalog c = load();
-        assertEquals(List.of("good-amp-1", "good-amp-2"), c.parts().stream().map(Part::id).toList());
+        assertEquals(
+                List.of("good-amp-1", "good-amp-2"),
+                c.parts().stream().map(Part::id).toList());
         assertEquals(2, errors(c).size(), c.problems().toString());
         assertEquals("parts[0].gbw", errors(c).get(0).field());
-        assertTrue(errors(c).get(1).message().startsWith("refused: more than"), errors(c).get(1).message());
+        assertTrue(
+                errors(c).get(1).message().startsWith("refused: more than"),
+                errors(c).get(1).message());
         assertTrue(c.hasErrors());
 
         InputException e = assertThrows(InputException.class, () -> CatalogLoader.load(dir, true));

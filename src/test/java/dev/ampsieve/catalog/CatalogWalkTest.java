@@ -4,9 +4,9 @@ import static dev.ampsieve.catalog.CatalogFixtures.BASE;
 import static dev.ampsieve.catalog.CatalogFixtures.with;
 import static dev.ampsieve.catalog.CatalogFixtures.write;
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTimeoutPreemptively;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.ampsieve.testing.SpecialFiles;
 import dev.ampsieve.yaml.InputException;
@@ -25,7 +25,8 @@ class CatalogWalkTest {
     Path dir;
 
     /** The fix given for a special file named like a catalog file. */
-    private static final String SPECIAL_FIX = "remove it or rename it: the catalog reads only regular *.yaml and *.yml files";
+    private static final String SPECIAL_FIX =
+            "remove it or rename it: the catalog reads only regular *.yaml and *.yml files";
 
     private static String part(String id) {
         return with(BASE, "id: test-amp-01", "id: " + id);
@@ -64,9 +65,11 @@ class CatalogWalkTest {
             assertTrue(ch.isOpen()); // the socket is listening while the catalog is read
             Catalog c = load();
             assertEquals(List.of("amp-a"), ids(c));
-            assertEquals(List.of(
-                    fifo + ": not a regular file (a named pipe); skipped; " + SPECIAL_FIX,
-                    sock + ": not a regular file (a socket); skipped; " + SPECIAL_FIX), lines(c));
+            assertEquals(
+                    List.of(
+                            fifo + ": not a regular file (a named pipe); skipped; " + SPECIAL_FIX,
+                            sock + ": not a regular file (a socket); skipped; " + SPECIAL_FIX),
+                    lines(c));
         }
     }
 
@@ -76,8 +79,10 @@ class CatalogWalkTest {
         Path link = Files.createSymbolicLink(dir.resolve("sub/everything"), Path.of("/"));
         Catalog c = load();
         assertEquals(List.of("amp-a"), ids(c));
-        assertEquals(List.of(link + ": warning: the link leads outside the catalog folder (to /); skipped;"
-                + " copy what it points to into the catalog folder, or give that folder with --catalog DIR"), lines(c));
+        assertEquals(
+                List.of(link + ": warning: the link leads outside the catalog folder (to /); skipped;"
+                        + " copy what it points to into the catalog folder, or give that folder with --catalog DIR"),
+                lines(c));
     }
 
     @Test
@@ -89,10 +94,13 @@ class CatalogWalkTest {
         Catalog c = load();
         assertEquals(List.of("amp-a"), ids(c));
         String fix = "; copy what it points to into the catalog folder, or give that folder with --catalog DIR";
-        assertEquals(List.of(
-                fileLink + ": warning: the link leads outside the catalog folder (to " + outsidePart.toRealPath() + "); skipped" + fix,
-                folderLink + ": warning: the link leads outside the catalog folder (to " + elsewhere.resolve("shared").toRealPath()
-                        + "); skipped" + fix), lines(c));
+        assertEquals(
+                List.of(
+                        fileLink + ": warning: the link leads outside the catalog folder (to "
+                                + outsidePart.toRealPath() + "); skipped" + fix,
+                        folderLink + ": warning: the link leads outside the catalog folder (to "
+                                + elsewhere.resolve("shared").toRealPath() + "); skipped" + fix),
+                lines(c));
     }
 
     @Test
@@ -102,10 +110,13 @@ class CatalogWalkTest {
         Path self = Files.createSymbolicLink(dir.resolve("sub/self"), Path.of("."));
         Catalog c = load();
         assertEquals(List.of("amp-a"), ids(c)); // once: no "id already used"
-        assertEquals(List.of(
-                loop + ": warning: the link leads back to " + dir + ", which holds it (a loop); skipped; remove the link",
-                self + ": warning: the link leads back to " + dir.resolve("sub") + ", which holds it (a loop); skipped;"
-                        + " remove the link"), lines(c));
+        assertEquals(
+                List.of(
+                        loop + ": warning: the link leads back to " + dir
+                                + ", which holds it (a loop); skipped; remove the link",
+                        self + ": warning: the link leads back to " + dir.resolve("sub")
+                                + ", which holds it (a loop); skipped;" + " remove the link"),
+                lines(c));
     }
 
     @Test
@@ -116,11 +127,14 @@ class CatalogWalkTest {
         Catalog c = load();
         assertEquals(List.of("amp-a"), ids(c));
         assertEquals(1, c.files());
-        assertEquals(List.of(
-                fileLink + ": warning: the link leads to " + real + ", which is read under its own name; skipped;"
-                        + " remove the link (each file is read once)",
-                folderLink + ": warning: the link leads to " + dir.resolve("sub") + ", a folder inside the catalog; links"
-                        + " to folders are not followed (the folder is read, or skipped, in its own place); remove the link"),
+        assertEquals(
+                List.of(
+                        fileLink + ": warning: the link leads to " + real
+                                + ", which is read under its own name; skipped;"
+                                + " remove the link (each file is read once)",
+                        folderLink + ": warning: the link leads to " + dir.resolve("sub")
+                                + ", a folder inside the catalog; links"
+                                + " to folders are not followed (the folder is read, or skipped, in its own place); remove the link"),
                 lines(c));
     }
 
@@ -137,16 +151,21 @@ class CatalogWalkTest {
 
     @Test
     void moreCatalogFilesThanTheLimitStopTheLoad() {
-        CatalogLoader.Limits three = new CatalogLoader.Limits(3, CatalogLoader.MAX_TOTAL_BYTES, CatalogLoader.MAX_ENTRIES);
+        CatalogLoader.Limits three =
+                new CatalogLoader.Limits(3, CatalogLoader.MAX_TOTAL_BYTES, CatalogLoader.MAX_ENTRIES);
         for (String id : List.of("amp-a", "amp-b", "amp-c")) {
             write(dir, id + ".yaml", part(id));
         }
-        assertEquals(3, assertTimeoutPreemptively(SpecialFiles.HANG_GUARD,
-                () -> CatalogLoader.load(dir, false, three)).parts().size());
+        assertEquals(
+                3,
+                assertTimeoutPreemptively(SpecialFiles.HANG_GUARD, () -> CatalogLoader.load(dir, false, three))
+                        .parts()
+                        .size());
         write(dir, "amp-d.yaml", part("amp-d"));
         InputException e = assertThrows(InputException.class, () -> CatalogLoader.load(dir, false, three));
-        assertEquals(List.of(dir + ": more than 3 catalog files (*.yaml, *.yml) below this folder; stopped;"
-                + " split the catalog into folders of fewer files and give one with --catalog DIR"),
+        assertEquals(
+                List.of(dir + ": more than 3 catalog files (*.yaml, *.yml) below this folder; stopped;"
+                        + " split the catalog into folders of fewer files and give one with --catalog DIR"),
                 e.problems().stream().map(Problem::toString).toList());
     }
 
@@ -155,12 +174,17 @@ class CatalogWalkTest {
         Path a = write(dir, "a.yaml", part("amp-a"));
         long one = a.toFile().length();
         CatalogLoader.Limits room = new CatalogLoader.Limits(100, one, CatalogLoader.MAX_ENTRIES);
-        assertEquals(1, assertTimeoutPreemptively(SpecialFiles.HANG_GUARD,
-                () -> CatalogLoader.load(dir, false, room)).parts().size());
+        assertEquals(
+                1,
+                assertTimeoutPreemptively(SpecialFiles.HANG_GUARD, () -> CatalogLoader.load(dir, false, room))
+                        .parts()
+                        .size());
         write(dir, "b.yaml", part("amp-b"));
         InputException e = assertThrows(InputException.class, () -> CatalogLoader.load(dir, false, room));
-        assertEquals(dir + ": the catalog files add up to more than " + one + " bytes; stopped;"
-                + " split the catalog into smaller folders and give one with --catalog DIR", e.problems().get(0).toString());
+        assertEquals(
+                dir + ": the catalog files add up to more than " + one + " bytes; stopped;"
+                        + " split the catalog into smaller folders and give one with --catalog DIR",
+                e.problems().get(0).toString());
     }
 
     @Test
@@ -172,7 +196,9 @@ class CatalogWalkTest {
         }
         // entries: part.yaml, photos, and five in photos = 7 > 5
         InputException e = assertThrows(InputException.class, () -> CatalogLoader.load(dir, false, five));
-        assertEquals("more than 5 files and folders below the catalog folder; stopped", e.problems().get(0).message());
+        assertEquals(
+                "more than 5 files and folders below the catalog folder; stopped",
+                e.problems().get(0).message());
         assertEquals(dir, e.problems().get(0).file());
     }
 }

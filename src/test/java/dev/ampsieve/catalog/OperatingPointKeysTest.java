@@ -33,7 +33,8 @@ class OperatingPointKeysTest {
 
     @Test
     void theFourKeysAreReadInSiUnits() throws Exception {
-        // CatalogFixtures.FULL: test-conditions 30 V / 15 V, crossover 1.2 V below V+ with a 40 uV step, 160 C/W, 3 uV ripple
+        // CatalogFixtures.FULL: test-conditions 30 V / 15 V, crossover 1.2 V below V+ with a 40 uV step, 160 C/W, 3 uV
+        // ripple
         Part p = load(FULL).parts().get(0);
         assertEquals(new TestConditions(30.0, 15.0), p.testConditions());
         assertEquals(1.2, p.inputCrossover().fromPositiveRail(), 0.0);
@@ -45,7 +46,9 @@ class OperatingPointKeysTest {
     @Test
     void thetaJaInKelvinPerWattIsTheSameNumber() throws Exception {
         // a kelvin and a degree Celsius are the same size: 150 K/W = 150 °C/W (SI Brochure, 9th ed. [from memory])
-        Part p = load(with(FULL, "theta-ja: 160 C/W", "theta-ja: 150 K/W")).parts().get(0);
+        Part p = load(with(FULL, "theta-ja: 160 C/W", "theta-ja: 150 K/W"))
+                .parts()
+                .get(0);
         assertEquals(150.0, p.thetaJa(), 0.0);
     }
 
@@ -91,7 +94,9 @@ class OperatingPointKeysTest {
 
     @Test
     void aNegativeStepOrRippleIsRefusedAsASign() throws Exception {
-        String text = with(with(FULL, "  offset-step: 40 uV", "  offset-step: -40 uV"), "chopping-ripple: 3 uV",
+        String text = with(
+                with(FULL, "  offset-step: 40 uV", "  offset-step: -40 uV"),
+                "chopping-ripple: 3 uV",
                 "chopping-ripple: -3 uV");
         Catalog c = load(text);
         Problem step = about(c.problems(), "input-crossover.offset-step");

@@ -22,7 +22,8 @@ class PartTemplateTest {
     void templateKeysAreInTheOrderImportWritesThem() {
         List<String> keys = new ArrayList<>();
         for (String line : PartTemplate.text().split("\n")) {
-            java.util.regex.Matcher m = java.util.regex.Pattern.compile("^([a-z][a-z-]*):").matcher(line);
+            java.util.regex.Matcher m =
+                    java.util.regex.Pattern.compile("^([a-z][a-z-]*):").matcher(line);
             if (m.find()) {
                 keys.add(m.group(1));
             }

@@ -28,7 +28,10 @@ class PriceBreaksTest {
 
     private static List<String> problems(String price) {
         // the absent-figure warnings of the minimal part (PartReader.warnAbsences) are not about prices
-        return read(price).problems().stream().map(Problem::toString).filter(t -> !t.contains(": not given: ")).toList();
+        return read(price).problems().stream()
+                .map(Problem::toString)
+                .filter(t -> !t.contains(": not given: "))
+                .toList();
     }
 
     @Test
@@ -39,9 +42,14 @@ class PriceBreaksTest {
                   - {quantity: 1, unit: 2.10, currency: EUR}
                   - {quantity: 100, unit: 1.60}
                 """);
-        assertEquals(List.of(), r.problems().stream().filter(q -> !q.toString().contains(": not given: ")).toList());
+        assertEquals(
+                List.of(),
+                r.problems().stream()
+                        .filter(q -> !q.toString().contains(": not given: "))
+                        .toList());
         Price p = r.part().price();
-        assertEquals(List.of(new Price.Break(1, 2.10), new Price.Break(100, 1.60), new Price.Break(1000, 1.25)), p.breaks());
+        assertEquals(
+                List.of(new Price.Break(1, 2.10), new Price.Break(100, 1.60), new Price.Break(1000, 1.25)), p.breaks());
         assertEquals("EUR", p.currency());
         // the break with the largest quantity not above the build quantity, read off the list by hand
         assertEquals(2.10, p.at(1), 0);
@@ -69,35 +77,47 @@ class PriceBreaksTest {
 
     @Test
     void badBreaksAreNamedByItem() {
-        assertEquals(List.of("p.yaml:4:16: price[1].quantity: quantity 100 is already a break at price[0];"
-                + " give each break its own quantity"),
+        assertEquals(
+                List.of("p.yaml:4:16: price[1].quantity: quantity 100 is already a break at price[0];"
+                        + " give each break its own quantity"),
                 problems("price:\n  - {quantity: 100, unit: 1.60}\n  - {quantity: 100, unit: 1.50}\n"));
-        assertEquals(List.of("p.yaml:4:42: price[1].currency: 'EUR' differs from 'USD' at price[0].currency;"
-                + " give every break in one currency"),
-                problems("price:\n  - {quantity: 1, unit: 2, currency: USD}\n  - {quantity: 100, unit: 1.5, currency: EUR}\n"));
-        assertEquals(List.of("p.yaml:3:5: price[0].quantity: required field is missing; add 'quantity: 1000'"),
+        assertEquals(
+                List.of("p.yaml:4:42: price[1].currency: 'EUR' differs from 'USD' at price[0].currency;"
+                        + " give every break in one currency"),
+                problems(
+                        "price:\n  - {quantity: 1, unit: 2, currency: USD}\n  - {quantity: 100, unit: 1.5, currency: EUR}\n"));
+        assertEquals(
+                List.of("p.yaml:3:5: price[0].quantity: required field is missing; add 'quantity: 1000'"),
                 problems("price:\n  - {unit: 2}\n"));
-        assertEquals(List.of("p.yaml:2:8: price: the list of price breaks is empty; write '- {quantity: 1, unit: 2.10}'"
-                + " items, or 'price: {unit: 1.20, quantity: 1000}'"), problems("price: []\n"));
-        assertEquals(List.of("p.yaml:3:25: price[0].unit: -2 is negative, which is impossible here; write the unit price"
-                + " as a positive number"), problems("price:\n  - {quantity: 1, unit: -2}\n"));
+        assertEquals(
+                List.of("p.yaml:2:8: price: the list of price breaks is empty; write '- {quantity: 1, unit: 2.10}'"
+                        + " items, or 'price: {unit: 1.20, quantity: 1000}'"),
+                problems("price: []\n"));
+        assertEquals(
+                List.of("p.yaml:3:25: price[0].unit: -2 is negative, which is impossible here; write the unit price"
+                        + " as a positive number"),
+                problems("price:\n  - {quantity: 1, unit: -2}\n"));
         assertNull(read("price:\n  - {quantity: 1, unit: -2}\n").part());
     }
 
     @Test
     void aLargerOrderPricedHigherIsWarnedAbout() {
-        assertEquals(List.of("p.yaml:3:3: warning: price: the unit price at 1000 (2.00) is above the price at 1 (1.50);"
-                + " check the columns: larger orders usually cost less per unit"),
+        assertEquals(
+                List.of("p.yaml:3:3: warning: price: the unit price at 1000 (2.00) is above the price at 1 (1.50);"
+                        + " check the columns: larger orders usually cost less per unit"),
                 problems("price:\n  - {quantity: 1, unit: 1.5}\n  - {quantity: 1000, unit: 2}\n"));
     }
 
     @Test
     void anEmptyVosMaxIsNotAnOffset() {
         // 'max:' with nothing after it gives no figure: the part needs typ or max all the same
-        CatalogLoader.PartText r = CatalogLoader.readPart("id: empty-01\nprice: {unit: 1}\n"
-                + REST.replace("vos: {max: \"1 mV\"}", "vos:\n  max:"), Path.of("p.yaml"));
+        CatalogLoader.PartText r = CatalogLoader.readPart(
+                "id: empty-01\nprice: {unit: 1}\n" + REST.replace("vos: {max: \"1 mV\"}", "vos:\n  max:"),
+                Path.of("p.yaml"));
         assertNull(r.part());
-        assertEquals(List.of("p.yaml:6:3: vos: neither typ nor max is given; add 'max: 2.5 uV' from the datasheet's"
-                + " 25 °C column (typ when it gives no max)"), r.problems().stream().map(Problem::toString).toList());
+        assertEquals(
+                List.of("p.yaml:6:3: vos: neither typ nor max is given; add 'max: 2.5 uV' from the datasheet's"
+                        + " 25 °C column (typ when it gives no max)"),
+                r.problems().stream().map(Problem::toString).toList());
     }
 }

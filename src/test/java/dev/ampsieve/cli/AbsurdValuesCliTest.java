@@ -48,10 +48,13 @@ class AbsurdValuesCliTest {
         CliRun r = CliRun.of("--catalog", c.toString(), "check");
         assertEquals(ExitCode.FINDINGS.code(), r.code(), r.toString());
         // 1e200 nV = 1e191 V; the limit is 1 mV/rtHz
-        assertTrue(r.out().contains(c.resolve("loud.yaml") + ":12:7: noise.en: 1.00e+191 V/√Hz is above 1.00 mV/√Hz,"
-                + " impossible for an op amp (the quietest inputs reach a few tenths of a nV/√Hz; a mV/√Hz is no"
-                + " amplifier's noise); check the unit prefix (p, n, u, m, k, M) and the datasheet column; the largest"
-                + " size accepted here is 1.00 mV/√Hz"), r.toString());
+        assertTrue(
+                r.out()
+                        .contains(c.resolve("loud.yaml") + ":12:7: noise.en: 1.00e+191 V/√Hz is above 1.00 mV/√Hz,"
+                                + " impossible for an op amp (the quietest inputs reach a few tenths of a nV/√Hz; a mV/√Hz is no"
+                                + " amplifier's noise); check the unit prefix (p, n, u, m, k, M) and the datasheet column; the largest"
+                                + " size accepted here is 1.00 mV/√Hz"),
+                r.toString());
         // the demo catalog's own 53 warnings (README), and this one error
         assertTrue(r.out().contains("19 file(s), 48 part(s), 1 error(s), 53 warning(s)"), r.toString());
     }
@@ -59,7 +62,12 @@ class AbsurdValuesCliTest {
     @Test
     void rankGoesOnWithoutThePart() throws Exception {
         Path c = catalog();
-        CliRun r = CliRun.of("--catalog", c.toString(), "rank", "--stage", c.resolve("stages/bridge-amp.yaml").toString());
+        CliRun r = CliRun.of(
+                "--catalog",
+                c.toString(),
+                "rank",
+                "--stage",
+                c.resolve("stages/bridge-amp.yaml").toString());
         assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         assertFalse(r.err().contains("internal error"), r.toString());
         assertTrue(r.err().contains("1 catalog error(s); parts of files with errors are left out"), r.toString());

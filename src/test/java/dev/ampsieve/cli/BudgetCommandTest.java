@@ -37,10 +37,13 @@ class BudgetCommandTest {
                 """);
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
-        int code = Commands.run(new String[] {"--catalog", dir.toString(), "budget", "cli-amp-1", "--stage", "s.yaml"},
-                new PrintWriter(out), new PrintWriter(err));
+        int code = Commands.run(
+                new String[] {"--catalog", dir.toString(), "budget", "cli-amp-1", "--stage", "s.yaml"},
+                new PrintWriter(out),
+                new PrintWriter(err));
         assertEquals(ExitCode.FINDINGS.code(), code);
-        assertEquals("ampsieve: no part 'cli-amp-1' in the catalog " + dir + "; did you mean 'cli-amp-01'?\n",
+        assertEquals(
+                "ampsieve: no part 'cli-amp-1' in the catalog " + dir + "; did you mean 'cli-amp-01'?\n",
                 err.toString().replace(System.lineSeparator(), "\n"));
         assertEquals("", out.toString());
     }

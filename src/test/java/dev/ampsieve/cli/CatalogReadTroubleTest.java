@@ -27,7 +27,8 @@ class CatalogReadTroubleTest {
     @TempDir
     Path dir;
 
-    private static final String STAGE = Path.of("demo-catalog/stages/adc-driver.yaml").toString();
+    private static final String STAGE =
+            Path.of("demo-catalog/stages/adc-driver.yaml").toString();
 
     @BeforeEach
     void writeCatalog() throws Exception {
@@ -41,7 +42,10 @@ class CatalogReadTroubleTest {
     }
 
     private static List<String> ids(CliRun r) {
-        return r.outLines().stream().filter(l -> l.startsWith("fx-")).map(l -> l.split("\\s+")[0]).toList();
+        return r.outLines().stream()
+                .filter(l -> l.startsWith("fx-"))
+                .map(l -> l.split("\\s+")[0])
+                .toList();
     }
 
     /**
@@ -72,8 +76,13 @@ class CatalogReadTroubleTest {
         assertEquals(List.of("fx-az-1", "fx-chop-1"), ids(r)); // as FindCommandTest finds them without the broken file
         assertEquals("", r.err(), r.toString());
         CliRun check = run("check");
-        assertEquals(1, check.outLines().stream().filter(l -> l.startsWith(broken + ": ")
-                && l.contains("the link leads outside the catalog folder")).count(), check.out());
+        assertEquals(
+                1,
+                check.outLines().stream()
+                        .filter(l ->
+                                l.startsWith(broken + ": ") && l.contains("the link leads outside the catalog folder"))
+                        .count(),
+                check.out());
     }
 
     @Test
@@ -81,8 +90,15 @@ class CatalogReadTroubleTest {
         unreadableForAnyone();
         CliRun rank = run("rank", "--stage", STAGE, "--query", "zero-drift");
         assertEquals(ExitCode.OK.code(), rank.code(), rank.toString());
-        assertTrue(rank.out().contains("fx-az-1") && rank.out().contains("fx-chop-1") && !rank.out().contains("fx-bip-1"), rank.out());
-        for (CliRun r : List.of(rank, run("budget", "fx-az-1", "--stage", STAGE), run("compare", "fx-az-1", "fx-chop-1", "--stage", STAGE))) {
+        assertTrue(
+                rank.out().contains("fx-az-1")
+                        && rank.out().contains("fx-chop-1")
+                        && !rank.out().contains("fx-bip-1"),
+                rank.out());
+        for (CliRun r : List.of(
+                rank,
+                run("budget", "fx-az-1", "--stage", STAGE),
+                run("compare", "fx-az-1", "fx-chop-1", "--stage", STAGE))) {
             assertEquals(ExitCode.OK.code(), r.code(), r.toString());
             assertEquals("", r.err(), r.toString());
         }
@@ -94,9 +110,12 @@ class CatalogReadTroubleTest {
         Files.writeString(secret, FindCommandTest.CATALOG.replace("fx-", "sx-"));
         Files.setPosixFilePermissions(secret, PosixFilePermissions.fromString("---------"));
         Assumptions.assumeFalse(Files.isReadable(secret), "running as root, who reads any file: skipped");
-        for (CliRun r : List.of(run("find", "zero-drift", "vos<=10uV"), run("rank", "--stage", STAGE, "--query", "zero-drift"))) {
+        for (CliRun r : List.of(
+                run("find", "zero-drift", "vos<=10uV"), run("rank", "--stage", STAGE, "--query", "zero-drift"))) {
             assertEquals(ExitCode.OK.code(), r.code(), r.toString());
-            assertEquals(List.of(secret + ": cannot read the file (permission denied: " + secret + "); check that it exists and is readable"),
+            assertEquals(
+                    List.of(secret + ": cannot read the file (permission denied: " + secret
+                            + "); check that it exists and is readable"),
                     r.err().lines().toList());
         }
         assertEquals(List.of("fx-az-1", "fx-chop-1"), ids(run("find", "zero-drift", "vos<=10uV")));
@@ -109,7 +128,8 @@ class CatalogReadTroubleTest {
         Files.setPosixFilePermissions(locked, PosixFilePermissions.fromString("---------"));
         try {
             Assumptions.assumeFalse(Files.isReadable(locked), "running as root, who reads any folder: skipped");
-            for (CliRun r : List.of(run("find", "zero-drift", "vos<=10uV"), run("rank", "--stage", STAGE, "--query", "zero-drift"))) {
+            for (CliRun r : List.of(
+                    run("find", "zero-drift", "vos<=10uV"), run("rank", "--stage", STAGE, "--query", "zero-drift"))) {
                 assertEquals(ExitCode.OK.code(), r.code(), r.toString());
                 List<String> err = r.err().lines().toList();
                 assertEquals(1, err.size(), r.err());
@@ -117,13 +137,15 @@ class CatalogReadTroubleTest {
             }
             assertEquals(List.of("fx-az-1", "fx-chop-1"), ids(run("find", "zero-drift", "vos<=10uV")));
         } finally {
-            Files.setPosixFilePermissions(locked, PosixFilePermissions.fromString("rwx------")); // so @TempDir can clean up
+            Files.setPosixFilePermissions(
+                    locked, PosixFilePermissions.fromString("rwx------")); // so @TempDir can clean up
         }
     }
 
     @Test
     void anIndexFolderThatIsALinkIsNotedOnceAndTheCatalogKept() throws Exception {
-        Assumptions.assumeTrue(System.getenv("XDG_CACHE_HOME") == null,
+        Assumptions.assumeTrue(
+                System.getenv("XDG_CACHE_HOME") == null,
                 "XDG_CACHE_HOME is set: skipped rather than write into that cache");
         Path link = Files.createSymbolicLink(dir.resolve(".ampsieve-index"), Path.of("."));
         String before = Files.readString(dir.resolve("parts.yaml"));
@@ -135,8 +157,11 @@ class CatalogReadTroubleTest {
             List<String> err = first.err().lines().toList();
             assertEquals(1, err.size(), first.err());
             assertTrue(err.get(0).startsWith("ampsieve: note: " + link + " is a symbolic link"), err.get(0));
-            assertTrue(err.get(0).contains("left untouched and the search index is kept in "
-                    + dir.resolve("home/.cache/ampsieve") + "/"), err.get(0));
+            assertTrue(
+                    err.get(0)
+                            .contains("left untouched and the search index is kept in "
+                                    + dir.resolve("home/.cache/ampsieve") + "/"),
+                    err.get(0));
             CliRun second = run("find", "zero-drift", "vos<=10uV");
             assertEquals(List.of("fx-az-1", "fx-chop-1"), ids(second));
             assertEquals("", second.err(), "noted once per process (a shell session)");
@@ -147,8 +172,10 @@ class CatalogReadTroubleTest {
         assertEquals(Path.of("."), Files.readSymbolicLink(link));
         assertEquals(before, Files.readString(dir.resolve("parts.yaml")));
         try (var s = Files.list(dir)) {
-            assertEquals(List.of(".ampsieve-index", "home", "parts.yaml"),
-                    s.map(p -> p.getFileName().toString()).sorted().toList(), "no index files beside the catalog");
+            assertEquals(
+                    List.of(".ampsieve-index", "home", "parts.yaml"),
+                    s.map(p -> p.getFileName().toString()).sorted().toList(),
+                    "no index files beside the catalog");
         }
         assertFalse(Files.exists(dir.resolve("write.lock"), LinkOption.NOFOLLOW_LINKS));
     }

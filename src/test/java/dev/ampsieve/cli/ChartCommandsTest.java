@@ -49,7 +49,9 @@ class ChartCommandsTest {
 
     @Test
     void barsDrawTheBudgetsOwnFigures() throws IOException {
-        JsonNode b = new ObjectMapper().readTree(run("budget", "zd-chop-01", "--stage", stage("bridge-amp"), "--json").out());
+        JsonNode b = new ObjectMapper()
+                .readTree(run("budget", "zd-chop-01", "--stage", stage("bridge-amp"), "--json")
+                        .out());
         // --ascii: the same output whatever charset the test JVM's stdout has
         CliRun r = run("--ascii", "bars", "zd-chop-01", "--stage", stage("bridge-amp"));
         assertEquals(ExitCode.OK.code(), r.code(), r.toString());
@@ -58,11 +60,21 @@ class ChartCommandsTest {
             double v = t.get("outputV").asDouble();
             String share = String.format(Locale.ROOT, "%.0f %%", 100 * v / limit);
             // each term's row ends with its value and share of the limit, as budget computed them
-            assertTrue(r.outLines().stream().anyMatch(l -> l.matches(".*\\s" + java.util.regex.Pattern.quote(
-                    Glyphs.ascii(Units.format(v, Dimension.VOLTAGE))) + "\\s+" + share)), t + "\n" + r);
+            assertTrue(
+                    r.outLines().stream()
+                            .anyMatch(l -> l.matches(".*\\s"
+                                    + java.util.regex.Pattern.quote(Glyphs.ascii(Units.format(v, Dimension.VOLTAGE)))
+                                    + "\\s+" + share)),
+                    t + "\n" + r);
         }
-        assertTrue(r.outLines().stream().anyMatch(l -> l.startsWith("worst-case sum") && l.contains(volts(b.get("worstCaseV")))), r.out());
-        assertTrue(r.outLines().stream().anyMatch(l -> l.startsWith("root-sum-square") && l.contains(volts(b.get("rssV")))), r.out());
+        assertTrue(
+                r.outLines().stream()
+                        .anyMatch(l -> l.startsWith("worst-case sum") && l.contains(volts(b.get("worstCaseV")))),
+                r.out());
+        assertTrue(
+                r.outLines().stream()
+                        .anyMatch(l -> l.startsWith("root-sum-square") && l.contains(volts(b.get("rssV")))),
+                r.out());
         assertTrue(r.out().contains("limit " + volts(b.get("limitV"))), r.out());
         assertTrue(r.out().contains("Verdict " + b.get("verdict").asText()), r.out());
         assertTrue(dev.ampsieve.testing.Flat.of(r.out()).contains(Caution.TEXT), r.out());
@@ -81,16 +93,28 @@ class ChartCommandsTest {
 
     @Test
     void scatterLettersFollowTheRanking() throws IOException {
-        JsonNode rank = new ObjectMapper().readTree(run("rank", "--stage", stage("thermocouple"), "--json", "--top", "5").out());
+        JsonNode rank = new ObjectMapper()
+                .readTree(run("rank", "--stage", stage("thermocouple"), "--json", "--top", "5")
+                        .out());
         CliRun r = run("--ascii", "scatter", "--stage", stage("thermocouple"), "--top", "5");
         assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         JsonNode first = rank.get("candidates").get(0);
-        String legendA = r.outLines().stream().filter(l -> l.startsWith("  a  ")).findFirst().orElseThrow();
+        String legendA = r.outLines().stream()
+                .filter(l -> l.startsWith("  a  "))
+                .findFirst()
+                .orElseThrow();
         assertTrue(legendA.contains(first.get("part").asText()), legendA);
-        assertTrue(legendA.contains(String.format(Locale.ROOT, "%.2f", first.get("effectiveCost").asDouble())), legendA);
-        assertTrue(r.outLines().stream().anyMatch(l -> l.endsWith(" limit") && l.startsWith(volts(rank.get("limitV")).strip())
-), r.out());
-        assertEquals(5, r.outLines().stream().filter(l -> l.matches("  [a-e]  .*")).count(), r.out());
+        assertTrue(
+                legendA.contains(String.format(
+                        Locale.ROOT, "%.2f", first.get("effectiveCost").asDouble())),
+                legendA);
+        assertTrue(
+                r.outLines().stream()
+                        .anyMatch(l -> l.endsWith(" limit")
+                                && l.startsWith(volts(rank.get("limitV")).strip())),
+                r.out());
+        assertEquals(
+                5, r.outLines().stream().filter(l -> l.matches("  [a-e]  .*")).count(), r.out());
         assertTrue(dev.ampsieve.testing.Flat.of(r.out()).contains(Caution.TEXT), r.out());
     }
 

@@ -56,29 +56,39 @@ class CheckCommandTest {
         Path f = Files.writeString(dir.resolve("amp.yaml"), PART);
         Run r = run("--catalog", dir.toString(), "check");
         assertEquals(ExitCode.OK.code(), r.code(), r.out() + r.err());
-        assertEquals(List.of(
-                "== " + f + ": part check-amp: 1 warning",
-                f + ":1:1: warning: noise: not given: en, en-corner, in will be estimated for a cmos input (common practice,"
-                        + " conservative) and marked estimated; add 'noise: {en: 12 nV/rtHz, in: 0.1 pA/rtHz}' with the"
-                        + " datasheet's white-noise densities and their 1/f corners",
-                "",
-                dir + ": 1 file(s), 1 part(s), 0 error(s), 1 warning(s)",
-                "",
-                dev.ampsieve.report.Caution.TEXT), r.outLines()); // every text output ends with the caution (RULES.md)
+        assertEquals(
+                List.of(
+                        "== " + f + ": part check-amp: 1 warning",
+                        f
+                                + ":1:1: warning: noise: not given: en, en-corner, in will be estimated for a cmos input (common practice,"
+                                + " conservative) and marked estimated; add 'noise: {en: 12 nV/rtHz, in: 0.1 pA/rtHz}' with the"
+                                + " datasheet's white-noise densities and their 1/f corners",
+                        "",
+                        dir + ": 1 file(s), 1 part(s), 0 error(s), 1 warning(s)",
+                        "",
+                        dev.ampsieve.report.Caution.TEXT),
+                r.outLines()); // every text output ends with the caution (RULES.md)
         assertEquals("", r.err());
     }
 
     @Test
     void anErrorListsTheProblemAndExitsWithFindings() throws IOException {
         Files.writeString(dir.resolve("good.yaml"), PART);
-        Path bad = Files.writeString(dir.resolve("sub-bad.yaml"), PART.replace("check-amp", "other-amp")
-                .replace("gbw: 2 MHz", "gbw: 2 mA"));
+        Path bad = Files.writeString(
+                dir.resolve("sub-bad.yaml"),
+                PART.replace("check-amp", "other-amp").replace("gbw: 2 MHz", "gbw: 2 mA"));
         Run r = run("--catalog", dir.toString(), "check");
         assertEquals(ExitCode.FINDINGS.code(), r.code());
-        assertTrue(r.outLines().contains(bad + ":5:6: gbw: '2 mA' is a current but a frequency belongs here;"
-                + " write a frequency such as '1.5 MHz'"), r.out());
-        assertEquals(dir + ": 2 file(s), 1 part(s), 1 error(s), 1 warning(s)", r.outLines().get(r.outLines().size() - 3));
-        assertEquals(dev.ampsieve.report.Caution.TEXT, r.outLines().get(r.outLines().size() - 1));
+        assertTrue(
+                r.outLines()
+                        .contains(bad + ":5:6: gbw: '2 mA' is a current but a frequency belongs here;"
+                                + " write a frequency such as '1.5 MHz'"),
+                r.out());
+        assertEquals(
+                dir + ": 2 file(s), 1 part(s), 1 error(s), 1 warning(s)",
+                r.outLines().get(r.outLines().size() - 3));
+        assertEquals(
+                dev.ampsieve.report.Caution.TEXT, r.outLines().get(r.outLines().size() - 1));
     }
 
     @Test
@@ -96,8 +106,10 @@ class CheckCommandTest {
         Path missing = dir.resolve("nope");
         Run r = run("check", "--catalog", missing.toString());
         assertEquals(ExitCode.FINDINGS.code(), r.code());
-        assertEquals(missing + ": catalog folder not found; give the catalog folder with --catalog DIR"
-                + " or the environment variable AMPSIEVE_CATALOG", r.err().strip());
+        assertEquals(
+                missing + ": catalog folder not found; give the catalog folder with --catalog DIR"
+                        + " or the environment variable AMPSIEVE_CATALOG",
+                r.err().strip());
         assertFalse(r.err().contains("Exception"), r.err());
     }
 
@@ -114,7 +126,8 @@ class CheckCommandTest {
     @Test
     void problemsAreGroupedUnderOneHeadingPerFile() throws IOException {
         Path a = Files.writeString(dir.resolve("a.yaml"), PART);
-        Path b = Files.writeString(dir.resolve("b.yaml"), PART.replace("check-amp", "other-amp").replace("gbw: 2 MHz", "gbw: 2 mA"));
+        Path b = Files.writeString(
+                dir.resolve("b.yaml"), PART.replace("check-amp", "other-amp").replace("gbw: 2 MHz", "gbw: 2 mA"));
         Run r = run("--catalog", dir.toString(), "check");
         List<String> lines = r.outLines();
         // a.yaml: its part loads with the one noise warning; b.yaml: the gbw error (a part with an error
@@ -128,14 +141,18 @@ class CheckCommandTest {
     @Test
     void quietShowsOnlyErrorsAndTheSummary() throws IOException {
         Files.writeString(dir.resolve("a.yaml"), PART);
-        Path b = Files.writeString(dir.resolve("b.yaml"), PART.replace("check-amp", "other-amp").replace("gbw: 2 MHz", "gbw: 2 mA"));
+        Path b = Files.writeString(
+                dir.resolve("b.yaml"), PART.replace("check-amp", "other-amp").replace("gbw: 2 MHz", "gbw: 2 mA"));
         Run r = run("--catalog", dir.toString(), "check", "--quiet");
         assertEquals(ExitCode.FINDINGS.code(), r.code());
-        assertEquals(List.of(
-                "== " + b + ": no part loaded: 1 error",
-                b + ":5:6: gbw: '2 mA' is a current but a frequency belongs here; write a frequency such as '1.5 MHz'",
-                "",
-                dir + ": 2 file(s), 1 part(s), 1 error(s), 1 warning(s)"), r.outLines());
+        assertEquals(
+                List.of(
+                        "== " + b + ": no part loaded: 1 error",
+                        b
+                                + ":5:6: gbw: '2 mA' is a current but a frequency belongs here; write a frequency such as '1.5 MHz'",
+                        "",
+                        dir + ": 2 file(s), 1 part(s), 1 error(s), 1 warning(s)"),
+                r.outLines());
         // no error at all: the summary line alone, exit 0
         Files.delete(b);
         Run clean = run("--catalog", dir.toString(), "check", "-q");
@@ -149,9 +166,19 @@ class CheckCommandTest {
         Path stage = Files.writeString(dir.resolve("bridge.yaml"), "gain: 100\nlimit: 1 mV\ncriterion: worst-case\n");
         Run r = run("--catalog", dir.toString(), "check");
         assertEquals(ExitCode.OK.code(), r.code(), r.out());
-        assertTrue(r.outLines().contains(stage + ":1:1: warning: looks like a stage file (it has gain, limit, criterion and no id);"
-                + " skipped; move it to a 'stages' folder (which the catalog does not read) and pass it with --stage"), r.out());
+        assertTrue(
+                r.outLines()
+                        .contains(
+                                stage
+                                        + ":1:1: warning: looks like a stage file (it has gain, limit, criterion and no id);"
+                                        + " skipped; move it to a 'stages' folder (which the catalog does not read) and pass it with --stage"),
+                r.out());
         // one line for the file, not one per missing part key
-        assertEquals(1, r.outLines().stream().filter(l -> l.startsWith(stage.toString())).count(), r.out());
+        assertEquals(
+                1,
+                r.outLines().stream()
+                        .filter(l -> l.startsWith(stage.toString()))
+                        .count(),
+                r.out());
     }
 }

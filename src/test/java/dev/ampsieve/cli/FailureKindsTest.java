@@ -14,8 +14,8 @@ import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine.Command;
 import picocli.CommandLine;
+import picocli.CommandLine.Command;
 
 /**
  * Every kind of failure a user can cause reaches the command line through the one handler
@@ -51,8 +51,10 @@ class FailureKindsTest {
         Path part = Files.writeString(dir.resolve("amp.yaml"), BAD_PART);
         CliRun r = CliRun.of("--catalog", dir.toString(), "--strict", "find");
         assertEquals(ExitCode.FINDINGS.code(), r.code(), r.toString());
-        assertEquals(part + ":5:6: gbw: '2 mA' is a current but a frequency belongs here; write a frequency such as"
-                + " '1.5 MHz'\n", r.err());
+        assertEquals(
+                part + ":5:6: gbw: '2 mA' is a current but a frequency belongs here; write a frequency such as"
+                        + " '1.5 MHz'\n",
+                r.err());
     }
 
     @Test
@@ -60,8 +62,10 @@ class FailureKindsTest {
         Path stage = Files.writeString(dir.resolve("bad.yaml"), BAD_STAGE);
         CliRun r = CliRun.of("budget", "prec-bip-01", "--stage", stage.toString());
         assertEquals(ExitCode.FINDINGS.code(), r.code(), r.toString());
-        assertEquals(stage + ":3:5: rf: '10 kV' is a voltage but a resistance belongs here; write a resistance such as"
-                + " '100 kohm'\n", r.err());
+        assertEquals(
+                stage + ":3:5: rf: '10 kV' is a voltage but a resistance belongs here; write a resistance such as"
+                        + " '100 kohm'\n",
+                r.err());
         assertEquals("", r.out());
     }
 
@@ -70,7 +74,9 @@ class FailureKindsTest {
         CliRun r = CliRun.of("find", "vos<abc");
         assertEquals(ExitCode.FINDINGS.code(), r.code(), r.toString());
         // no file: the place is the query term
-        assertEquals("query term 'vos<abc': 'abc' does not start with a number; write a voltage such as '2.5 uV'\n", r.err());
+        assertEquals(
+                "query term 'vos<abc': 'abc' does not start with a number; write a voltage such as '2.5 uV'\n",
+                r.err());
     }
 
     @Test
@@ -78,7 +84,9 @@ class FailureKindsTest {
         Path missing = dir.resolve("missing.yaml");
         CliRun r = CliRun.of("rank", "--stage", missing.toString());
         assertEquals(ExitCode.FINDINGS.code(), r.code(), r.toString());
-        assertEquals(missing + ": cannot read the file (no such file: " + missing + "); check that it exists and is readable\n",
+        assertEquals(
+                missing + ": cannot read the file (no such file: " + missing
+                        + "); check that it exists and is readable\n",
                 r.err());
     }
 
@@ -115,11 +123,15 @@ class FailureKindsTest {
     void internalIsOneLineAndTheTraceOnlyWithVerbose() {
         CliRun r = internal("explode");
         assertEquals(ExitCode.INTERNAL.code(), r.code(), r.toString());
-        assertEquals("ampsieve: internal error: java.lang.IllegalStateException: boom (run again with --verbose for the"
-                + " details)\n", r.err());
+        assertEquals(
+                "ampsieve: internal error: java.lang.IllegalStateException: boom (run again with --verbose for the"
+                        + " details)\n",
+                r.err());
         CliRun v = internal("--verbose", "explode");
         assertEquals(ExitCode.INTERNAL.code(), v.code(), v.toString());
-        assertEquals("ampsieve: internal error: java.lang.IllegalStateException: boom", v.err().lines().findFirst().orElse(""));
+        assertEquals(
+                "ampsieve: internal error: java.lang.IllegalStateException: boom",
+                v.err().lines().findFirst().orElse(""));
         assertTrue(v.err().contains("\tat dev.ampsieve.cli.FailureKindsTest$Explode.call("), v.err());
         assertFalse(r.err().contains("\tat "), r.err());
     }

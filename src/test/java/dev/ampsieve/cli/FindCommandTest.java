@@ -86,7 +86,10 @@ class FindCommandTest {
 
     /** Ids in the order listed: table rows begin with an id at column 0. */
     private static List<String> ids(CliRun r) {
-        return r.outLines().stream().filter(l -> l.startsWith("fx-")).map(l -> l.split("\\s+")[0]).toList();
+        return r.outLines().stream()
+                .filter(l -> l.startsWith("fx-"))
+                .map(l -> l.split("\\s+")[0])
+                .toList();
     }
 
     @Test
@@ -95,9 +98,18 @@ class FindCommandTest {
         assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         // both titles say "amplifier" only; relevance ties, so the cheaper auto-zero part comes first
         assertEquals(List.of("fx-az-1", "fx-chop-1"), ids(r));
-        String chop = r.outLines().stream().filter(l -> l.startsWith("fx-chop-1")).findFirst().orElseThrow();
-        assertTrue(chop.contains("1.80") && chop.contains("5.00 µV") && chop.contains("20.0 nV/°C")
-                && chop.contains("300 pA") && chop.contains("2.00 MHz") && chop.contains("2.7-5.5 V"), chop);
+        String chop = r.outLines().stream()
+                .filter(l -> l.startsWith("fx-chop-1"))
+                .findFirst()
+                .orElseThrow();
+        assertTrue(
+                chop.contains("1.80")
+                        && chop.contains("5.00 µV")
+                        && chop.contains("20.0 nV/°C")
+                        && chop.contains("300 pA")
+                        && chop.contains("2.00 MHz")
+                        && chop.contains("2.7-5.5 V"),
+                chop);
         // the title on its own line, under the figures, indented past the id column ("fx-chop-1" + 2)
         assertTrue(r.outLines().contains(" ".repeat(11) + "Invented chopper amplifier"), r.out());
         assertTrue(dev.ampsieve.testing.Flat.of(r.out()).endsWith(Caution.TEXT), r.out());
@@ -144,7 +156,9 @@ class FindCommandTest {
     void noMatchSaysSoAndExitsOne() {
         CliRun r = find("input:jfet", "gbw>100MHz");
         assertEquals(ExitCode.FINDINGS.code(), r.code());
-        assertTrue(r.out().startsWith("no part matches 'input:jfet gbw>100MHz'."), r.out()); // by hand: no demo JFET part is that fast
+        assertTrue(
+                r.out().startsWith("no part matches 'input:jfet gbw>100MHz'."),
+                r.out()); // by hand: no demo JFET part is that fast
     }
 
     @Test
@@ -201,7 +215,8 @@ class FindCommandTest {
     @Test
     void helpShowsHowToExcludeAndListsTheCatalogNames() {
         CliRun r = CliRun.of("find", "--help");
-        assertTrue(r.out().contains("  -word           excludes: find 'drift<=1uV/C' -chopper (no '--' needed"), r.out());
+        assertTrue(
+                r.out().contains("  -word           excludes: find 'drift<=1uV/C' -chopper (no '--' needed"), r.out());
         assertTrue(r.out().contains("null-pins"), r.out());
         assertTrue(r.out().contains("factory-trim (trim)"), r.out());
     }

@@ -43,7 +43,8 @@ class HostileTextTest {
      * CSI, \u202e right-to-left override, \u2066 left-to-right isolate. The file itself is plain
      * ASCII, as a shared catalog would be. Lines and columns below are counted by hand.
      */
-    private static final String HOSTILE = String.join("\n",
+    private static final String HOSTILE = String.join(
+            "\n",
             "id: hostile-01",
             "title: \"Harmless amp \\e]0;owned\\a\\e[2J\\x9b31m \\u202eevil\"",
             "architecture: standard",
@@ -70,7 +71,8 @@ class HostileTextTest {
         catalog = DemoCatalog.copyTo(tmp);
         hostileFile = Files.writeString(catalog.resolve("general").resolve("hostile.yaml"), HOSTILE);
         // a stage whose file name clears the screen
-        stage = Files.copy(catalog.resolve("stages").resolve("bridge-amp.yaml"),
+        stage = Files.copy(
+                catalog.resolve("stages").resolve("bridge-amp.yaml"),
                 catalog.resolve("stages").resolve("br" + ESC + "[2Jidge.yaml"));
     }
 
@@ -85,8 +87,10 @@ class HostileTextTest {
         String all = r.out() + r.err();
         for (int i = 0; i < all.length(); i++) {
             char c = all.charAt(i);
-            boolean bad = c < 0x20 && c != '\n' || c >= 0x7f && c <= 0x9f
-                    || c >= 0x202a && c <= 0x202e || c >= 0x2066 && c <= 0x2069;
+            boolean bad = c < 0x20 && c != '\n'
+                    || c >= 0x7f && c <= 0x9f
+                    || c >= 0x202a && c <= 0x202e
+                    || c >= 0x2066 && c <= 0x2069;
             assertFalse(bad, String.format("U+%04X at %d in%n%s", (int) c, i, r));
         }
     }
@@ -120,7 +124,9 @@ class HostileTextTest {
         // RFC 8259 section 7: control characters as \\u00XX; Jackson writes the hex upper-case
         assertTrue(r.out().contains("Harmless amp \\u001B]0;owned\\u0007\\u001B[2J\\u009B31m \\u202Eevil"), r.out());
         JsonNode j = new ObjectMapper().readTree(r.out());
-        assertEquals("Harmless amp " + ESC + "]0;owned" + (char) 7 + ESC + "[2J" + (char) 0x9b + "31m " + (char) 0x202e + "evil",
+        assertEquals(
+                "Harmless amp " + ESC + "]0;owned" + (char) 7 + ESC + "[2J" + (char) 0x9b + "31m " + (char) 0x202e
+                        + "evil",
                 j.get("parts").get(0).get("title").asText());
     }
 
@@ -151,7 +157,8 @@ class HostileTextTest {
 
         CliRun json = run("rank", "--stage", stage.toString(), "--json");
         assertInert(json);
-        assertTrue(json.out().contains("\"stage\" : \"" + stage.toString().replace(String.valueOf(ESC), "\\u001B") + "\""),
+        assertTrue(
+                json.out().contains("\"stage\" : \"" + stage.toString().replace(String.valueOf(ESC), "\\u001B") + "\""),
                 json.out());
     }
 
@@ -183,9 +190,11 @@ class HostileTextTest {
         // names: Unicode NameAliases (ESCAPE, CONTROL SEQUENCE INTRODUCER) and UnicodeData [from memory]
         for (String expected : List.of(
                 hostileFile + ":2:8: warning: title: contains control character U+001B (ESCAPE); remove it",
-                hostileFile + ":5:20: warning: packages[1]: contains control character U+2066 (LEFT-TO-RIGHT ISOLATE); remove it",
+                hostileFile
+                        + ":5:20: warning: packages[1]: contains control character U+2066 (LEFT-TO-RIGHT ISOLATE); remove it",
                 hostileFile + ":6:17: warning: tags[1]: contains control character U+001B (ESCAPE); remove it",
-                hostileFile + ":15:9: warning: source: contains control character U+009B (CONTROL SEQUENCE INTRODUCER); remove it",
+                hostileFile
+                        + ":15:9: warning: source: contains control character U+009B (CONTROL SEQUENCE INTRODUCER); remove it",
                 hostileFile + ":16:8: warning: notes: contains control character U+001B (ESCAPE); remove it")) {
             assertTrue(lines.contains(expected), expected + "\nnot in\n" + r.out());
         }

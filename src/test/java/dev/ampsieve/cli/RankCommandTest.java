@@ -82,12 +82,17 @@ class RankCommandTest {
         List<JsonNode> all = new ArrayList<>();
         cands.forEach(all::add);
         for (JsonNode id : j.get("pareto")) {
-            JsonNode p = all.stream().filter(c -> c.get("part").asText().equals(id.asText())).findFirst().orElseThrow();
+            JsonNode p = all.stream()
+                    .filter(c -> c.get("part").asText().equals(id.asText()))
+                    .findFirst()
+                    .orElseThrow();
             for (JsonNode q : all) {
-                boolean dominated = q.get("effectiveCost").asDouble() <= p.get("effectiveCost").asDouble()
+                boolean dominated = q.get("effectiveCost").asDouble()
+                                <= p.get("effectiveCost").asDouble()
                         && q.get("errorV").asDouble() <= p.get("errorV").asDouble()
-                        && (q.get("effectiveCost").asDouble() < p.get("effectiveCost").asDouble()
-                        || q.get("errorV").asDouble() < p.get("errorV").asDouble());
+                        && (q.get("effectiveCost").asDouble()
+                                        < p.get("effectiveCost").asDouble()
+                                || q.get("errorV").asDouble() < p.get("errorV").asDouble());
                 assertFalse(dominated, p.get("part") + " dominated by " + q.get("part"));
             }
         }
@@ -123,19 +128,23 @@ class RankCommandTest {
         assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         assertTrue(r.out().contains("Candidates (") && r.out().contains("Advice\n"), r.out());
         assertTrue(dev.ampsieve.testing.Flat.of(r.out()).endsWith(Caution.TEXT));
-        r.outLines().stream().filter(l -> !l.startsWith("  ") && !l.equals(Caution.TEXT))
+        r.outLines().stream()
+                .filter(l -> !l.startsWith("  ") && !l.equals(Caution.TEXT))
                 .forEach(l -> assertTrue(l.length() <= 100, l));
     }
 
     @Test
     void queryNarrowsTheCandidates() throws IOException {
-        JsonNode j = json(run("rank", "--stage", stage("adc-driver"), "--query", "input:cmos", "--json", "--top", "100"));
+        JsonNode j =
+                json(run("rank", "--stage", stage("adc-driver"), "--query", "input:cmos", "--json", "--top", "100"));
         List<String> ids = new ArrayList<>();
         j.get("candidates").forEach(c -> ids.add(c.get("part").asText()));
         j.get("rejected").forEach(c -> ids.add(c.get("part").asText()));
         assertFalse(ids.isEmpty());
         // no bipolar or JFET families in the demo catalog are CMOS
-        assertTrue(ids.stream().noneMatch(id -> id.startsWith("gp-bip") || id.startsWith("jfet") || id.startsWith("ln-bip")),
+        assertTrue(
+                ids.stream()
+                        .noneMatch(id -> id.startsWith("gp-bip") || id.startsWith("jfet") || id.startsWith("ln-bip")),
                 ids.toString());
         assertEquals("input:cmos", j.get("query").asText());
     }
@@ -210,7 +219,10 @@ class RankCommandTest {
         CliRun text = run("compare", "prec-bip-02", "zd-chop-01", "--stage", stage("thermocouple"));
         assertTrue(dev.ampsieve.testing.Flat.of(text.out()).endsWith(Caution.TEXT));
         // the conclusion is the last paragraph before the caution (folded to the width in text)
-        assertTrue(dev.ampsieve.testing.Flat.of(text.out()).endsWith(j.get("conclusion").asText() + " " + Caution.TEXT), text.out());
+        assertTrue(
+                dev.ampsieve.testing.Flat.of(text.out())
+                        .endsWith(j.get("conclusion").asText() + " " + Caution.TEXT),
+                text.out());
     }
 
     @Test
@@ -222,21 +234,35 @@ class RankCommandTest {
         // 1 µV per sqrt(1000 h) (common practice, budget/Assumed) x 97.61181 x 9.362692 = 913.9 µV. Neither is 0 V,
         // and both are marked as resting on a non-guaranteed figure
         CliRun r = run("compare", "prec-bip-02", "zd-chop-04", "--stage", stage("bridge-amp"));
-        String aging = r.outLines().stream().filter(l -> l.startsWith("long-term drift")).findFirst().orElseThrow();
+        String aging = r.outLines().stream()
+                .filter(l -> l.startsWith("long-term drift"))
+                .findFirst()
+                .orElseThrow();
         assertTrue(aging.matches("long-term drift\\s+1\\.37 mV\\*\\s+914 µV\\*\\s+zd-chop-04.*"), aging);
-        assertFalse(dev.ampsieve.testing.Flat.of(r.out()).contains("0 V only because the catalog lacks the value"), r.out());
+        assertFalse(
+                dev.ampsieve.testing.Flat.of(r.out()).contains("0 V only because the catalog lacks the value"),
+                r.out());
     }
 
     @Test
     void compareWithAnUnknownPartSuggestsTheNearestId() {
         CliRun r = run("compare", "prec-bip-2", "zd-chop-01", "--stage", stage("thermocouple"));
         assertEquals(ExitCode.FINDINGS.code(), r.code());
-        assertTrue(r.err().contains("no part 'prec-bip-2' in the catalog") && r.err().contains("did you mean 'prec-bip-02'?"),
+        assertTrue(
+                r.err().contains("no part 'prec-bip-2' in the catalog")
+                        && r.err().contains("did you mean 'prec-bip-02'?"),
                 r.err());
         CliRun both = run("compare", "prec-bip-2", "zd-chop-1", "--stage", stage("thermocouple"));
         assertEquals(ExitCode.FINDINGS.code(), both.code());
-        assertTrue(both.err().contains("did you mean 'prec-bip-02'?") && both.err().contains("did you mean 'zd-chop-01'?"),
+        assertTrue(
+                both.err().contains("did you mean 'prec-bip-02'?") && both.err().contains("did you mean 'zd-chop-01'?"),
                 both.err());
-        assertEquals(2, both.err().lines().filter(l -> l.startsWith("ampsieve: no part")).count(), both.err());
+        assertEquals(
+                2,
+                both.err()
+                        .lines()
+                        .filter(l -> l.startsWith("ampsieve: no part"))
+                        .count(),
+                both.err());
     }
 }

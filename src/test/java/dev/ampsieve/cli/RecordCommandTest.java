@@ -51,14 +51,18 @@ class RecordCommandTest {
         Path f = c.resolve("zero-drift/chopper.yaml");
         String text = Files.readString(f);
         // zd-chop-01's datasheet revision: vos max 5 -> 50 uV, over temperature 7 -> 60 uV; and a comment
-        String edited = text.replace("vos: {typ: \"1 uV\", max: \"5 uV\", max-over-temp: \"7 uV\"}",
+        String edited = text.replace(
+                "vos: {typ: \"1 uV\", max: \"5 uV\", max-over-temp: \"7 uV\"}",
                 "# revision C\n    vos: {typ: \"1 uV\", max: \"50 uV\", max-over-temp: \"60 uV\"}");
         assertTrue(!edited.equals(text), "the fixture line is in the demo file");
         Files.writeString(f, edited);
         CliRun r = CliRun.of("--catalog", c.toString(), "recheck", record.toString());
         assertEquals(1, r.code(), r.toString());
-        assertTrue(r.out().contains("zd-chop-01: catalog entry changed:\n    vos.max: 5.00 µV -> 50.0 µV\n"
-                + "    vos.max-over-temp: 7.00 µV -> 60.0 µV\n"), r.out());
+        assertTrue(
+                r.out()
+                        .contains("zd-chop-01: catalog entry changed:\n    vos.max: 5.00 µV -> 50.0 µV\n"
+                                + "    vos.max-over-temp: 7.00 µV -> 60.0 µV\n"),
+                r.out());
         // initial offset 97.61 × 50 µV = 4.88 mV now exceeds the resistor-ratio term's 1.65 mV (by hand)
         assertTrue(r.out().contains("zd-chop-01: largest term resistor ratio -> initial offset"), r.out());
     }
@@ -67,12 +71,14 @@ class RecordCommandTest {
     void aChangedStringReachesTheTerminalOnlyAsEscapes() throws Exception {
         Path c = copy("hostile");
         Path f = c.resolve("zero-drift/chopper.yaml");
-        // the chopper file's sources (zd-chop-01 among them) gain an ESC sequence (YAML's \e) that would turn a terminal red
-        Files.writeString(f, Files.readString(f).replace("source: invented demo data",
-                "source: \"invented demo data\\e[31m\""));
+        // the chopper file's sources (zd-chop-01 among them) gain an ESC sequence (YAML's \e) that would turn a
+        // terminal red
+        Files.writeString(
+                f, Files.readString(f).replace("source: invented demo data", "source: \"invented demo data\\e[31m\""));
         CliRun r = CliRun.of("--catalog", c.toString(), "recheck", record.toString());
         assertEquals(1, r.code(), r.toString());
-        assertTrue(r.out().contains("    source: \"invented demo data\" -> \"invented demo data\\x1b[31m\"\n"), r.out());
+        assertTrue(
+                r.out().contains("    source: \"invented demo data\" -> \"invented demo data\\x1b[31m\"\n"), r.out());
         assertTrue(!r.out().contains("\u001b"), "no raw ESC");
     }
 
@@ -80,8 +86,11 @@ class RecordCommandTest {
     void aCommentOnlyEditChangesNothing() throws Exception {
         Path c = copy("commented");
         Path f = c.resolve("zero-drift/chopper.yaml");
-        Files.writeString(f, "# checked against the current revisions\n" + Files.readString(f).replace("gbw: \"2 MHz\"",
-                "gbw: \"2000 kHz\"  # same value, other prefix"));
+        Files.writeString(
+                f,
+                "# checked against the current revisions\n"
+                        + Files.readString(f)
+                                .replace("gbw: \"2 MHz\"", "gbw: \"2000 kHz\"  # same value, other prefix"));
         CliRun r = CliRun.of("--catalog", c.toString(), "recheck", record.toString());
         assertEquals(0, r.code(), r.toString());
     }
@@ -106,13 +115,17 @@ class RecordCommandTest {
         int from = chop.indexOf("  - id: zd-chop-01");
         int to = chop.indexOf("\n  - id:", from + 1);
         // the same figures as zd-chop-01 (which fits) at 1.00 instead of 2.30: it fits, and is cheaper
-        String twin = chop.substring(from, to).replace("id: zd-chop-01", "id: zd-chop-09")
+        String twin = chop.substring(from, to)
+                .replace("id: zd-chop-01", "id: zd-chop-09")
                 .replace("price: {unit: 2.30", "price: {unit: 1.00");
         Files.writeString(c.resolve("zero-drift/twin.yaml"), "parts:\n" + twin + "\n");
         CliRun r = CliRun.of("--catalog", c.toString(), "recheck", record.toString());
         assertEquals(1, r.code(), r.toString());
-        assertTrue(r.out().contains("zd-chop-09 now fits at 1.00 USD, cheaper than the recorded cheapest fitting part"
-                + " zd-chop-01 at 2.30 USD"), r.out());
+        assertTrue(
+                r.out()
+                        .contains("zd-chop-09 now fits at 1.00 USD, cheaper than the recorded cheapest fitting part"
+                                + " zd-chop-01 at 2.30 USD"),
+                r.out());
     }
 
     @Test
@@ -130,11 +143,15 @@ class RecordCommandTest {
     @Test
     void aDamagedBlockIsNamedWithTheFix() throws Exception {
         Path bad = dir.resolve("damaged.md");
-        Files.writeString(bad, "# a record\n<!-- ampsieve-decision-record\n{\"recordFormat\": 1, \"kind\": \"shortlist\"\n-->\n");
+        Files.writeString(
+                bad, "# a record\n<!-- ampsieve-decision-record\n{\"recordFormat\": 1, \"kind\": \"shortlist\"\n-->\n");
         CliRun r = CliRun.of("recheck", bad.toString());
         assertEquals(1, r.code(), r.toString());
         assertTrue(r.err().startsWith(bad + ": ampsieve-decision-record: the record's block is damaged ("), r.err());
-        assertTrue(r.err().contains("write the record again with 'ampsieve record', or restore the file from version control"),
+        assertTrue(
+                r.err()
+                        .contains(
+                                "write the record again with 'ampsieve record', or restore the file from version control"),
                 r.err());
     }
 
@@ -144,11 +161,14 @@ class RecordCommandTest {
         Files.writeString(mine, "<p>my own page</p>\n");
         CliRun r = CliRun.of("--catalog", catalog.toString(), "record", "--stage", STAGE, "--html", mine.toString());
         assertEquals(1, r.code(), r.toString());
-        assertTrue(r.err().contains(mine + ": exists and is not an ampsieve decision record; left as it was;"
-                + " choose another name, or add --force to replace it"), r.err());
+        assertTrue(
+                r.err()
+                        .contains(mine + ": exists and is not an ampsieve decision record; left as it was;"
+                                + " choose another name, or add --force to replace it"),
+                r.err());
         assertEquals("<p>my own page</p>\n", Files.readString(mine));
-        CliRun forced = CliRun.of("--catalog", catalog.toString(), "record", "--stage", STAGE, "--md", mine.toString(),
-                "--force");
+        CliRun forced = CliRun.of(
+                "--catalog", catalog.toString(), "record", "--stage", STAGE, "--md", mine.toString(), "--force");
         assertEquals(0, forced.code(), forced.toString());
         assertTrue(Files.readString(mine).startsWith("# Part selection record for bridge-amp.yaml"));
     }
@@ -157,8 +177,17 @@ class RecordCommandTest {
     void aPreviousRecordIsReplacedAndAChangeRecordReChecks() throws Exception {
         Path md = dir.resolve("change.md");
         Files.writeString(md, "placeholder <!-- ampsieve-decision-record\n{}\n-->\n");
-        CliRun r = CliRun.of("--catalog", catalog.toString(), "record", "--stage", STAGE, "--change", "prec-bip-02",
-                "zd-chop-01", "--md", md.toString());
+        CliRun r = CliRun.of(
+                "--catalog",
+                catalog.toString(),
+                "record",
+                "--stage",
+                STAGE,
+                "--change",
+                "prec-bip-02",
+                "zd-chop-01",
+                "--md",
+                md.toString());
         assertEquals(0, r.code(), r.toString());
         String text = Files.readString(md);
         assertTrue(text.startsWith("# Part change record: prec-bip-02 to zd-chop-01 for bridge-amp.yaml"));
@@ -168,8 +197,16 @@ class RecordCommandTest {
 
     @Test
     void anUnknownPartIsNamedWithTheClosestId() {
-        CliRun r = CliRun.of("--catalog", catalog.toString(), "record", "--stage", STAGE, "--parts", "zd-chop-1",
-                "--html", dir.resolve("x.html").toString());
+        CliRun r = CliRun.of(
+                "--catalog",
+                catalog.toString(),
+                "record",
+                "--stage",
+                STAGE,
+                "--parts",
+                "zd-chop-1",
+                "--html",
+                dir.resolve("x.html").toString());
         assertEquals(1, r.code(), r.toString());
         assertTrue(r.err().contains("no part 'zd-chop-1' in the catalog"), r.err());
         assertTrue(!Files.exists(dir.resolve("x.html")));

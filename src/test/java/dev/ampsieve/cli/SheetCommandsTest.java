@@ -49,11 +49,19 @@ class SheetCommandsTest {
         CliRun r = CliRun.of("import", csv.toString(), "--into", into.toString());
         assertEquals(ExitCode.FINDINGS.code(), r.code(), r.toString());
         // the catalog's bound for vos (CatalogKeys.BOUNDS: error above 1 V), placed at row 3, column 4
-        assertEquals(csv + ":3:4: vos.max: 2.00 V is above 1.00 V, impossible for an op amp (an offset of volts leaves"
-                + " no room for a signal); check the unit prefix (p, n, u, m, k, M) and the datasheet column; the largest"
-                + " size accepted here is 1.00 V", String.join("\n", r.err().lines()
-                        .filter(l -> !l.contains(": warning: ")).toList())); // the minimal rows' absent-figure warnings aside
-        assertEquals(csv + ": 3 row(s), 2 part file(s) written to " + into + ", 1 row(s) not written (see above)\n", r.out());
+        assertEquals(
+                csv + ":3:4: vos.max: 2.00 V is above 1.00 V, impossible for an op amp (an offset of volts leaves"
+                        + " no room for a signal); check the unit prefix (p, n, u, m, k, M) and the datasheet column; the largest"
+                        + " size accepted here is 1.00 V",
+                String.join(
+                        "\n",
+                        r.err()
+                                .lines()
+                                .filter(l -> !l.contains(": warning: "))
+                                .toList())); // the minimal rows' absent-figure warnings aside
+        assertEquals(
+                csv + ": 3 row(s), 2 part file(s) written to " + into + ", 1 row(s) not written (see above)\n",
+                r.out());
         assertEquals(List.of("good-01.yaml", "good-03.yaml"), names(into)); // nothing else: no temporary file
         Catalog c = CatalogLoader.load(into, true);
         assertEquals(0.5e-3, c.parts().get(0).vos().max(), 1e-15);
@@ -64,13 +72,18 @@ class SheetCommandsTest {
     void existingFileIsLeftAloneWithoutForceAndReplacedWithIt(@TempDir Path dir) throws Exception {
         Path csv = write(dir, "parts.csv", CSV);
         Path into = Files.createDirectory(dir.resolve("catalog"));
-        byte[] mine = "# my own notes\nid: good-01\n".getBytes(StandardCharsets.UTF_8); // broken on purpose: no other key
+        byte[] mine =
+                "# my own notes\nid: good-01\n".getBytes(StandardCharsets.UTF_8); // broken on purpose: no other key
         Files.write(into.resolve("good-01.yaml"), mine);
 
         CliRun r = CliRun.of("import", csv.toString(), "--into", into.toString());
         assertEquals(ExitCode.FINDINGS.code(), r.code(), r.toString());
-        assertTrue(r.err().contains(csv + ":2:1: id: " + into.resolve("good-01.yaml") + ": the file already exists and was"
-                + " left as it was; add --force to replace it, or give the part another id\n"), r.err());
+        assertTrue(
+                r.err()
+                        .contains(
+                                csv + ":2:1: id: " + into.resolve("good-01.yaml") + ": the file already exists and was"
+                                        + " left as it was; add --force to replace it, or give the part another id\n"),
+                r.err());
         assertArrayEquals(mine, Files.readAllBytes(into.resolve("good-01.yaml")));
         assertEquals(List.of("good-01.yaml", "good-03.yaml"), names(into));
 
@@ -86,8 +99,11 @@ class SheetCommandsTest {
         CliRun.of("import", csv.toString(), "--into", into.toString());
         Files.move(into.resolve("good-03.yaml"), into.resolve("renamed.yaml"));
         CliRun r = CliRun.of("import", csv.toString(), "--into", into.toString(), "--force");
-        assertTrue(r.err().contains(csv + ":4:1: id: id 'good-03' is already in " + into.resolve("renamed.yaml") + ":3;"
-                + " not written; give the part another id, or remove the other one"), r.err());
+        assertTrue(
+                r.err()
+                        .contains(csv + ":4:1: id: id 'good-03' is already in " + into.resolve("renamed.yaml") + ":3;"
+                                + " not written; give the part another id, or remove the other one"),
+                r.err());
         assertEquals(List.of("good-01.yaml", "renamed.yaml"), names(into));
     }
 
@@ -98,14 +114,17 @@ class SheetCommandsTest {
         Class<?>[] types = new Class<?>[rc.length];
         for (int i = 0; i < rc.length; i++) {
             types[i] = rc[i].getType();
-            args[i] = rc[i].getName().equals("where") ? null : rc[i].getAccessor().invoke(p);
+            args[i] =
+                    rc[i].getName().equals("where") ? null : rc[i].getAccessor().invoke(p);
         }
         return Part.class.getDeclaredConstructor(types).newInstance(args);
     }
 
     private static List<Part> unplaced(Catalog c) throws Exception {
         List<Part> out = new java.util.ArrayList<>();
-        for (Part p : c.parts().stream().sorted(java.util.Comparator.comparing(Part::id)).toList()) {
+        for (Part p : c.parts().stream()
+                .sorted(java.util.Comparator.comparing(Part::id))
+                .toList()) {
             out.add(unplaced(p));
         }
         return out;
@@ -146,7 +165,10 @@ class SheetCommandsTest {
                 notes: "first line\\nsecond line, with \\"quotes\\""
                 """);
         Path csv = dir.resolve("odd.csv");
-        assertEquals(ExitCode.OK.code(), CliRun.of("--catalog", cat.toString(), "export", "--csv", "--out", csv.toString()).code());
+        assertEquals(
+                ExitCode.OK.code(),
+                CliRun.of("--catalog", cat.toString(), "export", "--csv", "--out", csv.toString())
+                        .code());
         String sheet = Files.readString(csv);
         // defused for a spreadsheet: title, and the list cell that starts with '-'
         assertTrue(sheet.contains("\"'=1+2, a title a spreadsheet would compute\""), sheet);
@@ -167,10 +189,14 @@ class SheetCommandsTest {
         Path out = write(dir, "mine.csv", "keep me\n");
         CliRun r = CliRun.of("export", "--csv", "--out", out.toString());
         assertEquals(ExitCode.FINDINGS.code(), r.code());
-        assertEquals(out + ": the file already exists and was left as it was; add --force to replace it, or give another"
-                + " --out FILE\n", r.err());
+        assertEquals(
+                out + ": the file already exists and was left as it was; add --force to replace it, or give another"
+                        + " --out FILE\n",
+                r.err());
         assertEquals("keep me\n", Files.readString(out));
-        assertEquals(ExitCode.OK.code(), CliRun.of("export", "--csv", "--out", out.toString(), "--force").code());
+        assertEquals(
+                ExitCode.OK.code(),
+                CliRun.of("export", "--csv", "--out", out.toString(), "--force").code());
         assertTrue(Files.readString(out).startsWith("id,title,architecture,input,"));
         assertEquals(List.of("mine.csv"), names(dir));
     }
@@ -183,18 +209,21 @@ class SheetCommandsTest {
         Catalog c = CatalogLoader.load(dir, false);
         assertEquals(List.of(), c.parts());
         // one error per value every part needs (CatalogKeys.REQUIRED), and nothing else
-        assertEquals(List.of(
-                "architecture: required field is missing; add 'architecture: standard'",
-                "input: required field is missing; add 'input: bipolar'",
-                "price.unit: required field is missing; add 'unit: 1.20'",
-                "supply.min: required field is missing; add 'min: 4.5 V'",
-                "supply.max: required field is missing; add 'max: 36 V'",
-                "temperature.min: required field is missing; add 'min: -40 C'",
-                "temperature.max: required field is missing; add 'max: 85 C'",
-                "vos: neither typ nor max is given; add 'max: 2.5 uV' from the datasheet's 25 °C column (typ when it gives"
-                        + " no max)",
-                "gbw: required field is missing; add 'gbw: 1 MHz'"),
-                c.problems().stream().map(p -> p.field() + ": " + p.message() + "; " + p.fix()).toList());
+        assertEquals(
+                List.of(
+                        "architecture: required field is missing; add 'architecture: standard'",
+                        "input: required field is missing; add 'input: bipolar'",
+                        "price.unit: required field is missing; add 'unit: 1.20'",
+                        "supply.min: required field is missing; add 'min: 4.5 V'",
+                        "supply.max: required field is missing; add 'max: 36 V'",
+                        "temperature.min: required field is missing; add 'min: -40 C'",
+                        "temperature.max: required field is missing; add 'max: 85 C'",
+                        "vos: neither typ nor max is given; add 'max: 2.5 uV' from the datasheet's 25 °C column (typ when it gives"
+                                + " no max)",
+                        "gbw: required field is missing; add 'gbw: 1 MHz'"),
+                c.problems().stream()
+                        .map(p -> p.field() + ": " + p.message() + "; " + p.fix())
+                        .toList());
         List<String> lines = Files.readAllLines(f);
         assertTrue(lines.contains("id: lownoise-01"));
         for (Problem p : c.problems()) {
@@ -205,12 +234,15 @@ class SheetCommandsTest {
         }
 
         // typed in, the part loads with those values and none of the template's invented optional ones
-        String typed = Files.readString(f).replace("architecture:\n", "architecture: standard\n")
-                .replace("input:\n", "input: bipolar\n").replace("  unit:\n", "  unit: 1.20\n")
+        String typed = Files.readString(f)
+                .replace("architecture:\n", "architecture: standard\n")
+                .replace("input:\n", "input: bipolar\n")
+                .replace("  unit:\n", "  unit: 1.20\n")
                 .replace("  quantity:\n", "  quantity: 100\n")
                 .replace("supply:\n  min:\n  max:\n", "supply:\n  min: 4.5 V\n  max: 36 V\n")
                 .replace("temperature:\n  min:\n  max:\n", "temperature:\n  min: -40 C\n  max: 85 C\n")
-                .replace("  max:\n", "  max: 25 uV\n").replace("gbw:\n", "gbw: 2 MHz\n");
+                .replace("  max:\n", "  max: 25 uV\n")
+                .replace("gbw:\n", "gbw: 2 MHz\n");
         Files.writeString(f, typed);
         Catalog done = CatalogLoader.load(dir, true);
         Part p = done.parts().get(0);
@@ -226,14 +258,18 @@ class SheetCommandsTest {
     void newPartRefusesABadIdAndAnExistingFile(@TempDir Path dir) throws Exception {
         CliRun bad = CliRun.of("new-part", "My_Part", "--into", dir.toString());
         assertEquals(ExitCode.FINDINGS.code(), bad.code());
-        assertEquals("id: 'My_Part' is not a valid id (lowercase letters, digits and single dashes, at most 64"
-                + " characters); write for example 'my-part'\n", bad.err());
+        assertEquals(
+                "id: 'My_Part' is not a valid id (lowercase letters, digits and single dashes, at most 64"
+                        + " characters); write for example 'my-part'\n",
+                bad.err());
         assertEquals(List.of(), names(dir));
         Path f = write(dir, "amp-01.yaml", "mine\n");
         CliRun again = CliRun.of("new-part", "amp-01", "--into", dir.toString());
         assertEquals(ExitCode.FINDINGS.code(), again.code());
-        assertEquals(f + ": the file already exists and was left as it was; choose another id, or edit the file that is"
-                + " there\n", again.err());
+        assertEquals(
+                f + ": the file already exists and was left as it was; choose another id, or edit the file that is"
+                        + " there\n",
+                again.err());
         assertEquals("mine\n", Files.readString(f));
     }
 
@@ -260,8 +296,12 @@ class SheetCommandsTest {
     void exportToTheTerminalEndsLinesWithLineFeedsOnly() {
         CliRun r = CliRun.of("export", "--csv");
         assertEquals(ExitCode.OK.code(), r.code(), r.err());
-        assertTrue(r.out().startsWith("id,title,architecture,input,factory-trim,null-pins,channels,packages,tags,price.unit,"
-                + "price.quantity,price.currency,price.breaks,\"supply.min [V]\",\"supply.max [V]\","), r.out());
+        assertTrue(
+                r.out()
+                        .startsWith(
+                                "id,title,architecture,input,factory-trim,null-pins,channels,packages,tags,price.unit,"
+                                        + "price.quantity,price.currency,price.breaks,\"supply.min [V]\",\"supply.max [V]\","),
+                r.out());
         assertEquals(49, r.outLines().size()); // the header and the demo catalog's 48 parts
         assertTrue(!r.out().contains("\r"));
     }

@@ -31,9 +31,10 @@ class StageWarningCliTest {
                 + " of 5.00 V: no output error can reach it, so the stage constrains nothing; write the largest error"
                 + " allowed at the output, such as '1 mV' (check the prefix)";
         for (String[] args : new String[][] {
-                {"budget", "prec-bip-02", "--stage", stage.toString()},
-                {"suffices", "prec-bip-02", "--stage", stage.toString()},
-                {"rank", "--stage", stage.toString(), "--top", "1"}}) {
+            {"budget", "prec-bip-02", "--stage", stage.toString()},
+            {"suffices", "prec-bip-02", "--stage", stage.toString()},
+            {"rank", "--stage", stage.toString(), "--top", "1"}
+        }) {
             CliRun r = CliRun.of(args);
             assertTrue(r.err().lines().anyMatch(expected::equals), r.toString());
             assertEquals(1, r.err().lines().filter(expected::equals).count(), r.toString());
@@ -50,24 +51,34 @@ class StageWarningCliTest {
         var tree = Commands.build(root, new PrintWriter(out), new PrintWriter(err));
         tree.execute("budget", "prec-bip-02", "--stage", stage.toString());
         tree.execute("budget", "prec-bip-02", "--stage", stage.toString());
-        assertEquals(1, err.toString().lines().filter(l -> l.contains("warning: limit:")).count(), err.toString());
+        assertEquals(
+                1,
+                err.toString()
+                        .lines()
+                        .filter(l -> l.contains("warning: limit:"))
+                        .count(),
+                err.toString());
     }
 
     @Test
     void aCurrentStageInMemoryIsUsedWithoutStageAndNamedAsItsSourceSays() throws Exception {
         // the shell hands commands its stage in memory, with the name the user knows it by and
         // its warnings without a line (the YAML behind them is not the user's)
-        StageLoader.Loaded loaded = StageLoader.parseWithWarnings("gain: 10\nlimit: 10 V\nsupply: {voltage: 5 V}\n",
-                Path.of("bridge.yaml"));
+        StageLoader.Loaded loaded = StageLoader.parseWithWarnings(
+                "gain: 10\nlimit: 10 V\nsupply: {voltage: 5 V}\n", Path.of("bridge.yaml"));
         List<Problem> unplaced = loaded.warnings().stream()
-                .map(p -> new Problem(p.severity(), p.file(), 0, 0, p.field(), p.message(), p.fix())).toList();
+                .map(p -> new Problem(p.severity(), p.file(), 0, 0, p.field(), p.message(), p.fix()))
+                .toList();
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
         RootCommand root = new RootCommand();
         root.useCurrentStage(() -> new StageSource.Given(loaded.stage(), unplaced, "bridge.yaml", "bridge.yaml"));
-        int code = Commands.build(root, new PrintWriter(out), new PrintWriter(err)).execute("budget", "prec-bip-02", "--json");
+        int code = Commands.build(root, new PrintWriter(out), new PrintWriter(err))
+                .execute("budget", "prec-bip-02", "--json");
         assertEquals(ExitCode.OK.code(), code, err.toString());
-        assertTrue(err.toString().lines().anyMatch(l -> l.startsWith("bridge.yaml: warning: limit: a limit of 10.0 V")), err.toString());
+        assertTrue(
+                err.toString().lines().anyMatch(l -> l.startsWith("bridge.yaml: warning: limit: a limit of 10.0 V")),
+                err.toString());
         assertTrue(out.toString().contains("\"stage\" : \"bridge.yaml\""), out.toString());
         try (var written = Files.list(dir)) {
             assertFalse(written.findAny().isPresent(), "nothing written to disk");

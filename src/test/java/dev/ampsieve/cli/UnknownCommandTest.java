@@ -23,14 +23,16 @@ class UnknownCommandTest {
     void aMisspelledCommandGetsTheNearestOne() {
         String[] r = run("rnak");
         assertEquals(Integer.toString(ExitCode.USAGE.code()), r[0]);
-        assertEquals("ampsieve: unknown command 'rnak'; did you mean 'rank'? ('ampsieve --help' lists the commands)\n",
+        assertEquals(
+                "ampsieve: unknown command 'rnak'; did you mean 'rank'? ('ampsieve --help' lists the commands)\n",
                 r[2].replace("\r", ""));
     }
 
     @Test
     void aWordFarFromEveryCommandGetsNoGuess() {
         String[] r = run("xyzzyq");
-        assertEquals("ampsieve: unknown command 'xyzzyq' ('ampsieve --help' lists the commands)\n", r[2].replace("\r", ""));
+        assertEquals(
+                "ampsieve: unknown command 'xyzzyq' ('ampsieve --help' lists the commands)\n", r[2].replace("\r", ""));
         assertTrue(!r[2].contains("Unmatched argument"), r[2]);
     }
 
@@ -38,7 +40,8 @@ class UnknownCommandTest {
     void anExtraWordAfterACommandIsNamedWithIt() {
         String[] r = run("rank", "--stage", "s.yaml", "extra");
         assertEquals(Integer.toString(ExitCode.USAGE.code()), r[0]);
-        assertEquals("ampsieve rank: unexpected word 'extra' ('ampsieve rank --help' shows what it takes)\n",
+        assertEquals(
+                "ampsieve rank: unexpected word 'extra' ('ampsieve rank --help' shows what it takes)\n",
                 r[2].replace("\r", ""));
     }
 }

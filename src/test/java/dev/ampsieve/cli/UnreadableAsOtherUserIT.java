@@ -69,11 +69,15 @@ class UnreadableAsOtherUserIT {
     @Test
     void eachCommandNamesTheUnreadableEntriesInOneLineEachAndGoesOn() throws Exception {
         boolean root = "root".equals(System.getProperty("user.name"));
-        boolean runuser = Files.isExecutable(Path.of("/usr/sbin/runuser")) || Files.isExecutable(Path.of("/sbin/runuser"));
+        boolean runuser =
+                Files.isExecutable(Path.of("/usr/sbin/runuser")) || Files.isExecutable(Path.of("/sbin/runuser"));
         if (root && !runuser && "true".equals(System.getenv("CI"))) {
             throw new AssertionError("CI runs as root without runuser: .ci/run must install util-linux");
         }
-        Assumptions.assumeTrue(!root || Files.isExecutable(Path.of("/usr/sbin/runuser")) || Files.isExecutable(Path.of("/sbin/runuser")),
+        Assumptions.assumeTrue(
+                !root
+                        || Files.isExecutable(Path.of("/usr/sbin/runuser"))
+                        || Files.isExecutable(Path.of("/sbin/runuser")),
                 "running as root without runuser (util-linux): cannot act as an unprivileged user");
         Map<String, String> before = snapshot();
         String stage = catalog.resolve("stages/bridge-amp.yaml").toString();
@@ -83,14 +87,15 @@ class UnreadableAsOtherUserIT {
                 List.of("rank", "--stage", stage, "--query", "zero-drift"),
                 List.of("budget", "prec-bip-02", "--stage", stage),
                 List.of("compare", "prec-bip-02", "zd-az-07", "--stage", stage));
-        String cannotReadFile = file + ": cannot read the file (permission denied: " + file
-                + "); check that it exists and is readable";
+        String cannotReadFile =
+                file + ": cannot read the file (permission denied: " + file + "); check that it exists and is readable";
         String cannotReadFolder = folder + ": cannot read (permission denied: " + folder + "); check its permissions";
         for (List<String> command : commands) {
             Result r = run(root, command);
             assertEquals(0, r.code, command + "\n" + r.err + r.out);
             // the two lines check prints for them, in catalog order, and nothing else
-            assertEquals(List.of(cannotReadFolder, cannotReadFile), r.err.lines().toList(), command.toString());
+            assertEquals(
+                    List.of(cannotReadFolder, cannotReadFile), r.err.lines().toList(), command.toString());
             assertFalse(r.out.contains("internal error"), r.out);
             assertTrue(r.out.contains("Caution"), command + ": a full answer\n" + r.out);
         }
@@ -99,8 +104,7 @@ class UnreadableAsOtherUserIT {
         assertEquals(before, snapshot(), "no catalog file changed");
     }
 
-    private record Result(int code, String out, String err) {
-    }
+    private record Result(int code, String out, String err) {}
 
     private Result run(boolean root, List<String> args) throws IOException, InterruptedException {
         String java = ProcessHandle.current().info().command().orElse("java");
@@ -122,7 +126,10 @@ class UnreadableAsOtherUserIT {
             p.destroyForcibly();
             throw new AssertionError(args + " did not finish");
         }
-        Result r = new Result(p.exitValue(), Files.readString(out, StandardCharsets.UTF_8), Files.readString(err, StandardCharsets.UTF_8));
+        Result r = new Result(
+                p.exitValue(),
+                Files.readString(out, StandardCharsets.UTF_8),
+                Files.readString(err, StandardCharsets.UTF_8));
         Files.delete(out);
         Files.delete(err);
         return r;
@@ -137,8 +144,11 @@ class UnreadableAsOtherUserIT {
                     continue;
                 }
                 try {
-                    m.put(catalog.relativize(p).toString(), HexFormat.of().formatHex(
-                            MessageDigest.getInstance("SHA-256").digest(Files.readAllBytes(p))));
+                    m.put(
+                            catalog.relativize(p).toString(),
+                            HexFormat.of()
+                                    .formatHex(
+                                            MessageDigest.getInstance("SHA-256").digest(Files.readAllBytes(p))));
                 } catch (java.security.NoSuchAlgorithmException e) {
                     throw new IllegalStateException(e);
                 }
@@ -160,7 +170,8 @@ class UnreadableAsOtherUserIT {
         }
         try (Stream<Path> all = Files.walk(to)) {
             for (Path p : all.toList()) {
-                Files.setPosixFilePermissions(p, PosixFilePermissions.fromString(Files.isDirectory(p) ? "rwxr-xr-x" : "rw-r--r--"));
+                Files.setPosixFilePermissions(
+                        p, PosixFilePermissions.fromString(Files.isDirectory(p) ? "rwxr-xr-x" : "rw-r--r--"));
             }
         }
     }

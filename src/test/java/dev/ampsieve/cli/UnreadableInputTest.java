@@ -27,7 +27,13 @@ class UnreadableInputTest {
     void devZeroAsTheStageIsOneLineAndExitOne() throws Exception {
         // the old reader filled the heap with zeros and died with an OutOfMemoryError trace
         Path catalog = DemoCatalog.copyTo(dir);
-        CliRun r = run("--catalog", catalog.toString(), "budget", "prec-bip-02", "--stage", SpecialFiles.devZero().toString());
+        CliRun r = run(
+                "--catalog",
+                catalog.toString(),
+                "budget",
+                "prec-bip-02",
+                "--stage",
+                SpecialFiles.devZero().toString());
         assertEquals(ExitCode.FINDINGS.code(), r.code(), r.toString()); // as any other unusable stage file
         assertEquals("/dev/zero: not a regular file (a character device); give a YAML file\n", r.err(), r.toString());
         assertEquals("", r.out());
@@ -46,16 +52,20 @@ class UnreadableInputTest {
     void anEmptyCatalogOptionIsAUsageErrorNotTheCurrentFolder() {
         CliRun r = run("check", "--catalog", "");
         assertEquals(ExitCode.USAGE.code(), r.code(), r.toString());
-        assertEquals("ampsieve: --catalog was given an empty folder name; give the catalog folder (--catalog DIR), or"
-                + " leave the option out to use $AMPSIEVE_CATALOG or the demo catalog\n", r.err());
+        assertEquals(
+                "ampsieve: --catalog was given an empty folder name; give the catalog folder (--catalog DIR), or"
+                        + " leave the option out to use $AMPSIEVE_CATALOG or the demo catalog\n",
+                r.err());
         assertEquals("", r.out());
     }
 
     @Test
     void anEmptyCatalogVariableIsRefusedAndAnUnsetOneMeansTheDemo() throws Exception {
-        assertEquals("AMPSIEVE_CATALOG is set but empty; set it to the catalog folder, or unset it to use the demo catalog",
+        assertEquals(
+                "AMPSIEVE_CATALOG is set but empty; set it to the catalog folder, or unset it to use the demo catalog",
                 RootCommand.emptyCatalogChoice(null, ""));
-        assertEquals("AMPSIEVE_CATALOG is set but empty; set it to the catalog folder, or unset it to use the demo catalog",
+        assertEquals(
+                "AMPSIEVE_CATALOG is set but empty; set it to the catalog folder, or unset it to use the demo catalog",
                 RootCommand.emptyCatalogChoice(null, "  "));
         assertNull(RootCommand.emptyCatalogChoice(null, null));
         assertNull(RootCommand.emptyCatalogChoice(Path.of("cat"), "")); // the option wins over the variable

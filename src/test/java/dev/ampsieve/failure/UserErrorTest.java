@@ -17,8 +17,9 @@ class UserErrorTest {
     @Test
     void exitCodesKeepTheirNumbers() {
         // the numbers scripts rely on, as the command line's --help footer states them
-        assertEquals(List.of(0, 1, 2, 3), List.of(ExitCode.OK.code(), ExitCode.FINDINGS.code(), ExitCode.USAGE.code(),
-                ExitCode.INTERNAL.code()));
+        assertEquals(
+                List.of(0, 1, 2, 3),
+                List.of(ExitCode.OK.code(), ExitCode.FINDINGS.code(), ExitCode.USAGE.code(), ExitCode.INTERNAL.code()));
     }
 
     @Test
@@ -29,7 +30,9 @@ class UserErrorTest {
                 Problem.error(new Located(f, 9, 1), "vos.max", "missing", "")));
         assertEquals(new Place(f, 5, 6, "gbw"), e.place());
         assertEquals(ExitCode.FINDINGS, e.exitCode());
-        assertEquals(List.of("amp.yaml:5:6: gbw: wrong unit; write a frequency", "amp.yaml:9:1: vos.max: missing"), e.lines());
+        assertEquals(
+                List.of("amp.yaml:5:6: gbw: wrong unit; write a frequency", "amp.yaml:9:1: vos.max: missing"),
+                e.lines());
     }
 
     @Test

@@ -55,8 +55,9 @@ class EntryTest {
     void commentsLayoutAndUnitPrefixDoNotChangeTheHashAValueDoes() throws Exception {
         Part a = load(PART);
         // the same values: a comment, flow map written as a block, 5 uV written 0.005 mV, 2 MHz as 2000 kHz
-        Part b = load(PART.replace("    vos: {typ: \"1 uV\", max: \"5 uV\"}\n",
-                "    # checked against revision B\n    vos:\n      max: \"0.005 mV\"\n      typ: \"1 uV\"\n")
+        Part b = load(PART.replace(
+                        "    vos: {typ: \"1 uV\", max: \"5 uV\"}\n",
+                        "    # checked against revision B\n    vos:\n      max: \"0.005 mV\"\n      typ: \"1 uV\"\n")
                 .replace("\"2 MHz\"", "\"2000 kHz\""));
         Part c = load(PART.replace("max: \"5 uV\"", "max: \"6 uV\""));
         assertEquals(Entry.of(a).sha256(), Entry.of(b).sha256());

@@ -32,20 +32,51 @@ class BudgetReportTest {
     void jsonHasTheDocumentedKeys() throws Exception {
         Budget b = sample();
         JsonNode j = new ObjectMapper().readTree(BudgetJson.render(b, "stage.yaml"));
-        for (String k : List.of("part", "noiseGain", "terms", "worstCaseV", "rssV", "noiseRmsV", "limitV", "yield",
-                "trimmed", "verdict", "limitingTerm", "constraints", "warnings", "caution")) {
+        for (String k : List.of(
+                "part",
+                "noiseGain",
+                "terms",
+                "worstCaseV",
+                "rssV",
+                "noiseRmsV",
+                "limitV",
+                "yield",
+                "trimmed",
+                "verdict",
+                "limitingTerm",
+                "constraints",
+                "warnings",
+                "caution")) {
             assertTrue(j.has(k), "missing key " + k);
         }
         assertEquals("test-amp", j.get("part").asText());
         assertEquals(100.0, j.get("noiseGain").asDouble(), 0.0);
         List<String> keys = new ArrayList<>();
         j.get("terms").forEach(t -> keys.add(t.get("key").asText()));
-        assertEquals(List.of("offset", "drift", "bias", "cmrr", "psrr", "open-loop-gain", "bandwidth", "resistors",
-                "aging", "noise", "operating-point", "input-crossover", "self-heating", "chopping-ripple").stream().sorted().toList(),
+        assertEquals(
+                List.of(
+                                "offset",
+                                "drift",
+                                "bias",
+                                "cmrr",
+                                "psrr",
+                                "open-loop-gain",
+                                "bandwidth",
+                                "resistors",
+                                "aging",
+                                "noise",
+                                "operating-point",
+                                "input-crossover",
+                                "self-heating",
+                                "chopping-ripple")
+                        .stream()
+                        .sorted()
+                        .toList(),
                 keys.stream().sorted().toList());
         // each term says where it comes from: the part's own figures, or where the part runs
         java.util.Map<String, String> kinds = new java.util.HashMap<>();
-        j.get("terms").forEach(t -> kinds.put(t.get("key").asText(), t.get("kind").asText()));
+        j.get("terms")
+                .forEach(t -> kinds.put(t.get("key").asText(), t.get("kind").asText()));
         assertEquals("part", kinds.get("offset"));
         assertEquals("part", kinds.get("noise"));
         for (String k : List.of("operating-point", "input-crossover", "self-heating", "chopping-ripple")) {
@@ -96,12 +127,19 @@ class BudgetReportTest {
         StageFixture s = StageFixture.follower().limitV(2e-3);
         s.criterion = dev.ampsieve.stage.Criterion.yield(0.999);
         s.trim = new dev.ampsieve.stage.Trim(true, dev.ampsieve.stage.Trim.Method.ONE_POINT, 0, 1);
-        Budget b = BudgetCalculator.compute(s.build(), PartFixture.ideal().vos(1e-3, null, null).build());
+        Budget b = BudgetCalculator.compute(
+                s.build(), PartFixture.ideal().vos(1e-3, null, null).build());
         assertEquals("fits-after-trim", b.verdict().key());
         // decided from the catalog's limits, not from every unit there could be: said so
-        assertTrue(dev.ampsieve.testing.Flat.of(BudgetText.render(b, null)).contains("yield after the one-point trim: 100 % (decided without sampling:"
-                + " even the largest error the catalog's limits allow is within the limit"), BudgetText.render(b, null));
-        JsonNode ty = new ObjectMapper().readTree(BudgetJson.render(b, null)).get("trimmed").get("yield");
+        assertTrue(
+                dev.ampsieve.testing.Flat.of(BudgetText.render(b, null))
+                        .contains("yield after the one-point trim: 100 % (decided without sampling:"
+                                + " even the largest error the catalog's limits allow is within the limit"),
+                BudgetText.render(b, null));
+        JsonNode ty = new ObjectMapper()
+                .readTree(BudgetJson.render(b, null))
+                .get("trimmed")
+                .get("yield");
         assertEquals("all-pass", ty.get("decided").asText());
         assertEquals(1.0, ty.get("low").asDouble(), 0.0);
     }
@@ -113,10 +151,12 @@ class BudgetReportTest {
         // run stops after the first block with the interval wholly under the target
         StageFixture s = StageFixture.follower().limitV(1e-3);
         s.criterion = dev.ampsieve.stage.Criterion.yield(0.999);
-        Budget b = BudgetCalculator.compute(s.build(), PartFixture.ideal().vos(1e-3, null, null).build());
+        Budget b = BudgetCalculator.compute(
+                s.build(), PartFixture.ideal().vos(1e-3, null, null).build());
         assertTrue(b.yield().high() < 0.999);
         String t = BudgetText.render(b, null);
-        assertTrue(dev.ampsieve.testing.Flat.of(t).contains("stopped once the interval lay wholly below the target"), t);
+        assertTrue(
+                dev.ampsieve.testing.Flat.of(t).contains("stopped once the interval lay wholly below the target"), t);
         assertFalse(t.contains("cleared the target"));
     }
 

@@ -51,7 +51,8 @@ class OperatingPointReportTest {
         assertTrue(text.replace("\n", " ").contains("(op) operating-point term: where the part runs"), text);
         JsonNode j = new ObjectMapper().readTree(BudgetJson.render(b, "s.yaml"));
         Map<String, String> kinds = new HashMap<>();
-        j.get("terms").forEach(t -> kinds.put(t.get("key").asText(), t.get("kind").asText()));
+        j.get("terms")
+                .forEach(t -> kinds.put(t.get("key").asText(), t.get("kind").asText()));
         assertEquals("operating-point", kinds.get("input-crossover"));
         assertEquals("part", kinds.get("drift"));
         assertEquals("input-crossover", j.get("limitingTerm").asText());
@@ -78,7 +79,11 @@ class OperatingPointReportTest {
         Comparison c = Comparison.of(BudgetCalculator.compute(s, a), BudgetCalculator.compute(s, b));
         String ct = CompareReport.text(c, "s.yaml");
         // 2.00 mV against 200 µV (NG 10 x 20 µV)
-        assertTrue(ct.lines().anyMatch(l -> l.startsWith("input crossover (op)") && l.contains("2.00 mV") && l.contains("200 µV")), ct);
+        assertTrue(
+                ct.lines()
+                        .anyMatch(l ->
+                                l.startsWith("input crossover (op)") && l.contains("2.00 mV") && l.contains("200 µV")),
+                ct);
         JsonNode cj = new ObjectMapper().readTree(CompareReport.json(c, "s.yaml"));
         for (JsonNode t : cj.get("terms")) {
             if (t.get("key").asText().equals("input-crossover")) {

@@ -26,12 +26,19 @@ class RankReportTest {
 
     private final Stage stage = stage().trim(true, 10e-6, 0.40).supply(5.0).build();
     // GOOD: 100*2 uV + 100*0.1 uV/°C*45 = 0.2 + 0.45 = 0.65 mV: fits, 2.00
-    private final Part good = part("GOOD").price(2.00).vos(null, 2e-6).drift(null, 0.1e-6).build();
+    private final Part good =
+            part("GOOD").price(2.00).vos(null, 2e-6).drift(null, 0.1e-6).build();
     // TRIMMED: 100*20 uV + 0.45 mV = 2.45 mV; after the trim 0.45 + 0.01 = 0.46 mV: fits after trim, 0.50 + 0.40
-    private final Part trimmed = part("TRIMMED").price(0.50).vos(null, 20e-6).drift(null, 0.1e-6).build();
+    private final Part trimmed =
+            part("TRIMMED").price(0.50).vos(null, 20e-6).drift(null, 0.1e-6).build();
     // CHOP: 100*5 uV + 100*0.02 uV/°C*45 = 0.5 + 0.09 = 0.59 mV: fits, 3.00
-    private final Part chop = part("CHOP").price(3.00).architecture(Architecture.CHOPPER).vos(null, 5e-6)
-            .drift(null, 0.02e-6).fchop(10e3).build();
+    private final Part chop = part("CHOP")
+            .price(3.00)
+            .architecture(Architecture.CHOPPER)
+            .vos(null, 5e-6)
+            .drift(null, 0.02e-6)
+            .fchop(10e3)
+            .build();
     // HIGHV: rated 10..36 V, fails the 5 V supply
     private final Part highv = part("HIGHV").price(0.20).supply(10, 36).build();
 
@@ -45,7 +52,8 @@ class RankReportTest {
         List<String> lines = text.lines().toList();
         assertEquals("Stage s.yaml: non-inverting, noise gain 100, 0 °C to 70 °C", lines.get(0));
         assertEquals("Limit 1.00 mV at the output (10.0 µV at the input), worst-case, quantity 1000", lines.get(1));
-        int header = lines.indexOf(lines.stream().filter(l -> l.startsWith("#  part")).findFirst().orElseThrow());
+        int header = lines.indexOf(
+                lines.stream().filter(l -> l.startsWith("#  part")).findFirst().orElseThrow());
         // TRIMMED 0.50 + 0.40 = 0.90 first, then GOOD 2.00, then CHOP 3.00
         assertTrue(lines.get(header + 1).matches("1  TRIMMED\\s+\\+trim\\s+0\\.90\\s+460 µV.*"), lines.get(header + 1));
         assertTrue(lines.get(header + 2).matches("2  GOOD\\s+fits\\s+2\\.00\\s+650 µV.*"), lines.get(header + 2));
@@ -81,7 +89,8 @@ class RankReportTest {
         assertEquals("warranted", j.get("advice").get("trim").get("status").asText());
         // GOOD 2.00 - (0.50 + 0.40) = 1.10 per unit
         assertEquals(1.10, j.get("advice").get("trim").get("savingPerUnit").asDouble(), 1e-12);
-        assertEquals("not-warranted", j.get("advice").get("zeroDrift").get("status").asText());
+        assertEquals(
+                "not-warranted", j.get("advice").get("zeroDrift").get("status").asText());
         assertTrue(j.get("advice").get("noFit").isNull());
         assertEquals(Caution.TEXT, j.get("caution").asText());
     }
@@ -102,7 +111,10 @@ class RankReportTest {
         Comparison c = Comparison.of(e.compute(stage, good), e.compute(stage, chop));
         String text = CompareReport.text(c, "s.yaml");
         // initial offset: GOOD 200 µV against CHOP 500 µV, 2.5 times
-        assertTrue(text.lines().anyMatch(l -> l.matches("initial offset\\s+200 µV\\s+500 µV\\s+GOOD\\s+300 µV \\(2\\.5 times\\)")),
+        assertTrue(
+                text.lines()
+                        .anyMatch(l ->
+                                l.matches("initial offset\\s+200 µV\\s+500 µV\\s+GOOD\\s+300 µV \\(2\\.5 times\\)")),
                 text);
         assertTrue(text.contains("Both fit; GOOD costs 1.00 USD less per unit (1000.00 USD over 1000 units)"), text);
         assertTrue(dev.ampsieve.testing.Flat.of(text).endsWith(Caution.TEXT));
@@ -124,7 +136,8 @@ class RankReportTest {
         // real engine; follower fed through 10 k at 25 °C, limit 10 mV. FULL has every figure; NOIB lacks ib and
         // ios, so its bias term is the bipolar estimate 10 k x 500 nA x 1.5 = 7.5 mV (budget/Assumed): it fits,
         // but on an estimate, and being cheaper it is the pick
-        dev.ampsieve.fixtures.StageFixture sf = dev.ampsieve.fixtures.StageFixture.follower().limitV(10e-3).temps(25, 25);
+        dev.ampsieve.fixtures.StageFixture sf =
+                dev.ampsieve.fixtures.StageFixture.follower().limitV(10e-3).temps(25, 25);
         sf.rs = 10e3;
         Stage s = sf.build();
         dev.ampsieve.fixtures.PartFixture full = dev.ampsieve.fixtures.PartFixture.ideal();
@@ -139,9 +152,12 @@ class RankReportTest {
         assertTrue(text.lines().anyMatch(l -> l.matches("1  noib\\s+fits\\*\\s+.*")), text);
         assertTrue(text.lines().anyMatch(l -> l.matches("2  full\\s+fits\\s+.*")), text);
         assertTrue(text.contains("* after the verdict: it rests on an estimated or typical-only figure"), text);
-        assertTrue(dev.ampsieve.testing.Flat.of(text).contains(
-                "Pick noib: 1.00 USD per unit, fits as it is; worst-case 7.50 mV of 10.0 mV (margin 25 %); resting on"
-                        + " estimated or typical-only figures for bias current."), text);
+        assertTrue(
+                dev.ampsieve.testing.Flat.of(text)
+                        .contains(
+                                "Pick noib: 1.00 USD per unit, fits as it is; worst-case 7.50 mV of 10.0 mV (margin 25 %); resting on"
+                                        + " estimated or typical-only figures for bias current."),
+                text);
         JsonNode j = new ObjectMapper().readTree(RankReport.json(r, "s.yaml", null, 15));
         JsonNode first = j.get("candidates").get(0);
         assertEquals("noib", first.get("part").asText());

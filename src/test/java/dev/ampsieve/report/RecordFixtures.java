@@ -13,13 +13,13 @@ import java.util.List;
 
 /** Records of the demo catalog's bridge stage, and a catalog holding one part with hostile strings. */
 final class RecordFixtures {
-    private RecordFixtures() {
-    }
+    private RecordFixtures() {}
 
     static final Path BRIDGE = Path.of("demo-catalog/stages/bridge-amp.yaml");
 
     /** The title and notes of the hostile part, as a YAML double-quoted scalar gives them (\e is ESC). */
     static final String EVIL_TITLE = "<script>alert(1)</script>";
+
     static final String EVIL_NOTES = "a | b\u001b[31m red\nnext =cmd </script> --> x";
 
     /** zd-chop-01 of the demo catalog under another id, with hostile strings in title, notes and source. */
@@ -53,8 +53,8 @@ final class RecordFixtures {
     static DecisionRecord bridge() throws Exception {
         Catalog c = CatalogLoader.load(Path.of("demo-catalog"), false);
         Stage s = StageLoader.load(BRIDGE);
-        return DecisionRecord.build(s, BRIDGE.toString(), "demo-catalog", c.parts(), null, false, "2026-12-02T08:00:00Z",
-                "test");
+        return DecisionRecord.build(
+                s, BRIDGE.toString(), "demo-catalog", c.parts(), null, false, "2026-12-02T08:00:00Z", "test");
     }
 
     static DecisionRecord evil(Path dir) throws Exception {
@@ -64,8 +64,8 @@ final class RecordFixtures {
         Catalog c = CatalogLoader.load(cat, true);
         Part p = c.find("evil-01").orElseThrow();
         Stage s = StageLoader.load(BRIDGE);
-        return DecisionRecord.build(s, BRIDGE.toString(), cat.toString(), c.parts(), List.of(p), false,
-                "2026-12-02T08:00:00Z", "test");
+        return DecisionRecord.build(
+                s, BRIDGE.toString(), cat.toString(), c.parts(), List.of(p), false, "2026-12-02T08:00:00Z", "test");
     }
 
     static Path write(Path dir, String name, String text) throws IOException {

@@ -34,8 +34,21 @@ class RecordHtmlTest {
 
     /** The ten error terms of a budget (TermResult's keys; README "Error terms"). */
     /** The part's ten terms and the four of its operating point; the bridge stage names no board-level source. */
-    static final Set<String> TERMS = Set.of("offset", "drift", "bias", "cmrr", "psrr", "open-loop-gain", "bandwidth",
-            "resistors", "aging", "noise", "operating-point", "input-crossover", "self-heating", "chopping-ripple");
+    static final Set<String> TERMS = Set.of(
+            "offset",
+            "drift",
+            "bias",
+            "cmrr",
+            "psrr",
+            "open-loop-gain",
+            "bandwidth",
+            "resistors",
+            "aging",
+            "noise",
+            "operating-point",
+            "input-crossover",
+            "self-heating",
+            "chopping-ripple");
 
     private static String row(Element table, String name) {
         for (Element tr : table.select("tr")) {
@@ -66,7 +79,8 @@ class RecordHtmlTest {
     @Test
     void shortlistEachPartsTermsAndVerdict() {
         // the three cheapest parts that fit, as 'ampsieve rank --stage demo-catalog/stages/bridge-amp.yaml' lists them
-        assertEquals(List.of("zd-chop-01", "zd-az-06", "zd-chop-03"),
+        assertEquals(
+                List.of("zd-chop-01", "zd-az-06", "zd-chop-03"),
                 record.facts().parts().stream().map(p -> p.id()).toList());
         for (String id : List.of("zd-chop-01", "zd-az-06", "zd-chop-03")) {
             Element h = doc.getElementById("part-" + id);
@@ -74,7 +88,9 @@ class RecordHtmlTest {
             Element info = h.nextElementSibling();
             assertEquals("fits", row(info, "verdict"), id);
             assertEquals("invented demo data", row(info, "source"), id);
-            assertTrue(row(info, "catalog file").matches(".*demo-catalog/zero-drift/[a-z-]+\\.yaml:\\d+"), row(info, "catalog file"));
+            assertTrue(
+                    row(info, "catalog file").matches(".*demo-catalog/zero-drift/[a-z-]+\\.yaml:\\d+"),
+                    row(info, "catalog file"));
             assertTrue(row(info, "entry SHA-256").matches("[0-9a-f]{64}"));
             // the part's own chart: one bar per term, each of the fourteen terms once
             Element svg = chartAfter(h);
@@ -84,8 +100,14 @@ class RecordHtmlTest {
         }
         // zd-chop-01: 97.61 × 5 µV (vos.max in zero-drift/chopper.yaml) = 488 µV of initial offset (by hand)
         Element budget = doc.getElementById("part-zd-chop-01").parent().select("table").stream()
-                .filter(t -> t.text().contains("how (operands)")).findFirst().orElseThrow();
-        assertEquals("488 µV", budget.select("tr:has(td:containsOwn(initial offset)) td").get(1).text());
+                .filter(t -> t.text().contains("how (operands)"))
+                .findFirst()
+                .orElseThrow();
+        assertEquals(
+                "488 µV",
+                budget.select("tr:has(td:containsOwn(initial offset)) td")
+                        .get(1)
+                        .text());
         assertTrue(budget.text().contains("NG x vos 5.00 µV"), "the operands of the term");
     }
 
@@ -116,7 +138,9 @@ class RecordHtmlTest {
         // 28 parts meet the hard constraints ('ampsieve rank' on the bridge stage: "28 budgeted"), each with a price
         assertEquals(28, rows);
         assertEquals(rows, svg.select("circle.candidate").size());
-        long onFront = ranking.select("tbody tr").stream().filter(tr -> tr.select("td").last().text().equals("yes")).count();
+        long onFront = ranking.select("tbody tr").stream()
+                .filter(tr -> tr.select("td").last().text().equals("yes"))
+                .count();
         assertEquals(onFront, svg.select("circle.pareto").size());
         assertEquals(1, svg.select("polyline.pareto").size());
         // errors span 1.86 mV (zd-az-06) to 672 mV (fast-01), so the log axis runs 1 mV to 1 V over 300 px
@@ -140,7 +164,8 @@ class RecordHtmlTest {
         assertEquals(RecordFixtures.BRIDGE.toString(), f.stagePath());
         // self-contained: no external script, style sheet, image or font
         assertTrue(doc.select("script[src], link, img[src], iframe, object").isEmpty());
-        assertFalse(html.replace("http://www.w3.org/2000/svg", "").matches("(?s).*(https?:|//[a-z]).*"),
+        assertFalse(
+                html.replace("http://www.w3.org/2000/svg", "").matches("(?s).*(https?:|//[a-z]).*"),
                 "no address but the SVG namespace");
         // print layout: each part begins a page
         assertEquals(3, doc.select("div.page-break").size());
@@ -155,7 +180,9 @@ class RecordHtmlTest {
         // only our own JSON block is a script; the title's script is text in the heading
         assertEquals(1, e.select("script").size());
         assertEquals("ampsieve-decision-record", e.selectFirst("script").id());
-        assertEquals("Part evil-01: " + RecordFixtures.EVIL_TITLE, e.getElementById("part-evil-01").text());
+        assertEquals(
+                "Part evil-01: " + RecordFixtures.EVIL_TITLE,
+                e.getElementById("part-evil-01").text());
         // ESC and the line feed shown by text.Visible, never written raw
         assertFalse(h.contains("\u001b"));
         Element info = e.getElementById("part-evil-01").nextElementSibling();
@@ -163,7 +190,9 @@ class RecordHtmlTest {
         assertEquals("=cmd|calc", row(info, "source"));
         // the block survives a </script> and a --> inside a string, and gives the notes back exactly
         RecordFacts f = RecordReport.read(h, Path.of("evil.html"));
-        assertEquals(RecordFixtures.EVIL_NOTES, f.parts().get(0).entry().fields().get("notes"));
-        assertEquals(RecordFixtures.EVIL_TITLE, f.parts().get(0).entry().fields().get("title"));
+        assertEquals(
+                RecordFixtures.EVIL_NOTES, f.parts().get(0).entry().fields().get("notes"));
+        assertEquals(
+                RecordFixtures.EVIL_TITLE, f.parts().get(0).entry().fields().get("title"));
     }
 }

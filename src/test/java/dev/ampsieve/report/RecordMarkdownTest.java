@@ -44,10 +44,13 @@ class RecordMarkdownTest {
         assertTrue(md.contains("| verdict | fits |"));
         // zd-chop-01: 97.61 × 5 µV = 488 µV of initial offset (by hand); the ten terms each a row of every part
         assertTrue(md.contains("| initial offset | 488 µV |"));
-        assertEquals(3, md.lines().filter(l -> l.startsWith("| initial offset |")).count());
+        assertEquals(
+                3, md.lines().filter(l -> l.startsWith("| initial offset |")).count());
         assertTrue(md.contains(Caution.TEXT));
         RecordFacts f = RecordReport.read(md, Path.of("r.md"));
-        assertEquals(d.facts().parts().stream().map(p -> p.entry()).toList(), f.parts().stream().map(p -> p.entry()).toList());
+        assertEquals(
+                d.facts().parts().stream().map(p -> p.entry()).toList(),
+                f.parts().stream().map(p -> p.entry()).toList());
         assertEquals("zd-chop-01", f.cheapestFit().id());
     }
 
@@ -56,7 +59,8 @@ class RecordMarkdownTest {
         String md = RecordReport.markdown(RecordFixtures.evil(dir));
         assertFalse(md.contains("<script"), "no tag a Markdown renderer would pass through");
         assertFalse(md.contains("\u001b"));
-        String notes = md.lines().filter(l -> l.startsWith("| notes |")).findFirst().orElseThrow();
+        String notes =
+                md.lines().filter(l -> l.startsWith("| notes |")).findFirst().orElseThrow();
         // two cells: the pipe inside the notes is escaped, the line feed and ESC shown as \n and \x1b
         List<String> c = cells(notes);
         assertEquals(2, c.size(), notes);
@@ -64,6 +68,7 @@ class RecordMarkdownTest {
         assertTrue(md.contains("## Part evil-01: &lt;script&gt;alert(1)&lt;/script&gt;"));
         // the comment holding the block is not ended by the --> in the notes
         RecordFacts f = RecordReport.read(md, Path.of("evil.md"));
-        assertEquals(RecordFixtures.EVIL_NOTES, f.parts().get(0).entry().fields().get("notes"));
+        assertEquals(
+                RecordFixtures.EVIL_NOTES, f.parts().get(0).entry().fields().get("notes"));
     }
 }

@@ -40,10 +40,11 @@ class RecordRenderingTest {
     static void write() throws Exception {
         if (!Files.isExecutable(CHROMIUM)) {
             if ("true".equals(System.getenv("CI"))) {
-                fail("chromium is not installed at " + CHROMIUM + " (CI=true: 'apt-get install chromium', as .ci/run does)");
+                fail("chromium is not installed at " + CHROMIUM
+                        + " (CI=true: 'apt-get install chromium', as .ci/run does)");
             }
-            Assumptions.abort("chromium is not installed at " + CHROMIUM + "; install the Debian package chromium to run"
-                    + " the rendering checks of decision records");
+            Assumptions.abort("chromium is not installed at " + CHROMIUM
+                    + "; install the Debian package chromium to run" + " the rendering checks of decision records");
         }
         record = RecordFixtures.bridge();
         html = dir.resolve("bridge.html");
@@ -51,13 +52,22 @@ class RecordRenderingTest {
     }
 
     private static void chromium(String... args) throws Exception {
-        List<String> cmd = new ArrayList<>(List.of(CHROMIUM.toString(), "--headless", "--no-sandbox", "--disable-gpu",
-                "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync",
+        List<String> cmd = new ArrayList<>(List.of(
+                CHROMIUM.toString(),
+                "--headless",
+                "--no-sandbox",
+                "--disable-gpu",
+                "--no-first-run",
+                "--disable-background-networking",
+                "--disable-component-update",
+                "--disable-sync",
                 "--user-data-dir=" + Files.createTempDirectory(dir, "profile")));
         cmd.addAll(List.of(args));
         cmd.add(html.toUri().toString());
-        Process p = new ProcessBuilder(cmd).redirectErrorStream(true)
-                .redirectOutput(dir.resolve("chromium.log").toFile()).start();
+        Process p = new ProcessBuilder(cmd)
+                .redirectErrorStream(true)
+                .redirectOutput(dir.resolve("chromium.log").toFile())
+                .start();
         if (!p.waitFor(180, TimeUnit.SECONDS)) {
             p.destroyForcibly();
             fail("chromium did not finish within 180 s");

@@ -45,7 +45,8 @@ class SourceReferredTest {
     void inputColumnDividesByTheSignalGain() throws Exception {
         // offset 50 µV max: at the output NG x vos = 11 x 50 µV = 550 µV (Franco ch. 5);
         // at the source 550 µV / 10 = 55 µV: the offset a source-side error of 55 µV would also give
-        Budget b = BudgetCalculator.compute(stage(), PartFixture.ideal().vos(null, 50e-6, null).build());
+        Budget b = BudgetCalculator.compute(
+                stage(), PartFixture.ideal().vos(null, 50e-6, null).build());
         assertEquals(550e-6, b.term("offset").outputV(), 1e-15);
         assertEquals(55e-6, b.term("offset").inputV(), 1e-15);
         JsonNode j = new ObjectMapper().readTree(BudgetJson.render(b, "stage.yaml"));

@@ -33,11 +33,16 @@ class TransimpedanceJsonTest {
         // each term at the source is a current: output volts over 10 Mohm, named inputA, and no inputV
         for (JsonNode t : j.get("terms")) {
             assertFalse(t.has("inputV"), t.toString());
-            assertEquals(t.get("outputV").asDouble() / 10e6, t.get("inputA").asDouble(), 1e-30 + t.get("outputV").asDouble() * 1e-22);
+            assertEquals(
+                    t.get("outputV").asDouble() / 10e6,
+                    t.get("inputA").asDouble(),
+                    1e-30 + t.get("outputV").asDouble() * 1e-22);
         }
 
-        JsonNode plain = new ObjectMapper().readTree(BudgetJson.render(
-                BudgetCalculator.compute(StageLoader.parse("gain: 10\nlimit: 1 mV\n", null), f.build()), "s.yaml"));
+        JsonNode plain = new ObjectMapper()
+                .readTree(BudgetJson.render(
+                        BudgetCalculator.compute(StageLoader.parse("gain: 10\nlimit: 1 mV\n", null), f.build()),
+                        "s.yaml"));
         assertFalse(plain.has("signalGainOhms"));
         assertFalse(plain.get("terms").get(0).has("inputA"));
     }

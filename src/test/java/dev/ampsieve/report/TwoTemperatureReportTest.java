@@ -23,7 +23,9 @@ class TwoTemperatureReportTest {
         // (1.8 + 0.8) x 10 µV = 26 µV (TwoTemperatureTrimTest)
         StageFixture s = StageFixture.follower().temps(-40, 85).limitV(1e-3);
         s.trim = new Trim(true, Trim.Method.TWO_TEMPERATURE, 10e-6, 0, 0, 50);
-        Budget b = BudgetCalculator.compute(s.build(), PartFixture.ideal().vos(null, 100e-6, null).drift(null, 1e-6).build());
+        Budget b = BudgetCalculator.compute(
+                s.build(),
+                PartFixture.ideal().vos(null, 100e-6, null).drift(null, 1e-6).build());
         JsonNode tr = new ObjectMapper().readTree(BudgetJson.render(b, null)).get("trimmed");
         assertEquals("two-temperature", tr.get("method").asText());
         assertEquals(26e-6, tr.get("worstCaseV").asDouble(), 1e-15);

@@ -36,7 +36,9 @@ class UndecidedReportTest {
         s.criterion = Criterion.yield(AT_TARGET);
         s.trials = 2000;
         s.maxTrials = 20_000;
-        return Ranker.rank(s.build(), List.of(part("p-low", 2e-3, 0.5), part("p-mid", 1e-3, 1.0), part("p-top", 0.5e-3, 3.0)),
+        return Ranker.rank(
+                s.build(),
+                List.of(part("p-low", 2e-3, 0.5), part("p-mid", 1e-3, 1.0), part("p-top", 0.5e-3, 3.0)),
                 BudgetCalculator::compute);
     }
 
@@ -45,7 +47,8 @@ class UndecidedReportTest {
         String text = RankReport.text(ranking(), "s.yaml", null, 10);
         String mid = text.lines().filter(l -> l.contains("p-mid")).findFirst().orElseThrow();
         assertTrue(mid.contains(" undecided"), mid);
-        // p-top: every unit within 1.5 mV, yield 100 % without sampling: margin 1 - 0.957083 = +4.29 points (rounded down)
+        // p-top: every unit within 1.5 mV, yield 100 % without sampling: margin 1 - 0.957083 = +4.29 points (rounded
+        // down)
         String top = text.lines().filter(l -> l.contains("p-top")).findFirst().orElseThrow();
         assertTrue(top.contains("+4.29 %"), top);
         assertTrue(text.contains("margin: lower end of the yield's 95 % interval minus the target"), text);
@@ -60,7 +63,9 @@ class UndecidedReportTest {
         JsonNode j = JsonSupport.MAPPER.readTree(RankReport.json(r, "s.yaml", null, 10));
         assertEquals("undecided", j.get("candidates").get(1).get("verdict").asText());
         assertEquals(1 - AT_TARGET, j.get("candidates").get(0).get("margin").asDouble(), 1e-12);
-        assertEquals("p-mid", j.get("advice").get("undecided").get("part").get("part").asText());
+        assertEquals(
+                "p-mid",
+                j.get("advice").get("undecided").get("part").get("part").asText());
         assertEquals(20_000, j.get("advice").get("undecided").get("maxTrials").asInt());
     }
 
@@ -71,7 +76,8 @@ class UndecidedReportTest {
         Budget b = BudgetCalculator.compute(s.build(), part("p-mid", 1e-3, 1.0));
         var by = BudgetCalculator.yieldBySigma(b);
         String text = BudgetText.render(b, by, "s.yaml", 100);
-        String line = text.lines().filter(l -> l.startsWith("Max-to-σ")).findFirst().orElseThrow();
+        String line =
+                text.lines().filter(l -> l.startsWith("Max-to-σ")).findFirst().orElseThrow();
         assertTrue(line.startsWith("Max-to-σ   2: 100.00 % (100.00..100.00), 3 (stage): "), line);
         assertTrue(line.contains(", 4: "), line);
         JsonNode j = JsonSupport.MAPPER.readTree(BudgetJson.render(b, by, "s.yaml"));

@@ -38,13 +38,22 @@ class VerdictLineTest {
 
     // FIT by hand, NG 10: offset 10 x 10 uV = 0.1 mV; drift estimated 10 uV / 298 K x 45 °C x 10 = 15 uV;
     // bias 10 kohm x 1 nA = 10 uV, ios assumed = ib: 10 kohm x 1 nA / 2 = 5 uV; noise well under 0.5 mV: fits 1 mV
-    private static final Part FIT = part("FIT").price(2.00).vos(null, 10e-6).ib(null, 1e-9)
-            .noise(10e-9, 10.0, 1e-12, 100.0).build();
+    private static final Part FIT = part("FIT")
+            .price(2.00)
+            .vos(null, 10e-6)
+            .ib(null, 1e-9)
+            .noise(10e-9, 10.0, 1e-12, 100.0)
+            .build();
     // CHEAP: offset alone 10 x 10 mV = 100 mV, a hundred times the limit
-    private static final Part CHEAP = part("CHEAP").price(0.50).vos(null, 10e-3).ib(null, 1e-9)
-            .noise(10e-9, 10.0, 1e-12, 100.0).build();
+    private static final Part CHEAP = part("CHEAP")
+            .price(0.50)
+            .vos(null, 10e-3)
+            .ib(null, 1e-9)
+            .noise(10e-9, 10.0, 1e-12, 100.0)
+            .build();
     // NOEN: as FIT but the catalog lacks its voltage noise
-    private static final Part NOEN = part("NOEN").price(3.00).vos(null, 10e-6).ib(null, 1e-9).build();
+    private static final Part NOEN =
+            part("NOEN").price(3.00).vos(null, 10e-6).ib(null, 1e-9).build();
 
     private static Stage stage(String yaml) throws Exception {
         return StageLoader.parse(yaml, Path.of("s.yaml"));
@@ -55,27 +64,52 @@ class VerdictLineTest {
         Budget b = BudgetCalculator.compute(stage(BARE), FIT);
         String text = BudgetText.render(b, "s.yaml");
         List<String> lines = text.lines().toList();
-        int verdict = lines.indexOf(lines.stream().filter(l -> l.startsWith("Verdict    fits")).findFirst().orElseThrow());
+        int verdict = lines.indexOf(lines.stream()
+                .filter(l -> l.startsWith("Verdict    fits"))
+                .findFirst()
+                .orElseThrow());
         assertTrue(lines.get(verdict + 1).startsWith("           but open-loop gain, "), text);
         assertTrue(Flat.of(text).contains("but " + LEFT_OUT), text);
 
         JsonNode j = new ObjectMapper().readTree(BudgetJson.render(b, "s.yaml"));
         List<String> pairs = new ArrayList<>();
-        j.get("notCounted").forEach(n -> pairs.add(n.get("term").asText() + "/" + n.get("reason").asText()));
+        j.get("notCounted")
+                .forEach(n ->
+                        pairs.add(n.get("term").asText() + "/" + n.get("reason").asText()));
         // in the order of the terms (error-model.md)
-        assertEquals(List.of("cmrr/no-common-mode-swing", "psrr/no-supply-variation", "open-loop-gain/no-full-scale-output",
-                "bandwidth/no-full-scale-output", "resistors/no-full-scale-output", "aging/no-service-life",
-                "operating-point/no-supply-voltage", "self-heating/no-load-resistance"), pairs);
+        assertEquals(
+                List.of(
+                        "cmrr/no-common-mode-swing",
+                        "psrr/no-supply-variation",
+                        "open-loop-gain/no-full-scale-output",
+                        "bandwidth/no-full-scale-output",
+                        "resistors/no-full-scale-output",
+                        "aging/no-service-life",
+                        "operating-point/no-supply-voltage",
+                        "self-heating/no-load-resistance"),
+                pairs);
     }
 
     @Test
     void aStageWithEveryValueHasNothingToSay() throws Exception {
-        Part aging = part("AGED").price(2.00).vos(null, 10e-6).ib(null, 1e-9).noise(10e-9, 10.0, 1e-12, 100.0)
-                .aging(5e-6, 1000 * 3600.0).build();
-        Budget b = BudgetCalculator.compute(stage(BARE + "full-scale-output: 1 V\nsupply: {voltage: 10 V, variation: 0.5 V}\n"
-                + "resistor-ratio: {tolerance: 0.1 %}\nservice-life: 1 y\nload-resistance: 10 kohm\n"), aging);
+        Part aging = part("AGED")
+                .price(2.00)
+                .vos(null, 10e-6)
+                .ib(null, 1e-9)
+                .noise(10e-9, 10.0, 1e-12, 100.0)
+                .aging(5e-6, 1000 * 3600.0)
+                .build();
+        Budget b = BudgetCalculator.compute(
+                stage(BARE + "full-scale-output: 1 V\nsupply: {voltage: 10 V, variation: 0.5 V}\n"
+                        + "resistor-ratio: {tolerance: 0.1 %}\nservice-life: 1 y\nload-resistance: 10 kohm\n"),
+                aging);
         assertTrue(!BudgetText.render(b, "s.yaml").contains("not counted:"));
-        assertEquals(0, new ObjectMapper().readTree(BudgetJson.render(b, "s.yaml")).get("notCounted").size());
+        assertEquals(
+                0,
+                new ObjectMapper()
+                        .readTree(BudgetJson.render(b, "s.yaml"))
+                        .get("notCounted")
+                        .size());
     }
 
     @Test
@@ -116,9 +150,21 @@ class VerdictLineTest {
         assertTrue(allFront.contains("FIT") && allFront.contains("CHEAP"), allFront);
 
         ObjectMapper m = new ObjectMapper();
-        assertEquals("[\"FIT\"]", m.readTree(RankReport.json(r, "s.yaml", null, 15)).get("pareto").toString());
-        assertEquals("[\"CHEAP\",\"FIT\"]", m.readTree(RankReport.json(r, "s.yaml", null, 15, true)).get("pareto").toString());
-        assertEquals(8, m.readTree(RankReport.json(r, "s.yaml", null, 15)).get("candidates").get(0).get("notCounted").size());
+        assertEquals(
+                "[\"FIT\"]",
+                m.readTree(RankReport.json(r, "s.yaml", null, 15)).get("pareto").toString());
+        assertEquals(
+                "[\"CHEAP\",\"FIT\"]",
+                m.readTree(RankReport.json(r, "s.yaml", null, 15, true))
+                        .get("pareto")
+                        .toString());
+        assertEquals(
+                8,
+                m.readTree(RankReport.json(r, "s.yaml", null, 15))
+                        .get("candidates")
+                        .get(0)
+                        .get("notCounted")
+                        .size());
     }
 
     @Test

@@ -20,8 +20,21 @@ class YieldMissTest {
     private static Budget withYield(Stage s, Verdict v, YieldResult y) {
         Part p = part("amp-1").build();
         Budget b = Budgets.budget(s, p, 0.5e-3, 0.2e-3, 0.2e-3, v);
-        return new Budget(p, s, b.noiseGain(), b.terms(), b.worstCaseV(), b.rssV(), 0, b.limitV(), y, b.trimmed(), v,
-                b.limitingTerm(), List.of(), List.of());
+        return new Budget(
+                p,
+                s,
+                b.noiseGain(),
+                b.terms(),
+                b.worstCaseV(),
+                b.rssV(),
+                0,
+                b.limitV(),
+                y,
+                b.trimmed(),
+                v,
+                b.limitingTerm(),
+                List.of(),
+                List.of());
     }
 
     @Test
@@ -30,12 +43,15 @@ class YieldMissTest {
         // 9986 of 10000 seen (99.86 %) against 99.9 %: below; 9993 of 10000 (99.93 %): at it, but the
         // Wilson lower end is 0.99856 (Wilson 1927, z = 1.96), under the target
         Budget b = withYield(s, Verdict.NO_FIT, new YieldResult(0.9993, 0.99856, 0.99966, 10000, "sampled"));
-        assertEquals("the yield as it is is 99.930 %, but the lower end of its 95 % interval, 99.856 %, is below the"
-                + " 99.900 % target: the sample cannot show the target is met (more trials may settle it)",
+        assertEquals(
+                "the yield as it is is 99.930 %, but the lower end of its 95 % interval, 99.856 %, is below the"
+                        + " 99.900 % target: the sample cannot show the target is met (more trials may settle it)",
                 BudgetText.yieldMiss(b));
-        assertNull(BudgetText.yieldMiss(withYield(s, Verdict.NO_FIT, new YieldResult(0.9986, 0.9979, 0.9991, 10000, "sampled"))));
-        assertNull(BudgetText.yieldMiss(withYield(s, Verdict.FITS, new YieldResult(0.9999, 0.9994, 1, 10000, "sampled"))));
-        assertNull(BudgetText.yieldMiss(withYield(stage().build(), Verdict.NO_FIT,
-                new YieldResult(0.9993, 0.99856, 0.99966, 10000, "sampled"))));
+        assertNull(BudgetText.yieldMiss(
+                withYield(s, Verdict.NO_FIT, new YieldResult(0.9986, 0.9979, 0.9991, 10000, "sampled"))));
+        assertNull(
+                BudgetText.yieldMiss(withYield(s, Verdict.FITS, new YieldResult(0.9999, 0.9994, 1, 10000, "sampled"))));
+        assertNull(BudgetText.yieldMiss(withYield(
+                stage().build(), Verdict.NO_FIT, new YieldResult(0.9993, 0.99856, 0.99966, 10000, "sampled"))));
     }
 }

@@ -1,7 +1,6 @@
 package dev.ampsieve.search;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 
 import dev.ampsieve.catalog.Architecture;
@@ -42,7 +41,9 @@ class CatalogFingerprintTest {
         Object[] values = new Object[rc.length];
         for (int i = 0; i < rc.length; i++) {
             types[i] = rc[i].getType();
-            values[i] = changes.containsKey(rc[i].getName()) ? changes.get(rc[i].getName()) : rc[i].getAccessor().invoke(p);
+            values[i] = changes.containsKey(rc[i].getName())
+                    ? changes.get(rc[i].getName())
+                    : rc[i].getAccessor().invoke(p);
         }
         return Part.class.getDeclaredConstructor(types).newInstance(values);
     }
@@ -66,12 +67,21 @@ class CatalogFingerprintTest {
         double vosMax = p.vos().max() == null ? 1e-3 : p.vos().max();
         Map<String, UnaryOperator<Map<String, Object>>> cases = new LinkedHashMap<>();
         // a number two records deep, changed in its last bit
-        cases.put("vos.max", m -> put(m, "vos", new Spread(p.vos().typ(), Math.nextUp(vosMax), p.vos().maxOverTemp())));
+        cases.put(
+                "vos.max",
+                m -> put(
+                        m,
+                        "vos",
+                        new Spread(p.vos().typ(), Math.nextUp(vosMax), p.vos().maxOverTemp())));
         cases.put("gbw", m -> put(m, "gbw", Math.nextUp(p.gbw())));
         cases.put("channels", m -> put(m, "channels", p.channels() + 1));
         cases.put("nullPins", m -> put(m, "nullPins", !p.nullPins()));
-        cases.put("architecture", m -> put(m, "architecture",
-                p.architecture() == Architecture.CHOPPER ? Architecture.AUTO_ZERO : Architecture.CHOPPER));
+        cases.put(
+                "architecture",
+                m -> put(
+                        m,
+                        "architecture",
+                        p.architecture() == Architecture.CHOPPER ? Architecture.AUTO_ZERO : Architecture.CHOPPER));
         cases.put("notes", m -> put(m, "notes", p.notes() + "."));
         cases.put("slew given or not", m -> put(m, "slew", p.slew() == null ? 1.0 : null));
         // the same characters split differently between two fields, or between list items

@@ -73,8 +73,7 @@ class IndexFolderSafetyTest {
         }
     }
 
-    record Opened(PartIndex.Source source, Path location, List<FolderRefusal> refusals) {
-    }
+    record Opened(PartIndex.Source source, Path location, List<FolderRefusal> refusals) {}
 
     private static List<String> ids(PartIndex index, String query) throws Exception {
         return index.search(QueryLanguage.parse(query)).stream().map(Hit::id).toList();
@@ -104,7 +103,8 @@ class IndexFolderSafetyTest {
         Files.createSymbolicLink(inside, elsewhere);
         Map<String, String> before = snapshotWithout(base, "cache");
         Opened o = open();
-        assertEquals(before, snapshotWithout(base, "cache"), "neither the folder behind the link nor the catalog changed");
+        assertEquals(
+                before, snapshotWithout(base, "cache"), "neither the folder behind the link nor the catalog changed");
         assertEquals(FolderRefusal.Reason.SYMBOLIC_LINK, o.refusals().get(0).reason());
         assertEquals(cacheFolder(), o.location());
         assertTrue(snapshot(cacheFolder()).containsKey(IndexFolder.MARKER), "the cache folder it made is marked");
@@ -138,7 +138,8 @@ class IndexFolderSafetyTest {
         Map<String, String> before = snapshot(catalog);
         Opened o = open();
         assertEquals(before, snapshot(catalog), "no index files were added beside the user's file");
-        assertEquals(List.of(new FolderRefusal(inside, FolderRefusal.Reason.FOREIGN_ENTRY, inside.resolve("notes.txt"))),
+        assertEquals(
+                List.of(new FolderRefusal(inside, FolderRefusal.Reason.FOREIGN_ENTRY, inside.resolve("notes.txt"))),
                 o.refusals());
         assertEquals(cacheFolder(), o.location());
     }
@@ -178,7 +179,8 @@ class IndexFolderSafetyTest {
         Map<String, String> before = snapshot(catalog);
         Opened o = open();
         assertEquals(before, snapshot(catalog));
-        assertEquals(new FolderRefusal(inside, FolderRefusal.Reason.FOREIGN_ENTRY, inside.resolve("_9.cfs")),
+        assertEquals(
+                new FolderRefusal(inside, FolderRefusal.Reason.FOREIGN_ENTRY, inside.resolve("_9.cfs")),
                 o.refusals().get(0));
     }
 
@@ -203,8 +205,11 @@ class IndexFolderSafetyTest {
         Opened o = open();
         assertEquals(before, snapshot(base));
         assertEquals(PartIndex.Source.MEMORY, o.source());
-        assertEquals(List.of(new FolderRefusal(inside, FolderRefusal.Reason.SYMBOLIC_LINK, null),
-                new FolderRefusal(cacheFolder(), FolderRefusal.Reason.SYMBOLIC_LINK, null)), o.refusals());
+        assertEquals(
+                List.of(
+                        new FolderRefusal(inside, FolderRefusal.Reason.SYMBOLIC_LINK, null),
+                        new FolderRefusal(cacheFolder(), FolderRefusal.Reason.SYMBOLIC_LINK, null)),
+                o.refusals());
     }
 
     @Test
@@ -227,7 +232,8 @@ class IndexFolderSafetyTest {
         try (PartIndex index = PartIndex.open(parts(), inside)) {
             assertEquals(PartIndex.Source.MEMORY, index.source());
             assertEquals(List.of("PX-505", "PX-404"), ids(index, "zero-drift"));
-            assertEquals(FolderRefusal.Reason.SYMBOLIC_LINK, index.refusals().get(0).reason());
+            assertEquals(
+                    FolderRefusal.Reason.SYMBOLIC_LINK, index.refusals().get(0).reason());
         }
         assertEquals(before, snapshot(catalog));
     }
@@ -236,8 +242,16 @@ class IndexFolderSafetyTest {
     void indexFileNamesAreLucenesOwn() {
         // names Lucene 9 writes in our index folder (seen in a built .ampsieve-index) and its
         // IndexFileDeleter's rule (segments*, pending_segments*, _<segment>[_...].<ext>)
-        for (String n : List.of("segments_1", "segments_a", "pending_segments_2", "_0.cfs", "_0.cfe", "_0.si",
-                "_1a_Lucene90_0.doc", "_0_Lucene90FieldsIndex-doc_ids_0.tmp", "write.lock")) {
+        for (String n : List.of(
+                "segments_1",
+                "segments_a",
+                "pending_segments_2",
+                "_0.cfs",
+                "_0.cfe",
+                "_0.si",
+                "_1a_Lucene90_0.doc",
+                "_0_Lucene90FieldsIndex-doc_ids_0.tmp",
+                "write.lock")) {
             assertTrue(IndexFolder.isIndexFile(n), n);
         }
         for (String n : List.of(IndexFolder.MARKER, "notes.txt", "_notes", "README", "parts.yaml", "0.cfs")) {
@@ -249,7 +263,8 @@ class IndexFolderSafetyTest {
         Path biggest;
         try (Stream<Path> s = Files.list(folder)) {
             biggest = s.filter(p -> p.getFileName().toString().startsWith("_"))
-                    .max(Comparator.comparingLong(p -> p.toFile().length())).orElseThrow();
+                    .max(Comparator.comparingLong(p -> p.toFile().length()))
+                    .orElseThrow();
         }
         try (RandomAccessFile f = new RandomAccessFile(biggest.toFile(), "rw")) {
             f.setLength(f.length() / 2);

@@ -6,7 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.ampsieve.catalog.Part;
-import dev.ampsieve.testing.FixtureCatalog;
 import java.util.Set;
 import org.apache.lucene.document.Document;
 import org.junit.jupiter.api.Test;
@@ -17,12 +16,32 @@ class PartDocumentsTest {
     void everySchemaNumberIndexesTheValueTyped() {
         // one part with a different invented value in every field, each expected value written out here
         // (signed figures are indexed as magnitudes, rejections as the minimum, aging per 1000 h)
-        Part p = part("A").vos(-3e-6, 8e-6).drift(0.05e-6, 0.2e-6).ib(-40e-12, 150e-12).ios(5e-12, 30e-12)
-                .cmrr(96.0, 112.0).psrr(92.0, 108.0).aol(118.0, 130.0).gbw(3.5e6).slew(1.7e6)
-                .noise(11e-9, 7.0, 2e-15, 40.0).supply(2.7, 5.5).temperature(-40, 125).price(1.85).iq(0.9e-3)
-                .channels(2).fchop(150e3).aging(2e-6, 4000 * 3600.0).inputHeadroom(-0.1, 1.5).outputHeadroom(0.05, 0.08)
-                .inputCapacitance(7.5e-12).testConditions(30.0, 15.0).crossover(1.2, 40e-6).thetaJa(160.0)
-                .choppingRipple(3e-6).build();
+        Part p = part("A")
+                .vos(-3e-6, 8e-6)
+                .drift(0.05e-6, 0.2e-6)
+                .ib(-40e-12, 150e-12)
+                .ios(5e-12, 30e-12)
+                .cmrr(96.0, 112.0)
+                .psrr(92.0, 108.0)
+                .aol(118.0, 130.0)
+                .gbw(3.5e6)
+                .slew(1.7e6)
+                .noise(11e-9, 7.0, 2e-15, 40.0)
+                .supply(2.7, 5.5)
+                .temperature(-40, 125)
+                .price(1.85)
+                .iq(0.9e-3)
+                .channels(2)
+                .fchop(150e3)
+                .aging(2e-6, 4000 * 3600.0)
+                .inputHeadroom(-0.1, 1.5)
+                .outputHeadroom(0.05, 0.08)
+                .inputCapacitance(7.5e-12)
+                .testConditions(30.0, 15.0)
+                .crossover(1.2, 40e-6)
+                .thetaJa(160.0)
+                .choppingRipple(3e-6)
+                .build();
         java.util.Map<String, Double> expected = new java.util.HashMap<>();
         expected.put(Schema.VOS, 8e-6);
         expected.put("vos.typ", 3e-6);
@@ -103,8 +122,12 @@ class PartDocumentsTest {
 
     @Test
     void rejectionUsesTheMinimumElseTheTypical() {
-        assertEquals(90.0, PartDocuments.value(Schema.CMRR, part("A").cmrr(90.0, 110.0).build()));
-        assertEquals(110.0, PartDocuments.value(Schema.CMRR, part("A").cmrr(null, 110.0).build()));
+        assertEquals(
+                90.0,
+                PartDocuments.value(Schema.CMRR, part("A").cmrr(90.0, 110.0).build()));
+        assertEquals(
+                110.0,
+                PartDocuments.value(Schema.CMRR, part("A").cmrr(null, 110.0).build()));
     }
 
     @Test
@@ -116,10 +139,15 @@ class PartDocumentsTest {
 
     @Test
     void synonymsForSelfCorrectingAndRailToRailParts() {
-        Set<String> chopper = Words.terms(String.join(" ", PartDocuments.words(
-                part("A").architecture(dev.ampsieve.catalog.Architecture.CHOPPER).outputHeadroom(0, 0).build())));
+        Set<String> chopper = Words.terms(String.join(
+                " ",
+                PartDocuments.words(part("A")
+                        .architecture(dev.ampsieve.catalog.Architecture.CHOPPER)
+                        .outputHeadroom(0, 0)
+                        .build())));
         assertTrue(chopper.containsAll(Set.of("zero-drift", "zerodrift", "rail-to-rail", "rro")), chopper.toString());
-        Set<String> plain = Words.terms(String.join(" ", PartDocuments.words(part("B").build())));
+        Set<String> plain =
+                Words.terms(String.join(" ", PartDocuments.words(part("B").build())));
         assertTrue(!plain.contains("zero-drift") && !plain.contains("rail-to-rail"), plain.toString());
     }
 
@@ -130,7 +158,8 @@ class PartDocumentsTest {
         double stored = java.util.Arrays.stream(d.getFields(Schema.VOS))
                 .filter(f -> f.storedValue() != null)
                 .mapToDouble(f -> f.storedValue().getDoubleValue())
-                .findFirst().orElseThrow();
+                .findFirst()
+                .orElseThrow();
         assertEquals(5e-6, stored);
         assertEquals(0, d.getFields("vos.typ").length);
     }

@@ -74,7 +74,12 @@ class PartIndexTest {
         Files.writeString(root.resolve("parts.yaml"), "# edited: PX-808 now 0.25\n");
         List<Part> edited = new ArrayList<>(FixtureCatalog.parts());
         edited.removeIf(p -> p.id().equals("PX-808"));
-        edited.add(part("PX-808").title("fast cmos amplifier").gbw(50e6).supply(2.5, 5.5).price(0.25).build());
+        edited.add(part("PX-808")
+                .title("fast cmos amplifier")
+                .gbw(50e6)
+                .supply(2.5, 5.5)
+                .price(0.25)
+                .build());
         Catalog c = new Catalog(root, edited, List.of(), 1);
         try (PartIndex index = PartIndex.open(c)) {
             assertEquals(PartIndex.Source.BUILT, index.source());
@@ -94,7 +99,9 @@ class PartIndexTest {
     @Test
     void aPartRemovedFromTheCatalogLeavesTheIndex() throws Exception {
         openAndCheck(catalog());
-        List<Part> fewer = FixtureCatalog.parts().stream().filter(p -> !p.id().equals("PX-707")).toList();
+        List<Part> fewer = FixtureCatalog.parts().stream()
+                .filter(p -> !p.id().equals("PX-707"))
+                .toList();
         try (PartIndex index = PartIndex.open(new Catalog(root, fewer, List.of(), 1))) {
             assertEquals(7, index.size());
             assertEquals(List.of(), ids(index, "id:px-707"));
@@ -111,7 +118,9 @@ class PartIndexTest {
     @Test
     void truncatedDataFileIsDetectedAndRebuilt() throws Exception {
         openAndCheck(catalog());
-        Path biggest = indexFiles().stream().max(Comparator.comparingLong(PartIndexTest::size)).orElseThrow();
+        Path biggest = indexFiles().stream()
+                .max(Comparator.comparingLong(PartIndexTest::size))
+                .orElseThrow();
         try (RandomAccessFile f = new RandomAccessFile(biggest.toFile(), "rw")) {
             f.setLength(f.length() / 2);
         }
@@ -122,8 +131,10 @@ class PartIndexTest {
     @Test
     void truncatedCommitFileIsDetectedAndRebuilt() throws Exception {
         openAndCheck(catalog());
-        Path commit = indexFiles().stream().filter(p -> p.getFileName().toString().startsWith("segments_"))
-                .findFirst().orElseThrow();
+        Path commit = indexFiles().stream()
+                .filter(p -> p.getFileName().toString().startsWith("segments_"))
+                .findFirst()
+                .orElseThrow();
         try (RandomAccessFile f = new RandomAccessFile(commit.toFile(), "rw")) {
             f.setLength(10);
         }
@@ -133,7 +144,9 @@ class PartIndexTest {
     @Test
     void flippedByteInsideAFileIsCaughtByItsChecksum() throws Exception {
         openAndCheck(catalog());
-        Path biggest = indexFiles().stream().max(Comparator.comparingLong(PartIndexTest::size)).orElseThrow();
+        Path biggest = indexFiles().stream()
+                .max(Comparator.comparingLong(PartIndexTest::size))
+                .orElseThrow();
         try (RandomAccessFile f = new RandomAccessFile(biggest.toFile(), "rw")) {
             long at = f.length() / 2;
             f.seek(at);
@@ -147,7 +160,8 @@ class PartIndexTest {
     @Test
     void whileAnotherProcessHoldsTheLockACurrentIndexIsReadOnly() throws Exception {
         openAndCheck(catalog());
-        try (FSDirectory other = FSDirectory.open(folder); Lock held = other.obtainLock(IndexWriter.WRITE_LOCK_NAME)) {
+        try (FSDirectory other = FSDirectory.open(folder);
+                Lock held = other.obtainLock(IndexWriter.WRITE_LOCK_NAME)) {
             held.ensureValid();
             assertEquals(PartIndex.Source.READ_ONLY, openAndCheck(catalog()));
         }
@@ -159,7 +173,8 @@ class PartIndexTest {
         List<Part> more = new ArrayList<>(FixtureCatalog.parts());
         more.add(part("PX-909").title("extra part").price(0.10).build());
         Catalog c = new Catalog(root, more, List.of(), 1);
-        try (FSDirectory other = FSDirectory.open(folder); Lock held = other.obtainLock(IndexWriter.WRITE_LOCK_NAME)) {
+        try (FSDirectory other = FSDirectory.open(folder);
+                Lock held = other.obtainLock(IndexWriter.WRITE_LOCK_NAME)) {
             held.ensureValid();
             try (PartIndex index = PartIndex.open(c)) {
                 assertEquals(PartIndex.Source.MEMORY, index.source());
@@ -173,7 +188,8 @@ class PartIndexTest {
 
     @Test
     void twoOpenIndexesSearchSideBySide() throws Exception {
-        try (PartIndex a = PartIndex.open(catalog()); PartIndex b = PartIndex.open(catalog())) {
+        try (PartIndex a = PartIndex.open(catalog());
+                PartIndex b = PartIndex.open(catalog())) {
             assertEquals(PartIndex.Source.BUILT, a.source());
             assertEquals(PartIndex.Source.REUSED, b.source());
             assertEquals(ids(a, "zero-drift"), ids(b, "zero-drift"));
@@ -194,10 +210,14 @@ class PartIndexTest {
                 Future<PartIndex.Source> a = pool.submit(job);
                 Future<PartIndex.Source> b = pool.submit(job);
                 start.countDown();
-                Set<PartIndex.Source> ok = Set.of(PartIndex.Source.BUILT, PartIndex.Source.REUSED,
-                        PartIndex.Source.READ_ONLY, PartIndex.Source.MEMORY);
+                Set<PartIndex.Source> ok = Set.of(
+                        PartIndex.Source.BUILT,
+                        PartIndex.Source.REUSED,
+                        PartIndex.Source.READ_ONLY,
+                        PartIndex.Source.MEMORY);
                 assertTrue(ok.contains(a.get()) && ok.contains(b.get()), a.get() + " " + b.get());
-                assertTrue(a.get() == PartIndex.Source.BUILT || b.get() == PartIndex.Source.BUILT,
+                assertTrue(
+                        a.get() == PartIndex.Source.BUILT || b.get() == PartIndex.Source.BUILT,
                         "one of them builds: " + a.get() + " " + b.get());
             }
         } finally {
@@ -217,7 +237,8 @@ class PartIndexTest {
 
     private List<Path> indexFiles() throws IOException {
         try (Stream<Path> s = Files.list(folder)) {
-            return s.filter(p -> !p.getFileName().toString().equals(IndexWriter.WRITE_LOCK_NAME)).toList();
+            return s.filter(p -> !p.getFileName().toString().equals(IndexWriter.WRITE_LOCK_NAME))
+                    .toList();
         }
     }
 

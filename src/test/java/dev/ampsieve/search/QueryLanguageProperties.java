@@ -24,14 +24,42 @@ class QueryLanguageProperties {
 
     /** The README's and the grammar help's examples, and the golden queries. */
     static final List<String> EXAMPLES = List.of(
-            "zero-drift 'vos<10uV' 'supply>=5V'", "zero-drift vos<10uV supply>=5V sot-23",
+            "zero-drift 'vos<10uV' 'supply>=5V'",
+            "zero-drift vos<10uV supply>=5V sot-23",
             "input:cmos architecture:zero-drift package:sot-23 tag:x rail:output trim:laser",
-            "field=lo..hi", "supply=4.5V..5.5V", "temperature>=125C", "temp<=-55C", "temperature=-40C..125C",
-            "vos<10uV", "vos<=10uV", "vos.max<200uV", "vos.typ<=10uV", "drift<1uV/C", "ib<1nA", "en<=10nV/rtHz",
-            "cmrr>=100dB", "cmrr>90", "aol=100dB", "gbw=1MHz..10MHz", "gbw=10MHz..", "gbw=..1MHz", "gbw=1000kHz",
-            "slew>=10V/us", "input:jfet price<2", "price<0.5", "iq<100uA", "fchop>1kHz", "channels>=2",
-            "supply>5.5V", "supply<1.8V", "vos < 10 uV", "input:cmos gbw = 1MHz .. 20MHz", "-chopper rail:input",
-            "id:px-404", "package:sot-23-5", "offset<1mV tc<=0.5uV/C quiescent<1mA pkg:msop-8 arch:chopper",
+            "field=lo..hi",
+            "supply=4.5V..5.5V",
+            "temperature>=125C",
+            "temp<=-55C",
+            "temperature=-40C..125C",
+            "vos<10uV",
+            "vos<=10uV",
+            "vos.max<200uV",
+            "vos.typ<=10uV",
+            "drift<1uV/C",
+            "ib<1nA",
+            "en<=10nV/rtHz",
+            "cmrr>=100dB",
+            "cmrr>90",
+            "aol=100dB",
+            "gbw=1MHz..10MHz",
+            "gbw=10MHz..",
+            "gbw=..1MHz",
+            "gbw=1000kHz",
+            "slew>=10V/us",
+            "input:jfet price<2",
+            "price<0.5",
+            "iq<100uA",
+            "fchop>1kHz",
+            "channels>=2",
+            "supply>5.5V",
+            "supply<1.8V",
+            "vos < 10 uV",
+            "input:cmos gbw = 1MHz .. 20MHz",
+            "-chopper rail:input",
+            "id:px-404",
+            "package:sot-23-5",
+            "offset<1mV tc<=0.5uV/C quiescent<1mA pkg:msop-8 arch:chopper",
             "in<1pA/rtHz en.corner<10Hz in.corner<=100Hz ios.max<1nA ib.maxtemp<5nA aging<1uV vos.maxtemp<50uV",
             "psrr.min>100dB cmrr.typ>=120dB aol.min>=110dB supply.min<=3V supply.max>=36V temperature.min<=-40C");
 
@@ -68,15 +96,23 @@ class QueryLanguageProperties {
 
     @Test
     void anyQueryRunsOrIsRefusedWithTypedProblems() {
-        Props.theory(1000).forAll(QUERY).checkAssert(q -> Props.onlyTyped(q, InputException.class,
-                QueryLanguageProperties::sound, () -> index.search(QueryLanguage.parse(q))));
+        Props.theory(1000)
+                .forAll(QUERY)
+                .checkAssert(q -> Props.onlyTyped(
+                        q,
+                        InputException.class,
+                        QueryLanguageProperties::sound,
+                        () -> index.search(QueryLanguage.parse(q))));
     }
 
     /** Every problem is an error that names the query term (or the whole query) and gives a message and a fix. */
     static boolean sound(InputException e) {
-        return !e.problems().isEmpty() && e.problems().stream().allMatch(p -> p.isError()
-                && (p.field().startsWith("query term '") || p.field().equals("query"))
-                && !p.message().isBlank() && !p.fix().isBlank());
+        return !e.problems().isEmpty()
+                && e.problems().stream()
+                        .allMatch(p -> p.isError()
+                                && (p.field().startsWith("query term '")
+                                        || p.field().equals("query"))
+                                && !p.message().isBlank()
+                                && !p.fix().isBlank());
     }
-
 }

@@ -5,8 +5,8 @@ import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.ampsieve.yaml.InputException;
 import dev.ampsieve.testing.FixtureCatalog;
+import dev.ampsieve.yaml.InputException;
 import dev.ampsieve.yaml.Problem;
 import java.nio.file.Path;
 import java.util.List;
@@ -45,9 +45,12 @@ class QueryLanguageTest {
         assertEquals("did you mean 'gbw'?", onlyProblem("gbwx>1MHz").fix());
         // by hand: "pricequantity" is 1 edit from "price.quantity" and 4 from "price.unit" (q->., drop a, t, y),
         // within the 13/3 = 4 allowed; "price" itself, a substring, is 8 away and not offered
-        assertEquals("did you mean 'price.quantity' or 'price.unit'?", onlyProblem("pricequantity>10").fix());
+        assertEquals(
+                "did you mean 'price.quantity' or 'price.unit'?",
+                onlyProblem("pricequantity>10").fix());
         // by hand: "drif" is 1 from "drift" and 2 from "trim" (d->t, f->m), nearest first; others 3 or more
-        assertEquals("did you mean 'drift' or 'trim'?", onlyProblem("drif<1uV/C").fix());
+        assertEquals(
+                "did you mean 'drift' or 'trim'?", onlyProblem("drif<1uV/C").fix());
     }
 
     @Test
@@ -74,15 +77,20 @@ class QueryLanguageTest {
         PartQuery.WordIn notes = (PartQuery.WordIn) q.clauses().get(1);
         assertEquals(Schema.NOTES, notes.field().name());
         assertTrue(notes.excluded());
-        assertEquals(Schema.TRIM, ((PartQuery.KeywordIs) q.clauses().get(2)).field().name());
-        assertEquals("did you mean 'null-pins:true'?", onlyProblem("null-pins:treu").fix());
+        assertEquals(
+                Schema.TRIM, ((PartQuery.KeywordIs) q.clauses().get(2)).field().name());
+        assertEquals(
+                "did you mean 'null-pins:true'?", onlyProblem("null-pins:treu").fix());
     }
 
     @Test
     void aliasIsAccepted() throws InputException {
         PartQuery q = QueryLanguage.parse("temp>=125C offset<1mV");
-        assertEquals(Schema.TEMPERATURE, ((PartQuery.RatedAt) q.clauses().get(0)).field().name());
-        assertEquals(Schema.VOS, ((PartQuery.NumberIs) q.clauses().get(1)).field().name());
+        assertEquals(
+                Schema.TEMPERATURE,
+                ((PartQuery.RatedAt) q.clauses().get(0)).field().name());
+        assertEquals(
+                Schema.VOS, ((PartQuery.NumberIs) q.clauses().get(1)).field().name());
     }
 
     @Test
@@ -118,29 +126,37 @@ class QueryLanguageTest {
 
     @Test
     void comparisonOnAWordFieldAndWordOnANumberAreRefused() {
-        assertEquals("'input' is a word field, not a number", onlyProblem("input<3").message());
+        assertEquals(
+                "'input' is a word field, not a number", onlyProblem("input<3").message());
         assertEquals("'vos' is a voltage, not a word", onlyProblem("vos:low").message());
     }
 
     @Test
     void reversedRangeEmptyValueAndNegatedComparison() {
-        assertEquals("the lower end is above the upper end", onlyProblem("gbw=10MHz..1MHz").message());
+        assertEquals(
+                "the lower end is above the upper end",
+                onlyProblem("gbw=10MHz..1MHz").message());
         assertEquals("no value after '<'", onlyProblem("vos<").message());
         assertEquals("a range takes '=', not '<'", onlyProblem("gbw<1MHz..2MHz").message());
-        assertEquals("a comparison cannot be excluded with '-'", onlyProblem("-vos<1uV").message());
+        assertEquals(
+                "a comparison cannot be excluded with '-'",
+                onlyProblem("-vos<1uV").message());
     }
 
     @Test
     void everyBadTermIsReportedOnItsOwnLine() {
         InputException e = assertThrows(InputException.class, () -> QueryLanguage.parse("vso<1uV chopper ib<2V"));
-        assertEquals(List.of("query term 'vso<1uV'", "query term 'ib<2V'"),
+        assertEquals(
+                List.of("query term 'vso<1uV'", "query term 'ib<2V'"),
                 e.problems().stream().map(Problem::field).toList());
     }
 
     @Test
     void strictAndInclusiveBoundsDifferOnlyAtTheValue() throws InputException {
-        PartQuery.NumberIs lt = (PartQuery.NumberIs) QueryLanguage.parse("vos<10uV").clauses().get(0);
-        PartQuery.NumberIs le = (PartQuery.NumberIs) QueryLanguage.parse("vos<=10uV").clauses().get(0);
+        PartQuery.NumberIs lt =
+                (PartQuery.NumberIs) QueryLanguage.parse("vos<10uV").clauses().get(0);
+        PartQuery.NumberIs le =
+                (PartQuery.NumberIs) QueryLanguage.parse("vos<=10uV").clauses().get(0);
         double ten = 10e-6;
         assertTrue(lt.hi() < ten && le.hi() >= ten);
         assertEquals(ten, lt.hi(), ten * 2e-9);
@@ -150,7 +166,8 @@ class QueryLanguageTest {
     @Test
     void sameValueSpeltTwoWaysComparesEqual() throws InputException {
         // 10 * 1e-6 and 0.01 * 1e-3 differ in the last binary digit
-        PartQuery.NumberIs q = (PartQuery.NumberIs) QueryLanguage.parse("vos=0.01mV").clauses().get(0);
+        PartQuery.NumberIs q =
+                (PartQuery.NumberIs) QueryLanguage.parse("vos=0.01mV").clauses().get(0);
         double catalogValue = 10 * 1e-6;
         assertTrue(q.lo() <= catalogValue && catalogValue <= q.hi());
     }
@@ -192,7 +209,9 @@ class QueryLanguageTest {
             // every fixture part lacks a vos of 2 V or more, so none matches; the point is that the search runs
             assertEquals(List.of(), index.search(QueryLanguage.parse("vos>=2V ".repeat(64))));
             // 64 exclusions of a word no part has: every one of the eight fixture parts remains
-            assertEquals(8, index.search(QueryLanguage.parse("-nosuchword ".repeat(64))).size());
+            assertEquals(
+                    8,
+                    index.search(QueryLanguage.parse("-nosuchword ".repeat(64))).size());
         }
     }
 
@@ -215,9 +234,15 @@ class QueryLanguageTest {
     @Test
     void theExampleInAFixIsInTheFieldsOwnRange() {
         // a supply is volts: the fix shows 5 V, not the microvolts of an offset
-        assertEquals("write a voltage with its unit, such as '5 V'", onlyProblem("supply>=5").fix());
-        assertEquals("write a voltage with its unit, such as '5 V'", onlyProblem("supply.min<3").fix());
-        assertEquals("write a voltage with its unit, such as '2.5 uV'", onlyProblem("vos<10").fix());
+        assertEquals(
+                "write a voltage with its unit, such as '5 V'",
+                onlyProblem("supply>=5").fix());
+        assertEquals(
+                "write a voltage with its unit, such as '5 V'",
+                onlyProblem("supply.min<3").fix());
+        assertEquals(
+                "write a voltage with its unit, such as '2.5 uV'",
+                onlyProblem("vos<10").fix());
     }
 
     @Test

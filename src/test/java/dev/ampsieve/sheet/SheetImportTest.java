@@ -42,7 +42,9 @@ class SheetImportTest {
     void officeSuiteSheetConvertsRowByRow() {
         SheetImport.Result r = convert(FIXTURE);
         assertEquals(3, r.dataRows()); // the all-empty last row is not a part
-        assertEquals(List.of("sheet-amp-01", "sheet-amp-02"), r.rows().stream().map(SheetImport.Row::id).toList());
+        assertEquals(
+                List.of("sheet-amp-01", "sheet-amp-02"),
+                r.rows().stream().map(SheetImport.Row::id).toList());
 
         SheetImport.Row one = r.rows().get(0);
         assertEquals(2, one.row());
@@ -98,10 +100,15 @@ class SheetImportTest {
 
     @Test
     void badRowIsReportedAtItsRowAndColumnWithTheCatalogsWords() {
-        List<String> errors = convert(FIXTURE).problems().stream().filter(Problem::isError).map(Problem::toString).toList();
+        List<String> errors = convert(FIXTURE).problems().stream()
+                .filter(Problem::isError)
+                .map(Problem::toString)
+                .toList();
         // the message and fix are those the catalog gives for "vos: {max: 2 mA}" (units.Units)
-        assertEquals(List.of("parts.csv:4:5: vos.max: '2 mA' is a current but a voltage belongs here;"
-                + " write a voltage such as '2.5 uV'"), errors);
+        assertEquals(
+                List.of("parts.csv:4:5: vos.max: '2 mA' is a current but a voltage belongs here;"
+                        + " write a voltage such as '2.5 uV'"),
+                errors);
     }
 
     @Test
@@ -111,8 +118,10 @@ class SheetImportTest {
                 + "comma-01,standard,bipolar,\"2,5\",1,4.5,36,-40,85,1.00\n";
         SheetImport.Result r = convert(csv);
         assertEquals(List.of(), r.rows());
-        assertEquals("parts.csv:2:4: vos.max: '2,5' has a decimal comma; write a decimal point: '2.5' (or export the"
-                + " sheet with a decimal point)", r.problems().get(0).toString());
+        assertEquals(
+                "parts.csv:2:4: vos.max: '2,5' has a decimal comma; write a decimal point: '2.5' (or export the"
+                        + " sheet with a decimal point)",
+                r.problems().get(0).toString());
     }
 
     @Test
@@ -125,25 +134,32 @@ class SheetImportTest {
         assertEquals(500e-6, r.rows().get(0).part().vos().max(), 1e-18); // "0.5 mV" kept, header unit unused
         assertEquals(3e6, r.rows().get(0).part().gbw(), 1e-6); // no header unit: the cell carries it
         // the catalog's own message; no column to point at, so the place is the row
-        assertEquals(List.of("parts.csv:3: gbw: required field is missing; add 'gbw: 1 MHz'"),
-                r.problems().stream().filter(Problem::isError).map(Problem::toString).toList());
+        assertEquals(
+                List.of("parts.csv:3: gbw: required field is missing; add 'gbw: 1 MHz'"),
+                r.problems().stream()
+                        .filter(Problem::isError)
+                        .map(Problem::toString)
+                        .toList());
     }
 
     @Test
     void headerProblemsStopBeforeAnyRow() {
         SheetImport.Result r = convert("id,vos mx [uV],gbw [uA]\nx-01,1,1\n");
         assertTrue(r.headerFailed());
-        assertEquals(List.of("parts.csv:1:2: unknown column 'vos mx'; did you mean 'vos.max'?",
-                "parts.csv:1:3: gbw: header unit: '1 uA' is a current but a frequency belongs here;"
-                        + " write in brackets a frequency such as '1.5 MHz'"),
+        assertEquals(
+                List.of(
+                        "parts.csv:1:2: unknown column 'vos mx'; did you mean 'vos.max'?",
+                        "parts.csv:1:3: gbw: header unit: '1 uA' is a current but a frequency belongs here;"
+                                + " write in brackets a frequency such as '1.5 MHz'"),
                 r.problems().stream().map(Problem::toString).toList());
     }
 
     @Test
     void semicolonSeparatedSheetIsNamed() {
         SheetImport.Result r = convert("id;architecture;vos.max [uV]\r\nx-01;standard;2,5\r\n");
-        assertEquals(List.of("parts.csv:1:1: the header is one cell holding semicolons: the sheet was saved with another"
-                + " separator; save it as CSV with commas as separators and a decimal point"),
+        assertEquals(
+                List.of("parts.csv:1:1: the header is one cell holding semicolons: the sheet was saved with another"
+                        + " separator; save it as CSV with commas as separators and a decimal point"),
                 r.problems().stream().map(Problem::toString).toList());
     }
 
@@ -151,7 +167,9 @@ class SheetImportTest {
     void malformedQuotingIsPlaced() {
         SheetImport.Result r = convert("id,title\nx-01,\"never closed\n");
         assertTrue(r.headerFailed());
-        assertTrue(r.problems().get(0).toString().startsWith("parts.csv:3:"), r.problems().toString());
+        assertTrue(
+                r.problems().get(0).toString().startsWith("parts.csv:3:"),
+                r.problems().toString());
     }
 
     @Test
@@ -162,11 +180,17 @@ class SheetImportTest {
         SheetImport.Result r = convert(csv);
         assertEquals(List.of(), r.problems().stream().filter(Problem::isError).toList());
         Price price = r.rows().get(0).part().price();
-        assertEquals(List.of(new Price.Break(1, 2.10), new Price.Break(100, 1.60), new Price.Break(1000, 1.25)),
+        assertEquals(
+                List.of(new Price.Break(1, 2.10), new Price.Break(100, 1.60), new Price.Break(1000, 1.25)),
                 price.breaks());
         assertEquals("EUR", price.currency());
-        assertTrue(r.rows().get(0).yaml().contains("price:\n  - {quantity: 1, unit: 2.10, currency: \"EUR\"}\n"
-                + "  - {quantity: 100, unit: 1.60}\n  - {quantity: 1000, unit: 1.25}\n"), r.rows().get(0).yaml());
+        assertTrue(
+                r.rows()
+                        .get(0)
+                        .yaml()
+                        .contains("price:\n  - {quantity: 1, unit: 2.10, currency: \"EUR\"}\n"
+                                + "  - {quantity: 100, unit: 1.60}\n  - {quantity: 1000, unit: 1.25}\n"),
+                r.rows().get(0).yaml());
     }
 
     @Test
@@ -177,6 +201,8 @@ class SheetImportTest {
         Path folder = Files.createDirectory(dir.resolve("folder.csv"));
         dev.ampsieve.yaml.InputException e = org.junit.jupiter.api.Assertions.assertThrows(
                 dev.ampsieve.yaml.InputException.class, () -> SheetImport.read(folder));
-        assertEquals(folder + ": not a regular file (a folder); give a CSV file", e.problems().get(0).toString());
+        assertEquals(
+                folder + ": not a regular file (a folder); give a CSV file",
+                e.problems().get(0).toString());
     }
 }

@@ -1,6 +1,5 @@
 package dev.ampsieve.shell;
 
-import dev.ampsieve.testing.Networks;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -10,6 +9,7 @@ import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.StageLoader;
 import dev.ampsieve.stage.Topology;
 import dev.ampsieve.testing.Flat;
+import dev.ampsieve.testing.Networks;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -23,8 +23,8 @@ class GuidedEntryTest {
     @Test
     void threeAnswersThenDoneMakeTheCurrentStage() throws Exception {
         Path file = dir.resolve("bridge.yaml");
-        String printed = Sessions.run("ask", "", "100", "-40..85 C", "1 mV", "5 V", "12 V", "0.6 V", "done",
-                "save " + file);
+        String printed =
+                Sessions.run("ask", "", "100", "-40..85 C", "1 mV", "5 V", "12 V", "0.6 V", "done", "save " + file);
 
         // topology, 6 first questions and 14 more (Questions.order); the 2 ranges join once a supply is given
         assertTrue(printed.contains("[2/23] gain"), printed);
@@ -53,8 +53,23 @@ class GuidedEntryTest {
     @Test
     void aSupplyBringsTheRangeQuestionsAndEachTakesARangeInOneAnswer() throws Exception {
         Path file = dir.resolve("single.yaml");
-        String printed = Sessions.run("ask", "", "100", "", "1 mV", "2 V", "5 V ± 0.25 V", "", "0.1..4.9 V", "0.5..2.5",
-                "", "", "", "0.1 Hz..1k", "done", "save " + file);
+        String printed = Sessions.run(
+                "ask",
+                "",
+                "100",
+                "",
+                "1 mV",
+                "2 V",
+                "5 V ± 0.25 V",
+                "",
+                "0.1..4.9 V",
+                "0.5..2.5",
+                "",
+                "",
+                "",
+                "0.1 Hz..1k",
+                "done",
+                "save " + file);
         assertTrue(printed.contains("supply.variation [0.25 V] >"), printed); // the ± answer gave it
         assertTrue(Flat.of(printed).contains("On a single supply the signal rarely sits at mid-supply"), printed);
         Stage s = StageLoader.load(file);
@@ -71,11 +86,25 @@ class GuidedEntryTest {
     @Test
     void aBadAnswerIsAskedAgainWithTheReason() throws Exception {
         Path file = dir.resolve("s.yaml");
-        String printed = Sessions.run("ask", "", "abc", "40 dB", "85..-40", "-40 to 125", "2 V/us", "10 uV input", "", "", "",
-                "done", "save " + file);
+        String printed = Sessions.run(
+                "ask",
+                "",
+                "abc",
+                "40 dB",
+                "85..-40",
+                "-40 to 125",
+                "2 V/us",
+                "10 uV input",
+                "",
+                "",
+                "",
+                "done",
+                "save " + file);
 
         String flat = Flat.of(printed);
-        assertTrue(flat.contains("not usable: 'abc' is not a gain; write a plain number such as '100', or decibels"), printed);
+        assertTrue(
+                flat.contains("not usable: 'abc' is not a gain; write a plain number such as '100', or decibels"),
+                printed);
         assertTrue(flat.contains("(gain: every input error reaches the output multiplied by the noise gain"), printed);
         assertTrue(printed.contains("not usable: min 85 °C is above max -40 °C; swap the two values"), printed);
         assertTrue(printed.contains("not usable: '2 V/us' is a slew rate but a voltage belongs here"), printed);
@@ -90,13 +119,15 @@ class GuidedEntryTest {
     @Test
     void questionMarkExplainsAndEnterKeepsTheDefault() throws Exception {
         Path file = dir.resolve("s.yaml");
-        String printed = Sessions.run("ask", "", "10", "?", "", "0.1 %", "2.5 V", "", "", "", "1 kohm", "done",
-                "save " + file);
+        String printed =
+                Sessions.run("ask", "", "10", "?", "", "0.1 %", "2.5 V", "", "", "", "1 kohm", "done", "save " + file);
 
         assertTrue(printed.contains("for example: -40..85 C"), printed);
         assertTrue(printed.contains("default: 0..70 C"), printed);
         // a share of full scale needs the full-scale output: asked right away
-        assertTrue(printed.contains("full-scale-output [none (open-loop gain, bandwidth and resistor terms not counted)] >"),
+        assertTrue(
+                printed.contains(
+                        "full-scale-output [none (open-loop gain, bandwidth and resistor terms not counted)] >"),
                 printed);
 
         Stage s = StageLoader.load(file);
@@ -111,7 +142,8 @@ class GuidedEntryTest {
     @Test
     void ctrlCBeforeTheLimitKeepsNothingAndNotTheShellEither() {
         String printed = Sessions.run("ask", "", "100", "-40..85 C\u0003", "show", "help");
-        assertTrue(printed.contains("Stopped; nothing kept (a stage needs the gain and the limit); no stage yet."),
+        assertTrue(
+                printed.contains("Stopped; nothing kept (a stage needs the gain and the limit); no stage yet."),
                 printed);
         assertTrue(printed.contains("No current stage yet"), printed);
         assertTrue(printed.contains("The shell"), printed); // help still ran afterwards
@@ -120,8 +152,10 @@ class GuidedEntryTest {
     @Test
     void ctrlCAfterTheLimitKeepsTheAnswersGiven() throws Exception {
         Path file = dir.resolve("s.yaml");
-        String printed = Sessions.run("ask", "", "100", "-40..85 C", "10 uV input", "inv\u0003", "show", "save " + file);
-        assertTrue(printed.contains("Stopped; kept the 3 answers given: 'show' lists them, 'ask' starts again."), printed);
+        String printed =
+                Sessions.run("ask", "", "100", "-40..85 C", "10 uV input", "inv\u0003", "show", "save " + file);
+        assertTrue(
+                printed.contains("Stopped; kept the 3 answers given: 'show' lists them, 'ask' starts again."), printed);
         assertTrue(printed.contains("Stage (typed in, not saved)"), printed);
 
         Stage s = StageLoader.load(file);
@@ -135,15 +169,20 @@ class GuidedEntryTest {
     void ctrlCOnAStageKeepsItsNewAnswersAndOnlyThem() throws Exception {
         Path file = dir.resolve("s.yaml");
         String printed = Sessions.run("set gain 20", "set limit 5 mV", "ask", "", "50", "\u0003", "save " + file);
-        assertTrue(printed.contains("Stopped; kept the one answer given: 'show' lists them, 'ask' starts again."), printed);
+        assertTrue(
+                printed.contains("Stopped; kept the one answer given: 'show' lists them, 'ask' starts again."),
+                printed);
         Stage s = StageLoader.load(file);
         assertEquals(50.0, s.noiseGain(), 1e-12);
         assertEquals(5e-3, s.limitVolts(), 1e-15);
 
         // a fresh start that never reaches the limit leaves the stage there was
         printed = Sessions.run("set gain 20", "set limit 5 mV", "ask --fresh", "", "7", "\u0003", "show");
-        assertTrue(Flat.of(printed).contains("Stopped; nothing kept (a stage needs the gain and the limit); "
-                + "the current stage is as it was."), printed);
+        assertTrue(
+                Flat.of(printed)
+                        .contains("Stopped; nothing kept (a stage needs the gain and the limit); "
+                                + "the current stage is as it was."),
+                printed);
         assertTrue(printed.matches("(?s).*Stopped.*gain\\s+20\\s.*"), printed);
     }
 
@@ -167,8 +206,24 @@ class GuidedEntryTest {
     @Test
     void askingAgainStartsFromTheCurrentAnswersAndCancelKeepsThem() throws Exception {
         Path file = dir.resolve("s.yaml");
-        String printed = Sessions.run("set gain 20", "set limit 5 mV", "ask", "", "", "", "\u0003", "ask", "inv", "", "", "", "", "", "",
-                "done", "save " + file);
+        String printed = Sessions.run(
+                "set gain 20",
+                "set limit 5 mV",
+                "ask",
+                "",
+                "",
+                "",
+                "\u0003",
+                "ask",
+                "inv",
+                "",
+                "",
+                "",
+                "",
+                "",
+                "",
+                "done",
+                "save " + file);
         assertTrue(printed.contains("gain [20] >"), printed);
         assertTrue(printed.contains("limit [5 mV] >"), printed);
         assertTrue(printed.contains("Stopped; the current stage is as it was."), printed);

@@ -18,8 +18,7 @@ import org.jline.terminal.impl.DumbTerminal;
 
 /** Runs a scripted shell session on JLine's dumb terminal, in-process, and returns what it printed. */
 final class Sessions {
-    private Sessions() {
-    }
+    private Sessions() {}
 
     /** Lines typed, each ended by Enter; the session ends at the end of the input (as Ctrl-D). */
     static String run(List<String> rootArgs, Path history, Map<String, String> env, String... lines) {
@@ -27,16 +26,15 @@ final class Sessions {
     }
 
     /** What a session printed and each line's exit code, in order. */
-    record Ran(String printed, List<Integer> codes) {
-    }
+    record Ran(String printed, List<Integer> codes) {}
 
     /** As {@link #run}, with commands added to the shell's tree, and the exit code of each line. */
     static Ran withCodes(List<String> rootArgs, List<Object> extraCommands, String... lines) {
         return session(rootArgs, null, Map.of(), extraCommands, lines);
     }
 
-    private static Ran session(List<String> rootArgs, Path history, Map<String, String> env, List<Object> extra,
-            String... lines) {
+    private static Ran session(
+            List<String> rootArgs, Path history, Map<String, String> env, List<Object> extra, String... lines) {
         StringBuilder typed = new StringBuilder();
         for (String l : lines) {
             typed.append(l);

@@ -1,6 +1,5 @@
 package dev.ampsieve.shell;
 
-import dev.ampsieve.testing.DemoCatalog;
 import static java.nio.charset.StandardCharsets.UTF_8;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -9,6 +8,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import dev.ampsieve.commands.Commands;
 import dev.ampsieve.commands.RootCommand;
 import dev.ampsieve.report.OutputStyle;
+import dev.ampsieve.testing.DemoCatalog;
 import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
@@ -52,7 +52,8 @@ class ShellCompleterTest {
 
     @BeforeEach
     void tree() throws IOException {
-        terminal = new DumbTerminal("test", "dumb", new ByteArrayInputStream(new byte[0]), new ByteArrayOutputStream(), UTF_8);
+        terminal = new DumbTerminal(
+                "test", "dumb", new ByteArrayInputStream(new byte[0]), new ByteArrayOutputStream(), UTF_8);
         reader = LineReaderBuilder.builder().terminal(terminal).build();
         PrintWriter sink = new PrintWriter(new StringWriter());
         RootCommand root = new RootCommand();
@@ -77,8 +78,22 @@ class ShellCompleterTest {
     @Test
     void commandNamesFromTheTreeIncludingTheShellsOwn() {
         List<String> c = complete("");
-        for (String name : List.of("ask", "set", "show", "save", "load", "help", "quit", "check", "budget", "rank", "find",
-                "compare", "suffices", "bars", "scatter")) {
+        for (String name : List.of(
+                "ask",
+                "set",
+                "show",
+                "save",
+                "load",
+                "help",
+                "quit",
+                "check",
+                "budget",
+                "rank",
+                "find",
+                "compare",
+                "suffices",
+                "bars",
+                "scatter")) {
             assertTrue(c.contains(name), name + " in " + c);
         }
     }
@@ -110,10 +125,14 @@ class ShellCompleterTest {
     @Test
     void stageKeysAfterSetAndUnitsAfterANumber() {
         List<String> keys = complete("set ");
-        assertTrue(keys.containsAll(List.of("gain", "temperature", "temperature.min", "limit", "limit.input", "rf")), keys.toString());
+        assertTrue(
+                keys.containsAll(List.of("gain", "temperature", "temperature.min", "limit", "limit.input", "rf")),
+                keys.toString());
         assertEquals(List.of("10V", "10mV", "10uV", "10nV"), complete("set limit 10"));
         assertEquals(List.of("100ohm", "100kohm", "100Mohm"), complete("set rf 100"));
-        assertEquals(List.of("non-inverting", "inverting", "follower", "difference", "transimpedance"), complete("set topology "));
+        assertEquals(
+                List.of("non-inverting", "inverting", "follower", "difference", "transimpedance"),
+                complete("set topology "));
         assertTrue(complete("set gain 100").isEmpty()); // a plain number has no unit to offer
         assertTrue(complete("unset tr").contains("trim.allowed"));
     }
@@ -142,11 +161,13 @@ class ShellCompleterTest {
             String body = b.endsWith("…") ? b.substring(0, b.length() - 1) : b;
             // the menu text is the reason's start, cut only where a word ends
             org.junit.jupiter.api.Assertions.assertTrue(why.startsWith(body), id + ": " + b);
-            org.junit.jupiter.api.Assertions.assertTrue(body.length() == why.length()
-                    || !Character.isLetterOrDigit(why.charAt(body.length())), id + ": " + b);
+            org.junit.jupiter.api.Assertions.assertTrue(
+                    body.length() == why.length() || !Character.isLetterOrDigit(why.charAt(body.length())),
+                    id + ": " + b);
         }
         // by hand: the supply variation's first clause is 53 characters, under the menu's 60
-        org.junit.jupiter.api.Assertions.assertEquals("peak supply change, times the part's supply rejection",
+        org.junit.jupiter.api.Assertions.assertEquals(
+                "peak supply change, times the part's supply rejection",
                 ShellCompleter.brief(Questions.why("supply.variation")));
     }
 }

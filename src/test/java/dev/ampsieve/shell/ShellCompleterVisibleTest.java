@@ -33,7 +33,8 @@ class ShellCompleterVisibleTest {
     private static final char ESC = 0x1b;
 
     /** An invented part whose title sets the window title (OSC 0 ... BEL), written with YAML escapes. */
-    private static final String PART = String.join("\n",
+    private static final String PART = String.join(
+            "\n",
             "id: title-amp",
             "title: \"quiet \\e]0;owned\\a\\u202eamp\"",
             "architecture: standard",
@@ -46,8 +47,8 @@ class ShellCompleterVisibleTest {
             "");
 
     private List<Candidate> complete(Path catalog, String line) throws IOException {
-        try (Terminal terminal = new DumbTerminal("test", "dumb", new ByteArrayInputStream(new byte[0]),
-                new ByteArrayOutputStream(), UTF_8)) {
+        try (Terminal terminal = new DumbTerminal(
+                "test", "dumb", new ByteArrayInputStream(new byte[0]), new ByteArrayOutputStream(), UTF_8)) {
             LineReader reader = LineReaderBuilder.builder().terminal(terminal).build();
             PrintWriter sink = new PrintWriter(new StringWriter());
             RootCommand root = new RootCommand();
@@ -56,7 +57,8 @@ class ShellCompleterVisibleTest {
             ShellContext ctx = new ShellContext(root, reader, sink, OutputStyle.PLAIN);
             ShellCommands.all(ctx).forEach(tree::addSubcommand);
             List<Candidate> out = new ArrayList<>();
-            new ShellCompleter(ctx, tree).complete(reader, new DefaultParser().parse(line, line.length(), ParseContext.COMPLETE), out);
+            new ShellCompleter(ctx, tree)
+                    .complete(reader, new DefaultParser().parse(line, line.length(), ParseContext.COMPLETE), out);
             return out;
         }
     }
@@ -82,8 +84,15 @@ class ShellCompleterVisibleTest {
 
     @Test
     void everyFieldOfACandidateIsMadeVisible() {
-        Candidate raw = new Candidate("id" + ESC + "[2J", "shown" + (char) 0x9b, "group" + (char) 7,
-                "about" + (char) 0x202e, null, "key", true, 3);
+        Candidate raw = new Candidate(
+                "id" + ESC + "[2J",
+                "shown" + (char) 0x9b,
+                "group" + (char) 7,
+                "about" + (char) 0x202e,
+                null,
+                "key",
+                true,
+                3);
         Candidate v = ShellCompleter.visible(raw);
         assertEquals("id\\x1b[2J", v.value());
         assertEquals("shown\\x9b", v.displ());

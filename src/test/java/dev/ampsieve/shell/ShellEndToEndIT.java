@@ -29,8 +29,10 @@ class ShellEndToEndIT {
         Path script = Path.of("src/test/shell/e2e-tmux.sh");
         assertTrue(Files.isRegularFile(script), script + " is missing");
         Path log = Files.createTempFile("ampsieve-e2e-", ".log");
-        Process p = new ProcessBuilder("bash", script.toString()).redirectErrorStream(true)
-                .redirectOutput(log.toFile()).start();
+        Process p = new ProcessBuilder("bash", script.toString())
+                .redirectErrorStream(true)
+                .redirectOutput(log.toFile())
+                .start();
         // a guard, not a speed requirement: the script waits at most a few minutes at each step
         if (!p.waitFor(15, TimeUnit.MINUTES)) {
             p.destroyForcibly();
@@ -40,7 +42,8 @@ class ShellEndToEndIT {
         Files.deleteIfExists(log);
         if (p.exitValue() == NO_TMUX) {
             if ("true".equals(System.getenv("CI"))) {
-                fail("tmux is not installed but CI=true: the end-to-end shell test must run in CI (.ci/run installs tmux)");
+                fail(
+                        "tmux is not installed but CI=true: the end-to-end shell test must run in CI (.ci/run installs tmux)");
             }
             Assumptions.abort("tmux is not installed: end-to-end shell test skipped (install tmux to run it)");
         }

@@ -27,8 +27,8 @@ import org.junit.jupiter.api.Test;
 class ShellLookTest {
 
     private static Terminal xterm(Charset cs, int columns) throws IOException {
-        Terminal t = new ExternalTerminal("test", "xterm-256color", new ByteArrayInputStream(new byte[0]),
-                new ByteArrayOutputStream(), cs);
+        Terminal t = new ExternalTerminal(
+                "test", "xterm-256color", new ByteArrayInputStream(new byte[0]), new ByteArrayOutputStream(), cs);
         t.setSize(new Size(columns, 40));
         return t;
     }
@@ -42,8 +42,8 @@ class ShellLookTest {
             assertTrue(Shell.look(t, Map.of("NO_COLOR", ""), false).color());
             assertEquals(120, Shell.look(t, Map.of(), false).width());
         }
-        try (Terminal dumb = new DumbTerminal("test", "dumb", new ByteArrayInputStream(new byte[0]),
-                new ByteArrayOutputStream(), UTF_8)) {
+        try (Terminal dumb = new DumbTerminal(
+                "test", "dumb", new ByteArrayInputStream(new byte[0]), new ByteArrayOutputStream(), UTF_8)) {
             OutputStyle s = Shell.look(dumb, Map.of(), false);
             assertFalse(s.color());
             assertEquals(80, s.width()); // a dumb terminal reports no width
@@ -54,8 +54,12 @@ class ShellLookTest {
     void commandsGetTheTerminalsWidthForTheirTables() throws IOException {
         RootCommand root = new RootCommand();
         assertEquals(OutputStyle.TEXT_WIDTH, root.textWidth()); // the command line: a fixed width for files and pipes
-        try (Terminal t = new ExternalTerminal("test", "xterm-256color", new ByteArrayInputStream("help\n".getBytes(UTF_8)),
-                new ByteArrayOutputStream(), UTF_8)) {
+        try (Terminal t = new ExternalTerminal(
+                "test",
+                "xterm-256color",
+                new ByteArrayInputStream("help\n".getBytes(UTF_8)),
+                new ByteArrayOutputStream(),
+                UTF_8)) {
             t.setSize(new Size(132, 40));
             new Shell(root, List.of(), t, null, Map.of()).run();
         }
@@ -76,7 +80,8 @@ class ShellLookTest {
 
     @Test
     void asciiSessionsSpellUnitsInLetters() {
-        String printed = Sessions.run(List.of("--ascii"), null, Map.of(), "set gain 100", "set limit 10 uV input", "show");
+        String printed =
+                Sessions.run(List.of("--ascii"), null, Map.of(), "set gain 100", "set limit 10 uV input", "show");
         assertTrue(printed.matches("(?s).*limit at the input\\s+10\\.0 uV.*"), printed);
         assertFalse(printed.contains("µ"), printed);
     }
@@ -86,9 +91,12 @@ class ShellLookTest {
         // XDG Base Directory Specification 0.8: $XDG_DATA_HOME, else ~/.local/share; a relative value is ignored
         assertEquals(Path.of("/data/ampsieve/history"), XdgPaths.history(Map.of("XDG_DATA_HOME", "/data"), "/home/u"));
         assertEquals(Path.of("/home/u/.local/share/ampsieve/history"), XdgPaths.history(Map.of(), "/home/u"));
-        assertEquals(Path.of("/home/u/.local/share/ampsieve/history"),
+        assertEquals(
+                Path.of("/home/u/.local/share/ampsieve/history"),
                 XdgPaths.history(Map.of("XDG_DATA_HOME", "relative/dir"), "/home/u"));
-        assertEquals(Path.of("/home/u/.local/share/ampsieve/history"), XdgPaths.history(Map.of("XDG_DATA_HOME", ""), "/home/u"));
+        assertEquals(
+                Path.of("/home/u/.local/share/ampsieve/history"),
+                XdgPaths.history(Map.of("XDG_DATA_HOME", ""), "/home/u"));
     }
 
     @Test

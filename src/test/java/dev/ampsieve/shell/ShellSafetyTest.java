@@ -95,7 +95,8 @@ class ShellSafetyTest {
     }
 
     private static boolean inMonteCarlo(Thread t) {
-        return Arrays.stream(t.getStackTrace()).anyMatch(f -> f.getClassName().equals("dev.ampsieve.stats.SequentialYield"));
+        return Arrays.stream(t.getStackTrace())
+                .anyMatch(f -> f.getClassName().equals("dev.ampsieve.stats.SequentialYield"));
     }
 
     @Test
@@ -103,23 +104,27 @@ class ShellSafetyTest {
         LiveKeys keys = new LiveKeys();
         ByteArrayOutputStream out = new ByteArrayOutputStream(); // its methods are synchronized: read while written
         Terminal t = Sessions.terminal(keys, out);
-        Thread shell = new Thread(() -> new Shell(new RootCommand(), List.of("--catalog", catalog.toString()), t, null, Map.of()).run(),
+        Thread shell = new Thread(
+                () -> new Shell(new RootCommand(), List.of("--catalog", catalog.toString()), t, null, Map.of()).run(),
                 "shell-under-test");
         shell.setDaemon(true);
         // the most units a stage may ask for, every one simulated (worst-case criterion: no early stop):
         // this ranking takes minutes when nothing stops it
         keys.type("set gain 100\nset temperature -40..85 C\nset limit 1 mV\nset trials 10000000\nshow\nrank\n");
         shell.start();
-        assertTimeoutPreemptively(Duration.ofMinutes(3), () -> { // hang guards only, not speed requirements
-            while (!inMonteCarlo(shell)) {
-                assertTrue(shell.isAlive(), "the shell ended before the ranking sampled:\n" + out.toString(UTF_8));
-                Thread.sleep(20);
-            }
-            t.raise(Terminal.Signal.INT); // Ctrl-C while the ranking simulates units
-            keys.type("show\n"); // typed at once, before the shell is back at its prompt
-            keys.end();
-            shell.join();
-        });
+        assertTimeoutPreemptively(
+                Duration.ofMinutes(3),
+                () -> { // hang guards only, not speed requirements
+                    while (!inMonteCarlo(shell)) {
+                        assertTrue(
+                                shell.isAlive(), "the shell ended before the ranking sampled:\n" + out.toString(UTF_8));
+                        Thread.sleep(20);
+                    }
+                    t.raise(Terminal.Signal.INT); // Ctrl-C while the ranking simulates units
+                    keys.type("show\n"); // typed at once, before the shell is back at its prompt
+                    keys.end();
+                    shell.join();
+                });
         t.close();
         String printed = out.toString(UTF_8).replace("\r", "");
         int stop = printed.indexOf("Interrupted; the current stage is as it was.");
@@ -156,11 +161,16 @@ class ShellSafetyTest {
         // a third of a megabyte here (the end-to-end test pastes a whole one into a real terminal)
         Path history = dir.resolve("data/ampsieve/history");
         String huge = "set gain " + "9".repeat(300_000 - 9);
-        String printed = assertTimeoutPreemptively(Duration.ofMinutes(2), // a hang guard
-                () -> Sessions.run(List.of("--catalog", catalog.toString()), history, Map.of(), "help", huge, "show --all"));
+        String printed = assertTimeoutPreemptively(
+                Duration.ofMinutes(2), // a hang guard
+                () -> Sessions.run(
+                        List.of("--catalog", catalog.toString()), history, Map.of(), "help", huge, "show --all"));
         // 300 000 characters typed; the limit is LineLimit.MAX = 4096 (README "The shell")
-        assertTrue(Flat.of(printed).contains("Refused a line of 300000 characters: the shell takes lines of at most 4096 "
-                + "characters; nothing was run or kept in the history."), printed);
+        assertTrue(
+                Flat.of(printed)
+                        .contains("Refused a line of 300000 characters: the shell takes lines of at most 4096 "
+                                + "characters; nothing was run or kept in the history."),
+                printed);
         assertEquals(1, printed.split("Refused a line", -1).length - 1, printed);
         assertFalse(printed.contains("gain = "), printed); // the set did not run
         assertTrue(printed.contains("default: non-inverting"), printed); // the line after it did
@@ -197,8 +207,11 @@ class ShellSafetyTest {
         Path link = Files.createSymbolicLink(dir.resolve("link.yaml"), target);
         for (String save : List.of("save ", "save --force ")) {
             String printed = session("set gain 100", "set limit 1 mV", save + link, "y");
-            assertTrue(Flat.of(printed).contains(link + " is a symbolic link to " + target
-                    + "; save replaces only regular files, so it was left as it is"), printed);
+            assertTrue(
+                    Flat.of(printed)
+                            .contains(link + " is a symbolic link to " + target
+                                    + "; save replaces only regular files, so it was left as it is"),
+                    printed);
             assertFalse(printed.contains("Replace it?"), printed); // refused before asking
         }
         assertTrue(Files.isSymbolicLink(link));
@@ -219,12 +232,16 @@ class ShellSafetyTest {
     @Test
     void saveRefusesAFifoWithoutBlocking() throws Exception {
         Path fifo = dir.resolve("pipe.yaml");
-        Process p = new ProcessBuilder("mkfifo", fifo.toString()).redirectErrorStream(true).start();
-        Assumptions.assumeTrue(p.waitFor(30, TimeUnit.SECONDS) && p.exitValue() == 0, "mkfifo is not available: FIFO case skipped");
+        Process p = new ProcessBuilder("mkfifo", fifo.toString())
+                .redirectErrorStream(true)
+                .start();
+        Assumptions.assumeTrue(
+                p.waitFor(30, TimeUnit.SECONDS) && p.exitValue() == 0, "mkfifo is not available: FIFO case skipped");
         // opening a FIFO for writing blocks until a reader comes: the guard catches a hang
-        String printed = assertTimeoutPreemptively(Duration.ofMinutes(1),
-                () -> session("set gain 100", "set limit 1 mV", "save --force " + fifo));
-        assertTrue(Flat.of(printed).contains(fifo + " is a named pipe (FIFO); save replaces only regular files"), printed);
+        String printed = assertTimeoutPreemptively(
+                Duration.ofMinutes(1), () -> session("set gain 100", "set limit 1 mV", "save --force " + fifo));
+        assertTrue(
+                Flat.of(printed).contains(fifo + " is a named pipe (FIFO); save replaces only regular files"), printed);
         assertEquals("a named pipe (FIFO)", ShellCommands.Save.notARegularFile(fifo));
         assertEquals(List.of("pipe.yaml"), names(dir));
     }
@@ -243,11 +260,16 @@ class ShellSafetyTest {
         // a character device like /dev/null (major 1, minor 3 on Linux, devices.txt [from memory]);
         // only root may make one
         Path device = dir.resolve("null.yaml");
-        Process p = new ProcessBuilder("mknod", device.toString(), "c", "1", "3").redirectErrorStream(true).start();
-        Assumptions.assumeTrue(p.waitFor(30, TimeUnit.SECONDS) && p.exitValue() == 0,
+        Process p = new ProcessBuilder("mknod", device.toString(), "c", "1", "3")
+                .redirectErrorStream(true)
+                .start();
+        Assumptions.assumeTrue(
+                p.waitFor(30, TimeUnit.SECONDS) && p.exitValue() == 0,
                 "cannot make a device node (needs root and mknod): device case skipped");
         String printed = session("set gain 100", "set limit 1 mV", "save --force " + device);
-        assertTrue(Flat.of(printed).contains(device + " is a character device; save replaces only regular files"), printed);
+        assertTrue(
+                Flat.of(printed).contains(device + " is a character device; save replaces only regular files"),
+                printed);
         assertEquals("a character device", ShellCommands.Save.notARegularFile(device));
     }
 

@@ -1,12 +1,12 @@
 package dev.ampsieve.shell;
 
-import dev.ampsieve.testing.DemoCatalog;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.StageLoader;
+import dev.ampsieve.testing.DemoCatalog;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -40,18 +40,30 @@ class ShellSessionTest {
 
     @Test
     void commandsThatTakeAStageGetTheCurrentOne() {
-        String printed = session("set gain 100", "set temperature -40..85 C", "set limit 1 mV", "rank --top 3",
-                "bars zd-chop-01", "scatter --top 4");
+        String printed = session(
+                "set gain 100",
+                "set temperature -40..85 C",
+                "set limit 1 mV",
+                "rank --top 3",
+                "bars zd-chop-01",
+                "scatter --top 4");
         // rank's header names the stage it was given: the shell's own, not a file of the user's
         assertTrue(printed.contains("Stage (current stage): non-inverting, noise gain 100, -40 °C to 85 °C"), printed);
         assertTrue(printed.contains("Candidates ("), printed);
-        assertTrue(dev.ampsieve.testing.Flat.of(printed).contains("zd-chop-01 in (current stage): error at the output, term by term"), printed);
+        assertTrue(
+                dev.ampsieve.testing.Flat.of(printed)
+                        .contains("zd-chop-01 in (current stage): error at the output, term by term"),
+                printed);
         // no filter is named, so zd-chop-01's noise runs to the closed-loop bandwidth and its worst case (2.00 mV) is
         // over the 1 mV limit: the worst case is the chart's full scale, the limit's mark falls at half of it, and its
         // label has room on the right (BarChart)
         assertTrue(printed.contains("▲ limit 1.00 mV"), printed);
         assertFalse(printed.contains("limit 1.00 mV ▲"), printed);
-        assertTrue(dev.ampsieve.testing.Flat.of(printed).contains("(current stage): worst-case error at the output (log scale) against effective unit cost"), printed);
+        assertTrue(
+                dev.ampsieve.testing.Flat.of(printed)
+                        .contains(
+                                "(current stage): worst-case error at the output (log scale) against effective unit cost"),
+                printed);
         assertFalse(printed.contains("ampsieve-shell-"), printed);
     }
 
@@ -59,9 +71,14 @@ class ShellSessionTest {
     void theStageIsNamedBeforeTheBudgetIsFoldedSoItsHeaderStaysOneLine() {
         // the temporary file's long path used to be folded first and swapped for the short name
         // after, leaving "Stage      (current stage): inverting, noise gain" broken after "gain"
-        String printed = session("set gain 100", "set topology inverting", "set source-resistance 1 kohm",
-                "set limit 1 mV input", "budget zd-az-06");
-        assertTrue(printed.contains("Stage      (current stage): inverting, noise gain 10.09, signal gain -9.091\n"),
+        String printed = session(
+                "set gain 100",
+                "set topology inverting",
+                "set source-resistance 1 kohm",
+                "set limit 1 mV input",
+                "budget zd-az-06");
+        assertTrue(
+                printed.contains("Stage      (current stage): inverting, noise gain 10.09, signal gain -9.091\n"),
                 printed);
     }
 
@@ -84,8 +101,10 @@ class ShellSessionTest {
     @Test
     void withoutAStageTheShellSaysHowToGetOne() {
         String printed = session("rank", "help");
-        assertTrue(dev.ampsieve.testing.Flat.of(printed)
-                .contains("'rank' needs a stage: type 'ask' to describe one, 'load FILE', or add --stage FILE"), printed);
+        assertTrue(
+                dev.ampsieve.testing.Flat.of(printed)
+                        .contains("'rank' needs a stage: type 'ask' to describe one, 'load FILE', or add --stage FILE"),
+                printed);
         assertTrue(printed.contains("The shell"), printed);
     }
 
@@ -119,13 +138,17 @@ class ShellSessionTest {
     @Test
     void loadTakesTheValuesAsWrittenAndRefusesABadFileWithItsPlace() throws Exception {
         Path good = dir.resolve("good.yaml");
-        Files.writeString(good, "# a stage of ours\ngain: 40 dB\ntemperature:\n  min: -20 C\n  max: 60 C\nlimit:\n  input: 50 uV\n");
+        Files.writeString(
+                good,
+                "# a stage of ours\ngain: 40 dB\ntemperature:\n  min: -20 C\n  max: 60 C\nlimit:\n  input: 50 uV\n");
         Path bad = dir.resolve("bad.yaml");
         Files.writeString(bad, "gain: 100\nlimit: 2 parsecs\n");
         Path copy = dir.resolve("copy.yaml");
         String printed = session("load " + good, "show", "load " + bad, "show", "save " + copy);
 
-        assertTrue(dev.ampsieve.testing.Flat.of(printed).contains("Loaded " + good + ": non-inverting, gain 40 dB, 50 uV input limit."),
+        assertTrue(
+                dev.ampsieve.testing.Flat.of(printed)
+                        .contains("Loaded " + good + ": non-inverting, gain 40 dB, 50 uV input limit."),
                 printed);
         assertTrue(printed.matches("(?s).*temperature\\s+-20 C\\.\\.60 C.*"), printed);
         assertTrue(printed.matches("(?s).*limit at the output\\s+5\\.00 mV.*"), printed); // 50 uV x noise gain 100
@@ -137,7 +160,8 @@ class ShellSessionTest {
 
     @Test
     void setChecksTheValueAndNamesTheKey() {
-        String printed = session("set gain 100", "set limit 2 V/us", "set limt 1 mV", "set temperature 85..-40", "show");
+        String printed =
+                session("set gain 100", "set limit 2 V/us", "set limt 1 mV", "set temperature 85..-40", "show");
         assertTrue(printed.contains("limit: '2 V/us' is a slew rate but a voltage belongs here"), printed);
         assertTrue(printed.contains("limt: 'limt' is not a stage key; did you mean 'limit'?"), printed);
         assertTrue(printed.contains("temperature: min 85 °C is above max -40 °C; swap the two values"), printed);
@@ -153,8 +177,10 @@ class ShellSessionTest {
                 + "supply rejection not counted: no supply.variation; common-mode rejection not counted: "
                 + "no common-mode-swing; long-term drift not counted: no service-life; operating point not counted: "
                 + "no supply.voltage; self-heating not counted: no load-resistance";
-        assertTrue(flat.contains("without it the open-loop gain, bandwidth and resistor terms are not counted; "
-                + "the verdict will say so."), printed);
+        assertTrue(
+                flat.contains("without it the open-loop gain, bandwidth and resistor terms are not counted; "
+                        + "the verdict will say so."),
+                printed);
         assertTrue(flat.contains("without it supply rejection is not counted"), printed);
         assertTrue(flat.contains("Every verdict: " + left + "."), printed);
         assertTrue(flat.contains("Every verdict: " + left), printed); // rank, under its table
@@ -164,8 +190,14 @@ class ShellSessionTest {
     void setTakesRangesAndTheSupplyInOneLine() throws Exception {
         Path file = shared.resolve("ranges.yaml");
         Files.deleteIfExists(file);
-        String printed = session("set gain 10", "set limit 1 mV", "set output-range 0.1..2.4 V", "set band 0.1..10 Hz",
-                "set supply 5 V ± 0.25 V", "set common-mode-range 1..2", "save " + file);
+        String printed = session(
+                "set gain 10",
+                "set limit 1 mV",
+                "set output-range 0.1..2.4 V",
+                "set band 0.1..10 Hz",
+                "set supply 5 V ± 0.25 V",
+                "set common-mode-range 1..2",
+                "save " + file);
         assertTrue(printed.contains("output-range = 0.1 V..2.4 V"), printed);
         assertTrue(printed.contains("supply = 5 V ± 0.25 V"), printed);
         dev.ampsieve.stage.Stage s = dev.ampsieve.stage.StageLoader.load(file);
@@ -179,8 +211,12 @@ class ShellSessionTest {
         assertEquals(0.25, s.supplyVariation(), 1e-12);
 
         Files.delete(file);
-        session("set gain 10", "set limit 1 mV", "set supply 12 V +- 0.6 V",
-                "set supply.variation 0.3 V", "save " + file);
+        session(
+                "set gain 10",
+                "set limit 1 mV",
+                "set supply 12 V +- 0.6 V",
+                "set supply.variation 0.3 V",
+                "save " + file);
         s = dev.ampsieve.stage.StageLoader.load(file);
         assertEquals(12.0, s.supplyVoltage());
         assertEquals(0.3, s.supplyVariation(), 1e-12); // the nested key form replaces the variation alone
@@ -189,7 +225,8 @@ class ShellSessionTest {
     @Test
     void aFailurePrintsOneLineAndTheShellGoesOn() {
         String printed = session("rnak", "budget", "budget nope --stage nowhere.yaml", "show --bogus", "help");
-        assertTrue(printed.contains("unknown command 'rnak'; did you mean 'rank'? ('help' lists the commands)"), printed);
+        assertTrue(
+                printed.contains("unknown command 'rnak'; did you mean 'rank'? ('help' lists the commands)"), printed);
         assertTrue(printed.contains("'budget' needs a stage"), printed);
         assertTrue(printed.contains("show: Unknown option: '--bogus' ('help show' shows its options)"), printed);
         assertFalse(printed.contains("Exception"), printed);
@@ -213,14 +250,24 @@ class ShellSessionTest {
     @Test
     void quitWithAnUnsavedStageWarnsOnce() {
         String printed = session("set gain 100", "quit", "quit", "show");
-        assertTrue(printed.contains("The current stage is not saved: 'save FILE' keeps it; 'quit' again leaves"), printed);
+        assertTrue(
+                printed.contains("The current stage is not saved: 'save FILE' keeps it; 'quit' again leaves"), printed);
         assertFalse(printed.contains("Stage (typed in"), printed); // the second quit left before 'show'
     }
 
     @Test
     void historyIsKeptInTheGivenFile() throws IOException {
         Path history = dir.resolve("data/ampsieve/history");
-        Sessions.run(List.of("--catalog", catalog.toString()), history, Map.of(), "help", "show", "ask", "", "100", "\u0003");
+        Sessions.run(
+                List.of("--catalog", catalog.toString()),
+                history,
+                Map.of(),
+                "help",
+                "show",
+                "ask",
+                "",
+                "100",
+                "\u0003");
         List<String> lines = Files.readAllLines(history);
         assertTrue(lines.stream().anyMatch(l -> l.endsWith("help")), lines.toString());
         assertTrue(lines.stream().anyMatch(l -> l.endsWith("ask")), lines.toString());
@@ -230,7 +277,9 @@ class ShellSessionTest {
     @Test
     void theBannerSaysHowToBegin() {
         String printed = session();
-        assertTrue(dev.ampsieve.testing.Flat.of(printed).contains("Type ask to describe your stage, help for the commands"),
+        assertTrue(
+                dev.ampsieve.testing.Flat.of(printed)
+                        .contains("Type ask to describe your stage, help for the commands"),
                 printed);
         Matcher m = Pattern.compile("Catalog \\S+: (\\d+) part\\(s\\)").matcher(printed);
         assertTrue(m.find(), printed);
@@ -245,7 +294,8 @@ class ShellSessionTest {
     void errorsAreFoldedToTheWidthAtWordBoundaries() throws Exception {
         Path bad = dir.resolve("bad.yaml");
         Files.writeString(bad, "gain: 100\nlimit: 2 parsecs\n");
-        String printed = session("set gain 100", "set limit 2 V/us", "load " + bad, "budget zz-nothing").replace("\r", "");
+        String printed = session("set gain 100", "set limit 2 V/us", "load " + bad, "budget zz-nothing")
+                .replace("\r", "");
         for (String line : printed.split("\n")) {
             line = Sessions.withoutPrompts(line); // the dumb terminal leaves output on the prompt's line
             assertTrue(line.length() <= 80, "longer than the dumb terminal's 80 columns: " + line + "\n" + printed);
@@ -261,19 +311,26 @@ class ShellSessionTest {
     void commandsNamedAsTheCommandLineTypesThemRunInTheShellToo() {
         // messages and help name commands with the program's name, as on the command line; the shell takes that
         // form as typed, so nothing printed is rewritten for the shell
-        String printed = session("set gain 100", "set limit 1 mV", "budget zz-nothing-like-it", "ampsieve check --quiet");
+        String printed =
+                session("set gain 100", "set limit 1 mV", "budget zz-nothing-like-it", "ampsieve check --quiet");
         String flat = dev.ampsieve.testing.Flat.of(printed);
         assertTrue(flat.contains("; 'ampsieve check' lists what was read"), printed);
-        assertTrue(flat.matches("(?s).*\\d+ file\\(s\\), 48 part\\(s\\), 0 error\\(s\\).*"), printed); // check's own summary line
-        assertEquals(List.of("check", "--quiet"), Shell.withoutLeadingProgramName(List.of("ampsieve", "check", "--quiet")));
+        assertTrue(
+                flat.matches("(?s).*\\d+ file\\(s\\), 48 part\\(s\\), 0 error\\(s\\).*"),
+                printed); // check's own summary line
+        assertEquals(
+                List.of("check", "--quiet"), Shell.withoutLeadingProgramName(List.of("ampsieve", "check", "--quiet")));
         assertEquals(List.of("ampsieve"), Shell.withoutLeadingProgramName(List.of("ampsieve"))); // alone: left as typed
     }
 
     @Test
     void loadingATransimpedanceStageNamesItsRfNotAGain() {
         String printed = session("load demo-catalog/stages/photodiode.yaml");
-        assertTrue(dev.ampsieve.testing.Flat.of(printed).contains(
-                "Loaded demo-catalog/stages/photodiode.yaml: transimpedance, rf 1 Mohm, 5 nA input limit."), printed);
+        assertTrue(
+                dev.ampsieve.testing.Flat.of(printed)
+                        .contains(
+                                "Loaded demo-catalog/stages/photodiode.yaml: transimpedance, rf 1 Mohm, 5 nA input limit."),
+                printed);
         assertFalse(printed.contains("gain null"), printed);
     }
 }

@@ -66,18 +66,21 @@ class DifferenceStageKeysTest {
 
     @Test
     void r3AndR4GivenAreKept() throws InputException {
-        Difference d = network("topology: difference\nr1: 1 kohm\nr2: 10 kohm\nr3: 1.001 kohm\nr4: 10 kohm\nlimit: 1 mV\n");
+        Difference d =
+                network("topology: difference\nr1: 1 kohm\nr2: 10 kohm\nr3: 1.001 kohm\nr4: 10 kohm\nlimit: 1 mV\n");
         assertEquals(1.001e3, d.r3(), 1e-9);
         assertEquals(10e3, d.r4(), 0.0);
     }
 
     @Test
     void oneSourceResistanceIsBothLegsAndTheMappingGivesEachLeg() throws InputException {
-        Difference both = network("topology: difference\nr1: 10 kohm\nr2: 100 kohm\nsource-resistance: 175 ohm\nlimit: 1 mV\n");
+        Difference both =
+                network("topology: difference\nr1: 10 kohm\nr2: 100 kohm\nsource-resistance: 175 ohm\nlimit: 1 mV\n");
         assertEquals(175.0, both.rsMinus(), 0.0);
         assertEquals(175.0, both.rsPlus(), 0.0);
-        Difference legs = network("topology: difference\nr1: 10 kohm\nr2: 100 kohm\nsource-resistance: {minus: 100 ohm, plus: 250 ohm}\n"
-                + "limit: 1 mV\n");
+        Difference legs = network(
+                "topology: difference\nr1: 10 kohm\nr2: 100 kohm\nsource-resistance: {minus: 100 ohm, plus: 250 ohm}\n"
+                        + "limit: 1 mV\n");
         assertEquals(100.0, legs.rsMinus(), 0.0);
         assertEquals(250.0, legs.rsPlus(), 0.0);
         // the legs add to r1 and r3: a = 100 k/10.1 k = 9.900990, b = 100 k/10.25 k = 9.756098
@@ -88,7 +91,8 @@ class DifferenceStageKeysTest {
     @Test
     void theDefaultCommonModeSwingIsHalfTheDifferentialFullScaleAtTheSource() throws InputException {
         // full scale 1 V at gain 100: the source's differential full scale is 10 mV; half of it, 5 mV
-        Stage s = StageLoader.parse("topology: difference\ngain: 100\nr2: 1 Mohm\nfull-scale-output: 1 V\nlimit: 1 mV\n", NAME);
+        Stage s = StageLoader.parse(
+                "topology: difference\ngain: 100\nr2: 1 Mohm\nfull-scale-output: 1 V\nlimit: 1 mV\n", NAME);
         assertEquals(5e-3, s.commonModeSwing(), 1e-15);
     }
 
@@ -96,52 +100,64 @@ class DifferenceStageKeysTest {
 
     @Test
     void gainR1AndR2TogetherMayDisagree() {
-        assertEquals("s.yaml:2:7: gain: 'gain', 'r1' and 'r2' are all given and may disagree; give 'gain' with 'r2' (or with"
-                + " 'r1'), or 'r1' and 'r2' without 'gain'", problem("topology: difference\ngain: 100\nr1: 1 kohm\nr2: 100 kohm\nlimit: 1 mV\n"));
+        assertEquals(
+                "s.yaml:2:7: gain: 'gain', 'r1' and 'r2' are all given and may disagree; give 'gain' with 'r2' (or with"
+                        + " 'r1'), or 'r1' and 'r2' without 'gain'",
+                problem("topology: difference\ngain: 100\nr1: 1 kohm\nr2: 100 kohm\nlimit: 1 mV\n"));
     }
 
     @Test
     void onlyR3IsRefused() {
-        assertEquals("s.yaml:3:5: r3: only one of r3 and r4 is given; give both, or neither (then r3 = r1 and r4 = r2, the matched"
-                + " design)", problem("topology: difference\ngain: 10\nr3: 1 kohm\nlimit: 1 mV\n"));
+        assertEquals(
+                "s.yaml:3:5: r3: only one of r3 and r4 is given; give both, or neither (then r3 = r1 and r4 = r2, the matched"
+                        + " design)",
+                problem("topology: difference\ngain: 10\nr3: 1 kohm\nlimit: 1 mV\n"));
     }
 
     @Test
     void onlyR3WithoutAGainAsksForTheGainFirst() {
-        assertEquals("s.yaml:1:1: gain: the gain is not given; add 'gain: 10' (with 'r2', default 10 kohm), or both 'r1' and 'r2'",
+        assertEquals(
+                "s.yaml:1:1: gain: the gain is not given; add 'gain: 10' (with 'r2', default 10 kohm), or both 'r1' and 'r2'",
                 problem("topology: difference\nr3: 1 kohm\nlimit: 1 mV\n"));
     }
 
     @Test
     void rfNamesR2() {
-        assertEquals("s.yaml:3:5: rf: a difference stage has r1, r2 (inverting side) and r3, r4 (non-inverting side), not 'rf';"
-                + " write 'r2' for the feedback resistor", problem("topology: difference\ngain: 10\nrf: 10 kohm\nlimit: 1 mV\n"));
+        assertEquals(
+                "s.yaml:3:5: rf: a difference stage has r1, r2 (inverting side) and r3, r4 (non-inverting side), not 'rf';"
+                        + " write 'r2' for the feedback resistor",
+                problem("topology: difference\ngain: 10\nrf: 10 kohm\nlimit: 1 mV\n"));
     }
 
     @Test
     void balanceResistanceHasNoPlace() {
-        assertEquals("s.yaml:3:21: balance-resistance: a difference stage has r1, r2 (inverting side) and r3, r4 (non-inverting"
-                + " side), not 'balance-resistance'; remove it: r4 returns the + input to the reference",
+        assertEquals(
+                "s.yaml:3:21: balance-resistance: a difference stage has r1, r2 (inverting side) and r3, r4 (non-inverting"
+                        + " side), not 'balance-resistance'; remove it: r4 returns the + input to the reference",
                 problem("topology: difference\ngain: 10\nbalance-resistance: 1 kohm\nlimit: 1 mV\n"));
     }
 
     @Test
     void oneLegMissing() {
-        assertEquals("s.yaml:4:3: source-resistance.plus: missing: per-leg source resistances need both legs; add 'plus: 350 ohm'"
-                + " (the resistance of the leg driving r3)",
+        assertEquals(
+                "s.yaml:4:3: source-resistance.plus: missing: per-leg source resistances need both legs; add 'plus: 350 ohm'"
+                        + " (the resistance of the leg driving r3)",
                 problem("topology: difference\ngain: 10\nsource-resistance:\n  minus: 350 ohm\nlimit: 1 mV\n"));
     }
 
     @Test
     void perLegSourceResistanceBelongsToADifferenceStage() {
-        assertEquals("s.yaml:2:20: source-resistance: a source resistance per leg ({minus, plus}) belongs to a difference stage;"
-                + " write one value, such as 'source-resistance: 350 ohm'",
+        assertEquals(
+                "s.yaml:2:20: source-resistance: a source resistance per leg ({minus, plus}) belongs to a difference stage;"
+                        + " write one value, such as 'source-resistance: 350 ohm'",
                 problem("gain: 10\nsource-resistance: {minus: 1 kohm, plus: 1 kohm}\nlimit: 1 mV\n"));
     }
 
     @Test
     void r1OnANonInvertingStageNamesTheTopology() {
-        assertEquals("s.yaml:2:5: r1: 'r1' belongs to a difference stage, and this one is non-inverting; remove it, or write"
-                + " 'topology: difference'", problem("gain: 10\nr1: 1 kohm\nlimit: 1 mV\n"));
+        assertEquals(
+                "s.yaml:2:5: r1: 'r1' belongs to a difference stage, and this one is non-inverting; remove it, or write"
+                        + " 'topology: difference'",
+                problem("gain: 10\nr1: 1 kohm\nlimit: 1 mV\n"));
     }
 }

@@ -16,17 +16,27 @@ class MaxTrialsTest {
 
     @Test
     void defaultsToAMillionUnitsOrTrialsWhenThatIsMore() throws InputException {
-        assertEquals(1_000_000, StageLoader.parse("gain: 10\nlimit: 1 mV\n", NAME).maxTrials());
-        assertEquals(2_000_000, StageLoader.parse("gain: 10\nlimit: 1 mV\ntrials: 2000000\n", NAME).maxTrials());
-        assertEquals(50_000, StageLoader.parse("gain: 10\nlimit: 1 mV\nmax-trials: 50000\n", NAME).maxTrials());
+        assertEquals(
+                1_000_000, StageLoader.parse("gain: 10\nlimit: 1 mV\n", NAME).maxTrials());
+        assertEquals(
+                2_000_000,
+                StageLoader.parse("gain: 10\nlimit: 1 mV\ntrials: 2000000\n", NAME)
+                        .maxTrials());
+        assertEquals(
+                50_000,
+                StageLoader.parse("gain: 10\nlimit: 1 mV\nmax-trials: 50000\n", NAME)
+                        .maxTrials());
     }
 
     @Test
     void belowTrialsIsAnErrorNamingLineColumnAndFix() {
-        InputException e = assertThrows(InputException.class,
+        InputException e = assertThrows(
+                InputException.class,
                 () -> StageLoader.parse("gain: 10\nlimit: 1 mV\ntrials: 20000\nmax-trials: 5000\n", NAME));
         List<String> all = e.problems().stream().map(Problem::toString).toList();
-        assertEquals(List.of("s.yaml:4:13: max-trials: 5000 is below trials (20000); write max-trials at least 20000, or lower trials"),
+        assertEquals(
+                List.of(
+                        "s.yaml:4:13: max-trials: 5000 is below trials (20000); write max-trials at least 20000, or lower trials"),
                 all);
     }
 

@@ -54,33 +54,39 @@ class OperatingPointStageKeysTest {
 
     @Test
     void aZeroLoadIsRefused() {
-        assertEquals("s.yaml:3:18: load-resistance: must be more than 0; write a resistance such as '2 kohm'",
+        assertEquals(
+                "s.yaml:3:18: load-resistance: must be more than 0; write a resistance such as '2 kohm'",
                 problem("gain: 10\nlimit: 1 mV\nload-resistance: 0 ohm\n"));
     }
 
     @Test
     void aLoadBelowAnOhmIsAShort() {
-        assertEquals("s.yaml:3:18: load-resistance: 500 mΩ is below 1.00 Ω, a short for an op amp's output; write the"
-                + " resistance the output drives, such as '2 kohm'; leave the key out for no load",
+        assertEquals(
+                "s.yaml:3:18: load-resistance: 500 mΩ is below 1.00 Ω, a short for an op amp's output; write the"
+                        + " resistance the output drives, such as '2 kohm'; leave the key out for no load",
                 problem("gain: 10\nlimit: 1 mV\nload-resistance: 0.5 ohm\n"));
     }
 
     @Test
     void aLoadInVoltsNamesTheUnit() {
-        assertEquals("s.yaml:3:18: load-resistance: '2 V' is a voltage but a resistance belongs here; write a resistance"
-                + " such as '2 kohm'", problem("gain: 10\nlimit: 1 mV\nload-resistance: 2 V\n"));
+        assertEquals(
+                "s.yaml:3:18: load-resistance: '2 V' is a voltage but a resistance belongs here; write a resistance"
+                        + " such as '2 kohm'",
+                problem("gain: 10\nlimit: 1 mV\nload-resistance: 2 V\n"));
     }
 
     @Test
     void aSampleRateBeyondAnyConverterIsRefused() {
-        assertEquals("s.yaml:3:14: sample-rate: 20.0 GHz is above 10.0 GHz, faster than any converter samples; check the"
-                + " prefix (Hz, kHz, MHz); write the converter's sample rate, such as '30 kHz'",
+        assertEquals(
+                "s.yaml:3:14: sample-rate: 20.0 GHz is above 10.0 GHz, faster than any converter samples; check the"
+                        + " prefix (Hz, kHz, MHz); write the converter's sample rate, such as '30 kHz'",
                 problem("gain: 10\nlimit: 1 mV\nsample-rate: 20 GHz\n"));
     }
 
     @Test
     void aZeroSampleRateIsRefused() {
-        assertEquals("s.yaml:3:14: sample-rate: must be more than 0; write a frequency such as '30 kHz'",
+        assertEquals(
+                "s.yaml:3:14: sample-rate: must be more than 0; write a frequency such as '30 kHz'",
                 problem("gain: 10\nlimit: 1 mV\nsample-rate: 0 Hz\n"));
     }
 }

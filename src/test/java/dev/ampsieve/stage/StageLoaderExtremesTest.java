@@ -20,7 +20,9 @@ class StageLoaderExtremesTest {
     void aToleranceOf1e308IsAProblemInTheFile() {
         String yaml = "gain: 10\nlimit: 1 mV\nresistor-ratio: {tolerance: 1e308}\n";
         InputException e = assertThrows(InputException.class, () -> StageLoader.parse(yaml, Path.of("s.yaml")));
-        assertEquals("s.yaml:3:29: resistor-ratio.tolerance: a ratio tolerance of ∞ % is not a resistor tolerance;"
-                + " write it with its unit, such as '0.1 %'", e.getMessage());
+        assertEquals(
+                "s.yaml:3:29: resistor-ratio.tolerance: a ratio tolerance of ∞ % is not a resistor tolerance;"
+                        + " write it with its unit, such as '0.1 %'",
+                e.getMessage());
     }
 }

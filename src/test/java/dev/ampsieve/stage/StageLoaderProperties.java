@@ -43,8 +43,13 @@ class StageLoaderProperties {
     @Test
     void anyStageTextGivesAStageOrTypedProblems() {
         Path name = Path.of("stage.yaml");
-        Props.theory(1000).forAll(TEXT).checkAssert(text -> Props.onlyTyped(text, InputException.class,
-                e -> sound(e.problems(), name), () -> StageLoader.parse(text, name)));
+        Props.theory(1000)
+                .forAll(TEXT)
+                .checkAssert(text -> Props.onlyTyped(
+                        text,
+                        InputException.class,
+                        e -> sound(e.problems(), name),
+                        () -> StageLoader.parse(text, name)));
     }
 
     @Test
@@ -55,7 +60,8 @@ class StageLoaderProperties {
             write(file, bytes);
             byte[] before = sha256(bytes);
             Props.onlyTyped(shown, InputException.class, e -> sound(e.problems(), file), () -> StageLoader.load(file));
-            assertArrayEquals(before, sha256(read(file)), () -> "the file changed while loading " + Props.escape(shown));
+            assertArrayEquals(
+                    before, sha256(read(file)), () -> "the file changed while loading " + Props.escape(shown));
             assertEquals(List.of(file), list(dir), "the loader left files behind");
         });
     }
@@ -65,14 +71,43 @@ class StageLoaderProperties {
     void anyAnswerToAnyKeyGivesProblemsOnly() {
         List<String> keys = StageKeys.paths();
         Gen<String> answer = Generate.frequency(List.of(
-                Pair.of(4, Mutations.mutated(List.of("10", "100 V/V", "40 dB", "10 kohm", "-40 C", "125 C", "5 V", "0.25 V",
-                        "0.1 Hz", "10 kHz", "0.1 %", "25 ppm/C", "10 y", "1 mV", "yield 99.9 %", "rss", "worst-case",
-                        "inverting", "follower", "one-point", "true", "20000", "42", "0.5", "16", "2.5 V"), 3)),
+                Pair.of(
+                        4,
+                        Mutations.mutated(
+                                List.of(
+                                        "10",
+                                        "100 V/V",
+                                        "40 dB",
+                                        "10 kohm",
+                                        "-40 C",
+                                        "125 C",
+                                        "5 V",
+                                        "0.25 V",
+                                        "0.1 Hz",
+                                        "10 kHz",
+                                        "0.1 %",
+                                        "25 ppm/C",
+                                        "10 y",
+                                        "1 mV",
+                                        "yield 99.9 %",
+                                        "rss",
+                                        "worst-case",
+                                        "inverting",
+                                        "follower",
+                                        "one-point",
+                                        "true",
+                                        "20000",
+                                        "42",
+                                        "0.5",
+                                        "16",
+                                        "2.5 V"),
+                                3)),
                 Pair.of(1, Mutations.noise(20))));
         Props.theory(800).forAll(Generate.pick(keys), answer).checkAssert((key, text) -> {
             try {
                 List<Problem> problems = StageLoader.checkAnswer(key, text);
-                assertTrue(problems.stream().allMatch(p -> !p.message().isBlank()),
+                assertTrue(
+                        problems.stream().allMatch(p -> !p.message().isBlank()),
                         () -> "blank message for " + key + " = " + Props.escape(text) + ": " + problems);
             } catch (RuntimeException | Error e) {
                 throw new AssertionError("untyped " + e + " for " + key + " = " + Props.escape(text), e);
@@ -82,7 +117,9 @@ class StageLoaderProperties {
 
     /** Every problem names the file and says what is wrong. */
     static boolean sound(List<Problem> problems, Path file) {
-        return !problems.isEmpty() && problems.stream().allMatch(p -> file.equals(p.file()) && !p.message().isBlank());
+        return !problems.isEmpty()
+                && problems.stream()
+                        .allMatch(p -> file.equals(p.file()) && !p.message().isBlank());
     }
 
     static void write(Path file, byte[] bytes) {

@@ -1,12 +1,12 @@
 package dev.ampsieve.stage;
 
-import dev.ampsieve.testing.Networks;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.ampsieve.catalog.Range;
+import dev.ampsieve.testing.Networks;
 import dev.ampsieve.yaml.InputException;
 import dev.ampsieve.yaml.Problem;
 import java.nio.file.Path;
@@ -74,14 +74,28 @@ class StageLoaderTest {
         @Test
         void commonModeSwingDefaultsFollowTheTopology() throws InputException {
             // non-inverting: the inputs follow the full-scale input, 2.5 V / 100
-            assertEquals(0.025, stage("gain: 100\nfull-scale-output: 2.5 V\nlimit: 1 mV\n").commonModeSwing(), 1e-15);
+            assertEquals(
+                    0.025,
+                    stage("gain: 100\nfull-scale-output: 2.5 V\nlimit: 1 mV\n").commonModeSwing(),
+                    1e-15);
             // inverting: the inputs sit at the reference (virtual ground)
-            assertEquals(0.0, stage("topology: inverting\ngain: 10\nfull-scale-output: 2.5 V\nlimit: 1 mV\n").commonModeSwing(), 0.0);
+            assertEquals(
+                    0.0,
+                    stage("topology: inverting\ngain: 10\nfull-scale-output: 2.5 V\nlimit: 1 mV\n")
+                            .commonModeSwing(),
+                    0.0);
             // follower: the input carries the whole output
-            assertEquals(4.0, stage("topology: follower\nfull-scale-output: 4 V\nlimit: 1 mV\n").commonModeSwing(), 0.0);
+            assertEquals(
+                    4.0,
+                    stage("topology: follower\nfull-scale-output: 4 V\nlimit: 1 mV\n")
+                            .commonModeSwing(),
+                    0.0);
             // written out, it wins
-            assertEquals(0.15, stage("gain: 100\nfull-scale-output: 2.5 V\ncommon-mode-swing: 150 mV\nlimit: 1 mV\n")
-                    .commonModeSwing(), 1e-15);
+            assertEquals(
+                    0.15,
+                    stage("gain: 100\nfull-scale-output: 2.5 V\ncommon-mode-swing: 150 mV\nlimit: 1 mV\n")
+                            .commonModeSwing(),
+                    1e-15);
         }
 
         @Test
@@ -95,11 +109,16 @@ class StageLoaderTest {
 
         @Test
         void trimBlockAllowsTrimmingUnlessItSaysOtherwise() throws InputException {
-            assertEquals(new Trim(true, Trim.Method.TWO_POINT, 1e-3, 0.5),
-                    stage("gain: 10\nlimit: 1 mV\ntrim:\n  method: two-point\n  resolution: 1 mV\n  cost: 0.50\n").trim());
-            assertEquals(new Trim(false, Trim.Method.ONE_POINT, 0, 0),
+            assertEquals(
+                    new Trim(true, Trim.Method.TWO_POINT, 1e-3, 0.5),
+                    stage("gain: 10\nlimit: 1 mV\ntrim:\n  method: two-point\n  resolution: 1 mV\n  cost: 0.50\n")
+                            .trim());
+            assertEquals(
+                    new Trim(false, Trim.Method.ONE_POINT, 0, 0),
                     stage("gain: 10\nlimit: 1 mV\ntrim:\n  allowed: false\n").trim());
-            assertEquals(new Trim(true, Trim.Method.ONE_POINT, 0, 0), stage("gain: 10\nlimit: 1 mV\ntrim: true\n").trim());
+            assertEquals(
+                    new Trim(true, Trim.Method.ONE_POINT, 0, 0),
+                    stage("gain: 10\nlimit: 1 mV\ntrim: true\n").trim());
         }
 
         @Test
@@ -107,7 +126,9 @@ class StageLoaderTest {
             // one value per key from StageKeys' own examples; alternatives left out
             java.util.Map<String, String> answers = new java.util.LinkedHashMap<>();
             for (StageKeys.Key k : StageKeys.ORDERED) {
-                if (!k.path().startsWith("limit.") && !k.path().equals("rg") && !k.path().startsWith("source-resistance.")
+                if (!k.path().startsWith("limit.")
+                        && !k.path().equals("rg")
+                        && !k.path().startsWith("source-resistance.")
                         && StageKeys.appliesTo(k, Topology.NON_INVERTING)) {
                     answers.put(k.path(), k.example());
                 }
@@ -121,9 +142,15 @@ class StageLoaderTest {
 
         @Test
         void orderedKeysStartWithGainTemperatureAndLimit() {
-            assertEquals(List.of("gain", "temperature.min", "temperature.max", "limit"), StageKeys.paths().subList(0, 4));
+            assertEquals(
+                    List.of("gain", "temperature.min", "temperature.max", "limit"),
+                    StageKeys.paths().subList(0, 4));
             for (StageKeys.Key k : StageKeys.ORDERED) {
-                assertTrue(!k.why().isBlank() && !k.defaultText().isBlank() && !k.example().isBlank(), k.path());
+                assertTrue(
+                        !k.why().isBlank()
+                                && !k.defaultText().isBlank()
+                                && !k.example().isBlank(),
+                        k.path());
             }
         }
     }
@@ -150,7 +177,8 @@ class StageLoaderTest {
         @Test
         void parallelOf100kAnd1kIs990point099() throws InputException {
             // Rp = Rf || Rg, reference-checks.md §2: 990.099 ohm, tolerance half a unit of the last digit
-            assertEquals(990.099, stage("rf: 100 kohm\nrg: 1 kohm\nlimit: 1 mV\n").rMinus(), 0.0005);
+            assertEquals(
+                    990.099, stage("rf: 100 kohm\nrg: 1 kohm\nlimit: 1 mV\n").rMinus(), 0.0005);
         }
 
         @Test
@@ -161,7 +189,10 @@ class StageLoaderTest {
             Stage inv = stage("topology: inverting\ngain: -99\nrf: 99 kohm\nlimit: 1 mV\n");
             assertEquals(1000.0, Networks.rg(inv), 1e-12); // inverting: gain is the ratio rf/rg, sign ignored
             assertEquals(-99.0, inv.signalGain(), 1e-12);
-            assertEquals(inv, stage("topology: inverting\ngain: 99\nrf: 99 kohm\nlimit: 1 mV\n").withWhere(inv.where()));
+            assertEquals(
+                    inv,
+                    stage("topology: inverting\ngain: 99\nrf: 99 kohm\nlimit: 1 mV\n")
+                            .withWhere(inv.where()));
             Stage withRg = stage("gain: 101\nrg: 1 kohm\nlimit: 1 mV\n");
             assertEquals(100e3, withRg.rf(), 1e-9);
         }
@@ -186,7 +217,10 @@ class StageLoaderTest {
             assertEquals(-40.0, s.tMin(), 1e-9);
             assertEquals(65.0, s.deltaT(), 1e-9); // |-40 - 25| is the larger distance
             assertEquals(8766 * 3600.0, s.serviceLife(), 0.0); // Julian year, as Units documents
-            assertEquals(1000 * 3600.0, stage("gain: 10\nlimit: 1 mV\nservice-life: 1000 h\n").serviceLife(), 0.0);
+            assertEquals(
+                    1000 * 3600.0,
+                    stage("gain: 10\nlimit: 1 mV\nservice-life: 1000 h\n").serviceLife(),
+                    0.0);
         }
     }
 
@@ -199,8 +233,16 @@ class StageLoaderTest {
             Stage one = stage("gain: 10\nlimit: {lsb: 1, bits: 16, reference: 2.5 V}\n");
             assertEquals(new Limit(Limit.Kind.LSB, 1.0, 16, 2.5), one.limit());
             assertEquals(38.1470e-6, one.limitVolts(), 0.00005e-6);
-            assertEquals(19.0735e-6, stage("gain: 10\nlimit: {lsb: 0.5, bits: 16, reference: 2.5 V}\n").limitVolts(), 0.00005e-6);
-            assertEquals(1.000000e-3, stage("gain: 10\nlimit: {lsb: 1, bits: 12, reference: 4.096 V}\n").limitVolts(), 0.0000005e-3);
+            assertEquals(
+                    19.0735e-6,
+                    stage("gain: 10\nlimit: {lsb: 0.5, bits: 16, reference: 2.5 V}\n")
+                            .limitVolts(),
+                    0.00005e-6);
+            assertEquals(
+                    1.000000e-3,
+                    stage("gain: 10\nlimit: {lsb: 1, bits: 12, reference: 4.096 V}\n")
+                            .limitVolts(),
+                    0.0000005e-3);
         }
 
         @Test
@@ -220,16 +262,27 @@ class StageLoaderTest {
             Stage s = stage("gain: 10\nfull-scale-output: 2.5 V\nlimit: {percent-of-full-scale: 0.1 %}\n");
             assertEquals(2.5e-3, s.limitVolts(), 1e-15);
             // the key says percent, so a bare number is read as percent
-            assertEquals(s.limit(), stage("gain: 10\nfull-scale-output: 2.5 V\nlimit: {percent-of-full-scale: 0.1}\n").limit());
+            assertEquals(
+                    s.limit(),
+                    stage("gain: 10\nfull-scale-output: 2.5 V\nlimit: {percent-of-full-scale: 0.1}\n")
+                            .limit());
         }
 
         @Test
         void criterionForms() throws InputException {
-            assertEquals(Criterion.RSS, stage("gain: 10\nlimit: 1 mV\ncriterion: rss\n").criterion());
-            Criterion y = stage("gain: 10\nlimit: 1 mV\ncriterion: yield 99.9 %\n").criterion();
+            assertEquals(
+                    Criterion.RSS,
+                    stage("gain: 10\nlimit: 1 mV\ncriterion: rss\n").criterion());
+            Criterion y =
+                    stage("gain: 10\nlimit: 1 mV\ncriterion: yield 99.9 %\n").criterion();
             assertEquals(Criterion.Kind.YIELD, y.kind());
             assertEquals(0.999, y.yieldTarget(), 1e-15);
-            assertEquals(0.95, stage("gain: 10\nlimit: 1 mV\ncriterion: yield 95%\n").criterion().yieldTarget(), 1e-15);
+            assertEquals(
+                    0.95,
+                    stage("gain: 10\nlimit: 1 mV\ncriterion: yield 95%\n")
+                            .criterion()
+                            .yieldTarget(),
+                    1e-15);
         }
     }
 
@@ -247,13 +300,23 @@ class StageLoaderTest {
         @Test
         void aBadAnswerGetsItsProblemWithoutLocation() {
             // the example is rf's own (StageKeys), not the dimension's
-            assertEquals(List.of("rf: '10 mV' is a voltage but a resistance belongs here; write a resistance such as '100 kohm'"),
-                    StageLoader.checkAnswer("rf", "10 mV").stream().map(Problem::toString).toList());
-            assertEquals(List.of("trials: 50 is outside 100..10000000; write a whole number from 100 to 10000000"),
-                    StageLoader.checkAnswer("trials", "50").stream().map(Problem::toString).toList());
-            assertEquals(List.of("gain: a non-inverting stage cannot have gain 0.5 (below 1); "
+            assertEquals(
+                    List.of(
+                            "rf: '10 mV' is a voltage but a resistance belongs here; write a resistance such as '100 kohm'"),
+                    StageLoader.checkAnswer("rf", "10 mV").stream()
+                            .map(Problem::toString)
+                            .toList());
+            assertEquals(
+                    List.of("trials: 50 is outside 100..10000000; write a whole number from 100 to 10000000"),
+                    StageLoader.checkAnswer("trials", "50").stream()
+                            .map(Problem::toString)
+                            .toList());
+            assertEquals(
+                    List.of("gain: a non-inverting stage cannot have gain 0.5 (below 1); "
                             + "write a gain of 1 or more, or use 'topology: inverting'"),
-                    StageLoader.checkAnswer("gain", "0.5").stream().map(Problem::toString).toList());
+                    StageLoader.checkAnswer("gain", "0.5").stream()
+                            .map(Problem::toString)
+                            .toList());
             assertEquals(1, StageLoader.checkAnswer("criterion", "yield 100 %").size());
             assertEquals(1, StageLoader.checkAnswer("limit", "5 mV\nrf: 1 V").size()); // one value, never two keys
         }
@@ -273,11 +336,19 @@ class StageLoaderTest {
         void everyDemoStageLoadsAndReadsBackFromItsWrittenForm() throws Exception {
             List<Path> files;
             try (var list = java.nio.file.Files.list(DIR)) {
-                files = list.filter(p -> p.toString().endsWith(".yaml")).sorted().toList();
+                files = list.filter(p -> p.toString().endsWith(".yaml"))
+                        .sorted()
+                        .toList();
             }
             // photodiode.yaml: the transimpedance demo stage; relay-scanner.yaml: the board-level one
-            assertEquals(List.of(DIR.resolve("adc-driver.yaml"), DIR.resolve("bridge-amp.yaml"), DIR.resolve("photodiode.yaml"),
-                    DIR.resolve("relay-scanner.yaml"), DIR.resolve("thermocouple.yaml")), files);
+            assertEquals(
+                    List.of(
+                            DIR.resolve("adc-driver.yaml"),
+                            DIR.resolve("bridge-amp.yaml"),
+                            DIR.resolve("photodiode.yaml"),
+                            DIR.resolve("relay-scanner.yaml"),
+                            DIR.resolve("thermocouple.yaml")),
+                    files);
             for (Path f : files) {
                 Stage s = StageLoader.load(f); // throws with every problem listed if one is wrong
                 assertEquals(f, s.where().file());
@@ -310,16 +381,21 @@ class StageLoaderTest {
 
         @Test
         void unknownKeyGetsAGuess() {
-            assertEquals("s.yaml:1:1: gian: unknown key; did you mean 'gain'?", problem("gian: 100\nrf: 10 kohm\nrg: 1 kohm\nlimit: 1 mV\n"));
-            assertEquals("s.yaml:4:3: temperature.mx: unknown key; did you mean 'max'?",
+            assertEquals(
+                    "s.yaml:1:1: gian: unknown key; did you mean 'gain'?",
+                    problem("gian: 100\nrf: 10 kohm\nrg: 1 kohm\nlimit: 1 mV\n"));
+            assertEquals(
+                    "s.yaml:4:3: temperature.mx: unknown key; did you mean 'max'?",
                     problem("gain: 10\nlimit: 1 mV\ntemperature:\n  mx: 85 C\n"));
         }
 
         @Test
         void wrongUnitNamesBothDimensions() {
-            assertEquals("s.yaml:2:5: rf: '10 mV' is a voltage but a resistance belongs here; write a resistance such as '100 kohm'",
+            assertEquals(
+                    "s.yaml:2:5: rf: '10 mV' is a voltage but a resistance belongs here; write a resistance such as '100 kohm'",
                     problem("gain: 10\nrf: 10 mV\nlimit: 1 mV\n"));
-            assertEquals("s.yaml:3:9: band.high: '10 kohm' is a resistance but a frequency belongs here; "
+            assertEquals(
+                    "s.yaml:3:9: band.high: '10 kohm' is a resistance but a frequency belongs here; "
                             + "write a frequency such as '1 kHz'", // band.high's own example (StageKeys)
                     problem("gain: 10\nband:\n  high: 10 kohm\nlimit: 1 mV\n"));
         }
@@ -333,56 +409,72 @@ class StageLoaderTest {
 
         @Test
         void nonInvertingGainBelowOne() {
-            assertEquals("s.yaml:1:7: gain: a non-inverting stage cannot have gain 0.5 (below 1); "
-                    + "write a gain of 1 or more, or use 'topology: inverting'", problem("gain: 0.5\nlimit: 1 mV\n"));
-            assertEquals("s.yaml:1:7: gain: a non-inverting stage cannot have gain -10 (below 1); "
-                    + "write the magnitude with 'topology: inverting'", problem("gain: -10\nlimit: 1 mV\n"));
-            assertEquals("s.yaml:1:7: gain: gain 1 needs no gain resistor (rg would be infinite); write 'topology: follower'",
+            assertEquals(
+                    "s.yaml:1:7: gain: a non-inverting stage cannot have gain 0.5 (below 1); "
+                            + "write a gain of 1 or more, or use 'topology: inverting'",
+                    problem("gain: 0.5\nlimit: 1 mV\n"));
+            assertEquals(
+                    "s.yaml:1:7: gain: a non-inverting stage cannot have gain -10 (below 1); "
+                            + "write the magnitude with 'topology: inverting'",
+                    problem("gain: -10\nlimit: 1 mV\n"));
+            assertEquals(
+                    "s.yaml:1:7: gain: gain 1 needs no gain resistor (rg would be infinite); write 'topology: follower'",
                     problem("gain: 1\nlimit: 1 mV\n"));
         }
 
         @Test
         void gainTogetherWithRfAndRgConflicts() {
-            assertEquals("s.yaml:1:7: gain: 'gain', 'rf' and 'rg' are all given and may disagree; "
+            assertEquals(
+                    "s.yaml:1:7: gain: 'gain', 'rf' and 'rg' are all given and may disagree; "
                             + "give 'gain' with 'rf' (or with 'rg'), or give 'rf' and 'rg' without 'gain'",
                     problem("gain: 100\nrf: 99 kohm\nrg: 1 kohm\nlimit: 1 mV\n"));
         }
 
         @Test
         void missingGain() {
-            assertEquals("s.yaml:1:5: gain: the gain is not given; add 'gain: 100', or give both 'rf' and 'rg'",
+            assertEquals(
+                    "s.yaml:1:5: gain: the gain is not given; add 'gain: 100', or give both 'rf' and 'rg'",
                     problem("rf: 10 kohm\nlimit: 1 mV\n"));
-            assertEquals("s.yaml:1:1: gain: the gain is not given; add 'gain: 100' (with 'rf', default 10 kohm), or 'rf' and 'rg'",
+            assertEquals(
+                    "s.yaml:1:1: gain: the gain is not given; add 'gain: 100' (with 'rf', default 10 kohm), or 'rf' and 'rg'",
                     problem("limit: 1 mV\n"));
         }
 
         @Test
         void followerTakesNoGainResistor() {
-            assertEquals("s.yaml:2:5: rg: a follower has no gain resistor; remove 'rg', or write 'topology: non-inverting'",
+            assertEquals(
+                    "s.yaml:2:5: rg: a follower has no gain resistor; remove 'rg', or write 'topology: non-inverting'",
                     problem("topology: follower\nrg: 1 kohm\nlimit: 1 mV\n"));
-            assertEquals("s.yaml:2:7: gain: a follower has gain 1, not 10; remove 'gain', or write 'topology: non-inverting'",
+            assertEquals(
+                    "s.yaml:2:7: gain: a follower has gain 1, not 10; remove 'gain', or write 'topology: non-inverting'",
                     problem("topology: follower\ngain: 10\nlimit: 1 mV\n"));
         }
 
         @Test
         void unknownTopologyGetsAGuess() {
-            assertEquals("s.yaml:1:11: topology: 'non-invert' is not one of non-inverting | inverting | follower | difference | transimpedance; "
-                    + "did you mean 'non-inverting'?", problem("topology: non-invert\ngain: 10\nlimit: 1 mV\n"));
+            assertEquals(
+                    "s.yaml:1:11: topology: 'non-invert' is not one of non-inverting | inverting | follower | difference | transimpedance; "
+                            + "did you mean 'non-inverting'?",
+                    problem("topology: non-invert\ngain: 10\nlimit: 1 mV\n"));
         }
 
         @Test
         void temperatureMinAboveMax() {
-            assertEquals("s.yaml:4:8: temperature: min 85 °C is above max -40 °C; swap the two values",
+            assertEquals(
+                    "s.yaml:4:8: temperature: min 85 °C is above max -40 °C; swap the two values",
                     problem("gain: 10\nlimit: 1 mV\ntemperature:\n  min: 85 C\n  max: -40 C\n"));
-            assertEquals("s.yaml:3:20: temperature.min: '-300 C' is below absolute zero (-273.15 °C); write the temperature in °C, such as '-40 C'",
+            assertEquals(
+                    "s.yaml:3:20: temperature.min: '-300 C' is below absolute zero (-273.15 °C); write the temperature in °C, such as '-40 C'",
                     problem("gain: 10\nlimit: 1 mV\ntemperature: {min: -300 C}\n"));
         }
 
         @Test
         void bandMustStartAboveZeroAndBelowItsTop() {
-            assertEquals("s.yaml:3:13: band: low 10.0 Hz is not below high 1.00 Hz; make 'low' smaller than 'high'",
+            assertEquals(
+                    "s.yaml:3:13: band: low 10.0 Hz is not below high 1.00 Hz; make 'low' smaller than 'high'",
                     problem("gain: 10\nlimit: 1 mV\nband: {low: 10 Hz, high: 1 Hz}\n"));
-            assertEquals("s.yaml:3:13: band: low 10.0 Hz is not below high 10.0 Hz; make 'low' smaller than 'high'",
+            assertEquals(
+                    "s.yaml:3:13: band: low 10.0 Hz is not below high 10.0 Hz; make 'low' smaller than 'high'",
                     problem("gain: 10\nlimit: 1 mV\nband: {low: 10 Hz, high: 10 Hz}\n"));
             String zero = problem("gain: 10\nlimit: 1 mV\nband: {low: 0 Hz}\n");
             assertTrue(zero.startsWith("s.yaml:3:13: band.low: the band must start above 0 Hz"), zero);
@@ -393,88 +485,117 @@ class StageLoaderTest {
         void filterOrderIsNoneOrOneToEight() throws InputException {
             assertEquals(null, stage("gain: 10\nlimit: 1 mV\n").filterOrder()); // not stated: counted as no filter
             assertEquals(Stage.NO_FILTER, stage("gain: 10\nlimit: 1 mV\n").noiseFilterOrder());
-            assertEquals(Stage.NO_FILTER, stage("gain: 10\nlimit: 1 mV\nband: {filter-order: none}\n").filterOrder());
-            assertEquals(4, stage("gain: 10\nlimit: 1 mV\nband: {high: 1 kHz, filter-order: 4}\n").filterOrder());
+            assertEquals(
+                    Stage.NO_FILTER,
+                    stage("gain: 10\nlimit: 1 mV\nband: {filter-order: none}\n").filterOrder());
+            assertEquals(
+                    4,
+                    stage("gain: 10\nlimit: 1 mV\nband: {high: 1 kHz, filter-order: 4}\n")
+                            .filterOrder());
             String nine = problem("gain: 10\nlimit: 1 mV\nband: {filter-order: 9}\n");
-            assertEquals("s.yaml:3:22: band.filter-order: '9' is not a filter order; write 'none' when no filter after the "
-                    + "amplifier limits the band, or the filter's order, 1 to 8 (an RC is 1)", nine);
+            assertEquals(
+                    "s.yaml:3:22: band.filter-order: '9' is not a filter order; write 'none' when no filter after the "
+                            + "amplifier limits the band, or the filter's order, 1 to 8 (an RC is 1)",
+                    nine);
             String word = problem("gain: 10\nlimit: 1 mV\nband:\n  filter-order: rc\n");
             assertTrue(word.startsWith("s.yaml:4:17: band.filter-order: 'rc' is not a filter order;"), word);
         }
 
         @Test
         void percentLimitNeedsFullScale() {
-            assertEquals("s.yaml:2:32: limit.percent-of-full-scale: a share of full scale needs the full-scale output; "
+            assertEquals(
+                    "s.yaml:2:32: limit.percent-of-full-scale: a share of full scale needs the full-scale output; "
                             + "add 'full-scale-output: 2.5 V', or give the limit in volts",
                     problem("gain: 10\nlimit: {percent-of-full-scale: 0.1 %}\n"));
-            assertEquals("s.yaml:3:32: limit.percent-of-full-scale: 150 % is outside (0, 100] %; write a percentage such as '0.1 %'",
+            assertEquals(
+                    "s.yaml:3:32: limit.percent-of-full-scale: 150 % is outside (0, 100] %; write a percentage such as '0.1 %'",
                     problem("gain: 10\nfull-scale-output: 1 V\nlimit: {percent-of-full-scale: 150 %}\n"));
         }
 
         @Test
         void limitInOneFormOnlyAndComplete() {
-            assertEquals("s.yaml:2:8: limit: more than one form of limit given (input, percent-of-full-scale); keep one of them",
+            assertEquals(
+                    "s.yaml:2:8: limit: more than one form of limit given (input, percent-of-full-scale); keep one of them",
                     problem("gain: 10\nlimit: {input: 1 uV, percent-of-full-scale: 1 %}\nfull-scale-output: 1 V\n"));
-            assertEquals("s.yaml:2:8: limit.bits: missing: an LSB limit needs lsb, bits and reference; add 'bits: 16'",
+            assertEquals(
+                    "s.yaml:2:8: limit.bits: missing: an LSB limit needs lsb, bits and reference; add 'bits: 16'",
                     problem("gain: 10\nlimit: {lsb: 0.5, reference: 2.5 V}\n"));
-            assertEquals("s.yaml:2:8: limit: must be more than 0; write a voltage such as '1 mV'", problem("gain: 10\nlimit: 0 V\n"));
-            assertEquals("s.yaml:2:39: limit.bits: 40 is outside 1..32; write a whole number from 1 to 32",
+            assertEquals(
+                    "s.yaml:2:8: limit: must be more than 0; write a voltage such as '1 mV'",
+                    problem("gain: 10\nlimit: 0 V\n"));
+            assertEquals(
+                    "s.yaml:2:39: limit.bits: 40 is outside 1..32; write a whole number from 1 to 32",
                     problem("gain: 10\nlimit: {lsb: 1, reference: 1 V, bits: 40}\n"));
         }
 
         @Test
         void yieldTargetOutsideZeroToHundredPercent() {
             String fix = "; write a target above 0 % and below 100 %, such as 'yield 99.9 %'";
-            assertEquals("s.yaml:3:12: criterion: yield target 100 % is outside (0, 100) %" + fix,
+            assertEquals(
+                    "s.yaml:3:12: criterion: yield target 100 % is outside (0, 100) %" + fix,
                     problem("gain: 10\nlimit: 1 mV\ncriterion: yield 100 %\n"));
-            assertEquals("s.yaml:3:12: criterion: yield target 0 % is outside (0, 100) %" + fix,
+            assertEquals(
+                    "s.yaml:3:12: criterion: yield target 0 % is outside (0, 100) %" + fix,
                     problem("gain: 10\nlimit: 1 mV\ncriterion: yield 0 %\n"));
-            assertEquals("s.yaml:3:12: criterion: yield target 99.9 is outside (0, 100) %" + fix,
+            assertEquals(
+                    "s.yaml:3:12: criterion: yield target 99.9 is outside (0, 100) %" + fix,
                     problem("gain: 10\nlimit: 1 mV\ncriterion: yield 99.9\n"));
-            assertEquals("s.yaml:3:12: criterion: 'worstcase' is not one of worst-case | rss | yield P %; did you mean 'worst-case'?",
+            assertEquals(
+                    "s.yaml:3:12: criterion: 'worstcase' is not one of worst-case | rss | yield P %; did you mean 'worst-case'?",
                     problem("gain: 10\nlimit: 1 mV\ncriterion: worstcase\n"));
         }
 
         @Test
         void trialsOutOfRange() {
-            assertEquals("s.yaml:3:9: trials: 99 is outside 100..10000000; write a whole number from 100 to 10000000",
+            assertEquals(
+                    "s.yaml:3:9: trials: 99 is outside 100..10000000; write a whole number from 100 to 10000000",
                     problem("gain: 10\nlimit: 1 mV\ntrials: 99\n"));
-            assertEquals("s.yaml:3:9: trials: 10000001 is outside 100..10000000; write a whole number from 100 to 10000000",
+            assertEquals(
+                    "s.yaml:3:9: trials: 10000001 is outside 100..10000000; write a whole number from 100 to 10000000",
                     problem("gain: 10\nlimit: 1 mV\ntrials: 10_000_001\n"));
         }
 
         @Test
         void negativeResistances() {
-            assertEquals("s.yaml:3:20: source-resistance: must not be negative; write a resistance of 0 or more, such as '350 ohm'",
+            assertEquals(
+                    "s.yaml:3:20: source-resistance: must not be negative; write a resistance of 0 or more, such as '350 ohm'",
                     problem("gain: 10\nlimit: 1 mV\nsource-resistance: -1 kohm\n"));
-            assertEquals("s.yaml:3:5: rf: must not be negative; write a resistance of 0 or more, such as '100 kohm'",
+            assertEquals(
+                    "s.yaml:3:5: rf: must not be negative; write a resistance of 0 or more, such as '100 kohm'",
                     problem("gain: 10\nlimit: 1 mV\nrf: -10 kohm\n"));
         }
 
         @Test
         void blockWrittenAsOneValue() {
-            assertEquals("s.yaml:3:9: supply: expected a block of 'key: value' lines, found a single value; "
+            assertEquals(
+                    "s.yaml:3:9: supply: expected a block of 'key: value' lines, found a single value; "
                             + "write 'supply:' with 'voltage: 5 V', 'variation: 0.25 V' indented below it",
                     problem("gain: 10\nlimit: 1 mV\nsupply: 5 V\n"));
         }
 
         @Test
         void outputRangeWithinTheRailsAndOrdered() {
-            assertEquals("s.yaml:4:31: output-range: an output cannot go beyond the supply rails (0 to 5.00 V); "
+            assertEquals(
+                    "s.yaml:4:31: output-range: an output cannot go beyond the supply rails (0 to 5.00 V); "
                             + "write volts above the negative rail, within the supply",
                     problem("gain: 10\nlimit: 1 mV\nsupply: {voltage: 5 V}\noutput-range: {min: 1 V, max: 6 V}\n"));
-            assertEquals("s.yaml:3:26: common-mode-range: min 3.00 V is above max 1.00 V; swap the two values",
+            assertEquals(
+                    "s.yaml:3:26: common-mode-range: min 3.00 V is above max 1.00 V; swap the two values",
                     problem("gain: 10\nlimit: 1 mV\ncommon-mode-range: {min: 3 V, max: 1 V}\n"));
-            assertEquals("s.yaml:3:20: common-mode-range.max: required in this block (both ends of the range); "
+            assertEquals(
+                    "s.yaml:3:20: common-mode-range.max: required in this block (both ends of the range); "
                             + "add 'max: 4 V' (volts above the negative rail)",
                     problem("gain: 10\nlimit: 1 mV\ncommon-mode-range: {min: 3 V}\n"));
         }
 
         @Test
         void emptyOrNonMappingFile() {
-            assertEquals("s.yaml:1:1: the stage file is empty; write at least 'gain: 100' and 'limit: 1 mV'", problem(""));
-            assertEquals("s.yaml:1:1: a stage file must be 'key: value' lines, found a list; "
-                    + "write at least 'gain: 100' and 'limit: 1 mV', one per line", problem("- gain\n- limit\n"));
+            assertEquals(
+                    "s.yaml:1:1: the stage file is empty; write at least 'gain: 100' and 'limit: 1 mV'", problem(""));
+            assertEquals(
+                    "s.yaml:1:1: a stage file must be 'key: value' lines, found a list; "
+                            + "write at least 'gain: 100' and 'limit: 1 mV', one per line",
+                    problem("- gain\n- limit\n"));
         }
 
         @Test
@@ -483,9 +604,13 @@ class StageLoaderTest {
             assertEquals(5, all.size(), all::toString);
             assertTrue(all.get(0).startsWith("s.yaml:1:1: limit: required field is missing"), all::toString);
             assertTrue(all.get(1).startsWith("s.yaml:1:9: trials: 5 is outside 100..10000000"), all::toString);
-            assertTrue(all.get(2).startsWith("s.yaml:2:7: gain: a non-inverting stage cannot have gain 0.2"), all::toString);
+            assertTrue(
+                    all.get(2).startsWith("s.yaml:2:7: gain: a non-inverting stage cannot have gain 0.2"),
+                    all::toString);
             assertTrue(all.get(3).startsWith("s.yaml:3:20: temperature: min 10 °C is above max 0 °C"), all::toString);
-            assertTrue(all.get(4).startsWith("s.yaml:4:5: rf: '3 V' is a voltage but a resistance belongs here"), all::toString);
+            assertTrue(
+                    all.get(4).startsWith("s.yaml:4:5: rf: '3 V' is a voltage but a resistance belongs here"),
+                    all::toString);
         }
     }
 }

@@ -17,7 +17,9 @@ class StageWarningsTest {
     private static final Path NAME = Path.of("s.yaml");
 
     private static List<String> warnings(String yaml) throws InputException {
-        return StageLoader.parseWithWarnings(yaml, NAME).warnings().stream().map(Problem::toString).toList();
+        return StageLoader.parseWithWarnings(yaml, NAME).warnings().stream()
+                .map(Problem::toString)
+                .toList();
     }
 
     @Test
@@ -28,31 +30,38 @@ class StageWarningsTest {
     @Test
     void aGainAbove1e5IsWarnedAndAbove1e6Refused() throws InputException {
         // 2e5 lies between the warning bound (1e5) and the error bound (1e6)
-        assertEquals(List.of("s.yaml:1:7: warning: gain: a gain of 200000 is above 100000: even 140 dB (1e7) of open-loop"
-                + " gain leaves under 40 dB of loop gain, and the closed-loop bandwidth is GBW/200000; split the gain over"
-                + " two stages, or check the value (100 dB is a gain of 100000)"),
+        assertEquals(
+                List.of("s.yaml:1:7: warning: gain: a gain of 200000 is above 100000: even 140 dB (1e7) of open-loop"
+                        + " gain leaves under 40 dB of loop gain, and the closed-loop bandwidth is GBW/200000; split the gain over"
+                        + " two stages, or check the value (100 dB is a gain of 100000)"),
                 warnings("gain: 200000\nlimit: 1 V\n"));
         InputException e = assertThrows(InputException.class, () -> warnings("gain: 2000000\nlimit: 1 V\n"));
-        assertTrue(e.problems().get(0).message().startsWith("gain 2000000 is above 1000000"), e.problems().toString());
+        assertTrue(
+                e.problems().get(0).message().startsWith("gain 2000000 is above 1000000"),
+                e.problems().toString());
     }
 
     @Test
     void aNegativeGainOnANonInvertingStageIsRefusedWithTheFix() {
         InputException e = assertThrows(InputException.class, () -> warnings("gain: -10\nlimit: 1 mV\n"));
-        assertEquals("s.yaml:1:7: gain: a non-inverting stage cannot have gain -10 (below 1);"
-                + " write the magnitude with 'topology: inverting'", e.problems().get(0).toString());
+        assertEquals(
+                "s.yaml:1:7: gain: a non-inverting stage cannot have gain -10 (below 1);"
+                        + " write the magnitude with 'topology: inverting'",
+                e.problems().get(0).toString());
     }
 
     @Test
     void aLimitNotBelowTheSupplyConstrainsNothing() throws InputException {
-        assertEquals(List.of("s.yaml:2:8: warning: limit: a limit of 10.0 V at the output is not below the whole supply"
-                + " of 5.00 V: no output error can reach it, so the stage constrains nothing; write the largest error"
-                + " allowed at the output, such as '1 mV' (check the prefix)"),
+        assertEquals(
+                List.of("s.yaml:2:8: warning: limit: a limit of 10.0 V at the output is not below the whole supply"
+                        + " of 5.00 V: no output error can reach it, so the stage constrains nothing; write the largest error"
+                        + " allowed at the output, such as '1 mV' (check the prefix)"),
                 warnings("gain: 10\nlimit: 10 V\nsupply: {voltage: 5 V}\n"));
         // without a supply, the full-scale output is the yardstick: 2 V of error on a 2 V signal
-        assertEquals(List.of("s.yaml:2:8: warning: limit: a limit of 2.00 V at the output is not below the full-scale"
-                + " output of 2.00 V: an error as large as the whole signal; write the largest error allowed at the output,"
-                + " such as '1 mV' (check the prefix)"),
+        assertEquals(
+                List.of("s.yaml:2:8: warning: limit: a limit of 2.00 V at the output is not below the full-scale"
+                        + " output of 2.00 V: an error as large as the whole signal; write the largest error allowed at the output,"
+                        + " such as '1 mV' (check the prefix)"),
                 warnings("gain: 10\nlimit: 2 V\nfull-scale-output: 2 V\n"));
     }
 
@@ -65,9 +74,10 @@ class StageWarningsTest {
         assertTrue(Wilson.interval95(3837, 3837).low() < 0.999);
         assertEquals(Wilson.Z95, StageLoader.Z95);
         // 1000 trials all passing: lower end 1000 / (1000 + 3.841459) = 0.99617 -> 99.62 %
-        assertEquals(List.of("s.yaml:4:9: warning: trials: 1000 trials cannot confirm a yield of 99.9 %: even when every"
-                + " unit passes, the 95 % interval's lower end is 99.62 %, so the verdict can only be uncertain;"
-                + " write 'trials: 3838' or more (at most 10000000)"),
+        assertEquals(
+                List.of("s.yaml:4:9: warning: trials: 1000 trials cannot confirm a yield of 99.9 %: even when every"
+                        + " unit passes, the 95 % interval's lower end is 99.62 %, so the verdict can only be uncertain;"
+                        + " write 'trials: 3838' or more (at most 10000000)"),
                 warnings("gain: 10\nlimit: 1 mV\ncriterion: yield 99.9 %\ntrials: 1000\n"));
         assertEquals(List.of(), warnings("gain: 10\nlimit: 1 mV\ncriterion: yield 99.9 %\ntrials: 3838\n"));
     }
@@ -75,9 +85,13 @@ class StageWarningsTest {
     @Test
     void trialsAndYieldOutOfRangeAreRefused() {
         InputException few = assertThrows(InputException.class, () -> warnings("gain: 10\nlimit: 1 mV\ntrials: 10\n"));
-        assertTrue(few.problems().get(0).toString().startsWith("s.yaml:3:9: trials: "), few.problems().toString());
-        InputException target = assertThrows(InputException.class,
-                () -> warnings("gain: 10\nlimit: 1 mV\ncriterion: yield 100 %\n"));
-        assertTrue(target.problems().get(0).toString().contains("outside (0, 100) %"), target.problems().toString());
+        assertTrue(
+                few.problems().get(0).toString().startsWith("s.yaml:3:9: trials: "),
+                few.problems().toString());
+        InputException target =
+                assertThrows(InputException.class, () -> warnings("gain: 10\nlimit: 1 mV\ncriterion: yield 100 %\n"));
+        assertTrue(
+                target.problems().get(0).toString().contains("outside (0, 100) %"),
+                target.problems().toString());
     }
 }

@@ -29,7 +29,8 @@ class StageWriterTest {
     @Test
     void filterOrderRoundTrips() throws InputException {
         for (String order : List.of("none", "1", "2", "8")) {
-            Stage s = StageLoader.parse("gain: 10\nlimit: 1 mV\nband: {high: 1 kHz, filter-order: " + order + "}\n", NAME);
+            Stage s = StageLoader.parse(
+                    "gain: 10\nlimit: 1 mV\nband: {high: 1 kHz, filter-order: " + order + "}\n", NAME);
             assertEquals(order.equals("none") ? Stage.NO_FILTER : Integer.parseInt(order), s.filterOrder());
             assertRoundTrip(s);
             assertTrue(StageWriter.toYaml(s).contains("  filter-order: " + order + "\n"), StageWriter.toYaml(s));
@@ -67,18 +68,46 @@ class StageWriterTest {
                 max-price: 3.33
                 ac-coupled: true
                 """, NAME));
-        assertRoundTrip(StageLoader.parse("topology: follower\nrf: 100 ohm\nlimit: {lsb: 0.5, bits: 18, reference: 4.096 V}\n", NAME));
-        assertRoundTrip(StageLoader.parse("gain: 40 dB\nlimit: {input: 3.3 uV}\ncriterion: rss\nservice-life: 1234.5 h\n", NAME));
+        assertRoundTrip(StageLoader.parse(
+                "topology: follower\nrf: 100 ohm\nlimit: {lsb: 0.5, bits: 18, reference: 4.096 V}\n", NAME));
+        assertRoundTrip(StageLoader.parse(
+                "gain: 40 dB\nlimit: {input: 3.3 uV}\ncriterion: rss\nservice-life: 1234.5 h\n", NAME));
     }
 
     @Test
     void awkwardValuesReadBackExactly() throws InputException {
         // values no short decimal with a prefix reproduces: the writer falls back to plain digits
         Stage base = StageLoader.parse("gain: 10\nlimit: 1 mV\n", NAME);
-        Stage odd = new Stage(new NonInverting(Math.PI * 1e4, Math.E * 1e2, 1.0 / 3, 2.0 / 7), -40.0 / 3, 85.1, Math.sqrt(2) * 5,
-                0.1 + 0.2, 1.0 / 30, new Range(0.3, 0.7), null, 1.0 / 7, 1e5 / 3, 3, 2.0 / 3, 1e-3 / 3, 1e-6 / 7, 1e6 / 7,
-                new Limit(Limit.Kind.INPUT, 1e-6 / 3, 0, 0), Criterion.yield(0.999 + 1e-12), 3.0, 20000, 123_457, 1, base.trim(), 1000,
-                null, false, 1e4 / 3, 1e5 / 7, Board.NONE, null);
+        Stage odd = new Stage(
+                new NonInverting(Math.PI * 1e4, Math.E * 1e2, 1.0 / 3, 2.0 / 7),
+                -40.0 / 3,
+                85.1,
+                Math.sqrt(2) * 5,
+                0.1 + 0.2,
+                1.0 / 30,
+                new Range(0.3, 0.7),
+                null,
+                1.0 / 7,
+                1e5 / 3,
+                3,
+                2.0 / 3,
+                1e-3 / 3,
+                1e-6 / 7,
+                1e6 / 7,
+                new Limit(Limit.Kind.INPUT, 1e-6 / 3, 0, 0),
+                Criterion.yield(0.999 + 1e-12),
+                3.0,
+                20000,
+                123_457,
+                1,
+                base.trim(),
+                1000,
+                null,
+                false,
+                1e4 / 3,
+                1e5 / 7,
+                Board.NONE,
+                null);
         assertRoundTrip(odd);
     }
 
@@ -94,7 +123,9 @@ class StageWriterTest {
         assertTrue(yaml.contains("\n  min: -40 C\n"), yaml);
         assertTrue(yaml.contains("\n  # max: 85 C    # default: 70 C\n"), yaml);
         assertTrue(yaml.contains("\n# supply:\n#   "), yaml);
-        assertTrue(yaml.contains("\n# rf: 100 kohm    # default: 10 kohm (follower: 0; transimpedance: required)\n"), yaml);
+        assertTrue(
+                yaml.contains("\n# rf: 100 kohm    # default: 10 kohm (follower: 0; transimpedance: required)\n"),
+                yaml);
         // the "why" of every answered key is above it
         assertTrue(yaml.contains("# " + StageKeys.get("gain").why() + "\ngain: 100\n"), yaml);
     }
@@ -107,7 +138,8 @@ class StageWriterTest {
         Map<String, String> answers = new LinkedHashMap<>();
         answers.put("gain", "100");
         answers.put("limit", "1 mV # typed by hand");
-        InputException e = assertThrows(InputException.class, () -> StageLoader.parse(StageWriter.toYaml(answers), NAME));
+        InputException e =
+                assertThrows(InputException.class, () -> StageLoader.parse(StageWriter.toYaml(answers), NAME));
         // the whole answer reached the loader as one value, so the unit problem quotes it whole
         assertTrue(e.getMessage().contains("in '1 mV # typed by hand'"), e.getMessage());
     }
@@ -115,7 +147,9 @@ class StageWriterTest {
     @Test
     void unknownAnswerKeyIsAProgrammingError() {
         assertThrows(IllegalArgumentException.class, () -> StageWriter.toYaml(Map.of("gian", "100")));
-        assertThrows(IllegalArgumentException.class, () -> StageWriter.toYaml(Map.of("limit", "1 mV", "limit.input", "1 uV")));
+        assertThrows(
+                IllegalArgumentException.class,
+                () -> StageWriter.toYaml(Map.of("limit", "1 mV", "limit.input", "1 uV")));
     }
 
     @Test
@@ -133,7 +167,9 @@ class StageWriterTest {
         Files.writeString(file, "# my own notes\ngain: 5\nlimit: 1 mV\n");
         Stage s = StageLoader.parse("gain: 20\nlimit: 2 mV\n", NAME);
         InputException e = assertThrows(InputException.class, () -> StageWriter.save(s, file, false));
-        assertEquals(file + ": the file already exists and was left as it was; choose another file name, or ask explicitly to overwrite it",
+        assertEquals(
+                file
+                        + ": the file already exists and was left as it was; choose another file name, or ask explicitly to overwrite it",
                 e.getMessage());
         assertEquals("# my own notes\ngain: 5\nlimit: 1 mV\n", Files.readString(file));
         assertEquals(List.of(file), list(dir));
@@ -154,7 +190,8 @@ class StageWriterTest {
     @Test
     void saveIntoAMissingFolderFailsWithAMessage(@TempDir Path dir) {
         Path file = dir.resolve("no-such-folder").resolve("s.yaml");
-        InputException e = assertThrows(InputException.class, () -> StageWriter.save("gain: 2\nlimit: 1 mV\n", file, false));
+        InputException e =
+                assertThrows(InputException.class, () -> StageWriter.save("gain: 2\nlimit: 1 mV\n", file, false));
         assertTrue(e.getMessage().startsWith(file + ": cannot write the file ("), e.getMessage());
     }
 

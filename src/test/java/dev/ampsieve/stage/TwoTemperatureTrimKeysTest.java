@@ -49,25 +49,31 @@ class TwoTemperatureTrimKeysTest {
 
     @Test
     void coldMustBeBelowHot() {
-        assertEquals("s.yaml:9:8: trim.hot: the two calibration temperatures must differ, cold below hot; they are "
+        assertEquals(
+                "s.yaml:9:8: trim.hot: the two calibration temperatures must differ, cold below hot; they are "
                         + "50 °C and 0 °C; write 'trim.cold' below 'trim.hot', such as 'cold: -40 C' and 'hot: 85 C'",
                 problem(HEAD + "  method: two-temperature\n  cold: 50 C\n  hot: 0 C\n"));
         // one given, the other the range end: hot 85 °C is not above cold 85 °C
-        assertEquals("s.yaml:8:9: trim.cold: the two calibration temperatures must differ, cold below hot; they are "
+        assertEquals(
+                "s.yaml:8:9: trim.cold: the two calibration temperatures must differ, cold below hot; they are "
                         + "85 °C and 85 °C (temperature.max); write 'trim.cold' below 'trim.hot', such as 'cold: -40 C' and 'hot: 85 C'",
                 problem(HEAD + "  method: two-temperature\n  cold: 85 C\n"));
     }
 
     @Test
     void aRangeOfOneTemperatureNeedsTheTwoPointsGiven() {
-        String p = problem("gain: 10\nlimit: 1 mV\ntemperature:\n  min: 25 C\n  max: 25 C\ntrim:\n  method: two-temperature\n");
-        assertEquals("s.yaml:7:11: trim.method: the two calibration temperatures must differ, cold below hot; they are "
-                + "25 °C (temperature.min) and 25 °C (temperature.max); give 'trim.cold' and 'trim.hot', such as '-40 C' and '85 C'", p);
+        String p = problem(
+                "gain: 10\nlimit: 1 mV\ntemperature:\n  min: 25 C\n  max: 25 C\ntrim:\n  method: two-temperature\n");
+        assertEquals(
+                "s.yaml:7:11: trim.method: the two calibration temperatures must differ, cold below hot; they are "
+                        + "25 °C (temperature.min) and 25 °C (temperature.max); give 'trim.cold' and 'trim.hot', such as '-40 C' and '85 C'",
+                p);
     }
 
     @Test
     void calibrationTemperaturesBelongToTheTwoTemperatureMethod() {
-        assertEquals("s.yaml:8:9: trim.cold: a calibration temperature belongs to method two-temperature, but the method "
+        assertEquals(
+                "s.yaml:8:9: trim.cold: a calibration temperature belongs to method two-temperature, but the method "
                         + "is one-point; write 'method: two-temperature', or remove 'trim.cold'",
                 problem(HEAD + "  method: one-point\n  cold: 0 C\n"));
     }

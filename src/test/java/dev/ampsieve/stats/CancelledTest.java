@@ -22,10 +22,12 @@ class CancelledTest {
     void anInterruptedThreadSimulatesNoBlockAtAll() {
         List<Integer> sizes = new ArrayList<>();
         Thread.currentThread().interrupt();
-        assertThrows(Cancelled.class, () -> SequentialYield.run(10_000_000, Double.NaN, size -> {
-            sizes.add(size);
-            return size;
-        }));
+        assertThrows(
+                Cancelled.class,
+                () -> SequentialYield.run(10_000_000, Double.NaN, size -> {
+                    sizes.add(size);
+                    return size;
+                }));
         assertEquals(List.of(), sizes); // checked before the first block
         assertTrue(Thread.currentThread().isInterrupted(), "the interrupt status is left for the caller");
     }
@@ -34,13 +36,15 @@ class CancelledTest {
     void anInterruptDuringARunStopsItBeforeTheNextBlock() {
         List<Integer> sizes = new ArrayList<>();
         // 10 million units are 10 000 blocks; the interrupt arrives during the third
-        assertThrows(Cancelled.class, () -> SequentialYield.run(10_000_000, Double.NaN, size -> {
-            sizes.add(size);
-            if (sizes.size() == 3) {
-                Thread.currentThread().interrupt();
-            }
-            return size;
-        }));
+        assertThrows(
+                Cancelled.class,
+                () -> SequentialYield.run(10_000_000, Double.NaN, size -> {
+                    sizes.add(size);
+                    if (sizes.size() == 3) {
+                        Thread.currentThread().interrupt();
+                    }
+                    return size;
+                }));
         assertEquals(List.of(1000, 1000, 1000), sizes);
     }
 

@@ -81,7 +81,8 @@ class SequentialYieldTest {
     void interimLooksUseTheStricterHaybittlePetoBound() {
         // Haybittle, Br. J. Radiol. 44 (1971) 793; Peto et al., Br. J. Cancer 34 (1976) 585 [from memory]:
         // interim looks stop only at two-sided p < 0.001, i.e. z = 3.2905 (commons-math3 quantile)
-        double z = new org.apache.commons.math3.distribution.NormalDistribution().inverseCumulativeProbability(1 - 0.0005);
+        double z =
+                new org.apache.commons.math3.distribution.NormalDistribution().inverseCumulativeProbability(1 - 0.0005);
         assertEquals(z, SequentialYield.INTERIM_Z, 1e-12);
         // 1000 of 1000 passes: 95 % Wilson low 0.99617 (reference-checks §7) clears 0.995, but the
         // interim bound at z 3.29 (low = 1/(1 + z^2/n) = 0.98929 [Calc]) does not: no stop after one block

@@ -5,9 +5,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.apache.commons.math3.distribution.NormalDistribution;
 import org.apache.commons.math3.random.Well19937c;
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
-import org.junit.jupiter.api.Test;
 
 class TruncatedNormalTest {
 
@@ -34,7 +34,8 @@ class TruncatedNormalTest {
             }
         }
         Wilson.Interval w = Wilson.interval(inside, n, 3.29); // 99.9 % interval: a seeded check, not a flaky one
-        assertTrue(w.low() <= expected && expected <= w.high(),
+        assertTrue(
+                w.low() <= expected && expected <= w.high(),
                 "expected " + expected + " in [" + w.low() + ", " + w.high() + "]");
     }
 

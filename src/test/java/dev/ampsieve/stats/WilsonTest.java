@@ -22,7 +22,8 @@ class WilsonTest {
         "1000, 1000, 0.996173, 1",
         "95, 100, 0.888250, 0.978456",
         "50, 100, 0.403832, 0.596168",
-        "0, 100, 0, 0.036993"})
+        "0, 100, 0, 0.036993"
+    })
     void matchesPublishedValues(long k, long n, double low, double high) {
         Wilson.Interval w = Wilson.interval95(k, n);
         assertEquals(low, w.low(), 1e-6, "lower, Wilson 1927 / reference-checks §7");

@@ -43,7 +43,10 @@ public final class LinearEngine implements BudgetFunction {
         double wc = offset + drift + bias + resistors;
         double rss = Math.sqrt(offset * offset + drift * drift + bias * bias + resistors * resistors);
         double tWc = wc - offset + s.trim().resolution();
-        double tRss = Math.sqrt(drift * drift + bias * bias + resistors * resistors + s.trim().resolution() * s.trim().resolution());
+        double tRss = Math.sqrt(drift * drift
+                + bias * bias
+                + resistors * resistors
+                + s.trim().resolution() * s.trim().resolution());
         if (s.trim().method() == Trim.Method.TWO_POINT) {
             tWc -= resistors;
             tRss = Math.sqrt(Math.max(0, tRss * tRss - resistors * resistors));
@@ -52,22 +55,40 @@ public final class LinearEngine implements BudgetFunction {
         boolean rssCrit = s.criterion().kind() == Criterion.Kind.RSS;
         double total = rssCrit ? rss : wc;
         double tTotal = rssCrit ? tRss : tWc;
-        Verdict v = total <= e ? Verdict.FITS
+        Verdict v = total <= e
+                ? Verdict.FITS
                 : s.trim().allowed() && tTotal <= e ? Verdict.FITS_AFTER_TRIM : Verdict.NO_FIT;
         List<ConstraintResult> constraints = new ArrayList<>();
-        constraints.add(new ConstraintResult("temperature", p.temperature().contains(s.tMin(), s.tMax()),
+        constraints.add(new ConstraintResult(
+                "temperature",
+                p.temperature().contains(s.tMin(), s.tMax()),
                 "needs " + s.tMin() + ".." + s.tMax() + " C"));
         if (s.supplyVoltage() != null) {
-            constraints.add(new ConstraintResult("supply",
-                    p.supply().contains(s.supplyVoltage(), s.supplyVoltage()), "needs " + s.supplyVoltage() + " V"));
+            constraints.add(new ConstraintResult(
+                    "supply",
+                    p.supply().contains(s.supplyVoltage(), s.supplyVoltage()),
+                    "needs " + s.supplyVoltage() + " V"));
         }
         if (s.maxPrice() != null && p.price() != null) {
             constraints.add(new ConstraintResult("price", p.price().unit() <= s.maxPrice(), "ceiling " + s.maxPrice()));
         }
-        YieldResult y = new YieldResult(wc <= e ? 1 : 0, wc <= e ? 1 : 0, wc <= e ? 1 : 0, 0,
-                wc <= e ? "all-pass" : "none-pass");
-        return new Budget(p, s, ng, terms, wc, rss, 0, e, y, new Trimmed(tWc, tRss), v, terms.get(0).key(),
-                constraints, List.of());
+        YieldResult y = new YieldResult(
+                wc <= e ? 1 : 0, wc <= e ? 1 : 0, wc <= e ? 1 : 0, 0, wc <= e ? "all-pass" : "none-pass");
+        return new Budget(
+                p,
+                s,
+                ng,
+                terms,
+                wc,
+                rss,
+                0,
+                e,
+                y,
+                new Trimmed(tWc, tRss),
+                v,
+                terms.get(0).key(),
+                constraints,
+                List.of());
     }
 
     private static double abs(Double v) {

@@ -21,8 +21,7 @@ import org.quicktheories.impl.Constraint;
  * and earlier mutations of the first seed text without a hand-written shrinker.
  */
 public final class Mutations {
-    private Mutations() {
-    }
+    private Mutations() {}
 
     /** Characters that mean something to YAML, to the unit parser or to the query language, and hostile ones. */
     static final String SPECIAL = ":-{}[],&*!|>'\"%@`#?~=<>.. \t\n\r/^()_+eE0123456789"
@@ -30,33 +29,147 @@ public final class Mutations {
             + "\u2028\u2029\ufeff\ufffd\ufffe\uffff\ud800\udfff\u200b\u0301";
 
     /** Numbers at and past the edges of a double and of the integer types, and spellings that are not numbers. */
-    static final List<String> NUMBERS = List.of("1e308", "1.8e308", "1e400", "-1e400", "1e-400", "4.9e-324", "-0", "-0.0",
-            "0", "NaN", "nan", "Infinity", "-Infinity", ".inf", "-.inf", ".nan", "1e", "1e+", "1e-", ".", "-", "+", "..", "1..2",
-            "0x10", "0b101", "1_000", "1,5", "٣", "１２", "99999999999999999999999", "9223372036854775807", "9223372036854775808",
-            "-9223372036854775809", "2147483647", "2147483648", "-2147483649", "1e2147483648", "0.000000000000000000000000001",
-            "00001", "+-1", "--1", "1e0001", "1" + "0".repeat(400), "0." + "0".repeat(400) + "1");
+    static final List<String> NUMBERS = List.of(
+            "1e308",
+            "1.8e308",
+            "1e400",
+            "-1e400",
+            "1e-400",
+            "4.9e-324",
+            "-0",
+            "-0.0",
+            "0",
+            "NaN",
+            "nan",
+            "Infinity",
+            "-Infinity",
+            ".inf",
+            "-.inf",
+            ".nan",
+            "1e",
+            "1e+",
+            "1e-",
+            ".",
+            "-",
+            "+",
+            "..",
+            "1..2",
+            "0x10",
+            "0b101",
+            "1_000",
+            "1,5",
+            "٣",
+            "１２",
+            "99999999999999999999999",
+            "9223372036854775807",
+            "9223372036854775808",
+            "-9223372036854775809",
+            "2147483647",
+            "2147483648",
+            "-2147483649",
+            "1e2147483648",
+            "0.000000000000000000000000001",
+            "00001",
+            "+-1",
+            "--1",
+            "1e0001",
+            "1" + "0".repeat(400),
+            "0." + "0".repeat(400) + "1");
 
     /** Unit text that is wrong, doubled, half there or of another dimension. */
-    static final List<String> UNITS = List.of("", " ", "uuV", "µµV", "V/", "/", "/V", "V//us", "dB/V", "mK", "°", "°°C", "rtHz/V",
-            "%%", "ppm/", "Hz^", "kk", "K", "C/C", "V/V", "V/mV", "V/uV", "A/rtHz/Hz", "sqrt(", "Hz^(1/2", "ohm/", "Ω/°C", "yr/",
-            "mohm", "MΩ", "k ohm", "u V", "V V", "nV/√", "√", "fF", "xV", "V\u0000", "\ud800V", "V\u0301", "dBm", "h/h", "y/C");
+    static final List<String> UNITS = List.of(
+            "",
+            " ",
+            "uuV",
+            "µµV",
+            "V/",
+            "/",
+            "/V",
+            "V//us",
+            "dB/V",
+            "mK",
+            "°",
+            "°°C",
+            "rtHz/V",
+            "%%",
+            "ppm/",
+            "Hz^",
+            "kk",
+            "K",
+            "C/C",
+            "V/V",
+            "V/mV",
+            "V/uV",
+            "A/rtHz/Hz",
+            "sqrt(",
+            "Hz^(1/2",
+            "ohm/",
+            "Ω/°C",
+            "yr/",
+            "mohm",
+            "MΩ",
+            "k ohm",
+            "u V",
+            "V V",
+            "nV/√",
+            "√",
+            "fF",
+            "xV",
+            "V\u0000",
+            "\ud800V",
+            "V\u0301",
+            "dBm",
+            "h/h",
+            "y/C");
 
     /** Whole lines that exercise YAML features a catalog never needs. */
-    static final List<String> LINES = List.of("&a [*a, *a]", "x: *undefined", "x: !!binary AAAA", "x: !!python/object:os.system",
-            "? [a]: b", "<<: *x", "---", "...", "%YAML 1.1", "%TAG ! tag:x:", "key: |", "a: {b: [c", "- - -", "\t- x",
-            "x: &b {y: *b}", "'unclosed: x", "\"\\x\": y", "x: !!int 1e400", "x: !!float NaN", ": no key", "[1, 2]: x",
-            "{a: 1}: b", "x: >-", "x:\u0000y", "x: 2001-12-14t21:59:43.10-05:00", "x: 0o17", "x: ~", "x: null", "x: []", "x: {}",
+    static final List<String> LINES = List.of(
+            "&a [*a, *a]",
+            "x: *undefined",
+            "x: !!binary AAAA",
+            "x: !!python/object:os.system",
+            "? [a]: b",
+            "<<: *x",
+            "---",
+            "...",
+            "%YAML 1.1",
+            "%TAG ! tag:x:",
+            "key: |",
+            "a: {b: [c",
+            "- - -",
+            "\t- x",
+            "x: &b {y: *b}",
+            "'unclosed: x",
+            "\"\\x\": y",
+            "x: !!int 1e400",
+            "x: !!float NaN",
+            ": no key",
+            "[1, 2]: x",
+            "{a: 1}: b",
+            "x: >-",
+            "x:\u0000y",
+            "x: 2001-12-14t21:59:43.10-05:00",
+            "x: 0o17",
+            "x: ~",
+            "x: null",
+            "x: []",
+            "x: {}",
             // deep nesting, and an alias chain that doubles at each step (the "billion laughs")
-            "x: " + "[".repeat(200) + "]".repeat(200), "x: " + "{a: ".repeat(100) + "1" + "}".repeat(100),
-            "a0: &a0 [x, x]\n" + java.util.stream.IntStream.range(1, 40)
-                    .mapToObj(i -> "a" + i + ": &a" + i + " [*a" + (i - 1) + ", *a" + (i - 1) + "]")
-                    .collect(java.util.stream.Collectors.joining("\n")));
+            "x: " + "[".repeat(200) + "]".repeat(200),
+            "x: " + "{a: ".repeat(100) + "1" + "}".repeat(100),
+            "a0: &a0 [x, x]\n"
+                    + java.util.stream.IntStream.range(1, 40)
+                            .mapToObj(i -> "a" + i + ": &a" + i + " [*a" + (i - 1) + ", *a" + (i - 1) + "]")
+                            .collect(java.util.stream.Collectors.joining("\n")));
 
     /** The text of every {@code *.yaml} file below {@code dir} (the demo catalog, its stages). */
     public static List<String> yamlTexts(Path dir, boolean stages) {
         try (Stream<Path> s = Files.walk(dir)) {
             List<String> out = new ArrayList<>();
-            for (Path p : s.filter(Files::isRegularFile).filter(p -> p.toString().endsWith(".yaml")).sorted().toList()) {
+            for (Path p : s.filter(Files::isRegularFile)
+                    .filter(p -> p.toString().endsWith(".yaml"))
+                    .sorted()
+                    .toList()) {
                 boolean isStage = p.getParent().getFileName().toString().equals("stages");
                 if (isStage == stages) {
                     out.add(Files.readString(p, StandardCharsets.UTF_8));
@@ -99,8 +212,15 @@ public final class Mutations {
             byte[] b = text.generate(in).getBytes(StandardCharsets.UTF_8);
             int n = (int) in.next(Constraint.between(0, 2));
             for (int i = 0; i < n; i++) {
-                byte[][] bad = {{(byte) 0xff}, {(byte) 0xc3}, {(byte) 0xed, (byte) 0xa0, (byte) 0x80}, {(byte) 0xfe, (byte) 0xff},
-                        {(byte) 0xef, (byte) 0xbb, (byte) 0xbf}, {(byte) 0xf4, (byte) 0x90, (byte) 0x80, (byte) 0x80}, {0}};
+                byte[][] bad = {
+                    {(byte) 0xff},
+                    {(byte) 0xc3},
+                    {(byte) 0xed, (byte) 0xa0, (byte) 0x80},
+                    {(byte) 0xfe, (byte) 0xff},
+                    {(byte) 0xef, (byte) 0xbb, (byte) 0xbf},
+                    {(byte) 0xf4, (byte) 0x90, (byte) 0x80, (byte) 0x80},
+                    {0}
+                };
                 byte[] ins = bad[pick(in, bad.length)];
                 int at = (int) in.next(Constraint.between(0, b.length));
                 byte[] out = new byte[b.length + ins.length];
@@ -116,6 +236,7 @@ public final class Mutations {
     private static final Pattern NUMBER = Pattern.compile("[-+]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][-+]?\\d+)?");
     /** The value after "key: " up to a comma, brace or comment: where a typed number goes. */
     private static final Pattern VALUE = Pattern.compile(":[ \\t]+(\"[^\"\\n]*\"|[^,{}\\[\\]#\\n]+)");
+
     private static final Pattern UNIT = Pattern.compile("(?<=\\d ?)[A-Za-z%°µΩ/√()^]+");
 
     /** One edit of a kind people and tools make: a stray, lost or swapped character, a line doubled or shifted, a bad number. */
@@ -183,7 +304,12 @@ public final class Mutations {
                 int[] span = spans.get(pick(in, spans.size()));
                 String unit = pick(in, 2) == 0 ? "" : " " + UNITS.get(pick(in, UNITS.size()));
                 String quote = pick(in, 2) == 0 ? "" : "\"";
-                return s.substring(0, span[0]) + quote + NUMBERS.get(pick(in, NUMBERS.size())) + unit + quote + s.substring(span[1]);
+                return s.substring(0, span[0])
+                        + quote
+                        + NUMBERS.get(pick(in, NUMBERS.size()))
+                        + unit
+                        + quote
+                        + s.substring(span[1]);
             }
             case 9: { // cut the text short
                 return s.substring(0, (int) in.next(Constraint.between(0, len)));

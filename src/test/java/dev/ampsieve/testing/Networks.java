@@ -8,8 +8,7 @@ import dev.ampsieve.stage.Topology;
 
 /** The three voltage-gain networks from their four resistors, for fixtures written before the network type. */
 public final class Networks {
-    private Networks() {
-    }
+    private Networks() {}
 
     public static Network of(Topology topology, double rf, double rg, double rs, double rp) {
         return switch (topology) {

@@ -46,6 +46,7 @@ public final class PartBuilder {
     private Double cin;
     /** The datasheet table at 5 V, mid-supply: the default stage of {@code StageBuilder}, so the operating point moves nothing. */
     private dev.ampsieve.catalog.TestConditions testConditions = new dev.ampsieve.catalog.TestConditions(5.0, 2.5);
+
     private dev.ampsieve.catalog.InputCrossover crossover;
     private Double thetaJa;
     private Double ripple;
@@ -59,56 +60,222 @@ public final class PartBuilder {
         return new PartBuilder(id);
     }
 
-    public PartBuilder title(String v) { title = v; return this; }
-    public PartBuilder architecture(Architecture v) { architecture = v; return this; }
-    public PartBuilder input(InputType v) { input = v; return this; }
-    public PartBuilder factoryTrim(FactoryTrim v) { factoryTrim = v; return this; }
-    public PartBuilder channels(int v) { channels = v; return this; }
-    public PartBuilder packages(String... v) { packages = List.of(v); return this; }
-    public PartBuilder tags(String... v) { tags = List.of(v); return this; }
-    public PartBuilder price(double unit) { price = new Price(unit, 1000, "USD"); return this; }
-    public PartBuilder price(Price v) { price = v; return this; }
-    public PartBuilder noPrice() { price = null; return this; }
-    public PartBuilder supply(double min, double max) { supply = new Range(min, max); return this; }
-    public PartBuilder temperature(double min, double max) { temperature = new Range(min, max); return this; }
-    public PartBuilder vos(Double typ, Double max) { vos = new Spread(typ, max, null); return this; }
-    public PartBuilder drift(Double typ, Double max) { drift = new Spread(typ, max, null); return this; }
-    public PartBuilder ib(Double typ, Double max) { ib = new Spread(typ, max, null); return this; }
-    public PartBuilder ios(Double typ, Double max) { ios = new Spread(typ, max, null); return this; }
-    public PartBuilder cmrr(Double min, Double typ) { cmrr = new MinTyp(min, typ); return this; }
-    public PartBuilder psrr(Double min, Double typ) { psrr = new MinTyp(min, typ); return this; }
-    public PartBuilder aol(Double min, Double typ) { aol = new MinTyp(min, typ); return this; }
-    public PartBuilder gbw(double v) { gbw = v; return this; }
-    public PartBuilder slew(double v) { slew = v; return this; }
+    public PartBuilder title(String v) {
+        title = v;
+        return this;
+    }
+
+    public PartBuilder architecture(Architecture v) {
+        architecture = v;
+        return this;
+    }
+
+    public PartBuilder input(InputType v) {
+        input = v;
+        return this;
+    }
+
+    public PartBuilder factoryTrim(FactoryTrim v) {
+        factoryTrim = v;
+        return this;
+    }
+
+    public PartBuilder channels(int v) {
+        channels = v;
+        return this;
+    }
+
+    public PartBuilder packages(String... v) {
+        packages = List.of(v);
+        return this;
+    }
+
+    public PartBuilder tags(String... v) {
+        tags = List.of(v);
+        return this;
+    }
+
+    public PartBuilder price(double unit) {
+        price = new Price(unit, 1000, "USD");
+        return this;
+    }
+
+    public PartBuilder price(Price v) {
+        price = v;
+        return this;
+    }
+
+    public PartBuilder noPrice() {
+        price = null;
+        return this;
+    }
+
+    public PartBuilder supply(double min, double max) {
+        supply = new Range(min, max);
+        return this;
+    }
+
+    public PartBuilder temperature(double min, double max) {
+        temperature = new Range(min, max);
+        return this;
+    }
+
+    public PartBuilder vos(Double typ, Double max) {
+        vos = new Spread(typ, max, null);
+        return this;
+    }
+
+    public PartBuilder drift(Double typ, Double max) {
+        drift = new Spread(typ, max, null);
+        return this;
+    }
+
+    public PartBuilder ib(Double typ, Double max) {
+        ib = new Spread(typ, max, null);
+        return this;
+    }
+
+    public PartBuilder ios(Double typ, Double max) {
+        ios = new Spread(typ, max, null);
+        return this;
+    }
+
+    public PartBuilder cmrr(Double min, Double typ) {
+        cmrr = new MinTyp(min, typ);
+        return this;
+    }
+
+    public PartBuilder psrr(Double min, Double typ) {
+        psrr = new MinTyp(min, typ);
+        return this;
+    }
+
+    public PartBuilder aol(Double min, Double typ) {
+        aol = new MinTyp(min, typ);
+        return this;
+    }
+
+    public PartBuilder gbw(double v) {
+        gbw = v;
+        return this;
+    }
+
+    public PartBuilder slew(double v) {
+        slew = v;
+        return this;
+    }
+
     public PartBuilder noise(Double en, Double enCorner, Double in, Double inCorner) {
         noise = new Noise(en, enCorner, in, inCorner);
         return this;
     }
-    public PartBuilder aging(double value, double per) { aging = new LongTermDrift(value, per); return this; }
-    public PartBuilder inputHeadroom(double low, double high) { inputHeadroom = new Headroom(low, high); return this; }
-    public PartBuilder outputHeadroom(double low, double high) { outputHeadroom = new Headroom(low, high); return this; }
-    public PartBuilder fchop(double v) { fchop = v; return this; }
-    public PartBuilder iq(double v) { iq = v; return this; }
-    public PartBuilder inputCapacitance(Double v) { cin = v; return this; }
-    public PartBuilder testConditions(Double supply, Double commonMode) {
-        testConditions = supply == null && commonMode == null ? null : new dev.ampsieve.catalog.TestConditions(supply, commonMode);
+
+    public PartBuilder aging(double value, double per) {
+        aging = new LongTermDrift(value, per);
         return this;
     }
+
+    public PartBuilder inputHeadroom(double low, double high) {
+        inputHeadroom = new Headroom(low, high);
+        return this;
+    }
+
+    public PartBuilder outputHeadroom(double low, double high) {
+        outputHeadroom = new Headroom(low, high);
+        return this;
+    }
+
+    public PartBuilder fchop(double v) {
+        fchop = v;
+        return this;
+    }
+
+    public PartBuilder iq(double v) {
+        iq = v;
+        return this;
+    }
+
+    public PartBuilder inputCapacitance(Double v) {
+        cin = v;
+        return this;
+    }
+
+    public PartBuilder testConditions(Double supply, Double commonMode) {
+        testConditions = supply == null && commonMode == null
+                ? null
+                : new dev.ampsieve.catalog.TestConditions(supply, commonMode);
+        return this;
+    }
+
     public PartBuilder crossover(double fromPositiveRail, double step) {
         crossover = new dev.ampsieve.catalog.InputCrossover(fromPositiveRail, step);
         return this;
     }
-    public PartBuilder thetaJa(Double v) { thetaJa = v; return this; }
-    public PartBuilder choppingRipple(Double v) { ripple = v; return this; }
-    public PartBuilder notes(String v) { notes = v; return this; }
-    public PartBuilder nullPins(boolean v) { nullPins = v; return this; }
-    public PartBuilder source(String v) { source = v; return this; }
+
+    public PartBuilder thetaJa(Double v) {
+        thetaJa = v;
+        return this;
+    }
+
+    public PartBuilder choppingRipple(Double v) {
+        ripple = v;
+        return this;
+    }
+
+    public PartBuilder notes(String v) {
+        notes = v;
+        return this;
+    }
+
+    public PartBuilder nullPins(boolean v) {
+        nullPins = v;
+        return this;
+    }
+
+    public PartBuilder source(String v) {
+        source = v;
+        return this;
+    }
+
     private boolean nullPins;
     private String source = "test fixture";
 
     public Part build() {
-        return new Part(id, title, architecture, input, factoryTrim, nullPins, channels, packages, tags, price, supply,
-                temperature, vos, drift, ib, ios, cmrr, psrr, aol, gbw, slew, noise, aging, inputHeadroom,
-                outputHeadroom, fchop, iq, cin, testConditions, crossover, thetaJa, ripple, source, notes, new Located(Path.of("fixture.yaml"), 1, 1));
+        return new Part(
+                id,
+                title,
+                architecture,
+                input,
+                factoryTrim,
+                nullPins,
+                channels,
+                packages,
+                tags,
+                price,
+                supply,
+                temperature,
+                vos,
+                drift,
+                ib,
+                ios,
+                cmrr,
+                psrr,
+                aol,
+                gbw,
+                slew,
+                noise,
+                aging,
+                inputHeadroom,
+                outputHeadroom,
+                fchop,
+                iq,
+                cin,
+                testConditions,
+                crossover,
+                thetaJa,
+                ripple,
+                source,
+                notes,
+                new Located(Path.of("fixture.yaml"), 1, 1));
     }
 }

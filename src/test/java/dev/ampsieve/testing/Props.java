@@ -15,8 +15,7 @@ import org.quicktheories.QuickTheory;
  * prints the shrunk input and the seed; turn the input into a plain JUnit regression test.
  */
 public final class Props {
-    private Props() {
-    }
+    private Props() {}
 
     /** The seed CI uses; any fixed value would do, this one is the date the tests were written. */
     public static final long SEED = 20261202L;
@@ -25,8 +24,7 @@ public final class Props {
     public static QuickTheory theory(int tries) {
         long seed = Long.getLong("props.seed", SEED);
         int n = Integer.getInteger("props.tries", tries);
-        return qt().withFixedSeed(seed).withExamples(n).withShrinkCycles(5_000)
-                .withGenerateAttempts(10 * n);
+        return qt().withFixedSeed(seed).withExamples(n).withShrinkCycles(5_000).withGenerateAttempts(10 * n);
     }
 
     /** Code under test, which may throw anything. */
@@ -41,15 +39,18 @@ public final class Props {
      * (NullPointerException, NumberFormatException, StackOverflowError, ...) fails the property
      * with the input shown escaped and the original as cause.
      */
-    public static <E extends Throwable> void onlyTyped(String input, Class<E> typed, Predicate<E> sound, Action action) {
+    public static <E extends Throwable> void onlyTyped(
+            String input, Class<E> typed, Predicate<E> sound, Action action) {
         try {
             action.run();
         } catch (Throwable t) {
             if (typed.isInstance(t)) {
                 E e = typed.cast(t);
                 if (!sound.test(e)) {
-                    throw new AssertionError("unhelpful " + typed.getSimpleName() + " '" + t.getMessage() + "' for input "
-                            + escape(input), t);
+                    throw new AssertionError(
+                            "unhelpful " + typed.getSimpleName() + " '" + t.getMessage() + "' for input "
+                                    + escape(input),
+                            t);
                 }
                 return;
             }

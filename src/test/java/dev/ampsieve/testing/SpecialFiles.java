@@ -19,8 +19,7 @@ import org.junit.jupiter.api.Assumptions;
  * all of them).
  */
 public final class SpecialFiles {
-    private SpecialFiles() {
-    }
+    private SpecialFiles() {}
 
     /** Generous: a refusal takes milliseconds; the old code read for ever or waited for a writer. */
     public static final Duration HANG_GUARD = Duration.ofSeconds(20);
@@ -29,7 +28,9 @@ public final class SpecialFiles {
     public static Path fifo(Path at) throws IOException, InterruptedException {
         Process p;
         try {
-            p = new ProcessBuilder("mkfifo", at.toString()).redirectErrorStream(true).start();
+            p = new ProcessBuilder("mkfifo", at.toString())
+                    .redirectErrorStream(true)
+                    .start();
         } catch (IOException e) {
             missing("mkfifo cannot be run (" + e.getMessage() + ")");
             return at;

@@ -1,7 +1,7 @@
 package dev.ampsieve.testing;
 
-import dev.ampsieve.stage.Board;
 import dev.ampsieve.catalog.Range;
+import dev.ampsieve.stage.Board;
 import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.stage.Limit;
 import dev.ampsieve.stage.Stage;
@@ -20,6 +20,7 @@ public final class StageBuilder {
     private double bandHigh = 10;
     /** First-order band limit at bandHigh, as the advice tests' expected values assume. */
     private Integer filterOrder = 1;
+
     private Double fullScale = 2.5;
     private double ratioTolerance;
     private Limit limit = Limit.output(1e-3);
@@ -33,30 +34,127 @@ public final class StageBuilder {
         return new StageBuilder();
     }
 
-    public StageBuilder topology(Topology v) { topology = v; return this; }
-    public StageBuilder rf(double v) { rf = v; return this; }
-    public StageBuilder rg(double v) { rg = v; return this; }
-    public StageBuilder source(double v) { rs = v; return this; }
-    public StageBuilder temperature(double lo, double hi) { tMin = lo; tMax = hi; return this; }
-    public StageBuilder supply(Double v) { supply = v; return this; }
-    public StageBuilder bandHigh(double v) { bandHigh = v; return this; }
-    public StageBuilder filterOrder(Integer v) { filterOrder = v; return this; }
-    public StageBuilder fullScale(Double v) { fullScale = v; return this; }
-    public StageBuilder ratioTolerance(double v) { ratioTolerance = v; return this; }
-    public StageBuilder limit(Limit v) { limit = v; return this; }
-    public StageBuilder limitV(double v) { limit = Limit.output(v); return this; }
-    public StageBuilder criterion(Criterion v) { criterion = v; return this; }
+    public StageBuilder topology(Topology v) {
+        topology = v;
+        return this;
+    }
+
+    public StageBuilder rf(double v) {
+        rf = v;
+        return this;
+    }
+
+    public StageBuilder rg(double v) {
+        rg = v;
+        return this;
+    }
+
+    public StageBuilder source(double v) {
+        rs = v;
+        return this;
+    }
+
+    public StageBuilder temperature(double lo, double hi) {
+        tMin = lo;
+        tMax = hi;
+        return this;
+    }
+
+    public StageBuilder supply(Double v) {
+        supply = v;
+        return this;
+    }
+
+    public StageBuilder bandHigh(double v) {
+        bandHigh = v;
+        return this;
+    }
+
+    public StageBuilder filterOrder(Integer v) {
+        filterOrder = v;
+        return this;
+    }
+
+    public StageBuilder fullScale(Double v) {
+        fullScale = v;
+        return this;
+    }
+
+    public StageBuilder ratioTolerance(double v) {
+        ratioTolerance = v;
+        return this;
+    }
+
+    public StageBuilder limit(Limit v) {
+        limit = v;
+        return this;
+    }
+
+    public StageBuilder limitV(double v) {
+        limit = Limit.output(v);
+        return this;
+    }
+
+    public StageBuilder criterion(Criterion v) {
+        criterion = v;
+        return this;
+    }
+
     public StageBuilder trim(boolean allowed, double resolution, double cost) {
         trim = new Trim(allowed, Trim.Method.ONE_POINT, resolution, cost);
         return this;
     }
-    public StageBuilder trim(Trim v) { trim = v; return this; }
-    public StageBuilder quantity(int v) { quantity = v; return this; }
-    public StageBuilder maxPrice(Double v) { maxPrice = v; return this; }
-    public StageBuilder maxTrials(int v) { maxTrials = v; return this; }
+
+    public StageBuilder trim(Trim v) {
+        trim = v;
+        return this;
+    }
+
+    public StageBuilder quantity(int v) {
+        quantity = v;
+        return this;
+    }
+
+    public StageBuilder maxPrice(Double v) {
+        maxPrice = v;
+        return this;
+    }
+
+    public StageBuilder maxTrials(int v) {
+        maxTrials = v;
+        return this;
+    }
 
     public Stage build() {
-        return new Stage(Networks.of(topology, rf, rg, rs, 0), tMin, tMax, supply, 0, 0, (Range) null, (Range) null, 0.1, bandHigh,
-                filterOrder, fullScale, ratioTolerance, 0, 0, limit, criterion, 3, 2000, maxTrials, 1L, trim, quantity, maxPrice, false, null, null, Board.NONE, null);
+        return new Stage(
+                Networks.of(topology, rf, rg, rs, 0),
+                tMin,
+                tMax,
+                supply,
+                0,
+                0,
+                (Range) null,
+                (Range) null,
+                0.1,
+                bandHigh,
+                filterOrder,
+                fullScale,
+                ratioTolerance,
+                0,
+                0,
+                limit,
+                criterion,
+                3,
+                2000,
+                maxTrials,
+                1L,
+                trim,
+                quantity,
+                maxPrice,
+                false,
+                null,
+                null,
+                Board.NONE,
+                null);
     }
 }

@@ -31,13 +31,16 @@ class VisibleTest {
 
     @Test
     void c0ControlsBecomeTwoHexDigits() {
-        assertEquals("\\x00\\x01\\x07\\x08\\x0b\\x0c\\x1b\\x1f",
-                Visible.of("" + (char) 0 + (char) 1 + (char) 7 + (char) 8 + (char) 11 + (char) 12 + (char) 0x1b + (char) 0x1f));
+        assertEquals(
+                "\\x00\\x01\\x07\\x08\\x0b\\x0c\\x1b\\x1f",
+                Visible.of("" + (char) 0 + (char) 1 + (char) 7 + (char) 8 + (char) 11 + (char) 12 + (char) 0x1b
+                        + (char) 0x1f));
     }
 
     @Test
     void deleteAndC1Controls() {
-        assertEquals("\\x7f\\x80\\x85\\x9b\\x9d\\x9f",
+        assertEquals(
+                "\\x7f\\x80\\x85\\x9b\\x9d\\x9f",
                 Visible.of("" + (char) 0x7f + (char) 0x80 + (char) 0x85 + (char) 0x9b + (char) 0x9d + (char) 0x9f));
         // the first printable characters either side of C1 stay: '~' U+007E and NBSP U+00A0
         assertEquals("~" + (char) 0xa0, Visible.of("~" + (char) 0xa0));
@@ -55,16 +58,21 @@ class VisibleTest {
     @Test
     void bidiControlsBecomeFourHexDigits() {
         StringBuilder in = new StringBuilder();
-        for (int c : new int[] {0x202a, 0x202b, 0x202c, 0x202d, 0x202e, 0x2066, 0x2067, 0x2068, 0x2069,
-            0x200e, 0x200f, 0x061c, 0x2028, 0x2029}) {
+        for (int c : new int[] {
+            0x202a, 0x202b, 0x202c, 0x202d, 0x202e, 0x2066, 0x2067, 0x2068, 0x2069, 0x200e, 0x200f, 0x061c, 0x2028,
+            0x2029
+        }) {
             in.append((char) c);
         }
-        assertEquals("\\u202a\\u202b\\u202c\\u202d\\u202e\\u2066\\u2067\\u2068\\u2069\\u200e\\u200f\\u061c\\u2028\\u2029",
+        assertEquals(
+                "\\u202a\\u202b\\u202c\\u202d\\u202e\\u2066\\u2067\\u2068\\u2069\\u200e\\u200f\\u061c\\u2028\\u2029",
                 Visible.of(in.toString()));
         // "abc" RLO "fdp.exe": shown in stored order, the override visible
         assertEquals("abc\\u202efdp.exe", Visible.of("abc" + (char) 0x202e + "fdp.exe"));
         // the neighbours U+2029 < x < U+202A and U+2065, U+206A are not bidi controls
-        assertEquals("" + (char) 0x2030 + (char) 0x2065 + (char) 0x206a, Visible.of("" + (char) 0x2030 + (char) 0x2065 + (char) 0x206a));
+        assertEquals(
+                "" + (char) 0x2030 + (char) 0x2065 + (char) 0x206a,
+                Visible.of("" + (char) 0x2030 + (char) 0x2065 + (char) 0x206a));
     }
 
     @Test

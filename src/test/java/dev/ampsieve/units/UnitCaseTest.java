@@ -3,9 +3,9 @@ package dev.ampsieve.units;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
-import org.junit.jupiter.api.Test;
 
 /**
  * The case rule (README "Your catalog"): SI prefixes are case-sensitive (SI Brochure, 9th ed.,
@@ -18,12 +18,12 @@ class UnitCaseTest {
     @CsvSource({
         "10uv,      VOLTAGE,     10e-6",
         "1.5 MHZ,   FREQUENCY,   1.5e6",
-        "1.5 mhz,   FREQUENCY,   1.5e-3",  // m is milli, whatever case the unit has
+        "1.5 mhz,   FREQUENCY,   1.5e-3", // m is milli, whatever case the unit has
         "10 KOHM,   RESISTANCE,  10e3",
         "10 kohm,   RESISTANCE,  10e3",
         "10 Kohm,   RESISTANCE,  10e3",
         "10 mv,     VOLTAGE,     10e-3",
-        "10 MV,     VOLTAGE,     10e6",    // mega: the plausibility bounds refuse it in any op amp field
+        "10 MV,     VOLTAGE,     10e6", // mega: the plausibility bounds refuse it in any op amp field
         "110 DB,    DECIBEL,     110",
         "3 nA,      CURRENT,     3e-9",
         "3 na,      CURRENT,     3e-9",
@@ -31,9 +31,10 @@ class UnitCaseTest {
         "0.5 v/us,  SLEW_RATE,   0.5e6",
         "25 PPM/C,  RATIO_DRIFT, 25e-6",
         "25 c,      TEMPERATURE, 25",
-        "300 K,     TEMPERATURE, 26.85",   // kelvin stays kelvin in a temperature field: 300 - 273.15
+        "300 K,     TEMPERATURE, 26.85", // kelvin stays kelvin in a temperature field: 300 - 273.15
     })
-    void readsCaseBlindSymbolsAfterACaseSensitivePrefix(String text, Dimension d, double expected) throws UnitException {
+    void readsCaseBlindSymbolsAfterACaseSensitivePrefix(String text, Dimension d, double expected)
+            throws UnitException {
         assertEquals(expected, Units.parse(text, d), Math.abs(expected) * 1e-12);
     }
 

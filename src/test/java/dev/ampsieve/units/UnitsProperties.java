@@ -39,7 +39,8 @@ class UnitsProperties {
         for (Dimension d : Dimension.values()) {
             out.add(d.example());
         }
-        out.addAll(List.of("10k", "2M", "110 dB", "1 V/mV", "300 K", "25 ppm/C", "0.5 V/us", "3 fA/√Hz", "1 month", "-40 °C"));
+        out.addAll(List.of(
+                "10k", "2M", "110 dB", "1 V/mV", "300 K", "25 ppm/C", "0.5 V/us", "3 fA/√Hz", "1 month", "-40 °C"));
         return List.copyOf(out);
     }
 
@@ -52,15 +53,22 @@ class UnitsProperties {
 
     @Test
     void anyTextParsesToAFiniteValueOrATypedError() {
-        Props.theory(2000).forAll(TEXT, DIMENSION).checkAssert((text, d) -> Props.onlyTyped(text + " as " + d,
-                UnitException.class, e -> !e.problem().isBlank() && !e.fix().isBlank(), () -> {
-                    double v = Units.parse(text, d);
-                    assertTrue(Double.isFinite(v), () -> Props.escape(text) + " as " + d + " gave " + v);
-                    // printing it back never fails, even where percent or ppm overflow a double
-                    assertTrue(!Units.format(v, d).isBlank(), () -> Props.escape(text) + " as " + d + " printed blank");
-                    if (d == Dimension.TEMPERATURE) {
-                        assertTrue(v >= -273.15, () -> Props.escape(text) + " gave " + v + " °C");
-                    }
-                }));
+        Props.theory(2000)
+                .forAll(TEXT, DIMENSION)
+                .checkAssert((text, d) -> Props.onlyTyped(
+                        text + " as " + d,
+                        UnitException.class,
+                        e -> !e.problem().isBlank() && !e.fix().isBlank(),
+                        () -> {
+                            double v = Units.parse(text, d);
+                            assertTrue(Double.isFinite(v), () -> Props.escape(text) + " as " + d + " gave " + v);
+                            // printing it back never fails, even where percent or ppm overflow a double
+                            assertTrue(
+                                    !Units.format(v, d).isBlank(),
+                                    () -> Props.escape(text) + " as " + d + " printed blank");
+                            if (d == Dimension.TEMPERATURE) {
+                                assertTrue(v >= -273.15, () -> Props.escape(text) + " gave " + v + " °C");
+                            }
+                        }));
     }
 }

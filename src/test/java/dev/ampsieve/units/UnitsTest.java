@@ -128,8 +128,15 @@ class UnitsTest {
     }
 
     @ParameterizedTest
-    @CsvSource(delimiter = '|', value = {".nan | not a finite number", "NaN V | not a finite number",
-        ".inf | not a finite number", "-Infinity V | not a finite number", "1e999 V | out of range"})
+    @CsvSource(
+            delimiter = '|',
+            value = {
+                ".nan | not a finite number",
+                "NaN V | not a finite number",
+                ".inf | not a finite number",
+                "-Infinity V | not a finite number",
+                "1e999 V | out of range"
+            })
     void nanAndInfinityAreRefused(String text, String expected) {
         UnitException e = assertThrows(UnitException.class, () -> Units.parse(text, Dimension.VOLTAGE));
         assertTrue(e.problem().contains(expected), e.problem());
@@ -155,26 +162,29 @@ class UnitsTest {
     // ------------------------------------------------------------------ printing
 
     @ParameterizedTest(name = "{0} {1} -> {2}")
-    @CsvSource(delimiter = '|', value = {
-        "2.5e-6   | VOLTAGE         | 2.50 µV",
-        "-2.5e-6  | VOLTAGE         | -2.50 µV",
-        "999.96   | VOLTAGE         | 1.00 kV",
-        "999.4    | VOLTAGE         | 999 V",
-        "0.0099996| CURRENT         | 10.0 mA",
-        "12e-9    | VOLTAGE_DENSITY | 12.0 nV/√Hz",
-        "3e-15    | CURRENT_DENSITY | 3.00 fA/√Hz",
-        "1.5e6    | FREQUENCY       | 1.50 MHz",
-        "10e3     | RESISTANCE      | 10.0 kΩ",
-        "0.6e-6   | VOLTAGE_DRIFT   | 600 nV/°C",
-        "5e5      | SLEW_RATE       | 0.500 V/µs",
-        "1.2e9    | SLEW_RATE       | 1200 V/µs",
-        "62.83    | SLEW_RATE       | 62.8 V/s",
-        "110      | DECIBEL         | 110 dB",
-        "-40      | TEMPERATURE     | -40 °C",
-        "0.001    | RATIO           | 0.1 %",
-        "25e-6    | RATIO_DRIFT     | 25 ppm/°C",
-        "3.6e6    | TIME            | 1000 h",
-        "0        | VOLTAGE         | 0 V"})
+    @CsvSource(
+            delimiter = '|',
+            value = {
+                "2.5e-6   | VOLTAGE         | 2.50 µV",
+                "-2.5e-6  | VOLTAGE         | -2.50 µV",
+                "999.96   | VOLTAGE         | 1.00 kV",
+                "999.4    | VOLTAGE         | 999 V",
+                "0.0099996| CURRENT         | 10.0 mA",
+                "12e-9    | VOLTAGE_DENSITY | 12.0 nV/√Hz",
+                "3e-15    | CURRENT_DENSITY | 3.00 fA/√Hz",
+                "1.5e6    | FREQUENCY       | 1.50 MHz",
+                "10e3     | RESISTANCE      | 10.0 kΩ",
+                "0.6e-6   | VOLTAGE_DRIFT   | 600 nV/°C",
+                "5e5      | SLEW_RATE       | 0.500 V/µs",
+                "1.2e9    | SLEW_RATE       | 1200 V/µs",
+                "62.83    | SLEW_RATE       | 62.8 V/s",
+                "110      | DECIBEL         | 110 dB",
+                "-40      | TEMPERATURE     | -40 °C",
+                "0.001    | RATIO           | 0.1 %",
+                "25e-6    | RATIO_DRIFT     | 25 ppm/°C",
+                "3.6e6    | TIME            | 1000 h",
+                "0        | VOLTAGE         | 0 V"
+            })
     void printsWithEngineeringPrefixesAndThreeSignificantDigits(double si, Dimension d, String expected) {
         assertEquals(expected, Units.format(si, d));
     }

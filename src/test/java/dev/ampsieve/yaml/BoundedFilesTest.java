@@ -21,7 +21,8 @@ class BoundedFilesTest {
     Path dir;
 
     private static Problem refusal(Path file) {
-        InputException e = assertTimeoutPreemptively(SpecialFiles.HANG_GUARD,
+        InputException e = assertTimeoutPreemptively(
+                SpecialFiles.HANG_GUARD,
                 () -> assertThrows(InputException.class, () -> BoundedFiles.read(file, YamlFiles.MAX_BYTES)));
         assertEquals(1, e.problems().size(), e.getMessage());
         return e.problems().get(0);
@@ -32,7 +33,9 @@ class BoundedFilesTest {
         Path ten = Files.writeString(dir.resolve("ten.yaml"), "a: 1234567"); // 10 bytes, counted by hand
         assertArrayEquals("a: 1234567".getBytes(StandardCharsets.US_ASCII), BoundedFiles.read(ten, 10));
         Path eleven = Files.writeString(dir.resolve("eleven.yaml"), "a: 12345678");
-        Problem p = assertThrows(InputException.class, () -> BoundedFiles.read(eleven, 10)).problems().get(0);
+        Problem p = assertThrows(InputException.class, () -> BoundedFiles.read(eleven, 10))
+                .problems()
+                .get(0);
         assertEquals("file is over the limit of 10 bytes for one YAML file", p.message());
         assertEquals(eleven, p.file());
     }

@@ -60,18 +60,19 @@ class YamlFilesTest {
     @Test
     void anUnclosedBraceIsPointedAtWhereItOpened() {
         // the parser gives up on line 3 ("gbw:"), but the missing '}' belongs to line 2's '{' at column 6
-        Problem p = only(assertThrows(InputException.class,
-                () -> YamlFiles.parse("id: a\nvos: {max: 5 uV\ngbw: 2 MHz\n", null)));
+        Problem p = only(assertThrows(
+                InputException.class, () -> YamlFiles.parse("id: a\nvos: {max: 5 uV\ngbw: 2 MHz\n", null)));
         assertEquals(3, p.line());
         assertEquals("the '{' opened at line 2, column 6 is not closed; end it with '}' on that line", p.fix());
-        Problem q = only(assertThrows(InputException.class,
-                () -> YamlFiles.parse("id: a\ntags: [x, y\ngbw: 2 MHz\n", null)));
+        Problem q = only(
+                assertThrows(InputException.class, () -> YamlFiles.parse("id: a\ntags: [x, y\ngbw: 2 MHz\n", null)));
         assertEquals("the '[' opened at line 2, column 7 is not closed; end it with ']' on that line", q.fix());
     }
 
     @Test
     void aKeyWrittenTwiceNamesBothLinesAndThePath() {
-        Problem p = only(assertThrows(InputException.class,
+        Problem p = only(assertThrows(
+                InputException.class,
                 () -> YamlFiles.parse("id: a\nvos:\n  max: 1 mV\n  typ: 1 mV\n  max: 2 mV\n", null)));
         assertEquals("vos.max", p.field());
         assertEquals(5, p.line());
@@ -81,7 +82,8 @@ class YamlFilesTest {
 
     /** The classic expansion bomb: nine levels of nine aliases, 9^9 strings if expanded. */
     private static String billionLaughs() {
-        StringBuilder sb = new StringBuilder("a: &a [\"lol\",\"lol\",\"lol\",\"lol\",\"lol\",\"lol\",\"lol\",\"lol\",\"lol\"]\n");
+        StringBuilder sb =
+                new StringBuilder("a: &a [\"lol\",\"lol\",\"lol\",\"lol\",\"lol\",\"lol\",\"lol\",\"lol\",\"lol\"]\n");
         char prev = 'a';
         for (char c = 'b'; c <= 'i'; c++) {
             sb.append(c).append(": &").append(c).append(" [");
@@ -112,7 +114,14 @@ class YamlFilesTest {
         // 24 levels of doubling: 48 aliases, under the limit, 2^24 leaves if expanded
         StringBuilder sb = new StringBuilder("l0: &l0 [x]\n");
         for (int i = 1; i <= 24; i++) {
-            sb.append("l").append(i).append(": &l").append(i).append(" [*l").append(i - 1).append(", *l").append(i - 1)
+            sb.append("l")
+                    .append(i)
+                    .append(": &l")
+                    .append(i)
+                    .append(" [*l")
+                    .append(i - 1)
+                    .append(", *l")
+                    .append(i - 1)
                     .append("]\n");
         }
         Node.Mapping m = assertInstanceOf(Node.Mapping.class, YamlFiles.parse(sb.toString(), null));
@@ -145,12 +154,12 @@ class YamlFilesTest {
         // the old reader asked for the size (0) and then read /dev/zero until the heap ran out,
         // and opened the pipe, which waits for a writer for ever
         Path zero = SpecialFiles.devZero();
-        Problem z = only(assertTimeoutPreemptively(SpecialFiles.HANG_GUARD,
-                () -> assertThrows(InputException.class, () -> YamlFiles.read(zero))));
+        Problem z = only(assertTimeoutPreemptively(
+                SpecialFiles.HANG_GUARD, () -> assertThrows(InputException.class, () -> YamlFiles.read(zero))));
         assertEquals("/dev/zero: not a regular file (a character device); give a YAML file", z.toString());
         Path fifo = SpecialFiles.fifo(dir.resolve("pipe.yaml"));
-        Problem f = only(assertTimeoutPreemptively(SpecialFiles.HANG_GUARD,
-                () -> assertThrows(InputException.class, () -> YamlFiles.read(fifo))));
+        Problem f = only(assertTimeoutPreemptively(
+                SpecialFiles.HANG_GUARD, () -> assertThrows(InputException.class, () -> YamlFiles.read(fifo))));
         assertEquals(fifo + ": not a regular file (a named pipe); give a YAML file", f.toString());
     }
 
@@ -178,7 +187,8 @@ class YamlFilesTest {
     void textThatIsNotUtf8IsRefusedAtTheFirstBadByte() throws IOException {
         // Latin-1 writes the degree sign as the single byte 0xB0, never valid alone in UTF-8;
         // "title: 25 " is 10 characters, so the byte is in column 11 of line 2
-        Path f = Files.write(dir.resolve("latin1.yaml"), "id: a\ntitle: 25 \u00b0C part\n".getBytes(StandardCharsets.ISO_8859_1));
+        Path f = Files.write(
+                dir.resolve("latin1.yaml"), "id: a\ntitle: 25 \u00b0C part\n".getBytes(StandardCharsets.ISO_8859_1));
         Problem p = only(assertThrows(InputException.class, () -> YamlFiles.read(f)));
         assertEquals("not valid UTF-8 text (byte 0xB0)", p.message());
         assertEquals(2, p.line());
@@ -209,7 +219,8 @@ class YamlFilesTest {
         assertEquals(9, p.column());
         assertTrue(p.fix().contains("UTF-16"), p.fix());
         // an escape character (0x1B) after a CR LF line end and a BOM (not counted as a column)
-        Problem q = only(assertThrows(InputException.class, () -> YamlFiles.parse("\uFEFFid: a\r\nb: \u001b[1m\n", null)));
+        Problem q =
+                only(assertThrows(InputException.class, () -> YamlFiles.parse("\uFEFFid: a\r\nb: \u001b[1m\n", null)));
         assertEquals("control character U+001B is not allowed in YAML", q.message());
         assertEquals(2, q.line());
         assertEquals(4, q.column());
