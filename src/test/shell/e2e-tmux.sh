@@ -105,6 +105,12 @@ type_line "rank"
 sleep 2
 tmux -L "$SOCKET" send-keys -t "$SESSION" C-c
 type_line "show"
+# on a loaded machine the first Ctrl-C can land before the ranking has begun; a user presses it again
+for again in 1 2 3; do
+  screen | grep -Eq "^Interrupted; the current stage is as it was\.$" && break
+  sleep 10
+  screen | grep -Eq "^Interrupted; the current stage is as it was\.$" || tmux -L "$SOCKET" send-keys -t "$SESSION" C-c
+done
 wait_for "^Interrupted; the current stage is as it was\.$" 60
 # what follows the last "rank" line: the interrupt, then show's stage, and no ranking
 after_rank() { screen | awk '/^ampsieve \[new stage\*\]> rank$/ { text = "" } { text = text $0 "\n" } END { printf "%s", text }'; }
