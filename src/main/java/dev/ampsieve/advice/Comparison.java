@@ -25,12 +25,19 @@ public record Comparison(Candidate a, Candidate b, List<TermDelta> terms, String
     /**
      * One term of both budgets.
      *
-     * @param better      "a", "b" or "=" (the smaller output error is better)
+     * @param better      which part has the smaller output error, or {@link Side#EQUAL}
      * @param differenceV how much smaller the better one is, output volts
      * @param ratio       larger / smaller (infinite when the smaller is 0; 1 when equal)
      */
     public record TermDelta(
-            String key, String label, double aV, double bV, String better, double differenceV, double ratio) {}
+            String key, String label, double aV, double bV, Side better, double differenceV, double ratio) {}
+
+    /** Which of the two parts a figure favours. */
+    public enum Side {
+        A,
+        B,
+        EQUAL
+    }
 
     /** Cost differences below half a cent count as equal. */
     static final double COST_EPS = 0.005;
@@ -62,9 +69,9 @@ public record Comparison(Candidate a, Candidate b, List<TermDelta> terms, String
         double lo = Math.min(Math.abs(x), Math.abs(y));
         // equal within one part in 10^6 of the larger: finer than any printed digit
         if (hi - lo <= 1e-6 * hi) {
-            return new TermDelta(key, label, x, y, "=", 0, 1);
+            return new TermDelta(key, label, x, y, Side.EQUAL, 0, 1);
         }
-        String better = Math.abs(x) < Math.abs(y) ? "a" : "b";
+        Side better = Math.abs(x) < Math.abs(y) ? Side.A : Side.B;
         return new TermDelta(key, label, x, y, better, hi - lo, lo == 0 ? Double.POSITIVE_INFINITY : hi / lo);
     }
 

@@ -14,11 +14,11 @@ import dev.ampsieve.units.Units;
 public final class CompareReport {
     private CompareReport() {}
 
-    private static String better(Comparison c, String side) {
+    private static String better(Comparison c, Comparison.Side side) {
         return switch (side) {
-            case "a" -> c.a().id();
-            case "b" -> c.b().id();
-            default -> "=";
+            case A -> c.a().id();
+            case B -> c.b().id();
+            case EQUAL -> "=";
         };
     }
 
@@ -58,8 +58,9 @@ public final class CompareReport {
             boolean eb = estimated(bb, d.key());
             anyMarked |= ea || eb;
             // a figure the catalog lacks counts as 0 V: it must not win the row on that alone
-            boolean winnerUnknown =
-                    d.better().equals("a") ? ea && d.aV() == 0 : d.better().equals("b") && eb && d.bV() == 0;
+            boolean winnerUnknown = d.better() == Comparison.Side.A
+                    ? ea && d.aV() == 0
+                    : d.better() == Comparison.Side.B && eb && d.bV() == 0;
             anyUnknown |= winnerUnknown;
             t.row(
                     d.label() + Figures.kindTag(Figures.kindOf(d.key())),
@@ -168,7 +169,7 @@ public final class CompareReport {
             n.put("kind", Figures.kindOf(d.key()).key());
             JsonSupport.put(n, "aV", d.aV());
             JsonSupport.put(n, "bV", d.bV());
-            n.put("better", d.better().equals("=") ? "=" : better(c, d.better()));
+            n.put("better", better(c, d.better()));
             JsonSupport.put(n, "differenceV", d.differenceV());
             JsonSupport.put(n, "ratio", d.ratio());
         }

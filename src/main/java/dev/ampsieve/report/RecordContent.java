@@ -229,16 +229,16 @@ final class RecordContent {
         List<List<String>> rows = new ArrayList<>();
         for (Comparison.TermDelta t : c.terms()) {
             String better = switch (t.better()) {
-                case "a" -> c.a().id();
-                case "b" -> c.b().id();
-                default -> "equal";
+                case A -> c.a().id();
+                case B -> c.b().id();
+                case EQUAL -> "equal";
             };
             rows.add(List.of(
                     t.label(),
                     Figures.volts(t.aV()),
                     Figures.volts(t.bV()),
                     better,
-                    t.better().equals("=") ? Figures.NONE : Figures.volts(t.differenceV())));
+                    t.better() == Comparison.Side.EQUAL ? Figures.NONE : Figures.volts(t.differenceV())));
         }
         rows.add(List.of("judged total", Figures.volts(c.a().errorV()), Figures.volts(c.b().errorV()), "", ""));
         rows.add(List.of(

@@ -38,7 +38,7 @@ class ComparisonTest {
                 .findFirst()
                 .orElseThrow();
         // 0.2 mV against 1.5 mV: A better by 1.3 mV, 7.5 times
-        assertEquals("a", offset.better());
+        assertEquals(Comparison.Side.A, offset.better());
         assertEquals(1.3e-3, offset.differenceV(), 1e-15);
         assertEquals(7.5, offset.ratio(), 1e-12);
     }
@@ -70,7 +70,7 @@ class ComparisonTest {
     @Test
     void equalTermsAreMarkedEqual() {
         Comparison.TermDelta d = Comparison.delta("noise", "noise", 1e-6, 1e-6);
-        assertEquals("=", d.better());
+        assertEquals(Comparison.Side.EQUAL, d.better());
         assertEquals(1.0, d.ratio());
     }
 
