@@ -574,8 +574,11 @@ public final class Advisor {
         // the resistance the noise gain divides Rf by: NG = 1 + Rf/rgEff in every adjustable network
         double rgEff = rf / (stage.noiseGain() - 1.0);
         // the lowest Rf offered: half the gain (inverting: at least a gain of -1), never below the resistor floor
-        double least =
-                Math.max(MIN_GAIN_SHARE * stage.sourceGain(), stage.topology() == Topology.INVERTING ? 1.0 : 0.0);
+        double floorGain = switch (stage.topology()) {
+            case INVERTING -> 1.0; // a gain of -1: below it the stage attenuates
+            case NON_INVERTING, FOLLOWER, DIFFERENCE, TRANSIMPEDANCE -> 0.0;
+        };
+        double least = Math.max(MIN_GAIN_SHARE * stage.sourceGain(), floorGain);
         double rfMin = Math.max(rfFor(stage, least), RESISTOR_FLOOR);
         if (rfMin >= rf) {
             return java.util.Optional.empty();

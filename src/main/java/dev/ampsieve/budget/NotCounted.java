@@ -2,7 +2,6 @@ package dev.ampsieve.budget;
 
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.stage.Stage;
-import dev.ampsieve.stage.Topology;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -88,7 +87,7 @@ public record NotCounted(String term, Reason reason) {
                                     ? null
                                     : !(p.gbw() > 0 && Double.isFinite(p.gbw())) ? Reason.NOT_IN_CATALOG : null;
                 case ResistorTerm.KEY ->
-                    s.topology() == Topology.FOLLOWER
+                    s.network().ratioSensitivity() == 0 // no resistor sets the gain (a follower): nothing to count
                             ? null
                             : noFullScale
                                     ? Reason.NO_FULL_SCALE_OUTPUT
