@@ -198,6 +198,22 @@ class RankFormatsAgreeTest {
         }
     }
 
+    @Test
+    void aStageLabelOrQueryCannotBreakOutOfItsCommentLine() throws Exception {
+        Path file = Path.of("demo-catalog/stages/bridge-amp.yaml");
+        Ranking r = Ranker.rank(StageLoader.load(file), catalog.parts(), BudgetCalculator::compute);
+        String csv = RankReport.csv(r, "br\u001b[2Jidge.yaml\n=cmd", "vos<1mV\n=HYPERLINK(1)", 3, false);
+        List<String> lines = csv.lines().toList();
+        // ESC and line feed shown as \x1b and \n (README, "control characters"): still one comment line each
+        assertTrue(lines.get(0).startsWith("# stage: br\\x1b[2Jidge.yaml\\n=cmd: difference, "), lines.get(0));
+        assertEquals("# query: vos<1mV\\n=HYPERLINK(1)", lines.get(2));
+        assertEquals("# " + Caution.TEXT, lines.get(3));
+        assertTrue(lines.get(4).startsWith("rank,part,"), lines.get(4));
+        assertFalse(csv.contains("\u001b"), csv);
+        // 3 candidates, then every rejected part, and nothing else read as data
+        assertEquals(3 + r.rejected().size(), csvRows(csv).size());
+    }
+
     /** JSON number, null (not applicable) as NaN. */
     private static double num(JsonNode j, String key) {
         JsonNode n = j.get(key);
