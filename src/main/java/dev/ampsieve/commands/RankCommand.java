@@ -57,7 +57,9 @@ public final class RankCommand implements Callable<Integer> {
             description = "Candidates to list (default ${DEFAULT-VALUE}); advice and Pareto front use all.")
     int top;
 
-    @Option(names = "--all", description = "Pareto front of every candidate, not only of the parts that fit.")
+    @Option(
+            names = "--all",
+            description = "Pareto front of every candidate, not only of the parts that fit (CSV: its pareto column).")
     boolean all;
 
     @ArgGroup(exclusive = true)
@@ -78,7 +80,7 @@ public final class RankCommand implements Callable<Integer> {
         String out = format.json()
                 ? RankReport.json(r, label, query.text(), top, all)
                 : format.csv()
-                        ? RankReport.csv(r, top)
+                        ? RankReport.csv(r, label, query.text(), top, all)
                         : RankReport.text(r, name, query.text(), top, root.textWidth(), all);
         spec.commandLine().getOut().print(out);
         return ExitCode.OK.code();

@@ -40,35 +40,22 @@ public final class RankReport {
         return c.verdict() == Verdict.NO_FIT ? "no fit" : verdict(c);
     }
 
-    private static String limiting(Candidate c) {
-        String key = c.budget().limitingTerm();
-        if (key == null) {
-            return Figures.NONE;
-        }
-        TermResult t = c.budget().term(key);
+    private static String limiting(RankedFigures f) {
+        String label = f.limitingLabel();
         // the engine names the largest term of the untrimmed budget
-        return (t == null ? key : t.label() + Figures.kindTag(t.kind())) + (c.trimmed() ? " †" : "");
+        return label == null ? Figures.NONE : label + (f.candidate().trimmed() ? " †" : "");
     }
 
     /** Yield of the part as ranked: after the stage's trim when it needs one. */
-    private static String yieldCell(Candidate c) {
-        YieldResult y = c.trimmed() ? c.budget().trimmed().yield() : c.budget().yield();
-        return y == null ? Figures.NONE : Figures.yield(y.value());
+    private static String yieldCell(RankedFigures f) {
+        return f.yield() == null ? Figures.NONE : Figures.yield(f.yield().value());
     }
 
     /** The margin of the criterion in force: points of yield under a yield criterion, else a share of the limit. */
-    private static String marginCell(Ranking r, Candidate c) {
+    private static String marginCell(Ranking r, RankedFigures f) {
         return r.stage().criterion().kind() == Criterion.Kind.YIELD
-                ? Figures.yieldMargin(c.margin())
-                : Figures.percent(c.margin());
-    }
-
-    private static double worstCase(Candidate c) {
-        return c.trimmed() ? c.budget().trimmed().worstCaseV() : c.budget().worstCaseV();
-    }
-
-    private static double rss(Candidate c) {
-        return c.trimmed() ? c.budget().trimmed().rssV() : c.budget().rssV();
+                ? Figures.yieldMargin(f.margin())
+                : Figures.percent(f.margin());
     }
 
     private static String errorName(Ranking r) {
@@ -118,17 +105,18 @@ public final class RankReport {
                     .left("P");
             int i = 0;
             for (Candidate c : shown) {
+                RankedFigures f = RankedFigures.of(c);
                 t.row(
                         Integer.toString(++i),
                         c.id(),
                         verdict(c) + (c.restsOnEstimate() ? ESTIMATE_MARK : ""),
-                        Figures.money(c.effectiveCost())
+                        Figures.money(f.effectiveCost())
                                 + (cur.isEmpty() && c.part().price() != null ? " " + c.currency() : ""),
-                        Figures.volts(worstCase(c)),
-                        Figures.volts(rss(c)),
-                        yieldCell(c),
-                        marginCell(r, c),
-                        limiting(c),
+                        Figures.volts(f.worstCaseV()),
+                        Figures.volts(f.rssV()),
+                        yieldCell(f),
+                        marginCell(r, f),
+                        limiting(f),
                         front.contains(c.id()) ? "*" : "");
             }
             t.lines(width).forEach(l -> o.append(l).append('\n'));
@@ -233,73 +221,124 @@ public final class RankReport {
         }
     }
 
-    /** CSV: one row per candidate in ranking order, then one per rejected part; the caution as a last '#' line. */
+    /** CSV of {@link #csv(Ranking, String, String, int, boolean)} without a stage label or query. */
     public static String csv(Ranking r, int top) {
+        return csv(r, null, null, top, false);
+    }
+
+    /** The CSV header row: column names of our own, described in README ("rank --csv"). */
+    static final List<String> CSV_COLUMNS = List.of(
+            "rank",
+            "part",
+            "verdict",
+            "rests_on_estimate",
+            "effective_cost",
+            "currency",
+            "trimmed",
+            "error_v",
+            "margin",
+            "ranked_worst_case_v",
+            "ranked_rss_v",
+            "ranked_yield",
+            "ranked_yield_low",
+            "ranked_yield_high",
+            "untrimmed_worst_case_v",
+            "untrimmed_rss_v",
+            "untrimmed_yield",
+            "trimmed_worst_case_v",
+            "trimmed_rss_v",
+            "trimmed_yield",
+            "limiting_term",
+            "limiting_kind",
+            "pareto",
+            "estimated_terms",
+            "not_counted",
+            "reason");
+
+    /**
+     * CSV: leading comment lines starting with '#' (the stage, its limit and criterion, the query,
+     * the caution) that a spreadsheet told to treat '#' as the comment character skips; then the
+     * header row, one row per candidate in ranking order, then one per rejected part. The figures
+     * "as ranked" are those the text table shows ({@link RankedFigures}); the untrimmed and trimmed
+     * ones have their own columns.
+     *
+     * @param allOnFront as for {@link #text(Ranking, String, String, int, int, boolean)}: the {@code pareto} column
+     */
+    public static String csv(Ranking r, String stageLabel, String query, int top, boolean allOnFront) {
         StringBuilder o = new StringBuilder();
-        o.append("rank,part,verdict,effective_cost,currency,error_v,margin,worst_case_v,rss_v,trimmed,"
-                + "trimmed_worst_case_v,trimmed_rss_v,yield,yield_low,yield_high,limiting_term,pareto,reason\n");
-        List<Candidate> frontList = front(r, false);
-        Set<String> front = frontList.stream().map(Candidate::id).collect(java.util.stream.Collectors.toSet());
-        int i = 0;
-        for (Candidate c : r.candidates().stream().limit(Math.max(0, top)).toList()) {
-            YieldResult y = c.budget().yield();
-            o.append(String.join(
-                            ",",
-                            List.of(
-                                    Integer.toString(++i),
-                                    csv(c.id()),
-                                    c.verdict().key(),
-                                    num(c.effectiveCost()),
-                                    csv(c.currency()),
-                                    num(c.errorV()),
-                                    num(c.margin()),
-                                    num(c.budget().worstCaseV()),
-                                    num(c.budget().rssV()),
-                                    Boolean.toString(c.trimmed()),
-                                    num(c.budget().trimmed().worstCaseV()),
-                                    num(c.budget().trimmed().rssV()),
-                                    y == null ? "" : num(y.value()),
-                                    y == null ? "" : num(y.low()),
-                                    y == null ? "" : num(y.high()),
-                                    csv(c.budget().limitingTerm()),
-                                    Boolean.toString(front.contains(c.id())),
-                                    "")))
-                    .append('\n');
-        }
-        for (Rejected x : r.rejected()) {
-            o.append(String.join(
-                            ",",
-                            List.of(
-                                    "",
-                                    csv(x.id()),
-                                    "rejected",
-                                    num(
-                                            x.part().price() == null
-                                                    ? Double.NaN
-                                                    : x.part()
-                                                            .price()
-                                                            .at(r.stage().quantity())),
-                                    csv(
-                                            x.part().price() == null
-                                                    ? ""
-                                                    : x.part().price().currency()),
-                                    "",
-                                    "",
-                                    "",
-                                    "",
-                                    "",
-                                    "",
-                                    "",
-                                    "",
-                                    "",
-                                    "",
-                                    "",
-                                    "false",
-                                    csv(x.reason()))))
-                    .append('\n');
+        o.append("# stage: ").append(StageLine.head(r.stage(), stageLabel)).append('\n');
+        o.append("# limit: ").append(StageLine.limit(r.stage())).append('\n');
+        if (query != null && !query.isBlank()) {
+            o.append("# query: ").append(Visible.of(query)).append('\n');
         }
         o.append("# ").append(Caution.TEXT).append('\n');
+        o.append(String.join(",", CSV_COLUMNS)).append('\n');
+        Set<String> front =
+                front(r, allOnFront).stream().map(Candidate::id).collect(java.util.stream.Collectors.toSet());
+        int i = 0;
+        for (Candidate c : r.candidates().stream().limit(Math.max(0, top)).toList()) {
+            RankedFigures f = RankedFigures.of(c);
+            YieldResult y = f.yield();
+            row(
+                    o,
+                    Integer.toString(++i),
+                    csv(c.id()),
+                    c.verdict().key(),
+                    Boolean.toString(c.restsOnEstimate()),
+                    num(f.effectiveCost()),
+                    csv(c.currency()),
+                    Boolean.toString(c.trimmed()),
+                    num(f.errorV()),
+                    num(f.margin()),
+                    num(f.worstCaseV()),
+                    num(f.rssV()),
+                    y == null ? "" : num(y.value()),
+                    y == null ? "" : num(y.low()),
+                    y == null ? "" : num(y.high()),
+                    num(c.budget().worstCaseV()),
+                    num(c.budget().rssV()),
+                    f.untrimmedYield() == null ? "" : num(f.untrimmedYield().value()),
+                    num(f.trimmedWorstCaseV()),
+                    num(f.trimmedRssV()),
+                    f.trimmedYield() == null ? "" : num(f.trimmedYield().value()),
+                    csv(f.limitingTerm()),
+                    f.limitingTerm() == null
+                            ? ""
+                            : Figures.kindOf(f.limitingTerm()).key(),
+                    Boolean.toString(front.contains(c.id())),
+                    csv(String.join(
+                            ";",
+                            c.estimatedTerms().stream().map(TermResult::key).toList())),
+                    csv(String.join(
+                            ";",
+                            c.budget().notCounted().stream()
+                                    .map(n -> n.term() + ":" + n.reason().key())
+                                    .toList())),
+                    "");
+        }
+        for (Rejected x : r.rejected()) {
+            String[] cells = new String[CSV_COLUMNS.size()];
+            java.util.Arrays.fill(cells, "");
+            cells[CSV_COLUMNS.indexOf("part")] = csv(x.id());
+            cells[CSV_COLUMNS.indexOf("verdict")] = "rejected";
+            cells[CSV_COLUMNS.indexOf("effective_cost")] = num(
+                    x.part().price() == null
+                            ? Double.NaN
+                            : x.part().price().at(r.stage().quantity()));
+            cells[CSV_COLUMNS.indexOf("currency")] =
+                    csv(x.part().price() == null ? "" : x.part().price().currency());
+            cells[CSV_COLUMNS.indexOf("pareto")] = "false";
+            cells[CSV_COLUMNS.indexOf("reason")] = csv(x.reason());
+            row(o, cells);
+        }
         return o.toString();
+    }
+
+    private static void row(StringBuilder o, String... cells) {
+        if (cells.length != CSV_COLUMNS.size()) {
+            throw new IllegalStateException(cells.length + " cells for " + CSV_COLUMNS.size() + " columns");
+        }
+        o.append(String.join(",", cells)).append('\n');
     }
 
     private static String num(double v) {
@@ -358,16 +397,17 @@ public final class RankReport {
     }
 
     static ObjectNode candidate(Candidate c) {
+        RankedFigures f = RankedFigures.of(c);
         ObjectNode n = JsonSupport.object();
         n.put("part", c.id());
         n.put("verdict", c.verdict().key());
-        JsonSupport.put(n, "effectiveCost", c.effectiveCost());
+        JsonSupport.put(n, "effectiveCost", f.effectiveCost());
         JsonSupport.put(n, "currency", c.currency().isEmpty() ? null : c.currency());
         JsonSupport.put(n, "worstCaseV", c.budget().worstCaseV());
         JsonSupport.put(n, "rssV", c.budget().rssV());
-        putYield(n, "yield", c.budget().yield());
-        if (c.budget().trimmed() != null && c.budget().trimmed().yield() != null) {
-            putYield(n, "trimmedYield", c.budget().trimmed().yield());
+        putYield(n, "yield", f.untrimmedYield());
+        if (f.trimmedYield() != null) {
+            putYield(n, "trimmedYield", f.trimmedYield());
         }
         JsonSupport.put(n, "limitingTerm", c.budget().limitingTerm());
         JsonSupport.put(
@@ -378,11 +418,15 @@ public final class RankReport {
                         : Figures.kindOf(c.budget().limitingTerm()).key());
         n.put("trimmed", c.trimmed());
         if (c.budget().trimmed() != null) {
-            JsonSupport.put(n, "trimmedWorstCaseV", c.budget().trimmed().worstCaseV());
-            JsonSupport.put(n, "trimmedRssV", c.budget().trimmed().rssV());
+            JsonSupport.put(n, "trimmedWorstCaseV", f.trimmedWorstCaseV());
+            JsonSupport.put(n, "trimmedRssV", f.trimmedRssV());
         }
-        JsonSupport.put(n, "errorV", c.errorV());
-        JsonSupport.put(n, "margin", c.margin());
+        JsonSupport.put(n, "errorV", f.errorV());
+        JsonSupport.put(n, "margin", f.margin());
+        // the figures the text table shows: after the trim exactly when the part is ranked with it
+        JsonSupport.put(n, "rankedWorstCaseV", f.worstCaseV());
+        JsonSupport.put(n, "rankedRssV", f.rssV());
+        putYield(n, "rankedYield", f.yield());
         n.put("restsOnEstimate", c.restsOnEstimate());
         ArrayNode est = n.putArray("estimatedTerms");
         c.estimatedTerms().forEach(t -> est.add(t.key()));

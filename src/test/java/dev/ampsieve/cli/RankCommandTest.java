@@ -150,13 +150,16 @@ class RankCommandTest {
     }
 
     @Test
-    void csvHasAHeaderOneRowPerPartAndTheCaution() {
+    void csvHasTheStageLimitAndCautionThenAHeaderAndOneRowPerPart() {
+        // the stage, limit and caution now lead as '#' comment lines (issue 11); the caution was the last line
         CliRun r = run("rank", "--stage", stage("adc-driver"), "--csv", "--top", "100");
         assertEquals(ExitCode.OK.code(), r.code(), r.toString());
         List<String> lines = r.outLines();
-        assertTrue(lines.get(0).startsWith("rank,part,verdict,"));
-        assertEquals(1 + 48 + 1, lines.size());
-        assertEquals("# " + Caution.TEXT, lines.get(lines.size() - 1));
+        assertTrue(lines.get(0).startsWith("# stage: " + stage("adc-driver") + ": "), lines.get(0));
+        assertTrue(lines.get(1).startsWith("# limit: "), lines.get(1));
+        assertEquals("# " + Caution.TEXT, lines.get(2));
+        assertTrue(lines.get(3).startsWith("rank,part,verdict,"));
+        assertEquals(3 + 1 + 48, lines.size());
     }
 
     @Test

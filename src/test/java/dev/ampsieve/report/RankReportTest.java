@@ -96,13 +96,21 @@ class RankReportTest {
     }
 
     @Test
-    void csvHasOneRowPerPartAndTheCautionLast() {
+    void csvHasTheStageAndCautionFirstThenOneRowPerPart() {
+        // the layout changed: stage, limit and caution now lead as '#' comment lines (issue 11), the
+        // estimate flag sits after the verdict and the figures as ranked have columns of their own
         List<String> lines = RankReport.csv(ranking(), 15).lines().toList();
-        assertTrue(lines.get(0).startsWith("rank,part,verdict,effective_cost,currency,error_v,margin,"));
-        assertEquals(1 + 3 + 1 + 1, lines.size());
-        assertTrue(lines.get(1).startsWith("1,TRIMMED,fits-after-trim,0.900000,USD,0.000460000,"), lines.get(1));
-        assertTrue(lines.get(4).startsWith(",HIGHV,rejected,0.200000,USD,"), lines.get(4));
-        assertEquals("# " + Caution.TEXT, lines.get(5));
+        assertTrue(lines.get(0).startsWith("# stage: "), lines.get(0));
+        assertTrue(lines.get(1).startsWith("# limit: "), lines.get(1));
+        assertEquals("# " + Caution.TEXT, lines.get(2));
+        assertTrue(lines.get(3)
+                .startsWith("rank,part,verdict,rests_on_estimate,effective_cost,currency,trimmed,error_v,"
+                        + "margin,ranked_worst_case_v,"));
+        assertEquals(3 + 1 + 3 + 1, lines.size());
+        assertTrue(
+                lines.get(4).startsWith("1,TRIMMED,fits-after-trim,false,0.900000,USD,true,0.000460000,"),
+                lines.get(4));
+        assertTrue(lines.get(7).startsWith(",HIGHV,rejected,,0.200000,USD,"), lines.get(7));
     }
 
     @Test
