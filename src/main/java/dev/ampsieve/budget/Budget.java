@@ -14,7 +14,8 @@ import java.util.List;
  * @param limitV       the stage limit, output volts
  * @param trimmed      totals after the stage's trim method (one-point unless the stage names another method)
  * @param limitingTerm key of the largest term (for no-fit: the one that most needs to shrink)
- * @param warnings     estimated or missing catalog values, chopper caveats and similar
+ * @param assumptions  what stood in for missing or typical-only catalog and stage values, and the stage's
+ *                     caveats (chopper, calibration, noise band), in the order found; the report words them
  */
 public record Budget(
         Part part,
@@ -30,12 +31,12 @@ public record Budget(
         Verdict verdict,
         String limitingTerm,
         List<ConstraintResult> constraints,
-        List<String> warnings) {
+        List<Assumption> assumptions) {
 
     public Budget {
         terms = List.copyOf(terms);
         constraints = List.copyOf(constraints);
-        warnings = List.copyOf(warnings);
+        assumptions = List.copyOf(assumptions);
     }
 
     /** All hard constraints met. */

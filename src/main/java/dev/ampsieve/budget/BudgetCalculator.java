@@ -4,8 +4,6 @@ import dev.ampsieve.catalog.Part;
 import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.Trim;
-import dev.ampsieve.units.Dimension;
-import dev.ampsieve.units.Units;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.LinkedHashSet;
@@ -61,7 +59,7 @@ public final class BudgetCalculator {
 
     public static Budget compute(Stage stage, Part part) {
         PartValues v = PartValues.of(part, stage);
-        Set<String> warnings = new LinkedHashSet<>(v.warnings());
+        Set<Assumption> warnings = new LinkedHashSet<>(v.assumptions());
         List<TermResult> terms = new ArrayList<>();
         double wc = 0;
         double sumSq = 0;
@@ -81,7 +79,7 @@ public final class BudgetCalculator {
         double limit = stage.limitVolts();
         stageWarnings(stage, part, warnings, limit);
 
-        List<String> cw = new ArrayList<>();
+        List<Assumption> cw = new ArrayList<>();
         List<ConstraintResult> constraints = new ArrayList<>(Constraints.check(stage, part, dcOnly, cw));
         constraints.addAll(SelfHeatingTerm.dieLimit(stage, v));
         warnings.addAll(cw);
@@ -392,74 +390,49 @@ public final class BudgetCalculator {
         }
     }
 
-    private static void stageWarnings(Stage stage, Part part, Set<String> w, double limit) {
+    private static void stageWarnings(Stage stage, Part part, Set<Assumption> w, double limit) {
         if (Double.isNaN(limit)) {
-            w.add("limit: a percentage of full scale needs full-scale-output; nothing can fit without a limit");
+            w.add(new Assumption.Note("limit", Assumption.Rule.LIMIT_NEEDS_FULL_SCALE));
         }
         if (stage.fullScaleOutput() == null) {
-            w.add("full-scale-output: not given; gain errors (open-loop gain, bandwidth, resistors) are not counted");
+            w.add(new Assumption.Note("full-scale-output", Assumption.Rule.GAIN_TERMS_NOT_COUNTED));
         }
         double loop = part.gbw() / stage.noiseGain();
         if (stage.filterOrder() == null && loop > stage.bandHigh()) {
             // the conservative default (NoiseModel.noiseBandEdge): say so, since a filter the user forgot to name costs
             // noise
-            w.add("band.filter-order: not given; noise is integrated to pi/2 x the closed-loop bandwidth "
-                    + Units.format(loop, Dimension.FREQUENCY) + " = "
-                    + Units.format(NoiseModel.SINGLE_POLE_ENBW * loop, Dimension.FREQUENCY)
-                    + ", as if nothing after the amplifier limited it (a first-order filter at band.high would end it at "
-                    + Units.format(NoiseModel.SINGLE_POLE_ENBW * stage.bandHigh(), Dimension.FREQUENCY)
-                    + "); give the filter's order if one follows");
+            w.add(new Assumption.NoiseBand(
+                    loop, NoiseModel.SINGLE_POLE_ENBW * loop, NoiseModel.SINGLE_POLE_ENBW * stage.bandHigh()));
         }
         Trim trim = trimOf(stage);
         if (trim.allowed()
                 && trim.method() == Trim.Method.TWO_TEMPERATURE
                 && (Double.isNaN(trim.cold()) || Double.isNaN(trim.hot()))) {
-            w.add("trim: two-temperature calibration at " + Units.format(trim.coldIn(stage), Dimension.TEMPERATURE)
-                    + " and "
-                    + Units.format(trim.hotIn(stage), Dimension.TEMPERATURE)
-                    + (Double.isNaN(trim.cold()) && Double.isNaN(trim.hot())
-                            ? ", the range ends (trim.cold and trim.hot not given)"
-                            : " (a calibration temperature not given is the range end)"));
+            w.add(new Assumption.CalibrationPoints(
+                    trim.coldIn(stage), trim.hotIn(stage), !Double.isNaN(trim.cold()), !Double.isNaN(trim.hot())));
         }
         if (trim.allowed() && trim.method() == Trim.Method.TWO_TEMPERATURE) {
             // the engine's per-unit offset is a straight line in temperature; a datasheet's drift figure
             // (a box over the range) does not promise one, and no catalog holds the curvature
-            w.add("trim: a two-temperature calibration removes the offset's straight-line drift only; the offset's"
-                    + " curvature over temperature is in no datasheet and not counted: confirm the residual on a few"
-                    + " units at a temperature between the calibration points");
+            w.add(new Assumption.Note("trim", Assumption.Rule.STRAIGHT_LINE_CALIBRATION));
         }
         if (stage.acCoupled()) {
-            w.add("ac-coupled: offset, drift, bias and aging count only toward output headroom, not the error");
+            w.add(new Assumption.Note("ac-coupled", Assumption.Rule.AC_COUPLED));
         }
         if (part.selfCorrecting()) {
-            w.add(part.architecture().key() + ": expect bias-current spikes from the switches (times the source "
-                    + "resistance they become offset), higher current noise than plain CMOS, and ripple near the "
-                    + "chopping frequency");
+            w.add(new Assumption.Chopper("architecture", Assumption.Rule.CHOPPER_CAVEATS, part.architecture()));
             Double fc = part.choppingFrequency();
             if (fc == null) {
-                w.add(part.architecture().key()
-                        + ": chopping frequency not given; ripple cannot be checked against the band");
+                w.add(new Assumption.Chopper(
+                        "chopping-frequency", Assumption.Rule.CHOPPING_FREQUENCY_UNKNOWN, part.architecture()));
             } else if (stage.bandHigh() > fc / CHOP_MARGIN) {
-                w.add(part.architecture().key() + ": band edge " + Units.format(stage.bandHigh(), Dimension.FREQUENCY)
-                        + (stage.bandHigh() >= fc
-                                ? " is above the chopping frequency "
-                                : " is not far below the chopping frequency ")
-                        + Units.format(fc, Dimension.FREQUENCY)
-                        + " (keep fH under a tenth of it): expect ripple and intermodulation in band");
+                w.add(new Assumption.ChoppingNearBand(part.architecture(), stage.bandHigh(), fc));
             }
             if (fc != null && stage.sampleRate() != null) {
                 for (ChoppingRippleTerm.Alias a :
                         ChoppingRippleTerm.aliases(fc, stage.sampleRate(), stage.bandHigh())) {
-                    w.add("sample-rate: "
-                            + (a.harmonic() == 1
-                                    ? "the chopping frequency "
-                                    : "harmonic " + a.harmonic() + " of the chopping frequency, ")
-                            + Units.format(a.frequency(), Dimension.FREQUENCY) + ", sampled at "
-                            + Units.format(stage.sampleRate(), Dimension.FREQUENCY) + " aliases to "
-                            + Units.format(a.alias(), Dimension.FREQUENCY) + ", inside the band (up to "
-                            + Units.format(stage.bandHigh(), Dimension.FREQUENCY)
-                            + "): filter it out before the converter,"
-                            + " or choose a sample rate whose multiples keep away from it");
+                    w.add(new Assumption.ChoppingAlias(
+                            a.harmonic(), a.frequency(), stage.sampleRate(), a.alias(), stage.bandHigh()));
                 }
             }
         }

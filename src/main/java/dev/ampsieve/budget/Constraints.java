@@ -1,5 +1,6 @@
 package dev.ampsieve.budget;
 
+import dev.ampsieve.catalog.CatalogKeys;
 import dev.ampsieve.catalog.Headroom;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.catalog.Range;
@@ -34,7 +35,7 @@ public final class Constraints {
      *                    (0 for DC-coupled stages, whose error is inside the limit)
      * @param warnings    receives a line for each constraint that could not be checked
      */
-    public static List<ConstraintResult> check(Stage s, Part p, double dcHeadroomV, List<String> warnings) {
+    public static List<ConstraintResult> check(Stage s, Part p, double dcHeadroomV, List<Assumption> warnings) {
         List<ConstraintResult> out = new ArrayList<>();
         out.add(supply(s, p, warnings));
         out.add(temperature(s, p, warnings));
@@ -175,12 +176,12 @@ public final class Constraints {
                         + "; check these catalog and stage values for a wrong prefix or exponent");
     }
 
-    static ConstraintResult supply(Stage s, Part p, List<String> w) {
+    static ConstraintResult supply(Stage s, Part p, List<Assumption> w) {
         if (s.supplyVoltage() == null) {
             return new ConstraintResult(SUPPLY, true, "not checked: the stage gives no supply voltage");
         }
         if (p.supply() == null) {
-            w.add("supply: the part has no supply range; not checked");
+            w.add(new Assumption.Note("supply", Assumption.Rule.NOT_CHECKED));
             return new ConstraintResult(SUPPLY, true, "not checked: no supply range in the catalog");
         }
         double lo = s.supplyVoltage() - s.supplyVariation();
@@ -188,9 +189,9 @@ public final class Constraints {
         return range(SUPPLY, lo, hi, p.supply(), Dimension.VOLTAGE, "supply", "rated");
     }
 
-    static ConstraintResult temperature(Stage s, Part p, List<String> w) {
+    static ConstraintResult temperature(Stage s, Part p, List<Assumption> w) {
         if (p.temperature() == null) {
-            w.add("temperature: the part has no rated range; not checked");
+            w.add(new Assumption.Note("temperature", Assumption.Rule.NOT_CHECKED));
             return new ConstraintResult(TEMPERATURE, true, "not checked: no rated range in the catalog");
         }
         return range(TEMPERATURE, s.tMin(), s.tMax(), p.temperature(), Dimension.TEMPERATURE, "ambient", "rated");
@@ -243,7 +244,7 @@ public final class Constraints {
         return new Range(mid - s.fullScaleOutput(), mid + s.fullScaleOutput());
     }
 
-    static ConstraintResult commonMode(Stage s, Part p, List<String> w) {
+    static ConstraintResult commonMode(Stage s, Part p, List<Assumption> w) {
         ConstraintResult r =
                 headroom(COMMON_MODE, "input common mode", neededCommonMode(s), 0.0, s, p.inputHeadroom(), w);
         return switch (s.topology()) {
@@ -261,12 +262,12 @@ public final class Constraints {
         };
     }
 
-    static ConstraintResult outputSwing(Stage s, Part p, double dc, List<String> w) {
+    static ConstraintResult outputSwing(Stage s, Part p, double dc, List<Assumption> w) {
         return headroom(OUTPUT_SWING, "output", neededOutput(s), dc, s, p.outputHeadroom(), w);
     }
 
     private static ConstraintResult headroom(
-            String name, String what, Range need, double widen, Stage s, Headroom h, List<String> w) {
+            String name, String what, Range need, double widen, Stage s, Headroom h, List<Assumption> w) {
         if (need == null) {
             return new ConstraintResult(
                     name,
@@ -280,8 +281,10 @@ public final class Constraints {
         boolean assumed = h == null;
         if (assumed) {
             h = new Headroom(Assumed.HEADROOM_V, Assumed.HEADROOM_V);
-            w.add(name + ": the part gives no " + what + " headroom; "
-                    + Units.format(Assumed.HEADROOM_V, Dimension.VOLTAGE) + " from each rail is assumed");
+            w.add(new Assumption.Headroom(
+                    name.equals(OUTPUT_SWING) ? CatalogKeys.OUTPUT_HEADROOM : CatalogKeys.INPUT_HEADROOM,
+                    name,
+                    Assumed.HEADROOM_V));
         }
         // the lowest supply of the stage leaves the least room at the top
         double vLow = s.supplyVoltage() - s.supplyVariation();
@@ -323,13 +326,13 @@ public final class Constraints {
         return s.fullScaleOutput() == null ? Double.NaN : 2 * Math.PI * s.bandHigh() * s.fullScaleOutput();
     }
 
-    static ConstraintResult slew(Stage s, Part p, List<String> w) {
+    static ConstraintResult slew(Stage s, Part p, List<Assumption> w) {
         double need = neededSlew(s);
         if (Double.isNaN(need)) {
             return new ConstraintResult(SLEW, true, "not checked: the stage gives no full-scale output");
         }
         if (p.slew() == null) {
-            w.add("slew: not given; slew rate not checked (needs " + Units.format(need, Dimension.SLEW_RATE) + ")");
+            w.add(new Assumption.SlewNotChecked(need));
             return new ConstraintResult(SLEW, true, "not checked: no slew rate in the catalog");
         }
         boolean ok = p.slew() >= need;
@@ -339,12 +342,12 @@ public final class Constraints {
         return new ConstraintResult(SLEW, ok, d);
     }
 
-    static ConstraintResult price(Stage s, Part p, List<String> w) {
+    static ConstraintResult price(Stage s, Part p, List<Assumption> w) {
         if (s.maxPrice() == null) {
             return new ConstraintResult(PRICE, true, "no price ceiling");
         }
         if (p.price() == null) {
-            w.add("price: not given; the price ceiling is not checked");
+            w.add(new Assumption.Note("price", Assumption.Rule.NOT_CHECKED));
             return new ConstraintResult(PRICE, true, "not checked: no price in the catalog");
         }
         double unit = p.unitPrice(s.quantity());

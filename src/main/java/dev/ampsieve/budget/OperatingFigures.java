@@ -6,13 +6,11 @@ import dev.ampsieve.catalog.Part;
 import dev.ampsieve.catalog.Range;
 import dev.ampsieve.catalog.TestConditions;
 import dev.ampsieve.stage.Stage;
-import dev.ampsieve.units.Dimension;
-import dev.ampsieve.units.Units;
 import java.util.List;
 
 /**
  * The catalog figures of the operating-point terms after the missing-value rules, resolved once
- * with {@link PartValues} (each substitution warned there, only when the stage makes it count).
+ * with {@link PartValues} (each substitution listed there as an {@link Assumption}, only when the stage makes it count).
  * Volts above the negative rail for common modes; SI units.
  *
  * @param testSupply      total supply of the datasheet's 25 °C table, V: the catalog's, else
@@ -40,7 +38,7 @@ public record OperatingFigures(
         Figure quiescentCurrent,
         Figure choppingRipple) {
 
-    static OperatingFigures of(Part part, Stage stage, Figure vos, List<String> w) {
+    static OperatingFigures of(Part part, Stage stage, Figure vos, List<Assumption> w) {
         Double vs = stage.supplyVoltage();
         TestConditions tc = part.testConditions();
         Figure testSupply;
@@ -52,10 +50,7 @@ public record OperatingFigures(
             Range r = part.supply();
             double far = Math.abs(r.max() - vs) >= Math.abs(vs - r.min()) ? r.max() : r.min();
             testSupply = Figure.of(far, Basis.ASSUMED);
-            w.add("test-conditions.supply: not given; the datasheet's table is taken at "
-                    + Units.format(far, Dimension.VOLTAGE)
-                    + ", the end of the rated supply farthest from the stage's " + Units.format(vs, Dimension.VOLTAGE)
-                    + " (conservative): enter the supply of the datasheet's 25 °C table");
+            w.add(new Assumption.TestSupply(far, vs));
         }
         Figure testCm;
         if (tc != null && tc.commonMode() != null) {
@@ -66,10 +61,7 @@ public record OperatingFigures(
             double fromMid = OperatingPointTerm.commonModeFromMid(stage);
             double rail = fromMid >= 0 ? 0.0 : testSupply.bound(); // the rail on the other side of mid-supply
             testCm = Figure.of(rail, Basis.ASSUMED);
-            w.add("test-conditions.common-mode: not given; the datasheet's table is taken at the "
-                    + (rail == 0 ? "negative" : "positive")
-                    + " rail of its supply, the farthest from the stage's common mode"
-                    + " (conservative): enter the common mode of the datasheet's 25 °C table");
+            w.add(new Assumption.TestCommonMode(rail, testSupply.bound()));
         }
 
         InputCrossover x = part.inputCrossover();
@@ -85,11 +77,7 @@ public record OperatingFigures(
             far = Assumed.CROSSOVER_FARTHEST;
             step = Figure.of(2 * vos.bound(), Basis.ASSUMED);
             if (vs != null && InputCrossoverTerm.crossed(stage, near, far)) {
-                w.add("input-crossover: not given for a rail-to-rail input; the stage's common mode reaches "
-                        + Units.format(near, Dimension.VOLTAGE) + " to " + Units.format(far, Dimension.VOLTAGE)
-                        + " below the positive rail, where such inputs usually hand over between their pairs, so a step of"
-                        + " 2 x vos = " + Units.format(step.bound(), Dimension.VOLTAGE) + " is assumed (conservative):"
-                        + " enter the datasheet's crossover and offset step, or 0 V for an input without one");
+                w.add(new Assumption.Crossover(near, far, step.bound()));
             }
         }
 
@@ -101,13 +89,11 @@ public record OperatingFigures(
                 : Figure.of(Assumed.QUIESCENT_CURRENT, Basis.ASSUMED);
         if (stage.loadResistance() != null && vs != null) {
             if (theta.basis() == Basis.ASSUMED) {
-                w.add("theta-ja: not given; " + Units.format(Assumed.THETA_JA, Dimension.THERMAL_RESISTANCE)
-                        + " is assumed for the die's self-heating (a small package on a small board, common practice,"
-                        + " conservative): enter the package's figure");
+                w.add(new Assumption.Default("theta-ja", Assumption.Rule.DEFAULT_VALUE, Assumed.THETA_JA));
             }
             if (iq.basis() == Basis.ASSUMED) {
-                w.add("quiescent-current: not given; " + Units.format(Assumed.QUIESCENT_CURRENT, Dimension.CURRENT)
-                        + " per amplifier is assumed for the die's self-heating (common practice, conservative)");
+                w.add(new Assumption.Default(
+                        "quiescent-current", Assumption.Rule.DEFAULT_VALUE, Assumed.QUIESCENT_CURRENT));
             }
         }
 
@@ -118,8 +104,7 @@ public record OperatingFigures(
             ripple = Figure.of(part.choppingRipple(), Basis.GUARANTEED);
         } else {
             ripple = Figure.of(Assumed.CHOPPING_RIPPLE, Basis.ASSUMED);
-            w.add("chopping-ripple: not given; " + Units.format(Assumed.CHOPPING_RIPPLE, Dimension.VOLTAGE)
-                    + " input-referred is assumed (common practice, conservative): enter the datasheet's ripple");
+            w.add(new Assumption.Default("chopping-ripple", Assumption.Rule.DEFAULT_VALUE, Assumed.CHOPPING_RIPPLE));
         }
         return new OperatingFigures(testSupply, testCm, near, far, step, theta, iq, ripple);
     }

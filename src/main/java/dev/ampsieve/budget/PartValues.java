@@ -7,16 +7,14 @@ import dev.ampsieve.catalog.Noise;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.catalog.Spread;
 import dev.ampsieve.stage.Stage;
-import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.PhysicalConstants;
-import dev.ampsieve.units.Units;
 import java.util.ArrayList;
 import java.util.List;
 
 /**
  * One part's catalog values after the missing-value rules of error-model.md, resolved once
  * so the error terms and the Monte Carlo use the same numbers. Every substitution is
- * listed in {@link #warnings()}. None makes a part look better than its datasheet allows:
+ * listed in {@link #assumptions()}. None makes a part look better than its datasheet allows:
  * a missing figure takes the conservative estimate of {@link Assumed} (flagged estimated), a
  * figure given only as typical enters as k x typical (k = the stage's max-to-sigma ratio;
  * flagged typical-only) with the typical value as one sigma.
@@ -68,10 +66,10 @@ public record PartValues(
         Figure aging,
         Figure inputCapacitance,
         OperatingFigures operating,
-        List<String> warnings) {
+        List<Assumption> assumptions) {
 
     public PartValues {
-        warnings = List.copyOf(warnings);
+        assumptions = List.copyOf(assumptions);
     }
 
     /**
@@ -79,11 +77,10 @@ public record PartValues(
      * ratio, the service life, and decides which missing values matter enough to warn about).
      */
     public static PartValues of(Part part, Stage stage) {
-        List<String> w = new ArrayList<>();
+        List<Assumption> w = new ArrayList<>();
         double k = stage.maxToSigma();
         InputType input = inputOf(part);
         boolean sc = part.selfCorrecting();
-        String kx = Units.format(k, Dimension.NUMBER) + " x ";
 
         Spread vosS = orNone(part.vos());
         double vosOt = vosS.maxOverTemp() == null ? Double.NaN : vosS.maxOverTemp();
@@ -92,14 +89,13 @@ public record PartValues(
             vos = Figure.guaranteed(vosS.max(), vosS.typ());
         } else if (vosS.typ() != null) {
             vos = typicalOnly(vosS.typ(), k);
-            w.add("vos: no guaranteed maximum; " + kx + "typical = " + Units.format(vos.bound(), Dimension.VOLTAGE)
-                    + " is used as the limit (max-to-sigma), the typical value as one sigma");
+            w.add(new Assumption.TypicalAsLimit("vos", vosS.typ(), k, vos.bound()));
         } else if (!Double.isNaN(vosOt)) {
             vos = Figure.of(vosOt, Basis.GUARANTEED);
-            w.add("vos: only the maximum over temperature is given; it is used at 25 °C too");
+            w.add(new Assumption.Note("vos", Assumption.Rule.OVER_TEMPERATURE_AT_25));
         } else {
             vos = Figure.of(0.0, Basis.MISSING);
-            w.add("vos: not given; offset is not counted (enter the datasheet maximum)");
+            w.add(new Assumption.Note("vos", Assumption.Rule.OFFSET_NOT_COUNTED));
         }
 
         Spread drS = orNone(part.vosDrift());
@@ -108,9 +104,7 @@ public record PartValues(
             drift = Figure.guaranteed(drS.max(), drS.typ());
         } else if (drS.typ() != null) {
             drift = typicalOnly(drS.typ(), k);
-            w.add("vos-drift: no guaranteed maximum; " + kx + "typical = "
-                    + Units.format(drift.bound(), Dimension.VOLTAGE_DRIFT)
-                    + " is used as the limit (max-to-sigma), the typical value as one sigma");
+            w.add(new Assumption.TypicalAsLimit("vos-drift", drS.typ(), k, drift.bound()));
         } else if (!Double.isNaN(vosOt) && vos.basis() == Basis.GUARANTEED && vosS.max() != null) {
             // the offset over temperature bounds offset plus drift: the drift term takes what is left
             // (not when it is the only offset figure: nothing is left, and a trim would then seem to
@@ -118,13 +112,7 @@ public record PartValues(
             drift = Figure.of(Double.POSITIVE_INFINITY, Basis.GUARANTEED);
         } else {
             drift = Figure.of(estimatedDrift(vos.bound()), Basis.ESTIMATED);
-            String rule = "vos-drift: not given; estimated as vos / T = "
-                    + Units.format(drift.bound(), Dimension.VOLTAGE_DRIFT) + " (bipolar pair rule, T = 298.15 K)";
-            if (input != InputType.BIPOLAR) {
-                rule += "; this rule holds for bipolar pairs and may understate a " + input.key()
-                        + " input's drift: enter the datasheet figure";
-            }
-            w.add(rule);
+            w.add(new Assumption.DriftFromOffset(vos.bound(), drift.bound(), input));
         }
 
         Spread ibS = orNone(part.ib());
@@ -133,15 +121,13 @@ public record PartValues(
             ib = Figure.guaranteed(ibS.max(), ibS.typ());
         } else if (ibS.typ() != null) {
             ib = typicalOnly(ibS.typ(), k);
-            w.add("ib: no guaranteed maximum; " + kx + "typical = " + Units.format(ib.bound(), Dimension.CURRENT)
-                    + " is used as the limit (max-to-sigma)");
+            w.add(new Assumption.TypicalAsLimit("ib", ibS.typ(), k, ib.bound()));
         } else if (ibS.maxOverTemp() != null) {
             ib = Figure.of(ibS.maxOverTemp(), Basis.GUARANTEED);
-            w.add("ib: only the maximum over temperature is given; it is used at 25 °C too");
+            w.add(new Assumption.Note("ib", Assumption.Rule.OVER_TEMPERATURE_AT_25));
         } else {
             ib = Figure.of(Assumed.ib(input, sc), Basis.ESTIMATED);
-            w.add("ib: not given; estimated as " + Units.format(ib.bound(), Dimension.CURRENT) + " at 25 °C for a "
-                    + kind(input, sc) + " input (common practice, conservative): enter the datasheet maximum");
+            w.add(new Assumption.ByInputKind("ib", ib.bound(), input, sc));
         }
         Spread iosS = orNone(part.ios());
         Figure ios;
@@ -149,15 +135,14 @@ public record PartValues(
             ios = Figure.guaranteed(iosS.max(), iosS.typ());
         } else if (iosS.typ() != null) {
             ios = typicalOnly(iosS.typ(), k);
-            w.add("ios: no guaranteed maximum; " + kx + "typical = " + Units.format(ios.bound(), Dimension.CURRENT)
-                    + " is used as the limit (max-to-sigma), the typical value as one sigma");
+            w.add(new Assumption.TypicalAsLimit("ios", iosS.typ(), k, ios.bound()));
         } else if (iosS.maxOverTemp() != null) {
             ios = Figure.of(iosS.maxOverTemp(), Basis.GUARANTEED);
-            w.add("ios: only the maximum over temperature is given; it is used at 25 °C too");
+            w.add(new Assumption.Note("ios", Assumption.Rule.OVER_TEMPERATURE_AT_25));
         } else {
             // bias-cancelled and FET inputs have IOS about equal to IB: the pessimistic reading
             ios = Figure.of(ib.bound(), Basis.ASSUMED);
-            w.add("ios: not given; assumed equal to ib (" + Units.format(ib.bound(), Dimension.CURRENT) + ")");
+            w.add(new Assumption.IosFromIb(ib.bound()));
         }
         double ibOt = ibS.maxOverTemp() != null ? ibS.maxOverTemp() : Double.NaN;
         // an assumed IOS = IB follows IB with temperature
@@ -172,7 +157,7 @@ public record PartValues(
 
         double gbw = part.gbw() > 0 && Double.isFinite(part.gbw()) ? part.gbw() : Double.NaN;
         if (Double.isNaN(gbw)) {
-            w.add("gbw: not given; the bandwidth term is not counted and noise is integrated to 1.57 x fH");
+            w.add(new Assumption.Note("gbw", Assumption.Rule.BANDWIDTH_NOT_COUNTED));
         }
 
         Noise n = part.noise() == null ? Noise.NONE : part.noise();
@@ -183,8 +168,7 @@ public record PartValues(
         } else {
             en = Assumed.en(input, sc);
             noiseEst = true;
-            w.add("noise.en: not given; estimated as " + Units.format(en, Dimension.VOLTAGE_DENSITY) + " for a "
-                    + kind(input, sc) + " input (common practice, conservative): enter the datasheet figure");
+            w.add(new Assumption.ByInputKind("noise.en", en, input, sc));
         }
         double enC;
         if (n.enCorner() != null) {
@@ -193,8 +177,7 @@ public record PartValues(
             enC = Assumed.enCorner(input, sc);
             if (enC > 0) {
                 noiseEst = true;
-                w.add("noise.en-corner: not given; a 1/f corner of " + Units.format(enC, Dimension.FREQUENCY)
-                        + " is assumed for a " + kind(input, sc) + " input (common practice, conservative)");
+                w.add(new Assumption.ByInputKind("noise.en-corner", enC, input, sc));
             }
         }
         double in;
@@ -203,10 +186,12 @@ public record PartValues(
         } else {
             in = Assumed.in(input, sc, ib.bound());
             noiseEst = true;
-            w.add("noise.in: not given; estimated as " + Units.format(in, Dimension.CURRENT_DENSITY)
-                    + (input == InputType.BIPOLAR || sc
-                            ? " (at least 1 pA/√Hz, common practice)"
-                            : " (shot noise of ib, √(2 q ib))"));
+            w.add(new Assumption.CurrentNoise(
+                    input == InputType.BIPOLAR || sc
+                            ? Assumption.Rule.CURRENT_NOISE_FLOOR
+                            : Assumption.Rule.SHOT_NOISE_OF_IB,
+                    in,
+                    ib.bound()));
         }
         double inC;
         if (n.inCorner() != null) {
@@ -215,8 +200,7 @@ public record PartValues(
             inC = Assumed.inCorner(input, sc);
             if (inC > 0) {
                 noiseEst = true;
-                w.add("noise.in-corner: not given; a 1/f corner of " + Units.format(inC, Dimension.FREQUENCY)
-                        + " is assumed for a bipolar input (common practice, conservative)");
+                w.add(new Assumption.ByInputKind("noise.in-corner", inC, input, sc));
             }
         }
 
@@ -229,29 +213,17 @@ public record PartValues(
             cin = Figure.of(Assumed.INPUT_CAPACITANCE, Basis.ASSUMED);
             if (stage.topology() == dev.ampsieve.stage.Topology.TRANSIMPEDANCE) {
                 // only a transimpedance stage puts the input's capacitance in its noise gain
-                w.add("input-capacitance: not given; " + Units.format(Assumed.INPUT_CAPACITANCE, Dimension.CAPACITANCE)
-                        + " is assumed (common practice, conservative): it adds to the source capacitance in the noise"
-                        + " gain and the stability check; enter the datasheet's common-mode plus differential figure");
+                w.add(new Assumption.Default(
+                        "input-capacitance", Assumption.Rule.DEFAULT_VALUE, Assumed.INPUT_CAPACITANCE));
             }
         }
 
         if (Double.isNaN(ibOt) && exponential(part) && stage.tMax() > Stage.T_REF) {
             double f = Math.pow(2.0, (stage.tMax() - Stage.T_REF) / 10.0);
-            w.add("ib: no maximum over temperature; the 25 °C maximum is doubled every 10 °C above 25 °C "
-                    + "(junction-leakage rule, common practice), " + Units.format(ib.bound() * f, Dimension.CURRENT)
-                    + " at " + Units.format(stage.tMax(), Dimension.TEMPERATURE)
-                    + (sc
-                            ? "; pessimistic for a chopper or auto-zero part, whose bias current is mostly charge"
-                                    + " injection: enter the datasheet's over-temperature maximum"
-                            : "; enter the datasheet's over-temperature maximum"));
+            w.add(new Assumption.IbDoubling(ib.bound(), f, ib.bound() * f, stage.tMax(), sc));
         }
         if (stage.trim() != null && stage.trim().allowed() && stage.deltaT() > 0 && Double.isNaN(ibOt)) {
-            w.add("ib: no maximum over temperature; what a trim at 25 °C leaves of the bias currents is estimated"
-                    + " from the 25 °C maxima" + (exponential(part) ? " and the doubling rule" : "")
-                    + " (ib may change by "
-                    + (inputOf(part) == InputType.BIPOLAR && !sc ? "up to its larger end" : "the sum of both ends")
-                    + ", ios by the sum of both ends as it can change sign):"
-                    + " enter the datasheet's over-temperature maxima");
+            w.add(new Assumption.TrimBiasResidual(exponential(part), inputOf(part) == InputType.BIPOLAR && !sc));
         }
         OperatingFigures operating = OperatingFigures.of(part, stage, vos, w);
         return new PartValues(
@@ -261,10 +233,6 @@ public record PartValues(
 
     private static InputType inputOf(Part part) {
         return part.input() == null ? InputType.BIPOLAR : part.input();
-    }
-
-    private static String kind(InputType input, boolean selfCorrecting) {
-        return selfCorrecting ? "zero-drift (" + input.key() + ")" : input.key();
     }
 
     /** A typical-only figure: k x typ as the bound, typ as one sigma (error-model.md "Missing and typical-only figures"). */
@@ -277,16 +245,14 @@ public record PartValues(
      * typical) scaled by √(life / per) as one sigma, k times it as the bound; without a figure the
      * {@link Assumed} estimate, scaled the same way, as the bound.
      */
-    private static Figure aging(LongTermDrift d, double life, InputType input, boolean sc, double k, List<String> w) {
+    private static Figure aging(
+            LongTermDrift d, double life, InputType input, boolean sc, double k, List<Assumption> w) {
         if (life <= 0) {
             return Figure.of(0.0, Basis.GUARANTEED);
         }
         if (d == null || d.per() <= 0) {
             double est = Assumed.agingPer1000h(input, sc) * Math.sqrt(life / Assumed.THOUSAND_HOURS);
-            w.add("long-term-drift: not given; estimated as "
-                    + Units.format(Assumed.agingPer1000h(input, sc), Dimension.VOLTAGE)
-                    + " per √(1000 h) for a " + kind(input, sc) + " part (common practice, conservative), "
-                    + Units.format(est, Dimension.VOLTAGE) + " over the service life");
+            w.add(new Assumption.Aging(Assumed.agingPer1000h(input, sc), est, input, sc));
             return Figure.of(est, Basis.ESTIMATED);
         }
         double typ = d.value() * Math.sqrt(life / d.per());
@@ -423,19 +389,17 @@ public record PartValues(
      * A dB minimum: given, typical only (then 20 log10(k) dB below the typical, so the error it
      * causes is k times the typical error), or the assumed default.
      */
-    private static Figure rejection(String name, MinTyp m, double assumed, double k, List<String> w) {
+    private static Figure rejection(String name, MinTyp m, double assumed, double k, List<Assumption> w) {
         MinTyp v = m == null ? MinTyp.NONE : m;
         if (v.min() != null) {
             return Figure.guaranteed(v.min(), v.typ());
         }
         if (v.typ() != null) {
             Figure f = new Figure(v.typ() - Decibels.of(k), v.typ(), Basis.TYPICAL_ONLY);
-            w.add(name + ": no guaranteed minimum; the typical " + Units.format(v.typ(), Dimension.DECIBEL)
-                    + " less 20 log10(" + Units.format(k, Dimension.NUMBER) + ") = "
-                    + Units.format(f.bound(), Dimension.DECIBEL, 4) + " is used (k x the typical error)");
+            w.add(new Assumption.TypicalRejection(name, v.typ(), k, f.bound()));
             return f;
         }
-        w.add(name + ": not given; a pessimistic " + Units.format(assumed, Dimension.DECIBEL) + " is assumed");
+        w.add(new Assumption.Default(name, Assumption.Rule.PESSIMISTIC_REJECTION, assumed));
         return Figure.of(assumed, Basis.ASSUMED);
     }
 

@@ -93,8 +93,7 @@ public final class BudgetJson {
             n.put("ok", c.ok());
             n.put("detail", c.detail());
         }
-        ArrayNode ws = o.putArray("warnings");
-        b.warnings().forEach(ws::add);
+        AssumptionText.put(o, b);
         o.put("caution", Caution.TEXT);
         return o;
     }

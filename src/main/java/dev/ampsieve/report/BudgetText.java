@@ -205,10 +205,10 @@ public final class BudgetText {
         if (why != null) {
             line(o, "%-10s %s", "", why);
         }
-        if (!b.warnings().isEmpty()) {
+        if (!b.assumptions().isEmpty()) {
             o.append('\n');
             line(o, "Warnings");
-            for (String w : b.warnings()) {
+            for (String w : AssumptionText.of(b)) {
                 line(o, "  - %s", w);
             }
         }

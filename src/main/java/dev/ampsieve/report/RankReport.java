@@ -180,14 +180,15 @@ public final class RankReport {
             o.append("  ").append(l).append('\n');
         }
         Candidate pick = r.advice().pick();
-        if (pick != null && !pick.budget().warnings().isEmpty()) {
+        if (pick != null && !pick.budget().assumptions().isEmpty()) {
             o.append('\n')
                     .append("Notes from the budget of ")
                     .append(pick.id())
                     .append(" (ampsieve budget ")
                     .append(pick.id())
                     .append(" shows it in full)\n");
-            pick.budget().warnings().forEach(w -> o.append("  - ").append(w).append('\n'));
+            AssumptionText.of(pick.budget())
+                    .forEach(w -> o.append("  - ").append(w).append('\n'));
         }
         o.append('\n').append(Caution.TEXT).append('\n');
         // advice, notes and reasons quote part ids and catalog text: no control character gets through
@@ -432,8 +433,7 @@ public final class RankReport {
         c.estimatedTerms().forEach(t -> est.add(t.key()));
         n.put("selfCorrecting", c.part().selfCorrecting());
         Uncounted.put(n, c.budget().notCounted());
-        ArrayNode warnings = n.putArray("warnings");
-        c.budget().warnings().forEach(warnings::add);
+        AssumptionText.put(n, c.budget());
         return n;
     }
 

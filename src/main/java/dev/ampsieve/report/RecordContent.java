@@ -359,9 +359,9 @@ final class RecordContent {
         }
         o.add(new RecordDoc.Heading(3, "Hard constraints", null));
         o.add(table(List.of("constraint", "result", "detail"), cons, false));
-        if (!b.warnings().isEmpty()) {
+        if (!b.assumptions().isEmpty()) {
             o.add(new RecordDoc.Heading(3, "Warnings: estimated, typical-only or missing values", null));
-            for (String w : b.warnings()) {
+            for (String w : AssumptionText.of(b)) {
                 o.add(new RecordDoc.Para(w, "warning"));
             }
         }

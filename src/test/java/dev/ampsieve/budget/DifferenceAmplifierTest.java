@@ -196,7 +196,7 @@ class DifferenceAmplifierTest {
         // measured
         PartFixture p = PartFixture.ideal();
         p.inHead = new dev.ampsieve.catalog.Headroom(0.7, 0.7);
-        List<String> w = new ArrayList<>();
+        List<Assumption> w = new ArrayList<>();
         ConstraintResult r =
                 Constraints.commonMode(stage(0.15, new Range(0.5, 4.5), 5.0, 0, 0, 25, 25, Trim.NONE), p.build(), w);
         assertTrue(!r.ok() && r.detail().contains("short by 18.2 mV at the low end"), r.detail());

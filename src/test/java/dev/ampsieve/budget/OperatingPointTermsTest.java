@@ -96,11 +96,13 @@ class OperatingPointTermsTest {
             TermResult t = term(b, OperatingPointTerm.KEY);
             assertEquals(9.82455532e-3, t.outputV(), 1e-11);
             assertTrue(t.estimated());
+            // 40 V (the rated end farthest from the stage's 5 V) and the negative rail (0 V), as worked above
             assertTrue(
-                    b.warnings().stream()
-                            .anyMatch(w -> w.startsWith("test-conditions.supply: not given; the datasheet's"
-                                    + " table is taken at 40.0 V")),
-                    b.warnings().toString());
+                    b.assumptions().contains(new Assumption.TestSupply(40.0, 5.0)),
+                    b.assumptions().toString());
+            assertTrue(
+                    b.assumptions().contains(new Assumption.TestCommonMode(0.0, 40.0)),
+                    b.assumptions().toString());
             // never better than any table the datasheet could state inside the rated supply
             PartFixture typed = part();
             typed.testConditions = new TestConditions(36.0, 0.0);
@@ -306,8 +308,8 @@ class OperatingPointTermsTest {
             assertTrue(term(b, SelfHeatingTerm.KEY).estimated());
             assertTrue(term(b, SelfHeatingTerm.KEY).outputV() > 60.42e-6);
             assertTrue(
-                    b.warnings().stream().anyMatch(w -> w.startsWith("theta-ja: not given; 250 °C/W is assumed")),
-                    b.warnings().toString());
+                    b.assumptions().contains(new Assumption.Default("theta-ja", Assumption.Rule.DEFAULT_VALUE, 250.0)),
+                    b.assumptions().toString());
         }
     }
 }

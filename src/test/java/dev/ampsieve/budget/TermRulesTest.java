@@ -11,6 +11,7 @@ import dev.ampsieve.catalog.Spread;
 import dev.ampsieve.fixtures.PartFixture;
 import dev.ampsieve.fixtures.StageFixture;
 import dev.ampsieve.stage.Stage;
+import java.util.List;
 import org.junit.jupiter.api.Test;
 
 /** The missing-value and temperature rules of error-model.md, term by term. */
@@ -20,8 +21,15 @@ class TermRulesTest {
         return BudgetCalculator.compute(s.build(), p.build());
     }
 
-    private static boolean warns(Budget b, String fragment) {
-        return b.warnings().stream().anyMatch(w -> w.contains(fragment));
+    /** The budget's one assumption of type {@code kind} about {@code field}. */
+    private static <T extends Assumption> T fact(Budget b, Class<T> kind, String field) {
+        List<T> found = b.assumptions().stream()
+                .filter(kind::isInstance)
+                .map(kind::cast)
+                .filter(a -> a.field().equals(field))
+                .toList();
+        assertEquals(1, found.size(), b.assumptions().toString());
+        return found.get(0);
     }
 
     @Test
@@ -92,10 +100,10 @@ class TermRulesTest {
         assertEquals(85.0, t.worstAtC(), 0.0);
         // the hot-end currents come from the doubling rule, not the catalog: marked and explained
         assertTrue(t.estimated());
-        assertTrue(
-                budget(s, p).warnings().stream()
-                        .anyMatch(w -> w.startsWith("ib: no maximum over temperature") && w.contains("64.0 pA at 85")),
-                budget(s, p).warnings().toString());
+        // 2^((85 - 25)/10) = 64 (by hand): 1 pA becomes 64 pA at 85 °C
+        assertEquals(
+                new Assumption.IbDoubling(1e-12, 64.0, 64e-12, 85.0, false),
+                fact(budget(s, p), Assumption.IbDoubling.class, "ib"));
         // with the datasheet's over-temperature maxima at the rating's upper end 85 °C the figure is the catalog's own
         p.temperature = new dev.ampsieve.catalog.Range(-40, 85);
         p.ib = new Spread(null, 1e-12, 64e-12);
@@ -152,10 +160,17 @@ class TermRulesTest {
         assertEquals(10 * 1e-3 / 298.15 * 60, d.outputV(), 1e-15);
         assertTrue(d.estimated());
         assertEquals(85.0, d.worstAtC(), 0.0);
-        assertTrue(warns(b, "estimated as vos / T"));
-        assertFalse(warns(b, "may understate"));
+        Assumption.DriftFromOffset est = fact(b, Assumption.DriftFromOffset.class, "vos-drift");
+        assertEquals(Assumption.Rule.DRIFT_FROM_OFFSET, est.rule());
+        assertEquals(1e-3, est.vos(), 0.0);
+        assertEquals(3.354e-6, est.used(), 0.0005e-6); // reference-checks §5, as above
+        assertEquals(InputType.BIPOLAR, est.input());
+        // the report adds "may understate" for any other input; the fact carries the input it holds for
         p.input = InputType.JFET;
-        assertTrue(warns(budget(s, p), "may understate"));
+        assertEquals(
+                InputType.JFET,
+                fact(budget(s, p), Assumption.DriftFromOffset.class, "vos-drift")
+                        .input());
     }
 
     @Test
@@ -165,7 +180,10 @@ class TermRulesTest {
         // a typical-only figure enters the worst case as max-to-sigma x typ (error-model.md), k = 3: 150 µV
         assertEquals(150e-6, b.term("offset").outputV(), 1e-18);
         assertTrue(b.term("offset").estimated());
-        assertTrue(warns(b, "vos: no guaranteed maximum"));
+        Assumption.TypicalAsLimit vos = fact(b, Assumption.TypicalAsLimit.class, "vos");
+        assertEquals(50e-6, vos.typical(), 0.0);
+        assertEquals(3.0, vos.factor(), 0.0);
+        assertEquals(150e-6, vos.used(), 1e-18);
     }
 
     @Test
@@ -183,8 +201,12 @@ class TermRulesTest {
         assertEquals(1e-3, b.term("psrr").outputV(), 1e-15);
         assertEquals(1.0 / (1e4 + 1), b.term("open-loop-gain").outputV(), 1e-15); // 80 dB
         assertTrue(b.term("cmrr").estimated());
-        assertTrue(warns(b, "cmrr: not given; a pessimistic 60 dB is assumed"));
-        assertTrue(warns(b, "aol: not given"));
+        // the defaults of budget/Assumed: 60 dB and 80 dB, worked above
+        assertEquals(60.0, fact(b, Assumption.Default.class, "cmrr").used(), 0.0);
+        assertEquals(
+                Assumption.Rule.PESSIMISTIC_REJECTION,
+                fact(b, Assumption.Default.class, "cmrr").rule());
+        assertEquals(80.0, fact(b, Assumption.Default.class, "aol").used(), 0.0);
         // a guaranteed value, even a poor one, is not flagged
         p.cmrr = new MinTyp(50.0, null);
         assertFalse(budget(s, p).term("cmrr").estimated());
@@ -258,7 +280,9 @@ class TermRulesTest {
         Budget b = budget(s, p);
         assertEquals(7.5e-3, b.term("bias").outputV(), 1e-15);
         assertTrue(b.term("bias").estimated());
-        assertTrue(warns(b, "ib: not given; estimated as 500 nA"), b.warnings().toString());
+        assertEquals(
+                new Assumption.ByInputKind("ib", 500e-9, InputType.BIPOLAR, false),
+                fact(b, Assumption.ByInputKind.class, "ib"));
         // CMOS: 200 pA: 10 k x 200 pA x 1.5 = 3 µV
         p.input = InputType.CMOS;
         assertEquals(3e-6, budget(s, p).term("bias").outputV(), 1e-18);
@@ -275,9 +299,12 @@ class TermRulesTest {
         Budget b = budget(s, p);
         assertEquals(2.260331e-6, b.term("noise").outputV(), 0.000001e-6);
         assertTrue(b.term("noise").estimated());
-        assertTrue(
-                warns(b, "noise.en: not given; estimated as 30.0 nV/√Hz"),
-                b.warnings().toString());
+        assertEquals(
+                new Assumption.ByInputKind("noise.en", 30e-9, InputType.BIPOLAR, false),
+                fact(b, Assumption.ByInputKind.class, "noise.en"));
+        // and its 1/f corner, 100 Hz (budget/Assumed), as worked above
+        assertEquals(
+                100.0, fact(b, Assumption.ByInputKind.class, "noise.en-corner").value(), 0.0);
     }
 
     @Test

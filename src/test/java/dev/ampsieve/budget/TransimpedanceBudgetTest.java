@@ -105,12 +105,14 @@ class TransimpedanceBudgetTest {
         f.input = InputType.JFET;
         Budget b = BudgetCalculator.compute(stage(""), f.build());
         assertTrue(b.term(NoiseTerm.KEY).estimated());
+        // 20 pF: budget/Assumed.INPUT_CAPACITANCE, common practice
         assertTrue(
-                b.warnings().stream().anyMatch(w -> w.startsWith("input-capacitance: not given; 20.0 pF is assumed")),
-                b.warnings().toString());
+                b.assumptions()
+                        .contains(new Assumption.Default("input-capacitance", Assumption.Rule.DEFAULT_VALUE, 20e-12)),
+                b.assumptions().toString());
         // a voltage-gain stage never reads it, and says nothing about it
         Budget plain = BudgetCalculator.compute(StageLoader.parse("gain: 10\nlimit: 1 mV\n", null), f.build());
-        assertTrue(plain.warnings().stream().noneMatch(w -> w.startsWith("input-capacitance")));
+        assertTrue(plain.assumptions().stream().noneMatch(a -> a.field().equals("input-capacitance")));
     }
 
     /**

@@ -68,8 +68,7 @@ class TwoTemperatureUndecidedTest {
         // the budget must say the calibration's benefit rests on a straight line
         Budget b = BudgetCalculator.compute(stage(9.5e-6, 0.80).build(), PART.build());
         assertTrue(
-                b.warnings().stream()
-                        .anyMatch(w -> w.contains("curvature over temperature is in no datasheet and not counted")),
-                () -> b.warnings().toString());
+                b.assumptions().contains(new Assumption.Note("trim", Assumption.Rule.STRAIGHT_LINE_CALIBRATION)),
+                () -> b.assumptions().toString());
     }
 }
