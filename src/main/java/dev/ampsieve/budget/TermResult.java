@@ -42,6 +42,7 @@ public record TermResult(
 
     /** The working as unworded facts, for messages built below the report (report/TermNotes words it). */
     public String note() {
-        return working.facts();
+        String facts = working.facts();
+        return facts.isEmpty() ? working.formula() : facts;
     }
 }

@@ -1,6 +1,7 @@
 package dev.ampsieve.budget;
 
 import dev.ampsieve.units.Dimension;
+import dev.ampsieve.units.Units;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.EnumSet;
@@ -47,22 +48,20 @@ public record TermWorking(String formula, List<Operand> operands, Set<TermRemark
         return remarks.contains(r);
     }
 
-    /** The facts on one line, unworded (for a message that must not depend on the report). */
+    /**
+     * The operands and remarks on one line, unworded ("en 1.00 nV/√Hz, rms ∞ V, gbw-missing"), for a
+     * message built below the report (the overflow constraint names the values a term came from);
+     * empty when there are none.
+     */
     public String facts() {
-        StringBuilder b = new StringBuilder(formula);
-        String sep = ": ";
+        List<String> parts = new ArrayList<>();
         for (Operand o : operands) {
-            b.append(sep).append(o.name()).append(" = ").append(o.value());
-            if (!o.dimension().symbol().isEmpty()) {
-                b.append(' ').append(o.dimension().symbol());
-            }
-            sep = ", ";
+            parts.add(o.name() + " " + Units.format(o.value(), o.dimension()));
         }
         for (TermRemark r : remarks) {
-            b.append(sep).append(r.name().toLowerCase(java.util.Locale.ROOT));
-            sep = ", ";
+            parts.add(r.name().toLowerCase(java.util.Locale.ROOT).replace('_', '-'));
         }
-        return b.toString();
+        return String.join(", ", parts);
     }
 
     /** Collects operands and remarks in reading order. */

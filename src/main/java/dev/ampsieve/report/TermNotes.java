@@ -144,7 +144,7 @@ public final class TermNotes {
                                     : "- input, x Rf " + f("Rf"));
                 case "no-leakage" -> "no leakage named";
                 // a formula this renderer does not know (a test's stand-in): its facts, unworded
-                default -> w.facts();
+                default -> w.formula() + (w.facts().isEmpty() ? "" : ": " + w.facts());
             };
         }
 

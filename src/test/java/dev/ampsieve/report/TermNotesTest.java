@@ -96,6 +96,6 @@ class TermNotesTest {
     void aFormulaTheReportDoesNotKnowShowsItsFacts() {
         TermResult t = term(
                 "x", TermWorking.of("test").put("a", 2.5, Dimension.VOLTAGE).build());
-        assertEquals("test: a = 2.5 V", TermNotes.of(t));
+        assertEquals("test: a 2.50 V", TermNotes.of(t));
     }
 }
