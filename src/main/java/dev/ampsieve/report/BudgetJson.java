@@ -58,7 +58,7 @@ public final class BudgetJson {
                 ObjectNode on = ops.addObject();
                 on.put("name", op.name());
                 put(on, "value", op.value());
-                on.put("unit", op.dimension().symbol());
+                on.put("unit", TermNotes.unit(op));
             }
             ArrayNode remarks = n.putArray("remarks");
             t.working()

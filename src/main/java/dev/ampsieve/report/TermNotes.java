@@ -25,6 +25,19 @@ public final class TermNotes {
         return Units.format(o.value(), o.dimension(), digits(o));
     }
 
+    /**
+     * An operand's unit symbol for JSON. Temperature differences and the die's power are held as
+     * plain numbers (the units print a difference of 0.05 °C as a temperature to 0.1 °C, and know no
+     * power), so their unit is named here.
+     */
+    public static String unit(Operand o) {
+        return switch (o.name()) {
+            case "dT", "gradient" -> "°C";
+            case "P" -> "W";
+            default -> o.dimension().symbol();
+        };
+    }
+
     /** Levels in dB and sensitivities read to four digits (110.5 dB, 0.9091); the rest to three. */
     private static int digits(Operand o) {
         return o.dimension() == Dimension.DECIBEL

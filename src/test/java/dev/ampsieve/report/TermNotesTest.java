@@ -90,6 +90,15 @@ class TermNotesTest {
         assertEquals("vos", offset.get("operands").get(1).get("name").asText());
         assertEquals(100e-6, offset.get("operands").get(1).get("value").asDouble(), 0.0);
         assertEquals("V", offset.get("operands").get(1).get("unit").asText());
+        // a temperature difference is held as a plain number but has its unit in JSON
+        JsonNode drift = null;
+        for (JsonNode t : terms) {
+            if (t.get("key").asText().equals("drift")) {
+                drift = t;
+            }
+        }
+        assertEquals("dT", drift.get("operands").get(2).get("name").asText());
+        assertEquals("°C", drift.get("operands").get(2).get("unit").asText());
     }
 
     @Test
