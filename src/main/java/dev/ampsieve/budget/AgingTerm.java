@@ -3,7 +3,6 @@ package dev.ampsieve.budget;
 import dev.ampsieve.catalog.LongTermDrift;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.units.Dimension;
-import dev.ampsieve.units.Units;
 
 /**
  * Term 9, long-term drift: {@code NG * k * D * sqrt(L / t0)}, volts at the output, with D the
@@ -44,22 +43,22 @@ public final class AgingTerm implements ErrorTerm {
     public TermResult evaluate(Stage s, PartValues v) {
         double life = s.serviceLife();
         if (life <= 0) {
-            return ErrorTerm.result(this, s, 0.0, Double.NaN, false, "no service life given");
+            return ErrorTerm.none(this, s, false, "no-service-life");
         }
         Figure a = v.aging();
         double out = DcModel.of(s).perVos() * a.bound();
         LongTermDrift d = v.part().longTermDrift();
-        String note;
+        TermWorking.Builder w = TermWorking.of("aging").put("NG", DcModel.of(s).perVos(), Dimension.NUMBER);
         if (a.basis() == Basis.ESTIMATED) {
-            note = "NG x " + Units.format(a.bound(), Dimension.VOLTAGE) + " over " + Units.format(life, Dimension.TIME)
-                    + " (estimated: no long-term drift figure in the catalog)";
+            w.put("shift", a.bound(), Dimension.VOLTAGE)
+                    .put("life", life, Dimension.TIME)
+                    .remark(TermRemark.AGING_ESTIMATED);
         } else {
-            note = "NG x " + Units.format(s.maxToSigma(), Dimension.NUMBER) + " x "
-                    + Units.format(d.value(), Dimension.VOLTAGE) + " per "
-                    + Units.format(d.per(), Dimension.TIME) + " x sqrt(" + Units.format(life, Dimension.TIME)
-                    + " / " + Units.format(d.per(), Dimension.TIME)
-                    + ") (random walk; max-to-sigma x the typical figure)";
+            w.put("maxToSigma", s.maxToSigma(), Dimension.NUMBER)
+                    .put("typical", d.value(), Dimension.VOLTAGE)
+                    .put("per", d.per(), Dimension.TIME)
+                    .put("life", life, Dimension.TIME);
         }
-        return ErrorTerm.result(this, s, out, Double.NaN, a.basis().uncertain() && out > 0, note);
+        return ErrorTerm.result(this, s, out, Double.NaN, a.basis().uncertain() && out > 0, w.build());
     }
 }

@@ -2,7 +2,6 @@ package dev.ampsieve.budget;
 
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.units.Dimension;
-import dev.ampsieve.units.Units;
 
 /**
  * Term 7, closed-loop bandwidth: amplitude error at the band edge
@@ -56,25 +55,31 @@ public final class BandwidthTerm implements ErrorTerm {
     private TermResult transimpedance(Stage s, PartValues v) {
         double vfs = s.fullScaleOutput() == null ? 0.0 : s.fullScaleOutput();
         if (Double.isNaN(v.gbw())) {
-            return ErrorTerm.result(this, s, 0.0, Double.NaN, true, "GBW not given: not counted"); // as NotCounted says
+            return ErrorTerm.none(this, s, true, "gbw-missing"); // as NotCounted says
         }
         TransimpedanceResponse r = TransimpedanceResponse.of(s, v);
         double out = vfs * transimpedanceError(r, s.bandHigh());
         double bw = r.bandwidth();
-        String note = "fH " + Units.format(s.bandHigh(), Dimension.FREQUENCY) + ", signal bandwidth (-3 dB) "
-                + Units.format(bw, Dimension.FREQUENCY);
+        TermWorking w = TermWorking.of("bandwidth-transimpedance")
+                .put("VFS", vfs, Dimension.VOLTAGE)
+                .put("fH", s.bandHigh(), Dimension.FREQUENCY)
+                .put("f-3dB", bw, Dimension.FREQUENCY)
+                .build();
         boolean est = v.inputCapacitance().basis() != Basis.GUARANTEED;
-        return ErrorTerm.result(this, s, out, Double.NaN, est, note);
+        return ErrorTerm.result(this, s, out, Double.NaN, est, w);
     }
 
     private TermResult singlePole(Stage s, PartValues v) {
         double vfs = s.fullScaleOutput() == null ? 0.0 : s.fullScaleOutput();
         if (Double.isNaN(v.gbw())) {
-            return ErrorTerm.result(this, s, 0.0, Double.NaN, true, "GBW not given: not counted");
+            return ErrorTerm.none(this, s, true, "gbw-missing"); // as NotCounted says
         }
         double out = vfs * relativeError(s.bandHigh(), s.noiseGain(), v.gbw());
-        String note = "fH " + Units.format(s.bandHigh(), Dimension.FREQUENCY) + ", closed-loop pole "
-                + Units.format(v.gbw() / s.noiseGain(), Dimension.FREQUENCY);
-        return ErrorTerm.result(this, s, out, Double.NaN, false, note);
+        TermWorking w = TermWorking.of("bandwidth")
+                .put("VFS", vfs, Dimension.VOLTAGE)
+                .put("fH", s.bandHigh(), Dimension.FREQUENCY)
+                .put("fCL", v.gbw() / s.noiseGain(), Dimension.FREQUENCY)
+                .build();
+        return ErrorTerm.result(this, s, out, Double.NaN, false, w);
     }
 }

@@ -2,7 +2,6 @@ package dev.ampsieve.budget;
 
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.units.Dimension;
-import dev.ampsieve.units.Units;
 
 /**
  * Term 3, bias and offset currents through the stage resistors:
@@ -172,17 +171,18 @@ public final class BiasTerm implements ErrorTerm {
                 || v.ibFactor(s.tMax()) != 1.0
                 || v.iosFactor(s.tMin()) != 1.0
                 || v.iosFactor(s.tMax()) != 1.0;
-        String note = "ib " + Units.format(v.ibAt(at), Dimension.CURRENT) + ", ios "
-                + Units.format(v.iosAt(at), Dimension.CURRENT)
-                + (dependsOnT
-                        ? " at " + Units.format(at, Dimension.TEMPERATURE)
-                        : " (25 °C limits hold over the range)")
-                + "; R+ " + Units.format(s.rPlus(), Dimension.RESISTANCE) + ", Rf "
-                + Units.format(s.rf(), Dimension.RESISTANCE);
-        if (v.ib().basis() == Basis.ESTIMATED) {
-            note += " (ib estimated: not in the catalog)";
+        TermWorking.Builder w = TermWorking.of("bias")
+                .put("ib", v.ibAt(at), Dimension.CURRENT)
+                .put("ios", v.iosAt(at), Dimension.CURRENT);
+        if (dependsOnT) {
+            w.put("T", at, Dimension.TEMPERATURE);
+        } else {
+            w.remark(TermRemark.BIAS_25C_LIMITS_HOLD);
         }
+        w.put("R+", s.rPlus(), Dimension.RESISTANCE)
+                .put("Rf", s.rf(), Dimension.RESISTANCE)
+                .remark(v.ib().basis() == Basis.ESTIMATED, TermRemark.IB_ESTIMATED);
         boolean est = v.ib().basis().uncertain() || v.ios().basis().uncertain() || dependsOnT && v.ibExtrapolated(at);
-        return ErrorTerm.result(this, s, out, dependsOnT ? at : Double.NaN, est, note);
+        return ErrorTerm.result(this, s, out, dependsOnT ? at : Double.NaN, est, w.build());
     }
 }

@@ -2,7 +2,6 @@ package dev.ampsieve.budget;
 
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.units.Dimension;
-import dev.ampsieve.units.Units;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -108,29 +107,26 @@ public final class ChoppingRippleTerm implements ErrorTerm {
     public TermResult evaluate(Stage s, PartValues v) {
         Figure r = v.operating().choppingRipple();
         if (r.bound() == 0) {
-            return ErrorTerm.result(
-                    this,
-                    s,
-                    0.0,
-                    Double.NaN,
-                    false,
-                    v.part().selfCorrecting() ? "ripple 0 V in the catalog" : "not a chopper or auto-zero part");
+            return ErrorTerm.none(this, s, false, v.part().selfCorrecting() ? "ripple-zero" : "not-self-correcting");
         }
         int n = s.noiseFilterOrder();
         double out = output(s, v, n);
         Double fc = v.part().choppingFrequency();
-        String note = "ripple " + Units.format(r.bound(), Dimension.VOLTAGE)
-                + (r.basis() == Basis.ASSUMED ? " (assumed)" : "");
+        TermWorking.Builder w = TermWorking.of("chopping-ripple")
+                .put("ripple", r.bound(), Dimension.VOLTAGE)
+                .remark(r.basis() == Basis.ASSUMED, TermRemark.RIPPLE_ASSUMED);
         if (fc == null) {
-            note += " x NG: chopping frequency not given, no loop or filter roll-off credited";
+            w.put("NG", s.noiseGain(), Dimension.NUMBER).remark(TermRemark.CHOPPING_FREQUENCY_MISSING);
         } else {
-            note += " at " + Units.format(fc, Dimension.FREQUENCY) + " x |NG| "
-                    + Units.format(loopGain(s, v, fc), Dimension.NUMBER)
-                    + (n == 0
-                            ? ", no filter"
-                            : " x |H| " + Units.format(butterworth(n, s.bandHigh(), fc), Dimension.NUMBER) + " (order "
-                                    + n + " at " + Units.format(s.bandHigh(), Dimension.FREQUENCY) + ")");
+            w.put("fc", fc, Dimension.FREQUENCY).put("|NG|", loopGain(s, v, fc), Dimension.NUMBER);
+            if (n == 0) {
+                w.remark(TermRemark.NO_FILTER);
+            } else {
+                w.put("|H|", butterworth(n, s.bandHigh(), fc), Dimension.NUMBER)
+                        .put("order", n, Dimension.NUMBER)
+                        .put("fH", s.bandHigh(), Dimension.FREQUENCY);
+            }
         }
-        return ErrorTerm.result(this, s, out, Double.NaN, r.basis().uncertain() || fc == null, note);
+        return ErrorTerm.result(this, s, out, Double.NaN, r.basis().uncertain() || fc == null, w.build());
     }
 }

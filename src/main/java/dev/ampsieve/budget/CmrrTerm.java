@@ -3,7 +3,6 @@ package dev.ampsieve.budget;
 import dev.ampsieve.stage.Difference;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.units.Dimension;
-import dev.ampsieve.units.Units;
 
 /**
  * Term 4, common-mode rejection, volts at the output, dVcm the stage's peak common-mode change
@@ -68,7 +67,6 @@ public final class CmrrTerm implements ErrorTerm {
     public TermResult evaluate(Stage s, PartValues v) {
         Figure db = v.cmrrDb();
         double amp = amplifierPart(s, db.bound());
-        String ampNote = "CMRR " + Units.format(db.bound(), Dimension.DECIBEL, 4) + basisNote(db.basis());
         return switch (s.topology()) {
             case NON_INVERTING, INVERTING, FOLLOWER, TRANSIMPEDANCE ->
                 ErrorTerm.result(
@@ -77,29 +75,41 @@ public final class CmrrTerm implements ErrorTerm {
                         amp,
                         Double.NaN,
                         db.basis().uncertain(),
-                        "dVcm " + Units.format(s.commonModeSwing(), Dimension.VOLTAGE) + ", " + ampNote);
+                        remark(
+                                        TermWorking.of("cmrr")
+                                                .put("dVcm", s.commonModeSwing(), Dimension.VOLTAGE)
+                                                .put("CMRR", db.bound(), Dimension.DECIBEL),
+                                        db.basis())
+                                .build());
             case DIFFERENCE -> {
                 double res = resistorPart(s);
                 double at = s.ratioTempco() != 0 && s.deltaT() > 0 && res > 0 ? DriftTerm.farEnd(s) : Double.NaN;
-                String note =
-                        "dVcm " + Units.format(s.commonModeSwing(), Dimension.VOLTAGE) + " at the source; resistors "
-                                + Units.format(res, Dimension.VOLTAGE) + " (each pair within tol "
-                                + Units.format(s.ratioTolerance(), Dimension.RATIO) + " + tc "
-                                + Units.format(s.ratioTempco(), Dimension.RATIO_DRIFT) + " x "
-                                + Units.format(s.deltaT(), Dimension.NUMBER) + " °C); amplifier "
-                                + Units.format(amp, Dimension.VOLTAGE) + " (pins at "
-                                + Units.format(s.network().commonModeShare(), Dimension.NUMBER, 4) + " x dVcm, "
-                                + ampNote + ")";
-                yield ErrorTerm.result(this, s, res + amp, at, db.basis().uncertain(), note);
+                TermWorking.Builder w = TermWorking.of("cmrr-difference")
+                        .put("dVcm", s.commonModeSwing(), Dimension.VOLTAGE)
+                        .put("resistors", res, Dimension.VOLTAGE)
+                        .put("tol", s.ratioTolerance(), Dimension.RATIO)
+                        .put("tc", s.ratioTempco(), Dimension.RATIO_DRIFT)
+                        .put("dT", s.deltaT(), Dimension.NUMBER)
+                        .put("amplifier", amp, Dimension.VOLTAGE)
+                        .put("pinShare", s.network().commonModeShare(), Dimension.NUMBER)
+                        .put("CMRR", db.bound(), Dimension.DECIBEL);
+                yield ErrorTerm.result(
+                        this,
+                        s,
+                        res + amp,
+                        at,
+                        db.basis().uncertain(),
+                        remark(w, db.basis()).build());
             }
         };
     }
 
-    static String basisNote(Basis b) {
+    /** The remark a rejection figure's basis calls for: typical-only or assumed. */
+    static TermWorking.Builder remark(TermWorking.Builder w, Basis b) {
         return switch (b) {
-            case TYPICAL_ONLY -> " (typical less 20 log10(max-to-sigma): no guaranteed minimum)";
-            case ASSUMED -> " (assumed: not in the catalog)";
-            default -> "";
+            case TYPICAL_ONLY -> w.remark(TermRemark.TYPICAL_LESS_MAX_TO_SIGMA);
+            case ASSUMED -> w.remark(TermRemark.ASSUMED_NOT_IN_CATALOG);
+            default -> w;
         };
     }
 }

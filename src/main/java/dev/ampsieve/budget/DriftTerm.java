@@ -2,7 +2,6 @@ package dev.ampsieve.budget;
 
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.units.Dimension;
-import dev.ampsieve.units.Units;
 
 /**
  * Term 2, offset drift: {@code NG * drift.max * dT}, volts at the output, with
@@ -62,22 +61,24 @@ public final class DriftTerm implements ErrorTerm {
         double drift = v.driftBound(dT);
         double raw = ng * drift * dT;
         double out = raw;
-        String note = "NG x drift " + Units.format(drift, Dimension.VOLTAGE_DRIFT) + " x "
-                + Units.format(dT, Dimension.NUMBER) + " °C";
+        TermWorking.Builder w = TermWorking.of("drift")
+                .put("NG", ng, Dimension.NUMBER)
+                .put("drift", drift, Dimension.VOLTAGE_DRIFT)
+                .put("dT", dT, Dimension.NUMBER);
         double cap = v.vosMaxOverTemp();
         if (!Double.isNaN(cap)) {
             double left = Math.max(0.0, ng * cap - OffsetTerm.magnitude(s, v));
             if (out > left) {
                 out = left;
-                note += "; capped: offset + drift <= NG x vos over temperature " + Units.format(cap, Dimension.VOLTAGE);
+                w.put("vosOverTemperature", cap, Dimension.VOLTAGE).remark(TermRemark.DRIFT_CAPPED);
             }
         }
         if (v.drift().basis() == Basis.ESTIMATED) {
-            note += " (estimated as vos / T)";
+            w.remark(TermRemark.DRIFT_FROM_VOS);
         } else if (v.drift().basis() == Basis.TYPICAL_ONLY) {
-            note += " (max-to-sigma x typical: no guaranteed maximum)";
+            w.remark(TermRemark.TYPICAL_TIMES_MAX_TO_SIGMA);
         }
         double at = dT == 0 ? Double.NaN : farEnd(s);
-        return ErrorTerm.result(this, s, out, at, v.drift().basis().uncertain(), note);
+        return ErrorTerm.result(this, s, out, at, v.drift().basis().uncertain(), w.build());
     }
 }

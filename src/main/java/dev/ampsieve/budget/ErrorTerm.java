@@ -34,8 +34,14 @@ public interface ErrorTerm {
     TermResult evaluate(Stage stage, PartValues values);
 
     /** Builds a result with the input-referred value derived from the output value. */
-    static TermResult result(ErrorTerm t, Stage s, double outputV, double worstAtC, boolean estimated, String note) {
+    static TermResult result(
+            ErrorTerm t, Stage s, double outputV, double worstAtC, boolean estimated, TermWorking working) {
         return new TermResult(
-                t.key(), t.label(), outputV, outputV / s.sourceGain(), worstAtC, estimated, note, t.kind());
+                t.key(), t.label(), outputV, outputV / s.sourceGain(), worstAtC, estimated, working, t.kind());
+    }
+
+    /** A result of zero with a formula that has no operands (the term was not counted or does not apply). */
+    static TermResult none(ErrorTerm t, Stage s, boolean estimated, String formula) {
+        return result(t, s, 0.0, Double.NaN, estimated, TermWorking.plain(formula));
     }
 }

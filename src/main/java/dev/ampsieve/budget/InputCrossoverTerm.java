@@ -3,7 +3,6 @@ package dev.ampsieve.budget;
 import dev.ampsieve.catalog.Range;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.units.Dimension;
-import dev.ampsieve.units.Units;
 
 /**
  * The offset step of a rail-to-rail input's crossover: such an input has two complementary pairs
@@ -57,29 +56,31 @@ public final class InputCrossoverTerm implements ErrorTerm {
     public TermResult evaluate(Stage s, PartValues v) {
         OperatingFigures o = v.operating();
         if (Double.isNaN(o.crossoverNear())) {
-            return ErrorTerm.result(this, s, 0.0, Double.NaN, false, "no crossover: the input has one pair");
+            return ErrorTerm.none(this, s, false, "one-input-pair");
         }
         if (s.supplyVoltage() == null) {
-            return ErrorTerm.result(this, s, 0.0, Double.NaN, false, "supply.voltage not given: not checked");
+            return ErrorTerm.none(this, s, false, "supply-voltage-missing");
         }
         double at = s.supplyVoltage() - o.crossoverNear();
-        String where = o.crossoverNear() == o.crossoverFar()
-                ? "crossover at " + Units.format(at, Dimension.VOLTAGE)
-                : "crossover assumed " + Units.format(s.supplyVoltage() - o.crossoverFar(), Dimension.VOLTAGE) + " to "
-                        + Units.format(at, Dimension.VOLTAGE);
+        boolean crossed = crossed(s, o.crossoverNear(), o.crossoverFar());
+        TermWorking.Builder w = TermWorking.of(crossed ? "crossover" : "crossover-not-crossed");
+        if (o.crossoverNear() != o.crossoverFar()) {
+            w.put("crossoverFrom", s.supplyVoltage() - o.crossoverFar(), Dimension.VOLTAGE)
+                    .remark(TermRemark.CROSSOVER_RANGE);
+        }
+        w.put("crossover", at, Dimension.VOLTAGE);
         Range cm = Constraints.neededCommonMode(s);
-        String range = cm == null
-                ? ""
-                : ", common mode " + Units.format(cm.min(), Dimension.VOLTAGE) + " to "
-                        + Units.format(cm.max(), Dimension.VOLTAGE);
-        if (!crossed(s, o.crossoverNear(), o.crossoverFar())) {
-            return ErrorTerm.result(this, s, 0.0, Double.NaN, false, where + range + ": not crossed");
+        if (cm != null) {
+            w.put("cmMin", cm.min(), Dimension.VOLTAGE).put("cmMax", cm.max(), Dimension.VOLTAGE);
+        }
+        if (!crossed) {
+            return ErrorTerm.result(this, s, 0.0, Double.NaN, false, w.build());
         }
         double out = s.noiseGain() * o.crossoverStep().bound();
-        String note = where + range + ": NG x step "
-                + Units.format(o.crossoverStep().bound(), Dimension.VOLTAGE)
-                + (o.crossoverStep().basis() == Basis.ASSUMED ? " (assumed 2 x vos)" : "") + "; a trim leaves it";
+        w.put("NG", s.noiseGain(), Dimension.NUMBER)
+                .put("step", o.crossoverStep().bound(), Dimension.VOLTAGE)
+                .remark(o.crossoverStep().basis() == Basis.ASSUMED, TermRemark.STEP_ASSUMED);
         return ErrorTerm.result(
-                this, s, out, Double.NaN, o.crossoverStep().basis().uncertain(), note);
+                this, s, out, Double.NaN, o.crossoverStep().basis().uncertain(), w.build());
     }
 }

@@ -3,7 +3,6 @@ package dev.ampsieve.budget;
 import dev.ampsieve.stage.Board;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.units.Dimension;
-import dev.ampsieve.units.Units;
 
 /**
  * Board-level term, surface leakage: a current {@code I = |V| / R} from a nearby trace at V
@@ -54,15 +53,20 @@ public final class LeakageTerm implements ErrorTerm {
         Board b = s.board();
         double i = b.leakageCurrent();
         double out = i * perAmpere(s);
-        String note = b.leakage()
-                ? Units.format(Math.abs(b.leakageVoltage()), Dimension.VOLTAGE) + " / "
-                        + Units.format(b.leakageResistance(), Dimension.RESISTANCE) + " = "
-                        + Units.format(i, Dimension.CURRENT)
-                        + " into the "
-                        + (b.leakageInput() == Board.Input.PLUS
-                                ? "+ input, x NG x R+ " + Units.format(s.rPlus(), Dimension.RESISTANCE)
-                                : "- input, x Rf " + Units.format(s.rf(), Dimension.RESISTANCE))
-                : "no leakage named";
-        return ErrorTerm.result(this, s, out, Double.NaN, false, note);
+        if (!b.leakage()) {
+            return ErrorTerm.result(this, s, out, Double.NaN, false, TermWorking.plain("no-leakage"));
+        }
+        boolean plus = b.leakageInput() == Board.Input.PLUS;
+        TermWorking.Builder w = TermWorking.of("leakage")
+                .put("V", Math.abs(b.leakageVoltage()), Dimension.VOLTAGE)
+                .put("R", b.leakageResistance(), Dimension.RESISTANCE)
+                .put("I", i, Dimension.CURRENT)
+                .remark(plus, TermRemark.LEAKAGE_PLUS_INPUT);
+        if (plus) {
+            w.put("NG", s.noiseGain(), Dimension.NUMBER).put("R+", s.rPlus(), Dimension.RESISTANCE);
+        } else {
+            w.put("Rf", s.rf(), Dimension.RESISTANCE);
+        }
+        return ErrorTerm.result(this, s, out, Double.NaN, false, w.build());
     }
 }

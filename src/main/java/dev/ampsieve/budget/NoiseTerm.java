@@ -3,7 +3,6 @@ package dev.ampsieve.budget;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.PhysicalConstants;
-import dev.ampsieve.units.Units;
 
 /**
  * Term 10, noise: the rms output noise of {@link NoiseModel} integrated from fL to the stage's
@@ -58,24 +57,20 @@ public final class NoiseTerm implements ErrorTerm {
         return PhysicalConstants.kelvin(s.tMax());
     }
 
-    /** Which limit set fN, for the note. */
-    private static String bandNote(Stage s, double gbw, double fN) {
+    /** Which limit set fN: the filter (its order), the closed loop (its bandwidth), or neither (GBW missing). */
+    private static void band(TermWorking.Builder w, Stage s, double gbw, double fN) {
         int order = s.noiseFilterOrder();
+        w.put("order", order, Dimension.NUMBER);
         if (Double.isNaN(gbw)) {
-            return order == Stage.NO_FILTER ? "GBW not given: pi/2 x fH assumed" : filterName(order);
+            w.remark(order == Stage.NO_FILTER, TermRemark.GBW_MISSING);
+            return;
         }
         boolean loopLimits = order == Stage.NO_FILTER || fN < NoiseModel.butterworthEnbw(order) * s.bandHigh();
-        if (!loopLimits) {
-            return filterName(order);
+        if (loopLimits) {
+            w.put("fCL", gbw / s.noiseGain(), Dimension.FREQUENCY)
+                    .remark(TermRemark.LOOP_SETS_NOISE_BAND)
+                    .remark(s.filterOrder() == null, TermRemark.FILTER_NOT_STATED);
         }
-        return "closed-loop bandwidth " + Units.format(gbw / s.noiseGain(), Dimension.FREQUENCY)
-                + (order != Stage.NO_FILTER
-                        ? ", below the filter"
-                        : s.filterOrder() == null ? ", no filter stated" : ", no filter");
-    }
-
-    private static String filterName(int order) {
-        return order == 1 ? "first-order filter at fH" : "order-" + order + " Butterworth at fH";
     }
 
     @Override
@@ -96,38 +91,40 @@ public final class NoiseTerm implements ErrorTerm {
         boolean cinAssumed = v.inputCapacitance().basis() != Basis.GUARANTEED;
         double high = r.cf() > 0 ? 1 + r.ct() / r.cf() : Double.POSITIVE_INFINITY;
         int order = s.noiseFilterOrder();
-        String note = "en " + Units.format(v.en(), Dimension.VOLTAGE_DENSITY) + ", in "
-                + Units.format(v.in(), Dimension.CURRENT_DENSITY) + "; noise gain "
-                + Units.format(s.noiseGain(), Dimension.NUMBER)
-                + " at DC"
-                + (Double.isFinite(high)
-                        ? " rising to " + Units.format(high, Dimension.NUMBER) + " (1 + Ct/Cf)"
-                        : " rising with f (no cf)")
-                + ", Ct " + Units.format(r.ct(), Dimension.CAPACITANCE)
-                + (cinAssumed ? " (input capacitance assumed)" : "")
-                + "; rms " + Units.format(rms, Dimension.VOLTAGE) + ", pp (6.6 x rms) "
-                + Units.format(NoiseModel.PEAK_TO_PEAK * rms, Dimension.VOLTAGE) + ", integrated from "
-                + Units.format(s.bandLow(), Dimension.FREQUENCY) + " through "
-                + (Double.isNaN(v.gbw())
-                        ? "a flat band to " + Units.format(NoiseModel.noiseBandEdge(s, v.gbw()), Dimension.FREQUENCY)
-                                + " (GBW not given)"
-                        : (order == Stage.NO_FILTER ? "the closed loop" : filterName(order) + " and the closed loop"))
-                + ", resistors at " + Units.format(s.tMax(), Dimension.TEMPERATURE) + "; counted as 3.3 x rms";
+        TermWorking.Builder w = TermWorking.of("noise-transimpedance")
+                .put("en", v.en(), Dimension.VOLTAGE_DENSITY)
+                .put("in", v.in(), Dimension.CURRENT_DENSITY)
+                .put("NG", s.noiseGain(), Dimension.NUMBER)
+                // 1 + Ct/Cf; infinite without cf (the noise gain keeps rising with f)
+                .put("NGhigh", high, Dimension.NUMBER)
+                .put("Ct", r.ct(), Dimension.CAPACITANCE)
+                .remark(cinAssumed, TermRemark.INPUT_CAPACITANCE_ASSUMED)
+                .put("rms", rms, Dimension.VOLTAGE)
+                .put("pp", NoiseModel.PEAK_TO_PEAK * rms, Dimension.VOLTAGE)
+                .put("fL", s.bandLow(), Dimension.FREQUENCY)
+                .put("order", order, Dimension.NUMBER);
+        if (Double.isNaN(v.gbw())) {
+            w.put("fN", NoiseModel.noiseBandEdge(s, v.gbw()), Dimension.FREQUENCY)
+                    .remark(TermRemark.GBW_MISSING);
+        }
+        w.put("T", s.tMax(), Dimension.TEMPERATURE).put("allowance", ALLOWANCE, Dimension.NUMBER);
         boolean est = v.noiseEstimated() || Double.isNaN(v.gbw()) || cinAssumed;
-        return ErrorTerm.result(this, s, ALLOWANCE * rms, Double.NaN, est, note);
+        return ErrorTerm.result(this, s, ALLOWANCE * rms, Double.NaN, est, w.build());
     }
 
     private TermResult flat(Stage s, PartValues v) {
         double rms = rms(s, v);
         double fN = NoiseModel.noiseBandEdge(s, v.gbw());
-        String note = "en " + Units.format(v.en(), Dimension.VOLTAGE_DENSITY) + ", in "
-                + Units.format(v.in(), Dimension.CURRENT_DENSITY) + "; rms " + Units.format(rms, Dimension.VOLTAGE)
-                + ", pp (6.6 x rms) "
-                + Units.format(NoiseModel.PEAK_TO_PEAK * rms, Dimension.VOLTAGE) + ", "
-                + Units.format(s.bandLow(), Dimension.FREQUENCY) + " to fN "
-                + Units.format(fN, Dimension.FREQUENCY) + " (" + bandNote(s, v.gbw(), fN) + "), resistors at "
-                + Units.format(s.tMax(), Dimension.TEMPERATURE) + "; counted as 3.3 x rms";
+        TermWorking.Builder w = TermWorking.of("noise")
+                .put("en", v.en(), Dimension.VOLTAGE_DENSITY)
+                .put("in", v.in(), Dimension.CURRENT_DENSITY)
+                .put("rms", rms, Dimension.VOLTAGE)
+                .put("pp", NoiseModel.PEAK_TO_PEAK * rms, Dimension.VOLTAGE)
+                .put("fL", s.bandLow(), Dimension.FREQUENCY)
+                .put("fN", fN, Dimension.FREQUENCY);
+        band(w, s, v.gbw(), fN);
+        w.put("T", s.tMax(), Dimension.TEMPERATURE).put("allowance", ALLOWANCE, Dimension.NUMBER);
         boolean est = v.noiseEstimated() || Double.isNaN(v.gbw());
-        return ErrorTerm.result(this, s, ALLOWANCE * rms, Double.NaN, est, note);
+        return ErrorTerm.result(this, s, ALLOWANCE * rms, Double.NaN, est, w.build());
     }
 }

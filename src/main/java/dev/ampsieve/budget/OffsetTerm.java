@@ -2,7 +2,6 @@ package dev.ampsieve.budget;
 
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.units.Dimension;
-import dev.ampsieve.units.Units;
 
 /**
  * Term 1, initial offset: {@code NG * vos.max}, volts at the output, at 25 °C.
@@ -37,9 +36,12 @@ public final class OffsetTerm implements ErrorTerm {
     @Override
     public TermResult evaluate(Stage s, PartValues v) {
         Figure vos = v.vos();
-        String note = "NG x vos " + Units.format(vos.bound(), Dimension.VOLTAGE)
-                + (vos.basis() == Basis.TYPICAL_ONLY ? " (max-to-sigma x typical: no guaranteed maximum)" : "");
+        TermWorking w = TermWorking.of("offset")
+                .put("NG", DcModel.of(s).perVos(), Dimension.NUMBER)
+                .put("vos", vos.bound(), Dimension.VOLTAGE)
+                .remark(vos.basis() == Basis.TYPICAL_ONLY, TermRemark.TYPICAL_TIMES_MAX_TO_SIGMA)
+                .build();
         return ErrorTerm.result(
-                this, s, magnitude(s, v), Stage.T_REF, vos.basis().uncertain(), note);
+                this, s, magnitude(s, v), Stage.T_REF, vos.basis().uncertain(), w);
     }
 }

@@ -2,7 +2,6 @@ package dev.ampsieve.budget;
 
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.units.Dimension;
-import dev.ampsieve.units.Units;
 
 /**
  * Term 6, finite open-loop gain: gain error at full scale {@code VFS * NG / (AOL + NG)},
@@ -46,8 +45,16 @@ public final class OpenLoopGainTerm implements ErrorTerm {
         Figure db = v.aolDb();
         double vfs = s.fullScaleOutput() == null ? 0.0 : s.fullScaleOutput();
         double out = vfs * relativeError(s.noiseGain(), db.bound());
-        String note = "VFS " + Units.format(vfs, Dimension.VOLTAGE) + ", AOL "
-                + Units.format(db.bound(), Dimension.DECIBEL, 4) + CmrrTerm.basisNote(db.basis());
-        return ErrorTerm.result(this, s, out, Double.NaN, db.basis().uncertain(), note);
+        TermWorking.Builder w = TermWorking.of("open-loop-gain")
+                .put("VFS", vfs, Dimension.VOLTAGE)
+                .put("NG", s.noiseGain(), Dimension.NUMBER)
+                .put("AOL", db.bound(), Dimension.DECIBEL);
+        return ErrorTerm.result(
+                this,
+                s,
+                out,
+                Double.NaN,
+                db.basis().uncertain(),
+                CmrrTerm.remark(w, db.basis()).build());
     }
 }

@@ -3,7 +3,6 @@ package dev.ampsieve.budget;
 import dev.ampsieve.catalog.Range;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.units.Dimension;
-import dev.ampsieve.units.Units;
 
 /**
  * The offset's move from the datasheet's test conditions to the stage's operating point: the
@@ -70,24 +69,27 @@ public final class OperatingPointTerm implements ErrorTerm {
     public TermResult evaluate(Stage s, PartValues v) {
         OperatingFigures o = v.operating();
         if (s.supplyVoltage() == null || Double.isNaN(o.testSupply().bound())) {
-            return ErrorTerm.result(this, s, 0.0, Double.NaN, false, "supply.voltage not given: not counted");
+            return ErrorTerm.none(this, s, false, "supply-voltage-missing");
         }
         double out = s.noiseGain() * inputShift(s, v);
         double dVs = Math.abs(s.supplyVoltage() - o.testSupply().bound());
         double dVcm = Math.abs(commonModeFromMid(s)
                 - (o.testCommonMode().bound() - o.testSupply().bound() / 2));
-        String note = "table at " + Units.format(o.testSupply().bound(), Dimension.VOLTAGE)
-                + (o.testSupply().basis() == Basis.ASSUMED ? " (assumed)" : "") + ", common mode "
-                + Units.format(o.testCommonMode().bound(), Dimension.VOLTAGE)
-                + (o.testCommonMode().basis() == Basis.ASSUMED ? " (assumed)" : "") + "; NG x (dVs "
-                + Units.format(dVs, Dimension.VOLTAGE) + " / PSRR "
-                + Units.format(v.psrrDb().bound(), Dimension.DECIBEL, 4)
-                + " + dVcm " + Units.format(dVcm, Dimension.VOLTAGE) + " / CMRR "
-                + Units.format(v.cmrrDb().bound(), Dimension.DECIBEL, 4) + ")";
+        TermWorking w = TermWorking.of("operating-point")
+                .put("testSupply", o.testSupply().bound(), Dimension.VOLTAGE)
+                .put("testCommonMode", o.testCommonMode().bound(), Dimension.VOLTAGE)
+                .put("NG", s.noiseGain(), Dimension.NUMBER)
+                .put("dVs", dVs, Dimension.VOLTAGE)
+                .put("PSRR", v.psrrDb().bound(), Dimension.DECIBEL)
+                .put("dVcm", dVcm, Dimension.VOLTAGE)
+                .put("CMRR", v.cmrrDb().bound(), Dimension.DECIBEL)
+                .remark(o.testSupply().basis() == Basis.ASSUMED, TermRemark.TEST_SUPPLY_ASSUMED)
+                .remark(o.testCommonMode().basis() == Basis.ASSUMED, TermRemark.TEST_COMMON_MODE_ASSUMED)
+                .build();
         boolean est = o.testSupply().basis().uncertain()
                 || o.testCommonMode().basis().uncertain()
                 || dVs > 0 && v.psrrDb().basis().uncertain()
                 || dVcm > 0 && v.cmrrDb().basis().uncertain();
-        return ErrorTerm.result(this, s, out, Double.NaN, est, note);
+        return ErrorTerm.result(this, s, out, Double.NaN, est, w);
     }
 }

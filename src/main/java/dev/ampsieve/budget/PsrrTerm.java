@@ -2,7 +2,6 @@ package dev.ampsieve.budget;
 
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.units.Dimension;
-import dev.ampsieve.units.Units;
 
 /**
  * Term 5, supply rejection: {@code NG * dVs * 10^(-PSRR/20)}, volts at the output, dVs the
@@ -32,8 +31,16 @@ public final class PsrrTerm implements ErrorTerm {
     public TermResult evaluate(Stage s, PartValues v) {
         Figure db = v.psrrDb();
         double out = s.noiseGain() * s.supplyVariation() * Decibels.rejected(db.bound());
-        String note = "dVs " + Units.format(s.supplyVariation(), Dimension.VOLTAGE) + ", PSRR "
-                + Units.format(db.bound(), Dimension.DECIBEL, 4) + CmrrTerm.basisNote(db.basis());
-        return ErrorTerm.result(this, s, out, Double.NaN, db.basis().uncertain(), note);
+        TermWorking.Builder w = TermWorking.of("psrr")
+                .put("NG", s.noiseGain(), Dimension.NUMBER)
+                .put("dVs", s.supplyVariation(), Dimension.VOLTAGE)
+                .put("PSRR", db.bound(), Dimension.DECIBEL);
+        return ErrorTerm.result(
+                this,
+                s,
+                out,
+                Double.NaN,
+                db.basis().uncertain(),
+                CmrrTerm.remark(w, db.basis()).build());
     }
 }

@@ -2,7 +2,6 @@ package dev.ampsieve.budget;
 
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.units.Dimension;
-import dev.ampsieve.units.Units;
 
 /**
  * Term 8, resistor ratio: {@code VFS * S * (tolR + tcR * dT)}, volts at the output, with
@@ -52,16 +51,18 @@ public final class ResistorTerm implements ErrorTerm {
     public TermResult evaluate(Stage s, PartValues v) {
         double out = tolerancePart(s) + tempcoPart(s);
         double at = s.ratioTempco() != 0 && s.deltaT() > 0 ? DriftTerm.farEnd(s) : Double.NaN;
-        String note = "S " + Units.format(sensitivity(s), Dimension.NUMBER, 4) + " x (tol "
-                + Units.format(s.ratioTolerance(), Dimension.RATIO) + " + tc "
-                + Units.format(s.ratioTempco(), Dimension.RATIO_DRIFT) + " x "
-                + Units.format(s.deltaT(), Dimension.NUMBER) + " °C)"
-                + switch (s.topology()) {
-                    case FOLLOWER -> "; a follower has no gain resistors";
-                    case DIFFERENCE -> "; tolerance per pair, r2/r1 and r4/r3";
-                    case TRANSIMPEDANCE -> "; rf's own tolerance: the gain is rf";
-                    case NON_INVERTING, INVERTING -> "";
-                };
-        return ErrorTerm.result(this, s, out, at, false, note);
+        TermWorking.Builder w = TermWorking.of("resistors")
+                .put("VFS", vfs(s), Dimension.VOLTAGE)
+                .put("S", sensitivity(s), Dimension.NUMBER)
+                .put("tol", s.ratioTolerance(), Dimension.RATIO)
+                .put("tc", s.ratioTempco(), Dimension.RATIO_DRIFT)
+                .put("dT", s.deltaT(), Dimension.NUMBER);
+        switch (s.topology()) {
+            case FOLLOWER -> w.remark(TermRemark.FOLLOWER);
+            case DIFFERENCE -> w.remark(TermRemark.RESISTOR_PAIRS);
+            case TRANSIMPEDANCE -> w.remark(TermRemark.GAIN_IS_RF);
+            case NON_INVERTING, INVERTING -> {}
+        }
+        return ErrorTerm.result(this, s, out, at, false, w.build());
     }
 }

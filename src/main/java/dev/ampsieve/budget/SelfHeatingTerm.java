@@ -3,7 +3,6 @@ package dev.ampsieve.budget;
 import dev.ampsieve.catalog.Range;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.units.Dimension;
-import dev.ampsieve.units.Units;
 import java.util.List;
 
 /**
@@ -91,13 +90,8 @@ public final class SelfHeatingTerm implements ErrorTerm {
             return List.of();
         }
         boolean ok = d.hot() <= v.ratedHigh();
-        String detail = "die up to " + Units.format(d.hot(), Dimension.TEMPERATURE) + " (ambient "
-                + Units.format(s.tMax(), Dimension.TEMPERATURE) + " + "
-                + Units.format(d.thetaJa(), Dimension.THERMAL_RESISTANCE)
-                + " x " + Units.format(d.power() * 1e3, Dimension.NUMBER) + " mW), rated to "
-                + Units.format(v.ratedHigh(), Dimension.TEMPERATURE)
-                + (ok ? "" : ": " + Units.format(d.hot() - v.ratedHigh(), Dimension.NUMBER) + " °C too hot");
-        return List.of(new ConstraintResult(Constraints.DIE_TEMPERATURE, ok, detail));
+        return List.of(new ConstraintResult(
+                Constraints.DIE_TEMPERATURE, ok, ConstraintWords.dieTemperature(s, d, v.ratedHigh(), ok)));
     }
 
     private static double driftPart(Stage s, PartValues v, double dT) {
@@ -112,15 +106,8 @@ public final class SelfHeatingTerm implements ErrorTerm {
     public TermResult evaluate(Stage s, PartValues v) {
         Die d = die(s, v);
         if (d == null) {
-            return ErrorTerm.result(
-                    this,
-                    s,
-                    0.0,
-                    Double.NaN,
-                    false,
-                    s.loadResistance() == null
-                            ? "load-resistance not given: not counted"
-                            : "supply.voltage not given: not counted");
+            return ErrorTerm.none(
+                    this, s, false, s.loadResistance() == null ? "load-resistance-missing" : "supply-voltage-missing");
         }
         double dT = s.deltaT();
         double dTdie = Math.max(Math.abs(d.hot() - Stage.T_REF), Math.abs(d.cold() - Stage.T_REF));
@@ -129,18 +116,21 @@ public final class SelfHeatingTerm implements ErrorTerm {
         double dieBias = Math.max(biasPart(s, v, d.cold()), biasPart(s, v, d.hot()));
         double bias = Math.max(0, dieBias - ambientBias);
         double out = drift + bias;
-        String note = "die " + Units.format(d.cold(), Dimension.TEMPERATURE) + " to "
-                + Units.format(d.hot(), Dimension.TEMPERATURE)
-                + " (" + Units.format(d.thetaJa(), Dimension.THERMAL_RESISTANCE) + " x "
-                + Units.format(d.power() * 1e3, Dimension.NUMBER)
-                + " mW); drift adds " + Units.format(drift, Dimension.VOLTAGE) + ", bias adds "
-                + Units.format(bias, Dimension.VOLTAGE)
-                + " (ib " + Units.format(v.ibAt(d.hot()), Dimension.CURRENT) + " at the die)";
+        TermWorking w = TermWorking.of("self-heating")
+                .put("dieCold", d.cold(), Dimension.TEMPERATURE)
+                .put("dieHot", d.hot(), Dimension.TEMPERATURE)
+                .put("thetaJa", d.thetaJa(), Dimension.THERMAL_RESISTANCE)
+                // watts: the units know no power dimension; the report prints it in mW
+                .put("P", d.power(), Dimension.NUMBER)
+                .put("drift", drift, Dimension.VOLTAGE)
+                .put("bias", bias, Dimension.VOLTAGE)
+                .put("ibDie", v.ibAt(d.hot()), Dimension.CURRENT)
+                .build();
         OperatingFigures o = v.operating();
         boolean est = o.thetaJa().basis().uncertain()
                 || o.quiescentCurrent().basis().uncertain()
                 || drift > 0 && v.drift().basis().uncertain()
                 || bias > 0 && (v.ib().basis().uncertain() || v.ibExtrapolated(d.hot()));
-        return ErrorTerm.result(this, s, out, out > 0 ? s.tMax() : Double.NaN, est, note);
+        return ErrorTerm.result(this, s, out, out > 0 ? s.tMax() : Double.NaN, est, w);
     }
 }

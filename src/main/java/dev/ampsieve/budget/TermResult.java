@@ -10,7 +10,7 @@ package dev.ampsieve.budget;
  * @param inputV    the same referred to the signal source: divided by |signal gain| (inverting: Rf/(Rg + Rs))
  * @param worstAtC  ambient temperature (°C) at which it is largest; NaN when it does not depend on it
  * @param estimated true when a missing catalog value was replaced by an estimate
- * @param note      how it was computed, briefly (which catalog values, which rule)
+ * @param working   how it was computed, as data: formula id, operands and remarks (report/TermNotes words it)
  * @param kind      where the term comes from: the part, its operating point, or the board
  */
 public record TermResult(
@@ -20,16 +20,29 @@ public record TermResult(
         double inputV,
         double worstAtC,
         boolean estimated,
-        String note,
+        TermWorking working,
         TermKind kind) {
 
     public TermResult {
         kind = kind == null ? TermKind.PART : kind;
+        working = working == null ? TermWorking.plain(key) : working;
     }
 
     /** A term of the part's own figures ({@link TermKind#PART}). */
     public TermResult(
-            String key, String label, double outputV, double inputV, double worstAtC, boolean estimated, String note) {
-        this(key, label, outputV, inputV, worstAtC, estimated, note, TermKind.PART);
+            String key,
+            String label,
+            double outputV,
+            double inputV,
+            double worstAtC,
+            boolean estimated,
+            TermWorking working) {
+        this(key, label, outputV, inputV, worstAtC, estimated, working, TermKind.PART);
+    }
+
+    /** The working as unworded facts, for messages built below the report (report/TermNotes words it). */
+    public String note() {
+        String facts = working.facts();
+        return facts.isEmpty() ? working.formula() : facts;
     }
 }

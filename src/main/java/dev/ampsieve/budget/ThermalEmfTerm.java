@@ -3,7 +3,6 @@ package dev.ampsieve.budget;
 import dev.ampsieve.stage.Board;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.units.Dimension;
-import dev.ampsieve.units.Units;
 
 /**
  * Board-level term, thermal EMF: {@code NG x N x S x dT}, volts at the output, with N unpaired
@@ -53,12 +52,15 @@ public final class ThermalEmfTerm implements ErrorTerm {
     public TermResult evaluate(Stage s, PartValues v) {
         Board b = s.board();
         double out = s.noiseGain() * inputVolts(b);
-        String note = b.thermalEmf()
-                ? "NG x " + b.junctions() + " junction(s) x " + Units.format(b.seebeck(), Dimension.VOLTAGE_DRIFT)
-                        + " x " + Units.format(b.gradient(), Dimension.NUMBER) + " °C = "
-                        + Units.format(inputVolts(b), Dimension.VOLTAGE)
-                        + " in series with the input"
-                : "no thermal-emf named";
-        return ErrorTerm.result(this, s, out, Double.NaN, false, note);
+        TermWorking w = b.thermalEmf()
+                ? TermWorking.of("thermal-emf")
+                        .put("NG", s.noiseGain(), Dimension.NUMBER)
+                        .put("junctions", b.junctions(), Dimension.NUMBER)
+                        .put("seebeck", b.seebeck(), Dimension.VOLTAGE_DRIFT)
+                        .put("gradient", b.gradient(), Dimension.NUMBER)
+                        .put("emf", inputVolts(b), Dimension.VOLTAGE)
+                        .build()
+                : TermWorking.plain("no-thermal-emf");
+        return ErrorTerm.result(this, s, out, Double.NaN, false, w);
     }
 }

@@ -50,7 +50,21 @@ public final class BudgetJson {
             put(n, "worstAtC", t.worstAtC());
             n.put("estimated", t.estimated());
             n.put("counted", BudgetCalculator.counts(b.stage(), t.key()));
-            n.put("note", t.note());
+            n.put("note", TermNotes.of(t));
+            // the note's facts: the formula's id and each operand in SI units (temperatures in °C)
+            n.put("formula", t.working().formula());
+            ArrayNode ops = n.putArray("operands");
+            for (dev.ampsieve.budget.Operand op : t.working().operands()) {
+                ObjectNode on = ops.addObject();
+                on.put("name", op.name());
+                put(on, "value", op.value());
+                on.put("unit", TermNotes.unit(op));
+            }
+            ArrayNode remarks = n.putArray("remarks");
+            t.working()
+                    .remarks()
+                    .forEach(r -> remarks.add(
+                            r.name().toLowerCase(java.util.Locale.ROOT).replace('_', '-')));
         }
         put(o, "worstCaseV", b.worstCaseV());
         put(o, "rssV", b.rssV());

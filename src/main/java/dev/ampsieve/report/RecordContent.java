@@ -302,7 +302,7 @@ final class RecordContent {
                     Figures.atInput(s, t.inputV()),
                     share(t.outputV(), limit),
                     Double.isNaN(t.worstAtC()) ? Figures.NONE : Units.format(t.worstAtC(), Dimension.TEMPERATURE),
-                    (counted ? "" : "headroom only; ") + t.note()));
+                    (counted ? "" : "headroom only; ") + TermNotes.of(t)));
         }
         double g = s.sourceGain();
         rows.add(List.of(

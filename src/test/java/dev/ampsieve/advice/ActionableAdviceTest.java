@@ -232,7 +232,13 @@ class ActionableAdviceTest {
             double g = vfs * s.noiseGain() / (a + s.noiseGain());
             List<TermResult> terms = new ArrayList<>(b.terms());
             terms.add(new TermResult(
-                    "open-loop-gain", "open-loop gain", g, g / s.sourceGain(), Double.NaN, false, "test"));
+                    "open-loop-gain",
+                    "open-loop gain",
+                    g,
+                    g / s.sourceGain(),
+                    Double.NaN,
+                    false,
+                    dev.ampsieve.budget.TermWorking.plain("test")));
             double wc = b.worstCaseV() + g;
             Verdict v = wc <= b.limitV() ? Verdict.FITS : Verdict.NO_FIT;
             return new Budget(

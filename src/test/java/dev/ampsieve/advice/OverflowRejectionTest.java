@@ -53,7 +53,8 @@ class OverflowRejectionTest {
         assertEquals(List.of(Constraints.FINITE), r.failed());
         assertTrue(
                 r.reason()
-                        .startsWith("finite: too large to compute: noise (en 1.00e+191 V/√Hz, in 1.00 pA/√Hz; rms ∞ V"),
+                        // the noise term's operands, unworded (issue 11: only report words a term's note)
+                        .startsWith("finite: too large to compute: noise (en 1.00e+191 V/√Hz, in 1.00 pA/√Hz, rms ∞ V"),
                 r.reason());
         assertTrue(
                 r.reason().endsWith("; check these catalog and stage values for a wrong prefix or exponent"),

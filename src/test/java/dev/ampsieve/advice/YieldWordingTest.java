@@ -26,7 +26,8 @@ class YieldWordingTest {
 
     /** Limit 1 mV, yield 99.9 %, one-point trim allowed; one offset term of 0.6 mV (RSS 0.6 mV). */
     private static Budget budget(Stage s, Part p, YieldResult y, YieldResult afterTrim, Verdict v) {
-        TermResult t = new TermResult("offset", "initial offset", 0.6e-3, 0.6e-5, 25, false, "test");
+        TermResult t = new TermResult(
+                "offset", "initial offset", 0.6e-3, 0.6e-5, 25, false, dev.ampsieve.budget.TermWorking.plain("test"));
         return new Budget(
                 p,
                 s,

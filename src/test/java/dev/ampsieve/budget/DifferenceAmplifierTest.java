@@ -140,8 +140,12 @@ class DifferenceAmplifierTest {
         TermResult t = new CmrrTerm().evaluate(s, PartValues.of(partWithCmrr(100), s));
         assertEquals(1.919836e-3, t.outputV(), 1e-9, "output");
         assertEquals(191.9836e-6, t.inputV(), 1e-10, "at the source");
-        assertTrue(t.note().contains("resistors 1.82 mV") && t.note().contains("amplifier 100 µV"), t.note());
-        assertTrue(t.note().startsWith("dVcm 1.00 V at the source"), t.note());
+        // the operands are the two parts worked by hand above
+        assertEquals("cmrr-difference", t.working().formula());
+        assertEquals(1.0, t.working().value("dVcm"), 0.0);
+        assertEquals(1.819836e-3, t.working().value("resistors"), 1e-9);
+        assertEquals(100e-6, t.working().value("amplifier"), 1e-12);
+        assertEquals(100.0, t.working().value("CMRR"), 0.0);
     }
 
     @Test
@@ -163,7 +167,9 @@ class DifferenceAmplifierTest {
                 .build();
         TermResult t = new CmrrTerm().evaluate(s, PartValues.of(partWithCmrr(100), s));
         assertEquals(100e-6, t.outputV(), 1e-15);
-        assertEquals("dVcm 100 mV, CMRR 100 dB", t.note());
+        assertEquals("cmrr", t.working().formula());
+        assertEquals(0.1, t.working().value("dVcm"), 0.0);
+        assertEquals(100.0, t.working().value("CMRR"), 0.0);
     }
 
     @Test

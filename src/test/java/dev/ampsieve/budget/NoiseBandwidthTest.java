@@ -1,7 +1,6 @@
 package dev.ampsieve.budget;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.ampsieve.catalog.Noise;
 import dev.ampsieve.fixtures.PartFixture;
@@ -76,8 +75,7 @@ class NoiseBandwidthTest {
         assertEquals(14.0638e-9, NoiseModel.resistorDensity(10e3, NoiseTerm.resistorKelvin(s)), 0.00005e-9);
         Budget b = BudgetCalculator.compute(s, p.build());
         assertEquals(557.38e-9, b.noiseRmsV(), 0.005e-9);
-        assertTrue(
-                b.term("noise").note().contains("resistors at 85"),
-                b.term("noise").note());
+        // the resistors' temperature operand is the stage's hottest, 85 °C (set above)
+        assertEquals(85.0, b.term("noise").working().value("T"), 0.0);
     }
 }

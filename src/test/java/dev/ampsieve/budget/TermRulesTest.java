@@ -132,7 +132,9 @@ class TermRulesTest {
         Budget b = budget(s, p);
         assertEquals(1e-3, b.term("offset").outputV(), 1e-15);
         assertEquals(0.5e-3, b.term("drift").outputV(), 1e-15);
-        assertTrue(b.term("drift").note().contains("capped"));
+        assertTrue(b.term("drift").working().has(TermRemark.DRIFT_CAPPED));
+        // the cap's operand is the catalog's vos over temperature, 150 µV (set above)
+        assertEquals(150e-6, b.term("drift").working().value("vosOverTemperature"), 0.0);
         // under the cap nothing changes
         p.drift(null, 0.5e-6);
         assertEquals(10 * 0.5e-6 * 45, budget(s, p).term("drift").outputV(), 1e-15);

@@ -23,8 +23,21 @@ public final class Budgets {
     public static Budget budget(Stage s, Part p, double offsetV, double driftV, double trimmedWorstV, Verdict v) {
         List<TermResult> terms = new ArrayList<>(List.of(
                 new TermResult(
-                        "offset", "initial offset", offsetV, offsetV / s.sourceGain(), Double.NaN, false, "test"),
-                new TermResult("drift", "offset drift", driftV, driftV / s.sourceGain(), s.tMax(), false, "test")));
+                        "offset",
+                        "initial offset",
+                        offsetV,
+                        offsetV / s.sourceGain(),
+                        Double.NaN,
+                        false,
+                        dev.ampsieve.budget.TermWorking.plain("test")),
+                new TermResult(
+                        "drift",
+                        "offset drift",
+                        driftV,
+                        driftV / s.sourceGain(),
+                        s.tMax(),
+                        false,
+                        dev.ampsieve.budget.TermWorking.plain("test"))));
         terms.sort(Comparator.comparingDouble(TermResult::outputV).reversed());
         double wc = offsetV + driftV;
         return new Budget(

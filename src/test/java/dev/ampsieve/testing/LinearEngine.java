@@ -96,6 +96,7 @@ public final class LinearEngine implements BudgetFunction {
     }
 
     private static TermResult term(String key, String label, double v, double ng) {
-        return new TermResult(key, label, v, v / ng, Double.NaN, false, "linear test model");
+        return new TermResult(
+                key, label, v, v / ng, Double.NaN, false, dev.ampsieve.budget.TermWorking.plain("linear-test-model"));
     }
 }
