@@ -179,9 +179,9 @@ class ArchitectureTest {
 
     @Test
     void formattingInTheDomainPackagesOnlyShrinks() throws IOException {
-        // Units.format( calls below the report, counted after the term notes and the assumptions became data.
+        // Units.format( calls below the report, counted after the term notes, assumptions and constraints became data.
         // This number must only go down: when wording moves to report, lower it to the new count.
-        int ceiling = 163;
+        int ceiling = 124;
         int count = 0;
         for (String pkg : List.of("budget", "advice", "catalog", "stage", "search", "sheet", "stats", "record")) {
             Path dir = MAIN.resolve(pkg);

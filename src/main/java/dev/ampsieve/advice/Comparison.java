@@ -127,7 +127,7 @@ public record Comparison(Candidate a, Candidate b, List<TermDelta> terms, String
 
     private static String whyNot(Candidate c) {
         if (!c.constraintsMet()) {
-            return Rejected.of(c.budget()).reason();
+            return "fails " + String.join(", ", Rejected.of(c.budget()).failed());
         }
         if (c.budget().stage().criterion().kind() == dev.ampsieve.stage.Criterion.Kind.YIELD
                 && Phrases.yieldOf(c) != null) {

@@ -4,41 +4,28 @@ import dev.ampsieve.budget.Budget;
 import dev.ampsieve.budget.ConstraintResult;
 import dev.ampsieve.catalog.Part;
 import java.util.List;
-import java.util.stream.Collectors;
 
-/** A part that fails a hard constraint (supply, temperature grade, swing, slew, price ceiling). */
-public record Rejected(Part part, Budget budget, String reason) {
+/**
+ * A part that fails a hard constraint (supply, temperature grade, swing, slew, price ceiling). The
+ * failed constraints are facts; {@code report.ConstraintText} words the reason.
+ */
+public record Rejected(Part part, Budget budget) {
 
     public String id() {
         return part.id();
     }
 
     static Rejected of(Budget b) {
-        String reason = b.constraints().stream()
-                .filter(c -> !c.ok())
-                .map(c -> c.name() + ": " + c.detail())
-                .collect(Collectors.joining("; "));
-        return new Rejected(b.part(), b, reason);
+        return new Rejected(b.part(), b);
     }
 
-    /** The first failed constraint in full, the others by name: one line for a table. */
-    public String shortReason() {
-        List<ConstraintResult> failed =
-                budget.constraints().stream().filter(c -> !c.ok()).toList();
-        if (failed.size() <= 1) {
-            return reason;
-        }
-        return failed.get(0).name() + ": " + failed.get(0).detail() + "; also "
-                + failed.subList(1, failed.size()).stream()
-                        .map(ConstraintResult::name)
-                        .collect(Collectors.joining(", "));
+    /** The failed constraints, in the budget's order. */
+    public List<ConstraintResult> failedConstraints() {
+        return budget.constraints().stream().filter(c -> !c.ok()).toList();
     }
 
     /** Names of the failed constraints. */
     public List<String> failed() {
-        return budget.constraints().stream()
-                .filter(c -> !c.ok())
-                .map(ConstraintResult::name)
-                .toList();
+        return failedConstraints().stream().map(ConstraintResult::name).toList();
     }
 }

@@ -34,7 +34,8 @@ public record Sufficiency(boolean yes, Budget budget, double untrimmedErrorV, do
                     b,
                     err,
                     margin,
-                    "no: " + id + " fails a hard constraint: " + Rejected.of(b).reason());
+                    "no: " + id + " fails a hard constraint: "
+                            + String.join(", ", Rejected.of(b).failed()));
         }
         if (b.verdict() == Verdict.FITS) {
             return new Sufficiency(

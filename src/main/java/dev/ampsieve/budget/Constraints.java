@@ -6,7 +6,6 @@ import dev.ampsieve.catalog.Part;
 import dev.ampsieve.catalog.Range;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.units.Dimension;
-import dev.ampsieve.units.Units;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -76,9 +75,10 @@ public final class Constraints {
      */
     static List<ConstraintResult> transimpedance(Stage s, PartValues v) {
         if (Double.isNaN(v.gbw())) {
+            ConstraintFact none = new ConstraintFact.NotChecked(ConstraintFact.Missing.CATALOG_GBW);
             return List.of(
-                    new ConstraintResult(PHASE_MARGIN, true, "not checked: no GBW in the catalog"),
-                    new ConstraintResult(SIGNAL_BANDWIDTH, true, "not checked: no GBW in the catalog"));
+                    new ConstraintResult(ConstraintKind.PHASE_MARGIN, true, none),
+                    new ConstraintResult(ConstraintKind.SIGNAL_BANDWIDTH, true, none));
         }
         TransimpedanceResponse r = TransimpedanceResponse.of(s, v);
         double pm = r.phaseMargin();
@@ -86,44 +86,31 @@ public final class Constraints {
         double fH = s.bandHigh();
         boolean pmOk = pm >= MIN_PHASE_MARGIN;
         boolean bwOk = bw >= fH;
-        String ct = "Ct " + Units.format(r.ct(), Dimension.CAPACITANCE) + " (source "
-                + Units.format(r.ct() - v.inputCapacitance().bound(), Dimension.CAPACITANCE) + " + input "
-                + Units.format(v.inputCapacitance().bound(), Dimension.CAPACITANCE)
-                + (v.inputCapacitance().basis() != Basis.GUARANTEED ? ", assumed" : "") + ")";
-        String cfNow = "cf " + Units.format(r.cf(), Dimension.CAPACITANCE);
-        String advice = "";
+        ConstraintFact.CfRange range = null;
         if (!pmOk || !bwOk) {
             double least = r.cfForPhaseMargin(MIN_PHASE_MARGIN);
             double most = Double.isNaN(least) ? Double.NaN : largestCfFor(r, least, fH);
-            String graeme = "Graeme's estimate sqrt(Ct/(2π rf GBW)) = "
-                    + Units.format(TransimpedanceResponse.graemeCf(r.rf(), r.ct(), r.gbw()), Dimension.CAPACITANCE);
-            if (Double.isNaN(least) || Double.isNaN(most)) {
-                advice = "; no cf gives both " + Units.format(MIN_PHASE_MARGIN, Dimension.NUMBER)
-                        + "° and a -3 dB bandwidth of "
-                        + Units.format(fH, Dimension.FREQUENCY)
-                        + ": the part's GBW is too low for this rf and source capacitance"
-                        + (Double.isNaN(least)
-                                ? ""
-                                : " (cf " + Units.format(least, Dimension.CAPACITANCE) + " gives "
-                                        + Units.format(MIN_PHASE_MARGIN, Dimension.NUMBER) + "° and "
-                                        + Units.format(r.withCf(least).bandwidth(), Dimension.FREQUENCY) + "; " + graeme
-                                        + ")");
-            } else {
-                advice = "; cf from " + Units.format(least, Dimension.CAPACITANCE) + " to "
-                        + Units.format(most, Dimension.CAPACITANCE) + " gives both (" + graeme + ")";
-            }
+            range = new ConstraintFact.CfRange(
+                    least,
+                    most,
+                    Double.isNaN(least) ? Double.NaN : r.withCf(least).bandwidth(),
+                    TransimpedanceResponse.graemeCf(r.rf(), r.ct(), r.gbw()),
+                    MIN_PHASE_MARGIN,
+                    fH);
         }
-        String pmText = "needs a phase margin of at least " + Units.format(MIN_PHASE_MARGIN, Dimension.NUMBER)
-                + "° (common practice); "
-                + (Double.isNaN(pm)
-                        ? "the loop gain never reaches 1"
-                        : "part " + Units.format(pm, Dimension.NUMBER, 3) + "° at the loop crossover "
-                                + Units.format(r.crossover(), Dimension.FREQUENCY))
-                + " with " + cfNow + ", " + ct + (pmOk ? "" : advice);
-        String bwText = "needs a -3 dB signal bandwidth of at least band.high " + Units.format(fH, Dimension.FREQUENCY)
-                + "; part " + Units.format(bw, Dimension.FREQUENCY) + " with " + cfNow + (bwOk ? "" : advice);
+        ConstraintFact.PhaseMargin pmFact = new ConstraintFact.PhaseMargin(
+                MIN_PHASE_MARGIN,
+                pm,
+                r.crossover(),
+                r.cf(),
+                r.ct(),
+                v.inputCapacitance().bound(),
+                v.inputCapacitance().basis() != Basis.GUARANTEED,
+                pmOk ? null : range);
+        ConstraintFact.Bandwidth bwFact = new ConstraintFact.Bandwidth(fH, bw, r.cf(), bwOk ? null : range);
         return List.of(
-                new ConstraintResult(PHASE_MARGIN, pmOk, pmText), new ConstraintResult(SIGNAL_BANDWIDTH, bwOk, bwText));
+                new ConstraintResult(ConstraintKind.PHASE_MARGIN, pmOk, pmFact),
+                new ConstraintResult(ConstraintKind.SIGNAL_BANDWIDTH, bwOk, bwFact));
     }
 
     /**
@@ -152,49 +139,44 @@ public final class Constraints {
      * overflows is refused with its reason instead of stopping a whole ranking.
      */
     static ConstraintResult finite(List<TermResult> terms, double wc, double rss, double noiseRms, Trimmed trimmed) {
-        List<String> bad = new ArrayList<>();
+        List<TermResult> bad = new ArrayList<>();
         for (TermResult t : terms) {
             if (!Double.isFinite(t.outputV())) {
-                bad.add(t.label() + " (" + t.note() + ")");
+                bad.add(t);
             }
         }
+        List<String> totalsOf = List.of();
         if (bad.isEmpty()
                 && !(Double.isFinite(wc)
                         && Double.isFinite(rss)
                         && Double.isFinite(noiseRms)
                         && Double.isFinite(trimmed.worstCaseV())
                         && Double.isFinite(trimmed.rssV()))) {
-            bad.add("the totals of " + terms.stream().map(TermResult::label).toList());
+            totalsOf = terms.stream().map(TermResult::label).toList();
         }
-        if (bad.isEmpty()) {
-            return new ConstraintResult(FINITE, true, "every figure is a finite number");
-        }
-        return new ConstraintResult(
-                FINITE,
-                false,
-                "too large to compute: " + String.join("; ", bad)
-                        + "; check these catalog and stage values for a wrong prefix or exponent");
+        boolean ok = bad.isEmpty() && totalsOf.isEmpty();
+        return new ConstraintResult(ConstraintKind.FINITE, ok, new ConstraintFact.Finite(List.copyOf(bad), totalsOf));
     }
 
     static ConstraintResult supply(Stage s, Part p, List<Assumption> w) {
         if (s.supplyVoltage() == null) {
-            return new ConstraintResult(SUPPLY, true, "not checked: the stage gives no supply voltage");
+            return notChecked(ConstraintKind.SUPPLY, ConstraintFact.Missing.STAGE_SUPPLY);
         }
         if (p.supply() == null) {
             w.add(new Assumption.Note("supply", Assumption.Rule.NOT_CHECKED));
-            return new ConstraintResult(SUPPLY, true, "not checked: no supply range in the catalog");
+            return notChecked(ConstraintKind.SUPPLY, ConstraintFact.Missing.CATALOG_SUPPLY);
         }
         double lo = s.supplyVoltage() - s.supplyVariation();
         double hi = s.supplyVoltage() + s.supplyVariation();
-        return range(SUPPLY, lo, hi, p.supply(), Dimension.VOLTAGE, "supply", "rated");
+        return range(ConstraintKind.SUPPLY, lo, hi, p.supply(), Dimension.VOLTAGE, null);
     }
 
     static ConstraintResult temperature(Stage s, Part p, List<Assumption> w) {
         if (p.temperature() == null) {
             w.add(new Assumption.Note("temperature", Assumption.Rule.NOT_CHECKED));
-            return new ConstraintResult(TEMPERATURE, true, "not checked: no rated range in the catalog");
+            return notChecked(ConstraintKind.TEMPERATURE, ConstraintFact.Missing.CATALOG_TEMPERATURE);
         }
-        return range(TEMPERATURE, s.tMin(), s.tMax(), p.temperature(), Dimension.TEMPERATURE, "ambient", "rated");
+        return range(ConstraintKind.TEMPERATURE, s.tMin(), s.tMax(), p.temperature(), Dimension.TEMPERATURE, null);
     }
 
     /**
@@ -245,75 +227,45 @@ public final class Constraints {
     }
 
     static ConstraintResult commonMode(Stage s, Part p, List<Assumption> w) {
-        ConstraintResult r =
-                headroom(COMMON_MODE, "input common mode", neededCommonMode(s), 0.0, s, p.inputHeadroom(), w);
-        return switch (s.topology()) {
-            case NON_INVERTING, INVERTING, FOLLOWER, TRANSIMPEDANCE -> r;
-            case DIFFERENCE ->
-                s.supplyVoltage() == null
-                        ? r
-                        : new ConstraintResult(
-                                r.name(),
-                                r.ok(),
-                                r.detail()
-                                        + " (at the pins: the source's common mode x "
-                                        + Units.format(s.network().commonModeShare(), Dimension.NUMBER, 4)
-                                        + " about mid-supply, the reference taken at mid-supply)");
+        double share = switch (s.topology()) {
+            case NON_INVERTING, INVERTING, FOLLOWER, TRANSIMPEDANCE -> Double.NaN;
+            case DIFFERENCE -> s.network().commonModeShare();
         };
+        return headroom(ConstraintKind.COMMON_MODE, neededCommonMode(s), 0.0, share, s, p.inputHeadroom(), w);
     }
 
     static ConstraintResult outputSwing(Stage s, Part p, double dc, List<Assumption> w) {
-        return headroom(OUTPUT_SWING, "output", neededOutput(s), dc, s, p.outputHeadroom(), w);
+        return headroom(ConstraintKind.OUTPUT_SWING, neededOutput(s), dc, Double.NaN, s, p.outputHeadroom(), w);
     }
 
     private static ConstraintResult headroom(
-            String name, String what, Range need, double widen, Stage s, Headroom h, List<Assumption> w) {
+            ConstraintKind kind, Range need, double widen, double share, Stage s, Headroom h, List<Assumption> w) {
         if (need == null) {
-            return new ConstraintResult(
-                    name,
-                    true,
-                    "not checked: the stage gives no supply voltage"
-                            + (name.equals(OUTPUT_SWING) ? " or full-scale output" : ""));
+            return notChecked(
+                    kind,
+                    kind == ConstraintKind.OUTPUT_SWING
+                            ? ConstraintFact.Missing.STAGE_SUPPLY_OR_FULL_SCALE
+                            : ConstraintFact.Missing.STAGE_SUPPLY);
         }
         if (s.supplyVoltage() == null) {
-            return new ConstraintResult(name, true, "not checked: the stage gives no supply voltage");
+            return notChecked(kind, ConstraintFact.Missing.STAGE_SUPPLY);
         }
         boolean assumed = h == null;
         if (assumed) {
             h = new Headroom(Assumed.HEADROOM_V, Assumed.HEADROOM_V);
             w.add(new Assumption.Headroom(
-                    name.equals(OUTPUT_SWING) ? CatalogKeys.OUTPUT_HEADROOM : CatalogKeys.INPUT_HEADROOM,
-                    name,
+                    kind == ConstraintKind.OUTPUT_SWING ? CatalogKeys.OUTPUT_HEADROOM : CatalogKeys.INPUT_HEADROOM,
+                    kind.key(),
                     Assumed.HEADROOM_V));
         }
         // the lowest supply of the stage leaves the least room at the top
         double vLow = s.supplyVoltage() - s.supplyVariation();
         Range offer = new Range(h.low(), vLow - h.high());
-        Range needed = new Range(need.min() - widen, need.max() + widen);
-        ConstraintResult r = range(name, needed.min(), needed.max(), offer, Dimension.VOLTAGE, what, "reachable");
+        ConstraintFact.HeadroomFacts facts =
+                new ConstraintFact.HeadroomFacts(vLow, h.low(), h.high(), assumed, Math.max(widen, 0), share);
+        ConstraintResult r = range(kind, need.min() - widen, need.max() + widen, offer, Dimension.VOLTAGE, facts);
         if (offer.min() > offer.max()) {
-            // "reachable 3.00 V to 1.75 V" reads as a typo: say why there is no range at all
-            String v = Units.format(vLow, Dimension.VOLTAGE);
-            r = new ConstraintResult(
-                    r.name(),
-                    false,
-                    r.detail()
-                            .replace(
-                                    "part reachable " + Units.format(offer.min(), Dimension.VOLTAGE) + " to "
-                                            + Units.format(offer.max(), Dimension.VOLTAGE),
-                                    "part reachable nowhere on a " + v + " supply (headroom "
-                                            + Units.format(h.low(), Dimension.VOLTAGE) + " from the low rail plus "
-                                            + Units.format(h.high(), Dimension.VOLTAGE) + " from the high rail)"));
-        }
-        if (assumed) {
-            r = new ConstraintResult(r.name(), r.ok(), r.detail() + " (headroom assumed, not in the catalog)");
-        }
-        if (widen > 0) {
-            return new ConstraintResult(
-                    r.name(),
-                    r.ok(),
-                    r.detail() + " (includes " + Units.format(widen, Dimension.VOLTAGE)
-                            + " of DC error an AC-coupled stage still carries)");
+            return new ConstraintResult(kind, false, r.fact());
         }
         return r;
     }
@@ -329,61 +281,40 @@ public final class Constraints {
     static ConstraintResult slew(Stage s, Part p, List<Assumption> w) {
         double need = neededSlew(s);
         if (Double.isNaN(need)) {
-            return new ConstraintResult(SLEW, true, "not checked: the stage gives no full-scale output");
+            return notChecked(ConstraintKind.SLEW, ConstraintFact.Missing.STAGE_FULL_SCALE);
         }
         if (p.slew() == null) {
             w.add(new Assumption.SlewNotChecked(need));
-            return new ConstraintResult(SLEW, true, "not checked: no slew rate in the catalog");
+            return notChecked(ConstraintKind.SLEW, ConstraintFact.Missing.CATALOG_SLEW);
         }
         boolean ok = p.slew() >= need;
-        String d = "needs " + Units.format(need, Dimension.SLEW_RATE) + " (2π fH VFS); part "
-                + Units.format(p.slew(), Dimension.SLEW_RATE)
-                + (ok ? "" : "; short by " + Units.format(need - p.slew(), Dimension.SLEW_RATE));
-        return new ConstraintResult(SLEW, ok, d);
+        return new ConstraintResult(
+                ConstraintKind.SLEW, ok, new ConstraintFact.Slew(need, p.slew(), ok ? 0 : need - p.slew()));
     }
 
     static ConstraintResult price(Stage s, Part p, List<Assumption> w) {
         if (s.maxPrice() == null) {
-            return new ConstraintResult(PRICE, true, "no price ceiling");
+            return new ConstraintResult(ConstraintKind.PRICE, true, new ConstraintFact.NoCeiling());
         }
         if (p.price() == null) {
             w.add(new Assumption.Note("price", Assumption.Rule.NOT_CHECKED));
-            return new ConstraintResult(PRICE, true, "not checked: no price in the catalog");
+            return notChecked(ConstraintKind.PRICE, ConstraintFact.Missing.CATALOG_PRICE);
         }
         double unit = p.unitPrice(s.quantity());
         boolean ok = unit <= s.maxPrice();
-        String cur = p.price().currency();
-        String d = String.format(java.util.Locale.ROOT, "ceiling %.2f %s; part %.2f %s", s.maxPrice(), cur, unit, cur)
-                + (ok ? "" : String.format(java.util.Locale.ROOT, "; over by %.2f %s", unit - s.maxPrice(), cur));
-        return new ConstraintResult(PRICE, ok, d);
+        return new ConstraintResult(
+                ConstraintKind.PRICE,
+                ok,
+                new ConstraintFact.Price(s.maxPrice(), unit, p.price().currency(), ok ? 0 : unit - s.maxPrice()));
+    }
+
+    private static ConstraintResult notChecked(ConstraintKind k, ConstraintFact.Missing m) {
+        return new ConstraintResult(k, true, new ConstraintFact.NotChecked(m));
     }
 
     private static ConstraintResult range(
-            String name, double lo, double hi, Range offer, Dimension d, String needWhat, String offerWhat) {
-        boolean ok = lo >= offer.min() && hi <= offer.max();
-        StringBuilder sb = new StringBuilder();
-        sb.append("needs ").append(needWhat).append(' ').append(Units.format(lo, d));
-        if (hi != lo) {
-            sb.append(" to ").append(Units.format(hi, d));
-        }
-        sb.append("; part ")
-                .append(offerWhat)
-                .append(' ')
-                .append(Units.format(offer.min(), d))
-                .append(" to ")
-                .append(Units.format(offer.max(), d));
-        if (!ok) {
-            if (lo < offer.min()) {
-                sb.append("; short by ")
-                        .append(Units.format(offer.min() - lo, d))
-                        .append(" at the low end");
-            }
-            if (hi > offer.max()) {
-                sb.append("; short by ")
-                        .append(Units.format(hi - offer.max(), d))
-                        .append(" at the high end");
-            }
-        }
-        return new ConstraintResult(name, ok, sb.toString());
+            ConstraintKind kind, double lo, double hi, Range offer, Dimension d, ConstraintFact.HeadroomFacts h) {
+        ConstraintFact.Span span = ConstraintFact.Span.of(lo, hi, offer, d, h);
+        return new ConstraintResult(kind, span.met(), span);
     }
 }

@@ -91,7 +91,10 @@ public final class SelfHeatingTerm implements ErrorTerm {
         }
         boolean ok = d.hot() <= v.ratedHigh();
         return List.of(new ConstraintResult(
-                Constraints.DIE_TEMPERATURE, ok, ConstraintWords.dieTemperature(s, d, v.ratedHigh(), ok)));
+                ConstraintKind.DIE_TEMPERATURE,
+                ok,
+                new ConstraintFact.Die(
+                        d.hot(), s.tMax(), d.thetaJa(), d.power(), v.ratedHigh(), ok ? 0 : d.hot() - v.ratedHigh())));
     }
 
     private static double driftPart(Stage s, PartValues v, double dT) {

@@ -6,6 +6,7 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.ampsieve.budget.Budget;
 import dev.ampsieve.budget.BudgetCalculator;
+import dev.ampsieve.budget.ConstraintFact;
 import dev.ampsieve.budget.ConstraintResult;
 import dev.ampsieve.budget.NoiseModel;
 import dev.ampsieve.budget.TermResult;
@@ -105,7 +106,9 @@ public final class BudgetJson {
             ObjectNode n = cs.addObject();
             n.put("name", c.name());
             n.put("ok", c.ok());
-            n.put("detail", c.detail());
+            n.put("checked", c.checked());
+            n.put("detail", ConstraintText.detail(c));
+            constraintFacts(n.putObject("facts"), c.fact());
         }
         AssumptionText.put(o, b);
         o.put("caution", Caution.TEXT);
@@ -134,6 +137,77 @@ public final class BudgetJson {
             return MAPPER.writeValueAsString(o) + "\n";
         } catch (JsonProcessingException e) {
             throw new IllegalStateException("a JSON tree failed to print", e);
+        }
+    }
+
+    /** A constraint's facts in SI units (temperatures in °C), each kind with its own fields. */
+    private static void constraintFacts(ObjectNode f, ConstraintFact fact) {
+        if (fact instanceof ConstraintFact.NotChecked n) {
+            f.put(
+                    "missing",
+                    n.missing().name().toLowerCase(java.util.Locale.ROOT).replace('_', '-'));
+        } else if (fact instanceof ConstraintFact.Span sp) {
+            f.put("unit", sp.dimension().symbol());
+            put(f, "needLow", sp.needLow());
+            put(f, "needHigh", sp.needHigh());
+            put(f, "partLow", sp.partLow());
+            put(f, "partHigh", sp.partHigh());
+            put(f, "shortLow", sp.shortLow());
+            put(f, "shortHigh", sp.shortHigh());
+            ConstraintFact.HeadroomFacts h = sp.headroom();
+            if (h != null) {
+                put(f, "lowestSupplyV", h.lowestSupply());
+                put(f, "headroomLowV", h.fromLow());
+                put(f, "headroomHighV", h.fromHigh());
+                f.put("headroomAssumed", h.assumed());
+                put(f, "dcErrorV", h.dcWiden());
+                if (!Double.isNaN(h.commonModeShare())) {
+                    put(f, "commonModeShare", h.commonModeShare());
+                }
+            }
+        } else if (fact instanceof ConstraintFact.Slew sl) {
+            put(f, "needVPerS", sl.need());
+            put(f, "partVPerS", sl.part());
+            put(f, "shortVPerS", sl.shortfall());
+        } else if (fact instanceof ConstraintFact.Price p) {
+            put(f, "ceiling", p.ceiling());
+            put(f, "unitPrice", p.unit());
+            f.put("currency", p.currency());
+            put(f, "over", p.over());
+        } else if (fact instanceof ConstraintFact.Die d) {
+            put(f, "dieHotC", d.hot());
+            put(f, "ambientC", d.ambient());
+            put(f, "thetaJaCPerW", d.thetaJa());
+            put(f, "powerW", d.powerW());
+            put(f, "ratedHighC", d.ratedHigh());
+            put(f, "tooHotC", d.tooHot());
+        } else if (fact instanceof ConstraintFact.Finite fin) {
+            ArrayNode a = f.putArray("overflowed");
+            fin.overflowed().forEach(t -> a.add(t.key()));
+            ArrayNode tot = f.putArray("totalsOf");
+            fin.totalsOf().forEach(tot::add);
+        } else if (fact instanceof ConstraintFact.PhaseMargin pm) {
+            put(f, "minimumDeg", pm.minimum());
+            put(f, "marginDeg", pm.margin());
+            put(f, "crossoverHz", pm.crossover());
+            put(f, "cfF", pm.cf());
+            put(f, "ctF", pm.ct());
+            put(f, "inputCF", pm.inputC());
+            f.put("inputCAssumed", pm.inputCAssumed());
+            cfRange(f, pm.cfRange());
+        } else if (fact instanceof ConstraintFact.Bandwidth bw) {
+            put(f, "bandHighHz", bw.bandHigh());
+            put(f, "bandwidthHz", bw.bandwidth());
+            put(f, "cfF", bw.cf());
+            cfRange(f, bw.cfRange());
+        }
+    }
+
+    private static void cfRange(ObjectNode f, ConstraintFact.CfRange r) {
+        if (r != null) {
+            put(f, "cfLeastF", r.least());
+            put(f, "cfMostF", r.most());
+            put(f, "graemeCfF", r.graeme());
         }
     }
 

@@ -184,7 +184,7 @@ public final class BudgetText {
         TextTable ct = new TextTable().left("").left("").flex("").wrapFlex();
         for (ConstraintResult c : b.constraints()) {
             // a constraint that could not be checked is not reported as met
-            ct.row(!c.ok() ? "FAIL" : c.detail().startsWith("not checked") ? "--" : "ok", c.name(), c.detail());
+            ct.row(!c.ok() ? "FAIL" : !c.checked() ? "--" : "ok", c.name(), ConstraintText.detail(c));
         }
         List<String> rows = ct.lines(width - 2);
         for (String row : rows.subList(1, rows.size())) { // the first line is the (empty) heading

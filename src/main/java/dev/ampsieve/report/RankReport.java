@@ -171,7 +171,7 @@ public final class RankReport {
             o.append('\n').append("Rejected (a hard constraint fails; --json or --csv lists every failure)\n");
             TextTable t = new TextTable().left("part").flex("reason").wrapFlex();
             for (Rejected x : r.rejected()) {
-                t.row(x.id(), x.shortReason());
+                t.row(x.id(), ConstraintText.shortReason(x.failedConstraints()));
             }
             t.lines(width).forEach(l -> o.append(l).append('\n'));
         }
@@ -329,7 +329,7 @@ public final class RankReport {
             cells[CSV_COLUMNS.indexOf("currency")] =
                     csv(x.part().price() == null ? "" : x.part().price().currency());
             cells[CSV_COLUMNS.indexOf("pareto")] = "false";
-            cells[CSV_COLUMNS.indexOf("reason")] = csv(x.reason());
+            cells[CSV_COLUMNS.indexOf("reason")] = csv(ConstraintText.reason(x.failedConstraints()));
             row(o, cells);
         }
         return o.toString();
@@ -389,7 +389,7 @@ public final class RankReport {
         for (Rejected x : r.rejected()) {
             ObjectNode n = rej.addObject();
             n.put("part", x.id());
-            n.put("reason", x.reason());
+            n.put("reason", ConstraintText.reason(x.failedConstraints()));
         }
         ArrayNode pareto = o.putArray("pareto");
         front(r, allOnFront).forEach(c -> pareto.add(c.id()));

@@ -210,7 +210,7 @@ final class RecordContent {
         if (!r.rejected().isEmpty()) {
             List<List<String>> rej = new ArrayList<>();
             for (Rejected x : r.rejected()) {
-                rej.add(List.of(x.id(), x.shortReason()));
+                rej.add(List.of(x.id(), ConstraintText.shortReason(x.failedConstraints())));
             }
             o.add(new RecordDoc.Heading(3, "Rejected: a hard constraint fails", null));
             o.add(table(List.of("part", "reason"), rej, false));
@@ -353,9 +353,7 @@ final class RecordContent {
         List<List<String>> cons = new ArrayList<>();
         for (ConstraintResult k : b.constraints()) {
             cons.add(List.of(
-                    k.name(),
-                    !k.ok() ? "FAIL" : k.detail().startsWith("not checked") ? "not checked" : "ok",
-                    k.detail()));
+                    k.name(), !k.ok() ? "FAIL" : !k.checked() ? "not checked" : "ok", ConstraintText.detail(k)));
         }
         o.add(new RecordDoc.Heading(3, "Hard constraints", null));
         o.add(table(List.of("constraint", "result", "detail"), cons, false));

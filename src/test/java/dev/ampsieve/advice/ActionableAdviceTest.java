@@ -9,6 +9,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.ampsieve.budget.Budget;
 import dev.ampsieve.budget.BudgetCalculator;
+import dev.ampsieve.budget.ConstraintFact;
+import dev.ampsieve.budget.ConstraintKind;
 import dev.ampsieve.budget.ConstraintResult;
 import dev.ampsieve.budget.Constraints;
 import dev.ampsieve.budget.TermResult;
@@ -24,6 +26,7 @@ import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.Topology;
 import dev.ampsieve.stage.Trim;
 import dev.ampsieve.testing.LinearEngine;
+import dev.ampsieve.units.Dimension;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -327,7 +330,11 @@ class ActionableAdviceTest {
             Range need = Constraints.neededOutput(s);
             boolean ok = need.min() >= 0.4 && need.max() <= s.supplyVoltage() - 0.4;
             List<ConstraintResult> cs = new ArrayList<>(b.constraints());
-            cs.add(new ConstraintResult(Constraints.OUTPUT_SWING, ok, "test"));
+            cs.add(new ConstraintResult(
+                    ConstraintKind.OUTPUT_SWING,
+                    ok,
+                    ConstraintFact.Span.of(
+                            need.min(), need.max(), new Range(0.4, s.supplyVoltage() - 0.4), Dimension.VOLTAGE, null)));
             Verdict v = ok && wc <= b.limitV() ? Verdict.FITS : Verdict.NO_FIT;
             return new Budget(
                     p,

@@ -9,10 +9,14 @@ import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.ampsieve.budget.Budget;
+import dev.ampsieve.budget.ConstraintFact;
+import dev.ampsieve.budget.ConstraintKind;
+import dev.ampsieve.budget.ConstraintResult;
 import dev.ampsieve.budget.Verdict;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.testing.Budgets;
+import dev.ampsieve.units.Dimension;
 import org.junit.jupiter.api.Test;
 
 /** Limit 1 mV at the output, worst-case criterion, quantity 1000. */
@@ -104,7 +108,14 @@ class ComparisonTest {
                         + " initial offset (900 µV).",
                 over.answer());
 
-        Sufficiency rejected = Sufficiency.of(Budgets.rejected(s, b, "supply", "needs 5 V, rated 9 V to 36 V"));
-        assertEquals("no: B fails a hard constraint: supply: needs 5 V, rated 9 V to 36 V", rejected.answer());
+        // a 5 V supply against a part rated 9 V to 36 V: 4 V short at the low end
+        Sufficiency rejected = Sufficiency.of(Budgets.rejected(
+                s,
+                b,
+                new ConstraintResult(
+                        ConstraintKind.SUPPLY,
+                        false,
+                        new ConstraintFact.Span(5, 5, 9, 36, Dimension.VOLTAGE, 4, 0, null))));
+        assertEquals("no: B fails a hard constraint: supply", rejected.answer());
     }
 }

@@ -11,6 +11,7 @@ import dev.ampsieve.budget.Verdict;
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.CatalogLoader;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.report.ConstraintText;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.StageLoader;
 import dev.ampsieve.testing.DemoCatalog;
@@ -52,13 +53,14 @@ class OverflowRejectionTest {
                 .orElseThrow();
         assertEquals(List.of(Constraints.FINITE), r.failed());
         assertTrue(
-                r.reason()
+                ConstraintText.reason(r.failedConstraints())
                         // the noise term's operands, unworded (issue 11: only report words a term's note)
                         .startsWith("finite: too large to compute: noise (en 1.00e+191 V/√Hz, in 1.00 pA/√Hz, rms ∞ V"),
-                r.reason());
+                ConstraintText.reason(r.failedConstraints()));
         assertTrue(
-                r.reason().endsWith("; check these catalog and stage values for a wrong prefix or exponent"),
-                r.reason());
+                ConstraintText.reason(r.failedConstraints())
+                        .endsWith("; check these catalog and stage values for a wrong prefix or exponent"),
+                ConstraintText.reason(r.failedConstraints()));
         // the other 48 parts rank exactly as before
         assertEquals(
                 without.candidates().stream().map(Candidate::id).toList(),

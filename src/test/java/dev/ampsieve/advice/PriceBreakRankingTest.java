@@ -9,6 +9,7 @@ import dev.ampsieve.budget.Budget;
 import dev.ampsieve.budget.Verdict;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.catalog.Price;
+import dev.ampsieve.report.ConstraintText;
 import dev.ampsieve.stage.Stage;
 import java.util.List;
 import org.junit.jupiter.api.Test;
@@ -76,10 +77,9 @@ class PriceBreakRankingTest {
         // at 10 units volume costs 2.00, over the 1.80 ceiling by 0.20
         assertEquals(
                 "ceiling 1.80 USD; part 2.00 USD; over by 0.20 USD",
-                b.constraints().stream()
+                ConstraintText.detail(b.constraints().stream()
                         .filter(c -> c.name().equals("price"))
                         .findFirst()
-                        .orElseThrow()
-                        .detail());
+                        .orElseThrow()));
     }
 }

@@ -8,12 +8,17 @@ import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.ampsieve.budget.Budget;
+import dev.ampsieve.budget.ConstraintFact;
+import dev.ampsieve.budget.ConstraintKind;
+import dev.ampsieve.budget.ConstraintResult;
 import dev.ampsieve.budget.Verdict;
 import dev.ampsieve.catalog.Architecture;
 import dev.ampsieve.catalog.InputType;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.report.ConstraintText;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.testing.Budgets;
+import dev.ampsieve.units.Dimension;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -280,12 +285,21 @@ class RankerTest {
         Stage s = stage().build();
         Part hot = part("HOT").price(0.10).build();
         Map<Part, Budget> m = precAndCheap(s, Verdict.NO_FIT);
-        m.put(hot, Budgets.rejected(s, hot, "temperature", "needs 0..70 °C, rated 0..50 °C (20 °C short)"));
+        // 0 to 70 °C ambient against a part rated 0 to 50 °C: 20 °C short at the high end
+        m.put(
+                hot,
+                Budgets.rejected(
+                        s,
+                        hot,
+                        new ConstraintResult(
+                                ConstraintKind.TEMPERATURE,
+                                false,
+                                new ConstraintFact.Span(0, 70, 0, 50, Dimension.TEMPERATURE, 0, 20, null))));
         Ranking r = rank(s, m);
         assertEquals(1, r.rejected().size());
         assertEquals(
-                "temperature: needs 0..70 °C, rated 0..50 °C (20 °C short)",
-                r.rejected().get(0).reason());
+                "temperature: needs ambient 0 °C to 70 °C; part rated 0 °C to 50 °C; short by 20 °C at the high end",
+                ConstraintText.reason(r.rejected().get(0).failedConstraints()));
         assertTrue(r.candidates().stream().noneMatch(c -> c.id().equals("HOT")));
         assertTrue(!r.paretoIds().contains("HOT"));
     }

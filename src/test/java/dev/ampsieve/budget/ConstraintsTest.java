@@ -10,6 +10,8 @@ import dev.ampsieve.catalog.Price;
 import dev.ampsieve.catalog.Range;
 import dev.ampsieve.fixtures.PartFixture;
 import dev.ampsieve.fixtures.StageFixture;
+import dev.ampsieve.report.ConstraintText;
+import dev.ampsieve.units.Dimension;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 
@@ -35,7 +37,17 @@ class ConstraintsTest {
         p.supply = new Range(2.7, 5.5);
         ConstraintResult c = get(budget(s, p), "supply");
         assertFalse(c.ok());
-        assertTrue(c.detail().contains("short by 7.00 V at the high end"), c.detail());
+        // needs 12 +/- 0.5 = 11.5 .. 12.5 V against 2.7 .. 5.5 V: 12.5 - 5.5 = 7 V short at the top only
+        ConstraintFact.Span f = (ConstraintFact.Span) c.fact();
+        assertEquals(ConstraintKind.SUPPLY, c.kind());
+        assertTrue(c.checked());
+        assertEquals(11.5, f.needLow(), 1e-12);
+        assertEquals(12.5, f.needHigh(), 1e-12);
+        assertEquals(2.7, f.partLow(), 1e-12);
+        assertEquals(5.5, f.partHigh(), 1e-12);
+        assertEquals(Dimension.VOLTAGE, f.dimension());
+        assertEquals(0, f.shortLow(), 0);
+        assertEquals(7.0, f.shortHigh(), 1e-12);
         p.supply = new Range(4.5, 36);
         assertTrue(get(budget(s, p), "supply").ok());
     }
@@ -47,7 +59,11 @@ class ConstraintsTest {
         p.temperature = new Range(-40, 85);
         ConstraintResult c = get(budget(s, p), "temperature");
         assertFalse(c.ok());
-        assertTrue(c.detail().contains("short by 40 °C at the high end"), c.detail());
+        // -40 .. 125 °C against a -40 .. 85 °C grade: 125 - 85 = 40 °C short at the top
+        ConstraintFact.Span f = (ConstraintFact.Span) c.fact();
+        assertEquals(Dimension.TEMPERATURE, f.dimension());
+        assertEquals(0, f.shortLow(), 0);
+        assertEquals(40, f.shortHigh(), 1e-12);
     }
 
     @Test
@@ -61,7 +77,14 @@ class ConstraintsTest {
         p.inHead = new Headroom(0, 1.5);
         ConstraintResult c = get(budget(s, p), "common-mode");
         assertFalse(c.ok());
-        assertTrue(c.detail().contains("short by 1.00 V at the high end"), c.detail());
+        ConstraintFact.Span f = (ConstraintFact.Span) c.fact();
+        assertEquals(0.5, f.needLow(), 1e-12);
+        assertEquals(4.5, f.needHigh(), 1e-12);
+        assertEquals(0, f.partLow(), 1e-12);
+        assertEquals(3.5, f.partHigh(), 1e-12);
+        assertEquals(1.0, f.shortHigh(), 1e-12); // 4.5 - 3.5
+        assertEquals(1.5, f.headroom().fromHigh(), 0);
+        assertFalse(f.headroom().assumed());
         s.cmRange = new Range(1, 3);
         assertTrue(get(budget(s, p), "common-mode").ok());
     }
@@ -78,12 +101,17 @@ class ConstraintsTest {
         ConstraintResult c = get(budget(s, p), "common-mode");
         assertFalse(c.ok());
         assertTrue(
-                c.detail()
+                ConstraintText.detail(c)
                         .contains("part reachable nowhere on a 5.00 V supply (headroom 3.00 V from the low rail"
                                 + " plus 2.50 V from the high rail)"),
-                c.detail());
-        assertTrue(c.detail().contains("short by 500 mV at the low end"), c.detail());
-        assertFalse(c.detail().contains("3.00 V to 2.50 V"), c.detail());
+                ConstraintText.detail(c));
+        ConstraintFact.Span f = (ConstraintFact.Span) c.fact();
+        assertTrue(f.unreachable());
+        assertEquals(5.0, f.headroom().lowestSupply(), 1e-12);
+        assertEquals(0.5, f.shortLow(), 1e-12); // 3 - 2.5
+        assertEquals(0, f.shortHigh(), 0); // 2.5 is not above 5 - 2.5
+        assertTrue(ConstraintText.detail(c).contains("short by 500 mV at the low end"), ConstraintText.detail(c));
+        assertFalse(ConstraintText.detail(c).contains("3.00 V to 2.50 V"), ConstraintText.detail(c));
     }
 
     @Test
@@ -96,8 +124,10 @@ class ConstraintsTest {
         PartFixture p = PartFixture.ideal();
         p.inHead = null;
         Budget b = budget(s, p);
-        assertTrue(get(b, "common-mode").ok(), get(b, "common-mode").detail());
-        assertTrue(get(b, "common-mode").detail().contains("assumed"));
+        assertTrue(get(b, "common-mode").ok(), ConstraintText.detail(get(b, "common-mode")));
+        assertTrue(
+                ((ConstraintFact.Span) get(b, "common-mode").fact()).headroom().assumed());
+        assertTrue(ConstraintText.detail(get(b, "common-mode")).contains("assumed"));
         // Assumed.HEADROOM_V: 1.5 V from each rail (the same figure the reach above is worked with)
         assertTrue(
                 b.assumptions().contains(new Assumption.Headroom("input-headroom", "common-mode", 1.5)),
@@ -118,12 +148,16 @@ class ConstraintsTest {
         Budget b = budget(s, p);
         ConstraintResult out = get(b, "output-swing");
         assertFalse(out.ok());
-        assertTrue(out.detail().contains("at the low end"), out.detail());
+        assertTrue(ConstraintText.detail(out).contains("at the low end"), ConstraintText.detail(out));
         // 2π x 100 kHz x 4 V = 2.51 V/µs (Franco4 ch. 6 [from memory], full-power bandwidth)
         assertEquals(2 * Math.PI * 100e3 * 4, Constraints.neededSlew(s.build()), 1e-6);
         ConstraintResult slew = get(b, "slew");
         assertFalse(slew.ok());
-        assertTrue(slew.detail().contains("2.51 V/µs"), slew.detail());
+        ConstraintFact.Slew sf = (ConstraintFact.Slew) slew.fact();
+        assertEquals(2.513274e6, sf.need(), 1); // 2π x 100 kHz x 4 V, worked by hand
+        assertEquals(2e6, sf.part(), 0);
+        assertEquals(0.513274e6, sf.shortfall(), 1);
+        assertTrue(ConstraintText.detail(slew).contains("2.51 V/µs"), ConstraintText.detail(slew));
     }
 
     @Test
@@ -134,7 +168,12 @@ class ConstraintsTest {
         p.price = new Price(3.1, 100, "EUR");
         ConstraintResult c = get(budget(s, p), "price");
         assertFalse(c.ok());
-        assertEquals("ceiling 2.00 EUR; part 3.10 EUR; over by 1.10 EUR", c.detail());
+        ConstraintFact.Price f = (ConstraintFact.Price) c.fact();
+        assertEquals(2.0, f.ceiling(), 0);
+        assertEquals(3.1, f.unit(), 1e-12);
+        assertEquals("EUR", f.currency());
+        assertEquals(1.1, f.over(), 1e-12); // 3.10 - 2.00
+        assertEquals("ceiling 2.00 EUR; part 3.10 EUR; over by 1.10 EUR", ConstraintText.detail(c));
     }
 
     @Test
@@ -145,7 +184,8 @@ class ConstraintsTest {
         p.slew = null;
         Budget b = budget(s, p);
         assertTrue(get(b, "slew").ok());
-        assertTrue(get(b, "slew").detail().startsWith("not checked"));
+        assertFalse(get(b, "slew").checked());
+        assertTrue(ConstraintText.detail(get(b, "slew")).startsWith("not checked"));
         // needed slew 2 pi fH VFS = 2 pi x 10 Hz x 1 V = 62.831853 V/s (by hand; the fixture's fH is 10 Hz)
         Assumption slew = b.assumptions().stream()
                 .filter(a -> a instanceof Assumption.SlewNotChecked)

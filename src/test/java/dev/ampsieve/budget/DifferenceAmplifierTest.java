@@ -7,6 +7,7 @@ import dev.ampsieve.catalog.MinTyp;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.catalog.Range;
 import dev.ampsieve.fixtures.PartFixture;
+import dev.ampsieve.report.ConstraintText;
 import dev.ampsieve.stage.Board;
 import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.stage.Difference;
@@ -205,13 +206,15 @@ class DifferenceAmplifierTest {
         List<Assumption> w = new ArrayList<>();
         ConstraintResult r =
                 Constraints.commonMode(stage(0.15, new Range(0.5, 4.5), 5.0, 0, 0, 25, 25, Trim.NONE), p.build(), w);
-        assertTrue(!r.ok() && r.detail().contains("short by 18.2 mV at the low end"), r.detail());
         assertTrue(
-                r.detail()
+                !r.ok() && ConstraintText.detail(r).contains("short by 18.2 mV at the low end"),
+                ConstraintText.detail(r));
+        assertTrue(
+                ConstraintText.detail(r)
                         .contains(
                                 "(at the pins: the source's common mode x 0.9091 about mid-supply, the reference taken"
                                         + " at mid-supply)"),
-                r.detail());
+                ConstraintText.detail(r));
     }
 
     @Test

@@ -9,6 +9,7 @@ import dev.ampsieve.catalog.MinTyp;
 import dev.ampsieve.catalog.Range;
 import dev.ampsieve.fixtures.PartFixture;
 import dev.ampsieve.fixtures.StageFixture;
+import dev.ampsieve.report.ConstraintText;
 import dev.ampsieve.stage.Stage;
 import org.junit.jupiter.api.Test;
 
@@ -97,8 +98,8 @@ class FullScalePeakTest {
         p.outHead = new Headroom(0.6, 0.1);
         ConstraintResult c = get(BudgetCalculator.compute(s, p.build()), "output-swing");
         assertFalse(c.ok());
-        assertTrue(c.detail().contains("short by 100 mV at the low end"), c.detail());
-        assertFalse(c.detail().contains("at the high end"), c.detail());
+        assertTrue(ConstraintText.detail(c).contains("short by 100 mV at the low end"), ConstraintText.detail(c));
+        assertFalse(ConstraintText.detail(c).contains("at the high end"), ConstraintText.detail(c));
     }
 
     @Test

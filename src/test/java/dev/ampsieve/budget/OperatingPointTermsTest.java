@@ -14,6 +14,7 @@ import dev.ampsieve.catalog.Spread;
 import dev.ampsieve.catalog.TestConditions;
 import dev.ampsieve.fixtures.PartFixture;
 import dev.ampsieve.fixtures.StageFixture;
+import dev.ampsieve.report.ConstraintText;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.Trim;
 import org.junit.jupiter.api.Nested;
@@ -289,8 +290,15 @@ class OperatingPointTermsTest {
                     .findFirst()
                     .orElseThrow();
             assertFalse(c.ok());
-            assertTrue(c.detail().startsWith("die up to 142.5 °C"), c.detail());
-            assertTrue(c.detail().endsWith("17.5 °C too hot"), c.detail());
+            ConstraintFact.Die d = (ConstraintFact.Die) c.fact();
+            assertEquals(142.5, d.hot(), 1e-9);
+            assertEquals(70, d.ambient(), 0);
+            assertEquals(1000, d.thetaJa(), 0);
+            assertEquals(72.5e-3, d.powerW(), 1e-12);
+            assertEquals(125, d.ratedHigh(), 0);
+            assertEquals(17.5, d.tooHot(), 1e-9);
+            assertTrue(ConstraintText.detail(c).startsWith("die up to 142.5 °C"), ConstraintText.detail(c));
+            assertTrue(ConstraintText.detail(c).endsWith("17.5 °C too hot"), ConstraintText.detail(c));
             assertEquals(Verdict.NO_FIT, b.verdict());
         }
 

@@ -2,12 +2,14 @@ package dev.ampsieve.budget;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.ampsieve.catalog.InputType;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.catalog.Spread;
 import dev.ampsieve.fixtures.PartFixture;
+import dev.ampsieve.report.ConstraintText;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.StageLoader;
 import java.util.List;
@@ -135,19 +137,37 @@ class TransimpedanceBudgetTest {
 
         List<ConstraintResult> twoPf = Constraints.transimpedance(stage(""), PartValues.of(slow, stage("")));
         assertFalse(find(twoPf, Constraints.PHASE_MARGIN).ok(), twoPf.toString());
-        assertTrue(find(twoPf, Constraints.PHASE_MARGIN).detail().contains("gives both"), twoPf.toString());
+        ConstraintFact.PhaseMargin pm = (ConstraintFact.PhaseMargin)
+                find(twoPf, Constraints.PHASE_MARGIN).fact();
+        assertEquals(50e-12, pm.ct(), 1e-18); // 45 pF source + 5 pF input
+        assertEquals(5e-12, pm.inputC(), 1e-18);
+        assertEquals(2e-12, pm.cf(), 1e-18);
+        assertEquals(45, pm.minimum(), 0);
+        // Graeme's estimate sqrt(50 pF / (2π 1 Mohm 100 kHz)) = 8.92 pF, worked by hand
+        assertEquals(8.92e-12, pm.cfRange().graeme(), 0.01e-12);
+        // the 45° root lies above 2 pF (which fails) and below Graeme's 8.92 pF (which gives 51.8°, above)
+        assertTrue(pm.cfRange().least() > 2e-12 && pm.cfRange().least() < 8.92e-12, pm.toString());
+        assertFalse(pm.cfRange().none());
+        assertTrue(
+                ConstraintText.detail(find(twoPf, Constraints.PHASE_MARGIN)).contains("gives both"), twoPf.toString());
 
         Stage tenPf = StageLoader.parse(stageText().replace("cf: 2 pF", "cf: 10 pF"), null);
         List<ConstraintResult> ok = Constraints.transimpedance(tenPf, PartValues.of(slow, tenPf));
         assertTrue(find(ok, Constraints.PHASE_MARGIN).ok(), ok.toString());
         assertTrue(find(ok, Constraints.SIGNAL_BANDWIDTH).ok(), ok.toString());
+        assertNull(
+                ((ConstraintFact.PhaseMargin) find(ok, Constraints.PHASE_MARGIN).fact()).cfRange());
 
         Stage wide = StageLoader.parse(stageText().replace("high: 10 kHz", "high: 200 kHz"), null);
         List<ConstraintResult> none = Constraints.transimpedance(wide, PartValues.of(slow, wide));
         assertFalse(find(none, Constraints.SIGNAL_BANDWIDTH).ok(), none.toString());
+        // no cf reaches 200 kHz: even cf = 0 crosses over at 17.8 kHz (above)
+        assertTrue(((ConstraintFact.Bandwidth)
+                        find(none, Constraints.SIGNAL_BANDWIDTH).fact())
+                .cfRange()
+                .none());
         assertTrue(
-                find(none, Constraints.SIGNAL_BANDWIDTH)
-                        .detail()
+                ConstraintText.detail(find(none, Constraints.SIGNAL_BANDWIDTH))
                         .contains("the part's GBW is too low for this rf and source capacitance"),
                 none.toString());
         // and the budget carries them: the part is not a fit

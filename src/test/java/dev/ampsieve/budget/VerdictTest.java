@@ -10,6 +10,7 @@ import dev.ampsieve.catalog.Range;
 import dev.ampsieve.catalog.Spread;
 import dev.ampsieve.fixtures.PartFixture;
 import dev.ampsieve.fixtures.StageFixture;
+import dev.ampsieve.report.ConstraintText;
 import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.stage.Trim;
 import org.junit.jupiter.api.Test;
@@ -147,6 +148,6 @@ class VerdictTest {
                 .filter(c -> c.name().equals("output-swing"))
                 .findFirst()
                 .orElseThrow();
-        assertTrue(swing.detail().contains("AC-coupled"), swing.detail());
+        assertTrue(ConstraintText.detail(swing).contains("AC-coupled"), ConstraintText.detail(swing));
     }
 }

@@ -58,7 +58,12 @@ class RankReportTest {
         assertTrue(lines.get(header + 1).matches("1  TRIMMED\\s+\\+trim\\s+0\\.90\\s+460 µV.*"), lines.get(header + 1));
         assertTrue(lines.get(header + 2).matches("2  GOOD\\s+fits\\s+2\\.00\\s+650 µV.*"), lines.get(header + 2));
         assertTrue(lines.get(header + 3).matches("3  CHOP\\s+fits\\s+3\\.00\\s+590 µV.*"), lines.get(header + 3));
-        assertTrue(text.lines().anyMatch(l -> l.startsWith("HIGHV  supply: needs 5.0 V")), text);
+        // 5 V against a 10 .. 36 V rating: 10 - 5 = 5 V short at the low end
+        assertTrue(
+                text.lines()
+                        .anyMatch(l -> l.startsWith("HIGHV  supply: needs supply 5.00 V; part rated 10.0 V to 36.0 V;"
+                                + " short by 5.00 V at the low end")),
+                text);
         assertTrue(text.contains("A one-point trim is warranted: TRIMMED"), text);
         assertTrue(dev.ampsieve.testing.Flat.of(text).endsWith(Caution.TEXT));
         for (String l : lines) {

@@ -58,7 +58,7 @@ public final class Budgets {
     }
 
     /** Same, with a failed hard constraint. */
-    public static Budget rejected(Stage s, Part p, String constraint, String detail) {
+    public static Budget rejected(Stage s, Part p, ConstraintResult failed) {
         return new Budget(
                 p,
                 s,
@@ -72,7 +72,7 @@ public final class Budgets {
                 new Trimmed(0, 0),
                 Verdict.NO_FIT,
                 null,
-                List.of(new ConstraintResult(constraint, false, detail)),
+                List.of(failed),
                 List.of());
     }
 }

@@ -2,6 +2,8 @@ package dev.ampsieve.testing;
 
 import dev.ampsieve.advice.BudgetFunction;
 import dev.ampsieve.budget.Budget;
+import dev.ampsieve.budget.ConstraintFact;
+import dev.ampsieve.budget.ConstraintKind;
 import dev.ampsieve.budget.ConstraintResult;
 import dev.ampsieve.budget.TermResult;
 import dev.ampsieve.budget.Trimmed;
@@ -11,6 +13,7 @@ import dev.ampsieve.catalog.Part;
 import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.Trim;
+import dev.ampsieve.units.Dimension;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
@@ -60,17 +63,25 @@ public final class LinearEngine implements BudgetFunction {
                 : s.trim().allowed() && tTotal <= e ? Verdict.FITS_AFTER_TRIM : Verdict.NO_FIT;
         List<ConstraintResult> constraints = new ArrayList<>();
         constraints.add(new ConstraintResult(
-                "temperature",
+                ConstraintKind.TEMPERATURE,
                 p.temperature().contains(s.tMin(), s.tMax()),
-                "needs " + s.tMin() + ".." + s.tMax() + " C"));
+                ConstraintFact.Span.of(s.tMin(), s.tMax(), p.temperature(), Dimension.TEMPERATURE, null)));
         if (s.supplyVoltage() != null) {
             constraints.add(new ConstraintResult(
-                    "supply",
+                    ConstraintKind.SUPPLY,
                     p.supply().contains(s.supplyVoltage(), s.supplyVoltage()),
-                    "needs " + s.supplyVoltage() + " V"));
+                    ConstraintFact.Span.of(s.supplyVoltage(), s.supplyVoltage(), p.supply(), Dimension.VOLTAGE, null)));
         }
         if (s.maxPrice() != null && p.price() != null) {
-            constraints.add(new ConstraintResult("price", p.price().unit() <= s.maxPrice(), "ceiling " + s.maxPrice()));
+            boolean ok = p.price().unit() <= s.maxPrice();
+            constraints.add(new ConstraintResult(
+                    ConstraintKind.PRICE,
+                    ok,
+                    new ConstraintFact.Price(
+                            s.maxPrice(),
+                            p.price().unit(),
+                            p.price().currency(),
+                            ok ? 0 : p.price().unit() - s.maxPrice())));
         }
         YieldResult y = new YieldResult(
                 wc <= e ? 1 : 0, wc <= e ? 1 : 0, wc <= e ? 1 : 0, 0, wc <= e ? "all-pass" : "none-pass");
