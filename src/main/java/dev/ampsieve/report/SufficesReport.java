@@ -21,6 +21,16 @@ public final class SufficesReport {
         Budget b = s.budget();
         StringBuilder o = new StringBuilder();
         o.append(s.answer()).append('\n');
+        // the answer names the failed constraints; each one's numbers follow
+        for (var c : b.constraints()) {
+            if (!c.ok()) {
+                o.append("  ")
+                        .append(c.name())
+                        .append(": ")
+                        .append(ConstraintText.detail(c))
+                        .append('\n');
+            }
+        }
         String left = Uncounted.words(b.notCounted());
         if (!left.isEmpty()) {
             o.append(s.yes() ? "But " : "And ").append(left).append('\n');
