@@ -39,10 +39,4 @@ public record TermResult(
             TermWorking working) {
         this(key, label, outputV, inputV, worstAtC, estimated, working, TermKind.PART);
     }
-
-    /** The working as unworded facts, for messages built below the report (report/TermNotes words it). */
-    public String note() {
-        String facts = working.facts();
-        return facts.isEmpty() ? working.formula() : facts;
-    }
 }

@@ -1,7 +1,6 @@
 package dev.ampsieve.budget;
 
 import dev.ampsieve.units.Dimension;
-import dev.ampsieve.units.Units;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.EnumSet;
@@ -46,22 +45,6 @@ public record TermWorking(String formula, List<Operand> operands, Set<TermRemark
 
     public boolean has(TermRemark r) {
         return remarks.contains(r);
-    }
-
-    /**
-     * The operands and remarks on one line, unworded ("en 1.00 nV/√Hz, rms ∞ V, gbw-missing"), for a
-     * message built below the report (the overflow constraint names the values a term came from);
-     * empty when there are none.
-     */
-    public String facts() {
-        List<String> parts = new ArrayList<>();
-        for (Operand o : operands) {
-            parts.add(o.name() + " " + Units.format(o.value(), o.dimension()));
-        }
-        for (TermRemark r : remarks) {
-            parts.add(r.name().toLowerCase(java.util.Locale.ROOT).replace('_', '-'));
-        }
-        return String.join(", ", parts);
     }
 
     /** Collects operands and remarks in reading order. */

@@ -151,7 +151,7 @@ public final class ConstraintText {
         String bad = f.overflowed().isEmpty()
                 ? "the totals of " + f.totalsOf()
                 : f.overflowed().stream()
-                        .map(t -> t.label() + " (" + t.note() + ")")
+                        .map(t -> t.label() + " (" + TermNotes.factsOrFormula(t) + ")")
                         .collect(Collectors.joining("; "));
         return "too large to compute: " + bad + "; check these catalog and stage values for a wrong prefix or exponent";
     }

@@ -20,6 +20,28 @@ public final class TermNotes {
         return new Render(t.key(), t.working()).text();
     }
 
+    /**
+     * The operands and remarks on one line, unworded ("en 1.00 nV/√Hz, rms ∞ V, gbw-missing"): for a
+     * message that names the values a term came from (the overflow constraint) and for a formula
+     * this renderer does not word; empty when there are none.
+     */
+    public static String facts(TermWorking w) {
+        java.util.List<String> parts = new java.util.ArrayList<>();
+        for (Operand o : w.operands()) {
+            parts.add(o.name() + " " + Units.format(o.value(), o.dimension()));
+        }
+        for (dev.ampsieve.budget.TermRemark r : w.remarks()) {
+            parts.add(r.name().toLowerCase(java.util.Locale.ROOT).replace('_', '-'));
+        }
+        return String.join(", ", parts);
+    }
+
+    /** {@link #facts}, or the formula's id when the term has no operands. */
+    public static String factsOrFormula(TermResult t) {
+        String f = facts(t.working());
+        return f.isEmpty() ? t.working().formula() : f;
+    }
+
     /** An operand's value as text with its unit ("5.00 µV"), for tables of operands. */
     public static String value(Operand o) {
         return Units.format(o.value(), o.dimension(), digits(o));
@@ -157,7 +179,7 @@ public final class TermNotes {
                                     : "- input, x Rf " + f("Rf"));
                 case "no-leakage" -> "no leakage named";
                 // a formula this renderer does not know (a test's stand-in): its facts, unworded
-                default -> w.formula() + (w.facts().isEmpty() ? "" : ": " + w.facts());
+                default -> w.formula() + (facts(w).isEmpty() ? "" : ": " + facts(w));
             };
         }
 
