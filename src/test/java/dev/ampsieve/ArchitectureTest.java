@@ -163,14 +163,17 @@ class ArchitectureTest {
     }
 
     @Test
-    void theBudgetReturnsFactsNotFormattedText() throws IOException {
-        // terms return operands, assumptions and constraints typed facts; report words and formats them
+    void theBudgetAndTheAdviceReturnFactsNotFormattedText() throws IOException {
+        // terms return operands, assumptions and constraints as typed facts, the advice its findings, changes and
+        // caveats; report words and formats them (report.AdviceText, TermNotes, AssumptionText, ConstraintText)
         List<String> violations = new ArrayList<>();
-        try (Stream<Path> files = Files.list(MAIN.resolve("budget"))) {
-            for (Path f : files.filter(p -> p.getFileName().toString().endsWith(".java"))
-                    .toList()) {
-                if (Files.readString(f).contains("Units.format(")) {
-                    violations.add(f.toString());
+        for (String pkg : List.of("budget", "advice")) {
+            try (Stream<Path> files = Files.list(MAIN.resolve(pkg))) {
+                for (Path f : files.filter(p -> p.getFileName().toString().endsWith(".java"))
+                        .toList()) {
+                    if (Files.readString(f).contains("Units.format(")) {
+                        violations.add(f.toString());
+                    }
                 }
             }
         }
@@ -181,7 +184,7 @@ class ArchitectureTest {
     void formattingInTheDomainPackagesOnlyShrinks() throws IOException {
         // Units.format( calls below the report, counted after the term notes, assumptions and constraints became data.
         // This number must only go down: when wording moves to report, lower it to the new count.
-        int ceiling = 123;
+        int ceiling = 88;
         int count = 0;
         for (String pkg : List.of("budget", "advice", "catalog", "stage", "search", "sheet", "stats", "record")) {
             Path dir = MAIN.resolve(pkg);

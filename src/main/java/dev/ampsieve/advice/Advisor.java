@@ -1,9 +1,5 @@
 package dev.ampsieve.advice;
 
-import static dev.ampsieve.advice.Phrases.money;
-import static dev.ampsieve.advice.Phrases.standing;
-import static dev.ampsieve.advice.Phrases.volts;
-
 import dev.ampsieve.budget.Budget;
 import dev.ampsieve.budget.TermResult;
 import dev.ampsieve.budget.Verdict;
@@ -13,15 +9,11 @@ import dev.ampsieve.stage.Limit;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.Topology;
 import dev.ampsieve.stage.Trim;
-import dev.ampsieve.units.Dimension;
-import dev.ampsieve.units.Units;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
-import java.util.TreeMap;
 import java.util.TreeSet;
 import java.util.function.Predicate;
 
@@ -52,76 +44,41 @@ public final class Advisor {
         }
         NoFitAdvice noFit = fitting.isEmpty() ? noFit(stage, ranked, budgets) : null;
 
-        List<String> lines = new ArrayList<>();
-        if (ranked.isEmpty() && rejected.isEmpty()) {
-            lines.add("No part to rank: the catalog (or the query) gave none.");
-        }
-        if (pick != null) {
-            lines.add("Pick " + pick.id() + ": " + money(pick.effectiveCost(), pick.currency()) + " per unit"
-                    + (pick.trimmed() ? " including the trim" : "") + ", fits "
-                    + (pick.trimmed() ? "after the trim" : "as it is")
-                    + "; " + standing(pick) + ".");
-            boardLine(stage, pick).ifPresent(lines::add);
-            if (asIs == null) {
-                lines.add("No part fits as it is.");
-            } else if (asIs != pick) {
-                lines.add("Cheapest part that fits as it is: " + asIs.id() + " at "
-                        + money(asIs.effectiveCost(), asIs.currency()) + "; " + standing(asIs) + ".");
-            }
-        }
-        if (!ranked.isEmpty()) { // with no part at all, no trim can help or fail to
-            trimLine(stage, trim).ifPresent(lines::add);
-        }
-        zeroDriftLines(stage, zeroDrift, fitting, lines);
         Unsettled undecided = undecided(stage, ranked);
-        if (undecided != null) {
-            lines.add(undecidedLine(undecided));
-        }
-        if (noFit != null) {
-            noFitLines(noFit, rejected, lines);
-        }
-        if (!rejected.isEmpty()) {
-            lines.add(rejected.size() + " part(s) fail a hard constraint and are not ranked (see the rejected list).");
-        }
         TreeSet<String> currencies = new TreeSet<>();
         ranked.forEach(c -> currencies.add(c.currency()));
         currencies.remove("");
-        if (currencies.size() > 1) {
-            lines.add("Prices are in different currencies (" + String.join(", ", currencies)
-                    + ") and are compared as plain numbers.");
-        }
         // one price per part, at the quantity it was quoted for: nothing to pick a price break from
         TreeSet<Integer> larger = new TreeSet<>();
         ranked.stream()
                 .map(c -> c.part().price())
                 .filter(p -> p != null && p.quantity() > stage.quantity())
                 .forEach(p -> larger.add(p.quantity()));
-        if (!larger.isEmpty()) {
-            lines.add("Prices are the catalog's, each for its stated order quantity ("
-                    + String.join(", ", larger.stream().map(String::valueOf).toList())
-                    + " units), not for this build of "
-                    + stage.quantity() + ": smaller orders usually cost more per unit.");
-        }
-        return new Advice(pick, asIs, trim, zeroDrift, noFit, undecided, lines);
+        return new Advice(
+                pick,
+                asIs,
+                trim,
+                zeroDrift,
+                noFit,
+                undecided,
+                stage,
+                !ranked.isEmpty(),
+                pick == null ? null : boardLimited(stage, pick),
+                rejected,
+                currencies.size() > 1 ? List.copyOf(currencies) : List.of(),
+                List.copyOf(larger));
     }
 
     /**
-     * When the pick's largest term comes from the board rather than the part, say so and name the
-     * lever: a better part would not help, the layout would.
+     * When the pick's largest term comes from the board rather than the part: a better part would
+     * not help, the layout would. Null otherwise.
      */
-    static java.util.Optional<String> boardLine(Stage stage, Candidate pick) {
+    static BoardLimited boardLimited(Stage stage, Candidate pick) {
         String key = pick.budget().limitingTerm();
         if (key == null || dev.ampsieve.budget.BudgetCalculator.kindOf(key) != dev.ampsieve.budget.TermKind.BOARD) {
-            return java.util.Optional.empty();
+            return null;
         }
-        dev.ampsieve.budget.TermResult t = pick.budget().term(key);
-        dev.ampsieve.stage.Board b = stage.board();
-        String lever = key.equals(dev.ampsieve.budget.ThermalEmfTerm.KEY)
-                ? "pair the " + b.junctions() + " junction(s) so their EMFs cancel, or keep heat away from them"
-                : "a guard ring at the node's potential, a lower voltage beside the node, or a cleaner, drier board";
-        return java.util.Optional.of("Its largest term comes from the board, not the part: " + t.label() + ", "
-                + volts(t.outputV()) + " at the output (" + Phrases.percent(t.outputV() / pick.limitV())
-                + " of the limit); a better part would not remove it: " + lever + ".");
+        return new BoardLimited(pick.budget().term(key), pick.limitV(), stage.board());
     }
 
     // ------------------------------------------------------------------ trim
@@ -178,56 +135,6 @@ public final class Advisor {
         return total <= b.limitV();
     }
 
-    private static java.util.Optional<String> trimLine(Stage stage, TrimAdvice t) {
-        int q = stage.quantity();
-        String trimName = switch (StageEdit.trim(stage).method()) {
-            case TWO_POINT -> "two-point calibration";
-            case TWO_TEMPERATURE -> "two-temperature calibration";
-            default -> "one-point trim";
-        };
-        String cost = StageEdit.trim(stage).cost() > 0
-                ? money(
-                        StageEdit.trim(stage).cost(),
-                        t.withTrim() == null ? "" : t.withTrim().currency())
-                : "no stated cost (stage trim.cost; counted as 0)";
-        Candidate w = t.withTrim();
-        Candidate a = t.asIs();
-        return java.util.Optional.ofNullable(
-                switch (t.status()) {
-                    case WARRANTED ->
-                        "A " + trimName + " is warranted: " + w.id() + " at "
-                                + money(Candidate.price(w.part(), q), w.currency())
-                                + " plus the trim at " + cost + " costs " + money(w.effectiveCost(), w.currency())
-                                + " per unit, "
-                                + money(t.savingPerUnit(), w.currency()) + " less than " + a.id() + " as it is ("
-                                + money(t.savingTotal(), w.currency()) + " over " + q + " units); " + standing(w) + ".";
-                    case REQUIRED ->
-                        "A " + trimName + " is required: no part fits as it is; " + w.id() + " fits after it at "
-                                + money(w.effectiveCost(), w.currency()) + " per unit including " + cost
-                                + " for the trim; "
-                                + standing(w) + ".";
-                    case NOT_WARRANTED ->
-                        "A " + trimName + " does not pay: " + w.id() + " fits after it at "
-                                + money(w.effectiveCost(), w.currency()) + " per unit including the trim, "
-                                + money(-t.savingPerUnit(), w.currency()) + " more than " + a.id() + " as it is.";
-                    case NOT_NEEDED ->
-                        StageEdit.trim(stage).allowed()
-                                ? "No part needs the " + trimName + " to fit; leave it out."
-                                : null;
-                    case WOULD_PAY_IF_ALLOWED ->
-                        "The stage allows no trim; a " + trimName + " would let " + w.id() + " fit at "
-                                + money(w.effectiveCost(), w.currency()) + " per unit (price "
-                                + money(Candidate.price(w.part(), q), w.currency()) + " plus the trim: " + cost + ")"
-                                + (a == null
-                                        ? ", and nothing fits without one"
-                                        : ", " + money(t.savingPerUnit(), w.currency()) + " less than " + a.id()
-                                                + " as it is (" + money(t.savingTotal(), w.currency()) + " over " + q
-                                                + " units)")
-                                + "; " + standing(w) + ".";
-                    case NO_HELP -> StageEdit.trim(stage).allowed() ? "Not even a trimmed part fits." : null;
-                });
-    }
-
     // ------------------------------------------------------------------ zero-drift
 
     static ZeroDriftAdvice zeroDrift(Stage stage, List<Candidate> fitting) {
@@ -239,17 +146,19 @@ public final class Advisor {
                 .filter(c -> !c.part().selfCorrecting())
                 .findFirst()
                 .orElse(null);
-        List<String> caveats = self == null ? List.of() : caveats(stage, self);
+        List<Caveat> caveats = self == null ? List.of() : caveats(stage, self);
+        int n = (int) fitting.stream().filter(c -> c.part().selfCorrecting()).count();
         int q = stage.quantity();
         if (self == null) {
-            return new ZeroDriftAdvice(ZeroDriftAdvice.Status.NONE_FITS, null, std, Double.NaN, Double.NaN, caveats);
+            return new ZeroDriftAdvice(ZeroDriftAdvice.Status.NONE_FITS, null, std, Double.NaN, Double.NaN, caveats, n);
         }
         if (std == null) {
-            return new ZeroDriftAdvice(ZeroDriftAdvice.Status.ONLY_OPTION, self, null, Double.NaN, Double.NaN, caveats);
+            return new ZeroDriftAdvice(
+                    ZeroDriftAdvice.Status.ONLY_OPTION, self, null, Double.NaN, Double.NaN, caveats, n);
         }
         double saving = std.effectiveCost() - self.effectiveCost();
         ZeroDriftAdvice.Status s = saving > 0 ? ZeroDriftAdvice.Status.CHEAPER : ZeroDriftAdvice.Status.NOT_WARRANTED;
-        return new ZeroDriftAdvice(s, self, std, saving, saving * q, caveats);
+        return new ZeroDriftAdvice(s, self, std, saving, saving * q, caveats, n);
     }
 
     /**
@@ -257,78 +166,35 @@ public final class Advisor {
      * practitioner-notes.md item 10): charge-injection bias current and current noise, and
      * ripple at the chopping frequency against the band.
      */
-    static List<String> caveats(Stage stage, Candidate c) {
+    static List<Caveat> caveats(Stage stage, Candidate c) {
         Part p = c.part();
-        List<String> out = new ArrayList<>();
+        List<Caveat> out = new ArrayList<>();
         Double ib = p.ib().max() != null ? p.ib().max() : p.ib().typ();
         TermResult bias = c.budget().term("bias");
-        if (ib != null) {
-            String hot = "";
-            if (bias != null && Double.isFinite(bias.worstAtC()) && bias.worstAtC() != Stage.T_REF) {
-                // the budget scales it with temperature: quote the current that gives the output error below
-                double ibT = dev.ampsieve.budget.PartValues.of(p, stage).ibAt(bias.worstAtC());
-                hot = " at 25 °C, " + Units.format(ibT, Dimension.CURRENT) + " at " + Phrases.celsius(bias.worstAtC())
-                        + " in this budget";
-            }
-            out.add("bias current up to " + Units.format(Math.abs(ib), Dimension.CURRENT) + hot
-                    + " (charge injection at the input switches, more than a plain CMOS input draws)"
-                    + (bias != null
-                            ? ": " + volts(bias.outputV()) + " at the output here, "
-                                    + Phrases.percent(bias.outputV() / c.limitV()) + " of the limit"
-                            : "")
-                    + ".");
-        } else {
-            out.add("bias current is not in the catalog: chopper and auto-zero inputs draw charge-injection current;"
-                    + " take it from the datasheet.");
+        double atC = Double.NaN;
+        double ibT = Double.NaN;
+        if (ib != null && bias != null && Double.isFinite(bias.worstAtC()) && bias.worstAtC() != Stage.T_REF) {
+            // the budget scales it with temperature: the current that gives the output error
+            atC = bias.worstAtC();
+            ibT = dev.ampsieve.budget.PartValues.of(p, stage).ibAt(atC);
         }
-        Double in = p.noise().in();
-        double r = Math.max(stage.rPlus(), stage.rMinus());
-        if (in != null) {
-            String s = "current noise " + Units.format(in, Dimension.CURRENT_DENSITY) + " (raised by charge injection)";
-            if (r > 0) {
-                s += " through up to " + Phrases.ohms(r) + " gives " + Units.format(in * r, Dimension.VOLTAGE_DENSITY);
-                Double en = p.noise().en();
-                if (en != null) {
-                    s += " against its voltage noise of " + Units.format(en, Dimension.VOLTAGE_DENSITY);
-                }
-            }
-            out.add(s + ".");
-        } else {
-            out.add("current noise is not in the catalog: charge injection raises it above a plain CMOS input;"
-                    + " check it against the " + Phrases.ohms(r) + " at the inputs.");
-        }
+        out.add(new Caveat.Bias(
+                ib == null ? null : Math.abs(ib), atC, ibT, bias == null ? Double.NaN : bias.outputV(), c.limitV()));
+        out.add(new Caveat.CurrentNoise(
+                p.noise().in(),
+                Math.max(stage.rPlus(), stage.rMinus()),
+                p.noise().en()));
         Double fchop = p.choppingFrequency();
-        String band = Units.format(stage.bandHigh(), Dimension.FREQUENCY);
         if (fchop == null) {
-            out.add("chopping frequency is not in the catalog: compare the datasheet's ripple frequency with the "
-                    + band + " band edge and with any ADC sample rate.");
+            out.add(new Caveat.Chopping(null, stage.bandHigh(), Double.NaN, Caveat.Position.UNKNOWN));
         } else {
             double ratio = fchop / stage.bandHigh();
-            String times = Phrases.number(ratio) + " times";
-            if (ratio <= 1.0) {
-                out.add("chopping at " + Units.format(fchop, Dimension.FREQUENCY) + " is inside the " + band
-                        + " band: its ripple and intermodulation land in the signal; a part clocked well above the band"
-                        + " is needed (common practice: 10 times above it).");
-            } else if (ratio < CHOP_CLEARANCE) {
-                out.add("chopping at " + Units.format(fchop, Dimension.FREQUENCY) + " is only " + times + " the "
-                        + band + " band edge: ripple and intermodulation land near the band; check the datasheet's"
-                        + " ripple and filter (common practice: keep it 10 times above the band).");
-            } else {
-                out.add(
-                        "chopping at " + Units.format(fchop, Dimension.FREQUENCY) + " is " + times + " the " + band
-                                + " band edge: the ripple lies well above the band; filter it before any ADC so it cannot alias.");
-            }
+            Caveat.Position where = ratio <= 1.0
+                    ? Caveat.Position.INSIDE
+                    : ratio < CHOP_CLEARANCE ? Caveat.Position.NEAR : Caveat.Position.CLEAR;
+            out.add(new Caveat.Chopping(fchop, stage.bandHigh(), ratio, where));
         }
         return out;
-    }
-
-    /** "; resting on estimated or typical-only figures for ..." inside the parenthesis after a recommended part; empty otherwise. */
-    private static String flagged(Candidate c) {
-        return Phrases.estimateNote(c);
-    }
-
-    private static String withTrim(Candidate c) {
-        return c.trimmed() ? " with the trim" : "";
     }
 
     /**
@@ -361,53 +227,6 @@ public final class Advisor {
                 .orElse(null);
     }
 
-    private static void zeroDriftLines(Stage stage, ZeroDriftAdvice z, List<Candidate> fitting, List<String> lines) {
-        int q = stage.quantity();
-        Candidate s = z.selfCorrecting();
-        Candidate std = z.standard();
-        switch (z.status()) {
-            case ONLY_OPTION -> {
-                // "only X fits" would be false when several zero-drift parts fit: name the cheapest then
-                long n = fitting.stream().filter(c -> c.part().selfCorrecting()).count();
-                lines.add("A zero-drift part is warranted: "
-                        + (n > 1
-                                ? "only zero-drift parts fit (" + n + "); the cheapest, " + s.id() + " ("
-                                        + s.part().architecture().key() + "), costs "
-                                : "only " + s.id() + " ("
-                                        + s.part().architecture().key() + ") fits, at ")
-                        + money(s.effectiveCost(), s.currency()) + " per unit" + withTrim(s) + "; " + standing(s)
-                        + ".");
-            }
-            case CHEAPER ->
-                lines.add("A zero-drift part is warranted: " + s.id() + " ("
-                        + s.part().architecture().key()
-                        + flagged(s) + ") fits at " + money(s.effectiveCost(), s.currency()) + withTrim(s) + ", "
-                        + money(z.savingPerUnit(), s.currency())
-                        + " less per unit than the cheapest standard part " + std.id() + " at "
-                        + money(std.effectiveCost(), std.currency()) + withTrim(std) + " ("
-                        + money(z.savingTotal(), s.currency())
-                        + " over " + q + " units).");
-            case NOT_WARRANTED ->
-                lines.add("A zero-drift part is not needed: " + std.id() + " (standard" + flagged(std) + ") fits at "
-                        + money(std.effectiveCost(), std.currency()) + withTrim(std) + ", "
-                        + money(-z.savingPerUnit(), std.currency())
-                        + " less than the cheapest zero-drift part that fits, " + s.id() + ".");
-            case NONE_FITS -> {}
-        }
-        if (z.warranted()) {
-            lines.add("With " + s.id() + ", check:");
-            z.caveats().forEach(c -> lines.add("  - " + c));
-        }
-        if (z.resistorOption() != null) {
-            Candidate o = z.resistorOption().part();
-            lines.add("Or a standard part with better resistors: " + o.id() + " at "
-                    + money(o.effectiveCost(), o.currency())
-                    + withTrim(o) + " would fit with "
-                    + z.resistorOption().change().text()
-                    + " (the resistors' cost is not in the figures); now " + standing(o) + ".");
-        }
-    }
-
     // ------------------------------------------------------------------ undecided yield
 
     /** The best-ranked part whose yield interval still holds the target, with what would settle it; null when none. */
@@ -432,24 +251,6 @@ public final class Advisor {
                 Math.max(stage.trials(), stage.maxTrials()),
                 Unsettled.unitsToSettle(y.value(), target),
                 StageEdit.trim(stage).allowed());
-    }
-
-    private static String undecidedLine(Unsettled u) {
-        var y = u.yield();
-        // the target as the stage gives it (99.02 %, not 99.0 %); the interval's upper end rounded up, its lower end
-        // down
-        String pc = Units.format(u.target(), Dimension.RATIO, 4);
-        String more = u.unitsToSettle() == Long.MAX_VALUE
-                ? "no number of units can settle it, as the yield seen is the target itself"
-                : "more units cannot settle it below about " + u.unitsToSettle() + " units at the yield seen"
-                        + (u.unitsToSettle() > u.cap() ? " (max-trials is " + u.cap() + ")" : "");
-        return u.candidate().id() + " is undecided" + (u.trimmed() ? " after the trim" : "") + ": after " + y.trials()
-                + " simulated units the true yield is within " + Phrases.yieldPercent(y.low()) + " to "
-                + (y.high() >= 1 ? "100 %" : String.format(Locale.ROOT, "%.2f %%", Math.ceil(y.high() * 1e4) / 100))
-                + ", which holds the " + pc + " target; " + more
-                + ". What settles it: a looser target (" + Phrases.yieldPercent(y.low())
-                + " or less is shown met), a part with "
-                + "a smaller error" + (u.trimAllowed() ? "" : ", or allowing a trim") + ".";
     }
 
     // ------------------------------------------------------------------ nothing fits
@@ -504,14 +305,14 @@ public final class Advisor {
      * 3 digits, one step lower when the rounded value no longer fits.
      */
     static double reportLargest(double x, java.util.function.DoublePredicate fits) {
-        double r = Phrases.round3(x);
-        return r <= x || fits.test(r) ? r : r - Phrases.unit3(r);
+        double r = Rounding.round3(x);
+        return r <= x || fits.test(r) ? r : r - Rounding.unit3(r);
     }
 
     /** As {@link #reportLargest}, for the smallest value that fits. */
     static double reportSmallest(double x, java.util.function.DoublePredicate fits) {
-        double r = Phrases.round3(x);
-        return r >= x || fits.test(r) ? r : r + Phrases.unit3(r);
+        double r = Rounding.round3(x);
+        return r >= x || fits.test(r) ? r : r + Rounding.unit3(r);
     }
 
     /**
@@ -532,33 +333,6 @@ public final class Advisor {
     /** Rf that gives |signal gain| {@code g} with the stage's Rg (and Rs, inverting). */
     static double rfFor(Stage stage, double g) {
         return stage.network().feedbackFor(g);
-    }
-
-    /** The gain-setting resistors as built with feedback {@code rf}, for the wording of a gain change. */
-    private static String resistorsText(Stage stage, double rf) {
-        dev.ampsieve.stage.Network n = stage.network().withFeedback(rf);
-        return switch (n.topology()) {
-            case NON_INVERTING ->
-                "Rf " + Phrases.ohms(rf) + " with Rg " + Phrases.ohms(((dev.ampsieve.stage.NonInverting) n).rg());
-            case INVERTING ->
-                "Rf " + Phrases.ohms(rf) + " with Rg " + Phrases.ohms(((dev.ampsieve.stage.Inverting) n).rg());
-            case DIFFERENCE -> {
-                dev.ampsieve.stage.Difference d = (dev.ampsieve.stage.Difference) n;
-                yield "R2 " + Phrases.ohms(d.r2()) + " with R1 " + Phrases.ohms(d.r1()) + ", R4 " + Phrases.ohms(d.r4())
-                        + " with R3 " + Phrases.ohms(d.r3());
-            }
-            case TRANSIMPEDANCE -> {
-                dev.ampsieve.stage.Transimpedance t = (dev.ampsieve.stage.Transimpedance) n;
-                yield "Rf " + Phrases.ohms(rf)
-                        + (t.cf() > 0
-                                ? " with Cf "
-                                        + dev.ampsieve.units.Units.format(
-                                                t.cf(), dev.ampsieve.units.Dimension.CAPACITANCE)
-                                        + " (the same signal bandwidth)"
-                                : "");
-            }
-            case FOLLOWER -> "Rf " + Phrases.ohms(rf);
-        };
     }
 
     /** |signal gain| with feedback resistor {@code rf}. */
@@ -601,9 +375,9 @@ public final class Advisor {
         };
         Stage at = StageEdit.withRf(stage, rfNeeded);
         // the resistor as printed (3 digits), rounded toward the lower gain so that building it fits
-        double rfShown = Phrases.round3Down(rfNeeded);
+        double rfShown = Rounding.round3Down(rfNeeded);
         if (!fits.test(StageEdit.withGain(stage, rfShown))) {
-            rfShown -= Phrases.unit3(rfShown);
+            rfShown -= Rounding.unit3(rfShown);
         }
         if (rfShown < rfMin * (1 - 1e-12) || !fits.test(StageEdit.withGain(stage, rfShown))) {
             return splitGain(stage, fits); // the printed resistor would cross the half-gain line
@@ -616,24 +390,8 @@ public final class Advisor {
         if (vfs != null) {
             v.put("fullScaleOutput", vfs);
         }
-        String resistors = resistorsText(stage, rfShown);
-        // the input signal stays: the output's full scale shrinks with the gain
-        String swing = vfs == null
-                ? ""
-                : "; full-scale output then " + volts(vfs) + " (now " + volts(stage.fullScaleOutput()) + ")";
-        String text = switch (stage.topology()) {
-            case INVERTING, DIFFERENCE ->
-                "a gain of " + Phrases.number(at.signalGain()) + " or less in magnitude (now "
-                        + Phrases.number(stage.signalGain()) + "; noise gain " + Phrases.number(at.noiseGain()) + "): "
-                        + resistors + swing;
-            case TRANSIMPEDANCE ->
-                "a smaller feedback resistor: " + resistors + " or less (now " + Phrases.ohms(stage.rf())
-                        + "); the output per ampere falls with it" + swing;
-            case NON_INVERTING, FOLLOWER ->
-                "a gain of " + Phrases.number(at.noiseGain()) + " or lower (now " + Phrases.number(stage.noiseGain())
-                        + "): " + resistors + swing;
-        };
-        return java.util.Optional.of(new Change(Change.Kind.LOWER_GAIN, text, v));
+        return java.util.Optional.of(
+                new Change(Change.Kind.LOWER_GAIN, v, stage.network().withFeedback(rfShown), null));
     }
 
     /**
@@ -669,9 +427,9 @@ public final class Advisor {
         }
         double found = ok.test(rfHigh) ? rfHigh : Bisection.largest(ok, rfLow, rfHigh);
         // the resistor as printed, rounded toward less gain here, and re-checked
-        double rfShown = Phrases.round3Down(found);
+        double rfShown = Rounding.round3Down(found);
         if (!ok.test(rfShown)) {
-            rfShown -= Phrases.unit3(rfShown);
+            rfShown -= Rounding.unit3(rfShown);
         }
         if (rfShown < rfLow * (1 - 1e-12) || !ok.test(rfShown)) {
             return java.util.Optional.empty();
@@ -685,14 +443,9 @@ public final class Advisor {
         v.put("noiseGain", here.noiseGain());
         v.put("rf", rfShown);
         v.put("limitHereV", here.limitVolts());
-        String text = "split the gain with a later stage: a gain of " + Phrases.number(stage.signalGain())
-                + " in one stage does not fit even at half of it; " + Phrases.number(here.signalGain()) + " here ("
-                + resistorsText(stage, rfShown) + ") and " + Phrases.number(after)
-                + " after it would, this stage held to " + volts(here.limitVolts())
-                + " at its output (the limit divided by "
-                + Phrases.number(after) + "): the later stage's errors are divided by " + Phrases.number(gHere)
-                + " when referred to the input";
-        return java.util.Optional.of(new Change(Change.Kind.SPLIT_GAIN, text, v));
+        v.put("sourceGainHere", gHere);
+        return java.util.Optional.of(
+                new Change(Change.Kind.SPLIT_GAIN, v, stage.network().withFeedback(rfShown), null));
     }
 
     private static java.util.Optional<Change> lowerSource(Stage stage, Predicate<Stage> fits) {
@@ -715,15 +468,15 @@ public final class Advisor {
         }
         Map<String, Double> v = new LinkedHashMap<>();
         v.put("sourceResistance", x);
-        String text = "a source resistance of " + Phrases.ohms(x) + " or lower (now " + Phrases.ohms(rs) + ")";
         if (stage.topology() == Topology.INVERTING) {
             // Rs is part of the gain resistor here: the gain (and the output's full scale) rises with it
             Stage at = StageEdit.withSourceResistance(stage, x);
             v.put("signalGain", at.signalGain());
-            text += "; the signal gain then " + Phrases.number(at.signalGain())
-                    + (at.fullScaleOutput() == null ? "" : ", full-scale output " + volts(at.fullScaleOutput()));
+            if (at.fullScaleOutput() != null) {
+                v.put("fullScaleOutput", at.fullScaleOutput());
+            }
         }
-        return java.util.Optional.of(new Change(Change.Kind.LOWER_SOURCE_RESISTANCE, text, v));
+        return java.util.Optional.of(new Change(Change.Kind.LOWER_SOURCE_RESISTANCE, v));
     }
 
     /**
@@ -746,11 +499,7 @@ public final class Advisor {
         Map<String, Double> v = new LinkedHashMap<>();
         v.put("thermalEmfV", emf);
         v.put("gradient", g);
-        String text = "less thermal EMF at the input: " + Units.format(emf, Dimension.VOLTAGE) + " or less (now "
-                + Units.format(b.junctions() * b.seebeck() * b.gradient(), Dimension.VOLTAGE) + "): pair the "
-                + b.junctions() + " junction(s) so their EMFs cancel, or keep them within " + Phrases.number(g)
-                + " °C of each other (now " + Phrases.number(b.gradient()) + " °C)";
-        return java.util.Optional.of(new Change(Change.Kind.LESS_THERMAL_EMF, text, v));
+        return java.util.Optional.of(new Change(Change.Kind.LESS_THERMAL_EMF, v));
     }
 
     /** Board-level: the smallest surface leakage resistance into the input that lets the part fit; a guard ring removes the voltage across it. */
@@ -778,10 +527,7 @@ public final class Advisor {
         }
         Map<String, Double> v = new LinkedHashMap<>();
         v.put("leakageResistance", r);
-        String text = "less leakage into the " + (b.leakageInput() == dev.ampsieve.stage.Board.Input.PLUS ? "+" : "-")
-                + " input: " + Phrases.ohms(r) + " or more (now " + Phrases.ohms(b.leakageResistance())
-                + "), or a guard ring driven at the node's potential so that no voltage drives it";
-        return java.util.Optional.of(new Change(Change.Kind.LESS_LEAKAGE, text, v));
+        return java.util.Optional.of(new Change(Change.Kind.LESS_LEAKAGE, v));
     }
 
     /** Highest load resistance tried: 1 Gohm, no load to speak of (a higher one is the same stage). */
@@ -802,9 +548,7 @@ public final class Advisor {
         if (!ok.test(x)) {
             return java.util.Optional.empty();
         }
-        String text = "a load resistance of " + Phrases.ohms(x) + " or higher (now " + Phrases.ohms(rl)
-                + "): less output current heats the die less";
-        return java.util.Optional.of(new Change(Change.Kind.HIGHER_LOAD_RESISTANCE, text, Map.of("loadResistance", x)));
+        return java.util.Optional.of(new Change(Change.Kind.HIGHER_LOAD_RESISTANCE, Map.of("loadResistance", x)));
     }
 
     /** The lowest filter order at band.high, above the stage's, that makes a chopper or auto-zero part fit. */
@@ -815,13 +559,7 @@ public final class Advisor {
         }
         for (int n = stage.noiseFilterOrder() + 1; n <= Stage.MAX_FILTER_ORDER; n++) {
             if (fits.test(StageEdit.withFilterOrder(stage, n))) {
-                String text = "a Butterworth low-pass of order " + n + " at "
-                        + Units.format(stage.bandHigh(), Dimension.FREQUENCY)
-                        + " after the amplifier (now "
-                        + (stage.noiseFilterOrder() == 0 ? "none" : "order " + stage.noiseFilterOrder())
-                        + "): it removes the chopping ripple (and shortens the noise band)";
-                return java.util.Optional.of(
-                        new Change(Change.Kind.STEEPER_FILTER, text, Map.of("filterOrder", (double) n)));
+                return java.util.Optional.of(new Change(Change.Kind.STEEPER_FILTER, Map.of("filterOrder", (double) n)));
             }
         }
         return java.util.Optional.empty();
@@ -846,9 +584,7 @@ public final class Advisor {
         Map<String, Double> v = new LinkedHashMap<>();
         v.put("tMin", s.tMin());
         v.put("tMax", s.tMax());
-        String text = "an ambient range of " + Phrases.celsius(s.tMin()) + " to " + Phrases.celsius(s.tMax()) + " (now "
-                + Phrases.celsius(stage.tMin()) + " to " + Phrases.celsius(stage.tMax()) + ")";
-        return java.util.Optional.of(new Change(Change.Kind.NARROWER_TEMPERATURE, text, v));
+        return java.util.Optional.of(new Change(Change.Kind.NARROWER_TEMPERATURE, v));
     }
 
     private static java.util.Optional<Change> betterResistors(Stage stage, Predicate<Stage> fits) {
@@ -861,32 +597,17 @@ public final class Advisor {
         }
         // tolerance and tempco scaled together: better resistors improve both
         double k = Bisection.largest(ok, 0, 1);
-        double tol = Phrases.round3(stage.ratioTolerance() * k);
-        double tc = Phrases.round3(stage.ratioTempco() * k);
+        double tol = Rounding.round3(stage.ratioTolerance() * k);
+        double tc = Rounding.round3(stage.ratioTempco() * k);
         if (tol > stage.ratioTolerance() * k || tc > stage.ratioTempco() * k) {
             // rounded up past the boundary: one step better on both
-            tol = tol > 0 ? tol - Phrases.unit3(tol) : 0;
-            tc = tc > 0 ? tc - Phrases.unit3(tc) : 0;
+            tol = tol > 0 ? tol - Rounding.unit3(tol) : 0;
+            tc = tc > 0 ? tc - Rounding.unit3(tc) : 0;
         }
         Map<String, Double> v = new LinkedHashMap<>();
         v.put("ratioTolerance", tol);
         v.put("ratioTempco", tc);
-        String now = " (now " + Units.format(stage.ratioTolerance(), Dimension.RATIO) + ", "
-                + Units.format(stage.ratioTempco(), Dimension.RATIO_DRIFT) + ")";
-        String text = switch (stage.topology()) {
-            case NON_INVERTING, INVERTING, FOLLOWER ->
-                "resistors matched to " + Units.format(tol, Dimension.RATIO) + " with "
-                        + Units.format(tc, Dimension.RATIO_DRIFT) + " tracking or better" + now;
-            // the pairs' match sets both the gain and the rejection of the common mode
-            case DIFFERENCE ->
-                "better-matched resistor pairs: r2/r1 and r4/r3 each within " + Units.format(tol, Dimension.RATIO)
-                        + " with " + Units.format(tc, Dimension.RATIO_DRIFT) + " tracking or better" + now
-                        + "; a matched four-resistor network also raises the common-mode rejection";
-            case TRANSIMPEDANCE ->
-                "a feedback resistor of " + Units.format(tol, Dimension.RATIO) + " tolerance and "
-                        + Units.format(tc, Dimension.RATIO_DRIFT) + " or better" + now;
-        };
-        return java.util.Optional.of(new Change(Change.Kind.BETTER_RESISTORS, text, v));
+        return java.util.Optional.of(new Change(Change.Kind.BETTER_RESISTORS, v));
     }
 
     private static java.util.Optional<Change> trimChange(Stage stage, Part p, BudgetFunction budgets) {
@@ -907,20 +628,10 @@ public final class Advisor {
             return java.util.Optional.empty();
         }
         Candidate c = Candidate.of(b);
-        String cost =
-                t.cost() > 0 ? money(t.cost(), c.currency()) + " per unit" : "the trim's cost per unit (not given)";
-        String what = kind == Change.Kind.ALLOW_TRIM
-                ? "allow a "
-                        + (tried.method() == Trim.Method.TWO_POINT
-                                ? "two-point calibration"
-                                : tried.method() == Trim.Method.TWO_TEMPERATURE
-                                        ? "two-temperature calibration"
-                                        : "one-point trim at 25 °C")
-                : "a two-point calibration instead of the one-point trim";
         Map<String, Double> v = new LinkedHashMap<>();
         v.put("errorAfterTrimV", c.errorV());
         v.put("trimCost", t.cost());
-        return java.util.Optional.of(new Change(kind, what + ": " + standing(c) + ", at " + cost, v));
+        return java.util.Optional.of(new Change(kind, v, null, c));
     }
 
     private static java.util.Optional<Change> looserLimit(Stage stage, Candidate closest, Predicate<Stage> fits) {
@@ -944,56 +655,22 @@ public final class Advisor {
         v.put("limitV", needed);
         v.put("limitInputV", needed / g);
         Limit l = stage.limit();
-        StringBuilder text = new StringBuilder("a limit of ");
-        // said the way the user wrote the limit, with the output figure beside it
+        // the limit in the user's form, rounded toward the looser side so that the limit as printed fits
         switch (l.kind()) {
-            // each figure in the user's form rounded toward the looser side, so that the limit as printed fits
-            case INPUT ->
-                text.append(volts(Phrases.round3Up(needed / g)))
-                        .append(" at the input (")
-                        .append(volts(needed))
-                        .append(" at the output) or looser (now ")
-                        .append(volts(l.value()))
-                        .append(" at the input)");
+            case INPUT, INPUT_CURRENT -> v.put("limitAsWritten", Rounding.round3Up(needed / g));
             case LSB -> {
-                double lsb = l.reference() / Math.pow(2, l.bits());
-                v.put("limitLsb", needed / lsb);
-                text.append(String.format(Locale.ROOT, "%.2f", Math.ceil(needed / lsb * 100 - 1e-9) / 100))
-                        .append(" LSB (")
-                        .append(volts(needed))
-                        .append(" at the output) or looser (now ")
-                        .append(Phrases.number(l.value()))
-                        .append(" LSB)");
+                double lsbs = needed / (l.reference() / Math.pow(2, l.bits()));
+                v.put("limitLsb", lsbs);
+                v.put("limitAsWritten", Math.ceil(lsbs * 100 - 1e-9) / 100);
             }
             case PERCENT_OF_FULL_SCALE -> {
-                double fs = stage.fullScaleOutput() == null ? Double.NaN : stage.fullScaleOutput();
-                v.put("limitFraction", needed / fs);
-                text.append(Units.format(Phrases.round3Up(needed / fs), Dimension.RATIO))
-                        .append(" of full scale (")
-                        .append(volts(needed))
-                        .append(" at the output) or looser (now ")
-                        .append(Units.format(l.value(), Dimension.RATIO))
-                        .append(")");
+                double fraction = needed / (stage.fullScaleOutput() == null ? Double.NaN : stage.fullScaleOutput());
+                v.put("limitFraction", fraction);
+                v.put("limitAsWritten", Rounding.round3Up(fraction));
             }
-            case INPUT_CURRENT ->
-                text.append(Units.format(Phrases.round3Up(needed / g), Dimension.CURRENT))
-                        .append(" at the input (")
-                        .append(volts(needed))
-                        .append(" at the output) or looser (now ")
-                        .append(Units.format(l.value(), Dimension.CURRENT))
-                        .append(" at the input)");
-            case OUTPUT ->
-                text.append(volts(needed))
-                        .append(" at the output (")
-                        .append(
-                                stage.topology() == Topology.TRANSIMPEDANCE
-                                        ? Units.format(needed / g, Dimension.CURRENT)
-                                        : volts(needed / g))
-                        .append(" at the input) or looser (now ")
-                        .append(volts(e))
-                        .append(")");
+            case OUTPUT -> v.put("limitAsWritten", needed);
         }
-        return java.util.Optional.of(new Change(Change.Kind.LOOSER_LIMIT, text.toString(), v));
+        return java.util.Optional.of(new Change(Change.Kind.LOOSER_LIMIT, v));
     }
 
     /**
@@ -1067,9 +744,9 @@ public final class Advisor {
             return java.util.OptionalDouble.empty();
         }
         double x = Bisection.largest(y -> fits.test(edit.apply(y)), floor, now);
-        double r = Phrases.round3Down(x);
+        double r = Rounding.round3Down(x);
         if (!fits.test(edit.apply(r))) {
-            r -= Phrases.unit3(r);
+            r -= Rounding.unit3(r);
         }
         if (r < floor || !fits.test(edit.apply(r))) {
             return java.util.OptionalDouble.empty();
@@ -1098,36 +775,6 @@ public final class Advisor {
         if (!(target > 0)) {
             return java.util.Optional.empty();
         }
-        String text = "a yield target of " + Phrases.percentFine(target) + " or lower (now "
-                + Phrases.percentFine(stage.criterion().yieldTarget()) + ")";
-        return java.util.Optional.of(new Change(Change.Kind.LOWER_YIELD_TARGET, text, Map.of("yieldTarget", target)));
-    }
-
-    private static void noFitLines(NoFitAdvice n, List<Rejected> rejected, List<String> lines) {
-        Candidate c = n.closest();
-        if (c == null) {
-            if (!rejected.isEmpty()) {
-                Map<String, Integer> counts = new TreeMap<>();
-                rejected.forEach(r -> r.failed().forEach(f -> counts.merge(f, 1, Integer::sum)));
-                List<String> parts = new ArrayList<>();
-                counts.forEach((k, v) -> parts.add(k + " (" + v + ")"));
-                lines.add("Nothing fits: every part fails a hard constraint: " + String.join(", ", parts) + ".");
-            }
-            return;
-        }
-        String limit = Phrases.limitedBy(c);
-        lines.add("Nothing fits. Closest: " + c.id() + ", " + standing(c) + limit + ".");
-        if (n.changes().isEmpty()) {
-            lines.add("No single change of gain, source resistance, temperature range, trim or limit makes it fit.");
-        } else {
-            lines.add("It would fit with any one of these changes:");
-            n.changes().forEach(ch -> lines.add("  - " + ch.text()));
-        }
-        if (!n.targets().isEmpty()) {
-            lines.add(
-                    "A part would fit the stage as it is with any one of these figures, the rest as " + c.id() + "'s:");
-            Stage stage = c.budget().stage();
-            n.targets().forEach(t -> lines.add("  - " + Phrases.target(t, stage)));
-        }
+        return java.util.Optional.of(new Change(Change.Kind.LOWER_YIELD_TARGET, Map.of("yieldTarget", target)));
     }
 }

@@ -125,7 +125,7 @@ public record Candidate(Part part, Budget budget, boolean trimmed, double effect
     }
 
     /** Unit price for a build of {@code quantity}: the catalog's price break for it ({@code Price.at}). */
-    static double price(Part p, int quantity) {
+    public static double price(Part p, int quantity) {
         return p.price() == null ? Double.NaN : p.price().at(quantity);
     }
 

@@ -1,19 +1,28 @@
 package dev.ampsieve.advice;
 
+import dev.ampsieve.stage.Network;
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.Map;
 
 /**
- * One change to the stage that makes a part fit, found by re-running the budget.
+ * One change to the stage that makes a part fit, found by re-running the budget; {@code report}
+ * words it against the stage as it is now.
  *
- * @param values the numbers needed, SI units, e.g. {@code noiseGain}, {@code rf}, {@code gainHere},
- *               {@code sourceResistance}, {@code tMin}/{@code tMax}, {@code limitV}
+ * @param values  the numbers needed, SI units, e.g. {@code noiseGain}, {@code rf}, {@code gainHere},
+ *                {@code sourceResistance}, {@code tMin}/{@code tMax}, {@code limitV}
+ * @param network for a change of gain: the gain network as built with the offered resistor; null
+ *                otherwise
+ * @param after   for a change of trim: the part as it stands with the change; null otherwise
  */
-public record Change(Kind kind, String text, Map<String, Double> values) {
+public record Change(Kind kind, Map<String, Double> values, Network network, Candidate after) {
 
     public Change {
         values = Collections.unmodifiableMap(new LinkedHashMap<>(values));
+    }
+
+    public Change(Kind kind, Map<String, Double> values) {
+        this(kind, values, null, null);
     }
 
     public enum Kind {

@@ -1,8 +1,5 @@
 package dev.ampsieve.advice;
 
-import static dev.ampsieve.advice.Phrases.money;
-import static dev.ampsieve.advice.Phrases.volts;
-
 import dev.ampsieve.budget.Budget;
 import dev.ampsieve.budget.TermResult;
 import java.util.ArrayList;
@@ -11,12 +8,12 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * Two parts in the same stage, term by term, with a one-line conclusion: the core of
- * justifying a part change.
+ * Two parts in the same stage, term by term, and which one is preferred: the core of justifying
+ * a part change ({@code report} words the conclusion).
  *
  * @param preferred id of the better part, or null when they come out equal
  */
-public record Comparison(Candidate a, Candidate b, List<TermDelta> terms, String preferred, String conclusion) {
+public record Comparison(Candidate a, Candidate b, List<TermDelta> terms, String preferred) {
 
     public Comparison {
         terms = List.copyOf(terms);
@@ -40,7 +37,7 @@ public record Comparison(Candidate a, Candidate b, List<TermDelta> terms, String
     }
 
     /** Cost differences below half a cent count as equal. */
-    static final double COST_EPS = 0.005;
+    public static final double COST_EPS = 0.005;
 
     public static Comparison of(Budget ba, Budget bb) {
         Candidate a = Candidate.of(ba);
@@ -60,7 +57,7 @@ public record Comparison(Candidate a, Candidate b, List<TermDelta> terms, String
             deltas.add(delta(key, label, x, y));
         });
         String preferred = preferred(a, b);
-        return new Comparison(a, b, deltas, preferred, conclusion(a, b, preferred));
+        return new Comparison(a, b, deltas, preferred);
     }
 
     /** One pair of output errors compared (the smaller magnitude is better). */
@@ -89,52 +86,5 @@ public record Comparison(Candidate a, Candidate b, List<TermDelta> terms, String
             return null;
         }
         return a.margin() > b.margin() ? a.id() : b.id();
-    }
-
-    private static String conclusion(Candidate a, Candidate b, String preferred) {
-        int q = a.budget().stage().quantity();
-        if (a.fits() && b.fits()) {
-            Candidate p = a.id().equals(preferred) ? a : b;
-            Candidate o = p == a ? b : a;
-            double d = o.effectiveCost() - p.effectiveCost();
-            if (preferred == null) {
-                return "Both fit at the same cost with the same margin (" + Phrases.marginValue(a)
-                        + "): either will do.";
-            }
-            if (Math.abs(d) < COST_EPS) {
-                return "Both fit at the same cost; " + p.id() + " has the larger margin (" + Phrases.marginValue(p)
-                        + " against " + Phrases.marginValue(o) + "): " + p.id() + ".";
-            }
-            return "Both fit; " + p.id() + " costs " + money(d, p.currency()) + " less per unit ("
-                    + money(d * q, p.currency()) + " over " + q + " units), margin " + Phrases.marginValue(p)
-                    + " against "
-                    + Phrases.marginValue(o) + ": " + p.id() + ".";
-        }
-        if (a.fits() || b.fits()) {
-            Candidate p = a.fits() ? a : b;
-            Candidate o = p == a ? b : a;
-            return p.id() + " fits" + (p.trimmed() ? " after the trim" : "") + " (margin " + Phrases.marginValue(p)
-                    + ") and " + o.id() + " does not (" + whyNot(o) + "): " + p.id() + ".";
-        }
-        if (preferred == null) {
-            return "Neither fits (" + a.id() + ": " + whyNot(a) + "; " + b.id() + ": " + whyNot(b) + ").";
-        }
-        Candidate p = a.id().equals(preferred) ? a : b;
-        Candidate o = p == a ? b : a;
-        return "Neither fits; " + p.id() + " comes closer (" + volts(p.errorV()) + " against " + volts(o.errorV())
-                + " for a " + volts(p.limitV()) + " limit; " + whyNot(p) + ").";
-    }
-
-    private static String whyNot(Candidate c) {
-        if (!c.constraintsMet()) {
-            return "fails " + String.join(", ", Rejected.of(c.budget()).failed());
-        }
-        if (c.budget().stage().criterion().kind() == dev.ampsieve.stage.Criterion.Kind.YIELD
-                && Phrases.yieldOf(c) != null) {
-            // judged by the yield: an error total inside the limit would not say why it misses
-            return Phrases.yieldText(c) + Phrases.limitedBy(c);
-        }
-        return Phrases.totalName(c.budget().stage().criterion()) + (c.trimmed() ? " after the trim " : " ")
-                + volts(c.errorV()) + " against " + volts(c.limitV()) + Phrases.limitedBy(c);
     }
 }

@@ -1,81 +1,60 @@
 package dev.ampsieve.advice;
 
-import static dev.ampsieve.advice.Phrases.volts;
-
 import dev.ampsieve.budget.Budget;
-import dev.ampsieve.budget.TermResult;
 import dev.ampsieve.budget.Verdict;
 import dev.ampsieve.stage.Criterion;
 
 /**
  * The direct answer to "can this part meet the spec without a trim?": yes only when it meets
- * every hard constraint and the limit as it is.
+ * every hard constraint and the limit as it is. {@code report} words the answer.
  *
  * @param untrimmedErrorV the criterion's total without any trim, output volts
- * @param answer          one line beginning "yes:" or "no:"
+ * @param margin          the criterion's own margin of that total (of yield under a yield criterion)
+ * @param outcome         which answer, and why
+ * @param afterTrimV      for {@link Outcome#NEEDS_TRIM}: the criterion's total after the stage's
+ *                        trim, output volts; NaN otherwise
  */
-public record Sufficiency(boolean yes, Budget budget, double untrimmedErrorV, double margin, String answer) {
+public record Sufficiency(
+        boolean yes, Budget budget, double untrimmedErrorV, double margin, Outcome outcome, double afterTrimV) {
+
+    /** The answer's kind. */
+    public enum Outcome {
+        /** Meets every hard constraint and the limit as it is. */
+        YES,
+        /** Fails a hard constraint ({@link Rejected#failedConstraints()}). */
+        FAILS_CONSTRAINT,
+        /** Fits only after the stage's trim. */
+        NEEDS_TRIM,
+        /** The sampling left the untrimmed yield open: not shown met, so no. */
+        UNDECIDED,
+        /** Does not meet the limit untrimmed. */
+        NO
+    }
 
     public static Sufficiency of(Budget b) {
         Criterion crit = b.stage().criterion();
         double err = Candidate.total(crit, b.worstCaseV(), b.rssV());
         double margin = Candidate.marginOf(b, b.yield(), err); // the criterion's own margin
-        String id = b.part().id();
-        String name = Phrases.totalName(crit);
-        String figure = name + " " + volts(err) + " against " + volts(b.limitV());
-        if (crit.kind() == Criterion.Kind.YIELD && b.yield() != null) {
-            figure = "yield " + Phrases.yieldPercent(b.yield().value()) + " (95 % interval from "
-                    + Phrases.yieldPercent(b.yield().low()) + ", target " + Phrases.percentFine(crit.yieldTarget())
-                    + "), " + figure;
-        }
         if (!b.constraintsMet()) {
-            return new Sufficiency(
-                    false,
-                    b,
-                    err,
-                    margin,
-                    "no: " + id + " fails a hard constraint: "
-                            + String.join(", ", Rejected.of(b).failed()));
+            return new Sufficiency(false, b, err, margin, Outcome.FAILS_CONSTRAINT, Double.NaN);
         }
         if (b.verdict() == Verdict.FITS) {
-            return new Sufficiency(
-                    true,
-                    b,
-                    err,
-                    margin,
-                    "yes: " + id + " meets the limit untrimmed; " + figure + " (" + Phrases.margin(crit, margin)
-                            + ").");
+            return new Sufficiency(true, b, err, margin, Outcome.YES, Double.NaN);
         }
-        TermResult t = b.limitingTerm() == null ? null : b.term(b.limitingTerm());
-        String limited = t == null ? "" : ", limited by " + t.label() + " (" + volts(t.outputV()) + ")";
         if (b.verdict() == Verdict.FITS_AFTER_TRIM) {
             double after =
                     Candidate.total(crit, b.trimmed().worstCaseV(), b.trimmed().rssV());
-            return new Sufficiency(
-                    false,
-                    b,
-                    err,
-                    margin,
-                    "no: " + id + " needs the trim; untrimmed " + figure + limited + "; after the trim " + volts(after)
-                            + ".");
+            return new Sufficiency(false, b, err, margin, Outcome.NEEDS_TRIM, after);
         }
         if (b.verdict() == Verdict.UNDECIDED && b.yield().high() >= crit.yieldTarget()) {
             // not shown met: the answer to "does it suffice" is no, and why is the sampling, not a refutation
-            return new Sufficiency(
-                    false,
-                    b,
-                    err,
-                    margin,
-                    "no: " + id + " is undecided untrimmed: after " + b.yield().trials()
-                            + " simulated units the 95 % interval of its yield still holds the target; " + figure
-                            + limited + ".");
+            return new Sufficiency(false, b, err, margin, Outcome.UNDECIDED, Double.NaN);
         }
-        return new Sufficiency(
-                false,
-                b,
-                err,
-                margin,
-                "no: " + id + " does not meet the limit untrimmed; " + figure
-                        + (margin < 0 ? " (" + Phrases.margin(crit, margin) + ")" : "") + limited + ".");
+        return new Sufficiency(false, b, err, margin, Outcome.NO, Double.NaN);
+    }
+
+    /** The part's failed hard constraints, in the budget's order. */
+    public Rejected rejected() {
+        return Rejected.of(budget);
     }
 }

@@ -9,7 +9,8 @@ import java.util.List;
  * @param selfCorrecting the cheapest fitting chopper / auto-zero part, or null
  * @param standard       the cheapest fitting standard part, or null
  * @param savingPerUnit  standard cost minus self-correcting cost; NaN when either is missing
- * @param caveats        what to check with the self-correcting part, with numbers
+ * @param caveats        what to check with the self-correcting part, in numbers
+ * @param fittingCount   how many self-correcting parts fit
  * @param resistorOption when a zero-drift part is warranted under a worst-case or RSS criterion: a
  *                       standard part cheaper than it that would fit with better resistors, and
  *                       the resistors it needs; null when there is none
@@ -20,7 +21,8 @@ public record ZeroDriftAdvice(
         Candidate standard,
         double savingPerUnit,
         double savingTotal,
-        List<String> caveats,
+        List<Caveat> caveats,
+        int fittingCount,
         ResistorOption resistorOption) {
 
     /** A standard part and the change of resistors ({@link Change.Kind#BETTER_RESISTORS}) that lets it fit. */
@@ -32,13 +34,15 @@ public record ZeroDriftAdvice(
             Candidate standard,
             double savingPerUnit,
             double savingTotal,
-            List<String> caveats) {
-        this(status, selfCorrecting, standard, savingPerUnit, savingTotal, caveats, null);
+            List<Caveat> caveats,
+            int fittingCount) {
+        this(status, selfCorrecting, standard, savingPerUnit, savingTotal, caveats, fittingCount, null);
     }
 
     /** The same advice with {@code option} as its resistor option. */
     public ZeroDriftAdvice withResistorOption(ResistorOption option) {
-        return new ZeroDriftAdvice(status, selfCorrecting, standard, savingPerUnit, savingTotal, caveats, option);
+        return new ZeroDriftAdvice(
+                status, selfCorrecting, standard, savingPerUnit, savingTotal, caveats, fittingCount, option);
     }
 
     public ZeroDriftAdvice {

@@ -119,7 +119,7 @@ public final class CompareReport {
                 o.append("Verdict of ").append(x.id()).append(": ").append(own).append('\n');
             }
         }
-        o.append('\n').append(c.conclusion()).append('\n');
+        o.append('\n').append(AdviceText.conclusion(c)).append('\n');
         o.append('\n').append(Caution.TEXT).append('\n');
         // the conclusion quotes part ids and currencies: no control character gets through
         return Wrap.prose(Visible.lines(o.toString()), width);
@@ -174,7 +174,7 @@ public final class CompareReport {
             JsonSupport.put(n, "ratio", d.ratio());
         }
         JsonSupport.put(o, "preferred", c.preferred());
-        o.put("conclusion", c.conclusion());
+        o.put("conclusion", AdviceText.conclusion(c));
         return JsonSupport.render(o);
     }
 }

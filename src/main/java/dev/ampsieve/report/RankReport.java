@@ -176,7 +176,7 @@ public final class RankReport {
             t.lines(width).forEach(l -> o.append(l).append('\n'));
         }
         o.append('\n').append("Advice\n");
-        for (String l : r.advice().lines()) {
+        for (String l : AdviceText.lines(r.advice())) {
             o.append("  ").append(l).append('\n');
         }
         Candidate pick = r.advice().pick();
@@ -473,13 +473,13 @@ public final class RankReport {
         JsonSupport.put(zn, "savingPerUnit", z.savingPerUnit());
         JsonSupport.put(zn, "savingTotal", z.savingTotal());
         ArrayNode cav = zn.putArray("caveats");
-        z.caveats().forEach(cav::add);
+        z.caveats().forEach(c -> cav.add(AdviceText.caveat(c)));
         if (z.resistorOption() == null) {
             zn.putNull("resistorOption");
         } else {
             ObjectNode ro = zn.putObject("resistorOption");
             ro.set("part", ref(z.resistorOption().part()));
-            ro.put("text", z.resistorOption().change().text());
+            ro.put("text", AdviceText.change(z.resistorOption().change(), a.stage()));
             ObjectNode rv = ro.putObject("values");
             z.resistorOption().change().values().forEach((k, v) -> JsonSupport.put(rv, k, v));
         }
@@ -495,7 +495,7 @@ public final class RankReport {
             for (Change c : nf.changes()) {
                 ObjectNode cn = ch.addObject();
                 cn.put("kind", c.kind().key());
-                cn.put("text", c.text());
+                cn.put("text", AdviceText.change(c, a.stage()));
                 ObjectNode vals = cn.putObject("values");
                 c.values().forEach((k, v) -> JsonSupport.put(vals, k, v));
             }
@@ -524,7 +524,7 @@ public final class RankReport {
             }
         }
         ArrayNode lines = n.putArray("lines");
-        a.lines().forEach(lines::add);
+        AdviceText.lines(a).forEach(lines::add);
         return n;
     }
 

@@ -216,10 +216,11 @@ final class RecordContent {
             o.add(table(List.of("part", "reason"), rej, false));
         }
         o.add(new RecordDoc.Heading(3, "Advice", "advice"));
-        if (r.advice().lines().isEmpty()) {
+        List<String> adviceLines = AdviceText.lines(r.advice());
+        if (adviceLines.isEmpty()) {
             o.add(new RecordDoc.Para("No advice for this stage."));
         }
-        for (String line : r.advice().lines()) {
+        for (String line : adviceLines) {
             o.add(new RecordDoc.Para(line));
         }
     }
@@ -252,7 +253,7 @@ final class RecordContent {
                 List.of("term (output)", c.a().id() + " (from)", c.b().id() + " (to)", "better", "by"),
                 rows,
                 List.of(false, true, true, false, true)));
-        o.add(new RecordDoc.Para("Conclusion: " + c.conclusion()));
+        o.add(new RecordDoc.Para("Conclusion: " + AdviceText.conclusion(c)));
     }
 
     private static void part(List<RecordDoc.Block> o, Candidate c) {

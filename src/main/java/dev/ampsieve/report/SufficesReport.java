@@ -20,7 +20,7 @@ public final class SufficesReport {
     public static String text(Sufficiency s, String stageLabel, int width) {
         Budget b = s.budget();
         StringBuilder o = new StringBuilder();
-        o.append(s.answer()).append('\n');
+        o.append(AdviceText.answer(s)).append('\n');
         // the answer names the failed constraints; each one's numbers follow
         for (var c : b.constraints()) {
             if (!c.ok()) {
@@ -77,7 +77,7 @@ public final class SufficesReport {
         Budget b = s.budget();
         ObjectNode o = JsonSupport.object();
         o.put("answer", s.yes() ? "yes" : "no");
-        o.put("text", s.answer());
+        o.put("text", AdviceText.answer(s));
         JsonSupport.put(o, "stage", stageLabel);
         o.put("part", b.part().id());
         o.put("verdict", b.verdict().key());

@@ -18,6 +18,7 @@ import dev.ampsieve.budget.Verdict;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.catalog.Range;
 import dev.ampsieve.catalog.Spread;
+import dev.ampsieve.report.AdviceText;
 import dev.ampsieve.stage.Board;
 import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.stage.Follower;
@@ -111,12 +112,12 @@ class ActionableAdviceTest {
         //   10 MΩ x X + 10 MΩ x X / 2 = 15 MΩ x X <= 1 mV - 150.675 µV = 849.325 µV
         //   X <= 849.325 µV / 15 MΩ = 56.62 pA, printed rounded down: 56.6 pA, at 70 °C
         PartTarget ib = targets(r).get(PartTarget.Quantity.IB);
-        assertNotNull(ib, r.advice().lines().toString());
+        assertNotNull(ib, AdviceText.lines(r.advice()).toString());
         assertEquals(56.6e-12, ib.value(), 1e-18);
         assertEquals(70.0, ib.atC(), 0);
         assertTrue(
-                r.advice().lines().contains("  - IB ≤ 56.6 pA at 70 °C (IOS counted equal to it)"),
-                r.advice().lines().toString());
+                AdviceText.lines(r.advice()).contains("  - IB ≤ 56.6 pA at 70 °C (IOS counted equal to it)"),
+                AdviceText.lines(r.advice()).toString());
         // re-checked: the part with the printed figure fits; one unit more in the last digit does not
         assertTrue(fits(engine, s, PartEdit.withIb(p, 56.6e-12)));
         assertFalse(fits(engine, s, PartEdit.withIb(p, 56.7e-12)));
@@ -197,11 +198,11 @@ class ActionableAdviceTest {
         // no bias current in the part: no IB target
         assertFalse(t.containsKey(PartTarget.Quantity.IB));
         assertTrue(
-                r.advice().lines().contains("  - vos.max ≤ 4.46 µV at 25 °C (drift as now)"),
-                r.advice().lines().toString());
+                AdviceText.lines(r.advice()).contains("  - vos.max ≤ 4.46 µV at 25 °C (drift as now)"),
+                AdviceText.lines(r.advice()).toString());
         assertTrue(
-                r.advice().lines().contains("  - drift ≤ 44.4 nV/°C"),
-                r.advice().lines().toString());
+                AdviceText.lines(r.advice()).contains("  - drift ≤ 44.4 nV/°C"),
+                AdviceText.lines(r.advice()).toString());
         // re-checked as printed
         LinearEngine e = new LinearEngine();
         assertTrue(fits(e, s, PartEdit.withVos(p, 4.46e-6, p.vosDrift())));
@@ -281,18 +282,18 @@ class ActionableAdviceTest {
         Map<Change.Kind, Change> c = changes(r);
         assertFalse(c.containsKey(Change.Kind.LOWER_GAIN), c.toString());
         Change split = c.get(Change.Kind.SPLIT_GAIN);
-        assertNotNull(split, r.advice().lines().toString());
+        assertNotNull(split, AdviceText.lines(r.advice()).toString());
         assertEquals(320e3, split.values().get("rf"), 1e-6);
         assertEquals(321.0, split.values().get("gainHere"), 1e-9);
         assertEquals(1000.0 / 321, split.values().get("gainAfter"), 1e-9);
         assertEquals(3.21e-3, split.values().get("limitHereV"), 1e-12);
         assertTrue(
-                split.text()
+                AdviceText.change(split, s)
                         .startsWith("split the gain with a later stage: a gain of 1000 in one stage does not fit"
                                 + " even at half of it; 321 here (Rf 320 kΩ with Rg 1.00 kΩ) and 3.12 after it would, this stage held to"
                                 + " 3.21 mV at its output (the limit divided by 3.12): the later stage's errors are divided by 321 when"
                                 + " referred to the input"),
-                split.text());
+                AdviceText.change(split, s));
         // re-checked: the split stage as printed fits; Rf one unit higher (321 k, G1 = 322) does not
         assertTrue(fits(engine, Advisor.splitAt(s, 320e3), p));
         assertFalse(fits(engine, Advisor.splitAt(s, 321e3), p));
@@ -310,9 +311,9 @@ class ActionableAdviceTest {
                 changes(r).containsKey(Change.Kind.LOWER_SOURCE_RESISTANCE),
                 changes(r).toString());
         assertTrue(
-                r.advice().lines().stream()
+                AdviceText.lines(r.advice()).stream()
                         .noneMatch(l -> l.matches(".* [0-9.]+ Ω or lower.*") && l.contains("source")),
-                r.advice().lines().toString());
+                AdviceText.lines(r.advice()).toString());
         // half the gain does fit (50 x 9.995 µV + 50 x 1 nA x 10 kΩ = 999.75 µV): that is offered instead
         assertTrue(changes(r).containsKey(Change.Kind.LOWER_GAIN));
     }
@@ -409,7 +410,7 @@ class ActionableAdviceTest {
         Ranking r = Ranker.rank(s, List.of(p), engine);
         assertFalse(
                 changes(r).containsKey(Change.Kind.LOWER_SOURCE_RESISTANCE),
-                r.advice().lines().toString());
+                AdviceText.lines(r.advice()).toString());
     }
 
     @Test
@@ -428,14 +429,14 @@ class ActionableAdviceTest {
         Ranking r = Ranker.rank(s, List.of(z, std), new LinearEngine());
         ZeroDriftAdvice zd = r.advice().zeroDrift();
         assertEquals(ZeroDriftAdvice.Status.ONLY_OPTION, zd.status());
-        assertNotNull(zd.resistorOption(), r.advice().lines().toString());
+        assertNotNull(zd.resistorOption(), AdviceText.lines(r.advice()).toString());
         assertEquals("S", zd.resistorOption().part().id());
         assertEquals(8.08e-5, zd.resistorOption().change().values().get("ratioTolerance"), 1e-12);
         assertTrue(
-                r.advice().lines().stream()
+                AdviceText.lines(r.advice()).stream()
                         .anyMatch(l -> l.startsWith("Or a standard part with better resistors: S at"
                                 + " 1.00 USD would fit with resistors matched to 80.8 ppm")),
-                r.advice().lines().toString());
+                AdviceText.lines(r.advice()).toString());
         // re-checked as printed
         assertTrue(fits(new LinearEngine(), StageEdit.withResistors(s, 8.08e-5 / 1e-4), std));
         assertFalse(fits(new LinearEngine(), StageEdit.withResistors(s, 8.09e-5 / 1e-4), std));

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import dev.ampsieve.budget.BudgetCalculator;
 import dev.ampsieve.catalog.Spread;
 import dev.ampsieve.fixtures.PartFixture;
+import dev.ampsieve.report.AdviceText;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.StageLoader;
 import java.util.List;
@@ -32,10 +33,10 @@ class BoardAdviceTest {
         p.vos = new Spread(null, 1e-6, null);
         Ranking r = Ranker.rank(s, List.of(p.build()), BudgetCalculator::compute);
         assertTrue(
-                r.advice().lines().stream()
+                AdviceText.lines(r.advice()).stream()
                         .anyMatch(l -> l.startsWith("Its largest term comes from the board, not the part:"
                                 + " thermal EMF, 800 µV at the output (80 % of the limit)")),
-                r.advice().lines().toString());
+                AdviceText.lines(r.advice()).toString());
     }
 
     @Test
@@ -53,10 +54,10 @@ class BoardAdviceTest {
         assertEquals(0.0997, emf.values().get("gradient"), 1e-12);
         assertEquals(2 * 40e-6 * 0.0997, emf.values().get("thermalEmfV"), 1e-15);
         assertTrue(
-                emf.text()
+                AdviceText.change(emf, s)
                         .startsWith(
                                 "less thermal EMF at the input: 7.98 µV or less (now 16.0 µV): pair the 2 junction(s)"),
-                emf.text());
+                AdviceText.change(emf, s));
     }
 
     @Test
@@ -75,6 +76,8 @@ class BoardAdviceTest {
                 r.advice().noFit().changes().stream().collect(Collectors.toMap(Change::kind, x -> x));
         Change leak = c.get(Change.Kind.LESS_LEAKAGE);
         assertEquals(10.2e9, leak.values().get("leakageResistance"), 1e-3);
-        assertTrue(leak.text().contains("or a guard ring driven at the node's potential"), leak.text());
+        assertTrue(
+                AdviceText.change(leak, s).contains("or a guard ring driven at the node's potential"),
+                AdviceText.change(leak, s));
     }
 }

@@ -14,6 +14,7 @@ import dev.ampsieve.budget.ConstraintKind;
 import dev.ampsieve.budget.ConstraintResult;
 import dev.ampsieve.budget.Verdict;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.report.AdviceText;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.testing.Budgets;
 import dev.ampsieve.units.Dimension;
@@ -36,7 +37,7 @@ class ComparisonTest {
         assertEquals(
                 "A fits (margin 50 %) and B does not (worst-case 1.90 mV against 1.00 mV, limited by initial"
                         + " offset (1.50 mV)): A.",
-                c.conclusion());
+                AdviceText.conclusion(c));
         Comparison.TermDelta offset = c.terms().stream()
                 .filter(t -> t.key().equals("offset"))
                 .findFirst()
@@ -56,7 +57,7 @@ class ComparisonTest {
         assertEquals(
                 "A fits (margin 50 %) and B does not (worst-case after the trim 1.20 mV against 1.00 mV, largest"
                         + " term before the trim initial offset (1.50 mV)): A.",
-                c.conclusion());
+                AdviceText.conclusion(c));
     }
 
     @Test
@@ -68,7 +69,7 @@ class ComparisonTest {
         assertEquals(
                 "Both fit; B costs 2.00 USD less per unit (2000.00 USD over 1000 units), margin 20 % against"
                         + " 50 %: B.",
-                c.conclusion());
+                AdviceText.conclusion(c));
     }
 
     @Test
@@ -85,7 +86,9 @@ class ComparisonTest {
                 budget(s, a, 0.2e-3, 0.3e-3, 0.3e-3, Verdict.FITS),
                 budget(s, a2, 0.2e-3, 0.3e-3, 0.3e-3, Verdict.FITS));
         assertNull(c.preferred());
-        assertTrue(c.conclusion().startsWith("Both fit at the same cost with the same margin"), c.conclusion());
+        assertTrue(
+                AdviceText.conclusion(c).startsWith("Both fit at the same cost with the same margin"),
+                AdviceText.conclusion(c));
     }
 
     @Test
@@ -93,20 +96,21 @@ class ComparisonTest {
         Sufficiency yes = Sufficiency.of(budget(s, b, 0.4e-3, 0.4e-3, 0.4e-3, Verdict.FITS));
         assertTrue(yes.yes());
         assertEquals(
-                "yes: B meets the limit untrimmed; worst-case 800 µV against 1.00 mV (margin 20 %).", yes.answer());
+                "yes: B meets the limit untrimmed; worst-case 800 µV against 1.00 mV (margin 20 %).",
+                AdviceText.answer(yes));
 
         Sufficiency trim = Sufficiency.of(budget(s, b, 1.5e-3, 0.4e-3, 0.41e-3, Verdict.FITS_AFTER_TRIM));
         assertFalse(trim.yes());
         assertEquals(
                 "no: B needs the trim; untrimmed worst-case 1.90 mV against 1.00 mV, limited by initial offset"
                         + " (1.50 mV); after the trim 410 µV.",
-                trim.answer());
+                AdviceText.answer(trim));
 
         Sufficiency over = Sufficiency.of(budget(s, b, 0.9e-3, 0.3e-3, 0.3e-3, Verdict.NO_FIT));
         assertEquals(
                 "no: B does not meet the limit untrimmed; worst-case 1.20 mV against 1.00 mV (20 % over), limited by"
                         + " initial offset (900 µV).",
-                over.answer());
+                AdviceText.answer(over));
 
         // a 5 V supply against a part rated 9 V to 36 V: 4 V short at the low end
         Sufficiency rejected = Sufficiency.of(Budgets.rejected(
@@ -116,6 +120,6 @@ class ComparisonTest {
                         ConstraintKind.SUPPLY,
                         false,
                         new ConstraintFact.Span(5, 5, 9, 36, Dimension.VOLTAGE, 4, 0, null))));
-        assertEquals("no: B fails a hard constraint: supply", rejected.answer());
+        assertEquals("no: B fails a hard constraint: supply", AdviceText.answer(rejected));
     }
 }

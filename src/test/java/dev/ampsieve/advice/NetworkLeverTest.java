@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import dev.ampsieve.budget.BudgetCalculator;
 import dev.ampsieve.catalog.Spread;
 import dev.ampsieve.fixtures.PartFixture;
+import dev.ampsieve.report.AdviceText;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.StageLoader;
 import java.util.List;
@@ -46,10 +47,10 @@ class NetworkLeverTest {
         Change c = changes(s, p).get(Change.Kind.LOWER_GAIN);
         assertEquals(9.99e3, c.values().get("rf"), 1e-6);
         assertTrue(
-                c.text()
+                AdviceText.change(c, s)
                         .startsWith(
                                 "a smaller feedback resistor: Rf 9.99 kΩ with Cf 15.0 pF (the same signal bandwidth)"),
-                c.text()); // Cf x 15/9.99 keeps Rf Cf
+                AdviceText.change(c, s)); // Cf x 15/9.99 keeps Rf Cf
         assertTrue(!changes(s, p).containsKey(Change.Kind.LOWER_SOURCE_RESISTANCE)); // a lower shunt only raises NG
     }
 
@@ -72,6 +73,9 @@ class NetworkLeverTest {
         p.gbw = 10e6;
         Change c = changes(s, p).get(Change.Kind.BETTER_RESISTORS);
         assertEquals(0.547e-2, c.values().get("ratioTolerance"), 1e-12);
-        assertTrue(c.text().startsWith("better-matched resistor pairs: r2/r1 and r4/r3 each within 0.547 %"), c.text());
+        assertTrue(
+                AdviceText.change(c, s)
+                        .startsWith("better-matched resistor pairs: r2/r1 and r4/r3 each within 0.547 %"),
+                AdviceText.change(c, s));
     }
 }

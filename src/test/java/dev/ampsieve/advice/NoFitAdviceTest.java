@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.report.AdviceText;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.Topology;
 import dev.ampsieve.stage.Trim;
@@ -54,22 +55,21 @@ class NoFitAdviceTest {
         assertTrue(!c.containsKey(Change.Kind.NARROWER_TEMPERATURE));
         assertTrue(!c.containsKey(Change.Kind.ALLOW_TRIM));
         assertTrue(
-                r.advice().lines().stream()
+                AdviceText.lines(r.advice()).stream()
                         .anyMatch(l -> l.startsWith("Nothing fits. Closest: P, worst-case 1.64 mV of"
                                 + " 1.00 mV (64 % over), limited by bias current (700 µV).")),
-                r.advice().lines().toString());
+                AdviceText.lines(r.advice()).toString());
         // the input signal stays: full scale 2.5 V x 60.9 / 100 = 1.5225 V
         assertTrue(
-                r.advice()
-                        .lines()
+                AdviceText.lines(r.advice())
                         .contains("  - a gain of 60.9 or lower (now 100): Rf 59.9 kΩ with Rg 1.00 kΩ;"
                                 + " full-scale output then 1.52 V (now 2.50 V)"),
-                r.advice().lines().toString());
+                AdviceText.lines(r.advice()).toString());
         // a part: 100 * (9.4 uV + IB * 10 k) <= 1 mV  ->  IB <= 0.6 uV / 10 k = 60 pA; printed rounded down
         assertEquals(List.of(new PartTarget(PartTarget.Quantity.IB, 59.9e-12, Double.NaN)), n.targets());
         assertTrue(
-                r.advice().lines().contains("  - IB ≤ 59.9 pA from 0 °C to 70 °C (IOS counted equal to it)"),
-                r.advice().lines().toString());
+                AdviceText.lines(r.advice()).contains("  - IB ≤ 59.9 pA from 0 °C to 70 °C (IOS counted equal to it)"),
+                AdviceText.lines(r.advice()).toString());
     }
 
     @Test
@@ -116,7 +116,9 @@ class NoFitAdviceTest {
         // NG * 12 uV <= 1 mV  ->  NG <= 83.33 -> 83.3, signal gain -(83.3 - 1) = -82.3
         assertEquals(83.3, c.values().get("noiseGain"), 1e-9);
         assertEquals(-82.3, c.values().get("signalGain"), 1e-9);
-        assertTrue(c.text().startsWith("a gain of -82.3 or less in magnitude (now -99; noise gain 83.3)"), c.text());
+        assertTrue(
+                AdviceText.change(c, s).startsWith("a gain of -82.3 or less in magnitude (now -99; noise gain 83.3)"),
+                AdviceText.change(c, s));
     }
 
     @Test
@@ -136,8 +138,8 @@ class NoFitAdviceTest {
         Ranking r = Ranker.rank(s, List.of(part("A").build(), part("B").build()), new LinearEngine());
         assertNull(r.advice().noFit().closest());
         assertTrue(
-                r.advice().lines().contains("Nothing fits: every part fails a hard constraint: supply (2)."),
-                r.advice().lines().toString());
+                AdviceText.lines(r.advice()).contains("Nothing fits: every part fails a hard constraint: supply (2)."),
+                AdviceText.lines(r.advice()).toString());
     }
 
     @Test
@@ -171,7 +173,9 @@ class NoFitAdviceTest {
         Ranking r = Ranker.rank(s, List.of(p), engine);
         Change c = changes(r).get(Change.Kind.LOWER_YIELD_TARGET);
         assertEquals(0.949, c.values().get("yieldTarget"), 1e-12);
-        assertTrue(c.text().startsWith("a yield target of 94.9 % or lower"), c.text());
+        assertTrue(
+                AdviceText.change(c, r.stage()).startsWith("a yield target of 94.9 % or lower"),
+                AdviceText.change(c, r.stage()));
     }
 
     @Test
@@ -187,7 +191,7 @@ class NoFitAdviceTest {
         Change c = changes(Ranker.rank(s, List.of(p), engine)).get(Change.Kind.LOWER_GAIN);
         assertEquals(2.12, c.values().get("noiseGain"), 1e-9);
         assertEquals(1120.0, c.values().get("rf"), 1e-9);
-        assertTrue(c.text().contains("Rf 1.12 kΩ with Rg 1.01 kΩ"), c.text());
+        assertTrue(AdviceText.change(c, s).contains("Rf 1.12 kΩ with Rg 1.01 kΩ"), AdviceText.change(c, s));
         Stage built = StageEdit.withRf(s, c.values().get("rf"));
         assertTrue(engine.compute(built, p).verdict() != dev.ampsieve.budget.Verdict.NO_FIT);
     }
@@ -204,8 +208,8 @@ class NoFitAdviceTest {
         Map<Change.Kind, Change> c = changes(r);
         assertTrue(!c.containsKey(Change.Kind.LOWER_GAIN) && !c.containsKey(Change.Kind.SPLIT_GAIN), c.toString());
         assertTrue(
-                r.advice().lines().stream().noneMatch(l -> l.contains(" 0 Ω")),
-                r.advice().lines().toString());
+                AdviceText.lines(r.advice()).stream().noneMatch(l -> l.contains(" 0 Ω")),
+                AdviceText.lines(r.advice()).toString());
     }
 
     @Test
@@ -218,7 +222,10 @@ class NoFitAdviceTest {
         Part p = part("P").vos(null, 1.419e-6).build();
         Change c = changes(Ranker.rank(lsb, List.of(p), new LinearEngine())).get(Change.Kind.LOOSER_LIMIT);
         assertEquals(142e-6, c.values().get("limitV"), 1e-12);
-        assertTrue(c.text().startsWith("a limit of 2.28 LSB (142 µV at the output) or looser (now 1 LSB)"), c.text());
+        assertTrue(
+                AdviceText.change(c, lsb)
+                        .startsWith("a limit of 2.28 LSB (142 µV at the output) or looser (now 1 LSB)"),
+                AdviceText.change(c, lsb));
         // input form, NG 3 (Rf 2 k, Rg 1 k): 3 x 473.2 µV = 1.4196 mV needs 1.42 mV = 473.33 µV at the input;
         // "473 µV" (1.419 mV at the output) would not fit, 474 µV does
         Stage in = stage().rf(2e3)
@@ -227,6 +234,8 @@ class NoFitAdviceTest {
                 .build();
         Part q = part("Q").vos(null, 473.2e-6).build();
         Change d = changes(Ranker.rank(in, List.of(q), new LinearEngine())).get(Change.Kind.LOOSER_LIMIT);
-        assertTrue(d.text().startsWith("a limit of 474 µV at the input (1.42 mV at the output)"), d.text());
+        assertTrue(
+                AdviceText.change(d, in).startsWith("a limit of 474 µV at the input (1.42 mV at the output)"),
+                AdviceText.change(d, in));
     }
 }

@@ -15,6 +15,7 @@ import dev.ampsieve.budget.Verdict;
 import dev.ampsieve.catalog.Architecture;
 import dev.ampsieve.catalog.InputType;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.report.AdviceText;
 import dev.ampsieve.report.ConstraintText;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.testing.Budgets;
@@ -70,11 +71,11 @@ class RankerTest {
         // margins: CHEAP after the trim (1 - 0.41) = 59 %, PREC (1 - 0.5) = 50 %
         assertEquals(0.59, r.candidates().get(0).margin(), 1e-12);
         assertTrue(
-                r.advice().lines().stream()
+                AdviceText.lines(r.advice()).stream()
                         .anyMatch(l -> l.startsWith("A one-point trim is warranted: CHEAP at 1.00 USD"
                                 + " plus the trim at 0.50 USD costs 1.50 USD per unit, 1.50 USD less than PREC as it is (1500.00 USD over"
                                 + " 1000 units)")),
-                r.advice().lines().toString());
+                AdviceText.lines(r.advice()).toString());
     }
 
     @Test
@@ -96,7 +97,7 @@ class RankerTest {
         Ranking r = rank(s, m);
         assertEquals(TrimAdvice.Status.REQUIRED, r.advice().trim().status());
         assertNull(r.advice().cheapestAsIs());
-        assertTrue(r.advice().lines().contains("No part fits as it is."));
+        assertTrue(AdviceText.lines(r.advice()).contains("No part fits as it is."));
     }
 
     @Test
@@ -137,14 +138,15 @@ class RankerTest {
         // 20 kHz against a 10 Hz band edge: 2000 times, well clear
         assertTrue(
                 z.caveats().stream()
+                        .map(AdviceText::caveat)
                         .anyMatch(c -> c.startsWith("chopping at 20.0 kHz is 2000 times the 10.0 Hz band edge")),
-                z.caveats().toString());
+                z.caveats().stream().map(AdviceText::caveat).toList().toString());
         assertTrue(
-                z.caveats().stream().anyMatch(c -> c.startsWith("bias current up to 300 pA")),
-                z.caveats().toString());
+                z.caveats().stream().map(AdviceText::caveat).anyMatch(c -> c.startsWith("bias current up to 300 pA")),
+                z.caveats().stream().map(AdviceText::caveat).toList().toString());
         assertTrue(
-                z.caveats().stream().anyMatch(c -> c.startsWith("current noise 150 fA/√Hz")),
-                z.caveats().toString());
+                z.caveats().stream().map(AdviceText::caveat).anyMatch(c -> c.startsWith("current noise 150 fA/√Hz")),
+                z.caveats().stream().map(AdviceText::caveat).toList().toString());
     }
 
     @Test
@@ -164,7 +166,7 @@ class RankerTest {
         m.put(std, budget(s, std, 1.0e-3, 0.9e-3, 0.9e-3, Verdict.NO_FIT));
         Advice a = rank(s, m).advice();
         assertEquals(ZeroDriftAdvice.Status.ONLY_OPTION, a.zeroDrift().status());
-        String line = a.lines().stream()
+        String line = AdviceText.lines(a).stream()
                 .filter(l -> l.startsWith("A zero-drift part is warranted"))
                 .findFirst()
                 .orElseThrow();
@@ -174,7 +176,7 @@ class RankerTest {
                 line);
         // a single one is still named as the only one
         m.remove(az);
-        String one = rank(s, m).advice().lines().stream()
+        String one = AdviceText.lines(rank(s, m).advice()).stream()
                 .filter(l -> l.startsWith("A zero-drift"))
                 .findFirst()
                 .orElseThrow();
@@ -184,7 +186,7 @@ class RankerTest {
     @Test
     void anEmptyCatalogGetsNoTrimVerdict() {
         Stage s = stage().trim(true, 10e-6, 0.50).build();
-        List<String> lines = rank(s, new LinkedHashMap<>()).advice().lines();
+        List<String> lines = AdviceText.lines(rank(s, new LinkedHashMap<>()).advice());
         assertTrue(lines.contains("No part to rank: the catalog (or the query) gave none."), lines.toString());
         assertTrue(lines.stream().noneMatch(l -> l.contains("trimmed part")), lines.toString());
     }
@@ -218,11 +220,10 @@ class RankerTest {
         assertEquals(ZeroDriftAdvice.Status.NOT_WARRANTED, z.status());
         assertEquals(-1.20, z.savingPerUnit(), 1e-12);
         assertTrue(
-                r.advice()
-                        .lines()
+                AdviceText.lines(r.advice())
                         .contains("A zero-drift part is not needed: STD (standard) fits at 1.00 USD,"
                                 + " 1.20 USD less than the cheapest zero-drift part that fits, CHOP."),
-                r.advice().lines().toString());
+                AdviceText.lines(r.advice()).toString());
     }
 
     @Test
@@ -230,8 +231,16 @@ class RankerTest {
         Stage s = stage().bandHigh(500).build();
         Part chop = part("CHOP").architecture(Architecture.AUTO_ZERO).fchop(2e3).build();
         Candidate c = Candidate.of(budget(s, chop, 0.1e-3, 0.1e-3, 0.1e-3, Verdict.FITS));
-        List<String> caveats = Advisor.caveats(s, c);
+        List<Caveat> facts = Advisor.caveats(s, c);
         // 2 kHz / 500 Hz = 4, under the common-practice clearance of 10
+        Caveat.Chopping chopping = facts.stream()
+                .filter(Caveat.Chopping.class::isInstance)
+                .map(Caveat.Chopping.class::cast)
+                .findFirst()
+                .orElseThrow();
+        assertEquals(4.0, chopping.ratio(), 1e-12);
+        assertEquals(Caveat.Position.NEAR, chopping.position());
+        List<String> caveats = facts.stream().map(AdviceText::caveat).toList();
         assertTrue(
                 caveats.stream()
                         .anyMatch(l -> l.startsWith("chopping at 2.00 kHz is only 4 times the 500 Hz band edge")),
@@ -319,14 +328,15 @@ class RankerTest {
         Stage s = stage().trim(true, 10e-6, 0.50).quantity(400).build();
         Ranking r = rank(s, precAndCheap(s, Verdict.FITS_AFTER_TRIM));
         assertTrue(
-                r.advice()
-                        .lines()
+                AdviceText.lines(r.advice())
                         .contains("Prices are the catalog's, each for its stated order quantity (1000 units),"
                                 + " not for this build of 400: smaller orders usually cost more per unit."),
-                r.advice().lines().toString());
+                AdviceText.lines(r.advice()).toString());
         // a build at or above the quoted quantity needs no such remark
         Stage big = stage().trim(true, 10e-6, 0.50).quantity(1000).build();
-        assertTrue(rank(big, precAndCheap(big, Verdict.FITS_AFTER_TRIM)).advice().lines().stream()
+        assertTrue(AdviceText.lines(
+                        rank(big, precAndCheap(big, Verdict.FITS_AFTER_TRIM)).advice())
+                .stream()
                 .noneMatch(l -> l.startsWith("Prices are the catalog's")));
     }
 
@@ -339,8 +349,10 @@ class RankerTest {
         m.put(chop, budget(s, chop, 0.5e-3, 0.2e-3, 0.2e-3, Verdict.FITS));
         ZeroDriftAdvice z = rank(s, m).advice().zeroDrift();
         assertTrue(
-                z.caveats().stream().anyMatch(c -> c.startsWith("chopping at 20.0 kHz is inside the 50.0 kHz band:")),
-                z.caveats().toString());
+                z.caveats().stream()
+                        .map(AdviceText::caveat)
+                        .anyMatch(c -> c.startsWith("chopping at 20.0 kHz is inside the 50.0 kHz band:")),
+                z.caveats().stream().map(AdviceText::caveat).toList().toString());
     }
 
     @Test
@@ -352,7 +364,9 @@ class RankerTest {
         Stage s = stage().limitV(1.0).fullScale(1.25).build();
         Part chop = chopper(2.20);
         Ranking r = Ranker.rank(s, List.of(chop), dev.ampsieve.budget.BudgetCalculator::compute);
-        List<String> caveats = r.advice().zeroDrift().caveats();
+        List<String> caveats = r.advice().zeroDrift().caveats().stream()
+                .map(AdviceText::caveat)
+                .toList();
         assertTrue(
                 caveats.stream()
                         .anyMatch(c -> c.startsWith(

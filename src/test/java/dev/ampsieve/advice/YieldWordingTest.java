@@ -12,6 +12,7 @@ import dev.ampsieve.budget.Trimmed;
 import dev.ampsieve.budget.Verdict;
 import dev.ampsieve.budget.YieldResult;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.report.AdviceText;
 import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.stage.Stage;
 import java.util.List;
@@ -58,7 +59,7 @@ class YieldWordingTest {
                 new YieldResult(0.99993, 0.99962, 0.99998, 13000, "sampled"),
                 null,
                 Verdict.FITS);
-        String answer = Sufficiency.of(b).answer();
+        String answer = AdviceText.answer(Sufficiency.of(b));
         assertTrue(answer.contains("yield 99.99 % (95 % interval from 99.96 %, target 99.9 %)"), answer);
         assertFalse(answer.contains("100.0 %"), answer);
     }
@@ -78,9 +79,9 @@ class YieldWordingTest {
         Comparison c = Comparison.of(a, b);
         assertEquals("A", c.preferred());
         assertTrue(
-                c.conclusion()
+                AdviceText.conclusion(c)
                         .contains(
                                 "B does not (yield after the trim 99.93 % (95 % interval from 99.88 %; target 99.9 %)"),
-                c.conclusion());
+                AdviceText.conclusion(c));
     }
 }

@@ -1,11 +1,13 @@
-package dev.ampsieve.advice;
+package dev.ampsieve.report;
 
+import dev.ampsieve.advice.Candidate;
+import dev.ampsieve.advice.PartTarget;
 import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.Units;
 import java.util.Locale;
 
-/** Numbers in words, the same way in every sentence of the advice. */
+/** Numbers in words, the same way in every sentence of the advice (moved here from {@code advice}: only {@code report} writes words). */
 final class Phrases {
     private Phrases() {}
 
@@ -180,30 +182,5 @@ final class Phrases {
 
     static String celsius(double t) {
         return Units.format(t, Dimension.TEMPERATURE);
-    }
-
-    /** Rounds to 3 significant digits. */
-    static double round3(double x) {
-        if (x == 0 || !Double.isFinite(x)) {
-            return x;
-        }
-        return Double.parseDouble(String.format(Locale.ROOT, "%.2e", x));
-    }
-
-    /** Rounds a positive x to 3 significant digits, never up (beyond round-off of x itself). */
-    static double round3Down(double x) {
-        double r = round3(x);
-        return r > x * (1 + 1e-12) ? r - unit3(x) : r;
-    }
-
-    /** Rounds a positive x to 3 significant digits, never down (beyond round-off of x itself). */
-    static double round3Up(double x) {
-        double r = round3(x);
-        return r < x * (1 - 1e-12) ? r + unit3(x) : r;
-    }
-
-    /** One unit in the third significant digit of x. */
-    static double unit3(double x) {
-        return Math.pow(10, Math.floor(Math.log10(Math.abs(x))) - 2);
     }
 }

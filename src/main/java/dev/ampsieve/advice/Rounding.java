@@ -1,0 +1,36 @@
+package dev.ampsieve.advice;
+
+import java.util.Locale;
+
+/**
+ * The rounding of a value the advice offers (a resistor, a limit, a target): to 3 significant
+ * digits, toward the side that fits, so that the value as printed is the value re-checked.
+ */
+final class Rounding {
+    private Rounding() {}
+
+    /** Rounds to 3 significant digits. */
+    static double round3(double x) {
+        if (x == 0 || !Double.isFinite(x)) {
+            return x;
+        }
+        return Double.parseDouble(String.format(Locale.ROOT, "%.2e", x));
+    }
+
+    /** Rounds a positive x to 3 significant digits, never up (beyond round-off of x itself). */
+    static double round3Down(double x) {
+        double r = round3(x);
+        return r > x * (1 + 1e-12) ? r - unit3(x) : r;
+    }
+
+    /** Rounds a positive x to 3 significant digits, never down (beyond round-off of x itself). */
+    static double round3Up(double x) {
+        double r = round3(x);
+        return r < x * (1 - 1e-12) ? r + unit3(x) : r;
+    }
+
+    /** One unit in the third significant digit of x. */
+    static double unit3(double x) {
+        return Math.pow(10, Math.floor(Math.log10(Math.abs(x))) - 2);
+    }
+}
