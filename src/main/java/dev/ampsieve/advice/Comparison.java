@@ -25,9 +25,28 @@ public record Comparison(Candidate a, Candidate b, List<TermDelta> terms, String
      * @param better      which part has the smaller output error, or {@link Side#EQUAL}
      * @param differenceV how much smaller the better one is, output volts
      * @param ratio       larger / smaller (infinite when the smaller is 0; 1 when equal)
+     * @param aEstimated  part a's figure rests on an estimated, typical-only or missing value
+     * @param bEstimated  likewise for part b
      */
     public record TermDelta(
-            String key, String label, double aV, double bV, Side better, double differenceV, double ratio) {}
+            String key,
+            String label,
+            double aV,
+            double bV,
+            Side better,
+            double differenceV,
+            double ratio,
+            boolean aEstimated,
+            boolean bEstimated) {
+
+        /**
+         * The smaller figure is 0 V only because the catalog lacks the value (an estimated term at
+         * 0 V): it must not win the row on that alone, so which part is better is unknown.
+         */
+        public boolean betterUnknown() {
+            return better == Side.A ? aEstimated && aV == 0 : better == Side.B && bEstimated && bV == 0;
+        }
+    }
 
     /** Which of the two parts a figure favours. */
     public enum Side {
@@ -54,7 +73,8 @@ public record Comparison(Candidate a, Candidate b, List<TermDelta> terms, String
             double x = pair[0] == null ? 0 : pair[0].outputV();
             double y = pair[1] == null ? 0 : pair[1].outputV();
             String label = pair[0] != null ? pair[0].label() : pair[1].label();
-            deltas.add(delta(key, label, x, y));
+            deltas.add(delta(
+                    key, label, x, y, pair[0] != null && pair[0].estimated(), pair[1] != null && pair[1].estimated()));
         });
         String preferred = preferred(a, b);
         return new Comparison(a, b, deltas, preferred);
@@ -62,14 +82,29 @@ public record Comparison(Candidate a, Candidate b, List<TermDelta> terms, String
 
     /** One pair of output errors compared (the smaller magnitude is better). */
     public static TermDelta delta(String key, String label, double x, double y) {
+        return delta(key, label, x, y, false, false);
+    }
+
+    /** As {@link #delta(String, String, double, double)}, each figure marked when it rests on an estimate. */
+    public static TermDelta delta(
+            String key, String label, double x, double y, boolean xEstimated, boolean yEstimated) {
         double hi = Math.max(Math.abs(x), Math.abs(y));
         double lo = Math.min(Math.abs(x), Math.abs(y));
         // equal within one part in 10^6 of the larger: finer than any printed digit
         if (hi - lo <= 1e-6 * hi) {
-            return new TermDelta(key, label, x, y, Side.EQUAL, 0, 1);
+            return new TermDelta(key, label, x, y, Side.EQUAL, 0, 1, xEstimated, yEstimated);
         }
         Side better = Math.abs(x) < Math.abs(y) ? Side.A : Side.B;
-        return new TermDelta(key, label, x, y, better, hi - lo, lo == 0 ? Double.POSITIVE_INFINITY : hi / lo);
+        return new TermDelta(
+                key,
+                label,
+                x,
+                y,
+                better,
+                hi - lo,
+                lo == 0 ? Double.POSITIVE_INFINITY : hi / lo,
+                xEstimated,
+                yEstimated);
     }
 
     private static String preferred(Candidate a, Candidate b) {

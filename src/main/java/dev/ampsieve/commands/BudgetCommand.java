@@ -5,10 +5,12 @@ import dev.ampsieve.budget.BudgetCalculator;
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.failure.ExitCode;
+import dev.ampsieve.report.BudgetCsv;
 import dev.ampsieve.report.BudgetJson;
 import dev.ampsieve.report.BudgetText;
 import dev.ampsieve.stage.Stage;
 import java.util.concurrent.Callable;
+import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -47,8 +49,8 @@ public final class BudgetCommand implements Callable<Integer> {
     @Mixin
     StageOption stageOption;
 
-    @Mixin
-    JsonOption format;
+    @ArgGroup(exclusive = true)
+    TableFormat format = new TableFormat();
 
     @Override
     public Integer call() throws Exception {
@@ -65,7 +67,9 @@ public final class BudgetCommand implements Callable<Integer> {
                 .print(
                         format.json()
                                 ? BudgetJson.render(b, bySigma, label)
-                                : BudgetText.render(b, bySigma, label, root.textWidth()));
+                                : format.csv()
+                                        ? BudgetCsv.render(b, label)
+                                        : BudgetText.render(b, bySigma, label, root.textWidth()));
         return ExitCode.OK.code();
     }
 }

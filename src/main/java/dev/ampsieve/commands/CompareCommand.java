@@ -9,6 +9,7 @@ import dev.ampsieve.failure.Refusal;
 import dev.ampsieve.report.CompareReport;
 import dev.ampsieve.stage.Stage;
 import java.util.concurrent.Callable;
+import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -45,8 +46,8 @@ public final class CompareCommand implements Callable<Integer> {
     @Mixin
     StageOption stageOption;
 
-    @Mixin
-    JsonOption format;
+    @ArgGroup(exclusive = true)
+    TableFormat format = new TableFormat();
 
     @Override
     public Integer call() throws Exception {
@@ -72,7 +73,12 @@ public final class CompareCommand implements Callable<Integer> {
         String name = stageOption.name(); // text headers stay within 100 columns
         spec.commandLine()
                 .getOut()
-                .print(format.json() ? CompareReport.json(c, label) : CompareReport.text(c, name, root.textWidth()));
+                .print(
+                        format.json()
+                                ? CompareReport.json(c, label)
+                                : format.csv()
+                                        ? CompareReport.csv(c, label)
+                                        : CompareReport.text(c, name, root.textWidth()));
         return ExitCode.OK.code();
     }
 }

@@ -303,7 +303,29 @@ public final class BudgetText {
         if (!(limit > 0)) {
             return "-";
         }
-        return String.format(Locale.ROOT, "%.1f %%", 100 * v / limit);
+        return percentCell(100 * v / limit);
+    }
+
+    /**
+     * A share of the limit that fits its 9-character column with room to spare, so that two spaces
+     * always part it from the figure before it: "122.0 %", "16633 %" (no decimal from 1000 % up),
+     * "1.2e6 %" (from 100,000 %).
+     */
+    static String percentCell(double pct) {
+        double a = Math.abs(pct);
+        if (a < 999.95) {
+            return String.format(Locale.ROOT, "%.1f %%", pct);
+        }
+        if (a < 99999.5) {
+            return String.format(Locale.ROOT, "%.0f %%", pct);
+        }
+        int e = (int) Math.floor(Math.log10(a));
+        double m = pct / Math.pow(10, e);
+        if (Math.abs(m) >= 9.95) {
+            m /= 10;
+            e++;
+        }
+        return String.format(Locale.ROOT, "%.1fe%d %%", m, e);
     }
 
     private static String v(double volts) {

@@ -54,13 +54,11 @@ public final class CompareReport {
                 java.util.EnumSet.noneOf(dev.ampsieve.budget.TermKind.class);
         for (Comparison.TermDelta d : c.terms()) {
             kinds.add(Figures.kindOf(d.key()));
-            boolean ea = estimated(ba, d.key());
-            boolean eb = estimated(bb, d.key());
+            boolean ea = d.aEstimated();
+            boolean eb = d.bEstimated();
             anyMarked |= ea || eb;
             // a figure the catalog lacks counts as 0 V: it must not win the row on that alone
-            boolean winnerUnknown = d.better() == Comparison.Side.A
-                    ? ea && d.aV() == 0
-                    : d.better() == Comparison.Side.B && eb && d.bV() == 0;
+            boolean winnerUnknown = d.betterUnknown();
             anyUnknown |= winnerUnknown;
             t.row(
                     d.label() + Figures.kindTag(Figures.kindOf(d.key())),
@@ -125,11 +123,6 @@ public final class CompareReport {
         return Wrap.prose(Visible.lines(o.toString()), width);
     }
 
-    private static boolean estimated(Budget b, String key) {
-        TermResult t = b.term(key);
-        return t != null && t.estimated();
-    }
-
     private static void total(TextTable t, Comparison c, String label, double x, double y) {
         Comparison.TermDelta d = Comparison.delta(label, label, x, y);
         t.row(label, Figures.volts(x), Figures.volts(y), better(c, d.better()), by(d.differenceV(), d.ratio()));
@@ -169,12 +162,164 @@ public final class CompareReport {
             n.put("kind", Figures.kindOf(d.key()).key());
             JsonSupport.put(n, "aV", d.aV());
             JsonSupport.put(n, "bV", d.bV());
-            n.put("better", better(c, d.better()));
+            // as the text: "unknown" when the smaller figure is 0 V only for want of a catalog value
+            n.put("better", d.betterUnknown() ? "unknown" : better(c, d.better()));
+            n.put("aEstimated", d.aEstimated());
+            n.put("bEstimated", d.bEstimated());
             JsonSupport.put(n, "differenceV", d.differenceV());
             JsonSupport.put(n, "ratio", d.ratio());
         }
         JsonSupport.put(o, "preferred", c.preferred());
         o.put("conclusion", AdviceText.conclusion(c));
         return JsonSupport.render(o);
+    }
+
+    /** The header row of {@code compare --csv}: column names of our own, described in README. */
+    static final java.util.List<String> CSV_COLUMNS = java.util.List.of(
+            "section",
+            "key",
+            "label",
+            "kind",
+            "a",
+            "b",
+            "unit",
+            "a_estimated",
+            "b_estimated",
+            "better",
+            "difference",
+            "ratio");
+
+    /**
+     * {@code compare --csv}: leading {@code #} comment lines (stage, limit, the two parts, the
+     * conclusion, the caution), a header row, then one row per term, per total (after the trim
+     * when both parts have one), the yields as they are, the unit costs, the margins and the
+     * verdicts; the same figures as the text and JSON.
+     */
+    public static String csv(Comparison c, String stageLabel) {
+        Budget ba = c.a().budget();
+        Budget bb = c.b().budget();
+        StringBuilder o = new StringBuilder();
+        o.append("# stage: ").append(StageLine.head(ba.stage(), stageLabel)).append('\n');
+        o.append("# limit: ").append(StageLine.limit(ba.stage())).append('\n');
+        o.append("# a: ").append(Visible.of(c.a().id())).append('\n');
+        o.append("# b: ").append(Visible.of(c.b().id())).append('\n');
+        o.append("# conclusion: ").append(Visible.of(AdviceText.conclusion(c))).append('\n');
+        o.append("# ").append(Caution.TEXT).append('\n');
+        o.append(String.join(",", CSV_COLUMNS)).append('\n');
+        for (Comparison.TermDelta d : c.terms()) {
+            csvRow(
+                    o,
+                    "term",
+                    d.key(),
+                    RankReport.csv(d.label()),
+                    Figures.kindOf(d.key()).key(),
+                    RankReport.num(d.aV()),
+                    RankReport.num(d.bV()),
+                    "V",
+                    Boolean.toString(d.aEstimated()),
+                    Boolean.toString(d.bEstimated()),
+                    d.betterUnknown() ? "unknown" : csvBetter(c, d.better()),
+                    RankReport.num(d.differenceV()),
+                    RankReport.num(d.ratio()));
+        }
+        csvTotal(o, c, "worst-case", "worst-case sum", ba.worstCaseV(), bb.worstCaseV());
+        csvTotal(o, c, "rss", "root-sum-square", ba.rssV(), bb.rssV());
+        if (ba.trimmed() != null && bb.trimmed() != null) {
+            csvTotal(
+                    o,
+                    c,
+                    "trimmed-worst-case",
+                    "worst-case after trim",
+                    ba.trimmed().worstCaseV(),
+                    bb.trimmed().worstCaseV());
+        }
+        csvRow(
+                o,
+                "yield",
+                "as-is",
+                "yield as it is",
+                "",
+                ba.yield() == null ? "" : RankReport.num(ba.yield().value()),
+                bb.yield() == null ? "" : RankReport.num(bb.yield().value()),
+                "1",
+                "",
+                "",
+                "",
+                "",
+                "");
+        csvRow(
+                o,
+                "cost",
+                "effective-cost",
+                "unit cost" + (c.a().trimmed() || c.b().trimmed() ? " (incl. trim where trimmed)" : ""),
+                "",
+                RankReport.num(c.a().effectiveCost()),
+                RankReport.num(c.b().effectiveCost()),
+                RankReport.csv(c.a().currency().equals(c.b().currency()) ? c.a().currency() : ""),
+                "",
+                "",
+                "",
+                "",
+                "");
+        csvRow(
+                o,
+                "margin",
+                "margin",
+                "margin",
+                "",
+                RankReport.num(c.a().margin()),
+                RankReport.num(c.b().margin()),
+                "1",
+                "",
+                "",
+                "",
+                "",
+                "");
+        csvRow(o, "verdict", "verdict", "verdict", "", verdict(c.a()), verdict(c.b()), "", "", "", "", "", "");
+        csvRow(
+                o,
+                "preferred",
+                "preferred",
+                "preferred",
+                "",
+                "",
+                "",
+                "",
+                "",
+                "",
+                c.preferred() == null ? "equal" : RankReport.csv(c.preferred()),
+                "",
+                "");
+        return o.toString();
+    }
+
+    private static void csvTotal(StringBuilder o, Comparison c, String key, String label, double x, double y) {
+        Comparison.TermDelta d = Comparison.delta(key, label, x, y);
+        csvRow(
+                o,
+                "total",
+                key,
+                label,
+                "",
+                RankReport.num(x),
+                RankReport.num(y),
+                "V",
+                "",
+                "",
+                csvBetter(c, d.better()),
+                RankReport.num(d.differenceV()),
+                RankReport.num(d.ratio()));
+    }
+
+    /** Which part a figure favours, for a CSV cell: its id, or "equal" (a bare "=" would read as a formula). */
+    private static String csvBetter(Comparison c, Comparison.Side side) {
+        return side == Comparison.Side.EQUAL ? "equal" : RankReport.csv(better(c, side));
+    }
+
+    private static void csvRow(StringBuilder o, String... cells) {
+        if (cells.length != CSV_COLUMNS.size()) {
+            throw new IllegalStateException(cells.length + " cells for " + CSV_COLUMNS.size() + " columns");
+        }
+        o.append(String.join(",", cells)).append('\n');
     }
 }

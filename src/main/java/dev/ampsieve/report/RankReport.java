@@ -342,7 +342,8 @@ public final class RankReport {
         o.append(String.join(",", cells)).append('\n');
     }
 
-    private static String num(double v) {
+    /** A CSV figure: 6 significant digits, empty when not applicable (NaN). */
+    static String num(double v) {
         return Double.isFinite(v) ? String.format(Locale.ROOT, "%.6g", v) : "";
     }
 

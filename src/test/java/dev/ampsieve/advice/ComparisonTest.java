@@ -14,7 +14,6 @@ import dev.ampsieve.budget.ConstraintKind;
 import dev.ampsieve.budget.ConstraintResult;
 import dev.ampsieve.budget.Verdict;
 import dev.ampsieve.catalog.Part;
-import dev.ampsieve.report.AdviceText;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.testing.Budgets;
 import dev.ampsieve.units.Dimension;
@@ -34,10 +33,9 @@ class ComparisonTest {
         Budget bb = budget(s, b, 1.5e-3, 0.4e-3, 1.2e-3, Verdict.NO_FIT);
         Comparison c = Comparison.of(ba, bb);
         assertEquals("A", c.preferred());
-        assertEquals(
-                "A fits (margin 50 %) and B does not (worst-case 1.90 mV against 1.00 mV, limited by initial"
-                        + " offset (1.50 mV)): A.",
-                AdviceText.conclusion(c));
+        // A: 0.2 + 0.3 = 0.5 mV worst-case of 1 mV, margin 50 %; B: 1.9 mV, 90 % over
+        assertEquals(0.5, c.a().margin(), 1e-12);
+        assertEquals(-0.9, c.b().margin(), 1e-12);
         Comparison.TermDelta offset = c.terms().stream()
                 .filter(t -> t.key().equals("offset"))
                 .findFirst()
@@ -53,11 +51,11 @@ class ComparisonTest {
         Comparison c = Comparison.of(
                 budget(s, a, 0.2e-3, 0.3e-3, 0.31e-3, Verdict.FITS),
                 budget(s, b, 1.5e-3, 0.4e-3, 1.2e-3, Verdict.NO_FIT));
-        // the limiting term belongs to the untrimmed budget, so it is named as such
-        assertEquals(
-                "A fits (margin 50 %) and B does not (worst-case after the trim 1.20 mV against 1.00 mV, largest"
-                        + " term before the trim initial offset (1.50 mV)): A.",
-                AdviceText.conclusion(c));
+        // B is judged after the trim (1.2 mV, still over); its limiting term is the untrimmed budget's
+        assertEquals("A", c.preferred());
+        assertTrue(c.b().trimmed());
+        assertEquals(1.2e-3, c.b().errorV(), 1e-15);
+        assertEquals("offset", c.b().budget().limitingTerm());
     }
 
     @Test
@@ -65,11 +63,10 @@ class ComparisonTest {
         Budget ba = budget(s, a, 0.2e-3, 0.3e-3, 0.31e-3, Verdict.FITS);
         Budget bb = budget(s, b, 0.4e-3, 0.4e-3, 0.4e-3, Verdict.FITS);
         Comparison c = Comparison.of(ba, bb);
-        // 3.00 - 1.00 = 2.00 per unit, 2000.00 over 1000 units; margins 20 % (B) and 50 % (A)
-        assertEquals(
-                "Both fit; B costs 2.00 USD less per unit (2000.00 USD over 1000 units), margin 20 % against"
-                        + " 50 %: B.",
-                AdviceText.conclusion(c));
+        // 3.00 - 1.00 = 2.00 per unit; margins 20 % (B) and 50 % (A): the cheaper fitting part wins
+        assertEquals("B", c.preferred());
+        assertEquals(2.00, c.a().effectiveCost() - c.b().effectiveCost(), 1e-12);
+        assertEquals(0.2, c.b().margin(), 1e-12);
     }
 
     @Test
@@ -86,31 +83,25 @@ class ComparisonTest {
                 budget(s, a, 0.2e-3, 0.3e-3, 0.3e-3, Verdict.FITS),
                 budget(s, a2, 0.2e-3, 0.3e-3, 0.3e-3, Verdict.FITS));
         assertNull(c.preferred());
-        assertTrue(
-                AdviceText.conclusion(c).startsWith("Both fit at the same cost with the same margin"),
-                AdviceText.conclusion(c));
     }
 
     @Test
     void sufficiencyAnswersYesOrNoFirst() {
         Sufficiency yes = Sufficiency.of(budget(s, b, 0.4e-3, 0.4e-3, 0.4e-3, Verdict.FITS));
         assertTrue(yes.yes());
-        assertEquals(
-                "yes: B meets the limit untrimmed; worst-case 800 µV against 1.00 mV (margin 20 %).",
-                AdviceText.answer(yes));
+        assertEquals(Sufficiency.Outcome.YES, yes.outcome());
+        assertEquals(0.8e-3, yes.untrimmedErrorV(), 1e-15); // 0.4 + 0.4 mV
+        assertEquals(0.2, yes.margin(), 1e-12);
 
         Sufficiency trim = Sufficiency.of(budget(s, b, 1.5e-3, 0.4e-3, 0.41e-3, Verdict.FITS_AFTER_TRIM));
         assertFalse(trim.yes());
-        assertEquals(
-                "no: B needs the trim; untrimmed worst-case 1.90 mV against 1.00 mV, limited by initial offset"
-                        + " (1.50 mV); after the trim 410 µV.",
-                AdviceText.answer(trim));
+        assertEquals(Sufficiency.Outcome.NEEDS_TRIM, trim.outcome());
+        assertEquals(1.9e-3, trim.untrimmedErrorV(), 1e-15);
+        assertEquals(0.41e-3, trim.afterTrimV(), 1e-15);
 
         Sufficiency over = Sufficiency.of(budget(s, b, 0.9e-3, 0.3e-3, 0.3e-3, Verdict.NO_FIT));
-        assertEquals(
-                "no: B does not meet the limit untrimmed; worst-case 1.20 mV against 1.00 mV (20 % over), limited by"
-                        + " initial offset (900 µV).",
-                AdviceText.answer(over));
+        assertEquals(Sufficiency.Outcome.NO, over.outcome());
+        assertEquals(-0.2, over.margin(), 1e-12); // 1.2 mV against 1 mV
 
         // a 5 V supply against a part rated 9 V to 36 V: 4 V short at the low end
         Sufficiency rejected = Sufficiency.of(Budgets.rejected(
@@ -120,6 +111,7 @@ class ComparisonTest {
                         ConstraintKind.SUPPLY,
                         false,
                         new ConstraintFact.Span(5, 5, 9, 36, Dimension.VOLTAGE, 4, 0, null))));
-        assertEquals("no: B fails a hard constraint: supply", AdviceText.answer(rejected));
+        assertEquals(Sufficiency.Outcome.FAILS_CONSTRAINT, rejected.outcome());
+        assertEquals(java.util.List.of("supply"), rejected.rejected().failed());
     }
 }

@@ -184,4 +184,22 @@ class BudgetReportTest {
         assertEquals("offset", b.limitingTerm());
         assertTrue(BudgetText.render(b, null).contains("(largest term: initial offset)"));
     }
+
+    @org.junit.jupiter.api.Test
+    void aShareOfTheLimitNeverTouchesTheFigureBeforeIt() {
+        // 998 mV against 6 mV: 16633.3 % printed "16633.3 %" filled the 9-character column and left one space
+        // before it ("10.3 mV 16633.3 %"); from 1000 % the decimal goes, from 100,000 % a power of ten is used
+        org.junit.jupiter.api.Assertions.assertEquals("122.0 %", BudgetText.percentCell(122.015));
+        org.junit.jupiter.api.Assertions.assertEquals("999.9 %", BudgetText.percentCell(999.94));
+        org.junit.jupiter.api.Assertions.assertEquals("1000 %", BudgetText.percentCell(999.96));
+        org.junit.jupiter.api.Assertions.assertEquals("16633 %", BudgetText.percentCell(16633.3));
+        org.junit.jupiter.api.Assertions.assertEquals("99999 %", BudgetText.percentCell(99999.4));
+        // 1.66e6 % = 1.7 x 10^6: one decimal of the mantissa; 9.96e5 rounds to 1.0e6, not "10.0e5"
+        org.junit.jupiter.api.Assertions.assertEquals("1.7e6 %", BudgetText.percentCell(1.66e6));
+        org.junit.jupiter.api.Assertions.assertEquals("1.0e6 %", BudgetText.percentCell(9.96e5));
+        for (double p : new double[] {0, 5.5, 999.94, 12345.6, 99999.4, 1.234e7, 9.99e9}) {
+            org.junit.jupiter.api.Assertions.assertTrue(
+                    BudgetText.percentCell(p).length() <= 8, p + "");
+        }
+    }
 }

@@ -1,4 +1,4 @@
-package dev.ampsieve.advice;
+package dev.ampsieve.report;
 
 import static dev.ampsieve.testing.PartBuilder.part;
 import static dev.ampsieve.testing.StageBuilder.stage;
@@ -6,13 +6,14 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.ampsieve.advice.Comparison;
+import dev.ampsieve.advice.Sufficiency;
 import dev.ampsieve.budget.Budget;
 import dev.ampsieve.budget.TermResult;
 import dev.ampsieve.budget.Trimmed;
 import dev.ampsieve.budget.Verdict;
 import dev.ampsieve.budget.YieldResult;
 import dev.ampsieve.catalog.Part;
-import dev.ampsieve.report.AdviceText;
 import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.stage.Stage;
 import java.util.List;
