@@ -165,23 +165,35 @@ class ArchitectureTest {
     @Test
     void theBudgetReturnsFactsNotFormattedText() throws IOException {
         // terms return operands, assumptions and constraints typed facts; report words and formats them
-        List<String> violations = new ArrayList<>();
-        try (Stream<Path> files = Files.list(MAIN.resolve("budget"))) {
-            for (Path f : files.filter(p -> p.getFileName().toString().endsWith(".java"))
-                    .toList()) {
+        assertEquals(List.of(), formatting("budget"));
+    }
+
+    @Test
+    void theLoadersReportNumbersAsFacts() throws IOException {
+        // a bad value in a stage or catalog file is a StageFact or CatalogFact; report.ProblemText words it
+        assertEquals(List.of(), formatting("stage"));
+        assertEquals(List.of(), formatting("catalog"));
+    }
+
+    /** The files of {@code pkg} that call {@code Units.format(}. */
+    private static List<String> formatting(String pkg) throws IOException {
+        List<String> found = new ArrayList<>();
+        try (Stream<Path> files = Files.walk(MAIN.resolve(pkg))) {
+            for (Path f : files.filter(p -> p.toString().endsWith(".java")).toList()) {
                 if (Files.readString(f).contains("Units.format(")) {
-                    violations.add(f.toString());
+                    found.add(f.toString());
                 }
             }
         }
-        assertEquals(List.of(), violations);
+        return found;
     }
 
     @Test
     void formattingInTheDomainPackagesOnlyShrinks() throws IOException {
-        // Units.format( calls below the report, counted after the term notes, assumptions and constraints became data.
-        // This number must only go down: when wording moves to report, lower it to the new count.
-        int ceiling = 123;
+        // Units.format( calls below the report, counted after the term notes, assumptions, constraints and the
+        // loaders' problems became data (what is left is advice's). This number must only go down: when wording moves
+        // to report, lower it to the new count.
+        int ceiling = 35;
         int count = 0;
         for (String pkg : List.of("budget", "advice", "catalog", "stage", "search", "sheet", "stats", "record")) {
             Path dir = MAIN.resolve(pkg);
