@@ -57,7 +57,7 @@ import static dev.ampsieve.catalog.CatalogKeys.path;
 import static dev.ampsieve.yaml.Fields.join;
 
 import dev.ampsieve.units.Dimension;
-import dev.ampsieve.units.Units;
+import dev.ampsieve.units.Quantity;
 import dev.ampsieve.yaml.Fields;
 import dev.ampsieve.yaml.Located;
 import dev.ampsieve.yaml.Node;
@@ -418,8 +418,10 @@ final class PartReader {
                     f.error(
                             unitAt,
                             join(itemField, UNIT),
-                            Units.format(unit, Dimension.NUMBER) + " is negative, which is impossible here",
-                            "write the unit price as a positive number");
+                            new CatalogFact.Sign(
+                                    new Quantity(unit, Dimension.NUMBER),
+                                    true,
+                                    "write the unit price as a positive number"));
                 } else {
                     checkBound(path(PRICE, UNIT), join(itemField, UNIT), unit, unitAt);
                 }
@@ -683,45 +685,16 @@ final class PartReader {
         Dimension d = CatalogKeys.dimension(keyPath);
         double x = b.signed() ? v : Math.abs(v);
         boolean sized = b.signed() || x > 0; // zero is for the sign checks
-        String what = d == Dimension.TEMPERATURE ? "a rated range" : "an op amp";
+        Quantity q = new Quantity(v, d);
         if (x > b.errorAbove()) {
-            f.error(
-                    where,
-                    field,
-                    beyond(v, b.errorAbove(), d) + ", impossible for " + what + " (" + b.why() + ")",
-                    "check the unit prefix (p, n, u, m, k, M) and the datasheet column; the largest "
-                            + (b.signed() ? "value" : "size") + " accepted here is " + Units.format(b.errorAbove(), d));
+            f.error(where, field, new CatalogFact.OutOfBounds(q, b.errorAbove(), true, true, b.signed(), b.why()));
         } else if (sized && x < b.errorBelow()) {
-            f.error(
-                    where,
-                    field,
-                    Units.format(v, d) + " is below " + Units.format(b.errorBelow(), d) + ", impossible for " + what
-                            + " (" + b.why() + ")",
-                    "check the unit prefix (p, n, u, m, k, M) and the datasheet"
-                            + " column; the smallest " + (b.signed() ? "value" : "size") + " accepted here is "
-                            + Units.format(b.errorBelow(), d));
+            f.error(where, field, new CatalogFact.OutOfBounds(q, b.errorBelow(), false, true, b.signed(), b.why()));
         } else if (x > b.warnAbove()) {
-            f.warning(
-                    where,
-                    field,
-                    beyond(v, b.warnAbove(), d) + ", implausible for " + what,
-                    "check the unit prefix (u, m, k, M) and the column");
+            f.warning(where, field, new CatalogFact.OutOfBounds(q, b.warnAbove(), true, false, b.signed(), b.why()));
         } else if (sized && x < b.warnBelow()) {
-            f.warning(
-                    where,
-                    field,
-                    Units.format(v, d) + " is below " + Units.format(b.warnBelow(), d) + ", implausible for " + what,
-                    b.signed()
-                            ? "check the sign and the unit"
-                            : "check the unit prefix (p, n, u, k, M) and the column");
+            f.warning(where, field, new CatalogFact.OutOfBounds(q, b.warnBelow(), false, false, b.signed(), b.why()));
         }
-    }
-
-    /** "2.00 V is above 1.00 V", or for a negative value compared by size "-2.00 V is below -1.00 V". */
-    private static String beyond(double v, double limit, Dimension d) {
-        return v < 0 && limit > 0
-                ? Units.format(v, d) + " is below " + Units.format(-limit, d)
-                : Units.format(v, d) + " is above " + Units.format(limit, d);
     }
 
     /** Absences the user should hear about now, because the budget will assume something. */
@@ -829,17 +802,14 @@ final class PartReader {
     private void nonNegative(String keyPath, String fix) {
         Double v = values.get(keyPath);
         if (v != null && v < 0) {
-            err(
-                    keyPath,
-                    Units.format(v, CatalogKeys.dimension(keyPath)) + " is negative, which is impossible here",
-                    fix);
+            err(keyPath, new CatalogFact.Sign(new Quantity(v, CatalogKeys.dimension(keyPath)), true, fix));
         }
     }
 
     private void positive(String keyPath, String fix) {
         Double v = values.get(keyPath);
         if (v != null && v <= 0) {
-            err(keyPath, Units.format(v, CatalogKeys.dimension(keyPath)) + " must be above zero", fix);
+            err(keyPath, new CatalogFact.Sign(new Quantity(v, CatalogKeys.dimension(keyPath)), false, fix));
         }
     }
 
@@ -851,10 +821,7 @@ final class PartReader {
             return;
         }
         Dimension d = CatalogKeys.dimension(low);
-        err(
-                low,
-                last(low) + " (" + Units.format(a, d) + ") is above " + last(high) + " (" + Units.format(b, d) + ")",
-                fix);
+        err(low, new CatalogFact.Order(last(low), new Quantity(a, d), last(high), new Quantity(b, d), fix));
     }
 
     /**
@@ -871,9 +838,8 @@ final class PartReader {
         Dimension d = CatalogKeys.dimension(typ);
         warn(
                 max,
-                last(max) + " (" + Units.format(b, d) + ") is " + Math.round(Math.abs(b / a)) + " times " + last(typ)
-                        + " (" + Units.format(a, d) + ")",
-                "check the prefixes (u, n, m, p) of both against the datasheet");
+                new CatalogFact.Spread(
+                        last(max), new Quantity(b, d), last(typ), new Quantity(a, d), Math.round(Math.abs(b / a))));
     }
 
     /** Ratio of max to typ beyond which a prefix slip is suspected. */
@@ -883,11 +849,11 @@ final class PartReader {
         return keyPath.substring(keyPath.lastIndexOf('.') + 1);
     }
 
-    private void err(String keyPath, String message, String fix) {
-        problems.add(Problem.error(at.get(keyPath), join(prefix, keyPath), message, fix));
+    private void err(String keyPath, CatalogFact fact) {
+        problems.add(Problem.error(at.get(keyPath), join(prefix, keyPath), fact));
     }
 
-    private void warn(String keyPath, String message, String fix) {
-        problems.add(Problem.warning(at.get(keyPath), join(prefix, keyPath), message, fix));
+    private void warn(String keyPath, CatalogFact fact) {
+        problems.add(Problem.warning(at.get(keyPath), join(prefix, keyPath), fact));
     }
 }

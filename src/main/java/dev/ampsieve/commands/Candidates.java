@@ -2,6 +2,7 @@ package dev.ampsieve.commands;
 
 import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
+import dev.ampsieve.report.ProblemText;
 import dev.ampsieve.search.FolderRefusal;
 import dev.ampsieve.search.Hit;
 import dev.ampsieve.search.PartIndex;
@@ -63,7 +64,7 @@ final class Candidates {
         long n = 0;
         for (Problem p : catalog.problems()) {
             if (p.isError() && p.line() == 0) {
-                err.println(p);
+                err.println(ProblemText.line(p));
                 n++;
             }
         }

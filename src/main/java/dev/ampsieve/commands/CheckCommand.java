@@ -4,6 +4,7 @@ import dev.ampsieve.catalog.Catalog;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.report.Caution;
+import dev.ampsieve.report.ProblemText;
 import dev.ampsieve.text.Visible;
 import dev.ampsieve.yaml.Problem;
 import java.io.PrintWriter;
@@ -70,7 +71,7 @@ public final class CheckCommand implements Callable<Integer> {
         }
         for (Map.Entry<Path, List<Problem>> e : byFile.entrySet()) {
             out.println(heading(e.getKey(), e.getValue(), c.parts()));
-            e.getValue().forEach(out::println);
+            e.getValue().forEach(p -> out.println(ProblemText.line(p)));
             out.println();
         }
         out.printf(

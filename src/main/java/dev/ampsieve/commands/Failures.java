@@ -2,6 +2,7 @@ package dev.ampsieve.commands;
 
 import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.failure.UserError;
+import dev.ampsieve.report.ProblemText;
 import dev.ampsieve.text.Visible;
 import java.io.PrintWriter;
 import java.util.List;
@@ -46,10 +47,13 @@ public final class Failures {
         return ExitCode.INTERNAL;
     }
 
-    /** A user error's lines: findings carry their place in front; a refusal gets the front end's prefix. */
+    /**
+     * A user error's lines, worded by {@link ProblemText} (which words the problems loaders report as
+     * facts): findings carry their place in front; a refusal gets the front end's prefix.
+     */
     static void print(UserError ue, PrintWriter err, Voice voice) {
         boolean located = ue instanceof dev.ampsieve.failure.DataError;
-        for (String line : ue.lines()) {
+        for (String line : ProblemText.lines(ue)) {
             err.println(located ? line : voice.prefix() + line);
         }
         err.flush();

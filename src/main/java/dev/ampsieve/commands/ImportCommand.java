@@ -6,6 +6,7 @@ import dev.ampsieve.catalog.CatalogLoader;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.failure.Refusal;
+import dev.ampsieve.report.ProblemText;
 import dev.ampsieve.sheet.SheetImport;
 import dev.ampsieve.text.Visible;
 import dev.ampsieve.yaml.AtomicFiles;
@@ -81,7 +82,7 @@ public final class ImportCommand implements Callable<Integer> {
         SheetImport.Result r = SheetImport.read(csv);
         List<Problem> problems = new ArrayList<>(r.problems());
         if (r.headerFailed()) {
-            problems.forEach(err::println);
+            problems.forEach(p -> err.println(ProblemText.line(p)));
             err.println("ampsieve: nothing imported: the header needs fixing first");
             err.flush();
             return ExitCode.FINDINGS.code();
@@ -106,16 +107,16 @@ public final class ImportCommand implements Callable<Integer> {
                 written++;
             } catch (InputException e) {
                 Problem p = e.problems().get(0);
-                boolean exists = p.message().startsWith("the file already exists");
+                boolean exists = ProblemText.message(p).startsWith("the file already exists");
                 problems.add(Problem.error(
                         at,
                         CatalogKeys.ID,
-                        target + ": " + p.message(),
-                        exists ? "add --force to replace it, or give the part another id" : p.fix()));
+                        target + ": " + ProblemText.message(p),
+                        exists ? "add --force to replace it, or give the part another id" : ProblemText.fix(p)));
             }
         }
         problems.sort(Comparator.comparingInt(Problem::line).thenComparingInt(Problem::column));
-        problems.forEach(err::println);
+        problems.forEach(p -> err.println(ProblemText.line(p)));
         err.flush();
         long failed = r.dataRows() - written;
         out.println(Visible.of(csv.toString()) + ": " + r.dataRows() + " row(s), " + written

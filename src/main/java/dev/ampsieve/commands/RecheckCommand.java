@@ -9,6 +9,7 @@ import dev.ampsieve.record.Finding;
 import dev.ampsieve.record.PartFacts;
 import dev.ampsieve.record.Recheck;
 import dev.ampsieve.record.RecordFacts;
+import dev.ampsieve.report.ProblemText;
 import dev.ampsieve.report.RecordReport;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.StageLoader;
@@ -106,7 +107,7 @@ public final class RecheckCommand implements Callable<Integer> {
         }
         if (!problems.isEmpty()) {
             for (Problem p : problems) {
-                err.println(p);
+                err.println(ProblemText.line(p));
             }
             err.flush();
             return ExitCode.FINDINGS.code();

@@ -4,6 +4,7 @@ import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.failure.Place;
 import dev.ampsieve.failure.Refusal;
 import dev.ampsieve.failure.UserError;
+import dev.ampsieve.report.ProblemText;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.yaml.Problem;
 import java.io.PrintWriter;
@@ -42,7 +43,7 @@ public final class StageOption {
             PrintWriter err = mixee.commandLine().getErr();
             Object root = mixee.root().userObject();
             for (Problem p : given.warnings()) {
-                String line = p.toString();
+                String line = ProblemText.line(p);
                 if (!(root instanceof RootCommand r) || r.firstTime(line)) {
                     err.println(line);
                 }

@@ -34,7 +34,7 @@ public final class BudgetBars {
         o.append(Visible.of(b.part().id()))
                 .append(stageLabel == null ? "" : " in " + Visible.of(stageLabel))
                 .append(": error at the output, term by term, against the limit (")
-                .append(b.stage().criterion())
+                .append(CriterionText.of(b.stage().criterion()))
                 .append(")\n\n");
         for (String line : BarChart.render(terms, totals, b.limitV(), style)) {
             o.append(line).append('\n');

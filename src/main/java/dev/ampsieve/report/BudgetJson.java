@@ -34,7 +34,7 @@ public final class BudgetJson {
         if (b.stage().topology() == dev.ampsieve.stage.Topology.TRANSIMPEDANCE) {
             put(o, "signalGainOhms", b.stage().signalGain()); // -Rf: the signal gain named with its unit, V/A
         }
-        o.put("criterion", b.stage().criterion().toString());
+        o.put("criterion", CriterionText.of(b.stage().criterion()));
         ArrayNode terms = o.putArray("terms");
         for (TermResult t : b.terms()) {
             ObjectNode n = terms.addObject();

@@ -82,7 +82,7 @@ public final class BudgetText {
                 "Limit      %s at the output (%s at the input), criterion %s",
                 v(limit),
                 in.apply(limit / g),
-                s.criterion());
+                CriterionText.of(s.criterion()));
         o.append('\n');
         // the input column's convention, stated where it is read
         line(

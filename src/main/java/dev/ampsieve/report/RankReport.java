@@ -378,7 +378,7 @@ public final class RankReport {
         ObjectNode o = JsonSupport.object();
         JsonSupport.put(o, "stage", stageLabel);
         JsonSupport.put(o, "query", query);
-        o.put("criterion", r.stage().criterion().toString());
+        o.put("criterion", CriterionText.of(r.stage().criterion()));
         JsonSupport.put(o, "limitV", r.stage().limitVolts());
         o.put("quantity", r.stage().quantity());
         o.put("budgeted", r.candidates().size());

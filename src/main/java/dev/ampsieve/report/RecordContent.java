@@ -107,7 +107,7 @@ final class RecordContent {
         rows.add(List.of(
                 "limit",
                 Figures.volts(e) + " at the output (" + Figures.atInput(s, e / s.sourceGain()) + " at the input)"));
-        rows.add(List.of("criterion", s.criterion().toString()));
+        rows.add(List.of("criterion", CriterionText.of(s.criterion())));
         rows.add(List.of(
                 "max-to-sigma", num(s.maxToSigma()) + " (a datasheet maximum read as this many standard deviations)"));
         rows.add(List.of(

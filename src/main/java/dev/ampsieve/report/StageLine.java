@@ -26,6 +26,6 @@ final class StageLine {
     static String limit(Stage s) {
         double e = s.limitVolts();
         return Figures.volts(e) + " at the output (" + Figures.atInput(s, e / s.sourceGain()) + " at the input), "
-                + s.criterion() + ", quantity " + s.quantity();
+                + CriterionText.of(s.criterion()) + ", quantity " + s.quantity();
     }
 }

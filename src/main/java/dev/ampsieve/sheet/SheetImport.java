@@ -340,7 +340,7 @@ public final class SheetImport {
         boolean failed = false;
         for (Problem p : read.problems()) {
             int col = columnOf(p, byPath, columnOfLine);
-            problems.add(new Problem(p.severity(), csv, rowNo, col, p.field(), p.message(), p.fix()));
+            problems.add(p.at(csv, rowNo, col, p.field()));
             failed |= p.isError();
         }
         if (failed || read.part() == null) {

@@ -4,6 +4,7 @@ import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.failure.Place;
 import dev.ampsieve.failure.Refusal;
 import dev.ampsieve.failure.UserError;
+import dev.ampsieve.report.CriterionText;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.StageKeys;
 import dev.ampsieve.stage.StageLoader;
@@ -316,7 +317,7 @@ final class ShellCommands {
             }
             double limit = s.limitVolts();
             out.println("  " + pad("limit at the output", w) + Units.format(limit, Dimension.VOLTAGE) + "   ("
-                    + s.criterion() + ")");
+                    + CriterionText.of(s.criterion()) + ")");
             out.println("  " + pad("limit at the input", w)
                     + Units.format(limit / s.sourceGain(), currentIn ? Dimension.CURRENT : Dimension.VOLTAGE));
             out.println("  " + pad("farthest from 25 °C", w) + Units.format(s.deltaT(), Dimension.NUMBER) + " °C");

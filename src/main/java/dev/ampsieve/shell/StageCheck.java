@@ -1,6 +1,7 @@
 package dev.ampsieve.shell;
 
 import dev.ampsieve.commands.StageSource;
+import dev.ampsieve.report.ProblemText;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.StageLoader;
 import dev.ampsieve.stage.StageWriter;
@@ -63,7 +64,7 @@ final class StageCheck {
     }
 
     private static Problem unplaced(Problem p, Path name) {
-        return new Problem(p.severity(), name, 0, 0, p.field(), p.message(), p.fix());
+        return p.at(name, 0, 0, p.field());
     }
 
     /** Every problem with the answers (empty when they make a valid stage). */
@@ -109,6 +110,8 @@ final class StageCheck {
 
     /** "problem; fix" without the file and field, for an answer just typed. */
     static String brief(Problem p) {
-        return dev.ampsieve.text.Visible.of(p.fix().isEmpty() ? p.message() : p.message() + "; " + p.fix());
+        String message = ProblemText.message(p);
+        String fix = ProblemText.fix(p);
+        return dev.ampsieve.text.Visible.of(fix.isEmpty() ? message : message + "; " + fix);
     }
 }

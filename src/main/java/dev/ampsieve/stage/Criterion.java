@@ -1,6 +1,9 @@
 package dev.ampsieve.stage;
 
-/** How a part is judged against the limit: worst-case sum, RSS, or a yield target (0..1). */
+/**
+ * How a part is judged against the limit: worst-case sum, RSS, or a yield target (0..1). Facts
+ * only: {@code report.CriterionText} words it ("worst-case", "rss", "yield 99.9 %").
+ */
 public record Criterion(Kind kind, double yieldTarget) {
 
     public enum Kind {
@@ -14,15 +17,5 @@ public record Criterion(Kind kind, double yieldTarget) {
 
     public static Criterion yield(double target) {
         return new Criterion(Kind.YIELD, target);
-    }
-
-    @Override
-    public String toString() {
-        return switch (kind) {
-            case WORST_CASE -> "worst-case";
-            case RSS -> "rss";
-            case YIELD ->
-                "yield " + dev.ampsieve.units.Units.format(yieldTarget, dev.ampsieve.units.Dimension.RATIO, 4);
-        };
     }
 }

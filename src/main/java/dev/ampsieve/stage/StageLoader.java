@@ -2,6 +2,7 @@ package dev.ampsieve.stage;
 
 import dev.ampsieve.catalog.Range;
 import dev.ampsieve.units.Dimension;
+import dev.ampsieve.units.Quantity;
 import dev.ampsieve.units.UnitException;
 import dev.ampsieve.units.Units;
 import dev.ampsieve.yaml.Fields;
@@ -160,7 +161,7 @@ public final class StageLoader {
             List<Problem> mine = new ArrayList<>();
             for (Problem p : e.problems()) {
                 if (p.field().equals(path) || p.field().startsWith(path + ".") || path.startsWith(p.field() + ".")) {
-                    mine.add(new Problem(p.severity(), null, 0, 0, path, p.message(), p.fix()));
+                    mine.add(p.at(null, 0, 0, path));
                 }
             }
             return mine;
@@ -220,9 +221,10 @@ public final class StageLoader {
                     f.error(
                             Fields.where(temp, "min"),
                             "temperature",
-                            "min " + Units.format(tMin, Dimension.TEMPERATURE) + " is above max "
-                                    + Units.format(tMax, Dimension.TEMPERATURE),
-                            "swap the two values");
+                            new StageFact.Order(
+                                    StageFact.Ends.MIN_MAX,
+                                    new Quantity(tMin, Dimension.TEMPERATURE),
+                                    new Quantity(tMax, Dimension.TEMPERATURE)));
                 }
             }
 
@@ -237,13 +239,7 @@ public final class StageLoader {
                     f.error(
                             Fields.where(supply, "variation"),
                             "supply.variation",
-                            "a variation of "
-                                    + Units.format(supplyVariation, Dimension.VOLTAGE) + " on a "
-                                    + Units.format(supplyVoltage, Dimension.VOLTAGE)
-                                    + " supply would take it to 0 V or below",
-                            "write the peak change, well below the supply, such as '"
-                                    + Units.format(supplyVoltage * 0.05, Dimension.VOLTAGE)
-                                            .replace("µ", "u") + "' (5 %)");
+                            new StageFact.SupplyVariation(supplyVariation, supplyVoltage, supplyVoltage * 0.05));
                 }
             }
 
@@ -271,10 +267,7 @@ public final class StageLoader {
                         f.error(
                                 Fields.where(band, side),
                                 "band." + side,
-                                Units.format(v, Dimension.FREQUENCY) + " is above "
-                                        + Units.format(MAX_FREQUENCY, Dimension.FREQUENCY)
-                                        + ", beyond the fastest op amp's gain-bandwidth",
-                                "check the prefix (Hz, kHz, MHz); write the top signal frequency, such as '1 kHz'");
+                                beyond(StageFact.Bound.BAND_EDGE, v, MAX_FREQUENCY, Dimension.FREQUENCY, ""));
                     }
                 }
                 if (lo != null && lo <= 0) {
@@ -299,9 +292,10 @@ public final class StageLoader {
                     f.error(
                             Fields.where(band, "low"),
                             "band",
-                            "low " + Units.format(lo, Dimension.FREQUENCY) + " is not below high "
-                                    + Units.format(hi, Dimension.FREQUENCY),
-                            "make 'low' smaller than 'high'");
+                            new StageFact.Order(
+                                    StageFact.Ends.LOW_HIGH,
+                                    new Quantity(lo, Dimension.FREQUENCY),
+                                    new Quantity(hi, Dimension.FREQUENCY)));
                 }
             }
 
@@ -314,19 +308,14 @@ public final class StageLoader {
                     f.error(
                             Fields.where(ratio, "tolerance"),
                             "resistor-ratio.tolerance",
-                            "a ratio tolerance of " + Units.format(tolerance, Dimension.RATIO)
-                                    + " is not a resistor tolerance",
-                            "write it with its unit, such as '0.1 %'");
+                            new StageFact.RatioTolerance(tolerance));
                 }
                 tempco = nonNegative(ratio, "resistor-ratio", "tempco", Dimension.RATIO_DRIFT, 0.0);
                 if (tempco > MAX_TEMPCO) {
                     f.error(
                             Fields.where(ratio, "tempco"),
                             "resistor-ratio.tempco",
-                            Units.format(tempco, Dimension.RATIO_DRIFT) + " is above "
-                                    + Units.format(MAX_TEMPCO, Dimension.RATIO_DRIFT)
-                                    + ", more than any resistor pair drifts",
-                            "write the ratio tracking in ppm/C, such as '10 ppm/C'");
+                            beyond(StageFact.Bound.RATIO_TEMPCO, tempco, MAX_TEMPCO, Dimension.RATIO_DRIFT, ""));
                 }
             }
 
@@ -335,9 +324,7 @@ public final class StageLoader {
                 f.error(
                         Fields.where(m, "service-life"),
                         "service-life",
-                        Units.format(life, Dimension.TIME) + " is above " + Units.format(MAX_LIFE, Dimension.TIME)
-                                + ", longer than any circuit is kept in service",
-                        "write the operating time in hours or years, such as '10 y'");
+                        beyond(StageFact.Bound.SERVICE_LIFE, life, MAX_LIFE, Dimension.TIME, ""));
             }
             Limit limit = limit(m, fullScale, topology);
             Criterion criterion = criterion(m);
@@ -378,17 +365,13 @@ public final class StageLoader {
                 f.error(
                         Fields.where(m, "load-resistance"),
                         "load-resistance",
-                        Units.format(loadResistance, Dimension.RESISTANCE) + " is below "
-                                + Units.format(MIN_LOAD, Dimension.RESISTANCE) + ", a short for an op amp's output",
-                        "write the resistance the output drives, such as '2 kohm'; leave the key out for no load");
+                        beyond(StageFact.Bound.LOAD_SHORT, loadResistance, MIN_LOAD, Dimension.RESISTANCE, ""));
                 loadResistance = null;
             } else if (loadResistance != null && loadResistance > MAX_RESISTANCE) {
                 f.error(
                         Fields.where(m, "load-resistance"),
                         "load-resistance",
-                        Units.format(loadResistance, Dimension.RESISTANCE) + " is above "
-                                + Units.format(MAX_RESISTANCE, Dimension.RESISTANCE) + ", no load at all",
-                        "leave the key out when the output drives no load");
+                        beyond(StageFact.Bound.LOAD_OPEN, loadResistance, MAX_RESISTANCE, Dimension.RESISTANCE, ""));
                 loadResistance = null;
             }
             Double sampleRate = positive(m, "", "sample-rate", Dimension.FREQUENCY);
@@ -396,10 +379,7 @@ public final class StageLoader {
                 f.error(
                         Fields.where(m, "sample-rate"),
                         "sample-rate",
-                        Units.format(sampleRate, Dimension.FREQUENCY) + " is above "
-                                + Units.format(MAX_FREQUENCY, Dimension.FREQUENCY)
-                                + ", faster than any converter samples",
-                        "check the prefix (Hz, kHz, MHz); write the converter's sample rate, such as '30 kHz'");
+                        beyond(StageFact.Bound.SAMPLE_RATE, sampleRate, MAX_FREQUENCY, Dimension.FREQUENCY, ""));
                 sampleRate = null;
             }
 
@@ -452,12 +432,7 @@ public final class StageLoader {
                 f.warning(
                         Fields.where(m, where),
                         where.equals("gain") ? "gain" : "rf",
-                        "a gain of "
-                                + Units.format(ratio, Dimension.NUMBER) + " is above "
-                                + Units.format(WARN_GAIN, Dimension.NUMBER)
-                                + ": even 140 dB (1e7) of open-loop gain leaves under 40 dB of loop gain, and the closed-loop"
-                                + " bandwidth is GBW/" + Units.format(stage.noiseGain(), Dimension.NUMBER),
-                        "split the gain over two stages, or check the value (100 dB is a gain of 100000)");
+                        new StageFact.HighGain(ratio, WARN_GAIN, stage.noiseGain()));
             }
             double limit = stage.limitVolts();
             Located limitAt = Fields.where(m, "limit");
@@ -465,18 +440,17 @@ public final class StageLoader {
                 f.warning(
                         limitAt,
                         "limit",
-                        "a limit of " + Units.format(limit, Dimension.VOLTAGE) + " at the output is not below the"
-                                + " whole supply of " + Units.format(stage.supplyVoltage(), Dimension.VOLTAGE)
-                                + ": no output error can reach it, so the stage constrains nothing",
-                        "write the largest error allowed at the output, such as '1 mV' (check the prefix)");
+                        beyond(StageFact.Bound.LIMIT_OVER_SUPPLY, limit, stage.supplyVoltage(), Dimension.VOLTAGE, ""));
             } else if (stage.fullScaleOutput() != null && limit >= stage.fullScaleOutput()) {
                 f.warning(
                         limitAt,
                         "limit",
-                        "a limit of " + Units.format(limit, Dimension.VOLTAGE) + " at the output is not below the"
-                                + " full-scale output of " + Units.format(stage.fullScaleOutput(), Dimension.VOLTAGE)
-                                + ": an error as large as the whole signal",
-                        "write the largest error allowed at the output, such as '1 mV' (check the prefix)");
+                        beyond(
+                                StageFact.Bound.LIMIT_OVER_FULL_SCALE,
+                                limit,
+                                stage.fullScaleOutput(),
+                                Dimension.VOLTAGE,
+                                ""));
             }
             Criterion c = stage.criterion();
             if (c != null && c.kind() == Criterion.Kind.YIELD) {
@@ -486,13 +460,12 @@ public final class StageLoader {
                     f.warning(
                             at,
                             present(m, "trials") ? "trials" : "criterion",
-                            stage.trials() + " trials cannot confirm a yield of "
-                                    + Units.format(c.yieldTarget(), Dimension.RATIO, 7)
-                                    + ": even when every unit passes, the 95 % interval's"
-                                    + " lower end is "
-                                    + Units.format(stage.trials() / (stage.trials() + Z95 * Z95), Dimension.RATIO, 4)
-                                    + ", so the verdict can only be uncertain",
-                            "write 'trials: " + needed + "' or more (at most " + StageKeys.MAX_TRIALS + ")");
+                            new StageFact.TooFewTrials(
+                                    stage.trials(),
+                                    c.yieldTarget(),
+                                    stage.trials() / (stage.trials() + Z95 * Z95),
+                                    needed,
+                                    StageKeys.MAX_TRIALS));
                 }
             }
         }
@@ -505,9 +478,6 @@ public final class StageLoader {
             double out = stage.limitVolts();
             Node v = m.entries().get("limit");
             Located at = v == null ? m.at() : v.at();
-            String form = stage.limit().kind() == Limit.Kind.OUTPUT
-                    ? ""
-                    : " (" + Units.format(out, Dimension.VOLTAGE) + " at the output)";
             Dimension written = switch (stage.limit().kind()) {
                 case LSB, PERCENT_OF_FULL_SCALE -> Dimension.NUMBER;
                 case INPUT_CURRENT -> Dimension.CURRENT;
@@ -517,16 +487,13 @@ public final class StageLoader {
                 f.error(
                         at,
                         "limit",
-                        "a limit of " + Units.format(stage.limit().value(), written) + form + " is above "
-                                + Units.format(MAX_LIMIT, Dimension.VOLTAGE) + " at the output, no error limit at all",
-                        "check the prefix: write the largest error allowed, such as '1 mV'");
+                        new StageFact.LimitTooLarge(
+                                new Quantity(stage.limit().value(), written),
+                                stage.limit().kind() == Limit.Kind.OUTPUT,
+                                out,
+                                MAX_LIMIT));
             } else if (out < MIN_LIMIT) {
-                f.error(
-                        at,
-                        "limit",
-                        "a limit of " + Units.format(out, Dimension.VOLTAGE) + " at the output is below "
-                                + Units.format(MIN_LIMIT, Dimension.VOLTAGE) + ", far below the noise of any resistor",
-                        "check the prefix: write the largest error allowed, such as '1 uV'");
+                f.error(at, "limit", beyond(StageFact.Bound.LIMIT_TINY, out, MIN_LIMIT, Dimension.VOLTAGE, ""));
             }
         }
 
@@ -536,11 +503,12 @@ public final class StageLoader {
                 f.error(
                         Fields.where(m, key),
                         key,
-                        Units.format(ohms, Dimension.RESISTANCE) + " is above "
-                                + Units.format(MAX_RESISTANCE, Dimension.RESISTANCE)
-                                + ", where board leakage decides the value",
-                        "check the prefix (kohm, Mohm); write the resistor, such as '"
-                                + exampleFor("", key, Dimension.RESISTANCE) + "'");
+                        beyond(
+                                StageFact.Bound.RESISTOR,
+                                ohms,
+                                MAX_RESISTANCE,
+                                Dimension.RESISTANCE,
+                                exampleFor("", key, Dimension.RESISTANCE)));
             }
             return ohms;
         }
@@ -551,10 +519,12 @@ public final class StageLoader {
                 f.error(
                         Fields.where(m, key),
                         Fields.join(path, key),
-                        Units.format(v, Dimension.VOLTAGE) + " is above " + Units.format(MAX_VOLTAGE, Dimension.VOLTAGE)
-                                + ", more than any op amp's supply",
-                        "check the prefix (mV, V, kV); write for example '" + exampleFor(path, key, Dimension.VOLTAGE)
-                                + "'");
+                        beyond(
+                                StageFact.Bound.VOLTAGE,
+                                v,
+                                MAX_VOLTAGE,
+                                Dimension.VOLTAGE,
+                                exampleFor(path, key, Dimension.VOLTAGE)));
             }
         }
 
@@ -564,9 +534,12 @@ public final class StageLoader {
                 f.error(
                         Fields.where(m, key),
                         Fields.join(path, key),
-                        Units.format(v, Dimension.NUMBER) + " is above " + Units.format(MAX_MONEY, Dimension.NUMBER)
-                                + ", more than any amplifier costs",
-                        "write the amount per unit, for example '" + exampleFor(path, key, Dimension.NUMBER) + "'");
+                        beyond(
+                                StageFact.Bound.MONEY,
+                                v,
+                                MAX_MONEY,
+                                Dimension.NUMBER,
+                                exampleFor(path, key, Dimension.NUMBER)));
             }
         }
 
@@ -576,12 +549,12 @@ public final class StageLoader {
                 f.error(
                         Fields.where(temp, key),
                         "temperature." + key,
-                        Units.format(t, Dimension.TEMPERATURE) + " is outside "
-                                + Units.format(MIN_AMBIENT, Dimension.TEMPERATURE) + " to "
-                                + Units.format(MAX_AMBIENT, Dimension.TEMPERATURE)
-                                + ", an ambient no circuit sees",
-                        "write the ambient range in °C, such as '"
-                                + exampleFor("temperature", key, Dimension.TEMPERATURE) + "'");
+                        new StageFact.Ambient(
+                                t,
+                                MIN_AMBIENT,
+                                MAX_AMBIENT,
+                                false,
+                                exampleFor("temperature", key, Dimension.TEMPERATURE)));
             }
             return t;
         }
@@ -716,9 +689,7 @@ public final class StageLoader {
                 f.error(
                         Fields.where(m, "r1"),
                         "r1",
-                        "r2/r1 = " + Units.format(r2 / r1, Dimension.NUMBER) + " is a gain above "
-                                + Units.format(MAX_GAIN, Dimension.NUMBER),
-                        "check the prefixes of r1 and r2 (kohm, Mohm)");
+                        beyond(StageFact.Bound.R2_R1_GAIN, r2 / r1, MAX_GAIN, Dimension.NUMBER, ""));
                 return bad;
             }
             if ((r3 == null) != (r4 == null)) {
@@ -762,10 +733,7 @@ public final class StageLoader {
                     f.error(
                             Fields.where(sm, leg),
                             "source-resistance." + leg,
-                            Units.format(r, Dimension.RESISTANCE) + " is above "
-                                    + Units.format(MAX_RESISTANCE, Dimension.RESISTANCE)
-                                    + ", where board leakage decides the value",
-                            "check the prefix (kohm, Mohm)");
+                            beyond(StageFact.Bound.LEG_RESISTOR, r, MAX_RESISTANCE, Dimension.RESISTANCE, ""));
                 }
                 out[i++] = r;
             }
@@ -825,9 +793,7 @@ public final class StageLoader {
                 f.error(
                         Fields.where(m, "source-resistance"),
                         "source-resistance",
-                        Units.format(rsh, Dimension.RESISTANCE) + " is above "
-                                + Units.format(MAX_SHUNT, Dimension.RESISTANCE),
-                        "check the prefix (Mohm, Gohm)");
+                        beyond(StageFact.Bound.SHUNT, rsh, MAX_SHUNT, Dimension.RESISTANCE, ""));
                 return bad;
             }
             if (cs > MAX_CAPACITANCE || cf > MAX_CAPACITANCE) {
@@ -835,9 +801,12 @@ public final class StageLoader {
                 f.error(
                         Fields.where(m, key),
                         key,
-                        Units.format(Math.max(cs, cf), Dimension.CAPACITANCE) + " is above "
-                                + Units.format(MAX_CAPACITANCE, Dimension.CAPACITANCE),
-                        "check the prefix (pF, nF)");
+                        beyond(
+                                StageFact.Bound.CAPACITANCE,
+                                Math.max(cs, cf),
+                                MAX_CAPACITANCE,
+                                Dimension.CAPACITANCE,
+                                ""));
                 return bad;
             }
             return new Transimpedance(rf, cf, rsh, cs, rp);
@@ -862,11 +831,7 @@ public final class StageLoader {
                 f.error(
                         Fields.where(m, "gain"),
                         "gain",
-                        "gain " + Units.format(Math.abs(gain), Dimension.NUMBER) + " is above "
-                                + Units.format(MAX_GAIN, Dimension.NUMBER)
-                                + ", more than any op amp can hold (the best have about"
-                                + " 1e8 of open-loop gain, which would leave under 40 dB of loop gain)",
-                        "split the gain over two stages, or check the value (40 dB is a gain of 100)");
+                        beyond(StageFact.Bound.GAIN, Math.abs(gain), MAX_GAIN, Dimension.NUMBER, ""));
                 return new double[] {bad, bad};
             }
 
@@ -921,10 +886,7 @@ public final class StageLoader {
                         f.error(
                                 Fields.where(m, "rg"),
                                 "rg",
-                                "rf/rg = " + Units.format(rf / rg, Dimension.NUMBER)
-                                        + " is a gain above " + Units.format(MAX_GAIN, Dimension.NUMBER)
-                                        + ", more than any op amp can hold",
-                                "check the prefixes of rf and rg (kohm, Mohm)");
+                                beyond(StageFact.Bound.RF_RG_GAIN, rf / rg, MAX_GAIN, Dimension.NUMBER, ""));
                         return new double[] {bad, bad};
                     }
                     return new double[] {rf, rg};
@@ -1195,8 +1157,7 @@ public final class StageLoader {
                 f.error(
                         Fields.where(lm, "percent-of-full-scale"),
                         "limit.percent-of-full-scale",
-                        Units.format(share, Dimension.RATIO) + " is outside (0, 100] %",
-                        "write a percentage such as '0.1 %'");
+                        new StageFact.FullScaleShare(share));
                 return null;
             }
             return share;
@@ -1288,21 +1249,13 @@ public final class StageLoader {
                     f.error(
                             Fields.where(emf, "seebeck"),
                             "thermal-emf.seebeck",
-                            Units.format(s, Dimension.VOLTAGE_DRIFT)
-                                    + " is above " + Units.format(MAX_SEEBECK, Dimension.VOLTAGE_DRIFT)
-                                    + ", more than an oxidised copper"
-                                    + " contact (about 1 mV/C)",
-                            "check the prefix: write microvolts per degree, such as '3 uV/C'");
+                            beyond(StageFact.Bound.SEEBECK, s, MAX_SEEBECK, Dimension.VOLTAGE_DRIFT, ""));
                 }
                 if (g != null && g > MAX_GRADIENT) {
                     f.error(
                             Fields.where(emf, "gradient"),
                             "thermal-emf.gradient",
-                            Units.format(g, Dimension.TEMPERATURE)
-                                    + " is above " + Units.format(MAX_GRADIENT, Dimension.TEMPERATURE)
-                                    + " between junctions a few"
-                                    + " millimetres apart",
-                            "write the temperature difference across the junctions, such as '0.5 C'");
+                            beyond(StageFact.Bound.GRADIENT, g, MAX_GRADIENT, Dimension.TEMPERATURE, ""));
                 }
                 junctions = n == null ? 0 : n;
                 seebeck = s == null ? 0 : s;
@@ -1329,9 +1282,7 @@ public final class StageLoader {
                     f.error(
                             Fields.where(leak, "voltage"),
                             "leakage.voltage",
-                            Units.format(v, Dimension.VOLTAGE) + " is above "
-                                    + Units.format(MAX_VOLTAGE, Dimension.VOLTAGE),
-                            "write the potential of the nearby trace relative to the node");
+                            beyond(StageFact.Bound.LEAKAGE_VOLTAGE, v, MAX_VOLTAGE, Dimension.VOLTAGE, ""));
                 }
                 String which = f.choice(leak, "leakage", "input", List.of("plus", "minus"));
                 if (which != null) {
@@ -1399,12 +1350,12 @@ public final class StageLoader {
                     f.error(
                             Fields.where(t, key),
                             "trim." + key,
-                            Units.format(v, Dimension.TEMPERATURE) + " is outside "
-                                    + Units.format(MIN_AMBIENT, Dimension.TEMPERATURE) + " to "
-                                    + Units.format(MAX_AMBIENT, Dimension.TEMPERATURE)
-                                    + ", an ambient no circuit sees",
-                            "write the calibration temperature in °C, such as '"
-                                    + StageKeys.get("trim." + key).example() + "'");
+                            new StageFact.Ambient(
+                                    v,
+                                    MIN_AMBIENT,
+                                    MAX_AMBIENT,
+                                    true,
+                                    StageKeys.get("trim." + key).example()));
                     return new double[] {Double.NaN, Double.NaN};
                 }
             }
@@ -1413,17 +1364,10 @@ public final class StageLoader {
             if (!(c < h)) {
                 // a line needs two distinct points; name the key the user wrote (or the range when both defaulted)
                 String key = hot != null ? "hot" : cold != null ? "cold" : null;
-                String problem = "the two calibration temperatures must differ, cold below hot; they are "
-                        + Units.format(c, Dimension.TEMPERATURE) + (cold == null ? " (temperature.min)" : "") + " and "
-                        + Units.format(h, Dimension.TEMPERATURE) + (hot == null ? " (temperature.max)" : "");
-                String fix = key == null
-                        ? "give 'trim.cold' and 'trim.hot', such as '-40 C' and '85 C'"
-                        : "write 'trim.cold' below 'trim.hot', such as 'cold: -40 C' and 'hot: 85 C'";
                 f.error(
                         key == null ? Fields.where(t, "method") : Fields.where(t, key),
                         key == null ? "trim.method" : "trim." + key,
-                        problem,
-                        fix);
+                        new StageFact.CalibrationOrder(c, cold == null, h, hot == null));
             }
             return new double[] {cold != null ? cold : Double.NaN, hot != null ? hot : Double.NaN};
         }
@@ -1495,18 +1439,14 @@ public final class StageLoader {
                 f.error(
                         Fields.where(r, "min"),
                         key,
-                        "min " + Units.format(lo, Dimension.VOLTAGE) + " is above max "
-                                + Units.format(hi, Dimension.VOLTAGE),
-                        "swap the two values");
+                        new StageFact.Order(
+                                StageFact.Ends.MIN_MAX,
+                                new Quantity(lo, Dimension.VOLTAGE),
+                                new Quantity(hi, Dimension.VOLTAGE)));
                 return null;
             }
             if (rail != null && (lo < 0 || hi > rail)) {
-                f.error(
-                        Fields.where(r, lo < 0 ? "min" : "max"),
-                        key,
-                        "an output cannot go beyond the supply rails (0 to " + Units.format(rail, Dimension.VOLTAGE)
-                                + ")",
-                        "write volts above the negative rail, within the supply");
+                f.error(Fields.where(r, lo < 0 ? "min" : "max"), key, new StageFact.OutsideRails(rail));
                 return null;
             }
             return new Range(lo, hi);
@@ -1541,6 +1481,12 @@ public final class StageLoader {
                 return null;
             }
             return v;
+        }
+
+        /** {@code value} past {@code limit}, both of dimension {@code d}, as a fact. */
+        private static StageFact.Beyond beyond(
+                StageFact.Bound bound, double value, double limit, Dimension d, String example) {
+            return new StageFact.Beyond(bound, new Quantity(value, d), new Quantity(limit, d), example);
         }
 
         private static String exampleFor(String path, String key, Dimension d) {

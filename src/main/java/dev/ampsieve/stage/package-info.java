@@ -1,4 +1,4 @@
 /**
- * One amplifier stage: the network type (one record per topology), the Stage record, its key table, and reading and writing stage files; may use catalog, yaml, units and text.
+ * One amplifier stage: the network type (one record per topology), the Stage record, its key table, reading and writing stage files, and the facts of a bad value in one (StageFact); may use catalog, yaml, units and text.
  */
 package dev.ampsieve.stage;

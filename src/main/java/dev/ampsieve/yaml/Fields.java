@@ -48,6 +48,16 @@ public final class Fields {
         problems.add(Problem.warning(at, field, message, fix));
     }
 
+    /** An error told as a fact (a number past a bound ...), worded by the report. */
+    public void error(Located at, String field, ProblemFact fact) {
+        problems.add(Problem.error(at, field, fact));
+    }
+
+    /** A warning told as a fact, worded by the report. */
+    public void warning(Located at, String field, ProblemFact fact) {
+        problems.add(Problem.warning(at, field, fact));
+    }
+
     public static String join(String path, String key) {
         return path == null || path.isEmpty() ? key : path + "." + key;
     }

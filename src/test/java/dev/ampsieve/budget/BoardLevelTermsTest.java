@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.ampsieve.fixtures.PartFixture;
+import dev.ampsieve.report.ProblemText;
 import dev.ampsieve.stage.Board;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.StageLoader;
@@ -26,7 +27,7 @@ class BoardLevelTermsTest {
 
     private static String error(String yaml) {
         InputException e = assertThrows(InputException.class, () -> stage(yaml));
-        return e.problems().get(0).toString();
+        return ProblemText.line(e.problems().get(0));
     }
 
     @Test

@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.fail;
 
+import dev.ampsieve.report.ProblemText;
 import dev.ampsieve.testing.DemoCatalog;
 import dev.ampsieve.yaml.InputException;
 import dev.ampsieve.yaml.Problem;
@@ -63,12 +64,12 @@ class CatalogBoundsTest {
     /** The one problem about {@code field} that says "impossible". */
     private static Problem impossible(List<Problem> problems, String field) {
         List<Problem> hits = problems.stream()
-                .filter(p -> p.field().equals(field) && p.message().contains("impossible for"))
+                .filter(p -> p.field().equals(field) && ProblemText.message(p).contains("impossible for"))
                 .toList();
         assertEquals(
                 1,
                 hits.size(),
-                String.join("\n", problems.stream().map(Problem::toString).toList()));
+                String.join("\n", problems.stream().map(ProblemText::line).toList()));
         return hits.get(0);
     }
 
@@ -138,18 +139,20 @@ class CatalogBoundsTest {
         Problem p = impossible(c.problems(), path);
         assertTrue(p.isError(), p.toString());
         assertAt(p, dir.resolve("part.yaml"), (int) r[1], (int) r[2]);
-        assertTrue(p.message().startsWith(message + ", impossible for "), p.message());
+        assertTrue(ProblemText.message(p).startsWith(message + ", impossible for "), ProblemText.message(p));
         Matcher m = LIMIT.matcher(message);
         assertTrue(m.find());
         boolean above = m.group(1).equals("above") != message.startsWith("-");
         String limit = m.group(2).startsWith("-") ? m.group(2).substring(1) : m.group(2);
         assertTrue(
-                p.fix().startsWith("check the unit prefix (p, n, u, m, k, M) and the datasheet column; the "), p.fix());
+                ProblemText.fix(p)
+                        .startsWith("check the unit prefix (p, n, u, m, k, M) and the datasheet column; the "),
+                ProblemText.fix(p));
         assertTrue(
-                p.fix()
+                ProblemText.fix(p)
                         .endsWith((above ? "largest" : "smallest")
                                 + (path.startsWith("temperature") ? " value" : " size") + " accepted here is " + limit),
-                p.fix());
+                ProblemText.fix(p));
         assertEquals(List.of(), c.parts(), "the part is refused");
     }
 
@@ -171,7 +174,7 @@ class CatalogBoundsTest {
                 .filter(x -> x.field().equals("vos.max-over-temp"))
                 .findFirst()
                 .orElseThrow();
-        assertEquals("1.00 V is above 100 mV, implausible for an op amp", p.message());
+        assertEquals("1.00 V is above 100 mV, implausible for an op amp", ProblemText.message(p));
         assertEquals(Problem.Severity.WARNING, p.severity());
     }
 

@@ -3,6 +3,7 @@ package dev.ampsieve.catalog;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.ampsieve.report.ProblemText;
 import dev.ampsieve.stage.StageKeys;
 import dev.ampsieve.yaml.InputException;
 import dev.ampsieve.yaml.Problem;
@@ -43,13 +44,13 @@ class CatalogExamplesTest {
         List<Problem> e = errors(PART.replace("min: 2.7 V", "min: 2.7"));
         assertEquals(1, e.size(), e.toString());
         assertEquals("supply.min", e.get(0).field());
-        assertEquals("write a voltage with its unit, such as '2.7 V'", e.get(0).fix());
+        assertEquals("write a voltage with its unit, such as '2.7 V'", ProblemText.fix(e.get(0)));
     }
 
     @Test
     void anOffsetKeepsTheMicrovoltExample() throws Exception {
         List<Problem> e = errors(PART.replace("vos: {max: 1 mV}", "vos: {max: 1 mA}"));
-        assertEquals("write a voltage such as '2.5 uV'", e.get(0).fix());
+        assertEquals("write a voltage such as '2.5 uV'", ProblemText.fix(e.get(0)));
     }
 
     @Test

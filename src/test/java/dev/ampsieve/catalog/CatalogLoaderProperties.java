@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.ampsieve.report.ProblemText;
 import dev.ampsieve.testing.Mutations;
 import dev.ampsieve.testing.Props;
 import dev.ampsieve.yaml.InputException;
@@ -59,7 +60,7 @@ class CatalogLoaderProperties {
     /** Every problem names the file, and says what is wrong. */
     static boolean sound(List<Problem> problems, Path file) {
         return problems.stream()
-                .allMatch(p -> file.equals(p.file()) && !p.message().isBlank());
+                .allMatch(p -> file.equals(p.file()) && !ProblemText.message(p).isBlank());
     }
 
     static void write(Path file, byte[] bytes) {

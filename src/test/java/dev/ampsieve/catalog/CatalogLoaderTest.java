@@ -18,6 +18,7 @@ import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.ampsieve.report.ProblemText;
 import dev.ampsieve.yaml.InputException;
 import dev.ampsieve.yaml.Node;
 import dev.ampsieve.yaml.Problem;
@@ -141,7 +142,7 @@ class CatalogLoaderTest {
         assertEquals(List.of("test-amp-01"), c.parts().stream().map(Part::id).toList());
         Problem p = about(c.problems(), "parts[1].gbw");
         assertAt(p, f, lineOf(list, "gbw: 7 mV"), columnOf(list, "7 mV"));
-        assertEquals("'7 mV' is a voltage but a frequency belongs here", p.message());
+        assertEquals("'7 mV' is a voltage but a frequency belongs here", ProblemText.message(p));
         assertEquals(5, c.parts().get(0).where().column()); // "  - id" : the mapping starts after the dash
     }
 
@@ -175,7 +176,7 @@ class CatalogLoaderTest {
         Problem p = errors(c).get(0);
         assertEquals(1, errors(c).size(), c.problems().toString());
         assertEquals(f, p.file());
-        assertTrue(p.message().startsWith("YAML syntax: "), p.message());
+        assertTrue(ProblemText.message(p).startsWith("YAML syntax: "), ProblemText.message(p));
         // the unclosed '[' swallows the next line; the parser stops where the list cannot continue
         assertEquals(lineOf(bad, "slew:"), p.line());
     }
@@ -187,8 +188,8 @@ class CatalogLoaderTest {
         Problem p = about(c.problems(), "vos-drfit");
         assertTrue(p.isError());
         assertAt(p, part(), lineOf(text, "vos-drfit:"), 1);
-        assertEquals("unknown key", p.message());
-        assertEquals("did you mean 'vos-drift'?", p.fix());
+        assertEquals("unknown key", ProblemText.message(p));
+        assertEquals("did you mean 'vos-drift'?", ProblemText.fix(p));
         assertTrue(c.parts().isEmpty());
     }
 
@@ -197,7 +198,7 @@ class CatalogLoaderTest {
         String text = with(BASE, "  max: 2 mV", "  mx: 2 mV");
         Problem p = about(loadPart(text).problems(), "vos.mx");
         assertAt(p, part(), lineOf(text, "mx: 2 mV"), 3);
-        assertEquals("did you mean 'max'?", p.fix());
+        assertEquals("did you mean 'max'?", ProblemText.fix(p));
     }
 
     @Test
@@ -205,7 +206,7 @@ class CatalogLoaderTest {
         String text = "part:\n" + asItem(BASE);
         Problem p = about(loadPart(text).problems(), "part");
         assertAt(p, part(), 1, 1);
-        assertEquals("did you mean 'parts'?", p.fix());
+        assertEquals("did you mean 'parts'?", ProblemText.fix(p));
     }
 
     @ParameterizedTest
@@ -227,8 +228,8 @@ class CatalogLoaderTest {
         Problem p = about(c.problems(), field);
         assertTrue(p.isError());
         assertAt(p, part(), lineOf(text, to), columnOf(text, to) + to.indexOf(value));
-        assertEquals(message, p.message());
-        assertTrue(p.fix().startsWith("write "), p.fix());
+        assertEquals(message, ProblemText.message(p));
+        assertTrue(ProblemText.fix(p).startsWith("write "), ProblemText.fix(p));
         assertTrue(c.parts().isEmpty());
     }
 
@@ -240,8 +241,8 @@ class CatalogLoaderTest {
         Problem p = about(c.problems(), key);
         assertTrue(p.isError());
         assertAt(p, part(), 1, 1); // the part itself: the key belongs in it
-        assertEquals("required field is missing", p.message());
-        assertTrue(p.fix().startsWith("add '" + key + ": "), p.fix());
+        assertEquals("required field is missing", ProblemText.message(p));
+        assertTrue(ProblemText.fix(p).startsWith("add '" + key + ": "), ProblemText.fix(p));
         assertTrue(c.parts().isEmpty());
     }
 
@@ -255,7 +256,7 @@ class CatalogLoaderTest {
         Problem p = about(loadPart(text).problems(), field);
         // a block mapping starts at its first key, on the line below "section:"
         assertAt(p, part(), lineOf(text, section + ":") + 1, 3);
-        assertEquals("required field is missing", p.message());
+        assertEquals("required field is missing", ProblemText.message(p));
     }
 
     @Test
@@ -263,7 +264,7 @@ class CatalogLoaderTest {
         String text = with(with(BASE, "  typ: 0.5 mV\n", ""), "  max: 2 mV\n", "");
         Problem p = about(loadPart(text).problems(), "vos");
         assertAt(p, part(), lineOf(text, "max-over-temp: 3 mV"), 3);
-        assertEquals("neither typ nor max is given", p.message());
+        assertEquals("neither typ nor max is given", ProblemText.message(p));
         // typ alone is enough to load; the budget flags the missing guarantee
         assertEquals(1, loadPart(with(BASE, "  max: 2 mV\n", "")).parts().size());
     }
@@ -299,7 +300,7 @@ class CatalogLoaderTest {
         assertTrue(p.isError());
         String line = ": " + at; // e.g. ": 2 mV", unique in the fixture
         assertAt(p, part(), lineOf(text, line), columnOf(text, line) + 2);
-        assertEquals(message, p.message());
+        assertEquals(message, ProblemText.message(p));
         assertTrue(c.parts().isEmpty());
     }
 
@@ -307,7 +308,7 @@ class CatalogLoaderTest {
     void typIsCheckedAgainstMaxOverTemperatureWhenNoMaxIsGiven() throws Exception {
         String text = with(with(BASE, "  max: 2 mV\n", ""), "typ: 0.5 mV", "typ: 4 mV");
         Problem p = about(loadPart(text).problems(), "vos.typ");
-        assertEquals("typ (4.00 mV) is above max-over-temp (3.00 mV)", p.message());
+        assertEquals("typ (4.00 mV) is above max-over-temp (3.00 mV)", ProblemText.message(p));
     }
 
     @Test
@@ -317,7 +318,7 @@ class CatalogLoaderTest {
         text = with(text, "max-over-temp: 3 mV", "max-over-temp: 90 mV");
         Problem p = about(loadPart(text).problems(), "vos.max");
         assertEquals(Problem.Severity.WARNING, p.severity());
-        assertEquals("max (75.0 mV) is 3000 times typ (25.0 µV)", p.message());
+        assertEquals("max (75.0 mV) is 3000 times typ (25.0 µV)", ProblemText.message(p));
         // 20 x typ is an ordinary spread: no warning
         String ordinary = with(BASE, "typ: 0.5 mV", "typ: 0.1 mV");
         assertEquals(
@@ -348,7 +349,7 @@ class CatalogLoaderTest {
         assertTrue(p.isError());
         String value = to.substring(to.indexOf(':') + 2);
         assertAt(p, part(), lineOf(text, to), columnOf(text, to) + to.indexOf(value));
-        assertEquals(message, p.message());
+        assertEquals(message, ProblemText.message(p));
     }
 
     @Test
@@ -376,16 +377,16 @@ class CatalogLoaderTest {
         Problem p = about(loadPart(text).problems(), field);
         assertTrue(p.isError());
         assertAt(p, part(), lineOf(text, to), columnOf(text, to) + to.indexOf(value));
-        assertEquals("'" + value + "' " + message, p.message());
+        assertEquals("'" + value + "' " + message, ProblemText.message(p));
         assertTrue(
-                p.fix()
+                ProblemText.fix(p)
                         .startsWith(
                                 value.equals("1e-400 V")
                                         ? "check the exponent and the prefix; write 0 if you mean zero"
                                         : value.startsWith("1e")
                                                 ? "check the exponent and the prefix; write a voltage such as"
                                                 : "write "),
-                p.fix());
+                ProblemText.fix(p));
     }
 
     @ParameterizedTest
@@ -396,8 +397,8 @@ class CatalogLoaderTest {
         String text = with(BASE, "id: test-amp-01", "id: \"" + id + "\"");
         Problem p = about(loadPart(text).problems(), "id");
         assertAt(p, part(), 1, 5);
-        assertTrue(p.message().startsWith("'" + id + "' is not a valid id"), p.message());
-        assertEquals("write for example '" + suggestion + "'", p.fix());
+        assertTrue(ProblemText.message(p).startsWith("'" + id + "' is not a valid id"), ProblemText.message(p));
+        assertEquals("write for example '" + suggestion + "'", ProblemText.fix(p));
     }
 
     @Test
@@ -409,8 +410,8 @@ class CatalogLoaderTest {
         Catalog c = load();
         Problem p = about(c.problems(), "parts[1].id");
         assertAt(p, b, lineOf(second, "id: test-amp-01"), columnOf(second, "test-amp-01"));
-        assertEquals("id 'test-amp-01' is already used at " + a + ":1", p.message());
-        assertEquals("give each part its own id", p.fix());
+        assertEquals("id 'test-amp-01' is already used at " + a + ":1", ProblemText.message(p));
+        assertEquals("give each part its own id", ProblemText.fix(p));
         assertEquals(
                 List.of("test-amp-01", "other-amp"),
                 c.parts().stream().map(Part::id).toList());
@@ -438,7 +439,7 @@ class CatalogLoaderTest {
         assertEquals(Problem.Severity.WARNING, p.severity());
         String value = to.substring(to.indexOf(':') + 2);
         assertAt(p, part(), lineOf(text, to), columnOf(text, to) + to.indexOf(value));
-        assertEquals(message, p.message());
+        assertEquals(message, ProblemText.message(p));
         assertEquals(1, c.parts().size());
         assertEquals(List.of(), errors(c));
     }
@@ -451,7 +452,9 @@ class CatalogLoaderTest {
         Problem p = about(c.problems(), "vos-drift");
         assertEquals(Problem.Severity.WARNING, p.severity());
         assertAt(p, part(), 1, 1);
-        assertTrue(p.message().startsWith("not given: drift will be estimated from vos (VOS/T rule"), p.message());
+        assertTrue(
+                ProblemText.message(p).startsWith("not given: drift will be estimated from vos (VOS/T rule"),
+                ProblemText.message(p));
         assertEquals(1, c.parts().size());
     }
 
@@ -462,10 +465,10 @@ class CatalogLoaderTest {
         Problem p = about(loadPart(with(cmos, "  max-over-temp: 3 mV\n", "")).problems(), "vos-drift");
         assertEquals(Problem.Severity.WARNING, p.severity());
         assertTrue(
-                p.message()
+                ProblemText.message(p)
                         .startsWith(
                                 "not given, nor vos.max-over-temp: drift over temperature will be an assumed default"),
-                p.message());
+                ProblemText.message(p));
     }
 
     @Test
@@ -479,19 +482,21 @@ class CatalogLoaderTest {
         Catalog c = loadPart(without(BASE, "noise"));
         Problem p = about(c.problems(), "noise");
         assertEquals(Problem.Severity.WARNING, p.severity());
-        assertTrue(p.message().startsWith("not given: en, en-corner, in"), p.message());
-        assertTrue(p.message().endsWith("(common practice, conservative) and marked estimated"), p.message());
+        assertTrue(ProblemText.message(p).startsWith("not given: en, en-corner, in"), ProblemText.message(p));
+        assertTrue(
+                ProblemText.message(p).endsWith("(common practice, conservative) and marked estimated"),
+                ProblemText.message(p));
         assertEquals(1, c.parts().size());
     }
 
     @Test
     void everyAbsentFigureTheBudgetEstimatesIsWarnedAtCheckTime() throws Exception {
         Catalog c = loadPart(without(without(without(BASE, "ib"), "ios"), "long-term-drift"));
-        assertTrue(about(c.problems(), "ib").message().startsWith("not given: bias current will be estimated"));
         assertTrue(
-                about(c.problems(), "ios").message().startsWith("not given: offset current will be taken equal to ib"));
-        assertTrue(about(c.problems(), "long-term-drift")
-                .message()
+                ProblemText.message(about(c.problems(), "ib")).startsWith("not given: bias current will be estimated"));
+        assertTrue(ProblemText.message(about(c.problems(), "ios"))
+                .startsWith("not given: offset current will be taken equal to ib"));
+        assertTrue(ProblemText.message(about(c.problems(), "long-term-drift"))
                 .startsWith("not given: aging over a stage's service life"));
     }
 
@@ -500,7 +505,7 @@ class CatalogLoaderTest {
         Catalog c = loadPart(without(BASE, "cmrr"));
         assertEquals(
                 "not given: a pessimistic 60 dB will be assumed and marked estimated",
-                about(c.problems(), "cmrr").message());
+                ProblemText.message(about(c.problems(), "cmrr")));
     }
 
     // ------------------------------------------------------------------ other shapes a user may write
@@ -510,8 +515,9 @@ class CatalogLoaderTest {
         String text = without(BASE, "vos") + "vos: 2 mV\n";
         Problem p = about(loadPart(text).problems(), "vos");
         assertAt(p, part(), lineOf(text, "vos: 2 mV"), 6);
-        assertEquals("expected its keys (typ, max, max-over-temp) below it, found a single value", p.message());
-        assertEquals("write 'vos: {max: 2 mV}'", p.fix());
+        assertEquals(
+                "expected its keys (typ, max, max-over-temp) below it, found a single value", ProblemText.message(p));
+        assertEquals("write 'vos: {max: 2 mV}'", ProblemText.fix(p));
     }
 
     @ParameterizedTest
@@ -525,8 +531,8 @@ class CatalogLoaderTest {
             throws Exception {
         String text = with(BASE, from, to);
         Problem p = about(loadPart(text).problems(), field);
-        assertEquals(message, p.message());
-        assertEquals("did you mean '" + near + "'?", p.fix());
+        assertEquals(message, ProblemText.message(p));
+        assertEquals("did you mean '" + near + "'?", ProblemText.fix(p));
         String word = to.substring(to.indexOf(':') + 2);
         assertAt(p, part(), lineOf(text, to), columnOf(text, to) + to.indexOf(word));
     }
@@ -535,9 +541,8 @@ class CatalogLoaderTest {
     void wholeNumbersAndFlagsAreChecked() throws Exception {
         String text = BASE + "channels: 0\nnull-pins: maybe\n";
         Catalog c = loadPart(text);
-        assertEquals("0 is outside 1..64", about(c.problems(), "channels").message());
-        assertEquals(
-                "'maybe' is not true or false", about(c.problems(), "null-pins").message());
+        assertEquals("0 is outside 1..64", ProblemText.message(about(c.problems(), "channels")));
+        assertEquals("'maybe' is not true or false", ProblemText.message(about(c.problems(), "null-pins")));
         assertAt(about(c.problems(), "null-pins"), part(), lineOf(text, "null-pins"), 12);
     }
 
@@ -557,10 +562,10 @@ class CatalogLoaderTest {
                 .findFirst()
                 .orElseThrow();
         assertEquals(Problem.Severity.WARNING, p.severity());
-        assertEquals("empty file, no parts", p.message());
+        assertEquals("empty file, no parts", ProblemText.message(p));
 
         p = c.problems().stream().filter(x -> x.file().equals(bare)).findFirst().orElseThrow();
-        assertEquals("the file is a bare list", p.message());
+        assertEquals("the file is a bare list", ProblemText.message(p));
         assertAt(p, bare, 1, 3);
 
         p = c.problems().stream()
@@ -568,7 +573,7 @@ class CatalogLoaderTest {
                 .findFirst()
                 .orElseThrow();
         assertEquals("parts", p.field());
-        assertEquals("expected a list of parts, found a single value", p.message());
+        assertEquals("expected a list of parts, found a single value", ProblemText.message(p));
         assertAt(p, scalarList, 1, 8);
 
         p = c.problems().stream()
@@ -580,7 +585,7 @@ class CatalogLoaderTest {
 
         p = c.problems().stream().filter(x -> x.file().equals(item)).findFirst().orElseThrow();
         assertEquals("parts[0]", p.field());
-        assertTrue(p.message().startsWith("expected a part (id: ..."), p.message());
+        assertTrue(ProblemText.message(p).startsWith("expected a part (id: ..."), ProblemText.message(p));
         assertAt(p, item, 2, 5);
     }
 
@@ -597,7 +602,7 @@ class CatalogLoaderTest {
         assertAt(p, b, 1, 1);
         assertEquals(
                 "part 'euro-amp' is priced in EUR; the catalog uses USD, EUR, and prices are compared as plain numbers",
-                p.message());
+                ProblemText.message(p));
     }
 
     @Test
@@ -629,8 +634,8 @@ class CatalogLoaderTest {
         assertEquals(2, errors(c).size(), c.problems().toString());
         assertEquals("parts[0].gbw", errors(c).get(0).field());
         assertTrue(
-                errors(c).get(1).message().startsWith("refused: more than"),
-                errors(c).get(1).message());
+                ProblemText.message(errors(c).get(1)).startsWith("refused: more than"),
+                ProblemText.message(errors(c).get(1)));
         assertTrue(c.hasErrors());
 
         InputException e = assertThrows(InputException.class, () -> CatalogLoader.load(dir, true));
@@ -654,7 +659,7 @@ class CatalogLoaderTest {
         assertEquals(1, c.parts().size());
         Problem p = about(c.problems(), "");
         assertEquals(big, p.file());
-        assertTrue(p.message().contains("over the limit"), p.message());
+        assertTrue(ProblemText.message(p).contains("over the limit"), ProblemText.message(p));
     }
 
     @Test
@@ -664,7 +669,7 @@ class CatalogLoaderTest {
         Catalog c = load();
         Problem p = about(c.problems(), "");
         assertEquals(link, p.file());
-        assertEquals("the link's target does not exist", p.message());
+        assertEquals("the link's target does not exist", ProblemText.message(p));
         assertEquals(1, c.parts().size());
     }
 
@@ -674,16 +679,21 @@ class CatalogLoaderTest {
         InputException e = assertThrows(InputException.class, () -> CatalogLoader.load(missing, false));
         Problem p = e.problems().get(0);
         assertEquals(missing, p.file());
-        assertEquals("catalog folder not found", p.message());
-        assertTrue(p.fix().contains("--catalog DIR") && p.fix().contains("AMPSIEVE_CATALOG"), p.fix());
+        assertEquals("catalog folder not found", ProblemText.message(p));
+        assertTrue(
+                ProblemText.fix(p).contains("--catalog DIR")
+                        && ProblemText.fix(p).contains("AMPSIEVE_CATALOG"),
+                ProblemText.fix(p));
     }
 
     @Test
     void aFileGivenAsTheCatalogIsRefused() throws IOException {
         Path f = write(dir, "part.yaml", BASE);
         InputException e = assertThrows(InputException.class, () -> CatalogLoader.load(f, false));
-        assertEquals("this is a file, not a catalog folder", e.problems().get(0).message());
-        assertTrue(e.problems().get(0).fix().contains("--catalog DIR"));
+        assertEquals(
+                "this is a file, not a catalog folder",
+                ProblemText.message(e.problems().get(0)));
+        assertTrue(ProblemText.fix(e.problems().get(0)).contains("--catalog DIR"));
     }
 
     @Test
@@ -692,6 +702,6 @@ class CatalogLoaderTest {
         assertEquals(0, c.files());
         Problem p = c.problems().get(0);
         assertEquals(Problem.Severity.WARNING, p.severity());
-        assertEquals("no catalog files (*.yaml, *.yml) below this folder", p.message());
+        assertEquals("no catalog files (*.yaml, *.yml) below this folder", ProblemText.message(p));
     }
 }

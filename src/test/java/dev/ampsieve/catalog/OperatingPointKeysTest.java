@@ -10,6 +10,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.ampsieve.report.ProblemText;
 import dev.ampsieve.yaml.Problem;
 import java.nio.file.Path;
 import java.util.List;
@@ -65,8 +66,8 @@ class OperatingPointKeysTest {
         Problem p = about(load(text).problems(), "theta-ja");
         assertTrue(p.isError());
         assertAt(p, file(), lineOf(text, "theta-ja:"), 11);
-        assertEquals("'160 V' is a voltage but a thermal resistance belongs here", p.message());
-        assertEquals("write a thermal resistance such as '150 C/W'", p.fix());
+        assertEquals("'160 V' is a voltage but a thermal resistance belongs here", ProblemText.message(p));
+        assertEquals("write a thermal resistance such as '150 C/W'", ProblemText.fix(p));
     }
 
     @Test
@@ -76,8 +77,10 @@ class OperatingPointKeysTest {
         Problem p = about(c.problems(), "test-conditions.common-mode");
         assertTrue(p.isError());
         assertAt(p, file(), lineOf(text, "common-mode: 45 V"), 16);
-        assertEquals("common-mode (45.0 V) is above supply (30.0 V)", p.message());
-        assertTrue(p.fix().startsWith("the common mode is measured above the negative rail"), p.fix());
+        assertEquals("common-mode (45.0 V) is above supply (30.0 V)", ProblemText.message(p));
+        assertTrue(
+                ProblemText.fix(p).startsWith("the common mode is measured above the negative rail"),
+                ProblemText.fix(p));
         assertEquals(List.of(), c.parts());
     }
 
@@ -88,8 +91,8 @@ class OperatingPointKeysTest {
         assertTrue(p.isError(), p.toString());
         // at the section's first key, below 'input-crossover:'
         assertAt(p, file(), lineOf(text, "input-crossover:") + 1, 3);
-        assertEquals("required field is missing", p.message());
-        assertEquals("add 'offset-step: 50 uV'", p.fix());
+        assertEquals("required field is missing", ProblemText.message(p));
+        assertEquals("add 'offset-step: 50 uV'", ProblemText.fix(p));
     }
 
     @Test
@@ -100,19 +103,21 @@ class OperatingPointKeysTest {
                 "chopping-ripple: -3 uV");
         Catalog c = load(text);
         Problem step = about(c.problems(), "input-crossover.offset-step");
-        assertEquals("-40.0 µV is negative, which is impossible here", step.message());
+        assertEquals("-40.0 µV is negative, which is impossible here", ProblemText.message(step));
         assertAt(step, file(), lineOf(text, "offset-step: -40 uV"), 16);
         Problem ripple = about(c.problems(), "chopping-ripple");
-        assertEquals("-3.00 µV is negative, which is impossible here", ripple.message());
-        assertEquals("write the magnitude without a sign: the value is read as a ± limit", ripple.fix());
+        assertEquals("-3.00 µV is negative, which is impossible here", ProblemText.message(ripple));
+        assertEquals("write the magnitude without a sign: the value is read as a ± limit", ProblemText.fix(ripple));
     }
 
     @Test
     void aZeroThermalResistanceIsRefused() throws Exception {
         String text = with(FULL, "theta-ja: 160 C/W", "theta-ja: 0 C/W");
         Problem p = about(load(text).problems(), "theta-ja");
-        assertEquals("0 °C/W must be above zero", p.message());
-        assertTrue(p.fix().startsWith("write the package's junction-to-ambient thermal resistance"), p.fix());
+        assertEquals("0 °C/W must be above zero", ProblemText.message(p));
+        assertTrue(
+                ProblemText.fix(p).startsWith("write the package's junction-to-ambient thermal resistance"),
+                ProblemText.fix(p));
     }
 
     @Test
@@ -122,6 +127,6 @@ class OperatingPointKeysTest {
         assertEquals(1, c.parts().size());
         Problem p = about(c.problems(), "theta-ja");
         assertEquals(Problem.Severity.WARNING, p.severity());
-        assertEquals("600 °C/W is above 500 °C/W, implausible for an op amp", p.message());
+        assertEquals("600 °C/W is above 500 °C/W, implausible for an op amp", ProblemText.message(p));
     }
 }

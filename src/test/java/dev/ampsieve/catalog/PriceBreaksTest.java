@@ -3,7 +3,7 @@ package dev.ampsieve.catalog;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
 
-import dev.ampsieve.yaml.Problem;
+import dev.ampsieve.report.ProblemText;
 import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
@@ -29,7 +29,7 @@ class PriceBreaksTest {
     private static List<String> problems(String price) {
         // the absent-figure warnings of the minimal part (PartReader.warnAbsences) are not about prices
         return read(price).problems().stream()
-                .map(Problem::toString)
+                .map(ProblemText::line)
                 .filter(t -> !t.contains(": not given: "))
                 .toList();
     }
@@ -118,6 +118,6 @@ class PriceBreaksTest {
         assertEquals(
                 List.of("p.yaml:6:3: vos: neither typ nor max is given; add 'max: 2.5 uV' from the datasheet's"
                         + " 25 °C column (typ when it gives no max)"),
-                r.problems().stream().map(Problem::toString).toList());
+                r.problems().stream().map(ProblemText::line).toList());
     }
 }

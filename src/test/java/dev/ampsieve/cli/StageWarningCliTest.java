@@ -8,6 +8,7 @@ import dev.ampsieve.commands.Commands;
 import dev.ampsieve.commands.RootCommand;
 import dev.ampsieve.commands.StageSource;
 import dev.ampsieve.failure.ExitCode;
+import dev.ampsieve.report.ProblemText;
 import dev.ampsieve.stage.StageLoader;
 import dev.ampsieve.yaml.Problem;
 import java.io.PrintWriter;
@@ -67,7 +68,8 @@ class StageWarningCliTest {
         StageLoader.Loaded loaded = StageLoader.parseWithWarnings(
                 "gain: 10\nlimit: 10 V\nsupply: {voltage: 5 V}\n", Path.of("bridge.yaml"));
         List<Problem> unplaced = loaded.warnings().stream()
-                .map(p -> new Problem(p.severity(), p.file(), 0, 0, p.field(), p.message(), p.fix()))
+                .map(p -> new Problem(
+                        p.severity(), p.file(), 0, 0, p.field(), ProblemText.message(p), ProblemText.fix(p)))
                 .toList();
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();

@@ -7,6 +7,7 @@ import dev.ampsieve.catalog.Architecture;
 import dev.ampsieve.catalog.InputType;
 import dev.ampsieve.catalog.Part;
 import dev.ampsieve.catalog.Price;
+import dev.ampsieve.report.ProblemText;
 import dev.ampsieve.yaml.Problem;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -102,7 +103,7 @@ class SheetImportTest {
     void badRowIsReportedAtItsRowAndColumnWithTheCatalogsWords() {
         List<String> errors = convert(FIXTURE).problems().stream()
                 .filter(Problem::isError)
-                .map(Problem::toString)
+                .map(ProblemText::line)
                 .toList();
         // the message and fix are those the catalog gives for "vos: {max: 2 mA}" (units.Units)
         assertEquals(
@@ -138,7 +139,7 @@ class SheetImportTest {
                 List.of("parts.csv:3: gbw: required field is missing; add 'gbw: 1 MHz'"),
                 r.problems().stream()
                         .filter(Problem::isError)
-                        .map(Problem::toString)
+                        .map(ProblemText::line)
                         .toList());
     }
 
@@ -151,7 +152,7 @@ class SheetImportTest {
                         "parts.csv:1:2: unknown column 'vos mx'; did you mean 'vos.max'?",
                         "parts.csv:1:3: gbw: header unit: '1 uA' is a current but a frequency belongs here;"
                                 + " write in brackets a frequency such as '1.5 MHz'"),
-                r.problems().stream().map(Problem::toString).toList());
+                r.problems().stream().map(ProblemText::line).toList());
     }
 
     @Test
@@ -160,7 +161,7 @@ class SheetImportTest {
         assertEquals(
                 List.of("parts.csv:1:1: the header is one cell holding semicolons: the sheet was saved with another"
                         + " separator; save it as CSV with commas as separators and a decimal point"),
-                r.problems().stream().map(Problem::toString).toList());
+                r.problems().stream().map(ProblemText::line).toList());
     }
 
     @Test

@@ -3,8 +3,8 @@ package dev.ampsieve.stage;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
+import dev.ampsieve.report.ProblemText;
 import dev.ampsieve.yaml.InputException;
-import dev.ampsieve.yaml.Problem;
 import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
@@ -33,7 +33,7 @@ class MaxTrialsTest {
         InputException e = assertThrows(
                 InputException.class,
                 () -> StageLoader.parse("gain: 10\nlimit: 1 mV\ntrials: 20000\nmax-trials: 5000\n", NAME));
-        List<String> all = e.problems().stream().map(Problem::toString).toList();
+        List<String> all = e.problems().stream().map(ProblemText::line).toList();
         assertEquals(
                 List.of(
                         "s.yaml:4:13: max-trials: 5000 is below trials (20000); write max-trials at least 20000, or lower trials"),

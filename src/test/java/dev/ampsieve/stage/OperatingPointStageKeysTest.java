@@ -4,8 +4,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
+import dev.ampsieve.report.ProblemText;
 import dev.ampsieve.yaml.InputException;
-import dev.ampsieve.yaml.Problem;
 import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
@@ -21,7 +21,7 @@ class OperatingPointStageKeysTest {
 
     private static String problem(String yaml) {
         InputException e = assertThrows(InputException.class, () -> stage(yaml));
-        List<String> all = e.problems().stream().map(Problem::toString).toList();
+        List<String> all = e.problems().stream().map(ProblemText::line).toList();
         assertEquals(1, all.size(), () -> "expected one problem, got " + all);
         return all.get(0);
     }

@@ -4,10 +4,11 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.ampsieve.report.CriterionText;
+import dev.ampsieve.report.ProblemText;
 import dev.ampsieve.stats.Wilson;
 import dev.ampsieve.testing.Networks;
 import dev.ampsieve.yaml.InputException;
-import dev.ampsieve.yaml.Problem;
 import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
@@ -21,7 +22,7 @@ class StageLimitsTest {
 
     private static List<String> problems(String yaml) {
         InputException e = assertThrows(InputException.class, () -> StageLoader.parse(yaml, NAME));
-        return e.problems().stream().map(Problem::toString).toList();
+        return e.problems().stream().map(ProblemText::line).toList();
     }
 
     private static String problem(String yaml) {
@@ -113,8 +114,8 @@ class StageLimitsTest {
     void theHighestYieldTargetPrintsAsItself() throws InputException {
         // 99.9999 % with four significant digits would round to "100 %"
         Stage s = StageLoader.parse("gain: 10\nlimit: 1 mV\ncriterion: yield 99.9999 %\n", NAME);
-        assertEquals("yield 99.9999 %", s.criterion().toString());
-        assertEquals("yield 99.9 %", Criterion.yield(0.999).toString());
+        assertEquals("yield 99.9999 %", CriterionText.of(s.criterion()));
+        assertEquals("yield 99.9 %", CriterionText.of(Criterion.yield(0.999)));
     }
 
     @Test

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.ampsieve.report.ProblemText;
 import dev.ampsieve.testing.Mutations;
 import dev.ampsieve.testing.Props;
 import dev.ampsieve.yaml.InputException;
@@ -107,7 +108,7 @@ class StageLoaderProperties {
             try {
                 List<Problem> problems = StageLoader.checkAnswer(key, text);
                 assertTrue(
-                        problems.stream().allMatch(p -> !p.message().isBlank()),
+                        problems.stream().allMatch(p -> !ProblemText.message(p).isBlank()),
                         () -> "blank message for " + key + " = " + Props.escape(text) + ": " + problems);
             } catch (RuntimeException | Error e) {
                 throw new AssertionError("untyped " + e + " for " + key + " = " + Props.escape(text), e);
@@ -119,7 +120,8 @@ class StageLoaderProperties {
     static boolean sound(List<Problem> problems, Path file) {
         return !problems.isEmpty()
                 && problems.stream()
-                        .allMatch(p -> file.equals(p.file()) && !p.message().isBlank());
+                        .allMatch(p ->
+                                file.equals(p.file()) && !ProblemText.message(p).isBlank());
     }
 
     static void write(Path file, byte[] bytes) {

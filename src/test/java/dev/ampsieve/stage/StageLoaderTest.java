@@ -6,9 +6,9 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.ampsieve.catalog.Range;
+import dev.ampsieve.report.ProblemText;
 import dev.ampsieve.testing.Networks;
 import dev.ampsieve.yaml.InputException;
-import dev.ampsieve.yaml.Problem;
 import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Nested;
@@ -25,7 +25,7 @@ class StageLoaderTest {
     /** Every problem line the loader reports for {@code yaml}. */
     private static List<String> problems(String yaml) {
         InputException e = assertThrows(InputException.class, () -> stage(yaml));
-        return e.problems().stream().map(Problem::toString).toList();
+        return e.problems().stream().map(ProblemText::line).toList();
     }
 
     /** Exactly one problem, returned. */
@@ -304,18 +304,18 @@ class StageLoaderTest {
                     List.of(
                             "rf: '10 mV' is a voltage but a resistance belongs here; write a resistance such as '100 kohm'"),
                     StageLoader.checkAnswer("rf", "10 mV").stream()
-                            .map(Problem::toString)
+                            .map(ProblemText::line)
                             .toList());
             assertEquals(
                     List.of("trials: 50 is outside 100..10000000; write a whole number from 100 to 10000000"),
                     StageLoader.checkAnswer("trials", "50").stream()
-                            .map(Problem::toString)
+                            .map(ProblemText::line)
                             .toList());
             assertEquals(
                     List.of("gain: a non-inverting stage cannot have gain 0.5 (below 1); "
                             + "write a gain of 1 or more, or use 'topology: inverting'"),
                     StageLoader.checkAnswer("gain", "0.5").stream()
-                            .map(Problem::toString)
+                            .map(ProblemText::line)
                             .toList());
             assertEquals(1, StageLoader.checkAnswer("criterion", "yield 100 %").size());
             assertEquals(1, StageLoader.checkAnswer("limit", "5 mV\nrf: 1 V").size()); // one value, never two keys

@@ -4,9 +4,9 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.ampsieve.report.ProblemText;
 import dev.ampsieve.stats.Wilson;
 import dev.ampsieve.yaml.InputException;
-import dev.ampsieve.yaml.Problem;
 import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
@@ -18,7 +18,7 @@ class StageWarningsTest {
 
     private static List<String> warnings(String yaml) throws InputException {
         return StageLoader.parseWithWarnings(yaml, NAME).warnings().stream()
-                .map(Problem::toString)
+                .map(ProblemText::line)
                 .toList();
     }
 
@@ -37,7 +37,7 @@ class StageWarningsTest {
                 warnings("gain: 200000\nlimit: 1 V\n"));
         InputException e = assertThrows(InputException.class, () -> warnings("gain: 2000000\nlimit: 1 V\n"));
         assertTrue(
-                e.problems().get(0).message().startsWith("gain 2000000 is above 1000000"),
+                ProblemText.message(e.problems().get(0)).startsWith("gain 2000000 is above 1000000"),
                 e.problems().toString());
     }
 
@@ -47,7 +47,7 @@ class StageWarningsTest {
         assertEquals(
                 "s.yaml:1:7: gain: a non-inverting stage cannot have gain -10 (below 1);"
                         + " write the magnitude with 'topology: inverting'",
-                e.problems().get(0).toString());
+                ProblemText.line(e.problems().get(0)));
     }
 
     @Test
@@ -86,12 +86,12 @@ class StageWarningsTest {
     void trialsAndYieldOutOfRangeAreRefused() {
         InputException few = assertThrows(InputException.class, () -> warnings("gain: 10\nlimit: 1 mV\ntrials: 10\n"));
         assertTrue(
-                few.problems().get(0).toString().startsWith("s.yaml:3:9: trials: "),
+                ProblemText.line(few.problems().get(0)).startsWith("s.yaml:3:9: trials: "),
                 few.problems().toString());
         InputException target =
                 assertThrows(InputException.class, () -> warnings("gain: 10\nlimit: 1 mV\ncriterion: yield 100 %\n"));
         assertTrue(
-                target.problems().get(0).toString().contains("outside (0, 100) %"),
+                ProblemText.line(target.problems().get(0)).contains("outside (0, 100) %"),
                 target.problems().toString());
     }
 }

@@ -3,8 +3,8 @@ package dev.ampsieve.stage;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
+import dev.ampsieve.report.ProblemText;
 import dev.ampsieve.yaml.InputException;
-import dev.ampsieve.yaml.Problem;
 import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
@@ -23,7 +23,7 @@ class TransimpedanceStageKeysTest {
 
     private static String problem(String yaml) {
         InputException e = assertThrows(InputException.class, () -> StageLoader.parse(yaml, NAME));
-        List<String> all = e.problems().stream().map(Problem::toString).toList();
+        List<String> all = e.problems().stream().map(ProblemText::line).toList();
         assertEquals(1, all.size(), () -> "expected one problem, got " + all);
         return all.get(0);
     }
