@@ -11,6 +11,7 @@ import dev.ampsieve.budget.YieldResult;
 import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.Trim;
+import dev.ampsieve.stage.TrimCircuit;
 import dev.ampsieve.text.Visible;
 import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.Units;
@@ -108,7 +109,7 @@ public final class BudgetText {
                     in.apply(t.inputV()),
                     share(t.outputV(), limit),
                     Double.isNaN(t.worstAtC()) ? "-" : Units.format(t.worstAtC(), Dimension.TEMPERATURE),
-                    counted ? "" : "  headroom only");
+                    BudgetCalculator.afterTrimOnly(t.key()) ? "  after trim only" : counted ? "" : "  headroom only");
         }
         if (anyEstimated) {
             line(o, "* estimated, typical-only or assumed value: see the warnings");
@@ -116,6 +117,9 @@ public final class BudgetText {
         String legend = Figures.kindLegend(kinds);
         if (!legend.isEmpty()) {
             line(o, "%s", legend);
+        }
+        if (b.terms().stream().anyMatch(t -> BudgetCalculator.afterTrimOnly(t.key()))) {
+            line(o, "after trim only: the trim circuit's own error, counted in the trimmed totals only");
         }
         if (anyUncounted) {
             line(o, "headroom only: AC-coupled stage, the DC term does not count toward the error");
@@ -160,7 +164,7 @@ public final class BudgetText {
                     m == Trim.Method.ONE_POINT ? "Trimmed" : "",
                     methodName(m),
                     where,
-                    trim.resolution() > 0 ? ", resolution " + v(trim.resolution()) : "",
+                    resolution(b, trim) > 0 ? ", resolution " + v(resolution(b, trim)) : "",
                     v(t.worstCaseV()),
                     share(t.worstCaseV(), limit).strip(),
                     v(t.rssV()),
@@ -169,6 +173,9 @@ public final class BudgetText {
                     m == trim.method()
                             ? (trim.allowed() ? "; the stage's trim" : "; the stage's method, trim not allowed")
                             : "");
+        }
+        if (trim.allowed() && b.trimmed().circuit() != null && trim.circuit().kind() != TrimCircuit.Kind.STORED) {
+            line(o, "%-10s %s", "Circuit", TrimCircuitText.describe(b.trimmed().circuit(), s));
         }
         if (b.trimmed().yield() != null) {
             line(
@@ -304,6 +311,13 @@ public final class BudgetText {
             return "-";
         }
         return String.format(Locale.ROOT, "%.1f %%", 100 * v / limit);
+    }
+
+    /** The step the trim leaves ({@link BudgetCalculator#trimResolution}). */
+    private static double resolution(Budget b, Trim trim) {
+        return b.trimmed().circuit() == null
+                ? trim.resolution()
+                : BudgetCalculator.trimResolution(b.stage(), b.trimmed().circuit());
     }
 
     private static String v(double volts) {
