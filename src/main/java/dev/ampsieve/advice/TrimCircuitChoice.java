@@ -59,7 +59,7 @@ public record TrimCircuitChoice(
      * @param errorV         the trimmed total the criterion judges (worst case or RSS), output volts
      * @param limitV         the stage's limit, output volts
      * @param circuitV       the circuit's own terms, summed, output volts
-     * @param largestCircuitTerm key of the circuit's largest own term; null when it has none
+     * @param largestCircuitTerm the circuit's largest own term; null when it has none
      */
     public record Option(
             TrimCircuit.Kind kind,
@@ -70,7 +70,7 @@ public record TrimCircuitChoice(
             double errorV,
             double limitV,
             double circuitV,
-            String largestCircuitTerm) {
+            TermResult largestCircuitTerm) {
 
         public boolean fits() {
             return outcome == Outcome.FITS;
@@ -121,14 +121,12 @@ public record TrimCircuitChoice(
         double error = Candidate.total(
                 s.criterion(), b.trimmed().worstCaseV(), b.trimmed().rssV());
         double circuitV = 0;
-        String largest = null;
-        double largestV = -1;
+        TermResult largest = null;
         for (TermResult t : b.terms()) {
             if (BudgetCalculator.afterTrimOnly(t.key())) {
                 circuitV += t.outputV();
-                if (t.outputV() > largestV) {
-                    largestV = t.outputV();
-                    largest = t.key();
+                if (largest == null || t.outputV() > largest.outputV()) {
+                    largest = t;
                 }
             }
         }

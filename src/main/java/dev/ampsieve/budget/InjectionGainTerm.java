@@ -8,7 +8,7 @@ import dev.ampsieve.units.Dimension;
 
 /**
  * Trim circuit term, what the injection resistor (injection network or DAC) does to the gains:
- * {@code (dNG/NG) x (drift + CMRR + PSRR + aging + noise after the trim) + VFS x |dG/G| + dNG x share x Vcm},
+ * {@code (dNG/NG) x (drift + CMRR + PSRR + aging + noise after the trim) + VFS x |dG/G| + NG x |dG/G| x share x Vcm},
  * output volts, with
  * <ul>
  * <li>dNG = Rf/Rinj, the rise of the noise gain when Rinj goes to the summing node (Rinj in parallel
@@ -21,8 +21,9 @@ import dev.ampsieve.units.Dimension;
  * the new noise gain (non-inverting, difference) or is divided by R+/(R+ + Rinj) (plus node); VFS
  * the full-scale output. Counted as it stands, as if rg were kept (choose rg so that rg || Rinj is
  * the stated rg to keep the gain); a two-point trim calibrates it away;</li>
- * <li>in a difference stage fed at the summing node, the + leg's gain no longer matches the - leg's:
- * the pins' common mode (share x common-mode-swing) reaches the output times dNG.</li>
+ * <li>in a difference stage the + leg's gain changes by dG/G while the - leg's stays, so the two no
+ * longer cancel the common mode: the pins' common mode (share x common-mode-swing) reaches the output
+ * times NG x |dG/G| (dNG at the summing node). Superposition on the four-resistor stage, Franco §2.2.</li>
  * </ul>
  * Not counted: Rinj's own thermal noise, 4kT/Rinj into the summing node, below rg's by Rg/Rinj.
  */
@@ -98,7 +99,7 @@ public final class InjectionGainTerm implements ErrorTerm {
         double vfs = s.fullScaleOutput() == null ? 0.0 : s.fullScaleOutput();
         double gain = two ? 0.0 : vfs * Math.abs(t.gainChange());
         double cm = s.topology() == Topology.DIFFERENCE
-                ? t.noiseGainChange() * s.network().commonModeShare() * s.commonModeSwing()
+                ? Math.abs(t.gainChange()) * ng * s.network().commonModeShare() * s.commonModeSwing()
                 : 0.0;
         double out = t.noiseGainChange() / ng * scaled + gain + cm;
         TermWorking w = TermWorking.of(KEY)

@@ -181,6 +181,10 @@ public final class TrimCircuitText {
                     .append(name(best.kind()))
                     .append(", ")
                     .append(Figures.money(best.effectiveCost()))
+                    .append(
+                            c.part().price() == null
+                                    ? ""
+                                    : " " + c.part().price().currency())
                     .append(" per unit with the trim.\n");
         }
         return o.toString();
@@ -200,7 +204,13 @@ public final class TrimCircuitText {
                 "its range ±" + v(t.rangeV()) + " leaves " + v(t.uncoveredV()) + " of the worst offset "
                         + v(t.offsetV()) + " untrimmed, and " + over;
             case CIRCUIT_TERMS ->
-                own + ", which fails over " + range + ": " + over + " (a stored correction would fit)";
+                own + "; its own terms add " + v(op.circuitV()) + " at the output"
+                        + (op.largestCircuitTerm() == null
+                                ? ""
+                                : " (largest: " + op.largestCircuitTerm().label() + " "
+                                        + v(op.largestCircuitTerm().outputV()) + ", "
+                                        + TermNotes.of(op.largestCircuitTerm()) + ")")
+                        + ", which fails over " + range + ": " + over + " (a stored correction would fit)";
             case FAILS_AFTER_TRIM -> "the part fails after this trim too: " + over + (own.isEmpty() ? "" : "; " + own);
             case CONSTRAINT -> "a hard constraint fails; no trim helps";
         };
