@@ -1427,8 +1427,7 @@ public final class StageLoader {
                 f.error(
                         Fields.where(t, "pot-resistance"),
                         "trim.pot-resistance",
-                        Units.format(potR, Dimension.RESISTANCE) + " is above "
-                                + Units.format(MAX_RESISTANCE, Dimension.RESISTANCE),
+                        "above 1 Tohm, more than any trimmer",
                         "check the prefix; write for example '10 kohm'");
             }
             Integer bits = f.integer(t, "trim", "dac-bits", 1, MAX_DAC_BITS);
@@ -1439,8 +1438,7 @@ public final class StageLoader {
                 f.error(
                         Fields.where(t, "dac-offset-drift"),
                         "trim.dac-offset-drift",
-                        Units.format(dacOffset, Dimension.VOLTAGE_DRIFT) + " is above "
-                                + Units.format(MAX_SEEBECK, Dimension.VOLTAGE_DRIFT) + ", more than any DAC drifts",
+                        "above 2 mV/°C, more than any DAC drifts",
                         "check the prefix; write for example '10 uV/C'");
             }
             double dacGain = tempco(t, "dac-gain-drift", d.dacGainDrift());
@@ -1514,8 +1512,7 @@ public final class StageLoader {
                 f.error(
                         Fields.where(t, key),
                         "trim." + key,
-                        Units.format(v, Dimension.RATIO_DRIFT) + " is above "
-                                + Units.format(MAX_TEMPCO, Dimension.RATIO_DRIFT) + ", more than any component drifts",
+                        "above 1 %/°C, more than any component drifts",
                         "check the prefix; write for example '"
                                 + StageKeys.get("trim." + key).example() + "'");
                 return fallback;
