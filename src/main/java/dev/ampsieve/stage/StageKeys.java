@@ -475,7 +475,7 @@ public final class StageKeys {
                     Kind.CHOICE,
                     TRIM_CIRCUITS,
                     "stored",
-                    "injection",
+                    "dac",
                     "what applies the correction: stored (subtracted after the converter), null-pins (the part's own "
                             + "pins and a trimmer), injection (reference, trimmer and a resistor into the amplifier), dac (a "
                             + "DAC into that resistor); the tool sizes it for each part and counts what it adds"),
