@@ -37,7 +37,7 @@ public final class InjectionGainTerm implements ErrorTerm {
 
     @Override
     public String label() {
-        return "injection resistor gain";
+        return "injection gain";
     }
 
     @Override

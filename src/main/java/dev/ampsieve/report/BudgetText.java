@@ -153,6 +153,11 @@ public final class BudgetText {
             if (twoTemp && !(trim.coldIn(s) < trim.hotIn(s))) {
                 continue; // a range of one temperature gives no second calibration point
             }
+            if (twoTemp
+                    && (trim.circuit().kind() == TrimCircuit.Kind.NULL_PINS
+                            || trim.circuit().kind() == TrimCircuit.Kind.INJECTION)) {
+                continue; // a trimmer is set once: it cannot follow a calibration line (the loader refuses the pair)
+            }
             Trimmed t = m == trim.method() ? b.trimmed() : BudgetCalculator.trimmed(s, b.part(), m);
             String where = twoTemp
                     ? "at " + Units.format(trim.coldIn(s), Dimension.TEMPERATURE) + " and "

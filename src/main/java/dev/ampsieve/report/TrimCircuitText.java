@@ -3,6 +3,7 @@ package dev.ampsieve.report;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.ampsieve.advice.TrimCircuitChoice;
 import dev.ampsieve.budget.SizedTrim;
+import dev.ampsieve.budget.TrimSizing;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.TrimCircuit;
 import dev.ampsieve.units.Dimension;
@@ -72,13 +73,18 @@ public final class TrimCircuitText {
                 String from = t.kind() == TrimCircuit.Kind.DAC
                         ? String.valueOf(c.dacBits()) + "-bit DAC of " + v(c.dacReference()) + " full scale"
                         : "trimmer across ±" + v(c.reference());
-                parts.add(from + " through Rinj " + ohms(t.injectionResistance()) + " (E96, at most "
-                        + ohms(t.idealResistance()) + ") into the "
+                String why = t.idealResistance() > TrimSizing.MAX_RESISTANCE
+                        ? "E96, at the ceiling of " + ohms(TrimSizing.MAX_RESISTANCE) + "; " + ohms(t.idealResistance())
+                                + " would give exactly "
+                                + Units.format(c.margin(), Dimension.NUMBER, 3) + " x the offset"
+                        : "E96, the largest not above " + ohms(t.idealResistance()) + ", which gives "
+                                + Units.format(c.margin(), Dimension.NUMBER, 3) + " x the offset";
+                parts.add(from + " through Rinj " + ohms(t.injectionResistance()) + " (" + why + ") into the "
                         + (c.node() == TrimCircuit.Node.MINUS ? "- input" : "+ input") + ": range ±"
                         + v(t.rangeV()) + " at the output");
                 parts.add((t.kind() == TrimCircuit.Kind.DAC ? "LSB " : "resolution ") + v(t.resolutionV()));
-                parts.add("noise gain " + Units.format(s.noiseGain(), Dimension.NUMBER, 4) + " to "
-                        + Units.format(t.noiseGain(), Dimension.NUMBER, 4) + ", signal gain change "
+                parts.add("noise gain " + Units.format(s.noiseGain(), Dimension.NUMBER, 4) + " + "
+                        + Units.format(t.noiseGainChange(), Dimension.NUMBER, 3) + ", signal gain change "
                         + Units.format(t.gainChange(), Dimension.RATIO, 2));
             }
         }
