@@ -64,6 +64,9 @@ public final class DacDriftTerm implements ErrorTerm {
 
     @Override
     public TermResult evaluate(Stage s, PartValues v) {
+        if (!appliesTo(s)) {
+            return ErrorTerm.none(this, s, false, "no-trim-circuit"); // the stage's trim uses another circuit
+        }
         SizedTrim t = TrimSizing.of(s, v);
         TrimCircuit c = BudgetCalculator.trimOf(s).circuit();
         boolean line = BudgetCalculator.trimOf(s).method() == Trim.Method.TWO_TEMPERATURE;

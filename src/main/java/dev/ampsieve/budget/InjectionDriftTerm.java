@@ -62,6 +62,9 @@ public final class InjectionDriftTerm implements ErrorTerm {
 
     @Override
     public TermResult evaluate(Stage s, PartValues v) {
+        if (!appliesTo(s)) {
+            return ErrorTerm.none(this, s, false, "no-trim-circuit"); // the stage's trim uses another circuit
+        }
         SizedTrim t = TrimSizing.of(s, v);
         TrimCircuit c = BudgetCalculator.trimOf(s).circuit();
         double dT = s.deltaT();

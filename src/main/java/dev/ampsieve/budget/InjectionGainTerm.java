@@ -89,6 +89,9 @@ public final class InjectionGainTerm implements ErrorTerm {
 
     @Override
     public TermResult evaluate(Stage s, PartValues v) {
+        if (!appliesTo(s)) {
+            return ErrorTerm.none(this, s, false, "no-trim-circuit"); // the stage's trim uses another circuit
+        }
         SizedTrim t = TrimSizing.of(s, v);
         if (t.unusable() != SizedTrim.Unusable.NONE) {
             return ErrorTerm.none(this, s, false, "trim-circuit-unusable");

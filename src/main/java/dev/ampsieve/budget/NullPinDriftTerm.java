@@ -68,6 +68,9 @@ public final class NullPinDriftTerm implements ErrorTerm {
 
     @Override
     public TermResult evaluate(Stage s, PartValues v) {
+        if (!appliesTo(s)) {
+            return ErrorTerm.none(this, s, false, "no-trim-circuit"); // the stage's trim uses another circuit
+        }
         SizedTrim t = TrimSizing.of(s, v);
         double dT = s.deltaT();
         double out = t.driftOutVPerC() * dT;

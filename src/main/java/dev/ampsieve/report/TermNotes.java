@@ -204,6 +204,7 @@ public final class TermNotes {
                                             + " (keep the gain: choose rg so that rg || Rinj is the stated rg)")
                             + (w.value("commonMode") > 0 ? "; unbalanced common mode " + f("commonMode") : "");
                 case "trim-circuit-unusable" -> "the trim circuit cannot be used with this part or stage";
+                case "no-trim-circuit" -> "the stage's trim does not use this circuit";
                 // a formula this renderer does not know (a test's stand-in): its facts, unworded
                 default -> w.formula() + (facts(w).isEmpty() ? "" : ": " + facts(w));
             };

@@ -1,5 +1,6 @@
 package dev.ampsieve.report;
 
+import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.ampsieve.advice.TrimCircuitChoice;
 import dev.ampsieve.budget.SizedTrim;
@@ -10,6 +11,7 @@ import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.Units;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 
 /**
  * Words for trim circuits: one sized circuit (the budget's "Trim circuit" line, its JSON object
@@ -124,6 +126,37 @@ public final class TrimCircuitText {
             n.put("unusable", t.unusable().key());
         }
         present(n, "partsCost", t.partsCost());
+    }
+
+    /**
+     * The comparison as JSON, {@code trimCircuits: {trimAllowed, trimNeeded, cheapest (kind or null),
+     * options[] {kind, outcome, fits, effectiveCost, errorV, limitV, circuitV, largestCircuitTerm,
+     * trimCircuit{...}}}}, for a report that carries it beside the budget.
+     */
+    public static void json(ObjectNode o, TrimCircuitChoice c) {
+        ObjectNode n = o.putObject("trimCircuits");
+        n.put("trimAllowed", c.trimAllowed());
+        n.put("trimNeeded", c.trimNeeded());
+        if (c.cheapest() == null) {
+            n.putNull("cheapest");
+        } else {
+            n.put("cheapest", c.cheapest().key());
+        }
+        ArrayNode arr = n.putArray("options");
+        for (TrimCircuitChoice.Option op : c.options()) {
+            ObjectNode e = arr.addObject();
+            e.put("kind", op.kind().key());
+            e.put("outcome", op.outcome().name().toLowerCase(Locale.ROOT).replace('_', '-'));
+            e.put("fits", op.fits());
+            present(e, "effectiveCost", op.effectiveCost());
+            present(e, "errorV", op.errorV());
+            present(e, "limitV", op.limitV());
+            present(e, "circuitV", op.circuitV());
+            if (op.largestCircuitTerm() != null) {
+                e.put("largestCircuitTerm", op.largestCircuitTerm().key());
+            }
+            json(e, op.sized());
+        }
     }
 
     private static void present(ObjectNode n, String key, double x) {

@@ -46,6 +46,21 @@ class TrimCircuitTextTest {
     }
 
     @Test
+    void theComparisonAsJson() {
+        Stage s = stage(TrimCircuit.Kind.STORED, List.of(TrimCircuit.Kind.STORED, TrimCircuit.Kind.NULL_PINS));
+        ObjectNode o = new ObjectMapper().createObjectNode();
+        TrimCircuitText.json(o, TrimCircuitChoice.of(s, part()));
+        JsonNode n = o.get("trimCircuits");
+        assertEquals("stored", n.get("cheapest").asText());
+        JsonNode pins = n.get("options").get(1);
+        assertEquals("null-pins", pins.get("kind").asText());
+        assertEquals("circuit-terms", pins.get("outcome").asText());
+        // 2 mV nulled: 6.908 uV/°C at the pins x NG 11 x 65 °C (-40 °C is 65 °C from 25 °C) = 4.939 mV
+        assertEquals(4.939e-3, pins.get("circuitV").asDouble(), 0.001e-3);
+        assertEquals("null-pin-drift", pins.get("largestCircuitTerm").asText());
+    }
+
+    @Test
     void budgetJsonCarriesTheSizedInjection() {
         Stage s = stage(TrimCircuit.Kind.INJECTION, List.of(TrimCircuit.Kind.INJECTION));
         Budget b = BudgetCalculator.compute(s, part());
