@@ -179,9 +179,6 @@ public final class BudgetText {
                             ? (trim.allowed() ? "; the stage's trim" : "; the stage's method, trim not allowed")
                             : "");
         }
-        if (trim.allowed() && b.trimmed().circuit() != null && trim.circuit().kind() != TrimCircuit.Kind.STORED) {
-            line(o, "%-10s %s", "Circuit", TrimCircuitText.describe(b.trimmed().circuit(), s));
-        }
         if (b.trimmed().yield() != null) {
             line(
                     o,
@@ -189,6 +186,9 @@ public final class BudgetText {
                     "",
                     "yield after the " + methodName(trim.method()) + " trim: "
                             + yieldLine(b.trimmed().yield(), s));
+        }
+        if (trim.allowed() && b.trimmed().circuit() != null && trim.circuit().kind() != TrimCircuit.Kind.STORED) {
+            line(o, "%-10s %s", "Circuit", TrimCircuitText.describe(b.trimmed().circuit(), s));
         }
         o.append('\n');
         line(o, "Constraints");
