@@ -13,7 +13,7 @@ import dev.ampsieve.stage.Stage;
  *
  * @param trimmed       the figures include the stage's trim: its cost is in {@code effectiveCost}
  *                      and {@code errorV} is the total left after it
- * @param effectiveCost unit price at the stage quantity (its price break) plus the trim cost when trimmed; NaN when the catalog has no price
+ * @param effectiveCost unit price at the stage quantity (its price break) plus the trim cost (with its circuit's parts) when trimmed; NaN when the catalog has no price
  * @param errorV        the total the criterion judges (worst-case sum; RSS for the RSS and
  *                      yield criteria), output volts
  * @param margin        the margin of the criterion in force: (E - errorV) / E with E the stage limit under
@@ -102,7 +102,7 @@ public record Candidate(Part part, Budget budget, boolean trimmed, double effect
 
     private static Candidate trimmed(Budget b, double error) {
         double cost = price(b.part(), b.stage().quantity())
-                + StageEdit.trim(b.stage()).cost();
+                + StageEdit.trim(b.stage()).totalCost(); // the circuit's parts and hand work included
         YieldResult y = b.trimmed() == null ? null : b.trimmed().yield();
         if (y == null && b.stage().criterion().kind() == Criterion.Kind.YIELD) {
             // a trim the stage does not allow was not simulated with the budget: simulate it for its margin

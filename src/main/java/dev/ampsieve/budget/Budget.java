@@ -64,6 +64,7 @@ public record Budget(
         return terms.stream()
                 .filter(t -> t.estimated() && t.outputV() > 0 && BudgetCalculator.counts(stage, t.key()))
                 .filter(t -> !(afterTrim && t.key().equals(OffsetTerm.KEY)))
+                .filter(t -> afterTrim || !BudgetCalculator.afterTrimOnly(t.key()))
                 .toList();
     }
 }

@@ -37,7 +37,12 @@ public final class BudgetCalculator {
             new ChoppingRippleTerm(),
             // board-level: 0 V unless the stage names them
             new ThermalEmfTerm(),
-            new LeakageTerm());
+            new LeakageTerm(),
+            // the trim circuit's own errors: counted only after the trim (ErrorTerm.afterTrimOnly)
+            new NullPinDriftTerm(),
+            new InjectionDriftTerm(),
+            new DacDriftTerm(),
+            new InjectionGainTerm());
 
     /** Keys of the terms that stay at their limits in the Monte Carlo (not drawn per unit). */
     private static final Set<String> FIXED_IN_YIELD = Set.of(
@@ -52,7 +57,12 @@ public final class BudgetCalculator {
             SelfHeatingTerm.KEY,
             ChoppingRippleTerm.KEY,
             ThermalEmfTerm.KEY,
-            LeakageTerm.KEY);
+            LeakageTerm.KEY,
+            // trim circuit: bounds held at their limits, after the trim only
+            NullPinDriftTerm.KEY,
+            InjectionDriftTerm.KEY,
+            DacDriftTerm.KEY,
+            InjectionGainTerm.KEY);
 
     /** Chopping frequency should be at least this many times the band edge (common practice). */
     static final double CHOP_MARGIN = 10.0;
@@ -67,6 +77,9 @@ public final class BudgetCalculator {
         for (ErrorTerm t : termsFor(stage)) {
             TermResult r = t.evaluate(stage, v);
             terms.add(r);
+            if (t.afterTrimOnly()) {
+                continue; // the trim circuit's own error: in the trimmed totals only
+            }
             if (counts(stage, t)) {
                 wc += r.outputV();
                 sumSq += r.outputV() * r.outputV();
@@ -130,7 +143,7 @@ public final class BudgetCalculator {
         String limiting = null; // stays null when nothing contributes
         double largest = 0;
         for (ErrorTerm t : termsFor(stage)) {
-            if (!counts(stage, t)) {
+            if (!counts(stage, t) || t.afterTrimOnly()) {
                 continue;
             }
             double o = find(terms, t.key()).outputV();
@@ -236,7 +249,10 @@ public final class BudgetCalculator {
 
     private static YieldResult trimmedYield(Stage stage, PartValues v, List<TermResult> terms) {
         boolean two = trimOf(stage).method() == Trim.Method.TWO_POINT;
-        double fixed = fixedInYield(stage, terms, true, two);
+        // what the trim circuit cannot reach of the offset stays, held at its bound (each unit's offset is removed in
+        // full)
+        double fixed =
+                fixedInYield(stage, terms, true, two) + TrimSizing.of(stage, v).uncoveredV();
         double bound = trimmed(stage, v, terms, trimOf(stage).method()).worstCaseV();
         if (trimOf(stage).method() == Trim.Method.TWO_TEMPERATURE) {
             return new TwoTemperatureYield(stage, v, fixed, CalibrationLine.of(stage, trimOf(stage)))
@@ -249,7 +265,7 @@ public final class BudgetCalculator {
     private static double wcCounted(Stage stage, List<TermResult> terms) {
         double wc = 0;
         for (ErrorTerm t : termsFor(stage)) {
-            if (counts(stage, t)) {
+            if (counts(stage, t) && !t.afterTrimOnly()) {
                 wc += find(terms, t.key()).outputV();
             }
         }
@@ -276,10 +292,33 @@ public final class BudgetCalculator {
                 if (trimmed && r.key().equals(OperatingPointTerm.KEY)) {
                     continue; // a static offset at the operating point: every trim removes it
                 }
+                if (!trimmed && afterTrimOnly(r.key())) {
+                    continue; // the trim circuit's error exists only once it trims
+                }
                 f += r.outputV();
             }
         }
         return f + ResistorTerm.tempcoPart(stage);
+    }
+
+    /** Whether the term with {@code key} counts only after the trim (a trim circuit's own error). */
+    public static boolean afterTrimOnly(String key) {
+        return TERMS.stream().anyMatch(t -> t.key().equals(key) && t.afterTrimOnly());
+    }
+
+    /**
+     * The step the trim leaves, output volts: the stage's {@code trim.resolution}, or the sized
+     * circuit's own step when that is coarser (a trimmer's settability, a DAC's LSB).
+     */
+    public static double trimResolution(Stage stage, SizedTrim sized) {
+        double own = trimOf(stage).resolution();
+        double circuit = sized.resolutionV();
+        return Double.isNaN(circuit) ? own : Math.max(own, circuit);
+    }
+
+    /** The stage's trim circuit sized for the part (a stored correction when the stage names none). */
+    public static SizedTrim sizedTrim(Stage stage, Part part) {
+        return TrimSizing.of(stage, PartValues.of(part, stage));
     }
 
     /** The stage's trim, {@link Trim#NONE} when it has none. */
@@ -315,6 +354,7 @@ public final class BudgetCalculator {
     private static Trimmed trimmed(Stage stage, PartValues v, List<TermResult> terms, Trim.Method method) {
         boolean two = method == Trim.Method.TWO_POINT;
         CalibrationLine line = method == Trim.Method.TWO_TEMPERATURE ? CalibrationLine.of(stage, trimOf(stage)) : null;
+        SizedTrim sized = TrimSizing.of(stage, v);
         double wc = 0;
         double sq = 0;
         for (ErrorTerm t : termsFor(stage)) {
@@ -323,7 +363,9 @@ public final class BudgetCalculator {
             }
             double o = find(terms, t.key()).outputV();
             switch (t.key()) {
-                case OffsetTerm.KEY, OperatingPointTerm.KEY -> o = 0;
+                // what the circuit cannot reach of the 25 °C offset stays (0 when it covers it)
+                case OffsetTerm.KEY -> o = sized.uncoveredV();
+                case OperatingPointTerm.KEY -> o = 0;
                 case DriftTerm.KEY -> o = line != null ? 0 : DriftTerm.afterTrim(stage, v);
                 case BiasTerm.KEY ->
                     o = line != null ? BiasTerm.afterTwoTemperature(stage, v, line) : BiasTerm.afterTrim(stage, v);
@@ -335,10 +377,10 @@ public final class BudgetCalculator {
             sq += o * o;
         }
         double res =
-                trimOf(stage).resolution() * (line != null ? line.resolutionFactor(stage.tMin(), stage.tMax()) : 1.0);
+                trimResolution(stage, sized) * (line != null ? line.resolutionFactor(stage.tMin(), stage.tMax()) : 1.0);
         wc += res;
         sq += res * res;
-        return new Trimmed(wc, Math.sqrt(sq));
+        return new Trimmed(wc, Math.sqrt(sq), null, sized);
     }
 
     /**

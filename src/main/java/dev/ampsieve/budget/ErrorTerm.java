@@ -30,6 +30,14 @@ public interface ErrorTerm {
         return true;
     }
 
+    /**
+     * Whether the term exists only once the stage's trim is applied (what a trim circuit adds):
+     * such a term is left out of the untrimmed totals and counted in the trimmed ones.
+     */
+    default boolean afterTrimOnly() {
+        return false;
+    }
+
     /** Evaluates the term for one part (its values already resolved) in one stage. */
     TermResult evaluate(Stage stage, PartValues values);
 

@@ -50,5 +50,11 @@ public enum TermRemark {
     /** The closed loop, not the filter, sets the noise bandwidth. */
     LOOP_SETS_NOISE_BAND,
     /** The stage names no filter (as opposed to naming none explicitly). */
-    FILTER_NOT_STATED
+    FILTER_NOT_STATED,
+    /** The null-pin V/T rule is for a bipolar pair; for this input it stands in as an estimate. */
+    NULL_PIN_RULE_NOT_BIPOLAR,
+    /** The static gain change is calibrated by the two-point trim. */
+    GAIN_CHANGE_CALIBRATED,
+    /** A two-temperature calibration removes the circuit's linear drift. */
+    CIRCUIT_DRIFT_CALIBRATED
 }

@@ -77,7 +77,7 @@ final class TwoTemperatureYield {
         double vfs = s.fullScaleOutput() == null ? 0.0 : s.fullScaleOutput();
         this.gainCoef = vfs * ResistorTerm.sensitivity(s);
         this.tol = s.ratioTolerance();
-        this.resolution = BudgetCalculator.trimOf(s).resolution();
+        this.resolution = BudgetCalculator.trimResolution(s, TrimSizing.of(s, v));
         this.ibShaped = BiasTerm.ibShaped(v);
         this.iosShaped = BiasTerm.iosShaped(v);
         List<Double> at = new ArrayList<>(List.of(s.tMin(), s.tMax()));

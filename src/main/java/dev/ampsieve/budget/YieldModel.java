@@ -90,7 +90,7 @@ final class YieldModel {
         double vfs = s.fullScaleOutput() == null ? 0.0 : s.fullScaleOutput();
         this.gainCoef = vfs * ResistorTerm.sensitivity(s);
         this.tol = trimmed && twoPoint ? 0.0 : s.ratioTolerance();
-        this.resolution = trimmed ? BudgetCalculator.trimOf(s).resolution() : 0.0;
+        this.resolution = trimmed ? BudgetCalculator.trimResolution(s, TrimSizing.of(s, v)) : 0.0;
         this.ibTrimmed = trimmed && v.ibKnownAt25() ? 1.0 : 0.0;
         this.iosTrimmed = trimmed && v.iosKnownAt25() ? 1.0 : 0.0;
         double k = s.maxToSigma();

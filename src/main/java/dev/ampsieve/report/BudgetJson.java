@@ -51,6 +51,9 @@ public final class BudgetJson {
             put(n, "worstAtC", t.worstAtC());
             n.put("estimated", t.estimated());
             n.put("counted", BudgetCalculator.counts(b.stage(), t.key()));
+            if (BudgetCalculator.afterTrimOnly(t.key())) {
+                n.put("afterTrimOnly", true); // the trim circuit's own error: in the trimmed totals only
+            }
             n.put("note", TermNotes.of(t));
             // the note's facts: the formula's id and each operand in SI units (temperatures in °C)
             n.put("formula", t.working().formula());
@@ -85,6 +88,9 @@ public final class BudgetJson {
         tr.put("allowed", trim.allowed());
         put(tr, "worstCaseV", b.trimmed().worstCaseV());
         put(tr, "rssV", b.trimmed().rssV());
+        if (trim.allowed() && b.trimmed().circuit() != null) {
+            TrimCircuitText.json(o, b.trimmed().circuit());
+        }
         if (b.trimmed().yield() != null) {
             YieldResult ty = b.trimmed().yield();
             ObjectNode tyn = tr.putObject("yield");

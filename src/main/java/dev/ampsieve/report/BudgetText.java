@@ -11,6 +11,7 @@ import dev.ampsieve.budget.YieldResult;
 import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.Trim;
+import dev.ampsieve.stage.TrimCircuit;
 import dev.ampsieve.text.Visible;
 import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.Units;
@@ -108,7 +109,7 @@ public final class BudgetText {
                     in.apply(t.inputV()),
                     share(t.outputV(), limit),
                     Double.isNaN(t.worstAtC()) ? "-" : Units.format(t.worstAtC(), Dimension.TEMPERATURE),
-                    counted ? "" : "  headroom only");
+                    BudgetCalculator.afterTrimOnly(t.key()) ? "  after trim only" : counted ? "" : "  headroom only");
         }
         if (anyEstimated) {
             line(o, "* estimated, typical-only or assumed value: see the warnings");
@@ -116,6 +117,9 @@ public final class BudgetText {
         String legend = Figures.kindLegend(kinds);
         if (!legend.isEmpty()) {
             line(o, "%s", legend);
+        }
+        if (b.terms().stream().anyMatch(t -> BudgetCalculator.afterTrimOnly(t.key()))) {
+            line(o, "after trim only: the trim circuit's own error, counted in the trimmed totals only");
         }
         if (anyUncounted) {
             line(o, "headroom only: AC-coupled stage, the DC term does not count toward the error");
@@ -149,6 +153,11 @@ public final class BudgetText {
             if (twoTemp && !(trim.coldIn(s) < trim.hotIn(s))) {
                 continue; // a range of one temperature gives no second calibration point
             }
+            if (twoTemp
+                    && (trim.circuit().kind() == TrimCircuit.Kind.NULL_PINS
+                            || trim.circuit().kind() == TrimCircuit.Kind.INJECTION)) {
+                continue; // a trimmer is set once: it cannot follow a calibration line (the loader refuses the pair)
+            }
             Trimmed t = m == trim.method() ? b.trimmed() : BudgetCalculator.trimmed(s, b.part(), m);
             String where = twoTemp
                     ? "at " + Units.format(trim.coldIn(s), Dimension.TEMPERATURE) + " and "
@@ -160,7 +169,7 @@ public final class BudgetText {
                     m == Trim.Method.ONE_POINT ? "Trimmed" : "",
                     methodName(m),
                     where,
-                    trim.resolution() > 0 ? ", resolution " + v(trim.resolution()) : "",
+                    resolution(b, trim) > 0 ? ", resolution " + v(resolution(b, trim)) : "",
                     v(t.worstCaseV()),
                     share(t.worstCaseV(), limit).strip(),
                     v(t.rssV()),
@@ -177,6 +186,9 @@ public final class BudgetText {
                     "",
                     "yield after the " + methodName(trim.method()) + " trim: "
                             + yieldLine(b.trimmed().yield(), s));
+        }
+        if (trim.allowed() && b.trimmed().circuit() != null && trim.circuit().kind() != TrimCircuit.Kind.STORED) {
+            line(o, "%-10s %s", "Circuit", TrimCircuitText.describe(b.trimmed().circuit(), s));
         }
         o.append('\n');
         line(o, "Constraints");
@@ -326,6 +338,13 @@ public final class BudgetText {
             e++;
         }
         return String.format(Locale.ROOT, "%.1fe%d %%", m, e);
+    }
+
+    /** The step the trim leaves ({@link BudgetCalculator#trimResolution}). */
+    private static double resolution(Budget b, Trim trim) {
+        return b.trimmed().circuit() == null
+                ? trim.resolution()
+                : BudgetCalculator.trimResolution(b.stage(), b.trimmed().circuit());
     }
 
     private static String v(double volts) {

@@ -16,6 +16,7 @@ import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stage.StageWriter;
 import dev.ampsieve.stage.Trim;
+import dev.ampsieve.stage.TrimCircuit;
 import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.Units;
 import java.util.ArrayList;
@@ -119,7 +120,10 @@ final class RecordContent {
                 "trim",
                 (trim.allowed() ? "allowed" : "not allowed") + ", method "
                         + trim.method().key()
-                        + ", cost " + Figures.money(trim.cost()) + " per unit"
+                        + (trim.circuit().kind() == TrimCircuit.Kind.STORED
+                                ? ""
+                                : ", circuit " + trim.circuit().kind().key())
+                        + ", cost " + Figures.money(trim.totalCost()) + " per unit"
                         + (trim.resolution() > 0 ? ", resolution " + Figures.volts(trim.resolution()) : "")));
         rows.add(List.of(
                 "yield sampling",

@@ -78,7 +78,10 @@ public final class ReferencePages {
         o.append("Keys of a stage file, one 'key: value' per line; a dotted key sits in its block ('temperature.min' is"
                 + " 'min' below 'temperature:'). Only the limit and the gain are required.\n\n");
         for (StageKeys.Key k : StageKeys.ORDERED) {
-            String choices = k.choices().isEmpty() ? "" : "; one of " + String.join(" | ", k.choices());
+            String choices = k.choices().isEmpty()
+                    ? ""
+                    : (k.kind() == StageKeys.Kind.CHOICES ? "; some of " : "; one of ")
+                            + String.join(" | ", k.choices());
             o.append("- ")
                     .append(k.path())
                     .append(": ")

@@ -56,6 +56,7 @@ public final class TermNotes {
         return switch (o.name()) {
             case "dT", "gradient" -> "°C";
             case "P" -> "W";
+            case "trimKelvin" -> "K";
             default -> o.dimension().symbol();
         };
     }
@@ -178,6 +179,32 @@ public final class TermNotes {
                                     ? "+ input, x NG x R+ " + f("R+")
                                     : "- input, x Rf " + f("Rf"));
                 case "no-leakage" -> "no leakage named";
+                case "null-pin-drift" ->
+                    f("nulled") + " nulled by the pins x (1/" + n(w.value("trimKelvin"), 4) + " K + trimmer "
+                            + f("potTempco") + ") x " + f("dT") + " °C (rule of thumb for a bipolar pair: about V/T"
+                            + (has(TermRemark.NULL_PIN_RULE_NOT_BIPOLAR) ? ", standing in for this input type" : "")
+                            + ")";
+                case "injection-drift" ->
+                    "correction " + f("correction") + " x (reference " + f("referenceTempco") + " + resistor ratio "
+                            + f("ratioTempco") + " + trimmer " + f("potTempco") + " x " + f("Rth") + "/(Rinj "
+                            + f("Rinj") + " + " + f("Rth") + ")) x " + f("dT") + " °C";
+                case "dac-drift" ->
+                    has(TermRemark.CIRCUIT_DRIFT_CALIBRATED)
+                            ? "linear in temperature: removed by the two-temperature calibration"
+                            : "(DAC zero " + f("dacOffsetDrift") + " + gain " + f("dacGainDrift") + " x ("
+                                    + f("dacReference")
+                                    + "/2 + correction/K)) x K " + f("K") + " + correction " + f("correction")
+                                    + " x resistor ratio " + f("ratioTempco") + ", x " + f("dT") + " °C";
+                case "injection-gain" ->
+                    "noise gain +" + f("dNG") + " on NG " + f("NG") + " scales " + f("scaled")
+                            + " (drift, CMRR, PSRR, aging, noise after the trim)"
+                            + (has(TermRemark.GAIN_CHANGE_CALIBRATED)
+                                    ? "; the gain change " + f("gainChange") + " is calibrated by the two-point trim"
+                                    : "; signal gain change " + f("gainChange") + " x VFS " + f("VFS")
+                                            + " (keep the gain: choose rg so that rg || Rinj is the stated rg)")
+                            + (w.value("commonMode") > 0 ? "; unbalanced common mode " + f("commonMode") : "");
+                case "trim-circuit-unusable" -> "the trim circuit cannot be used with this part or stage";
+                case "no-trim-circuit" -> "the stage's trim does not use this circuit";
                 // a formula this renderer does not know (a test's stand-in): its facts, unworded
                 default -> w.formula() + (facts(w).isEmpty() ? "" : ": " + facts(w));
             };

@@ -60,7 +60,28 @@ final class Questions {
             "thermal-emf.gradient",
             "leakage.resistance",
             "leakage.voltage",
-            "leakage.input");
+            "leakage.input",
+            // trim circuits: a stored correction unless set; the circuit's keys have common-practice defaults
+            "trim.circuit",
+            "trim.circuits",
+            "trim.margin",
+            "trim.node",
+            "trim.reference",
+            "trim.reference-tempco",
+            "trim.resistor-tempco",
+            "trim.tracking",
+            "trim.pot-settability",
+            "trim.pot-tempco",
+            "trim.pot-resistance",
+            "trim.dac-bits",
+            "trim.dac-reference",
+            "trim.dac-offset-drift",
+            "trim.dac-gain-drift",
+            "trim.pot-cost",
+            "trim.reference-cost",
+            "trim.resistor-cost",
+            "trim.dac-cost",
+            "trim.adjust-cost");
 
     /** Only asked when a trim is allowed. */
     static final Set<String> TRIM_DETAILS = Set.of("trim.method", "trim.resolution", "trim.cost");

@@ -226,7 +226,10 @@ final class ShellCompleter implements Completer {
     /** Words and units for the value of {@code id}. */
     private static void value(String id, String word, String previous, List<Candidate> out) {
         StageKeys.Key key = StageKeys.get(id);
-        if (key != null && !key.choices().isEmpty() && key.kind() == StageKeys.Kind.CHOICE) {
+        if (key != null
+                && !key.choices().isEmpty()
+                && (key.kind() == StageKeys.Kind.CHOICE || key.kind() == StageKeys.Kind.CHOICES)) {
+            // a list key (trim.circuits) completes each word alike
             key.choices().forEach(c -> out.add(new Candidate(c)));
             return;
         }

@@ -33,6 +33,8 @@ public final class StageKeys {
         BOOLEAN,
         /** one word of {@link Key#choices()} */
         CHOICE,
+        /** one or more words of {@link Key#choices()}: a list, or words separated by commas */
+        CHOICES,
         /** worst-case | rss | yield P % */
         CRITERION,
         /** a gain: a plain number, or decibels */
@@ -100,6 +102,8 @@ public final class StageKeys {
     public static final List<String> CRITERIA = List.of("worst-case", "rss", "yield 99.9 %");
     public static final List<String> TRIM_METHODS =
             java.util.Arrays.stream(Trim.Method.values()).map(Trim.Method::key).toList();
+    public static final List<String> TRIM_CIRCUITS = TrimCircuit.Kind.keys();
+    public static final List<String> TRIM_NODES = TrimCircuit.Node.keys();
     /** band.filter-order: "none", or the order of the Butterworth low-pass at band.high, 1..{@link Stage#MAX_FILTER_ORDER}. */
     public static final List<String> FILTER_ORDERS = java.util.stream.Stream.concat(
                     java.util.stream.Stream.of("none"),
@@ -464,7 +468,144 @@ public final class StageKeys {
                     List.of(),
                     "0",
                     "0.60",
-                    "cost of trimming one unit (labour, trimmer or DAC, test time), to compare with a better part"),
+                    "cost of trimming one unit (test time, storing the correction; the circuit's own parts and hand work are trim.*-cost), to compare with a better part"),
+            // trim circuits: every default below is common practice, not a figure of any part
+            k(
+                    "trim.circuit",
+                    Kind.CHOICE,
+                    TRIM_CIRCUITS,
+                    "stored",
+                    "dac",
+                    "what applies the correction: stored (subtracted after the converter), null-pins (the part's own "
+                            + "pins and a trimmer), injection (reference, trimmer and a resistor into the amplifier), dac (a "
+                            + "DAC into that resistor); the tool sizes it for each part and counts what it adds"),
+            k(
+                    "trim.circuits",
+                    Kind.CHOICES,
+                    TRIM_CIRCUITS,
+                    "trim.circuit alone",
+                    "stored, injection",
+                    "the circuits the advice compares for each part (the cheapest that makes it fit is named)"),
+            k(
+                    "trim.margin",
+                    Kind.NUMBER,
+                    List.of(),
+                    "1.5 (common practice)",
+                    "1.5",
+                    "injection and dac: the range must cover this many times the worst untrimmed offset"),
+            k(
+                    "trim.node",
+                    Kind.CHOICE,
+                    TRIM_NODES,
+                    "minus",
+                    "minus",
+                    "injection and dac: the injection resistor goes to the inverting input (minus: it raises the noise "
+                            + "gain by rf/Rinj) or the non-inverting input (plus: against the resistance there)"),
+            q(
+                    "trim.reference",
+                    Dimension.VOLTAGE,
+                    "2.5 V (common practice)",
+                    "2.5 V",
+                    "injection: the trimmer spans -reference..+reference about the node's reference"),
+            q(
+                    "trim.reference-tempco",
+                    Dimension.RATIO_DRIFT,
+                    "20 ppm/C (common practice: a mid-grade band-gap reference)",
+                    "20 ppm/C",
+                    "injection: the injected correction moves with the reference"),
+            q(
+                    "trim.resistor-tempco",
+                    Dimension.RATIO_DRIFT,
+                    "25 ppm/C (common practice: thin-film chip resistors)",
+                    "25 ppm/C",
+                    "injection and dac: the injected correction moves with the resistors' ratio (2 x this without tracking)"),
+            q(
+                    "trim.tracking",
+                    Dimension.RATIO_DRIFT,
+                    "none (separate parts: 2 x trim.resistor-tempco)",
+                    "5 ppm/C",
+                    "injection and dac: the ratio tempco when the injection resistor sits in one network with the "
+                            + "resistor it works with"),
+            q(
+                    "trim.pot-settability",
+                    Dimension.RATIO,
+                    "0.1 % (common practice: a multi-turn cermet trimmer)",
+                    "0.1 %",
+                    "null-pins and injection: the smallest step a trimmer can be set to, as a share of its travel; "
+                            + "with the range it sets the resolution"),
+            q(
+                    "trim.pot-tempco",
+                    Dimension.RATIO_DRIFT,
+                    "100 ppm/C (common practice: cermet)",
+                    "100 ppm/C",
+                    "null-pins and injection: the trimmer's resistance moves the setting with temperature"),
+            q(
+                    "trim.pot-resistance",
+                    Dimension.RESISTANCE,
+                    "10 kohm (common practice)",
+                    "10 kohm",
+                    "injection: the trimmer's end-to-end resistance; up to a quarter of it sits in series with Rinj"),
+            k(
+                    "trim.dac-bits",
+                    Kind.INTEGER,
+                    List.of(),
+                    "8 (common practice for a trim DAC)",
+                    "8",
+                    "dac: with the range it sets the step of the correction"),
+            q(
+                    "trim.dac-reference",
+                    Dimension.VOLTAGE,
+                    "2.5 V (common practice)",
+                    "2.5 V",
+                    "dac: its full-scale output; midscale injects nothing, so the range is +-half of it"),
+            q(
+                    "trim.dac-offset-drift",
+                    Dimension.VOLTAGE_DRIFT,
+                    "10 uV/C (common practice: a string DAC)",
+                    "10 uV/C",
+                    "dac: its zero-code drift, injected through Rinj"),
+            q(
+                    "trim.dac-gain-drift",
+                    Dimension.RATIO_DRIFT,
+                    "10 ppm/C (common practice: internal reference)",
+                    "10 ppm/C",
+                    "dac: its gain drift, on the output it holds"),
+            k(
+                    "trim.pot-cost",
+                    Kind.NUMBER,
+                    List.of(),
+                    "0.40 (common practice: a multi-turn trimmer in thousands)",
+                    "0.40",
+                    "null-pins and injection: the trimmer's price, added to the trim cost"),
+            k(
+                    "trim.reference-cost",
+                    Kind.NUMBER,
+                    List.of(),
+                    "0.60 (common practice)",
+                    "0.60",
+                    "injection: the reference's price, added to the trim cost"),
+            k(
+                    "trim.resistor-cost",
+                    Kind.NUMBER,
+                    List.of(),
+                    "0.01 (common practice)",
+                    "0.01",
+                    "injection and dac: the injection resistor's price"),
+            k(
+                    "trim.dac-cost",
+                    Kind.NUMBER,
+                    List.of(),
+                    "0.90 (common practice: an 8-bit trim DAC in thousands)",
+                    "0.90",
+                    "dac: the DAC's price, added to the trim cost"),
+            k(
+                    "trim.adjust-cost",
+                    Kind.NUMBER,
+                    List.of(),
+                    "0.75 (common practice: about a minute of bench time)",
+                    "0.75",
+                    "null-pins and injection: setting a trimmer by hand, per unit (a DAC is set by the test program, "
+                            + "whose time is trim.cost)"),
             k(
                     "quantity",
                     Kind.INTEGER,

@@ -1321,7 +1321,154 @@ public final class StageLoader {
                 }
             }
             double[] at = calibrationTemperatures(t, how, tMin, tMax);
-            return new Trim(allowed == null || allowed, how, resolution, cost, at[0], at[1]);
+            TrimCircuit circuit = trimCircuit(t, how);
+            List<TrimCircuit.Kind> circuits = trimCircuits(t, circuit.kind());
+            return new Trim(allowed == null || allowed, how, resolution, cost, at[0], at[1], circuit, circuits);
+        }
+
+        /** Largest trim range margin: a range 100 times the offset is no longer a trim. */
+        static final double MAX_TRIM_MARGIN = 100;
+        /** Most DAC bits: beyond 24 the steps are below any amplifier's noise. */
+        static final int MAX_DAC_BITS = 24;
+
+        /** trim.circuit and its keys (defaults in {@link TrimCircuit}, each common practice). */
+        private TrimCircuit trimCircuit(Node.Mapping t, Trim.Method how) {
+            TrimCircuit d = TrimCircuit.STORED;
+            String word = f.choice(t, "trim", "circuit", StageKeys.TRIM_CIRCUITS);
+            TrimCircuit.Kind kind = word == null ? TrimCircuit.Kind.STORED : TrimCircuit.Kind.of(word);
+            if (kind == null) {
+                kind = TrimCircuit.Kind.STORED; // f.choice has reported the word
+            }
+            if (how == Trim.Method.TWO_TEMPERATURE
+                    && (kind == TrimCircuit.Kind.NULL_PINS || kind == TrimCircuit.Kind.INJECTION)) {
+                f.error(
+                        Fields.where(t, "circuit"),
+                        "trim.circuit",
+                        "a trimmer is set once, at one temperature; method two-temperature needs a correction that "
+                                + "follows the temperature",
+                        "write 'circuit: stored' or 'circuit: dac', or 'method: one-point'");
+            }
+            double margin = nonNegative(t, "trim", "margin", Dimension.NUMBER, d.margin());
+            if (present(t, "margin") && (margin < 1 || margin > MAX_TRIM_MARGIN)) {
+                f.error(
+                        Fields.where(t, "margin"),
+                        "trim.margin",
+                        plain(margin) + " is outside 1 to " + plain(MAX_TRIM_MARGIN)
+                                + ": the range must at least cover the offset",
+                        "write a factor such as '1.5'");
+            }
+            String nodeWord = f.choice(t, "trim", "node", StageKeys.TRIM_NODES);
+            TrimCircuit.Node node = "plus".equals(nodeWord) ? TrimCircuit.Node.PLUS : TrimCircuit.Node.MINUS;
+            double reference = positiveOr(t, "reference", Dimension.VOLTAGE, d.reference());
+            volts(t, "trim", "reference", reference);
+            double refTc = tempco(t, "reference-tempco", d.referenceTempco());
+            double resTc = tempco(t, "resistor-tempco", d.resistorTempco());
+            double tracking = tempco(t, "tracking", Double.NaN);
+            double settability = positiveOr(t, "pot-settability", Dimension.RATIO, d.potSettability());
+            if (settability > 1) {
+                f.error(
+                        Fields.where(t, "pot-settability"),
+                        "trim.pot-settability",
+                        "a share of the trimmer's travel is at most 100 %",
+                        "write the smallest settable step as a share, such as '0.1 %'");
+            }
+            double potTc = tempco(t, "pot-tempco", d.potTempco());
+            double potR = positiveOr(t, "pot-resistance", Dimension.RESISTANCE, d.potResistance());
+            if (potR > MAX_RESISTANCE) {
+                f.error(
+                        Fields.where(t, "pot-resistance"),
+                        "trim.pot-resistance",
+                        "above 1 Tohm, more than any trimmer",
+                        "check the prefix; write for example '10 kohm'");
+            }
+            Integer bits = f.integer(t, "trim", "dac-bits", 1, MAX_DAC_BITS);
+            double dacRef = positiveOr(t, "dac-reference", Dimension.VOLTAGE, d.dacReference());
+            volts(t, "trim", "dac-reference", dacRef);
+            double dacOffset = nonNegative(t, "trim", "dac-offset-drift", Dimension.VOLTAGE_DRIFT, d.dacOffsetDrift());
+            if (dacOffset > MAX_SEEBECK) {
+                f.error(
+                        Fields.where(t, "dac-offset-drift"),
+                        "trim.dac-offset-drift",
+                        "above 2 mV/°C, more than any DAC drifts",
+                        "check the prefix; write for example '10 uV/C'");
+            }
+            double dacGain = tempco(t, "dac-gain-drift", d.dacGainDrift());
+            double[] costs = new double[5];
+            String[] costKeys = {"pot-cost", "reference-cost", "resistor-cost", "dac-cost", "adjust-cost"};
+            double[] costDefaults = {d.potCost(), d.referenceCost(), d.resistorCost(), d.dacCost(), d.adjustCost()};
+            for (int i = 0; i < costs.length; i++) {
+                costs[i] = nonNegative(t, "trim", costKeys[i], Dimension.NUMBER, costDefaults[i]);
+                money(t, "trim", costKeys[i], costs[i]);
+            }
+            return new TrimCircuit(
+                    kind,
+                    margin,
+                    node,
+                    reference,
+                    refTc,
+                    resTc,
+                    tracking,
+                    settability,
+                    potTc,
+                    potR,
+                    bits == null ? d.dacBits() : bits,
+                    dacRef,
+                    dacOffset,
+                    dacGain,
+                    costs[0],
+                    costs[1],
+                    costs[2],
+                    costs[3],
+                    costs[4]);
+        }
+
+        /** trim.circuits: a list (or comma-separated words) of circuit kinds; the stage's circuit alone by default. */
+        private List<TrimCircuit.Kind> trimCircuits(Node.Mapping t, TrimCircuit.Kind own) {
+            List<TrimCircuit.Kind> out = new ArrayList<>();
+            for (String item : f.strings(t, "trim", "circuits")) {
+                for (String w : item.split("[,\\s]+")) {
+                    if (w.isEmpty()) {
+                        continue;
+                    }
+                    TrimCircuit.Kind k = TrimCircuit.Kind.of(w);
+                    if (k == null) {
+                        String near = Fields.closest(w, StageKeys.TRIM_CIRCUITS);
+                        f.error(
+                                Fields.where(t, "circuits"),
+                                "trim.circuits",
+                                "'" + w + "' is not a trim circuit"
+                                        + (near == null ? "" : " (did you mean " + near + "?)"),
+                                "write some of " + String.join(", ", StageKeys.TRIM_CIRCUITS));
+                    } else if (!out.contains(k)) {
+                        out.add(k);
+                    }
+                }
+            }
+            if (out.isEmpty()) {
+                return List.of(own);
+            }
+            return out;
+        }
+
+        /** A positive quantity of the trim block, or {@code fallback} when absent (or refused). */
+        private double positiveOr(Node.Mapping t, String key, Dimension d, double fallback) {
+            Double v = positive(t, "trim", key, d);
+            return v == null ? fallback : v;
+        }
+
+        /** A temperature coefficient of the trim block, 0 to {@link #MAX_TEMPCO}; {@code fallback} when absent. */
+        private double tempco(Node.Mapping t, String key, double fallback) {
+            Double v = nonNegativeOrNull(t, "trim", key, Dimension.RATIO_DRIFT);
+            if (v != null && v > MAX_TEMPCO) {
+                f.error(
+                        Fields.where(t, key),
+                        "trim." + key,
+                        "above 1 %/°C, more than any component drifts",
+                        "check the prefix; write for example '"
+                                + StageKeys.get("trim." + key).example() + "'");
+                return fallback;
+            }
+            return v == null ? fallback : v;
         }
 
         /**

@@ -146,6 +146,41 @@ public final class StageWriter {
         out.append(lead).append(text).append('\n');
     }
 
+    /** The trim circuit's keys, only when a circuit other than the stored correction is in play. */
+    private static void trimCircuit(Map<String, String> a, Trim t) {
+        TrimCircuit c = t.circuit();
+        boolean other = c.kind() != TrimCircuit.Kind.STORED
+                || t.circuits().stream().anyMatch(k -> k != TrimCircuit.Kind.STORED);
+        if (!other) {
+            return;
+        }
+        a.put("trim.circuit", c.kind().key());
+        a.put(
+                "trim.circuits",
+                String.join(
+                        ", ", t.circuits().stream().map(TrimCircuit.Kind::key).toList()));
+        a.put("trim.margin", exact(c.margin(), Dimension.NUMBER));
+        a.put("trim.node", c.node().key());
+        a.put("trim.reference", exact(c.reference(), Dimension.VOLTAGE));
+        a.put("trim.reference-tempco", exact(c.referenceTempco(), Dimension.RATIO_DRIFT));
+        a.put("trim.resistor-tempco", exact(c.resistorTempco(), Dimension.RATIO_DRIFT));
+        if (!Double.isNaN(c.tracking())) {
+            a.put("trim.tracking", exact(c.tracking(), Dimension.RATIO_DRIFT));
+        }
+        a.put("trim.pot-settability", exact(c.potSettability(), Dimension.RATIO, "%"));
+        a.put("trim.pot-tempco", exact(c.potTempco(), Dimension.RATIO_DRIFT));
+        a.put("trim.pot-resistance", exact(c.potResistance(), Dimension.RESISTANCE));
+        a.put("trim.dac-bits", String.valueOf(c.dacBits()));
+        a.put("trim.dac-reference", exact(c.dacReference(), Dimension.VOLTAGE));
+        a.put("trim.dac-offset-drift", exact(c.dacOffsetDrift(), Dimension.VOLTAGE_DRIFT));
+        a.put("trim.dac-gain-drift", exact(c.dacGainDrift(), Dimension.RATIO_DRIFT));
+        a.put("trim.pot-cost", exact(c.potCost(), Dimension.NUMBER));
+        a.put("trim.reference-cost", exact(c.referenceCost(), Dimension.NUMBER));
+        a.put("trim.resistor-cost", exact(c.resistorCost(), Dimension.NUMBER));
+        a.put("trim.dac-cost", exact(c.dacCost(), Dimension.NUMBER));
+        a.put("trim.adjust-cost", exact(c.adjustCost(), Dimension.NUMBER));
+    }
+
     private static final Pattern PLAIN = Pattern.compile("[A-Za-z0-9+\\-.][A-Za-z0-9 +\\-._/%()°µΩ]*");
 
     /** The answer as a YAML scalar: plain when that reads back as the same text, else double-quoted. */
@@ -292,6 +327,7 @@ public final class StageWriter {
         }
         a.put("trim.resolution", exact(t.resolution(), Dimension.VOLTAGE));
         a.put("trim.cost", exact(t.cost(), Dimension.NUMBER));
+        trimCircuit(a, t);
         a.put("quantity", String.valueOf(s.quantity()));
         if (s.maxPrice() != null) {
             a.put("max-price", exact(s.maxPrice(), Dimension.NUMBER));

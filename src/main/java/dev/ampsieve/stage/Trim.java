@@ -1,5 +1,7 @@
 package dev.ampsieve.stage;
 
+import java.util.List;
+
 /**
  * Whether the maker may calibrate each unit, how, to what resolution (output-referred
  * volts) and at what cost per unit (labour, a trimmer or DAC, test time).
@@ -7,8 +9,27 @@ package dev.ampsieve.stage;
  * @param cold for {@link Method#TWO_TEMPERATURE}: the lower calibration temperature, °C; NaN means
  *             the stage's {@code temperature.min}
  * @param hot  the upper calibration temperature, °C; NaN means the stage's {@code temperature.max}
+ * @param circuit  the circuit that applies the correction ({@code trim.circuit}; a stored correction by default)
+ * @param circuits the circuits the advice compares ({@code trim.circuits}; the stage's circuit alone by default)
  */
-public record Trim(boolean allowed, Method method, double resolution, double cost, double cold, double hot) {
+public record Trim(
+        boolean allowed,
+        Method method,
+        double resolution,
+        double cost,
+        double cold,
+        double hot,
+        TrimCircuit circuit,
+        List<TrimCircuit.Kind> circuits) {
+
+    public Trim {
+        circuits = List.copyOf(circuits);
+    }
+
+    /** A trim applied by a stored correction. */
+    public Trim(boolean allowed, Method method, double resolution, double cost, double cold, double hot) {
+        this(allowed, method, resolution, cost, cold, hot, TrimCircuit.STORED, List.of(TrimCircuit.Kind.STORED));
+    }
 
     /** How each unit is calibrated. */
     public enum Method {
@@ -46,5 +67,15 @@ public record Trim(boolean allowed, Method method, double resolution, double cos
     /** The upper calibration temperature, °C: {@link #hot} or the range's upper end. */
     public double hotIn(Stage s) {
         return Double.isNaN(hot) ? s.tMax() : hot;
+    }
+
+    /** The same trim applied by another circuit (same settings, the kind changed). */
+    public Trim withCircuit(TrimCircuit.Kind kind) {
+        return new Trim(allowed, method, resolution, cost, cold, hot, circuit.withKind(kind), circuits);
+    }
+
+    /** The cost of trimming one unit: {@link #cost} (test time, storing) plus the circuit's parts and hand work. */
+    public double totalCost() {
+        return cost + circuit.partsCost();
     }
 }
