@@ -17,6 +17,8 @@ import java.util.List;
  * @param currencies       the distinct currencies of the ranked parts' prices, sorted
  * @param quotedQuantities the order quantities, above the stage's, that ranked parts' prices were
  *                         quoted for (nothing to pick a price break from), ascending
+ * @param trimCircuits     the trim circuits the stage allows compared for the part the trim advice is
+ *                         about; null when the stage names one circuit or allows no trim
  */
 public record Advice(
         Candidate pick,
@@ -30,7 +32,8 @@ public record Advice(
         BoardLimited boardLimited,
         List<Rejected> rejected,
         List<String> currencies,
-        List<Integer> quotedQuantities) {
+        List<Integer> quotedQuantities,
+        TrimCircuitChoice trimCircuits) {
     public Advice {
         rejected = List.copyOf(rejected);
         currencies = List.copyOf(currencies);

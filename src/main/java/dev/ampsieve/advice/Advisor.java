@@ -66,7 +66,22 @@ public final class Advisor {
                 pick == null ? null : boardLimited(stage, pick),
                 rejected,
                 currencies.size() > 1 ? List.copyOf(currencies) : List.of(),
-                List.copyOf(larger));
+                List.copyOf(larger),
+                trimCircuits(stage, trim, noFit));
+    }
+
+    /**
+     * When the stage allows a trim and names more than one circuit ({@code trim.circuits}): the
+     * circuits compared for the part the trim advice is about (the cheapest part that fits with the
+     * trim, else the closest part when nothing fits). Null otherwise.
+     */
+    static TrimCircuitChoice trimCircuits(Stage stage, TrimAdvice trim, NoFitAdvice noFit) {
+        Trim t = StageEdit.trim(stage);
+        if (!t.allowed() || t.circuits().size() < 2) {
+            return null;
+        }
+        Candidate subject = trim.withTrim() != null ? trim.withTrim() : noFit != null ? noFit.closest() : null;
+        return subject == null ? null : TrimCircuitChoice.of(stage, subject.part());
     }
 
     /**
@@ -615,10 +630,18 @@ public final class Advisor {
         Trim tried;
         Change.Kind kind;
         if (!t.allowed()) {
-            tried = new Trim(true, t.method(), t.resolution(), t.cost(), t.cold(), t.hot());
+            tried = new Trim(true, t.method(), t.resolution(), t.cost(), t.cold(), t.hot(), t.circuit(), t.circuits());
             kind = Change.Kind.ALLOW_TRIM;
         } else if (t.method() == Trim.Method.ONE_POINT) {
-            tried = new Trim(true, Trim.Method.TWO_POINT, t.resolution(), t.cost());
+            tried = new Trim(
+                    true,
+                    Trim.Method.TWO_POINT,
+                    t.resolution(),
+                    t.cost(),
+                    Double.NaN,
+                    Double.NaN,
+                    t.circuit(),
+                    t.circuits());
             kind = Change.Kind.TWO_POINT_TRIM;
         } else {
             return java.util.Optional.empty();
@@ -630,7 +653,7 @@ public final class Advisor {
         Candidate c = Candidate.of(b);
         Map<String, Double> v = new LinkedHashMap<>();
         v.put("errorAfterTrimV", c.errorV());
-        v.put("trimCost", t.cost());
+        v.put("trimCost", t.totalCost());
         return java.util.Optional.of(new Change(kind, v, null, c));
     }
 

@@ -79,6 +79,9 @@ public final class AdviceText {
             if (t != null) {
                 lines.add(t);
             }
+            if (a.trimCircuits() != null) {
+                TrimCircuitText.render(a.trimCircuits(), stage).lines().forEach(lines::add);
+            }
         }
         zeroDrift(stage, a.zeroDrift(), lines);
         if (a.undecided() != null) {
@@ -136,8 +139,10 @@ public final class AdviceText {
         int q = stage.quantity();
         Trim trim = trimOf(stage);
         String trimName = trimName(trim.method());
-        String cost = trim.cost() > 0
-                ? money(trim.cost(), t.withTrim() == null ? "" : t.withTrim().currency())
+        String cost = trim.totalCost() > 0
+                ? money(
+                        trim.totalCost(),
+                        t.withTrim() == null ? "" : t.withTrim().currency())
                 : "no stated cost (stage trim.cost; counted as 0)";
         Candidate w = t.withTrim();
         Candidate a = t.asIs();
@@ -459,8 +464,9 @@ public final class AdviceText {
     private static String trimChange(Change c, Stage stage) {
         Trim t = trimOf(stage);
         Candidate after = c.after();
-        String cost =
-                t.cost() > 0 ? money(t.cost(), after.currency()) + " per unit" : "the trim's cost per unit (not given)";
+        String cost = t.totalCost() > 0
+                ? money(t.totalCost(), after.currency()) + " per unit"
+                : "the trim's cost per unit (not given)";
         String what = c.kind() == Change.Kind.ALLOW_TRIM
                 ? "allow a "
                         + switch (t.method()) {

@@ -524,6 +524,11 @@ public final class RankReport {
                 un.put("unitsToSettle", u.unitsToSettle());
             }
         }
+        if (a.trimCircuits() == null) {
+            n.putNull("trimCircuits");
+        } else {
+            TrimCircuitText.json(n, a.trimCircuits());
+        }
         ArrayNode lines = n.putArray("lines");
         AdviceText.lines(a).forEach(lines::add);
         return n;

@@ -179,7 +179,7 @@ public final class TrimCircuitText {
         o.append("Trim circuits for ")
                 .append(id)
                 .append(" (criterion ")
-                .append(s.criterion())
+                .append(CriterionText.of(s.criterion()))
                 .append(")\n");
         TextTable t = new TextTable()
                 .left("circuit")
