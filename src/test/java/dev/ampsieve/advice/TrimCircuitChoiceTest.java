@@ -74,6 +74,37 @@ class TrimCircuitChoiceTest {
     }
 
     @Test
+    void theRankingComparesTheCircuitsForThePartTheTrimAdviceIsAbout() throws Exception {
+        // bridge stage: prec-bip-05 fits with the one-point trim (TrimAdvice names it), so the circuits are
+        // compared for it; the stored correction stays the cheapest that fits (see the test above)
+        Stage s = StageLoader.load(DEMO.resolve("stages/bridge-amp.yaml"));
+        Catalog cat = CatalogLoader.load(DEMO, false);
+        Ranking r = Ranker.rank(s, cat.parts(), dev.ampsieve.budget.BudgetCalculator::compute);
+        TrimCircuitChoice c = r.advice().trimCircuits();
+        assertEquals("prec-bip-05", r.advice().trim().withTrim().id());
+        assertEquals("prec-bip-05", c.part().id());
+        assertEquals(TrimCircuit.Kind.STORED, c.cheapest());
+        assertEquals(4, c.options().size()); // the four circuits bridge-amp.yaml lists
+        // a stage that names one circuit gets no comparison
+        Stage one = s.toBuilder()
+                .trim(new dev.ampsieve.stage.Trim(
+                        true,
+                        s.trim().method(),
+                        s.trim().resolution(),
+                        s.trim().cost(),
+                        s.trim().cold(),
+                        s.trim().hot(),
+                        s.trim().circuit(),
+                        java.util.List.of(TrimCircuit.Kind.STORED)))
+                .build();
+        assertEquals(
+                null,
+                Ranker.rank(one, cat.parts(), dev.ampsieve.budget.BudgetCalculator::compute)
+                        .advice()
+                        .trimCircuits());
+    }
+
+    @Test
     void nullPinDriftDefeatsTheNullOverAWideRange() {
         // inverting, NG 11, a part with null pins and vos 2 mV; -40..85 °C: the cold end is 65 °C from 25 °C
         StageFixture f = StageFixture.inverting(10e3, 1e3).temps(-40, 85).limitV(2e-3);
