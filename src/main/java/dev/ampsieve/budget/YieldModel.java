@@ -59,6 +59,9 @@ final class YieldModel {
     private final boolean[] atRef = new boolean[2];
 
     private final TruncatedNormal vosD;
+    /** A measured lot beyond the datasheet: the worst-case total no longer bounds every unit. */
+    private final boolean lotBeyondWorstCase;
+
     private final TruncatedNormal driftD;
     /** Drift is each unit's vos / T (estimated from the offset), not drawn. */
     private final boolean driftFromVos;
@@ -103,7 +106,8 @@ final class YieldModel {
         }
         boolean dc = !s.acCoupled();
         this.clamp = dc && !Double.isNaN(v.vosMaxOverTemp()) ? v.vosMaxOverTemp() : Double.POSITIVE_INFINITY;
-        this.vosD = dc ? symmetric(v.vos(), v.vos().bound(), k) : null;
+        this.vosD = dc ? Measurements.offsetSpread(v, k) : null; // a measured lot's, else the datasheet's
+        this.lotBeyondWorstCase = dc && Measurements.beyondWorstCase(v);
         this.driftFromVos = dc && v.driftFromOffset();
         this.driftD = dc && !driftFromVos ? symmetric(v.drift(), v.driftBound(s.deltaT()), k) : null;
         this.ibD = dc ? bias(v.ib(), k, v.biasSignKnown()) : null;
@@ -163,7 +167,7 @@ final class YieldModel {
         if (Double.isNaN(limit)) {
             return new YieldResult(0, 0, 0, 0, "none-pass");
         }
-        if (bound <= limit || maxError() <= limit) {
+        if (bound <= limit && !lotBeyondWorstCase || maxError() <= limit) {
             return new YieldResult(1.0, 1.0, 1.0, 0, "all-pass");
         }
         if (minError() > limit) {
