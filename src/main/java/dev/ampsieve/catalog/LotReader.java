@@ -90,7 +90,8 @@ public final class LotReader {
             if (columns == null) {
                 columns = new ArrayList<>();
                 second = header(file, lineNo, line, spans, columns, problems);
-                if (columns.stream().noneMatch(c -> c.name.equals(VOS) && !c.second)) {
+                // a heading already refused is the likelier slip: no second line for the same mistake
+                if (problems.isEmpty() && columns.stream().noneMatch(c -> c.name.equals(VOS) && !c.second)) {
                     problems.add(Problem.error(
                             new Located(file, lineNo, 1),
                             "",
