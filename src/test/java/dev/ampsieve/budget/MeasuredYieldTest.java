@@ -123,9 +123,10 @@ class MeasuredYieldTest {
         Measurement m = b.measured().get(0);
         assertTrue(m.beyond() > 0, m::toString);
         assertTrue(
-                b.assumptions().stream().anyMatch(a -> a instanceof Assumption.MeasuredBeyondDatasheet x
-                        && x.field().equals("vos")
-                        && x.beyond() == m.beyond()),
+                b.assumptions().stream()
+                        .anyMatch(a -> a instanceof Assumption.MeasuredBeyondDatasheet x
+                                && x.field().equals("vos")
+                                && x.beyond() == m.beyond()),
                 b.assumptions()::toString);
         // the worst case (from the datasheet) no longer bounds every unit: sampled, untruncated
         assertEquals("sampled", b.yield().decided());

@@ -27,9 +27,7 @@ class LotReaderTest {
 
     @Test
     void readsEveryColumnInSiUnits() throws InputException {
-        MeasuredLot lot = LotReader.parse(
-                FILE,
-                """
+        MeasuredLot lot = LotReader.parse(FILE, """
                 # bench of 2026-11-20
                 unit, vos (uV), ib (nA), vos at 85 C (uV), ib at 85 C (pA)
 
@@ -109,7 +107,8 @@ class LotReaderTest {
 
     @Test
     void tooFewUnitsOrNoHeader() {
-        assertEquals("only 2 units; a fit needs at least 3", only("vos (uV)\n1\n2\n").message());
+        assertEquals(
+                "only 2 units; a fit needs at least 3", only("vos (uV)\n1\n2\n").message());
         assertEquals(
                 "no header line (the file is empty or holds only comments)",
                 only("# nothing yet\n\n").message());

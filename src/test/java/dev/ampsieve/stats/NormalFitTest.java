@@ -66,7 +66,10 @@ class NormalFitTest {
         double mean = Arrays.stream(x).average().orElseThrow();
         double s = Math.sqrt(Arrays.stream(x).map(v -> (v - mean) * (v - mean)).sum() / (x.length - 1));
         NormalDistribution phi = new NormalDistribution(0, 1);
-        double[] u = Arrays.stream(x).map(v -> phi.cumulativeProbability((v - mean) / s)).sorted().toArray();
+        double[] u = Arrays.stream(x)
+                .map(v -> phi.cumulativeProbability((v - mean) / s))
+                .sorted()
+                .toArray();
         IterativeLegendreGaussIntegrator gl = new IterativeLegendreGaussIntegrator(5, 1e-12, 1e-14);
         double integral = 0;
         double prev = 0;
