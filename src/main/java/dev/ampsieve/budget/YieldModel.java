@@ -26,7 +26,8 @@ import org.apache.commons.math3.random.Well19937c;
  * error exceeds the worst-case total (a part that fits by the worst case has a yield of 100 %):
  * <ul>
  * <li>offset and drift N(0, s) truncated at their bounds, s = max(typ, bound/k) (bound/k
- * without a typical; a typical-only figure has bound k x typ and s = typ). A drift estimated as
+ * without a typical; a typical-only figure has bound k x typ and s = typ). A part with a measured
+ * lot draws its offset from the lot instead ({@link Measurements#offsetSpread}). A drift estimated as
  * vos / T is each unit's own vos / T (same sign), not an independent draw.</li>
  * <li>IB and IOS are drawn independently at 25 °C and at each range end, scaled to the limit
  * there ({@link PartValues#ibAt}): an IOS may change sign with temperature, so what a trim
