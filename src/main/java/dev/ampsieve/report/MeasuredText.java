@@ -8,6 +8,7 @@ import dev.ampsieve.budget.YieldResult;
 import dev.ampsieve.text.Visible;
 import dev.ampsieve.units.Dimension;
 import dev.ampsieve.units.Units;
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -29,7 +30,7 @@ final class MeasuredText {
         List<String> out = new ArrayList<>();
         out.add(String.format(
                 "%-10s from %d measured units (%s), normal fit, σ with its 95 %% interval (chi-square)",
-                "Measured", vos.units(), Visible.of(vos.file().toString())));
+                "Measured", vos.units(), Visible.of(shown(vos.file()))));
         TextTable t = new TextTable()
                 .left("quantity")
                 .left("at")
@@ -43,7 +44,9 @@ final class MeasuredText {
             Dimension d = dimension(m.field());
             t.row(
                     m.field(),
-                    Units.format(m.temperature(), Dimension.TEMPERATURE),
+                    m.field().equals("vos-drift")
+                            ? "25.." + Units.format(m.temperature(), Dimension.TEMPERATURE)
+                            : Units.format(m.temperature(), Dimension.TEMPERATURE),
                     Units.format(m.mean(), d),
                     Units.format(m.sigma(), d),
                     Units.format(m.sigmaLow(), d) + " .. " + Units.format(m.sigmaHigh(), d),
@@ -117,6 +120,13 @@ final class MeasuredText {
             y.put("trials", datasheetYield.trials());
             y.put("decided", datasheetYield.decided());
         }
+    }
+
+    /** The file as the user would type it from here: relative to the working folder when it lies below it. */
+    private static String shown(Path file) {
+        Path here = Path.of("").toAbsolutePath();
+        Path f = file.toAbsolutePath().normalize();
+        return f.startsWith(here) ? here.relativize(f).toString() : file.toString();
     }
 
     private static Dimension dimension(String field) {
