@@ -17,7 +17,8 @@ import java.util.List;
  * Truncated at the datasheet's maximum when every unit lies inside it (the guarantee still holds);
  * untruncated when a unit lies beyond it, or the catalog has no maximum, since then nothing bounds
  * the lot. The lot's bias currents and its values at a second temperature are fitted and compared
- * with the datasheet, but drawn from the datasheet as before.
+ * with the datasheet, but drawn from the datasheet as before. A lot whose units all read the same
+ * (sigma 0: a meter too coarse for them) estimates no spread; the datasheet's stands.
  */
 public final class Measurements {
     private Measurements() {}
@@ -119,6 +120,10 @@ public final class Measurements {
             return YieldModel.symmetric(v.vos(), v.vos().bound(), k);
         }
         NormalFit f = NormalFit.of(lot.vos());
+        if (!(f.sigmaHigh() > 0)) {
+            // every unit read the same (a meter too coarse): no spread can be estimated, and none is assumed
+            return YieldModel.symmetric(v.vos(), v.vos().bound(), k);
+        }
         double b = bounding(v, lot);
         return new TruncatedNormal(f.mean(), f.sigmaHigh(), -b, b);
     }

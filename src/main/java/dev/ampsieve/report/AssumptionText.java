@@ -217,6 +217,7 @@ public final class AssumptionText {
             return Double.isNaN(m.pValue())
                     ? "measured lot of " + m.units() + " units" + at(m.temperature())
                             + ": too few units (or all equal) to test the normal fit; the fit is used untested"
+                            + " (units that all read the same give no spread: the datasheet's is used)"
                     : "measured lot" + at(m.temperature()) + ": the normal fit is poor (Anderson-Darling p = "
                             + Units.format(m.pValue(), Dimension.NUMBER, 2)
                             + " < 0.05): the lot may be skewed or hold two populations; the fitted sigma may misstate"

@@ -143,4 +143,15 @@ class MeasuredYieldTest {
                         .filter(a -> a instanceof Assumption.MeasuredFit)
                         .toList());
     }
+
+    @Test
+    void aLotThatAllReadsTheSameKeepsTheDatasheetsSpread() {
+        // five units at 10 µV: s = 0, so the upper sigma is 0 too; a zero spread would pass every unit at the
+        // mean, so the datasheet's N(0, 1 mV / 3) stands (and the untested fit is said)
+        Part lot = withLot(PART, new double[] {1e-5, 1e-5, 1e-5, 1e-5, 1e-5});
+        double sheet = BudgetCalculator.compute(stage(), PART).yield().value();
+        Budget b = BudgetCalculator.compute(stage(), lot);
+        assertEquals(sheet, b.yield().value(), 0.0);
+        assertTrue(b.assumptions().stream().anyMatch(a -> a instanceof Assumption.MeasuredFit));
+    }
 }
