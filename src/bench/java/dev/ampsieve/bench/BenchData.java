@@ -131,6 +131,7 @@ final class BenchData {
                     p.inputCrossover(),
                     p.thetaJa(),
                     p.choppingRipple(),
+                    p.measured(),
                     p.source(),
                     p.notes(),
                     p.where()));

@@ -82,6 +82,7 @@ final class PartEdit {
                 p.inputCrossover(),
                 thetaJa,
                 p.choppingRipple(),
+                p.measured(),
                 p.source(),
                 p.notes(),
                 p.where());
@@ -122,6 +123,7 @@ final class PartEdit {
                 p.inputCrossover(),
                 p.thetaJa(),
                 p.choppingRipple(),
+                p.measured(),
                 p.source(),
                 p.notes(),
                 p.where());

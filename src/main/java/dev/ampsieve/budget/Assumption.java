@@ -78,7 +78,11 @@ public sealed interface Assumption {
         /** A constraint not checked for want of a catalog figure. */
         NOT_CHECKED,
         /** Headroom to each rail assumed ({@link Assumed#HEADROOM_V}). */
-        HEADROOM_DEFAULT
+        HEADROOM_DEFAULT,
+        /** A measured lot's normal fit is poor (p below 0.05) or could not be tested (too few units). */
+        MEASURED_FIT,
+        /** Units of a measured lot lie beyond the datasheet's maximum. */
+        MEASURED_BEYOND_DATASHEET
     }
 
     /** A caveat or an absence that carries no number. */
@@ -392,6 +396,39 @@ public sealed interface Assumption {
         @Override
         public Rule rule() {
             return Rule.HEADROOM_DEFAULT;
+        }
+    }
+
+    /**
+     * A measured lot's normal fit ({@link Measurements}) is poor or untested.
+     *
+     * @param temperature where the quantity was measured, °C
+     * @param units       units in the lot
+     * @param pValue      the Anderson-Darling p-value; NaN when too few units (or all equal) to test
+     */
+    record MeasuredFit(String field, double temperature, int units, double pValue) implements Assumption {
+        @Override
+        public Rule rule() {
+            return Rule.MEASURED_FIT;
+        }
+    }
+
+    /**
+     * Units of a measured lot beyond the datasheet's maximum: the lot breaks the guarantee (or the
+     * measurement added error), so the Monte Carlo draws the offset untruncated.
+     *
+     * @param temperature where, °C
+     * @param units       units in the lot
+     * @param beyond      units beyond the maximum
+     * @param largest     the largest magnitude measured
+     * @param datasheet   the datasheet's maximum (as the budget resolved it)
+     */
+    record MeasuredBeyondDatasheet(
+            String field, double temperature, int units, int beyond, double largest, double datasheet)
+            implements Assumption {
+        @Override
+        public Rule rule() {
+            return Rule.MEASURED_BEYOND_DATASHEET;
         }
     }
 }

@@ -49,6 +49,11 @@ public record Budget(
         return NotCounted.of(stage, part);
     }
 
+    /** The part's measured lot fitted beside the datasheet ({@link Measurements}); empty without one. */
+    public List<Measurement> measured() {
+        return Measurements.of(part, stage);
+    }
+
     public TermResult term(String key) {
         return terms.stream().filter(t -> t.key().equals(key)).findFirst().orElse(null);
     }

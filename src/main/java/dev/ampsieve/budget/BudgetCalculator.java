@@ -70,6 +70,7 @@ public final class BudgetCalculator {
     public static Budget compute(Stage stage, Part part) {
         PartValues v = PartValues.of(part, stage);
         Set<Assumption> warnings = new LinkedHashSet<>(v.assumptions());
+        warnings.addAll(Measurements.warnings(part, stage));
         List<TermResult> terms = new ArrayList<>();
         double wc = 0;
         double sumSq = 0;

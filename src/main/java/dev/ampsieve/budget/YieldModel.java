@@ -26,7 +26,8 @@ import org.apache.commons.math3.random.Well19937c;
  * error exceeds the worst-case total (a part that fits by the worst case has a yield of 100 %):
  * <ul>
  * <li>offset and drift N(0, s) truncated at their bounds, s = max(typ, bound/k) (bound/k
- * without a typical; a typical-only figure has bound k x typ and s = typ). A drift estimated as
+ * without a typical; a typical-only figure has bound k x typ and s = typ). A part with a measured
+ * lot draws its offset from the lot instead ({@link Measurements#offsetSpread}). A drift estimated as
  * vos / T is each unit's own vos / T (same sign), not an independent draw.</li>
  * <li>IB and IOS are drawn independently at 25 °C and at each range end, scaled to the limit
  * there ({@link PartValues#ibAt}): an IOS may change sign with temperature, so what a trim
@@ -59,6 +60,9 @@ final class YieldModel {
     private final boolean[] atRef = new boolean[2];
 
     private final TruncatedNormal vosD;
+    /** A measured lot beyond the datasheet: the worst-case total no longer bounds every unit. */
+    private final boolean lotBeyondWorstCase;
+
     private final TruncatedNormal driftD;
     /** Drift is each unit's vos / T (estimated from the offset), not drawn. */
     private final boolean driftFromVos;
@@ -103,7 +107,8 @@ final class YieldModel {
         }
         boolean dc = !s.acCoupled();
         this.clamp = dc && !Double.isNaN(v.vosMaxOverTemp()) ? v.vosMaxOverTemp() : Double.POSITIVE_INFINITY;
-        this.vosD = dc ? symmetric(v.vos(), v.vos().bound(), k) : null;
+        this.vosD = dc ? Measurements.offsetSpread(v, k) : null; // a measured lot's, else the datasheet's
+        this.lotBeyondWorstCase = dc && Measurements.beyondWorstCase(v);
         this.driftFromVos = dc && v.driftFromOffset();
         this.driftD = dc && !driftFromVos ? symmetric(v.drift(), v.driftBound(s.deltaT()), k) : null;
         this.ibD = dc ? bias(v.ib(), k, v.biasSignKnown()) : null;
@@ -163,7 +168,7 @@ final class YieldModel {
         if (Double.isNaN(limit)) {
             return new YieldResult(0, 0, 0, 0, "none-pass");
         }
-        if (bound <= limit || maxError() <= limit) {
+        if (bound <= limit && !lotBeyondWorstCase || maxError() <= limit) {
             return new YieldResult(1.0, 1.0, 1.0, 0, "all-pass");
         }
         if (minError() > limit) {

@@ -54,6 +54,9 @@ public final class CatalogKeys {
     public static final String INPUT_CROSSOVER = "input-crossover";
     public static final String THETA_JA = "theta-ja";
     public static final String CHOPPING_RIPPLE = "chopping-ripple";
+    /** A lot of this part measured on the bench: {@code measured: {file: lot.csv}} (issue 16). */
+    public static final String MEASURED = "measured";
+
     public static final String SOURCE = "source";
     public static final String NOTES = "notes";
 
@@ -76,6 +79,7 @@ public final class CatalogKeys {
     public static final String COMMON_MODE = "common-mode";
     public static final String FROM_POSITIVE_RAIL = "from-positive-rail";
     public static final String OFFSET_STEP = "offset-step";
+    public static final String FILE = "file";
 
     /** Top-level keys of a part, template order. */
     public static final List<String> PART_KEYS = List.of(
@@ -111,6 +115,7 @@ public final class CatalogKeys {
             INPUT_CROSSOVER,
             THETA_JA,
             CHOPPING_RIPPLE,
+            MEASURED,
             SOURCE,
             NOTES);
 
@@ -151,6 +156,7 @@ public final class CatalogKeys {
         s.put(OUTPUT_HEADROOM, HEADROOM);
         s.put(TEST_CONDITIONS, List.of(SUPPLY, COMMON_MODE));
         s.put(INPUT_CROSSOVER, List.of(FROM_POSITIVE_RAIL, OFFSET_STEP));
+        s.put(MEASURED, List.of(FILE));
         SECTIONS = Collections.unmodifiableMap(s);
 
         Registry r = new Registry();

@@ -18,6 +18,7 @@ import java.util.List;
  *                    step there; null when not given
  * @param thetaJa     junction-to-ambient thermal resistance, °C/W; null when not given
  * @param choppingRipple input-referred ripple at the chopping frequency (peak), V; null when not given
+ * @param measured    the part's measured lot file, its units read only when a budget needs them; null when none
  * @param where       file and line the part was read from, for messages and reports
  */
 public record Part(
@@ -53,6 +54,7 @@ public record Part(
         InputCrossover inputCrossover,
         Double thetaJa,
         Double choppingRipple,
+        Measured measured,
         String source,
         String notes,
         Located where) {
@@ -76,6 +78,47 @@ public record Part(
     /** Chopper and auto-zero parts correct their own offset continuously. */
     public boolean selfCorrecting() {
         return architecture != Architecture.STANDARD;
+    }
+
+    /** This part with {@code m} as its measured lot (a lot read for a budget, or one given on the command line). */
+    public Part withMeasured(Measured m) {
+        return new Part(
+                id,
+                title,
+                architecture,
+                input,
+                factoryTrim,
+                nullPins,
+                channels,
+                packages,
+                tags,
+                price,
+                supply,
+                temperature,
+                vos,
+                vosDrift,
+                ib,
+                ios,
+                cmrr,
+                psrr,
+                aol,
+                gbw,
+                slew,
+                noise,
+                longTermDrift,
+                inputHeadroom,
+                outputHeadroom,
+                choppingFrequency,
+                quiescentCurrent,
+                inputCapacitance,
+                testConditions,
+                inputCrossover,
+                thetaJa,
+                choppingRipple,
+                m,
+                source,
+                notes,
+                where);
     }
 
     /** Price per unit for a build of {@code quantity}, from the catalog's price breaks ({@link Price#at}). */

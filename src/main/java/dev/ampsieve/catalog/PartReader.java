@@ -62,6 +62,8 @@ import dev.ampsieve.yaml.Fields;
 import dev.ampsieve.yaml.Located;
 import dev.ampsieve.yaml.Node;
 import dev.ampsieve.yaml.Problem;
+import java.nio.file.InvalidPathException;
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.HashMap;
@@ -179,6 +181,7 @@ final class PartReader {
         InputCrossover crossover = readCrossover();
         Double thetaJa = quantity(part, null, THETA_JA);
         Double ripple = quantity(part, null, CHOPPING_RIPPLE);
+        Measured measured = readMeasured();
         String source = f.text(part, prefix, SOURCE);
         String notes = f.text(part, prefix, NOTES);
 
@@ -225,6 +228,7 @@ final class PartReader {
                 crossover,
                 thetaJa,
                 ripple,
+                measured,
                 source,
                 notes,
                 part.at());
@@ -274,6 +278,44 @@ final class PartReader {
             Arrays.stream(InputType.values()).map(InputType::key).toList();
     private static final List<String> TRIMS =
             Arrays.stream(FactoryTrim.values()).map(FactoryTrim::key).toList();
+
+    /**
+     * {@code measured: {file: lot.csv}}: only where the file is (relative to this catalog file's folder);
+     * its units are read when a budget needs them ({@link LotReader}), so the parse stays cheap.
+     */
+    private Measured readMeasured() {
+        Node.Mapping m = section(CatalogKeys.MEASURED);
+        if (m == null) {
+            return null;
+        }
+        String field = join(prefix, CatalogKeys.MEASURED);
+        String file = f.text(m, field, CatalogKeys.FILE);
+        Located at = Fields.where(m, CatalogKeys.FILE);
+        if (file == null || file.isBlank()) {
+            if (file != null || !m.entries().containsKey(CatalogKeys.FILE)) {
+                f.error(
+                        at,
+                        join(field, CatalogKeys.FILE),
+                        "no lot file named",
+                        "write 'measured: {file: lot.csv}' (a path relative to this catalog file)");
+            }
+            return null;
+        }
+        Path catalogFile = part.at().file();
+        Path dir = catalogFile == null || catalogFile.getParent() == null ? Path.of("") : catalogFile.getParent();
+        Path resolved;
+        try {
+            resolved = dir.resolve(file).normalize();
+        } catch (InvalidPathException e) {
+            f.error(
+                    at,
+                    join(field, CatalogKeys.FILE),
+                    "'" + file + "' is not a valid path",
+                    "write a file name such as lot.csv");
+            return null;
+        }
+        return new Measured(file, resolved, at, null);
+    }
 
     /** The mapping at {@code key}, its keys checked; null when absent or not a mapping (with a problem). */
     private Node.Mapping section(String key) {

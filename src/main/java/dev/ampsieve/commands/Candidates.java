@@ -14,6 +14,7 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
 
@@ -34,7 +35,10 @@ final class Candidates {
         try (PartIndex index = PartIndex.open(catalog)) {
             noteRefusals(index, err);
             for (Hit h : index.search(q)) {
-                catalog.find(h.id()).ifPresent(out::add);
+                Optional<Part> p = catalog.find(h.id());
+                if (p.isPresent()) {
+                    out.add(Parts.withLot(p.get())); // a measured lot is read when its budget is computed
+                }
             }
         }
         return out;

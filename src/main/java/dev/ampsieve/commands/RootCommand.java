@@ -37,6 +37,7 @@ import picocli.CommandLine.Spec;
             RankCommand.class,
             CompareCommand.class,
             SufficesCommand.class,
+            OffsetRigCommand.class,
             BarsCommand.class,
             ScatterCommand.class,
             NewPartCommand.class,

@@ -213,6 +213,26 @@ public final class AssumptionText {
                     + " headroom; "
                     + Units.format(h.used(), Dimension.VOLTAGE) + " from each rail is assumed";
         }
+        if (a instanceof Assumption.MeasuredFit m) {
+            return Double.isNaN(m.pValue())
+                    ? "measured lot of " + m.units() + " units" + at(m.temperature())
+                            + ": too few units (or all equal) to test the normal fit; the fit is used untested"
+                            + " (units that all read the same give no spread: the datasheet's is used)"
+                    : "measured lot" + at(m.temperature()) + ": the normal fit is poor (Anderson-Darling p = "
+                            + Units.format(m.pValue(), Dimension.NUMBER, 2)
+                            + " < 0.05): the lot may be skewed or hold two populations; the fitted sigma may misstate"
+                            + " its tails";
+        }
+        if (a instanceof Assumption.MeasuredBeyondDatasheet m) {
+            Dimension d = dimension(m.field());
+            return m.beyond() + " of " + m.units() + " measured units" + at(m.temperature())
+                    + " exceed the datasheet's " + Units.format(m.datasheet(), d) + " (largest "
+                    + Units.format(m.largest(), d) + ")"
+                    + (m.field().equals("vos")
+                            ? ": the Monte Carlo draws the offset from the lot without the datasheet's bound; check the"
+                                    + " test circuit's own error ('ampsieve offset-rig') and the units"
+                            : ": check the test circuit and the units");
+        }
         if (a instanceof Assumption.Chopper c) {
             return c.rule() == Assumption.Rule.CHOPPER_CAVEATS
                     ? "expect bias-current spikes from the switches (times the source resistance they become offset),"
@@ -293,6 +313,11 @@ public final class AssumptionText {
             case "vos-drift" -> Dimension.VOLTAGE_DRIFT;
             default -> Dimension.CURRENT;
         };
+    }
+
+    /** " at 85 °C" for a second temperature, nothing at 25 °C. */
+    private static String at(double temperature) {
+        return temperature == 25.0 ? "" : " at " + Units.format(temperature, Dimension.TEMPERATURE);
     }
 
     private static String number(double x) {

@@ -100,6 +100,7 @@ public final class BudgetJson {
             tyn.put("trials", ty.trials());
             tyn.put("decided", ty.decided());
         }
+        MeasuredText.put(o, b);
         o.put("verdict", b.verdict().key());
         if (b.limitingTerm() == null) {
             o.putNull("limitingTerm");
@@ -127,7 +128,17 @@ public final class BudgetJson {
 
     /** @param bySigma written as {@code yieldBySigma} (left out when empty) */
     public static String render(Budget b, java.util.List<dev.ampsieve.budget.SigmaYield> bySigma, String stageLabel) {
+        return render(b, bySigma, stageLabel, null);
+    }
+
+    /** @param datasheetYield the part's yield without its measured lot, written as {@code yieldFromDatasheet}; null to leave out */
+    public static String render(
+            Budget b,
+            java.util.List<dev.ampsieve.budget.SigmaYield> bySigma,
+            String stageLabel,
+            YieldResult datasheetYield) {
         ObjectNode o = tree(b, stageLabel);
+        MeasuredText.putDatasheetYield(o, datasheetYield);
         if (!bySigma.isEmpty()) {
             var arr = o.putArray("yieldBySigma");
             for (var y : bySigma) {

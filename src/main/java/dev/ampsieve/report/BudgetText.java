@@ -36,8 +36,14 @@ public final class BudgetText {
 
     /** @param bySigma the yield at other max-to-sigma readings ({@code BudgetCalculator.yieldBySigma}); empty to leave the line out */
     public static String render(Budget b, List<SigmaYield> bySigma, String stageLabel, int width) {
+        return render(b, bySigma, stageLabel, width, null);
+    }
+
+    /** @param datasheetYield the part's yield without its measured lot (shown beside the lot's); null to leave out */
+    public static String render(
+            Budget b, List<SigmaYield> bySigma, String stageLabel, int width, YieldResult datasheetYield) {
         // warnings and constraint details quote catalog text: no control character gets through
-        return Wrap.prose(Visible.lines(table(b, bySigma, stageLabel, width)), width);
+        return Wrap.prose(Visible.lines(table(b, bySigma, stageLabel, width, datasheetYield)), width);
     }
 
     /**
@@ -59,7 +65,8 @@ public final class BudgetText {
         return String.format(Locale.ROOT, "%.2f", 100 * ratio);
     }
 
-    private static String table(Budget b, List<SigmaYield> bySigma, String stageLabel, int width) {
+    private static String table(
+            Budget b, List<SigmaYield> bySigma, String stageLabel, int width, YieldResult datasheetYield) {
         Stage s = b.stage();
         StringBuilder o = new StringBuilder();
         double limit = b.limitV();
@@ -146,6 +153,9 @@ public final class BudgetText {
         if (!bySigma.isEmpty()) {
             // the reading of datasheet maxima moves the yield more than the sampling does
             line(o, "%-10s %s", "Max-to-σ", sigmaLine(bySigma, s));
+        }
+        for (String m : MeasuredText.lines(b, datasheetYield)) {
+            o.append(m).append('\n');
         }
         Trim trim = BudgetCalculator.trimOf(s);
         for (Trim.Method m : Trim.Method.values()) {

@@ -50,6 +50,9 @@ public final class PartDocuments {
         if (p.price() != null) {
             keyword(d, Schema.CURRENCY, p.price().currency());
         }
+        if (p.measured() != null) {
+            keyword(d, Schema.MEASURED_FILE, p.measured().file());
+        }
         // words of one text each, for notes:word and source:word (the title has its own field above)
         d.add(new TextField(Schema.NOTES, p.notes(), Field.Store.NO));
         d.add(new TextField(Schema.SOURCE, p.source(), Field.Store.NO));

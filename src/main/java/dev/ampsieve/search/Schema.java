@@ -25,7 +25,7 @@ public final class Schema {
      * Stored in each commit beside the catalog fingerprint; any change to the fields or to how
      * a value is derived must change it so that existing on-disk indexes rebuild.
      */
-    public static final String VERSION = "4";
+    public static final String VERSION = "5";
 
     // ------------------------------------------------------------ identity and words
 
@@ -57,6 +57,8 @@ public final class Schema {
     public static final String NULL_PINS = "null-pins";
     /** The price's currency, lower-case. */
     public static final String CURRENCY = "currency";
+    /** The measured lot file as the catalog names it, lower-case (issue 16). */
+    public static final String MEASURED_FILE = "measured.file";
 
     /** A word field and the values it can hold (empty: free values). */
     public record Keyword(String name, List<String> values, String meaning) {
@@ -77,7 +79,8 @@ public final class Schema {
             new Keyword(TRIM, List.of("none", "laser", "fuse", "other"), "factory offset trim"),
             new Keyword(RAIL, List.of("input", "output"), "rail-to-rail input or output (headroom 0 or less)"),
             new Keyword(NULL_PINS, List.of("true", "false"), "offset null pins brought out"),
-            new Keyword(CURRENCY, List.of(), "the currency of the price, as in the catalog"));
+            new Keyword(CURRENCY, List.of(), "the currency of the price, as in the catalog"),
+            new Keyword(MEASURED_FILE, List.of(), "the measured lot file, as the catalog names it"));
 
     // ------------------------------------------------------------ words of one text (field:word)
 

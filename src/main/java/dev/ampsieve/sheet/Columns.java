@@ -153,8 +153,12 @@ public final class Columns {
     private static Column column(String path) {
         Dimension d = CatalogKeys.dimension(path);
         Kind kind = switch (path) {
-            case CatalogKeys.ID, CatalogKeys.TITLE, CatalogKeys.SOURCE, CatalogKeys.NOTES, "price.currency" ->
-                Kind.TEXT;
+            case CatalogKeys.ID,
+                    CatalogKeys.TITLE,
+                    CatalogKeys.SOURCE,
+                    CatalogKeys.NOTES,
+                    "price.currency",
+                    "measured.file" -> Kind.TEXT;
             case CatalogKeys.ARCHITECTURE, CatalogKeys.INPUT, CatalogKeys.FACTORY_TRIM -> Kind.WORD;
             case CatalogKeys.NULL_PINS -> Kind.BOOLEAN;
             case CatalogKeys.CHANNELS, "price.quantity" -> Kind.INTEGER;

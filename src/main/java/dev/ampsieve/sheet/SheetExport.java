@@ -75,6 +75,7 @@ public final class SheetExport {
                         : "";
             case CatalogKeys.SOURCE -> p.source();
             case CatalogKeys.NOTES -> p.notes();
+            case "measured.file" -> p.measured() == null ? "" : p.measured().file();
             default -> {
                 Double v = CatalogKeys.value(p, c.path());
                 yield v == null ? "" : exact(v, c);

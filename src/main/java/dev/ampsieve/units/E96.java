@@ -60,4 +60,10 @@ public final class E96 {
     public static double atMost(double ohms) {
         return bracket(ohms)[0];
     }
+
+    /** The smallest E96 value not below {@code ohms}. */
+    public static double atLeast(double ohms) {
+        double[] b = bracket(ohms);
+        return b[0] == ohms ? ohms : b[1];
+    }
 }

@@ -118,6 +118,8 @@ final class CatalogFixtures {
               offset-step: 40 uV
             theta-ja: 160 C/W
             chopping-ripple: 3 uV
+            measured:
+              file: lots/unit-lot.csv
             source: invented for tests
             notes: nothing real
             """;

@@ -111,6 +111,12 @@ class CatalogLoaderTest {
         assertEquals(List.of("soic-8", "msop-8"), p.packages());
         assertEquals(List.of("precision", "dual"), p.tags());
         assertEquals("invented for tests", p.source());
+        // the lot is only located at parse time (read when a budget needs it), relative to the part's file
+        assertEquals("lots/unit-lot.csv", p.measured().file());
+        assertEquals(
+                p.where().file().getParent().resolve("lots/unit-lot.csv"),
+                p.measured().path());
+        assertEquals(null, p.measured().lot());
     }
 
     @Test

@@ -29,8 +29,9 @@ class PartTemplateTest {
             }
         }
         // chopping-frequency and chopping-ripple are shown commented out (chopper and auto-zero parts only),
-        // input-crossover too (rail-to-rail inputs only)
+        // input-crossover too (rail-to-rail inputs only), and measured (a part with a lot measured on the bench)
         List<String> expected = new ArrayList<>(CatalogKeys.PART_KEYS);
+        expected.remove(CatalogKeys.MEASURED);
         expected.remove(CatalogKeys.CHOPPING_FREQUENCY);
         expected.remove(CatalogKeys.CHOPPING_RIPPLE);
         expected.remove(CatalogKeys.INPUT_CROSSOVER);
@@ -38,6 +39,7 @@ class PartTemplateTest {
         assertTrue(PartTemplate.text().contains("\n# chopping-frequency: "));
         assertTrue(PartTemplate.text().contains("\n# chopping-ripple: "));
         assertTrue(PartTemplate.text().contains("\n# input-crossover:\n#   from-positive-rail: "));
+        assertTrue(PartTemplate.text().contains("\n# measured: {file: "));
     }
 
     @Test

@@ -50,6 +50,7 @@ public final class PartBuilder {
     private dev.ampsieve.catalog.InputCrossover crossover;
     private Double thetaJa;
     private Double ripple;
+    private dev.ampsieve.catalog.Measured measured;
     private String notes = "";
 
     private PartBuilder(String id) {
@@ -222,6 +223,12 @@ public final class PartBuilder {
         return this;
     }
 
+    /** A measured lot (issue 16). */
+    public PartBuilder measured(dev.ampsieve.catalog.Measured m) {
+        measured = m;
+        return this;
+    }
+
     public PartBuilder notes(String v) {
         notes = v;
         return this;
@@ -274,6 +281,7 @@ public final class PartBuilder {
                 crossover,
                 thetaJa,
                 ripple,
+                measured,
                 source,
                 notes,
                 new Located(Path.of("fixture.yaml"), 1, 1));

@@ -71,4 +71,26 @@ class E96Test {
         assertThrows(IllegalArgumentException.class, () -> E96.nearest(0));
         assertThrows(IllegalArgumentException.class, () -> E96.atMost(Double.POSITIVE_INFINITY));
     }
+
+    @Test
+    void theTableIsTheRoundedGeometricSeriesAsTheRigReadsIt() {
+        // IEC 60063: E96 = 96 values per decade, each 10^(i/96) to three digits; the table must hold
+        // exactly those (a second method: the formula, not a second copy of the table)
+        assertEquals(96, E96.MANTISSAS.size());
+        for (int i = 0; i < 96; i++) {
+            assertEquals(Math.round(100 * Math.pow(10, i / 96.0)), (long) E96.MANTISSAS.get(i), "index " + i);
+        }
+    }
+
+    @Test
+    void neighboursTheOffsetRigUses() {
+        assertEquals(19.6e3, E96.atMost(19942.6), 1e-9); // 19.6k < 19.94k < 20.0k
+        assertEquals(20.0e3, E96.atLeast(19942.6), 1e-9);
+        assertEquals(5.11, E96.atLeast(5.014), 1e-12); // 4.99 < 5.014 < 5.11
+        assertEquals(10.0, E96.atLeast(9.9), 1e-12); // past 9.76: the next decade's first value
+        assertEquals(10e3, E96.atMost(10e3), 1e-9); // a value of the series is its own neighbour
+        // nearest by ratio: 9.9949 is 0.05 % under 10.0 and 2.4 % over 9.76
+        assertEquals(10.0, E96.nearest(9.9949), 1e-12);
+        assertEquals(97.6, E96.nearest(97.0), 1e-12); // 97.6/97 = 1.0062 against 97/95.3 = 1.0178
+    }
 }
