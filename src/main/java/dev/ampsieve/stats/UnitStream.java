@@ -5,14 +5,16 @@ import java.nio.charset.StandardCharsets;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import org.apache.commons.rng.UniformRandomProvider;
+import org.apache.commons.rng.core.source64.XoRoShiRo128PlusPlus;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
-import org.apache.commons.rng.simple.RandomSource;
 
 /**
  * The random numbers of one Monte Carlo run: uniform doubles and standard normal draws from one
  * stream of its own, fixed by the stage's seed and the part's id.
  *
- * <p>Generator: xoroshiro128++ (commons-rng {@code XO_RO_SHI_RO_128_PP}; Blackman and Vigna,
+ * <p>Generator: xoroshiro128++ (commons-rng-core {@code XoRoShiRo128PlusPlus}, made directly: going
+ * through commons-rng-simple's {@code RandomSource} loads every generator class it knows, about 70,
+ * at each start; Blackman and Vigna,
  * "Scrambled linear pseudorandom number generators", ACM TOMS 47 (2021)), normal draws by the
  * McFarland ziggurat (commons-rng {@code ZigguratSampler.NormalizedGaussian}; McFarland, J. Stat.
  * Comput. Simul. 86 (2016) 1281): nearly every draw costs one 64-bit output and a table look-up,
@@ -39,7 +41,7 @@ public final class UnitStream {
         ByteBuffer in =
                 ByteBuffer.allocate(Long.BYTES + id.length).putLong(seed).put(id);
         ByteBuffer h = ByteBuffer.wrap(sha256(in.array()));
-        return new UnitStream(RandomSource.XO_RO_SHI_RO_128_PP.create(new long[] {h.getLong(), h.getLong()}));
+        return new UnitStream(new XoRoShiRo128PlusPlus(h.getLong(), h.getLong()));
     }
 
     /** A standard normal draw N(0, 1). */
