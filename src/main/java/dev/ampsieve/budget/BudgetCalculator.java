@@ -68,6 +68,22 @@ public final class BudgetCalculator {
     static final double CHOP_MARGIN = 10.0;
 
     public static Budget compute(Stage stage, Part part) {
+        return compute(stage, part, true);
+    }
+
+    /**
+     * As {@link #compute}, but a part that fails a hard constraint gets no Monte Carlo: its yield is
+     * "none-pass" with no units simulated (no unit can be used where the part fails a supply,
+     * temperature, swing, slew or price constraint), as for a part whose budget overflows. For
+     * {@code rank}, which shows a rejected part only by its failed constraints: in a large catalog
+     * about half the parts fail one, and simulating them was half the ranking's work. The verdict
+     * (no-fit) is the same either way; {@code budget PART} and decision records use {@link #compute}.
+     */
+    public static Budget screen(Stage stage, Part part) {
+        return compute(stage, part, false);
+    }
+
+    private static Budget compute(Stage stage, Part part, boolean sampleRejected) {
         PartValues v = PartValues.of(part, stage);
         Set<Assumption> warnings = new LinkedHashSet<>(v.assumptions());
         warnings.addAll(Measurements.warnings(part, stage));
@@ -121,12 +137,17 @@ public final class BudgetCalculator {
                     List.copyOf(warnings));
         }
 
-        double fixed = fixedInYield(stage, terms, false, false);
-        YieldResult yield =
-                new YieldModel(stage, v, fixed, false, false).run(yieldTarget(stage), wcCounted(stage, terms));
-
         boolean constraintsOk = constraints.stream().allMatch(ConstraintResult::ok);
-        if (stage.criterion().kind() == Criterion.Kind.YIELD && trimOf(stage).allowed()) {
+        boolean sample = constraintsOk || sampleRejected;
+        double fixed = fixedInYield(stage, terms, false, false);
+        YieldResult yield = sample
+                ? new YieldModel(stage, v, fixed, false, false).run(yieldTarget(stage), wcCounted(stage, terms))
+                : new YieldResult(0, 0, 0, 0, "none-pass");
+
+        if (!sample) {
+            trimmed = trimmed.withYield(yield); // the verdict is no-fit without either yield
+        } else if (stage.criterion().kind() == Criterion.Kind.YIELD
+                && trimOf(stage).allowed()) {
             // simulated once here so reports and ranking read it instead of recomputing
             trimmed = trimmed.withYield(trimmedYield(stage, v, terms));
         }

@@ -3,10 +3,9 @@ package dev.ampsieve.budget;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stats.SequentialYield;
 import dev.ampsieve.stats.TruncatedNormal;
+import dev.ampsieve.stats.UnitStream;
 import java.util.ArrayList;
 import java.util.List;
-import org.apache.commons.math3.random.RandomGenerator;
-import org.apache.commons.math3.random.Well19937c;
 
 /**
  * Monte Carlo yield after a two-temperature calibration ({@link CalibrationLine}), sampled unit by
@@ -34,6 +33,9 @@ import org.apache.commons.math3.random.Well19937c;
 final class TwoTemperatureYield {
 
     private final Stage s;
+    /** Names the run's random stream with the stage's seed ({@link UnitStream#of}). */
+    private final String partId;
+
     private final double limit;
     private final double fixed;
     private final double ng;
@@ -68,6 +70,7 @@ final class TwoTemperatureYield {
 
     TwoTemperatureYield(Stage s, PartValues v, double fixed, CalibrationLine line) {
         this.s = s;
+        this.partId = v.part().id();
         this.limit = s.limitVolts();
         this.fixed = fixed;
         DcModel m = DcModel.of(s);
@@ -140,7 +143,7 @@ final class TwoTemperatureYield {
         if (fixed > limit) {
             return new YieldResult(0.0, 0.0, 0.0, 0, "none-pass");
         }
-        Sampler u = new Sampler(new Well19937c(s.seed()), SequentialYield.BLOCK);
+        Sampler u = new Sampler(UnitStream.of(s.seed(), partId), SequentialYield.BLOCK);
         double[] err = new double[SequentialYield.BLOCK];
         // as YieldModel: without a target every one of the stage's units; with one, blocks until the answer is plain or
         // the cap
@@ -160,7 +163,7 @@ final class TwoTemperatureYield {
 
     /** The largest error among {@code units} simulated units (the stage's seed), V: for checking the bound. */
     double largestError(int units) {
-        Sampler u = new Sampler(new Well19937c(s.seed()), SequentialYield.BLOCK);
+        Sampler u = new Sampler(UnitStream.of(s.seed(), partId), SequentialYield.BLOCK);
         double[] err = new double[SequentialYield.BLOCK];
         double worst = 0;
         for (int done = 0; done < units; done += SequentialYield.BLOCK) {
@@ -175,7 +178,7 @@ final class TwoTemperatureYield {
 
     /** Draws blocks of units and computes each unit's error, V. */
     private final class Sampler {
-        private final RandomGenerator rng;
+        private final UnitStream rng;
         private final double[][] ib;
         private final double[][] ios;
         private final double[] aging;
@@ -183,7 +186,7 @@ final class TwoTemperatureYield {
         private final double[] e1;
         private final double[] e2;
 
-        Sampler(RandomGenerator rng, int n) {
+        Sampler(UnitStream rng, int n) {
             this.rng = rng;
             ib = new double[ibShaped ? 1 : temps.length][n];
             ios = new double[iosShaped ? 1 : temps.length][n];
@@ -237,7 +240,7 @@ final class TwoTemperatureYield {
                 return;
             }
             for (int i = 0; i < n; i++) {
-                a[i] = half * (2.0 * rng.nextDouble() - 1.0);
+                a[i] = half * (2.0 * rng.uniform() - 1.0);
             }
         }
     }

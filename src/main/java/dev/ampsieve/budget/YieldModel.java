@@ -3,9 +3,8 @@ package dev.ampsieve.budget;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.stats.SequentialYield;
 import dev.ampsieve.stats.TruncatedNormal;
+import dev.ampsieve.stats.UnitStream;
 import dev.ampsieve.units.PhysicalConstants;
-import org.apache.commons.math3.random.RandomGenerator;
-import org.apache.commons.math3.random.Well19937c;
 
 /**
  * Monte Carlo yield of error-model.md "Yield": per simulated unit, draw the offset, drift,
@@ -45,6 +44,9 @@ import org.apache.commons.math3.random.Well19937c;
 final class YieldModel {
 
     private final Stage s;
+    /** Names the run's random stream with the stage's seed ({@link UnitStream#of}). */
+    private final String partId;
+
     private final double limit;
     private final double fixed;
     private final boolean trimmed;
@@ -84,6 +86,7 @@ final class YieldModel {
      */
     YieldModel(Stage s, PartValues v, double fixed, boolean trimmed, boolean twoPoint) {
         this.s = s;
+        this.partId = v.part().id();
         this.limit = s.limitVolts();
         this.fixed = fixed;
         this.trimmed = trimmed;
@@ -174,7 +177,7 @@ final class YieldModel {
         if (minError() > limit) {
             return new YieldResult(0.0, 0.0, 0.0, 0, "none-pass");
         }
-        RandomGenerator rng = new Well19937c(s.seed());
+        UnitStream rng = UnitStream.of(s.seed(), partId);
         int n = SequentialYield.BLOCK;
         double[] vos = new double[n];
         double[] drift = new double[n];
@@ -253,7 +256,7 @@ final class YieldModel {
         return passes;
     }
 
-    private static void fill(TruncatedNormal d, RandomGenerator rng, double[] out, int n) {
+    private static void fill(TruncatedNormal d, UnitStream rng, double[] out, int n) {
         if (d == null) {
             java.util.Arrays.fill(out, 0, n, 0.0);
         } else {
@@ -261,13 +264,13 @@ final class YieldModel {
         }
     }
 
-    private static void uniform(double half, RandomGenerator rng, double[] out, int n) {
+    private static void uniform(double half, UnitStream rng, double[] out, int n) {
         if (half == 0) {
             java.util.Arrays.fill(out, 0, n, 0.0);
             return;
         }
         for (int i = 0; i < n; i++) {
-            out[i] = half * (2.0 * rng.nextDouble() - 1.0);
+            out[i] = half * (2.0 * rng.uniform() - 1.0);
         }
     }
 

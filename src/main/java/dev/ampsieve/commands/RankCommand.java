@@ -74,7 +74,7 @@ public final class RankCommand implements Callable<Integer> {
         Candidates.noteProblems(catalog, spec.commandLine().getErr());
         Stage stage = stageOption.load();
         List<Part> parts = query.parts(catalog, spec.commandLine().getErr());
-        Ranking r = Ranker.rank(stage, parts, BudgetCalculator::compute);
+        Ranking r = Ranker.rank(stage, parts, BudgetCalculator::screen);
         String label = stageOption.label();
         String name = stageOption.name(); // text headers stay within 100 columns
         String out = format.json()

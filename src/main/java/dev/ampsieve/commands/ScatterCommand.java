@@ -72,7 +72,7 @@ public final class ScatterCommand implements Callable<Integer> {
         Candidates.noteProblems(catalog, spec.commandLine().getErr());
         Stage stage = stageOption.load();
         List<Part> parts = query.parts(catalog, spec.commandLine().getErr());
-        Ranking r = Ranker.rank(stage, parts, BudgetCalculator::compute);
+        Ranking r = Ranker.rank(stage, parts, BudgetCalculator::screen);
         String name = stageOption.name();
         spec.commandLine().getOut().print(RankScatter.render(r, name, top, height, root.outputStyle()));
         return ExitCode.OK.code();

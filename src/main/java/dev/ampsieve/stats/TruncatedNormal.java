@@ -1,7 +1,6 @@
 package dev.ampsieve.stats;
 
 import org.apache.commons.math3.distribution.NormalDistribution;
-import org.apache.commons.math3.random.RandomGenerator;
 
 /**
  * Draws from a normal distribution N(mean, sigma) truncated to [lo, hi], filling primitive
@@ -57,7 +56,7 @@ public final class TruncatedNormal {
     }
 
     /** Fills {@code out[0..n)} with independent draws. */
-    public void fill(RandomGenerator rng, double[] out, int n) {
+    public void fill(UnitStream rng, double[] out, int n) {
         if (sigma == 0) {
             double v = Math.max(lo, Math.min(hi, mean));
             for (int i = 0; i < n; i++) {
@@ -69,14 +68,14 @@ public final class TruncatedNormal {
             for (int i = 0; i < n; i++) {
                 double x;
                 do {
-                    x = mean + sigma * rng.nextGaussian();
+                    x = mean + sigma * rng.gaussian();
                 } while (x < lo || x > hi);
                 out[i] = x;
             }
         } else {
             double width = pHi - pLo;
             for (int i = 0; i < n; i++) {
-                double p = pLo + rng.nextDouble() * width;
+                double p = pLo + rng.uniform() * width;
                 double x = mean + sigma * STD.inverseCumulativeProbability(p);
                 // the quantile function may round a hair outside the bounds
                 out[i] = Math.max(lo, Math.min(hi, x));

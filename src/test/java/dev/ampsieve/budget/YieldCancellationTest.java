@@ -52,7 +52,12 @@ class YieldCancellationTest {
         Thread worker = new Thread(
                 () -> {
                     try {
-                        BudgetCalculator.compute(s, PART);
+                        // budgets one after another until stopped: a run can take under the 200 ms below (10
+                        // million units of one normal draw each took about 0.5 s on a loaded 2-core machine), and
+                        // an interrupt between two budgets stops the next one at its first block
+                        while (true) {
+                            BudgetCalculator.compute(s, PART);
+                        }
                     } catch (Throwable t) {
                         thrown[0] = t;
                     }
