@@ -47,10 +47,12 @@ class NoFitAdviceTest {
         assertEquals(60.9, c.get(Change.Kind.LOWER_GAIN).values().get("noiseGain"), 1e-9);
         assertEquals(59.9e3, c.get(Change.Kind.LOWER_GAIN).values().get("rf"), 1e-6);
         // source: 100 * (9.4 uV + 0.7 nA * Rs) <= 1 mV  ->  Rs <= 857.1 ohm
-        assertEquals(857.0, c.get(Change.Kind.LOWER_SOURCE_RESISTANCE).values().get("sourceResistance"), 1.0);
-        // limit: the worst case itself, 1.64 mV (1.65 if the rounded 1.64 misses by a rounding error)
-        double limit = c.get(Change.Kind.LOOSER_LIMIT).values().get("limitV");
-        assertTrue(limit >= 1.64e-3 - 1e-12 && limit <= 1.65e-3 + 1e-12, "limit " + limit);
+        //   printed rounded down to 3 digits: 857 Ω
+        assertEquals(857.0, c.get(Change.Kind.LOWER_SOURCE_RESISTANCE).values().get("sourceResistance"), 1e-9);
+        // limit: the worst case itself, 1.64 mV at the output (already 3 digits, so it fits as printed); 16.4 µV at
+        // the input (NG 100)
+        assertEquals(1.64e-3, c.get(Change.Kind.LOOSER_LIMIT).values().get("limitV"), 1e-15);
+        assertEquals(16.4e-6, c.get(Change.Kind.LOOSER_LIMIT).values().get("limitInputV"), 1e-18);
         // 25 °C alone still gives 100 * (4 + 7) uV = 1.1 mV: no temperature range helps;
         // a trim leaves 1.64 - 0.40 + 0.01 = 1.25 mV: no trim helps
         assertTrue(!c.containsKey(Change.Kind.NARROWER_TEMPERATURE));

@@ -61,6 +61,8 @@ class OperatingPointAdviceTest {
         assertNotNull(load, changes(r).toString());
         double rl = load.values().get("loadResistance");
         assertEquals(616, rl, 1, "hand estimate 616 ohm");
+        // as offered: 3 digits on the fitting side, 616 Ω (the re-check below shows 615 Ω would not fit)
+        assertEquals(616.0, rl, 1e-9);
         // re-checked: the printed value fits, one unit less in the third digit does not
         assertTrue(fits(s.toBuilder().loadResistance(rl).build(), p));
         assertFalse(fits(s.toBuilder().loadResistance(rl - Rounding.unit3(rl)).build(), p));
@@ -70,6 +72,8 @@ class OperatingPointAdviceTest {
                 .findFirst()
                 .orElseThrow();
         assertEquals(55.5, theta.value(), 0.1, "hand estimate 55.6 °C/W, printed rounded down");
+        // as offered: 3 digits on the fitting side, 55.5 °C/W (the re-check below shows 55.6 would not fit)
+        assertEquals(55.5, theta.value(), 1e-12);
         assertTrue(fits(s, PartEdit.withThetaJa(p, theta.value())));
         assertFalse(fits(s, PartEdit.withThetaJa(p, theta.value() + Rounding.unit3(theta.value()))));
         // a package figure: no temperature of its own
