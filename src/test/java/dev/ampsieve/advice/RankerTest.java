@@ -15,7 +15,6 @@ import dev.ampsieve.budget.Verdict;
 import dev.ampsieve.catalog.Architecture;
 import dev.ampsieve.catalog.InputType;
 import dev.ampsieve.catalog.Part;
-import dev.ampsieve.report.AdviceText;
 import dev.ampsieve.report.ConstraintText;
 import dev.ampsieve.stage.Stage;
 import dev.ampsieve.testing.Budgets;
@@ -70,12 +69,12 @@ class RankerTest {
                 r.candidates().stream().map(Candidate::id).toList());
         // margins: CHEAP after the trim (1 - 0.41) = 59 %, PREC (1 - 0.5) = 50 %
         assertEquals(0.59, r.candidates().get(0).margin(), 1e-12);
-        assertTrue(
-                AdviceText.lines(r.advice()).stream()
-                        .anyMatch(l -> l.startsWith("A one-point trim is warranted: CHEAP at 1.00 USD"
-                                + " plus the trim at 0.50 USD costs 1.50 USD per unit, 1.50 USD less than PREC as it is (1500.00 USD over"
-                                + " 1000 units)")),
-                AdviceText.lines(r.advice()).toString());
+        // the part's own price, before the trim: 1.00
+        assertEquals(1.00, Candidate.price(t.withTrim().part(), s.quantity()), 1e-12);
+        assertTrue(t.withTrim().trimmed());
+        assertEquals(3.00, t.asIs().effectiveCost(), 1e-12);
+        // one currency: no remark on mixed currencies
+        assertEquals(List.of(), r.advice().currencies());
     }
 
     @Test
@@ -97,7 +96,10 @@ class RankerTest {
         Ranking r = rank(s, m);
         assertEquals(TrimAdvice.Status.REQUIRED, r.advice().trim().status());
         assertNull(r.advice().cheapestAsIs());
-        assertTrue(AdviceText.lines(r.advice()).contains("No part fits as it is."));
+        // the pick is the trimmed part: 1.00 + 0.50
+        assertEquals("CHEAP", r.advice().pick().id());
+        assertTrue(r.advice().pick().trimmed());
+        assertEquals(1.50, r.advice().pick().effectiveCost(), 1e-12);
     }
 
     @Test
@@ -135,18 +137,24 @@ class RankerTest {
         assertEquals(ZeroDriftAdvice.Status.ONLY_OPTION, z.status());
         assertTrue(z.warranted());
         assertEquals("CHOP", z.selfCorrecting().id());
+        assertEquals(1, z.fittingCount());
+        assertEquals(3, z.caveats().size(), z.caveats().toString());
         // 20 kHz against a 10 Hz band edge: 2000 times, well clear
-        assertTrue(
-                z.caveats().stream()
-                        .map(AdviceText::caveat)
-                        .anyMatch(c -> c.startsWith("chopping at 20.0 kHz is 2000 times the 10.0 Hz band edge")),
-                z.caveats().stream().map(AdviceText::caveat).toList().toString());
-        assertTrue(
-                z.caveats().stream().map(AdviceText::caveat).anyMatch(c -> c.startsWith("bias current up to 300 pA")),
-                z.caveats().stream().map(AdviceText::caveat).toList().toString());
-        assertTrue(
-                z.caveats().stream().map(AdviceText::caveat).anyMatch(c -> c.startsWith("current noise 150 fA/√Hz")),
-                z.caveats().stream().map(AdviceText::caveat).toList().toString());
+        Caveat.Chopping chopping = (Caveat.Chopping) z.caveats().get(2);
+        assertEquals(20e3, chopping.frequency(), 0);
+        assertEquals(10.0, chopping.bandHigh(), 0);
+        assertEquals(2000.0, chopping.ratio(), 1e-9);
+        assertEquals(Caveat.Position.CLEAR, chopping.position());
+        // the catalog's 300 pA; the hand-made budget has no bias term, so no temperature and no output figure
+        Caveat.Bias bias = (Caveat.Bias) z.caveats().get(0);
+        assertEquals(300e-12, bias.ib(), 1e-24);
+        assertTrue(Double.isNaN(bias.worstAtC()) && Double.isNaN(bias.ibAtWorst()) && Double.isNaN(bias.outputV()));
+        assertEquals(1e-3, bias.limitV(), 1e-18);
+        // 150 fA/√Hz through the larger input resistance: Rs 0 at +, Rf || Rg = 99 k x 1 k / 100 k = 990 Ω at -
+        Caveat.CurrentNoise noise = (Caveat.CurrentNoise) z.caveats().get(1);
+        assertEquals(150e-15, noise.in(), 1e-27);
+        assertEquals(990.0, noise.r(), 1e-9);
+        assertEquals(20e-9, noise.en(), 1e-21);
     }
 
     @Test
@@ -166,29 +174,30 @@ class RankerTest {
         m.put(std, budget(s, std, 1.0e-3, 0.9e-3, 0.9e-3, Verdict.NO_FIT));
         Advice a = rank(s, m).advice();
         assertEquals(ZeroDriftAdvice.Status.ONLY_OPTION, a.zeroDrift().status());
-        String line = AdviceText.lines(a).stream()
-                .filter(l -> l.startsWith("A zero-drift part is warranted"))
-                .findFirst()
-                .orElseThrow();
-        assertTrue(
-                line.startsWith("A zero-drift part is warranted: only zero-drift parts fit (2); the cheapest, CHOP"
-                        + " (chopper), costs 2.20"),
-                line);
-        // a single one is still named as the only one
+        // two zero-drift parts fit; the cheapest is CHOP at 2.20
+        assertEquals(2, a.zeroDrift().fittingCount());
+        assertEquals("CHOP", a.zeroDrift().selfCorrecting().id());
+        assertEquals(Architecture.CHOPPER, a.zeroDrift().selfCorrecting().part().architecture());
+        assertEquals(2.20, a.zeroDrift().selfCorrecting().effectiveCost(), 1e-12);
+        // a single one is counted as one
         m.remove(az);
-        String one = AdviceText.lines(rank(s, m).advice()).stream()
-                .filter(l -> l.startsWith("A zero-drift"))
-                .findFirst()
-                .orElseThrow();
-        assertTrue(one.startsWith("A zero-drift part is warranted: only CHOP (chopper) fits, at 2.20"), one);
+        ZeroDriftAdvice one = rank(s, m).advice().zeroDrift();
+        assertEquals(ZeroDriftAdvice.Status.ONLY_OPTION, one.status());
+        assertEquals(1, one.fittingCount());
+        assertEquals("CHOP", one.selfCorrecting().id());
     }
 
     @Test
     void anEmptyCatalogGetsNoTrimVerdict() {
         Stage s = stage().trim(true, 10e-6, 0.50).build();
-        List<String> lines = AdviceText.lines(rank(s, new LinkedHashMap<>()).advice());
-        assertTrue(lines.contains("No part to rank: the catalog (or the query) gave none."), lines.toString());
-        assertTrue(lines.stream().noneMatch(l -> l.contains("trimmed part")), lines.toString());
+        Advice a = rank(s, new LinkedHashMap<>()).advice();
+        // nothing ranked and nothing rejected: nothing to rank, and so no trim verdict to give
+        assertTrue(a.nothingToRank());
+        assertTrue(!a.anyRanked());
+        assertNull(a.pick());
+        // the trim finding is "no help" (nothing fits, trimmed or not); report does not word it with no part at all
+        assertEquals(TrimAdvice.Status.NO_HELP, a.trim().status());
+        assertNull(a.trim().withTrim());
     }
 
     @Test
@@ -218,12 +227,12 @@ class RankerTest {
         Ranking r = rank(s, m);
         ZeroDriftAdvice z = r.advice().zeroDrift();
         assertEquals(ZeroDriftAdvice.Status.NOT_WARRANTED, z.status());
+        // 1.00 - 2.20 = -1.20: the standard part is 1.20 cheaper
         assertEquals(-1.20, z.savingPerUnit(), 1e-12);
-        assertTrue(
-                AdviceText.lines(r.advice())
-                        .contains("A zero-drift part is not needed: STD (standard) fits at 1.00 USD,"
-                                + " 1.20 USD less than the cheapest zero-drift part that fits, CHOP."),
-                AdviceText.lines(r.advice()).toString());
+        assertEquals("STD", z.standard().id());
+        assertEquals(1.00, z.standard().effectiveCost(), 1e-12);
+        assertEquals("CHOP", z.selfCorrecting().id());
+        assertTrue(!z.warranted());
     }
 
     @Test
@@ -240,13 +249,15 @@ class RankerTest {
                 .orElseThrow();
         assertEquals(4.0, chopping.ratio(), 1e-12);
         assertEquals(Caveat.Position.NEAR, chopping.position());
-        List<String> caveats = facts.stream().map(AdviceText::caveat).toList();
-        assertTrue(
-                caveats.stream()
-                        .anyMatch(l -> l.startsWith("chopping at 2.00 kHz is only 4 times the 500 Hz band edge")),
-                caveats.toString());
-        assertTrue(
-                caveats.stream().anyMatch(l -> l.startsWith("bias current is not in the catalog")), caveats.toString());
+        assertEquals(2e3, chopping.frequency(), 0);
+        assertEquals(500.0, chopping.bandHigh(), 0);
+        // no bias current in the catalog
+        Caveat.Bias bias = facts.stream()
+                .filter(Caveat.Bias.class::isInstance)
+                .map(Caveat.Bias.class::cast)
+                .findFirst()
+                .orElseThrow();
+        assertNull(bias.ib());
     }
 
     @Test
@@ -327,17 +338,12 @@ class RankerTest {
         // cannot be priced from it, and smaller orders usually cost more per unit (common practice)
         Stage s = stage().trim(true, 10e-6, 0.50).quantity(400).build();
         Ranking r = rank(s, precAndCheap(s, Verdict.FITS_AFTER_TRIM));
-        assertTrue(
-                AdviceText.lines(r.advice())
-                        .contains("Prices are the catalog's, each for its stated order quantity (1000 units),"
-                                + " not for this build of 400: smaller orders usually cost more per unit."),
-                AdviceText.lines(r.advice()).toString());
+        assertEquals(List.of(1000), r.advice().quotedQuantities());
         // a build at or above the quoted quantity needs no such remark
         Stage big = stage().trim(true, 10e-6, 0.50).quantity(1000).build();
-        assertTrue(AdviceText.lines(
-                        rank(big, precAndCheap(big, Verdict.FITS_AFTER_TRIM)).advice())
-                .stream()
-                .noneMatch(l -> l.startsWith("Prices are the catalog's")));
+        assertEquals(
+                List.of(),
+                rank(big, precAndCheap(big, Verdict.FITS_AFTER_TRIM)).advice().quotedQuantities());
     }
 
     @Test
@@ -348,11 +354,14 @@ class RankerTest {
         Map<Part, Budget> m = new LinkedHashMap<>();
         m.put(chop, budget(s, chop, 0.5e-3, 0.2e-3, 0.2e-3, Verdict.FITS));
         ZeroDriftAdvice z = rank(s, m).advice().zeroDrift();
-        assertTrue(
-                z.caveats().stream()
-                        .map(AdviceText::caveat)
-                        .anyMatch(c -> c.startsWith("chopping at 20.0 kHz is inside the 50.0 kHz band:")),
-                z.caveats().stream().map(AdviceText::caveat).toList().toString());
+        Caveat.Chopping chopping = z.caveats().stream()
+                .filter(Caveat.Chopping.class::isInstance)
+                .map(Caveat.Chopping.class::cast)
+                .findFirst()
+                .orElseThrow();
+        // 20 kHz / 50 kHz = 0.4: at or below the band edge
+        assertEquals(0.4, chopping.ratio(), 1e-15);
+        assertEquals(Caveat.Position.INSIDE, chopping.position());
     }
 
     @Test
@@ -364,13 +373,14 @@ class RankerTest {
         Stage s = stage().limitV(1.0).fullScale(1.25).build();
         Part chop = chopper(2.20);
         Ranking r = Ranker.rank(s, List.of(chop), dev.ampsieve.budget.BudgetCalculator::compute);
-        List<String> caveats = r.advice().zeroDrift().caveats().stream()
-                .map(AdviceText::caveat)
-                .toList();
-        assertTrue(
-                caveats.stream()
-                        .anyMatch(c -> c.startsWith(
-                                "bias current up to 300 pA at 25 °C, 6.79 nA at 70 °C in this" + " budget")),
-                caveats.toString());
+        Caveat.Bias bias = r.advice().zeroDrift().caveats().stream()
+                .filter(Caveat.Bias.class::isInstance)
+                .map(Caveat.Bias.class::cast)
+                .findFirst()
+                .orElseThrow();
+        assertEquals(300e-12, bias.ib(), 1e-24);
+        assertEquals(70.0, bias.worstAtC(), 0);
+        // 300 pA x 2^((70 - 25) / 10) = 300 pA x 22.627 = 6.788 nA
+        assertEquals(300e-12 * Math.pow(2, 4.5), bias.ibAtWorst(), 1e-21);
     }
 }
