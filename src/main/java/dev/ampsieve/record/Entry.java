@@ -46,6 +46,8 @@ public record Entry(Map<String, String> fields, String sha256) {
             List<String> sub = CatalogKeys.subKeys(key);
             if (key.equals(CatalogKeys.PRICE)) {
                 price(f, p.price());
+            } else if (key.equals(CatalogKeys.MEASURED)) {
+                measured(f, p.measured());
             } else if (sub.isEmpty()) {
                 put(f, key, plain(p, key));
             } else {
@@ -56,6 +58,28 @@ public record Entry(Map<String, String> fields, String sha256) {
             }
         }
         return f;
+    }
+
+    /**
+     * A measured lot: the file as the entry names it and the SHA-256 of its bytes, so that a lot
+     * measured again (the units change, the entry does not) changes the entry's hash too and a
+     * re-check names it; "unreadable" when the file cannot be read now (the budget then says why).
+     */
+    private static void measured(Map<String, String> f, dev.ampsieve.catalog.Measured m) {
+        if (m == null) {
+            return;
+        }
+        put(f, "measured.file", m.file());
+        String digest;
+        try {
+            MessageDigest d = MessageDigest.getInstance("SHA-256");
+            digest = HexFormat.of().formatHex(d.digest(java.nio.file.Files.readAllBytes(m.path())));
+        } catch (java.io.IOException | RuntimeException e) {
+            digest = "unreadable";
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("every Java platform has SHA-256", e);
+        }
+        put(f, "measured.sha256", digest);
     }
 
     /** Price breaks one path each ({@code price.break.100}), so a change names the break. */

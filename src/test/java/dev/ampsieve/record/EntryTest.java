@@ -68,4 +68,30 @@ class EntryTest {
         assertEquals("2.3", Entry.of(a).fields().get("price.break.1000"));
         assertEquals("invented", Entry.of(a).fields().get("source"));
     }
+
+    @Test
+    void aLotMeasuredAgainChangesTheEntryThoughTheYamlDoesNot() throws Exception {
+        Path d = Files.createTempDirectory(dir, "m");
+        Files.writeString(d.resolve("p.yaml"), PART + "    measured: {file: lot.csv}\n");
+        String lot = "unit, vos (uV)\n1, 1.0\n2, -2.0\n3, 0.5\n";
+        Files.writeString(d.resolve("lot.csv"), lot);
+        Part a = CatalogLoader.load(d, true).find("t-01").orElseThrow();
+        Entry ea = Entry.of(a);
+        assertEquals("lot.csv", ea.fields().get("measured.file"));
+        // the SHA-256 of the lot's bytes (java.security.MessageDigest, a second method to the code's own read)
+        String expected = java.util.HexFormat.of()
+                .formatHex(java.security.MessageDigest.getInstance("SHA-256")
+                        .digest(lot.getBytes(java.nio.charset.StandardCharsets.UTF_8)));
+        assertEquals(expected, ea.fields().get("measured.sha256"));
+        // unit 2 measured again: the YAML is untouched, the entry (and so a re-check) sees the change
+        Files.writeString(d.resolve("lot.csv"), lot.replace("-2.0", "-2.5"));
+        Entry eb = Entry.of(CatalogLoader.load(d, true).find("t-01").orElseThrow());
+        assertNotEquals(ea.sha256(), eb.sha256());
+        assertEquals(
+                java.util.List.of(new Finding.FieldChange(
+                        "measured.sha256",
+                        ea.fields().get("measured.sha256"),
+                        eb.fields().get("measured.sha256"))),
+                Recheck.changes(ea.fields(), eb.fields()));
+    }
 }
