@@ -7,6 +7,7 @@ import dev.ampsieve.yaml.Node;
 import dev.ampsieve.yaml.Problem;
 import dev.ampsieve.yaml.YamlFiles;
 import java.io.IOException;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.DirectoryIteratorException;
 import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
@@ -110,9 +111,15 @@ public final class CatalogLoader {
         Map<String, Located> ids = new HashMap<>();
         long[] bytesRead = {0};
         List<String> keys = new ArrayList<>();
+        MessageDigest sources = sha256();
+        sources.update(ParsedFileCodec.IDENTITY);
         for (Path file : files) {
             List<Problem> fileProblems = new ArrayList<>();
-            readFile(root, file, limits, bytesRead, cache, keys, parts, ids, fileProblems);
+            String name = root.relativize(file).toString().replace('\\', '/');
+            sources.update(name.getBytes(StandardCharsets.UTF_8));
+            sources.update((byte) 0);
+            byte[] content = readFile(root, file, limits, bytesRead, cache, keys, parts, ids, fileProblems);
+            sources.update(content == null ? new byte[1] : content);
             // top to bottom within a file, whatever order the checks ran in
             fileProblems.sort(Comparator.comparingInt(Problem::line).thenComparingInt(Problem::column));
             problems.addAll(fileProblems);
@@ -131,7 +138,7 @@ public final class CatalogLoader {
         if (strict && problems.stream().anyMatch(Problem::isError)) {
             throw new InputException(problems);
         }
-        return new Catalog(root, parts, problems, files.size());
+        return new Catalog(root, parts, problems, files.size(), HexFormat.of().formatHex(sources.digest()));
     }
 
     /**
@@ -430,7 +437,8 @@ public final class CatalogLoader {
         return !name.startsWith(".") && (lower.endsWith(".yaml") || lower.endsWith(".yml"));
     }
 
-    private static void readFile(
+    /** @return the SHA-256 of the file's bytes, or null when it could not be read */
+    private static byte[] readFile(
             Path catalogRoot,
             Path file,
             Limits limits,
@@ -446,17 +454,18 @@ public final class CatalogLoader {
             bytes = BoundedFiles.read(file, YamlFiles.MAX_BYTES);
         } catch (InputException e) {
             problems.addAll(e.problems());
-            return;
+            return null;
         }
         // counted again as read: a file may have grown since it was listed
         bytesRead[0] += bytes.length;
         if (bytesRead[0] > limits.bytes()) {
             throw tooManyBytes(catalogRoot, limits);
         }
+        byte[] content = sha256().digest(bytes);
         ParsedFile parsed = null;
         String key = null;
         if (cache != null) {
-            key = cacheKey(bytes);
+            key = cacheKey(content);
             parsed = cached(cache, key, file);
         }
         if (parsed == null) {
@@ -474,6 +483,7 @@ public final class CatalogLoader {
         for (ParsedFile.Entry e : parsed.entries()) {
             accept(e, parts, ids, problems);
         }
+        return content;
     }
 
     /**
@@ -492,17 +502,23 @@ public final class CatalogLoader {
         void retain(Set<String> keys);
     }
 
-    /** The hex SHA-256 of the loader's identity ({@link ParsedFileCodec#IDENTITY}) and {@code bytes}. */
-    static String cacheKey(byte[] bytes) {
-        MessageDigest md;
+    /**
+     * The hex SHA-256 of the loader's identity ({@link ParsedFileCodec#IDENTITY}) and a file's
+     * content hash (the SHA-256 of its bytes).
+     */
+    static String cacheKey(byte[] contentSha256) {
+        MessageDigest md = sha256();
+        md.update(ParsedFileCodec.IDENTITY);
+        md.update(contentSha256);
+        return HexFormat.of().formatHex(md.digest());
+    }
+
+    private static MessageDigest sha256() {
         try {
-            md = MessageDigest.getInstance("SHA-256");
+            return MessageDigest.getInstance("SHA-256");
         } catch (NoSuchAlgorithmException e) {
             throw new IllegalStateException("every Java runtime has SHA-256", e);
         }
-        md.update(ParsedFileCodec.IDENTITY);
-        md.update(bytes);
-        return HexFormat.of().formatHex(md.digest());
     }
 
     /** The entry under {@code key}, or null when there is none or it does not decode. */
