@@ -191,8 +191,20 @@ public final class PartIndex implements Closeable {
         }
     }
 
+    /**
+     * One segment's worth of documents is buffered before a flush: a 100,000-part catalog makes
+     * about 150 MB of buffered postings, points and doc values, so with Lucene's default 16 MB it
+     * flushed and merged many small segments during one build (bench/RESULTS.md, 2026-12-02).
+     * 64 MB keeps the heap of a 100,000-part build under 512 MB.
+     */
+    static final double RAM_BUFFER_MB = 64;
+
     private static IndexWriterConfig config() {
-        return new IndexWriterConfig(new WordAnalyzer()).setOpenMode(IndexWriterConfig.OpenMode.CREATE_OR_APPEND);
+        return new IndexWriterConfig(new WordAnalyzer())
+                .setOpenMode(IndexWriterConfig.OpenMode.CREATE_OR_APPEND)
+                .setRAMBufferSizeMB(RAM_BUFFER_MB)
+                // written once per catalog change and read many times: no compound-file copy step
+                .setUseCompoundFile(false);
     }
 
     /**
@@ -212,8 +224,15 @@ public final class PartIndex implements Closeable {
     /** Replaces each part's document by id, drops parts no longer in the catalog, commits with the fingerprint. */
     private static void reindex(IndexWriter w, List<Part> parts, String fingerprint) throws IOException {
         List<BytesRef> ids = new ArrayList<>();
+        // an empty index (new, or wiped after damage) has nothing to replace: adding skips a
+        // delete-by-id per part
+        boolean empty = !w.hasDeletions() && w.getDocStats().maxDoc == 0;
         for (Part p : parts) {
-            w.updateDocument(new Term(Schema.ID, p.id()), PartDocuments.of(p));
+            if (empty) {
+                w.addDocument(PartDocuments.of(p));
+            } else {
+                w.updateDocument(new Term(Schema.ID, p.id()), PartDocuments.of(p));
+            }
             ids.add(new BytesRef(p.id()));
         }
         w.deleteDocuments(new BooleanQuery.Builder()
@@ -300,7 +319,8 @@ public final class PartIndex implements Closeable {
     List<Hit> search(Query query) {
         Sort order = new Sort(SortField.FIELD_SCORE, priceField(), new SortField(Schema.ID, SortField.Type.STRING));
         try {
-            int n = Math.max(1, reader.maxDoc());
+            // sized by the matches, not the catalog: the collector allocates its queue up front
+            int n = Math.max(1, searcher.count(query));
             TopFieldDocs top = searcher.search(query, n, order, true);
             StoredFields stored = searcher.storedFields();
             List<Hit> hits = new ArrayList<>();
