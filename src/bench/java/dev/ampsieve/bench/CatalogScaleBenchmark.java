@@ -43,7 +43,7 @@ import org.openjdk.jmh.annotations.TearDown;
  * </ul>
  *
  * <p>Run: {@code bench/run CatalogScale -p parts=1000,10000}; the 100k row is single shots:
- * {@code bench/run 'CatalogScale.(loadCached|indexBuild|findSteadyState)' -p parts=100000 -wi 1 -i 3}.
+ * {@code bench/run 'CatalogScaleBenchmark.(loadCached|indexBuild|findSteadyState)' -p parts=100000 -wi 1 -i 3}.
  */
 @State(Scope.Benchmark)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)

@@ -3,6 +3,7 @@ package dev.ampsieve.catalog;
 import dev.ampsieve.yaml.Problem;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 
 /**
@@ -15,16 +16,22 @@ import java.util.Optional;
  *                loader's identity (its code and encoding) and each file's relative path and
  *                bytes, so the parts are a function of it (the search index's fingerprint uses it
  *                instead of hashing every part); null for a catalog put together otherwise
+ * @param fileKeys each file read, as its parts name it ({@link Part#where()}), to the hex SHA-256 of
+ *                the loader's identity and the file's bytes: a file's parts are a function of it
+ *                and of which of its ids earlier files took (the index re-indexes only files whose
+ *                key or kept ids changed); empty for a catalog put together otherwise
  */
-public record Catalog(Path root, List<Part> parts, List<Problem> problems, int files, String sources) {
+public record Catalog(
+        Path root, List<Part> parts, List<Problem> problems, int files, String sources, Map<Path, String> fileKeys) {
     public Catalog {
         parts = List.copyOf(parts);
         problems = List.copyOf(problems);
+        fileKeys = fileKeys == null ? Map.of() : Map.copyOf(fileKeys);
     }
 
     /** A catalog put together in memory (tests, benchmarks, a filtered copy): no {@code sources}. */
     public Catalog(Path root, List<Part> parts, List<Problem> problems, int files) {
-        this(root, parts, problems, files, null);
+        this(root, parts, problems, files, null, Map.of());
     }
 
     public Optional<Part> find(String id) {

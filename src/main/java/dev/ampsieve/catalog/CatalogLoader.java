@@ -111,6 +111,7 @@ public final class CatalogLoader {
         Map<String, Located> ids = new HashMap<>();
         long[] bytesRead = {0};
         List<String> keys = new ArrayList<>();
+        Map<Path, String> fileKeys = new HashMap<>();
         MessageDigest sources = sha256();
         sources.update(ParsedFileCodec.IDENTITY);
         for (Path file : files) {
@@ -120,6 +121,9 @@ public final class CatalogLoader {
             sources.update((byte) 0);
             byte[] content = readFile(root, file, limits, bytesRead, cache, keys, parts, ids, fileProblems);
             sources.update(content == null ? new byte[1] : content);
+            if (content != null) {
+                fileKeys.put(file, cacheKey(content));
+            }
             // top to bottom within a file, whatever order the checks ran in
             fileProblems.sort(Comparator.comparingInt(Problem::line).thenComparingInt(Problem::column));
             problems.addAll(fileProblems);
@@ -138,7 +142,7 @@ public final class CatalogLoader {
         if (strict && problems.stream().anyMatch(Problem::isError)) {
             throw new InputException(problems);
         }
-        return new Catalog(root, parts, problems, files.size(), HexFormat.of().formatHex(sources.digest()));
+        return new Catalog(root, parts, problems, files.size(), HexFormat.of().formatHex(sources.digest()), fileKeys);
     }
 
     /**
