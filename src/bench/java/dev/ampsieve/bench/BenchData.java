@@ -152,6 +152,30 @@ final class BenchData {
         return new Catalog(root, parts, List.of(), 0);
     }
 
+    /**
+     * A synthetic catalog of {@code parts} parts written by {@code bench/make-catalog} (seed 1,
+     * one file per 200 parts) under {@code target/bench/catalogs/}, made once and reused (the
+     * generator is deterministic, so a kept catalog is the one it would write).
+     */
+    static Path syntheticCatalog(int parts) throws IOException, InterruptedException {
+        Path dir = home().resolve("target/bench/catalogs/syn-" + parts);
+        Path done = home().resolve("target/bench/catalogs/syn-" + parts + ".done");
+        if (Files.exists(done)) {
+            return dir;
+        }
+        deleteTree(dir); // half written by an interrupted run
+        Files.createDirectories(dir.getParent());
+        Process p = new ProcessBuilder(
+                        home().resolve("bench/make-catalog").toString(), String.valueOf(parts), dir.toString())
+                .inheritIO()
+                .start();
+        if (p.waitFor() != 0) {
+            throw new IllegalStateException("bench/make-catalog failed (python3 is needed)");
+        }
+        Files.writeString(done, "bench/make-catalog " + parts + "\n");
+        return dir;
+    }
+
     static Path tempDir(String prefix) {
         try {
             return Files.createTempDirectory(prefix);

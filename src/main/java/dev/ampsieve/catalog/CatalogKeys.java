@@ -6,6 +6,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.function.Function;
+import java.util.regex.Pattern;
 
 /**
  * Every key a catalog file may hold, per section, with the dimension of each quantity.
@@ -19,6 +20,9 @@ public final class CatalogKeys {
 
     /** The key of the list in a file holding several parts. */
     public static final String PARTS = "parts";
+
+    /** The {@code parts[3].} in front of a key path read from a list of parts. */
+    private static final Pattern LIST_ITEM = Pattern.compile("^" + PARTS + "\\[\\d+]\\.");
 
     // ---- top-level keys of one part, in the order the template lists them
     public static final String ID = "id";
@@ -446,7 +450,8 @@ public final class CatalogKeys {
      * is ignored), for the fix of an error; null when the path is not a quantity.
      */
     public static String example(String path) {
-        String p = path.replaceFirst("^" + PARTS + "\\[\\d+]\\.", "");
+        // called for every quantity read: the pattern is compiled once (String.replaceFirst compiles per call)
+        String p = path.startsWith(PARTS + "[") ? LIST_ITEM.matcher(path).replaceFirst("") : path;
         Dimension d = QUANTITIES.get(p);
         return d == null ? null : EXAMPLES.getOrDefault(p, d.example());
     }

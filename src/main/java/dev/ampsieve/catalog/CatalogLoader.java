@@ -7,6 +7,7 @@ import dev.ampsieve.yaml.Node;
 import dev.ampsieve.yaml.Problem;
 import dev.ampsieve.yaml.YamlFiles;
 import java.io.IOException;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.DirectoryIteratorException;
 import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
@@ -14,13 +15,18 @@ import java.nio.file.LinkOption;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.nio.file.attribute.BasicFileAttributes;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashMap;
+import java.util.HashSet;
+import java.util.HexFormat;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 
 /**
  * Reads every {@code *.yaml} / {@code *.yml} file below a folder into validated {@link Part}s.
@@ -68,10 +74,27 @@ public final class CatalogLoader {
      *                        {@link #MAX_ENTRIES}), or {@code strict} and any error
      */
     public static Catalog load(Path root, boolean strict) throws InputException {
-        return load(root, strict, Limits.DEFAULT);
+        return load(root, strict, Limits.DEFAULT, null);
+    }
+
+    /**
+     * As {@link #load(Path, boolean)}, taking each file's parts from {@code cache} when the file's
+     * bytes are unchanged since they were stored (and storing what had to be parsed). The result
+     * is the same as without a cache, problems and places included: every file is still listed,
+     * read and counted against the limits, and only its parsing is skipped. A file with an error
+     * is never stored.
+     *
+     * @param cache null for none
+     */
+    public static Catalog load(Path root, boolean strict, Cache cache) throws InputException {
+        return load(root, strict, Limits.DEFAULT, cache);
     }
 
     static Catalog load(Path root, boolean strict, Limits limits) throws InputException {
+        return load(root, strict, limits, null);
+    }
+
+    static Catalog load(Path root, boolean strict, Limits limits, Cache cache) throws InputException {
         if (!Files.exists(root)) {
             throw new InputException(Problem.error(Located.nowhere(root), "", "catalog folder not found", ROOT_FIX));
         }
@@ -87,9 +110,20 @@ public final class CatalogLoader {
         List<Part> parts = new ArrayList<>();
         Map<String, Located> ids = new HashMap<>();
         long[] bytesRead = {0};
+        List<String> keys = new ArrayList<>();
+        Map<Path, String> fileKeys = new HashMap<>();
+        MessageDigest sources = sha256();
+        sources.update(ParsedFileCodec.IDENTITY);
         for (Path file : files) {
             List<Problem> fileProblems = new ArrayList<>();
-            readFile(root, file, limits, bytesRead, parts, ids, fileProblems);
+            String name = root.relativize(file).toString().replace('\\', '/');
+            sources.update(name.getBytes(StandardCharsets.UTF_8));
+            sources.update((byte) 0);
+            byte[] content = readFile(root, file, limits, bytesRead, cache, keys, parts, ids, fileProblems);
+            sources.update(content == null ? new byte[1] : content);
+            if (content != null) {
+                fileKeys.put(file, cacheKey(content));
+            }
             // top to bottom within a file, whatever order the checks ran in
             fileProblems.sort(Comparator.comparingInt(Problem::line).thenComparingInt(Problem::column));
             problems.addAll(fileProblems);
@@ -102,10 +136,13 @@ public final class CatalogLoader {
                     "add parts (catalog-template/part.yaml shows every key) or " + ROOT_FIX));
         }
         currencies(parts, problems);
+        if (cache != null) {
+            cache.retain(new HashSet<>(keys));
+        }
         if (strict && problems.stream().anyMatch(Problem::isError)) {
             throw new InputException(problems);
         }
-        return new Catalog(root, parts, problems, files.size());
+        return new Catalog(root, parts, problems, files.size(), HexFormat.of().formatHex(sources.digest()), fileKeys);
     }
 
     /**
@@ -404,33 +441,112 @@ public final class CatalogLoader {
         return !name.startsWith(".") && (lower.endsWith(".yaml") || lower.endsWith(".yml"));
     }
 
-    private static void readFile(
+    /** @return the SHA-256 of the file's bytes, or null when it could not be read */
+    private static byte[] readFile(
             Path catalogRoot,
             Path file,
             Limits limits,
             long[] bytesRead,
+            Cache cache,
+            List<String> keys,
             List<Part> parts,
             Map<String, Located> ids,
             List<Problem> problems)
             throws InputException {
         byte[] bytes;
-        Node root;
         try {
             bytes = BoundedFiles.read(file, YamlFiles.MAX_BYTES);
         } catch (InputException e) {
             problems.addAll(e.problems());
-            return;
+            return null;
         }
         // counted again as read: a file may have grown since it was listed
         bytesRead[0] += bytes.length;
         if (bytesRead[0] > limits.bytes()) {
             throw tooManyBytes(catalogRoot, limits);
         }
+        byte[] content = sha256().digest(bytes);
+        ParsedFile parsed = null;
+        String key = null;
+        if (cache != null) {
+            key = cacheKey(content);
+            parsed = cached(cache, key, file);
+        }
+        if (parsed == null) {
+            parsed = parse(bytes, file);
+            // a file with an error is read afresh each time: it is being edited, and an error may
+            // come from the moment (an interrupted read) rather than from the bytes
+            if (cache != null && !parsed.hasErrors() && !Thread.currentThread().isInterrupted()) {
+                cache.put(key, ParsedFileCodec.encode(parsed, file));
+            }
+        }
+        if (key != null && !parsed.hasErrors()) {
+            keys.add(key);
+        }
+        problems.addAll(parsed.leading());
+        for (ParsedFile.Entry e : parsed.entries()) {
+            accept(e, parts, ids, problems);
+        }
+        return content;
+    }
+
+    /**
+     * A store of parsed files by key (the SHA-256 of the loader's identity and a file's bytes),
+     * kept by a caller that has a place for it (the search index's folder). Every method must
+     * work as a cache: never fail, and a missing or unusable entry is simply null.
+     */
+    public interface Cache {
+        /** The bytes stored under {@code key}, or null when there are none that can be trusted. */
+        byte[] get(String key);
+
+        /** Stores {@code value} under {@code key} (best effort). */
+        void put(String key, byte[] value);
+
+        /** Called after each load with the keys the catalog uses now; entries under other keys may go. */
+        void retain(Set<String> keys);
+    }
+
+    /**
+     * The hex SHA-256 of the loader's identity ({@link ParsedFileCodec#IDENTITY}) and a file's
+     * content hash (the SHA-256 of its bytes).
+     */
+    static String cacheKey(byte[] contentSha256) {
+        MessageDigest md = sha256();
+        md.update(ParsedFileCodec.IDENTITY);
+        md.update(contentSha256);
+        return HexFormat.of().formatHex(md.digest());
+    }
+
+    private static MessageDigest sha256() {
+        try {
+            return MessageDigest.getInstance("SHA-256");
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("every Java runtime has SHA-256", e);
+        }
+    }
+
+    /** The entry under {@code key}, or null when there is none or it does not decode. */
+    private static ParsedFile cached(Cache cache, String key, Path file) {
+        byte[] stored = cache.get(key);
+        if (stored == null) {
+            return null;
+        }
+        try {
+            return ParsedFileCodec.decode(stored, file);
+        } catch (IOException e) {
+            return null; // not trusted: parsed afresh (and stored again)
+        }
+    }
+
+    /** One file's bytes read as catalog parts: a pure function of the bytes and the file's name. */
+    static ParsedFile parse(byte[] bytes, Path file) {
+        List<Problem> problems = new ArrayList<>();
+        List<ParsedFile.Entry> entries = new ArrayList<>();
+        Node root;
         try {
             root = YamlFiles.parse(YamlFiles.decode(bytes, file), file);
         } catch (InputException e) {
-            problems.addAll(e.problems());
-            return;
+            return new ParsedFile(e.problems(), entries);
         }
         if (root instanceof Node.Scalar s && s.text() == null) {
             problems.add(Problem.warning(
@@ -438,7 +554,7 @@ public final class CatalogLoader {
                     "",
                     "empty file, no parts",
                     "add a part (catalog-template/part.yaml shows every key) or delete the file"));
-            return;
+            return new ParsedFile(problems, entries);
         }
         if (root instanceof Node.Mapping m && m.entries().containsKey(CatalogKeys.PARTS)) {
             for (var e : m.keyAt().entrySet()) {
@@ -453,11 +569,7 @@ public final class CatalogLoader {
             Node list = m.entries().get(CatalogKeys.PARTS);
             if (list instanceof Node.Seq seq) {
                 for (int i = 0; i < seq.items().size(); i++) {
-                    accept(
-                            PartReader.read(seq.items().get(i), CatalogKeys.PARTS + "[" + i + "]", false),
-                            parts,
-                            ids,
-                            problems);
+                    entries.add(entry(PartReader.read(seq.items().get(i), CatalogKeys.PARTS + "[" + i + "]", false)));
                 }
             } else if (list instanceof Node.Scalar s && s.text() == null) {
                 problems.add(Problem.warning(
@@ -469,7 +581,7 @@ public final class CatalogLoader {
                         "expected a list of parts, found " + list.kind(),
                         "write each part as an item starting with '- id: ...', indented below 'parts:'"));
             }
-            return;
+            return new ParsedFile(problems, entries);
         }
         if (root instanceof Node.Mapping m && looksLikeStage(m)) {
             problems.add(Problem.warning(
@@ -485,7 +597,7 @@ public final class CatalogLoader {
                             + " and no id); skipped",
                     "move it to a '" + STAGES_FOLDER
                             + "' folder (which the catalog does not read) and pass it with --stage"));
-            return;
+            return new ParsedFile(problems, entries);
         }
         if (root instanceof Node.Seq) {
             problems.add(Problem.error(
@@ -493,9 +605,14 @@ public final class CatalogLoader {
                     "",
                     "the file is a bare list",
                     "put 'parts:' on a line of its own above the list and indent the list below it"));
-            return;
+            return new ParsedFile(problems, entries);
         }
-        accept(PartReader.read(root, "", true), parts, ids, problems);
+        entries.add(entry(PartReader.read(root, "", true)));
+        return new ParsedFile(problems, entries);
+    }
+
+    private static ParsedFile.Entry entry(PartReader.Result r) {
+        return new ParsedFile.Entry(r.prefix(), r.id(), r.idAt(), r.part(), r.problems());
     }
 
     /** What {@link #readPart} found: the part (null when it has an error) and every problem. */
@@ -525,8 +642,7 @@ public final class CatalogLoader {
     }
 
     /** Keeps the part unless it has errors or its id was taken by an earlier part. */
-    private static void accept(
-            PartReader.Result r, List<Part> parts, Map<String, Located> ids, List<Problem> problems) {
+    private static void accept(ParsedFile.Entry r, List<Part> parts, Map<String, Located> ids, List<Problem> problems) {
         problems.addAll(r.problems());
         boolean ok = r.part() != null;
         if (r.id() != null) {
@@ -545,7 +661,7 @@ public final class CatalogLoader {
         }
     }
 
-    private static String idField(PartReader.Result r) {
+    private static String idField(ParsedFile.Entry r) {
         return r.prefix().isEmpty() ? CatalogKeys.ID : r.prefix() + "." + CatalogKeys.ID;
     }
 

@@ -13,8 +13,9 @@ import dev.ampsieve.yaml.Problem;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
-import java.util.Optional;
+import java.util.Map;
 import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
 
@@ -32,16 +33,44 @@ final class Candidates {
     static List<Part> matching(Catalog catalog, String queryText, PrintWriter err) throws InputException, IOException {
         PartQuery q = QueryLanguage.parse(queryText);
         List<Part> out = new ArrayList<>();
-        try (PartIndex index = PartIndex.open(catalog)) {
-            noteRefusals(index, err);
-            for (Hit h : index.search(q)) {
-                Optional<Part> p = catalog.find(h.id());
-                if (p.isPresent()) {
-                    out.add(Parts.withLot(p.get())); // a measured lot is read when its budget is computed
+        synchronized (Candidates.class) {
+            Open o = open(catalog);
+            noteRefusals(o.index(), err);
+            for (Hit h : o.index().search(q)) {
+                Part p = o.byId().get(h.id());
+                if (p != null) {
+                    out.add(Parts.withLot(p)); // a measured lot is read when its budget is computed
                 }
             }
         }
         return out;
+    }
+
+    /** The index open for one loaded catalog, and its parts by id. */
+    private record Open(Catalog catalog, PartIndex index, Map<String, Part> byId) {}
+
+    /**
+     * The index of the catalog last searched, kept open while the same catalog (the same loaded
+     * object) is searched again: the shell loads the catalog once and runs many commands, each of
+     * which would otherwise check the fingerprint and every index file again (about a second at
+     * 100,000 parts). A reader holds no lock, so keeping it open stops no other process.
+     */
+    private static Open last;
+
+    private static Open open(Catalog catalog) throws IOException {
+        if (last != null && last.catalog() == catalog) {
+            return last;
+        }
+        if (last != null) {
+            last.index().close();
+            last = null;
+        }
+        Map<String, Part> byId = new HashMap<>();
+        for (Part p : catalog.parts()) {
+            byId.put(p.id(), p);
+        }
+        last = new Open(catalog, PartIndex.open(catalog), byId);
+        return last;
     }
 
     /**

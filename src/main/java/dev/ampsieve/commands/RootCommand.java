@@ -6,6 +6,7 @@ import dev.ampsieve.failure.ExitCode;
 import dev.ampsieve.failure.Place;
 import dev.ampsieve.failure.Refusal;
 import dev.ampsieve.report.OutputStyle;
+import dev.ampsieve.search.ParsedCache;
 import dev.ampsieve.yaml.InputException;
 import java.io.IOException;
 import java.io.InputStream;
@@ -205,7 +206,9 @@ public final class RootCommand implements Callable<Integer> {
             if (empty != null) {
                 throw new Refusal(empty, ExitCode.USAGE, Place.field("--catalog"));
             }
-            catalog = CatalogLoader.load(catalogDir(), strict);
+            Path dir = catalogDir();
+            // unchanged files come from the parsed-catalog cache beside the index (none: parsed)
+            catalog = CatalogLoader.load(dir, strict, ParsedCache.forCatalog(dir));
         }
         return catalog;
     }

@@ -21,8 +21,9 @@ import org.apache.lucene.index.IndexWriter;
  *   <li>a real directory, checked without following links: a symbolic link is never followed,
  *       whatever it points to (Lucene's {@code FSDirectory} would follow it);</li>
  *   <li>marked as ours by {@value #MARKER}, written when we create the folder;</li>
- *   <li>holding nothing but that marker, Lucene's own files ({@link #isIndexFile}) and regular
- *       files only: a link, a sub-folder or any other name means someone else uses the folder.</li>
+ *   <li>holding nothing but that marker, Lucene's own files ({@link #isIndexFile}) and the
+ *       parsed-catalog cache's ({@link ParsedCache#isCacheFile}), regular files only: a link, a
+ *       sub-folder or any other name means someone else uses the folder.</li>
  * </ul>
  * An unmarked folder holding only Lucene files (an index of an older version, or an empty folder)
  * is adopted: the marker is added. Anything else is refused and left exactly as it was.
@@ -38,7 +39,8 @@ final class IndexFolder {
     static final String MARKER_TEXT = """
             This folder is a search index that ampsieve built from a catalog of parts.
             It is a cache: deleting the whole folder is safe, ampsieve builds it again.
-            ampsieve only ever deletes files in it that Lucene's index file names match.
+            ampsieve only ever deletes files in it that Lucene's index file names match,
+            and its own parsed-catalog cache files (parsed-*.bin).
             """;
 
     private static final LinkOption[] NOFOLLOW = {LinkOption.NOFOLLOW_LINKS};
@@ -115,7 +117,7 @@ final class IndexFolder {
         try (DirectoryStream<Path> entries = Files.newDirectoryStream(folder)) {
             for (Path e : entries) {
                 String name = e.getFileName().toString();
-                boolean known = name.equals(MARKER) || isIndexFile(name);
+                boolean known = name.equals(MARKER) || isIndexFile(name) || ParsedCache.isCacheFile(name);
                 BasicFileAttributes a;
                 try {
                     a = Files.readAttributes(e, BasicFileAttributes.class, NOFOLLOW);

@@ -5,20 +5,34 @@ import dev.ampsieve.catalog.Part;
 import java.io.Closeable;
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.HexFormat;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import java.util.stream.Stream;
+import org.apache.lucene.document.Document;
+import org.apache.lucene.document.Field;
+import org.apache.lucene.document.StringField;
 import org.apache.lucene.index.DirectoryReader;
 import org.apache.lucene.index.IndexNotFoundException;
 import org.apache.lucene.index.IndexWriter;
 import org.apache.lucene.index.IndexWriterConfig;
 import org.apache.lucene.index.LeafReaderContext;
+import org.apache.lucene.index.MultiTerms;
 import org.apache.lucene.index.SegmentInfos;
 import org.apache.lucene.index.StoredFields;
 import org.apache.lucene.index.Term;
+import org.apache.lucene.index.Terms;
+import org.apache.lucene.index.TermsEnum;
 import org.apache.lucene.search.BooleanClause.Occur;
 import org.apache.lucene.search.BooleanQuery;
 import org.apache.lucene.search.IndexSearcher;
@@ -147,11 +161,13 @@ public final class PartIndex implements Closeable {
         boolean damaged = false;
         for (int attempt = 0; attempt < 2; attempt++) {
             try {
-                boolean built = bringUpToDate(fs, catalog, fingerprint);
+                int written = bringUpToDate(fs, catalog, fingerprint);
                 DirectoryReader r = openVerified(fs, fingerprint);
                 if (r != null) {
-                    Source s = damaged ? Source.REBUILT : built ? Source.BUILT : Source.REUSED;
-                    return new PartIndex(fs, r, s, folder, refusals);
+                    Source s = damaged ? Source.REBUILT : written >= 0 ? Source.BUILT : Source.REUSED;
+                    PartIndex index = new PartIndex(fs, r, s, folder, refusals);
+                    index.written = Math.max(0, written);
+                    return index;
                 }
                 damaged = true; // a commit we just made does not read back: treat as damage
             } catch (LockObtainFailedException e) {
@@ -183,7 +199,7 @@ public final class PartIndex implements Closeable {
         Directory mem = new ByteBuffersDirectory();
         try {
             try (IndexWriter w = new IndexWriter(mem, config())) {
-                reindex(w, catalog.parts(), fingerprint);
+                reindex(w, catalog, fingerprint);
             }
             return new PartIndex(mem, DirectoryReader.open(mem), Source.MEMORY, null, refusals);
         } catch (IOException e) {
@@ -191,37 +207,173 @@ public final class PartIndex implements Closeable {
         }
     }
 
+    /**
+     * One segment's worth of documents is buffered before a flush: a 100,000-part catalog makes
+     * about 150 MB of buffered postings, points and doc values, so with Lucene's default 16 MB it
+     * flushed and merged many small segments during one build (bench/RESULTS.md, 2026-12-02).
+     * 64 MB keeps the heap of a 100,000-part build under 512 MB.
+     */
+    static final double RAM_BUFFER_MB = 64;
+
     private static IndexWriterConfig config() {
-        return new IndexWriterConfig(new WordAnalyzer()).setOpenMode(IndexWriterConfig.OpenMode.CREATE_OR_APPEND);
+        return new IndexWriterConfig(new WordAnalyzer())
+                .setOpenMode(IndexWriterConfig.OpenMode.CREATE_OR_APPEND)
+                .setRAMBufferSizeMB(RAM_BUFFER_MB)
+                // written once per catalog change and read many times: no compound-file copy step
+                .setUseCompoundFile(false);
     }
 
     /**
      * Takes the write lock (failing at once when another process holds it) and re-indexes when
      * the stored fingerprint differs. Returns whether it wrote.
      */
-    private static boolean bringUpToDate(Directory dir, Catalog catalog, String fingerprint) throws IOException {
+    private static int bringUpToDate(Directory dir, Catalog catalog, String fingerprint) throws IOException {
         try (IndexWriter w = new IndexWriter(dir, config())) {
             if (fingerprint.equals(storedFingerprint(dir))) {
-                return false;
+                return -1;
             }
-            reindex(w, catalog.parts(), fingerprint);
-            return true;
+            return reindex(w, catalog, fingerprint);
         }
     }
 
-    /** Replaces each part's document by id, drops parts no longer in the catalog, commits with the fingerprint. */
-    private static void reindex(IndexWriter w, List<Part> parts, String fingerprint) throws IOException {
-        List<BytesRef> ids = new ArrayList<>();
-        for (Part p : parts) {
-            w.updateDocument(new Term(Schema.ID, p.id()), PartDocuments.of(p));
-            ids.add(new BytesRef(p.id()));
+    /**
+     * Not a search field (no query names it): which file a document came from, as the SHA-256 of
+     * the file's key ({@link Catalog#fileKeys()}) and the ids kept from it. Equal terms mean equal
+     * documents, so a catalog edit re-indexes only the files whose term changed.
+     */
+    static final String SOURCE_FILE = "ampsieve.source-file";
+
+    /**
+     * Brings the index to the catalog and commits with the fingerprint: only the documents of
+     * changed files when every document carries its file's term ({@link #incremental}), else every
+     * part's document replaced by id and the parts no longer in the catalog dropped.
+     *
+     * @return the documents written
+     */
+    private static int reindex(IndexWriter w, Catalog catalog, String fingerprint) throws IOException {
+        List<Part> parts = catalog.parts();
+        Map<Path, String> fileTerms = fileTerms(catalog);
+        // an empty index (new, or wiped after damage) has nothing to replace: adding skips a
+        // delete-by-id per part
+        boolean empty = !w.hasDeletions() && w.getDocStats().maxDoc == 0;
+        int written = empty || fileTerms == null ? -1 : incremental(w, parts, fileTerms);
+        if (written < 0) {
+            List<BytesRef> ids = new ArrayList<>();
+            for (Part p : parts) {
+                Document d = document(p, fileTerms);
+                if (empty) {
+                    w.addDocument(d);
+                } else {
+                    w.updateDocument(new Term(Schema.ID, p.id()), d);
+                }
+                ids.add(new BytesRef(p.id()));
+            }
+            w.deleteDocuments(new BooleanQuery.Builder()
+                    .add(new MatchAllDocsQuery(), Occur.MUST)
+                    .add(new TermInSetQuery(Schema.ID, ids), Occur.MUST_NOT)
+                    .build());
+            written = parts.size();
         }
-        w.deleteDocuments(new BooleanQuery.Builder()
-                .add(new MatchAllDocsQuery(), Occur.MUST)
-                .add(new TermInSetQuery(Schema.ID, ids), Occur.MUST_NOT)
-                .build());
         w.setLiveCommitData(Map.of(FINGERPRINT, fingerprint).entrySet());
         w.commit();
+        return written;
+    }
+
+    private static Document document(Part p, Map<Path, String> fileTerms) {
+        Document d = PartDocuments.of(p);
+        if (fileTerms != null) {
+            d.add(new StringField(SOURCE_FILE, fileTerms.get(p.where().file()), Field.Store.NO));
+        }
+        return d;
+    }
+
+    /**
+     * Each catalog file's term ({@link #SOURCE_FILE}), by the file its parts name; null when a
+     * part's file has no key (a catalog put together in memory), which re-indexes everything.
+     */
+    static Map<Path, String> fileTerms(Catalog catalog) {
+        Map<Path, List<String>> idsByFile = new LinkedHashMap<>();
+        for (Part p : catalog.parts()) {
+            Path f = p.where() == null ? null : p.where().file();
+            if (f == null || !catalog.fileKeys().containsKey(f)) {
+                return null;
+            }
+            idsByFile.computeIfAbsent(f, k -> new ArrayList<>()).add(p.id());
+        }
+        Map<Path, String> out = new HashMap<>();
+        for (var e : idsByFile.entrySet()) {
+            MessageDigest md = sha256();
+            md.update(catalog.fileKeys().get(e.getKey()).getBytes(StandardCharsets.UTF_8));
+            for (String id : e.getValue()) {
+                md.update((byte) 0);
+                md.update(id.getBytes(StandardCharsets.UTF_8));
+            }
+            out.put(e.getKey(), HexFormat.of().formatHex(md.digest()));
+        }
+        return out;
+    }
+
+    /**
+     * Replaces only the documents of files whose term changed: drops the documents of terms the
+     * catalog no longer has, adds those of terms the index lacks. False (nothing changed) when
+     * the index cannot be trusted for it: a document without a term (an index of an older
+     * version), or a kept term whose document count is not its parts' count.
+     *
+     * @return the documents written, or -1 when nothing was changed
+     */
+    private static int incremental(IndexWriter w, List<Part> parts, Map<Path, String> fileTerms) throws IOException {
+        try (DirectoryReader r = DirectoryReader.open(w)) {
+            Set<String> present = new HashSet<>();
+            Terms terms = MultiTerms.getTerms(r, SOURCE_FILE);
+            if (terms != null) {
+                TermsEnum te = terms.iterator();
+                for (BytesRef t = te.next(); t != null; t = te.next()) {
+                    present.add(t.utf8ToString());
+                }
+            }
+            IndexSearcher s = new IndexSearcher(r);
+            if (s.count(new TermInSetQuery(SOURCE_FILE, refs(present))) != r.numDocs()) {
+                return -1;
+            }
+            Set<String> current = new HashSet<>(fileTerms.values());
+            Set<String> kept = new HashSet<>(present);
+            kept.retainAll(current);
+            long expected = parts.stream()
+                    .filter(p -> kept.contains(fileTerms.get(p.where().file())))
+                    .count();
+            if (s.count(new TermInSetQuery(SOURCE_FILE, refs(kept))) != expected) {
+                return -1;
+            }
+            Set<String> stale = new HashSet<>(present);
+            stale.removeAll(current);
+            if (!stale.isEmpty()) {
+                w.deleteDocuments(new TermInSetQuery(SOURCE_FILE, refs(stale)));
+            }
+            int written = 0;
+            for (Part p : parts) {
+                if (!kept.contains(fileTerms.get(p.where().file()))) {
+                    w.addDocument(document(p, fileTerms));
+                    written++;
+                }
+            }
+            return written;
+        }
+    }
+
+    private static List<BytesRef> refs(Set<String> terms) {
+        List<BytesRef> out = new ArrayList<>();
+        for (String t : terms) {
+            out.add(new BytesRef(t));
+        }
+        return out;
+    }
+
+    private static MessageDigest sha256() {
+        try {
+            return MessageDigest.getInstance("SHA-256");
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("every Java runtime has SHA-256", e);
+        }
     }
 
     private static String storedFingerprint(Directory dir) throws IOException {
@@ -287,6 +439,14 @@ public final class PartIndex implements Closeable {
         }
     }
 
+    /** Documents written to bring the index up to date by this open: 0 when it was current. */
+    private int written;
+
+    /** Documents written to bring the index up to date by this open (0 when it was current or in memory). */
+    public int written() {
+        return written;
+    }
+
     /** Number of parts indexed. */
     public int size() {
         return reader.numDocs();
@@ -300,7 +460,8 @@ public final class PartIndex implements Closeable {
     List<Hit> search(Query query) {
         Sort order = new Sort(SortField.FIELD_SCORE, priceField(), new SortField(Schema.ID, SortField.Type.STRING));
         try {
-            int n = Math.max(1, reader.maxDoc());
+            // sized by the matches, not the catalog: the collector allocates its queue up front
+            int n = Math.max(1, searcher.count(query));
             TopFieldDocs top = searcher.search(query, n, order, true);
             StoredFields stored = searcher.storedFields();
             List<Hit> hits = new ArrayList<>();

@@ -42,6 +42,9 @@ public final class Units {
     private static final Map<String, Double> PREFIXES = new LinkedHashMap<>();
 
     /** A digit 1-9 in the mantissa (before any exponent): the number is not zero. */
+    /** A gain written as a ratio (V/mV) where dB is asked; compiled once, as every pattern read per value. */
+    private static final Pattern GAIN_RATIO = Pattern.compile("V/[mµu]?V");
+
     private static final Pattern NONZERO_DIGIT = Pattern.compile("^[-+]?[0-9.]*[1-9]");
 
     static {
@@ -185,7 +188,8 @@ public final class Units {
         }
         double number = Double.parseDouble(m.group(1));
         String unitText = m.group(2);
-        if (expected == Dimension.DECIBEL && unitText.replace(" ", "").matches("V/[mµu]?V")) {
+        if (expected == Dimension.DECIBEL
+                && GAIN_RATIO.matcher(unitText.replace(" ", "")).matches()) {
             throw gainAsRatio(t, number, unitText.replace(" ", ""));
         }
         double value = number * interpret(unitText, expected, t, example);
