@@ -125,6 +125,20 @@ final class ParsedFileCodec {
                 }
             };
         }
+        if (raw == long.class) {
+            shape.append("long");
+            return new Codec() {
+                @Override
+                public void write(DataOutputStream out, Object v, Path file) throws IOException {
+                    out.writeLong((Long) v);
+                }
+
+                @Override
+                public Object read(DataInputStream in, Path file) throws IOException {
+                    return in.readLong();
+                }
+            };
+        }
         if (raw == double.class) {
             shape.append("double");
             return new Codec() {
@@ -185,6 +199,10 @@ final class ParsedFileCodec {
             shape.append("Integer");
             return codecFor(int.class, new StringBuilder());
         }
+        if (raw == Long.class) {
+            shape.append("Long");
+            return codecFor(long.class, new StringBuilder());
+        }
         if (raw == Boolean.class) {
             shape.append("Boolean");
             return codecFor(boolean.class, new StringBuilder());
@@ -224,6 +242,70 @@ final class ParsedFileCodec {
                         case 1 -> Path.of(readString(in));
                         default -> throw new IOException("bad path kind " + kind);
                     };
+                }
+            };
+        }
+        if (raw == double[].class) {
+            shape.append("double[]");
+            return new Codec() {
+                @Override
+                public void write(DataOutputStream out, Object v, Path file) throws IOException {
+                    double[] a = (double[]) v;
+                    out.writeInt(a.length);
+                    for (double x : a) {
+                        out.writeDouble(x);
+                    }
+                }
+
+                @Override
+                public Object read(DataInputStream in, Path file) throws IOException {
+                    int n = in.readInt();
+                    if (n < 0 || n > in.available() / 8) {
+                        throw new IOException("bad array length " + n);
+                    }
+                    double[] a = new double[n];
+                    for (int i = 0; i < n; i++) {
+                        a[i] = in.readDouble();
+                    }
+                    return a;
+                }
+            };
+        }
+        if (raw.isInterface() && raw != List.class) {
+            // a problem's fact: in a catalog file always a CatalogFact (its records, by their place in the
+            // sealed list); any other interface is a sealed one whose permitted classes are records
+            List<Class<?>> kinds = new java.util.ArrayList<>();
+            permittedRecords(raw == dev.ampsieve.yaml.ProblemFact.class ? CatalogFact.class : raw, kinds);
+            if (kinds.isEmpty()) {
+                throw new IllegalStateException("no cache encoding for " + type.getTypeName()
+                        + ": add one to ParsedFileCodec (a new kind of catalog value)");
+            }
+            shape.append("one of ").append(raw.getName()).append('[');
+            Codec[] codecs = new Codec[kinds.size()];
+            for (int i = 0; i < codecs.length; i++) {
+                codecs[i] = referenceCodec(kinds.get(i), kinds.get(i), shape);
+                shape.append(';');
+            }
+            shape.append(']');
+            return new Codec() {
+                @Override
+                public void write(DataOutputStream out, Object v, Path file) throws IOException {
+                    int i = kinds.indexOf(v.getClass());
+                    if (i < 0) {
+                        throw new IOException(
+                                "no cache encoding for a " + v.getClass().getName());
+                    }
+                    out.writeShort(i);
+                    codecs[i].write(out, v, file);
+                }
+
+                @Override
+                public Object read(DataInputStream in, Path file) throws IOException {
+                    int i = in.readUnsignedShort();
+                    if (i >= codecs.length) {
+                        throw new IOException("bad kind " + i + " of " + raw.getSimpleName());
+                    }
+                    return codecs[i].read(in, file);
                 }
             };
         }
@@ -289,6 +371,17 @@ final class ParsedFileCodec {
         }
         throw new IllegalStateException("no cache encoding for " + type.getTypeName()
                 + ": add one to ParsedFileCodec (a new kind of catalog value)");
+    }
+
+    /** The record classes a sealed interface permits, depth first in declaration order. */
+    private static void permittedRecords(Class<?> c, List<Class<?>> out) {
+        if (c.isRecord()) {
+            out.add(c);
+        } else if (c.isSealed()) {
+            for (Class<?> k : c.getPermittedSubclasses()) {
+                permittedRecords(k, out);
+            }
+        }
     }
 
     /** A record: its components in order, built by the canonical constructor. */

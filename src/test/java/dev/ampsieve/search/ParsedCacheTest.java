@@ -135,6 +135,31 @@ class ParsedCacheTest {
     }
 
     /**
+     * A warning that is a fact (a CatalogFact: 600 °C/W is above the 500 °C/W warning bound) and a
+     * part with a measured lot (demo prec-bip-01) come back from the cache equal to a fresh parse.
+     */
+    @Test
+    void aWarningFactAndAMeasuredLotSurviveTheCache() throws Exception {
+        Path demo = DemoCatalog.copyTo(tmp);
+        Path fast = null;
+        for (Path f : CatalogLoader.files(demo)) {
+            if (Files.readString(f).contains("id: fast-06")) {
+                fast = f;
+            }
+        }
+        Files.writeString(
+                fast,
+                Files.readString(fast)
+                        .replace("quiescent-current: \"4.5 mA\"", "quiescent-current: \"4.5 mA\"\ntheta-ja: 600 C/W"));
+        Catalog plain = CatalogLoader.load(demo, false);
+        assertTrue(
+                plain.problems().stream().anyMatch(p -> p.fact() instanceof dev.ampsieve.catalog.CatalogFact),
+                plain.problems().toString());
+        assertTrue(plain.find("prec-bip-01").orElseThrow().measured() != null);
+        cachedEqualsParsed(demo, CatalogLoader.files(demo).size());
+    }
+
+    /**
      * Warnings keep their file, line and column through the cache. Each "not given" warning of the
      * synthetic catalog sits at its part's mapping: the line of the part's "  - id:" in the file,
      * column 5. Those lines are found here by reading the text, not by the loader.
