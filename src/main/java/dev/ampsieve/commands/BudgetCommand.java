@@ -12,7 +12,6 @@ import dev.ampsieve.report.BudgetText;
 import dev.ampsieve.stage.Stage;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
-import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -53,8 +52,8 @@ public final class BudgetCommand implements Callable<Integer> {
     @Mixin
     StageOption stageOption;
 
-    @ArgGroup(exclusive = true)
-    TableFormat format = new TableFormat();
+    @Mixin
+    TableFormat format;
 
     @Option(
             names = "--measured",
@@ -66,6 +65,7 @@ public final class BudgetCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
+        format.check();
         Catalog catalog = root.catalog();
         Candidates.noteUnusedFiles(catalog, spec.commandLine().getErr());
         Part p = part.in(catalog);

@@ -9,7 +9,6 @@ import dev.ampsieve.failure.Refusal;
 import dev.ampsieve.report.CompareReport;
 import dev.ampsieve.stage.Stage;
 import java.util.concurrent.Callable;
-import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -46,11 +45,12 @@ public final class CompareCommand implements Callable<Integer> {
     @Mixin
     StageOption stageOption;
 
-    @ArgGroup(exclusive = true)
-    TableFormat format = new TableFormat();
+    @Mixin
+    TableFormat format;
 
     @Override
     public Integer call() throws Exception {
+        format.check();
         Catalog catalog = root.catalog();
         Candidates.noteUnusedFiles(catalog, spec.commandLine().getErr());
         Part pa;

@@ -12,7 +12,6 @@ import dev.ampsieve.report.RankReport;
 import dev.ampsieve.stage.Stage;
 import java.util.List;
 import java.util.concurrent.Callable;
-import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -62,11 +61,12 @@ public final class RankCommand implements Callable<Integer> {
             description = "Pareto front of every candidate, not only of the parts that fit (CSV: its pareto column).")
     boolean all;
 
-    @ArgGroup(exclusive = true)
-    TableFormat format = new TableFormat();
+    @Mixin
+    TableFormat format;
 
     @Override
     public Integer call() throws Exception {
+        format.check();
         if (top < 1) {
             throw new Refusal("--top must be 1 or more, not " + top, ExitCode.USAGE, Place.field("--top"));
         }

@@ -68,6 +68,36 @@ class ShellSessionTest {
     }
 
     @Test
+    void aFormatOptionLastsOneCommandOnly() {
+        // the same command objects serve every line: --json or --csv on one line must not stick to the next
+        String printed = session(
+                "load " + catalog.resolve("stages/bridge-amp.yaml"),
+                "rank --top 1 --json",
+                "rank --top 1",
+                "budget zd-chop-01 --csv",
+                "budget zd-chop-01",
+                "compare zd-chop-01 prec-bip-05 --csv",
+                "compare zd-chop-01 prec-bip-05",
+                "rank --top 1 --json --csv");
+        // one JSON ranking, one text ranking; one CSV budget, one text budget; one CSV comparison, one text one
+        assertEquals(1, count(printed, "\"candidates\" : ["), printed);
+        assertEquals(1, count(printed, "Candidates ("), printed);
+        assertEquals(1, count(printed, "section,key,label,kind,output_v,"), printed);
+        assertEquals(1, count(printed, "worst-case sum  "), printed);
+        assertEquals(1, count(printed, "section,key,label,kind,a,b,unit,"), printed);
+        assertEquals(1, count(printed, "output error"), printed);
+        assertTrue(printed.contains("--json and --csv: give one of them, not both"), printed);
+    }
+
+    private static int count(String s, String what) {
+        int n = 0;
+        for (int i = s.indexOf(what); i >= 0; i = s.indexOf(what, i + 1)) {
+            n++;
+        }
+        return n;
+    }
+
+    @Test
     void theStageIsNamedBeforeTheBudgetIsFoldedSoItsHeaderStaysOneLine() {
         // the temporary file's long path used to be folded first and swapped for the short name
         // after, leaving "Stage      (current stage): inverting, noise gain" broken after "gain"
