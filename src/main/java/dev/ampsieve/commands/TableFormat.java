@@ -20,7 +20,7 @@ public final class TableFormat {
     boolean csv;
 
     /** Refuses both at once (a usage error, as picocli's own for an exclusive group). */
-    public void check() {
+    public void check() throws Refusal {
         if (json && csv) {
             throw new Refusal(
                     "--json and --csv: give one of them, not both", ExitCode.USAGE, Place.field("--json, --csv"));

@@ -491,13 +491,15 @@ final class ShellCommands {
 
         @Override
         public Integer call() throws UserError {
-            StageLoader.load(file); // all checks, with file:line:col
+            Stage loaded = StageLoader.load(file); // all checks, with file:line:col
             ctx.state.replace(answers(YamlFiles.read(file)), file, true);
             Map<String, String> a = ctx.state.answers();
-            // a transimpedance stage has no gain: its rf is what sets the output per ampere
+            // a transimpedance stage has no gain: its rf is what sets the output per ampere; a difference stage
+            // given by r1..r4 has none written: the gain its resistors set
+            String written = Questions.current("gain", a);
             String gain = Questions.topology(a) == dev.ampsieve.stage.Topology.TRANSIMPEDANCE
                     ? "rf " + a.get("rf")
-                    : "gain " + Questions.current("gain", a);
+                    : "gain " + (written != null ? written : Units.format(loaded.signalGain(), Dimension.NUMBER));
             out().println(ctx.fold(
                     "Loaded " + file + ": " + Questions.topology(a).key() + ", " + gain + ", "
                             + Questions.current(Answers.LIMIT, a) + " limit. 'show' lists it."));
