@@ -67,6 +67,15 @@ public final class Parts {
     }
 
     /** A lot file given on the command line ({@code --measured FILE}), read now, in place of the catalog's. */
+    /** Each part with its measured lot read ({@link #withLot(Part)}), in order. */
+    public static List<Part> withLots(List<Part> parts) throws InputException {
+        List<Part> out = new ArrayList<>(parts.size());
+        for (Part p : parts) {
+            out.add(withLot(p));
+        }
+        return out;
+    }
+
     public static Part withLot(Part p, Path file) throws InputException {
         return p.withMeasured(new Measured(file.toString(), file, Located.nowhere(file), LotReader.read(file)));
     }

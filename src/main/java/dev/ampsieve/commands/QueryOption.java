@@ -24,6 +24,7 @@ public final class QueryOption {
 
     /** Every catalog part, or those the query matches (index notes on {@code err}). */
     public List<Part> parts(Catalog catalog, PrintWriter err) throws InputException, IOException {
-        return query == null ? catalog.parts() : Candidates.matching(catalog, query, err);
+        // every budget of a ranking uses the parts' measured lots, with a query or without
+        return query == null ? Parts.withLots(catalog.parts()) : Candidates.matching(catalog, query, err);
     }
 }

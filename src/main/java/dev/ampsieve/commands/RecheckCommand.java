@@ -93,7 +93,7 @@ public final class RecheckCommand implements Callable<Integer> {
                     stage,
                     was.stagePath(),
                     catalog.root().toString(),
-                    catalog.parts(),
+                    Parts.withLots(catalog.parts()),
                     present,
                     change,
                     was.date(),

@@ -109,7 +109,7 @@ public final class RecordCommand implements Callable<Integer> {
                 stage,
                 stageOption.label(),
                 root.catalogDir().toString(),
-                catalog.parts(),
+                Parts.withLots(catalog.parts()),
                 chosen,
                 change != null,
                 date,

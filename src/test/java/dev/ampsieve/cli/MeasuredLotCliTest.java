@@ -180,4 +180,27 @@ class MeasuredLotCliTest {
         assertEquals(ExitCode.USAGE.code(), bad.code(), bad::toString);
         assertTrue(bad.err().startsWith("ampsieve: --meter-range: "), bad.err());
     }
+
+    @Test
+    void aRankingWithoutAQueryUsesTheLotAsTheBudgetDoes() throws Exception {
+        // demo prec-bip-01 carries demo-catalog/lots/prec-bip-01-lot.csv: its yield in the ranking (no --query, every
+        // part) must be the budget's, lot included; before, only a ranking with a query read the lots
+        String stage = "demo-catalog/stages/bridge-amp.yaml";
+        CliRun budget = CliRun.of("budget", "prec-bip-01", "--stage", stage, "--json");
+        CliRun rank = CliRun.of("rank", "--stage", stage, "--json", "--top", "48");
+        assertEquals(0, budget.code(), budget::toString);
+        assertEquals(0, rank.code(), rank::toString);
+        JsonNode b = new ObjectMapper().readTree(budget.out());
+        assertTrue(b.has("measured"), budget.out());
+        double fromBudget = b.get("yield").get("value").asDouble();
+        double fromRank = Double.NaN;
+        for (JsonNode c : new ObjectMapper().readTree(rank.out()).get("candidates")) {
+            if (c.get("part").asText().equals("prec-bip-01")) {
+                fromRank = c.get("yield").get("value").asDouble();
+            }
+        }
+        assertEquals(fromBudget, fromRank, 0.0);
+        // and it is not the datasheet-only yield the budget shows beside it
+        assertTrue(b.get("yieldFromDatasheet").get("value").asDouble() != fromRank, budget.out());
+    }
 }
