@@ -41,4 +41,13 @@ public sealed interface CatalogFact extends ProblemFact {
      * A warning: the maximum is {@code times} (rounded) the typical value, more than datasheets spread.
      */
     record Spread(String max, Quantity maxValue, String typ, Quantity typValue, long times) implements CatalogFact {}
+
+    /**
+     * A larger order's unit price above a smaller one's (a warning: usually swapped columns).
+     *
+     * @param higherQuantity the larger order quantity; {@code higherUnit} its unit price
+     * @param lowerQuantity  the smaller order quantity; {@code lowerUnit} its unit price
+     */
+    record PriceRises(int higherQuantity, double higherUnit, int lowerQuantity, double lowerUnit)
+            implements CatalogFact {}
 }

@@ -495,14 +495,7 @@ final class PartReader {
                 f.warning(
                         seq.at(),
                         field,
-                        String.format(
-                                Locale.ROOT,
-                                "the unit price at %d (%.2f) is above the price at" + " %d (%.2f)",
-                                higher.quantity(),
-                                higher.unit(),
-                                lower.quantity(),
-                                lower.unit()),
-                        "check the columns: larger orders usually cost less per unit");
+                        new CatalogFact.PriceRises(higher.quantity(), higher.unit(), lower.quantity(), lower.unit()));
             }
         }
         return price;

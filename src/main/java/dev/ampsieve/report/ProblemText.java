@@ -129,6 +129,9 @@ public final class ProblemText {
                             + ", so the verdict can only be uncertain",
                     "write 'trials: " + t.needed() + "' or more (at most " + t.most() + ")");
         }
+        if (f instanceof StageFact.Outside o) {
+            return outside(o);
+        }
         StageFact.CalibrationOrder c = (StageFact.CalibrationOrder) f;
         return new Words(
                 "the two calibration temperatures must differ, cold below hot; they are "
@@ -137,6 +140,45 @@ public final class ProblemText {
                 c.coldFromRange() && c.hotFromRange()
                         ? "give 'trim.cold' and 'trim.hot', such as '-40 C' and '85 C'"
                         : "write 'trim.cold' below 'trim.hot', such as 'cold: -40 C' and 'hot: 85 C'");
+    }
+
+    /** A stage number outside its rule's range, as the loader wrote it when it was words. */
+    private static Words outside(StageFact.Outside o) {
+        return switch (o.rule()) {
+            // a double as Java writes it (the value as read, "20.0")
+            case MAX_TO_SIGMA ->
+                new Words(
+                        o.value() + " is outside " + plain(o.low()) + ".." + plain(o.high()),
+                        "write how many standard deviations a datasheet maximum stands for; 3 is common practice");
+            case MAX_TRIALS ->
+                new Words(
+                        plain(o.value()) + " is below trials (" + plain(o.low()) + ")",
+                        "write max-trials at least " + plain(o.low()) + ", or lower trials");
+            case DIFFERENCE_GAIN ->
+                new Words(
+                        "a difference gain of " + plain(o.value()) + " cannot be built",
+                        "write the ratio r2/r1, such as 10 (at most " + plain(o.high()) + ")");
+            case FOLLOWER_GAIN ->
+                new Words(
+                        "a follower has gain 1, not " + plain(o.value()),
+                        "remove 'gain', or write 'topology: non-inverting'");
+            case NON_INVERTING_GAIN ->
+                new Words(
+                        "a non-inverting stage cannot have gain " + plain(o.value()) + " (below 1)",
+                        o.value() < 0
+                                ? "write the magnitude with 'topology: inverting'"
+                                : "write a gain of 1 or more, or use 'topology: inverting'");
+            case TRIM_MARGIN ->
+                new Words(
+                        plain(o.value()) + " is outside 1 to " + plain(o.high())
+                                + ": the range must at least cover the offset",
+                        "write a factor such as '1.5'");
+        };
+    }
+
+    /** A number as the user typed it: a whole number without ".0", else as Java writes a double. */
+    private static String plain(double v) {
+        return v == Math.rint(v) && Math.abs(v) < 1e15 ? String.valueOf((long) v) : String.valueOf(v);
     }
 
     /** A stage value past a bound: "V is above L, reason", and the bound's fix. */
@@ -235,6 +277,17 @@ public final class ProblemText {
             return new Words(
                     o.low() + " (" + q(o.lowValue()) + ") is above " + o.high() + " (" + q(o.highValue()) + ")",
                     o.fix());
+        }
+        if (f instanceof CatalogFact.PriceRises r) {
+            return new Words(
+                    String.format(
+                            java.util.Locale.ROOT,
+                            "the unit price at %d (%.2f) is above the price at %d (%.2f)",
+                            r.higherQuantity(),
+                            r.higherUnit(),
+                            r.lowerQuantity(),
+                            r.lowerUnit()),
+                    "check the columns: larger orders usually cost less per unit");
         }
         CatalogFact.Spread s = (CatalogFact.Spread) f;
         return new Words(

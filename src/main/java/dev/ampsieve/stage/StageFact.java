@@ -139,4 +139,29 @@ public sealed interface StageFact extends ProblemFact {
      */
     record CalibrationOrder(double cold, boolean coldFromRange, double hot, boolean hotFromRange)
             implements StageFact {}
+
+    /** A number of the stage outside the range its rule allows. */
+    enum Rule {
+        /** max-to-sigma outside 1..10: value, low 1, high 10 */
+        MAX_TO_SIGMA,
+        /** max-trials below trials: value max-trials, low trials */
+        MAX_TRIALS,
+        /** a difference gain not above 0 or above its ceiling: value gain, high the ceiling */
+        DIFFERENCE_GAIN,
+        /** a follower's gain other than 1: value gain */
+        FOLLOWER_GAIN,
+        /** a non-inverting gain below 1: value gain */
+        NON_INVERTING_GAIN,
+        /** trim.margin outside 1..its ceiling: value margin, low 1, high the ceiling */
+        TRIM_MARGIN
+    }
+
+    /**
+     * A number outside what its rule allows; {@code report.ProblemText} words each rule.
+     *
+     * @param value the number written (or derived, for a gain)
+     * @param low   the least allowed; NaN where the rule has none
+     * @param high  the most allowed; NaN where the rule has none
+     */
+    record Outside(Rule rule, double value, double low, double high) implements StageFact {}
 }

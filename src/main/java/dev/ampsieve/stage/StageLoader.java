@@ -335,8 +335,7 @@ public final class StageLoader {
                 f.error(
                         Fields.where(m, "max-to-sigma"),
                         "max-to-sigma",
-                        k + " is outside 1..10",
-                        "write how many standard deviations a datasheet maximum stands for; 3 is common practice");
+                        new StageFact.Outside(StageFact.Rule.MAX_TO_SIGMA, k, 1, 10));
             } else if (k != null) {
                 maxToSigma = k;
             }
@@ -349,8 +348,7 @@ public final class StageLoader {
                 f.error(
                         Fields.where(m, "max-trials"),
                         "max-trials",
-                        maxTrials + " is below trials (" + n + ")",
-                        "write max-trials at least " + n + ", or lower trials");
+                        new StageFact.Outside(StageFact.Rule.MAX_TRIALS, maxTrials, n, Double.NaN));
             }
             Long seed = f.longValue(m, "", "seed");
             Trim trim = trim(m, tMin, tMax);
@@ -667,8 +665,7 @@ public final class StageLoader {
                     f.error(
                             Fields.where(m, "gain"),
                             "gain",
-                            "a difference gain of " + plain(g) + " cannot be built",
-                            "write the ratio r2/r1, such as 10 (at most " + plain(MAX_GAIN) + ")");
+                            new StageFact.Outside(StageFact.Rule.DIFFERENCE_GAIN, g, 0, MAX_GAIN));
                     return bad;
                 }
                 if (r2 == null) {
@@ -847,8 +844,7 @@ public final class StageLoader {
                     f.error(
                             Fields.where(m, "gain"),
                             "gain",
-                            "a follower has gain 1, not " + plain(gain),
-                            "remove 'gain', or write 'topology: non-inverting'");
+                            new StageFact.Outside(StageFact.Rule.FOLLOWER_GAIN, gain, 1, 1));
                 }
                 return new double[] {rf != null ? rf : 0.0, Double.POSITIVE_INFINITY};
             }
@@ -911,10 +907,7 @@ public final class StageLoader {
                     f.error(
                             Fields.where(m, "gain"),
                             "gain",
-                            "a non-inverting stage cannot have gain " + plain(gain) + " (below 1)",
-                            gain < 0
-                                    ? "write the magnitude with 'topology: inverting'"
-                                    : "write a gain of 1 or more, or use 'topology: inverting'");
+                            new StageFact.Outside(StageFact.Rule.NON_INVERTING_GAIN, gain, 1, Double.NaN));
                     return new double[] {bad, bad};
                 }
                 if (gain == 1.0) {
@@ -1353,9 +1346,7 @@ public final class StageLoader {
                 f.error(
                         Fields.where(t, "margin"),
                         "trim.margin",
-                        plain(margin) + " is outside 1 to " + plain(MAX_TRIM_MARGIN)
-                                + ": the range must at least cover the offset",
-                        "write a factor such as '1.5'");
+                        new StageFact.Outside(StageFact.Rule.TRIM_MARGIN, margin, 1, MAX_TRIM_MARGIN));
             }
             String nodeWord = f.choice(t, "trim", "node", StageKeys.TRIM_NODES);
             TrimCircuit.Node node = "plus".equals(nodeWord) ? TrimCircuit.Node.PLUS : TrimCircuit.Node.MINUS;
@@ -1639,10 +1630,6 @@ public final class StageLoader {
         private static String exampleFor(String path, String key, Dimension d) {
             StageKeys.Key k = StageKeys.get(Fields.join(path, key));
             return k != null ? k.example() : d.example();
-        }
-
-        private static String plain(double v) {
-            return v == Math.rint(v) && Math.abs(v) < 1e15 ? String.valueOf((long) v) : String.valueOf(v);
         }
     }
 }

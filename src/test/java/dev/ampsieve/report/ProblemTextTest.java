@@ -40,6 +40,8 @@ class ProblemTextTest {
             new StageFact.HighGain(3e5, 1e5, 3e5),
             new StageFact.TooFewTrials(1000, 0.9999, 0.996173, 38411, 10_000_000),
             new StageFact.CalibrationOrder(20, true, 20, true),
+            new StageFact.Outside(StageFact.Rule.FOLLOWER_GAIN, 2, 1, 1),
+            new CatalogFact.PriceRises(1000, 1.25, 100, 1.10),
             new CatalogFact.OutOfBounds(v(6), 1, true, true, false, "an offset of volts leaves no room for a signal"),
             new CatalogFact.Sign(v(-1), true, "write the magnitude"),
             new CatalogFact.Order("typ", v(4e-3), "max", v(2e-3), "check the columns"),
@@ -105,5 +107,33 @@ class ProblemTextTest {
                         "s.yaml:4:35: resistor-ratio.tolerance: a ratio tolerance of 200 % is not a resistor tolerance;"
                                 + " write it with its unit, such as '0.1 %'"),
                 ProblemText.lines(new InputException(List.of(words, fact))));
+    }
+
+    @Test
+    void numbersOutsideTheirRuleReadAsTheLoaderWroteThem() {
+        // the messages the stage and catalog loaders wrote before these numbers became facts
+        assertEquals(
+                "20.0 is outside 1..10",
+                ProblemText.message(Problem.error(
+                        AT, "max-to-sigma", new StageFact.Outside(StageFact.Rule.MAX_TO_SIGMA, 20, 1, 10))));
+        Problem trials = Problem.error(
+                AT, "max-trials", new StageFact.Outside(StageFact.Rule.MAX_TRIALS, 1000, 2000, Double.NaN));
+        assertEquals("1000 is below trials (2000)", ProblemText.message(trials));
+        assertEquals("write max-trials at least 2000, or lower trials", ProblemText.fix(trials));
+        assertEquals(
+                "a follower has gain 1, not 2.5",
+                ProblemText.message(
+                        Problem.error(AT, "gain", new StageFact.Outside(StageFact.Rule.FOLLOWER_GAIN, 2.5, 1, 1))));
+        assertEquals(
+                "write the magnitude with 'topology: inverting'",
+                ProblemText.fix(Problem.error(
+                        AT, "gain", new StageFact.Outside(StageFact.Rule.NON_INVERTING_GAIN, -3, 1, Double.NaN))));
+        assertEquals(
+                "a non-inverting stage cannot have gain 0.5 (below 1)",
+                ProblemText.message(Problem.error(
+                        AT, "gain", new StageFact.Outside(StageFact.Rule.NON_INVERTING_GAIN, 0.5, 1, Double.NaN))));
+        assertEquals(
+                "the unit price at 1000 (1.25) is above the price at 100 (1.10)",
+                ProblemText.message(Problem.warning(AT, "price", new CatalogFact.PriceRises(1000, 1.25, 100, 1.10))));
     }
 }

@@ -5,7 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.ampsieve.yaml.InputException;
-import dev.ampsieve.yaml.Problem;
 import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
@@ -22,7 +21,8 @@ class TrimCircuitKeysTest {
 
     private static String problem(String yaml) {
         InputException e = assertThrows(InputException.class, () -> stage(yaml));
-        List<String> all = e.problems().stream().map(Problem::toString).toList();
+        List<String> all =
+                e.problems().stream().map(dev.ampsieve.report.ProblemText::line).toList();
         assertEquals(1, all.size(), () -> "expected one problem, got " + all);
         return all.get(0);
     }
