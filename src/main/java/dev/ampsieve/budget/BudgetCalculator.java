@@ -140,16 +140,31 @@ public final class BudgetCalculator {
         boolean constraintsOk = constraints.stream().allMatch(ConstraintResult::ok);
         boolean sample = constraintsOk || sampleRejected;
         double fixed = fixedInYield(stage, terms, false, false);
-        YieldResult yield = sample
-                ? new YieldModel(stage, v, fixed, false, false).run(yieldTarget(stage), wcCounted(stage, terms))
-                : new YieldResult(0, 0, 0, 0, "none-pass");
-
+        boolean withTrim = sample
+                && stage.criterion().kind() == Criterion.Kind.YIELD
+                && trimOf(stage).allowed();
+        YieldModel before = sample ? new YieldModel(stage, v, fixed, false, false) : null;
+        YieldResult yield;
         if (!sample) {
+            yield = new YieldResult(0, 0, 0, 0, "none-pass");
             trimmed = trimmed.withYield(yield); // the verdict is no-fit without either yield
-        } else if (stage.criterion().kind() == Criterion.Kind.YIELD
-                && trimOf(stage).allowed()) {
-            // simulated once here so reports and ranking read it instead of recomputing
-            trimmed = trimmed.withYield(trimmedYield(stage, v, terms));
+        } else if (withTrim && trimOf(stage).method() != Trim.Method.TWO_TEMPERATURE) {
+            // both yields on the same simulated units, the draws they share made once; simulated here so reports
+            // and ranking read the trimmed one instead of recomputing
+            YieldResult[] both = YieldModel.beforeAndAfterTrim(
+                    before,
+                    yieldTarget(stage),
+                    wcCounted(stage, terms),
+                    trimmedModel(stage, v, terms),
+                    yieldTarget(stage),
+                    trimmedBound(stage, v, terms));
+            yield = both[0];
+            trimmed = trimmed.withYield(both[1]);
+        } else {
+            yield = before.run(yieldTarget(stage), wcCounted(stage, terms));
+            if (withTrim) {
+                trimmed = trimmed.withYield(trimmedYield(stage, v, terms));
+            }
         }
         Trimmed afterTrim = trimmed;
         Verdict verdict = verdict(
@@ -270,17 +285,33 @@ public final class BudgetCalculator {
     }
 
     private static YieldResult trimmedYield(Stage stage, PartValues v, List<TermResult> terms) {
-        boolean two = trimOf(stage).method() == Trim.Method.TWO_POINT;
-        // what the trim circuit cannot reach of the offset stays, held at its bound (each unit's offset is removed in
-        // full)
-        double fixed =
-                fixedInYield(stage, terms, true, two) + TrimSizing.of(stage, v).uncoveredV();
-        double bound = trimmed(stage, v, terms, trimOf(stage).method()).worstCaseV();
+        double bound = trimmedBound(stage, v, terms);
         if (trimOf(stage).method() == Trim.Method.TWO_TEMPERATURE) {
-            return new TwoTemperatureYield(stage, v, fixed, CalibrationLine.of(stage, trimOf(stage)))
+            return new TwoTemperatureYield(
+                            stage, v, trimmedFixed(stage, v, terms), CalibrationLine.of(stage, trimOf(stage)))
                     .run(yieldTarget(stage), bound);
         }
-        return new YieldModel(stage, v, fixed, true, two).run(yieldTarget(stage), bound);
+        return trimmedModel(stage, v, terms).run(yieldTarget(stage), bound);
+    }
+
+    /** The Monte Carlo model after the stage's one- or two-point trim. */
+    private static YieldModel trimmedModel(Stage stage, PartValues v, List<TermResult> terms) {
+        boolean two = trimOf(stage).method() == Trim.Method.TWO_POINT;
+        return new YieldModel(stage, v, trimmedFixed(stage, v, terms), true, two);
+    }
+
+    /**
+     * Output volts held at their limits after the trim: what the trim circuit cannot reach of the offset stays,
+     * held at its bound (each unit's offset is removed in full).
+     */
+    private static double trimmedFixed(Stage stage, PartValues v, List<TermResult> terms) {
+        boolean two = trimOf(stage).method() == Trim.Method.TWO_POINT;
+        return fixedInYield(stage, terms, true, two) + TrimSizing.of(stage, v).uncoveredV();
+    }
+
+    /** The trimmed worst case, which bounds every trimmed unit's error. */
+    private static double trimmedBound(Stage stage, PartValues v, List<TermResult> terms) {
+        return trimmed(stage, v, terms, trimOf(stage).method()).worstCaseV();
     }
 
     /** The worst-case total of the terms that count. */

@@ -168,6 +168,33 @@ final class YieldModel {
      * by the worst case then has a yield of exactly 100 % even where the two sums round apart.
      */
     YieldResult run(double target, double bound) {
+        return simulate(new YieldModel[] {this}, new double[] {target}, new double[] {bound})[0];
+    }
+
+    /**
+     * The yields of one part in one stage before and after the stage's one- or two-point trim,
+     * estimated on the same simulated units: each result is exactly what {@link #run(double,
+     * double)} gives for that model alone (same units, same looks, same stopping point), while the
+     * random draws the two share are made once. The same units on both sides also make the
+     * difference between the two yields the trim's, not the sampling's (common random numbers).
+     */
+    static YieldResult[] beforeAndAfterTrim(
+            YieldModel before,
+            double targetBefore,
+            double boundBefore,
+            YieldModel after,
+            double targetAfter,
+            double boundAfter) {
+        if (before.trimmed || !after.trimmed || before.s != after.s || !before.partId.equals(after.partId)) {
+            throw new IllegalArgumentException("one part and stage, untrimmed then trimmed");
+        }
+        return simulate(new YieldModel[] {before, after}, new double[] {targetBefore, targetAfter}, new double[] {
+            boundBefore, boundAfter
+        });
+    }
+
+    /** Without sampling: every unit passes, none does, or null (sample). */
+    private YieldResult decided(double bound) {
         if (Double.isNaN(limit)) {
             return new YieldResult(0, 0, 0, 0, "none-pass");
         }
@@ -177,78 +204,197 @@ final class YieldModel {
         if (minError() > limit) {
             return new YieldResult(0.0, 0.0, 0.0, 0, "none-pass");
         }
-        UnitStream rng = UnitStream.of(s.seed(), partId);
-        int n = SequentialYield.BLOCK;
-        double[] vos = new double[n];
-        double[] drift = new double[n];
-        double[] ib25 = new double[n];
-        double[] ib0 = new double[n];
-        double[] ib1 = new double[n];
-        double[] ios25 = new double[n];
-        double[] ios0 = new double[n];
-        double[] ios1 = new double[n];
-        double[] ratio = new double[n];
-        double[] aging = new double[n];
-        double[] res = new double[n];
-        boolean need25 = trimmed || atRef[0] || atRef[1];
-        // without a target every one of the stage's units; with one, blocks until the answer is plain or the cap
-        int units = Double.isNaN(target) ? s.trials() : Math.max(s.trials(), s.maxTrials());
-        SequentialYield.Estimate e = SequentialYield.run(Math.max(1, units), target, size -> {
-            fill(vosD, rng, vos, size);
-            fill(driftD, rng, drift, size);
-            // a unit's 25 °C currents matter only after a trim or at a range end at 25 °C; an end at 25 °C uses them
-            fill(need25 ? ibD : null, rng, ib25, size);
-            fill(atRef[0] ? null : ibD, rng, ib0, size);
-            fill(atRef[1] ? null : ibD, rng, ib1, size);
-            fill(need25 ? iosD : null, rng, ios25, size);
-            fill(atRef[0] ? null : iosD, rng, ios0, size);
-            fill(atRef[1] ? null : iosD, rng, ios1, size);
-            fill(agingD, rng, aging, size);
-            uniform(tol, rng, ratio, size);
-            uniform(resolution, rng, res, size);
-            return count(size, vos, drift, ib25, ib0, ib1, ios25, ios0, ios1, ratio, aging, res);
-        });
-        return new YieldResult(e.value(), e.low(), e.high(), (int) e.trials(), "sampled");
+        return null;
     }
 
-    private int count(
-            int size,
-            double[] vos,
-            double[] drift,
-            double[] ib25,
-            double[] ib0,
-            double[] ib1,
-            double[] ios25,
-            double[] ios0,
-            double[] ios1,
-            double[] ratio,
-            double[] aging,
-            double[] res) {
+    /**
+     * Runs models of one part and stage on one set of simulated units. Every model draws the same
+     * variables from the same distributions (they depend on the part and the stage, not on the trim),
+     * in a fixed order from the part's stream ({@link UnitStream#of}); what only a trimmed unit needs
+     * (its 25 °C currents where no range end is at 25 °C, the trim resolution) comes from a second
+     * stream of its own, so an untrimmed model's units are the same whether or not a trimmed one runs
+     * beside it. Blocks go on while any model is undecided; each model takes the blocks up to its
+     * own stopping point.
+     */
+    private static YieldResult[] simulate(YieldModel[] ms, double[] targets, double[] bounds) {
+        YieldResult[] out = new YieldResult[ms.length];
+        SequentialYield.Run[] runs = new SequentialYield.Run[ms.length];
+        YieldModel any = null;
+        YieldModel trimmedOne = null;
+        for (int m = 0; m < ms.length; m++) {
+            out[m] = ms[m].decided(bounds[m]);
+            if (out[m] == null) {
+                int units =
+                        Double.isNaN(targets[m]) ? ms[m].s.trials() : Math.max(ms[m].s.trials(), ms[m].s.maxTrials());
+                runs[m] = new SequentialYield.Run(Math.max(1, units), targets[m]);
+                any = ms[m];
+                trimmedOne = ms[m].trimmed ? ms[m] : trimmedOne;
+            }
+        }
+        if (any == null) {
+            return out;
+        }
+        Units u = new Units(any, trimmedOne);
+        while (true) {
+            int size = 0;
+            boolean trimmedRunning = false;
+            for (int m = 0; m < ms.length; m++) {
+                if (runs[m] == null || runs[m].done()) {
+                    continue;
+                }
+                int n = runs[m].nextSize();
+                if (size != 0 && n != size) {
+                    throw new IllegalStateException("models out of step: " + n + " and " + size + " units");
+                }
+                size = n;
+                trimmedRunning |= ms[m].trimmed;
+            }
+            if (size == 0) {
+                break;
+            }
+            u.drawShared(size);
+            if (trimmedRunning) {
+                u.drawTrimOnly(size);
+            }
+            for (int m = 0; m < ms.length; m++) {
+                if (runs[m] != null && !runs[m].done()) {
+                    runs[m].add(ms[m].count(size, u));
+                }
+            }
+        }
+        for (int m = 0; m < ms.length; m++) {
+            if (runs[m] != null) {
+                SequentialYield.Estimate e = runs[m].estimate();
+                out[m] = new YieldResult(e.value(), e.low(), e.high(), (int) e.trials(), "sampled");
+            }
+        }
+        return out;
+    }
+
+    /**
+     * One block of simulated units: the variables of {@link YieldModel}'s formula, drawn once for
+     * every model of the run. The uniform ones are kept as raw draws in [-1, 1) that each model
+     * scales by its own half-width (a two-point trim removes the resistor ratio: half-width 0).
+     */
+    private static final class Units {
+        private final YieldModel m;
+        private final UnitStream rng;
+        private final UnitStream trimRng;
+        private final boolean anyAtRef;
+        private final boolean ratioDrawn;
+        private final double resolution;
+        final double[] vos = new double[SequentialYield.BLOCK];
+        final double[] drift = new double[SequentialYield.BLOCK];
+        final double[] ib25 = new double[SequentialYield.BLOCK];
+        final double[] ib0 = new double[SequentialYield.BLOCK];
+        final double[] ib1 = new double[SequentialYield.BLOCK];
+        final double[] ios25 = new double[SequentialYield.BLOCK];
+        final double[] ios0 = new double[SequentialYield.BLOCK];
+        final double[] ios1 = new double[SequentialYield.BLOCK];
+        final double[] aging = new double[SequentialYield.BLOCK];
+        final double[] ratio = new double[SequentialYield.BLOCK];
+        final double[] res = new double[SequentialYield.BLOCK];
+
+        /** {@code m}: any model of the run (they share distributions); {@code trimmed}: the trimmed one, or null. */
+        Units(YieldModel m, YieldModel trimmed) {
+            this.m = m;
+            this.rng = UnitStream.of(m.s.seed(), m.partId);
+            this.trimRng = trimmed != null ? UnitStream.of(m.s.seed(), m.partId, UnitStream.TRIM) : null;
+            this.anyAtRef = m.atRef[0] || m.atRef[1];
+            this.ratioDrawn = m.s.ratioTolerance() != 0;
+            this.resolution = trimmed != null ? trimmed.resolution : 0.0;
+        }
+
+        /** What every model reads, in the order of the part's stream. */
+        void drawShared(int size) {
+            fill(m.vosD, rng, vos, size);
+            fill(m.driftD, rng, drift, size);
+            // a unit's 25 °C currents: here when a range end is at 25 °C (every model reads them), else trimmed only
+            if (anyAtRef) {
+                fill(m.ibD, rng, ib25, size);
+            }
+            fill(m.atRef[0] ? null : m.ibD, rng, ib0, size);
+            fill(m.atRef[1] ? null : m.ibD, rng, ib1, size);
+            if (anyAtRef) {
+                fill(m.iosD, rng, ios25, size);
+            }
+            fill(m.atRef[0] ? null : m.iosD, rng, ios0, size);
+            fill(m.atRef[1] ? null : m.iosD, rng, ios1, size);
+            fill(m.agingD, rng, aging, size);
+            if (ratioDrawn) {
+                raw(rng, ratio, size);
+            }
+        }
+
+        /** What only a trimmed unit reads, from the trim's own stream. */
+        void drawTrimOnly(int size) {
+            if (!anyAtRef) {
+                fill(m.ibD, trimRng, ib25, size);
+                fill(m.iosD, trimRng, ios25, size);
+            }
+            if (resolution != 0) {
+                raw(trimRng, res, size);
+            }
+        }
+
+        private static void fill(TruncatedNormal d, UnitStream rng, double[] out, int n) {
+            if (d != null) { // an absent variable stays 0 in every block
+                d.fill(rng, out, n);
+            }
+        }
+
+        private static void raw(UnitStream rng, double[] out, int n) {
+            for (int i = 0; i < n; i++) {
+                out[i] = 2.0 * rng.uniform() - 1.0;
+            }
+        }
+    }
+
+    /** How many of the block's first {@code size} units pass, by this model. */
+    private int count(int size, Units u) {
         int passes = 0;
         double room = limit - fixed;
         double vosRemoved = trimmed ? 1.0 : 0.0;
         double perDrift = driftFromVos ? 1.0 / PhysicalConstants.ROOM_KELVIN : 0.0;
+        double[] vos = u.vos;
+        double[] drift = u.drift;
+        double[] ib25 = u.ib25;
+        double[] ios25 = u.ios25;
+        double[] aging = u.aging;
+        double[] ratio = u.ratio;
+        double[] res = u.res;
+        // each end's currents: the unit's 25 °C draw at an end at 25 °C, else its own draw scaled to the limit there
+        double[] ibA = atRef[0] ? ib25 : u.ib0;
+        double[] ibB = atRef[1] ? ib25 : u.ib1;
+        double[] iosA = atRef[0] ? ios25 : u.ios0;
+        double[] iosB = atRef[1] ? ios25 : u.ios1;
+        double fibA = atRef[0] ? 1.0 : fib[0];
+        double fibB = atRef[1] ? 1.0 : fib[1];
+        double fiosA = atRef[0] ? 1.0 : fios[0];
+        double fiosB = atRef[1] ? 1.0 : fios[1];
+        double dtA = dt[0];
+        double dtB = dt[1];
+        double half = tol;
+        double resHalf = resolution;
+        // the two range ends written out: the compiler of short commands (C1) does not unroll loops
         for (int i = 0; i < size; i++) {
             double v25 = vos[i];
             double dr = driftFromVos ? v25 * perDrift : drift[i];
-            double worst = 0;
-            for (int j = 0; j < 2; j++) {
-                double vT = v25 + dr * dt[j];
-                if (vT > clamp) {
-                    vT = clamp;
-                } else if (vT < -clamp) {
-                    vT = -clamp;
-                }
-                // each unit's currents at this end: its 25 °C draw at 25 °C, else its own draw scaled to the limit here
-                double ibT = atRef[j] ? ib25[i] : fib[j] * (j == 0 ? ib0[i] : ib1[i]);
-                double iosT = atRef[j] ? ios25[i] : fios[j] * (j == 0 ? ios0[i] : ios1[i]);
-                double e = ng * (vT - vosRemoved * v25 + aging[i])
-                        + perIb * (ibT - ibTrimmed * ib25[i])
-                        + perIos * (iosT - iosTrimmed * ios25[i])
-                        + res[i];
-                worst = Math.max(worst, Math.abs(e));
-            }
-            worst += Math.abs(gainCoef * ratio[i]); // at the end of the swing where it adds to the offset
+            double ibRef = ibTrimmed * ib25[i];
+            double iosRef = iosTrimmed * ios25[i];
+            double r = resHalf * res[i];
+            double vA = clamped(v25 + dr * dtA);
+            double eA = ng * (vA - vosRemoved * v25 + aging[i])
+                    + perIb * (atEnd(fibA, ibA[i], atRef[0]) - ibRef)
+                    + perIos * (atEnd(fiosA, iosA[i], atRef[0]) - iosRef)
+                    + r;
+            double vB = clamped(v25 + dr * dtB);
+            double eB = ng * (vB - vosRemoved * v25 + aging[i])
+                    + perIb * (atEnd(fibB, ibB[i], atRef[1]) - ibRef)
+                    + perIos * (atEnd(fiosB, iosB[i], atRef[1]) - iosRef)
+                    + r;
+            double worst = Math.max(Math.max(0, Math.abs(eA)), Math.abs(eB));
+            worst += Math.abs(gainCoef * (half * ratio[i])); // at the end of the swing where it adds to the offset
             if (worst <= room) {
                 passes++;
             }
@@ -256,22 +402,19 @@ final class YieldModel {
         return passes;
     }
 
-    private static void fill(TruncatedNormal d, UnitStream rng, double[] out, int n) {
-        if (d == null) {
-            java.util.Arrays.fill(out, 0, n, 0.0);
-        } else {
-            d.fill(rng, out, n);
-        }
+    /** A unit's current at a range end: its 25 °C draw as it is, else its draw scaled to the limit there. */
+    private static double atEnd(double factor, double draw, boolean atRef) {
+        return atRef ? draw : factor * draw;
     }
 
-    private static void uniform(double half, UnitStream rng, double[] out, int n) {
-        if (half == 0) {
-            java.util.Arrays.fill(out, 0, n, 0.0);
-            return;
+    private double clamped(double vT) {
+        if (vT > clamp) {
+            return clamp;
         }
-        for (int i = 0; i < n; i++) {
-            out[i] = half * (2.0 * rng.uniform() - 1.0);
+        if (vT < -clamp) {
+            return -clamp;
         }
+        return vT;
     }
 
     /** Interval of a variable's values: [lo, hi], infinite when untruncated, {0, 0} when absent. */

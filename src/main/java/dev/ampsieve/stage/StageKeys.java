@@ -91,8 +91,14 @@ public final class StageKeys {
     public static final int DEFAULT_TRIALS = 20_000;
     public static final int MIN_TRIALS = 100;
     public static final int MAX_TRIALS = 10_000_000;
-    /** Cap on the units simulated under a yield criterion while the answer is undecided. */
-    public static final int DEFAULT_MAX_TRIALS = 1_000_000;
+    /**
+     * Cap on the units simulated under a yield criterion while the answer is undecided. At 200,000 units
+     * the 95 % interval of a 99.9 % yield is about +/- 0.014 points (1.96 sqrt(0.999 x 0.001 / 200000)):
+     * a part still undecided there sits closer to its target than the datasheet-based spreads can
+     * tell apart, and the advice says how many units would settle it. Was 1,000,000: the few parts
+     * that sat at the target then cost more units than all the others of a 10,000-part ranking.
+     */
+    public static final int DEFAULT_MAX_TRIALS = 200_000;
 
     public static final int DEFAULT_QUANTITY = 1000;
     public static final int MAX_QUANTITY = 1_000_000_000;

@@ -23,7 +23,8 @@ import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
  * <p>Seeding: the 128-bit state is the first 16 bytes of SHA-256 over the stage's seed (8 bytes,
  * big-endian) and the part id (UTF-8). Each part thus has a stream of its own, independent of
  * which thread budgets it and in what order, so a ranking computed on several cores gives the
- * same numbers as one computed on one. Not thread-safe: one run, one stream.
+ * same numbers as one computed on one. A part has further streams for draws of one purpose
+ * ({@link #of(long, String, String)}). Not thread-safe: one run, one stream.
  */
 public final class UnitStream {
 
@@ -35,9 +36,24 @@ public final class UnitStream {
         this.normal = ZigguratSampler.NormalizedGaussian.of(rng);
     }
 
+    /** Names the second stream of a part: the draws only a trimmed unit needs. */
+    public static final String TRIM = "trim";
+
     /** The stream of part {@code partId} under a stage seeded with {@code seed}. */
     public static UnitStream of(long seed, String partId) {
-        byte[] id = partId.getBytes(StandardCharsets.UTF_8);
+        return of(seed, partId.getBytes(StandardCharsets.UTF_8));
+    }
+
+    /**
+     * A further stream of the same part for draws of one {@code purpose} ({@link #TRIM}), independent
+     * of the first: its state hashes the seed, the id, a zero byte (which no id holds: ids are
+     * lowercase letters, digits and dashes) and the purpose.
+     */
+    public static UnitStream of(long seed, String partId, String purpose) {
+        return of(seed, (partId + '\0' + purpose).getBytes(StandardCharsets.UTF_8));
+    }
+
+    private static UnitStream of(long seed, byte[] id) {
         ByteBuffer in =
                 ByteBuffer.allocate(Long.BYTES + id.length).putLong(seed).put(id);
         ByteBuffer h = ByteBuffer.wrap(sha256(in.array()));

@@ -8,7 +8,6 @@ import dev.ampsieve.catalog.Spread;
 import dev.ampsieve.fixtures.PartFixture;
 import dev.ampsieve.fixtures.StageFixture;
 import dev.ampsieve.stage.Criterion;
-import dev.ampsieve.stats.SequentialYield;
 import org.apache.commons.math3.distribution.NormalDistribution;
 import org.junit.jupiter.api.Test;
 
@@ -102,14 +101,15 @@ class YieldTest {
 
     @Test
     void stopsEarlyAndReproducibly() {
-        // true yield about 68 % against a 99 % target: decided after the first block of 1000
+        // true yield about 68 % against a 99 % target: decided at the first look, after 100 units (the
+        // interim upper end for about 68 of 100 is near 0.82: SequentialYieldTest works the formula)
         StageFixture s = StageFixture.follower().limitV(1e-3);
         s.criterion = Criterion.yield(0.99);
         s.seed = 1234;
         PartFixture p = offsetOnly(1e-3, null);
         YieldResult a = BudgetCalculator.compute(s.build(), p.build()).yield();
         YieldResult b = BudgetCalculator.compute(s.build(), p.build()).yield();
-        assertEquals(SequentialYield.BLOCK, a.trials());
+        assertEquals(100, a.trials());
         assertEquals(a, b);
         // P(|Z| <= 1) / P(|Z| <= 3) = 0.6826895 / 0.9973002 = 0.684537 (reference-checks §7; the typical-only
         // offset is truncated at 3 sigma) inside its interval
@@ -235,5 +235,36 @@ class YieldTest {
         assertEquals("sampled", y.decided());
         assertEquals(20000, y.trials());
         assertTrue(Math.abs(y.value() - 0.820287) < 0.012, "0.820 expected, got " + y.value());
+    }
+
+    @Test
+    void beforeAndAfterTheTrimEachYieldIsWhatItsOwnRunGives() {
+        // follower, -40..85 °C, vos max 1 mV (sigma 1/3 mV), drift max 5 µV/°C (sigma 5/3), limit 250 µV, target
+        // 99 %, one-point trim with a 10 µV resolution. Untrimmed about half the units pass (|vos| <= 0.75 sigma:
+        // P = 0.547 / 0.9973 [A&S 26.1, from memory]), so that run stops at its first look; trimmed, |drift| x
+        // 65 °C + 10 µV <= 250 µV passes |drift| <= 2.22 sigma, about 97 %, so it runs on past it. Both are
+        // simulated together on the same units (BudgetCalculator); each must be exactly the estimate its model
+        // gives alone: the untrimmed one as the same stage without a trim gives it, the trimmed one as
+        // BudgetCalculator.trimmedYield gives it.
+        StageFixture s = StageFixture.follower().limitV(250e-6).temps(-40, 85);
+        s.criterion = Criterion.yield(0.99);
+        PartFixture p = PartFixture.ideal().vos(null, 1e-3, null).drift(null, 5e-6);
+        StageFixture plain = StageFixture.follower().limitV(250e-6).temps(-40, 85);
+        plain.criterion = Criterion.yield(0.99);
+        s.trim = new dev.ampsieve.stage.Trim(true, dev.ampsieve.stage.Trim.Method.ONE_POINT, 10e-6, 0);
+        Budget both = BudgetCalculator.compute(s.build(), p.build());
+        YieldResult before = BudgetCalculator.compute(plain.build(), p.build()).yield();
+        YieldResult after = BudgetCalculator.trimmedYield(s.build(), p.build());
+        assertEquals(before, both.yield());
+        assertEquals(after, both.trimmed().yield());
+        assertEquals(100, before.trials());
+        assertTrue(after.trials() > 100, "trimmed run stopped at " + after.trials());
+        double untrimmed = new NormalDistribution().probability(-0.75, 0.75) / 0.9973002;
+        assertTrue(Math.abs(before.value() - untrimmed) < 0.15, before.value() + " against " + untrimmed);
+        double trimmed =
+                new NormalDistribution().probability(-240.0 / 65 / (5.0 / 3), 240.0 / 65 / (5.0 / 3)) / 0.9973002;
+        assertTrue(
+                after.low() <= trimmed && trimmed <= after.high(),
+                trimmed + " not in [" + after.low() + ", " + after.high() + "]");
     }
 }

@@ -15,9 +15,9 @@ class MaxTrialsTest {
     private static final Path NAME = Path.of("s.yaml");
 
     @Test
-    void defaultsToAMillionUnitsOrTrialsWhenThatIsMore() throws InputException {
-        assertEquals(
-                1_000_000, StageLoader.parse("gain: 10\nlimit: 1 mV\n", NAME).maxTrials());
+    void defaultsTo200000UnitsOrTrialsWhenThatIsMore() throws InputException {
+        // 200,000: the 95 % half-width of a 99.9 % yield there is 1.96 sqrt(0.999 x 0.001 / 200000) = 0.00014 [Calc]
+        assertEquals(200_000, StageLoader.parse("gain: 10\nlimit: 1 mV\n", NAME).maxTrials());
         assertEquals(
                 2_000_000,
                 StageLoader.parse("gain: 10\nlimit: 1 mV\ntrials: 2000000\n", NAME)

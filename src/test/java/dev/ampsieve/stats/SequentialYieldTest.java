@@ -4,6 +4,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.ArrayList;
+import java.util.List;
 import org.apache.commons.math3.random.Well19937c;
 import org.junit.jupiter.api.Test;
 
@@ -24,12 +26,44 @@ class SequentialYieldTest {
 
     @Test
     void stopsOnceTheIntervalIsClearOfTheTarget() {
-        // true yield 0.5 against a 0.99 target: after one block of 1000 the Wilson interval
-        // (about 0.47..0.53) lies far below the target
+        // true yield 0.5 against a 0.99 target: at the first look, after 100 units, the interim
+        // Wilson interval (z 3.29: about 0.34..0.66 for 50 of 100) lies far below the target
         SequentialYield.Estimate e = SequentialYield.run(20000, 0.99, bernoulli(3, 0.5));
         assertTrue(e.stoppedEarly());
-        assertEquals(SequentialYield.BLOCK, e.trials());
+        assertEquals(100, e.trials());
         assertTrue(e.high() < 0.99);
+    }
+
+    @Test
+    void looksAfter100And200And500UnitsThenEveryThousand() {
+        // every unit passes against 0.999: the interim Wilson low end with all n passing is n / (n + z^2)
+        // (Wilson 1927, score interval with p = 1), at least 0.999 from n = 999 z^2 = 999 x 10.8276 = 10,817
+        // [Calc]: the first look at or past it is the one after 11,000 units
+        List<Integer> sizes = new ArrayList<>();
+        SequentialYield.Estimate e = SequentialYield.run(100_000, 0.999, size -> {
+            sizes.add(size);
+            return size;
+        });
+        assertEquals(11_000, e.trials());
+        assertEquals(List.of(100, 100, 300, 500, 1000, 1000, 1000, 1000, 1000, 1000, 1000, 1000, 1000, 1000), sizes);
+        // without a target: blocks of 1000 and no look; the last block is what remains
+        sizes.clear();
+        SequentialYield.run(2500, Double.NaN, size -> {
+            sizes.add(size);
+            return size;
+        });
+        assertEquals(List.of(1000, 1000, 500), sizes);
+    }
+
+    @Test
+    void aFarMissIsDecidedAtTheFirstLook() {
+        // exactly 90 of every 100 units pass against 0.999: the interim upper end at n = 100, z = 3.2905,
+        // p = 0.9 is (p + z^2/2n + z sqrt(p(1-p)/n + z^2/4n^2)) / (1 + z^2/n) = (0.9 + 0.05414 + 3.2905 x
+        // sqrt(0.0009 + 0.000271)) / 1.10828 = (0.95414 + 0.11261) / 1.10828 = 0.9625 [Calc] < 0.999
+        SequentialYield.Estimate e = SequentialYield.run(100_000, 0.999, size -> size - size / 10);
+        assertEquals(100, e.trials());
+        assertEquals(90, e.passes());
+        assertTrue(e.stoppedEarly());
     }
 
     @Test
