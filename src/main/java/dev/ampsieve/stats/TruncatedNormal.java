@@ -38,6 +38,12 @@ public final class TruncatedNormal {
             this.pLo = 0;
             this.pHi = 1;
             this.rejection = true;
+        } else if ((lo - mean) / sigma <= -1 && (hi - mean) / sigma >= 1) {
+            // at least mean +/- 1 sigma kept: mass >= 0.6827 > 0.5, rejection, no need of the normal's CDF (the
+            // usual case, bounds at 2 to 6 sigma; the CDF costs more than a part's whole set-up)
+            this.pLo = Double.NaN;
+            this.pHi = Double.NaN;
+            this.rejection = true;
         } else {
             this.pLo = lo == Double.NEGATIVE_INFINITY ? 0.0 : STD.cumulativeProbability((lo - mean) / sigma);
             this.pHi = hi == Double.POSITIVE_INFINITY ? 1.0 : STD.cumulativeProbability((hi - mean) / sigma);

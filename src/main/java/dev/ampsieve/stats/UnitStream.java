@@ -70,11 +70,16 @@ public final class UnitStream {
         return rng.nextDouble();
     }
 
-    private static byte[] sha256(byte[] b) {
+    /** One digest per thread: looking SHA-256 up among the security providers costs more than hashing a few bytes. */
+    private static final ThreadLocal<MessageDigest> SHA256 = ThreadLocal.withInitial(() -> {
         try {
-            return MessageDigest.getInstance("SHA-256").digest(b);
+            return MessageDigest.getInstance("SHA-256");
         } catch (NoSuchAlgorithmException e) {
             throw new IllegalStateException("every Java platform has SHA-256", e);
         }
+    });
+
+    private static byte[] sha256(byte[] b) {
+        return SHA256.get().digest(b); // digest() resets it for the next use
     }
 }
