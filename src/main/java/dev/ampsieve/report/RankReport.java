@@ -11,14 +11,18 @@ import dev.ampsieve.advice.Ranking;
 import dev.ampsieve.advice.Rejected;
 import dev.ampsieve.advice.TrimAdvice;
 import dev.ampsieve.advice.ZeroDriftAdvice;
+import dev.ampsieve.budget.ConstraintResult;
 import dev.ampsieve.budget.TermResult;
 import dev.ampsieve.budget.Verdict;
 import dev.ampsieve.budget.YieldResult;
 import dev.ampsieve.stage.Criterion;
 import dev.ampsieve.text.Visible;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Set;
+import java.util.stream.Collectors;
 
 /** What {@code ampsieve rank} prints: candidates, Pareto front, rejected parts, advice; text, CSV or JSON. */
 public final class RankReport {
@@ -168,12 +172,7 @@ public final class RankReport {
             o.append('\n').append("Pareto front: no part fits (--all shows the front of every candidate)\n");
         }
         if (!r.rejected().isEmpty()) {
-            o.append('\n').append("Rejected (a hard constraint fails; --json or --csv lists every failure)\n");
-            TextTable t = new TextTable().left("part").flex("reason").wrapFlex();
-            for (Rejected x : r.rejected()) {
-                t.row(x.id(), ConstraintText.shortReason(x.failedConstraints()));
-            }
-            t.lines(width).forEach(l -> o.append(l).append('\n'));
+            rejected(o, r.rejected(), top, width);
         }
         o.append('\n').append("Advice\n");
         for (String l : AdviceText.lines(r.advice())) {
@@ -193,6 +192,45 @@ public final class RankReport {
         o.append('\n').append(Caution.TEXT).append('\n');
         // advice, notes and reasons quote part ids and catalog text: no control character gets through
         return Wrap.prose(Visible.lines(o.toString()), width);
+    }
+
+    /**
+     * The rejected parts: every one while they are no more than {@code top}; beyond that (a large catalog
+     * rejects thousands) how many fail each constraint, then the first {@code top}, as --top sets for the
+     * candidates. JSON and CSV always list every one.
+     */
+    private static void rejected(StringBuilder o, List<Rejected> rejected, int top, int width) {
+        o.append('\n').append("Rejected (a hard constraint fails; --json or --csv lists every failure)\n");
+        List<Rejected> shown = rejected;
+        if (rejected.size() > top) {
+            Map<String, Integer> byConstraint = new LinkedHashMap<>();
+            for (Rejected x : rejected) {
+                for (ConstraintResult c : x.failedConstraints()) {
+                    byConstraint.merge(c.name(), 1, Integer::sum);
+                }
+            }
+            o.append(rejected.size())
+                    .append(" parts, first ")
+                    .append(top)
+                    .append(" shown (--top N for more); failing ")
+                    .append(byConstraint.entrySet().stream()
+                            .sorted(Map.Entry.<String, Integer>comparingByValue()
+                                    .reversed())
+                            .map(e -> e.getKey() + " " + e.getValue())
+                            .collect(Collectors.joining(", ")))
+                    .append(
+                            rejected.stream()
+                                            .anyMatch(x -> x.failedConstraints().size() > 1)
+                                    ? " (a part may fail several)"
+                                    : "")
+                    .append('\n');
+            shown = rejected.subList(0, top);
+        }
+        TextTable t = new TextTable().left("part").flex("reason").wrapFlex();
+        for (Rejected x : shown) {
+            t.row(x.id(), ConstraintText.shortReason(x.failedConstraints()));
+        }
+        t.lines(width).forEach(l -> o.append(l).append('\n'));
     }
 
     /** The front shown: of every candidate, or of those that fit (as they are or after the trim). */

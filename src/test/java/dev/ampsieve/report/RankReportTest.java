@@ -74,6 +74,29 @@ class RankReportTest {
     }
 
     @Test
+    void beyondTopTheRejectedAreCountedByConstraintAndTheFirstTopListed() {
+        // three more parts rejected: LOWV rated 1..4 V (fails the 5 V supply), HOT rated 0..50 °C (fails 0..70 °C),
+        // BOTH rated 10..36 V and 0..50 °C (fails both): 3 supply failures (HIGHV, LOWV, BOTH), 2 temperature
+        Part lowv = part("LOWV").price(0.20).supply(1, 4).build();
+        Part hot = part("HOT").price(0.20).temperature(0, 50).build();
+        Part both = part("BOTH").price(0.20).supply(10, 36).temperature(0, 50).build();
+        Ranking r = Ranker.rank(stage, List.of(good, highv, lowv, hot, both), new LinearEngine());
+        assertEquals(4, r.rejected().size());
+        String text = RankReport.text(r, "s.yaml", null, 2);
+        assertTrue(
+                text.contains("4 parts, first 2 shown (--top N for more); failing supply 3, temperature 2 (a part may"
+                        + " fail several)"),
+                text);
+        List<String> ids = r.rejected().stream().map(x -> x.id()).toList();
+        assertTrue(text.lines().anyMatch(l -> l.startsWith(ids.get(1) + "  ")), text);
+        assertTrue(text.lines().noneMatch(l -> l.startsWith(ids.get(2) + "  ")), text);
+        // at --top 4 or more every rejected part is listed and no count line is written
+        String all = RankReport.text(r, "s.yaml", null, 4);
+        assertTrue(all.lines().anyMatch(l -> l.startsWith(ids.get(3) + "  ")), all);
+        assertTrue(!all.contains("first 4 shown"), all);
+    }
+
+    @Test
     void jsonHasTheDocumentedKeys() throws Exception {
         JsonNode j = new ObjectMapper().readTree(RankReport.json(ranking(), "s.yaml", "q", 2));
         assertEquals(2, j.get("candidates").size()); // --top 2
