@@ -20,9 +20,11 @@ What it does, per catalog file and part, the way a careful engineer would script
     resolution uniform; the error at Tmin and Tmax, the larger kept, plus the gain error;
   * no sampling when the bounds decide (every unit's error within the limit, or the fixed terms
     alone over it), as ampsieve skips it;
-  * units in blocks of 1000 (numpy arrays, no Python loop over units), an interim look after each
-    block with the Wilson interval at z = 3.29 against the yield target, up to max-trials; then,
-    when the stage allows a trim, the same for the trimmed units (offset and 25 C currents removed).
+  * units in blocks (numpy arrays, no Python loop over units) with the looks ampsieve takes: after
+    100, 200 and 500 units, then every 1000, each with the Wilson interval at z = 3.29 against the
+    yield target, up to max-trials (default 200,000); when the stage allows a trim, the trimmed
+    units (offset and 25 C currents removed) are the same units, drawn once for both runs, each
+    run stopping at its own look, as ampsieve's YieldModel.beforeAndAfterTrim does.
 
 Simplified against ampsieve (so the script does no more work than ampsieve does, never less on
 the sampling): no missing-value rules beyond "absent = 0" and "no typ = max/k", no
@@ -108,7 +110,7 @@ class Stage:
         self.target = float(str(s["criterion"]).split()[1]) / 100.0
         self.k = float(s.get("max-to-sigma", 3))
         self.trials = int(s.get("trials", 20000))
-        self.max_trials = int(s.get("max-trials", 1_000_000))
+        self.max_trials = int(s.get("max-trials", 200_000))
         self.seed = int(s.get("seed", 1))
         rr = s.get("resistor-ratio", {})
         self.tol = si(rr.get("tolerance", "0.1 %"))
@@ -153,7 +155,18 @@ def passes_constraints(st, p):
     return price is None or float(price) <= st.max_price
 
 
-def yield_run(st, p, fixed, trimmed, rng):
+EARLY_LOOKS = (100, 200, 500)
+
+
+def next_look(trials):
+    for early in EARLY_LOOKS:
+        if trials < early:
+            return early
+    return (trials // BLOCK + 1) * BLOCK
+
+
+def yield_runs(st, p, fixed, with_trim, rng):
+    """The untrimmed yield and, when with_trim, the trimmed one, on the same simulated units."""
     k = st.k
     vt, vm, vot = spread(p.get("vos"))
     dt_, dm, _ = spread(p.get("vos-drift"))
@@ -172,40 +185,56 @@ def yield_run(st, p, fixed, trimmed, rng):
     s_dr = max(dt_ or 0.0, dm / k)
     s_ios = max(ot or 0.0, om / k)
     half_ib = im - (it or im)
-    # as ampsieve, no sampling when the bounds decide: every unit within its bounds passes, or none can
-    bound = st.ng * (vm + dm * max(abs(d) for d in dts) + (0.0 if trimmed else 0.0) + k * aging_typ) \
-        + abs(st.per_ib) * im * (max(f_ib) + (1.0 if trimmed else 0.0)) \
-        + abs(st.per_ios) * om * (max(f_ios) + (1.0 if trimmed else 0.0)) + st.resolution + st.vfs * st.tol
-    if bound <= room:
-        return 1.0, 1.0, 1.0, 0
-    if room < 0:
-        return 0.0, 0.0, 0.0, 0
-    passes = trials = 0
+    modes = (False, True) if with_trim else (False,)
+    results = {}
+    running = []
+    for trimmed in modes:
+        # as ampsieve, no sampling when the bounds decide: every unit within its bounds passes, or none can
+        bound = st.ng * (vm + dm * max(abs(d) for d in dts) + k * aging_typ) \
+            + abs(st.per_ib) * im * (max(f_ib) + (1.0 if trimmed else 0.0)) \
+            + abs(st.per_ios) * om * (max(f_ios) + (1.0 if trimmed else 0.0)) + st.resolution + st.vfs * st.tol
+        if bound <= room:
+            results[trimmed] = (1.0, 1.0, 1.0, 0)
+        elif room < 0:
+            results[trimmed] = (0.0, 0.0, 0.0, 0)
+        else:
+            running.append(trimmed)
+    state = {m: [0, 0] for m in running}  # passes, trials
     units = max(st.trials, st.max_trials)
-    while trials < units:
-        n = min(BLOCK, units - trials)
+    trials = 0
+    while running:
+        n = min(next_look(trials), units) - trials
         vos = truncnorm(rng, 0.0, s_vos, -vm, vm, n)
         dr = truncnorm(rng, 0.0, s_dr, -dm, dm, n)
-        ib = [truncnorm(rng, it or im, half_ib / k, max(0.0, (it or im) - half_ib), im, n) for _ in range(3)]
-        ios = [truncnorm(rng, 0.0, s_ios, -om, om, n) for _ in range(3)]
+        ib = [truncnorm(rng, it or im, half_ib / k, max(0.0, (it or im) - half_ib), im, n) for _ in range(2)]
+        ios = [truncnorm(rng, 0.0, s_ios, -om, om, n) for _ in range(2)]
         aging = truncnorm(rng, 0.0, aging_typ, -k * aging_typ, k * aging_typ, n) if aging_typ else 0.0
         ratio = st.tol * (2 * rng.random(n) - 1)
-        res = st.resolution * (2 * rng.random(n) - 1) if trimmed else 0.0
-        worst = np.zeros(n)
-        for j in range(2):
-            e = st.ng * (vos + dr * dts[j] - (vos if trimmed else 0.0) + aging) \
-                + st.per_ib * (f_ib[j] * ib[j] - (ib[2] if trimmed else 0.0)) \
-                + st.per_ios * (f_ios[j] * ios[j] - (ios[2] if trimmed else 0.0)) + res
-            worst = np.maximum(worst, np.abs(e))
-        worst += np.abs(st.vfs * ratio)  # the gain error at the end of the swing (ratio sensitivity 1)
-        passes += int((worst <= room).sum())
+        if True in running:  # what only a trimmed unit reads
+            ib.append(truncnorm(rng, it or im, half_ib / k, max(0.0, (it or im) - half_ib), im, n))
+            ios.append(truncnorm(rng, 0.0, s_ios, -om, om, n))
+            res = st.resolution * (2 * rng.random(n) - 1)
         trials += n
-        if trials < units:
-            lo, hi = wilson(passes, trials, INTERIM_Z)
-            if lo >= st.target or hi < st.target:
-                break
-    lo, hi = wilson(passes, trials, Z95)
-    return passes / trials, lo, hi, trials
+        for trimmed in list(running):
+            worst = np.zeros(n)
+            for j in range(2):
+                e = st.ng * (vos + dr * dts[j] - (vos if trimmed else 0.0) + aging) \
+                    + st.per_ib * (f_ib[j] * ib[j] - (ib[2] if trimmed else 0.0)) \
+                    + st.per_ios * (f_ios[j] * ios[j] - (ios[2] if trimmed else 0.0)) + (res if trimmed else 0.0)
+                worst = np.maximum(worst, np.abs(e))
+            worst += np.abs(st.vfs * ratio)  # the gain error at the end of the swing (ratio sensitivity 1)
+            st_ = state[trimmed]
+            st_[0] += int((worst <= room).sum())
+            st_[1] = trials
+            done = trials >= units
+            if not done:
+                lo, hi = wilson(st_[0], st_[1], INTERIM_Z)
+                done = lo >= st.target or hi < st.target
+            if done:
+                lo, hi = wilson(st_[0], st_[1], Z95)
+                results[trimmed] = (st_[0] / st_[1], lo, hi, st_[1])
+                running.remove(trimmed)
+    return results[False], results.get(True)
 
 
 def main():
@@ -231,19 +260,17 @@ def main():
             rejected += 1
             continue
         fixed = fixed_terms(st, p)
-        y = yield_run(st, p, fixed, False, rng)
-        units += y[3]
+        y, t = yield_runs(st, p, fixed, st.trim, rng)
+        units += max(y[3], t[3] if t else 0)
         best = y
-        if st.trim:
-            t = yield_run(st, p, fixed, True, rng)
-            units += t[3]
+        if t is not None:
             best = t if t[1] > y[1] else y
         if best[1] >= st.target:
             price = (p.get("price") or {}).get("unit")
             fits.append((float(price) if price is not None else math.inf, p["id"], best[0]))
     fits.sort()
     t2 = time.perf_counter()
-    print("reference: %d parts, %d rejected, %d fit, %d units simulated" % (len(parts), rejected, len(fits), units))
+    print("reference: %d parts, %d rejected, %d fit, %d units drawn" % (len(parts), rejected, len(fits), units))
     for price, pid, y in fits[:15]:
         print("  %-12s %8.2f  %.4f" % (pid, price, y))
     print("reference: read %.2f s, Monte Carlo %.2f s" % (t1 - t0, t2 - t1), file=sys.stderr)
