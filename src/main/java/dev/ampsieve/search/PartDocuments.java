@@ -13,15 +13,32 @@ import org.apache.lucene.document.DoubleDocValuesField;
 import org.apache.lucene.document.DoublePoint;
 import org.apache.lucene.document.DoubleRange;
 import org.apache.lucene.document.Field;
+import org.apache.lucene.document.FieldType;
 import org.apache.lucene.document.SortedDocValuesField;
-import org.apache.lucene.document.StoredField;
 import org.apache.lucene.document.StringField;
 import org.apache.lucene.document.TextField;
+import org.apache.lucene.index.IndexOptions;
 import org.apache.lucene.util.BytesRef;
 
 /** Turns one catalog {@link Part} into one Lucene document with the fields of {@link Schema}. */
 public final class PartDocuments {
     private PartDocuments() {}
+
+    /**
+     * An analysed text field, indexed for which documents hold each word and nothing more: the
+     * analyzer gives each word of a field once ({@link Words#terms} is a set), so every frequency
+     * would be 1, which is what Lucene scores a document-only field with, and no query matches
+     * phrases, so positions would go unread. Norms stay: BM25 weighs a word by the field's length.
+     * A third of the text side of an index build went to writing those frequencies and positions.
+     */
+    static final FieldType WORDS = wordsType();
+
+    private static FieldType wordsType() {
+        FieldType t = new FieldType(TextField.TYPE_NOT_STORED);
+        t.setIndexOptions(IndexOptions.DOCS);
+        t.freeze();
+        return t;
+    }
 
     public static Document of(Part p) {
         Document d = new Document();
@@ -30,8 +47,8 @@ public final class PartDocuments {
         // sorted doc values: last tie-break so equal hits always list in the same order
         d.add(new SortedDocValuesField(Schema.ID, new BytesRef(p.id())));
         // analysed, not stored (the catalog holds the text): free words, title counted apart
-        d.add(new TextField(Schema.TITLE, p.title(), Field.Store.NO));
-        d.add(new TextField(Schema.TEXT, String.join(" ", words(p)), Field.Store.NO));
+        d.add(new Field(Schema.TITLE, p.title(), WORDS));
+        d.add(new Field(Schema.TEXT, String.join(" ", words(p)), WORDS));
         // keywords: exact, lower-case, one field instance per value
         keyword(d, Schema.ID_LOWER, p.id());
         if (p.input() != null) {
@@ -54,22 +71,26 @@ public final class PartDocuments {
             keyword(d, Schema.MEASURED_FILE, p.measured().file());
         }
         // words of one text each, for notes:word and source:word (the title has its own field above)
-        d.add(new TextField(Schema.NOTES, p.notes(), Field.Store.NO));
-        d.add(new TextField(Schema.SOURCE, p.source(), Field.Store.NO));
+        d.add(new Field(Schema.NOTES, p.notes(), WORDS));
+        d.add(new Field(Schema.SOURCE, p.source(), WORDS));
         if (railToRail(p.inputHeadroom())) {
             keyword(d, Schema.RAIL, "input");
         }
         if (railToRail(p.outputHeadroom())) {
             keyword(d, Schema.RAIL, "output");
         }
-        // numbers: point (range queries), stored (display), doc values (sorting)
+        // numbers: a point each (range queries). Not stored and without doc values: nothing reads
+        // a number back from the index (the catalog holds it) and only the price sorts; the two
+        // copies were two thirds of a document's fields and most of the build time of a large
+        // catalog (bench/RESULTS.md, 2026-12-02, 116 s for 100,000 parts)
         for (Schema.Numeric n : Schema.NUMERIC) {
             Double v = value(n.name(), p);
             if (v != null && Double.isFinite(v)) {
                 double x = v + 0.0; // -0.0 and 0.0 sort apart in points; keep one zero
                 d.add(new DoublePoint(n.name(), x));
-                d.add(new StoredField(n.name(), x));
-                d.add(new DoubleDocValuesField(n.name(), x));
+                if (n.name().equals(Schema.PRICE)) {
+                    d.add(new DoubleDocValuesField(n.name(), x)); // the search order's second key
+                }
             }
         }
         // intervals: "rated at" queries are containment queries on these

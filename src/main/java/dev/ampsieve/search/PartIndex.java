@@ -18,6 +18,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import java.util.concurrent.CopyOnWriteArrayList;
+import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.stream.Stream;
 import org.apache.lucene.document.Document;
 import org.apache.lucene.document.Field;
@@ -258,14 +260,9 @@ public final class PartIndex implements Closeable {
         boolean empty = !w.hasDeletions() && w.getDocStats().maxDoc == 0;
         int written = empty || fileTerms == null ? -1 : incremental(w, parts, fileTerms);
         if (written < 0) {
+            write(w, parts, fileTerms, !empty);
             List<BytesRef> ids = new ArrayList<>();
             for (Part p : parts) {
-                Document d = document(p, fileTerms);
-                if (empty) {
-                    w.addDocument(d);
-                } else {
-                    w.updateDocument(new Term(Schema.ID, p.id()), d);
-                }
                 ids.add(new BytesRef(p.id()));
             }
             w.deleteDocuments(new BooleanQuery.Builder()
@@ -277,6 +274,99 @@ public final class PartIndex implements Closeable {
         w.setLiveCommitData(Map.of(FINGERPRINT, fingerprint).entrySet());
         w.commit();
         return written;
+    }
+
+    /** Below this many documents one thread writes them all: starting another costs more than it saves. */
+    static final int PARALLEL_FROM = 2_000;
+
+    /**
+     * Writes the documents of {@code parts}, replacing each by id when {@code replace}, else
+     * adding it. {@link IndexWriter} takes documents from several threads at once, each thread
+     * filling its own in-memory segment, so a large catalog is split into one contiguous slice per
+     * core (at most {@link #maxThreads}), the calling thread writing the first. Which segment
+     * holds a document changes nothing a search returns: scores use the whole index's statistics
+     * and hits are ordered by score, price and id.
+     */
+    private static void write(IndexWriter w, List<Part> parts, Map<Path, String> fileTerms, boolean replace)
+            throws IOException {
+        int threads = parts.size() < PARALLEL_FROM ? 1 : maxThreads();
+        if (threads == 1) {
+            writeSlice(w, parts, fileTerms, replace, new AtomicBoolean());
+            return;
+        }
+        AtomicBoolean failed = new AtomicBoolean();
+        List<Thread> helpers = new ArrayList<>();
+        List<Throwable> errors = new CopyOnWriteArrayList<>();
+        int n = parts.size();
+        for (int t = 1; t < threads; t++) {
+            List<Part> slice = parts.subList(n * t / threads, n * (t + 1) / threads);
+            Thread helper = new Thread(
+                    () -> {
+                        try {
+                            writeSlice(w, slice, fileTerms, replace, failed);
+                        } catch (IOException | RuntimeException | Error e) {
+                            failed.set(true);
+                            errors.add(e);
+                        }
+                    },
+                    "ampsieve-index-" + t);
+            helper.setDaemon(true);
+            helper.start();
+            helpers.add(helper);
+        }
+        try {
+            writeSlice(w, parts.subList(0, n / threads), fileTerms, replace, failed);
+        } catch (IOException | RuntimeException | Error e) {
+            failed.set(true);
+            errors.add(0, e);
+        } finally {
+            // the writer is closed by the caller: no helper may still be adding to it then
+            boolean interrupted = false;
+            for (Thread h : helpers) {
+                while (h.isAlive()) {
+                    try {
+                        h.join();
+                    } catch (InterruptedException e) {
+                        interrupted = true;
+                    }
+                }
+            }
+            if (interrupted) {
+                Thread.currentThread().interrupt();
+            }
+        }
+        if (!errors.isEmpty()) {
+            Throwable first = errors.get(0);
+            errors.subList(1, errors.size()).forEach(first::addSuppressed);
+            if (first instanceof IOException io) {
+                throw io;
+            }
+            if (first instanceof RuntimeException re) {
+                throw re;
+            }
+            throw (Error) first;
+        }
+    }
+
+    /** Threads for a large build: one per core, at most 4 (each holds a segment in memory). */
+    static int maxThreads() {
+        return Math.max(1, Math.min(4, Runtime.getRuntime().availableProcessors()));
+    }
+
+    private static void writeSlice(
+            IndexWriter w, List<Part> slice, Map<Path, String> fileTerms, boolean replace, AtomicBoolean failed)
+            throws IOException {
+        for (Part p : slice) {
+            if (failed.get()) {
+                return; // another thread failed: the build is given up
+            }
+            Document d = document(p, fileTerms);
+            if (replace) {
+                w.updateDocument(new Term(Schema.ID, p.id()), d);
+            } else {
+                w.addDocument(d);
+            }
+        }
     }
 
     private static Document document(Part p, Map<Path, String> fileTerms) {
@@ -349,14 +439,14 @@ public final class PartIndex implements Closeable {
             if (!stale.isEmpty()) {
                 w.deleteDocuments(new TermInSetQuery(SOURCE_FILE, refs(stale)));
             }
-            int written = 0;
+            List<Part> changed = new ArrayList<>();
             for (Part p : parts) {
                 if (!kept.contains(fileTerms.get(p.where().file()))) {
-                    w.addDocument(document(p, fileTerms));
-                    written++;
+                    changed.add(p);
                 }
             }
-            return written;
+            write(w, changed, fileTerms, false);
+            return changed.size();
         }
     }
 

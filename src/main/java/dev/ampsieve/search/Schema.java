@@ -25,7 +25,7 @@ public final class Schema {
      * Stored in each commit beside the catalog fingerprint; any change to the fields or to how
      * a value is derived must change it so that existing on-disk indexes rebuild.
      */
-    public static final String VERSION = "5";
+    public static final String VERSION = "6";
 
     // ------------------------------------------------------------ identity and words
 
@@ -99,7 +99,7 @@ public final class Schema {
 
     // ------------------------------------------------------------ numbers (field<value ...)
 
-    /** A number indexed as a point (search), stored (display) and as doc values (sort). */
+    /** A number indexed as a point (search); the price also as doc values (the search order). */
     public record Numeric(String name, Dimension dimension, String meaning) {}
 
     public static final String VOS = "vos";

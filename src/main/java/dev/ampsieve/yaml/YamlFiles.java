@@ -21,6 +21,7 @@ import java.util.Set;
 import org.yaml.snakeyaml.DumperOptions;
 import org.yaml.snakeyaml.LoaderOptions;
 import org.yaml.snakeyaml.Yaml;
+import org.yaml.snakeyaml.composer.Composer;
 import org.yaml.snakeyaml.error.Mark;
 import org.yaml.snakeyaml.error.MarkedYAMLException;
 import org.yaml.snakeyaml.error.YAMLException;
@@ -33,7 +34,10 @@ import org.yaml.snakeyaml.nodes.MappingNode;
 import org.yaml.snakeyaml.nodes.NodeTuple;
 import org.yaml.snakeyaml.nodes.ScalarNode;
 import org.yaml.snakeyaml.nodes.SequenceNode;
+import org.yaml.snakeyaml.parser.ParserImpl;
 import org.yaml.snakeyaml.reader.ReaderException;
+import org.yaml.snakeyaml.reader.StreamReader;
+import org.yaml.snakeyaml.resolver.Resolver;
 
 /**
  * Reads a YAML file into {@link Node}s that remember their line and column. Bounded on
@@ -141,10 +145,12 @@ public final class YamlFiles {
         if (text.startsWith("\uFEFF")) {
             text = text.substring(1); // a byte-order mark some editors write; not content
         }
-        Yaml yaml = new Yaml(options());
         org.yaml.snakeyaml.nodes.Node root;
         try (Reader r = new StringReader(text)) {
-            root = yaml.compose(r);
+            // what Yaml.compose does, with a resolver that tries no implicit types
+            LoaderOptions options = options();
+            root = new Composer(new ParserImpl(new StreamReader(r), options), new TextResolver(), options)
+                    .getSingleNode();
         } catch (ReaderException e) {
             throw new InputException(badCharacter(file, text, e));
         } catch (MarkedYAMLException e) {
@@ -165,7 +171,7 @@ public final class YamlFiles {
         if (root == null) {
             return new Node.Scalar(new Located(file, 1, 1), null, false);
         }
-        return new Converter(file).convert(root, "", 0);
+        return new Converter(file).convert(root, null, 0);
     }
 
     /**
@@ -203,6 +209,19 @@ public final class YamlFiles {
             return "keep one document per file (remove the extra '---')";
         }
         return "fix the YAML syntax here (indent with spaces, 'key: value', quote text containing ': ' or ' #')";
+    }
+
+    /**
+     * Tags every plain scalar a string. The converter below reads each scalar's text and style,
+     * never its tag, while SnakeYAML's own resolver tried its regular expressions (bool, int,
+     * float, null, timestamp, merge ...) on every plain scalar of a file to choose one: a few
+     * per cent of parsing a catalog, for nothing. Explicit tags ({@code !!int}) are untouched.
+     */
+    private static final class TextResolver extends Resolver {
+        @Override
+        protected void addImplicitResolvers() {
+            // none: a plain scalar is resolved as a string
+        }
     }
 
     private static LoaderOptions options() {
@@ -329,6 +348,24 @@ public final class YamlFiles {
     }
 
     /**
+     * Where a node sits, as {@code parts[3].vos.typ}: a key ({@code key}) or an item ({@code index}
+     * when {@code key} is null) below {@code parent} (null at the root). Spelt out only for a
+     * message: joining the text for every node of a catalog cost more than the message ever did.
+     */
+    private record Where(Where parent, String key, int index) {
+        static String text(Where w) {
+            if (w == null) {
+                return "";
+            }
+            String up = text(w.parent);
+            if (w.key == null) {
+                return up + "[" + w.index + "]";
+            }
+            return up.isEmpty() ? w.key : up + "." + w.key;
+        }
+    }
+
+    /**
      * Turns SnakeYAML's node graph into {@link Node}s. An alias is the same SnakeYAML node
      * reached twice; converting it once and sharing the result keeps the tree as small as
      * the file, so nested aliases (each doubling the expanded size) cost nothing.
@@ -342,7 +379,7 @@ public final class YamlFiles {
             this.file = file;
         }
 
-        Node convert(org.yaml.snakeyaml.nodes.Node n, String path, int depth) throws InputException {
+        Node convert(org.yaml.snakeyaml.nodes.Node n, Where path, int depth) throws InputException {
             Node seen = done.get(n);
             if (seen != null) {
                 return seen;
@@ -351,12 +388,12 @@ public final class YamlFiles {
             if (open.contains(n)) {
                 throw new InputException(Problem.error(
                         loc,
-                        path,
+                        Where.text(path),
                         "an alias refers to a value that contains it",
                         "write the values out instead of the self-referring *alias"));
             }
             if (depth > MAX_DEPTH) {
-                throw new InputException(Problem.error(loc, path, TOO_DEEP, "use fewer levels"));
+                throw new InputException(Problem.error(loc, Where.text(path), TOO_DEEP, "use fewer levels"));
             }
             open.add(n);
             Node result = build(n, path, depth, loc);
@@ -365,7 +402,7 @@ public final class YamlFiles {
             return result;
         }
 
-        private Node build(org.yaml.snakeyaml.nodes.Node n, String path, int depth, Located loc) throws InputException {
+        private Node build(org.yaml.snakeyaml.nodes.Node n, Where path, int depth, Located loc) throws InputException {
             if (n instanceof ScalarNode s) {
                 boolean quoted = s.getScalarStyle() != DumperOptions.ScalarStyle.PLAIN;
                 String v = s.getValue();
@@ -377,7 +414,7 @@ public final class YamlFiles {
                 List<Node> items = new ArrayList<>();
                 List<org.yaml.snakeyaml.nodes.Node> values = seq.getValue();
                 for (int i = 0; i < values.size(); i++) {
-                    items.add(convert(values.get(i), path + "[" + i + "]", depth + 1));
+                    items.add(convert(values.get(i), new Where(path, null, i), depth + 1));
                 }
                 return new Node.Seq(loc, items);
             }
@@ -388,14 +425,20 @@ public final class YamlFiles {
                 Located kLoc = at(file, t.getKeyNode().getStartMark());
                 if (!(t.getKeyNode() instanceof ScalarNode key)) {
                     throw new InputException(Problem.error(
-                            kLoc, path, "a key must be a plain word, found a list or mapping", "write 'name: value'"));
+                            kLoc,
+                            Where.text(path),
+                            "a key must be a plain word, found a list or mapping",
+                            "write 'name: value'"));
                 }
                 String k = key.getValue();
-                String kPath = path.isEmpty() ? k : path + "." + k;
+                Where kPath = new Where(path, k, 0);
                 if (entries.containsKey(k)) {
                     Located first = keyAt.get(k);
                     throw new InputException(Problem.error(
-                            kLoc, kPath, "key written twice (first on line " + first.line() + ")", "keep one of them"));
+                            kLoc,
+                            Where.text(kPath),
+                            "key written twice (first on line " + first.line() + ")",
+                            "keep one of them"));
                 }
                 keyAt.put(k, kLoc);
                 entries.put(k, convert(t.getValueNode(), kPath, depth + 1));
