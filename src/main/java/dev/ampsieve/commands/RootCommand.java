@@ -23,7 +23,9 @@ import picocli.CommandLine.Spec;
 
 /**
  * {@code ampsieve}: the root of the command tree. Holds the options every command shares
- * (which catalog, strictness, verbosity) and the catalog once loaded.
+ * (which catalog, strictness, verbosity) and the catalog once loaded. Its commands are added by
+ * {@link Commands} (all of them, or on the command line only the one named: building each
+ * command's model by reflection is most of picocli's start-up).
  */
 @Command(
         name = "ampsieve",
@@ -31,23 +33,6 @@ import picocli.CommandLine.Spec;
         versionProvider = RootCommand.Version.class,
         description =
                 "Picks operational amplifiers for a stage by its full output error budget, computed from your own YAML catalog of datasheet values.",
-        subcommands = {
-            CheckCommand.class,
-            BudgetCommand.class,
-            FindCommand.class,
-            RankCommand.class,
-            CompareCommand.class,
-            SufficesCommand.class,
-            OffsetRigCommand.class,
-            BarsCommand.class,
-            ScatterCommand.class,
-            NewPartCommand.class,
-            ImportCommand.class,
-            ExportCommand.class,
-            CompletionCommand.class,
-            RecordCommand.class,
-            RecheckCommand.class
-        },
         footer = {
             "",
             "Catalog folder: --catalog DIR, else $AMPSIEVE_CATALOG, else the demo catalog.",
