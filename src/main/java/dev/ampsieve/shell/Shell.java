@@ -1,6 +1,7 @@
 package dev.ampsieve.shell;
 
 import dev.ampsieve.catalog.Catalog;
+import dev.ampsieve.catalog.CatalogLoader;
 import dev.ampsieve.commands.Commands;
 import dev.ampsieve.commands.Failures;
 import dev.ampsieve.commands.RootCommand;
@@ -12,6 +13,7 @@ import dev.ampsieve.failure.Refusal;
 import dev.ampsieve.report.Caution;
 import dev.ampsieve.report.Glyphs;
 import dev.ampsieve.report.OutputStyle;
+import dev.ampsieve.report.Wrap;
 import dev.ampsieve.stats.Cancelled;
 import dev.ampsieve.yaml.Fields;
 import dev.ampsieve.yaml.InputException;
@@ -21,9 +23,11 @@ import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.stream.Collectors;
 import org.jline.reader.EndOfFileException;
 import org.jline.reader.LineReader;
 import org.jline.reader.LineReaderBuilder;
@@ -69,6 +73,10 @@ public final class Shell {
     private final List<Integer> exitCodes = new ArrayList<>();
     /** Commands added to the tree after the shell's own (tests add one that fails in a way no user can cause). */
     private final List<Object> extraCommands = new ArrayList<>();
+    /** Whether the catalog is read after the prompt is up (the default) or before the banner. */
+    private boolean loadInBackground = true;
+    /** Runs on the reading thread before the catalog is read (tests hold the read back with it). */
+    private Runnable beforeLoad = () -> {};
 
     /**
      * @param rootArgs    the options the shell was started with ({@code --catalog DIR} ...), given
@@ -169,12 +177,21 @@ public final class Shell {
         completer[0] = new ShellCompleter(ctx, tree);
 
         try {
-            tree.parseArgs(
-                    rootArgs.toArray(String[]::new)); // --catalog and friends before the banner reads the catalog
+            tree.parseArgs(rootArgs.toArray(String[]::new)); // --catalog and friends before the catalog is read
         } catch (CommandLine.ParameterException e) {
             err.println(e.getMessage());
         }
-        banner(ctx, historyNote);
+        Path dir = root.catalogDir();
+        ctx.load.start(
+                () -> {
+                    beforeLoad.run();
+                    return catalogLine();
+                },
+                e -> "Catalog " + dir + ": not loaded (" + e + ").",
+                loadInBackground);
+        banner(ctx, historyNote, dir);
+        // the counts when the read ends: above the line being typed, unless a command waits for them
+        ctx.load.whenDone(() -> announce(ctx, reader));
         // for the whole session, so a Ctrl-C between two reads never meets the default (ending the
         // program); the line reader puts its own in place while it reads and restores this one
         Terminal.SignalHandler previous = terminal.handle(Terminal.Signal.INT, s -> interruptCommand());
@@ -259,6 +276,17 @@ public final class Shell {
     /** The program's name as the command line types it. */
     static final String PROGRAM_NAME = "ampsieve";
 
+    /**
+     * Reads the catalog before the banner ({@code background} false: what a test needs to see the
+     * same lines every time) or after the prompt is up (the default), running {@code before} on
+     * the reading thread first; call before {@link #run}.
+     */
+    Shell catalogRead(boolean background, Runnable before) {
+        loadInBackground = background;
+        beforeLoad = before;
+        return this;
+    }
+
     /** Adds a command to the tree the shell builds; call before {@link #run}. */
     Shell withCommand(Object command) {
         extraCommands.add(command);
@@ -293,11 +321,29 @@ public final class Shell {
             cancelRequested = false;
         }
         boolean cancelled;
+        boolean waiting = false;
         try {
             Refusal noStage = sub == null ? null : missingStage(ctx, sub, words);
             if (noStage != null) {
                 exitCodes.add(failure(noStage, err));
                 return;
+            }
+            if (!ctx.load.done()) {
+                if (leavesNow(ctx, words)) {
+                    return;
+                }
+                waiting = true;
+                ctx.out.println(ctx.fold(waitingNote(name), ctx.paint::dim));
+                try {
+                    ctx.load.await();
+                } catch (InterruptedException e) {
+                    throw new Cancelled(); // Ctrl-C: back to the prompt; the read goes on
+                }
+                waiting = false;
+            }
+            String counts = ctx.load.takeLine();
+            if (counts != null) {
+                ctx.out.println(ctx.fold(counts));
             }
             List<String> args = new ArrayList<>(rootArgs);
             args.addAll(words);
@@ -314,9 +360,51 @@ public final class Shell {
             ctx.out.flush();
             err.flush();
         }
-        if (cancelled) {
+        if (cancelled && !waiting) {
             // a read cut short by the interrupt may have left the catalog incomplete: read it afresh
+            // (not when the line only waited for the background read: that read was not interrupted)
             root.forgetCatalog();
+        }
+    }
+
+    /**
+     * 'quit' (or 'exit') alone while the catalog is read: the shell leaves at once instead of
+     * waiting. No stage can be unsaved yet, as every line that sets one waits for the read.
+     */
+    private boolean leavesNow(ShellContext ctx, List<String> words) {
+        if (words.size() != 1 || !List.of("quit", "exit").contains(words.get(0)) || ctx.state.unsaved()) {
+            return false;
+        }
+        ctx.quit = true;
+        exitCodes.add(ExitCode.OK.code());
+        return true;
+    }
+
+    /** Said when a line has to wait for the catalog's background read. */
+    private String waitingNote(String command) {
+        Path dir = root.catalogDir(); // this thread writes the root's options: reading them here is safe
+        int files = dir.toString().isBlank() ? 0 : CatalogLoader.files(dir).size();
+        return "The catalog is still loading" + (files > 0 ? " (" + files + " file(s))" : "") + "; '" + command
+                + "' runs when it is read. Ctrl-C stops waiting.";
+    }
+
+    /**
+     * The catalog line, above the line being typed, when the background read ends at the prompt;
+     * nothing while a line runs (it waits for the read and prints the line itself).
+     */
+    private void announce(ShellContext ctx, LineReader reader) {
+        synchronized (commandLock) {
+            if (running != null) {
+                return;
+            }
+            String line = ctx.load.takeLine();
+            if (line != null) {
+                // not through ctx.out: printAbove keeps the prompt and the keys typed so far below it
+                OutputStyle st = look(terminal, env, rootArgs.contains("--ascii"));
+                reader.printAbove(Arrays.stream(Wrap.prose(line, st.width()).split("\n", -1))
+                        .map(l -> shown(l, false)) // a line at a time, as ctx.out shows them
+                        .collect(Collectors.joining("\n")));
+            }
         }
     }
 
@@ -401,10 +489,9 @@ public final class Shell {
             return s;
         }
         Paint paint = new Paint(st.color());
-        return java.util.Arrays.stream(
-                        dev.ampsieve.report.Wrap.prose(s, st.width()).split("\n", -1))
+        return Arrays.stream(Wrap.prose(s, st.width()).split("\n", -1))
                 .map(paint::red)
-                .collect(java.util.stream.Collectors.joining("\n"));
+                .collect(Collectors.joining("\n"));
     }
 
     private String prompt(ShellContext ctx) {
@@ -413,13 +500,14 @@ public final class Shell {
         return ctx.paint.cyan(p);
     }
 
-    private void banner(ShellContext ctx, String historyNote) {
+    private void banner(ShellContext ctx, String historyNote, Path dir) {
         PrintWriter out = ctx.out;
         Paint paint = ctx.paint;
         out.println(paint.bold(new RootCommand.Version().getVersion()[0])
                 + ": op-amp choice by the full output error budget of your stage.");
-        out.println(ctx.fold(catalogLine()));
-        out.println(paint.dim(dev.ampsieve.report.Wrap.prose(Caution.TEXT, ctx.style.width())));
+        String counts = ctx.load.takeLine();
+        out.println(ctx.fold(counts != null ? counts : "Catalog " + dir + ": loading; its counts follow."));
+        out.println(paint.dim(Wrap.prose(Caution.TEXT, ctx.style.width())));
         if (historyNote != null) {
             out.println(ctx.fold(historyNote, paint::dim));
         }
