@@ -100,14 +100,32 @@ public final class Shell {
      * @param rootArgs the options the program was started with
      */
     public static int start(RootCommand root, List<String> rootArgs) {
-        try (Terminal t =
-                TerminalBuilder.builder().system(true).name("ampsieve").build()) {
+        try (Terminal t = systemTerminal()) {
             Map<String, String> env = System.getenv();
             return new Shell(root, rootArgs, t, XdgPaths.history(env, System.getProperty("user.home")), env).run();
         } catch (IOException e) {
             System.err.println(
                     "ampsieve: cannot open the terminal (" + e.getMessage() + "); give a command to run instead");
             return ExitCode.INTERNAL.code();
+        }
+    }
+
+    /**
+     * The process's terminal through JLine's JNI provider (its native library ships in JLine's
+     * jar), else through JLine's default choice. Naming the provider saves start-up time: the
+     * default list also asks the exec provider, which runs {@code test -t 1} (a process) on every
+     * start (issue 13; seen with strace).
+     */
+    private static Terminal systemTerminal() throws IOException {
+        try {
+            return TerminalBuilder.builder()
+                    .system(true)
+                    .name("ampsieve")
+                    .provider("jni")
+                    .dumb(false) // fail here rather than fall back to a dumb terminal: the default may do better
+                    .build();
+        } catch (IOException | RuntimeException | LinkageError e) {
+            return TerminalBuilder.builder().system(true).name("ampsieve").build();
         }
     }
 
