@@ -27,7 +27,14 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.concurrent.CancellationException;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.atomic.AtomicReference;
+import java.util.function.Supplier;
 import java.util.stream.Collectors;
+import org.jline.reader.Completer;
 import org.jline.reader.EndOfFileException;
 import org.jline.reader.LineReader;
 import org.jline.reader.LineReaderBuilder;
@@ -75,6 +82,8 @@ public final class Shell {
     private final List<Object> extraCommands = new ArrayList<>();
     /** Whether the catalog is read after the prompt is up (the default) or before the banner. */
     private boolean loadInBackground = true;
+    /** How many catalog files the background read found (for the note of a line that waits); 0 until known. */
+    private volatile int catalogFiles;
     /** Runs on the reading thread before the catalog is read (tests hold the read back with it). */
     private Runnable beforeLoad = () -> {};
 
@@ -148,7 +157,8 @@ public final class Shell {
         PrintWriter err = new PrintWriter(new TerminalLines(raw, s -> shown(s, true)), true);
 
         // the completer needs the tree and the context, which need the reader: wire it in after building
-        org.jline.reader.Completer[] completer = new org.jline.reader.Completer[1];
+        AtomicReference<Completer> completer = new AtomicReference<>();
+        CompletableFuture<CommandLine> treeReady = new CompletableFuture<>();
         DefaultParser parser = new DefaultParser();
         parser.setEofOnUnclosedQuote(false); // an unclosed quote ends at the end of the line
         LineReaderBuilder builder = LineReaderBuilder.builder()
@@ -156,9 +166,15 @@ public final class Shell {
                 .appName("ampsieve")
                 .parser(parser)
                 .completer((r, l, c) -> {
-                    if (completer[0] != null) {
-                        completer[0].complete(r, l, c);
+                    try {
+                        treeReady.get(); // the tree may still be built in the background
+                    } catch (InterruptedException e) {
+                        Thread.currentThread().interrupt(); // Ctrl-C: nothing offered, the line is dropped
+                        return;
+                    } catch (ExecutionException e) {
+                        return; // no tree: every line says why
                     }
+                    completer.get().complete(r, l, c);
                 })
                 .variable(LineReader.HISTORY_SIZE, 1000)
                 .variable(LineReader.HISTORY_FILE_SIZE, 5000)
@@ -180,6 +196,56 @@ public final class Shell {
         // commands without --stage FILE take the current stage, in memory, under the name the user knows it by
         root.useCurrentStage(() -> StageCheck.given(ctx.state.answers(), ctx.state.nameInMessages()));
 
+        // the tree (picocli reads every command's annotations), the root options and the catalog: on
+        // a thread of their own unless the catalog is to be read before the banner
+        Supplier<String> setUp = () -> {
+            CommandLine tree;
+            String parseError = null;
+            try {
+                tree = tree(ctx, out, err);
+                completer.set(new ShellCompleter(ctx, tree));
+                try {
+                    tree.parseArgs(rootArgs.toArray(String[]::new)); // --catalog and friends before the read
+                } catch (CommandLine.ParameterException e) {
+                    parseError = e.getMessage();
+                    if (!loadInBackground) {
+                        err.println(parseError); // before the banner, as always
+                    }
+                }
+                if (loadInBackground) {
+                    Path dir = root.catalogDir();
+                    catalogFiles = dir.toString().isBlank()
+                            ? 0
+                            : CatalogLoader.files(dir).size();
+                }
+            } catch (RuntimeException | Error e) {
+                treeReady.completeExceptionally(e);
+                throw e;
+            }
+            treeReady.complete(tree);
+            beforeLoad.run();
+            String line = catalogLine();
+            return parseError == null || !loadInBackground ? line : parseError + "\n" + line;
+        };
+        ctx.load.start(setUp, e -> "Catalog: not loaded (" + e + ").", loadInBackground);
+        banner(ctx, historyNote);
+        // the counts when the read ends: above the line being typed, unless a command waits for them
+        ctx.load.whenDone(() -> announce(ctx, reader));
+        // for the whole session, so a Ctrl-C between two reads never meets the default (ending the
+        // program); the line reader puts its own in place while it reads and restores this one
+        Terminal.SignalHandler previous = terminal.handle(Terminal.Signal.INT, s -> interruptCommand());
+        try {
+            loop(ctx, reader, treeReady, err);
+        } finally {
+            terminal.handle(Terminal.Signal.INT, previous != null ? previous : Terminal.SignalHandler.SIG_DFL);
+            out.flush();
+            err.flush();
+        }
+        return ExitCode.OK.code();
+    }
+
+    /** The command tree, the shell's verbs added, set up for the shell; its completer set too. */
+    private CommandLine tree(ShellContext ctx, PrintWriter out, PrintWriter err) {
         CommandLine tree = Commands.build(root, out, err);
         ShellCommands.all(ctx).forEach(tree::addSubcommand);
         extraCommands.forEach(tree::addSubcommand);
@@ -192,43 +258,14 @@ public final class Shell {
         tree.getSubcommands().get("set").setUnmatchedOptionsArePositionalParams(true);
         tree.setParameterExceptionHandler((ex, args) -> Failures.usage(ex, args, Failures.Voice.SHELL, null));
         tree.setExecutionExceptionHandler((ex, line, parsed) -> failure(ex, err));
-        completer[0] = new ShellCompleter(ctx, tree);
-
-        try {
-            tree.parseArgs(rootArgs.toArray(String[]::new)); // --catalog and friends before the catalog is read
-        } catch (CommandLine.ParameterException e) {
-            err.println(e.getMessage());
-        }
-        Path dir = root.catalogDir();
-        ctx.load.start(
-                () -> {
-                    beforeLoad.run();
-                    return catalogLine();
-                },
-                e -> "Catalog " + dir + ": not loaded (" + e + ").",
-                loadInBackground);
-        banner(ctx, historyNote, dir);
-        // the counts when the read ends: above the line being typed, unless a command waits for them
-        ctx.load.whenDone(() -> announce(ctx, reader));
-        // for the whole session, so a Ctrl-C between two reads never meets the default (ending the
-        // program); the line reader puts its own in place while it reads and restores this one
-        Terminal.SignalHandler previous = terminal.handle(Terminal.Signal.INT, s -> interruptCommand());
-        try {
-            loop(ctx, reader, tree, err);
-        } finally {
-            terminal.handle(Terminal.Signal.INT, previous != null ? previous : Terminal.SignalHandler.SIG_DFL);
-            out.flush();
-            err.flush();
-        }
-        return ExitCode.OK.code();
+        return tree;
     }
 
-    private void loop(ShellContext ctx, LineReader reader, CommandLine tree, PrintWriter err) {
+    private void loop(ShellContext ctx, LineReader reader, CompletableFuture<CommandLine> treeReady, PrintWriter err) {
         while (!ctx.quit) {
             ctx.style = look(terminal, env, rootArgs.contains("--ascii"));
             ctx.paint = new Paint(ctx.style.color());
             root.setOutputStyle(ctx.style);
-            tree.setUsageHelpWidth(Math.max(55, Math.min(ctx.style.width(), 120)));
             String line;
             try {
                 line = reader.readLine(prompt(ctx));
@@ -258,7 +295,7 @@ public final class Shell {
             if (!words.get(0).equals("quit") && !words.get(0).equals("exit")) {
                 ctx.warnedUnsaved = false;
             }
-            execute(ctx, tree, words, err);
+            execute(ctx, treeReady, words, err);
         }
     }
 
@@ -317,18 +354,9 @@ public final class Shell {
     }
 
     /** Runs one line through the tree; never throws. */
-    void execute(ShellContext ctx, CommandLine tree, List<String> words, PrintWriter err) {
+    void execute(ShellContext ctx, CompletableFuture<CommandLine> treeReady, List<String> words, PrintWriter err) {
         String name = words.get(0);
-        CommandLine sub = tree.getSubcommands().get(name);
-        if (sub == null && !name.startsWith("-")) {
-            String near = Fields.closest(name, tree.getSubcommands().keySet());
-            exitCodes.add(failure(
-                    new Refusal(
-                            "unknown command '" + name + "'" + (near != null ? "; did you mean '" + near + "'?" : "")
-                                    + " ('help' lists the commands)",
-                            ExitCode.USAGE,
-                            Place.field(name)),
-                    err));
+        if (!ctx.load.done() && leavesNow(ctx, words)) {
             return;
         }
         // a Ctrl-C at the prompt can leave this thread interrupted (the line reader restores the
@@ -341,15 +369,7 @@ public final class Shell {
         boolean cancelled;
         boolean waiting = false;
         try {
-            Refusal noStage = sub == null ? null : missingStage(ctx, sub, words);
-            if (noStage != null) {
-                exitCodes.add(failure(noStage, err));
-                return;
-            }
             if (!ctx.load.done()) {
-                if (leavesNow(ctx, words)) {
-                    return;
-                }
                 waiting = true;
                 ctx.out.println(ctx.fold(waitingNote(name), ctx.paint::dim));
                 try {
@@ -362,6 +382,29 @@ public final class Shell {
             String counts = ctx.load.takeLine();
             if (counts != null) {
                 ctx.out.println(ctx.fold(counts));
+            }
+            CommandLine tree = treeReady.getNow(null);
+            if (tree == null) { // the tree could not be built: the read's line said why
+                throw new IllegalStateException("the command tree was not built", failureOf(treeReady));
+            }
+            tree.setUsageHelpWidth(Math.max(55, Math.min(ctx.style.width(), 120)));
+            CommandLine sub = tree.getSubcommands().get(name);
+            if (sub == null && !name.startsWith("-")) {
+                String near = Fields.closest(name, tree.getSubcommands().keySet());
+                exitCodes.add(failure(
+                        new Refusal(
+                                "unknown command '" + name + "'"
+                                        + (near != null ? "; did you mean '" + near + "'?" : "")
+                                        + " ('help' lists the commands)",
+                                ExitCode.USAGE,
+                                Place.field(name)),
+                        err));
+                return;
+            }
+            Refusal noStage = sub == null ? null : missingStage(ctx, sub, words);
+            if (noStage != null) {
+                exitCodes.add(failure(noStage, err));
+                return;
             }
             List<String> args = new ArrayList<>(rootArgs);
             args.addAll(words);
@@ -398,10 +441,19 @@ public final class Shell {
         return true;
     }
 
+    /** Why {@code f}, done, failed. */
+    private static Throwable failureOf(CompletableFuture<?> f) {
+        try {
+            f.join();
+            return null;
+        } catch (CompletionException | CancellationException e) {
+            return e.getCause();
+        }
+    }
+
     /** Said when a line has to wait for the catalog's background read. */
     private String waitingNote(String command) {
-        Path dir = root.catalogDir(); // this thread writes the root's options: reading them here is safe
-        int files = dir.toString().isBlank() ? 0 : CatalogLoader.files(dir).size();
+        int files = catalogFiles; // counted by the reading thread (0 until then)
         return "The catalog is still loading" + (files > 0 ? " (" + files + " file(s))" : "") + "; '" + command
                 + "' runs when it is read. Ctrl-C stops waiting.";
     }
@@ -518,13 +570,13 @@ public final class Shell {
         return ctx.paint.cyan(p);
     }
 
-    private void banner(ShellContext ctx, String historyNote, Path dir) {
+    private void banner(ShellContext ctx, String historyNote) {
         PrintWriter out = ctx.out;
         Paint paint = ctx.paint;
         out.println(paint.bold(new RootCommand.Version().getVersion()[0])
                 + ": op-amp choice by the full output error budget of your stage.");
         String counts = ctx.load.takeLine();
-        out.println(ctx.fold(counts != null ? counts : "Catalog " + dir + ": loading; its counts follow."));
+        out.println(ctx.fold(counts != null ? counts : "Catalog: loading; its counts follow."));
         out.println(paint.dim(Wrap.prose(Caution.TEXT, ctx.style.width())));
         if (historyNote != null) {
             out.println(ctx.fold(historyNote, paint::dim));
