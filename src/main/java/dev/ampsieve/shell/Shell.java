@@ -1,6 +1,7 @@
 package dev.ampsieve.shell;
 
 import dev.ampsieve.catalog.Catalog;
+import dev.ampsieve.catalog.CatalogLoader;
 import dev.ampsieve.commands.Commands;
 import dev.ampsieve.commands.Failures;
 import dev.ampsieve.commands.RootCommand;
@@ -12,6 +13,7 @@ import dev.ampsieve.failure.Refusal;
 import dev.ampsieve.report.Caution;
 import dev.ampsieve.report.Glyphs;
 import dev.ampsieve.report.OutputStyle;
+import dev.ampsieve.report.Wrap;
 import dev.ampsieve.stats.Cancelled;
 import dev.ampsieve.yaml.Fields;
 import dev.ampsieve.yaml.InputException;
@@ -21,9 +23,18 @@ import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.concurrent.CancellationException;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.atomic.AtomicReference;
+import java.util.function.Supplier;
+import java.util.stream.Collectors;
+import org.jline.reader.Completer;
 import org.jline.reader.EndOfFileException;
 import org.jline.reader.LineReader;
 import org.jline.reader.LineReaderBuilder;
@@ -69,6 +80,12 @@ public final class Shell {
     private final List<Integer> exitCodes = new ArrayList<>();
     /** Commands added to the tree after the shell's own (tests add one that fails in a way no user can cause). */
     private final List<Object> extraCommands = new ArrayList<>();
+    /** Whether the catalog is read after the prompt is up (the default) or before the banner. */
+    private boolean loadInBackground = true;
+    /** How many catalog files the background read found (for the note of a line that waits); 0 until known. */
+    private volatile int catalogFiles;
+    /** Runs on the reading thread before the catalog is read (tests hold the read back with it). */
+    private Runnable beforeLoad = () -> {};
 
     /**
      * @param rootArgs    the options the shell was started with ({@code --catalog DIR} ...), given
@@ -92,14 +109,32 @@ public final class Shell {
      * @param rootArgs the options the program was started with
      */
     public static int start(RootCommand root, List<String> rootArgs) {
-        try (Terminal t =
-                TerminalBuilder.builder().system(true).name("ampsieve").build()) {
+        try (Terminal t = systemTerminal()) {
             Map<String, String> env = System.getenv();
             return new Shell(root, rootArgs, t, XdgPaths.history(env, System.getProperty("user.home")), env).run();
         } catch (IOException e) {
             System.err.println(
                     "ampsieve: cannot open the terminal (" + e.getMessage() + "); give a command to run instead");
             return ExitCode.INTERNAL.code();
+        }
+    }
+
+    /**
+     * The process's terminal through JLine's JNI provider (its native library ships in JLine's
+     * jar), else through JLine's default choice. Naming the provider saves start-up time: the
+     * default list also asks the exec provider, which runs {@code test -t 1} (a process) on every
+     * start (issue 13; seen with strace).
+     */
+    private static Terminal systemTerminal() throws IOException {
+        try {
+            return TerminalBuilder.builder()
+                    .system(true)
+                    .name("ampsieve")
+                    .provider("jni")
+                    .dumb(false) // fail here rather than fall back to a dumb terminal: the default may do better
+                    .build();
+        } catch (IOException | RuntimeException | LinkageError e) {
+            return TerminalBuilder.builder().system(true).name("ampsieve").build();
         }
     }
 
@@ -122,7 +157,8 @@ public final class Shell {
         PrintWriter err = new PrintWriter(new TerminalLines(raw, s -> shown(s, true)), true);
 
         // the completer needs the tree and the context, which need the reader: wire it in after building
-        org.jline.reader.Completer[] completer = new org.jline.reader.Completer[1];
+        AtomicReference<Completer> completer = new AtomicReference<>();
+        CompletableFuture<CommandLine> treeReady = new CompletableFuture<>();
         DefaultParser parser = new DefaultParser();
         parser.setEofOnUnclosedQuote(false); // an unclosed quote ends at the end of the line
         LineReaderBuilder builder = LineReaderBuilder.builder()
@@ -130,9 +166,15 @@ public final class Shell {
                 .appName("ampsieve")
                 .parser(parser)
                 .completer((r, l, c) -> {
-                    if (completer[0] != null) {
-                        completer[0].complete(r, l, c);
+                    try {
+                        treeReady.get(); // the tree may still be built in the background
+                    } catch (InterruptedException e) {
+                        Thread.currentThread().interrupt(); // Ctrl-C: nothing offered, the line is dropped
+                        return;
+                    } catch (ExecutionException e) {
+                        return; // no tree: every line says why
                     }
+                    completer.get().complete(r, l, c);
                 })
                 .variable(LineReader.HISTORY_SIZE, 1000)
                 .variable(LineReader.HISTORY_FILE_SIZE, 5000)
@@ -154,6 +196,56 @@ public final class Shell {
         // commands without --stage FILE take the current stage, in memory, under the name the user knows it by
         root.useCurrentStage(() -> StageCheck.given(ctx.state.answers(), ctx.state.nameInMessages()));
 
+        // the tree (picocli reads every command's annotations), the root options and the catalog: on
+        // a thread of their own unless the catalog is to be read before the banner
+        Supplier<String> setUp = () -> {
+            CommandLine tree;
+            String parseError = null;
+            try {
+                tree = tree(ctx, out, err);
+                completer.set(new ShellCompleter(ctx, tree));
+                try {
+                    tree.parseArgs(rootArgs.toArray(String[]::new)); // --catalog and friends before the read
+                } catch (CommandLine.ParameterException e) {
+                    parseError = e.getMessage();
+                    if (!loadInBackground) {
+                        err.println(parseError); // before the banner, as always
+                    }
+                }
+                if (loadInBackground) {
+                    Path dir = root.catalogDir();
+                    catalogFiles = dir.toString().isBlank()
+                            ? 0
+                            : CatalogLoader.files(dir).size();
+                }
+            } catch (RuntimeException | Error e) {
+                treeReady.completeExceptionally(e);
+                throw e;
+            }
+            treeReady.complete(tree);
+            beforeLoad.run();
+            String line = catalogLine();
+            return parseError == null || !loadInBackground ? line : parseError + "\n" + line;
+        };
+        ctx.load.start(setUp, e -> "Catalog: not loaded (" + e + ").", loadInBackground);
+        banner(ctx, historyNote);
+        // the counts when the read ends: above the line being typed, unless a command waits for them
+        ctx.load.whenDone(() -> announce(ctx, reader));
+        // for the whole session, so a Ctrl-C between two reads never meets the default (ending the
+        // program); the line reader puts its own in place while it reads and restores this one
+        Terminal.SignalHandler previous = terminal.handle(Terminal.Signal.INT, s -> interruptCommand());
+        try {
+            loop(ctx, reader, treeReady, err);
+        } finally {
+            terminal.handle(Terminal.Signal.INT, previous != null ? previous : Terminal.SignalHandler.SIG_DFL);
+            out.flush();
+            err.flush();
+        }
+        return ExitCode.OK.code();
+    }
+
+    /** The command tree, the shell's verbs added, set up for the shell; its completer set too. */
+    private CommandLine tree(ShellContext ctx, PrintWriter out, PrintWriter err) {
         CommandLine tree = Commands.build(root, out, err);
         ShellCommands.all(ctx).forEach(tree::addSubcommand);
         extraCommands.forEach(tree::addSubcommand);
@@ -166,34 +258,14 @@ public final class Shell {
         tree.getSubcommands().get("set").setUnmatchedOptionsArePositionalParams(true);
         tree.setParameterExceptionHandler((ex, args) -> Failures.usage(ex, args, Failures.Voice.SHELL, null));
         tree.setExecutionExceptionHandler((ex, line, parsed) -> failure(ex, err));
-        completer[0] = new ShellCompleter(ctx, tree);
-
-        try {
-            tree.parseArgs(
-                    rootArgs.toArray(String[]::new)); // --catalog and friends before the banner reads the catalog
-        } catch (CommandLine.ParameterException e) {
-            err.println(e.getMessage());
-        }
-        banner(ctx, historyNote);
-        // for the whole session, so a Ctrl-C between two reads never meets the default (ending the
-        // program); the line reader puts its own in place while it reads and restores this one
-        Terminal.SignalHandler previous = terminal.handle(Terminal.Signal.INT, s -> interruptCommand());
-        try {
-            loop(ctx, reader, tree, err);
-        } finally {
-            terminal.handle(Terminal.Signal.INT, previous != null ? previous : Terminal.SignalHandler.SIG_DFL);
-            out.flush();
-            err.flush();
-        }
-        return ExitCode.OK.code();
+        return tree;
     }
 
-    private void loop(ShellContext ctx, LineReader reader, CommandLine tree, PrintWriter err) {
+    private void loop(ShellContext ctx, LineReader reader, CompletableFuture<CommandLine> treeReady, PrintWriter err) {
         while (!ctx.quit) {
             ctx.style = look(terminal, env, rootArgs.contains("--ascii"));
             ctx.paint = new Paint(ctx.style.color());
             root.setOutputStyle(ctx.style);
-            tree.setUsageHelpWidth(Math.max(55, Math.min(ctx.style.width(), 120)));
             String line;
             try {
                 line = reader.readLine(prompt(ctx));
@@ -223,7 +295,7 @@ public final class Shell {
             if (!words.get(0).equals("quit") && !words.get(0).equals("exit")) {
                 ctx.warnedUnsaved = false;
             }
-            execute(ctx, tree, words, err);
+            execute(ctx, treeReady, words, err);
         }
     }
 
@@ -259,6 +331,17 @@ public final class Shell {
     /** The program's name as the command line types it. */
     static final String PROGRAM_NAME = "ampsieve";
 
+    /**
+     * Reads the catalog before the banner ({@code background} false: what a test needs to see the
+     * same lines every time) or after the prompt is up (the default), running {@code before} on
+     * the reading thread first; call before {@link #run}.
+     */
+    Shell catalogRead(boolean background, Runnable before) {
+        loadInBackground = background;
+        beforeLoad = before;
+        return this;
+    }
+
     /** Adds a command to the tree the shell builds; call before {@link #run}. */
     Shell withCommand(Object command) {
         extraCommands.add(command);
@@ -271,18 +354,9 @@ public final class Shell {
     }
 
     /** Runs one line through the tree; never throws. */
-    void execute(ShellContext ctx, CommandLine tree, List<String> words, PrintWriter err) {
+    void execute(ShellContext ctx, CompletableFuture<CommandLine> treeReady, List<String> words, PrintWriter err) {
         String name = words.get(0);
-        CommandLine sub = tree.getSubcommands().get(name);
-        if (sub == null && !name.startsWith("-")) {
-            String near = Fields.closest(name, tree.getSubcommands().keySet());
-            exitCodes.add(failure(
-                    new Refusal(
-                            "unknown command '" + name + "'" + (near != null ? "; did you mean '" + near + "'?" : "")
-                                    + " ('help' lists the commands)",
-                            ExitCode.USAGE,
-                            Place.field(name)),
-                    err));
+        if (!ctx.load.done() && leavesNow(ctx, words)) {
             return;
         }
         // a Ctrl-C at the prompt can leave this thread interrupted (the line reader restores the
@@ -293,7 +367,40 @@ public final class Shell {
             cancelRequested = false;
         }
         boolean cancelled;
+        boolean waiting = false;
         try {
+            if (!ctx.load.done()) {
+                waiting = true;
+                ctx.out.println(ctx.fold(waitingNote(name), ctx.paint::dim));
+                try {
+                    ctx.load.await();
+                } catch (InterruptedException e) {
+                    throw new Cancelled(); // Ctrl-C: back to the prompt; the read goes on
+                }
+                waiting = false;
+            }
+            String counts = ctx.load.takeLine();
+            if (counts != null) {
+                ctx.out.println(ctx.fold(counts));
+            }
+            CommandLine tree = treeReady.getNow(null);
+            if (tree == null) { // the tree could not be built: the read's line said why
+                throw new IllegalStateException("the command tree was not built", failureOf(treeReady));
+            }
+            tree.setUsageHelpWidth(Math.max(55, Math.min(ctx.style.width(), 120)));
+            CommandLine sub = tree.getSubcommands().get(name);
+            if (sub == null && !name.startsWith("-")) {
+                String near = Fields.closest(name, tree.getSubcommands().keySet());
+                exitCodes.add(failure(
+                        new Refusal(
+                                "unknown command '" + name + "'"
+                                        + (near != null ? "; did you mean '" + near + "'?" : "")
+                                        + " ('help' lists the commands)",
+                                ExitCode.USAGE,
+                                Place.field(name)),
+                        err));
+                return;
+            }
             Refusal noStage = sub == null ? null : missingStage(ctx, sub, words);
             if (noStage != null) {
                 exitCodes.add(failure(noStage, err));
@@ -314,9 +421,60 @@ public final class Shell {
             ctx.out.flush();
             err.flush();
         }
-        if (cancelled) {
+        if (cancelled && !waiting) {
             // a read cut short by the interrupt may have left the catalog incomplete: read it afresh
+            // (not when the line only waited for the background read: that read was not interrupted)
             root.forgetCatalog();
+        }
+    }
+
+    /**
+     * 'quit' (or 'exit') alone while the catalog is read: the shell leaves at once instead of
+     * waiting. No stage can be unsaved yet, as every line that sets one waits for the read.
+     */
+    private boolean leavesNow(ShellContext ctx, List<String> words) {
+        if (words.size() != 1 || !List.of("quit", "exit").contains(words.get(0)) || ctx.state.unsaved()) {
+            return false;
+        }
+        ctx.quit = true;
+        exitCodes.add(ExitCode.OK.code());
+        return true;
+    }
+
+    /** Why {@code f}, done, failed. */
+    private static Throwable failureOf(CompletableFuture<?> f) {
+        try {
+            f.join();
+            return null;
+        } catch (CompletionException | CancellationException e) {
+            return e.getCause();
+        }
+    }
+
+    /** Said when a line has to wait for the catalog's background read. */
+    private String waitingNote(String command) {
+        int files = catalogFiles; // counted by the reading thread (0 until then)
+        return "The catalog is still loading" + (files > 0 ? " (" + files + " file(s))" : "") + "; '" + command
+                + "' runs when it is read. Ctrl-C stops waiting.";
+    }
+
+    /**
+     * The catalog line, above the line being typed, when the background read ends at the prompt;
+     * nothing while a line runs (it waits for the read and prints the line itself).
+     */
+    private void announce(ShellContext ctx, LineReader reader) {
+        synchronized (commandLock) {
+            if (running != null) {
+                return;
+            }
+            String line = ctx.load.takeLine();
+            if (line != null) {
+                // not through ctx.out: printAbove keeps the prompt and the keys typed so far below it
+                OutputStyle st = look(terminal, env, rootArgs.contains("--ascii"));
+                reader.printAbove(Arrays.stream(Wrap.prose(line, st.width()).split("\n", -1))
+                        .map(l -> shown(l, false)) // a line at a time, as ctx.out shows them
+                        .collect(Collectors.joining("\n")));
+            }
         }
     }
 
@@ -401,10 +559,9 @@ public final class Shell {
             return s;
         }
         Paint paint = new Paint(st.color());
-        return java.util.Arrays.stream(
-                        dev.ampsieve.report.Wrap.prose(s, st.width()).split("\n", -1))
+        return Arrays.stream(Wrap.prose(s, st.width()).split("\n", -1))
                 .map(paint::red)
-                .collect(java.util.stream.Collectors.joining("\n"));
+                .collect(Collectors.joining("\n"));
     }
 
     private String prompt(ShellContext ctx) {
@@ -418,8 +575,9 @@ public final class Shell {
         Paint paint = ctx.paint;
         out.println(paint.bold(new RootCommand.Version().getVersion()[0])
                 + ": op-amp choice by the full output error budget of your stage.");
-        out.println(ctx.fold(catalogLine()));
-        out.println(paint.dim(dev.ampsieve.report.Wrap.prose(Caution.TEXT, ctx.style.width())));
+        String counts = ctx.load.takeLine();
+        out.println(ctx.fold(counts != null ? counts : "Catalog: loading; its counts follow."));
+        out.println(paint.dim(Wrap.prose(Caution.TEXT, ctx.style.width())));
         if (historyNote != null) {
             out.println(ctx.fold(historyNote, paint::dim));
         }

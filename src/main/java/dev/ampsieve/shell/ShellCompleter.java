@@ -214,6 +214,12 @@ final class ShellCompleter implements Completer {
     private void parts(List<Candidate> out) {
         Catalog c;
         try {
+            ctx.load.await(); // the catalog may still be read in the background
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt(); // Ctrl-C: no ids, and the line reader drops the line
+            return;
+        }
+        try {
             c = ctx.root.catalog();
         } catch (Exception e) {
             return; // no catalog, no ids; the command itself will say why

@@ -11,6 +11,9 @@ import org.jline.reader.LineReader;
 final class ShellContext {
     final RootCommand root;
     final ShellState state = new ShellState();
+    /** The shell's first read of the catalog; every use of the catalog waits for it (see {@link CatalogLoad}). */
+    final CatalogLoad load = new CatalogLoad();
+
     final LineReader reader;
     final PrintWriter out;
     OutputStyle style;

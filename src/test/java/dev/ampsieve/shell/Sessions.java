@@ -44,7 +44,8 @@ final class Sessions {
         }
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         try (Terminal t = terminal(new Typed(typed.toString().getBytes(UTF_8)), out)) {
-            Shell shell = new Shell(new RootCommand(), rootArgs, t, history, env);
+            // the catalog read before the banner, as a script's keys arrive at once: the lines come out in one order
+            Shell shell = new Shell(new RootCommand(), rootArgs, t, history, env).catalogRead(false, () -> {});
             extra.forEach(shell::withCommand);
             shell.run();
             return new Ran(out.toString(UTF_8), shell.exitCodes());
