@@ -53,7 +53,9 @@ public final class RankCommand implements Callable<Integer> {
             names = "--top",
             paramLabel = "N",
             defaultValue = "15",
-            description = "Candidates to list (default ${DEFAULT-VALUE}); advice and Pareto front use all.")
+            description =
+                    "Candidates (and, in the text, rejected parts) to list (default ${DEFAULT-VALUE}); advice and Pareto"
+                            + " front use all.")
     int top;
 
     @Option(
