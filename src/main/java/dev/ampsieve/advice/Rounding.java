@@ -1,6 +1,8 @@
 package dev.ampsieve.advice;
 
-import java.util.Locale;
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
 
 /**
  * The rounding of a value the advice offers (a resistor, a limit, a target): to 3 significant
@@ -9,12 +11,15 @@ import java.util.Locale;
 final class Rounding {
     private Rounding() {}
 
+    private static final MathContext THREE = new MathContext(3, RoundingMode.HALF_UP);
+
     /** Rounds to 3 significant digits. */
     static double round3(double x) {
         if (x == 0 || !Double.isFinite(x)) {
             return x;
         }
-        return Double.parseDouble(String.format(Locale.ROOT, "%.2e", x));
+        // from the shortest decimal of x (Double.toString), half up: what a 3-digit print of x shows
+        return BigDecimal.valueOf(x).round(THREE).doubleValue();
     }
 
     /** Rounds a positive x to 3 significant digits, never up (beyond round-off of x itself). */

@@ -239,10 +239,11 @@ class YieldTest {
 
     @Test
     void beforeAndAfterTheTrimEachYieldIsWhatItsOwnRunGives() {
-        // follower, -40..85 °C, vos max 1 mV (sigma 1/3 mV), drift max 5 µV/°C (sigma 5/3), limit 250 µV, target
-        // 99 %, one-point trim with a 10 µV resolution. Untrimmed about half the units pass (|vos| <= 0.75 sigma:
-        // P = 0.547 / 0.9973 [A&S 26.1, from memory]), so that run stops at its first look; trimmed, |drift| x
-        // 65 °C + 10 µV <= 250 µV passes |drift| <= 2.22 sigma, about 97 %, so it runs on past it. Both are
+        // follower, -40..85 °C (dT -65 and +60), vos max 1 mV (N(0, 1/3 mV) truncated at 1 mV), drift max
+        // 5 µV/°C (N(0, 5/3) truncated at 5), limit 250 µV, target 99 %, one-point trim with a 10 µV resolution
+        // (uniform). The yields by a second method, numerical integration over the same laws (below, commons-math3
+        // normal CDF): untrimmed |vos - 65 d| <= 250 µV and |vos + 60 d| <= 250 µV, 0.381, so that run stops at its
+        // first look; trimmed |-65 d + r| <= 250 µV and |60 d + r| <= 250 µV, 0.981, so it runs on past it. Both are
         // simulated together on the same units (BudgetCalculator); each must be exactly the estimate its model
         // gives alone: the untrimmed one as the same stage without a trim gives it, the trimmed one as
         // BudgetCalculator.trimmedYield gives it.
@@ -259,10 +260,33 @@ class YieldTest {
         assertEquals(after, both.trimmed().yield());
         assertEquals(100, before.trials());
         assertTrue(after.trials() > 100, "trimmed run stopped at " + after.trials());
-        double untrimmed = new NormalDistribution().probability(-0.75, 0.75) / 0.9973002;
-        assertTrue(Math.abs(before.value() - untrimmed) < 0.15, before.value() + " against " + untrimmed);
-        double trimmed =
-                new NormalDistribution().probability(-240.0 / 65 / (5.0 / 3), 240.0 / 65 / (5.0 / 3)) / 0.9973002;
+        NormalDistribution vos = new NormalDistribution(0, 1e-3 / 3);
+        NormalDistribution drift = new NormalDistribution(0, 5e-6 / 3);
+        double vosKept = vos.probability(-1e-3, 1e-3);
+        double driftKept = drift.probability(-5e-6, 5e-6);
+        // untrimmed: midpoint rule over the drift, the offset's mass in closed form for each drift
+        double untrimmed = 0;
+        int n = 4000;
+        for (int i = 0; i < n; i++) {
+            double d = -5e-6 + 10e-6 * (i + 0.5) / n;
+            double lo = Math.max(Math.max(-250e-6 + 65 * d, -250e-6 - 60 * d), -1e-3);
+            double hi = Math.min(Math.min(250e-6 + 65 * d, 250e-6 - 60 * d), 1e-3);
+            double w = drift.density(d) * 10e-6 / n / driftKept;
+            untrimmed += hi > lo ? w * vos.probability(lo, hi) / vosKept : 0;
+        }
+        // trimmed: midpoint rule over the resolution, the drift's mass in closed form for each
+        double trimmed = 0;
+        for (int i = 0; i < n; i++) {
+            double r = -10e-6 + 20e-6 * (i + 0.5) / n;
+            double lo = Math.max(Math.max((r - 250e-6) / 65, (-250e-6 - r) / 60), -5e-6);
+            double hi = Math.min(Math.min((r + 250e-6) / 65, (250e-6 - r) / 60), 5e-6);
+            trimmed += hi > lo ? drift.probability(lo, hi) / driftKept / n : 0;
+        }
+        assertEquals(0.381, untrimmed, 0.001); // the same integral in a second script [Calc]: 0.38127
+        assertEquals(0.981, trimmed, 0.001); // [Calc]: 0.98145
+        assertTrue(
+                before.low() <= untrimmed && untrimmed <= before.high(),
+                untrimmed + " not in [" + before.low() + ", " + before.high() + "]");
         assertTrue(
                 after.low() <= trimmed && trimmed <= after.high(),
                 trimmed + " not in [" + after.low() + ", " + after.high() + "]");
