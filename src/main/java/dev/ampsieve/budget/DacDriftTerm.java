@@ -22,38 +22,11 @@ import dev.ampsieve.units.Dimension;
  * two-temperature calibration the term is 0: this drift is linear in temperature, and the
  * calibration line removes it with the part's own.
  */
-public final class DacDriftTerm implements ErrorTerm {
+public final class DacDriftTerm extends TrimCircuitTerm {
     public static final String KEY = "dac-drift";
 
-    @Override
-    public String key() {
-        return KEY;
-    }
-
-    @Override
-    public String label() {
-        return "trim DAC drift";
-    }
-
-    @Override
-    public boolean dc() {
-        return true;
-    }
-
-    @Override
-    public TermKind kind() {
-        return TermKind.BOARD;
-    }
-
-    @Override
-    public boolean appliesTo(Stage s) {
-        return BudgetCalculator.trimOf(s).allowed()
-                && BudgetCalculator.trimOf(s).circuit().kind() == TrimCircuit.Kind.DAC;
-    }
-
-    @Override
-    public boolean afterTrimOnly() {
-        return true;
+    public DacDriftTerm() {
+        super(KEY, "trim DAC drift", true, k -> k == TrimCircuit.Kind.DAC);
     }
 
     /** Output volts per °C for a correction {@code c} (output volts) through transfer {@code k}. */
@@ -63,10 +36,7 @@ public final class DacDriftTerm implements ErrorTerm {
     }
 
     @Override
-    public TermResult evaluate(Stage s, PartValues v) {
-        if (!appliesTo(s)) {
-            return ErrorTerm.none(this, s, false, "no-trim-circuit"); // the stage's trim uses another circuit
-        }
+    TermResult evaluateFor(Stage s, PartValues v) {
         SizedTrim t = TrimSizing.of(s, v);
         TrimCircuit c = BudgetCalculator.trimOf(s).circuit();
         boolean line = BudgetCalculator.trimOf(s).method() == Trim.Method.TWO_TEMPERATURE;

@@ -21,38 +21,11 @@ import dev.ampsieve.units.Dimension;
  * <i>Design with Operational Amplifiers</i>, 4th ed., ch. 5 [from memory]; the default coefficients
  * are common practice (stage keys).
  */
-public final class InjectionDriftTerm implements ErrorTerm {
+public final class InjectionDriftTerm extends TrimCircuitTerm {
     public static final String KEY = "injection-drift";
 
-    @Override
-    public String key() {
-        return KEY;
-    }
-
-    @Override
-    public String label() {
-        return "injection drift";
-    }
-
-    @Override
-    public boolean dc() {
-        return true;
-    }
-
-    @Override
-    public TermKind kind() {
-        return TermKind.BOARD;
-    }
-
-    @Override
-    public boolean appliesTo(Stage s) {
-        return BudgetCalculator.trimOf(s).allowed()
-                && BudgetCalculator.trimOf(s).circuit().kind() == TrimCircuit.Kind.INJECTION;
-    }
-
-    @Override
-    public boolean afterTrimOnly() {
-        return true;
+    public InjectionDriftTerm() {
+        super(KEY, "injection drift", true, k -> k == TrimCircuit.Kind.INJECTION);
     }
 
     /** Output volts per °C for a correction {@code c} (output volts): c x (refTc + ratioTc + potTc x rth/(rinj + rth)). */
@@ -61,10 +34,7 @@ public final class InjectionDriftTerm implements ErrorTerm {
     }
 
     @Override
-    public TermResult evaluate(Stage s, PartValues v) {
-        if (!appliesTo(s)) {
-            return ErrorTerm.none(this, s, false, "no-trim-circuit"); // the stage's trim uses another circuit
-        }
+    TermResult evaluateFor(Stage s, PartValues v) {
         SizedTrim t = TrimSizing.of(s, v);
         TrimCircuit c = BudgetCalculator.trimOf(s).circuit();
         double dT = s.deltaT();

@@ -27,38 +27,11 @@ import dev.ampsieve.units.Dimension;
  * </ul>
  * Not counted: Rinj's own thermal noise, 4kT/Rinj into the summing node, below rg's by Rg/Rinj.
  */
-public final class InjectionGainTerm implements ErrorTerm {
+public final class InjectionGainTerm extends TrimCircuitTerm {
     public static final String KEY = "injection-gain";
 
-    @Override
-    public String key() {
-        return KEY;
-    }
-
-    @Override
-    public String label() {
-        return "injection gain";
-    }
-
-    @Override
-    public boolean dc() {
-        return false; // it scales the noise too
-    }
-
-    @Override
-    public TermKind kind() {
-        return TermKind.BOARD;
-    }
-
-    @Override
-    public boolean appliesTo(Stage s) {
-        return BudgetCalculator.trimOf(s).allowed()
-                && BudgetCalculator.trimOf(s).circuit().kind().injects();
-    }
-
-    @Override
-    public boolean afterTrimOnly() {
-        return true;
+    public InjectionGainTerm() {
+        super(KEY, "injection gain", false /* it scales the noise too */, TrimCircuit.Kind::injects);
     }
 
     /**
@@ -88,10 +61,7 @@ public final class InjectionGainTerm implements ErrorTerm {
     }
 
     @Override
-    public TermResult evaluate(Stage s, PartValues v) {
-        if (!appliesTo(s)) {
-            return ErrorTerm.none(this, s, false, "no-trim-circuit"); // the stage's trim uses another circuit
-        }
+    TermResult evaluateFor(Stage s, PartValues v) {
         SizedTrim t = TrimSizing.of(s, v);
         if (t.unusable() != SizedTrim.Unusable.NONE) {
             return ErrorTerm.none(this, s, false, "trim-circuit-unusable");

@@ -23,38 +23,11 @@ import dev.ampsieve.units.PhysicalConstants;
  * against the part's internal resistors). A pins' null cannot follow temperature, so a
  * two-temperature calibration never uses it (the stage loader refuses that pairing).
  */
-public final class NullPinDriftTerm implements ErrorTerm {
+public final class NullPinDriftTerm extends TrimCircuitTerm {
     public static final String KEY = "null-pin-drift";
 
-    @Override
-    public String key() {
-        return KEY;
-    }
-
-    @Override
-    public String label() {
-        return "null-pin drift";
-    }
-
-    @Override
-    public boolean dc() {
-        return true;
-    }
-
-    @Override
-    public TermKind kind() {
-        return TermKind.BOARD;
-    }
-
-    @Override
-    public boolean appliesTo(Stage s) {
-        return BudgetCalculator.trimOf(s).allowed()
-                && BudgetCalculator.trimOf(s).circuit().kind() == TrimCircuit.Kind.NULL_PINS;
-    }
-
-    @Override
-    public boolean afterTrimOnly() {
-        return true;
+    public NullPinDriftTerm() {
+        super(KEY, "null-pin drift", true, k -> k == TrimCircuit.Kind.NULL_PINS);
     }
 
     /**
@@ -67,10 +40,7 @@ public final class NullPinDriftTerm implements ErrorTerm {
     }
 
     @Override
-    public TermResult evaluate(Stage s, PartValues v) {
-        if (!appliesTo(s)) {
-            return ErrorTerm.none(this, s, false, "no-trim-circuit"); // the stage's trim uses another circuit
-        }
+    TermResult evaluateFor(Stage s, PartValues v) {
         SizedTrim t = TrimSizing.of(s, v);
         double dT = s.deltaT();
         double out = t.driftOutVPerC() * dT;
