@@ -133,8 +133,8 @@ class DifferenceNgspiceTest {
         // the two source legs: V+ = Vcm + Vdm/2, V- = Vcm - Vdm/2; the + leg is the noise analysis' input
         n.append("Vp srcp 0 DC ").append(Ngspice.num(c.vcm() + c.vdm() / 2)).append(" AC 1\n");
         n.append("Vm srcm 0 DC ").append(Ngspice.num(c.vcm() - c.vdm() / 2)).append('\n');
-        resistor(n, "Rsm", "srcm", "legm", c.rsMinus());
-        resistor(n, "Rsp", "srcp", "legp", c.rsPlus());
+        Ngspice.resistor(n, "Rsm", "srcm", "legm", c.rsMinus());
+        Ngspice.resistor(n, "Rsp", "srcp", "legp", c.rsPlus());
         n.append("R1 legm pinn ").append(Ngspice.num(c.r1())).append('\n');
         n.append("R2 out pinn ").append(Ngspice.num(c.r2())).append('\n');
         n.append("R3 legp pinp ").append(Ngspice.num(c.r3())).append('\n');
@@ -159,28 +159,6 @@ class DifferenceNgspiceTest {
                 .append('\n');
         n.append("setplot noise2\nprint onoise_total\nquit\n.endc\n.end\n");
         return n.toString();
-    }
-
-    /** A resistor, or a 0 V source (a noiseless wire) for 0 ohm. */
-    private static void resistor(StringBuilder n, String name, String a, String b, double ohms) {
-        if (ohms == 0) {
-            n.append("V")
-                    .append(name)
-                    .append(' ')
-                    .append(a)
-                    .append(' ')
-                    .append(b)
-                    .append(" DC 0\n");
-        } else {
-            n.append(name)
-                    .append(' ')
-                    .append(a)
-                    .append(' ')
-                    .append(b)
-                    .append(' ')
-                    .append(Ngspice.num(ohms))
-                    .append('\n');
-        }
     }
 
     private static void assertRelative(double expected, double actual, double rel, String what) {

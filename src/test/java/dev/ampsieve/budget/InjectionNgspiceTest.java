@@ -69,8 +69,8 @@ class InjectionNgspiceTest {
         n.append(".options temp=25 tnom=25\n");
         n.append("Vtop top 0 DC ").append(Ngspice.num(U)).append('\n');
         n.append("Vbot bot 0 DC ").append(Ngspice.num(-U)).append('\n');
-        leg(n, "Rupper", "top", "wiper", (1 - x) * R_POT);
-        leg(n, "Rlower", "wiper", "bot", x * R_POT);
+        Ngspice.resistor(n, "Rupper", "top", "wiper", (1 - x) * R_POT);
+        Ngspice.resistor(n, "Rlower", "wiper", "bot", x * R_POT);
         n.append("Rinj wiper ")
                 .append(pin)
                 .append(' ')
@@ -78,33 +78,11 @@ class InjectionNgspiceTest {
                 .append('\n');
         n.append("Rg pinn 0 ").append(Ngspice.num(1e3)).append('\n'); // the signal source at 0 V
         n.append("Rf out pinn ").append(Ngspice.num(10e3)).append('\n');
-        leg(n, "Rp", "pinp", "0", rp);
+        Ngspice.resistor(n, "Rp", "pinp", "0", rp);
         n.append("Vos nvos pinp DC ").append(Ngspice.num(vos)).append('\n');
         n.append("Eamp out 0 nvos pinn ").append(Ngspice.num(A)).append('\n');
         n.append(".control\nset numdgt=15\nop\nprint v(out)\nquit\n.endc\n.end\n");
         return n.toString();
-    }
-
-    /** A resistor, or a 0 V source for a wiper at the end of its travel (SPICE refuses 0 ohm). */
-    private static void leg(StringBuilder n, String name, String a, String b, double ohms) {
-        if (ohms == 0) {
-            n.append('V')
-                    .append(name)
-                    .append(' ')
-                    .append(a)
-                    .append(' ')
-                    .append(b)
-                    .append(" DC 0\n");
-        } else {
-            n.append(name)
-                    .append(' ')
-                    .append(a)
-                    .append(' ')
-                    .append(b)
-                    .append(' ')
-                    .append(Ngspice.num(ohms))
-                    .append('\n');
-        }
     }
 
     private static double out(double x, double rinj, String pin, double rp, double vos) throws Exception {

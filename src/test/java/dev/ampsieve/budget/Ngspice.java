@@ -38,6 +38,31 @@ final class Ngspice {
         return String.format(Locale.ROOT, "%.15e", v);
     }
 
+    /**
+     * A resistor line, or for 0 ohm (which SPICE does not accept) a 0 V source: a noiseless wire, or a
+     * wiper at the end of its travel.
+     */
+    static void resistor(StringBuilder n, String name, String a, String b, double ohms) {
+        if (ohms == 0) {
+            n.append('V')
+                    .append(name)
+                    .append(' ')
+                    .append(a)
+                    .append(' ')
+                    .append(b)
+                    .append(" DC 0\n");
+        } else {
+            n.append(name)
+                    .append(' ')
+                    .append(a)
+                    .append(' ')
+                    .append(b)
+                    .append(' ')
+                    .append(num(ohms))
+                    .append('\n');
+        }
+    }
+
     /** The ngspice executable on PATH, or null. */
     static Path executable() {
         String path = System.getenv("PATH");

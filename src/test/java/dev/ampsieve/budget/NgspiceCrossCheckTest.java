@@ -283,19 +283,19 @@ class NgspiceCrossCheckTest {
         n.append("Vsig src 0 DC 0 AC 1\n");
         switch (c.topology()) {
             case NON_INVERTING, FOLLOWER -> {
-                resistor(n, "Rs", "src", "mid", c.rs());
-                resistor(n, "Rp", "mid", "pinp", c.rp()); // in series with the source (error-model.md)
+                Ngspice.resistor(n, "Rs", "src", "mid", c.rs());
+                Ngspice.resistor(n, "Rp", "mid", "pinp", c.rp()); // in series with the source (error-model.md)
             }
             case INVERTING -> {
-                resistor(n, "Rs", "src", "mid", c.rs());
-                resistor(n, "Rg", "mid", "pinn", c.rg());
-                resistor(n, "Rp", "pinp", "0", c.rp());
+                Ngspice.resistor(n, "Rs", "src", "mid", c.rs());
+                Ngspice.resistor(n, "Rg", "mid", "pinn", c.rg());
+                Ngspice.resistor(n, "Rp", "pinp", "0", c.rp());
             }
         }
         if (c.topology() == Topology.NON_INVERTING) {
-            resistor(n, "Rg", "pinn", "0", c.rg());
+            Ngspice.resistor(n, "Rg", "pinn", "0", c.rg());
         }
-        resistor(n, "Rf", "out", "pinn", c.rf());
+        Ngspice.resistor(n, "Rf", "out", "pinn", c.rf());
         // offset in series with the + input: V(nvos) = V(pinp) + VOS
         n.append("Vos nvos pinp DC ").append(Ngspice.num(c.vos())).append('\n');
         // amplifier voltage noise, in series after the offset
@@ -333,28 +333,6 @@ class NgspiceCrossCheckTest {
         n.append(".endc\n");
         n.append(".end\n");
         return n.toString();
-    }
-
-    /** A resistor, or a 0 V source (a noiseless wire) for 0 ohm, which SPICE does not accept. */
-    private static void resistor(StringBuilder n, String name, String a, String b, double ohms) {
-        if (ohms == 0) {
-            n.append("V")
-                    .append(name)
-                    .append(' ')
-                    .append(a)
-                    .append(' ')
-                    .append(b)
-                    .append(" DC 0\n");
-        } else {
-            n.append(name)
-                    .append(' ')
-                    .append(a)
-                    .append(' ')
-                    .append(b)
-                    .append(' ')
-                    .append(Ngspice.num(ohms))
-                    .append('\n');
-        }
     }
 
     record Result(double dcOut, double noiseRms) {}
