@@ -113,7 +113,8 @@ for again in 1 2 3; do
 done
 wait_for "^Interrupted; the current stage is as it was\.$" 60
 # what follows the last "rank" line: the interrupt, then show's stage, and no ranking
-after_rank() { screen | awk '/^ampsieve \[new stage\*\]> rank$/ { text = "" } { text = text $0 "\n" } END { printf "%s", text }'; }
+# (keys typed ahead of a prompt echo before it: the line may read "rankampsieve [new stage*]> rank")
+after_rank() { screen | awk '/ampsieve \[new stage\*\]> rank$/ { text = "" } { text = text $0 "\n" } END { printf "%s", text }'; }
 wait_for "^Other keys keep their defaults" 30
 after_rank | grep -Eq "^  trials +10000000$" || { echo "e2e: no stage shown after Ctrl-C"; screen; exit 1; }
 after_rank | grep -Eq "^  limit at the output +1\.00 mV" || { echo "e2e: the stage changed after Ctrl-C"; screen; exit 1; }
